@@ -1,0 +1,262 @@
+//! Checking one member: resolve its section and material, run the method
+//! about both axes, pick the governing mode and collect the working.
+
+use serde::Serialize;
+
+use crate::error::Result;
+use crate::material::Material;
+use crate::member::Member;
+use crate::method::{self, Input, Method};
+use crate::section::{Family, Properties, Section};
+use crate::trace::Trace;
+
+/// A buckling mode or limit state.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Mode {
+    /// Flexural buckling about the major principal axis.
+    Major,
+    /// Flexural buckling about the minor principal axis.
+    Minor,
+    /// Torsional buckling.
+    Torsional,
+    /// Flexural-torsional buckling.
+    FlexuralTorsional,
+    /// Cross-section resistance.
+    Section,
+}
+
+impl Mode {
+    /// Its name in results.
+    pub fn key(self) -> &'static str {
+        match self {
+            Mode::Major => "major",
+            Mode::Minor => "minor",
+            Mode::Torsional => "torsional",
+            Mode::FlexuralTorsional => "flexural-torsional",
+            Mode::Section => "section",
+        }
+    }
+}
+
+/// The result of one mode.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct ModeResult {
+    /// Which mode.
+    pub mode: Mode,
+    /// Buckling length L_cr, mm.
+    pub buckling_length_mm: f64,
+    /// Geometric slenderness L_cr / r (for torsional modes, the equivalent
+    /// slenderness that gives the same elastic critical stress).
+    pub slenderness: f64,
+    /// Elastic critical load N_cr, kN.
+    pub critical_kn: f64,
+    /// Relative (non-dimensional) slenderness as the method defines it.
+    pub relative_slenderness: f64,
+    /// Reduction factor (chi, Fcr/Fy, k_c, ...), within (0, 1].
+    pub reduction: f64,
+    /// Design resistance of this mode with the method's factors, kN.
+    pub resistance_kn: f64,
+}
+
+/// A caution attached to a result.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct Warning {
+    /// Stable short code, for scripts ("torsional-not-checked").
+    pub code: &'static str,
+    /// The message in words.
+    pub message: String,
+}
+
+impl Warning {
+    /// A warning with a code and a message.
+    pub fn new(code: &'static str, message: impl Into<String>) -> Warning {
+        Warning {
+            code,
+            message: message.into(),
+        }
+    }
+}
+
+/// The properties a result reports.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct SectionSummary {
+    /// A, mm2.
+    pub area_mm2: f64,
+    /// I about the major principal axis, mm4.
+    pub i_major_mm4: f64,
+    /// I about the minor principal axis, mm4.
+    pub i_minor_mm4: f64,
+    /// Radius of gyration, major axis, mm.
+    pub r_major_mm: f64,
+    /// Radius of gyration, minor axis, mm.
+    pub r_minor_mm: f64,
+    /// St Venant torsion constant, mm4.
+    pub torsion_mm4: f64,
+    /// Warping constant, mm6.
+    pub warping_mm6: f64,
+}
+
+impl From<&Properties> for SectionSummary {
+    fn from(p: &Properties) -> Self {
+        SectionSummary {
+            area_mm2: p.area_mm2,
+            i_major_mm4: p.i_major_mm4,
+            i_minor_mm4: p.i_minor_mm4,
+            r_major_mm: p.r_major_mm,
+            r_minor_mm: p.r_minor_mm,
+            torsion_mm4: p.torsion_mm4,
+            warping_mm6: p.warping_mm6,
+        }
+    }
+}
+
+/// The outcome of checking one member.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct CheckResult {
+    /// The member's id.
+    pub id: String,
+    /// The method used.
+    pub method: Method,
+    /// Whether the design load is within the resistance (utilisation <= 1).
+    pub passes: bool,
+    /// Design load over design resistance.
+    pub utilisation: f64,
+    /// Design resistance of the governing mode, kN.
+    pub resistance_kn: f64,
+    /// The governing mode.
+    pub governing: Mode,
+    /// Characteristic squash load A f_y (or A f_c,0,k), kN.
+    pub squash_kn: f64,
+    /// Strength used: f_y (steel) or f_c,0,k (timber), MPa.
+    pub strength_mpa: f64,
+    /// Modulus used for buckling, MPa (E, or E_0,05 for timber).
+    pub modulus_mpa: f64,
+    /// Section properties.
+    pub section: SectionSummary,
+    /// Every mode checked.
+    pub modes: Vec<ModeResult>,
+    /// Cautions: limit states not covered, values outside a method's range.
+    pub warnings: Vec<Warning>,
+    /// The working.
+    pub trace: Trace,
+}
+
+/// A member ready to check: section built and material resolved once.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Prepared {
+    /// The member as written.
+    pub member: Member,
+    /// Its section.
+    pub section: Section,
+    /// Its material.
+    pub material: Material,
+}
+
+impl Prepared {
+    /// Validates the member and resolves its section and material.
+    pub fn new(member: &Member) -> Result<Prepared> {
+        let wrap = |e: crate::error::Error| e.in_member(&member.id);
+        member.validate_options().map_err(wrap)?;
+        member.buckling_lengths().map_err(wrap)?;
+        let section = member.section.build().map_err(wrap)?;
+        let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+        Ok(Prepared {
+            member: member.clone(),
+            section,
+            material,
+        })
+    }
+
+    /// The method input.
+    pub fn input(&self) -> Input<'_> {
+        Input {
+            member: &self.member,
+            section: &self.section,
+            material: &self.material,
+        }
+    }
+
+    /// Checks the member with its own method.
+    pub fn check(&self) -> Result<CheckResult> {
+        self.check_with(self.member.method)
+    }
+
+    /// Checks the member with another method (for comparing codes).
+    pub fn check_with(&self, method: Method) -> Result<CheckResult> {
+        let m = &self.member;
+        let wrap = |e: crate::error::Error| e.in_member(&m.id);
+        let lengths = m.buckling_lengths().map_err(wrap)?;
+        let input = self.input();
+        let mut trace = Trace::with_capacity(48);
+        let mut warnings = Vec::new();
+        method::prelude(method, &input, &mut trace, &mut warnings).map_err(wrap)?;
+        let major = method::axis(
+            method,
+            &input,
+            Mode::Major,
+            lengths.major_mm,
+            &mut trace,
+            &mut warnings,
+        )
+        .map_err(wrap)?;
+        let minor = method::axis(
+            method,
+            &input,
+            Mode::Minor,
+            lengths.minor_mm,
+            &mut trace,
+            &mut warnings,
+        )
+        .map_err(wrap)?;
+        let modes = vec![major, minor];
+        if needs_torsional_check(&self.section) {
+            warnings.push(Warning::new(
+                "torsional-not-checked",
+                "torsional and flexural-torsional buckling are not checked for this open section; \
+                 check them by hand: they can govern for angles, tees and channels",
+            ));
+        }
+        let governing = modes
+            .iter()
+            .copied()
+            .min_by(|a, b| a.resistance_kn.total_cmp(&b.resistance_kn))
+            .unwrap_or(major);
+        let resistance_kn = governing.resistance_kn;
+        let utilisation = if resistance_kn > 0.0 {
+            m.axial_kn / resistance_kn
+        } else {
+            f64::INFINITY
+        };
+        let (strength_mpa, modulus_mpa) = self.material.strength_and_modulus();
+        Ok(CheckResult {
+            id: m.id.clone(),
+            method,
+            passes: utilisation <= 1.0,
+            utilisation,
+            resistance_kn,
+            governing: governing.mode,
+            squash_kn: self.section.props.area_mm2 * strength_mpa / 1000.0,
+            strength_mpa,
+            modulus_mpa,
+            section: SectionSummary::from(&self.section.props),
+            modes,
+            warnings,
+            trace,
+        })
+    }
+}
+
+/// Whether the section is open and thin-walled with a torsional mode that
+/// flexural buckling alone does not cover.
+fn needs_torsional_check(section: &Section) -> bool {
+    matches!(
+        section.family,
+        Family::Angle | Family::Tee | Family::Channel
+    )
+}
+
+/// Checks one member with its own method.
+pub fn check_member(member: &Member) -> Result<CheckResult> {
+    Prepared::new(member)?.check()
+}

@@ -1,0 +1,1 @@
+//! The member file: reading (with version migration) and writing.

@@ -1,0 +1,31 @@
+//! Strutline's engine: section properties, materials, compression design
+//! methods and the member file.
+//!
+//! The engine is pure: it does no IO, touches no clock, and never panics on
+//! any input. Every fallible step returns [`Error`], whose message names the
+//! field that is wrong and how to put it right. The same code runs natively
+//! (the `strutline` command line, the tests, the benchmarks) and in the
+//! browser as WebAssembly.
+//!
+//! Results are a checking aid for compression members, to be verified
+//! against the governing code, its national annex and the judgement of a
+//! licensed engineer.
+
+pub mod catalogue;
+pub mod check;
+pub mod envelope;
+pub mod error;
+pub mod file;
+pub mod material;
+pub mod member;
+pub mod method;
+pub mod section;
+pub mod trace;
+
+pub use check::{check_member, CheckResult, Mode, ModeResult};
+pub use error::Error;
+pub use member::Member;
+
+/// The caution shown beside every result, in every front end.
+pub const CAUTION: &str = "Strutline is a checking aid for compression members. Verify every result \
+against the governing design code, its national annex and the judgement of a licensed engineer.";

@@ -1,0 +1,2 @@
+//! Building blocks for exact section properties (PLACEHOLDER until the
+//! sections work lands).

@@ -1,0 +1,345 @@
+//! Cross-sections: the parametric shapes of the member file and their
+//! properties.
+//!
+//! Axes: `y` is the major (strong) axis and `z` the minor axis for the
+//! doubly and singly symmetric shapes, with depth running along the web
+//! (bending about `y` loads the web in its plane). For angles the
+//! properties are also given about the principal axes `u` (major) and `v`
+//! (minor). Every property is computed from the dimensions, with root and
+//! corner radii as true circular arcs.
+
+use serde::{Deserialize, Serialize};
+
+use crate::error::Result;
+
+pub mod geometry;
+pub mod shapes;
+
+/// How an I/H section was made: it selects the EN 1993-1-1 buckling curve.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
+#[serde(rename_all = "kebab-case")]
+pub enum IMake {
+    /// Hot-rolled, with root radii.
+    #[default]
+    Rolled,
+    /// Welded from plates, no radii.
+    Welded,
+}
+
+/// How a hollow section was made.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
+#[serde(rename_all = "kebab-case")]
+pub enum HollowMake {
+    /// Hot-finished (EN 10210, or seamless).
+    #[default]
+    HotFinished,
+    /// Cold-formed (EN 10219, ASTM A500 electric-resistance-welded).
+    ColdFormed,
+}
+
+/// A doubly symmetric I or H section.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct IShape {
+    /// Overall depth h along the web.
+    pub depth_mm: f64,
+    /// Flange width b.
+    pub width_mm: f64,
+    /// Flange thickness t_f.
+    pub flange_mm: f64,
+    /// Web thickness t_w.
+    pub web_mm: f64,
+    /// Root radius r between web and flange (0 for welded).
+    #[serde(default)]
+    pub root_radius_mm: f64,
+    /// Rolled or welded.
+    #[serde(default)]
+    pub make: IMake,
+}
+
+/// A rectangular or square hollow section.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Rhs {
+    /// Overall depth h (major-axis bending loads the sides of length h).
+    pub depth_mm: f64,
+    /// Overall width b.
+    pub width_mm: f64,
+    /// Wall thickness t.
+    pub wall_mm: f64,
+    /// Outer corner radius r_o.
+    #[serde(default)]
+    pub outer_radius_mm: f64,
+    /// Inner corner radius r_i; when absent, max(r_o - t, 0).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub inner_radius_mm: Option<f64>,
+    /// Hot-finished or cold-formed.
+    #[serde(default)]
+    pub make: HollowMake,
+}
+
+/// A circular hollow section.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Chs {
+    /// Outside diameter D.
+    pub diameter_mm: f64,
+    /// Wall thickness t.
+    pub wall_mm: f64,
+    /// Hot-finished or cold-formed.
+    #[serde(default)]
+    pub make: HollowMake,
+}
+
+/// An equal or unequal angle; `depth_mm` is the longer (or equal) leg.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Angle {
+    /// Length of the first leg h.
+    pub depth_mm: f64,
+    /// Length of the second leg b.
+    pub width_mm: f64,
+    /// Leg thickness t.
+    pub thickness_mm: f64,
+    /// Root radius r1.
+    #[serde(default)]
+    pub root_radius_mm: f64,
+    /// Toe radius r2.
+    #[serde(default)]
+    pub toe_radius_mm: f64,
+}
+
+/// A parallel-flange channel or a tee: web of thickness `web_mm` and one
+/// (tee) or two (channel) flanges of thickness `flange_mm`.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Flanged {
+    /// Overall depth h (channel: back to back of flanges along the web; tee: flange top to stem tip).
+    pub depth_mm: f64,
+    /// Flange width b (channel: from the back of the web to the flange tip).
+    pub width_mm: f64,
+    /// Flange thickness t_f.
+    pub flange_mm: f64,
+    /// Web (stem) thickness t_w.
+    pub web_mm: f64,
+    /// Root radius r.
+    #[serde(default)]
+    pub root_radius_mm: f64,
+}
+
+/// A solid rectangle (steel plate or timber).
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Rect {
+    /// Depth h (major axis bending).
+    pub depth_mm: f64,
+    /// Width b.
+    pub width_mm: f64,
+}
+
+/// A solid round bar.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Round {
+    /// Diameter d.
+    pub diameter_mm: f64,
+}
+
+/// A section whose properties the person types.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct Given {
+    /// Area A.
+    pub area_mm2: f64,
+    /// Second moment about the major axis.
+    pub i_major_mm4: f64,
+    /// Second moment about the minor axis.
+    pub i_minor_mm4: f64,
+    /// St Venant torsion constant (optional).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub torsion_mm4: Option<f64>,
+    /// Warping constant (optional).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub warping_mm6: Option<f64>,
+}
+
+/// A section as written in the member file, selected by `"kind"`.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(tag = "kind", rename_all = "kebab-case")]
+pub enum SectionSpec {
+    /// Doubly symmetric I/H.
+    I(IShape),
+    /// Rectangular or square hollow.
+    Rhs(Rhs),
+    /// Circular hollow.
+    Chs(Chs),
+    /// Equal or unequal angle.
+    Angle(Angle),
+    /// Parallel-flange channel.
+    Channel(Flanged),
+    /// Tee.
+    Tee(Flanged),
+    /// Solid rectangle.
+    Rect(Rect),
+    /// Solid round.
+    Round(Round),
+    /// Typed properties.
+    Given(Given),
+    /// An entry of the built-in catalogue of standard sections, by designation.
+    Catalogue(CatalogueRef),
+}
+
+/// A reference to a catalogue entry; the member file keeps the designation.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct CatalogueRef {
+    /// The designation as written ("HE 200 B", "SHS 100x100x5", "W10x49").
+    pub designation: String,
+}
+
+/// The family of a section, as the design codes distinguish them.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+#[serde(rename_all = "kebab-case")]
+pub enum Family {
+    /// I/H.
+    I,
+    /// Rectangular hollow.
+    Rhs,
+    /// Circular hollow.
+    Chs,
+    /// Angle.
+    Angle,
+    /// Channel.
+    Channel,
+    /// Tee.
+    Tee,
+    /// Solid rectangle.
+    Rect,
+    /// Solid round.
+    Round,
+    /// Given properties.
+    Given,
+}
+
+/// Properties of a cross-section. Lengths in mm.
+///
+/// The reference point for positions is the centroid. `y`/`z` are the
+/// geometric axes (y along the width, bending about y is major-axis
+/// bending for I, RHS, channel, tee); `major`/`minor` are the principal
+/// axes (for all shapes but the angle they coincide with y and z).
+#[derive(Debug, Clone, Copy, PartialEq, Serialize, Default)]
+pub struct Properties {
+    /// Area A, mm2.
+    pub area_mm2: f64,
+    /// Second moment about the geometric y axis through the centroid, mm4.
+    pub i_y_mm4: f64,
+    /// Second moment about the geometric z axis through the centroid, mm4.
+    pub i_z_mm4: f64,
+    /// Product moment about the centroidal geometric axes, mm4 (zero for symmetric shapes).
+    pub i_yz_mm4: f64,
+    /// Major principal second moment, mm4.
+    pub i_major_mm4: f64,
+    /// Minor principal second moment, mm4.
+    pub i_minor_mm4: f64,
+    /// Angle from the geometric y axis to the major principal axis, radians (zero unless an unequal/equal angle).
+    pub principal_angle_rad: f64,
+    /// Radius of gyration about the major principal axis, mm.
+    pub r_major_mm: f64,
+    /// Radius of gyration about the minor principal axis, mm.
+    pub r_minor_mm: f64,
+    /// Elastic modulus about the major axis (smallest, extreme fibre), mm3.
+    pub w_el_major_mm3: f64,
+    /// Elastic modulus about the minor axis, mm3.
+    pub w_el_minor_mm3: f64,
+    /// Plastic modulus about the major axis, mm3.
+    pub w_pl_major_mm3: f64,
+    /// Plastic modulus about the minor axis, mm3.
+    pub w_pl_minor_mm3: f64,
+    /// St Venant torsion constant I_t, mm4.
+    pub torsion_mm4: f64,
+    /// Warping constant I_w, mm6.
+    pub warping_mm6: f64,
+    /// Shear centre position relative to the centroid along the major principal axis direction, mm.
+    pub shear_centre_major_mm: f64,
+    /// Shear centre position relative to the centroid along the minor principal axis direction, mm.
+    pub shear_centre_minor_mm: f64,
+    /// Centroid position from the section's reference corner/edge along y, mm (see each shape's docs).
+    pub centroid_y_mm: f64,
+    /// Centroid position from the section's reference corner/edge along z, mm.
+    pub centroid_z_mm: f64,
+    /// Mass per metre for steel density 7850 kg/m3, kg/m (common practice).
+    pub mass_kg_per_m: f64,
+}
+
+/// A checked section: its spec, its family and its properties.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Section {
+    /// The dimensions as given.
+    pub spec: SectionSpec,
+    /// Its family.
+    pub family: Family,
+    /// Its properties.
+    pub props: Properties,
+    /// The catalogue designation when it came from the catalogue.
+    pub designation: Option<String>,
+}
+
+impl SectionSpec {
+    /// The section's family.
+    pub fn family(&self) -> Family {
+        match self {
+            SectionSpec::I(_) => Family::I,
+            SectionSpec::Rhs(_) => Family::Rhs,
+            SectionSpec::Chs(_) => Family::Chs,
+            SectionSpec::Angle(_) => Family::Angle,
+            SectionSpec::Channel(_) => Family::Channel,
+            SectionSpec::Tee(_) => Family::Tee,
+            SectionSpec::Rect(_) => Family::Rect,
+            SectionSpec::Round(_) => Family::Round,
+            SectionSpec::Given(_) => Family::Given,
+            SectionSpec::Catalogue(c) => crate::catalogue::resolve(&c.designation)
+                .map(|e| e.spec.family())
+                .unwrap_or(Family::Given),
+        }
+    }
+
+    /// The thickest plate of the section, mm: the thickness that sets the
+    /// yield strength in the material standards (0 for given sections).
+    pub fn governing_thickness_mm(&self) -> f64 {
+        match self {
+            SectionSpec::I(s) => s.flange_mm.max(s.web_mm),
+            SectionSpec::Rhs(s) => s.wall_mm,
+            SectionSpec::Chs(s) => s.wall_mm,
+            SectionSpec::Angle(s) => s.thickness_mm,
+            SectionSpec::Channel(s) | SectionSpec::Tee(s) => s.flange_mm.max(s.web_mm),
+            SectionSpec::Rect(s) => s.depth_mm.min(s.width_mm),
+            SectionSpec::Round(s) => s.diameter_mm,
+            SectionSpec::Given(_) => 0.0,
+            SectionSpec::Catalogue(c) => crate::catalogue::resolve(&c.designation)
+                .map(|e| e.spec.governing_thickness_mm())
+                .unwrap_or(0.0),
+        }
+    }
+
+    /// Validates the dimensions and computes the properties.
+    pub fn build(&self) -> Result<Section> {
+        if let SectionSpec::Catalogue(c) = self {
+            let entry = crate::catalogue::resolve(&c.designation)?;
+            let mut section = entry.spec.build()?;
+            section.designation = Some(entry.designation.to_string());
+            return Ok(section);
+        }
+        let props = shapes::properties(self)?;
+        Ok(Section {
+            spec: self.clone(),
+            family: self.family(),
+            props,
+            designation: None,
+        })
+    }
+
+    /// A short human description, e.g. "I 300x300x19x11 r27".
+    pub fn describe(&self) -> String {
+        shapes::describe(self)
+    }
+}

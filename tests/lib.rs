@@ -1,0 +1,17 @@
+//! Shared helpers for the reference tests under `validation/`: tolerances
+//! with their reasons, and an assertion that reports source and clause.
+
+/// Asserts that `actual` is within relative `tol` of `expected`, naming
+/// the source of the expected value in the failure message.
+#[track_caller]
+pub fn assert_close(actual: f64, expected: f64, tol: f64, what: &str) {
+    let rel = if expected == 0.0 {
+        actual.abs()
+    } else {
+        ((actual - expected) / expected).abs()
+    };
+    assert!(
+        rel <= tol,
+        "{what}: got {actual}, expected {expected} (relative difference {rel:.4e} > tolerance {tol:.1e})"
+    );
+}
