@@ -1,1 +1,236 @@
-//! The member file: reading (with version migration) and writing.
+//! The member file: `{"format": "strutline.members", "version": 1,
+//! "title": ..., "members": [...]}`.
+//!
+//! Reading goes text -> JSON value -> (migration to the current version)
+//! -> typed members, so a file of any earlier version is lifted step by
+//! step to the current one, and every error names the member and the
+//! field. Writing always produces the current version.
+
+use serde::{Deserialize, Serialize};
+use serde_json::Value;
+
+use crate::error::{Error, Result};
+use crate::member::Member;
+
+/// The value of the `"format"` key.
+pub const FORMAT: &str = "strutline.members";
+
+/// The version this build writes; it reads every version from 1 to this.
+pub const VERSION: u64 = 1;
+
+/// The largest member-file text accepted, bytes (5 MiB).
+pub const MAX_BYTES: usize = 5 * 1024 * 1024;
+
+/// A list of members with a title.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+pub struct MemberFile {
+    /// Always [`FORMAT`].
+    pub format: String,
+    /// Always [`VERSION`] once read.
+    pub version: u64,
+    /// The list's title (e.g. the job name).
+    #[serde(default)]
+    pub title: String,
+    /// The members, in order.
+    pub members: Vec<Member>,
+}
+
+impl MemberFile {
+    /// An empty list with a title.
+    pub fn new(title: impl Into<String>) -> MemberFile {
+        MemberFile {
+            format: FORMAT.to_string(),
+            version: VERSION,
+            title: title.into(),
+            members: Vec::new(),
+        }
+    }
+
+    /// The file as pretty JSON in the current version.
+    pub fn to_json(&self) -> String {
+        let mut copy = self.clone();
+        copy.format = FORMAT.to_string();
+        copy.version = VERSION;
+        serde_json::to_string_pretty(&copy).unwrap_or_else(|_| String::from("{}"))
+    }
+
+    /// Looks a member up by id.
+    pub fn member(&self, id: &str) -> Option<&Member> {
+        self.members.iter().find(|m| m.id == id)
+    }
+}
+
+fn syntax(e: &serde_json::Error) -> Error {
+    Error::Syntax {
+        line: e.line(),
+        column: e.column(),
+        message: e.to_string(),
+    }
+}
+
+/// Lifts a file of `version` to the next version. Version 1 is the first,
+/// so there is nothing to lift yet; each later version adds one arm here.
+fn migrate(value: Value, version: u64) -> Result<Value> {
+    match version {
+        // Future: 1 => rename or default keys of version 1 into version 2.
+        _ => Ok(value),
+    }
+}
+
+/// Reads a member file from JSON text.
+pub fn parse(text: &str) -> Result<MemberFile> {
+    if text.len() > MAX_BYTES {
+        return Err(Error::NotMemberFile {
+            reason: format!(
+                "it is {} bytes; the largest file accepted is {} bytes",
+                text.len(),
+                MAX_BYTES
+            ),
+        });
+    }
+    let text = text.trim_start_matches('\u{feff}');
+    let mut value: Value = serde_json::from_str(text).map_err(|e| syntax(&e))?;
+    let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
+        reason: "the top level is not a JSON object".into(),
+    })?;
+    match obj.get("format").and_then(Value::as_str) {
+        Some(FORMAT) => {}
+        Some(other) => {
+            return Err(Error::NotMemberFile {
+                reason: format!("its \"format\" is \"{other}\""),
+            })
+        }
+        None => {
+            return Err(Error::NotMemberFile {
+                reason: "it has no \"format\" key".into(),
+            })
+        }
+    }
+    let version = obj
+        .get("version")
+        .and_then(Value::as_u64)
+        .ok_or_else(|| Error::NotMemberFile {
+            reason: "it has no whole-number \"version\" key".into(),
+        })?;
+    if version == 0 || version > VERSION {
+        return Err(Error::UnsupportedVersion {
+            found: version,
+            newest: VERSION,
+        });
+    }
+    let mut v = version;
+    while v < VERSION {
+        value = migrate(value, v)?;
+        v += 1;
+    }
+    let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
+        reason: "the top level is not a JSON object".into(),
+    })?;
+    let title = match obj.get("title") {
+        None | Some(Value::Null) => String::new(),
+        Some(Value::String(s)) => s.clone(),
+        Some(_) => {
+            return Err(Error::Syntax {
+                line: 0,
+                column: 0,
+                message: "title: expected text".into(),
+            })
+        }
+    };
+    let raw_members = match obj.get("members") {
+        Some(Value::Array(a)) => a,
+        _ => {
+            return Err(Error::NotMemberFile {
+                reason: "it has no \"members\" list".into(),
+            })
+        }
+    };
+    let mut members = Vec::with_capacity(raw_members.len());
+    for (index, raw) in raw_members.iter().enumerate() {
+        members.push(member_from_value(raw, index)?);
+    }
+    check_unique_ids(&members)?;
+    Ok(MemberFile {
+        format: FORMAT.to_string(),
+        version: VERSION,
+        title,
+        members,
+    })
+}
+
+/// A member from a JSON value; `index` (0-based) names it when it has no id.
+pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
+    let name = raw
+        .get("id")
+        .and_then(Value::as_str)
+        .map(str::to_string)
+        .unwrap_or_else(|| format!("#{}", index + 1));
+    serde_path_to_error::deserialize::<_, Member>(raw).map_err(|e| {
+        let path = e.path().to_string();
+        let inner = e.into_inner().to_string();
+        Error::Syntax {
+            line: 0,
+            column: 0,
+            message: if path == "." {
+                inner
+            } else {
+                format!("{path}: {inner}")
+            },
+        }
+        .in_member(&name)
+    })
+}
+
+/// Refuses a list in which two members share an id.
+pub fn check_unique_ids(members: &[Member]) -> Result<()> {
+    let mut seen = std::collections::HashSet::with_capacity(members.len());
+    for m in members {
+        if !seen.insert(m.id.as_str()) {
+            return Err(Error::DuplicateId { id: m.id.clone() });
+        }
+    }
+    Ok(())
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing, clippy::panic)]
+    use super::*;
+
+    const ONE: &str = r#"{"format": "strutline.members", "version": 1, "title": "t",
+      "members": [{"id": "P1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
+      "material": {"fy_mpa": 235, "e_mpa": 210000}, "length_mm": 2000, "axial_kn": 10,
+      "method": "euler"}]}"#;
+
+    #[test]
+    fn reads_and_writes_round_trip() {
+        let f = parse(ONE).unwrap();
+        assert_eq!(f.members.len(), 1);
+        assert_eq!(f.members[0].k_minor, 1.0);
+        let again = parse(&f.to_json()).unwrap();
+        assert_eq!(f, again);
+    }
+
+    #[test]
+    fn refuses_future_version_naming_supported() {
+        let text = ONE.replace("\"version\": 1", "\"version\": 9");
+        let e = parse(&text).unwrap_err();
+        assert_eq!(e, Error::UnsupportedVersion { found: 9, newest: VERSION });
+        assert!(e.to_string().contains("versions 1 to 1"));
+    }
+
+    #[test]
+    fn names_member_and_field_on_wrong_type() {
+        let text = ONE.replace("\"length_mm\": 2000", "\"length_mm\": \"long\"");
+        let e = parse(&text).unwrap_err().to_string();
+        assert!(e.contains("P1") && e.contains("length_mm"), "{e}");
+    }
+
+    #[test]
+    fn refuses_other_json_and_duplicates() {
+        assert!(matches!(parse("{\"a\":1}"), Err(Error::NotMemberFile { .. })));
+        assert!(matches!(parse("[1,2"), Err(Error::Syntax { .. })));
+        let dup = ONE.replace("]}", ",{\"id\": \"P1\", \"section\": {\"kind\": \"round\", \"diameter_mm\": 20}, \"material\": {\"fy_mpa\": 235, \"e_mpa\": 210000}, \"length_mm\": 1, \"axial_kn\": 1, \"method\": \"euler\"}]}");
+        assert_eq!(parse(&dup).unwrap_err(), Error::DuplicateId { id: "P1".into() });
+    }
+}

@@ -1,0 +1,2 @@
+//! The `strutline` command line (being written).
+fn main() {}
