@@ -1,0 +1,62 @@
+//! `strutline envelope FILE --member ID`: the member's capacity envelope
+//! as CSV: slenderness, Euler stress, yield stress and the design stress
+//! of the member's method about each axis.
+
+use strutline_core::check::{Mode, Prepared};
+use strutline_core::envelope;
+
+/// Runs the subcommand.
+pub fn run(args: &[String]) -> Result<i32, String> {
+    let id = crate::flag_value(args, "--member")?
+        .ok_or("envelope needs --member ID; e.g. `strutline envelope members.json --member C1`")?;
+    let to = match crate::flag_value(args, "--to")? {
+        Some(v) => v
+            .parse::<f64>()
+            .ok()
+            .filter(|v| v.is_finite() && *v > 0.0)
+            .ok_or("--to: expected a slenderness greater than zero, e.g. 250")?,
+        None => 250.0,
+    };
+    let steps = match crate::flag_value(args, "--steps")? {
+        Some(v) => v
+            .parse::<usize>()
+            .ok()
+            .filter(|v| (1..=100_000).contains(v))
+            .ok_or("--steps: expected a whole number from 1 to 100000")?,
+        None => 125,
+    };
+    let mut skip_next = false;
+    let mut path = None;
+    for a in args {
+        if skip_next {
+            skip_next = false;
+            continue;
+        }
+        if matches!(a.as_str(), "--member" | "--to" | "--steps") {
+            skip_next = true;
+        } else if a.starts_with("--") {
+            return Err(format!("envelope: unknown option {a}"));
+        } else {
+            path = Some(a.as_str());
+        }
+    }
+    let path = path.ok_or("envelope needs a FILE")?;
+    let file = crate::read_members(path)?;
+    let member = file
+        .member(id)
+        .ok_or_else(|| format!("{path}: no member with id \"{id}\""))?;
+    let prepared = Prepared::new(member).map_err(|e| format!("{path}: {e}"))?;
+    let method = member.method;
+    let major = envelope::sample(&prepared, method, Mode::Major, 0.0, to, steps)
+        .map_err(|e| format!("{path}: {e}"))?;
+    let minor = envelope::sample(&prepared, method, Mode::Minor, 0.0, to, steps)
+        .map_err(|e| format!("{path}: {e}"))?;
+    println!("slenderness,euler_mpa,yield_mpa,design_major_mpa,design_minor_mpa");
+    for (a, b) in major.iter().zip(minor.iter()) {
+        println!(
+            "{:.3},{:.3},{:.3},{:.3},{:.3}",
+            a.slenderness, a.euler_mpa, a.yield_mpa, a.design_mpa, b.design_mpa
+        );
+    }
+    Ok(0)
+}
