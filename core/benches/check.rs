@@ -1,1 +1,190 @@
-fn main(){}
+//! Throughput of the member check: 10,000 members of mixed shapes and
+//! methods, checked from their member-file form (section built, material
+//! resolved, both axes worked, trace kept) as the command line and the app
+//! do. Run with `cargo xtask bench` (or `cargo bench -p strutline-core --bench check`).
+
+use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
+use strutline_core::material::{MaterialSpec, TimberKind};
+use strutline_core::member::Member;
+use strutline_core::method::Method;
+use strutline_core::section::{
+    Angle, Chs, Flanged, Given, HollowMake, IMake, IShape, Rect, Rhs, Round, SectionSpec,
+};
+
+/// The number of members in the benchmark list.
+pub const MEMBERS: usize = 10_000;
+
+fn member(i: usize) -> Member {
+    let f = (i % 7) as f64;
+    let (section, material, method) = match i % 10 {
+        0 => (
+            SectionSpec::I(IShape {
+                depth_mm: 200.0 + 10.0 * f,
+                width_mm: 200.0,
+                flange_mm: 15.0,
+                web_mm: 9.0,
+                root_radius_mm: 18.0,
+                make: IMake::Rolled,
+            }),
+            MaterialSpec::Grade { grade: "S355".into() },
+            Method::En1993,
+        ),
+        1 => (
+            SectionSpec::Rhs(Rhs {
+                depth_mm: 150.0,
+                width_mm: 100.0 + 5.0 * f,
+                wall_mm: 6.0,
+                outer_radius_mm: 9.0,
+                inner_radius_mm: Some(6.0),
+                make: HollowMake::HotFinished,
+            }),
+            MaterialSpec::Grade { grade: "S355".into() },
+            Method::En1993,
+        ),
+        2 => (
+            SectionSpec::Chs(Chs {
+                diameter_mm: 168.3,
+                wall_mm: 6.0 + f * 0.5,
+                make: HollowMake::ColdFormed,
+            }),
+            MaterialSpec::Grade { grade: "S355".into() },
+            Method::AiscLrfd,
+        ),
+        3 => (
+            SectionSpec::I(IShape {
+                depth_mm: 310.0,
+                width_mm: 305.0,
+                flange_mm: 15.0 + f,
+                web_mm: 9.9,
+                root_radius_mm: 15.2,
+                make: IMake::Rolled,
+            }),
+            MaterialSpec::Grade { grade: "A992".into() },
+            Method::AiscAsd,
+        ),
+        4 => (
+            SectionSpec::Rhs(Rhs {
+                depth_mm: 203.2,
+                width_mm: 203.2,
+                wall_mm: 8.0,
+                outer_radius_mm: 16.0,
+                inner_radius_mm: None,
+                make: HollowMake::ColdFormed,
+            }),
+            MaterialSpec::Grade { grade: "350W".into() },
+            Method::CsaS16,
+        ),
+        5 => (
+            SectionSpec::Rect(Rect {
+                depth_mm: 200.0 + 10.0 * f,
+                width_mm: 140.0,
+            }),
+            MaterialSpec::Grade { grade: "GL28h".into() },
+            Method::En1995,
+        ),
+        6 => (
+            SectionSpec::Angle(Angle {
+                depth_mm: 100.0,
+                width_mm: 75.0,
+                thickness_mm: 8.0 + f * 0.5,
+                root_radius_mm: 10.0,
+                toe_radius_mm: 5.0,
+            }),
+            MaterialSpec::Grade { grade: "S275".into() },
+            Method::En1993,
+        ),
+        7 => (
+            SectionSpec::Channel(Flanged {
+                depth_mm: 200.0,
+                width_mm: 75.0,
+                flange_mm: 12.5,
+                web_mm: 8.5 + f * 0.2,
+                root_radius_mm: 12.0,
+            }),
+            MaterialSpec::Custom {
+                fy_mpa: 275.0,
+                e_mpa: 210_000.0,
+                g_mpa: None,
+            },
+            Method::PerryRobertson,
+        ),
+        8 => (
+            SectionSpec::Round(Round {
+                diameter_mm: 40.0 + f,
+            }),
+            MaterialSpec::Custom {
+                fy_mpa: 355.0,
+                e_mpa: 210_000.0,
+                g_mpa: None,
+            },
+            Method::Secant,
+        ),
+        _ => (
+            SectionSpec::Given(Given {
+                area_mm2: 5000.0 + 100.0 * f,
+                i_major_mm4: 4.0e7,
+                i_minor_mm4: 1.5e7,
+                torsion_mm4: None,
+                warping_mm6: None,
+            }),
+            MaterialSpec::Timber {
+                fc0k_mpa: 24.0,
+                e005_mpa: 8000.0,
+                e0mean_mpa: 12000.0,
+                timber: TimberKind::Solid,
+            },
+            Method::En1995,
+        ),
+    };
+    Member {
+        id: format!("B{i}"),
+        note: None,
+        section,
+        material,
+        length_mm: 2500.0 + 50.0 * f,
+        k_major: 1.0,
+        k_minor: if i % 3 == 0 { 0.7 } else { 1.0 },
+        k_torsion: 1.0,
+        lcr_major_mm: None,
+        lcr_minor_mm: None,
+        lcr_torsion_mm: None,
+        axial_kn: 150.0 + 10.0 * f,
+        method,
+        gamma_m1: None,
+        curve_major: None,
+        curve_minor: None,
+        bow_mm: None,
+        eccentricity_mm: None,
+        service_class: None,
+        load_duration: None,
+        csa_n: None,
+    }
+}
+
+fn bench(c: &mut Criterion) {
+    let members: Vec<Member> = (0..MEMBERS).map(member).collect();
+    // Every member must check: a benchmark of errors would measure nothing.
+    for m in &members {
+        if let Err(e) = strutline_core::check_member(m) {
+            eprintln!("benchmark member does not check: {e}");
+            std::process::exit(1);
+        }
+    }
+    let mut group = c.benchmark_group("check");
+    group.throughput(Throughput::Elements(MEMBERS as u64));
+    group.bench_function("10k_mixed_members", |b| {
+        b.iter(|| {
+            let mut passing = 0usize;
+            for m in &members {
+                if let Ok(r) = strutline_core::check_member(black_box(m)) {
+                    passing += usize::from(r.passes);
+                }
+            }
+            black_box(passing)
+        })
+    });
+    group.finish();
+}
+
+criterion_group!(benches, bench);
+criterion_main!(benches);

@@ -1,0 +1,184 @@
+//! `cargo xtask bench`: the engine benchmarks (Criterion: member checks a
+//! second, sizing) and the browser measurements (`bench-web`), written
+//! with a description of the machine to `bench/RESULTS.md`, and compared
+//! with the figures recorded in `bench/baseline.json`.
+//!
+//! Timings on a shared machine are noisy, so a figure that has fallen is
+//! reported plainly rather than failing the run; the size budget of
+//! `dist/` is the one hard limit, and `dist` enforces it.
+
+use std::fmt::Write as _;
+use std::path::Path;
+
+use anyhow::{Context, Result};
+use serde_json::Value;
+
+use crate::util;
+
+/// A benchmark figure: name, value, unit, whether larger is better, and target.
+struct Figure {
+    name: &'static str,
+    value: f64,
+    unit: &'static str,
+    higher_is_better: bool,
+    target: f64,
+}
+
+/// Runs the benchmarks and writes the results file.
+pub fn run(args: &[String]) -> Result<()> {
+    util::check_args(args, &[], &["--no-browser"])?;
+    let browser = !args.iter().any(|a| a == "--no-browser");
+    let root = util::root();
+    let mut figures = Vec::new();
+
+    util::run(util::cargo().args([
+        "bench",
+        "-p",
+        "strutline-core",
+        "--bench",
+        "check",
+        "--",
+        "--noplot",
+    ]))?;
+    let ns = criterion_mean_ns(&root.join("target/criterion/check/10k_mixed_members"))?;
+    figures.push(Figure {
+        name: "member checks per second (10,000 mixed members, one core)",
+        value: 10_000.0 / (ns * 1e-9),
+        unit: "checks/s",
+        higher_is_better: true,
+        target: 2_000_000.0,
+    });
+
+    if root.join("core/benches/sizing.rs").exists() {
+        util::run(util::cargo().args([
+            "bench",
+            "-p",
+            "strutline-core",
+            "--bench",
+            "sizing",
+            "--",
+            "--noplot",
+        ]))?;
+        if let Some(dir) = first_estimate_dir(&root.join("target/criterion"), "sizing") {
+            let ns = criterion_mean_ns(&dir)?;
+            figures.push(Figure {
+                name: "sizing 1,000 members against a 300-section series (native)",
+                value: ns * 1e-6,
+                unit: "ms",
+                higher_is_better: false,
+                target: 100.0,
+            });
+        }
+    }
+
+    let mut web = String::new();
+    if browser {
+        crate::bench_web::run(&[])?;
+        web = std::fs::read_to_string(root.join("bench/web.md")).unwrap_or_default();
+    }
+
+    let baseline: Value = std::fs::read_to_string(root.join("bench/baseline.json"))
+        .ok()
+        .and_then(|t| serde_json::from_str(&t).ok())
+        .unwrap_or(Value::Null);
+
+    let mut out = String::new();
+    writeln!(out, "# Strutline benchmark results\n")?;
+    writeln!(
+        out,
+        "Written by `cargo xtask bench` (reproduce with that command from the repository root).\n"
+    )?;
+    writeln!(out, "## Machine\n\n{}\n", machine())?;
+    writeln!(out, "## Engine\n")?;
+    writeln!(out, "| figure | value | target | recorded | verdict |")?;
+    writeln!(out, "|---|---|---|---|---|")?;
+    for f in &figures {
+        let recorded = baseline.get(f.name).and_then(Value::as_f64);
+        let meets = if f.higher_is_better {
+            f.value >= f.target
+        } else {
+            f.value <= f.target
+        };
+        let fallen = recorded.is_some_and(|r| {
+            if f.higher_is_better {
+                f.value < 0.8 * r
+            } else {
+                f.value > 1.25 * r
+            }
+        });
+        let verdict = match (meets, fallen) {
+            (true, false) => "meets target",
+            (true, true) => "meets target, but FALLEN more than 20% from the recorded figure",
+            (false, false) => "MISSES target",
+            (false, true) => "MISSES target and FALLEN from the recorded figure",
+        };
+        if fallen {
+            eprintln!("xtask bench: {} has fallen: {:.3} {} (recorded {:.3})", f.name, f.value, f.unit, recorded.unwrap_or(0.0));
+        }
+        writeln!(
+            out,
+            "| {} | {:.3} {} | {} {} | {} | {} |",
+            f.name,
+            f.value,
+            f.unit,
+            if f.higher_is_better { ">=" } else { "<=" },
+            f.target,
+            recorded.map_or("none".to_string(), |r| format!("{r:.3}")),
+            verdict
+        )?;
+    }
+    if !web.is_empty() {
+        writeln!(out, "\n## Browser\n\n{web}")?;
+    }
+    std::fs::create_dir_all(root.join("bench"))?;
+    std::fs::write(root.join("bench/RESULTS.md"), &out)?;
+    print!("{out}");
+    Ok(())
+}
+
+fn criterion_mean_ns(dir: &Path) -> Result<f64> {
+    let path = dir.join("new/estimates.json");
+    let text = std::fs::read_to_string(&path)
+        .with_context(|| format!("reading {}", path.display()))?;
+    let v: Value = serde_json::from_str(&text)?;
+    v.pointer("/mean/point_estimate")
+        .and_then(Value::as_f64)
+        .with_context(|| format!("no mean in {}", path.display()))
+}
+
+/// The first benchmark directory under `criterion/<group>/` that has estimates.
+fn first_estimate_dir(criterion: &Path, group: &str) -> Option<std::path::PathBuf> {
+    let dir = criterion.join(group);
+    let mut entries: Vec<_> = std::fs::read_dir(&dir).ok()?.flatten().map(|e| e.path()).collect();
+    entries.sort();
+    entries
+        .into_iter()
+        .find(|p| p.join("new/estimates.json").exists())
+}
+
+/// A description of this machine: CPU model, cores, memory, toolchain.
+pub fn machine() -> String {
+    let cpu = std::fs::read_to_string("/proc/cpuinfo")
+        .ok()
+        .and_then(|t| {
+            t.lines()
+                .find(|l| l.starts_with("model name"))
+                .and_then(|l| l.split(':').nth(1))
+                .map(|s| s.trim().to_string())
+        })
+        .unwrap_or_else(|| "unknown CPU".into());
+    let cores = std::thread::available_parallelism().map_or(0, usize::from);
+    let mem = std::fs::read_to_string("/proc/meminfo")
+        .ok()
+        .and_then(|t| {
+            t.lines()
+                .find(|l| l.starts_with("MemTotal"))
+                .map(|l| l.trim_start_matches("MemTotal:").trim().to_string())
+        })
+        .unwrap_or_default();
+    let rustc = util::output(std::process::Command::new("rustc").arg("-V")).unwrap_or_default();
+    format!(
+        "- CPU: {cpu}\n- cores available: {cores}\n- memory: {mem}\n- toolchain: {}",
+        rustc.trim()
+    )
+}
