@@ -113,7 +113,13 @@ pub fn run(args: &[String]) -> Result<()> {
             (false, true) => "MISSES target and FALLEN from the recorded figure",
         };
         if fallen {
-            eprintln!("xtask bench: {} has fallen: {:.3} {} (recorded {:.3})", f.name, f.value, f.unit, recorded.unwrap_or(0.0));
+            eprintln!(
+                "xtask bench: {} has fallen: {:.3} {} (recorded {:.3})",
+                f.name,
+                f.value,
+                f.unit,
+                recorded.unwrap_or(0.0)
+            );
         }
         writeln!(
             out,
@@ -138,8 +144,8 @@ pub fn run(args: &[String]) -> Result<()> {
 
 fn criterion_mean_ns(dir: &Path) -> Result<f64> {
     let path = dir.join("new/estimates.json");
-    let text = std::fs::read_to_string(&path)
-        .with_context(|| format!("reading {}", path.display()))?;
+    let text =
+        std::fs::read_to_string(&path).with_context(|| format!("reading {}", path.display()))?;
     let v: Value = serde_json::from_str(&text)?;
     v.pointer("/mean/point_estimate")
         .and_then(Value::as_f64)
@@ -149,7 +155,11 @@ fn criterion_mean_ns(dir: &Path) -> Result<f64> {
 /// The first benchmark directory under `criterion/<group>/` that has estimates.
 fn first_estimate_dir(criterion: &Path, group: &str) -> Option<std::path::PathBuf> {
     let dir = criterion.join(group);
-    let mut entries: Vec<_> = std::fs::read_dir(&dir).ok()?.flatten().map(|e| e.path()).collect();
+    let mut entries: Vec<_> = std::fs::read_dir(&dir)
+        .ok()?
+        .flatten()
+        .map(|e| e.path())
+        .collect();
     entries.sort();
     entries
         .into_iter()

@@ -101,12 +101,12 @@ fn examples() -> Result<()> {
 
 /// Installs the wasm32 target through rustup when it is missing.
 fn ensure_wasm_target() -> Result<()> {
-    let installed = util::output(std::process::Command::new("rustup").args([
-        "target",
-        "list",
-        "--installed",
-    ]))?;
-    if !installed.lines().any(|l| l.trim() == "wasm32-unknown-unknown") {
+    let installed =
+        util::output(std::process::Command::new("rustup").args(["target", "list", "--installed"]))?;
+    if !installed
+        .lines()
+        .any(|l| l.trim() == "wasm32-unknown-unknown")
+    {
         util::run(std::process::Command::new("rustup").args([
             "target",
             "add",
