@@ -156,11 +156,7 @@ pub struct Prepared {
 impl Prepared {
     /// Validates the member and resolves its section and material.
     pub fn new(member: &Member) -> Result<Prepared> {
-        let wrap = |e: crate::error::Error| e.in_member(&member.id);
-        member.validate_options().map_err(wrap)?;
-        member.buckling_lengths().map_err(wrap)?;
-        let section = member.section.build().map_err(wrap)?;
-        let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+        let (section, material) = resolve(member)?;
         Ok(Prepared {
             member: member.clone(),
             section,
@@ -184,67 +180,84 @@ impl Prepared {
 
     /// Checks the member with another method (for comparing codes).
     pub fn check_with(&self, method: Method) -> Result<CheckResult> {
-        let m = &self.member;
-        let wrap = |e: crate::error::Error| e.in_member(&m.id);
-        let lengths = m.buckling_lengths().map_err(wrap)?;
-        let input = self.input();
-        let mut trace = Trace::with_capacity(48);
-        let mut warnings = Vec::new();
-        method::prelude(method, &input, &mut trace, &mut warnings).map_err(wrap)?;
-        let major = method::axis(
-            method,
-            &input,
-            Mode::Major,
-            lengths.major_mm,
-            &mut trace,
-            &mut warnings,
-        )
-        .map_err(wrap)?;
-        let minor = method::axis(
-            method,
-            &input,
-            Mode::Minor,
-            lengths.minor_mm,
-            &mut trace,
-            &mut warnings,
-        )
-        .map_err(wrap)?;
-        let modes = vec![major, minor];
-        if needs_torsional_check(&self.section) {
-            warnings.push(Warning::new(
-                "torsional-not-checked",
-                "torsional and flexural-torsional buckling are not checked for this open section; \
-                 check them by hand: they can govern for angles, tees and channels",
-            ));
-        }
-        let governing = modes
-            .iter()
-            .copied()
-            .min_by(|a, b| a.resistance_kn.total_cmp(&b.resistance_kn))
-            .unwrap_or(major);
-        let resistance_kn = governing.resistance_kn;
-        let utilisation = if resistance_kn > 0.0 {
-            m.axial_kn / resistance_kn
-        } else {
-            f64::INFINITY
-        };
-        let (strength_mpa, modulus_mpa) = self.material.strength_and_modulus();
-        Ok(CheckResult {
-            id: m.id.clone(),
-            method,
-            passes: utilisation <= 1.0,
-            utilisation,
-            resistance_kn,
-            governing: governing.mode,
-            squash_kn: self.section.props.area_mm2 * strength_mpa / 1000.0,
-            strength_mpa,
-            modulus_mpa,
-            section: SectionSummary::from(&self.section.props),
-            modes,
-            warnings,
-            trace,
-        })
+        run(&self.input(), method)
     }
+}
+
+/// Runs `method` on a resolved member: both axes, the governing mode, the
+/// working. Shared by [`Prepared`] and [`check_member`], which borrows
+/// instead of cloning so the hot path allocates only the result.
+pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
+    let m = input.member;
+    let wrap = |e: crate::error::Error| e.in_member(&m.id);
+    let lengths = m.buckling_lengths().map_err(wrap)?;
+    let mut trace = Trace::with_capacity(48);
+    let mut warnings = Vec::new();
+    method::prelude(method, input, &mut trace, &mut warnings).map_err(wrap)?;
+    let major = method::axis(
+        method,
+        input,
+        Mode::Major,
+        lengths.major_mm,
+        &mut trace,
+        &mut warnings,
+    )
+    .map_err(wrap)?;
+    let minor = method::axis(
+        method,
+        input,
+        Mode::Minor,
+        lengths.minor_mm,
+        &mut trace,
+        &mut warnings,
+    )
+    .map_err(wrap)?;
+    let modes = vec![major, minor];
+    if needs_torsional_check(input.section) {
+        warnings.push(Warning::new(
+            "torsional-not-checked",
+            "torsional and flexural-torsional buckling are not checked for this open section; \
+             check them by hand: they can govern for angles, tees and channels",
+        ));
+    }
+    let governing = modes
+        .iter()
+        .copied()
+        .min_by(|a, b| a.resistance_kn.total_cmp(&b.resistance_kn))
+        .unwrap_or(major);
+    let resistance_kn = governing.resistance_kn;
+    let utilisation = if resistance_kn > 0.0 {
+        m.axial_kn / resistance_kn
+    } else {
+        f64::INFINITY
+    };
+    let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
+    Ok(CheckResult {
+        id: m.id.clone(),
+        method,
+        passes: utilisation <= 1.0,
+        utilisation,
+        resistance_kn,
+        governing: governing.mode,
+        squash_kn: input.section.props.area_mm2 * strength_mpa / 1000.0,
+        strength_mpa,
+        modulus_mpa,
+        section: SectionSummary::from(&input.section.props),
+        modes,
+        warnings,
+        trace,
+    })
+}
+
+/// Validates a member and resolves its section and material without
+/// copying the member.
+pub fn resolve(member: &Member) -> Result<(Section, Material)> {
+    let wrap = |e: crate::error::Error| e.in_member(&member.id);
+    member.validate_options().map_err(wrap)?;
+    member.buckling_lengths().map_err(wrap)?;
+    let section = member.section.build().map_err(wrap)?;
+    let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+    Ok((section, material))
 }
 
 /// Whether the section is open and thin-walled with a torsional mode that
@@ -258,5 +271,11 @@ fn needs_torsional_check(section: &Section) -> bool {
 
 /// Checks one member with its own method.
 pub fn check_member(member: &Member) -> Result<CheckResult> {
-    Prepared::new(member)?.check()
+    let (section, material) = resolve(member)?;
+    let input = Input {
+        member,
+        section: &section,
+        material: &material,
+    };
+    run(&input, member.method)
 }
