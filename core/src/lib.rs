@@ -21,6 +21,7 @@ pub mod member;
 pub mod method;
 pub mod section;
 pub mod trace;
+pub mod units;
 
 pub use check::{check_member, CheckResult, Mode, ModeResult};
 pub use error::Error;
