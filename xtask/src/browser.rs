@@ -1,0 +1,127 @@
+//! `cargo xtask browser-test [--only NAME]`: runs the browser tests in
+//! `tests/browser/` against a fresh `dist/`.
+//!
+//! It makes sure Chromium (Debian's `/usr/bin/chromium`) and the node
+//! packages are installed, builds `dist/` and the `strutline` command line
+//! (the tests compare the page with it), serves `dist/` from a thread on a
+//! free 127.0.0.1 port and runs `node tests/browser/run.mjs --url ...`.
+//! It never downloads a browser: playwright-core drives the system one.
+
+use std::path::{Path, PathBuf};
+use std::process::Command;
+
+use anyhow::{bail, Result};
+
+use crate::{dist, serve, util};
+
+/// The browser the tests drive.
+pub const CHROMIUM: &str = "/usr/bin/chromium";
+
+/// `cargo xtask browser-test [--only NAME] [--no-wasm-opt]`.
+pub fn run(args: &[String]) -> Result<()> {
+    util::check_args(args, &["--only"], &["--no-wasm-opt"])?;
+    let only = util::flag_value(args, "--only")?;
+    let built = prepare(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    // The tests compare the page with the command line; build it first so
+    // each comparison is a quick `cargo run`.
+    util::run(util::cargo().args([
+        "build",
+        "--release",
+        "-q",
+        "-p",
+        "strutline-core",
+        "--bin",
+        "strutline",
+    ]))?;
+    let server = serve::Server::start(&built.dir, 0)?;
+    let url = format!("http://127.0.0.1:{}/", server.port());
+    println!("xtask: serving dist/ at {url} for the browser tests");
+    let mut cmd = node_script("run.mjs", &url);
+    if let Some(name) = only {
+        cmd.args(["--only", &name]);
+    }
+    let result = util::run(&mut cmd);
+    server.stop();
+    result
+}
+
+/// Installs what the browser scripts need and builds `dist/`.
+pub fn prepare(use_wasm_opt: bool) -> Result<dist::Built> {
+    ensure_chromium()?;
+    ensure_node_modules()?;
+    let built = dist::build(use_wasm_opt)?;
+    dist::report(&built);
+    Ok(built)
+}
+
+/// The directory of the node project.
+pub fn tests_dir() -> PathBuf {
+    util::root().join("tests").join("browser")
+}
+
+/// `node tests/browser/<script> --url <url>` run from the workspace root.
+pub fn node_script(script: &str, url: &str) -> Command {
+    let mut cmd = Command::new("node");
+    cmd.current_dir(util::root())
+        .arg(tests_dir().join(script))
+        .args(["--url", url])
+        .env("STRUTLINE_CHROMIUM", CHROMIUM)
+        .env("STRUTLINE_ROOT", util::root());
+    if let Some(cargo) = std::env::var_os("CARGO") {
+        cmd.env("STRUTLINE_CARGO", cargo);
+    }
+    cmd
+}
+
+/// Installs Debian's Chromium when it is missing and we are root.
+fn ensure_chromium() -> Result<()> {
+    if Path::new(CHROMIUM).is_file() {
+        return Ok(());
+    }
+    if !util::is_root() {
+        bail!("{CHROMIUM} is missing; install Debian's `chromium` package (needs root)");
+    }
+    eprintln!("xtask: {CHROMIUM} is missing; installing Debian's chromium");
+    util::run(Command::new("apt-get").arg("update"))?;
+    util::run(
+        Command::new("apt-get")
+            .args([
+                "install",
+                "-y",
+                "--no-install-recommends",
+                "chromium",
+                "chromium-driver",
+            ])
+            .env("DEBIAN_FRONTEND", "noninteractive"),
+    )?;
+    if !Path::new(CHROMIUM).is_file() {
+        bail!("installing chromium left no {CHROMIUM}");
+    }
+    Ok(())
+}
+
+/// Runs `npm ci` (or `npm install` when that fails) in tests/browser when
+/// playwright-core or axe-core is not installed there.
+fn ensure_node_modules() -> Result<()> {
+    let dir = tests_dir();
+    let modules = dir.join("node_modules");
+    if modules.join("playwright-core").is_dir() && modules.join("axe-core").is_dir() {
+        return Ok(());
+    }
+    if !util::on_path("node") || !util::on_path("npm") {
+        bail!("node and npm are needed for the browser tests (Debian: apt-get install nodejs npm)");
+    }
+    let npm = |sub: &str| {
+        let mut c = Command::new("npm");
+        c.current_dir(&dir)
+            .args([sub, "--no-audit", "--no-fund"])
+            // playwright-core downloads nothing itself; make sure of it.
+            .env("PLAYWRIGHT_SKIP_BROWSER_DOWNLOAD", "1");
+        c
+    };
+    if util::run(&mut npm("ci")).is_err() {
+        eprintln!("xtask: npm ci failed; trying npm install");
+        util::run(&mut npm("install"))?;
+    }
+    Ok(())
+}

@@ -1,0 +1,443 @@
+//! `cargo xtask dist`: builds the web app into `dist/`.
+//!
+//! Steps: make sure the wasm32 target is installed, build `strutline-web`
+//! with the `wasm-release` profile, generate the JS bindings with the
+//! wasm-bindgen library (`--target web`), shrink the wasm with `wasm-opt`
+//! when it is on PATH, copy the shell (index.html, boot.js, style.css,
+//! manifest), draw the icons, then write `sw.js` with a cache name stamped
+//! from a SHA-256 over every other shipped file and the list of files to
+//! precache. Finally the gzipped total is printed and checked against the
+//! size budget.
+
+use std::path::{Path, PathBuf};
+
+use anyhow::{bail, Context, Result};
+use sha2::{Digest, Sha256};
+
+use crate::util;
+
+/// The size budget: 350 KB gzipped, summed over every file in `dist/`.
+pub const BUDGET_GZ_BYTES: usize = 350 * 1024;
+
+/// The wasm target.
+const TARGET: &str = "wasm32-unknown-unknown";
+
+/// Base name of the bindings (`strutline_web.js`, `strutline_web_bg.wasm`).
+const OUT_NAME: &str = "strutline_web";
+
+/// Lines of `web/static/sw.js` that the build replaces.
+const SW_CACHE_LINE: &str = "const CACHE_NAME = \"strutline-dev\";";
+const SW_FILES_LINE: &str = "const PRECACHE = [];";
+
+/// What a build produced.
+#[derive(Debug, Clone)]
+pub struct Built {
+    /// The `dist/` directory.
+    pub dir: PathBuf,
+    /// Every shipped file with its raw and gzipped size, sorted by path.
+    pub files: Vec<(String, usize, usize)>,
+    /// Sum of the gzipped sizes.
+    pub gz_total: usize,
+    /// The stamped cache name written into `sw.js`.
+    pub cache_name: String,
+}
+
+/// `cargo xtask dist [--no-wasm-opt]`.
+pub fn run(args: &[String]) -> Result<()> {
+    util::check_args(args, &[], &["--no-wasm-opt"])?;
+    let built = build(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    report(&built);
+    check_budget(&built)
+}
+
+/// Prints the per-file sizes and the total.
+pub fn report(built: &Built) {
+    println!("dist/ ({}):", built.cache_name);
+    for (path, raw, gz) in &built.files {
+        println!("  {path:<32} {raw:>9} B  {gz:>8} B gz");
+    }
+    println!(
+        "  total gzipped: {} B ({:.1} KB) of a {} B ({} KB) budget",
+        built.gz_total,
+        built.gz_total as f64 / 1024.0,
+        BUDGET_GZ_BYTES,
+        BUDGET_GZ_BYTES / 1024
+    );
+}
+
+/// Fails when the gzipped total is over the budget.
+pub fn check_budget(built: &Built) -> Result<()> {
+    if built.gz_total > BUDGET_GZ_BYTES {
+        bail!(
+            "dist/ is {} B gzipped, over the {} B budget by {} B",
+            built.gz_total,
+            BUDGET_GZ_BYTES,
+            built.gz_total - BUDGET_GZ_BYTES
+        );
+    }
+    Ok(())
+}
+
+/// Builds everything into `dist/` and returns what was shipped.
+pub fn build(use_wasm_opt: bool) -> Result<Built> {
+    let root = util::root();
+    ensure_target()?;
+    util::run(util::cargo().args([
+        "build",
+        "-p",
+        "strutline-web",
+        "--target",
+        TARGET,
+        "--profile",
+        "wasm-release",
+    ]))?;
+    let target_dir = std::env::var_os("CARGO_TARGET_DIR")
+        .map(PathBuf::from)
+        .map(|p| if p.is_absolute() { p } else { root.join(p) })
+        .unwrap_or_else(|| root.join("target"));
+    let wasm_in = target_dir
+        .join(TARGET)
+        .join("wasm-release")
+        .join("strutline_web.wasm");
+    if !wasm_in.is_file() {
+        bail!("the build left no {}", wasm_in.display());
+    }
+
+    let dist = root.join("dist");
+    if dist.exists() {
+        std::fs::remove_dir_all(&dist).with_context(|| format!("clearing {}", dist.display()))?;
+    }
+    std::fs::create_dir_all(&dist)?;
+
+    let mut bindgen = wasm_bindgen_cli_support::Bindgen::new();
+    bindgen
+        .input_path(&wasm_in)
+        .out_name(OUT_NAME)
+        .web(true)
+        .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?
+        .typescript(false)
+        .remove_producers_section(true)
+        .generate(&dist)
+        .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?;
+
+    let wasm_out = dist.join(format!("{OUT_NAME}_bg.wasm"));
+    if use_wasm_opt {
+        optimise(&wasm_out)?;
+    } else {
+        eprintln!("xtask: wasm-opt skipped (--no-wasm-opt)");
+    }
+
+    copy(&root.join("index.html"), &dist.join("index.html"))?;
+    copy(&root.join("web/static/boot.js"), &dist.join("boot.js"))?;
+    copy(
+        &root.join("web/static/manifest.webmanifest"),
+        &dist.join("manifest.webmanifest"),
+    )?;
+    let style = root.join("web/style.css");
+    if style.is_file() {
+        copy(&style, &dist.join("style.css"))?;
+    } else {
+        eprintln!("xtask: WARNING: web/style.css is missing; dist/ has no style.css");
+    }
+    for size in [192u32, 512] {
+        let png = icon_png(size)?;
+        std::fs::write(dist.join(format!("icon-{size}.png")), png)?;
+    }
+
+    // Everything but the worker is precached and hashed into the cache name.
+    let shipped = util::files_under(&dist)?;
+    let mut hasher = Sha256::new();
+    for rel in &shipped {
+        let bytes = std::fs::read(dist.join(rel))?;
+        hasher.update(rel.as_bytes());
+        hasher.update([0u8]);
+        hasher.update((bytes.len() as u64).to_le_bytes());
+        hasher.update(&bytes);
+    }
+    let digest = hasher.finalize();
+    let hex: String = digest.iter().take(6).map(|b| format!("{b:02x}")).collect();
+    let cache_name = format!("strutline-{hex}");
+    let sw = service_worker(&root.join("web/static/sw.js"), &cache_name, &shipped)?;
+    std::fs::write(dist.join("sw.js"), sw)?;
+
+    let mut files = Vec::new();
+    let mut gz_total = 0;
+    for rel in util::files_under(&dist)? {
+        let bytes = std::fs::read(dist.join(&rel))?;
+        let gz = util::gzip_len(&bytes)?;
+        gz_total += gz;
+        files.push((rel, bytes.len(), gz));
+    }
+    Ok(Built {
+        dir: dist,
+        files,
+        gz_total,
+        cache_name,
+    })
+}
+
+fn copy(from: &Path, to: &Path) -> Result<()> {
+    std::fs::copy(from, to)
+        .with_context(|| format!("copying {} to {}", from.display(), to.display()))?;
+    Ok(())
+}
+
+/// Installs the wasm32 target through rustup when it is missing.
+fn ensure_target() -> Result<()> {
+    let installed =
+        util::output(std::process::Command::new("rustup").args(["target", "list", "--installed"]));
+    match installed {
+        Ok(list) if list.lines().any(|l| l.trim() == TARGET) => Ok(()),
+        Ok(_) => util::run(std::process::Command::new("rustup").args(["target", "add", TARGET])),
+        Err(e) => {
+            eprintln!(
+                "xtask: could not ask rustup for installed targets ({e}); trying the build anyway"
+            );
+            Ok(())
+        }
+    }
+}
+
+/// Runs `wasm-opt -Oz` in place when it is on PATH. A wasm-opt that fails
+/// (an old binaryen may not know a feature of the module) leaves the
+/// unoptimised module in place, with a warning.
+fn optimise(wasm: &Path) -> Result<()> {
+    if !util::on_path("wasm-opt") {
+        eprintln!("xtask: note: wasm-opt is not on PATH; the wasm is not shrunk further");
+        return Ok(());
+    }
+    let tmp = wasm.with_extension("opt.wasm");
+    let result = util::run(
+        std::process::Command::new("wasm-opt")
+            .arg("-Oz")
+            .args([
+                "--enable-bulk-memory",
+                "--enable-nontrapping-float-to-int",
+                "--enable-reference-types",
+                "--enable-multivalue",
+                "--enable-sign-ext",
+                "--enable-mutable-globals",
+            ])
+            .arg(wasm)
+            .arg("-o")
+            .arg(&tmp),
+    );
+    match result {
+        Ok(()) => {
+            std::fs::rename(&tmp, wasm)?;
+            Ok(())
+        }
+        Err(e) => {
+            let _ = std::fs::remove_file(&tmp);
+            eprintln!("xtask: WARNING: wasm-opt failed, keeping the unoptimised wasm: {e:#}");
+            Ok(())
+        }
+    }
+}
+
+/// Fills the worker template with the cache name and the precache list.
+fn service_worker(template: &Path, cache_name: &str, shipped: &[String]) -> Result<String> {
+    let text = std::fs::read_to_string(template)
+        .with_context(|| format!("reading {}", template.display()))?;
+    if !text.contains(SW_CACHE_LINE) || !text.contains(SW_FILES_LINE) {
+        bail!(
+            "{} must contain the lines `{SW_CACHE_LINE}` and `{SW_FILES_LINE}`",
+            template.display()
+        );
+    }
+    let mut list = String::from("const PRECACHE = [\n  \"./\",\n");
+    for rel in shipped {
+        list.push_str(&format!("  \"./{}\",\n", js_escape(rel)));
+    }
+    list.push_str("];");
+    Ok(text
+        .replace(
+            SW_CACHE_LINE,
+            &format!("const CACHE_NAME = \"{cache_name}\";"),
+        )
+        .replace(SW_FILES_LINE, &list))
+}
+
+fn js_escape(s: &str) -> String {
+    s.replace('\\', "\\\\").replace('"', "\\\"")
+}
+
+// ---------------------------------------------------------------------------
+// Icons: a bowed strut between two plates on a slate ground, drawn with
+// 4x4 supersampling and written as a minimal PNG. The ground is full-bleed
+// and the figure stays inside the central circle of radius 0.4, so the
+// same picture serves as a maskable icon.
+
+const GROUND: [f64; 3] = [29.0, 59.0, 79.0];
+const STRUT: [f64; 3] = [232.0, 163.0, 61.0];
+const AXIS: [f64; 3] = [244.0, 241.0, 234.0];
+
+/// The colour of the figure at unit coordinates (x, y), y downwards.
+fn figure(x: f64, y: f64) -> [f64; 3] {
+    let (top, bottom) = (0.25, 0.75);
+    let plate_half_width = 0.17;
+    let plate_thickness = 0.045;
+    let on_plate = (x - 0.5).abs() <= plate_half_width
+        && ((y >= top - plate_thickness && y <= top)
+            || (y >= bottom && y <= bottom + plate_thickness));
+    if on_plate {
+        return STRUT;
+    }
+    if y > top && y < bottom {
+        let t = (y - top) / (bottom - top);
+        let centre = 0.5 + 0.075 * (std::f64::consts::PI * t).sin();
+        if (x - centre).abs() <= 0.042 {
+            return STRUT;
+        }
+        // The straight line the strut left: a dashed pale axis.
+        let dash = ((y - top) / 0.04).floor() as i64 % 2 == 0;
+        if dash && (x - 0.5).abs() <= 0.008 {
+            return AXIS;
+        }
+    }
+    GROUND
+}
+
+/// RGB pixels of the icon at `size` x `size`.
+fn icon_pixels(size: u32) -> Vec<u8> {
+    const SS: u32 = 4;
+    let n = f64::from(size);
+    let mut out = Vec::with_capacity((size * size * 3) as usize);
+    for py in 0..size {
+        for px in 0..size {
+            let mut acc = [0.0f64; 3];
+            for sy in 0..SS {
+                for sx in 0..SS {
+                    let x = (f64::from(px) + (f64::from(sx) + 0.5) / f64::from(SS)) / n;
+                    let y = (f64::from(py) + (f64::from(sy) + 0.5) / f64::from(SS)) / n;
+                    let c = figure(x, y);
+                    for (a, v) in acc.iter_mut().zip(c) {
+                        *a += v;
+                    }
+                }
+            }
+            for a in acc {
+                out.push((a / f64::from(SS * SS)).round().clamp(0.0, 255.0) as u8);
+            }
+        }
+    }
+    out
+}
+
+/// The icon as PNG bytes (8-bit RGB, no interlace).
+pub fn icon_png(size: u32) -> Result<Vec<u8>> {
+    use std::io::Write;
+    let pixels = icon_pixels(size);
+    let row = (size * 3) as usize;
+    let mut raw = Vec::with_capacity(pixels.len() + size as usize);
+    for line in pixels.chunks(row) {
+        raw.push(0u8); // filter: none
+        raw.extend_from_slice(line);
+    }
+    let mut z = flate2::write::ZlibEncoder::new(Vec::new(), flate2::Compression::best());
+    z.write_all(&raw)?;
+    let idat = z.finish()?;
+
+    let mut ihdr = Vec::with_capacity(13);
+    ihdr.extend_from_slice(&size.to_be_bytes());
+    ihdr.extend_from_slice(&size.to_be_bytes());
+    ihdr.extend_from_slice(&[8, 2, 0, 0, 0]); // depth 8, RGB, deflate, filter 0, no interlace
+
+    let mut png = vec![0x89, b'P', b'N', b'G', 0x0d, 0x0a, 0x1a, 0x0a];
+    chunk(&mut png, b"IHDR", &ihdr);
+    chunk(&mut png, b"IDAT", &idat);
+    chunk(&mut png, b"IEND", &[]);
+    Ok(png)
+}
+
+fn chunk(png: &mut Vec<u8>, kind: &[u8; 4], data: &[u8]) {
+    png.extend_from_slice(&(data.len() as u32).to_be_bytes());
+    png.extend_from_slice(kind);
+    png.extend_from_slice(data);
+    let mut crc = Crc32::new();
+    crc.update(kind);
+    crc.update(data);
+    png.extend_from_slice(&crc.finish().to_be_bytes());
+}
+
+/// CRC-32 (ISO-HDLC, reflected polynomial 0xEDB88320) as PNG requires.
+struct Crc32(u32);
+
+impl Crc32 {
+    fn new() -> Crc32 {
+        Crc32(0xffff_ffff)
+    }
+
+    fn update(&mut self, bytes: &[u8]) {
+        for &b in bytes {
+            self.0 ^= u32::from(b);
+            for _ in 0..8 {
+                let mask = (self.0 & 1).wrapping_neg();
+                self.0 = (self.0 >> 1) ^ (0xedb8_8320 & mask);
+            }
+        }
+    }
+
+    fn finish(&self) -> u32 {
+        self.0 ^ 0xffff_ffff
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+
+    #[test]
+    fn crc32_matches_the_standard_check_value() {
+        // The CRC-32/ISO-HDLC check value for "123456789" is 0xCBF43926
+        // (the catalogue value every CRC-32 implementation is tested with).
+        let mut c = Crc32::new();
+        c.update(b"123456789");
+        assert_eq!(c.finish(), 0xcbf4_3926);
+    }
+
+    #[test]
+    fn icon_is_a_png_of_the_asked_size() {
+        let png = icon_png(192).unwrap();
+        assert_eq!(&png[..8], &[0x89, b'P', b'N', b'G', 0x0d, 0x0a, 0x1a, 0x0a]);
+        assert_eq!(&png[12..16], b"IHDR");
+        assert_eq!(u32::from_be_bytes(png[16..20].try_into().unwrap()), 192);
+        assert_eq!(u32::from_be_bytes(png[20..24].try_into().unwrap()), 192);
+        assert_eq!(&png[png.len() - 8..png.len() - 4], b"IEND");
+    }
+
+    #[test]
+    fn icon_corners_are_ground_and_centre_is_figure() {
+        let px = icon_pixels(64);
+        let at = |x: usize, y: usize| &px[(y * 64 + x) * 3..(y * 64 + x) * 3 + 3];
+        assert_eq!(at(0, 0), &[29, 59, 79]);
+        assert_eq!(at(63, 63), &[29, 59, 79]);
+        // Mid-height the strut is bowed right of the centre line.
+        let mid = at(37, 32);
+        assert_eq!(mid, &[232, 163, 61]);
+    }
+
+    #[test]
+    fn worker_template_gets_name_and_files() {
+        let dir = std::env::temp_dir().join(format!("xtask-sw-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        let t = dir.join("sw.js");
+        std::fs::write(&t, format!("{SW_CACHE_LINE}\n{SW_FILES_LINE}\n")).unwrap();
+        let out = service_worker(&t, "strutline-abc", &["a.js".into(), "b/c.wasm".into()]).unwrap();
+        assert!(out.contains("const CACHE_NAME = \"strutline-abc\";"));
+        assert!(
+            out.contains("\"./\",")
+                && out.contains("\"./a.js\",")
+                && out.contains("\"./b/c.wasm\",")
+        );
+        std::fs::write(&t, "nothing").unwrap();
+        assert!(service_worker(&t, "x", &[]).is_err());
+        std::fs::remove_dir_all(&dir).unwrap();
+    }
+}
