@@ -1,12 +1,23 @@
 //! Materials: steel grades by their product standards (yield strength by
 //! thickness), timber strength classes, and custom materials.
 //!
-//! PLACEHOLDER until the materials work lands: only custom materials resolve.
+//! A named grade is looked up forgivingly: case, spaces, dots and hyphens
+//! are ignored, so "s355 j2", "S355J2" and "S355" all resolve to S355 of
+//! EN 10025-2, and "G40.21-350W" to CSA G40.21 350W. The quality suffix
+//! (JR, J0, J2, K2, N, NL, M, ML) does not change the yield strength and
+//! is accepted and dropped; a trailing "H" selects the hollow-section
+//! standards (EN 10210-1 for hot-finished, EN 10219-1 for cold-formed
+//! sections, chosen by the section's make).
+//!
+//! Every tabulated value below carries its source. Values marked
+//! "recalled from memory" were written from the engineer's knowledge of
+//! the standard, not copied from a copy of it at hand; check them against
+//! the standard before relying on them.
 
 use serde::{Deserialize, Serialize};
 
 use crate::error::{positive, Error, Result};
-use crate::section::Section;
+use crate::section::{Family, HollowMake, Section, SectionSpec};
 
 /// Solid (sawn) timber or glued laminated timber: sets beta_c and gamma_M.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
@@ -53,7 +64,7 @@ pub enum MaterialSpec {
 /// A resolved steel (or custom elastic-plastic) material.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct Steel {
-    /// Grade name ("S355", "custom").
+    /// Grade name ("S355", "S355H", "A992", "custom").
     pub name: &'static str,
     /// Standard the values come from.
     pub standard: &'static str,
@@ -63,6 +74,13 @@ pub struct Steel {
     pub e_mpa: f64,
     /// Shear modulus, MPa.
     pub g_mpa: f64,
+    /// The governing thickness the yield strength was read at, mm (0 when
+    /// the section does not tell it, e.g. given properties: the thinnest
+    /// band was used).
+    pub thickness_mm: f64,
+    /// Upper limit of the thickness band used, mm (infinite when the grade
+    /// does not vary with thickness).
+    pub band_up_to_mm: f64,
 }
 
 /// A resolved timber.
@@ -80,6 +98,9 @@ pub struct Timber {
     pub e005_mpa: f64,
     /// E_0,mean, MPa.
     pub e0mean_mpa: f64,
+    /// G_mean, MPa (custom timber: E_0,mean / 16, the ratio of the EN 338
+    /// softwood classes, common practice).
+    pub g_mean_mpa: f64,
 }
 
 /// A material ready for a method.
@@ -102,15 +123,704 @@ impl Material {
     }
 }
 
+/// 1 ksi in MPa (exact to the digits given: 1 ksi = 1000 lbf/in2 =
+/// 6.894757 MPa, NIST SP 811 Appendix B).
+pub const KSI: f64 = 6.894757;
+
+/// E for EN grades, MPa (EN 1993-1-1:2005 3.2.6(1)).
+pub const E_EN: f64 = 210_000.0;
+/// G for EN grades, MPa (EN 1993-1-1:2005 3.2.6(1), G ~ 81 000 MPa).
+pub const G_EN: f64 = 81_000.0;
+/// E for ASTM grades, MPa: 29 000 ksi (AISC 360-16 Symbols and E3).
+pub const E_ASTM: f64 = 29_000.0 * KSI;
+/// G for ASTM grades, MPa: 11 200 ksi (AISC 360-16 Symbols; 77 200 MPa).
+pub const G_ASTM: f64 = 11_200.0 * KSI;
+/// E for CSA grades, MPa (CSA S16-19 clause 2, E = 200 000 MPa).
+pub const E_CSA: f64 = 200_000.0;
+/// G for CSA grades, MPa (CSA S16-19 clause 2, G = 77 000 MPa).
+pub const G_CSA: f64 = 77_000.0;
+
+/// A steel grade: yield strength by governing thickness.
+struct SteelGrade {
+    name: &'static str,
+    standard: &'static str,
+    /// (thickness up to and including, mm; f_y, MPa), thinnest first.
+    bands: &'static [(f64, f64)],
+    e: f64,
+    g: f64,
+    /// The thickness range covered, for the error message.
+    covers: &'static str,
+}
+
+// EN 10025-2:2019 Table 7, minimum upper yield strength R_eH for nominal
+// thickness <= 16, 16-40, 40-63, 63-80, 80-100, 100-150, 150-200, 200-250 mm
+// (recalled from memory; the steps above 150 mm apply to long products and
+// most flat products).
+const S235: SteelGrade = SteelGrade {
+    name: "S235",
+    standard: "EN 10025-2:2019 Table 7",
+    bands: &[
+        (16.0, 235.0),
+        (40.0, 225.0),
+        (63.0, 215.0),
+        (80.0, 215.0),
+        (100.0, 215.0),
+        (150.0, 195.0),
+        (200.0, 185.0),
+        (250.0, 175.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 250 mm (EN 10025-2:2019 Table 7)",
+};
+const S275: SteelGrade = SteelGrade {
+    name: "S275",
+    standard: "EN 10025-2:2019 Table 7",
+    bands: &[
+        (16.0, 275.0),
+        (40.0, 265.0),
+        (63.0, 255.0),
+        (80.0, 245.0),
+        (100.0, 235.0),
+        (150.0, 225.0),
+        (200.0, 215.0),
+        (250.0, 205.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 250 mm (EN 10025-2:2019 Table 7)",
+};
+const S355: SteelGrade = SteelGrade {
+    name: "S355",
+    standard: "EN 10025-2:2019 Table 7",
+    bands: &[
+        (16.0, 355.0),
+        (40.0, 345.0),
+        (63.0, 335.0),
+        (80.0, 325.0),
+        (100.0, 315.0),
+        (150.0, 295.0),
+        (200.0, 285.0),
+        (250.0, 275.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 250 mm (EN 10025-2:2019 Table 7)",
+};
+// EN 10025-3:2019 (normalized fine-grain steels, S420N/NL, S460N/NL),
+// table of mechanical properties at room temperature, R_eH min (recalled
+// from memory).
+const S420N: SteelGrade = SteelGrade {
+    name: "S420",
+    standard: "EN 10025-3:2019 (S420N/NL)",
+    bands: &[
+        (16.0, 420.0),
+        (40.0, 400.0),
+        (63.0, 390.0),
+        (80.0, 370.0),
+        (100.0, 360.0),
+        (150.0, 340.0),
+        (200.0, 330.0),
+        (250.0, 320.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 250 mm (EN 10025-3:2019)",
+};
+const S460N: SteelGrade = SteelGrade {
+    name: "S460",
+    standard: "EN 10025-3:2019 (S460N/NL)",
+    bands: &[
+        (16.0, 460.0),
+        (40.0, 440.0),
+        (63.0, 430.0),
+        (80.0, 410.0),
+        (100.0, 400.0),
+        (150.0, 380.0),
+        (200.0, 370.0),
+        (250.0, 370.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 250 mm (EN 10025-3:2019)",
+};
+// EN 10025-4:2019 (thermomechanically rolled, S420M/ML, S460M/ML), R_eH min
+// (recalled from memory; the range is taken as ending at 120 mm).
+const S420M: SteelGrade = SteelGrade {
+    name: "S420M",
+    standard: "EN 10025-4:2019 (S420M/ML)",
+    bands: &[
+        (16.0, 420.0),
+        (40.0, 400.0),
+        (63.0, 390.0),
+        (80.0, 380.0),
+        (100.0, 370.0),
+        (120.0, 365.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 120 mm (EN 10025-4:2019)",
+};
+const S460M: SteelGrade = SteelGrade {
+    name: "S460M",
+    standard: "EN 10025-4:2019 (S460M/ML)",
+    bands: &[
+        (16.0, 460.0),
+        (40.0, 440.0),
+        (63.0, 430.0),
+        (80.0, 410.0),
+        (100.0, 400.0),
+        (120.0, 385.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a governing thickness up to 120 mm (EN 10025-4:2019)",
+};
+// EN 10210-1:2006 (hot-finished hollow sections), Annex A (non-alloy
+// S235JRH ... S355K2H) and Annex B (fine grain S420NH, S460NH), R_eH min
+// for t <= 16, 16-40, 40-63, 63-80, 80-100, 100-120 mm (recalled from memory).
+const S235H_HOT: SteelGrade = SteelGrade {
+    name: "S235H",
+    standard: "EN 10210-1:2006 (hot-finished hollow)",
+    bands: &[
+        (16.0, 235.0),
+        (40.0, 225.0),
+        (63.0, 215.0),
+        (80.0, 215.0),
+        (100.0, 215.0),
+        (120.0, 195.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 120 mm (EN 10210-1:2006)",
+};
+const S275H_HOT: SteelGrade = SteelGrade {
+    name: "S275H",
+    standard: "EN 10210-1:2006 (hot-finished hollow)",
+    bands: &[
+        (16.0, 275.0),
+        (40.0, 265.0),
+        (63.0, 255.0),
+        (80.0, 245.0),
+        (100.0, 235.0),
+        (120.0, 225.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 120 mm (EN 10210-1:2006)",
+};
+const S355H_HOT: SteelGrade = SteelGrade {
+    name: "S355H",
+    standard: "EN 10210-1:2006 (hot-finished hollow)",
+    bands: &[
+        (16.0, 355.0),
+        (40.0, 345.0),
+        (63.0, 335.0),
+        (80.0, 325.0),
+        (100.0, 315.0),
+        (120.0, 295.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 120 mm (EN 10210-1:2006)",
+};
+const S420H_HOT: SteelGrade = SteelGrade {
+    name: "S420H",
+    standard: "EN 10210-1:2006 (hot-finished hollow, S420NH/NLH)",
+    bands: &[
+        (16.0, 420.0),
+        (40.0, 400.0),
+        (63.0, 390.0),
+        (80.0, 370.0),
+        (100.0, 360.0),
+        (120.0, 340.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 120 mm (EN 10210-1:2006)",
+};
+const S460H_HOT: SteelGrade = SteelGrade {
+    name: "S460H",
+    standard: "EN 10210-1:2006 (hot-finished hollow, S460NH/NLH)",
+    bands: &[
+        (16.0, 460.0),
+        (40.0, 440.0),
+        (63.0, 430.0),
+        (80.0, 410.0),
+        (100.0, 400.0),
+        (120.0, 380.0),
+    ],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 120 mm (EN 10210-1:2006)",
+};
+// EN 10219-1:2006 (cold-formed welded hollow sections), Annex A (non-alloy)
+// and Annex B (S420MH, S460MH), R_eH min for t <= 16 and 16-40 mm; the
+// standard covers walls up to 40 mm (recalled from memory).
+const S235H_COLD: SteelGrade = SteelGrade {
+    name: "S235H",
+    standard: "EN 10219-1:2006 (cold-formed hollow)",
+    bands: &[(16.0, 235.0), (40.0, 225.0)],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 40 mm (EN 10219-1:2006)",
+};
+const S275H_COLD: SteelGrade = SteelGrade {
+    name: "S275H",
+    standard: "EN 10219-1:2006 (cold-formed hollow)",
+    bands: &[(16.0, 275.0), (40.0, 265.0)],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 40 mm (EN 10219-1:2006)",
+};
+const S355H_COLD: SteelGrade = SteelGrade {
+    name: "S355H",
+    standard: "EN 10219-1:2006 (cold-formed hollow)",
+    bands: &[(16.0, 355.0), (40.0, 345.0)],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 40 mm (EN 10219-1:2006)",
+};
+const S420H_COLD: SteelGrade = SteelGrade {
+    name: "S420H",
+    standard: "EN 10219-1:2006 (cold-formed hollow, S420MH/MLH)",
+    bands: &[(16.0, 420.0), (40.0, 400.0)],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 40 mm (EN 10219-1:2006)",
+};
+const S460H_COLD: SteelGrade = SteelGrade {
+    name: "S460H",
+    standard: "EN 10219-1:2006 (cold-formed hollow, S460MH/MLH)",
+    bands: &[(16.0, 460.0), (40.0, 440.0)],
+    e: E_EN,
+    g: G_EN,
+    covers: "a wall up to 40 mm (EN 10219-1:2006)",
+};
+// ASTM A992/A992M: F_y = 50 ksi minimum (AISC Steel Construction Manual
+// Table 2-4 lists it as the preferred grade for W shapes; common practice).
+const A992: SteelGrade = SteelGrade {
+    name: "A992",
+    standard: "ASTM A992/A992M (Fy = 50 ksi)",
+    bands: &[(f64::INFINITY, 50.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+// ASTM A36/A36M: F_y = 36 ksi for shapes, 32 ksi for plates over 8 in
+// (203.2 mm) thick (recalled from memory).
+const A36: SteelGrade = SteelGrade {
+    name: "A36",
+    standard: "ASTM A36/A36M (Fy = 36 ksi; 32 ksi over 8 in)",
+    bands: &[(203.2, 36.0 * KSI), (f64::INFINITY, 32.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+// ASTM A500 (cold-formed HSS): Grade C F_y = 46 ksi round, 50 ksi shaped;
+// Grade B 42 ksi round, 46 ksi shaped (A500/A500M-18 Table 2; AISC Manual
+// Table 2-4; recalled from memory).
+const A500C_ROUND: SteelGrade = SteelGrade {
+    name: "A500 Grade C",
+    standard: "ASTM A500 Grade C, round HSS (Fy = 46 ksi)",
+    bands: &[(f64::INFINITY, 46.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+const A500C_SHAPED: SteelGrade = SteelGrade {
+    name: "A500 Grade C",
+    standard: "ASTM A500 Grade C, shaped HSS (Fy = 50 ksi)",
+    bands: &[(f64::INFINITY, 50.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+const A500C_UNKNOWN: SteelGrade = SteelGrade {
+    name: "A500 Grade C",
+    standard: "ASTM A500 Grade C, shape not known: the round value Fy = 46 ksi (the lower) is used",
+    bands: &[(f64::INFINITY, 46.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+const A500B_ROUND: SteelGrade = SteelGrade {
+    name: "A500 Grade B",
+    standard: "ASTM A500 Grade B, round HSS (Fy = 42 ksi)",
+    bands: &[(f64::INFINITY, 42.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+const A500B_SHAPED: SteelGrade = SteelGrade {
+    name: "A500 Grade B",
+    standard: "ASTM A500 Grade B, shaped HSS (Fy = 46 ksi)",
+    bands: &[(f64::INFINITY, 46.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+const A500B_UNKNOWN: SteelGrade = SteelGrade {
+    name: "A500 Grade B",
+    standard: "ASTM A500 Grade B, shape not known: the round value Fy = 42 ksi (the lower) is used",
+    bands: &[(f64::INFINITY, 42.0 * KSI)],
+    e: E_ASTM,
+    g: G_ASTM,
+    covers: "any thickness",
+};
+// CSA G40.21 350W: F_y = 350 MPa; plates over 65 mm thick 320 MPa
+// (recalled from memory). 300W: 300 MPa; plates over 65 mm 280 MPa
+// (recalled from memory).
+const G40_350W: SteelGrade = SteelGrade {
+    name: "350W",
+    standard: "CSA G40.21 350W",
+    bands: &[(65.0, 350.0), (f64::INFINITY, 320.0)],
+    e: E_CSA,
+    g: G_CSA,
+    covers: "any thickness",
+};
+const G40_300W: SteelGrade = SteelGrade {
+    name: "300W",
+    standard: "CSA G40.21 300W",
+    bands: &[(65.0, 300.0), (f64::INFINITY, 280.0)],
+    e: E_CSA,
+    g: G_CSA,
+    covers: "any thickness",
+};
+
+/// A timber class.
+struct TimberClass {
+    name: &'static str,
+    standard: &'static str,
+    kind: TimberKind,
+    fc0k: f64,
+    e0mean: f64,
+    e005: f64,
+    gmean: f64,
+}
+
+// EN 338:2016 Table 1 (softwood, edgewise bending classes): f_c,0,k,
+// E_0,mean, E_0,05, G_mean in MPa (the same values as EN 338:2009 Table 1
+// for these classes; recalled from memory).
+const TIMBER: [TimberClass; 9] = [
+    TimberClass {
+        name: "C16",
+        standard: "EN 338:2016 Table 1",
+        kind: TimberKind::Solid,
+        fc0k: 17.0,
+        e0mean: 8_000.0,
+        e005: 5_400.0,
+        gmean: 500.0,
+    },
+    TimberClass {
+        name: "C24",
+        standard: "EN 338:2016 Table 1",
+        kind: TimberKind::Solid,
+        fc0k: 21.0,
+        e0mean: 11_000.0,
+        e005: 7_400.0,
+        gmean: 690.0,
+    },
+    TimberClass {
+        name: "C30",
+        standard: "EN 338:2016 Table 1",
+        kind: TimberKind::Solid,
+        fc0k: 24.0,
+        e0mean: 12_000.0,
+        e005: 8_000.0,
+        gmean: 750.0,
+    },
+    // EN 14080:2013 Table 5 (homogeneous glulam): f_c,0,g,k, E_0,g,mean,
+    // E_0,g,05, G_g,mean in MPa (recalled from memory).
+    TimberClass {
+        name: "GL24h",
+        standard: "EN 14080:2013 Table 5",
+        kind: TimberKind::Glulam,
+        fc0k: 24.0,
+        e0mean: 11_500.0,
+        e005: 9_600.0,
+        gmean: 650.0,
+    },
+    TimberClass {
+        name: "GL28h",
+        standard: "EN 14080:2013 Table 5",
+        kind: TimberKind::Glulam,
+        fc0k: 28.0,
+        e0mean: 12_600.0,
+        e005: 10_500.0,
+        gmean: 650.0,
+    },
+    TimberClass {
+        name: "GL32h",
+        standard: "EN 14080:2013 Table 5",
+        kind: TimberKind::Glulam,
+        fc0k: 32.0,
+        e0mean: 14_200.0,
+        e005: 11_800.0,
+        gmean: 650.0,
+    },
+    // EN 14080:2013 Table 4 (combined glulam): as above (recalled from memory).
+    TimberClass {
+        name: "GL24c",
+        standard: "EN 14080:2013 Table 4",
+        kind: TimberKind::Glulam,
+        fc0k: 21.5,
+        e0mean: 11_000.0,
+        e005: 9_100.0,
+        gmean: 650.0,
+    },
+    TimberClass {
+        name: "GL28c",
+        standard: "EN 14080:2013 Table 4",
+        kind: TimberKind::Glulam,
+        fc0k: 24.0,
+        e0mean: 12_500.0,
+        e005: 10_400.0,
+        gmean: 650.0,
+    },
+    TimberClass {
+        name: "GL32c",
+        standard: "EN 14080:2013 Table 4",
+        kind: TimberKind::Glulam,
+        fc0k: 24.5,
+        e0mean: 13_500.0,
+        e005: 11_200.0,
+        gmean: 650.0,
+    },
+];
+
+/// The grade names this build knows, as offered in suggestions and lists.
+pub const KNOWN_GRADES: [&str; 27] = [
+    "S235",
+    "S275",
+    "S355",
+    "S420",
+    "S460",
+    "S420M",
+    "S460M",
+    "S235H",
+    "S275H",
+    "S355H",
+    "S420H",
+    "S460H",
+    "A992",
+    "A36",
+    "A500 Grade B",
+    "A500 Grade C",
+    "350W",
+    "300W",
+    "C16",
+    "C24",
+    "C30",
+    "GL24h",
+    "GL28h",
+    "GL32h",
+    "GL24c",
+    "GL28c",
+    "GL32c",
+];
+
+/// What a grade name resolves to before the section is known.
+enum Found {
+    Steel(&'static SteelGrade),
+    /// EN hollow grade: hot-finished and cold-formed tables.
+    Hollow(&'static SteelGrade, &'static SteelGrade),
+    /// ASTM A500: round, shaped and unknown-shape tables.
+    A500(
+        &'static SteelGrade,
+        &'static SteelGrade,
+        &'static SteelGrade,
+    ),
+    Timber(&'static TimberClass),
+}
+
+/// Upper case, letters and digits only.
+fn normalise(name: &str) -> String {
+    name.chars()
+        .filter(|c| c.is_ascii_alphanumeric())
+        .map(|c| c.to_ascii_uppercase())
+        .collect()
+}
+
+fn find(name: &str) -> Option<Found> {
+    let n = normalise(name);
+    // Timber classes.
+    if let Some(t) = TIMBER.iter().find(|t| normalise(t.name) == n) {
+        return Some(Found::Timber(t));
+    }
+    // ASTM.
+    let astm = n.strip_prefix("ASTM").unwrap_or(&n);
+    match astm {
+        "A992" | "A992M" => return Some(Found::Steel(&A992)),
+        "A36" | "A36M" => return Some(Found::Steel(&A36)),
+        "A500C" | "A500GRC" | "A500GRADEC" => {
+            return Some(Found::A500(&A500C_ROUND, &A500C_SHAPED, &A500C_UNKNOWN))
+        }
+        "A500B" | "A500GRB" | "A500GRADEB" => {
+            return Some(Found::A500(&A500B_ROUND, &A500B_SHAPED, &A500B_UNKNOWN))
+        }
+        _ => {}
+    }
+    // CSA G40.21 (the W grades; "350WT" toughness variants as well).
+    let csa = n.strip_prefix("CSA").unwrap_or(&n);
+    let csa = csa.strip_prefix("G4021").unwrap_or(csa);
+    match csa {
+        "350W" | "350WT" => return Some(Found::Steel(&G40_350W)),
+        "300W" | "300WT" => return Some(Found::Steel(&G40_300W)),
+        _ => {}
+    }
+    // EN: S + strength + optional quality + optional H.
+    let rest = n.strip_prefix('S')?;
+    let strength = rest.get(..3)?;
+    let suffix = rest.get(3..)?;
+    let (quality, hollow) = match suffix.strip_suffix('H') {
+        Some(q) => (q, true),
+        None => (suffix, false),
+    };
+    let non_alloy = ["", "JR", "J0", "J2", "K2"];
+    let fine = ["", "N", "NL", "M", "ML"];
+    let found = match (strength, hollow) {
+        ("235", false) if non_alloy.contains(&quality) => Found::Steel(&S235),
+        ("275", false) if non_alloy.contains(&quality) => Found::Steel(&S275),
+        ("355", false) if non_alloy.contains(&quality) => Found::Steel(&S355),
+        ("420", false) if quality == "M" || quality == "ML" => Found::Steel(&S420M),
+        ("460", false) if quality == "M" || quality == "ML" => Found::Steel(&S460M),
+        ("420", false) if fine.contains(&quality) => Found::Steel(&S420N),
+        ("460", false) if fine.contains(&quality) => Found::Steel(&S460N),
+        ("235", true) if non_alloy.contains(&quality) => Found::Hollow(&S235H_HOT, &S235H_COLD),
+        ("275", true) if non_alloy.contains(&quality) => Found::Hollow(&S275H_HOT, &S275H_COLD),
+        ("355", true) if non_alloy.contains(&quality) => Found::Hollow(&S355H_HOT, &S355H_COLD),
+        ("420", true) if fine.contains(&quality) => Found::Hollow(&S420H_HOT, &S420H_COLD),
+        ("460", true) if fine.contains(&quality) => Found::Hollow(&S460H_HOT, &S460H_COLD),
+        _ => return None,
+    };
+    Some(found)
+}
+
+/// Edit distance between two short strings (Levenshtein), for suggestions.
+fn edit_distance(a: &str, b: &str) -> usize {
+    let b: Vec<char> = b.chars().collect();
+    let mut prev: Vec<usize> = (0..=b.len()).collect();
+    let mut cur: Vec<usize> = vec![0; b.len() + 1];
+    for (i, ca) in a.chars().enumerate() {
+        if let Some(first) = cur.first_mut() {
+            *first = i + 1;
+        }
+        for (j, cb) in b.iter().enumerate() {
+            let sub = prev.get(j).copied().unwrap_or(usize::MAX - 1) + usize::from(ca != *cb);
+            let del = prev.get(j + 1).copied().unwrap_or(usize::MAX - 1) + 1;
+            let ins = cur.get(j).copied().unwrap_or(usize::MAX - 1) + 1;
+            if let Some(slot) = cur.get_mut(j + 1) {
+                *slot = sub.min(del).min(ins);
+            }
+        }
+        std::mem::swap(&mut prev, &mut cur);
+    }
+    prev.last().copied().unwrap_or(0)
+}
+
+/// Known grade names nearest to `grade`, nearest first (at most four).
+pub fn suggestions(grade: &str) -> Vec<String> {
+    let n = normalise(grade);
+    let mut scored: Vec<(usize, &str)> = KNOWN_GRADES
+        .iter()
+        .map(|k| {
+            let kn = normalise(k);
+            let d = edit_distance(&n, &kn);
+            // A shared prefix of two or more characters counts as close.
+            let prefix =
+                !n.is_empty() && n.len() >= 2 && (kn.starts_with(&n) || n.starts_with(&kn));
+            (if prefix { d.min(1) } else { d }, *k)
+        })
+        .filter(|(d, k)| *d <= 2.max(normalise(k).len() / 2))
+        .collect();
+    scored.sort_by_key(|(d, _)| *d);
+    scored
+        .into_iter()
+        .take(4)
+        .map(|(_, k)| k.to_string())
+        .collect()
+}
+
+fn steel_at(grade: &SteelGrade, thickness_mm: f64) -> Result<Steel> {
+    // A section that does not tell its thickness (given properties) is read
+    // in the thinnest band; the methods warn about it.
+    let t = if thickness_mm.is_finite() && thickness_mm > 0.0 {
+        thickness_mm
+    } else {
+        0.0
+    };
+    let band = grade
+        .bands
+        .iter()
+        .find(|(up_to, _)| t <= *up_to)
+        .ok_or(Error::OutOfRange {
+            field: "material",
+            value: t,
+            expected: grade.covers,
+        })?;
+    Ok(Steel {
+        name: grade.name,
+        standard: grade.standard,
+        fy_mpa: band.1,
+        e_mpa: grade.e,
+        g_mpa: grade.g,
+        thickness_mm: t,
+        band_up_to_mm: band.0,
+    })
+}
+
+fn hollow_make(section: &Section) -> Option<HollowMake> {
+    match &section.spec {
+        SectionSpec::Rhs(s) => Some(s.make),
+        SectionSpec::Chs(s) => Some(s.make),
+        _ => None,
+    }
+}
+
 /// Resolves a material for a section (the yield strength falls with the
 /// section's governing thickness where the standard says so).
-pub fn resolve(spec: &MaterialSpec, _section: &Section) -> Result<Material> {
+pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
     match spec {
-        MaterialSpec::Grade { grade } => Err(Error::UnknownGrade {
-            grade: grade.clone(),
-            suggestions: Vec::new(),
-        }),
-        MaterialSpec::Custom { fy_mpa, e_mpa, g_mpa } => {
+        MaterialSpec::Grade { grade } => {
+            let t = section.spec.governing_thickness_mm();
+            match find(grade) {
+                Some(Found::Steel(g)) => Ok(Material::Steel(steel_at(g, t)?)),
+                Some(Found::Hollow(hot, cold)) => {
+                    let g = match hollow_make(section) {
+                        Some(HollowMake::ColdFormed) => cold,
+                        _ => hot,
+                    };
+                    Ok(Material::Steel(steel_at(g, t)?))
+                }
+                Some(Found::A500(round, shaped, unknown)) => {
+                    let g = match section.family {
+                        Family::Chs => round,
+                        Family::Rhs => shaped,
+                        _ => unknown,
+                    };
+                    Ok(Material::Steel(steel_at(g, t)?))
+                }
+                Some(Found::Timber(c)) => Ok(Material::Timber(Timber {
+                    name: c.name,
+                    standard: c.standard,
+                    kind: c.kind,
+                    fc0k_mpa: c.fc0k,
+                    e005_mpa: c.e005,
+                    e0mean_mpa: c.e0mean,
+                    g_mean_mpa: c.gmean,
+                })),
+                None => Err(Error::UnknownGrade {
+                    grade: grade.clone(),
+                    suggestions: suggestions(grade),
+                }),
+            }
+        }
+        MaterialSpec::Custom {
+            fy_mpa,
+            e_mpa,
+            g_mpa,
+        } => {
             let e = positive("e_mpa", *e_mpa)?;
             Ok(Material::Steel(Steel {
                 name: "custom",
@@ -121,6 +831,8 @@ pub fn resolve(spec: &MaterialSpec, _section: &Section) -> Result<Material> {
                     Some(g) => positive("g_mpa", *g)?,
                     None => e / 2.6,
                 },
+                thickness_mm: section.spec.governing_thickness_mm().max(0.0),
+                band_up_to_mm: f64::INFINITY,
             }))
         }
         MaterialSpec::Timber {
@@ -128,13 +840,190 @@ pub fn resolve(spec: &MaterialSpec, _section: &Section) -> Result<Material> {
             e005_mpa,
             e0mean_mpa,
             timber,
-        } => Ok(Material::Timber(Timber {
-            name: "custom",
-            standard: "custom",
-            kind: *timber,
-            fc0k_mpa: positive("fc0k_mpa", *fc0k_mpa)?,
-            e005_mpa: positive("e005_mpa", *e005_mpa)?,
-            e0mean_mpa: positive("e0mean_mpa", *e0mean_mpa)?,
-        })),
+        } => {
+            let e0mean = positive("e0mean_mpa", *e0mean_mpa)?;
+            let e005 = positive("e005_mpa", *e005_mpa)?;
+            if e005 > e0mean {
+                return Err(Error::Geometry {
+                    field: "e005_mpa",
+                    reason: format!(
+                        "the fifth-percentile modulus ({e005} MPa) cannot exceed the mean modulus \
+                         e0mean_mpa ({e0mean} MPa)"
+                    ),
+                });
+            }
+            Ok(Material::Timber(Timber {
+                name: "custom",
+                standard: "custom",
+                kind: *timber,
+                fc0k_mpa: positive("fc0k_mpa", *fc0k_mpa)?,
+                e005_mpa: e005,
+                e0mean_mpa: e0mean,
+                g_mean_mpa: e0mean / 16.0,
+            }))
+        }
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+
+    use super::*;
+    use crate::section::{Given, Rect, Round};
+
+    fn rect(t: f64) -> Section {
+        SectionSpec::Rect(Rect {
+            depth_mm: 400.0,
+            width_mm: t,
+        })
+        .build()
+        .unwrap()
+    }
+
+    fn grade(g: &str, section: &Section) -> Result<Material> {
+        resolve(
+            &MaterialSpec::Grade {
+                grade: g.to_string(),
+            },
+            section,
+        )
+    }
+
+    fn fy(g: &str, t: f64) -> f64 {
+        match grade(g, &rect(t)).unwrap() {
+            Material::Steel(s) => s.fy_mpa,
+            Material::Timber(_) => panic!("steel expected"),
+        }
+    }
+
+    #[test]
+    fn en10025_2_thickness_steps() {
+        // EN 10025-2:2019 Table 7, S355 (recalled from memory).
+        assert_eq!(fy("S355", 16.0), 355.0);
+        assert_eq!(fy("S355", 16.1), 345.0);
+        assert_eq!(fy("S355", 40.0), 345.0);
+        assert_eq!(fy("S355", 63.0), 335.0);
+        assert_eq!(fy("S355", 80.0), 325.0);
+        assert_eq!(fy("S355", 100.0), 315.0);
+        assert_eq!(fy("S355", 150.0), 295.0);
+        assert_eq!(fy("S235", 20.0), 225.0);
+        assert_eq!(fy("S275", 50.0), 255.0);
+        assert!(matches!(
+            grade("S355", &rect(300.0)),
+            Err(Error::OutOfRange {
+                field: "material",
+                ..
+            })
+        ));
+    }
+
+    #[test]
+    fn forgiving_names() {
+        assert_eq!(fy("s355 j2", 10.0), 355.0);
+        assert_eq!(fy("S355-K2", 10.0), 355.0);
+        assert_eq!(fy("S460NL", 10.0), 460.0);
+        assert_eq!(fy("S460M", 110.0), 385.0);
+        assert_eq!(fy("S460", 110.0), 380.0);
+        assert_eq!(fy("S355J2H", 10.0), 355.0);
+        assert_eq!(fy("G40.21-350W", 10.0), 350.0);
+        assert_eq!(fy("CSA G40.21 350W", 70.0), 320.0);
+        assert!((fy("astm a992", 10.0) - 344.737_85).abs() < 1e-4);
+        assert!((fy("A36", 10.0) - 248.211_25).abs() < 1e-4);
+    }
+
+    #[test]
+    fn a500_by_family() {
+        let round = SectionSpec::Round(Round { diameter_mm: 50.0 })
+            .build()
+            .unwrap();
+        match grade("A500 Grade C", &round).unwrap() {
+            Material::Steel(s) => assert!((s.fy_mpa - 46.0 * KSI).abs() < 1e-9),
+            Material::Timber(_) => panic!(),
+        }
+    }
+
+    #[test]
+    fn timber_classes() {
+        match grade("gl28H", &rect(100.0)).unwrap() {
+            Material::Timber(t) => {
+                assert_eq!(t.name, "GL28h");
+                assert_eq!(t.kind, TimberKind::Glulam);
+                assert_eq!(t.fc0k_mpa, 28.0);
+                assert_eq!(t.e005_mpa, 10_500.0);
+            }
+            Material::Steel(_) => panic!(),
+        }
+        match grade("C24", &rect(100.0)).unwrap() {
+            Material::Timber(t) => {
+                assert_eq!(
+                    (t.fc0k_mpa, t.e0mean_mpa, t.e005_mpa, t.g_mean_mpa),
+                    (21.0, 11_000.0, 7_400.0, 690.0)
+                );
+            }
+            Material::Steel(_) => panic!(),
+        }
+    }
+
+    #[test]
+    fn unknown_grade_suggests() {
+        let given = SectionSpec::Given(Given {
+            area_mm2: 1000.0,
+            i_major_mm4: 1e6,
+            i_minor_mm4: 1e5,
+            torsion_mm4: None,
+            warping_mm6: None,
+        })
+        .build()
+        .unwrap();
+        match grade("S356", &given) {
+            Err(Error::UnknownGrade { suggestions, .. }) => {
+                assert_eq!(suggestions.first().map(String::as_str), Some("S355"));
+            }
+            other => panic!("{other:?}"),
+        }
+        match grade("GL30h", &given) {
+            Err(Error::UnknownGrade { suggestions, .. }) => {
+                assert!(suggestions.iter().any(|s| s == "GL32h" || s == "GL28h"));
+            }
+            other => panic!("{other:?}"),
+        }
+        match grade("zzzzzzzzzzzz", &given) {
+            Err(Error::UnknownGrade { suggestions, .. }) => assert!(suggestions.is_empty()),
+            other => panic!("{other:?}"),
+        }
+        // A given section has no thickness: the thinnest band is read.
+        match grade("S355", &given).unwrap() {
+            Material::Steel(s) => {
+                assert_eq!(s.fy_mpa, 355.0);
+                assert_eq!(s.thickness_mm, 0.0);
+            }
+            Material::Timber(_) => panic!(),
+        }
+    }
+
+    #[test]
+    fn custom_timber_checks_moduli() {
+        let r = resolve(
+            &MaterialSpec::Timber {
+                fc0k_mpa: 20.0,
+                e005_mpa: 12_000.0,
+                e0mean_mpa: 10_000.0,
+                timber: TimberKind::Solid,
+            },
+            &rect(100.0),
+        );
+        assert!(matches!(
+            r,
+            Err(Error::Geometry {
+                field: "e005_mpa",
+                ..
+            })
+        ));
     }
 }

@@ -1,14 +1,85 @@
-//! PLACEHOLDER: delegates to Euler until this method lands.
+//! CSA S16-19 13.3.1: axial compressive resistance of doubly symmetric
+//! members (flexural buckling).
+//!
+//! C_r = phi A F_y (1 + lambda^(2n))^(-1/n), lambda = sqrt(F_y / F_e),
+//! F_e = pi^2 E / (K L / r)^2, phi = 0.90 (13.1). n = 1.34 for most
+//! members, 2.24 for hot-formed or stress-relieved hollow sections (class
+//! H); `csa_n` overrides. A caution is raised when K L / r exceeds 200,
+//! the limit of 10.4.2.1 for compression members.
 
 use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
-use crate::method::{euler, Input};
-use crate::trace::Trace;
+use crate::member::CSA_N_DEFAULT;
+use crate::method::euler::{
+    basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
+};
+use crate::method::Input;
+use crate::trace::{push, Scope, Trace};
 
+const KEY: &str = "csa-s16";
+
+/// phi for structural steel (CSA S16-19 13.1(a)).
+pub const PHI: f64 = 0.90;
+/// n for hot-formed or stress-relieved hollow sections, class H (13.3.1).
+pub const N_CLASS_H: f64 = 2.24;
+
+/// The reduction (1 + lambda^(2n))^(-1/n), computed as
+/// lambda^-2 (1 + lambda^(-2n))^(-1/n) above lambda = 1 so that it never
+/// underflows to zero.
+pub fn reduction(lambda: f64, n: f64) -> f64 {
+    let r = if lambda <= 1.0 {
+        (1.0 + lambda.powf(2.0 * n)).powf(-1.0 / n)
+    } else {
+        lambda.powi(-2) * (1.0 + lambda.powf(-2.0 * n)).powf(-1.0 / n)
+    };
+    if r.is_finite() {
+        r.clamp(f64::MIN_POSITIVE, 1.0)
+    } else {
+        f64::MIN_POSITIVE
+    }
+}
+
+/// The exponent n with the label saying where it came from.
+fn exponent(input: &Input<'_>) -> (f64, &'static str) {
+    match input.member.csa_n {
+        Some(n) => (n, "exponent n (given)"),
+        None if is_hot_finished_hollow(input) => (
+            N_CLASS_H,
+            "exponent n, 2.24 for a class H hollow section (default)",
+        ),
+        None => (CSA_N_DEFAULT, "exponent n, 1.34 for this section (default)"),
+    }
+}
 
 /// Member-level working.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
-    euler::prelude(input, trace, warnings)
+    require_steel(input, KEY)?;
+    push_material(input, trace, warnings);
+    push(
+        trace,
+        Scope::Member,
+        "phi",
+        "resistance factor for structural steel",
+        PHI,
+        "-",
+        "CSA S16-19 13.1(a)",
+    );
+    let (n, label) = exponent(input);
+    push(
+        trace,
+        Scope::Member,
+        "n",
+        label,
+        n,
+        "-",
+        "CSA S16-19 13.3.1",
+    );
+    if input.member.gamma_m1.is_some() {
+        warn_once(warnings, "factor-ignored", || {
+            "gamma_m1 is not used by CSA S16; phi = 0.90 of 13.1 applies".to_string()
+        });
+    }
+    Ok(())
 }
 
 /// Works one axis.
@@ -16,9 +87,93 @@ pub fn axis(
     input: &Input<'_>,
     mode: Mode,
     lcr_mm: f64,
-    
     trace: &mut Trace,
     warnings: &mut Vec<Warning>,
 ) -> Result<ModeResult> {
-    euler::axis(input, mode, lcr_mm, trace, warnings)
+    require_steel(input, KEY)?;
+    let b = basics(input, mode, lcr_mm)?;
+    let (n, _) = exponent(input);
+    let fe = b.sigma_e_mpa;
+    let lambda = (b.f_mpa / fe).sqrt();
+    let red = reduction(lambda, n);
+    let c_r = PHI * b.n_pl_kn * red;
+    push_geometry(trace, &b, "CSA S16-19 13.3.1");
+    push(
+        trace,
+        b.scope,
+        "F_e",
+        "elastic buckling stress pi^2 E / (KL/r)^2",
+        fe,
+        "MPa",
+        "CSA S16-19 13.3.1",
+    );
+    push(
+        trace,
+        b.scope,
+        "lambda",
+        "sqrt(F_y / F_e)",
+        lambda,
+        "-",
+        "CSA S16-19 13.3.1",
+    );
+    push(
+        trace,
+        b.scope,
+        "(1+lambda^2n)^-1/n",
+        "reduction",
+        red,
+        "-",
+        "CSA S16-19 13.3.1",
+    );
+    push(
+        trace,
+        b.scope,
+        "C_r",
+        "factored compressive resistance phi A F_y (1 + lambda^2n)^(-1/n)",
+        c_r,
+        "kN",
+        "CSA S16-19 13.3.1",
+    );
+    if b.slenderness > 200.0 {
+        warn_once(warnings, "slenderness-over-200", || {
+            format!(
+                "KL/r = {:.0} exceeds 200, the limit of CSA S16-19 10.4.2.1 for compression members",
+                b.slenderness
+            )
+        });
+    }
+    Ok(ModeResult {
+        mode,
+        buckling_length_mm: b.lcr_mm,
+        slenderness: b.slenderness,
+        critical_kn: b.n_cr_kn,
+        relative_slenderness: lambda,
+        reduction: red,
+        resistance_kn: c_r,
+    })
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+
+    use super::*;
+
+    #[test]
+    fn both_forms_agree() {
+        for &n in &[1.34, 2.24] {
+            for &l in &[0.5, 1.0, 1.5, 3.0] {
+                let direct: f64 = (1.0 + f64::powf(l, 2.0 * n)).powf(-1.0 / n);
+                assert!((reduction(l, n) - direct).abs() < 1e-14, "{n} {l}");
+            }
+        }
+        // lambda = 1: 2^(-1/n).
+        assert!((reduction(1.0, 1.34) - 2f64.powf(-1.0 / 1.34)).abs() < 1e-15);
+        assert!(reduction(1e30, 1.34) > 0.0);
+    }
 }

@@ -2,13 +2,20 @@
 //! idealised envelope of a perfect, straight, centrally loaded column.
 //!
 //! N_cr = pi^2 E I / L_cr^2 (Euler 1744; closed form, any structural
-//! mechanics text), N_pl = A f_y, resistance min(N_cr, N_pl) / gamma.
+//! mechanics text), N_pl = A f_y, resistance min(N_cr, N_pl) / gamma with
+//! gamma = `gamma_m1` when given, else 1.
+//!
+//! The module also holds the helpers every method shares: the per-axis
+//! basics (area, I, r, strength, modulus, N_pl, N_cr), the extreme-fibre
+//! distance, the material checks and the once-only warnings.
 
 use std::f64::consts::PI;
 
 use crate::check::{Mode, ModeResult, Warning};
-use crate::error::Result;
+use crate::error::{positive, Error, Result};
+use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
+use crate::section::{Family, SectionSpec};
 use crate::trace::{push, Scope, Trace};
 
 /// Scope of the trace for an axis mode.
@@ -31,13 +38,361 @@ pub fn axis_props(input: &Input<'_>, mode: Mode) -> (f64, f64) {
     }
 }
 
-/// Member-level working: squash load and the optional factor.
-pub fn prelude(input: &Input<'_>, trace: &mut Trace, _warnings: &mut Vec<Warning>) -> Result<()> {
-    let (f, _) = input.material.strength_and_modulus();
+/// The quantities every method starts an axis from.
+#[derive(Debug, Clone, Copy)]
+pub struct Basics {
+    /// Trace scope of the axis.
+    pub scope: Scope,
+    /// Buckling length, mm.
+    pub lcr_mm: f64,
+    /// Area, mm2.
+    pub a_mm2: f64,
+    /// Second moment about the axis, mm4.
+    pub i_mm4: f64,
+    /// Radius of gyration about the axis, mm.
+    pub r_mm: f64,
+    /// Strength (f_y or f_c,0,k), MPa.
+    pub f_mpa: f64,
+    /// Modulus for buckling (E or E_0,05), MPa.
+    pub e_mpa: f64,
+    /// Slenderness L_cr / r.
+    pub slenderness: f64,
+    /// Squash load A f, kN.
+    pub n_pl_kn: f64,
+    /// Elastic critical load pi^2 E I / L_cr^2, kN.
+    pub n_cr_kn: f64,
+    /// Euler stress pi^2 E / (L_cr / r)^2, MPa.
+    pub sigma_e_mpa: f64,
+}
+
+/// Checks the inputs of an axis and works its basics (no trace, no allocation).
+pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
+    let lcr = positive("lcr_mm", lcr_mm)?;
+    let (f, e) = input.material.strength_and_modulus();
+    let f = positive("strength", f)?;
+    let e = positive("modulus", e)?;
+    let a = positive("area_mm2", input.section.props.area_mm2)?;
+    let (i, r) = axis_props(input, mode);
+    let i = positive(
+        match mode {
+            Mode::Major => "i_major_mm4",
+            _ => "i_minor_mm4",
+        },
+        i,
+    )?;
+    let r = positive(
+        match mode {
+            Mode::Major => "r_major_mm",
+            _ => "r_minor_mm",
+        },
+        r,
+    )?;
+    let slenderness = lcr / r;
+    let sigma_e = PI * PI * e / (slenderness * slenderness);
+    Ok(Basics {
+        scope: scope_of(mode),
+        lcr_mm: lcr,
+        a_mm2: a,
+        i_mm4: i,
+        r_mm: r,
+        f_mpa: f,
+        e_mpa: e,
+        slenderness,
+        n_pl_kn: a * f / 1000.0,
+        n_cr_kn: sigma_e * a / 1000.0,
+        sigma_e_mpa: sigma_e,
+    })
+}
+
+/// Pushes the geometry lines every method starts an axis with.
+pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: &'static str) {
+    push(
+        trace,
+        b.scope,
+        "L_cr",
+        "buckling length",
+        b.lcr_mm,
+        "mm",
+        "input",
+    );
+    push(
+        trace,
+        b.scope,
+        "i",
+        "radius of gyration",
+        b.r_mm,
+        "mm",
+        "section",
+    );
+    push(
+        trace,
+        b.scope,
+        "L_cr/i",
+        "slenderness",
+        b.slenderness,
+        "-",
+        clause,
+    );
+}
+
+/// Whether a warning with `code` is already in the list.
+pub fn has_warning(warnings: &[Warning], code: &str) -> bool {
+    warnings.iter().any(|w| w.code == code)
+}
+
+/// Adds a warning unless one with the same code is there already; the
+/// message is only built when it is added.
+pub fn warn_once(
+    warnings: &mut Vec<Warning>,
+    code: &'static str,
+    message: impl FnOnce() -> String,
+) {
+    if !has_warning(warnings, code) {
+        warnings.push(Warning::new(code, message()));
+    }
+}
+
+/// The steel of the input, or `NotApplicable` for timber.
+pub fn require_steel<'a>(input: &Input<'a>, method: &'static str) -> Result<&'a Steel> {
+    match input.material {
+        Material::Steel(s) => Ok(s),
+        Material::Timber(t) => Err(Error::NotApplicable {
+            method,
+            reason: format!(
+                "it is a steel design method and the material is timber ({}); use \"en1995-1-1\" \
+                 for timber, or give a steel grade",
+                t.name
+            ),
+        }),
+    }
+}
+
+/// The timber of the input, or `NotApplicable` for steel.
+pub fn require_timber<'a>(input: &Input<'a>, method: &'static str) -> Result<&'a Timber> {
+    match input.material {
+        Material::Timber(t) => Ok(t),
+        Material::Steel(s) => Err(Error::NotApplicable {
+            method,
+            reason: format!(
+                "it is a timber design method and the material is steel ({}); use a steel method \
+                 such as \"en1993-1-1\", or give a timber class such as \"C24\"",
+                s.name
+            ),
+        }),
+    }
+}
+
+/// Distance from the centroidal axis to the extreme fibre, mm: I / W_el
+/// when the section gives W_el, otherwise from the dimensions, and for
+/// typed properties sqrt(3) r (the ratio of a solid rectangle), with a
+/// warning.
+pub fn extreme_fibre_mm(input: &Input<'_>, mode: Mode, warnings: &mut Vec<Warning>) -> f64 {
+    let p = &input.section.props;
+    let (i, r) = axis_props(input, mode);
+    let w = match mode {
+        Mode::Major => p.w_el_major_mm3,
+        _ => p.w_el_minor_mm3,
+    };
+    if w.is_finite() && w > 0.0 && i.is_finite() && i > 0.0 {
+        return i / w;
+    }
+    let major = matches!(mode, Mode::Major);
+    let half = |a: f64, b: f64| {
+        if major {
+            a.max(b) / 2.0
+        } else {
+            a.min(b) / 2.0
+        }
+    };
+    let from_dims = match &input.section.spec {
+        SectionSpec::Rect(s) => Some(half(s.depth_mm, s.width_mm)),
+        SectionSpec::Rhs(s) => Some(half(s.depth_mm, s.width_mm)),
+        SectionSpec::Round(s) => Some(s.diameter_mm / 2.0),
+        SectionSpec::Chs(s) => Some(s.diameter_mm / 2.0),
+        SectionSpec::I(s) => Some(if major {
+            s.depth_mm / 2.0
+        } else {
+            s.width_mm / 2.0
+        }),
+        _ => None,
+    };
+    match from_dims {
+        Some(c) if c.is_finite() && c > 0.0 => c,
+        _ => {
+            warn_once(warnings, "extreme-fibre-assumed", || {
+                "the section does not give its elastic modulus, so the extreme-fibre distance is \
+                 taken as sqrt(3) i (a solid rectangle); the bow or eccentricity effect may be \
+                 under- or over-stated"
+                    .to_string()
+            });
+            3f64.sqrt() * r
+        }
+    }
+}
+
+/// The strength symbol and label for the material.
+pub fn strength_label(material: &Material) -> (&'static str, &'static str) {
+    match material {
+        Material::Steel(_) => ("f_y", "yield strength"),
+        Material::Timber(_) => (
+            "f_c,0,k",
+            "characteristic compressive strength parallel to grain",
+        ),
+    }
+}
+
+/// Pushes the material and section lines of a prelude: thickness (steel
+/// grades), strength, modulus, area and squash load; and warns when a
+/// graded steel's thickness is unknown.
+pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) {
+    let (f, e) = input.material.strength_and_modulus();
     let a = input.section.props.area_mm2;
+    match input.material {
+        Material::Steel(s) => {
+            if s.name != "custom" {
+                push(
+                    trace,
+                    Scope::Member,
+                    "t",
+                    "governing thickness for f_y",
+                    s.thickness_mm,
+                    "mm",
+                    s.standard,
+                );
+                push(
+                    trace,
+                    Scope::Member,
+                    "f_y",
+                    "yield strength for that thickness",
+                    f,
+                    "MPa",
+                    s.standard,
+                );
+                if s.thickness_mm <= 0.0 && s.band_up_to_mm.is_finite() {
+                    warn_once(warnings, "thickness-unknown", || {
+                        format!(
+                            "the section does not tell its plate thickness, so f_y = {f} MPa of {} \
+                             for t <= {} mm is used; give a custom fy_mpa if the section is thicker",
+                            s.name, s.band_up_to_mm
+                        )
+                    });
+                }
+            } else {
+                push(
+                    trace,
+                    Scope::Member,
+                    "f_y",
+                    "yield strength",
+                    f,
+                    "MPa",
+                    "custom material",
+                );
+            }
+            push(
+                trace,
+                Scope::Member,
+                "E",
+                "modulus of elasticity",
+                e,
+                "MPa",
+                s.standard,
+            );
+        }
+        Material::Timber(t) => {
+            push(
+                trace,
+                Scope::Member,
+                "f_c,0,k",
+                "characteristic compressive strength parallel to grain",
+                f,
+                "MPa",
+                t.standard,
+            );
+            push(
+                trace,
+                Scope::Member,
+                "E_0,05",
+                "fifth-percentile modulus",
+                e,
+                "MPa",
+                t.standard,
+            );
+        }
+    }
     push(trace, Scope::Member, "A", "gross area", a, "mm2", "section");
-    push(trace, Scope::Member, "f_y", "yield strength", f, "MPa", "material");
-    push(trace, Scope::Member, "N_pl", "squash load A f_y", a * f / 1000.0, "kN", "N_pl = A f_y");
+    push(
+        trace,
+        Scope::Member,
+        "N_pl",
+        "squash load A f",
+        a * f / 1000.0,
+        "kN",
+        "N_pl = A f",
+    );
+}
+
+/// The optional factor of the first-principles methods and its trace line.
+pub fn push_optional_factor(input: &Input<'_>, trace: &mut Trace) -> f64 {
+    match input.member.gamma_m1 {
+        Some(g) => {
+            push(
+                trace,
+                Scope::Member,
+                "gamma",
+                "factor on the resistance (given)",
+                g,
+                "-",
+                "input gamma_m1",
+            );
+            g
+        }
+        None => {
+            push(
+                trace,
+                Scope::Member,
+                "gamma",
+                "factor on the resistance (none given: 1)",
+                1.0,
+                "-",
+                "input gamma_m1",
+            );
+            1.0
+        }
+    }
+}
+
+/// Warns once that a first-principles method runs on timber without the
+/// timber code's modification and partial factors.
+pub fn warn_timber_first_principles(input: &Input<'_>, warnings: &mut Vec<Warning>) {
+    if let Material::Timber(_) = input.material {
+        warn_once(warnings, "timber-first-principles", || {
+            "a first-principles method on timber uses f_c,0,k and E_0,05 as they are, without k_mod \
+             or gamma_M; use \"en1995-1-1\" for a design check"
+                .to_string()
+        });
+    }
+}
+
+/// Whether the section is a hot-finished hollow section (Table 6.2, S16 class H).
+pub fn is_hot_finished_hollow(input: &Input<'_>) -> bool {
+    use crate::section::HollowMake;
+    match &input.section.spec {
+        SectionSpec::Rhs(s) => s.make == HollowMake::HotFinished,
+        SectionSpec::Chs(s) => s.make == HollowMake::HotFinished,
+        _ => false,
+    }
+}
+
+/// Whether the section family is a hollow one.
+pub fn is_hollow(input: &Input<'_>) -> bool {
+    matches!(input.section.family, Family::Rhs | Family::Chs)
+}
+
+/// Member-level working: squash load and the optional factor.
+pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
+    warn_timber_first_principles(input, warnings);
+    push_material(input, trace, warnings);
+    push_optional_factor(input, trace);
     Ok(())
 }
 
@@ -49,28 +404,114 @@ pub fn axis(
     trace: &mut Trace,
     _warnings: &mut Vec<Warning>,
 ) -> Result<ModeResult> {
-    let scope = scope_of(mode);
-    let (f, e) = input.material.strength_and_modulus();
-    let a = input.section.props.area_mm2;
-    let (i, r) = axis_props(input, mode);
+    let b = basics(input, mode, lcr_mm)?;
     let gamma = input.member.gamma_m1.unwrap_or(1.0);
-    let n_pl = a * f / 1000.0;
-    let n_cr = PI * PI * e * i / (lcr_mm * lcr_mm) / 1000.0;
-    let slenderness = lcr_mm / r;
-    let lambda_rel = (n_pl / n_cr).sqrt();
-    let n_fail = n_cr.min(n_pl);
+    let lambda_rel = (b.n_pl_kn / b.n_cr_kn).sqrt();
+    let n_fail = b.n_cr_kn.min(b.n_pl_kn);
     let resistance = n_fail / gamma;
-    push(trace, scope, "L_cr", "buckling length", lcr_mm, "mm", "input");
-    push(trace, scope, "L_cr/i", "slenderness", slenderness, "-", "L_cr / i");
-    push(trace, scope, "N_cr", "Euler critical load", n_cr, "kN", "N_cr = pi^2 E I / L_cr^2");
-    push(trace, scope, "N_R", "resistance min(N_cr, N_pl)/gamma", resistance, "kN", "idealised envelope");
+    push_geometry(trace, &b, "L_cr / i");
+    push(
+        trace,
+        b.scope,
+        "N_cr",
+        "Euler critical load",
+        b.n_cr_kn,
+        "kN",
+        "N_cr = pi^2 E I / L_cr^2",
+    );
+    push(
+        trace,
+        b.scope,
+        "lambda_bar",
+        "relative slenderness sqrt(N_pl / N_cr)",
+        lambda_rel,
+        "-",
+        "sqrt(N_pl / N_cr)",
+    );
+    push(
+        trace,
+        b.scope,
+        "N_R",
+        "resistance min(N_cr, N_pl) / gamma",
+        resistance,
+        "kN",
+        "idealised envelope",
+    );
     Ok(ModeResult {
         mode,
-        buckling_length_mm: lcr_mm,
-        slenderness,
-        critical_kn: n_cr,
+        buckling_length_mm: b.lcr_mm,
+        slenderness: b.slenderness,
+        critical_kn: b.n_cr_kn,
         relative_slenderness: lambda_rel,
-        reduction: n_fail / n_pl,
+        reduction: n_fail / b.n_pl_kn,
         resistance_kn: resistance,
     })
+}
+
+#[cfg(test)]
+pub(crate) mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+
+    use super::*;
+    use crate::check::Prepared;
+    use crate::material::MaterialSpec;
+    use crate::member::Member;
+    use crate::method::Method;
+    use crate::section::{Rect, SectionSpec};
+
+    pub(crate) fn member(method: Method, grade: &str) -> Member {
+        Member {
+            id: "T1".into(),
+            note: None,
+            section: SectionSpec::Rect(Rect {
+                depth_mm: 100.0,
+                width_mm: 50.0,
+            }),
+            material: MaterialSpec::Grade {
+                grade: grade.into(),
+            },
+            length_mm: 2000.0,
+            k_major: 1.0,
+            k_minor: 1.0,
+            k_torsion: 1.0,
+            lcr_major_mm: None,
+            lcr_minor_mm: None,
+            lcr_torsion_mm: None,
+            axial_kn: 100.0,
+            method,
+            gamma_m1: None,
+            curve_major: None,
+            curve_minor: None,
+            bow_mm: None,
+            eccentricity_mm: None,
+            service_class: None,
+            load_duration: None,
+            csa_n: None,
+        }
+    }
+
+    #[test]
+    fn euler_closed_form_and_cap() {
+        let p = Prepared::new(&member(Method::Euler, "S355")).unwrap();
+        let input = p.input();
+        let mut t = Trace::new();
+        let mut w = Vec::new();
+        // Minor axis: I = 100 * 50^3 / 12 = 1 041 666.7 mm4.
+        let r = axis(&input, Mode::Minor, 2000.0, &mut t, &mut w).unwrap();
+        let expect =
+            PI * PI * 210_000.0 * (100.0 * 50f64.powi(3) / 12.0) / 2000f64.powi(2) / 1000.0;
+        assert!((r.critical_kn - expect).abs() < 1e-9 * expect);
+        assert!((r.resistance_kn - expect).abs() < 1e-9 * expect);
+        // Very short: capped at A f_y (f_y = 345 MPa, t = 50 mm in 40-63 band gives 335).
+        let r = axis(&input, Mode::Minor, 10.0, &mut t, &mut w).unwrap();
+        assert!((r.resistance_kn - 5000.0 * 335.0 / 1000.0).abs() < 1e-9);
+        assert_eq!(r.reduction, 1.0);
+        assert!(axis(&input, Mode::Minor, 0.0, &mut t, &mut w).is_err());
+        assert!(axis(&input, Mode::Minor, f64::NAN, &mut t, &mut w).is_err());
+    }
 }

@@ -1,10 +1,55 @@
-//! PLACEHOLDER: delegates to Euler until this method lands.
+//! The secant formula: a pin-ended strut loaded at eccentricity e at both
+//! ends reaches first yield at the extreme fibre when
+//! sigma (1 + (e c / i^2) sec((L_cr / (2 i)) sqrt(sigma / E))) = f_y
+//! (Young 1807; closed form in any text on the strength of materials).
+//!
+//! sigma is found by bisection on (0, min(f_y, sigma_E)): the left side
+//! rises monotonically from 0 and is unbounded as sigma -> sigma_E, so the
+//! root is bracketed and unique. The eccentricity defaults to L_cr / 1000
+//! (the trace says so); the resistance is sigma A / gamma with the
+//! optional factor gamma_m1.
+
+use std::f64::consts::FRAC_PI_2;
 
 use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
+use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
-use crate::trace::Trace;
+use crate::trace::{push, Trace};
 
+/// The mean stress at first yield, MPa, for strength `f`, modulus `e`,
+/// slenderness `lambda` = L_cr / i and eccentricity ratio `ecc` = e c / i^2.
+pub fn first_yield_stress(f: f64, e: f64, lambda: f64, ecc: f64) -> f64 {
+    let sigma_e = std::f64::consts::PI.powi(2) * e / (lambda * lambda);
+    // g(s) < 0 below the root, > 0 above; theta >= pi/2 counts as above.
+    let g = |s: f64| -> f64 {
+        let theta = 0.5 * lambda * (s / e).sqrt();
+        if theta >= FRAC_PI_2 {
+            return f64::INFINITY;
+        }
+        s * (1.0 + ecc / theta.cos()) - f
+    };
+    let mut lo = 0.0_f64;
+    let mut hi = f.min(sigma_e);
+    if !(hi.is_finite() && hi > 0.0) {
+        return 0.0;
+    }
+    if g(hi) <= 0.0 {
+        return hi;
+    }
+    for _ in 0..200 {
+        let mid = 0.5 * (lo + hi);
+        if g(mid) <= 0.0 {
+            lo = mid;
+        } else {
+            hi = mid;
+        }
+        if hi - lo <= 1e-13 * hi {
+            break;
+        }
+    }
+    0.5 * (lo + hi)
+}
 
 /// Member-level working.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
@@ -16,9 +61,126 @@ pub fn axis(
     input: &Input<'_>,
     mode: Mode,
     lcr_mm: f64,
-    
     trace: &mut Trace,
     warnings: &mut Vec<Warning>,
 ) -> Result<ModeResult> {
-    euler::axis(input, mode, lcr_mm, trace, warnings)
+    let b = basics(input, mode, lcr_mm)?;
+    let gamma = input.member.gamma_m1.unwrap_or(1.0);
+    push_geometry(trace, &b, "L_cr / i");
+    let ecc_mm = match input.member.eccentricity_mm {
+        Some(e) => {
+            push(
+                trace,
+                b.scope,
+                "e",
+                "load eccentricity (given)",
+                e,
+                "mm",
+                "input eccentricity_mm",
+            );
+            e
+        }
+        None => {
+            let e = b.lcr_mm / 1000.0;
+            push(
+                trace,
+                b.scope,
+                "e",
+                "load eccentricity, none given: L_cr / 1000",
+                e,
+                "mm",
+                "default L_cr / 1000",
+            );
+            e
+        }
+    };
+    let c = extreme_fibre_mm(input, mode, warnings);
+    let ratio = ecc_mm * c / (b.r_mm * b.r_mm);
+    let s = first_yield_stress(b.f_mpa, b.e_mpa, b.slenderness, ratio);
+    let n_fail = s * b.a_mm2 / 1000.0;
+    let resistance = n_fail / gamma;
+    push(
+        trace,
+        b.scope,
+        "c",
+        "distance to the extreme fibre",
+        c,
+        "mm",
+        "I / W_el",
+    );
+    push(
+        trace,
+        b.scope,
+        "e c/i^2",
+        "eccentricity ratio",
+        ratio,
+        "-",
+        "secant formula",
+    );
+    push(
+        trace,
+        b.scope,
+        "sigma_E",
+        "Euler stress pi^2 E / (L_cr/i)^2",
+        b.sigma_e_mpa,
+        "MPa",
+        "Euler",
+    );
+    push(
+        trace,
+        b.scope,
+        "sigma_y1",
+        "mean stress at first yield, s (1 + e c/i^2 sec(L_cr/(2i) sqrt(s/E))) = f",
+        s,
+        "MPa",
+        "secant formula",
+    );
+    push(
+        trace,
+        b.scope,
+        "N_R",
+        "first-yield load sigma_y1 A / gamma",
+        resistance,
+        "kN",
+        "secant formula",
+    );
+    Ok(ModeResult {
+        mode,
+        buckling_length_mm: b.lcr_mm,
+        slenderness: b.slenderness,
+        critical_kn: b.n_cr_kn,
+        relative_slenderness: (b.f_mpa / b.sigma_e_mpa).sqrt(),
+        reduction: (s / b.f_mpa).clamp(f64::MIN_POSITIVE, 1.0),
+        resistance_kn: resistance,
+    })
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+
+    use super::*;
+
+    #[test]
+    fn root_satisfies_the_formula() {
+        let (f, e) = (355.0, 210_000.0);
+        for &(lambda, ecc) in &[(20.0, 0.1), (100.0, 0.3), (250.0, 1.0), (60.0, 3.0)] {
+            let s: f64 = first_yield_stress(f, e, lambda, ecc);
+            let back = s * (1.0 + ecc / (0.5 * lambda * (s / e).sqrt()).cos());
+            assert!((back - f).abs() < 1e-8 * f, "{lambda} {ecc}: {back}");
+        }
+    }
+
+    #[test]
+    fn zero_eccentricity_is_the_envelope() {
+        let (f, e) = (355.0, 210_000.0);
+        assert_eq!(first_yield_stress(f, e, 30.0, 0.0), f);
+        let se = std::f64::consts::PI.powi(2) * e / 200f64.powi(2);
+        assert!((first_yield_stress(f, e, 200.0, 0.0) - se).abs() < 1e-9 * se);
+    }
 }
