@@ -1,0 +1,837 @@
+//! The editor's fields, generic over every section kind, material and
+//! method: which fields a member shows, what each field holds as text, and
+//! how a typed text becomes a new member (or a message beside the field).
+//!
+//! Fields are addressed by their member-file key and edited through the
+//! member's JSON form, so every kind the engine knows is edited the same
+//! way and the keys on screen are the keys in the file.
+
+use serde_json::{Map, Value};
+use strutline_core::check::Prepared;
+use strutline_core::material::MaterialSpec;
+use strutline_core::method::Method;
+use strutline_core::section::SectionSpec;
+use strutline_core::{Error, Member};
+
+use crate::numtext::{for_input, parse_number, NumError};
+
+/// Where in the member a field sits.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Place {
+    /// On the member itself.
+    Member,
+    /// In `section`.
+    Section,
+    /// In `material`.
+    Material,
+}
+
+/// What a field accepts.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Rule {
+    /// A number greater than zero, required.
+    Positive,
+    /// A number of zero or more, required.
+    NonNegative,
+    /// Empty (the default) or a number greater than zero.
+    OptPositive,
+    /// Empty (the default) or a number of zero or more.
+    OptNonNegative,
+    /// Text, required.
+    Text,
+}
+
+/// One text field of the editor.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub struct Field {
+    /// The member-file key, also the input's `name`.
+    pub key: &'static str,
+    /// The label.
+    pub label: &'static str,
+    /// Unit shown after the field ("" for none).
+    pub unit: &'static str,
+    /// Where it sits.
+    pub place: Place,
+    /// What it accepts.
+    pub rule: Rule,
+}
+
+const fn f(
+    key: &'static str,
+    label: &'static str,
+    unit: &'static str,
+    place: Place,
+    rule: Rule,
+) -> Field {
+    Field {
+        key,
+        label,
+        unit,
+        place,
+        rule,
+    }
+}
+
+use Place::{Material as Mat, Member as Mem, Section as Sec};
+use Rule::{NonNegative, OptNonNegative, OptPositive, Positive, Text};
+
+/// The section kinds, member-file key and words.
+pub const KINDS: [(&str, &str); 10] = [
+    ("i", "I / H section"),
+    ("rhs", "rectangular hollow (RHS/SHS)"),
+    ("chs", "circular hollow (CHS)"),
+    ("angle", "angle"),
+    ("channel", "channel"),
+    ("tee", "tee"),
+    ("rect", "solid rectangle"),
+    ("round", "solid round"),
+    ("given", "typed properties"),
+    ("catalogue", "catalogue designation"),
+];
+
+const I_FIELDS: [Field; 5] = [
+    f("depth_mm", "depth h", "mm", Sec, Positive),
+    f("width_mm", "flange width b", "mm", Sec, Positive),
+    f("flange_mm", "flange thickness t_f", "mm", Sec, Positive),
+    f("web_mm", "web thickness t_w", "mm", Sec, Positive),
+    f("root_radius_mm", "root radius r", "mm", Sec, OptNonNegative),
+];
+const RHS_FIELDS: [Field; 5] = [
+    f("depth_mm", "depth h", "mm", Sec, Positive),
+    f("width_mm", "width b", "mm", Sec, Positive),
+    f("wall_mm", "wall t", "mm", Sec, Positive),
+    f(
+        "outer_radius_mm",
+        "outer corner radius r_o",
+        "mm",
+        Sec,
+        OptNonNegative,
+    ),
+    f(
+        "inner_radius_mm",
+        "inner corner radius r_i (empty: r_o − t)",
+        "mm",
+        Sec,
+        OptNonNegative,
+    ),
+];
+const CHS_FIELDS: [Field; 2] = [
+    f("diameter_mm", "outside diameter D", "mm", Sec, Positive),
+    f("wall_mm", "wall t", "mm", Sec, Positive),
+];
+const ANGLE_FIELDS: [Field; 5] = [
+    f("depth_mm", "long leg h", "mm", Sec, Positive),
+    f("width_mm", "short leg b", "mm", Sec, Positive),
+    f("thickness_mm", "thickness t", "mm", Sec, Positive),
+    f(
+        "root_radius_mm",
+        "root radius r1",
+        "mm",
+        Sec,
+        OptNonNegative,
+    ),
+    f("toe_radius_mm", "toe radius r2", "mm", Sec, OptNonNegative),
+];
+const FLANGED_FIELDS: [Field; 5] = [
+    f("depth_mm", "depth h", "mm", Sec, Positive),
+    f("width_mm", "flange width b", "mm", Sec, Positive),
+    f("flange_mm", "flange thickness t_f", "mm", Sec, Positive),
+    f("web_mm", "web thickness t_w", "mm", Sec, Positive),
+    f("root_radius_mm", "root radius r", "mm", Sec, OptNonNegative),
+];
+const RECT_FIELDS: [Field; 2] = [
+    f("depth_mm", "depth h", "mm", Sec, Positive),
+    f("width_mm", "width b", "mm", Sec, Positive),
+];
+const ROUND_FIELDS: [Field; 1] = [f("diameter_mm", "diameter d", "mm", Sec, Positive)];
+const GIVEN_FIELDS: [Field; 5] = [
+    f("area_mm2", "area A", "mm²", Sec, Positive),
+    f(
+        "i_major_mm4",
+        "second moment, major axis",
+        "mm⁴",
+        Sec,
+        Positive,
+    ),
+    f(
+        "i_minor_mm4",
+        "second moment, minor axis",
+        "mm⁴",
+        Sec,
+        Positive,
+    ),
+    f(
+        "torsion_mm4",
+        "torsion constant I_t (optional)",
+        "mm⁴",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "warping_mm6",
+        "warping constant I_w (optional)",
+        "mm⁶",
+        Sec,
+        OptPositive,
+    ),
+];
+const CATALOGUE_FIELDS: [Field; 1] = [f("designation", "designation", "", Sec, Text)];
+
+/// The dimension fields of a section kind.
+pub fn section_fields(kind: &str) -> &'static [Field] {
+    match kind {
+        "i" => &I_FIELDS,
+        "rhs" => &RHS_FIELDS,
+        "chs" => &CHS_FIELDS,
+        "angle" => &ANGLE_FIELDS,
+        "channel" | "tee" => &FLANGED_FIELDS,
+        "rect" => &RECT_FIELDS,
+        "round" => &ROUND_FIELDS,
+        "given" => &GIVEN_FIELDS,
+        "catalogue" => &CATALOGUE_FIELDS,
+        _ => &[],
+    }
+}
+
+/// The member's own numeric fields.
+pub const MEMBER_FIELDS: [Field; 2] = [
+    f("length_mm", "system length L", "mm", Mem, Positive),
+    f(
+        "axial_kn",
+        "design compression N_Ed",
+        "kN",
+        Mem,
+        NonNegative,
+    ),
+];
+
+/// Effective-length factor and buckling length of each axis.
+pub const K_MAJOR: Field = f("k_major", "factor K, major axis", "", Mem, Positive);
+/// Minor-axis factor.
+pub const K_MINOR: Field = f("k_minor", "factor K, minor axis", "", Mem, Positive);
+/// Major-axis buckling length.
+pub const LCR_MAJOR: Field = f(
+    "lcr_major_mm",
+    "buckling length L_cr, major axis",
+    "mm",
+    Mem,
+    OptPositive,
+);
+/// Minor-axis buckling length.
+pub const LCR_MINOR: Field = f(
+    "lcr_minor_mm",
+    "buckling length L_cr, minor axis",
+    "mm",
+    Mem,
+    OptPositive,
+);
+
+/// How the material is given.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum MaterialMode {
+    /// A named grade or strength class.
+    Grade,
+    /// Custom steel values.
+    Steel,
+    /// Custom timber values.
+    Timber,
+}
+
+impl MaterialMode {
+    /// Of a material.
+    pub fn of(m: &MaterialSpec) -> MaterialMode {
+        match m {
+            MaterialSpec::Grade { .. } => MaterialMode::Grade,
+            MaterialSpec::Custom { .. } => MaterialMode::Steel,
+            MaterialSpec::Timber { .. } => MaterialMode::Timber,
+        }
+    }
+
+    /// Select value.
+    pub fn value(self) -> &'static str {
+        match self {
+            MaterialMode::Grade => "grade",
+            MaterialMode::Steel => "steel",
+            MaterialMode::Timber => "timber",
+        }
+    }
+
+    /// From a select value.
+    pub fn from_value(v: &str) -> MaterialMode {
+        match v {
+            "grade" => MaterialMode::Grade,
+            "timber" => MaterialMode::Timber,
+            _ => MaterialMode::Steel,
+        }
+    }
+
+    /// A starting material of this kind.
+    pub fn default_spec(self) -> MaterialSpec {
+        match self {
+            MaterialMode::Grade => MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
+            MaterialMode::Steel => MaterialSpec::Custom {
+                fy_mpa: 355.0,
+                e_mpa: 210_000.0,
+                g_mpa: None,
+            },
+            MaterialMode::Timber => MaterialSpec::Timber {
+                fc0k_mpa: 21.0,
+                e005_mpa: 7400.0,
+                e0mean_mpa: 11000.0,
+                timber: strutline_core::material::TimberKind::Solid,
+            },
+        }
+    }
+}
+
+const GRADE_FIELDS: [Field; 1] = [f("grade", "grade or strength class", "", Mat, Text)];
+const STEEL_FIELDS: [Field; 3] = [
+    f("fy_mpa", "yield strength f_y", "MPa", Mat, Positive),
+    f("e_mpa", "Young's modulus E", "MPa", Mat, Positive),
+    f(
+        "g_mpa",
+        "shear modulus G (empty: E/2.6)",
+        "MPa",
+        Mat,
+        OptPositive,
+    ),
+];
+const TIMBER_FIELDS: [Field; 3] = [
+    f(
+        "fc0k_mpa",
+        "compressive strength f_c,0,k",
+        "MPa",
+        Mat,
+        Positive,
+    ),
+    f("e005_mpa", "modulus E_0,05", "MPa", Mat, Positive),
+    f("e0mean_mpa", "modulus E_0,mean", "MPa", Mat, Positive),
+];
+
+/// The material fields of a mode.
+pub fn material_fields(mode: MaterialMode) -> &'static [Field] {
+    match mode {
+        MaterialMode::Grade => &GRADE_FIELDS,
+        MaterialMode::Steel => &STEEL_FIELDS,
+        MaterialMode::Timber => &TIMBER_FIELDS,
+    }
+}
+
+/// Grade names offered in the grade field's list (the engine decides
+/// which it knows).
+pub const GRADE_SUGGESTIONS: [&str; 14] = [
+    "S235",
+    "S275",
+    "S355",
+    "S460",
+    "A36",
+    "A992",
+    "A500 Gr C",
+    "350W",
+    "C16",
+    "C24",
+    "C30",
+    "GL24h",
+    "GL28h",
+    "GL32h",
+];
+
+/// A method's typed options.
+pub fn option_fields(method: Method) -> Vec<Field> {
+    let gamma = f(
+        "gamma_m1",
+        "partial factor γ_M1 (empty: 1.0)",
+        "",
+        Mem,
+        OptPositive,
+    );
+    match method {
+        Method::En1993 => vec![gamma],
+        Method::PerryRobertson => vec![
+            gamma,
+            f(
+                "bow_mm",
+                "initial bow e_0 (empty: L_cr/1000)",
+                "mm",
+                Mem,
+                OptNonNegative,
+            ),
+        ],
+        Method::Secant => vec![
+            gamma,
+            f(
+                "eccentricity_mm",
+                "load eccentricity e (empty: L/1000)",
+                "mm",
+                Mem,
+                OptNonNegative,
+            ),
+        ],
+        Method::Euler => vec![f(
+            "gamma_m1",
+            "factor on resistance (empty: 1.0)",
+            "",
+            Mem,
+            OptPositive,
+        )],
+        Method::AiscLrfd | Method::AiscAsd | Method::CsaS16 | Method::En1995 => Vec::new(),
+    }
+}
+
+/// A select of the editor: its key, words and options (value, words);
+/// the value "" removes the key so the engine's default applies.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Choice {
+    /// Member-file key, also the select's `name`.
+    pub key: &'static str,
+    /// Label.
+    pub label: &'static str,
+    /// Where it sits.
+    pub place: Place,
+    /// Options.
+    pub options: Vec<(&'static str, &'static str)>,
+}
+
+/// The choices of a section kind (how it was made).
+pub fn section_choices(kind: &str) -> Vec<Choice> {
+    match kind {
+        "i" => vec![Choice {
+            key: "make",
+            label: "made",
+            place: Sec,
+            options: vec![("rolled", "hot-rolled"), ("welded", "welded from plates")],
+        }],
+        "rhs" | "chs" => vec![Choice {
+            key: "make",
+            label: "made",
+            place: Sec,
+            options: vec![
+                ("hot-finished", "hot-finished"),
+                ("cold-formed", "cold-formed"),
+            ],
+        }],
+        _ => Vec::new(),
+    }
+}
+
+/// The choices of a material mode.
+pub fn material_choices(mode: MaterialMode) -> Vec<Choice> {
+    match mode {
+        MaterialMode::Timber => vec![Choice {
+            key: "timber",
+            label: "timber product",
+            place: Mat,
+            options: vec![
+                ("solid", "solid (sawn) timber"),
+                ("glulam", "glued laminated timber"),
+            ],
+        }],
+        _ => Vec::new(),
+    }
+}
+
+/// The choices of a method.
+pub fn method_choices(method: Method) -> Vec<Choice> {
+    let curves = vec![
+        ("", "by EN 1993-1-1 Table 6.2"),
+        ("a0", "a0"),
+        ("a", "a"),
+        ("b", "b"),
+        ("c", "c"),
+        ("d", "d"),
+    ];
+    match method {
+        Method::En1993 => vec![
+            Choice {
+                key: "curve_major",
+                label: "buckling curve, major axis",
+                place: Mem,
+                options: curves.clone(),
+            },
+            Choice {
+                key: "curve_minor",
+                label: "buckling curve, minor axis",
+                place: Mem,
+                options: curves,
+            },
+        ],
+        Method::En1995 => vec![
+            Choice {
+                key: "service_class",
+                label: "service class",
+                place: Mem,
+                options: vec![("", "default (1)"), ("1", "1"), ("2", "2"), ("3", "3")],
+            },
+            Choice {
+                key: "load_duration",
+                label: "load-duration class",
+                place: Mem,
+                options: vec![
+                    ("", "default (medium-term)"),
+                    ("permanent", "permanent"),
+                    ("long", "long-term"),
+                    ("medium", "medium-term"),
+                    ("short", "short-term"),
+                    ("instantaneous", "instantaneous"),
+                ],
+            },
+        ],
+        Method::CsaS16 => vec![Choice {
+            key: "csa_n",
+            label: "exponent n",
+            place: Mem,
+            options: vec![
+                ("", "by section make"),
+                ("1.34", "1.34 (most members)"),
+                ("2.24", "2.24 (hot-finished HSS, stress-relieved)"),
+            ],
+        }],
+        _ => Vec::new(),
+    }
+}
+
+/// The member-file key of a section's kind ("i", "rhs", ...).
+pub fn kind_of(spec: &SectionSpec) -> &'static str {
+    match spec {
+        SectionSpec::I(_) => "i",
+        SectionSpec::Rhs(_) => "rhs",
+        SectionSpec::Chs(_) => "chs",
+        SectionSpec::Angle(_) => "angle",
+        SectionSpec::Channel(_) => "channel",
+        SectionSpec::Tee(_) => "tee",
+        SectionSpec::Rect(_) => "rect",
+        SectionSpec::Round(_) => "round",
+        SectionSpec::Given(_) => "given",
+        SectionSpec::Catalogue(_) => "catalogue",
+    }
+}
+
+fn default_json(kind: &str) -> Value {
+    let text = match kind {
+        "i" => {
+            r#"{"kind":"i","depth_mm":200,"width_mm":200,"flange_mm":15,"web_mm":9,"root_radius_mm":18}"#
+        }
+        "rhs" => r#"{"kind":"rhs","depth_mm":150,"width_mm":100,"wall_mm":6,"outer_radius_mm":9}"#,
+        "chs" => r#"{"kind":"chs","diameter_mm":114.3,"wall_mm":5}"#,
+        "angle" => {
+            r#"{"kind":"angle","depth_mm":80,"width_mm":80,"thickness_mm":8,"root_radius_mm":10,"toe_radius_mm":5}"#
+        }
+        "channel" => {
+            r#"{"kind":"channel","depth_mm":200,"width_mm":80,"flange_mm":12,"web_mm":7,"root_radius_mm":12}"#
+        }
+        "tee" => {
+            r#"{"kind":"tee","depth_mm":150,"width_mm":150,"flange_mm":12,"web_mm":8,"root_radius_mm":10}"#
+        }
+        "round" => r#"{"kind":"round","diameter_mm":40}"#,
+        "given" => {
+            r#"{"kind":"given","area_mm2":2850,"i_major_mm4":9200000,"i_minor_mm4":3100000}"#
+        }
+        "catalogue" => r#"{"kind":"catalogue","designation":"HE 200 B"}"#,
+        _ => r#"{"kind":"rect","depth_mm":100,"width_mm":60}"#,
+    };
+    serde_json::from_str(text).unwrap_or(Value::Null)
+}
+
+/// A section of `kind`, keeping the overall sizes of `from` that the new
+/// kind also has (depth, width, diameter).
+pub fn section_of_kind(kind: &str, from: &SectionSpec) -> SectionSpec {
+    let mut new = default_json(kind);
+    let old = serde_json::to_value(from).unwrap_or(Value::Null);
+    if let (Some(n), Some(o)) = (new.as_object_mut(), old.as_object()) {
+        for key in ["depth_mm", "width_mm", "diameter_mm"] {
+            if n.contains_key(key) {
+                if let Some(v) = o.get(key) {
+                    n.insert(key.into(), v.clone());
+                }
+            }
+        }
+    }
+    serde_json::from_value(new).unwrap_or_else(|_| from.clone())
+}
+
+fn place_of<'a>(obj: &'a Value, place: Place) -> Option<&'a Map<String, Value>> {
+    match place {
+        Place::Member => obj.as_object(),
+        Place::Section => obj.get("section").and_then(Value::as_object),
+        Place::Material => obj.get("material").and_then(Value::as_object),
+    }
+}
+
+fn place_of_mut(obj: &mut Value, place: Place) -> Option<&mut Map<String, Value>> {
+    match place {
+        Place::Member => obj.as_object_mut(),
+        Place::Section => obj.get_mut("section").and_then(Value::as_object_mut),
+        Place::Material => obj.get_mut("material").and_then(Value::as_object_mut),
+    }
+}
+
+/// The text a field shows for a member ("" for an absent option).
+pub fn read(member: &Member, place: Place, key: &str) -> String {
+    let v = serde_json::to_value(member).unwrap_or(Value::Null);
+    match place_of(&v, place).and_then(|o| o.get(key)) {
+        Some(Value::Number(n)) => n.as_f64().map(for_input).unwrap_or_default(),
+        Some(Value::String(s)) => s.clone(),
+        Some(Value::Bool(b)) => b.to_string(),
+        _ => match key {
+            // Defaults that serde leaves out of the file.
+            "k_major" | "k_minor" | "k_torsion" => "1".into(),
+            _ => String::new(),
+        },
+    }
+}
+
+fn set(member: &Member, place: Place, key: &str, value: Option<Value>) -> Result<Member, String> {
+    let mut v = serde_json::to_value(member).map_err(|e| format!("{key}: {e}"))?;
+    let obj = place_of_mut(&mut v, place).ok_or_else(|| format!("{key}: cannot be set here"))?;
+    match value {
+        Some(x) => {
+            obj.insert(key.to_string(), x);
+        }
+        None => {
+            obj.remove(key);
+        }
+    }
+    serde_json::from_value(v).map_err(|e| format!("{key}: {e}"))
+}
+
+fn number(v: f64) -> Value {
+    serde_json::Number::from_f64(v).map_or(Value::Null, Value::Number)
+}
+
+/// The member with `text` typed into `field`, or the message beside the
+/// field. The engine then has its say through [`engine_objection`].
+pub fn apply(member: &Member, field: &Field, text: &str) -> Result<Member, String> {
+    let key = field.key;
+    let value = match field.rule {
+        Rule::Text => {
+            let t = text.trim();
+            if t.is_empty() {
+                return Err(NumError::Empty.message(key));
+            }
+            Some(Value::String(t.to_string()))
+        }
+        Rule::Positive | Rule::NonNegative => {
+            let x = parse_number(text).map_err(|e| e.message(key))?;
+            check_sign(key, x, field.rule)?;
+            Some(number(x))
+        }
+        Rule::OptPositive | Rule::OptNonNegative => {
+            if text.trim().is_empty() {
+                None
+            } else {
+                let x = parse_number(text).map_err(|e| e.message(key))?;
+                check_sign(key, x, field.rule)?;
+                Some(number(x))
+            }
+        }
+    };
+    set(member, field.place, key, value)
+}
+
+fn check_sign(key: &str, x: f64, rule: Rule) -> Result<(), String> {
+    match rule {
+        Rule::Positive | Rule::OptPositive if x <= 0.0 => {
+            Err(format!("{key}: must be a number greater than zero"))
+        }
+        Rule::NonNegative | Rule::OptNonNegative if x < 0.0 => {
+            Err(format!("{key}: must be zero or more"))
+        }
+        _ => Ok(()),
+    }
+}
+
+/// The member with option `value` chosen in a select ("" removes the key).
+pub fn apply_choice(member: &Member, choice: &Choice, value: &str) -> Result<Member, String> {
+    let v = if value.is_empty() {
+        None
+    } else if choice.key == "service_class" {
+        let n: u64 = value
+            .trim()
+            .parse()
+            .map_err(|_| format!("{}: expected 1, 2 or 3", choice.key))?;
+        Some(Value::from(n))
+    } else if choice.key == "csa_n" {
+        Some(number(
+            parse_number(value).map_err(|e| e.message(choice.key))?,
+        ))
+    } else {
+        Some(Value::String(value.to_string()))
+    };
+    set(member, choice.place, choice.key, v)
+}
+
+fn innermost(e: &Error) -> &Error {
+    match e {
+        Error::InMember { source, .. } => innermost(source),
+        other => other,
+    }
+}
+
+/// The engine's message about `key`, when checking `member` fails because
+/// of that field (the message names the field, e.g. "depth_mm: ...").
+pub fn engine_objection(member: &Member, key: &str) -> Option<String> {
+    let e = match Prepared::new(member).and_then(|p| p.check()) {
+        Ok(_) => return None,
+        Err(e) => e,
+    };
+    let field = e.field()?;
+    let same = field == key || (field == "material" && matches!(key, "grade"));
+    same.then(|| innermost(&e).to_string())
+}
+
+/// The engine's error in words without the member prefix.
+pub fn error_text(e: &Error) -> String {
+    innermost(e).to_string()
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::demo::sample_member;
+
+    fn field(key: &str) -> Field {
+        section_fields("rect")
+            .iter()
+            .chain(MEMBER_FIELDS.iter())
+            .chain(material_fields(MaterialMode::Steel).iter())
+            .copied()
+            .chain([K_MAJOR, LCR_MINOR])
+            .find(|f| f.key == key)
+            .unwrap()
+    }
+
+    #[test]
+    fn every_kind_has_fields_that_read_back() {
+        let base = sample_member("A");
+        for (kind, _) in KINDS {
+            let mut m = base.clone();
+            m.section = section_of_kind(kind, &base.section);
+            assert_eq!(kind_of(&m.section), kind);
+            for fld in section_fields(kind) {
+                let text = read(&m, fld.place, fld.key);
+                if matches!(fld.rule, Rule::Positive | Rule::Text) {
+                    assert!(!text.is_empty(), "{kind} {}", fld.key);
+                }
+                // Writing back what was read gives the same member.
+                if !text.is_empty() {
+                    assert_eq!(apply(&m, fld, &text).unwrap(), m, "{kind} {}", fld.key);
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn switching_kind_keeps_overall_sizes() {
+        let base = sample_member("A");
+        let s = section_of_kind("i", &base.section);
+        let v = serde_json::to_value(&s).unwrap();
+        assert_eq!(v["depth_mm"], 100.0);
+        assert_eq!(v["width_mm"], 60.0);
+        assert_eq!(v["flange_mm"], 15.0);
+    }
+
+    #[test]
+    fn typed_text_sets_the_member() {
+        let m = sample_member("A");
+        let m2 = apply(&m, &field("depth_mm"), "120,5").unwrap();
+        assert_eq!(
+            m2.section,
+            SectionSpec::Rect(strutline_core::section::Rect {
+                depth_mm: 120.5,
+                width_mm: 60.0
+            })
+        );
+        let m3 = apply(&m, &field("length_mm"), "3 200").unwrap();
+        assert_eq!(m3.length_mm, 3200.0);
+        let m4 = apply(&m, &field("lcr_minor_mm"), "1800").unwrap();
+        assert_eq!(m4.lcr_minor_mm, Some(1800.0));
+        let m5 = apply(&m4, &field("lcr_minor_mm"), " ").unwrap();
+        assert_eq!(m5.lcr_minor_mm, None);
+        let m6 = apply(&m, &field("k_major"), "0.65").unwrap();
+        assert_eq!(m6.k_major, 0.65);
+        assert_eq!(read(&m6, Place::Member, "k_major"), "0.65");
+        assert_eq!(read(&m, Place::Member, "k_major"), "1");
+        let m7 = apply(&m, &field("fy_mpa"), "460").unwrap();
+        assert_eq!(read(&m7, Place::Material, "fy_mpa"), "460");
+    }
+
+    #[test]
+    fn bad_text_gives_message_naming_the_field() {
+        let m = sample_member("A");
+        assert_eq!(
+            apply(&m, &field("depth_mm"), "0").unwrap_err(),
+            "depth_mm: must be a number greater than zero"
+        );
+        assert_eq!(
+            apply(&m, &field("depth_mm"), "abc").unwrap_err(),
+            "depth_mm: must be a number (digits, with a point or a comma as decimal mark)"
+        );
+        assert_eq!(
+            apply(&m, &field("axial_kn"), "-5").unwrap_err(),
+            "axial_kn: must be zero or more"
+        );
+        assert_eq!(
+            apply(&m, &field("length_mm"), "").unwrap_err(),
+            "length_mm: enter a value"
+        );
+        assert!(apply(&m, &field("axial_kn"), "0").is_ok());
+    }
+
+    #[test]
+    fn choices_set_and_clear_options() {
+        let m = sample_member("A");
+        let c = &method_choices(Method::En1993)[1];
+        let m2 = apply_choice(&m, c, "c").unwrap();
+        assert_eq!(m2.curve_minor, Some(strutline_core::member::Curve::C));
+        assert_eq!(apply_choice(&m2, c, "").unwrap().curve_minor, None);
+        let sc = &method_choices(Method::En1995)[0];
+        assert_eq!(apply_choice(&m, sc, "3").unwrap().service_class, Some(3));
+        let n = &method_choices(Method::CsaS16)[0];
+        assert_eq!(apply_choice(&m, n, "2.24").unwrap().csa_n, Some(2.24));
+        let mut i = m.clone();
+        i.section = section_of_kind("i", &m.section);
+        let make = &section_choices("i")[0];
+        let welded = apply_choice(&i, make, "welded").unwrap();
+        assert!(
+            matches!(welded.section, SectionSpec::I(ref s) if s.make == strutline_core::section::IMake::Welded)
+        );
+    }
+
+    #[test]
+    fn engine_objection_names_only_its_field() {
+        let mut m = sample_member("A");
+        assert_eq!(engine_objection(&m, "length_mm"), None);
+        m.gamma_m1 = Some(9.0);
+        let msg = engine_objection(&m, "gamma_m1").unwrap();
+        assert!(msg.starts_with("gamma_m1:"), "{msg}");
+        assert_eq!(engine_objection(&m, "length_mm"), None);
+    }
+
+    #[test]
+    fn material_modes() {
+        for mode in [
+            MaterialMode::Grade,
+            MaterialMode::Steel,
+            MaterialMode::Timber,
+        ] {
+            assert_eq!(MaterialMode::from_value(mode.value()), mode);
+            assert_eq!(MaterialMode::of(&mode.default_spec()), mode);
+            let mut m = sample_member("A");
+            m.material = mode.default_spec();
+            for fld in material_fields(mode) {
+                let t = read(&m, fld.place, fld.key);
+                if !t.is_empty() {
+                    assert_eq!(apply(&m, fld, &t).unwrap(), m);
+                }
+            }
+        }
+    }
+}

@@ -1,0 +1,202 @@
+//! Numbers as people type them: a decimal comma or a decimal point, spaces
+//! as thousands separators; and numbers as the app shows them.
+
+/// Why a piece of text is not a usable number. The message names the
+/// member-file field, the way the engine's errors do.
+#[derive(Debug, Clone, PartialEq, Eq)]
+pub enum NumError {
+    /// Nothing typed where a value is required.
+    Empty,
+    /// Not a number at all.
+    NotNumber,
+    /// Both a comma and a point: which is the decimal mark is unclear.
+    MixedMarks,
+}
+
+impl NumError {
+    /// The message shown beside the field.
+    pub fn message(&self, field: &str) -> String {
+        match self {
+            NumError::Empty => format!("{field}: enter a value"),
+            NumError::NotNumber => {
+                format!(
+                    "{field}: must be a number (digits, with a point or a comma as decimal mark)"
+                )
+            }
+            NumError::MixedMarks => {
+                format!("{field}: use either a comma or a point as decimal mark, not both")
+            }
+        }
+    }
+}
+
+/// Reads a number typed with a decimal comma or point.
+pub fn parse_number(text: &str) -> Result<f64, NumError> {
+    let cleaned: String = text
+        .chars()
+        .filter(|c| !matches!(c, ' ' | '\u{a0}' | '\u{202f}' | '_'))
+        .collect();
+    if cleaned.is_empty() {
+        return Err(NumError::Empty);
+    }
+    let has_comma = cleaned.contains(',');
+    let has_point = cleaned.contains('.');
+    if has_comma && has_point {
+        return Err(NumError::MixedMarks);
+    }
+    let normal = if has_comma {
+        if cleaned.matches(',').count() > 1 {
+            return Err(NumError::NotNumber);
+        }
+        cleaned.replace(',', ".")
+    } else {
+        cleaned
+    };
+    // Rust also reads "inf" and "NaN"; only digits are numbers here.
+    if !normal
+        .chars()
+        .all(|c| c.is_ascii_digit() || matches!(c, '.' | '-' | '+' | 'e' | 'E'))
+        || !normal.chars().any(|c| c.is_ascii_digit())
+    {
+        return Err(NumError::NotNumber);
+    }
+    match normal.parse::<f64>() {
+        Ok(v) if v.is_finite() => Ok(v),
+        _ => Err(NumError::NotNumber),
+    }
+}
+
+/// Reads an optional number: empty text is `None`.
+pub fn parse_optional(text: &str) -> Result<Option<f64>, NumError> {
+    if text.trim().is_empty() {
+        Ok(None)
+    } else {
+        parse_number(text).map(Some)
+    }
+}
+
+/// A number for a text field: as short as exact, no trailing zeros.
+pub fn for_input(v: f64) -> String {
+    if v.is_finite() {
+        let s = format!("{v}");
+        if s == "-0" {
+            "0".into()
+        } else {
+            s
+        }
+    } else {
+        String::new()
+    }
+}
+
+/// A number with a fixed count of decimals ("0.734"); not-finite reads "—".
+pub fn fixed(v: f64, decimals: usize) -> String {
+    if v.is_finite() {
+        format!("{v:.decimals$}")
+    } else {
+        "—".into()
+    }
+}
+
+/// A value of the working, with about four significant figures; very large
+/// or very small magnitudes in powers of ten ("1.234e6").
+pub fn working(v: f64) -> String {
+    if !v.is_finite() {
+        return "—".into();
+    }
+    let a = v.abs();
+    if a == 0.0 {
+        return "0".into();
+    }
+    if !(1e-3..1e6).contains(&a) {
+        let exp = a.log10().floor() as i32;
+        let mant = v / 10f64.powi(exp);
+        // Rounding can carry the mantissa to 10.
+        let (mant, exp) = if mant.abs() >= 9.9995 {
+            (mant / 10.0, exp + 1)
+        } else {
+            (mant, exp)
+        };
+        return format!("{mant:.3}e{exp}");
+    }
+    let digits = 3 - a.log10().floor() as i32;
+    let decimals = digits.clamp(0, 6) as usize;
+    let s = format!("{v:.decimals$}");
+    if s.contains('.') {
+        s.trim_end_matches('0').trim_end_matches('.').to_string()
+    } else {
+        s
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+
+    #[test]
+    fn reads_comma_and_point() {
+        assert_eq!(parse_number("12.5"), Ok(12.5));
+        assert_eq!(parse_number("12,5"), Ok(12.5));
+        assert_eq!(parse_number(" 3 000 "), Ok(3000.0));
+        assert_eq!(parse_number("-0,25"), Ok(-0.25));
+        assert_eq!(parse_number("1e3"), Ok(1000.0));
+        assert_eq!(parse_number(",5"), Ok(0.5));
+    }
+
+    #[test]
+    fn refuses_what_is_not_a_number() {
+        assert_eq!(parse_number(""), Err(NumError::Empty));
+        assert_eq!(parse_number("   "), Err(NumError::Empty));
+        assert_eq!(parse_number("abc"), Err(NumError::NotNumber));
+        assert_eq!(parse_number("inf"), Err(NumError::NotNumber));
+        assert_eq!(parse_number("NaN"), Err(NumError::NotNumber));
+        assert_eq!(parse_number("1,2,3"), Err(NumError::NotNumber));
+        assert_eq!(parse_number("1.234,5"), Err(NumError::MixedMarks));
+        assert_eq!(parse_number("12mm"), Err(NumError::NotNumber));
+        assert_eq!(parse_number("."), Err(NumError::NotNumber));
+        assert_eq!(parse_number("1e999"), Err(NumError::NotNumber));
+    }
+
+    #[test]
+    fn messages_name_the_field() {
+        assert_eq!(
+            NumError::NotNumber.message("depth_mm"),
+            "depth_mm: must be a number (digits, with a point or a comma as decimal mark)"
+        );
+        assert!(NumError::Empty
+            .message("length_mm")
+            .starts_with("length_mm:"));
+    }
+
+    #[test]
+    fn optional_empty_is_none() {
+        assert_eq!(parse_optional(""), Ok(None));
+        assert_eq!(parse_optional("2,5"), Ok(Some(2.5)));
+        assert_eq!(parse_optional("x"), Err(NumError::NotNumber));
+    }
+
+    #[test]
+    fn formats() {
+        assert_eq!(for_input(300.0), "300");
+        assert_eq!(for_input(0.65), "0.65");
+        assert_eq!(for_input(-0.0), "0");
+        assert_eq!(fixed(0.7344, 3), "0.734");
+        assert_eq!(fixed(1.0, 3), "1.000");
+        assert_eq!(fixed(f64::INFINITY, 3), "—");
+        assert_eq!(working(1234.567), "1235");
+        assert_eq!(working(12.3456), "12.35");
+        assert_eq!(working(0.73449), "0.7345");
+        assert_eq!(working(0.5), "0.5");
+        assert_eq!(working(210000.0), "210000");
+        assert_eq!(working(8.5e7), "8.500e7");
+        assert_eq!(working(9.99999e6), "1.000e7");
+        assert_eq!(working(2.5e-5), "2.500e-5");
+        assert_eq!(working(0.0), "0");
+    }
+}
