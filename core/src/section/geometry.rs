@@ -1,2 +1,678 @@
-//! Building blocks for exact section properties (PLACEHOLDER until the
-//! sections work lands).
+//! Building blocks for exact section properties.
+//!
+//! A section is composed, with signs, from two primitives whose integrals
+//! are known in closed form: axis-parallel rectangles and quarter discs.
+//! A fillet (the "spandrel" between two faces meeting at a right angle and
+//! a circular arc of radius r tangent to both) is a square r x r minus a
+//! quarter disc; a rounded corner is a square minus a spandrel; a hollow
+//! corner is an outer rounded corner minus an inner one, with independent
+//! radii (so non-concentric corners are exact too).
+//!
+//! Coordinates: `y` horizontal (along the width), `z` vertical (along the
+//! depth), in mm, origin wherever the caller puts it (the shape modules
+//! use the bottom-left corner of the bounding box). [`Moments`] holds the
+//! integrals about that origin; the parallel-axis theorem turns them into
+//! centroidal second moments.
+//!
+//! Everything here works on fixed-size arrays on the stack: nothing
+//! allocates, so the property computation can sit in a hot loop.
+//!
+//! Plastic moduli use exact clipping of the primitives by an axis-parallel
+//! line (a quarter disc cut by a chord has closed-form area and first
+//! moment). For lines at any angle (angle sections about their principal
+//! axes) [`Poly`] integrates over a polygon of the outline, clipped by a
+//! half-plane with Green's theorem.
+
+use std::f64::consts::PI;
+
+/// Integrals of a plane region about the origin: A, ∫y, ∫z, ∫y², ∫z², ∫yz.
+#[derive(Debug, Clone, Copy, Default, PartialEq)]
+pub struct Moments {
+    /// Area, mm2.
+    pub a: f64,
+    /// ∫ y dA, mm3.
+    pub sy: f64,
+    /// ∫ z dA, mm3.
+    pub sz: f64,
+    /// ∫ y² dA, mm4.
+    pub yy: f64,
+    /// ∫ z² dA, mm4.
+    pub zz: f64,
+    /// ∫ y z dA, mm4.
+    pub yz: f64,
+}
+
+impl Moments {
+    /// `self + sign * other`.
+    pub fn add(self, o: Moments, sign: f64) -> Moments {
+        Moments {
+            a: self.a + sign * o.a,
+            sy: self.sy + sign * o.sy,
+            sz: self.sz + sign * o.sz,
+            yy: self.yy + sign * o.yy,
+            zz: self.zz + sign * o.zz,
+            yz: self.yz + sign * o.yz,
+        }
+    }
+
+    /// Centroid (y, z).
+    pub fn centroid(&self) -> (f64, f64) {
+        (self.sy / self.a, self.sz / self.a)
+    }
+
+    /// Centroidal second moments (I_y = ∫z'², I_z = ∫y'², I_yz = ∫y'z').
+    pub fn centroidal(&self) -> (f64, f64, f64) {
+        let (yc, zc) = self.centroid();
+        (
+            self.zz - self.a * zc * zc,
+            self.yy - self.a * yc * yc,
+            self.yz - self.a * yc * zc,
+        )
+    }
+}
+
+/// A primitive region.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum Prim {
+    /// The rectangle [y0, y1] x [z0, z1] (y0 <= y1, z0 <= z1).
+    Rect {
+        /// Left edge.
+        y0: f64,
+        /// Right edge.
+        y1: f64,
+        /// Bottom edge.
+        z0: f64,
+        /// Top edge.
+        z1: f64,
+    },
+    /// A quarter disc of radius `r` centred at (cy, cz), lying in the
+    /// quadrant given by the signs `qy`, `qz` (each +1 or -1).
+    QuarterDisc {
+        /// Centre y.
+        cy: f64,
+        /// Centre z.
+        cz: f64,
+        /// Radius.
+        r: f64,
+        /// +1: the disc lies at y >= cy; -1: at y <= cy.
+        qy: f64,
+        /// +1: the disc lies at z >= cz; -1: at z <= cz.
+        qz: f64,
+    },
+}
+
+/// Area and first moment ∫z dA of the part of a quarter disc (centre
+/// height `cz`, radius `r`, side `qz`) lying at z <= c.
+fn quarter_disc_below(cz: f64, r: f64, qz: f64, c: f64) -> (f64, f64) {
+    if r <= 0.0 {
+        return (0.0, 0.0);
+    }
+    // Local coordinate t = qz (z - cz) in [0, r]; the width at t is sqrt(r² - t²).
+    let (lo, hi) = if qz > 0.0 {
+        (0.0, (c - cz).clamp(0.0, r))
+    } else {
+        ((cz - c).clamp(0.0, r), r)
+    };
+    let area_to = |t: f64| {
+        let s = (r * r - t * t).max(0.0).sqrt();
+        0.5 * (t * s + r * r * (t / r).clamp(-1.0, 1.0).asin())
+    };
+    let moment_to = |t: f64| -(r * r - t * t).max(0.0).powf(1.5) / 3.0;
+    let a = area_to(hi) - area_to(lo);
+    let m = moment_to(hi) - moment_to(lo);
+    (a, cz * a + qz * m)
+}
+
+impl Prim {
+    /// Integrals about the origin.
+    pub fn moments(&self) -> Moments {
+        match *self {
+            Prim::Rect { y0, y1, z0, z1 } => {
+                let (w, h) = (y1 - y0, z1 - z0);
+                let a = w * h;
+                let (yc, zc) = (0.5 * (y0 + y1), 0.5 * (z0 + z1));
+                Moments {
+                    a,
+                    sy: a * yc,
+                    sz: a * zc,
+                    yy: a * (yc * yc + w * w / 12.0),
+                    zz: a * (zc * zc + h * h / 12.0),
+                    yz: a * yc * zc,
+                }
+            }
+            Prim::QuarterDisc { cy, cz, r, qy, qz } => {
+                let a = PI * r * r / 4.0;
+                let d = 4.0 * r / (3.0 * PI);
+                // About the centre: ∫y'² = ∫z'² = π r⁴ / 16, ∫y'z' = qy qz r⁴ / 8.
+                let i0 = PI * r.powi(4) / 16.0;
+                let p0 = qy * qz * r.powi(4) / 8.0;
+                let (fy, fz) = (qy * d * a, qz * d * a);
+                Moments {
+                    a,
+                    sy: cy * a + fy,
+                    sz: cz * a + fz,
+                    yy: i0 + 2.0 * cy * fy + cy * cy * a,
+                    zz: i0 + 2.0 * cz * fz + cz * cz * a,
+                    yz: p0 + cy * fz + cz * fy + cy * cz * a,
+                }
+            }
+        }
+    }
+
+    /// The same primitive with y and z exchanged.
+    pub fn swapped(&self) -> Prim {
+        match *self {
+            Prim::Rect { y0, y1, z0, z1 } => Prim::Rect {
+                y0: z0,
+                y1: z1,
+                z0: y0,
+                z1: y1,
+            },
+            Prim::QuarterDisc { cy, cz, r, qy, qz } => Prim::QuarterDisc {
+                cy: cz,
+                cz: cy,
+                r,
+                qy: qz,
+                qz: qy,
+            },
+        }
+    }
+
+    /// Area and ∫z dA of the part at z <= c.
+    pub fn below(&self, c: f64) -> (f64, f64) {
+        match *self {
+            Prim::Rect { y0, y1, z0, z1 } => {
+                let top = c.clamp(z0, z1);
+                let a = (y1 - y0) * (top - z0);
+                (a, a * 0.5 * (z0 + top))
+            }
+            Prim::QuarterDisc { cz, r, qz, .. } => quarter_disc_below(cz, r, qz, c),
+        }
+    }
+
+    /// Extent in z.
+    pub fn z_range(&self) -> (f64, f64) {
+        match *self {
+            Prim::Rect { z0, z1, .. } => (z0, z1),
+            Prim::QuarterDisc { cz, r, qz, .. } => {
+                if qz > 0.0 {
+                    (cz, cz + r)
+                } else {
+                    (cz - r, cz)
+                }
+            }
+        }
+    }
+}
+
+/// The axis a plastic neutral line runs parallel to.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Axis {
+    /// A line z = c (bending about y).
+    Y,
+    /// A line y = c (bending about z).
+    Z,
+}
+
+const PARTS: usize = 24;
+
+/// A signed sum of primitives, on the stack.
+#[derive(Debug, Clone, Copy)]
+pub struct Parts {
+    items: [(Prim, f64); PARTS],
+    n: usize,
+}
+
+impl Default for Parts {
+    fn default() -> Self {
+        Self::new()
+    }
+}
+
+impl Parts {
+    /// No parts.
+    pub fn new() -> Parts {
+        Parts {
+            items: [(
+                Prim::Rect {
+                    y0: 0.0,
+                    y1: 0.0,
+                    z0: 0.0,
+                    z1: 0.0,
+                },
+                0.0,
+            ); PARTS],
+            n: 0,
+        }
+    }
+
+    fn push(&mut self, p: Prim, sign: f64) {
+        debug_assert!(self.n < PARTS, "Parts capacity");
+        if let Some(slot) = self.items.get_mut(self.n) {
+            *slot = (p, sign);
+            self.n += 1;
+        }
+    }
+
+    fn iter(&self) -> impl Iterator<Item = &(Prim, f64)> {
+        self.items.iter().take(self.n)
+    }
+
+    /// Adds the rectangle [y0, y1] x [z0, z1].
+    pub fn rect(&mut self, y0: f64, y1: f64, z0: f64, z1: f64, sign: f64) {
+        self.push(Prim::Rect { y0, y1, z0, z1 }, sign);
+    }
+
+    /// Adds a quarter disc.
+    pub fn quarter_disc(&mut self, cy: f64, cz: f64, r: f64, qy: f64, qz: f64, sign: f64) {
+        if r > 0.0 {
+            self.push(Prim::QuarterDisc { cy, cz, r, qy, qz }, sign);
+        }
+    }
+
+    /// Adds (sign +1) or removes (-1) the spandrel of radius `r` in the
+    /// right-angled corner at (y, z) whose faces run towards +qy and +qz:
+    /// the square [y, y + qy r] x [z, z + qz r] less the quarter disc
+    /// centred at the far corner of that square.
+    pub fn spandrel(&mut self, y: f64, z: f64, r: f64, qy: f64, qz: f64, sign: f64) {
+        if r <= 0.0 {
+            return;
+        }
+        let (y1, z1) = (y + qy * r, z + qz * r);
+        self.rect(y.min(y1), y.max(y1), z.min(z1), z.max(z1), sign);
+        self.quarter_disc(y1, z1, r, -qy, -qz, -sign);
+    }
+
+    /// Integrals about the origin.
+    pub fn moments(&self) -> Moments {
+        self.iter()
+            .fold(Moments::default(), |m, (p, s)| m.add(p.moments(), *s))
+    }
+
+    fn oriented(p: &Prim, axis: Axis) -> Prim {
+        match axis {
+            Axis::Y => *p,
+            Axis::Z => p.swapped(),
+        }
+    }
+
+    /// Net area on the low side of the line (z <= c for `Axis::Y`, y <= c for `Axis::Z`).
+    pub fn area_below(&self, axis: Axis, c: f64) -> f64 {
+        self.iter()
+            .map(|(p, s)| s * Self::oriented(p, axis).below(c).0)
+            .sum()
+    }
+
+    /// ∫ |d| dA where d is the distance from the line (z = c or y = c).
+    pub fn abs_moment(&self, axis: Axis, c: f64) -> f64 {
+        self.iter()
+            .map(|(p, s)| {
+                let q = Self::oriented(p, axis);
+                let m = q.moments();
+                let (ab, qb) = q.below(c);
+                let above = (m.sz - qb) - c * (m.a - ab);
+                let below = c * ab - qb;
+                s * (above + below)
+            })
+            .sum()
+    }
+
+    /// Extent across the line direction.
+    pub fn range(&self, axis: Axis) -> (f64, f64) {
+        self.iter()
+            .map(|(p, _)| Self::oriented(p, axis).z_range())
+            .fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), (a, b)| {
+                (lo.min(a), hi.max(b))
+            })
+    }
+
+    /// Plastic modulus for bending about `axis`: ∫|d| dA about the
+    /// equal-area line. `symmetric_at` gives the line when the section is
+    /// symmetric about it (no search).
+    pub fn plastic_modulus(&self, axis: Axis, symmetric_at: Option<f64>) -> f64 {
+        let c = match symmetric_at {
+            Some(c) => c,
+            None => {
+                let half = 0.5 * self.moments().a;
+                let (lo, hi) = self.range(axis);
+                find_root(|c| self.area_below(axis, c) - half, lo, hi, 1e-12 * half)
+            }
+        };
+        self.abs_moment(axis, c)
+    }
+}
+
+/// Root of a monotone function on [a, b] by the Illinois variant of
+/// regula falsi (bracketing, superlinear). Returns when |f| <= `ftol` or
+/// the bracket has collapsed.
+pub fn find_root<F: Fn(f64) -> f64>(f: F, mut a: f64, mut b: f64, ftol: f64) -> f64 {
+    let mut fa = f(a);
+    let mut fb = f(b);
+    if fa.abs() <= ftol {
+        return a;
+    }
+    if fb.abs() <= ftol {
+        return b;
+    }
+    if fa.signum() == fb.signum() {
+        return 0.5 * (a + b);
+    }
+    let width = (b - a).abs();
+    let mut side = 0i8;
+    let mut c = 0.5 * (a + b);
+    for _ in 0..200 {
+        c = (a * fb - b * fa) / (fb - fa);
+        if !c.is_finite() {
+            c = 0.5 * (a + b);
+        }
+        let fc = f(c);
+        if fc.abs() <= ftol || (b - a).abs() <= 1e-14 * width {
+            return c;
+        }
+        if fc.signum() == fb.signum() {
+            b = c;
+            fb = fc;
+            if side == -1 {
+                fa *= 0.5;
+            }
+            side = -1;
+        } else {
+            a = c;
+            fa = fc;
+            if side == 1 {
+                fb *= 0.5;
+            }
+            side = 1;
+        }
+    }
+    c
+}
+
+const POLY: usize = 64;
+
+/// A closed polygon (last point joins the first), on the stack.
+/// Counter-clockwise for a solid outline, clockwise for a hole.
+#[derive(Debug, Clone, Copy)]
+pub struct Poly {
+    pts: [(f64, f64); POLY],
+    n: usize,
+}
+
+impl Default for Poly {
+    fn default() -> Self {
+        Self::new()
+    }
+}
+
+impl Poly {
+    /// No points.
+    pub fn new() -> Poly {
+        Poly {
+            pts: [(0.0, 0.0); POLY],
+            n: 0,
+        }
+    }
+
+    /// Appends a vertex (skipping a repeat of the previous one).
+    pub fn push(&mut self, y: f64, z: f64) {
+        if let Some(&(py, pz)) = self.points().last() {
+            if (py - y).abs() < 1e-12 && (pz - z).abs() < 1e-12 {
+                return;
+            }
+        }
+        debug_assert!(self.n < POLY, "Poly capacity");
+        if let Some(slot) = self.pts.get_mut(self.n) {
+            *slot = (y, z);
+            self.n += 1;
+        }
+    }
+
+    /// Appends an arc of radius `r` about (cy, cz) from angle `a0` to `a1`
+    /// (radians from +y towards +z) in `segs` chords; a zero radius adds
+    /// the centre only.
+    pub fn arc(&mut self, cy: f64, cz: f64, r: f64, a0: f64, a1: f64, segs: usize) {
+        if r <= 0.0 {
+            self.push(cy, cz);
+            return;
+        }
+        let segs = segs.max(1);
+        for i in 0..=segs {
+            let a = a0 + (a1 - a0) * i as f64 / segs as f64;
+            self.push(cy + r * a.cos(), cz + r * a.sin());
+        }
+    }
+
+    /// The vertices.
+    pub fn points(&self) -> &[(f64, f64)] {
+        self.pts.get(..self.n).unwrap_or(&[])
+    }
+
+    /// Reverses the direction (a solid outline becomes a hole).
+    pub fn reverse(&mut self) {
+        if let Some(pts) = self.pts.get_mut(..self.n) {
+            pts.reverse();
+        }
+    }
+
+    /// Moves every vertex by (dy, dz).
+    pub fn shift(&mut self, dy: f64, dz: f64) {
+        let n = self.n;
+        for p in self.pts.iter_mut().take(n) {
+            p.0 += dy;
+            p.1 += dz;
+        }
+    }
+
+    fn edges(&self) -> impl Iterator<Item = ((f64, f64), (f64, f64))> + '_ {
+        let pts = self.points();
+        let n = pts.len();
+        (0..n).filter_map(move |i| Some((*pts.get(i)?, *pts.get((i + 1) % n)?)))
+    }
+
+    /// Signed area (positive counter-clockwise).
+    pub fn area(&self) -> f64 {
+        0.5 * self
+            .edges()
+            .map(|((y0, z0), (y1, z1))| y0 * z1 - y1 * z0)
+            .sum::<f64>()
+    }
+
+    /// For the line t = c, with t = -y sinθ + z cosθ the distance normal
+    /// to the direction θ: (area where t >= c, ∫(t - c) dA there, area
+    /// where t <= c, ∫(t - c) dA there). Green's theorem over the edges
+    /// clipped to each side; the closing pieces along the line contribute
+    /// nothing because t - c vanishes on it.
+    pub fn split(&self, sin: f64, cos: f64, c: f64) -> (f64, f64, f64, f64) {
+        let (mut a_hi, mut m_hi, mut a_lo, mut m_lo) = (0.0, 0.0, 0.0, 0.0);
+        // Integrals of -t ds and -t²/2 ds along a straight piece.
+        let piece = |sa: f64, ta: f64, sb: f64, tb: f64| {
+            let ds = sb - sa;
+            (
+                -0.5 * (ta + tb) * ds,
+                -ds * (ta * ta + ta * tb + tb * tb) / 6.0,
+            )
+        };
+        for ((y0, z0), (y1, z1)) in self.edges() {
+            let (s0, t0) = (y0 * cos + z0 * sin, -y0 * sin + z0 * cos - c);
+            let (s1, t1) = (y1 * cos + z1 * sin, -y1 * sin + z1 * cos - c);
+            let mut add = |hi: bool, (a, m): (f64, f64)| {
+                if hi {
+                    a_hi += a;
+                    m_hi += m;
+                } else {
+                    a_lo += a;
+                    m_lo += m;
+                }
+            };
+            if (t0 >= 0.0) == (t1 >= 0.0) {
+                add(t0 >= 0.0, piece(s0, t0, s1, t1));
+            } else {
+                let lam = t0 / (t0 - t1);
+                let sx = s0 + lam * (s1 - s0);
+                add(t0 >= 0.0, piece(s0, t0, sx, 0.0));
+                add(t1 >= 0.0, piece(sx, 0.0, s1, t1));
+            }
+        }
+        (a_hi, m_hi, a_lo, m_lo)
+    }
+
+    /// Range of t = -y sinθ + z cosθ over the vertices.
+    pub fn t_range(&self, sin: f64, cos: f64) -> (f64, f64) {
+        self.points()
+            .iter()
+            .map(|(y, z)| -y * sin + z * cos)
+            .fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), t| {
+                (lo.min(t), hi.max(t))
+            })
+    }
+
+    /// Plastic modulus for bending about an axis at angle θ (the
+    /// equal-area line parallel to it is found by [`find_root`]).
+    pub fn plastic_modulus(&self, theta: f64) -> f64 {
+        let (sin, cos) = theta.sin_cos();
+        let half = 0.5 * self.area();
+        let (lo, hi) = self.t_range(sin, cos);
+        let c = find_root(
+            |c| self.split(sin, cos, c).0 - half,
+            lo,
+            hi,
+            1e-12 * half.abs(),
+        );
+        let (_, m_hi, _, m_lo) = self.split(sin, cos, c);
+        m_hi - m_lo
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    use super::*;
+
+    fn close(a: f64, b: f64, tol: f64) {
+        assert!(
+            (a - b).abs() <= tol * b.abs().max(1.0),
+            "{a} vs {b} (tol {tol})"
+        );
+    }
+
+    #[test]
+    fn rectangle_closed_forms() {
+        let m = Prim::Rect {
+            y0: 0.0,
+            y1: 40.0,
+            z0: 0.0,
+            z1: 100.0,
+        }
+        .moments();
+        close(m.a, 4000.0, 1e-15);
+        let (iy, iz, iyz) = m.centroidal();
+        close(iy, 40.0 * 1e6 / 12.0, 1e-12);
+        close(iz, 100.0 * 64000.0 / 12.0, 1e-12);
+        close(iyz, 0.0, 1e-12);
+    }
+
+    #[test]
+    fn four_quarter_discs_make_a_disc() {
+        let mut p = Parts::new();
+        for (qy, qz) in [(1.0, 1.0), (-1.0, 1.0), (-1.0, -1.0), (1.0, -1.0)] {
+            p.quarter_disc(5.0, -3.0, 10.0, qy, qz, 1.0);
+        }
+        let m = p.moments();
+        close(m.a, PI * 100.0, 1e-14);
+        let (yc, zc) = m.centroid();
+        close(yc, 5.0, 1e-13);
+        close(zc, -3.0, 1e-13);
+        let (iy, iz, iyz) = m.centroidal();
+        close(iy, PI * 1e4 / 4.0, 1e-12);
+        close(iz, PI * 1e4 / 4.0, 1e-12);
+        assert!(iyz.abs() < 1e-9);
+        // Plastic modulus of a disc: d³/6.
+        close(p.plastic_modulus(Axis::Y, None), 8000.0 / 6.0, 1e-9);
+        close(p.plastic_modulus(Axis::Z, Some(5.0)), 8000.0 / 6.0, 1e-12);
+    }
+
+    #[test]
+    fn quarter_disc_product_moment_sign() {
+        // In the +y +z quadrant about its own corner, ∫yz = r⁴/8.
+        let m = Prim::QuarterDisc {
+            cy: 0.0,
+            cz: 0.0,
+            r: 2.0,
+            qy: 1.0,
+            qz: 1.0,
+        }
+        .moments();
+        close(m.yz, 2.0, 1e-15);
+        let m2 = Prim::QuarterDisc {
+            cy: 0.0,
+            cz: 0.0,
+            r: 2.0,
+            qy: -1.0,
+            qz: 1.0,
+        }
+        .moments();
+        close(m2.yz, -2.0, 1e-15);
+    }
+
+    #[test]
+    fn spandrel_area_and_centroid() {
+        let mut p = Parts::new();
+        p.spandrel(0.0, 0.0, 10.0, 1.0, 1.0, 1.0);
+        let m = p.moments();
+        close(m.a, 100.0 * (1.0 - PI / 4.0), 1e-13);
+        // Centroid of a spandrel: r (10 - 3π) / (12 - 3π) from the corner
+        // (a standard result for the area between a square and a quarter circle).
+        let d = 10.0 * (10.0 - 3.0 * PI) / (12.0 - 3.0 * PI);
+        let (yc, zc) = m.centroid();
+        close(yc, d, 1e-12);
+        close(zc, d, 1e-12);
+    }
+
+    #[test]
+    fn clipped_quarter_disc_halves() {
+        let q = Prim::QuarterDisc {
+            cy: 0.0,
+            cz: 0.0,
+            r: 1.0,
+            qy: 1.0,
+            qz: -1.0,
+        };
+        let (a, m) = q.below(0.0);
+        close(a, PI / 4.0, 1e-14);
+        close(m, -1.0 / 3.0, 1e-14);
+        let (a, _) = q.below(-1.0);
+        close(a, 0.0, 1e-14);
+        // Half height: segment area by the closed form.
+        let (a, _) = q.below(-0.5);
+        let t = 0.5f64;
+        let exact = PI / 4.0 - 0.5 * (t * (1.0 - t * t).sqrt() + t.asin());
+        close(a, exact, 1e-14);
+    }
+
+    #[test]
+    fn polygon_square_plastic_and_split() {
+        let mut p = Poly::new();
+        for (y, z) in [(0.0, 0.0), (2.0, 0.0), (2.0, 4.0), (0.0, 4.0)] {
+            p.push(y, z);
+        }
+        close(p.area(), 8.0, 1e-15);
+        // b h² / 4 = 2 * 16 / 4
+        close(p.plastic_modulus(0.0), 8.0, 1e-10);
+        close(p.plastic_modulus(std::f64::consts::FRAC_PI_2), 4.0, 1e-10);
+        let (ah, mh, al, ml) = p.split(0.0, 1.0, 1.0);
+        close(ah, 6.0, 1e-14);
+        close(mh, 9.0, 1e-14);
+        close(al, 2.0, 1e-14);
+        close(ml, -1.0, 1e-14);
+    }
+
+    #[test]
+    fn root_finder_on_a_line_and_a_curve() {
+        close(find_root(|x| 3.0 - x, 0.0, 10.0, 1e-14), 3.0, 1e-12);
+        close(
+            find_root(|x| x * x * x - 2.0, 0.0, 2.0, 1e-14),
+            2f64.cbrt(),
+            1e-10,
+        );
+    }
+}

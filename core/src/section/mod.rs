@@ -13,6 +13,8 @@ use serde::{Deserialize, Serialize};
 use crate::error::Result;
 
 pub mod geometry;
+pub mod outline;
+pub mod plates;
 pub mod shapes;
 
 /// How an I/H section was made: it selects the EN 1993-1-1 buckling curve.
