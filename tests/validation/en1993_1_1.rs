@@ -1,0 +1,194 @@
+//! Reference: EN 1993-1-1:2005, Eurocode 3: Design of steel structures —
+//! Part 1-1: General rules and rules for buildings (CEN, Brussels, 2005),
+//! clause 6.3.1 (uniform members in compression), Eqs. 6.47-6.50,
+//! Table 6.1 (imperfection factors) and Table 6.2 (selection of buckling
+//! curve), with the chi values of its Figure 6.4 as tabulated to four
+//! decimals in common design guides.
+//!
+//! The tabulated chi values below are recalled from memory of those
+//! tables and re-worked by hand from Eq. 6.49; they are not copied from a
+//! copy of the standard at hand.
+
+#![allow(
+    clippy::unwrap_used,
+    clippy::expect_used,
+    clippy::indexing_slicing,
+    clippy::panic
+)]
+
+use serde_json::json;
+use strutline_core::member::Curve;
+use strutline_core::method::en1993::chi;
+use strutline_core::{check_member, Member, Mode};
+use strutline_validation::assert_close;
+
+/// The design-guide tables print chi to four decimals: half a unit in the
+/// fourth decimal, absolute.
+const TABLE_4DP: f64 = 0.000_05 + 1e-12;
+
+fn assert_abs(actual: f64, expected: f64, tol: f64, what: &str) {
+    assert!(
+        (actual - expected).abs() <= tol,
+        "{what}: got {actual}, expected {expected} (tolerance {tol})"
+    );
+}
+
+fn curve(name: &str) -> Curve {
+    Curve::ALL.into_iter().find(|c| c.name() == name).unwrap()
+}
+
+#[test]
+fn table_6_1_imperfection_factors() {
+    // EN 1993-1-1 Table 6.1: a0 0.13, a 0.21, b 0.34, c 0.49, d 0.76 (exact).
+    for (name, alpha) in [
+        ("a0", 0.13),
+        ("a", 0.21),
+        ("b", 0.34),
+        ("c", 0.49),
+        ("d", 0.76),
+    ] {
+        assert_eq!(curve(name).alpha(), alpha, "Table 6.1 curve {name}");
+    }
+}
+
+#[test]
+fn chi_at_lambda_1_for_every_curve() {
+    // chi at lambda_bar = 1.0, Figure 6.4 / design-guide tables (recalled):
+    // a0 0.7253, a 0.6656, b 0.5970, c 0.5399, d 0.4671.
+    for (name, expected) in [
+        ("a0", 0.7253),
+        ("a", 0.6656),
+        ("b", 0.5970),
+        ("c", 0.5399),
+        ("d", 0.4671),
+    ] {
+        assert_abs(
+            chi(1.0, curve(name).alpha()),
+            expected,
+            TABLE_4DP,
+            &format!("chi(1.0), curve {name}"),
+        );
+    }
+}
+
+#[test]
+fn chi_at_other_slendernesses() {
+    // Design-guide tables of chi (recalled), lambda_bar 0.5, 1.5 and 2.0.
+    let points = [
+        (0.5, "a0", 0.9513),
+        (0.5, "a", 0.9243),
+        (0.5, "b", 0.8842),
+        (0.5, "c", 0.8430),
+        (0.5, "d", 0.7793),
+        (1.5, "b", 0.3422),
+        (1.5, "c", 0.3145),
+        (1.5, "d", 0.2766),
+        (2.0, "b", 0.2095),
+        (2.0, "c", 0.1962),
+        (2.0, "d", 0.1766),
+    ];
+    for (l, name, expected) in points {
+        assert_abs(
+            chi(l, curve(name).alpha()),
+            expected,
+            TABLE_4DP,
+            &format!("chi({l}), curve {name}"),
+        );
+    }
+}
+
+#[test]
+fn plateau_rule_6_3_1_2_4() {
+    // 6.3.1.2(4): for lambda_bar <= 0.2 buckling effects may be ignored, chi = 1.
+    for c in Curve::ALL {
+        assert_eq!(chi(0.2, c.alpha()), 1.0);
+        assert_eq!(chi(0.1, c.alpha()), 1.0);
+        assert!(chi(0.21, c.alpha()) < 1.0);
+    }
+}
+
+fn strut() -> Member {
+    // An invented strut: typed properties A = 5380 mm2, I_y = 8.356e7 mm4,
+    // I_z = 6.04e6 mm4, S355, 4.0 m pinned both ways, curves a (y) and b (z)
+    // given (as Table 6.2 gives for a rolled I with h/b > 1.2, t_f <= 40 mm).
+    serde_json::from_value(json!({
+        "id": "S1",
+        "section": {"kind": "given", "area_mm2": 5380.0, "i_major_mm4": 8.356e7, "i_minor_mm4": 6.04e6},
+        "material": {"grade": "S355"},
+        "length_mm": 4000.0,
+        "axial_kn": 500.0,
+        "method": "en1993-1-1",
+        "curve_major": "a",
+        "curve_minor": "b"
+    }))
+    .unwrap()
+}
+
+#[test]
+fn member_check_worked_by_hand() {
+    // Worked by hand (EN 1993-1-1 6.3.1, gamma_M1 = 1.0 recommended, 6.1 Note 2B):
+    // f_y = 355 MPa (EN 10025-2 Table 7, t <= 16 mm: the typed section has no
+    // thickness, so the thinnest band is read and a warning is given).
+    // N_pl = 5380 x 355 = 1 909 900 N = 1909.9 kN.
+    // Minor: N_cr = pi^2 x 210 000 x 6.04e6 / 4000^2 = 782 413 N = 782.41 kN;
+    //   lambda_bar = sqrt(1909.9 / 782.41) = 1.56238 (Eq. 6.50);
+    //   Phi = 0.5 [1 + 0.34 (1.56238 - 0.2) + 1.56238^2] = 1.95213;
+    //   chi = 1 / (1.95213 + sqrt(1.95213^2 - 1.56238^2)) = 0.32026 (Eq. 6.49);
+    //   N_b,Rd = 0.32026 x 1909.9 = 611.66 kN (Eq. 6.47).
+    // Major: N_cr = 10 824.2 kN, lambda_bar = 0.42006, Phi = 0.61133,
+    //   chi = 0.94743, N_b,Rd = 1809.50 kN. The minor axis governs.
+    let r = check_member(&strut()).unwrap();
+    // Tolerance: the hand working carries 5-6 significant figures.
+    const HAND: f64 = 2e-5;
+    let minor = r.modes.iter().find(|m| m.mode == Mode::Minor).unwrap();
+    let major = r.modes.iter().find(|m| m.mode == Mode::Major).unwrap();
+    assert_close(minor.critical_kn, 782.41, HAND, "N_cr,z");
+    assert_close(minor.relative_slenderness, 1.56238, HAND, "lambda_bar_z");
+    assert_close(minor.reduction, 0.32026, HAND, "chi_z");
+    assert_close(minor.resistance_kn, 611.66, HAND, "N_b,z,Rd");
+    assert_close(major.reduction, 0.94743, HAND, "chi_y");
+    assert_close(major.resistance_kn, 1809.50, HAND, "N_b,y,Rd");
+    assert_eq!(r.governing, Mode::Minor);
+    assert_close(r.utilisation, 500.0 / 611.66, HAND, "utilisation");
+    assert!(r.passes);
+    assert!(r.warnings.iter().any(|w| w.code == "thickness-unknown"));
+    // The trace names the curves as given.
+    assert!(r
+        .trace
+        .iter()
+        .any(|s| s.symbol == "alpha" && s.value == 0.34 && s.label.contains("curve b (given)")));
+}
+
+#[test]
+fn gamma_m1_divides_and_typed_section_curve_is_assumed() {
+    let mut m = strut();
+    m.gamma_m1 = Some(1.1);
+    m.curve_major = None;
+    m.curve_minor = None;
+    // With curve c assumed about z (alpha 0.49): Phi = 0.5 [1 + 0.49 x 1.36238
+    // + 2.44105] = 2.05430, chi = 1 / (2.05430 + sqrt(2.05430^2 - 2.44105))
+    // = 0.29515 (worked by hand), N_b,Rd = 0.29515 x 1909.9 / 1.1 = 512.46 kN.
+    let r = check_member(&m).unwrap();
+    let minor = r.modes.iter().find(|m| m.mode == Mode::Minor).unwrap();
+    assert_close(
+        minor.reduction,
+        0.29515,
+        5e-5,
+        "chi_z, curve c (hand, 5 s.f.)",
+    );
+    assert_close(
+        minor.resistance_kn,
+        512.46,
+        5e-5,
+        "N_b,z,Rd / 1.1 (hand, 5 s.f.)",
+    );
+    assert!(r.warnings.iter().any(|w| w.code == "curve-assumed"));
+}
+
+#[test]
+fn refuses_timber() {
+    let mut m = strut();
+    m.material = serde_json::from_value(json!({"grade": "C24"})).unwrap();
+    let e = check_member(&m).unwrap_err();
+    assert_eq!(e.field(), Some("method"));
+}
