@@ -16,7 +16,7 @@ function showProblem(text) {
 }
 
 try {
-  await init();
+  await init({ module_or_path: new URL("strutline_web_bg.wasm", import.meta.url) });
   if (typeof app.start !== "function") {
     throw new Error("this build has no start() entry point");
   }

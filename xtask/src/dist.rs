@@ -116,6 +116,8 @@ pub fn build(use_wasm_opt: bool) -> Result<Built> {
         .web(true)
         .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?
         .typescript(false)
+        // The library leaves out the default wasm URL that the CLI writes.
+        .omit_default_module_path(false)
         .remove_producers_section(true)
         .generate(&dist)
         .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?;

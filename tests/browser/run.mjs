@@ -1,0 +1,420 @@
+// The browser tests of Strutline: `node tests/browser/run.mjs --url URL
+// [--only NAME]`, normally through `cargo xtask browser-test`, which
+// builds dist/, serves it and passes the URL. Each test runs in a fresh
+// Chromium profile; a failing test leaves a screenshot in
+// tests/browser/out/. The last line is "N passed, N failed"; the exit
+// status is 1 when any test failed.
+
+import assert from "node:assert/strict";
+import { readFileSync } from "node:fs";
+import { createRequire } from "node:module";
+import { connect } from "node:net";
+import { join } from "node:path";
+import {
+  arg,
+  cliCheck,
+  ensureOut,
+  firstPage,
+  launch,
+  memberFields,
+  memberFile,
+  parseUtilisation,
+  setField,
+  STORAGE_KEY,
+  UNREADABLE_PREFIX,
+  waitForText,
+} from "./lib.mjs";
+
+const URL_ARG = arg("--url");
+if (!URL_ARG) {
+  console.error("usage: node run.mjs --url http://127.0.0.1:PORT/ [--only NAME]");
+  process.exit(2);
+}
+const BASE = new URL(URL_ARG);
+const ONLY = arg("--only");
+const OUT = ensureOut();
+
+// An invented member for the typing tests: a rolled I column of a
+// made-up boathouse gallery, custom steel, checked to EN 1993-1-1.
+const TYPED = {
+  id: "BH-7",
+  section: { kind: "i", depth_mm: 220, width_mm: 160, flange_mm: 11, web_mm: 7, root_radius_mm: 12 },
+  material: { fy_mpa: 355, e_mpa: 210000 },
+  length_mm: 3400,
+  axial_kn: 640,
+  method: "en1993-1-1",
+};
+
+const tests = [];
+function test(name, fn) {
+  tests.push({ name, fn });
+}
+
+/** Opens the app in a fresh profile, recording console errors, page
+ * errors and every request; `fn(page, log)` runs the test. */
+async function withApp(name, fn, options = {}) {
+  const { context, close } = await launch(options);
+  const log = { errors: [], requests: [] };
+  context.on("request", (r) => log.requests.push(r.url()));
+  const page = await firstPage(context);
+  page.on("console", (m) => {
+    if (m.type() === "error") log.errors.push(`console: ${m.text()}`);
+  });
+  page.on("pageerror", (e) => log.errors.push(`page error: ${e.message}`));
+  try {
+    await fn(page, log, context);
+  } catch (e) {
+    await page.screenshot({ path: join(OUT, `${name}-failed.png`), fullPage: true }).catch(() => {});
+    throw e;
+  } finally {
+    await close();
+  }
+}
+
+async function open(page) {
+  await page.goto(BASE.href, { waitUntil: "load" });
+  await page.locator("[data-testid=caution]").first().waitFor({ state: "visible", timeout: 15_000 });
+}
+
+/** Types `member` into the app the way a person would. */
+async function typeMember(page, member) {
+  await page.locator("[data-testid=add-member]").first().click();
+  for (const [name, value] of memberFields(member)) {
+    await setField(page, page, name, value);
+  }
+  await page
+    .locator(`[data-testid=member-row][data-id="${member.id}"]`)
+    .first()
+    .waitFor({ state: "visible", timeout: 10_000 });
+}
+
+async function selectMember(page, id) {
+  const row = page.locator(`[data-testid=member-row][data-id="${id}"]`).first();
+  await row.click();
+}
+
+/** Waits for the service worker to be active and to control the page. */
+async function waitForWorker(page) {
+  await page.evaluate(async () => {
+    await navigator.serviceWorker.ready;
+    if (!navigator.serviceWorker.controller) {
+      await new Promise((resolve) => {
+        navigator.serviceWorker.addEventListener("controllerchange", resolve, { once: true });
+        setTimeout(resolve, 10_000);
+      });
+    }
+  });
+  const controlled = await page.evaluate(() => Boolean(navigator.serviceWorker.controller));
+  assert.ok(controlled, "the service worker does not control the page");
+}
+
+test("loads-clean", async () => {
+  await withApp("loads-clean", async (page, log) => {
+    await open(page);
+    // Give late module loads, the worker and its precache time to run.
+    await page.waitForLoadState("networkidle");
+    await page.screenshot({ path: join(OUT, "loads-clean.png"), fullPage: true });
+    assert.ok(await page.locator("[data-testid=caution]").first().isVisible(), "caution not visible");
+    assert.equal(await page.locator("#boot").count(), 0, "the loading text is still there");
+    assert.deepEqual(log.errors, [], "console errors");
+    const foreign = log.requests.filter((u) => {
+      try {
+        return new URL(u).origin !== BASE.origin;
+      } catch {
+        return true;
+      }
+    });
+    assert.deepEqual(foreign, [], "requests to another origin");
+    assert.ok(log.requests.length > 0, "no request was seen at all");
+  });
+});
+
+test("shell-files", async () => {
+  // The shell's own files, as the server and the manifest give them.
+  const get = async (path) => {
+    const r = await fetch(new URL(path, BASE));
+    return { status: r.status, type: r.headers.get("content-type") || "", body: Buffer.from(await r.arrayBuffer()) };
+  };
+  const html = await get("./");
+  assert.equal(html.status, 200);
+  assert.match(html.type, /^text\/html/);
+  const text = html.body.toString("utf8");
+  assert.match(text, /http-equiv="Content-Security-Policy"/);
+  assert.doesNotMatch(text, /<script(?![^>]*\bsrc=)[^>]*>/, "an inline script");
+  assert.doesNotMatch(text, /\son[a-z]+=/i, "an inline event handler");
+  const manifest = await get("./manifest.webmanifest");
+  assert.equal(manifest.status, 200);
+  assert.match(manifest.type, /^application\/manifest\+json/);
+  const m = JSON.parse(manifest.body.toString("utf8"));
+  for (const size of ["192x192", "512x512"]) {
+    const icons = m.icons.filter((i) => i.sizes === size);
+    assert.ok(icons.some((i) => i.purpose.includes("maskable")), `no maskable ${size} icon`);
+    const png = await get(new URL(icons[0].src, new URL("./manifest.webmanifest", BASE)).href);
+    assert.equal(png.status, 200);
+    assert.equal(png.type, "image/png");
+    const [w, h] = [png.body.readUInt32BE(16), png.body.readUInt32BE(20)];
+    assert.equal(`${w}x${h}`, size, "icon size differs from the manifest");
+  }
+  const wasm = await get("./strutline_web_bg.wasm");
+  assert.equal(wasm.type, "application/wasm");
+  const sw = (await get("./sw.js")).body.toString("utf8");
+  assert.match(sw, /const CACHE_NAME = "strutline-[0-9a-f]{12}";/, "cache name not stamped");
+  assert.match(sw, /"\.\/strutline_web_bg\.wasm"/, "the wasm is not precached");
+  // A raw request, since URL parsing in fetch would fold the dots away.
+  const raw = await new Promise((resolve, reject) => {
+    const sock = connect(Number(BASE.port), BASE.hostname, () => {
+      sock.end("GET /%2e%2e/Cargo.toml HTTP/1.1\r\nHost: x\r\n\r\n");
+    });
+    let got = "";
+    sock.on("data", (d) => (got += d));
+    sock.on("end", () => resolve(got));
+    sock.on("error", reject);
+  });
+  assert.match(raw, /^HTTP\/1\.1 400 /, "a path outside dist/ was not refused");
+});
+
+test("typed-member-matches-cli", async () => {
+  const cli = cliCheck(memberFile("typed", [TYPED]));
+  const expected = cli.results.find((r) => r.id === TYPED.id);
+  assert.ok(expected, "the command line gave no result for the member");
+  await withApp("typed-member-matches-cli", async (page, log) => {
+    await open(page);
+    await typeMember(page, TYPED);
+    await selectMember(page, TYPED.id);
+    const shown = page.locator("[data-testid=result-utilisation]");
+    const text = await waitForText(shown, (t) => parseUtilisation(t) !== null);
+    const got = parseUtilisation(text);
+    await page.screenshot({ path: join(OUT, "typed-member.png"), fullPage: true });
+    assert.ok(got.decimals >= 3, `the utilisation "${text}" shows fewer than 3 decimals`);
+    assert.equal(
+      got.value.toFixed(3),
+      expected.utilisation.toFixed(3),
+      `page shows ${text}, the command line ${expected.utilisation}`,
+    );
+    assert.deepEqual(log.errors, [], "console errors");
+  });
+});
+
+test("envelope-drawn-with-marker", async () => {
+  const cli = cliCheck(memberFile("typed", [TYPED]));
+  const expected = cli.results.find((r) => r.id === TYPED.id);
+  assert.ok(expected, "the command line gave no result for the member");
+  const governing = expected.modes.find((m) => JSON.stringify(m.mode) === JSON.stringify(expected.governing));
+  assert.ok(governing, "the command line's governing mode is not among its modes");
+  await withApp("envelope-drawn-with-marker", async (page) => {
+    await open(page);
+    await typeMember(page, TYPED);
+    await selectMember(page, TYPED.id);
+    const canvas = page.locator("canvas#envelope");
+    await canvas.waitFor({ state: "visible", timeout: 10_000 });
+    // Wait for the marker of this member to be drawn.
+    await page.waitForFunction(() => {
+      const c = document.querySelector("canvas#envelope");
+      return c && c.dataset.markerPx && c.dataset.markerSlenderness;
+    }, null, { timeout: 10_000 });
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+    await canvas.screenshot({ path: join(OUT, "envelope.png") });
+    const facts = await page.evaluate(() => {
+      const c = document.querySelector("canvas#envelope");
+      const ctx = c.getContext("2d");
+      const { width, height } = c;
+      const data = ctx.getImageData(0, 0, width, height).data;
+      const px = (x, y) => {
+        const i = (y * width + x) * 4;
+        return [data[i], data[i + 1], data[i + 2], data[i + 3]];
+      };
+      const bg = px(0, 0);
+      const differs = (p) => Math.abs(p[0] - bg[0]) + Math.abs(p[1] - bg[1]) + Math.abs(p[2] - bg[2]) + Math.abs(p[3] - bg[3]) > 48;
+      let ink = 0;
+      for (let y = 0; y < height; y += 1) {
+        for (let x = 0; x < width; x += 1) if (differs(px(x, y))) ink += 1;
+      }
+      const nums = (c.dataset.markerPx.match(/-?\d+(\.\d+)?/g) || []).map(Number);
+      // data-marker-px is in CSS pixels of the canvas box; scale to its bitmap.
+      const box = c.getBoundingClientRect();
+      const sx = box.width > 0 ? width / box.width : 1;
+      const sy = box.height > 0 ? height / box.height : 1;
+      const mx = Math.round(nums[0] * sx);
+      const my = Math.round(nums[1] * sy);
+      let near = 0;
+      let inside = mx >= 0 && my >= 0 && mx < width && my < height;
+      for (let dy = -4; dy <= 4; dy += 1) {
+        for (let dx = -4; dx <= 4; dx += 1) {
+          const x = mx + dx;
+          const y = my + dy;
+          if (x >= 0 && y >= 0 && x < width && y < height && differs(px(x, y))) near += 1;
+        }
+      }
+      return {
+        width,
+        height,
+        ink,
+        markerPx: c.dataset.markerPx,
+        mx,
+        my,
+        inside,
+        near,
+        slenderness: Number(c.dataset.markerSlenderness),
+      };
+    });
+    assert.ok(facts.ink > Math.max(500, 0.01 * facts.width * facts.height), `only ${facts.ink} drawn pixels`);
+    assert.ok(facts.inside, `the marker (${facts.markerPx}) is outside the canvas`);
+    assert.ok(facts.near >= 9, `little is drawn at the marker (${facts.markerPx}): ${facts.near} of 81 pixels`);
+    const rel = Math.abs(facts.slenderness - governing.slenderness) / governing.slenderness;
+    assert.ok(
+      rel <= 0.01,
+      `marker slenderness ${facts.slenderness}, the command line's governing mode ${governing.slenderness}`,
+    );
+  });
+});
+
+test("reload-keeps-list", async () => {
+  await withApp("reload-keeps-list", async (page, log) => {
+    await open(page);
+    await typeMember(page, TYPED);
+    await page.reload({ waitUntil: "load" });
+    await page
+      .locator(`[data-testid=member-row][data-id="${TYPED.id}"]`)
+      .first()
+      .waitFor({ state: "visible", timeout: 10_000 });
+    const stored = await page.evaluate((k) => localStorage.getItem(k), STORAGE_KEY);
+    assert.ok(stored && stored.includes(TYPED.id), "the member is not in the stored workspace");
+    assert.deepEqual(log.errors, [], "console errors");
+  });
+});
+
+test("offline-reload", async () => {
+  await withApp("offline-reload", async (page, log, context) => {
+    await open(page);
+    await typeMember(page, TYPED);
+    await waitForWorker(page);
+    await context.setOffline(true);
+    await page.reload({ waitUntil: "load" });
+    await page.locator("[data-testid=caution]").first().waitFor({ state: "visible", timeout: 15_000 });
+    await page
+      .locator(`[data-testid=member-row][data-id="${TYPED.id}"]`)
+      .first()
+      .waitFor({ state: "visible", timeout: 10_000 });
+    await page.screenshot({ path: join(OUT, "offline.png"), fullPage: true });
+    const fromWorker = await page.evaluate(() =>
+      performance.getEntriesByType("navigation").map((e) => e.workerStart > 0 || e.deliveryType === "cache"),
+    );
+    assert.ok(fromWorker.every(Boolean), "the offline page was not answered by the worker");
+    assert.deepEqual(log.errors.filter((e) => !/ERR_INTERNET_DISCONNECTED/.test(e)), [], "console errors");
+  });
+});
+
+test("unreadable-storage-kept", async () => {
+  const broken = '{"format":"strutline.workspace", broken';
+  await withApp("unreadable-storage-kept", async (page, log, context) => {
+    // Put the broken text in place before the app's first start, once.
+    await context.addInitScript(([key, text]) => {
+      if (!sessionStorage.getItem("strutline-test-seeded")) {
+        sessionStorage.setItem("strutline-test-seeded", "1");
+        localStorage.setItem(key, text);
+      }
+    }, [STORAGE_KEY, broken]);
+    await open(page);
+    const problem = page.locator("[data-testid=storage-problem]").first();
+    await problem.waitFor({ state: "visible", timeout: 10_000 });
+    await page.screenshot({ path: join(OUT, "storage-problem.png"), fullPage: true });
+    const keep = async () =>
+      page.evaluate(
+        ([key, prefix, text]) => {
+          const keys = Object.keys(localStorage);
+          return keys.some((k) => (k === key || k.startsWith(prefix)) && localStorage.getItem(k) === text);
+        },
+        [STORAGE_KEY, UNREADABLE_PREFIX, broken],
+      );
+    assert.ok(await keep(), "the unreadable text is gone from localStorage");
+    // Still there after another start of the app.
+    await page.reload({ waitUntil: "load" });
+    await page.locator("[data-testid=caution]").first().waitFor({ state: "visible", timeout: 15_000 });
+    assert.ok(await keep(), "the unreadable text is gone after a second start");
+  });
+});
+
+test("accessibility-axe", async () => {
+  const require = createRequire(import.meta.url);
+  const axeSource = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
+  // The app's policy refuses injected scripts; the test context bypasses
+  // it to run axe (the app itself is tested with the policy in force above).
+  await withApp("accessibility-axe", async (page) => {
+    await open(page);
+    await page.evaluate(axeSource);
+    const result = await page.evaluate(async () => {
+      // eslint-disable-next-line no-undef
+      const r = await axe.run(document, { resultTypes: ["violations"] });
+      return r.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.length, target: v.nodes[0]?.target }));
+    });
+    const serious = result.filter((v) => v.impact === "serious" || v.impact === "critical");
+    for (const v of result) console.log(`    axe: ${v.impact} ${v.id} (${v.nodes}): ${v.help} ${JSON.stringify(v.target)}`);
+    assert.deepEqual(serious, [], "serious or critical accessibility violations");
+  }, { bypassCSP: true });
+});
+
+test("keyboard-only-member", async () => {
+  const member = { ...TYPED, id: "BH-8" };
+  await withApp("keyboard-only-member", async (page) => {
+    await open(page);
+    const active = () =>
+      page.evaluate(() => {
+        const el = document.activeElement;
+        return el ? { testid: el.dataset?.testid || "", name: el.getAttribute("name") || "", tag: el.tagName.toLowerCase() } : null;
+      });
+    const tabTo = async (pred, what, limit = 150) => {
+      for (let i = 0; i < limit; i += 1) {
+        const a = await active();
+        if (a && pred(a)) return a;
+        await page.keyboard.press("Tab");
+      }
+      throw new Error(`Tab never reached ${what}`);
+    };
+    await tabTo((a) => a.testid === "add-member", "the add-member button");
+    await page.keyboard.press("Enter");
+    for (const [name, value] of memberFields(member)) {
+      const a = await tabTo((x) => x.name === name, `the field "${name}"`);
+      if (a.tag === "select") {
+        // Walk the options with the arrow keys until the value is chosen.
+        const options = await page.evaluate(() => [...document.activeElement.options].map((o) => o.value));
+        const target = options.indexOf(String(value));
+        assert.ok(target >= 0, `"${name}" has no option "${value}"`);
+        await page.keyboard.press("Home");
+        for (let i = 0; i < target; i += 1) await page.keyboard.press("ArrowDown");
+        const chosen = await page.evaluate(() => document.activeElement.value);
+        assert.equal(chosen, String(value), `could not choose "${value}" in "${name}" by keyboard`);
+      } else {
+        await page.keyboard.press("ControlOrMeta+A");
+        await page.keyboard.type(String(value));
+      }
+      await page.keyboard.press("Tab");
+    }
+    await page
+      .locator(`[data-testid=member-row][data-id="${member.id}"]`)
+      .first()
+      .waitFor({ state: "visible", timeout: 10_000 });
+  });
+});
+
+let passed = 0;
+let failed = 0;
+const chosen = ONLY ? tests.filter((t) => t.name === ONLY) : tests;
+if (ONLY && chosen.length === 0) {
+  console.error(`no test named ${ONLY}; the tests: ${tests.map((t) => t.name).join(", ")}`);
+  process.exit(2);
+}
+console.log(`browser tests against ${BASE.href}`);
+for (const t of chosen) {
+  const started = Date.now();
+  try {
+    await t.fn();
+    passed += 1;
+    console.log(`ok   ${t.name} (${Date.now() - started} ms)`);
+  } catch (e) {
+    failed += 1;
+    console.log(`FAIL ${t.name} (${Date.now() - started} ms)`);
+    console.log(String(e && e.stack ? e.stack : e).split("\n").slice(0, 12).map((l) => "     " + l).join("\n"));
+  }
+}
+console.log(`browser: ${passed} passed, ${failed} failed`);
+process.exit(failed > 0 ? 1 : 0);
