@@ -192,3 +192,94 @@ fn refuses_timber() {
     let e = check_member(&m).unwrap_err();
     assert_eq!(e.field(), Some("method"));
 }
+
+fn alphas(section: serde_json::Value, grade: &str) -> (f64, f64) {
+    let m: Member = serde_json::from_value(json!({
+        "id": "K1",
+        "section": section,
+        "material": {"grade": grade},
+        "length_mm": 3000.0,
+        "axial_kn": 100.0,
+        "method": "en1993-1-1"
+    }))
+    .unwrap();
+    let r = check_member(&m).unwrap();
+    let find = |scope: &str| {
+        r.trace
+            .iter()
+            .find(|s| s.symbol == "alpha" && serde_json::to_value(s.scope).unwrap() == json!(scope))
+            .map(|s| s.value)
+            .unwrap()
+    };
+    (find("major"), find("minor"))
+}
+
+#[test]
+fn table_6_2_selection_through_the_check() {
+    // EN 1993-1-1 Table 6.2 (curve -> alpha of Table 6.1): (y-y, z-z).
+    let i = |h: f64, b: f64, tf: f64, make: &str| {
+        json!({"kind": "i", "depth_mm": h, "width_mm": b, "flange_mm": tf, "web_mm": 10.0,
+               "root_radius_mm": if make == "rolled" { 15.0 } else { 0.0 }, "make": make})
+    };
+    // Rolled I, h/b > 1.2, t_f <= 40: a / b; S460: a0 / a0.
+    assert_eq!(
+        alphas(i(300.0, 150.0, 10.7, "rolled"), "S355"),
+        (0.21, 0.34)
+    );
+    assert_eq!(
+        alphas(i(300.0, 150.0, 10.7, "rolled"), "S460"),
+        (0.13, 0.13)
+    );
+    // Rolled I, h/b > 1.2, 40 < t_f <= 100: b / c; S460: a / a.
+    assert_eq!(
+        alphas(i(600.0, 300.0, 50.0, "rolled"), "S355"),
+        (0.34, 0.49)
+    );
+    assert_eq!(
+        alphas(i(600.0, 300.0, 50.0, "rolled"), "S460"),
+        (0.21, 0.21)
+    );
+    // Rolled I, h/b <= 1.2, t_f <= 100: b / c.
+    assert_eq!(
+        alphas(i(300.0, 300.0, 19.0, "rolled"), "S355"),
+        (0.34, 0.49)
+    );
+    // Rolled I, t_f > 100: d / d; S460: c / c.
+    assert_eq!(
+        alphas(i(500.0, 450.0, 110.0, "rolled"), "S355"),
+        (0.76, 0.76)
+    );
+    assert_eq!(
+        alphas(i(500.0, 450.0, 110.0, "rolled"), "S460"),
+        (0.49, 0.49)
+    );
+    // Welded I, t_f <= 40: b / c; t_f > 40: c / d.
+    assert_eq!(
+        alphas(i(400.0, 200.0, 20.0, "welded"), "S355"),
+        (0.34, 0.49)
+    );
+    assert_eq!(
+        alphas(i(800.0, 400.0, 50.0, "welded"), "S355"),
+        (0.49, 0.76)
+    );
+    // Hollow: hot-finished a (S460: a0), cold-formed c.
+    let chs =
+        |make: &str| json!({"kind": "chs", "diameter_mm": 168.3, "wall_mm": 8.0, "make": make});
+    assert_eq!(alphas(chs("hot-finished"), "S355H"), (0.21, 0.21));
+    assert_eq!(alphas(chs("hot-finished"), "S460H"), (0.13, 0.13));
+    assert_eq!(alphas(chs("cold-formed"), "S355H"), (0.49, 0.49));
+    // L-sections b; U-, T- and solid sections c.
+    let angle = json!({"kind": "angle", "depth_mm": 100.0, "width_mm": 100.0, "thickness_mm": 10.0,
+                       "root_radius_mm": 12.0, "toe_radius_mm": 6.0});
+    assert_eq!(alphas(angle, "S355"), (0.34, 0.34));
+    let channel = json!({"kind": "channel", "depth_mm": 200.0, "width_mm": 75.0, "flange_mm": 12.5,
+                         "web_mm": 8.5, "root_radius_mm": 12.0});
+    assert_eq!(alphas(channel, "S275"), (0.49, 0.49));
+    assert_eq!(
+        alphas(
+            json!({"kind": "rect", "depth_mm": 60.0, "width_mm": 20.0}),
+            "S235"
+        ),
+        (0.49, 0.49)
+    );
+}

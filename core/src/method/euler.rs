@@ -514,4 +514,84 @@ pub(crate) mod tests {
         assert!(axis(&input, Mode::Minor, 0.0, &mut t, &mut w).is_err());
         assert!(axis(&input, Mode::Minor, f64::NAN, &mut t, &mut w).is_err());
     }
+
+    mod every_method {
+        use super::*;
+        use crate::section::Given;
+        use proptest::prelude::*;
+
+        fn methods() -> [Method; 8] {
+            Method::ALL
+        }
+
+        proptest! {
+            #![proptest_config(ProptestConfig::with_cases(256))]
+
+            /// Whatever the numbers, every method returns a finite result
+            /// with the reduction in (0, 1] and the resistance within the
+            /// squash load over the method's factor, or a typed error; it
+            /// never panics.
+            #[test]
+            fn results_are_bounded(
+                area in 1.0f64..1e6,
+                i_ratio in 0.01f64..1.0,
+                r_major in 1.0f64..500.0,
+                lcr in 1e-3f64..1e7,
+                bow in 0.0f64..1e3,
+                gamma in 0.5f64..3.0,
+                timber in any::<bool>(),
+                kind in 0usize..3,
+            ) {
+                let i_major = area * r_major * r_major;
+                let mut m = member(Method::Euler, if timber { "GL28h" } else { "S355" });
+                m.section = SectionSpec::Given(Given {
+                    area_mm2: area,
+                    i_major_mm4: i_major,
+                    i_minor_mm4: i_major * i_ratio,
+                    torsion_mm4: None,
+                    warping_mm6: None,
+                });
+                match kind {
+                    0 => m.bow_mm = Some(bow),
+                    1 => m.eccentricity_mm = Some(bow),
+                    _ => m.gamma_m1 = Some(gamma),
+                }
+                let p = Prepared::new(&m).unwrap();
+                let input = p.input();
+                for method in methods() {
+                    let mut t = Trace::new();
+                    let mut w = Vec::new();
+                    let refused = crate::method::prelude(method, &input, &mut t, &mut w).is_err();
+                    let should_refuse = match method {
+                        Method::En1993 | Method::AiscLrfd | Method::AiscAsd | Method::CsaS16 => timber,
+                        Method::En1995 => !timber,
+                        _ => false,
+                    };
+                    prop_assert_eq!(refused, should_refuse, "{:?}", method);
+                    if refused {
+                        continue;
+                    }
+                    for mode in [Mode::Major, Mode::Minor] {
+                        let r = crate::method::axis(method, &input, mode, lcr, &mut t, &mut w).unwrap();
+                        let (f, _) = input.material.strength_and_modulus();
+                        let n_pl = area * f / 1000.0;
+                        let factor = match method {
+                            Method::AiscLrfd | Method::CsaS16 => 1.0,
+                            Method::AiscAsd => 1.67,
+                            _ => m.gamma_m1.unwrap_or(1.0),
+                        };
+                        prop_assert!(r.reduction > 0.0 && r.reduction <= 1.0, "{method:?} {r:?}");
+                        prop_assert!(r.resistance_kn.is_finite() && r.resistance_kn > 0.0, "{method:?} {r:?}");
+                        prop_assert!(r.resistance_kn <= n_pl / factor * (1.0 + 1e-12), "{method:?} {r:?}");
+                        prop_assert!(r.critical_kn.is_finite() && r.relative_slenderness.is_finite());
+                        prop_assert!(t.iter().all(|s| !s.value.is_nan()), "{method:?}: NaN in trace");
+                    }
+                    // No duplicate warnings between the axes.
+                    for (k, a) in w.iter().enumerate() {
+                        prop_assert!(w.iter().skip(k + 1).all(|b| b.code != a.code), "{method:?}: {w:?}");
+                    }
+                }
+            }
+        }
+    }
 }
