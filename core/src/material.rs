@@ -949,6 +949,45 @@ mod tests {
     }
 
     #[test]
+    fn hollow_grades_by_make() {
+        use crate::section::Rhs;
+        let rhs = |t: f64, make: HollowMake| {
+            SectionSpec::Rhs(Rhs {
+                depth_mm: 400.0,
+                width_mm: 400.0,
+                wall_mm: t,
+                outer_radius_mm: 0.0,
+                inner_radius_mm: None,
+                make,
+            })
+            .build()
+            .unwrap()
+        };
+        let fy_of = |g: &str, s: &Section| match grade(g, s).unwrap() {
+            Material::Steel(s) => (s.fy_mpa, s.standard),
+            Material::Timber(_) => panic!(),
+        };
+        // EN 10219-1 (cold-formed): 16 < t <= 40 gives 345 MPa; nothing above 40 mm.
+        let (f, std) = fy_of("S355H", &rhs(20.0, HollowMake::ColdFormed));
+        assert_eq!(f, 345.0);
+        assert!(std.starts_with("EN 10219-1"));
+        assert!(matches!(
+            grade("S355J2H", &rhs(45.0, HollowMake::ColdFormed)),
+            Err(Error::OutOfRange {
+                field: "material",
+                ..
+            })
+        ));
+        // EN 10210-1 (hot-finished): 40 < t <= 63 gives 335 MPa.
+        let (f, std) = fy_of("S355J2H", &rhs(45.0, HollowMake::HotFinished));
+        assert_eq!(f, 335.0);
+        assert!(std.starts_with("EN 10210-1"));
+        // A500 Grade C shaped: 50 ksi.
+        let (f, _) = fy_of("A500 Gr. C", &rhs(10.0, HollowMake::ColdFormed));
+        assert!((f - 50.0 * KSI).abs() < 1e-9);
+    }
+
+    #[test]
     fn timber_classes() {
         match grade("gl28H", &rect(100.0)).unwrap() {
             Material::Timber(t) => {

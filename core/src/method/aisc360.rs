@@ -129,7 +129,9 @@ pub fn axis(
         "MPa",
         "AISC 360-16 Eq. E3-4",
     );
-    if b.slenderness <= limit {
+    // The branch is chosen on F_y / F_e <= 2.25, as f_cr does (E3(a) gives
+    // both forms; they differ only in the third figure of the limit).
+    if b.f_mpa / fe <= 2.25 {
         push(
             trace,
             b.scope,

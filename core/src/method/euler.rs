@@ -297,6 +297,16 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                 "MPa",
                 s.standard,
             );
+            if s.name.starts_with("A500")
+                && !matches!(input.section.family, Family::Chs | Family::Rhs)
+            {
+                warn_once(warnings, "a500-shape-unknown", || {
+                    format!(
+                        "ASTM A500 sets F_y by the hollow section's shape (round or shaped); this \
+                         section is neither, so the lower, round value F_y = {f:.0} MPa is used"
+                    )
+                });
+            }
         }
         Material::Timber(t) => {
             push(
@@ -513,6 +523,16 @@ pub(crate) mod tests {
         assert_eq!(r.reduction, 1.0);
         assert!(axis(&input, Mode::Minor, 0.0, &mut t, &mut w).is_err());
         assert!(axis(&input, Mode::Minor, f64::NAN, &mut t, &mut w).is_err());
+    }
+
+    #[test]
+    fn a500_on_a_solid_section_warns() {
+        let r = Prepared::new(&member(Method::AiscLrfd, "A500C"))
+            .unwrap()
+            .check()
+            .unwrap();
+        assert!(r.warnings.iter().any(|w| w.code == "a500-shape-unknown"));
+        assert!((r.strength_mpa - 46.0 * crate::material::KSI).abs() < 1e-9);
     }
 
     mod every_method {
