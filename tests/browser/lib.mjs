@@ -120,9 +120,13 @@ export function parseUtilisation(text) {
  * checkbox, or types into an input. Fails naming the field when the page
  * has no such field. */
 export async function setField(page, scope, name, value) {
-  const field = scope.locator(`[name="${name}"]`).first();
+  // A name starting with "?" is optional: it is skipped when absent.
+  const optional = name.startsWith("?");
+  const key = optional ? name.slice(1) : name;
+  const field = scope.locator(`[name="${key}"]`).first();
   if ((await field.count()) === 0) {
-    throw new Error(`the page has no field named "${name}"`);
+    if (optional) return;
+    throw new Error(`the page has no field named "${key}"`);
   }
   const tag = await field.evaluate((el) => el.tagName.toLowerCase());
   if (tag === "select") {
@@ -144,6 +148,9 @@ export function memberFields(member) {
     if (k !== "kind") out.push([k, v]);
   }
   out.push(["method", member.method]);
+  // How the material is given, where the editor asks (grade, steel, timber).
+  const mode = "grade" in member.material ? "grade" : "fc0k_mpa" in member.material ? "timber" : "steel";
+  out.push(["?material_mode", mode]);
   for (const [k, v] of Object.entries(member.material)) out.push([k, v]);
   for (const k of Object.keys(member)) {
     if (!["id", "section", "material", "method", "note"].includes(k)) out.push([k, member[k]]);

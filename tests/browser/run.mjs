@@ -372,7 +372,9 @@ test("keyboard-only-member", async () => {
     };
     await tabTo((a) => a.testid === "add-member", "the add-member button");
     await page.keyboard.press("Enter");
-    for (const [name, value] of memberFields(member)) {
+    for (const [field, value] of memberFields(member)) {
+      const name = field.replace(/^\?/, "");
+      if (field.startsWith("?") && (await page.locator(`[name="${name}"]`).count()) === 0) continue;
       const a = await tabTo((x) => x.name === name, `the field "${name}"`);
       if (a.tag === "select") {
         // Walk the options with the arrow keys until the value is chosen.

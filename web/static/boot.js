@@ -20,7 +20,11 @@ try {
   if (typeof app.start !== "function") {
     throw new Error("this build has no start() entry point");
   }
+  // Marks for the measurements (cargo xtask bench-web): the module is
+  // ready, then the app has mounted its first view.
+  performance.mark("strutline-wasm-ready");
   app.start();
+  performance.mark("strutline-mounted");
   if (boot) boot.remove();
 } catch (error) {
   console.error("Strutline could not start:", error);

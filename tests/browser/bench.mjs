@@ -1,0 +1,380 @@
+// Browser measurements of Strutline: `node tests/browser/bench.mjs --url
+// URL --out DIR [--dist-gz N --dist-budget N --cache-name NAME]`,
+// normally through `cargo xtask bench-web`. Writes DIR/web.json and
+// DIR/web.md with the machine description. Every figure is what this run
+// measured, met or missed; nothing is adjusted.
+//
+// 1. first render: navigation start to the first visible member row, in
+//    a fresh profile (cold) and on reloads (warm);
+// 2. per edit: typing a new design load into input[name=axial_kn] until
+//    [data-testid=result-utilisation] shows a new text (DOM) and until the
+//    next animation frame after that (frame), over 100 edits;
+// 3. 1,000 members: a stored workspace of 1,000 members, from the moment
+//    the module is ready (mark "strutline-wasm-ready" in boot.js) until
+//    the rows are in the page and the next frame has started.
+
+import { spawnSync } from "node:child_process";
+import { writeFileSync } from "node:fs";
+import os from "node:os";
+import { join } from "node:path";
+import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, STORAGE_KEY, workspaceText } from "./lib.mjs";
+
+const URL_ARG = arg("--url");
+const OUT_DIR = arg("--out");
+if (!URL_ARG || !OUT_DIR) {
+  console.error("usage: node bench.mjs --url http://127.0.0.1:PORT/ --out DIR");
+  process.exit(2);
+}
+const BASE = new URL(URL_ARG);
+const DIST_GZ = Number(arg("--dist-gz", "NaN"));
+const DIST_BUDGET = Number(arg("--dist-budget", String(350 * 1024)));
+const CACHE_NAME = arg("--cache-name", "");
+
+const TARGETS = { first_render_ms: 1000, edit_ms: 16, thousand_ms: 50, dist_gz_bytes: DIST_BUDGET };
+
+const median = (xs) => {
+  const s = [...xs].sort((a, b) => a - b);
+  if (s.length === 0) return NaN;
+  const m = Math.floor(s.length / 2);
+  return s.length % 2 ? s[m] : (s[m - 1] + s[m]) / 2;
+};
+const quantile = (xs, q) => {
+  const s = [...xs].sort((a, b) => a - b);
+  return s.length ? s[Math.min(s.length - 1, Math.floor(q * s.length))] : NaN;
+};
+
+// Runs in the page before its scripts: records when the first member row
+// becomes visible (and the start of the frame after it).
+function watchFirstRow() {
+  window.__strutlineFirstRow = null;
+  const look = () => {
+    if (window.__strutlineFirstRow) return;
+    const row = document.querySelector("[data-testid=member-row]");
+    if (row && row.getBoundingClientRect().height > 0) {
+      const seen = performance.now();
+      window.__strutlineFirstRow = { seen };
+      requestAnimationFrame((frame) => {
+        window.__strutlineFirstRow.frame = frame;
+      });
+      observer.disconnect();
+    }
+  };
+  const observer = new MutationObserver(look);
+  document.addEventListener("DOMContentLoaded", () => {
+    observer.observe(document.body, { childList: true, subtree: true });
+    look();
+  });
+}
+
+async function firstRow(page) {
+  await page.waitForFunction(() => window.__strutlineFirstRow && window.__strutlineFirstRow.frame, null, {
+    timeout: 20_000,
+  });
+  return page.evaluate(() => {
+    const own = performance.getEntriesByName("strutline-first-render")[0];
+    const fcp = performance.getEntriesByName("first-contentful-paint")[0];
+    return {
+      row_ms: window.__strutlineFirstRow.seen,
+      frame_ms: window.__strutlineFirstRow.frame,
+      app_mark_ms: own ? own.startTime : null,
+      first_contentful_paint_ms: fcp ? fcp.startTime : null,
+      mounted_ms: performance.getEntriesByName("strutline-mounted")[0]?.startTime ?? null,
+    };
+  });
+}
+
+async function measureFirstRender() {
+  const cold = [];
+  const warm = [];
+  for (let run = 0; run < 3; run += 1) {
+    const { context, close } = await launch();
+    try {
+      await context.addInitScript(watchFirstRow);
+      const page = await firstPage(context);
+      await page.goto(BASE.href, { waitUntil: "load" });
+      cold.push(await firstRow(page));
+      for (let i = 0; i < (run === 0 ? 5 : 0); i += 1) {
+        await page.reload({ waitUntil: "load" });
+        warm.push(await firstRow(page));
+      }
+    } finally {
+      await close();
+    }
+  }
+  return { cold, warm };
+}
+
+async function measureEdits(count = 100) {
+  const { context, close } = await launch();
+  try {
+    const page = await firstPage(context);
+    await page.goto(BASE.href, { waitUntil: "load" });
+    await page.locator("[data-testid=member-row]").first().click({ timeout: 20_000 });
+    await page.locator("input[name=axial_kn]").first().waitFor({ state: "visible", timeout: 10_000 });
+    await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
+    return await page.evaluate(async (n) => {
+      const input = document.querySelector("input[name=axial_kn]");
+      const base = Number(String(input.value).replace(",", ".")) || 100;
+      const result = () => document.querySelector("[data-testid=result-utilisation]");
+      const dom = [];
+      const frame = [];
+      let timeouts = 0;
+      const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value").set;
+      for (let i = 0; i < n; i += 1) {
+        const before = result()?.textContent ?? "";
+        // Alternate above and below the starting load so the text changes.
+        const value = (base * (i % 2 === 0 ? 1.1 : 0.9) + i * 0.01).toFixed(2);
+        let t0 = 0;
+        const t = await new Promise((resolve) => {
+          let done = false;
+          const finish = (changedAt) => {
+            if (done) return;
+            done = true;
+            observer.disconnect();
+            clearTimeout(timer);
+            requestAnimationFrame((frameAt) => resolve({ changedAt, frameAt }));
+          };
+          const observer = new MutationObserver(() => {
+            if ((result()?.textContent ?? "") !== before) finish(performance.now());
+          });
+          observer.observe(document.body, { childList: true, subtree: true, characterData: true });
+          const timer = setTimeout(() => {
+            done = true;
+            observer.disconnect();
+            resolve(null);
+          }, 2000);
+          t0 = performance.now();
+          input.focus();
+          setter.call(input, value);
+          input.dispatchEvent(new Event("input", { bubbles: true }));
+          input.dispatchEvent(new Event("change", { bubbles: true }));
+          if ((result()?.textContent ?? "") !== before) finish(performance.now());
+        });
+        if (t === null) {
+          timeouts += 1;
+        } else {
+          dom.push(t.changedAt - t0);
+          frame.push(t.frameAt - t0);
+        }
+        // Let the page settle between edits.
+        await new Promise((r) => setTimeout(r, 5));
+      }
+      return { dom, frame, timeouts };
+    }, count);
+  } finally {
+    await close();
+  }
+}
+
+// 1,000 invented members of a made-up grain store: a mix of shapes,
+// materials and methods, lengths and loads varying member by member.
+function thousandMembers() {
+  const methods = ["en1993-1-1", "aisc360-lrfd", "aisc360-asd", "csa-s16", "perry-robertson", "secant", "euler"];
+  const members = [];
+  for (let i = 0; i < 1000; i += 1) {
+    const id = `G${String(i + 1).padStart(4, "0")}`;
+    const length_mm = 1500 + ((i * 37) % 4000);
+    const axial_kn = 20 + ((i * 53) % 700);
+    const steel = { fy_mpa: [235, 275, 355][i % 3], e_mpa: 210000 };
+    const pick = i % 5;
+    if (pick === 4) {
+      members.push({
+        id,
+        section: { kind: "rect", depth_mm: 120 + (i % 6) * 20, width_mm: 100 + (i % 4) * 20 },
+        material: { fc0k_mpa: 21, e005_mpa: 7400, e0mean_mpa: 11000, timber: "solid" },
+        length_mm,
+        axial_kn: 10 + (i % 90),
+        method: "en1995-1-1",
+      });
+      continue;
+    }
+    const section = [
+      { kind: "i", depth_mm: 200 + (i % 5) * 20, width_mm: 150 + (i % 3) * 25, flange_mm: 10 + (i % 4), web_mm: 6.5 + (i % 3), root_radius_mm: 12 },
+      { kind: "rhs", depth_mm: 100 + (i % 4) * 20, width_mm: 100, wall_mm: 5 + (i % 3), outer_radius_mm: 10 },
+      { kind: "chs", diameter_mm: 114.3 + (i % 4) * 25, wall_mm: 4 + (i % 3) },
+      { kind: "round", diameter_mm: 50 + (i % 6) * 10 },
+    ][pick];
+    members.push({ id, section, material: steel, length_mm, axial_kn, method: methods[i % methods.length] });
+  }
+  return members;
+}
+
+async function measureThousand() {
+  const members = thousandMembers();
+  const file = memberFile("Grain store (invented, 1,000 members)", members);
+  // The engine must accept every member, or the measurement means nothing.
+  let cliChecked = null;
+  try {
+    const started = process.hrtime.bigint();
+    const cli = cliCheck(file);
+    cliChecked = {
+      results: cli.results.length,
+      wall_ms_including_cargo: Number(process.hrtime.bigint() - started) / 1e6,
+    };
+  } catch (e) {
+    cliChecked = { error: String(e.message || e).slice(0, 300) };
+  }
+  const text = workspaceText([file]);
+  const runs = [];
+  let rows = null;
+  for (let run = 0; run < 3; run += 1) {
+    const { context, close } = await launch();
+    try {
+      await context.addInitScript(
+        ([key, value]) => {
+          if (!sessionStorage.getItem("strutline-bench-seeded")) {
+            sessionStorage.setItem("strutline-bench-seeded", "1");
+            localStorage.setItem(key, value);
+          }
+        },
+        [STORAGE_KEY, text],
+      );
+      const page = await firstPage(context);
+      await page.goto(BASE.href, { waitUntil: "load" });
+      await page.locator("[data-testid=member-row]").first().waitFor({ state: "visible", timeout: 30_000 });
+      const r = await page.evaluate(
+        () =>
+          new Promise((resolve) => {
+            requestAnimationFrame((frame) => {
+              const ready = performance.getEntriesByName("strutline-wasm-ready")[0]?.startTime ?? null;
+              const mounted = performance.getEntriesByName("strutline-mounted")[0]?.startTime ?? null;
+              const statuses = [...document.querySelectorAll("[data-testid=member-status]")];
+              resolve({
+                ready,
+                mounted,
+                frame,
+                rows: document.querySelectorAll("[data-testid=member-row]").length,
+                statuses_with_text: statuses.filter((s) => (s.textContent || "").trim() !== "").length,
+              });
+            });
+          }),
+      );
+      const problem = await page.locator("[data-testid=storage-problem]").count();
+      runs.push({ ...r, storage_problem: problem > 0 });
+      rows = r.rows;
+    } finally {
+      await close();
+    }
+  }
+  return { runs, rows, cliChecked };
+}
+
+function machine(browserVersion) {
+  const cpus = os.cpus();
+  return {
+    cpu: cpus[0]?.model?.trim() ?? "unknown",
+    logical_cpus: cpus.length,
+    memory_gib: Math.round((os.totalmem() / 2 ** 30) * 10) / 10,
+    os: `${os.type()} ${os.release()} ${os.arch()}`,
+    node: process.version,
+    browser: browserVersion,
+    load_average_at_start: os.loadavg().map((x) => Math.round(x * 100) / 100),
+  };
+}
+
+const fmt = (x, d = 1) => (Number.isFinite(x) ? x.toFixed(d) : "n/a");
+const verdict = (x, target) => (Number.isFinite(x) ? (x <= target ? "met" : "MISSED") : "not measured");
+
+const startedAt = new Date().toISOString();
+const browserVersion = (spawnSync(CHROMIUM, ["--version"], { encoding: "utf8" }).stdout || "unknown").trim();
+const host = machine(browserVersion);
+console.log(`bench-web against ${BASE.href} on ${host.cpu} (${host.logical_cpus} logical CPUs)`);
+
+const report = { started_at: startedAt, url: BASE.href, cache_name: CACHE_NAME, machine: host, targets: TARGETS, errors: {} };
+
+try {
+  const fr = await measureFirstRender();
+  report.first_render = {
+    cold_runs: fr.cold,
+    warm_runs: fr.warm,
+    cold_median_ms: median(fr.cold.map((r) => r.frame_ms)),
+    warm_median_ms: median(fr.warm.map((r) => r.frame_ms)),
+  };
+  console.log(`first render: cold ${fmt(report.first_render.cold_median_ms)} ms, warm ${fmt(report.first_render.warm_median_ms)} ms`);
+} catch (e) {
+  report.errors.first_render = String(e.message || e).split("\n")[0];
+  console.log(`first render: not measured: ${report.errors.first_render}`);
+}
+
+try {
+  const ed = await measureEdits(100);
+  report.edit = {
+    edits: ed.dom.length,
+    timeouts: ed.timeouts,
+    dom_median_ms: median(ed.dom),
+    frame_median_ms: median(ed.frame),
+    frame_p90_ms: quantile(ed.frame, 0.9),
+    dom_samples_ms: ed.dom.map((x) => Math.round(x * 100) / 100),
+  };
+  console.log(`edit: DOM ${fmt(report.edit.dom_median_ms, 2)} ms, next frame ${fmt(report.edit.frame_median_ms, 2)} ms (median of ${ed.dom.length}, ${ed.timeouts} timeouts)`);
+} catch (e) {
+  report.errors.edit = String(e.message || e).split("\n")[0];
+  console.log(`edit: not measured: ${report.errors.edit}`);
+}
+
+try {
+  const th = await measureThousand();
+  const toFrame = th.runs.map((r) => (r.ready === null ? NaN : r.frame - r.ready));
+  const toMount = th.runs.map((r) => (r.ready === null || r.mounted === null ? NaN : r.mounted - r.ready));
+  report.thousand = {
+    runs: th.runs,
+    rows_in_page: th.rows,
+    cli: th.cliChecked,
+    ready_to_frame_median_ms: median(toFrame),
+    ready_to_mounted_median_ms: median(toMount),
+  };
+  console.log(`1,000 members: ${fmt(report.thousand.ready_to_frame_median_ms)} ms to the frame (${th.rows} rows in the page)`);
+} catch (e) {
+  report.errors.thousand = String(e.message || e).split("\n")[0];
+  console.log(`1,000 members: not measured: ${report.errors.thousand}`);
+}
+
+report.dist = { gz_bytes: DIST_GZ, budget_bytes: DIST_BUDGET };
+
+const fr = report.first_render || {};
+const ed = report.edit || {};
+const th = report.thousand || {};
+const lines = [
+  "# Browser measurements",
+  "",
+  `Measured by \`cargo xtask bench-web\` on ${startedAt} (headless Chromium driven by playwright-core;`,
+  "the app served from 127.0.0.1 by the xtask server). Every figure is this run's own, met or missed.",
+  "",
+  "## Machine",
+  "",
+  `- CPU: ${host.cpu}, ${host.logical_cpus} logical CPUs (shared with other work; load average at start ${host.load_average_at_start.join(", ")})`,
+  `- memory: ${host.memory_gib} GiB`,
+  `- system: ${host.os}`,
+  `- browser: ${host.browser} (headless, --disable-gpu), node ${host.node}`,
+  "",
+  "## Results",
+  "",
+  "| measurement | result | target | verdict |",
+  "| --- | --- | --- | --- |",
+  `| first render, fresh profile (median of ${fr.cold_runs?.length ?? 0}) | ${fmt(fr.cold_median_ms)} ms | ≤ ${TARGETS.first_render_ms} ms | ${verdict(fr.cold_median_ms, TARGETS.first_render_ms)} |`,
+  `| first render, reload (median of ${fr.warm_runs?.length ?? 0}) | ${fmt(fr.warm_median_ms)} ms | ≤ ${TARGETS.first_render_ms} ms | ${verdict(fr.warm_median_ms, TARGETS.first_render_ms)} |`,
+  `| edit: recheck and redraw to next frame (median of ${ed.edits ?? 0}) | ${fmt(ed.frame_median_ms, 2)} ms (p90 ${fmt(ed.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.frame_median_ms, TARGETS.edit_ms)} |`,
+  `| edit: recheck until the result text changes (median) | ${fmt(ed.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.dom_median_ms, TARGETS.edit_ms)} |`,
+  `| 1,000-member list: module ready to first frame (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
+  `| dist/ gzipped | ${Number.isFinite(DIST_GZ) ? `${DIST_GZ} B (${fmt(DIST_GZ / 1024)} KB)` : "n/a"} | ≤ ${DIST_BUDGET} B (${DIST_BUDGET / 1024} KB) | ${verdict(DIST_GZ, DIST_BUDGET)} |`,
+  "",
+  "## How each is measured",
+  "",
+  "- First render: `performance.now()` when the first `[data-testid=member-row]` is laid out, taken at the",
+  "  start of the next animation frame, from navigation start; a fresh browser profile each time (cold:",
+  "  nothing cached, no service worker yet), and five reloads in one profile (warm: worker and cache in place).",
+  "- Edit: a new design load is set in `input[name=axial_kn]` (input and change events, as typing gives);",
+  "  the time until `[data-testid=result-utilisation]` shows a different text, and until the next",
+  "  animation frame after that (the canvas redraw is in that frame). A headless frame clock ticks at",
+  "  60 Hz, so the frame figure includes up to one frame of waiting for the clock.",
+  "- 1,000 members: a stored workspace of 1,000 invented members of five shapes and all steel and timber",
+  "  methods; from the mark `strutline-wasm-ready` (the module is compiled, `start()` is about to run)",
+  "  to the start of the first animation frame after the rows are in the page.",
+  `  Rows in the page: ${th.rows_in_page ?? "n/a"}; status texts filled: ${th.runs?.[0]?.statuses_with_text ?? "n/a"};`,
+  `  the command line checked ${th.cli?.results ?? "n/a"} of them${th.cli?.error ? ` (error: ${th.cli.error})` : ""}.`,
+  "",
+];
+for (const [k, v] of Object.entries(report.errors)) lines.push(`Not measured: ${k}: ${v}`, "");
+writeFileSync(join(OUT_DIR, "web.json"), JSON.stringify(report, null, 2) + "\n");
+writeFileSync(join(OUT_DIR, "web.md"), lines.join("\n"));
+console.log(`wrote ${join(OUT_DIR, "web.md")}`);
