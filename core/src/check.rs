@@ -8,6 +8,7 @@ use crate::material::Material;
 use crate::member::Member;
 use crate::method::{self, Input, Method};
 use crate::section::{Family, Properties, Section};
+use crate::stability;
 use crate::trace::Trace;
 
 /// A buckling mode or limit state.
@@ -191,34 +192,77 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     let m = input.member;
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
     let lengths = m.buckling_lengths().map_err(wrap)?;
-    let mut trace = Trace::with_capacity(48);
+    let mut trace = Trace::with_capacity(96);
     let mut warnings = Vec::new();
     method::prelude(method, input, &mut trace, &mut warnings).map_err(wrap)?;
-    let major = method::axis(
+    let assessment = stability::assess(method, input, &mut trace, &mut warnings);
+    // EN 1993-1-1 6.3.1.3 / 6.3.1.4 for Class 4: the method's formulas with
+    // A_eff in place of A (N_cr from the gross section).
+    let effective_section = assessment.en_effective.map(|eff| Section {
+        spec: input.section.spec.clone(),
+        family: input.section.family,
+        props: Properties {
+            area_mm2: eff.area_mm2,
+            ..input.section.props
+        },
+        designation: None,
+    });
+    let axes = match &effective_section {
+        Some(section) => Input {
+            member: input.member,
+            section,
+            material: input.material,
+        },
+        None => *input,
+    };
+    let mut major = method::axis(
         method,
-        input,
+        &axes,
         Mode::Major,
         lengths.major_mm,
         &mut trace,
         &mut warnings,
     )
     .map_err(wrap)?;
-    let minor = method::axis(
+    let mut minor = method::axis(
         method,
-        input,
+        &axes,
         Mode::Minor,
         lengths.minor_mm,
         &mut trace,
         &mut warnings,
     )
     .map_err(wrap)?;
-    let modes = vec![major, minor];
-    if needs_torsional_check(input.section) {
-        warnings.push(Warning::new(
-            "torsional-not-checked",
-            "torsional and flexural-torsional buckling are not checked for this open section; \
-             check them by hand: they can govern for angles, tees and channels",
-        ));
+    let mut twist =
+        stability::twist_mode(method, input, &axes, &lengths, &mut trace, &mut warnings)
+            .map_err(wrap)?;
+    let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
+    if aisc {
+        if let Some(c) = assessment.classified.filter(|c| c.is_slender()) {
+            stability::aisc_slender(&mut major, &c, input, &mut trace);
+            stability::aisc_slender(&mut minor, &c, input, &mut trace);
+            if let Some(t) = twist.as_mut() {
+                stability::aisc_slender(t, &c, input, &mut trace);
+            }
+        }
+        if input.section.family == Family::Angle {
+            warnings.push(Warning::new(
+                "angle-e5-not-applied",
+                "the single angle is checked as loaded through its centroid (AISC 360-16 E3, E4, E7); \
+                 the E5 effective slenderness for angles connected through one leg is not applied",
+            ));
+        }
+    }
+    let mut modes = Vec::with_capacity(4);
+    modes.push(major);
+    modes.push(minor);
+    if let Some(t) = twist {
+        modes.push(t);
+    }
+    if assessment.refused {
+        modes.push(stability::refused_mode());
+    } else if method == Method::En1993 {
+        modes.push(stability::en_section_mode(input, &assessment, &mut trace));
     }
     let governing = modes
         .iter()
@@ -258,15 +302,6 @@ pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let section = member.section.build().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     Ok((section, material))
-}
-
-/// Whether the section is open and thin-walled with a torsional mode that
-/// flexural buckling alone does not cover.
-fn needs_torsional_check(section: &Section) -> bool {
-    matches!(
-        section.family,
-        Family::Angle | Family::Tee | Family::Channel
-    )
 }
 
 /// Checks one member with its own method.

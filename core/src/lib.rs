@@ -20,6 +20,7 @@ pub mod material;
 pub mod member;
 pub mod method;
 pub mod section;
+pub mod stability;
 pub mod trace;
 pub mod units;
 

@@ -1,0 +1,630 @@
+//! The limit states beside flexural buckling: torsional and
+//! flexural-torsional buckling, cross-section classification and the
+//! effective areas of slender sections, with each code's design
+//! resistance for them.
+//!
+//! The torsional and flexural-torsional modes reuse the method's own
+//! flexural formulas: every code feeds the elastic critical load of the
+//! twisting mode into the same curve as flexural buckling (EN 1993-1-1
+//! 6.3.1.4 with the curve of the z axis, AISC 360-16 E4 through E3-2/E3-3,
+//! CSA S16-19 13.3.2 through 13.3.1). The mode is therefore worked by
+//! running the method about the minor axis at the equivalent length
+//! `L_eq = pi sqrt(E I_minor / N_cr)`, which has exactly that critical
+//! load, and its working is re-labelled to the twisting mode's scope. The
+//! number on the result and the method's curve can never disagree.
+
+use std::f64::consts::PI;
+
+use crate::check::{Mode, ModeResult, Warning};
+use crate::error::Result;
+use crate::material::Material;
+use crate::member::BucklingLengths;
+use crate::method::{self, Input, Method};
+use crate::section::{Family, SectionSpec};
+use crate::trace::{push, Scope, Trace};
+
+pub mod classify;
+pub mod effective;
+pub mod torsional;
+
+use classify::{Classified, Code, Kind};
+use effective::Effective;
+use torsional::Symmetry;
+
+/// EN 1993-1-1 6.1(1) Note 2B recommended gamma_M0.
+pub const GAMMA_M0: f64 = 1.0;
+
+/// The classification table a method uses (first-principles methods are
+/// screened with EN 1993-1-1 Table 5.2 for a warning only); `None` for timber.
+pub fn table_of(method: Method) -> Option<Code> {
+    match method {
+        Method::En1993 | Method::PerryRobertson | Method::Secant | Method::Euler => {
+            Some(Code::En1993)
+        }
+        Method::AiscLrfd | Method::AiscAsd => Some(Code::Aisc360),
+        Method::CsaS16 => Some(Code::CsaS16),
+        Method::En1995 => None,
+    }
+}
+
+fn warn(warnings: &mut Vec<Warning>, code: &'static str, message: impl FnOnce() -> String) {
+    if !warnings.iter().any(|w| w.code == code) {
+        warnings.push(Warning::new(code, message()));
+    }
+}
+
+/// What the cross-section assessment found.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Assessment {
+    /// The classification, when the section's plates are known.
+    pub classified: Option<Classified>,
+    /// EN 1993-1-5 effective area of a Class 4 section (EN 1993-1-1 only).
+    pub en_effective: Option<Effective>,
+    /// The section is outside the code's scope: the member gets no resistance.
+    pub refused: bool,
+}
+
+fn clause_ratio(code: Code) -> &'static str {
+    match code {
+        Code::En1993 => "EN 1993-1-1 Table 5.2",
+        Code::Aisc360 => "AISC 360-16 Table B4.1a",
+        Code::CsaS16 => "CSA S16-19 Table 1",
+    }
+}
+
+/// Pushes every element's width, ratio, limit and class.
+pub fn trace_classification(c: &Classified, trace: &mut Trace) {
+    let clause = clause_ratio(c.code);
+    if c.code == Code::En1993 {
+        push(
+            trace,
+            Scope::Section,
+            "epsilon",
+            "sqrt(235 / f_y)",
+            c.epsilon,
+            "-",
+            clause,
+        );
+    }
+    for e in c.elements() {
+        let l = e.part.labels();
+        push(
+            trace,
+            Scope::Section,
+            "c",
+            l.width,
+            e.width_mm,
+            "mm",
+            clause,
+        );
+        push(trace, Scope::Section, "c/t", l.ratio, e.ratio, "-", clause);
+        push(
+            trace,
+            Scope::Section,
+            "limit",
+            l.limit,
+            e.limit,
+            "-",
+            clause,
+        );
+        push(
+            trace,
+            Scope::Section,
+            "class",
+            l.class,
+            f64::from(e.class),
+            "-",
+            clause,
+        );
+    }
+    push(
+        trace,
+        Scope::Section,
+        "class",
+        "section class in compression (worst element; 4 = slender)",
+        f64::from(c.class),
+        "-",
+        clause,
+    );
+}
+
+fn trace_effective(
+    c: &Classified,
+    eff: &Effective,
+    scope: Scope,
+    trace: &mut Trace,
+    clause: &'static str,
+) {
+    for (e, r) in c.elements().iter().zip(eff.reduced.iter()) {
+        if let Some(r) = r {
+            let l = e.part.labels();
+            push(
+                trace,
+                scope,
+                "lambda_p",
+                l.slenderness,
+                r.slenderness,
+                "-",
+                clause,
+            );
+            push(trace, scope, "rho", l.rho, r.rho, "-", clause);
+            push(
+                trace,
+                scope,
+                "b_eff",
+                l.effective,
+                r.effective_mm,
+                "mm",
+                clause,
+            );
+        }
+    }
+    push(
+        trace,
+        scope,
+        "A_eff",
+        "effective area",
+        eff.area_mm2,
+        "mm2",
+        clause,
+    );
+}
+
+/// Classifies the section for `method`, pushes the working, computes the
+/// EN 1993-1-5 effective area of a Class 4 section and refuses what the
+/// code does not cover.
+pub fn assess(
+    method: Method,
+    input: &Input<'_>,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Assessment {
+    let mut out = Assessment {
+        classified: None,
+        en_effective: None,
+        refused: false,
+    };
+    let Some(code) = table_of(method) else {
+        return out;
+    };
+    let Material::Steel(steel) = input.material else {
+        return out;
+    };
+    let section = input.section;
+    let Some(c) = classify::classify(code, &section.spec, steel.fy_mpa, steel.e_mpa) else {
+        warn(warnings, "local-buckling-not-checked", || {
+            "local buckling is not checked for typed section properties: the plates are unknown; \
+             classify the section by hand (it must not be slender / Class 4)"
+                .to_string()
+        });
+        return out;
+    };
+    trace_classification(&c, trace);
+    out.classified = Some(c);
+    if !c.is_slender() {
+        return out;
+    }
+    let tube = c.elements().iter().any(|e| e.kind == Kind::Tube);
+    match method {
+        Method::En1993 => {
+            if tube {
+                out.refused = true;
+                warn(warnings, "outside-code-scope", || {
+                    format!(
+                        "circular hollow section with d/t = {:.1} beyond the Class 3 limit 90 eps^2 = {:.1}: \
+                         EN 1993-1-1 does not cover it (EN 1993-1-6 shell buckling applies); no resistance is given",
+                        c.elements().first().map_or(0.0, |e| e.ratio),
+                        90.0 * c.epsilon * c.epsilon
+                    )
+                });
+                return out;
+            }
+            let eff = effective::en_area(&c, section.props.area_mm2);
+            trace_effective(
+                &c,
+                &eff,
+                Scope::Section,
+                trace,
+                "EN 1993-1-5 4.4 (Eq. 4.2, 4.3)",
+            );
+            out.en_effective = Some(eff);
+            if matches!(
+                section.family,
+                Family::Angle | Family::Tee | Family::Channel
+            ) {
+                warn(warnings, "class4-shift-not-checked", || {
+                    "Class 4 section that is not doubly symmetric: the moment N_Ed e_N from the shift of the \
+                     effective centroid (EN 1993-1-1 6.2.2.5(4), 6.3.3) is not included; check it by hand"
+                        .to_string()
+                });
+            }
+        }
+        Method::AiscLrfd | Method::AiscAsd => {
+            if tube {
+                let dt = c.elements().first().map_or(0.0, |e| e.ratio);
+                let limit = 0.45 * steel.e_mpa / steel.fy_mpa;
+                if dt >= limit {
+                    out.refused = true;
+                    warn(warnings, "outside-code-scope", || {
+                        format!(
+                            "round HSS with D/t = {dt:.1} at or beyond 0.45 E/F_y = {limit:.1}: AISC 360-16 E7-7 \
+                             does not cover it; no resistance is given"
+                        )
+                    });
+                }
+            }
+        }
+        Method::CsaS16 => {
+            out.refused = true;
+            warn(warnings, "outside-code-scope", || {
+                "Class 4 section in compression: CSA S16-19 13.3.5 (effective area) is not implemented; \
+                 no resistance is given"
+                    .to_string()
+            });
+        }
+        Method::PerryRobertson | Method::Secant | Method::Euler => {
+            warn(warnings, "local-buckling-not-checked", || {
+                "the section is Class 4 by EN 1993-1-1 Table 5.2: local buckling would lower the \
+                 resistance and this first-principles method does not include it"
+                    .to_string()
+            });
+        }
+        Method::En1995 => {}
+    }
+    out
+}
+
+/// The mode of a member the code does not cover: resistance zero.
+pub fn refused_mode() -> ModeResult {
+    ModeResult {
+        mode: Mode::Section,
+        buckling_length_mm: 0.0,
+        slenderness: 0.0,
+        critical_kn: 0.0,
+        relative_slenderness: 0.0,
+        reduction: 0.0,
+        resistance_kn: 0.0,
+    }
+}
+
+/// EN 1993-1-1 6.2.4 cross-section resistance N_c,Rd = A f_y / gamma_M0
+/// (Eq. 6.10, Class 1-3) or A_eff f_y / gamma_M0 (Eq. 6.11, Class 4).
+pub fn en_section_mode(input: &Input<'_>, a: &Assessment, trace: &mut Trace) -> ModeResult {
+    let (fy, _) = input.material.strength_and_modulus();
+    let (area, clause) = match &a.en_effective {
+        Some(e) => (e.area_mm2, "EN 1993-1-1 Eq. 6.11"),
+        None => (input.section.props.area_mm2, "EN 1993-1-1 Eq. 6.10"),
+    };
+    let n = area * fy / GAMMA_M0 / 1000.0;
+    push(
+        trace,
+        Scope::Section,
+        "gamma_M0",
+        "partial factor for cross-section resistance (recommended value)",
+        GAMMA_M0,
+        "-",
+        "EN 1993-1-1 6.1(1) Note 2B",
+    );
+    push(
+        trace,
+        Scope::Section,
+        "N_c,Rd",
+        "cross-section resistance A f_y / gamma_M0 (A_eff for Class 4)",
+        n,
+        "kN",
+        clause,
+    );
+    let gross = input.section.props.area_mm2 * fy / 1000.0;
+    ModeResult {
+        mode: Mode::Section,
+        buckling_length_mm: 0.0,
+        slenderness: 0.0,
+        critical_kn: f64::INFINITY,
+        relative_slenderness: 0.0,
+        reduction: if gross > 0.0 {
+            n * GAMMA_M0 / gross
+        } else {
+            0.0
+        },
+        resistance_kn: n,
+    }
+}
+
+/// AISC 360-16 E7: scales a mode's strength by A_e/A_g with A_e at the
+/// mode's own F_cr (F_cr = reduction x F_y), pushing the working.
+pub fn aisc_slender(r: &mut ModeResult, c: &Classified, input: &Input<'_>, trace: &mut Trace) {
+    let Material::Steel(steel) = input.material else {
+        return;
+    };
+    let ag = input.section.props.area_mm2;
+    let fcr = r.reduction * steel.fy_mpa;
+    let eff = effective::aisc_area(c, ag, steel.fy_mpa, steel.e_mpa, fcr);
+    let scope = method::euler::scope_of(r.mode);
+    push(
+        trace,
+        scope,
+        "F_cr",
+        "critical stress entering E7",
+        fcr,
+        "MPa",
+        "AISC 360-16 E7",
+    );
+    trace_effective(c, &eff, scope, trace, "AISC 360-16 E7-2, E7-3, E7-7");
+    if ag > 0.0 {
+        r.resistance_kn *= eff.area_mm2 / ag;
+    }
+    push(
+        trace,
+        scope,
+        "P_n",
+        "strength with the effective area F_cr A_e (design value)",
+        r.resistance_kn,
+        "kN",
+        "AISC 360-16 Eq. E7-1",
+    );
+}
+
+/// Whether the torsional and flexural-torsional modes are worked for this
+/// section and method, and otherwise the warning to give.
+fn twist_applies(method: Method, input: &Input<'_>, warnings: &mut Vec<Warning>) -> Option<f64> {
+    let open = matches!(
+        input.section.family,
+        Family::I | Family::Angle | Family::Tee | Family::Channel
+    );
+    let given = input.section.family == Family::Given;
+    if !(open || given) {
+        return None;
+    }
+    let g = match input.material {
+        Material::Steel(s) => s.g_mpa,
+        Material::Timber(_) => {
+            if open {
+                warn(warnings, "torsional-not-checked", || {
+                    "torsional and flexural-torsional buckling of a timber open section are not covered".to_string()
+                });
+            }
+            return None;
+        }
+    };
+    match method {
+        Method::PerryRobertson | Method::Secant => {
+            if open && input.section.family != Family::I || given {
+                warn(warnings, "torsional-not-checked", || {
+                    format!(
+                        "torsional and flexural-torsional buckling are not part of the {} method; \
+                         they can govern for angles, tees and channels: use a code method to check them",
+                        method.key()
+                    )
+                });
+            }
+            return None;
+        }
+        Method::En1995 => return None,
+        _ => {}
+    }
+    if let SectionSpec::Given(s) = &input.section.spec {
+        if s.torsion_mm4.is_none() {
+            warn(warnings, "torsional-not-checked", || {
+                "torsional buckling is not checked for typed properties without torsion_mm4; \
+                 give torsion_mm4 (and warping_mm6) to check it"
+                    .to_string()
+            });
+            return None;
+        }
+        warn(warnings, "shear-centre-assumed", || {
+            "typed properties carry no shear centre: it is taken at the centroid (torsional buckling only); \
+             for a singly symmetric or asymmetric section flexural-torsional buckling is lower and is not checked"
+                .to_string()
+        });
+    }
+    Some(g)
+}
+
+struct TwistClauses {
+    n_t: &'static str,
+    single: &'static str,
+    general: &'static str,
+}
+
+fn twist_clauses(method: Method) -> TwistClauses {
+    match method {
+        Method::En1993 => TwistClauses {
+            n_t: "EN 1993-1-3 6.2.3(5); EN 1993-1-1 6.3.1.4",
+            single: "EN 1993-1-3 6.2.3(7); EN 1993-1-1 6.3.1.4",
+            general: "EN 1993-1-1 6.3.1.4: smallest root of the coupled cubic (Vlasov)",
+        },
+        Method::AiscLrfd | Method::AiscAsd => TwistClauses {
+            n_t: "AISC 360-16 Eq. E4-2 / F_ez A_g",
+            single: "AISC 360-16 Eq. E4-3 (times A_g)",
+            general: "AISC 360-16 Eq. E4-4 (times A_g)",
+        },
+        Method::CsaS16 => TwistClauses {
+            n_t: "CSA S16-19 13.3.2 (F_ez A)",
+            single: "CSA S16-19 13.3.2 (F_eyz A)",
+            general: "CSA S16-19 13.3.2 (cubic, F_e A)",
+        },
+        _ => TwistClauses {
+            n_t: "thin-walled beam theory: (G I_t + pi^2 E I_w / L_T^2) / i_0^2",
+            single: "thin-walled beam theory: singly symmetric quadratic",
+            general: "thin-walled beam theory: smallest root of the coupled cubic",
+        },
+    }
+}
+
+/// Works the torsional or flexural-torsional mode of an open section with
+/// the method's own curve (see the module docs). `axes` is the input the
+/// flexural modes used (the effective section for EN Class 4). Returns
+/// `None` when the mode does not apply or cannot govern.
+pub fn twist_mode(
+    method: Method,
+    input: &Input<'_>,
+    axes: &Input<'_>,
+    lengths: &BucklingLengths,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Result<Option<ModeResult>> {
+    let Some(g) = twist_applies(method, input, warnings) else {
+        return Ok(None);
+    };
+    let p = &input.section.props;
+    let (_, e) = input.material.strength_and_modulus();
+    let x = torsional::Inputs {
+        area_mm2: p.area_mm2,
+        i_major_mm4: p.i_major_mm4,
+        i_minor_mm4: p.i_minor_mm4,
+        torsion_mm4: p.torsion_mm4,
+        warping_mm6: p.warping_mm6,
+        sc_major_mm: p.shear_centre_major_mm,
+        sc_minor_mm: p.shear_centre_minor_mm,
+        e_mpa: e,
+        g_mpa: g,
+        l_major_mm: lengths.major_mm,
+        l_minor_mm: lengths.minor_mm,
+        l_torsion_mm: lengths.torsion_mm,
+    };
+    let crit = torsional::critical(&x);
+    let cl = twist_clauses(method);
+    let (mode, scope) = if crit.symmetry == Symmetry::Double {
+        (Mode::Torsional, Scope::Torsional)
+    } else {
+        (Mode::FlexuralTorsional, Scope::FlexuralTorsional)
+    };
+    push(
+        trace,
+        scope,
+        "L_T",
+        "torsional buckling length",
+        lengths.torsion_mm,
+        "mm",
+        "input",
+    );
+    push(trace, scope, "G", "shear modulus", g, "MPa", "material");
+    push(
+        trace,
+        scope,
+        "I_t",
+        "St Venant torsion constant",
+        p.torsion_mm4,
+        "mm4",
+        "section",
+    );
+    push(
+        trace,
+        scope,
+        "I_w",
+        "warping constant",
+        p.warping_mm6,
+        "mm6",
+        "section",
+    );
+    push(
+        trace,
+        scope,
+        "y_0",
+        "shear centre from centroid along the major axis",
+        p.shear_centre_major_mm,
+        "mm",
+        "section",
+    );
+    push(
+        trace,
+        scope,
+        "z_0",
+        "shear centre from centroid along the minor axis",
+        p.shear_centre_minor_mm,
+        "mm",
+        "section",
+    );
+    push(
+        trace,
+        scope,
+        "i_0",
+        "polar radius of gyration about the shear centre",
+        crit.i0_sq_mm2.sqrt(),
+        "mm",
+        "i_0^2 = i_y^2 + i_z^2 + y_0^2 + z_0^2",
+    );
+    push(
+        trace,
+        scope,
+        "N_cr,T",
+        "torsional elastic critical load (G I_t + pi^2 E I_w / L_T^2) / i_0^2",
+        crit.n_torsional / 1000.0,
+        "kN",
+        cl.n_t,
+    );
+    match crit.symmetry {
+        Symmetry::Double => {
+            if crit.n_torsional >= crit.n_minor {
+                push(trace, scope, "N_cr,T/N_cr,z", "torsional over minor-axis critical load: >= 1, torsional buckling cannot govern", crit.n_torsional / crit.n_minor, "-", cl.n_t);
+                return Ok(None);
+            }
+        }
+        Symmetry::SingleMajor | Symmetry::SingleMinor => {
+            push(
+                trace,
+                scope,
+                "N_cr,TF",
+                "flexural-torsional elastic critical load (axis of symmetry with twist)",
+                crit.n_twist / 1000.0,
+                "kN",
+                cl.single,
+            );
+        }
+        Symmetry::None => {
+            push(
+                trace,
+                scope,
+                "N_cr,TF",
+                "flexural-torsional elastic critical load (both axes with twist)",
+                crit.n_twist / 1000.0,
+                "kN",
+                cl.general,
+            );
+        }
+    }
+    let n = crit.n_twist;
+    let a = p.area_mm2;
+    if !(n > 0.0 && n.is_finite()) {
+        warn(warnings, "no-torsional-stiffness", || {
+            "the section has no torsional or warping stiffness: its twisting critical load is zero"
+                .to_string()
+        });
+        return Ok(Some(ModeResult {
+            mode,
+            buckling_length_mm: lengths.torsion_mm,
+            slenderness: f64::INFINITY,
+            critical_kn: 0.0,
+            relative_slenderness: f64::INFINITY,
+            reduction: 0.0,
+            resistance_kn: 0.0,
+        }));
+    }
+    let l_eq = PI * (e * p.i_minor_mm4 / n).sqrt();
+    let lambda_eq = PI * (e * a / n).sqrt();
+    push(
+        trace,
+        scope,
+        "lambda_eq",
+        "equivalent slenderness pi sqrt(E A / N_cr) with the same critical stress",
+        lambda_eq,
+        "-",
+        "same elastic critical stress",
+    );
+    push(trace, scope, "L_eq", "minor-axis length with the same critical load, to enter the method's curve (minor-axis curve)", l_eq, "mm", "pi sqrt(E I_z / N_cr)");
+    let start = trace.len();
+    let mut scratch: Vec<Warning> = Vec::new();
+    let r = method::axis(method, axes, Mode::Minor, l_eq, trace, &mut scratch)?;
+    for s in trace.iter_mut().skip(start) {
+        s.scope = scope;
+    }
+    Ok(Some(ModeResult {
+        mode,
+        buckling_length_mm: lengths.torsion_mm,
+        slenderness: lambda_eq,
+        critical_kn: n / 1000.0,
+        relative_slenderness: r.relative_slenderness,
+        reduction: r.reduction,
+        resistance_kn: r.resistance_kn,
+    }))
+}
