@@ -364,6 +364,27 @@ mod tests {
     }
 
     #[test]
+    fn effective_area_keeps_the_gross_critical_load() {
+        // EN 1993-1-1 Eq. 6.51: lambda_bar = sqrt(A_eff f_y / N_cr) with N_cr
+        // of the gross section. Halving A (as a Class 4 A_eff would) must
+        // leave N_cr alone and scale lambda_bar by sqrt(1/2).
+        let p = Prepared::new(&member(Method::En1993, "S355")).unwrap();
+        let mut t = Trace::new();
+        let mut w = Vec::new();
+        let gross = axis(&p.input(), Mode::Minor, 2000.0, &mut t, &mut w).unwrap();
+        let mut eff = p.section.clone();
+        eff.props.area_mm2 *= 0.5;
+        let input = Input {
+            section: &eff,
+            ..p.input()
+        };
+        let half = axis(&input, Mode::Minor, 2000.0, &mut t, &mut w).unwrap();
+        assert!((half.critical_kn - gross.critical_kn).abs() < 1e-9 * gross.critical_kn);
+        let ratio = half.relative_slenderness / gross.relative_slenderness;
+        assert!((ratio - 0.5f64.sqrt()).abs() < 1e-12);
+    }
+
+    #[test]
     fn refuses_timber() {
         let p = Prepared::new(&member(Method::En1993, "C24")).unwrap();
         let mut t = Trace::new();

@@ -59,7 +59,7 @@ pub struct Basics {
     pub slenderness: f64,
     /// Squash load A f, kN.
     pub n_pl_kn: f64,
-    /// Elastic critical load pi^2 E I / L_cr^2, kN.
+    /// Elastic critical load pi^2 E I / L_cr^2, kN (gross section).
     pub n_cr_kn: f64,
     /// Euler stress pi^2 E / (L_cr / r)^2, MPa.
     pub sigma_e_mpa: f64,
@@ -99,7 +99,10 @@ pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
         e_mpa: e,
         slenderness,
         n_pl_kn: a * f / 1000.0,
-        n_cr_kn: sigma_e * a / 1000.0,
+        // From I, not sigma_E A: when the check substitutes an effective
+        // area (EN 1993-1-1 6.3.1.1(3), Class 4), N_cr stays that of the
+        // gross section, as Eq. 6.51 wants.
+        n_cr_kn: PI * PI * e * i / (lcr * lcr) / 1000.0,
         sigma_e_mpa: sigma_e,
     })
 }
