@@ -2,7 +2,7 @@
 //! a list re-check reuses every result whose member is unchanged.
 
 use std::collections::HashMap;
-use std::rc::Rc;
+use std::sync::Arc;
 
 use strutline_core::check::Prepared;
 use strutline_core::{CheckResult, Error, Member};
@@ -42,7 +42,7 @@ impl Checked {
 /// Results remembered by member id.
 #[derive(Debug, Default)]
 pub struct Checker {
-    cache: HashMap<String, Rc<Checked>>,
+    cache: HashMap<String, Arc<Checked>>,
 }
 
 impl Checker {
@@ -52,7 +52,7 @@ impl Checker {
     }
 
     /// The checks of `members`, in order, and how many were worked afresh.
-    pub fn refresh(&mut self, members: &[Member]) -> (Vec<Rc<Checked>>, usize) {
+    pub fn refresh(&mut self, members: &[Member]) -> (Vec<Arc<Checked>>, usize) {
         let mut old = std::mem::take(&mut self.cache);
         let mut fresh = 0usize;
         let mut out = Vec::with_capacity(members.len());
@@ -61,10 +61,10 @@ impl Checker {
                 Some(c) if c.member == *m => c,
                 _ => {
                     fresh += 1;
-                    Rc::new(Checked::new(m))
+                    Arc::new(Checked::new(m))
                 }
             };
-            self.cache.insert(m.id.clone(), Rc::clone(&c));
+            self.cache.insert(m.id.clone(), Arc::clone(&c));
             out.push(c);
         }
         (out, fresh)
@@ -94,7 +94,7 @@ mod tests {
         let (second, n) = c.refresh(&ms);
         assert_eq!(n, 1, "only the edited member is worked again");
         assert_eq!(second[7].outcome.as_ref().unwrap().id, "M7");
-        assert!(Rc::ptr_eq(&second[1], &first[2]));
+        assert!(Arc::ptr_eq(&second[1], &first[2]));
         let u7 = second[7].outcome.as_ref().unwrap().utilisation;
         let fresh = strutline_core::check_member(&ms[7]).unwrap().utilisation;
         assert_eq!(u7, fresh);

@@ -6,6 +6,8 @@
 //! memoised checks) are plain Rust tested on the host; the components and
 //! the browser glue (storage, service worker, downloads, canvas) are thin.
 
+pub mod browser;
+pub mod chart;
 pub mod checks;
 pub mod demo;
 pub mod fields;

@@ -1,0 +1,238 @@
+//! The browser glue: local storage, the clock, downloads, the service
+//! worker and the theme class. Thin: every decision is made elsewhere.
+
+use wasm_bindgen::closure::Closure;
+use wasm_bindgen::{JsCast, JsValue};
+use web_sys::js_sys;
+
+/// The page's local storage, when the browser lets us have it.
+pub fn storage() -> Option<web_sys::Storage> {
+    web_sys::window()?.local_storage().ok().flatten()
+}
+
+/// Milliseconds since the epoch (`Date.now()`).
+pub fn now_ms() -> f64 {
+    js_sys::Date::now()
+}
+
+/// Reads a key ("" never stands for absent).
+pub fn get(key: &str) -> Option<String> {
+    storage()?.get_item(key).ok().flatten()
+}
+
+/// Writes a key; the error says why it failed (a full quota, mostly).
+pub fn set(key: &str, value: &str) -> Result<(), String> {
+    let s = storage().ok_or("local storage is not available in this browser")?;
+    s.set_item(key, value).map_err(|e| {
+        let name = js_sys::Reflect::get(&e, &JsValue::from_str("name"))
+            .ok()
+            .and_then(|v| v.as_string())
+            .unwrap_or_default();
+        if name.contains("Quota") {
+            "the browser's storage for this app is full".to_string()
+        } else if name.is_empty() {
+            "the browser refused to store the data".to_string()
+        } else {
+            format!("the browser refused to store the data ({name})")
+        }
+    })
+}
+
+/// Removes a key.
+pub fn remove(key: &str) {
+    if let Some(s) = storage() {
+        let _ = s.remove_item(key);
+    }
+}
+
+/// Offers `text` as a file download named `filename`.
+pub fn download(filename: &str, text: &str, mime: &str) -> Result<(), String> {
+    let err = |e: JsValue| format!("download failed: {e:?}");
+    let parts = js_sys::Array::of1(&JsValue::from_str(text));
+    let opts = web_sys::BlobPropertyBag::new();
+    opts.set_type(mime);
+    let blob = web_sys::Blob::new_with_str_sequence_and_options(&parts, &opts).map_err(err)?;
+    let url = web_sys::Url::create_object_url_with_blob(&blob).map_err(err)?;
+    let doc = web_sys::window()
+        .and_then(|w| w.document())
+        .ok_or("download failed: no document")?;
+    let a: web_sys::HtmlAnchorElement = doc
+        .create_element("a")
+        .map_err(err)?
+        .dyn_into()
+        .map_err(|_| "download failed: no anchor".to_string())?;
+    a.set_href(&url);
+    a.set_download(filename);
+    a.set_class_name("offscreen");
+    if let Some(body) = doc.body() {
+        let _ = body.append_child(&a);
+        a.click();
+        let _ = body.remove_child(&a);
+    }
+    let revoke = Closure::once_into_js(move || {
+        let _ = web_sys::Url::revoke_object_url(&url);
+    });
+    if let Some(w) = web_sys::window() {
+        let _ =
+            w.set_timeout_with_callback_and_timeout_and_arguments_0(revoke.unchecked_ref(), 2000);
+    }
+    Ok(())
+}
+
+/// Sets or clears a class on `<body>`.
+pub fn body_class(class: &str, on: bool) {
+    if let Some(body) = web_sys::window()
+        .and_then(|w| w.document())
+        .and_then(|d| d.body())
+    {
+        let _ = body.class_list().toggle_with_force(class, on);
+    }
+}
+
+/// The device pixel ratio (1 when unknown).
+pub fn device_pixel_ratio() -> f64 {
+    web_sys::window()
+        .map(|w| w.device_pixel_ratio())
+        .filter(|r| r.is_finite() && *r > 0.0)
+        .unwrap_or(1.0)
+}
+
+/// Registers `./sw.js` when the browser has service workers, and calls
+/// `update_ready` when a new worker is installed and waiting while an old
+/// one controls the page (or when the worker posts `{"type":
+/// "update-ready"}`).
+pub fn register_service_worker(update_ready: impl Fn() + Clone + 'static) {
+    let Some(window) = web_sys::window() else {
+        return;
+    };
+    let nav = window.navigator();
+    let has = js_sys::Reflect::has(&nav, &JsValue::from_str("serviceWorker")).unwrap_or(false);
+    if !has {
+        return;
+    }
+    let container = nav.service_worker();
+
+    // A message from the worker.
+    let ready = update_ready.clone();
+    let on_message =
+        Closure::<dyn Fn(web_sys::MessageEvent)>::new(move |e: web_sys::MessageEvent| {
+            let data = e.data();
+            let kind = js_sys::Reflect::get(&data, &JsValue::from_str("type"))
+                .ok()
+                .and_then(|v| v.as_string())
+                .or_else(|| data.as_string())
+                .unwrap_or_default();
+            if kind == "update-ready" {
+                ready();
+            }
+        });
+    let _ =
+        container.add_event_listener_with_callback("message", on_message.as_ref().unchecked_ref());
+    on_message.forget();
+
+    // Reload once the new worker has taken over, if the person asked for it.
+    let on_change = Closure::<dyn Fn()>::new(move || {
+        if RELOAD_ASKED.with(std::cell::Cell::get) {
+            if let Some(w) = web_sys::window() {
+                let _ = w.location().reload();
+            }
+        }
+    });
+    let _ = container
+        .add_event_listener_with_callback("controllerchange", on_change.as_ref().unchecked_ref());
+    on_change.forget();
+
+    let promise = container.register("./sw.js");
+    let controlled = container.clone();
+    let on_registered = Closure::once(move |reg: JsValue| {
+        let Ok(reg) = reg.dyn_into::<web_sys::ServiceWorkerRegistration>() else {
+            return;
+        };
+        if reg.waiting().is_some() && controlled.controller().is_some() {
+            update_ready();
+        }
+        let reg2 = reg.clone();
+        let on_found = Closure::<dyn Fn()>::new(move || {
+            if let Some(installing) = reg2.installing() {
+                let worker = installing.clone();
+                let c = controlled.clone();
+                let ready = update_ready.clone();
+                let on_state = Closure::<dyn Fn()>::new(move || {
+                    if worker.state() == web_sys::ServiceWorkerState::Installed
+                        && c.controller().is_some()
+                    {
+                        ready();
+                    }
+                });
+                installing.set_onstatechange(Some(on_state.as_ref().unchecked_ref()));
+                on_state.forget();
+            }
+        });
+        reg.set_onupdatefound(Some(on_found.as_ref().unchecked_ref()));
+        on_found.forget();
+    });
+    let on_failed = Closure::once(move |_e: JsValue| {});
+    let _ = promise.then2(&on_registered, &on_failed);
+    on_registered.forget();
+    on_failed.forget();
+}
+
+thread_local! {
+    static RELOAD_ASKED: std::cell::Cell<bool> = const { std::cell::Cell::new(false) };
+}
+
+/// Asks the waiting worker to take over, then reloads (at once when there
+/// is no worker to wait for, and in any case after two seconds).
+pub fn apply_update() {
+    RELOAD_ASKED.with(|c| c.set(true));
+    let Some(window) = web_sys::window() else {
+        return;
+    };
+    let reload = || {
+        if let Some(w) = web_sys::window() {
+            let _ = w.location().reload();
+        }
+    };
+    let nav = window.navigator();
+    let has = js_sys::Reflect::has(&nav, &JsValue::from_str("serviceWorker")).unwrap_or(false);
+    if !has {
+        reload();
+        return;
+    }
+    let promise = nav.service_worker().get_registration();
+    let then = Closure::once(move |reg: JsValue| {
+        let waiting = reg
+            .dyn_into::<web_sys::ServiceWorkerRegistration>()
+            .ok()
+            .and_then(|r| r.waiting());
+        match waiting {
+            Some(w) => {
+                let msg = js_sys::Object::new();
+                let _ = js_sys::Reflect::set(
+                    &msg,
+                    &JsValue::from_str("type"),
+                    &JsValue::from_str("skip-waiting"),
+                );
+                let _ = w.post_message(&msg);
+                let fallback = Closure::once_into_js(move || {
+                    if let Some(w) = web_sys::window() {
+                        let _ = w.location().reload();
+                    }
+                });
+                if let Some(win) = web_sys::window() {
+                    let _ = win.set_timeout_with_callback_and_timeout_and_arguments_0(
+                        fallback.unchecked_ref(),
+                        2000,
+                    );
+                }
+            }
+            None => {
+                if let Some(w) = web_sys::window() {
+                    let _ = w.location().reload();
+                }
+            }
+        }
+    });
+    let _ = promise.then(&then);
+    then.forget();
+}

@@ -1,0 +1,243 @@
+//! What the envelope chart shows, worked out without any drawing: the
+//! curves (from the engine's own methods, so the chart and the number can
+//! never disagree), the axis ranges and the member's markers.
+
+use strutline_core::check::{Mode, Prepared};
+use strutline_core::envelope;
+use strutline_core::method::{self, Input, Method};
+use strutline_core::trace::Trace;
+use strutline_core::{CheckResult, Error};
+
+/// Initial bows of the Perry-Robertson family, as fractions L_cr / n.
+pub const BOW_FAMILY: [f64; 3] = [250.0, 500.0, 1000.0];
+
+/// Samples per curve.
+pub const STEPS: usize = 120;
+
+/// A curve of the chart.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Curve {
+    /// Legend text.
+    pub label: String,
+    /// (slenderness, stress MPa).
+    pub points: Vec<(f64, f64)>,
+}
+
+/// A marker of the member about one axis.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Marker {
+    /// The mode (axis).
+    pub mode: Mode,
+    /// L_cr / i.
+    pub slenderness: f64,
+    /// Applied stress N_Ed / A, MPa.
+    pub applied_mpa: f64,
+    /// Design stress N_Rd / A of this axis, MPa.
+    pub resistance_mpa: f64,
+    /// Whether this axis governs.
+    pub governing: bool,
+}
+
+/// Everything the chart draws.
+#[derive(Debug, Clone, PartialEq)]
+pub struct ChartData {
+    /// Method name for the title.
+    pub method: &'static str,
+    /// Largest slenderness shown.
+    pub x_max: f64,
+    /// Largest stress shown, MPa.
+    pub y_max: f64,
+    /// Strength plateau f_y (or f_c,0,k), MPa.
+    pub yield_mpa: f64,
+    /// Euler's hyperbola, clipped to the chart.
+    pub euler: Vec<(f64, f64)>,
+    /// The design curve of the member's method, major then minor axis.
+    pub design: Vec<(Mode, Curve)>,
+    /// The Perry-Robertson family (empty unless asked for).
+    pub perry: Vec<Curve>,
+    /// The member's markers, one per flexural axis.
+    pub markers: Vec<Marker>,
+}
+
+impl ChartData {
+    /// The governing marker (or the first).
+    pub fn governing(&self) -> Option<&Marker> {
+        self.markers
+            .iter()
+            .find(|m| m.governing)
+            .or_else(|| self.markers.first())
+    }
+}
+
+fn nice_ceiling(v: f64, step: f64) -> f64 {
+    ((v / step).ceil() * step).max(step)
+}
+
+/// Works the chart for a prepared member and its check.
+pub fn build(
+    prepared: &Prepared,
+    result: &CheckResult,
+    with_perry: bool,
+) -> Result<ChartData, Error> {
+    let area = prepared.section.props.area_mm2;
+    let (f, e) = prepared.material.strength_and_modulus();
+    let method = result.method;
+    let flexural: Vec<_> = result
+        .modes
+        .iter()
+        .filter(|m| matches!(m.mode, Mode::Major | Mode::Minor))
+        .copied()
+        .collect();
+    let furthest = flexural.iter().map(|m| m.slenderness).fold(0.0, f64::max);
+    let x_max = nice_ceiling((furthest * 1.25).max(200.0), 50.0).min(1000.0);
+    let applied = result_applied_mpa(prepared, area);
+    let y_max = nice_ceiling((f * 1.15).max(applied * 1.1), 50.0);
+
+    // Euler: from where it crosses the top of the chart.
+    let lambda_top = std::f64::consts::PI * (e / y_max).sqrt();
+    let mut euler = Vec::with_capacity(STEPS + 1);
+    if lambda_top < x_max {
+        for k in 0..=STEPS {
+            let l = lambda_top + (x_max - lambda_top) * (k as f64) / (STEPS as f64);
+            euler.push((l, std::f64::consts::PI.powi(2) * e / (l * l)));
+        }
+    }
+
+    let mut design = Vec::with_capacity(2);
+    for mode in [Mode::Major, Mode::Minor] {
+        let pts = envelope::sample(prepared, method, mode, 0.0, x_max, STEPS)?;
+        design.push((
+            mode,
+            Curve {
+                label: format!("{}, {} axis", method.key(), mode.key()),
+                points: pts.iter().map(|p| (p.slenderness, p.design_mpa)).collect(),
+            },
+        ));
+    }
+
+    let perry = if with_perry {
+        perry_family(prepared, x_max)?
+    } else {
+        Vec::new()
+    };
+
+    let markers = flexural
+        .iter()
+        .map(|m| Marker {
+            mode: m.mode,
+            slenderness: m.slenderness,
+            applied_mpa: applied,
+            resistance_mpa: m.resistance_kn * 1000.0 / area,
+            governing: m.mode == result.governing,
+        })
+        .collect();
+
+    Ok(ChartData {
+        method: method.title(),
+        x_max,
+        y_max,
+        yield_mpa: f,
+        euler,
+        design,
+        perry,
+        markers,
+    })
+}
+
+fn result_applied_mpa(prepared: &Prepared, area: f64) -> f64 {
+    prepared.member.axial_kn * 1000.0 / area
+}
+
+/// Perry-Robertson curves for bows L_cr/250, L_cr/500 and L_cr/1000 about
+/// the minor axis, each worked by the engine's Perry-Robertson method with
+/// a copy of the member whose bow is set at every slenderness.
+pub fn perry_family(prepared: &Prepared, x_max: f64) -> Result<Vec<Curve>, Error> {
+    let r = prepared.section.props.r_minor_mm;
+    let area = prepared.section.props.area_mm2;
+    let mut copy = prepared.member.clone();
+    let mut trace = Trace::with_capacity(16);
+    let mut warnings = Vec::new();
+    let mut out = Vec::with_capacity(BOW_FAMILY.len());
+    for n in BOW_FAMILY {
+        let mut points = Vec::with_capacity(STEPS + 1);
+        for k in 0..=STEPS {
+            let lambda = (x_max * (k as f64) / (STEPS as f64)).max(1e-3);
+            let lcr = lambda * r;
+            copy.bow_mm = Some(lcr / n);
+            let input = Input {
+                member: &copy,
+                section: &prepared.section,
+                material: &prepared.material,
+            };
+            trace.clear();
+            warnings.clear();
+            let res = method::axis(
+                Method::PerryRobertson,
+                &input,
+                Mode::Minor,
+                lcr,
+                &mut trace,
+                &mut warnings,
+            )?;
+            points.push((lambda, res.resistance_kn * 1000.0 / area));
+        }
+        out.push(Curve {
+            label: format!("Perry-Robertson, bow L_cr/{n}"),
+            points,
+        });
+    }
+    Ok(out)
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::demo::sample_member;
+
+    #[test]
+    fn chart_agrees_with_check() {
+        let m = sample_member("A");
+        let p = Prepared::new(&m).unwrap();
+        let r = p.check().unwrap();
+        let d = build(&p, &r, true).unwrap();
+        assert_eq!(d.markers.len(), 2);
+        let g = d.governing().unwrap();
+        assert_eq!(g.mode, r.governing);
+        // The governing marker's design stress is the check's resistance over A.
+        let a = r.section.area_mm2;
+        assert!((g.resistance_mpa - r.resistance_kn * 1000.0 / a).abs() < 1e-9);
+        assert!((g.applied_mpa - m.axial_kn * 1000.0 / a).abs() < 1e-9);
+        assert!(g.slenderness < d.x_max);
+        assert!(d.y_max >= d.yield_mpa);
+        // Euler stays within the chart and starts at its top.
+        assert!(d.euler.iter().all(|&(_, s)| s <= d.y_max + 1e-9));
+        assert!((d.euler[0].1 - d.y_max).abs() < 1e-6);
+        // Design curves never exceed the plateau and fall with slenderness.
+        for (_, c) in &d.design {
+            assert_eq!(c.points.len(), STEPS + 1);
+            assert!(c.points.iter().all(|&(_, s)| s <= d.yield_mpa + 1e-9));
+            assert!(c.points.first().unwrap().1 >= c.points.last().unwrap().1);
+        }
+        assert_eq!(d.perry.len(), 3);
+        let no_family = build(&p, &r, false).unwrap();
+        assert!(no_family.perry.is_empty());
+    }
+
+    #[test]
+    fn range_grows_for_slender_members() {
+        let mut m = sample_member("A");
+        m.length_mm = 20_000.0;
+        let p = Prepared::new(&m).unwrap();
+        let r = p.check().unwrap();
+        let d = build(&p, &r, false).unwrap();
+        let far = d.markers.iter().map(|k| k.slenderness).fold(0.0, f64::max);
+        assert!(d.x_max >= far * 1.2, "{} {}", d.x_max, far);
+        assert_eq!(d.x_max % 50.0, 0.0);
+    }
+}
