@@ -69,7 +69,7 @@ def cases():
            ss.rectangular_hollow_section(d=100, b=200, t=6, r_out=12, n_r=N_R), 0.8)
     yield ("CHS 168.3x8",
            {"kind": "chs", "diameter_mm": 168.3, "wall_mm": 8},
-           ss.circular_hollow_section(d=168.3, t=8, n=N_CIRCLE), 1.0)
+           ss.circular_hollow_section(d=168.3, t=8, n=N_CIRCLE).shift_section(84.15, 84.15), 1.0)
     yield ("equal angle 100x100x10 r1=12 r2=6",
            {"kind": "angle", "depth_mm": 100, "width_mm": 100, "thickness_mm": 10,
             "root_radius_mm": 12, "toe_radius_mm": 6},
@@ -153,8 +153,8 @@ def main():
         "n_circle": N_CIRCLE,
         "axes": "library x (horizontal) -> our y; library y (vertical) -> our z; "
                 "positions from the library origin, which is the bottom-left corner "
-                "of the bounding box for every builder used here (the CHS is centred "
-                "on the origin)",
+                "of the bounding box for every builder used here (the CHS, which the "
+                "library centres on the origin, is shifted by D/2 in both directions)",
         "cases": results,
     }
     path = os.path.join(os.path.dirname(os.path.abspath(__file__)), "values.json")

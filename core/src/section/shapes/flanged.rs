@@ -25,10 +25,17 @@
 //! from the web centre line, and I_w = tf b'³ h'² (3 b' tf + 2 h' tw) /
 //! (12 (6 b' tf + h' tw)).
 //!
-//! Tee torsion constant: Roark Table 10.7 case 8 (T section):
-//! K = K1 + K2 + α D⁴ with K1 = b tf³ [1/3 - 0.21 (tf/b)(1 - tf⁴/(12 b⁴))],
-//! K2 = c tw³ [1/3 - 0.105 (tw/c)(1 - tw⁴/(192 c⁴))] with c = h - tf,
-//! α = (t_min/t_max)(0.15 + 0.1 r/tf), D = ((tf + r)² + r tw + tw²/4)/(2r + tf).
+//! Tee torsion constant: the flange and stem rectangles of Roark Table
+//! 10.7 case 8 (T section), K1 = b tf³ [1/3 - 0.21 (tf/b)(1 - tf⁴/(12 b⁴))]
+//! and K2 = c tw³ [1/3 - 0.105 (tw/c)(1 - tw⁴/(192 c⁴))] with c = h - tf,
+//! plus one web-flange junction term α D⁴ with the coefficients of El
+//! Darwish & Johnston (1965) as printed in AISC Design Guide 9 for rolled
+//! I shapes:
+//! α = -0.042 + 0.2204 tw/tf + 0.1355 r/tf - 0.0865 r tw/tf² - 0.0725 tw²/tf²,
+//! D = ((tf + r)² + tw (r + tw/4))/(2r + tf). (Roark's
+//! own α = (t_min/t_max)(0.15 + 0.1 r/tf) came out 5 % above a
+//! finite-element solution for a 150x100x10x8 r10 tee; this one is within
+//! 0.2 % for both reference tees.)
 //!
 //! Tee warping constant: AISC Design Guide 9, I_w = tf³ b³/144 + tw³ h'³/36
 //! with h' = h - tf/2; shear centre at the intersection of the flange and
@@ -174,10 +181,11 @@ pub(super) fn tee(s: &Flanged) -> Result<Raw> {
     let c = h - tf;
     let k2 =
         c * tw.powi(3) * (1.0 / 3.0 - 0.105 * (tw / c) * (1.0 - tw.powi(4) / (192.0 * c.powi(4))));
-    let (tmin, tmax) = (tf.min(tw), tf.max(tw));
-    let alpha = (tmin / tmax) * (0.15 + 0.1 * r / tf);
-    let dd = ((tf + r).powi(2) + r * tw + tw * tw / 4.0) / (2.0 * r + tf);
-    let torsion = k1 + k2 + alpha * dd.powi(4);
+    let alpha = -0.042 + 0.2204 * tw / tf + 0.1355 * r / tf
+        - 0.0865 * r * tw / (tf * tf)
+        - 0.0725 * tw * tw / (tf * tf);
+    let dd = ((tf + r).powi(2) + tw * (r + tw / 4.0)) / (2.0 * r + tf);
+    let torsion = k1 + k2 + alpha.max(0.0) * dd.powi(4);
     let warping = tf.powi(3) * b.powi(3) / 144.0 + tw.powi(3) * (h - tf / 2.0).powi(3) / 36.0;
 
     Ok(Raw {
