@@ -244,6 +244,19 @@ pub fn strength_label(material: &Material) -> (&'static str, &'static str) {
     }
 }
 
+/// Where a steel's modulus comes from.
+fn modulus_source(s: &Steel) -> &'static str {
+    if s.standard.starts_with("EN") {
+        "EN 1993-1-1 3.2.6(1)"
+    } else if s.standard.starts_with("ASTM") {
+        "AISC 360-16 (E = 29 000 ksi)"
+    } else if s.standard.starts_with("CSA") {
+        "CSA S16-19 clause 2"
+    } else {
+        "custom material"
+    }
+}
+
 /// Pushes the material and section lines of a prelude: thickness (steel
 /// grades), strength, modulus, area and squash load; and warns when a
 /// graded steel's thickness is unknown.
@@ -298,7 +311,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                 "modulus of elasticity",
                 e,
                 "MPa",
-                s.standard,
+                modulus_source(s),
             );
             if s.name.starts_with("A500")
                 && !matches!(input.section.family, Family::Chs | Family::Rhs)
