@@ -3,9 +3,10 @@
 //! Chapter E, sections E1 (phi_c = 0.90, Omega_c = 1.67) and E3 (Eqs.
 //! E3-1 to E3-4); and AISC Steel Construction Manual, 15th edition (2017),
 //! Table 4-14, "Available Critical Stress for Compression Members",
-//! F_y = 50 ksi column.
+//! F_y = 50 ksi column; and AISC Design Examples, version 15.0 (2017),
+//! Example E.1A (W14x132 column, A992, L_c = 30 ft, minor axis).
 //!
-//! The Table 4-14 values below are recalled from memory (three significant
+//! The Table 4-14 and Example E.1A values below are recalled from memory (three significant
 //! figures as printed), not copied from a copy of the Manual at hand.
 //! Units: the table is in ksi; the engine works in MPa, converted with
 //! 1 ksi = 6.894757 MPa exactly as the engine does. E = 29 000 ksi.
@@ -129,4 +130,41 @@ fn slenderness_over_200_is_cautioned_once() {
         .warnings
         .iter()
         .any(|w| w.code == "slenderness-over-200"));
+}
+
+#[test]
+fn design_example_e1a_w14x132() {
+    // AISC Design Examples v15.0, Example E.1A (recalled from memory):
+    // W14x132, A992, A_g = 38.8 in2, r_y = 3.76 in, L_c = 30 ft;
+    // L_c/r = 95.7, F_e = 31.2 ksi, F_cr = 25.5 ksi (E3-2),
+    // phi_c P_n = 0.90 x 25.5 x 38.8 = 892 kips; P_n / Omega_c = 593 kips.
+    // Units: 1 in = 25.4 mm, 1 ft = 304.8 mm (exact), 1 kip = 4.448222 kN.
+    // Tolerance 0.4%: the example rounds F_cr to three figures (25.5 for
+    // 25.58 is 0.3%).
+    let a = 38.8 * 25.4 * 25.4;
+    let r = 3.76 * 25.4;
+    let m: Member = serde_json::from_value(json!({
+        "id": "E1A",
+        "section": {"kind": "given", "area_mm2": a, "i_major_mm4": 1530.0 * 25.4f64.powi(4), "i_minor_mm4": a * r * r},
+        "material": {"grade": "A992"},
+        "length_mm": 30.0 * 304.8,
+        "axial_kn": 840.0 * 4.448222,
+        "method": "aisc360-lrfd"
+    }))
+    .unwrap();
+    let kip = 4.448_222;
+    let lrfd = check_member(&m).unwrap();
+    assert_eq!(lrfd.governing, Mode::Minor);
+    let got = lrfd.resistance_kn / kip;
+    assert!(
+        (got / 892.0 - 1.0).abs() < 0.004,
+        "phi_c P_n = {got} kips, example 892"
+    );
+    let mut asd = m.clone();
+    asd.method = serde_json::from_value(json!("aisc360-asd")).unwrap();
+    let got = check_member(&asd).unwrap().resistance_kn / kip;
+    assert!(
+        (got / 593.0 - 1.0).abs() < 0.004,
+        "P_n / Omega_c = {got} kips, example 593"
+    );
 }
