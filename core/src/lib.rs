@@ -13,6 +13,8 @@
 
 pub mod catalogue;
 pub mod check;
+pub mod compare;
+pub mod csv;
 pub mod envelope;
 pub mod error;
 pub mod file;
@@ -20,6 +22,7 @@ pub mod material;
 pub mod member;
 pub mod method;
 pub mod section;
+pub mod solve;
 pub mod stability;
 pub mod trace;
 pub mod units;

@@ -1,11 +1,201 @@
-//! PLACEHOLDER for the `convert` subcommand until its module lands.
+//! `strutline convert IN OUT [--take-valid]`: converts a member file
+//! between JSON and CSV, choosing each format by the file's extension
+//! (`.json` or `.csv`; an input of another extension is recognised by its
+//! content).
+//!
+//! Exit status: 0 when every member was converted; 2 when the input has
+//! problems, each printed on stderr with its line and column. Nothing is
+//! written when there are problems, unless `--take-valid` is given: then
+//! the valid members are written and the status is still 2, so scripts
+//! notice the rows left out. The output is written to a temporary file
+//! beside OUT and renamed into place, so OUT is never left half written.
 
-/// Runs the subcommand.
-pub fn run(_args: &[String]) -> Result<i32, String> {
-    Err("the convert command is not available in this build yet".into())
+use std::path::Path;
+
+use strutline_core::csv::{self, Format};
+use strutline_core::file::{self, MemberFile, MAX_BYTES};
+
+/// Reads a member file in either format; see [`strutline_core::csv::read_any`].
+pub fn read_any(path: &str, text: &str) -> Result<MemberFile, String> {
+    csv::read_any(path, text)
 }
 
-/// Reads a member file from text (JSON only until CSV support lands).
-pub fn read_any(path: &str, text: &str) -> Result<strutline_core::file::MemberFile, String> {
-    strutline_core::file::parse(text).map_err(|e| format!("{path}: {e}"))
+const USAGE: &str = "usage: strutline convert IN OUT [--take-valid]\n  \
+    IN and OUT end in .json or .csv; --take-valid writes the valid members even when some rows have problems";
+
+fn output_format(path: &str) -> Result<Format, String> {
+    let ext = Path::new(path)
+        .extension()
+        .and_then(|e| e.to_str())
+        .map(str::to_ascii_lowercase);
+    match ext.as_deref() {
+        Some("json") => Ok(Format::Json),
+        Some("csv") => Ok(Format::Csv),
+        _ => Err(format!(
+            "{path}: the output must end in .json or .csv, which sets its format\n{USAGE}"
+        )),
+    }
+}
+
+fn write_atomically(path: &str, text: &str) -> Result<(), String> {
+    let target = Path::new(path);
+    let name = target
+        .file_name()
+        .and_then(|n| n.to_str())
+        .unwrap_or("members");
+    let temp = target.with_file_name(format!(".{name}.strutline-tmp"));
+    std::fs::write(&temp, text).map_err(|e| format!("{path}: cannot write: {e}"))?;
+    std::fs::rename(&temp, target).map_err(|e| {
+        let _ = std::fs::remove_file(&temp);
+        format!("{path}: cannot write: {e}")
+    })
+}
+
+/// Runs the subcommand with the arguments after `convert`.
+pub fn run(args: &[String]) -> Result<i32, String> {
+    let mut take_valid = false;
+    let mut paths: Vec<&str> = Vec::new();
+    for a in args {
+        match a.as_str() {
+            "--take-valid" => take_valid = true,
+            "-h" | "--help" => {
+                println!("{USAGE}");
+                return Ok(0);
+            }
+            flag if flag.starts_with("--") => {
+                return Err(format!("convert: unknown option {flag}\n{USAGE}"))
+            }
+            path => paths.push(path),
+        }
+    }
+    let [input, output] = paths.as_slice() else {
+        return Err(format!(
+            "convert needs an input and an output file\n{USAGE}"
+        ));
+    };
+    let out_format = output_format(output)?;
+    if let Ok(meta) = std::fs::metadata(input) {
+        if meta.len() > MAX_BYTES as u64 {
+            eprintln!(
+                "{input}: the file is {} bytes; the largest accepted is {MAX_BYTES} bytes",
+                meta.len()
+            );
+            return Ok(2);
+        }
+    }
+    let text = std::fs::read_to_string(input).map_err(|e| format!("{input}: cannot read: {e}"))?;
+    let (members, problems) = match csv::detect_format(input, &text) {
+        Format::Json => match file::parse(&text) {
+            Ok(f) => (f, Vec::new()),
+            Err(e) => {
+                eprintln!("{input}: {e}");
+                eprintln!("nothing written");
+                return Ok(2);
+            }
+        },
+        Format::Csv => {
+            let (f, problems) = csv::read_csv_lenient(input, &text);
+            (f, problems)
+        }
+    };
+    for p in &problems {
+        eprintln!("{input}: {p}");
+    }
+    if !problems.is_empty() && !take_valid {
+        eprintln!(
+            "{input}: {} problem{}; nothing written (fix them, or give --take-valid to write the {} valid member{})",
+            problems.len(),
+            if problems.len() == 1 { "" } else { "s" },
+            members.members.len(),
+            if members.members.len() == 1 { "" } else { "s" },
+        );
+        return Ok(2);
+    }
+    let body = match out_format {
+        Format::Json => members.to_json(),
+        Format::Csv => csv::to_csv(&members),
+    };
+    write_atomically(output, &body)?;
+    println!(
+        "{output}: {} member{} written",
+        members.members.len(),
+        if members.members.len() == 1 { "" } else { "s" }
+    );
+    Ok(if problems.is_empty() { 0 } else { 2 })
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+
+    const GOOD: &str = "id,kind,depth_mm,width_mm,fy_mpa,e_mpa,length_mm,axial_kn,method\n\
+                        P1,rect,100,50,235,210000,2000,10,euler\n";
+    const BAD_ROW: &str = "P2,rect,100,,235,210000,2000,10,euler\n";
+
+    fn dir(name: &str) -> std::path::PathBuf {
+        let d =
+            std::env::temp_dir().join(format!("strutline-convert-{name}-{}", std::process::id()));
+        let _ = std::fs::remove_dir_all(&d);
+        std::fs::create_dir_all(&d).unwrap();
+        d
+    }
+
+    fn s(p: &std::path::Path) -> String {
+        p.to_str().unwrap().to_string()
+    }
+
+    #[test]
+    fn csv_to_json_and_back() {
+        let d = dir("round");
+        let csv_in = d.join("in.csv");
+        std::fs::write(&csv_in, GOOD).unwrap();
+        let json = d.join("out.json");
+        assert_eq!(run(&[s(&csv_in), s(&json)]).unwrap(), 0);
+        let f = file::parse(&std::fs::read_to_string(&json).unwrap()).unwrap();
+        assert_eq!(f.title, "in");
+        assert_eq!(f.members[0].id, "P1");
+        let csv_out = d.join("again.csv");
+        assert_eq!(run(&[s(&json), s(&csv_out)]).unwrap(), 0);
+        let again = csv::parse_csv(&std::fs::read_to_string(&csv_out).unwrap());
+        assert_eq!(again.members, f.members);
+        let _ = std::fs::remove_dir_all(&d);
+    }
+
+    #[test]
+    fn problems_write_nothing_unless_take_valid() {
+        let d = dir("problems");
+        let csv_in = d.join("in.csv");
+        std::fs::write(&csv_in, format!("{GOOD}{BAD_ROW}")).unwrap();
+        let json = d.join("out.json");
+        assert_eq!(run(&[s(&csv_in), s(&json)]).unwrap(), 2);
+        assert!(!json.exists());
+        assert_eq!(
+            run(&[s(&csv_in), s(&json), "--take-valid".into()]).unwrap(),
+            2
+        );
+        let f = file::parse(&std::fs::read_to_string(&json).unwrap()).unwrap();
+        assert_eq!(f.members.len(), 1);
+        let _ = std::fs::remove_dir_all(&d);
+    }
+
+    #[test]
+    fn usage_errors() {
+        assert!(run(&[]).is_err());
+        assert!(run(&["a.csv".into(), "b.txt".into()])
+            .unwrap_err()
+            .contains(".json or .csv"));
+        assert!(run(&["a.csv".into(), "b.json".into(), "--bogus".into()]).is_err());
+        assert!(run(&["/nonexistent/a.csv".into(), "b.json".into()])
+            .unwrap_err()
+            .contains("cannot read"));
+        let broken = dir("broken").join("x.json");
+        std::fs::write(&broken, "{").unwrap();
+        assert_eq!(run(&[s(&broken), "y.csv".into()]).unwrap(), 2);
+    }
 }

@@ -1,0 +1,478 @@
+//! Reverse questions about one member, answered by the engine itself for
+//! the member's section, material and a chosen method:
+//!
+//! - [`longest_length`]: the longest length at which the member still
+//!   carries its design load;
+//! - [`largest_load`]: the largest design load it carries at its length
+//!   (its design resistance), with the governing mode.
+//!
+//! # How lengths are scaled
+//!
+//! A trial length is the member's `length_mm` times a factor `s`. The
+//! effective-length factors `k_major`, `k_minor`, `k_torsion` are kept, so
+//! each buckling length scales with `s` too; buckling lengths given
+//! directly (`lcr_major_mm`, ...) are scaled by the same `s`, so the
+//! member keeps its proportions (a brace restrained at mid-length stays
+//! restrained at mid-length). An explicit `bow_mm` or `eccentricity_mm` is
+//! kept as given; when absent, the methods' defaults (length / 1000)
+//! follow the trial length.
+//!
+//! # The solve
+//!
+//! Design resistance does not increase with length, so the utilisation
+//! `N_Ed / N_Rd(s)` rises with `s`. The solve brackets the length where it
+//! reaches 1 (doubling or halving `s` from the member's own length) and
+//! bisects the bracket geometrically until its ends differ by less than
+//! one part in 10^10, then reports the end that still carries the load:
+//! its utilisation is 1 to far better than 0.1 % wherever the resistance
+//! is continuous in length. Lengths at which the method refuses to work
+//! (outside its range) count as "not carried", and the answer then says
+//! so.
+
+use serde::Serialize;
+
+use crate::check::{CheckResult, Mode, Prepared};
+use crate::error::{Error, Result};
+use crate::member::Member;
+use crate::method::Method;
+
+/// The shortest trial length, mm: below it a member is a stub whose
+/// resistance no longer depends on length.
+pub const SHORTEST_MM: f64 = 1.0;
+
+/// The longest trial length, mm (1000 km): a load carried at this length
+/// is carried at any length.
+pub const LONGEST_MM: f64 = 1e9;
+
+/// Ends of the bracket closer than this relative gap end the bisection.
+const GAP: f64 = 1e-10;
+
+/// What sets the longest length.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+#[serde(tag = "by", rename_all = "kebab-case")]
+pub enum LengthLimit {
+    /// The design load: a little longer and the utilisation exceeds 1.
+    Load,
+    /// The method's range: a little longer and the method refuses the
+    /// member (e.g. a slenderness limit); the message says why.
+    MethodRange {
+        /// The method's words.
+        reason: String,
+    },
+}
+
+/// The longest length found.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct LongestLength {
+    /// The method used.
+    pub method: Method,
+    /// The longest system length that carries the load, mm.
+    pub length_mm: f64,
+    /// That length over the member's own length.
+    pub scale: f64,
+    /// Major-axis buckling length at the answer, mm.
+    pub lcr_major_mm: f64,
+    /// Minor-axis buckling length at the answer, mm.
+    pub lcr_minor_mm: f64,
+    /// Torsional buckling length at the answer, mm.
+    pub lcr_torsion_mm: f64,
+    /// Utilisation at the answer (at most 1).
+    pub utilisation: f64,
+    /// Design resistance at the answer, kN.
+    pub resistance_kn: f64,
+    /// The governing mode at the answer.
+    pub governing: Mode,
+    /// What sets the length.
+    pub limit: LengthLimit,
+}
+
+/// The answer to "how long can it be?".
+#[derive(Debug, Clone, PartialEq, Serialize)]
+#[serde(tag = "answer", rename_all = "kebab-case")]
+pub enum LengthAnswer {
+    /// A longest length exists.
+    Found(LongestLength),
+    /// Even a stub of [`SHORTEST_MM`] does not carry the load: the
+    /// section or material is too weak whatever the length.
+    NoLength {
+        /// The method used.
+        method: Method,
+        /// Design resistance of the shortest trial member, kN.
+        resistance_kn: f64,
+        /// Its governing mode.
+        governing: Mode,
+    },
+    /// The load is carried up to [`LONGEST_MM`] (for example a zero load).
+    AnyLength {
+        /// The method used.
+        method: Method,
+        /// The longest length tried, mm.
+        tried_mm: f64,
+    },
+}
+
+/// The largest load at the member's own length.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+pub struct LargestLoad {
+    /// The method used.
+    pub method: Method,
+    /// The largest design load carried (the design resistance), kN.
+    pub load_kn: f64,
+    /// The governing mode.
+    pub governing: Mode,
+    /// The utilisation under the member's own design load.
+    pub utilisation: f64,
+    /// Resistance minus the member's design load, kN (negative when over).
+    pub reserve_kn: f64,
+}
+
+/// One trial: the utilisation and the check, or why the method refused.
+enum Trial {
+    Ran(Box<CheckResult>),
+    Refused(Error),
+}
+
+fn inner(e: Error) -> Error {
+    match e {
+        Error::InMember { source, .. } => inner(*source),
+        other => other,
+    }
+}
+
+struct Trials<'a> {
+    base: &'a Prepared,
+    work: Prepared,
+    method: Method,
+}
+
+/// The member with its length and given buckling lengths times `s`.
+pub fn scaled(member: &Member, s: f64) -> Member {
+    let mut m = member.clone();
+    m.length_mm = member.length_mm * s;
+    m.lcr_major_mm = member.lcr_major_mm.map(|l| l * s);
+    m.lcr_minor_mm = member.lcr_minor_mm.map(|l| l * s);
+    m.lcr_torsion_mm = member.lcr_torsion_mm.map(|l| l * s);
+    m
+}
+
+impl Trials<'_> {
+    fn at(&mut self, s: f64) -> Trial {
+        self.work.member = scaled(&self.base.member, s);
+        match self.work.check_with(self.method) {
+            Ok(r) => Trial::Ran(Box::new(r)),
+            Err(e) => Trial::Refused(inner(e)),
+        }
+    }
+}
+
+fn carries(t: &Trial) -> bool {
+    match t {
+        Trial::Ran(r) => r.utilisation <= 1.0,
+        Trial::Refused(_) => false,
+    }
+}
+
+/// Finds the longest length at which `prepared` carries its design load
+/// under `method` (see the module documentation for how lengths scale).
+///
+/// Errors: the member's own length must check with this method (so a
+/// method that does not apply, such as a timber method for steel, is
+/// refused with its reason).
+pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswer> {
+    let own = prepared.check_with(method)?;
+    let lengths = prepared.member.buckling_lengths()?;
+    let longest_own = lengths
+        .major_mm
+        .max(lengths.minor_mm)
+        .max(lengths.torsion_mm)
+        .max(prepared.member.length_mm);
+    let mut trials = Trials {
+        base: prepared,
+        work: prepared.clone(),
+        method,
+    };
+    let s_min = (SHORTEST_MM / longest_own).min(1.0);
+    let s_max = LONGEST_MM / longest_own;
+    // (lo, trial at lo) carries; (hi, trial at hi) does not.
+    let (lo, lo_trial, hi, hi_trial) = if own.utilisation <= 1.0 {
+        let mut lo = 1.0;
+        let mut lo_trial = Trial::Ran(Box::new(own));
+        let mut hi = 2.0;
+        loop {
+            if hi > s_max {
+                return Ok(LengthAnswer::AnyLength {
+                    method,
+                    tried_mm: prepared.member.length_mm * lo,
+                });
+            }
+            let t = trials.at(hi);
+            if carries(&t) {
+                lo = hi;
+                lo_trial = t;
+                hi *= 2.0;
+            } else {
+                break (lo, lo_trial, hi, t);
+            }
+        }
+    } else {
+        let mut hi = 1.0;
+        let mut hi_trial = Trial::Ran(Box::new(own));
+        let mut lo: f64 = 0.5;
+        loop {
+            let lo_c = lo.max(s_min);
+            let t = trials.at(lo_c);
+            if carries(&t) {
+                break (lo_c, t, hi, hi_trial);
+            }
+            if lo_c <= s_min {
+                return Ok(match t {
+                    Trial::Ran(r) => LengthAnswer::NoLength {
+                        method,
+                        resistance_kn: r.resistance_kn,
+                        governing: r.governing,
+                    },
+                    Trial::Refused(e) => return Err(e),
+                });
+            }
+            hi = lo_c;
+            hi_trial = t;
+            lo = lo_c / 2.0;
+        }
+    };
+    let (mut lo, mut lo_trial, mut hi, mut hi_trial) = (lo, lo_trial, hi, hi_trial);
+    for _ in 0..200 {
+        if hi / lo - 1.0 <= GAP {
+            break;
+        }
+        let mid = (lo * hi).sqrt();
+        if !(mid > lo && mid < hi) {
+            break;
+        }
+        let t = trials.at(mid);
+        if carries(&t) {
+            lo = mid;
+            lo_trial = t;
+        } else {
+            hi = mid;
+            hi_trial = t;
+        }
+    }
+    let Trial::Ran(r) = lo_trial else {
+        // `lo` always holds a trial that ran and carried the load.
+        return Err(Error::Geometry {
+            field: "length_mm",
+            reason: "the length search lost its bracket; check the member's inputs".into(),
+        });
+    };
+    let limit = match hi_trial {
+        Trial::Refused(e) => LengthLimit::MethodRange {
+            reason: e.to_string(),
+        },
+        Trial::Ran(_) => LengthLimit::Load,
+    };
+    let at = scaled(&prepared.member, lo).buckling_lengths()?;
+    Ok(LengthAnswer::Found(LongestLength {
+        method,
+        length_mm: prepared.member.length_mm * lo,
+        scale: lo,
+        lcr_major_mm: at.major_mm,
+        lcr_minor_mm: at.minor_mm,
+        lcr_torsion_mm: at.torsion_mm,
+        utilisation: r.utilisation,
+        resistance_kn: r.resistance_kn,
+        governing: r.governing,
+        limit,
+    }))
+}
+
+/// The largest design load `prepared` carries at its own length under
+/// `method`: its design resistance, with the governing mode.
+pub fn largest_load(prepared: &Prepared, method: Method) -> Result<LargestLoad> {
+    let r = prepared.check_with(method)?;
+    Ok(LargestLoad {
+        method,
+        load_kn: r.resistance_kn,
+        governing: r.governing,
+        utilisation: r.utilisation,
+        reserve_kn: r.resistance_kn - prepared.member.axial_kn,
+    })
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::material::MaterialSpec;
+    use crate::section::{Given, Rect, Round, SectionSpec};
+
+    fn member(section: SectionSpec, axial_kn: f64, method: Method) -> Member {
+        Member {
+            id: "S1".into(),
+            note: None,
+            section,
+            material: MaterialSpec::Custom {
+                fy_mpa: 275.0,
+                e_mpa: 205_000.0,
+                g_mpa: None,
+            },
+            length_mm: 2500.0,
+            k_major: 1.0,
+            k_minor: 1.0,
+            k_torsion: 1.0,
+            lcr_major_mm: None,
+            lcr_minor_mm: None,
+            lcr_torsion_mm: None,
+            axial_kn,
+            method,
+            gamma_m1: None,
+            curve_major: None,
+            curve_minor: None,
+            bow_mm: None,
+            eccentricity_mm: None,
+            service_class: None,
+            load_duration: None,
+            csa_n: None,
+        }
+    }
+
+    fn rect() -> SectionSpec {
+        SectionSpec::Rect(Rect {
+            depth_mm: 120.0,
+            width_mm: 80.0,
+        })
+    }
+
+    fn found(a: LengthAnswer) -> LongestLength {
+        match a {
+            LengthAnswer::Found(f) => f,
+            other => panic!("expected a length, got {other:?}"),
+        }
+    }
+
+    /// The utilisation at the longest length is 1 within 0.1 %, and 0.1 %
+    /// longer the member fails.
+    fn assert_at_capacity(p: &Prepared, method: Method, f: &LongestLength) {
+        assert!(f.utilisation <= 1.0, "{f:?}");
+        assert!((f.utilisation - 1.0).abs() <= 1e-3, "{f:?}");
+        let mut longer = p.clone();
+        longer.member.length_mm = f.length_mm * 1.001;
+        longer.member.lcr_major_mm = p.member.lcr_major_mm.map(|l| l * f.scale * 1.001);
+        longer.member.lcr_minor_mm = p.member.lcr_minor_mm.map(|l| l * f.scale * 1.001);
+        longer.member.lcr_torsion_mm = p.member.lcr_torsion_mm.map(|l| l * f.scale * 1.001);
+        assert!(longer.check_with(method).unwrap().utilisation > 1.0);
+        // Rechecking the member at the reported length reproduces the answer.
+        let mut at = p.clone();
+        at.member.length_mm = f.length_mm;
+        at.member.lcr_major_mm = p.member.lcr_major_mm.map(|l| l * f.scale);
+        at.member.lcr_minor_mm = p.member.lcr_minor_mm.map(|l| l * f.scale);
+        at.member.lcr_torsion_mm = p.member.lcr_torsion_mm.map(|l| l * f.scale);
+        let again = at.check_with(method).unwrap();
+        assert!((again.utilisation - f.utilisation).abs() <= 1e-12);
+        assert_eq!(again.governing, f.governing);
+    }
+
+    #[test]
+    fn longest_length_puts_utilisation_at_one_from_above_and_below() {
+        for method in Method::ALL.into_iter().filter(|m| !m.is_timber()) {
+            for load in [50.0, 300.0, 1500.0] {
+                let p = Prepared::new(&member(rect(), load, method)).unwrap();
+                let answer = longest_length(&p, method);
+                let Ok(answer) = answer else { continue };
+                if let LengthAnswer::Found(f) = answer {
+                    assert_at_capacity(&p, method, &f);
+                } else if let LengthAnswer::NoLength { resistance_kn, .. } = answer {
+                    assert!(resistance_kn < load);
+                }
+            }
+        }
+    }
+
+    #[test]
+    fn euler_longest_length_matches_closed_form() {
+        // Euler: pi^2 E I_min / L^2 = N  =>  L = pi sqrt(E I_min / N).
+        let p = Prepared::new(&member(rect(), 200.0, Method::Euler)).unwrap();
+        let f = found(longest_length(&p, Method::Euler).unwrap());
+        let i_min = 120.0 * 80.0_f64.powi(3) / 12.0;
+        let expected = std::f64::consts::PI * (205_000.0 * i_min / 200_000.0).sqrt();
+        assert!(
+            ((f.length_mm - expected) / expected).abs() < 1e-6,
+            "{} vs {expected}",
+            f.length_mm
+        );
+        assert_eq!(f.governing, Mode::Minor);
+        assert_eq!(f.limit, LengthLimit::Load);
+        assert_at_capacity(&p, Method::Euler, &f);
+    }
+
+    #[test]
+    fn given_buckling_lengths_scale_with_the_length() {
+        let mut m = member(
+            SectionSpec::Given(Given {
+                area_mm2: 4000.0,
+                i_major_mm4: 4.0e7,
+                i_minor_mm4: 1.0e7,
+                torsion_mm4: None,
+                warping_mm6: None,
+            }),
+            400.0,
+            Method::Euler,
+        );
+        m.lcr_minor_mm = Some(1250.0); // restrained at mid-length about the minor axis
+        let p = Prepared::new(&m).unwrap();
+        let f = found(longest_length(&p, Method::Euler).unwrap());
+        assert!((f.lcr_minor_mm / f.length_mm - 0.5).abs() < 1e-12);
+        assert_at_capacity(&p, Method::Euler, &f);
+        // Major: L^2 = pi^2 E 4e7 / N; minor: (L/2)^2 = pi^2 E 1e7 / N: both
+        // give the same L, so the answer is that L.
+        let expected = std::f64::consts::PI * (205_000.0_f64 * 4.0e7 / 400_000.0).sqrt();
+        assert!(((f.length_mm - expected) / expected).abs() < 1e-6);
+    }
+
+    #[test]
+    fn too_strong_a_load_and_no_load() {
+        let p = Prepared::new(&member(
+            SectionSpec::Round(Round { diameter_mm: 20.0 }),
+            1000.0,
+            Method::Euler,
+        ))
+        .unwrap();
+        match longest_length(&p, Method::Euler).unwrap() {
+            LengthAnswer::NoLength { resistance_kn, .. } => {
+                // Squash load A f_y = pi 10^2 x 275 N = 86.4 kN.
+                assert!((resistance_kn - std::f64::consts::PI * 100.0 * 0.275).abs() < 1e-9);
+            }
+            other => panic!("{other:?}"),
+        }
+        let p = Prepared::new(&member(rect(), 0.0, Method::Euler)).unwrap();
+        assert!(matches!(
+            longest_length(&p, Method::Euler).unwrap(),
+            LengthAnswer::AnyLength { .. }
+        ));
+    }
+
+    #[test]
+    fn largest_load_is_the_resistance_with_its_mode() {
+        let p = Prepared::new(&member(rect(), 100.0, Method::Euler)).unwrap();
+        let l = largest_load(&p, Method::Euler).unwrap();
+        let r = p.check_with(Method::Euler).unwrap();
+        assert_eq!(l.load_kn, r.resistance_kn);
+        assert_eq!(l.governing, r.governing);
+        assert!((l.reserve_kn - (r.resistance_kn - 100.0)).abs() < 1e-12);
+        // At that load the member is exactly at capacity.
+        let mut at = p.clone();
+        at.member.axial_kn = l.load_kn;
+        assert!((at.check_with(Method::Euler).unwrap().utilisation - 1.0).abs() < 1e-12);
+    }
+
+    #[test]
+    fn a_method_that_does_not_apply_is_refused_with_its_reason() {
+        let p = Prepared::new(&member(rect(), 100.0, Method::Euler)).unwrap();
+        let e = longest_length(&p, Method::En1995).unwrap_err();
+        assert!(e.to_string().contains("en1995"), "{e}");
+    }
+}
