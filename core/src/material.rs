@@ -1047,6 +1047,20 @@ mod tests {
     }
 
     #[test]
+    fn suggestions_are_near() {
+        let s = suggestions("350");
+        assert_eq!(s.first().map(String::as_str), Some("350W"), "{s:?}");
+        let s = suggestions("gl 24");
+        assert!(
+            s.len() >= 2 && s.iter().take(2).all(|g| g.starts_with("GL24")),
+            "{s:?}"
+        );
+        let s = suggestions("A37");
+        assert_eq!(s.first().map(String::as_str), Some("A36"), "{s:?}");
+        assert!(suggestions("").is_empty());
+    }
+
+    #[test]
     fn custom_timber_checks_moduli() {
         let r = resolve(
             &MaterialSpec::Timber {
