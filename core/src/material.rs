@@ -1060,6 +1060,21 @@ mod tests {
         assert!(suggestions("").is_empty());
     }
 
+    proptest::proptest! {
+        /// Any text and any thickness resolve or give a typed error; never a panic.
+        #[test]
+        fn any_name_any_thickness(name in ".{0,24}", t in -10.0f64..1000.0) {
+            let section = rect(t.abs().max(0.1));
+            match grade(&name, &section) {
+                Ok(Material::Steel(s)) => proptest::prop_assert!(s.fy_mpa > 0.0 && s.e_mpa > 0.0),
+                Ok(Material::Timber(t)) => proptest::prop_assert!(t.fc0k_mpa > 0.0),
+                Err(Error::UnknownGrade { suggestions, .. }) => proptest::prop_assert!(suggestions.len() <= 4),
+                Err(Error::OutOfRange { field, .. }) => proptest::prop_assert_eq!(field, "material"),
+                Err(other) => proptest::prop_assert!(false, "{other:?}"),
+            }
+        }
+    }
+
     #[test]
     fn custom_timber_checks_moduli() {
         let r = resolve(
