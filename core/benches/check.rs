@@ -26,7 +26,9 @@ fn member(i: usize) -> Member {
                 root_radius_mm: 18.0,
                 make: IMake::Rolled,
             }),
-            MaterialSpec::Grade { grade: "S355".into() },
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
             Method::En1993,
         ),
         1 => (
@@ -38,7 +40,9 @@ fn member(i: usize) -> Member {
                 inner_radius_mm: Some(6.0),
                 make: HollowMake::HotFinished,
             }),
-            MaterialSpec::Grade { grade: "S355".into() },
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
             Method::En1993,
         ),
         2 => (
@@ -47,7 +51,9 @@ fn member(i: usize) -> Member {
                 wall_mm: 6.0 + f * 0.5,
                 make: HollowMake::ColdFormed,
             }),
-            MaterialSpec::Grade { grade: "S355".into() },
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
             Method::AiscLrfd,
         ),
         3 => (
@@ -59,7 +65,9 @@ fn member(i: usize) -> Member {
                 root_radius_mm: 15.2,
                 make: IMake::Rolled,
             }),
-            MaterialSpec::Grade { grade: "A992".into() },
+            MaterialSpec::Grade {
+                grade: "A992".into(),
+            },
             Method::AiscAsd,
         ),
         4 => (
@@ -71,7 +79,9 @@ fn member(i: usize) -> Member {
                 inner_radius_mm: None,
                 make: HollowMake::ColdFormed,
             }),
-            MaterialSpec::Grade { grade: "350W".into() },
+            MaterialSpec::Grade {
+                grade: "350W".into(),
+            },
             Method::CsaS16,
         ),
         5 => (
@@ -79,7 +89,9 @@ fn member(i: usize) -> Member {
                 depth_mm: 200.0 + 10.0 * f,
                 width_mm: 140.0,
             }),
-            MaterialSpec::Grade { grade: "GL28h".into() },
+            MaterialSpec::Grade {
+                grade: "GL28h".into(),
+            },
             Method::En1995,
         ),
         6 => (
@@ -90,7 +102,9 @@ fn member(i: usize) -> Member {
                 root_radius_mm: 10.0,
                 toe_radius_mm: 5.0,
             }),
-            MaterialSpec::Grade { grade: "S275".into() },
+            MaterialSpec::Grade {
+                grade: "S275".into(),
+            },
             Method::En1993,
         ),
         7 => (
@@ -143,7 +157,7 @@ fn member(i: usize) -> Member {
         material,
         length_mm: 2500.0 + 50.0 * f,
         k_major: 1.0,
-        k_minor: if i % 3 == 0 { 0.7 } else { 1.0 },
+        k_minor: if i.is_multiple_of(3) { 0.7 } else { 1.0 },
         k_torsion: 1.0,
         lcr_major_mm: None,
         lcr_minor_mm: None,

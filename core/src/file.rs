@@ -71,10 +71,9 @@ fn syntax(e: &serde_json::Error) -> Error {
 /// Lifts a file of `version` to the next version. Version 1 is the first,
 /// so there is nothing to lift yet; each later version adds one arm here.
 fn migrate(value: Value, version: u64) -> Result<Value> {
-    match version {
-        // Future: 1 => rename or default keys of version 1 into version 2.
-        _ => Ok(value),
-    }
+    // Future: `if version == 1 { rename or default keys of version 1 into version 2 }`.
+    let _ = version;
+    Ok(value)
 }
 
 /// Reads a member file from JSON text.
@@ -106,12 +105,12 @@ pub fn parse(text: &str) -> Result<MemberFile> {
             })
         }
     }
-    let version = obj
-        .get("version")
-        .and_then(Value::as_u64)
-        .ok_or_else(|| Error::NotMemberFile {
-            reason: "it has no whole-number \"version\" key".into(),
-        })?;
+    let version =
+        obj.get("version")
+            .and_then(Value::as_u64)
+            .ok_or_else(|| Error::NotMemberFile {
+                reason: "it has no whole-number \"version\" key".into(),
+            })?;
     if version == 0 || version > VERSION {
         return Err(Error::UnsupportedVersion {
             found: version,
@@ -194,7 +193,12 @@ pub fn check_unique_ids(members: &[Member]) -> Result<()> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing, clippy::panic)]
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
     use super::*;
 
     const ONE: &str = r#"{"format": "strutline.members", "version": 1, "title": "t",
@@ -215,7 +219,13 @@ mod tests {
     fn refuses_future_version_naming_supported() {
         let text = ONE.replace("\"version\": 1", "\"version\": 9");
         let e = parse(&text).unwrap_err();
-        assert_eq!(e, Error::UnsupportedVersion { found: 9, newest: VERSION });
+        assert_eq!(
+            e,
+            Error::UnsupportedVersion {
+                found: 9,
+                newest: VERSION
+            }
+        );
         assert!(e.to_string().contains("versions 1 to 1"));
     }
 
@@ -228,9 +238,15 @@ mod tests {
 
     #[test]
     fn refuses_other_json_and_duplicates() {
-        assert!(matches!(parse("{\"a\":1}"), Err(Error::NotMemberFile { .. })));
+        assert!(matches!(
+            parse("{\"a\":1}"),
+            Err(Error::NotMemberFile { .. })
+        ));
         assert!(matches!(parse("[1,2"), Err(Error::Syntax { .. })));
         let dup = ONE.replace("]}", ",{\"id\": \"P1\", \"section\": {\"kind\": \"round\", \"diameter_mm\": 20}, \"material\": {\"fy_mpa\": 235, \"e_mpa\": 210000}, \"length_mm\": 1, \"axial_kn\": 1, \"method\": \"euler\"}]}");
-        assert_eq!(parse(&dup).unwrap_err(), Error::DuplicateId { id: "P1".into() });
+        assert_eq!(
+            parse(&dup).unwrap_err(),
+            Error::DuplicateId { id: "P1".into() }
+        );
     }
 }

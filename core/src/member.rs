@@ -142,6 +142,28 @@ pub struct Member {
     pub csa_n: Option<f64>,
 }
 
+/// The longest length or buckling length accepted, mm (10 km): beyond it
+/// a number is a typing slip, not a member.
+pub const MAX_LENGTH_MM: f64 = 1.0e7;
+
+/// The shortest length or buckling length accepted, mm.
+pub const MIN_LENGTH_MM: f64 = 1.0;
+
+/// The largest design compression accepted, kN.
+pub const MAX_AXIAL_KN: f64 = 1.0e7;
+
+fn bounded(field: &'static str, value: f64) -> Result<f64> {
+    let v = positive(field, value)?;
+    if !(MIN_LENGTH_MM..=MAX_LENGTH_MM).contains(&v) {
+        return Err(Error::OutOfRange {
+            field,
+            value: v,
+            expected: "a length from 1 mm to 10,000,000 mm (10 km)",
+        });
+    }
+    Ok(v)
+}
+
 /// Buckling lengths of a member, mm.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct BucklingLengths {
@@ -157,26 +179,36 @@ impl Member {
     /// Checks every scalar field of the member (not the section or material,
     /// which check themselves) and returns its buckling lengths.
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
-        let length = positive("length_mm", self.length_mm)?;
+        let length = bounded("length_mm", self.length_mm)?;
         let k_major = positive("k_major", self.k_major)?;
         let k_minor = positive("k_minor", self.k_minor)?;
         let k_torsion = positive("k_torsion", self.k_torsion)?;
         let pick = |given: Option<f64>, field: &'static str, k: f64| -> Result<f64> {
             match given {
-                Some(v) => positive(field, v),
+                Some(v) => bounded(field, v),
                 None => Ok(k * length),
             }
         };
         Ok(BucklingLengths {
-            major_mm: pick(self.lcr_major_mm, "lcr_major_mm", k_major)?,
-            minor_mm: pick(self.lcr_minor_mm, "lcr_minor_mm", k_minor)?,
-            torsion_mm: pick(self.lcr_torsion_mm, "lcr_torsion_mm", k_torsion)?,
+            major_mm: bounded("k_major", pick(self.lcr_major_mm, "lcr_major_mm", k_major)?)?,
+            minor_mm: bounded("k_minor", pick(self.lcr_minor_mm, "lcr_minor_mm", k_minor)?)?,
+            torsion_mm: bounded(
+                "k_torsion",
+                pick(self.lcr_torsion_mm, "lcr_torsion_mm", k_torsion)?,
+            )?,
         })
     }
 
     /// Checks the method options that do not depend on the method.
     pub fn validate_options(&self) -> Result<()> {
         non_negative("axial_kn", self.axial_kn)?;
+        if self.axial_kn > MAX_AXIAL_KN {
+            return Err(Error::OutOfRange {
+                field: "axial_kn",
+                value: self.axial_kn,
+                expected: "a design compression up to 10,000,000 kN",
+            });
+        }
         if let Some(g) = self.gamma_m1 {
             if !(g.is_finite() && (0.5..=3.0).contains(&g)) {
                 return Err(Error::OutOfRange {
