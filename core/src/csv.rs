@@ -40,8 +40,10 @@
 //!    rule 1 or 3 decides sets the convention (decimal point when none).
 //!
 //! Thousands groups must be three digits each after the first group of one
-//! to three. A leading `+`, `-` or `−` and an exponent (`1.5e3`) are read;
-//! anything else in a number cell (units, words) is a problem.
+//! to three (not starting with 0); when spaces group the thousands, a single
+//! `,` or `.` is the decimal mark (`1 234,567` is 1234.567). A leading
+//! `+`, `-` or `−` and an exponent (`1.5e3`) are read; anything else in a
+//! number cell (units, words) is a problem.
 //!
 //! # The file
 //!
@@ -55,7 +57,11 @@
 //! Reading never stops at the first problem: every row and every field is
 //! checked, and each problem names the line, the column and what was
 //! expected, so a front end can show them all and keep the valid rows.
-//! A CSV file has no title; [`read_any`] takes it from the file name.
+//! A row is read into the member file's own types, so a CSV file accepts
+//! exactly what the JSON member file accepts; whether the values make a
+//! sound member (positive lengths, a known grade) is left to the check, as
+//! for JSON. A CSV file has no title; [`read_any`] takes it from the file
+//! name.
 //!
 //! Writing ([`to_csv`]) uses SI keys, `,` as the separator, CRLF line ends
 //! (RFC 4180) and the shortest text that reads back to the same number, so
@@ -70,7 +76,7 @@ use serde_json::{Map, Value};
 use crate::file::{self, MemberFile, MAX_BYTES};
 use crate::member::Member;
 use crate::method::Method;
-use crate::units::{self, UsUnit};
+use crate::units::{self, Quantity, UnitSystem, UsUnit};
 
 /// The largest number of member rows accepted.
 pub const MAX_ROWS: usize = 100_000;
@@ -107,7 +113,7 @@ impl fmt::Display for RowProblem {
 }
 
 /// The outcome of reading a CSV file: the valid members and every problem.
-#[derive(Debug, Clone, PartialEq, Default)]
+#[derive(Debug, Clone, PartialEq, Default, Serialize)]
 pub struct CsvImport {
     /// The members of the rows without problems, in file order.
     pub members: Vec<Member>,
@@ -1326,6 +1332,34 @@ fn quote(cell: &str, is_text: bool) -> String {
 /// The members as CSV with SI keys, `,` separators and CRLF line ends.
 /// The title is not kept (a CSV file has none).
 pub fn to_csv(file: &MemberFile) -> String {
+    to_csv_in(file, UnitSystem::Si)
+}
+
+/// The US customary column for an SI key: member lengths in feet, other
+/// lengths in inches, then in2, in4, in6, kip, ksi, kip-ft.
+fn us_column(key: &str) -> Option<(String, UsUnit)> {
+    let unit = match Quantity::of_key(key)? {
+        Quantity::Span => UsUnit::Ft,
+        Quantity::Length => UsUnit::In,
+        Quantity::Area => UsUnit::In2,
+        Quantity::Modulus => UsUnit::In3,
+        Quantity::SecondMoment => UsUnit::In4,
+        Quantity::Warping => UsUnit::In6,
+        Quantity::Force => UsUnit::Kip,
+        Quantity::Stress => UsUnit::Ksi,
+        Quantity::Moment => UsUnit::KipFt,
+        Quantity::Dimensionless => return None,
+    };
+    Some((units::si_key_to_us(key, unit)?, unit))
+}
+
+/// The members as CSV in a unit system: [`UnitSystem::Si`] writes the
+/// member file's own keys and values (exact round trip);
+/// [`UnitSystem::Us`] writes each unit key in its US form (`length_ft`,
+/// `depth_in`, `axial_kip`, `fy_ksi`, ...) with the value converted, which
+/// reads back to within a few parts in 10^16 of the stored value (for
+/// values of ordinary magnitude, not subnormal ones).
+pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
     let rows: Vec<Map<String, Value>> = file
         .members
         .iter()
@@ -1363,15 +1397,32 @@ pub fn to_csv(file: &MemberFile) -> String {
             columns.push(key);
         }
     }
+    let us: Vec<Option<(String, UsUnit)>> = columns
+        .iter()
+        .map(|key| match system {
+            UnitSystem::Us => us_column(key),
+            UnitSystem::Si => None,
+        })
+        .collect();
+    let headers: Vec<&str> = columns
+        .iter()
+        .zip(&us)
+        .map(|(key, u)| u.as_ref().map(|(h, _)| h.as_str()).unwrap_or(key))
+        .collect();
     let mut out = String::with_capacity(64 * (rows.len() + 1));
-    out.push_str(&columns.join(","));
+    out.push_str(&headers.join(","));
     out.push_str("\r\n");
     for row in &rows {
         let cells: Vec<String> = columns
             .iter()
-            .map(|key| match row.get(*key) {
-                None => String::new(),
-                Some(v) => quote(&cell_text(v), matches!(v, Value::String(_))),
+            .zip(&us)
+            .map(|(key, u)| match (row.get(*key), u) {
+                (None, _) => String::new(),
+                (Some(Value::Number(n)), Some((_, unit))) => match n.as_f64() {
+                    Some(f) => format!("{}", unit.from_si(f)),
+                    None => n.to_string(),
+                },
+                (Some(v), _) => quote(&cell_text(v), matches!(v, Value::String(_))),
             })
             .collect();
         out.push_str(&cells.join(","));
@@ -1853,6 +1904,51 @@ mod tests {
         assert_eq!(r2.note.as_deref(), Some(""));
         assert_eq!(r2.gamma_m1, None);
         assert_eq!(r2.k_major, 1.0);
+    }
+
+    #[test]
+    fn us_csv_reads_back_within_rounding() {
+        let mut original = file::parse(EVERY).unwrap();
+        // G11 holds 5e-324 mm2, a subnormal that no unit conversion keeps.
+        original.members.retain(|m| m.id != "G11");
+        let text = to_csv_in(&original, UnitSystem::Us);
+        let header = text.lines().next().unwrap();
+        for col in [
+            "length_ft",
+            "lcr_minor_ft",
+            "depth_in",
+            "axial_kip",
+            "fy_ksi",
+            "area_in2",
+        ] {
+            assert!(header.split(',').any(|h| h == col), "{col} in {header}");
+        }
+        assert!(header.split(',').any(|h| h == "k_major"));
+        let back = parse_csv(&text);
+        assert!(back.problems.is_empty(), "{:#?}", back.problems);
+        // Compare through JSON values: every number within 4e-16 relative
+        // (two roundings of a conversion), all else equal.
+        fn close(a: &Value, b: &Value) -> bool {
+            match (a, b) {
+                (Value::Number(x), Value::Number(y)) => {
+                    let (x, y) = (x.as_f64().unwrap(), y.as_f64().unwrap());
+                    x == y || ((x - y) / y).abs() <= 4e-16
+                }
+                (Value::Object(x), Value::Object(y)) => {
+                    x.len() == y.len()
+                        && x.iter().all(|(k, v)| y.get(k).is_some_and(|w| close(v, w)))
+                }
+                _ => a == b,
+            }
+        }
+        for (a, b) in back.members.iter().zip(&original.members) {
+            let (a, b) = (
+                serde_json::to_value(a).unwrap(),
+                serde_json::to_value(b).unwrap(),
+            );
+            assert!(close(&a, &b), "{a}\n{b}");
+        }
+        assert_eq!(back.members.len(), original.members.len());
     }
 
     #[test]

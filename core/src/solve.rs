@@ -378,18 +378,38 @@ mod tests {
 
     #[test]
     fn longest_length_puts_utilisation_at_one_from_above_and_below() {
-        for method in Method::ALL.into_iter().filter(|m| !m.is_timber()) {
-            for load in [50.0, 300.0, 1500.0] {
-                let p = Prepared::new(&member(rect(), load, method)).unwrap();
-                let answer = longest_length(&p, method);
-                let Ok(answer) = answer else { continue };
-                if let LengthAnswer::Found(f) = answer {
-                    assert_at_capacity(&p, method, &f);
-                } else if let LengthAnswer::NoLength { resistance_kn, .. } = answer {
-                    assert!(resistance_kn < load);
+        // Every method, steel methods on a custom steel and the timber method
+        // on a custom timber; loads below and above the resistance at the
+        // member's own length, so the bracket is found both ways.
+        let mut found_count = 0;
+        for method in Method::ALL {
+            for load in [20.0, 300.0, 1500.0] {
+                let mut m = member(rect(), load, method);
+                if method.is_timber() {
+                    m.material = MaterialSpec::Timber {
+                        fc0k_mpa: 21.0,
+                        e005_mpa: 7400.0,
+                        e0mean_mpa: 11_000.0,
+                        timber: crate::material::TimberKind::Solid,
+                    };
+                }
+                let p = Prepared::new(&m).unwrap();
+                let own = p.check_with(method).unwrap();
+                match longest_length(&p, method).unwrap() {
+                    LengthAnswer::Found(f) => {
+                        assert_at_capacity(&p, method, &f);
+                        // Longer than its own length exactly when it passes now.
+                        assert_eq!(f.scale >= 1.0, own.utilisation <= 1.0, "{method:?} {load}");
+                        found_count += 1;
+                    }
+                    LengthAnswer::NoLength { resistance_kn, .. } => {
+                        assert!(resistance_kn < load, "{method:?} {load}");
+                    }
+                    LengthAnswer::AnyLength { .. } => panic!("{method:?} {load}: any length"),
                 }
             }
         }
+        assert!(found_count >= 2 * Method::ALL.len(), "{found_count}");
     }
 
     #[test]

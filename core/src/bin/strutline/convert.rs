@@ -1,7 +1,9 @@
-//! `strutline convert IN OUT [--take-valid]`: converts a member file
-//! between JSON and CSV, choosing each format by the file's extension
-//! (`.json` or `.csv`; an input of another extension is recognised by its
-//! content).
+//! `strutline convert IN OUT [--take-valid] [--units si|us]`: converts a
+//! member file between JSON and CSV, choosing each format by the file's
+//! extension (`.json` or `.csv`; an input of another extension is
+//! recognised by its content). `--units us` writes a CSV output with US
+//! customary columns (`length_ft`, `depth_in`, `axial_kip`, `fy_ksi`, ...);
+//! the default writes the member file's SI keys, which round-trip exactly.
 //!
 //! Exit status: 0 when every member was converted; 2 when the input has
 //! problems, each printed on stderr with its line and column. Nothing is
@@ -14,14 +16,16 @@ use std::path::Path;
 
 use strutline_core::csv::{self, Format};
 use strutline_core::file::{self, MemberFile, MAX_BYTES};
+use strutline_core::units::UnitSystem;
 
 /// Reads a member file in either format; see [`strutline_core::csv::read_any`].
 pub fn read_any(path: &str, text: &str) -> Result<MemberFile, String> {
     csv::read_any(path, text)
 }
 
-const USAGE: &str = "usage: strutline convert IN OUT [--take-valid]\n  \
-    IN and OUT end in .json or .csv; --take-valid writes the valid members even when some rows have problems";
+const USAGE: &str = "usage: strutline convert IN OUT [--take-valid] [--units si|us]\n  \
+    IN and OUT end in .json or .csv; --take-valid writes the valid members even when some rows have problems;\n  \
+    --units us writes CSV columns in US customary units (length_ft, depth_in, axial_kip, fy_ksi, ...)";
 
 fn output_format(path: &str) -> Result<Format, String> {
     let ext = Path::new(path)
@@ -54,10 +58,24 @@ fn write_atomically(path: &str, text: &str) -> Result<(), String> {
 /// Runs the subcommand with the arguments after `convert`.
 pub fn run(args: &[String]) -> Result<i32, String> {
     let mut take_valid = false;
+    let mut system = UnitSystem::Si;
     let mut paths: Vec<&str> = Vec::new();
-    for a in args {
+    let mut items = args.iter();
+    while let Some(a) = items.next() {
         match a.as_str() {
             "--take-valid" => take_valid = true,
+            "--units" => {
+                system = match items.next().map(String::as_str) {
+                    Some("si") => UnitSystem::Si,
+                    Some("us") => UnitSystem::Us,
+                    other => {
+                        return Err(format!(
+                            "convert: --units takes si or us, not {}\n{USAGE}",
+                            other.unwrap_or("nothing")
+                        ))
+                    }
+                }
+            }
             "-h" | "--help" => {
                 println!("{USAGE}");
                 return Ok(0);
@@ -113,7 +131,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     }
     let body = match out_format {
         Format::Json => members.to_json(),
-        Format::Csv => csv::to_csv(&members),
+        Format::Csv => csv::to_csv_in(&members, system),
     };
     write_atomically(output, &body)?;
     println!(
@@ -181,6 +199,26 @@ mod tests {
         );
         let f = file::parse(&std::fs::read_to_string(&json).unwrap()).unwrap();
         assert_eq!(f.members.len(), 1);
+        let _ = std::fs::remove_dir_all(&d);
+    }
+
+    #[test]
+    fn us_columns_on_request() {
+        let d = dir("us");
+        let csv_in = d.join("in.csv");
+        std::fs::write(&csv_in, GOOD).unwrap();
+        let out = d.join("us.csv");
+        let args = [s(&csv_in), s(&out), "--units".into(), "us".into()];
+        assert_eq!(run(&args).unwrap(), 0);
+        let text = std::fs::read_to_string(&out).unwrap();
+        assert!(
+            text.starts_with("id,kind,depth_in,width_in,fy_ksi,e_ksi,length_ft,axial_kip,method"),
+            "{text}"
+        );
+        let back = csv::parse_csv(&text);
+        assert!(back.problems.is_empty());
+        assert!((back.members[0].length_mm - 2000.0).abs() < 1e-9);
+        assert!(run(&[s(&csv_in), s(&out), "--units".into(), "imperial".into()]).is_err());
         let _ = std::fs::remove_dir_all(&d);
     }
 
