@@ -36,13 +36,13 @@ use crate::error::{Error, Result};
 use crate::member::Member;
 use crate::method::Method;
 
-/// The shortest trial length, mm: below it a member is a stub whose
-/// resistance no longer depends on length.
-pub const SHORTEST_MM: f64 = 1.0;
+/// The shortest length the member file accepts, mm (for the system length
+/// and every buckling length): trials never go below it.
+pub const SHORTEST_MM: f64 = crate::member::MIN_LENGTH_MM;
 
-/// The longest trial length, mm (1000 km): a load carried at this length
-/// is carried at any length.
-pub const LONGEST_MM: f64 = 1e9;
+/// The longest length the member file accepts, mm (10 km): a load carried
+/// there is carried at any length a member can have.
+pub const LONGEST_MM: f64 = crate::member::MAX_LENGTH_MM;
 
 /// Ends of the bracket closer than this relative gap end the bisection.
 const GAP: f64 = 1e-10;
@@ -92,7 +92,8 @@ pub struct LongestLength {
 pub enum LengthAnswer {
     /// A longest length exists.
     Found(LongestLength),
-    /// Even a stub of [`SHORTEST_MM`] does not carry the load: the
+    /// Even the shortest member (its shortest length at [`SHORTEST_MM`])
+    /// does not carry the load: the
     /// section or material is too weak whatever the length.
     NoLength {
         /// The method used.
@@ -102,7 +103,8 @@ pub enum LengthAnswer {
         /// Its governing mode.
         governing: Mode,
     },
-    /// The load is carried up to [`LONGEST_MM`] (for example a zero load).
+    /// The load is carried up to the longest member the file accepts
+    /// (its longest length at [`LONGEST_MM`]), for example a zero load.
     AnyLength {
         /// The method used.
         method: Method,
@@ -181,35 +183,39 @@ fn carries(t: &Trial) -> bool {
 pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswer> {
     let own = prepared.check_with(method)?;
     let lengths = prepared.member.buckling_lengths()?;
-    let longest_own = lengths
-        .major_mm
-        .max(lengths.minor_mm)
-        .max(lengths.torsion_mm)
-        .max(prepared.member.length_mm);
+    let all = [
+        lengths.major_mm,
+        lengths.minor_mm,
+        lengths.torsion_mm,
+        prepared.member.length_mm,
+    ];
+    let longest_own = all.iter().copied().fold(f64::MIN, f64::max);
+    let shortest_own = all.iter().copied().fold(f64::MAX, f64::min);
     let mut trials = Trials {
         base: prepared,
         work: prepared.clone(),
         method,
     };
-    let s_min = (SHORTEST_MM / longest_own).min(1.0);
-    let s_max = LONGEST_MM / longest_own;
+    // Keep every trial length inside the member file's range, with a
+    // margin of rounding so the end trials are accepted.
+    let s_min = (SHORTEST_MM / shortest_own * (1.0 + 1e-12)).min(1.0);
+    let s_max = (LONGEST_MM / longest_own * (1.0 - 1e-12)).max(1.0);
     // (lo, trial at lo) carries; (hi, trial at hi) does not.
     let (lo, lo_trial, hi, hi_trial) = if own.utilisation <= 1.0 {
-        let mut lo = 1.0;
+        let mut lo: f64 = 1.0;
         let mut lo_trial = Trial::Ran(Box::new(own));
-        let mut hi = 2.0;
         loop {
-            if hi > s_max {
+            if lo >= s_max {
                 return Ok(LengthAnswer::AnyLength {
                     method,
                     tried_mm: prepared.member.length_mm * lo,
                 });
             }
+            let hi = (lo * 2.0).min(s_max);
             let t = trials.at(hi);
             if carries(&t) {
                 lo = hi;
                 lo_trial = t;
-                hi *= 2.0;
             } else {
                 break (lo, lo_trial, hi, t);
             }
@@ -469,10 +475,16 @@ mod tests {
             other => panic!("{other:?}"),
         }
         let p = Prepared::new(&member(rect(), 0.0, Method::Euler)).unwrap();
-        assert!(matches!(
-            longest_length(&p, Method::Euler).unwrap(),
-            LengthAnswer::AnyLength { .. }
-        ));
+        match longest_length(&p, Method::Euler).unwrap() {
+            // Tried up to the member file's longest length (10 km), not beyond.
+            LengthAnswer::AnyLength { tried_mm, .. } => {
+                assert!(
+                    tried_mm <= LONGEST_MM && tried_mm > 0.999_999 * LONGEST_MM,
+                    "{tried_mm}"
+                )
+            }
+            other => panic!("{other:?}"),
+        }
     }
 
     #[test]
