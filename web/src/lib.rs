@@ -6,6 +6,7 @@
 //! memoised checks) are plain Rust tested on the host; the components and
 //! the browser glue (storage, service worker, downloads, canvas) are thin.
 
+pub mod app;
 pub mod browser;
 pub mod chart;
 pub mod checks;
@@ -16,3 +17,17 @@ pub mod numtext;
 pub mod restraint;
 pub mod status;
 pub mod workspace;
+
+/// Mounts the app into the element with id `app`, or into `<body>`.
+#[wasm_bindgen::prelude::wasm_bindgen]
+pub fn start() {
+    console_error_panic_hook::set_once();
+    let target = web_sys::window()
+        .and_then(|w| w.document())
+        .and_then(|d| d.get_element_by_id("app"))
+        .and_then(|e| wasm_bindgen::JsCast::dyn_into::<web_sys::HtmlElement>(e).ok());
+    match target {
+        Some(el) => leptos::mount::mount_to(el, app::App).forget(),
+        None => leptos::mount::mount_to_body(app::App),
+    }
+}

@@ -1,0 +1,1156 @@
+//! The components: a thin layer over the view-logic modules. State lives
+//! in a few signals held by [`Ctx`]; every list operation, parse and
+//! format is delegated to the plain modules.
+
+use std::sync::Arc;
+
+use leptos::ev;
+use leptos::prelude::*;
+use strutline_core::method::Method;
+use strutline_core::trace::Scope;
+use strutline_core::{Member, CAUTION};
+
+use crate::browser;
+use crate::chart;
+use crate::checks::{Checked, Checker};
+use crate::demo;
+use crate::fields::{self, Choice, Field, MaterialMode};
+use crate::listops::{self, Deleted, DeletedList};
+use crate::numtext::{fixed, for_input, working};
+use crate::restraint::Restraint;
+use crate::status::{governing_text, status_text, utilisation_text, Standing};
+use crate::workspace::{decode, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX};
+
+/// Storage key of the theme preference.
+const THEME_KEY: &str = "strutline.v1.theme";
+
+/// Something deleted that can be put back.
+#[derive(Debug, Clone)]
+enum Undo {
+    Member { list: usize, deleted: Deleted },
+    List(DeletedList),
+}
+
+/// Stored data that could not be read.
+#[derive(Debug, Clone)]
+struct Problem {
+    reason: String,
+    aside: Option<String>,
+    raw: String,
+}
+
+/// The checks of the active list, compared by identity.
+#[derive(Debug, Clone)]
+struct Checks(Arc<Vec<Arc<Checked>>>);
+
+impl PartialEq for Checks {
+    fn eq(&self, other: &Self) -> bool {
+        Arc::ptr_eq(&self.0, &other.0)
+    }
+}
+
+/// The app's state.
+#[derive(Clone, Copy)]
+struct Ctx {
+    ws: RwSignal<Workspace>,
+    selected: RwSignal<usize>,
+    generation: RwSignal<u64>,
+    undo: RwSignal<Option<Undo>>,
+    checks: Memo<Checks>,
+    high_contrast: RwSignal<bool>,
+    perry: RwSignal<bool>,
+    problem: RwSignal<Option<Problem>>,
+    save_problem: RwSignal<Option<String>>,
+    other_tab: RwSignal<Option<String>>,
+    update_ready: RwSignal<bool>,
+    resize: RwSignal<u64>,
+    loaded_rev: StoredValue<u64>,
+    overwrite_ok: StoredValue<bool>,
+    save_pending: StoredValue<bool>,
+}
+
+impl Ctx {
+    /// The selected member, without tracking.
+    fn current(&self) -> Option<Member> {
+        let sel = self.selected.get_untracked();
+        self.ws
+            .with_untracked(|w| w.active_list().and_then(|l| l.members.get(sel)).cloned())
+    }
+
+    /// Replaces the selected member.
+    fn commit(&self, m: Member) {
+        let sel = self.selected.get_untracked();
+        self.ws.update(|w| {
+            if let Some(slot) = w.active_list_mut().and_then(|l| l.members.get_mut(sel)) {
+                *slot = m;
+            }
+        });
+    }
+
+    /// Selects member `i` and rebuilds the editor.
+    fn select(&self, i: usize) {
+        self.selected.set(i);
+        self.generation.update(|g| *g += 1);
+    }
+
+    /// Index of a member id in the active list.
+    fn index_of(&self, id: &str) -> Option<usize> {
+        self.ws.with_untracked(|w| {
+            w.active_list()
+                .and_then(|l| l.members.iter().position(|m| m.id == id))
+        })
+    }
+
+    /// Applies a list operation to the active list's members.
+    fn with_members<R>(&self, f: impl FnOnce(&mut Vec<Member>) -> R) -> Option<R> {
+        let mut out = None;
+        self.ws.update(|w| {
+            if let Some(l) = w.active_list_mut() {
+                out = Some(f(&mut l.members));
+            }
+        });
+        out
+    }
+}
+
+fn set_problem(ctx: Ctx, raw: String, reason: String) {
+    let aside = format!("{UNREADABLE_PREFIX}{}", browser::now_ms() as u64);
+    let aside = browser::set(&aside, &raw).ok().map(|()| aside);
+    ctx.problem.set(Some(Problem { reason, aside, raw }));
+}
+
+fn schedule_save(ctx: Ctx) {
+    if ctx.save_pending.get_value() {
+        return;
+    }
+    ctx.save_pending.set_value(true);
+    set_timeout(move || do_save(ctx), std::time::Duration::from_millis(0));
+}
+
+fn do_save(ctx: Ctx) {
+    ctx.save_pending.set_value(false);
+    if ctx.problem.with_untracked(Option::is_some) || ctx.other_tab.with_untracked(Option::is_some)
+    {
+        return;
+    }
+    let mine = ctx.loaded_rev.get_value();
+    if let Some(text) = browser::get(KEY) {
+        match peek_revision(&text) {
+            Some(r) if r != mine => {
+                ctx.other_tab.set(Some(text));
+                return;
+            }
+            Some(_) => {}
+            None if ctx.overwrite_ok.get_value() => {}
+            None => {
+                let reason = decode(&text)
+                    .err()
+                    .unwrap_or_else(|| "it has no revision".into());
+                set_problem(ctx, text, reason);
+                return;
+            }
+        }
+    }
+    let next = mine + 1;
+    ctx.ws.update_untracked(|w| w.revision = next);
+    let text = ctx.ws.with_untracked(encode);
+    match browser::set(KEY, &text) {
+        Ok(()) => {
+            ctx.loaded_rev.set_value(next);
+            ctx.overwrite_ok.set_value(false);
+            if ctx.save_problem.with_untracked(Option::is_some) {
+                ctx.save_problem.set(None);
+            }
+        }
+        Err(e) => {
+            ctx.ws.update_untracked(|w| w.revision = mine);
+            ctx.save_problem.set(Some(format!(
+                "Not saved: {e}. Your change stays on screen and saving is tried again on the next change; \
+                 free some space or download the list to keep it."
+            )));
+        }
+    }
+}
+
+/// The app.
+#[component]
+pub fn App() -> impl IntoView {
+    let (initial, rev, fresh, problem) = match browser::get(KEY) {
+        None => (Workspace::new(demo::demo_lists()), 0, true, None),
+        Some(text) => match decode(&text) {
+            Ok(w) => {
+                let r = w.revision;
+                (w, r, false, None)
+            }
+            Err(reason) => (
+                Workspace::new(demo::demo_lists()),
+                0,
+                false,
+                Some((text, reason)),
+            ),
+        },
+    };
+    let ws = RwSignal::new(initial);
+    let checker = StoredValue::new(Checker::new());
+    let checks = Memo::new(move |_| {
+        let out = ws.with(|w| {
+            let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
+            let mut got = Vec::new();
+            checker.update_value(|c| got = c.refresh(members).0);
+            got
+        });
+        Checks(Arc::new(out))
+    });
+    let high_contrast = RwSignal::new(browser::get(THEME_KEY).as_deref() == Some("high-contrast"));
+    let ctx = Ctx {
+        ws,
+        selected: RwSignal::new(0),
+        generation: RwSignal::new(0),
+        undo: RwSignal::new(None),
+        checks,
+        high_contrast,
+        perry: RwSignal::new(false),
+        problem: RwSignal::new(None),
+        save_problem: RwSignal::new(None),
+        other_tab: RwSignal::new(None),
+        update_ready: RwSignal::new(false),
+        resize: RwSignal::new(0),
+        loaded_rev: StoredValue::new(rev),
+        overwrite_ok: StoredValue::new(false),
+        save_pending: StoredValue::new(false),
+    };
+    if let Some((raw, reason)) = problem {
+        set_problem(ctx, raw, reason);
+    }
+
+    Effect::new(move |prev: Option<()>| {
+        ws.track();
+        if prev.is_some() || fresh {
+            schedule_save(ctx);
+        }
+    });
+    Effect::new(move |_| {
+        let on = high_contrast.get();
+        browser::body_class("high-contrast", on);
+        let _ = browser::set(THEME_KEY, if on { "high-contrast" } else { "standard" });
+    });
+    let storage_listener = window_event_listener(ev::storage, move |e| {
+        if e.key().as_deref() != Some(KEY) {
+            return;
+        }
+        if let Some(text) = e.new_value() {
+            if peek_revision(&text) != Some(ctx.loaded_rev.get_value()) {
+                ctx.other_tab.set(Some(text));
+            }
+        }
+    });
+    let resize_listener =
+        window_event_listener(ev::resize, move |_| ctx.resize.update(|n| *n += 1));
+    let orient_listener =
+        window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
+    on_cleanup(move || {
+        storage_listener.remove();
+        resize_listener.remove();
+        orient_listener.remove();
+    });
+    browser::register_service_worker(move || ctx.update_ready.set(true));
+
+    view! {
+        <div class="app">
+            <header class="topbar">
+                <h1 class="brand">"Strutline"</h1>
+                <p class="tagline">"compression members, checked as you type"</p>
+                <button
+                    type="button"
+                    class="theme-toggle"
+                    data-testid="contrast-toggle"
+                    aria-pressed=move || if high_contrast.get() { "true" } else { "false" }
+                    on:click=move |_| high_contrast.update(|v| *v = !*v)
+                >
+                    {move || if high_contrast.get() { "◐ Standard theme" } else { "◑ High contrast (outdoors)" }}
+                </button>
+            </header>
+            <Banners ctx=ctx />
+            <main class="panes">
+                <section class="pane pane-list" aria-labelledby="h-list">
+                    <ListPanel ctx=ctx />
+                </section>
+                <section class="pane pane-editor" aria-labelledby="h-editor">
+                    {move || {
+                        let _ = (ctx.generation.get(), ctx.ws.with(|w| w.active));
+                        view! { <Editor ctx=ctx /> }
+                    }}
+                </section>
+                <section class="pane pane-results" aria-labelledby="h-results">
+                    <Results ctx=ctx />
+                </section>
+            </main>
+        </div>
+    }
+}
+
+#[component]
+fn Banners(ctx: Ctx) -> impl IntoView {
+    view! {
+        <div class="banners" aria-live="polite">
+            {move || ctx.update_ready.get().then(|| view! {
+                <div class="banner banner-info" data-testid="update-ready" role="status">
+                    <span>"⟳ A new version of Strutline is ready."</span>
+                    <button type="button" on:click=move |_| browser::apply_update()>"Reload to update"</button>
+                    <button type="button" class="quiet" on:click=move |_| ctx.update_ready.set(false)>"Later"</button>
+                </div>
+            })}
+            {move || ctx.problem.get().map(|p| {
+                let raw = p.raw.clone();
+                let aside = p.aside.clone();
+                let where_kept = match &p.aside {
+                    Some(k) => format!("It is left untouched, with a copy under the storage key \"{k}\"."),
+                    None => "It is left untouched (a spare copy could not be stored).".to_string(),
+                };
+                view! {
+                    <div class="banner banner-problem" data-testid="storage-problem" role="alert">
+                        <p>
+                            <strong>"⚠ The saved workspace could not be read: "</strong>
+                            {p.reason.clone()}
+                        </p>
+                        <p>{where_kept} " You are looking at the demo list; nothing is saved until you decide."</p>
+                        <div class="banner-actions">
+                            <button type="button" data-testid="download-unreadable" on:click=move |_| {
+                                let name = format!("strutline-unreadable-{}.json", browser::now_ms() as u64);
+                                let _ = browser::download(&name, &raw, "application/json");
+                            }>"⬇ Download the unreadable copy"</button>
+                            <button type="button" data-testid="discard-unreadable" on:click=move |_| {
+                                if let Some(k) = &aside {
+                                    browser::remove(k);
+                                }
+                                ctx.overwrite_ok.set_value(true);
+                                ctx.problem.set(None);
+                                schedule_save(ctx);
+                            }>"Discard the unreadable copy and save from now on"</button>
+                        </div>
+                    </div>
+                }
+            })}
+            {move || ctx.save_problem.get().map(|msg| view! {
+                <div class="banner banner-problem" data-testid="save-problem" role="alert">
+                    <span>"⚠ " {msg}</span>
+                    <button type="button" on:click=move |_| {
+                        let name = format!("strutline-workspace-{}.json", browser::now_ms() as u64);
+                        let text = ctx.ws.with_untracked(encode);
+                        let _ = browser::download(&name, &text, "application/json");
+                    }>"⬇ Download the workspace"</button>
+                </div>
+            })}
+            {move || ctx.other_tab.get().map(|theirs| {
+                let theirs2 = theirs.clone();
+                view! {
+                    <div class="banner banner-info" data-testid="other-tab" role="alert">
+                        <span>"⇄ This workspace was changed in another tab or window. Which version do you want to keep?"</span>
+                        <button type="button" data-testid="load-theirs" on:click=move |_| {
+                            match decode(&theirs) {
+                                Ok(w) => {
+                                    ctx.loaded_rev.set_value(w.revision);
+                                    ctx.other_tab.set(None);
+                                    ctx.ws.set(w);
+                                    ctx.undo.set(None);
+                                    ctx.select(0);
+                                }
+                                Err(reason) => {
+                                    ctx.other_tab.set(None);
+                                    set_problem(ctx, theirs.clone(), reason);
+                                }
+                            }
+                        }>"Load theirs"</button>
+                        <button type="button" data-testid="keep-mine" on:click=move |_| {
+                            let mine = ctx.loaded_rev.get_value();
+                            ctx.loaded_rev.set_value(peek_revision(&theirs2).unwrap_or(mine));
+                            ctx.overwrite_ok.set_value(true);
+                            ctx.other_tab.set(None);
+                            schedule_save(ctx);
+                        }>"Keep mine (and save it)"</button>
+                    </div>
+                }
+            })}
+            {move || ctx.undo.get().map(|u| {
+                let what = match &u {
+                    Undo::Member { deleted, .. } => format!("Member \"{}\" deleted.", deleted.member.id),
+                    Undo::List(d) => format!("List \"{}\" deleted.", d.list.title),
+                };
+                view! {
+                    <div class="banner banner-undo" role="status">
+                        <span>"🗑 " {what}</span>
+                        <button type="button" data-testid="undo" on:click=move |_| {
+                            if let Some(u) = ctx.undo.get_untracked() {
+                                ctx.undo.set(None);
+                                match u {
+                                    Undo::Member { list, deleted } => {
+                                        let mut at = None;
+                                        ctx.ws.update(|w| {
+                                            w.active = list.min(w.lists.len().saturating_sub(1));
+                                            if let Some(l) = w.active_list_mut() {
+                                                at = Some(listops::undo_delete(&mut l.members, deleted));
+                                            }
+                                        });
+                                        ctx.select(at.unwrap_or(0));
+                                    }
+                                    Undo::List(d) => {
+                                        ctx.ws.update(|w| {
+                                            let at = listops::undo_delete_list(&mut w.lists, d);
+                                            w.active = at;
+                                        });
+                                        ctx.select(0);
+                                    }
+                                }
+                            }
+                        }>"↶ Undo"</button>
+                        <button type="button" class="quiet" on:click=move |_| ctx.undo.set(None)>"Dismiss"</button>
+                    </div>
+                }
+            })}
+        </div>
+    }
+}
+
+#[component]
+fn ListPanel(ctx: Ctx) -> impl IntoView {
+    let titles = Memo::new(move |_| {
+        ctx.ws
+            .with(|w| w.lists.iter().map(|l| l.title.clone()).collect::<Vec<_>>())
+    });
+    let active = Memo::new(move |_| ctx.ws.with(|w| w.active));
+    let summary = Memo::new(move |_| {
+        ctx.checks.with(|c| {
+            let mut n = [0usize; 3];
+            for k in c.0.iter() {
+                match Standing::of(&k.outcome) {
+                    Standing::Holds => n[0] += 1,
+                    Standing::Exceeds => n[1] += 1,
+                    Standing::NeedsInput => n[2] += 1,
+                }
+            }
+            (c.0.len(), n)
+        })
+    });
+    let title_error = RwSignal::new(None::<String>);
+    view! {
+        <h2 id="h-list" class="pane-title">"Member lists"</h2>
+        <div class="list-bar">
+            <div class="field">
+                <label for="list-select">"List (one per job)"</label>
+                <select
+                    id="list-select"
+                    name="list"
+                    data-testid="list-select"
+                    prop:value=move || active.get().to_string()
+                    on:change=move |e| {
+                        if let Ok(i) = event_target_value(&e).parse::<usize>() {
+                            ctx.ws.update(|w| w.active = i.min(w.lists.len().saturating_sub(1)));
+                            ctx.select(0);
+                        }
+                    }
+                >
+                    {move || titles.get().into_iter().enumerate().map(|(i, t)| {
+                        let label = if t.is_empty() { format!("(untitled list {})", i + 1) } else { t };
+                        view! { <option value=i.to_string() selected=move || active.get() == i>{label}</option> }
+                    }).collect_view()}
+                </select>
+            </div>
+            {move || {
+                let _ = active.get();
+                let title = ctx.ws.with_untracked(|w| w.active_list().map(|l| l.title.clone()).unwrap_or_default());
+                view! {
+                    <div class="field">
+                        <label for="list-title">"Name of this list"</label>
+                        <input
+                            id="list-title"
+                            name="title"
+                            type="text"
+                            autocomplete="off"
+                            value=title
+                            on:input=move |e| {
+                                let t = event_target_value(&e);
+                                if t.trim().is_empty() {
+                                    title_error.set(Some("title: give the list a name".into()));
+                                    return;
+                                }
+                                title_error.set(None);
+                                ctx.ws.update(|w| if let Some(l) = w.active_list_mut() { l.title = t.trim().to_string(); });
+                            }
+                        />
+                        {move || title_error.get().map(|m| view! { <p class="field-error" data-testid="field-error">{m}</p> })}
+                    </div>
+                }
+            }}
+            <div class="button-row">
+                <button type="button" data-testid="new-list" on:click=move |_| {
+                    ctx.ws.update(|w| {
+                        let title = listops::free_title(&w.lists, "New job");
+                        w.lists.push(strutline_core::file::MemberFile::new(title));
+                        w.active = w.lists.len() - 1;
+                    });
+                    ctx.select(0);
+                }>"＋ New list"</button>
+                <button type="button" data-testid="delete-list" on:click=move |_| {
+                    let mut gone = None;
+                    ctx.ws.update(|w| {
+                        let a = w.active;
+                        gone = listops::delete_list(&mut w.lists, a);
+                        w.active = a.min(w.lists.len().saturating_sub(1));
+                    });
+                    if let Some(d) = gone {
+                        ctx.undo.set(Some(Undo::List(d)));
+                        ctx.select(0);
+                    }
+                } disabled=move || titles.with(|t| t.len() <= 1)>"🗑 Delete list"</button>
+            </div>
+        </div>
+        <p class="list-summary" role="status">
+            {move || {
+                let (total, n) = summary.get();
+                format!("{total} members · {} ✓ hold · {} ✗ exceed · {} ✎ need input", n[0], n[1], n[2])
+            }}
+        </p>
+        <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {
+            if let Some(i) = ctx.with_members(|ms| listops::add(ms, &demo::new_member())) {
+                ctx.select(i);
+            }
+        }>"＋ Add member"</button>
+        <ol class="member-list">
+            <For
+                each=move || {
+                    ctx.checks.get().0.iter().cloned().collect::<Vec<_>>()
+                }
+                key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
+                children=move |c| view! { <MemberRow ctx=ctx checked=c /> }
+            />
+        </ol>
+    }
+}
+
+#[component]
+fn MemberRow(ctx: Ctx, checked: Arc<Checked>) -> impl IntoView {
+    let m = &checked.member;
+    let id = m.id.clone();
+    let standing = Standing::of(&checked.outcome);
+    let status = status_text(&checked.outcome);
+    let util = utilisation_text(&checked.outcome);
+    let detail = format!(
+        "{} · L {} mm · N {} kN · {}",
+        m.section.describe(),
+        for_input(m.length_mm),
+        for_input(m.axial_kn),
+        m.method.key()
+    );
+    let id_sel = id.clone();
+    let is_selected = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.ws.with(|w| {
+            w.active_list()
+                .and_then(|l| l.members.get(sel))
+                .map(|m| m.id == id_sel)
+                .unwrap_or(false)
+        })
+    });
+    let (i1, i2, i3, i4, i5) = (id.clone(), id.clone(), id.clone(), id.clone(), id.clone());
+    view! {
+        <li class="member-row" class:selected=move || is_selected.get() data-testid="member-row" data-id=id.clone()>
+            <button
+                type="button"
+                class="row-main"
+                aria-current=move || if is_selected.get() { "true" } else { "false" }
+                on:click=move |_| {
+                    if let Some(i) = ctx.index_of(&i1) {
+                        ctx.select(i);
+                    }
+                }
+            >
+                <span class="row-id">{id.clone()}</span>
+                <span class=format!("row-status {}", standing.class()) data-testid="member-status">{status}</span>
+                <span class="row-util" data-testid="member-utilisation">{util}</span>
+                <span class="row-detail">{detail}</span>
+            </button>
+            <div class="row-actions">
+                <button type="button" aria-label=format!("Move {id} up") title="move up" on:click=move |_| {
+                    if let Some(i) = ctx.index_of(&i2) {
+                        if let Some(Some(j)) = ctx.with_members(|ms| listops::move_up(ms, i)) { ctx.select(j); }
+                    }
+                }>"↑"</button>
+                <button type="button" aria-label=format!("Move {id} down") title="move down" on:click=move |_| {
+                    if let Some(i) = ctx.index_of(&i3) {
+                        if let Some(Some(j)) = ctx.with_members(|ms| listops::move_down(ms, i)) { ctx.select(j); }
+                    }
+                }>"↓"</button>
+                <button type="button" data-testid="duplicate-member" aria-label=format!("Duplicate {id}") title="duplicate" on:click=move |_| {
+                    if let Some(i) = ctx.index_of(&i4) {
+                        if let Some(Some(j)) = ctx.with_members(|ms| listops::duplicate(ms, i)) { ctx.select(j); }
+                    }
+                }>"⧉"</button>
+                <button type="button" data-testid="delete-member" aria-label=format!("Delete {id}") title="delete" on:click=move |_| {
+                    if let Some(i) = ctx.index_of(&i5) {
+                        let list = ctx.ws.with_untracked(|w| w.active);
+                        if let Some(Some(d)) = ctx.with_members(|ms| listops::delete(ms, i)) {
+                            ctx.undo.set(Some(Undo::Member { list, deleted: d }));
+                            let len = ctx.ws.with_untracked(|w| w.active_list().map_or(0, |l| l.members.len()));
+                            ctx.select(i.min(len.saturating_sub(1)));
+                        }
+                    }
+                }>"🗑"</button>
+            </div>
+        </li>
+    }
+}
+
+/// A text field of the editor: label, input named by its member-file key,
+/// unit and the message of what is wrong while the person types.
+#[component]
+fn NumField(
+    ctx: Ctx,
+    field: Field,
+    #[prop(optional)] after: Option<Callback<Member>>,
+) -> impl IntoView {
+    let initial = ctx
+        .current()
+        .map(|m| fields::read(&m, field.place, field.key))
+        .unwrap_or_default();
+    let error = RwSignal::new(None::<String>);
+    let input_id = format!("f-{}", field.key);
+    let err_id = format!("e-{}", field.key);
+    let numeric = !matches!(field.rule, fields::Rule::Text);
+    let err_id2 = err_id.clone();
+    view! {
+        <div class="field" class:has-error=move || error.with(Option::is_some)>
+            <label for=input_id.clone()>{field.label} <code class="key">{field.key}</code></label>
+            <div class="input-row">
+                <input
+                    type="text"
+                    id=input_id.clone()
+                    name=field.key
+                    inputmode=if numeric { "decimal" } else { "text" }
+                    autocomplete="off"
+                    spellcheck="false"
+                    list=if field.key == "grade" { Some("grades") } else { None }
+                    value=initial
+                    aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
+                    aria-describedby=move || error.with(Option::is_some).then(|| err_id2.clone())
+                    on:input=move |e| {
+                        let text = event_target_value(&e);
+                        let Some(m) = ctx.current() else { return; };
+                        match fields::apply(&m, &field, &text) {
+                            Ok(new) => match fields::engine_objection(&new, field.key) {
+                                Some(msg) => error.set(Some(msg)),
+                                None => {
+                                    error.set(None);
+                                    ctx.commit(new.clone());
+                                    if let Some(cb) = after { cb.run(new); }
+                                }
+                            },
+                            Err(msg) => error.set(Some(msg)),
+                        }
+                    }
+                />
+                {(!field.unit.is_empty()).then(|| view! { <span class="unit">{field.unit}</span> })}
+            </div>
+            {move || error.get().map(|msg| view! {
+                <p class="field-error" data-testid="field-error" id=err_id.clone()>"✎ " {msg}</p>
+            })}
+        </div>
+    }
+}
+
+/// A select of options (value "" restores the engine's default).
+#[component]
+fn ChoiceField(ctx: Ctx, choice: Choice) -> impl IntoView {
+    let current = ctx
+        .current()
+        .map(|m| fields::read(&m, choice.place, choice.key))
+        .unwrap_or_default();
+    let input_id = format!("f-{}", choice.key);
+    let error = RwSignal::new(None::<String>);
+    let c2 = choice.clone();
+    view! {
+        <div class="field">
+            <label for=input_id.clone()>{choice.label} <code class="key">{choice.key}</code></label>
+            <select id=input_id name=choice.key on:change=move |e| {
+                let v = event_target_value(&e);
+                let Some(m) = ctx.current() else { return; };
+                match fields::apply_choice(&m, &c2, &v) {
+                    Ok(new) => { error.set(None); ctx.commit(new); }
+                    Err(msg) => error.set(Some(msg)),
+                }
+            }>
+                {choice.options.iter().map(|(v, label)| {
+                    let sel = current == *v || (current.is_empty() && v.is_empty());
+                    view! { <option value=*v selected=sel>{*label}</option> }
+                }).collect_view()}
+            </select>
+            {move || error.get().map(|msg| view! { <p class="field-error" data-testid="field-error">"✎ " {msg}</p> })}
+        </div>
+    }
+}
+
+#[component]
+fn IdField(ctx: Ctx) -> impl IntoView {
+    let initial = ctx.current().map(|m| m.id).unwrap_or_default();
+    let error = RwSignal::new(None::<String>);
+    view! {
+        <div class="field" class:has-error=move || error.with(Option::is_some)>
+            <label for="f-id">"member id (rename here)" <code class="key">"id"</code></label>
+            <input type="text" id="f-id" name="id" autocomplete="off" spellcheck="false" value=initial
+                aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
+                on:input=move |e| {
+                    let text = event_target_value(&e);
+                    let sel = ctx.selected.get_untracked();
+                    match ctx.with_members(|ms| listops::rename(ms, sel, &text)) {
+                        Some(Ok(())) => error.set(None),
+                        Some(Err(r)) => error.set(Some(r.message())),
+                        None => {}
+                    }
+                } />
+            {move || error.get().map(|msg| view! { <p class="field-error" data-testid="field-error">"✎ " {msg}</p> })}
+        </div>
+    }
+}
+
+#[component]
+fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
+    let (kf, lf, name, title) = if major {
+        (
+            fields::K_MAJOR,
+            fields::LCR_MAJOR,
+            "restraint_major",
+            "end conditions, major axis",
+        )
+    } else {
+        (
+            fields::K_MINOR,
+            fields::LCR_MINOR,
+            "restraint_minor",
+            "end conditions, minor axis",
+        )
+    };
+    let (k, lcr) = ctx
+        .current()
+        .map(|m| {
+            if major {
+                (m.k_major, m.lcr_major_mm)
+            } else {
+                (m.k_minor, m.lcr_minor_mm)
+            }
+        })
+        .unwrap_or((1.0, None));
+    let restraint = RwSignal::new(Restraint::infer(k, lcr));
+    let generation = RwSignal::new(0u32);
+    let is_length = Memo::new(move |_| restraint.get() == Restraint::Length);
+    let after = Callback::new(move |m: Member| {
+        let k = if major { m.k_major } else { m.k_minor };
+        if let Some(f) = restraint.get_untracked().factor() {
+            if (f - k).abs() > 1e-12 {
+                restraint.set(Restraint::Factor);
+            }
+        }
+    });
+    let select_id = format!("f-{name}");
+    view! {
+        <div class="axis-restraint">
+            <div class="field">
+                <label for=select_id.clone()>{title}</label>
+                <select id=select_id name=name prop:value=move || restraint.get().value() on:change=move |e| {
+                    let r = Restraint::from_value(&event_target_value(&e));
+                    restraint.set(r);
+                    let Some(mut m) = ctx.current() else { return; };
+                    let (kk, ll) = if major { (&mut m.k_major, &mut m.lcr_major_mm) } else { (&mut m.k_minor, &mut m.lcr_minor_mm) };
+                    match r {
+                        Restraint::Length => {
+                            if ll.is_none() {
+                                *ll = Some(*kk * m.length_mm);
+                            }
+                        }
+                        other => {
+                            if let Some(f) = other.factor() {
+                                *kk = f;
+                            }
+                            *ll = None;
+                        }
+                    }
+                    ctx.commit(m);
+                    generation.update(|g| *g += 1);
+                }>
+                    {Restraint::all().into_iter().map(|r| view! {
+                        <option value=r.value() selected=move || restraint.get_untracked() == r>{r.label()}</option>
+                    }).collect_view()}
+                </select>
+            </div>
+            {move || {
+                let _ = generation.get();
+                if is_length.get() {
+                    view! { <NumField ctx=ctx field=lf /> }.into_any()
+                } else {
+                    view! { <NumField ctx=ctx field=kf after=after /> }.into_any()
+                }
+            }}
+        </div>
+    }
+}
+
+#[component]
+fn Editor(ctx: Ctx) -> impl IntoView {
+    let Some(member) = ctx.current() else {
+        return view! {
+            <h2 id="h-editor" class="pane-title">"Member"</h2>
+            <p class="empty">"This list has no members yet. Use “＋ Add member” to start one."</p>
+        }
+        .into_any();
+    };
+    let kind = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.ws.with(|w| {
+            w.active_list()
+                .and_then(|l| l.members.get(sel))
+                .map_or("rect", |m| fields::kind_of(&m.section))
+        })
+    });
+    let mat_mode = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.ws.with(|w| {
+            w.active_list()
+                .and_then(|l| l.members.get(sel))
+                .map_or(MaterialMode::Steel, |m| MaterialMode::of(&m.material))
+        })
+    });
+    let method = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.ws.with(|w| {
+            w.active_list()
+                .and_then(|l| l.members.get(sel))
+                .map_or(Method::Euler, |m| m.method)
+        })
+    });
+    let title = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.ws.with(|w| {
+            w.active_list()
+                .and_then(|l| l.members.get(sel))
+                .map(|m| m.id.clone())
+                .unwrap_or_default()
+        })
+    });
+    let initial_kind = fields::kind_of(&member.section);
+    let initial_mode = MaterialMode::of(&member.material);
+    let initial_method = member.method;
+    view! {
+        <h2 id="h-editor" class="pane-title">"Member " <span class="editing-id">{move || title.get()}</span></h2>
+        <form class="editor" on:submit=|e| e.prevent_default() autocomplete="off">
+            <fieldset>
+                <legend>"Identity"</legend>
+                <IdField ctx=ctx />
+            </fieldset>
+            <fieldset>
+                <legend>"Section"</legend>
+                <div class="field">
+                    <label for="f-kind">"shape" <code class="key">"kind"</code></label>
+                    <select id="f-kind" name="kind" on:change=move |e| {
+                        let k = event_target_value(&e);
+                        if let Some(mut m) = ctx.current() {
+                            m.section = fields::section_of_kind(&k, &m.section);
+                            ctx.commit(m);
+                        }
+                    }>
+                        {fields::KINDS.iter().map(|(k, label)| view! {
+                            <option value=*k selected=*k == initial_kind>{*label}</option>
+                        }).collect_view()}
+                    </select>
+                </div>
+                {move || {
+                    let k = kind.get();
+                    view! {
+                        <div class="field-grid">
+                            {fields::section_fields(k).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }).collect_view()}
+                            {fields::section_choices(k).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }).collect_view()}
+                        </div>
+                    }
+                }}
+            </fieldset>
+            <fieldset>
+                <legend>"Material"</legend>
+                <div class="field">
+                    <label for="f-material_mode">"material given as"</label>
+                    <select id="f-material_mode" name="material_mode" on:change=move |e| {
+                        let mode = MaterialMode::from_value(&event_target_value(&e));
+                        if let Some(mut m) = ctx.current() {
+                            m.material = mode.default_spec();
+                            ctx.commit(m);
+                        }
+                    }>
+                        {[MaterialMode::Grade, MaterialMode::Steel, MaterialMode::Timber].into_iter().map(|mm| {
+                            let label = match mm {
+                                MaterialMode::Grade => "a named grade or strength class",
+                                MaterialMode::Steel => "custom steel values",
+                                MaterialMode::Timber => "custom timber values",
+                            };
+                            view! { <option value=mm.value() selected=mm == initial_mode>{label}</option> }
+                        }).collect_view()}
+                    </select>
+                </div>
+                <datalist id="grades">
+                    {fields::GRADE_SUGGESTIONS.iter().map(|g| view! { <option value=*g></option> }).collect_view()}
+                </datalist>
+                {move || {
+                    let mode = mat_mode.get();
+                    view! {
+                        <div class="field-grid">
+                            {fields::material_fields(mode).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }).collect_view()}
+                            {fields::material_choices(mode).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }).collect_view()}
+                        </div>
+                    }
+                }}
+            </fieldset>
+            <fieldset>
+                <legend>"Length and restraint"</legend>
+                <NumField ctx=ctx field=fields::MEMBER_FIELDS[0] />
+                <AxisRestraint ctx=ctx major=true />
+                <AxisRestraint ctx=ctx major=false />
+            </fieldset>
+            <fieldset>
+                <legend>"Design load"</legend>
+                <NumField ctx=ctx field=fields::MEMBER_FIELDS[1] />
+            </fieldset>
+            <fieldset>
+                <legend>"Method"</legend>
+                <div class="field">
+                    <label for="f-method">"design method" <code class="key">"method"</code></label>
+                    <select id="f-method" name="method" on:change=move |e| {
+                        if let Some(me) = Method::from_key(&event_target_value(&e)) {
+                            if let Some(mut m) = ctx.current() {
+                                m.method = me;
+                                ctx.commit(m);
+                            }
+                        }
+                    }>
+                        {Method::ALL.iter().map(|me| view! {
+                            <option value=me.key() selected=*me == initial_method>{me.title()}</option>
+                        }).collect_view()}
+                    </select>
+                </div>
+                {move || {
+                    let me = method.get();
+                    view! {
+                        <div class="field-grid">
+                            {fields::option_fields(me).into_iter().map(|f| view! { <NumField ctx=ctx field=f /> }).collect_view()}
+                            {fields::method_choices(me).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }).collect_view()}
+                        </div>
+                    }
+                }}
+            </fieldset>
+        </form>
+    }
+    .into_any()
+}
+
+fn scope_title(s: Scope) -> &'static str {
+    match s {
+        Scope::Member => "Member",
+        Scope::Section => "Cross-section",
+        Scope::Major => "Major axis",
+        Scope::Minor => "Minor axis",
+        Scope::Torsional => "Torsional",
+        Scope::FlexuralTorsional => "Flexural-torsional",
+    }
+}
+
+#[component]
+fn Results(ctx: Ctx) -> impl IntoView {
+    let current = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.checks.with(|c| c.0.get(sel).cloned())
+    });
+    view! {
+        <h2 id="h-results" class="pane-title">"Result"</h2>
+        <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
+        {move || match current.get() {
+            None => view! { <p class="empty">"No member selected."</p> }.into_any(),
+            Some(c) => result_view(&c).into_any(),
+        }}
+        <Chart ctx=ctx current=current />
+    }
+}
+
+fn result_view(c: &Checked) -> impl IntoView {
+    let standing = Standing::of(&c.outcome);
+    match &c.outcome {
+        Err(e) => view! {
+            <div class=format!("verdict {}", standing.class()) role="status">
+                <p class="verdict-status">{status_text(&c.outcome)}</p>
+                <p class="verdict-error">{fields::error_text(e)}</p>
+                <dl class="verdict-numbers">
+                    <dt>"utilisation"</dt><dd><span data-testid="result-utilisation">"—"</span></dd>
+                    <dt>"resistance"</dt><dd><span data-testid="result-resistance">"—"</span></dd>
+                    <dt>"governs"</dt><dd data-testid="result-governing">"—"</dd>
+                </dl>
+            </div>
+        }
+        .into_any(),
+        Ok(r) => {
+            let modes = r.modes.clone();
+            let warnings = r.warnings.clone();
+            let scopes = [
+                Scope::Member,
+                Scope::Section,
+                Scope::Major,
+                Scope::Minor,
+                Scope::Torsional,
+                Scope::FlexuralTorsional,
+            ];
+            let groups: Vec<_> = scopes
+                .into_iter()
+                .filter_map(|s| {
+                    let steps: Vec<_> = r.trace.iter().filter(|t| t.scope == s).cloned().collect();
+                    (!steps.is_empty()).then_some((s, steps))
+                })
+                .collect();
+            view! {
+                <div class=format!("verdict {}", standing.class()) role="status">
+                    <p class="verdict-status">{status_text(&c.outcome)}</p>
+                    <dl class="verdict-numbers">
+                        <dt>"utilisation N_Ed / N_Rd"</dt>
+                        <dd><span data-testid="result-utilisation">{fixed(r.utilisation, 3)}</span></dd>
+                        <dt>"resistance N_Rd"</dt>
+                        <dd><span data-testid="result-resistance">{fixed(r.resistance_kn, 1)}</span>" kN"</dd>
+                        <dt>"design load N_Ed"</dt>
+                        <dd>{fixed(c.member.axial_kn, 1)}" kN"</dd>
+                        <dt>"governs"</dt>
+                        <dd data-testid="result-governing">{governing_text(r)}</dd>
+                        <dt>"method"</dt>
+                        <dd>{r.method.title()}</dd>
+                    </dl>
+                </div>
+                {(!warnings.is_empty()).then(|| view! {
+                    <ul class="warnings" data-testid="warnings">
+                        {warnings.into_iter().map(|w| view! { <li>"⚠ " {w.message} " " <code>{w.code}</code></li> }).collect_view()}
+                    </ul>
+                })}
+                <div class="table-wrap">
+                    <table class="modes">
+                        <caption>"Modes checked"</caption>
+                        <thead><tr>
+                            <th scope="col">"mode"</th><th scope="col">"L_cr (mm)"</th><th scope="col">"L_cr/i"</th>
+                            <th scope="col">"N_cr (kN)"</th><th scope="col">"λ̄"</th><th scope="col">"reduction"</th><th scope="col">"N_Rd (kN)"</th>
+                        </tr></thead>
+                        <tbody>
+                            {modes.into_iter().map(|m| {
+                                let gov = m.mode == r.governing;
+                                view! {
+                                    <tr class:governs=gov>
+                                        <th scope="row">{m.mode.key()}{gov.then_some(" ◀ governs")}</th>
+                                        <td>{working(m.buckling_length_mm)}</td>
+                                        <td>{working(m.slenderness)}</td>
+                                        <td>{working(m.critical_kn)}</td>
+                                        <td>{working(m.relative_slenderness)}</td>
+                                        <td>{working(m.reduction)}</td>
+                                        <td>{fixed(m.resistance_kn, 1)}</td>
+                                    </tr>
+                                }
+                            }).collect_view()}
+                        </tbody>
+                    </table>
+                </div>
+                <h3 class="sub-title">"Working"</h3>
+                {groups.into_iter().map(|(s, steps)| view! {
+                    <details class="working" open=true>
+                        <summary>{scope_title(s)}</summary>
+                        <div class="table-wrap">
+                            <table>
+                                <thead><tr><th scope="col">"symbol"</th><th scope="col">"meaning"</th><th scope="col">"value"</th><th scope="col">"from"</th></tr></thead>
+                                <tbody>
+                                    {steps.into_iter().map(|st| view! {
+                                        <tr>
+                                            <th scope="row"><code>{st.symbol}</code></th>
+                                            <td>{st.label}</td>
+                                            <td class="num">{working(st.value)} " " {if st.unit == "-" { "" } else { st.unit }}</td>
+                                            <td class="clause">{st.clause}</td>
+                                        </tr>
+                                    }).collect_view()}
+                                </tbody>
+                            </table>
+                        </div>
+                    </details>
+                }).collect_view()}
+            }
+            .into_any()
+        }
+    }
+}
+
+#[component]
+fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
+    let canvas = NodeRef::<leptos::html::Canvas>::new();
+    let note = RwSignal::new(None::<String>);
+    let described = RwSignal::new(String::new());
+    Effect::new(move |_| {
+        let c = current.get();
+        let perry = ctx.perry.get();
+        let hc = ctx.high_contrast.get();
+        let _ = ctx.resize.get();
+        let Some(el) = canvas.get() else {
+            return;
+        };
+        let dpr = browser::device_pixel_ratio();
+        let w = f64::from(el.client_width().max(1));
+        let h = f64::from(el.client_height().max(1));
+        el.set_width((w * dpr).round() as u32);
+        el.set_height((h * dpr).round() as u32);
+        let data = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
+            (Some(p), Ok(r)) => Some(chart::data::build(p, r, perry)),
+            _ => None,
+        });
+        match data {
+            Some(Ok(d)) => {
+                match chart::envelope::draw(&el, &d, dpr, hc) {
+                    Ok(()) => note.set(None),
+                    Err(e) => note.set(Some(e)),
+                }
+                described.set(match d.governing() {
+                    Some(g) => format!(
+                        "Governing axis {}: slenderness {}, applied stress {} MPa, design stress {} MPa, plateau {} MPa.",
+                        g.mode.key(),
+                        working(g.slenderness),
+                        working(g.applied_mpa),
+                        working(g.resistance_mpa),
+                        working(d.yield_mpa)
+                    ),
+                    None => String::new(),
+                });
+            }
+            Some(Err(e)) => note.set(Some(fields::error_text(&e))),
+            None => {
+                for a in [
+                    "data-marker-slenderness",
+                    "data-marker-stress-mpa",
+                    "data-marker-px",
+                ] {
+                    let _ = el.remove_attribute(a);
+                }
+                note.set(Some(
+                    "The chart appears when the member's input can be checked.".into(),
+                ));
+                described.set(String::new());
+            }
+        }
+    });
+    view! {
+        <div class="chart-block">
+            <div class="chart-head">
+                <h3 class="sub-title">"Capacity envelope"</h3>
+                <label class="check">
+                    <input type="checkbox" name="show_bows" data-testid="toggle-bows"
+                        prop:checked=move || ctx.perry.get()
+                        on:change=move |e| ctx.perry.set(event_target_checked(&e)) />
+                    " show Perry-Robertson bows L/250, L/500, L/1000"
+                </label>
+            </div>
+            <canvas id="envelope" class="envelope" node_ref=canvas role="img"
+                aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+            <p class="chart-description">{move || described.get()}</p>
+            {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
+        </div>
+    }
+}
