@@ -519,6 +519,32 @@ fn parse_inches(body: &str, mark: Mark) -> Option<f64> {
     Some(whole + num as f64 / den as f64)
 }
 
+/// Reads a number a person typed for member-file key `key` in the display
+/// unit of `system` (see [`units::display_unit`]; SI member lengths are
+/// shown in metres) and returns the value to store, in the key's own unit.
+/// The forgiving number forms of this module are accepted; `decimal_comma`
+/// settles the ambiguous `1,234` (rule 4). In US units, lengths may also be
+/// typed in feet and inches (`13'-6"`, `6 1/2"`), whatever the unit shown.
+pub fn parse_typed(
+    text: &str,
+    key: &str,
+    system: UnitSystem,
+    decimal_comma: bool,
+) -> Result<f64, String> {
+    let mark = if decimal_comma {
+        Mark::Comma
+    } else {
+        Mark::Point
+    };
+    let q = Quantity::of_key(key).unwrap_or(Quantity::Dimensionless);
+    if system == UnitSystem::Us && matches!(q, Quantity::Span | Quantity::Length) {
+        if let Some(mm) = parse_feet_inches(text, mark) {
+            return mm;
+        }
+    }
+    parse_number(text, mark).map(|v| units::from_display(system, q, v))
+}
+
 // ---------------------------------------------------------------------------
 // Tokenising.
 
@@ -1646,6 +1672,31 @@ mod tests {
             number_cell("0.5", Some(UsUnit::In), Mark::Point).unwrap(),
             12.7
         );
+    }
+
+    #[test]
+    fn typed_values_come_back_in_stored_units() {
+        let t = |text: &str, key: &str, system: UnitSystem| parse_typed(text, key, system, false);
+        assert_eq!(t("3.6", "length_mm", UnitSystem::Si).unwrap(), 3600.0);
+        assert_eq!(
+            t("13'-6\"", "length_mm", UnitSystem::Us).unwrap(),
+            13.0 * 304.8 + 6.0 * 25.4
+        );
+        assert_eq!(t("12", "length_mm", UnitSystem::Us).unwrap(), 12.0 * 304.8);
+        assert_eq!(t("1/2\"", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
+        assert_eq!(t("0.5", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
+        assert_eq!(t("1,250", "axial_kn", UnitSystem::Si).unwrap(), 1250.0);
+        assert_eq!(
+            parse_typed("1,250", "axial_kn", UnitSystem::Si, true).unwrap(),
+            1.25
+        );
+        assert_eq!(
+            t("50", "fy_mpa", UnitSystem::Us).unwrap(),
+            units::ksi_to_mpa(50.0)
+        );
+        assert_eq!(t("0,85", "k_minor", UnitSystem::Us).unwrap(), 0.85);
+        assert!(t("13'-6\"", "fy_mpa", UnitSystem::Us).is_err());
+        assert!(t("13'-6\"", "length_mm", UnitSystem::Si).is_err());
     }
 
     const BASIC: &str = "id,kind,depth_mm,width_mm,fy_mpa,e_mpa,length_mm,axial_kn,method\n\
