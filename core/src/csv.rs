@@ -79,7 +79,7 @@ use crate::method::Method;
 use crate::units::{self, Quantity, UnitSystem, UsUnit};
 
 /// The largest number of member rows accepted.
-pub const MAX_ROWS: usize = 100_000;
+pub const MAX_ROWS: usize = 10_000;
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]

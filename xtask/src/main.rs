@@ -11,6 +11,7 @@ mod bench;
 mod bench_web;
 mod browser;
 mod dist;
+mod fuzz;
 mod serve;
 mod test;
 mod util;
@@ -25,7 +26,8 @@ commands:
   browser-test [--only T]   build, serve on a free port and run tests/browser (T: a test name)
   bench-web                 build, serve and measure the app in the browser; writes bench/web.md
   test                      the project's test suite
-  bench                     the engine benchmarks";
+  bench                     the engine benchmarks
+  fuzz [--seconds N]        fuzz the member-file readers for N seconds each (default 60)";
 
 fn main() {
     let args: Vec<String> = std::env::args().skip(1).collect();
@@ -51,6 +53,7 @@ fn dispatch(args: &[String]) -> Result<()> {
         // ---- slot for the lead engineer: `test` and `bench` ----
         "test" => test::run(rest),
         "bench" => bench::run(rest),
+        "fuzz" => fuzz::run(rest),
         // ---- end of slot ----
         "help" | "--help" | "-h" => {
             println!("{USAGE}");

@@ -22,7 +22,8 @@ usage:
   strutline sections [--series NAME] [--json]   list catalogue sections with their properties
   strutline size FILE --series NAME [--limit U] [--json]
                                                 propose the lightest section of a series per member
-  strutline convert IN OUT [--take-valid]       convert a member file between JSON and CSV
+  strutline convert IN OUT [--take-valid] [--units si|us]
+                                                convert a member file between JSON and CSV
   strutline help                                this text
 
 exit status: 0 all within capacity, 1 some member over capacity, 2 invalid input";
