@@ -1,10 +1,53 @@
-//! The built-in catalogue of standard sections (filled by the catalogue work).
+//! The built-in catalogue of standard sections.
 //!
-//! Entries are resolved by designation, forgivingly; an unknown designation
-//! is refused with the nearest matches suggested.
+//! Each series is a plain data file `core/data/<series>.csv`, embedded with
+//! `include_str!` and parsed once (on first use) into static entries. A
+//! file opens with a comment block (`#`) naming its source, then
+//! directives (`@series`, `@shape`, `@make`, `@units`, `@corners`, `@wall`,
+//! `@tokens`), a header line naming the columns, and one row per section
+//! with the nominal dimensions and the tabulated area, second moments and
+//! mass per metre in the units the source publishes them in.
+//!
+//! Designations are resolved forgivingly: case, spaces, `x`/`X`/`×`, the
+//! order of the series letters ("HEB200", "HE200B" and "HE 200 B"; "UC
+//! 203x203x46" and "203x203x46 UC"), trailing zeros of decimals ("5.0") all
+//! match. A designation is normalised into a fixed stack buffer and looked
+//! up in a hash map of precomputed keys, so a hit does not allocate. An
+//! unknown designation is refused with [`Error::UnknownDesignation`] and up
+//! to five nearest designations (edit distance over normalised keys).
+//!
+//! Adding a series is adding a data file and one line in [`FILES`].
+
+use std::collections::HashMap;
+use std::hash::{BuildHasherDefault, Hasher};
+use std::sync::OnceLock;
 
 use crate::error::{Error, Result};
-use crate::section::SectionSpec;
+use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, SectionSpec};
+
+/// The data files, in the order they are listed.
+const FILES: &[(&str, &str)] = &[
+    ("ipe", include_str!("../data/ipe.csv")),
+    ("hea", include_str!("../data/hea.csv")),
+    ("heb", include_str!("../data/heb.csv")),
+    ("hem", include_str!("../data/hem.csv")),
+    ("uc", include_str!("../data/uc.csv")),
+    ("ub", include_str!("../data/ub.csv")),
+    ("w", include_str!("../data/w.csv")),
+    ("hss", include_str!("../data/hss.csv")),
+    ("hss-round", include_str!("../data/hss-round.csv")),
+    ("shs-en10210", include_str!("../data/shs-en10210.csv")),
+    ("chs-en10210", include_str!("../data/chs-en10210.csv")),
+    ("shs-en10219", include_str!("../data/shs-en10219.csv")),
+];
+
+/// Millimetres per inch (exact by definition).
+const MM_PER_IN: f64 = 25.4;
+/// Kilograms per metre in one pound per foot: 0.45359237 kg / 0.3048 m.
+const KG_M_PER_LB_FT: f64 = 0.453_592_37 / 0.3048;
+/// AISC 360-16 B4.2: design wall thickness of electric-resistance-welded
+/// HSS as a fraction of the nominal wall.
+pub const AISC_ERW_DESIGN_WALL: f64 = 0.93;
 
 /// One catalogue entry.
 #[derive(Debug, Clone, PartialEq)]
@@ -23,12 +66,769 @@ pub struct Entry {
     pub i_minor_mm4: f64,
     /// Tabulated mass per metre, kg/m.
     pub mass_kg_per_m: f64,
+    /// The nominal wall, mm, when the section uses a design wall that
+    /// differs from it (AISC 360-16 B4.2: ERW HSS use 0.93 t_nom).
+    pub nominal_wall_mm: Option<f64>,
+}
+
+/// One series: a data file.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Series {
+    /// Its name ("HE B").
+    pub name: &'static str,
+    /// The data file's stem ("heb").
+    pub file: &'static str,
+    /// The shape family of its entries.
+    pub family: Family,
+    /// The file's header comment: the source and how the values were obtained.
+    pub source: String,
+    /// Units of the data file as published: "metric" (mm, cm2, cm4, kg/m)
+    /// or "imperial" (in, in2, in4, lb/ft).
+    pub units: &'static str,
+    first: usize,
+    end: usize,
+}
+
+impl Series {
+    /// The entries of the series, in file order.
+    pub fn entries(&self) -> &'static [Entry] {
+        catalogue().entries.get(self.first..self.end).unwrap_or(&[])
+    }
+}
+
+/// FNV-1a, a fast hash for the short keys of the index.
+#[derive(Default)]
+struct Fnv(u64);
+
+impl Hasher for Fnv {
+    fn finish(&self) -> u64 {
+        self.0
+    }
+    fn write(&mut self, bytes: &[u8]) {
+        let mut h = if self.0 == 0 {
+            0xcbf2_9ce4_8422_2325
+        } else {
+            self.0
+        };
+        for b in bytes {
+            h ^= u64::from(*b);
+            h = h.wrapping_mul(0x0100_0000_01b3);
+        }
+        self.0 = h;
+    }
+}
+
+type Index = HashMap<Box<str>, usize, BuildHasherDefault<Fnv>>;
+
+struct Catalogue {
+    entries: Vec<Entry>,
+    series: Vec<Series>,
+    index: Index,
+    /// Normalised canonical key of each entry, for suggestions.
+    keys: Vec<String>,
+    problems: Vec<String>,
+}
+
+fn catalogue() -> &'static Catalogue {
+    static CATALOGUE: OnceLock<Catalogue> = OnceLock::new();
+    CATALOGUE.get_or_init(build)
+}
+
+/// Longest normalised key, bytes.
+pub const KEY_CAPACITY: usize = 48;
+
+/// A normalised designation in a fixed buffer (no allocation).
+#[derive(Clone, Copy)]
+pub struct Key {
+    buf: [u8; KEY_CAPACITY],
+    len: usize,
+}
+
+impl Key {
+    /// The key as text.
+    pub fn as_str(&self) -> &str {
+        let bytes = self.buf.get(..self.len).unwrap_or(&[]);
+        std::str::from_utf8(bytes).unwrap_or("")
+    }
+
+    fn push(&mut self, b: u8) -> bool {
+        match self.buf.get_mut(self.len) {
+            Some(slot) => {
+                *slot = b;
+                self.len += 1;
+                true
+            }
+            None => false,
+        }
+    }
+
+    fn last(&self) -> Option<u8> {
+        self.len
+            .checked_sub(1)
+            .and_then(|i| self.buf.get(i))
+            .copied()
+    }
+
+    /// Ends a number: drops trailing zeros of its decimals and a bare point.
+    fn end_number(&mut self, point: &mut Option<usize>) {
+        if let Some(p) = point.take() {
+            while self.len > p + 1 && self.last() == Some(b'0') {
+                self.len -= 1;
+            }
+            if self.len == p + 1 {
+                self.len = p;
+            }
+        }
+    }
+}
+
+/// Normalises a designation: upper case; spaces, `-` and `_` dropped; `x`,
+/// `×` and `*` as `X`; a decimal comma as a point; trailing zeros of
+/// decimals dropped ("5.0" as "5", "0.250" as "0.25"). Returns `None` when
+/// the text has another character or is longer than [`KEY_CAPACITY`];
+/// with `lossy`, such characters are skipped instead.
+pub fn normalise(text: &str, lossy: bool) -> Option<Key> {
+    let mut key = Key {
+        buf: [0; KEY_CAPACITY],
+        len: 0,
+    };
+    let mut point: Option<usize> = None;
+    let mut chars = text.chars().peekable();
+    while let Some(c) = chars.next() {
+        let out = match c {
+            '0'..='9' => Some(c as u8),
+            'a'..='z' | 'A'..='Z' => Some(c.to_ascii_uppercase() as u8),
+            '×' | '*' | '✕' | '⨯' => Some(b'X'),
+            '.' | ',' => {
+                let digit_before = key.last().is_some_and(|b| b.is_ascii_digit());
+                let digit_after = chars.peek().is_some_and(char::is_ascii_digit);
+                if digit_after && point.is_none() && (digit_before || c == '.') {
+                    Some(b'.')
+                } else {
+                    None
+                }
+            }
+            '/' => Some(b'/'),
+            ' ' | '\t' | '-' | '_' | '\u{a0}' => None,
+            _ => {
+                if lossy {
+                    None
+                } else {
+                    return None;
+                }
+            }
+        };
+        match out {
+            Some(b'.') => {
+                point = Some(key.len);
+                if !key.push(b'.') && !lossy {
+                    return None;
+                }
+            }
+            Some(b) => {
+                if !b.is_ascii_digit() {
+                    key.end_number(&mut point);
+                }
+                if !key.push(b) {
+                    if lossy {
+                        break;
+                    }
+                    return None;
+                }
+            }
+            None => key.end_number(&mut point),
+        }
+    }
+    key.end_number(&mut point);
+    Some(key)
+}
+
+fn normalised_string(text: &str) -> String {
+    normalise(text, true)
+        .map(|k| k.as_str().to_string())
+        .unwrap_or_default()
+}
+
+/// Splits a normalised key into leading letters, the middle (from the first
+/// to the last digit) and trailing letters.
+fn split_key(key: &str) -> (&str, &str, &str) {
+    let start = key.find(|c: char| c.is_ascii_digit() || c == '.');
+    let end = key.rfind(|c: char| c.is_ascii_digit());
+    match (start, end) {
+        (Some(s), Some(e)) if e >= s => (
+            key.get(..s).unwrap_or(""),
+            key.get(s..=e).unwrap_or(""),
+            key.get(e + 1..).unwrap_or(""),
+        ),
+        _ => (key, "", ""),
+    }
+}
+
+/// Every spelling of a canonical key: the series letters before, after or
+/// on both sides of the numbers, with the series' alternative tokens.
+fn aliases(key: &str, tokens: &[&str]) -> Vec<String> {
+    let (lead, mid, trail) = split_key(key);
+    let mut out = Vec::new();
+    if mid.is_empty() {
+        return out;
+    }
+    let trails: Vec<String> = if tokens.is_empty() {
+        vec![trail.to_string()]
+    } else {
+        tokens.iter().map(|t| normalised_string(t)).collect()
+    };
+    for t in &trails {
+        let t = t.as_str();
+        for k in [
+            format!("{lead}{mid}{t}"),
+            format!("{t}{mid}{lead}"),
+            format!("{lead}{t}{mid}"),
+            format!("{t}{lead}{mid}"),
+            format!("{mid}{lead}{t}"),
+            format!("{mid}{t}{lead}"),
+        ] {
+            if !out.contains(&k) {
+                out.push(k);
+            }
+        }
+    }
+    out
+}
+
+/// The parsed directives of a data file.
+struct Directives {
+    series: &'static str,
+    shape: &'static str,
+    make: &'static str,
+    units: &'static str,
+    corners: &'static str,
+    wall: &'static str,
+    tokens: Vec<&'static str>,
+}
+
+fn build() -> Catalogue {
+    let mut cat = Catalogue {
+        entries: Vec::new(),
+        series: Vec::new(),
+        index: Index::default(),
+        keys: Vec::new(),
+        problems: Vec::new(),
+    };
+    let mut tokens_of = Vec::new();
+    for (file, text) in FILES {
+        let first = cat.entries.len();
+        match parse_file(file, text, &mut cat.entries, &mut cat.problems) {
+            Some((series, tokens)) => {
+                let mut series = series;
+                series.first = first;
+                series.end = cat.entries.len();
+                for _ in first..cat.entries.len() {
+                    tokens_of.push(tokens.clone());
+                }
+                cat.series.push(series);
+            }
+            None => cat.entries.truncate(first),
+        }
+    }
+    // Canonical keys first, so an alias never shadows a designation.
+    for (i, e) in cat.entries.iter().enumerate() {
+        let key = normalised_string(e.designation);
+        if let Some(&other) = cat.index.get(key.as_str()) {
+            let other = cat.entries.get(other).map_or("?", |o| o.designation);
+            cat.problems.push(format!(
+                "designation \"{}\" ({}) has the same key as \"{other}\"",
+                e.designation, e.series
+            ));
+        } else {
+            cat.index.insert(key.clone().into_boxed_str(), i);
+        }
+        cat.keys.push(key);
+    }
+    for (i, key) in cat.keys.iter().enumerate() {
+        let tokens = tokens_of.get(i).map(Vec::as_slice).unwrap_or(&[]);
+        // The designation exactly as published, for a lookup without
+        // normalising (the usual case: a member file written by the app).
+        let published = cat.entries.get(i).map(|e| e.designation.to_string());
+        for alias in published.into_iter().chain(aliases(key, tokens)) {
+            match cat.index.get(alias.as_str()) {
+                Some(&j) if j != i => {
+                    let a = cat.entries.get(i).map_or("?", |e| e.designation);
+                    let b = cat.entries.get(j).map_or("?", |e| e.designation);
+                    cat.problems.push(format!(
+                        "spelling \"{alias}\" of \"{a}\" is taken by \"{b}\""
+                    ));
+                }
+                Some(_) => {}
+                None => {
+                    cat.index.insert(alias.into_boxed_str(), i);
+                }
+            }
+        }
+    }
+    cat
+}
+
+fn parse_file(
+    file: &'static str,
+    text: &'static str,
+    entries: &mut Vec<Entry>,
+    problems: &mut Vec<String>,
+) -> Option<(Series, Vec<&'static str>)> {
+    let mut source = String::new();
+    let mut d = Directives {
+        series: "",
+        shape: "",
+        make: "",
+        units: "",
+        corners: "",
+        wall: "nominal",
+        tokens: Vec::new(),
+    };
+    let mut header: Option<Vec<&'static str>> = None;
+    for (n, line) in text.lines().enumerate() {
+        let line_no = n + 1;
+        let line = line.trim();
+        if line.is_empty() {
+            continue;
+        }
+        if let Some(comment) = line.strip_prefix('#') {
+            if header.is_none() {
+                if !source.is_empty() {
+                    source.push('\n');
+                }
+                source.push_str(comment.trim());
+            }
+            continue;
+        }
+        if let Some(directive) = line.strip_prefix('@') {
+            let (name, value) = directive.split_once(' ').unwrap_or((directive, ""));
+            let value = value.trim();
+            match name {
+                "series" => d.series = value,
+                "shape" => d.shape = value,
+                "make" => d.make = value,
+                "units" => d.units = value,
+                "corners" => d.corners = value,
+                "wall" => d.wall = value,
+                "tokens" => d.tokens = value.split('|').map(str::trim).collect(),
+                _ => problems.push(format!(
+                    "{file}.csv line {line_no}: unknown directive @{name}"
+                )),
+            }
+            continue;
+        }
+        let cells: Vec<&'static str> = line.split(',').map(str::trim).collect();
+        match &header {
+            None => header = Some(cells),
+            Some(h) => match parse_row(&d, h, &cells) {
+                Ok(entry) => entries.push(entry),
+                Err(why) => problems.push(format!("{file}.csv line {line_no}: {why}")),
+            },
+        }
+    }
+    let family = match d.shape {
+        "i" => Family::I,
+        "rhs" => Family::Rhs,
+        "chs" => Family::Chs,
+        other => {
+            problems.push(format!("{file}.csv: unknown @shape \"{other}\""));
+            return None;
+        }
+    };
+    if d.series.is_empty() {
+        problems.push(format!("{file}.csv: no @series"));
+        return None;
+    }
+    Some((
+        Series {
+            name: d.series,
+            file,
+            family,
+            source,
+            units: d.units,
+            first: 0,
+            end: 0,
+        },
+        d.tokens,
+    ))
+}
+
+fn parse_row(
+    d: &Directives,
+    header: &[&str],
+    cells: &[&'static str],
+) -> std::result::Result<Entry, String> {
+    if cells.len() != header.len() {
+        return Err(format!(
+            "{} cells where the header names {}",
+            cells.len(),
+            header.len()
+        ));
+    }
+    let designation = cells.first().copied().unwrap_or("");
+    if designation.is_empty() {
+        return Err("no designation".into());
+    }
+    let num = |name: &str| -> std::result::Result<f64, String> {
+        let i = header
+            .iter()
+            .position(|h| *h == name)
+            .ok_or_else(|| format!("{designation}: no column {name}"))?;
+        let cell = cells.get(i).copied().unwrap_or("");
+        let v: f64 = cell
+            .parse()
+            .map_err(|_| format!("{designation}: {name} \"{cell}\" is not a number"))?;
+        if v.is_finite() && v > 0.0 {
+            Ok(v)
+        } else {
+            Err(format!("{designation}: {name} must be positive"))
+        }
+    };
+    let has = |name: &str| header.contains(&name);
+    // Scale factors from the file's units to mm, mm2, mm4, kg/m.
+    let (len, area, inertia, mass) = match d.units {
+        "metric" => (1.0, 100.0, 1.0e4, 1.0),
+        "imperial" => (
+            MM_PER_IN,
+            MM_PER_IN * MM_PER_IN,
+            MM_PER_IN.powi(4),
+            KG_M_PER_LB_FT,
+        ),
+        other => return Err(format!("unknown @units \"{other}\"")),
+    };
+    let hollow_make = match d.make {
+        "hot-finished" => HollowMake::HotFinished,
+        "cold-formed" => HollowMake::ColdFormed,
+        _ => HollowMake::HotFinished,
+    };
+    // The wall the section uses, from the nominal wall.
+    let design_wall = |t_nom: f64| -> std::result::Result<(f64, Option<f64>), String> {
+        match d.wall {
+            "nominal" => Ok((t_nom, None)),
+            "aisc-erw" => Ok((AISC_ERW_DESIGN_WALL * t_nom, Some(t_nom))),
+            other => Err(format!("unknown @wall \"{other}\"")),
+        }
+    };
+    let (spec, nominal_wall_mm, i_major, i_minor) = match d.shape {
+        "i" => {
+            let tf = num("tf")?;
+            let r = if has("k_des") {
+                num("k_des")? - tf
+            } else {
+                num("r")?
+            };
+            let spec = SectionSpec::I(IShape {
+                depth_mm: num("h")? * len,
+                width_mm: num("b")? * len,
+                flange_mm: tf * len,
+                web_mm: num("tw")? * len,
+                root_radius_mm: r.max(0.0) * len,
+                make: if d.make == "welded" {
+                    IMake::Welded
+                } else {
+                    IMake::Rolled
+                },
+            });
+            (spec, None, num("I_major")?, num("I_minor")?)
+        }
+        "rhs" => {
+            let t_nom = num("t")? * len;
+            let (t, nominal) = design_wall(t_nom)?;
+            let (outer, inner) = match d.corners {
+                // EN 10210-2: r_o = 1.5 t, r_i = 1.0 t.
+                "en10210" => (1.5 * t, t),
+                // EN 10219-2: r_o = 2 t (t <= 6), 2.5 t (6 < t <= 10), 3 t; r_i = r_o - t.
+                "en10219" => {
+                    let k = if t <= 6.0 {
+                        2.0
+                    } else if t <= 10.0 {
+                        2.5
+                    } else {
+                        3.0
+                    };
+                    (k * t, (k - 1.0) * t)
+                }
+                // AISC Manual: outside radius 2 t_des, so inside t_des.
+                "aisc" => (2.0 * t, t),
+                other => return Err(format!("unknown @corners \"{other}\"")),
+            };
+            let spec = SectionSpec::Rhs(Rhs {
+                depth_mm: num("h")? * len,
+                width_mm: num("b")? * len,
+                wall_mm: t,
+                outer_radius_mm: outer,
+                inner_radius_mm: Some(inner),
+                make: hollow_make,
+            });
+            (spec, nominal, num("I_major")?, num("I_minor")?)
+        }
+        "chs" => {
+            let t_nom = num("t")? * len;
+            let (t, nominal) = design_wall(t_nom)?;
+            let spec = SectionSpec::Chs(Chs {
+                diameter_mm: num("D")? * len,
+                wall_mm: t,
+                make: hollow_make,
+            });
+            let i = num("I")?;
+            (spec, nominal, i, i)
+        }
+        other => return Err(format!("unknown @shape \"{other}\"")),
+    };
+    Ok(Entry {
+        series: d.series,
+        designation,
+        spec,
+        area_mm2: num("A")? * area,
+        i_major_mm4: i_major * inertia,
+        i_minor_mm4: i_minor * inertia,
+        mass_kg_per_m: num("mass")? * mass,
+        nominal_wall_mm,
+    })
 }
 
 /// Finds an entry by designation.
 pub fn resolve(designation: &str) -> Result<&'static Entry> {
+    let cat = catalogue();
+    if let Some(entry) = cat.index.get(designation).and_then(|&i| cat.entries.get(i)) {
+        return Ok(entry);
+    }
+    if let Some(key) = normalise(designation, false) {
+        if let Some(entry) = cat
+            .index
+            .get(key.as_str())
+            .and_then(|&i| cat.entries.get(i))
+        {
+            return Ok(entry);
+        }
+    }
     Err(Error::UnknownDesignation {
         designation: designation.to_string(),
-        suggestions: Vec::new(),
+        suggestions: nearest(designation, 5),
     })
+}
+
+/// Levenshtein distance between two byte strings.
+fn edit_distance(a: &[u8], b: &[u8]) -> usize {
+    let mut prev: Vec<usize> = (0..=b.len()).collect();
+    let mut cur = vec![0; b.len() + 1];
+    for (i, ca) in a.iter().enumerate() {
+        if let Some(c0) = cur.first_mut() {
+            *c0 = i + 1;
+        }
+        for (j, cb) in b.iter().enumerate() {
+            let sub = prev.get(j).copied().unwrap_or(0) + usize::from(ca != cb);
+            let del = prev.get(j + 1).copied().unwrap_or(0) + 1;
+            let ins = cur.get(j).copied().unwrap_or(0) + 1;
+            if let Some(slot) = cur.get_mut(j + 1) {
+                *slot = sub.min(del).min(ins);
+            }
+        }
+        std::mem::swap(&mut prev, &mut cur);
+    }
+    prev.get(b.len()).copied().unwrap_or(0)
+}
+
+/// Up to `n` designations nearest to `designation`, nearest first: the
+/// smallest edit distance between normalised keys over every spelling of
+/// each entry.
+pub fn nearest(designation: &str, n: usize) -> Vec<String> {
+    let cat = catalogue();
+    let query = normalised_string(designation);
+    if query.is_empty() {
+        return Vec::new();
+    }
+    let mut best: Vec<(usize, usize)> = vec![(usize::MAX, usize::MAX); cat.entries.len()];
+    for (key, &i) in &cat.index {
+        let dist = edit_distance(query.as_bytes(), key.as_bytes());
+        if let Some(slot) = best.get_mut(i) {
+            if dist < slot.0 {
+                *slot = (dist, i);
+            }
+        }
+    }
+    best.sort_by_key(|&(dist, i)| (dist, i));
+    best.into_iter()
+        .filter(|&(dist, _)| dist != usize::MAX)
+        .take(n)
+        .filter_map(|(_, i)| cat.entries.get(i).map(|e| e.designation.to_string()))
+        .collect()
+}
+
+/// Every entry, series by series in file order.
+pub fn entries() -> &'static [Entry] {
+    &catalogue().entries
+}
+
+/// Every series.
+pub fn series() -> &'static [Series] {
+    &catalogue().series
+}
+
+/// Problems found while reading the data files (malformed rows, spellings
+/// shared by two entries). Empty for a sound build; a test checks it.
+pub fn problems() -> &'static [String] {
+    &catalogue().problems
+}
+
+/// Finds a series by name, forgivingly: "HE B", "heb", "HEB", "shs-en10210",
+/// "SHS EN 10210" all match.
+pub fn find_series(name: &str) -> Option<&'static Series> {
+    let query = normalised_string(name);
+    if query.is_empty() {
+        return None;
+    }
+    series()
+        .iter()
+        .find(|s| normalised_string(s.name) == query || normalised_string(s.file) == query)
+}
+
+/// Every entry of a shape family, across series.
+pub fn family_entries(family: Family) -> Vec<&'static Entry> {
+    entries()
+        .iter()
+        .filter(|e| e.spec.family() == family)
+        .collect()
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+
+    #[test]
+    fn data_files_read_without_problems() {
+        assert!(problems().is_empty(), "{:#?}", problems());
+        assert_eq!(series().len(), FILES.len());
+        for s in series() {
+            assert!(!s.entries().is_empty(), "{} has no entries", s.name);
+            assert!(s.source.contains("recalled from memory"), "{}", s.name);
+        }
+    }
+
+    #[test]
+    fn normalise_forgives_case_spaces_and_crosses() {
+        let n = |s: &str| normalise(s, false).unwrap().as_str().to_string();
+        assert_eq!(n("HE 200 B"), "HE200B");
+        assert_eq!(n("he200b"), "HE200B");
+        assert_eq!(n("203 × 203 × 46 UC"), "203X203X46UC");
+        assert_eq!(n("SHS 100x100x5.0"), "SHS100X100X5");
+        assert_eq!(n("100*100*6,30 SHS"), "100X100X6.3SHS");
+        assert_eq!(n("HSS6.625X0.500"), "HSS6.625X0.5");
+        assert_eq!(n("HSS6x6x1/4"), "HSS6X6X1/4");
+        assert_eq!(n("CHS 168.30 x 8.00"), "CHS168.3X8");
+        assert_eq!(n("CHS 10.05x2"), "CHS10.05X2");
+        assert!(normalise("HE 200 B ☃", false).is_none());
+        assert!(normalise(&"9".repeat(KEY_CAPACITY + 1), false).is_none());
+    }
+
+    #[test]
+    fn resolve_accepts_the_usual_spellings() {
+        let d = |s: &str| resolve(s).unwrap().designation;
+        for s in ["HE 200 B", "HEB200", "HE200B", "heb 200", "HE-200-B"] {
+            assert_eq!(d(s), "HE 200 B", "{s}");
+        }
+        for s in [
+            "203x203x46UC",
+            "UC 203x203x46",
+            "203 X 203 X 46 uc",
+            "203×203×46 UC",
+        ] {
+            assert_eq!(d(s), "203x203x46 UC", "{s}");
+        }
+        assert_eq!(d("W10X49"), "W10x49");
+        assert_eq!(d("w 14 x 730"), "W14x730");
+        assert_eq!(d("SHS 100x100x5"), "SHS 100x100x5");
+        assert_eq!(d("100x100x5 SHS"), "SHS 100x100x5");
+        assert_eq!(d("100x100x5.0 SHS"), "SHS 100x100x5");
+        assert_eq!(d("SHS 100x100x5 EN 10210"), "SHS 100x100x5");
+        assert_eq!(d("SHS 100x100x5 EN 10219"), "SHS 100x100x5 CF");
+        assert_eq!(d("CF SHS 100x100x5"), "SHS 100x100x5 CF");
+        assert_eq!(d("HSS6x6x1/4"), "HSS6x6x1/4");
+        assert_eq!(d("HSS 6 x 6 x 1/4"), "HSS6x6x1/4");
+        assert_eq!(d("HSS16.000x0.500"), "HSS16.000x0.500");
+        assert_eq!(d("HSS16x0.5"), "HSS16.000x0.500");
+        assert_eq!(d("CHS 168.3x8.0"), "CHS 168.3x8");
+        assert_eq!(d("IPE 300"), "IPE 300");
+        assert_eq!(d("ipe300"), "IPE 300");
+    }
+
+    #[test]
+    fn unknown_designation_suggests_nearest() {
+        match resolve("HE 210 B") {
+            Err(Error::UnknownDesignation {
+                designation,
+                suggestions,
+            }) => {
+                assert_eq!(designation, "HE 210 B");
+                assert!(!suggestions.is_empty() && suggestions.len() <= 5);
+                assert!(
+                    suggestions
+                        .iter()
+                        .any(|s| s == "HE 200 B" || s == "HE 220 B"),
+                    "{suggestions:?}"
+                );
+            }
+            other => panic!("expected UnknownDesignation, got {other:?}"),
+        }
+        match resolve("") {
+            Err(Error::UnknownDesignation { suggestions, .. }) => assert!(suggestions.is_empty()),
+            other => panic!("{other:?}"),
+        }
+    }
+
+    #[test]
+    fn units_are_converted_to_mm() {
+        let w = resolve("W14x90").unwrap();
+        // 26.5 in2 = 26.5 * 645.16 mm2.
+        assert!((w.area_mm2 - 26.5 * 645.16).abs() < 1e-6);
+        // 90 lb/ft = 133.9 kg/m.
+        assert!((w.mass_kg_per_m - 133.93).abs() < 0.01);
+        match &w.spec {
+            SectionSpec::I(s) => {
+                assert!((s.depth_mm - 355.6).abs() < 1e-9);
+                assert!((s.root_radius_mm - 0.60 * 25.4).abs() < 1e-9);
+            }
+            other => panic!("{other:?}"),
+        }
+        let hss = resolve("HSS6x6x1/4").unwrap();
+        assert_eq!(hss.nominal_wall_mm, Some(6.35));
+        match &hss.spec {
+            SectionSpec::Rhs(s) => {
+                assert!((s.wall_mm - 0.93 * 6.35).abs() < 1e-9);
+                assert!((s.outer_radius_mm - 2.0 * 0.93 * 6.35).abs() < 1e-9);
+            }
+            other => panic!("{other:?}"),
+        }
+        let cf = resolve("SHS 200x200x8 CF").unwrap();
+        match &cf.spec {
+            SectionSpec::Rhs(s) => {
+                assert_eq!(s.outer_radius_mm, 20.0);
+                assert_eq!(s.inner_radius_mm, Some(12.0));
+            }
+            other => panic!("{other:?}"),
+        }
+    }
+
+    #[test]
+    fn series_match_forgivingly() {
+        assert_eq!(find_series("HE B").unwrap().name, "HE B");
+        assert_eq!(find_series("heb").unwrap().name, "HE B");
+        assert_eq!(find_series("shs-en10210").unwrap().name, "SHS EN 10210");
+        assert_eq!(find_series("SHS EN 10219").unwrap().name, "SHS EN 10219");
+        assert!(find_series("HE Q").is_none());
+        assert!(find_series("").is_none());
+    }
+
+    #[test]
+    fn edit_distance_is_levenshtein() {
+        assert_eq!(edit_distance(b"kitten", b"sitting"), 3);
+        assert_eq!(edit_distance(b"", b"abc"), 3);
+        assert_eq!(edit_distance(b"HE200B", b"HE200B"), 0);
+    }
 }

@@ -22,6 +22,7 @@ pub mod material;
 pub mod member;
 pub mod method;
 pub mod section;
+pub mod sizing;
 pub mod solve;
 pub mod stability;
 pub mod trace;

@@ -1,6 +1,199 @@
-//! PLACEHOLDER for the `size` subcommand until its module lands.
+//! `strutline size FILE --series NAME [--family i|rhs|chs] [--limit U]
+//! [--json]`: for every member of a member file, the lightest section of
+//! the series whose utilisation with the member's own method is at most
+//! the limit (default 1.0), and the next lighter section with why it fails.
+//!
+//! Exit status 0 when every member was sized (whether or not a section
+//! was found); 2 for a file that cannot be read or a wrong command line.
 
-/// Runs the subcommand.
-pub fn run(_args: &[String]) -> Result<i32, String> {
-    Err("the size command is not available in this build yet".into())
+use serde_json::{json, Value};
+
+use crate::sections::put;
+use strutline_core::sizing::{Refusal, Rejected, Sizer, SizingResult};
+
+const USAGE: &str =
+    "usage: strutline size FILE --series NAME [--family i|rhs|chs] [--limit U] [--json]";
+
+fn rejected_json(r: &Rejected<'_>) -> Value {
+    match &r.why {
+        Refusal::Exceeds {
+            utilisation,
+            governing,
+        } => json!({
+            "designation": r.entry.designation,
+            "mass_kg_per_m": r.entry.mass_kg_per_m,
+            "utilisation": utilisation,
+            "governing": governing.key(),
+        }),
+        Refusal::Error(e) => json!({
+            "designation": r.entry.designation,
+            "mass_kg_per_m": r.entry.mass_kg_per_m,
+            "error": e.to_string(),
+        }),
+    }
+}
+
+fn result_json(r: &SizingResult<'_>) -> Value {
+    let mut v = json!({
+        "id": r.member_id,
+        "checked": r.checked,
+        "designation": Value::Null,
+        "next_lighter": r.next_lighter.as_ref().map_or(Value::Null, rejected_json),
+    });
+    if let Some(c) = &r.chosen {
+        put(&mut v, "designation", json!(c.entry.designation));
+        put(&mut v, "mass_kg_per_m", json!(c.entry.mass_kg_per_m));
+        put(&mut v, "utilisation", json!(c.utilisation));
+        put(&mut v, "governing", json!(c.governing.key()));
+    }
+    if let Some(p) = &r.problem {
+        put(&mut v, "problem", json!(p.to_string()));
+    }
+    v
+}
+
+fn why(r: &Rejected<'_>) -> String {
+    match &r.why {
+        Refusal::Exceeds {
+            utilisation,
+            governing,
+        } => format!(
+            "{} ({:.1} kg/m) at {utilisation:.3}, {}",
+            r.entry.designation,
+            r.entry.mass_kg_per_m,
+            governing.key()
+        ),
+        Refusal::Error(e) => format!("{} refused: {e}", r.entry.designation),
+    }
+}
+
+fn table(results: &[SizingResult<'_>]) -> String {
+    let id_w = results
+        .iter()
+        .map(|r| r.member_id.chars().count())
+        .max()
+        .unwrap_or(0)
+        .max("member".len());
+    let name_w = results
+        .iter()
+        .filter_map(|r| r.chosen.as_ref().map(|c| c.entry.designation.len()))
+        .max()
+        .unwrap_or(0)
+        .max("proposal".len());
+    let mut out = format!(
+        "{:<id_w$}  {:<name_w$}  {:>7}  {:>11}  {:<18}  next lighter\n",
+        "member", "proposal", "kg/m", "utilisation", "governing"
+    );
+    for r in results {
+        if let Some(p) = &r.problem {
+            out.push_str(&format!("{:<id_w$}  not sized: {p}\n", r.member_id));
+            continue;
+        }
+        let next = r.next_lighter.as_ref().map_or_else(|| "-".to_string(), why);
+        match &r.chosen {
+            Some(c) => out.push_str(&format!(
+                "{:<id_w$}  {:<name_w$}  {:>7.1}  {:>11.3}  {:<18}  {next}\n",
+                r.member_id,
+                c.entry.designation,
+                c.entry.mass_kg_per_m,
+                c.utilisation,
+                c.governing.key()
+            )),
+            None => out.push_str(&format!(
+                "{:<id_w$}  {:<name_w$}  {:>7}  {:>11}  {:<18}  heaviest: {next}\n",
+                r.member_id, "none", "-", "-", "-"
+            )),
+        }
+    }
+    out
+}
+
+/// Runs the subcommand with the arguments after `size`.
+pub fn run(args: &[String]) -> Result<i32, String> {
+    let mut path: Option<&str> = None;
+    let mut series: Option<&str> = None;
+    let mut family: Option<&str> = None;
+    let mut limit = 1.0;
+    let mut json_out = false;
+    let mut it = args.iter();
+    while let Some(a) = it.next() {
+        match a.as_str() {
+            "--series" => {
+                series = Some(
+                    it.next()
+                        .ok_or_else(|| format!("--series needs a name; {USAGE}"))?,
+                )
+            }
+            "--family" => {
+                family = Some(
+                    it.next()
+                        .ok_or_else(|| format!("--family needs i, rhs or chs; {USAGE}"))?,
+                )
+            }
+            "--limit" => {
+                let v = it
+                    .next()
+                    .ok_or_else(|| format!("--limit needs a number such as 0.9; {USAGE}"))?;
+                limit = v
+                    .parse::<f64>()
+                    .ok()
+                    .filter(|u| u.is_finite() && *u > 0.0)
+                    .ok_or_else(|| {
+                        format!("--limit: \"{v}\" is not a utilisation limit greater than 0, such as 0.9")
+                    })?;
+            }
+            "--json" => json_out = true,
+            "--help" | "-h" => {
+                println!("{USAGE}\nknown series: {}", crate::sections::known_series());
+                return Ok(0);
+            }
+            other if other.starts_with("--") => {
+                return Err(format!("size: unknown option \"{other}\"; {USAGE}"))
+            }
+            other => {
+                if path.is_some() {
+                    return Err(format!("size: one member file only; {USAGE}"));
+                }
+                path = Some(other);
+            }
+        }
+    }
+    let path = path.ok_or_else(|| format!("size: no member file; {USAGE}"))?;
+    if series.is_none() && family.is_none() {
+        return Err(format!(
+            "size: name the candidates with --series NAME (or --family i|rhs|chs); known series: {}",
+            crate::sections::known_series()
+        ));
+    }
+    let selection = match crate::sections::select(series, family) {
+        Ok(s) => s,
+        Err(message) => {
+            eprintln!("strutline: {message}");
+            return Ok(2);
+        }
+    };
+    let file = crate::read_members(path)?;
+    let sizer = Sizer::new(&selection.entries);
+    let results = sizer.size_all(&file.members, limit);
+    if json_out {
+        let doc = json!({
+            "series": selection.label,
+            "limit": limit,
+            "candidates": sizer.len(),
+            "proposals": results.iter().map(result_json).collect::<Vec<_>>(),
+        });
+        let mut text = serde_json::to_string_pretty(&doc).map_err(|e| e.to_string())?;
+        text.push('\n');
+        crate::sections::emit(&text)?;
+    } else {
+        let text = format!(
+            "{} members against {} ({} sections), utilisation limit {limit}\n{}",
+            results.len(),
+            selection.label,
+            sizer.len(),
+            table(&results)
+        );
+        crate::sections::emit(&text)?;
+    }
+    Ok(0)
 }

@@ -1,0 +1,92 @@
+//! Throughput of sizing: 1,000 members, each sized against the same
+//! 300 catalogue sections (every I/H entry, 248, and the first 52 square
+//! hollow entries), lightest first until one passes, with the members' own
+//! methods. Each iteration sorts and builds the candidates and sizes the
+//! whole list; and the designation lookup. Run with `cargo bench -p strutline-core --bench sizing`.
+
+#![allow(clippy::panic, clippy::indexing_slicing)]
+
+use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
+use strutline_core::catalogue::{self, Entry};
+use strutline_core::member::Member;
+use strutline_core::section::Family;
+use strutline_core::sizing::Sizer;
+
+/// Members in the list.
+pub const MEMBERS: usize = 1_000;
+/// Candidate sections.
+pub const CANDIDATES: usize = 300;
+
+fn candidates() -> Vec<&'static Entry> {
+    let mut c = catalogue::family_entries(Family::I);
+    c.extend(catalogue::family_entries(Family::Rhs));
+    c.truncate(CANDIDATES);
+    c
+}
+
+fn members() -> Vec<Member> {
+    let methods = ["en1993-1-1", "aisc360-lrfd", "csa-s16", "euler"];
+    (0..MEMBERS)
+        .map(|i| {
+            let text = format!(
+                r#"{{"id": "C{i}", "section": {{"kind": "catalogue", "designation": "HE 200 B"}},
+                    "material": {{"grade": "{}"}}, "length_mm": {}, "axial_kn": {},
+                    "method": "{}"}}"#,
+                if i % 2 == 0 { "S355" } else { "S275" },
+                2000.0 + 500.0 * (i % 13) as f64,
+                100.0 + 37.0 * (i % 97) as f64,
+                methods[i % methods.len()]
+            );
+            serde_json::from_str(&text).unwrap_or_else(|e| panic!("bench member {i}: {e}"))
+        })
+        .collect()
+}
+
+fn bench(c: &mut Criterion) {
+    let cands = candidates();
+    assert_eq!(cands.len(), CANDIDATES);
+    let list = members();
+    let checked: usize = Sizer::new(&cands)
+        .size_all(&list, 0.9)
+        .iter()
+        .map(|r| r.checked)
+        .sum();
+    println!(
+        "sizing bench: {MEMBERS} members x {CANDIDATES} candidates, {checked} checks in all ({:.1} per member)",
+        checked as f64 / MEMBERS as f64
+    );
+    let mut group = c.benchmark_group("sizing");
+    group.throughput(Throughput::Elements(MEMBERS as u64));
+    group.sample_size(20);
+    group.bench_function("1000 members x 300 sections", |b| {
+        b.iter(|| {
+            let sizer = Sizer::new(black_box(&cands));
+            black_box(sizer.size_all(black_box(&list), 0.9))
+        })
+    });
+    group.finish();
+
+    // The designation lookup on the check's hot path: normalise into a
+    // stack buffer, one hash-map probe.
+    let names = [
+        "HE 200 B",
+        "HEB200",
+        "203x203x46 UC",
+        "W14x90",
+        "SHS 100x100x5",
+        "HSS6x6x1/4",
+    ];
+    let mut group = c.benchmark_group("catalogue");
+    group.throughput(Throughput::Elements(names.len() as u64));
+    group.bench_function("resolve 6 designations", |b| {
+        b.iter(|| {
+            for n in names {
+                let _ = black_box(catalogue::resolve(black_box(n)));
+            }
+        })
+    });
+    group.finish();
+}
+
+criterion_group!(benches, bench);
+criterion_main!(benches);
