@@ -1816,7 +1816,7 @@ mod tests {
         let got = parse_csv(&many);
         assert!(got.members.is_empty());
         assert!(
-            got.problems[0].message.contains("more than 100000 rows"),
+            got.problems[0].message.contains("more than 10000 rows"),
             "{:?}",
             got.problems[0]
         );
