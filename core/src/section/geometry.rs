@@ -21,7 +21,9 @@
 //! line (a quarter disc cut by a chord has closed-form area and first
 //! moment). For lines at any angle (angle sections about their principal
 //! axes) [`Poly`] integrates over a polygon of the outline, clipped by a
-//! half-plane with Green's theorem.
+//! half-plane with Green's theorem. The equal-area line is found by a
+//! safeguarded Newton iteration whose derivative is the width of the
+//! section along the line.
 
 use std::f64::consts::PI;
 
@@ -107,19 +109,31 @@ fn quarter_disc_below(cz: f64, r: f64, qz: f64, c: f64) -> (f64, f64) {
     if r <= 0.0 {
         return (0.0, 0.0);
     }
-    // Local coordinate t = qz (z - cz) in [0, r]; the width at t is sqrt(r² - t²).
-    let (lo, hi) = if qz > 0.0 {
-        (0.0, (c - cz).clamp(0.0, r))
+    // Local coordinate t = qz (z - cz) in [0, r], width sqrt(r² - t²):
+    // from 0 to x, area = (x s + r² asin(x/r))/2 and ∫t dA = (r³ - s³)/3
+    // with s = sqrt(r² - x²). The trigonometry runs only when the line
+    // actually cuts the disc.
+    let full_a = PI * r * r / 4.0;
+    let full_m = r * r * r / 3.0;
+    let part = |x: f64| -> (f64, f64) {
+        if x <= 0.0 {
+            (0.0, 0.0)
+        } else if x >= r {
+            (full_a, full_m)
+        } else {
+            let s = (r * r - x * x).sqrt();
+            (
+                0.5 * (x * s + r * r * (x / r).asin()),
+                (r * r * r - s * s * s) / 3.0,
+            )
+        }
+    };
+    let (a, m) = if qz > 0.0 {
+        part(c - cz)
     } else {
-        ((cz - c).clamp(0.0, r), r)
+        let (a0, m0) = part(cz - c);
+        (full_a - a0, full_m - m0)
     };
-    let area_to = |t: f64| {
-        let s = (r * r - t * t).max(0.0).sqrt();
-        0.5 * (t * s + r * r * (t / r).clamp(-1.0, 1.0).asin())
-    };
-    let moment_to = |t: f64| -(r * r - t * t).max(0.0).powf(1.5) / 3.0;
-    let a = area_to(hi) - area_to(lo);
-    let m = moment_to(hi) - moment_to(lo);
     (a, cz * a + qz * m)
 }
 
@@ -159,6 +173,20 @@ impl Prim {
         }
     }
 
+    /// Area and ∫z dA (cheaper than [`Prim::moments`]).
+    pub fn area_and_first(&self) -> (f64, f64) {
+        match *self {
+            Prim::Rect { y0, y1, z0, z1 } => {
+                let a = (y1 - y0) * (z1 - z0);
+                (a, a * 0.5 * (z0 + z1))
+            }
+            Prim::QuarterDisc { cz, r, qz, .. } => {
+                let a = PI * r * r / 4.0;
+                (a, cz * a + qz * r * r * r / 3.0)
+            }
+        }
+    }
+
     /// The same primitive with y and z exchanged.
     pub fn swapped(&self) -> Prim {
         match *self {
@@ -187,6 +215,27 @@ impl Prim {
                 (a, a * 0.5 * (z0 + top))
             }
             Prim::QuarterDisc { cz, r, qz, .. } => quarter_disc_below(cz, r, qz, c),
+        }
+    }
+
+    /// Width of the primitive along the line z = c.
+    pub fn width_at(&self, c: f64) -> f64 {
+        match *self {
+            Prim::Rect { y0, y1, z0, z1 } => {
+                if c > z0 && c < z1 {
+                    y1 - y0
+                } else {
+                    0.0
+                }
+            }
+            Prim::QuarterDisc { cz, r, qz, .. } => {
+                let t = qz * (c - cz);
+                if t > 0.0 && t < r {
+                    (r * r - t * t).sqrt()
+                } else {
+                    0.0
+                }
+            }
         }
     }
 
@@ -308,9 +357,9 @@ impl Parts {
         self.iter()
             .map(|(p, s)| {
                 let q = Self::oriented(p, axis);
-                let m = q.moments();
+                let (a, first) = q.area_and_first();
                 let (ab, qb) = q.below(c);
-                let above = (m.sz - qb) - c * (m.a - ab);
+                let above = (first - qb) - c * (a - ab);
                 let below = c * ab - qb;
                 s * (above + below)
             })
@@ -326,66 +375,83 @@ impl Parts {
             })
     }
 
+    /// Net area on the low side of the line and the net width along it.
+    fn area_below_and_width(&self, axis: Axis, c: f64) -> (f64, f64) {
+        self.iter().fold((0.0, 0.0), |(a, w), (p, s)| {
+            let q = Self::oriented(p, axis);
+            (a + s * q.below(c).0, w + s * q.width_at(c))
+        })
+    }
+
     /// Plastic modulus for bending about `axis`: ∫|d| dA about the
     /// equal-area line. `symmetric_at` gives the line when the section is
-    /// symmetric about it (no search).
+    /// symmetric about it (no search); otherwise Newton's method on the
+    /// area below the line (whose derivative is the width along it),
+    /// safeguarded by bisection, starting from the centroid.
     pub fn plastic_modulus(&self, axis: Axis, symmetric_at: Option<f64>) -> f64 {
         let c = match symmetric_at {
             Some(c) => c,
             None => {
-                let half = 0.5 * self.moments().a;
+                let m = self.moments();
+                let half = 0.5 * m.a;
                 let (lo, hi) = self.range(axis);
-                find_root(|c| self.area_below(axis, c) - half, lo, hi, 1e-12 * half)
+                let start = match axis {
+                    Axis::Y => m.sz / m.a,
+                    Axis::Z => m.sy / m.a,
+                };
+                solve_increasing(
+                    |c| {
+                        let (a, w) = self.area_below_and_width(axis, c);
+                        (a - half, w)
+                    },
+                    lo,
+                    hi,
+                    start,
+                    1e-12 * half,
+                )
             }
         };
         self.abs_moment(axis, c)
     }
 }
 
-/// Root of a monotone function on [a, b] by the Illinois variant of
-/// regula falsi (bracketing, superlinear). Returns when |f| <= `ftol` or
-/// the bracket has collapsed.
-pub fn find_root<F: Fn(f64) -> f64>(f: F, mut a: f64, mut b: f64, ftol: f64) -> f64 {
-    let mut fa = f(a);
-    let mut fb = f(b);
-    if fa.abs() <= ftol {
-        return a;
-    }
-    if fb.abs() <= ftol {
-        return b;
-    }
-    if fa.signum() == fb.signum() {
-        return 0.5 * (a + b);
-    }
-    let width = (b - a).abs();
-    let mut side = 0i8;
-    let mut c = 0.5 * (a + b);
+/// Root of an increasing function f on [lo, hi] (f(lo) <= 0 <= f(hi)),
+/// given f and its derivative: Newton steps from `start`, replaced by
+/// bisection whenever a step would leave the shrinking bracket. Returns
+/// when |f| <= `ftol` or the bracket has collapsed.
+pub fn solve_increasing<F: Fn(f64) -> (f64, f64)>(
+    f: F,
+    mut lo: f64,
+    mut hi: f64,
+    start: f64,
+    ftol: f64,
+) -> f64 {
+    let mut x = if start.is_finite() {
+        start.clamp(lo, hi)
+    } else {
+        0.5 * (lo + hi)
+    };
     for _ in 0..200 {
-        c = (a * fb - b * fa) / (fb - fa);
-        if !c.is_finite() {
-            c = 0.5 * (a + b);
+        let (fx, dfx) = f(x);
+        if fx.abs() <= ftol {
+            return x;
         }
-        let fc = f(c);
-        if fc.abs() <= ftol || (b - a).abs() <= 1e-14 * width {
-            return c;
-        }
-        if fc.signum() == fb.signum() {
-            b = c;
-            fb = fc;
-            if side == -1 {
-                fa *= 0.5;
-            }
-            side = -1;
+        if fx < 0.0 {
+            lo = x;
         } else {
-            a = c;
-            fa = fc;
-            if side == 1 {
-                fb *= 0.5;
-            }
-            side = 1;
+            hi = x;
         }
+        if hi - lo <= 1e-14 * (hi.abs() + lo.abs()) {
+            return x;
+        }
+        let newton = x - fx / dfx;
+        x = if dfx > 0.0 && newton > lo && newton < hi {
+            newton
+        } else {
+            0.5 * (lo + hi)
+        };
     }
-    c
+    x
 }
 
 const POLY: usize = 64;
@@ -436,10 +502,60 @@ impl Poly {
             return;
         }
         let segs = segs.max(1);
-        for i in 0..=segs {
-            let a = a0 + (a1 - a0) * i as f64 / segs as f64;
-            self.push(cy + r * a.cos(), cz + r * a.sin());
+        if let Some(()) = self.quarter_arc(cy, cz, r, a0, a1, segs) {
+            return;
         }
+        // Rotate the radius vector step by step: two sin_cos per arc.
+        let (ds, dc) = ((a1 - a0) / segs as f64).sin_cos();
+        let (mut s, mut c) = a0.sin_cos();
+        for _ in 0..=segs {
+            self.push(cy + r * c, cz + r * s);
+            (c, s) = (c * dc - s * ds, s * dc + c * ds);
+        }
+    }
+
+    /// A quarter arc from a multiple of π/2 in 8 chords, from a table of
+    /// cos(kπ/16) (exact end points, no trigonometry); `None` for any
+    /// other arc.
+    fn quarter_arc(
+        &mut self,
+        cy: f64,
+        cz: f64,
+        r: f64,
+        a0: f64,
+        a1: f64,
+        segs: usize,
+    ) -> Option<()> {
+        const COS: [f64; 9] = [
+            1.0,
+            0.980_785_280_403_230_4,
+            0.923_879_532_511_286_7,
+            0.831_469_612_302_545_2,
+            std::f64::consts::FRAC_1_SQRT_2,
+            0.555_570_233_019_602_2,
+            0.382_683_432_365_089_8,
+            0.195_090_322_016_128_25,
+            0.0,
+        ];
+        let q = a0 / (0.5 * PI);
+        let sweep = (a1 - a0) / (0.5 * PI);
+        if segs != 8 || (q - q.round()).abs() > 1e-12 || ((sweep.abs() - 1.0).abs() > 1e-12) {
+            return None;
+        }
+        let dir = sweep.signum();
+        let quadrant = (q.round() as i64).rem_euclid(4);
+        for k in 0..=8usize {
+            let c = *COS.get(k)?;
+            let s = dir * *COS.get(8 - k)?;
+            let (x, y) = match quadrant {
+                0 => (c, s),
+                1 => (-s, c),
+                2 => (-c, -s),
+                _ => (s, -c),
+            };
+            self.push(cy + r * x, cz + r * y);
+        }
+        Some(())
     }
 
     /// The vertices.
@@ -477,43 +593,25 @@ impl Poly {
             .sum::<f64>()
     }
 
+    /// The vertices in rotated coordinates (s, t) = (y cosθ + z sinθ,
+    /// -y sinθ + z cosθ): s along the direction θ, t normal to it.
+    fn rotated(&self, sin: f64, cos: f64) -> ([(f64, f64); POLY], usize) {
+        let mut st = [(0.0, 0.0); POLY];
+        for (o, (y, z)) in st.iter_mut().zip(self.points()) {
+            *o = (y * cos + z * sin, -y * sin + z * cos);
+        }
+        (st, self.n)
+    }
+
     /// For the line t = c, with t = -y sinθ + z cosθ the distance normal
     /// to the direction θ: (area where t >= c, ∫(t - c) dA there, area
     /// where t <= c, ∫(t - c) dA there). Green's theorem over the edges
     /// clipped to each side; the closing pieces along the line contribute
     /// nothing because t - c vanishes on it.
     pub fn split(&self, sin: f64, cos: f64, c: f64) -> (f64, f64, f64, f64) {
-        let (mut a_hi, mut m_hi, mut a_lo, mut m_lo) = (0.0, 0.0, 0.0, 0.0);
-        // Integrals of -t ds and -t²/2 ds along a straight piece.
-        let piece = |sa: f64, ta: f64, sb: f64, tb: f64| {
-            let ds = sb - sa;
-            (
-                -0.5 * (ta + tb) * ds,
-                -ds * (ta * ta + ta * tb + tb * tb) / 6.0,
-            )
-        };
-        for ((y0, z0), (y1, z1)) in self.edges() {
-            let (s0, t0) = (y0 * cos + z0 * sin, -y0 * sin + z0 * cos - c);
-            let (s1, t1) = (y1 * cos + z1 * sin, -y1 * sin + z1 * cos - c);
-            let mut add = |hi: bool, (a, m): (f64, f64)| {
-                if hi {
-                    a_hi += a;
-                    m_hi += m;
-                } else {
-                    a_lo += a;
-                    m_lo += m;
-                }
-            };
-            if (t0 >= 0.0) == (t1 >= 0.0) {
-                add(t0 >= 0.0, piece(s0, t0, s1, t1));
-            } else {
-                let lam = t0 / (t0 - t1);
-                let sx = s0 + lam * (s1 - s0);
-                add(t0 >= 0.0, piece(s0, t0, sx, 0.0));
-                add(t1 >= 0.0, piece(sx, 0.0, s1, t1));
-            }
-        }
-        (a_hi, m_hi, a_lo, m_lo)
+        let (st, n) = self.rotated(sin, cos);
+        let s = split_rotated(st.get(..n).unwrap_or(&[]), c);
+        (s.0, s.1, s.2, s.3)
     }
 
     /// Range of t = -y sinθ + z cosθ over the vertices.
@@ -526,21 +624,107 @@ impl Poly {
             })
     }
 
-    /// Plastic modulus for bending about an axis at angle θ (the
-    /// equal-area line parallel to it is found by [`find_root`]).
-    pub fn plastic_modulus(&self, theta: f64) -> f64 {
+    /// Bending about an axis through the origin at angle θ: (plastic
+    /// modulus, largest distance of a vertex from the axis). The
+    /// equal-area line parallel to the axis is found by
+    /// [`solve_increasing`] starting at the origin (put the centroid
+    /// there); `area` is the polygon's own area.
+    pub fn bending(&self, theta: f64, area: f64) -> (f64, f64) {
         let (sin, cos) = theta.sin_cos();
-        let half = 0.5 * self.area();
-        let (lo, hi) = self.t_range(sin, cos);
-        let c = find_root(
-            |c| self.split(sin, cos, c).0 - half,
+        let (st, n) = self.rotated(sin, cos);
+        let st = st.get(..n).unwrap_or(&[]);
+        let half = 0.5 * area;
+        let (lo, hi) = st
+            .iter()
+            .fold((f64::INFINITY, f64::NEG_INFINITY), |(lo, hi), &(_, t)| {
+                (lo.min(t), hi.max(t))
+            });
+        // The modulus is stationary at the equal-area line, so a line
+        // 1e-10 A off changes it by far less than that.
+        let c = solve_increasing(
+            |c| {
+                let (a_hi, chord) = area_above_and_chord(st, c);
+                (half - a_hi, chord)
+            },
             lo,
             hi,
-            1e-12 * half.abs(),
+            0.0,
+            1e-10 * half.abs(),
         );
-        let (_, m_hi, _, m_lo) = self.split(sin, cos, c);
-        m_hi - m_lo
+        let (_, m_hi, _, m_lo, _) = split_rotated(st, c);
+        (m_hi - m_lo, lo.abs().max(hi.abs()))
     }
+
+    /// Plastic modulus for bending about an axis through the origin at angle θ.
+    pub fn plastic_modulus(&self, theta: f64) -> f64 {
+        self.bending(theta, self.area()).0
+    }
+}
+
+/// The edges of a closed polygon as pairs of consecutive vertices.
+fn closed_edges(st: &[(f64, f64)]) -> impl Iterator<Item = (&(f64, f64), &(f64, f64))> {
+    st.iter().zip(st.iter().skip(1).chain(st.first()))
+}
+
+/// Area at t >= c and the chord length along t = c (the cheap part of
+/// [`split_rotated`], for the root search).
+fn area_above_and_chord(st: &[(f64, f64)], c: f64) -> (f64, f64) {
+    let (mut a_hi, mut chord) = (0.0, 0.0);
+    for (&(s0, t0), &(s1, t1)) in closed_edges(st) {
+        let (t0, t1) = (t0 - c, t1 - c);
+        match (t0 >= 0.0, t1 >= 0.0) {
+            (true, true) => a_hi -= 0.5 * (t0 + t1) * (s1 - s0),
+            (false, false) => {}
+            (up0, _) => {
+                let sx = s0 + t0 / (t0 - t1) * (s1 - s0);
+                if up0 {
+                    a_hi -= 0.5 * t0 * (sx - s0);
+                    chord -= sx;
+                } else {
+                    a_hi -= 0.5 * t1 * (s1 - sx);
+                    chord += sx;
+                }
+            }
+        }
+    }
+    (a_hi, chord)
+}
+
+/// [`Poly::split`] on rotated vertices, plus the chord length along the line.
+fn split_rotated(st: &[(f64, f64)], c: f64) -> (f64, f64, f64, f64, f64) {
+    let (mut a_hi, mut m_hi, mut a_lo, mut m_lo, mut chord) = (0.0, 0.0, 0.0, 0.0, 0.0);
+    // Integrals of -t ds and -t²/2 ds along a straight piece.
+    let piece = |sa: f64, ta: f64, sb: f64, tb: f64| {
+        let ds = sb - sa;
+        (
+            -0.5 * (ta + tb) * ds,
+            -ds * (ta * ta + ta * tb + tb * tb) / 6.0,
+        )
+    };
+    for (&(s0, t0), &(s1, t1)) in closed_edges(st) {
+        let (t0, t1) = (t0 - c, t1 - c);
+        let mut add = |hi: bool, (a, m): (f64, f64)| {
+            if hi {
+                a_hi += a;
+                m_hi += m;
+            } else {
+                a_lo += a;
+                m_lo += m;
+            }
+        };
+        if (t0 >= 0.0) == (t1 >= 0.0) {
+            add(t0 >= 0.0, piece(s0, t0, s1, t1));
+        } else {
+            let lam = t0 / (t0 - t1);
+            let sx = s0 + lam * (s1 - s0);
+            add(t0 >= 0.0, piece(s0, t0, sx, 0.0));
+            add(t1 >= 0.0, piece(sx, 0.0, s1, t1));
+            // Counter-clockwise: the boundary crosses upwards on the
+            // right end of each chord and downwards on its left end.
+            chord += if t1 >= 0.0 { sx } else { -sx };
+        }
+    }
+    (a_hi, m_hi, a_lo, m_lo, chord)
 }
 
 #[cfg(test)]
@@ -667,12 +851,77 @@ mod tests {
     }
 
     #[test]
-    fn root_finder_on_a_line_and_a_curve() {
-        close(find_root(|x| 3.0 - x, 0.0, 10.0, 1e-14), 3.0, 1e-12);
+    fn safeguarded_newton_on_a_line_a_curve_and_a_bad_start() {
         close(
-            find_root(|x| x * x * x - 2.0, 0.0, 2.0, 1e-14),
+            solve_increasing(|x| (x - 3.0, 1.0), 0.0, 10.0, 9.0, 1e-14),
+            3.0,
+            1e-12,
+        );
+        close(
+            solve_increasing(|x| (x * x * x - 2.0, 3.0 * x * x), 0.0, 2.0, 0.0, 1e-14),
             2f64.cbrt(),
             1e-10,
         );
+        // A zero derivative at the start falls back to bisection.
+        close(
+            solve_increasing(|x| (x.powi(3), 3.0 * x * x), -1.0, 3.0, 1e-300, 1e-14),
+            0.0,
+            1e-4,
+        );
+    }
+
+    #[test]
+    fn cheap_area_and_chord_agree_with_split() {
+        let mut p = Poly::new();
+        p.push(0.0, 0.0);
+        p.push(5.0, 0.0);
+        p.arc(5.0, 3.0, 2.0, -0.5 * PI, 0.5 * PI, 8);
+        p.push(1.0, 5.0);
+        p.arc(1.0, 3.0, 1.0, 0.5 * PI, 1.5 * PI, 8);
+        p.push(0.0, 2.0);
+        for theta in [0.0f64, 0.3, 1.2, 2.5] {
+            let (st, n) = p.rotated(theta.sin(), theta.cos());
+            for c in [-3.0, -0.5, 0.7, 2.2, 4.0] {
+                let full = split_rotated(&st[..n], c);
+                let cheap = area_above_and_chord(&st[..n], c);
+                close(cheap.0, full.0, 1e-12);
+                close(cheap.1, full.4, 1e-12);
+                close(full.0 + full.2, p.area(), 1e-12);
+            }
+        }
+    }
+
+    #[test]
+    fn table_arcs_match_trigonometry() {
+        for (a0, a1) in [
+            (0.0, 0.5 * PI),
+            (1.5 * PI, PI),
+            (-0.5 * PI, 0.0),
+            (PI, 1.5 * PI),
+        ] {
+            let mut p = Poly::new();
+            p.arc(1.0, 2.0, 3.0, a0, a1, 8);
+            assert_eq!(p.points().len(), 9);
+            for (k, &(y, z)) in p.points().iter().enumerate() {
+                let a = a0 + (a1 - a0) * k as f64 / 8.0;
+                assert!((y - 1.0 - 3.0 * a.cos()).abs() < 1e-14, "{a0} {a1} {k}");
+                assert!((z - 2.0 - 3.0 * a.sin()).abs() < 1e-14, "{a0} {a1} {k}");
+            }
+        }
+    }
+
+    #[test]
+    fn chord_length_of_a_square() {
+        let mut p = Poly::new();
+        for (y, z) in [(0.0, 0.0), (2.0, 0.0), (2.0, 4.0), (0.0, 4.0)] {
+            p.push(y, z);
+        }
+        let (st, n) = p.rotated(0.0, 1.0);
+        let r = split_rotated(&st[..n], 1.0);
+        close(r.4, 2.0, 1e-15);
+        let (st, n) = p.rotated(1.0, 0.0);
+        // Rotated by 90°: t = -y, the chord at y = 1 is the height 4.
+        let r = split_rotated(&st[..n], -1.0);
+        close(r.4, 4.0, 1e-15);
     }
 }

@@ -203,14 +203,13 @@ fn finish(raw: Raw) -> Result<Properties> {
             p.i_minor_mm4 = (mean - half).max(0.0);
             (sin, cos) = theta.sin_cos();
             poly.shift(-yc, -zc);
-            // Distances normal to the major axis are t = -y sinθ + z cosθ;
-            // normal to the minor axis, -y cosθ - z sinθ.
-            let (lo, hi) = poly.t_range(sin, cos);
-            p.w_el_major_mm3 = p.i_major_mm4 / lo.abs().max(hi.abs());
-            let (lo, hi) = poly.t_range(cos, -sin);
-            p.w_el_minor_mm3 = p.i_minor_mm4 / lo.abs().max(hi.abs());
-            p.w_pl_major_mm3 = poly.plastic_modulus(theta);
-            p.w_pl_minor_mm3 = poly.plastic_modulus(theta + FRAC_PI_2);
+            let poly_area = poly.area();
+            let (w_pl, extreme) = poly.bending(theta, poly_area);
+            p.w_pl_major_mm3 = w_pl;
+            p.w_el_major_mm3 = p.i_major_mm4 / extreme;
+            let (w_pl, extreme) = poly.bending(theta + FRAC_PI_2, poly_area);
+            p.w_pl_minor_mm3 = w_pl;
+            p.w_el_minor_mm3 = p.i_minor_mm4 / extreme;
         }
     }
     p.r_major_mm = (p.i_major_mm4 / a).sqrt();
@@ -263,10 +262,14 @@ fn check_finite(p: &Properties) -> Result<()> {
 /// with c the shorter side. Five terms give better than 1e-9.
 pub(crate) fn rect_torsion(a: f64, c: f64) -> f64 {
     let (a, c) = if a >= c { (a, c) } else { (c, a) };
-    let sum: f64 = [1.0f64, 3.0, 5.0, 7.0, 9.0]
-        .iter()
-        .map(|n| (n * PI * a / (2.0 * c)).tanh() / n.powi(5))
-        .sum();
+    // tanh(n x) = 1 - 2 / (e^{2 n x} + 1), with e^{2 n x} = (e^{2x})^n: one exp.
+    let e = (PI * a / c).min(700.0).exp();
+    let e2 = e * e;
+    let (mut pow, mut sum) = (e, 0.0);
+    for n in [1.0f64, 3.0, 5.0, 7.0, 9.0] {
+        sum += (1.0 - 2.0 / (pow + 1.0)) / n.powi(5);
+        pow *= e2;
+    }
     a * c.powi(3) / 3.0 * (1.0 - 192.0 / PI.powi(5) * (c / a) * sum)
 }
 

@@ -10,7 +10,7 @@
 //! Elastic moduli about the principal axes divide by the farthest point
 //! of the outline (the heel or a toe). Plastic moduli about the principal
 //! axes integrate over the outline polygon (arcs in 8 chords per quarter)
-//! about the equal-area line parallel to each axis, found by regula falsi;
+//! about the equal-area line parallel to each axis, found by Newton's method;
 //! the chords change them by well under 0.1 %.
 //!
 //! Torsion constant: Young & Budynas, Roark's Formulas for Stress and

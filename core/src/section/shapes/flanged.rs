@@ -9,7 +9,7 @@
 //! be the larger; see the principal-axis rule in the parent module).
 //! Area, centroid, second and plastic moduli are exact; the plastic
 //! neutral axis of the unsymmetric direction (channel about z, tee about
-//! y) is found by regula falsi on exactly clipped parts.
+//! y) is found by Newton's method on exactly clipped parts.
 //!
 //! Channel torsion constant: I_t = 2 K1 + K2 + 2 α D⁴ with the flanges as
 //! rectangles b x tf with two free ends, K1 = b tf³ [1/3 - 0.21 (tf/b)(1 -
