@@ -19,6 +19,12 @@
 //!   (7): N_cr,T and N_cr,TF = N_cr,y / (2 beta) [1 + N_cr,T/N_cr,y -
 //!   sqrt((1 - N_cr,T/N_cr,y)^2 + 4 (y_0/i_0)^2 N_cr,T/N_cr,y)] with
 //!   beta = 1 - (y_0/i_0)^2 (recalled from memory).
+//! - EN 1993-1-1:2005, *Eurocode 3 - Part 1-1*, CEN, Brussels, 6.3.1.2
+//!   (chi, Eq. 6.49), 6.3.1.4 (lambda_T = sqrt(A f_y / N_cr), curve of the
+//!   z axis), Table 6.1 (alpha) and Table 6.2 (L-sections curve b; U-, T-
+//!   and solid sections curve c).
+//! - CSA S16-19, *Design of steel structures*, CSA Group, Toronto, 2019,
+//!   13.3.1 and 13.3.2 (phi = 0.90, n = 1.34) (recalled from memory).
 //! - Cardano's trigonometric solution of a cubic with three real roots
 //!   (F. Viete, 1615; any algebra text): an algorithm independent of the
 //!   engine's bracketed Newton-bisection, used to check its root.
@@ -38,7 +44,7 @@ use strutline_core::check::{check_member, Mode};
 use strutline_core::material::MaterialSpec;
 use strutline_core::member::Member;
 use strutline_core::method::Method;
-use strutline_core::section::{Given, SectionSpec};
+use strutline_core::section::{Angle, Flanged, Given, IMake, IShape, SectionSpec};
 use strutline_core::stability::torsional::{
     critical, flexural_torsional_general, flexural_torsional_single, polar_radius_sq, torsional_n,
     Inputs, Symmetry,
@@ -362,4 +368,252 @@ fn warping_restraint_never_lowers_the_twisting_critical_load() {
         // The coupled root never exceeds any uncoupled load it couples with.
         assert!(c0.n_twist <= c0.n_torsional * (1.0 + 1e-12));
     }
+}
+
+fn steel(fy: f64, e: f64, g: f64) -> MaterialSpec {
+    MaterialSpec::Custom {
+        fy_mpa: fy,
+        e_mpa: e,
+        g_mpa: Some(g),
+    }
+}
+
+fn strut(section: SectionSpec, material: MaterialSpec, method: Method, length: f64) -> Member {
+    Member {
+        id: "F1".into(),
+        note: None,
+        section,
+        material,
+        length_mm: length,
+        k_major: 1.0,
+        k_minor: 1.0,
+        k_torsion: 1.0,
+        lcr_major_mm: None,
+        lcr_minor_mm: None,
+        lcr_torsion_mm: None,
+        axial_kn: 50.0,
+        method,
+        gamma_m1: None,
+        curve_major: None,
+        curve_minor: None,
+        bow_mm: None,
+        eccentricity_mm: None,
+        service_class: None,
+        load_duration: None,
+        csa_n: None,
+    }
+}
+
+/// EN 1993-1-1 Eq. 6.49 with the imperfection factor of Table 6.1.
+fn en_chi(lambda: f64, alpha: f64) -> f64 {
+    if lambda <= 0.2 {
+        return 1.0;
+    }
+    let phi = 0.5 * (1.0 + alpha * (lambda - 0.2) + lambda * lambda);
+    (1.0 / (phi + (phi * phi - lambda * lambda).sqrt())).min(1.0)
+}
+
+/// AISC 360-16 Eq. E3-2 / E3-3.
+fn aisc_fcr(fy: f64, fe: f64) -> f64 {
+    if fy / fe <= 2.25 {
+        0.658f64.powf(fy / fe) * fy
+    } else {
+        0.877 * fe
+    }
+}
+
+fn channel() -> SectionSpec {
+    SectionSpec::Channel(Flanged {
+        depth_mm: 200.0,
+        width_mm: 75.0,
+        flange_mm: 12.5,
+        web_mm: 8.5,
+        root_radius_mm: 12.0,
+    })
+}
+
+fn tee() -> SectionSpec {
+    SectionSpec::Tee(Flanged {
+        depth_mm: 150.0,
+        width_mm: 150.0,
+        flange_mm: 14.0,
+        web_mm: 12.0,
+        root_radius_mm: 10.0,
+    })
+}
+
+fn angle(h: f64, b: f64, t: f64) -> SectionSpec {
+    SectionSpec::Angle(Angle {
+        depth_mm: h,
+        width_mm: b,
+        thickness_mm: t,
+        root_radius_mm: 12.0,
+        toe_radius_mm: 6.0,
+    })
+}
+
+#[test]
+fn singly_symmetric_shapes_couple_twist_with_the_axis_of_symmetry() {
+    // The check's N_cr,TF equals EN 1993-1-3 6.2.3(7) evaluated in this
+    // test from the section's own properties with the axis of symmetry as
+    // y: the channel (symmetric about its major axis), the tee (about its
+    // minor axis here, b = h = 150) and the equal angle (about its major axis u).
+    let l = 2500.0;
+    let cases = [
+        (channel(), true),
+        (tee(), false),
+        (angle(100.0, 100.0, 12.0), true),
+    ];
+    for (spec, about_major) in cases {
+        let p = spec.build().unwrap().props;
+        let (i_s, y0) = if about_major {
+            (p.i_major_mm4, p.shear_centre_major_mm)
+        } else {
+            (p.i_minor_mm4, p.shear_centre_minor_mm)
+        };
+        let other = if about_major {
+            p.shear_centre_minor_mm
+        } else {
+            p.shear_centre_major_mm
+        };
+        assert!(
+            other.abs() < 1e-6 * y0.abs(),
+            "one offset only: {y0} {other}"
+        );
+        let i0 = ((p.i_major_mm4 + p.i_minor_mm4) / p.area_mm2 + y0 * y0).sqrt();
+        let n_y = PI * PI * E * i_s / (l * l);
+        let n_t = (G * p.torsion_mm4 + PI * PI * E * p.warping_mm6 / (l * l)) / (i0 * i0);
+        let expected = en_tf(n_y, n_t, y0, i0) / 1000.0;
+        let r = check_member(&strut(spec.clone(), steel(355.0, E, G), Method::En1993, l)).unwrap();
+        let ft = r
+            .modes
+            .iter()
+            .find(|m| m.mode == Mode::FlexuralTorsional)
+            .expect("FT mode");
+        assert_close(
+            ft.critical_kn,
+            expected,
+            1e-10,
+            "N_cr,TF kN, EN 1993-1-3 6.2.3(7)",
+        );
+        assert!(!r.warnings.iter().any(|w| w.code == "torsional-not-checked"));
+        // EN 1993-1-1 6.3.1.4: lambda_T = sqrt(A f_y / N_cr,TF) (Class 1-3 here), the z-axis
+        // curve of Table 6.2: c (alpha 0.49) for U and T, b (0.34) for L.
+        let alpha = if matches!(spec, SectionSpec::Angle(_)) {
+            0.34
+        } else {
+            0.49
+        };
+        let lt = (p.area_mm2 * 355.0 / (expected * 1000.0)).sqrt();
+        assert_close(
+            ft.relative_slenderness,
+            lt,
+            1e-10,
+            "lambda_T, EN 1993-1-1 6.3.1.4",
+        );
+        let nb = en_chi(lt, alpha) * p.area_mm2 * 355.0 / 1000.0;
+        assert_close(
+            ft.resistance_kn,
+            nb,
+            1e-10,
+            "N_b,Rd of the FT mode, kN (Eq. 6.47, 6.49)",
+        );
+        assert!(r.trace.iter().any(|s| s.symbol == "N_cr,TF"));
+    }
+}
+
+#[test]
+fn unequal_angle_root_matches_cardano_from_its_properties() {
+    let spec = angle(150.0, 90.0, 15.0);
+    let p = spec.build().unwrap().props;
+    assert!(p.shear_centre_major_mm.abs() > 1.0 && p.shear_centre_minor_mm.abs() > 1.0);
+    let l = 3000.0;
+    let i0sq = (p.i_major_mm4 + p.i_minor_mm4) / p.area_mm2
+        + p.shear_centre_major_mm.powi(2)
+        + p.shear_centre_minor_mm.powi(2);
+    let na = PI * PI * E * p.i_major_mm4 / (l * l);
+    let nb = PI * PI * E * p.i_minor_mm4 / (l * l);
+    let nt = (G * p.torsion_mm4 + PI * PI * E * p.warping_mm6 / (l * l)) / i0sq;
+    let expected = cardano_smallest(
+        na,
+        nb,
+        nt,
+        p.shear_centre_major_mm.powi(2) / i0sq,
+        p.shear_centre_minor_mm.powi(2) / i0sq,
+    );
+    let r = check_member(&strut(spec, steel(355.0, E, G), Method::En1993, l)).unwrap();
+    let ft = r
+        .modes
+        .iter()
+        .find(|m| m.mode == Mode::FlexuralTorsional)
+        .expect("FT mode");
+    assert_close(
+        ft.critical_kn * 1000.0,
+        expected,
+        1e-9,
+        "N_cr,TF of the unequal angle, AISC E4-4 cubic (Cardano)",
+    );
+    assert!(ft.critical_kn * 1000.0 < nb, "below the minor-axis load");
+}
+
+#[test]
+fn aisc_and_csa_feed_the_twisting_f_e_into_their_column_curves() {
+    // AISC 360-16 E4: F_cr from E3-2/E3-3 with F_e = N_cr,TF / A_g; phi_c = 0.90 (E1).
+    let (fy, e, g) = (345.0, 200_000.0, 77_200.0);
+    let r = check_member(&strut(channel(), steel(fy, e, g), Method::AiscLrfd, 2500.0)).unwrap();
+    let a = r.section.area_mm2;
+    let ft = r
+        .modes
+        .iter()
+        .find(|m| m.mode == Mode::FlexuralTorsional)
+        .unwrap();
+    let fe = ft.critical_kn * 1000.0 / a;
+    assert_close(
+        ft.resistance_kn,
+        0.9 * aisc_fcr(fy, fe) * a / 1000.0,
+        1e-10,
+        "phi_c F_cr A_g (E3-2 via E4)",
+    );
+    // CSA S16-19 13.3.2: lambda = sqrt(F_y/F_e), C_r = 0.9 A F_y (1 + lambda^2n)^(-1/n), n = 1.34.
+    let (fy, e, g) = (350.0, 200_000.0, 77_000.0);
+    let r = check_member(&strut(channel(), steel(fy, e, g), Method::CsaS16, 2500.0)).unwrap();
+    let a = r.section.area_mm2;
+    let ft = r
+        .modes
+        .iter()
+        .find(|m| m.mode == Mode::FlexuralTorsional)
+        .unwrap();
+    let lambda = (fy / (ft.critical_kn * 1000.0 / a)).sqrt();
+    let cr = 0.9 * a * fy * (1.0 + lambda.powf(2.0 * 1.34)).powf(-1.0 / 1.34) / 1000.0;
+    assert_close(ft.resistance_kn, cr, 1e-10, "C_r, CSA S16-19 13.3.1/13.3.2");
+}
+
+#[test]
+fn i_section_with_a_long_torsional_length_buckles_torsionally() {
+    // A rolled I braced laterally at close centres (L_cr,z = 1 m) but free to
+    // twist over 8 m: N_cr,T < N_cr,z, so the torsional mode is listed and
+    // governs; its N_cr,T = (G I_t + pi^2 E I_w / L_T^2) / i_0^2 (EN 1993-1-3 6.2.3(5)).
+    let spec = SectionSpec::I(IShape {
+        depth_mm: 300.0,
+        width_mm: 150.0,
+        flange_mm: 10.7,
+        web_mm: 7.1,
+        root_radius_mm: 15.0,
+        make: IMake::Rolled,
+    });
+    let p = spec.build().unwrap().props;
+    let mut m = strut(spec, steel(355.0, E, G), Method::En1993, 8000.0);
+    m.lcr_minor_mm = Some(1000.0);
+    m.lcr_major_mm = Some(1000.0);
+    let r = check_member(&m).unwrap();
+    let t = r
+        .modes
+        .iter()
+        .find(|m| m.mode == Mode::Torsional)
+        .expect("torsional mode");
+    let i0sq = (p.i_major_mm4 + p.i_minor_mm4) / p.area_mm2;
+    let n_t = (G * p.torsion_mm4 + PI * PI * E * p.warping_mm6 / 64e6) / i0sq / 1000.0;
+    assert_close(t.critical_kn, n_t, 1e-12, "N_cr,T kN");
+    assert_eq!(t.buckling_length_mm, 8000.0);
+    assert_eq!(r.governing, Mode::Torsional);
 }

@@ -148,7 +148,7 @@ pub struct Element {
     pub kind: Kind,
     /// Width as the code measures it, mm (for the angle rules, the numerator).
     pub width_mm: f64,
-    /// Width for the effective-width formula, mm (EN 1993-1-5 4.4(2) b_bar: h for angle legs, else the width).
+    /// Width for the effective-width formula, mm (EN 1993-1-5 4.4(2) b_bar: the longer leg h for both legs of an angle, else the width).
     pub eff_width_mm: f64,
     /// Thickness, mm.
     pub thickness_mm: f64,
@@ -422,7 +422,8 @@ pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Opti
                 let mut long = raw(Part::AngleLongLeg, Kind::Outstand, h - t - r, t, 1, 0);
                 long.eff_width = h;
                 let mut short = raw(Part::AngleShortLeg, Kind::Outstand, b - t - r, t, 1, 0);
-                short.eff_width = b;
+                // EN 1993-1-5 4.4(2): b_bar = h for equal and unequal angles.
+                short.eff_width = h;
                 add(long);
                 add(short);
                 add(raw(Part::AngleDepthRule, Kind::Rule, h, t, 1, 0));

@@ -58,7 +58,7 @@ pub struct Reduced {
     pub slenderness: f64,
     /// rho (EN) or b_e / b (AISC).
     pub rho: f64,
-    /// Effective width, mm.
+    /// Effective width, mm (for an angle leg, the effective part of its flat outstand c).
     pub effective_mm: f64,
     /// Area taken off, mm2 (all `count` elements).
     pub removed_mm2: f64,
@@ -82,7 +82,10 @@ fn en_reduces(section_class: u8, e: &Element) -> bool {
     e.class >= 4 || matches!(e.part, Part::AngleLongLeg | Part::AngleShortLeg)
 }
 
-/// EN 1993-1-5 4.4 effective area of a classified section (gross area for Class 1 to 3).
+/// EN 1993-1-5 4.4 effective area of a classified section (gross area for
+/// Class 1 to 3). For an angle, b_bar is the longer leg h for both legs
+/// (4.4(2)) and the strip taken off a leg is capped at its flat length
+/// beyond the other leg.
 pub fn en_area(c: &Classified, gross_mm2: f64) -> Effective {
     let mut out = Effective {
         area_mm2: gross_mm2,
@@ -99,11 +102,20 @@ pub fn en_area(c: &Classified, gross_mm2: f64) -> Effective {
             en_k_sigma(e.kind),
         );
         let rho = en_rho(e.kind, lp);
-        let removed = f64::from(e.count) * (1.0 - rho) * e.eff_width_mm * e.thickness_mm;
+        let strip = (1.0 - rho) * e.eff_width_mm;
+        let angle = matches!(e.part, Part::AngleLongLeg | Part::AngleShortLeg);
+        let (strip, effective) = if angle {
+            // The strip comes off the flat outstand c of the leg.
+            let s = strip.min(e.width_mm);
+            (s, e.width_mm - s)
+        } else {
+            (strip, rho * e.eff_width_mm)
+        };
+        let removed = f64::from(e.count) * strip * e.thickness_mm;
         *slot = Some(Reduced {
             slenderness: lp,
             rho,
-            effective_mm: rho * e.eff_width_mm,
+            effective_mm: effective,
             removed_mm2: removed,
         });
     }

@@ -612,6 +612,17 @@ pub fn twist_mode(
         "same elastic critical stress",
     );
     push(trace, scope, "L_eq", "minor-axis length with the same critical load, to enter the method's curve (minor-axis curve)", l_eq, "mm", "pi sqrt(E I_z / N_cr)");
+    if method == Method::CsaS16 {
+        return Ok(Some(csa_twist(
+            input,
+            mode,
+            scope,
+            lengths.torsion_mm,
+            n,
+            lambda_eq,
+            trace,
+        )));
+    }
     let start = trace.len();
     let mut scratch: Vec<Warning> = Vec::new();
     let r = method::axis(method, axes, Mode::Minor, l_eq, trace, &mut scratch)?;
@@ -627,4 +638,79 @@ pub fn twist_mode(
         reduction: r.reduction,
         resistance_kn: r.resistance_kn,
     }))
+}
+
+/// CSA S16-19 13.3.2: the twisting mode's F_e in the 13.3.1 formula with
+/// n = 1.34 whatever the member's own exponent (13.3.2 fixes it).
+fn csa_twist(
+    input: &Input<'_>,
+    mode: Mode,
+    scope: Scope,
+    l_t: f64,
+    n_cr: f64,
+    lambda_eq: f64,
+    trace: &mut Trace,
+) -> ModeResult {
+    use crate::method::csa_s16::{reduction, PHI};
+    let (fy, _) = input.material.strength_and_modulus();
+    let a = input.section.props.area_mm2;
+    let fe = n_cr / a;
+    let lambda = (fy / fe).sqrt();
+    let n = crate::member::CSA_N_DEFAULT;
+    let red = reduction(lambda, n);
+    let c_r = PHI * a * fy * red / 1000.0;
+    push(
+        trace,
+        scope,
+        "F_e",
+        "elastic critical stress of the twisting mode N_cr / A",
+        fe,
+        "MPa",
+        "CSA S16-19 13.3.2",
+    );
+    push(
+        trace,
+        scope,
+        "lambda",
+        "sqrt(F_y / F_e)",
+        lambda,
+        "-",
+        "CSA S16-19 13.3.1",
+    );
+    push(
+        trace,
+        scope,
+        "n",
+        "exponent for torsional and flexural-torsional buckling",
+        n,
+        "-",
+        "CSA S16-19 13.3.2",
+    );
+    push(
+        trace,
+        scope,
+        "(1+lambda^2n)^-1/n",
+        "reduction",
+        red,
+        "-",
+        "CSA S16-19 13.3.1",
+    );
+    push(
+        trace,
+        scope,
+        "C_r",
+        "factored resistance phi A F_y (1 + lambda^2n)^(-1/n)",
+        c_r,
+        "kN",
+        "CSA S16-19 13.3.1, 13.3.2",
+    );
+    ModeResult {
+        mode,
+        buckling_length_mm: l_t,
+        slenderness: lambda_eq,
+        critical_kn: n_cr / 1000.0,
+        relative_slenderness: lambda,
+        reduction: red,
+        resistance_kn: c_r,
+    }
 }

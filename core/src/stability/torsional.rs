@@ -88,7 +88,7 @@ fn cubic(n: f64, n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64) -> (f64, f64) {
 /// Flexural-torsional load of a section with no symmetry: the smallest
 /// positive root of the cubic, found in the bracket `(0, N_min]` (see the
 /// module docs) by Newton steps kept inside the bracket, falling back to
-/// bisection. `pa = a0^2/i0^2` couples with `n_a`, `pb = b0^2/i0^2` with `n_b`.
+/// bisection, started from the lower singly symmetric root. `pa = a0^2/i0^2` couples with `n_a`, `pb = b0^2/i0^2` with `n_b`.
 /// Returns 0 when any load is not positive.
 pub fn flexural_torsional_general(n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64) -> f64 {
     let n_min = n_a.min(n_b).min(n_t);
@@ -101,7 +101,16 @@ pub fn flexural_torsional_general(n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64
         // f(N_min) = 0 up to rounding: N_min is the root.
         return n_min;
     }
-    let mut x = 0.5 * n_min;
+    // Start from the lower of the two singly symmetric roots: each couples
+    // one axis only and lies close to the full root, so a few Newton steps
+    // finish (the bracket keeps every step safe whatever the start).
+    let start =
+        flexural_torsional_single(n_a, n_t, pa).min(flexural_torsional_single(n_b, n_t, pb));
+    let mut x = if start > 0.0 && start < n_min {
+        start
+    } else {
+        0.5 * n_min
+    };
     for _ in 0..100 {
         let (f, df) = cubic(x, n_a, n_b, n_t, pa, pb);
         if f == 0.0 {
@@ -112,13 +121,20 @@ pub fn flexural_torsional_general(n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64
         } else {
             hi = x;
         }
-        let newton = x - f / df;
+        let step = f / df;
+        // Newton converges quadratically: once its step is below 1e-12 N_min
+        // the error is far below that, whether or not the step lands
+        // strictly inside the bracket (at the root it lands on its edge).
+        if step.abs() <= 1e-12 * n_min {
+            return (x - step).clamp(lo, hi);
+        }
+        let newton = x - step;
         let next = if newton.is_finite() && newton > lo && newton < hi {
             newton
         } else {
             0.5 * (lo + hi)
         };
-        if (next - x).abs() <= 1e-13 * n_min || hi - lo <= 1e-13 * n_min {
+        if hi - lo <= 1e-13 * n_min {
             return next;
         }
         x = next;
