@@ -37,8 +37,10 @@ const FILES: &[(&str, &str)] = &[
     ("hss", include_str!("../data/hss.csv")),
     ("hss-round", include_str!("../data/hss-round.csv")),
     ("shs-en10210", include_str!("../data/shs-en10210.csv")),
+    ("rhs-en10210", include_str!("../data/rhs-en10210.csv")),
     ("chs-en10210", include_str!("../data/chs-en10210.csv")),
     ("shs-en10219", include_str!("../data/shs-en10219.csv")),
+    ("chs-en10219", include_str!("../data/chs-en10219.csv")),
 ];
 
 /// Millimetres per inch (exact by definition).
@@ -754,6 +756,9 @@ mod tests {
         assert_eq!(d("HSS16.000x0.500"), "HSS16.000x0.500");
         assert_eq!(d("HSS16x0.5"), "HSS16.000x0.500");
         assert_eq!(d("CHS 168.3x8.0"), "CHS 168.3x8");
+        assert_eq!(d("168.3x8 CHS CF"), "CHS 168.3x8 CF");
+        assert_eq!(d("RHS 200x100x8"), "RHS 200x100x8");
+        assert_eq!(d("200 x 100 x 8.0 RHS"), "RHS 200x100x8");
         assert_eq!(d("IPE 300"), "IPE 300");
         assert_eq!(d("ipe300"), "IPE 300");
     }

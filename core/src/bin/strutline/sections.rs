@@ -239,3 +239,57 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     }
     Ok(0)
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+
+    #[test]
+    fn selects_series_and_families_forgivingly() {
+        assert_eq!(select(Some("heb"), None).unwrap().entries.len(), 24);
+        assert_eq!(select(Some("HE B"), None).unwrap().label, "HE B");
+        let chs = select(None, Some("CHS")).unwrap();
+        assert!(chs.entries.iter().all(|e| e.spec.family() == Family::Chs));
+        assert_eq!(chs.entries.len(), 11 + 68 + 68);
+        let all = select(None, None).unwrap();
+        assert_eq!(all.entries.len(), catalogue::entries().len());
+        let err = select(Some("HE Q"), None).err().unwrap();
+        assert!(
+            err.contains("unknown series \"HE Q\"") && err.contains("\"HE B\""),
+            "{err}"
+        );
+        assert!(select(None, Some("zed")).is_err());
+    }
+
+    #[test]
+    fn table_and_json_carry_computed_and_tabulated_values() {
+        let sel = select(Some("IPE"), None).unwrap();
+        let text = table(&sel.entries);
+        assert_eq!(text.lines().count(), 2 + 18);
+        let row = text.lines().find(|l| l.starts_with("IPE 300 ")).unwrap();
+        // IPE 300: computed A about 5381 mm2, tabulated mass 42.2 kg/m.
+        assert!(row.contains("538"), "{row}");
+        assert!(row.trim_end().ends_with("42.2"), "{row}");
+        let v = entry_json(catalogue::resolve("IPE 300").unwrap());
+        assert_eq!(v["designation"], "IPE 300");
+        assert_eq!(v["family"], "i");
+        let a = v["area_mm2"].as_f64().unwrap();
+        assert!((a / 5380.0 - 1.0).abs() < 0.01, "{a}");
+        assert_eq!(v["tabulated"]["mass_kg_per_m"], 42.2);
+        assert!(v.get("error").is_none());
+    }
+
+    #[test]
+    fn run_refuses_unknown_series_and_arguments() {
+        let args = |a: &[&str]| a.iter().map(|s| s.to_string()).collect::<Vec<_>>();
+        assert_eq!(run(&args(&["--series", "nothing"])), Ok(2));
+        assert!(run(&args(&["--colour"])).is_err());
+        assert!(run(&args(&["--series"])).is_err());
+    }
+}

@@ -197,3 +197,65 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     }
     Ok(0)
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use strutline_core::catalogue;
+
+    const FILE: &str = r#"{"format": "strutline.members", "version": 1, "title": "Test shed",
+      "members": [
+        {"id": "P1", "section": {"kind": "catalogue", "designation": "HE 200 B"},
+         "material": {"fy_mpa": 355, "e_mpa": 210000}, "length_mm": 4000, "axial_kn": 700,
+         "method": "en1993-1-1"},
+        {"id": "P2", "section": {"kind": "catalogue", "designation": "HE 200 B"},
+         "material": {"fy_mpa": 355, "e_mpa": 210000}, "length_mm": 4000, "axial_kn": 1e6,
+         "method": "en1993-1-1"}
+      ]}"#;
+
+    fn args(a: &[&str]) -> Vec<String> {
+        a.iter().map(|s| s.to_string()).collect()
+    }
+
+    #[test]
+    fn proposals_in_json_and_table() {
+        let file = strutline_core::file::parse(FILE).unwrap();
+        let heb: Vec<_> = catalogue::find_series("HE B")
+            .unwrap()
+            .entries()
+            .iter()
+            .collect();
+        let results = Sizer::new(&heb).size_all(&file.members, 0.9);
+        let p1 = result_json(&results[0]);
+        assert_eq!(p1["id"], "P1");
+        assert!(p1["utilisation"].as_f64().unwrap() <= 0.9);
+        let next = &p1["next_lighter"];
+        assert!(next["utilisation"].as_f64().unwrap() > 0.9, "{p1}");
+        let p2 = result_json(&results[1]);
+        assert!(p2["designation"].is_null());
+        assert_eq!(p2["next_lighter"]["designation"], "HE 1000 B");
+        let text = table(&results);
+        assert!(text.lines().nth(2).unwrap().contains("none"), "{text}");
+        assert!(text.contains(p1["designation"].as_str().unwrap()));
+    }
+
+    #[test]
+    fn run_reads_a_file_and_checks_its_arguments() {
+        let path = std::env::temp_dir().join(format!("strutline-size-{}.json", std::process::id()));
+        std::fs::write(&path, FILE).unwrap();
+        let p = path.to_str().unwrap();
+        assert_eq!(run(&args(&[p, "--series", "heb", "--limit", "0.9"])), Ok(0));
+        assert_eq!(run(&args(&[p, "--family", "i", "--json"])), Ok(0));
+        assert_eq!(run(&args(&[p, "--series", "no such"])), Ok(2));
+        assert!(run(&args(&[p])).is_err());
+        assert!(run(&args(&[p, "--series", "heb", "--limit", "-1"])).is_err());
+        assert!(run(&args(&["/nonexistent/members.json", "--series", "heb"])).is_err());
+        std::fs::remove_file(&path).unwrap();
+    }
+}
