@@ -758,6 +758,106 @@ mod tests {
         }
     }
 
+    mod never_panics {
+        #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+        use super::*;
+        use proptest::prelude::*;
+
+        /// Any number, including nonsense: negative, zero, tiny, huge, NaN, inf.
+        fn any_dim() -> impl Strategy<Value = f64> {
+            prop_oneof![
+                4 => 0.1f64..500.0,
+                1 => -10.0f64..0.0,
+                1 => Just(0.0),
+                1 => Just(f64::NAN),
+                1 => Just(f64::INFINITY),
+                1 => 1e4f64..1e300,
+            ]
+        }
+
+        fn check(spec: &SectionSpec) {
+            match properties(spec) {
+                Ok(p) => {
+                    let what = format!("{spec:?}");
+                    for v in [
+                        p.area_mm2,
+                        p.i_major_mm4,
+                        p.i_minor_mm4,
+                        p.w_el_major_mm3,
+                        p.w_el_minor_mm3,
+                        p.w_pl_major_mm3,
+                        p.w_pl_minor_mm3,
+                        p.torsion_mm4,
+                        p.warping_mm6,
+                        p.r_major_mm,
+                        p.r_minor_mm,
+                        p.shear_centre_major_mm,
+                        p.shear_centre_minor_mm,
+                        p.principal_angle_rad,
+                    ] {
+                        assert!(v.is_finite(), "{what}: {p:?}");
+                    }
+                    assert!(p.area_mm2 > 0.0 && p.i_minor_mm4 > 0.0, "{what}");
+                    assert!(p.i_major_mm4 >= p.i_minor_mm4, "{what}");
+                    assert!(
+                        p.w_pl_major_mm3 >= p.w_el_major_mm3 * (1.0 - 1e-9),
+                        "{what}"
+                    );
+                    assert!(
+                        p.w_pl_minor_mm3 >= p.w_el_minor_mm3 * (1.0 - 1e-9),
+                        "{what}"
+                    );
+                    assert!(p.torsion_mm4 > 0.0 && p.warping_mm6 >= 0.0, "{what}");
+                }
+                Err(e) => assert!(e.field().is_some(), "{e}"),
+            }
+        }
+
+        proptest! {
+            #![proptest_config(ProptestConfig::with_cases(300))]
+            #[test]
+            fn i_sections(h in any_dim(), b in any_dim(), tf in any_dim(), tw in any_dim(), r in any_dim()) {
+                check(&i(h, b, tf, tw, r));
+            }
+
+            #[test]
+            fn hollow_sections(h in any_dim(), b in any_dim(), t in any_dim(), ro in any_dim(),
+                               ri in proptest::option::of(any_dim())) {
+                check(&rhs(h, b, t, ro, ri));
+                check(&SectionSpec::Chs(Chs { diameter_mm: h, wall_mm: t, make: Default::default() }));
+            }
+
+            #[test]
+            fn angles(h in any_dim(), b in any_dim(), t in any_dim(), r1 in any_dim(), r2 in any_dim()) {
+                check(&angle(h, b, t, r1, r2));
+            }
+
+            #[test]
+            fn channels_and_tees(h in any_dim(), b in any_dim(), tf in any_dim(), tw in any_dim(), r in any_dim()) {
+                check(&SectionSpec::Channel(flanged(h, b, tf, tw, r)));
+                check(&SectionSpec::Tee(flanged(h, b, tf, tw, r)));
+            }
+
+            #[test]
+            fn solids(h in any_dim(), b in any_dim()) {
+                check(&SectionSpec::Rect(Rect { depth_mm: h, width_mm: b }));
+                check(&SectionSpec::Round(Round { diameter_mm: h }));
+            }
+
+            /// Valid proportions only: every one must compute.
+            #[test]
+            fn valid_i_sections_always_compute(h in 50.0f64..1000.0, bf in 0.2f64..1.2,
+                                               tf in 0.02f64..0.2, tw in 0.1f64..0.9, rf in 0.0f64..1.0) {
+                let b = bf * h;
+                let tf = tf * h.min(b);
+                let tw = tw * tf;
+                let r = rf * ((b - tw) / 2.0).min(h / 2.0 - tf).min(3.0 * tf);
+                let p = properties(&i(h, b, tf, tw, r)).unwrap();
+                prop_assert!(p.w_pl_major_mm3 > p.w_el_major_mm3);
+            }
+        }
+    }
+
     #[test]
     fn describe_names_the_dimensions() {
         assert_eq!(

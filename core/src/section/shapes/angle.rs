@@ -121,3 +121,74 @@ pub(super) fn raw(s: &Angle) -> Result<Raw> {
 pub(super) fn outline(s: &Angle) -> Result<Poly> {
     Ok(polygon(&dims(s)?))
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    use super::*;
+    use crate::section::SectionSpec;
+
+    fn close(a: f64, b: f64, tol: f64) {
+        assert!(((a - b) / b).abs() <= tol, "{a} vs {b}");
+    }
+
+    fn props(h: f64, b: f64, t: f64, r1: f64, r2: f64) -> crate::section::Properties {
+        super::super::properties(&SectionSpec::Angle(Angle {
+            depth_mm: h,
+            width_mm: b,
+            thickness_mm: t,
+            root_radius_mm: r1,
+            toe_radius_mm: r2,
+        }))
+        .unwrap()
+    }
+
+    #[test]
+    fn sharp_unequal_angle_closed_forms() {
+        // Two rectangles: leg b x t along y and t x (h - t) along z.
+        let (h, b, t) = (150.0f64, 90.0f64, 10.0f64);
+        let p = props(h, b, t, 0.0, 0.0);
+        let (a1, a2) = (b * t, t * (h - t));
+        let a = a1 + a2;
+        close(p.area_mm2, a, 1e-14);
+        let yc = (a1 * b / 2.0 + a2 * t / 2.0) / a;
+        let zc = (a1 * t / 2.0 + a2 * (t + (h - t) / 2.0)) / a;
+        close(p.centroid_y_mm, yc, 1e-13);
+        close(p.centroid_z_mm, zc, 1e-13);
+        let iy = b * t.powi(3) / 12.0
+            + a1 * (t / 2.0 - zc).powi(2)
+            + t * (h - t).powi(3) / 12.0
+            + a2 * (t + (h - t) / 2.0 - zc).powi(2);
+        close(p.i_y_mm4, iy, 1e-12);
+        let iyz =
+            a1 * (b / 2.0 - yc) * (t / 2.0 - zc) + a2 * (t / 2.0 - yc) * (t + (h - t) / 2.0 - zc);
+        close(p.i_yz_mm4, iyz, 1e-12);
+        assert!(p.i_yz_mm4 < 0.0);
+        // Principal angle: tan 2θ = -2 I_yz / (I_y - I_z).
+        close(
+            (2.0 * p.principal_angle_rad).tan(),
+            -2.0 * p.i_yz_mm4 / (p.i_y_mm4 - p.i_z_mm4),
+            1e-10,
+        );
+    }
+
+    #[test]
+    fn toe_radius_removes_two_spandrels() {
+        let with = props(100.0, 100.0, 10.0, 12.0, 6.0);
+        let without = props(100.0, 100.0, 10.0, 12.0, 0.0);
+        close(
+            without.area_mm2 - with.area_mm2,
+            2.0 * (1.0 - PI / 4.0) * 36.0,
+            1e-10,
+        );
+    }
+
+    #[test]
+    fn equal_angle_shear_centre_on_the_symmetry_axis() {
+        let p = props(100.0, 100.0, 10.0, 12.0, 6.0);
+        // The shear centre (t/2, t/2) lies on the symmetry (major) axis.
+        assert!(p.shear_centre_minor_mm.abs() < 1e-9);
+        let e = 2f64.sqrt() * (p.centroid_y_mm - 5.0);
+        close(-p.shear_centre_major_mm, e, 1e-12);
+    }
+}

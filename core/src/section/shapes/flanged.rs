@@ -231,3 +231,71 @@ pub(super) fn tee_outline(s: &Flanged) -> Result<(Poly, Option<Poly>)> {
     o.arc(yl - r, h - tf - r, r, 0.5 * PI, 0.0, n);
     Ok((o, None))
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    use super::*;
+    use crate::section::SectionSpec;
+
+    fn close(a: f64, b: f64, tol: f64) {
+        assert!(((a - b) / b).abs() <= tol, "{a} vs {b}");
+    }
+
+    fn f(h: f64, b: f64, tf: f64, tw: f64, r: f64) -> Flanged {
+        Flanged {
+            depth_mm: h,
+            width_mm: b,
+            flange_mm: tf,
+            web_mm: tw,
+            root_radius_mm: r,
+        }
+    }
+
+    #[test]
+    fn sharp_channel_centroid_and_shear_centre() {
+        let (h, b, tf, tw) = (200.0f64, 90.0f64, 14.0f64, 7.0f64);
+        let p = super::super::properties(&SectionSpec::Channel(f(h, b, tf, tw, 0.0))).unwrap();
+        let (aw, af) = (h * tw, (b - tw) * tf);
+        let yc = (aw * tw / 2.0 + 2.0 * af * (tw + (b - tw) / 2.0)) / (aw + 2.0 * af);
+        close(p.centroid_y_mm, yc, 1e-13);
+        close(p.centroid_z_mm, h / 2.0, 1e-13);
+        // The shear centre lies behind the web, on the axis of symmetry.
+        let (bc, hc) = (b - tw / 2.0, h - tf);
+        let e = 3.0 * bc * bc * tf / (6.0 * bc * tf + hc * tw);
+        // Major axis is y: the shear centre offset is along y (major direction).
+        close(-p.shear_centre_major_mm, yc - (tw / 2.0 - e), 1e-12);
+        assert!(p.shear_centre_minor_mm.abs() < 1e-9);
+    }
+
+    #[test]
+    fn sharp_tee_centroid() {
+        let (h, b, tf, tw) = (150.0f64, 100.0f64, 10.0f64, 8.0f64);
+        let p = super::super::properties(&SectionSpec::Tee(f(h, b, tf, tw, 0.0))).unwrap();
+        let (af, aw) = (b * tf, (h - tf) * tw);
+        let zc = (af * (h - tf / 2.0) + aw * (h - tf) / 2.0) / (af + aw);
+        close(p.centroid_z_mm, zc, 1e-13);
+        // I_y by parts.
+        let iy = b * tf.powi(3) / 12.0
+            + af * (h - tf / 2.0 - zc).powi(2)
+            + tw * (h - tf).powi(3) / 12.0
+            + aw * ((h - tf) / 2.0 - zc).powi(2);
+        close(p.i_y_mm4, iy, 1e-12);
+    }
+
+    #[test]
+    fn root_radius_adds_two_spandrels() {
+        for spec in [
+            SectionSpec::Channel as fn(Flanged) -> SectionSpec,
+            SectionSpec::Tee,
+        ] {
+            let sharp = super::super::properties(&spec(f(200.0, 90.0, 14.0, 7.0, 0.0))).unwrap();
+            let round = super::super::properties(&spec(f(200.0, 90.0, 14.0, 7.0, 12.0))).unwrap();
+            close(
+                round.area_mm2 - sharp.area_mm2,
+                2.0 * (1.0 - PI / 4.0) * 144.0,
+                1e-10,
+            );
+        }
+    }
+}

@@ -207,3 +207,86 @@ pub(super) fn chs_outline(s: &Chs) -> Result<(Poly, Option<Poly>)> {
         Some(circle(d / 2.0, d / 2.0 - t, true)),
     ))
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    use super::*;
+    use crate::section::SectionSpec;
+
+    fn close(a: f64, b: f64, tol: f64) {
+        assert!(((a - b) / b).abs() <= tol, "{a} vs {b}");
+    }
+
+    fn rhs_props(h: f64, b: f64, t: f64, ro: f64, ri: Option<f64>) -> crate::section::Properties {
+        super::super::properties(&SectionSpec::Rhs(Rhs {
+            depth_mm: h,
+            width_mm: b,
+            wall_mm: t,
+            outer_radius_mm: ro,
+            inner_radius_mm: ri,
+            make: Default::default(),
+        }))
+        .unwrap()
+    }
+
+    #[test]
+    fn non_concentric_corner_area() {
+        // A = b h - (4 - π) r_o² - [(b - 2t)(h - 2t) - (4 - π) r_i²].
+        let (h, b, t, ro, ri) = (150.0, 100.0, 8.0, 12.0, 8.0);
+        let p = rhs_props(h, b, t, ro, Some(ri));
+        let exact =
+            b * h - (4.0 - PI) * ro * ro - ((b - 2.0 * t) * (h - 2.0 * t) - (4.0 - PI) * ri * ri);
+        close(p.area_mm2, exact, 1e-13);
+    }
+
+    #[test]
+    fn square_tube_torsion_and_warping() {
+        // Sharp thin square tube: Bredt, I_t = 4 A_h² t / p = t b'³ (+ t³ p / 3).
+        let (b, t) = (200.0, 2.0);
+        let p = rhs_props(b, b, t, 0.0, None);
+        let bc = b - t;
+        close(
+            p.torsion_mm4,
+            t * bc.powi(3) + t.powi(3) * 4.0 * bc / 3.0,
+            1e-12,
+        );
+        assert_eq!(p.warping_mm6, 0.0);
+    }
+
+    #[test]
+    fn thin_chs_limits() {
+        // Thin tube: A -> 2π r t, I -> π r³ t, W_pl -> 4 r² t (r mean radius).
+        let (d, t) = (1000.0, 1.0);
+        let p = super::super::properties(&SectionSpec::Chs(Chs {
+            diameter_mm: d,
+            wall_mm: t,
+            make: Default::default(),
+        }))
+        .unwrap();
+        let r = (d - t) / 2.0;
+        close(p.area_mm2, 2.0 * PI * r * t, 1e-9);
+        close(p.i_y_mm4, PI * r.powi(3) * t, 1e-5);
+        close(p.w_pl_major_mm3, 4.0 * r * r * t, 1e-5);
+    }
+
+    #[test]
+    fn rhs_outline_is_outer_and_hole() {
+        let s = Rhs {
+            depth_mm: 150.0,
+            width_mm: 100.0,
+            wall_mm: 8.0,
+            outer_radius_mm: 12.0,
+            inner_radius_mm: Some(8.0),
+            make: Default::default(),
+        };
+        let (o, hole) = rhs_outline(&s).unwrap();
+        let hole = hole.unwrap();
+        assert!(o.area() > 0.0 && hole.area() < 0.0);
+        close(
+            o.area() + hole.area(),
+            rhs_props(150.0, 100.0, 8.0, 12.0, Some(8.0)).area_mm2,
+            2e-3,
+        );
+    }
+}

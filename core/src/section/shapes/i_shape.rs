@@ -133,3 +133,87 @@ pub(super) fn outline(s: &IShape) -> Result<(Poly, Option<Poly>)> {
     o.push(0.0, tf);
     Ok((o, None))
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    use super::*;
+    use crate::section::SectionSpec;
+
+    fn props(h: f64, b: f64, tf: f64, tw: f64, r: f64) -> crate::section::Properties {
+        super::super::properties(&SectionSpec::I(IShape {
+            depth_mm: h,
+            width_mm: b,
+            flange_mm: tf,
+            web_mm: tw,
+            root_radius_mm: r,
+            make: Default::default(),
+        }))
+        .unwrap()
+    }
+
+    fn close(a: f64, b: f64, tol: f64) {
+        assert!(((a - b) / b).abs() <= tol, "{a} vs {b}");
+    }
+
+    /// Closed forms with root fillets as printed in the explanatory notes of
+    /// European rolled-section catalogues (recalled; common practice):
+    /// A = 2 b tf + (h - 2tf) tw + (4 - π) r²,
+    /// W_pl,y = tw h²/4 + (b - tw)(h - tf) tf + (4 - π)/2 r² (h - 2tf) + (3π - 10)/3 r³,
+    /// W_pl,z = b² tf/2 + (h - 2tf) tw²/4 + r³ (10/3 - π) + (2 - π/2) tw r².
+    #[test]
+    fn fillet_closed_forms() {
+        for (h, b, tf, tw, r) in [
+            (200.0, 200.0, 15.0, 9.0, 18.0),
+            (300.0, 150.0, 10.7, 7.1, 15.0),
+            (1000.0, 300.0, 31.0, 16.5, 30.0),
+        ] {
+            let p = props(h, b, tf, tw, r);
+            close(
+                p.area_mm2,
+                2.0 * b * tf + (h - 2.0 * tf) * tw + (4.0 - PI) * r * r,
+                1e-13,
+            );
+            let wply = tw * h * h / 4.0
+                + (b - tw) * (h - tf) * tf
+                + (4.0 - PI) / 2.0 * r * r * (h - 2.0 * tf)
+                + (3.0 * PI - 10.0) / 3.0 * r.powi(3);
+            close(p.w_pl_major_mm3, wply, 1e-12);
+            let wplz = b * b * tf / 2.0
+                + (h - 2.0 * tf) * tw * tw / 4.0
+                + r.powi(3) * (10.0 / 3.0 - PI)
+                + (2.0 - PI / 2.0) * tw * r * r;
+            close(p.w_pl_minor_mm3, wplz, 1e-12);
+        }
+    }
+
+    #[test]
+    fn thin_plate_torsion_limit() {
+        // Thin plates, no fillet: I_t -> (2 b tf³ + (h - 2tf) tw³)/3 less
+        // the flange end corrections 2 x 0.21 tf⁴, plus a small junction term.
+        let (h, b, tf, tw) = (500.0, 250.0, 2.0, 1.0);
+        let p = props(h, b, tf, tw, 0.0);
+        let thin = (2.0 * b * tf.powi(3) + (h - 2.0 * tf) * tw.powi(3)) / 3.0;
+        close(p.torsion_mm4, thin, 5e-3);
+    }
+
+    #[test]
+    fn outline_has_four_fillet_arcs() {
+        let s = IShape {
+            depth_mm: 200.0,
+            width_mm: 200.0,
+            flange_mm: 15.0,
+            web_mm: 9.0,
+            root_radius_mm: 18.0,
+            make: Default::default(),
+        };
+        let (o, hole) = outline(&s).unwrap();
+        assert!(hole.is_none());
+        assert_eq!(o.points().len(), 8 + 4 * 9);
+        close(
+            o.area(),
+            props(200.0, 200.0, 15.0, 9.0, 18.0).area_mm2,
+            1e-3,
+        );
+    }
+}

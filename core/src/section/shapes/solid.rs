@@ -110,3 +110,21 @@ pub(super) fn round_outline(s: &Round) -> Result<(Poly, Option<Poly>)> {
     let d = dim("diameter_mm", s.diameter_mm)?;
     Ok((super::hollow::circle(d / 2.0, d / 2.0, false), None))
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    use super::super::rect_torsion;
+
+    #[test]
+    fn rect_torsion_limits() {
+        // Square: J = 0.1406 a⁴ (Timoshenko & Goodier, k1 = 0.141 for a/b = 1).
+        assert!((rect_torsion(10.0, 10.0) / 1e4 - 0.1406).abs() < 2e-4);
+        // Very thin strip: J -> a c³/3 (1 - 0.630 c/a).
+        let (a, c) = (1000.0f64, 1.0f64);
+        let thin = a * c.powi(3) / 3.0 * (1.0 - 0.630 * c / a);
+        assert!((rect_torsion(a, c) - thin).abs() / thin < 1e-4);
+        // Symmetric in its arguments.
+        assert_eq!(rect_torsion(40.0, 100.0), rect_torsion(100.0, 40.0));
+    }
+}
