@@ -1,5 +1,8 @@
-//! Checking one member: resolve its section and material, run the method
-//! about both axes, pick the governing mode and collect the working.
+//! Checking one member: resolve its section and material, classify the
+//! cross-section, run the method about both axes and, where they apply,
+//! for torsional or flexural-torsional buckling and the cross-section
+//! resistance ([`crate::stability`]), pick the governing mode and collect
+//! the working.
 
 use serde::Serialize;
 
@@ -185,8 +188,10 @@ impl Prepared {
     }
 }
 
-/// Runs `method` on a resolved member: both axes, the governing mode, the
-/// working. Shared by [`Prepared`] and [`check_member`], which borrows
+/// Runs `method` on a resolved member: classification (with the EN
+/// 1993-1-5 effective area of a Class 4 section, or the AISC E7 effective
+/// area per mode), both axes, the twisting mode of open sections, the
+/// EN 1993-1-1 cross-section mode, the governing mode, the working. Shared by [`Prepared`] and [`check_member`], which borrows
 /// instead of cloning so the hot path allocates only the result.
 pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     let m = input.member;

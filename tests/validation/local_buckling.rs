@@ -444,13 +444,34 @@ fn en_check_uses_the_effective_area_for_class_4() {
         ROUNDING,
         "N_c,Rd = A_eff f_y, kN",
     );
-    // Flexural modes use A_eff too: N_b,Rd <= chi A_eff f_y with chi <= 1.
+    // Flexural modes use A_eff too (EN 1993-1-1 6.3.1.3, Eq. 6.51):
+    // lambda_bar = sqrt(A_eff f_y / N_cr) with N_cr of the gross section, and
+    // N_b,Rd = chi A_eff f_y / gamma_M1 (Eq. 6.48) with chi from curve a
+    // (alpha = 0.21, Table 6.1) for a hot-finished hollow section (Table 6.2).
     for m in r
         .modes
         .iter()
         .filter(|m| matches!(m.mode, Mode::Major | Mode::Minor))
     {
-        assert!(m.resistance_kn <= a_eff * 355.0 / 1000.0 * (1.0 + ROUNDING));
+        let lambda = (a_eff * 355.0 / (m.critical_kn * 1000.0)).sqrt();
+        assert_close(
+            m.relative_slenderness,
+            lambda,
+            ROUNDING,
+            "lambda_bar with A_eff (Eq. 6.51)",
+        );
+        let phi = 0.5 * (1.0 + 0.21 * (lambda - 0.2) + lambda * lambda);
+        let chi = if lambda <= 0.2 {
+            1.0
+        } else {
+            (1.0 / (phi + (phi * phi - lambda * lambda).sqrt())).min(1.0)
+        };
+        assert_close(
+            m.resistance_kn,
+            chi * a_eff * 355.0 / 1000.0,
+            1e-12,
+            "N_b,Rd = chi A_eff f_y, kN (Eq. 6.48)",
+        );
     }
     assert!(r.trace.iter().any(|s| s.symbol == "c/t"));
 }
@@ -491,4 +512,63 @@ fn aisc_slender_hss_strength_uses_a_e() {
     let design_gross = 0.9 * fcr * r.section.area_mm2 / 1000.0;
     assert!(minor.resistance_kn < design_gross);
     assert!(r.trace.iter().any(|s| s.symbol == "A_eff"));
+}
+
+#[test]
+fn en_class_4_unequal_angle_by_hand() {
+    // Angle 150 x 90 x 10, r1 = 12, S355 (eps = 0.813617), EN 1993-1-1 Table 5.2 sheet 3:
+    //  h/t = 15 > 15 eps = 12.20 -> Class 4; (b+h)/2t = 12 > 11.5 eps = 9.36 -> Class 4
+    //  EN 1993-1-5 4.4(2): b_bar = h = 150 mm for both legs, k_sigma = 0.43 (Table 4.2)
+    //  lambda_p = 15 / (28.4 x 0.813617 x sqrt(0.43)) = 15 / 15.15199 = 0.989969
+    //  rho = (0.989969 - 0.188) / 0.989969^2 = 0.818302 (Eq. 4.3)
+    //  strip per leg (1 - rho) h = 27.2547 mm, off the flat outstand (c = 128 and 68 mm)
+    //  A_eff = A - 2 x 27.2547 x 10 = A - 545.094 mm2
+    // Taking b_bar = h for the short leg too is this engine's reading of 4.4(2) (conservative).
+    let spec = SectionSpec::Angle(Angle {
+        depth_mm: 150.0,
+        width_mm: 90.0,
+        thickness_mm: 10.0,
+        root_radius_mm: 12.0,
+        toe_radius_mm: 0.0,
+    });
+    let c = classify(Code::En1993, &spec, 355.0, 210_000.0).unwrap();
+    assert_eq!(c.class, 4);
+    let eff = en_area(&c, 2300.0);
+    let long = eff.reduced[0].unwrap();
+    assert_close(long.slenderness, 0.989_969, HAND, "lambda_p, b_bar = h");
+    assert_close(long.rho, 0.818_302, HAND, "rho (Eq. 4.3)");
+    assert_close(eff.area_mm2, 2300.0 - 545.094, HAND, "A_eff, mm2");
+}
+
+#[test]
+fn limit_states_a_method_does_not_cover_are_warned() {
+    // Perry-Robertson has no torsional mode: an open section gets the warning.
+    let angle = SectionSpec::Angle(Angle {
+        depth_mm: 100.0,
+        width_mm: 100.0,
+        thickness_mm: 12.0,
+        root_radius_mm: 12.0,
+        toe_radius_mm: 6.0,
+    });
+    let r = check_member(&member(angle.clone(), Method::PerryRobertson, 2000.0)).unwrap();
+    assert!(r.warnings.iter().any(|w| w.code == "torsional-not-checked"));
+    assert!(r.modes.iter().all(|m| m.mode != Mode::FlexuralTorsional));
+    // A code method checks it, and says nothing is missing.
+    let r = check_member(&member(angle, Method::En1993, 2000.0)).unwrap();
+    assert!(r.warnings.iter().all(|w| w.code != "torsional-not-checked"));
+    assert!(r.modes.iter().any(|m| m.mode == Mode::FlexuralTorsional));
+    // Typed properties without a torsion constant: neither local nor torsional buckling can be checked.
+    let given = SectionSpec::Given(strutline_core::section::Given {
+        area_mm2: 5000.0,
+        i_major_mm4: 5e7,
+        i_minor_mm4: 2e7,
+        torsion_mm4: None,
+        warping_mm6: None,
+    });
+    let r = check_member(&member(given, Method::En1993, 3000.0)).unwrap();
+    assert!(r
+        .warnings
+        .iter()
+        .any(|w| w.code == "local-buckling-not-checked"));
+    assert!(r.warnings.iter().any(|w| w.code == "torsional-not-checked"));
 }

@@ -228,10 +228,12 @@ pub fn assess(
                 "EN 1993-1-5 4.4 (Eq. 4.2, 4.3)",
             );
             out.en_effective = Some(eff);
-            if matches!(
-                section.family,
-                Family::Angle | Family::Tee | Family::Channel
-            ) {
+            if eff.area_mm2 < section.props.area_mm2
+                && matches!(
+                    section.family,
+                    Family::Angle | Family::Tee | Family::Channel
+                )
+            {
                 warn(warnings, "class4-shift-not-checked", || {
                     "Class 4 section that is not doubly symmetric: the moment N_Ed e_N from the shift of the \
                      effective centroid (EN 1993-1-1 6.2.2.5(4), 6.3.3) is not included; check it by hand"
