@@ -243,7 +243,9 @@ pub struct Properties {
     pub i_major_mm4: f64,
     /// Minor principal second moment, mm4.
     pub i_minor_mm4: f64,
-    /// Angle from the geometric y axis to the major principal axis, radians (zero unless an unequal/equal angle).
+    /// Angle from the geometric y axis to the major principal axis, radians: for shapes symmetric
+    /// about y or z, 0 when I_y >= I_z and π/2 otherwise (an RHS wider than deep, a wide tee); for
+    /// angles ½ atan2(-2 I_yz, I_y - I_z) (see [`shapes`]).
     pub principal_angle_rad: f64,
     /// Radius of gyration about the major principal axis, mm.
     pub r_major_mm: f64,
