@@ -4,7 +4,7 @@
 //! `include_str!` and parsed once (on first use) into static entries. A
 //! file opens with a comment block (`#`) naming its source, then
 //! directives (`@series`, `@shape`, `@make`, `@units`, `@corners`, `@wall`,
-//! `@tokens`), a header line naming the columns, and one row per section
+//! `@tokens`, `@aliases`), a header line naming the columns, and one row per section
 //! with the nominal dimensions and the tabulated area, second moments and
 //! mass per metre in the units the source publishes them in.
 //!
@@ -267,8 +267,11 @@ fn split_key(key: &str) -> (&str, &str, &str) {
 }
 
 /// Every spelling of a canonical key: the series letters before, after or
-/// on both sides of the numbers, with the series' alternative tokens.
-fn aliases(key: &str, tokens: &[&str]) -> Vec<String> {
+/// on both sides of the numbers, with the series' alternative tokens, and
+/// the series' other names (`@aliases`, with `{mid}` standing for the
+/// numbers: "IPB{mid}" makes "IPB200" a spelling of "HE 200 B").
+fn aliases(key: &str, spellings: &Spellings) -> Vec<String> {
+    let tokens = spellings.tokens.as_slice();
     let (lead, mid, trail) = split_key(key);
     let mut out = Vec::new();
     if mid.is_empty() {
@@ -279,6 +282,12 @@ fn aliases(key: &str, tokens: &[&str]) -> Vec<String> {
     } else {
         tokens.iter().map(|t| normalised_string(t)).collect()
     };
+    for p in &spellings.patterns {
+        let k = normalised_string(&p.replace("{mid}", mid));
+        if !k.is_empty() && !out.contains(&k) {
+            out.push(k);
+        }
+    }
     for t in &trails {
         let t = t.as_str();
         for k in [
@@ -305,7 +314,16 @@ struct Directives {
     units: &'static str,
     corners: &'static str,
     wall: &'static str,
+    spellings: Spellings,
+}
+
+/// Other spellings of a series' designations.
+#[derive(Clone, Default)]
+struct Spellings {
+    /// Alternatives for the trailing letters (`@tokens`).
     tokens: Vec<&'static str>,
+    /// Other names with `{mid}` for the numbers (`@aliases`).
+    patterns: Vec<&'static str>,
 }
 
 fn build() -> Catalogue {
@@ -320,12 +338,12 @@ fn build() -> Catalogue {
     for (file, text) in FILES {
         let first = cat.entries.len();
         match parse_file(file, text, &mut cat.entries, &mut cat.problems) {
-            Some((series, tokens)) => {
+            Some((series, spellings)) => {
                 let mut series = series;
                 series.first = first;
                 series.end = cat.entries.len();
                 for _ in first..cat.entries.len() {
-                    tokens_of.push(tokens.clone());
+                    tokens_of.push(spellings.clone());
                 }
                 cat.series.push(series);
             }
@@ -347,11 +365,12 @@ fn build() -> Catalogue {
         cat.keys.push(key);
     }
     for (i, key) in cat.keys.iter().enumerate() {
-        let tokens = tokens_of.get(i).map(Vec::as_slice).unwrap_or(&[]);
+        let none = Spellings::default();
+        let spellings = tokens_of.get(i).unwrap_or(&none);
         // The designation exactly as published, for a lookup without
         // normalising (the usual case: a member file written by the app).
         let published = cat.entries.get(i).map(|e| e.designation.to_string());
-        for alias in published.into_iter().chain(aliases(key, tokens)) {
+        for alias in published.into_iter().chain(aliases(key, spellings)) {
             match cat.index.get(alias.as_str()) {
                 Some(&j) if j != i => {
                     let a = cat.entries.get(i).map_or("?", |e| e.designation);
@@ -375,7 +394,7 @@ fn parse_file(
     text: &'static str,
     entries: &mut Vec<Entry>,
     problems: &mut Vec<String>,
-) -> Option<(Series, Vec<&'static str>)> {
+) -> Option<(Series, Spellings)> {
     let mut source = String::new();
     let mut d = Directives {
         series: "",
@@ -384,7 +403,7 @@ fn parse_file(
         units: "",
         corners: "",
         wall: "nominal",
-        tokens: Vec::new(),
+        spellings: Spellings::default(),
     };
     let mut header: Option<Vec<&'static str>> = None;
     for (n, line) in text.lines().enumerate() {
@@ -412,7 +431,10 @@ fn parse_file(
                 "units" => d.units = value,
                 "corners" => d.corners = value,
                 "wall" => d.wall = value,
-                "tokens" => d.tokens = value.split('|').map(str::trim).collect(),
+                "tokens" => d.spellings.tokens = value.split('|').map(str::trim).collect(),
+                "aliases" => {
+                    d.spellings.patterns = value.split('|').map(str::trim).collect();
+                }
                 _ => problems.push(format!(
                     "{file}.csv line {line_no}: unknown directive @{name}"
                 )),
@@ -451,7 +473,7 @@ fn parse_file(
             first: 0,
             end: 0,
         },
-        d.tokens,
+        d.spellings,
     ))
 }
 
@@ -760,6 +782,9 @@ mod tests {
         assert_eq!(d("RHS 200x100x8"), "RHS 200x100x8");
         assert_eq!(d("200 x 100 x 8.0 RHS"), "RHS 200x100x8");
         assert_eq!(d("IPE 300"), "IPE 300");
+        assert_eq!(d("IPB 300"), "HE 300 B");
+        assert_eq!(d("IPBl 300"), "HE 300 A");
+        assert_eq!(d("IPBv300"), "HE 300 M");
         assert_eq!(d("ipe300"), "IPE 300");
     }
 

@@ -61,7 +61,7 @@ const EXPECTED_COUNTS: &[(&str, usize)] = &[
     ("HE M", 24),
     ("UC", 31),
     ("UB", 38),
-    ("W", 89),
+    ("W", 106),
     ("HSS", 43),
     ("HSS round", 11),
     ("SHS EN 10210", 72),
