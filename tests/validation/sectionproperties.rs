@@ -276,3 +276,30 @@ fn p_size(spec: &SectionSpec) -> f64 {
         _ => 1.0,
     }
 }
+
+/// `properties` runs once per member check in a hot loop: it must not
+/// touch the heap. Counted with the `allocation-counter` crate (0.8), which
+/// wraps the global allocator for this test binary.
+#[test]
+fn properties_make_no_heap_allocation() {
+    let doc: Value = serde_json::from_str(VALUES).unwrap();
+    let specs: Vec<SectionSpec> = doc["cases"]
+        .as_array()
+        .unwrap()
+        .iter()
+        .map(|c| serde_json::from_value(c["spec"].clone()).unwrap())
+        .collect();
+    let mut sum = 0.0;
+    let info = allocation_counter::measure(|| {
+        for spec in &specs {
+            sum += shapes::properties(spec).map(|p| p.area_mm2).unwrap_or(0.0);
+        }
+    });
+    assert!(sum > 0.0);
+    assert_eq!(info.count_total, 0, "properties() allocated");
+    // The counter is live: describing a section builds a String.
+    let info = allocation_counter::measure(|| {
+        std::hint::black_box(shapes::describe(&specs[0]));
+    });
+    assert!(info.count_total > 0, "allocation counter saw nothing");
+}
