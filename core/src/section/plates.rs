@@ -3,17 +3,18 @@
 //! Widths are the flat widths c of EN 1993-1-1:2005 Table 5.2:
 //! - I/H: web (internal) c = h - 2tf - 2r; flange outstand (four of them)
 //!   c = (b - tw - 2r)/2 (sheet 1 and 2).
-//! - RHS/SHS: walls (internal) c = h - 3t and b - 3t, the value Table 5.2
-//!   sheet 1 allows for hollow sections when the corner radius is not
-//!   known more closely (note to the sheet: "c may conservatively be
-//!   taken as h - 3t").
+//! - RHS/SHS: walls (internal) c = h - 3t and b - 3t, the conservative
+//!   flat width for hollow sections that goes with Table 5.2 sheet 1 (as
+//!   recalled; SCI P363 tabulates c/t of hollow sections the same way).
+//!   It does not depend on the corner radius.
 //! - CHS: the tube, "width" = outside diameter d, for the d/t limits of sheet 3.
 //! - Angles: each leg as an outstand of its full length h or b, as sheet 3
 //!   uses h/t and (b + h)/2t for angles.
 //! - Channel: web (internal) c = h - 2tf - 2r; flange outstands (two)
 //!   c = b - tw - r.
-//! - Tee: flange outstands (two) c = (b - tw - 2r)/2; the stem (an
-//!   outstand) c = h - tf - r.
+//! - Tee: flange outstands (two) c = (b - tw - 2r)/2; the stem, an
+//!   outstand whose flat length is c = h - tf - r (Table 5.2 has no row of
+//!   its own for tee stems; the outstand row is the usual reading).
 //! - Solid rectangles, round bars and typed sections: no plates (they do
 //!   not buckle locally).
 //!
