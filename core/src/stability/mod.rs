@@ -630,6 +630,21 @@ pub fn twist_mode(
     let r = method::axis(method, axes, Mode::Minor, l_eq, trace, &mut scratch)?;
     for s in trace.iter_mut().skip(start) {
         s.scope = scope;
+        // The method's geometry lines describe the equivalent flexural
+        // member; say so, so the calc sheet cannot be misread.
+        match s.symbol {
+            "L_cr" => {
+                s.label = "equivalent length L_eq entering the curve";
+                s.clause = "pi sqrt(E I_z / N_cr)";
+            }
+            "L_cr/i" | "L_c/r" | "KL/r" => {
+                s.label = "equivalent slenderness L_eq / i_z";
+            }
+            "N_cr" => {
+                s.label = "elastic critical load of the twisting mode (pi^2 E I_z / L_eq^2)";
+            }
+            _ => {}
+        }
     }
     Ok(Some(ModeResult {
         mode,

@@ -309,4 +309,35 @@ mod tests {
         assert_eq!(c.symmetry, Symmetry::Double);
         assert_eq!(c.n_twist, c.n_torsional);
     }
+
+    #[test]
+    fn degenerate_inputs_neither_panic_nor_return_a_negative_load() {
+        let vals = [
+            0.0,
+            1e-300,
+            1e-6,
+            1.0,
+            1e6,
+            1e300,
+            f64::INFINITY,
+            f64::NAN,
+            -1.0,
+        ];
+        for &a in &vals {
+            for &b in &vals {
+                for &p in &[0.0, 0.3, 0.99, 1.5, -0.2, f64::NAN] {
+                    let n = flexural_torsional_general(a, b, 1e3, p, 0.1);
+                    assert!(
+                        n.is_nan() || n >= 0.0 || a < 0.0 || b < 0.0,
+                        "{a} {b} {p} -> {n}"
+                    );
+                    let q = flexural_torsional_single(a, b, p);
+                    assert!(
+                        !(q < 0.0) || a < 0.0 || b < 0.0 || p > 1.0,
+                        "{a} {b} {p} -> {q}"
+                    );
+                }
+            }
+        }
+    }
 }
