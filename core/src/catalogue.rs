@@ -855,6 +855,53 @@ mod tests {
         assert!(find_series("").is_none());
     }
 
+    proptest::proptest! {
+        // Each refusal computes suggestions over every spelling, so the case
+        // count is kept modest for the debug-build test run.
+        #![proptest_config(proptest::prelude::ProptestConfig::with_cases(64))]
+
+        #[test]
+        fn any_text_resolves_or_is_refused_without_panic(text in "\\PC{0,40}") {
+            match resolve(&text) {
+                Ok(e) => {
+                    // A hit is a spelling of that entry: same normalised key
+                    // as one of its spellings, so resolving its published
+                    // designation gives the same entry.
+                    proptest::prop_assert_eq!(resolve(e.designation).ok(), Some(e));
+                }
+                Err(Error::UnknownDesignation { designation, suggestions }) => {
+                    proptest::prop_assert_eq!(designation, text);
+                    proptest::prop_assert!(suggestions.len() <= 5);
+                }
+                Err(other) => proptest::prop_assert!(false, "{other:?}"),
+            }
+        }
+
+        #[test]
+        fn spacing_and_case_never_change_the_entry(i in 0usize..600, upper in proptest::bool::ANY, gaps in 0usize..3) {
+            let all = entries();
+            let e = &all[i % all.len()];
+            // Spaces where one token ends and the next starts (letters
+            // against digits), as people type them.
+            let mut text = String::new();
+            let mut prev: Option<char> = None;
+            for c in e.designation.chars() {
+                if let Some(p) = prev {
+                    if p.is_ascii_digit() != c.is_ascii_digit()
+                        && p.is_ascii_alphanumeric()
+                        && c.is_ascii_alphanumeric()
+                    {
+                        text.extend(std::iter::repeat_n(' ', gaps));
+                    }
+                }
+                text.push(c);
+                prev = Some(c);
+            }
+            text = if upper { text.to_uppercase() } else { text.to_lowercase() };
+            proptest::prop_assert_eq!(resolve(&text).map(|r| r.designation), Ok(e.designation));
+        }
+    }
+
     #[test]
     fn edit_distance_is_levenshtein() {
         assert_eq!(edit_distance(b"kitten", b"sitting"), 3);

@@ -559,4 +559,48 @@ mod tests {
         assert_eq!(names[2], None);
         assert_ne!(names[0], names[1]);
     }
+
+    proptest::proptest! {
+        #![proptest_config(proptest::prelude::ProptestConfig::with_cases(48))]
+
+        /// Against brute force over a whole catalogue series: the result is
+        /// the lightest passing entry, never a failing one.
+        #[test]
+        fn equals_brute_force_on_catalogue_series(
+            series in 0usize..3,
+            length in 300.0f64..8000.0,
+            axial in 0.0f64..2500.0,
+            method in 0usize..5,
+            k_minor in 0.5f64..2.0,
+            gamma in proptest::option::of(0.8f64..1.3),
+            limit in 0.5f64..1.2,
+        ) {
+            let name = ["HE B", "SHS EN 10210", "CHS EN 10219"][series];
+            let candidates: Vec<&Entry> = crate::catalogue::find_series(name)
+                .unwrap()
+                .entries()
+                .iter()
+                .collect();
+            let key = ["en1993-1-1", "aisc360-lrfd", "csa-s16", "perry-robertson", "secant"][method];
+            let mut m = member(length, axial);
+            m.method = crate::method::Method::from_key(key).unwrap();
+            m.k_minor = k_minor;
+            m.gamma_m1 = gamma;
+            let got = lightest(&m, &candidates, limit);
+            let want = candidates
+                .iter()
+                .filter_map(|e| {
+                    check_member(&with_entry(&m, e))
+                        .ok()
+                        .filter(|r| r.utilisation <= limit)
+                        .map(|_| e.mass_kg_per_m)
+                })
+                .min_by(f64::total_cmp);
+            proptest::prop_assert_eq!(got.chosen.as_ref().map(|c| c.entry.mass_kg_per_m), want);
+            if let Some(c) = &got.chosen {
+                let r = check_member(&with_entry(&m, c.entry)).unwrap();
+                proptest::prop_assert!(r.utilisation <= limit);
+            }
+        }
+    }
 }

@@ -230,6 +230,16 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         emit(&text)?;
     } else {
         let mut text = table(&selection.entries);
+        if selection
+            .entries
+            .iter()
+            .any(|e| e.nominal_wall_mm.is_some())
+        {
+            text.push_str(
+                "HSS: A, I, r and mass use the design wall t_des = 0.93 t_nom (AISC 360-16 B4.2); \
+                 the tabulated weight uses t_nom\n",
+            );
+        }
         text.push_str(&format!(
             "{} sections ({}); A, I and r computed from the dimensions, \"table\" is the tabulated mass\n",
             selection.entries.len(),
