@@ -296,7 +296,6 @@ impl Parts {
     }
 
     fn push(&mut self, p: Prim, sign: f64) {
-        debug_assert!(self.n < PARTS, "Parts capacity");
         if let Some(slot) = self.items.get_mut(self.n) {
             *slot = (p, sign);
             self.n += 1;
@@ -486,7 +485,6 @@ impl Poly {
                 return;
             }
         }
-        debug_assert!(self.n < POLY, "Poly capacity");
         if let Some(slot) = self.pts.get_mut(self.n) {
             *slot = (y, z);
             self.n += 1;
