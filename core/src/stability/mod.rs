@@ -88,16 +88,15 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
     }
     for e in c.elements() {
         let l = e.part.labels();
-        push(
-            trace,
-            Scope::Section,
-            "c",
-            l.width,
-            e.width_mm,
-            "mm",
-            clause,
-        );
-        push(trace, Scope::Section, "c/t", l.ratio, e.ratio, "-", clause);
+        // Each code's own symbols: EN c/t (d/t for tubes), AISC and CSA b/t (D/t).
+        let (w, ratio) = match (c.code, e.kind) {
+            (Code::En1993, Kind::Tube) => ("d", "d/t"),
+            (Code::En1993, _) => ("c", "c/t"),
+            (_, Kind::Tube) => ("D", "D/t"),
+            _ => ("b", "b/t"),
+        };
+        push(trace, Scope::Section, w, l.width, e.width_mm, "mm", clause);
+        push(trace, Scope::Section, ratio, l.ratio, e.ratio, "-", clause);
         push(
             trace,
             Scope::Section,
