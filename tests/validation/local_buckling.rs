@@ -572,3 +572,52 @@ fn limit_states_a_method_does_not_cover_are_warned() {
         .any(|w| w.code == "local-buckling-not-checked"));
     assert!(r.warnings.iter().any(|w| w.code == "torsional-not-checked"));
 }
+
+#[test]
+fn aisc_round_hss_in_the_check_uses_e7_7_and_refuses_beyond_its_range() {
+    // CHS 400 x 4 (D/t = 100), F_y = 50 ksi, E = 29,000 ksi: 63.8 < D/t < 261, so every mode's
+    // strength is phi F_cr A_e with A_e/A_g = 0.038 x 580/100 + 2/3 = 0.887067 (AISC 360-16 Eq. E7-7).
+    let mut m = member(
+        SectionSpec::Chs(Chs {
+            diameter_mm: 400.0,
+            wall_mm: 4.0,
+            make: HollowMake::ColdFormed,
+        }),
+        Method::AiscLrfd,
+        4000.0,
+    );
+    m.material = MaterialSpec::Custom {
+        fy_mpa: FY_50,
+        e_mpa: E_US,
+        g_mpa: None,
+    };
+    let r = check_member(&m).unwrap();
+    let a = r.section.area_mm2;
+    for mode in r
+        .modes
+        .iter()
+        .filter(|x| matches!(x.mode, Mode::Major | Mode::Minor))
+    {
+        let gross = 0.9 * mode.reduction * FY_50 * a / 1000.0;
+        assert_close(
+            mode.resistance_kn,
+            gross * 0.887_067,
+            HAND,
+            "phi F_cr A_e, E7-7, kN",
+        );
+    }
+    assert!(
+        r.passes,
+        "a light load on a round HSS inside E7-7's range is checked, not refused"
+    );
+    // D/t = 400/1.2 = 333 > 0.45 E/F_y = 261: E7-7 does not apply, the member gets no resistance.
+    m.section = SectionSpec::Chs(Chs {
+        diameter_mm: 400.0,
+        wall_mm: 1.2,
+        make: HollowMake::ColdFormed,
+    });
+    let r = check_member(&m).unwrap();
+    assert!(!r.passes);
+    assert_eq!(r.governing, Mode::Section);
+    assert!(r.warnings.iter().any(|w| w.code == "outside-code-scope"));
+}
