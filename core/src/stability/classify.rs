@@ -14,9 +14,10 @@
 //!   circular HSS (recalled from memory of the standard).
 //!
 //! Widths (common practice where the standards leave a choice):
-//! EN: c is the flat width (rolled outstands and webs between root radii,
-//! RHS walls between corner arcs, b - 3t when no radius is given); angle
-//! legs as outstands c = leg - t - r. AISC B4.1b: b = b_f/2 for I and tee
+//! EN: c is the flat width (rolled outstands and webs between root radii;
+//! RHS walls b - 3t and h - 3t whatever the corner radius, as EN 1993-1-5
+//! 4.4(2) takes b_bar); angle legs as outstands c = leg - t - r beside the
+//! angle rules h/t and (b + h)/2t. AISC B4.1b: b = b_f/2 for I and tee
 //! flanges, b = b_f for channel flanges and full leg length for angles,
 //! d = full depth for tee stems, h = d - 2(t_f + r) for rolled webs and
 //! d - 2 t_f for welded webs, HSS walls the flat width (B - 3t when the
@@ -313,9 +314,9 @@ fn raw(part: Part, kind: Kind, width: f64, t: f64, count: u8, case: u8) -> Raw {
     }
 }
 
-/// Flat width of an RHS wall of outside length `side`: between the corner
-/// arcs when a radius is given, side - 3t otherwise (EN 1993-1-5 4.4(2),
-/// AISC 360-16 B4.1b(d)).
+/// Flat width of an RHS wall of outside length `side` for AISC 360-16
+/// B4.1b(d): the clear distance less the inside corner radii when a radius
+/// is given, side - 3t otherwise.
 fn rhs_flat(side: f64, t: f64, outer: f64, inner: Option<f64>) -> f64 {
     if outer > 0.0 {
         let ri = inner.unwrap_or((outer - t).max(0.0));
@@ -394,6 +395,11 @@ pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Opti
             let t = s.wall_mm;
             let (wh, wb) = if code == Code::CsaS16 {
                 (s.depth_mm - 4.0 * t, s.width_mm - 4.0 * t)
+            } else if en {
+                // EN: c = h - 3t, b - 3t whatever the corner radius (EN 1993-1-5
+                // 4.4(2) b_bar = b - 3t; common practice for Table 5.2, as in
+                // `section::plates`).
+                (s.depth_mm - 3.0 * t, s.width_mm - 3.0 * t)
             } else {
                 (
                     rhs_flat(s.depth_mm, t, s.outer_radius_mm, s.inner_radius_mm),
@@ -569,4 +575,63 @@ pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Opti
         });
     }
     Some(out)
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::section::plates::plates;
+    use crate::section::{Flanged, HollowMake, IShape, Rhs};
+
+    #[test]
+    fn en_widths_agree_with_the_section_plates() {
+        // The EN widths here and the plate list of `section::plates` follow
+        // the same Table 5.2 reading for I, RHS, channel and tee.
+        let flanged = Flanged {
+            depth_mm: 200.0,
+            width_mm: 90.0,
+            flange_mm: 11.0,
+            web_mm: 7.0,
+            root_radius_mm: 10.0,
+        };
+        let specs = [
+            SectionSpec::I(IShape {
+                depth_mm: 300.0,
+                width_mm: 150.0,
+                flange_mm: 10.7,
+                web_mm: 7.1,
+                root_radius_mm: 15.0,
+                make: IMake::Rolled,
+            }),
+            SectionSpec::Rhs(Rhs {
+                depth_mm: 200.0,
+                width_mm: 100.0,
+                wall_mm: 6.0,
+                outer_radius_mm: 9.0,
+                inner_radius_mm: None,
+                make: HollowMake::HotFinished,
+            }),
+            SectionSpec::Channel(flanged.clone()),
+            SectionSpec::Tee(flanged),
+        ];
+        for spec in &specs {
+            let c = classify(Code::En1993, spec, 355.0, 210_000.0).unwrap();
+            let mut ours: Vec<f64> = c.elements().iter().map(|e| e.width_mm).collect();
+            let mut theirs: Vec<f64> = plates(spec).iter().map(|p| p.width_mm).collect();
+            ours.sort_by(f64::total_cmp);
+            theirs.sort_by(f64::total_cmp);
+            theirs.dedup();
+            ours.dedup();
+            assert_eq!(ours.len(), theirs.len(), "{spec:?}");
+            for (a, b) in ours.iter().zip(&theirs) {
+                assert!((a - b).abs() < 1e-9, "{spec:?}: {a} vs {b}");
+            }
+        }
+    }
 }
