@@ -85,6 +85,15 @@ fn bench(c: &mut Criterion) {
             }
         })
     });
+    // Building a catalogue section: the kept properties against computing
+    // them from the dimensions each time.
+    group.bench_function("section HE 200 B, kept", |b| {
+        b.iter(|| black_box(catalogue::section(black_box("HE 200 B"))))
+    });
+    let entry = catalogue::resolve("HE 200 B").ok();
+    group.bench_function("section HE 200 B, computed", |b| {
+        b.iter(|| black_box(entry.map(|e| e.spec.build())))
+    });
     group.finish();
 }
 

@@ -23,7 +23,7 @@ use std::hash::{BuildHasherDefault, Hasher};
 use std::sync::OnceLock;
 
 use crate::error::{Error, Result};
-use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, SectionSpec};
+use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, Section, SectionSpec};
 
 /// The data files, in the order they are listed.
 const FILES: &[(&str, &str)] = &[
@@ -129,6 +129,8 @@ struct Catalogue {
     /// Normalised canonical key of each entry, for suggestions.
     keys: Vec<String>,
     problems: Vec<String>,
+    /// Each entry's built section, computed on first use.
+    built: Vec<OnceLock<Result<Section>>>,
 }
 
 fn catalogue() -> &'static Catalogue {
@@ -333,6 +335,7 @@ fn build() -> Catalogue {
         index: Index::default(),
         keys: Vec::new(),
         problems: Vec::new(),
+        built: Vec::new(),
     };
     let mut tokens_of = Vec::new();
     for (file, text) in FILES {
@@ -386,6 +389,7 @@ fn build() -> Catalogue {
             }
         }
     }
+    cat.built = cat.entries.iter().map(|_| OnceLock::new()).collect();
     cat
 }
 
@@ -611,25 +615,47 @@ fn parse_row(
     })
 }
 
-/// Finds an entry by designation.
-pub fn resolve(designation: &str) -> Result<&'static Entry> {
+/// The index of the entry a designation names, without allocating.
+fn find(designation: &str) -> Option<usize> {
     let cat = catalogue();
-    if let Some(entry) = cat.index.get(designation).and_then(|&i| cat.entries.get(i)) {
-        return Ok(entry);
+    if let Some(&i) = cat.index.get(designation) {
+        return Some(i);
     }
-    if let Some(key) = normalise(designation, false) {
-        if let Some(entry) = cat
-            .index
-            .get(key.as_str())
-            .and_then(|&i| cat.entries.get(i))
-        {
-            return Ok(entry);
-        }
-    }
-    Err(Error::UnknownDesignation {
+    let key = normalise(designation, false)?;
+    cat.index.get(key.as_str()).copied()
+}
+
+fn unknown(designation: &str) -> Error {
+    Error::UnknownDesignation {
         designation: designation.to_string(),
         suggestions: nearest(designation, 5),
-    })
+    }
+}
+
+/// Finds an entry by designation.
+pub fn resolve(designation: &str) -> Result<&'static Entry> {
+    find(designation)
+        .and_then(|i| catalogue().entries.get(i))
+        .ok_or_else(|| unknown(designation))
+}
+
+/// The built section of a designation (its properties computed from the
+/// dimensions once per entry and kept), with the published designation.
+/// The same as building the entry's spec, without recomputing.
+pub fn section(designation: &str) -> Result<Section> {
+    let cat = catalogue();
+    let i = find(designation).ok_or_else(|| unknown(designation))?;
+    match (cat.entries.get(i), cat.built.get(i)) {
+        (Some(entry), Some(slot)) => slot
+            .get_or_init(|| {
+                entry.spec.build().map(|mut s| {
+                    s.designation = Some(entry.designation.to_string());
+                    s
+                })
+            })
+            .clone(),
+        _ => Err(unknown(designation)),
+    }
 }
 
 /// Levenshtein distance between two byte strings.
@@ -843,6 +869,27 @@ mod tests {
             }
             other => panic!("{other:?}"),
         }
+    }
+
+    #[test]
+    fn cached_section_equals_a_fresh_build() {
+        for name in [
+            "HE 200 B",
+            "heb200",
+            "W14x90",
+            "SHS 100x100x5 CF",
+            "HSS6x6x1/4",
+        ] {
+            let entry = resolve(name).unwrap();
+            let mut fresh = entry.spec.build().unwrap();
+            fresh.designation = Some(entry.designation.to_string());
+            assert_eq!(section(name).unwrap(), fresh, "{name}");
+            assert_eq!(section(name).unwrap(), fresh, "{name} (cached)");
+        }
+        assert!(matches!(
+            section("HE 201 B"),
+            Err(Error::UnknownDesignation { .. })
+        ));
     }
 
     #[test]
