@@ -284,14 +284,32 @@ fn aliases(key: &str, spellings: &Spellings) -> Vec<String> {
     } else {
         tokens.iter().map(|t| normalised_string(t)).collect()
     };
+    // A wall written as a fraction of an inch ("1/4") may also be written
+    // as a decimal ("0.25", ".25").
+    let mut mids = vec![mid.to_string()];
+    if let Some((head, frac)) = mid.rsplit_once('X') {
+        if let Some((num, den)) = frac.split_once('/') {
+            if let (Ok(n), Ok(d)) = (num.parse::<u32>(), den.parse::<u32>()) {
+                if d > 0 {
+                    let dec = normalised_string(&format!("{:.4}", f64::from(n) / f64::from(d)));
+                    mids.push(format!("{head}X{dec}"));
+                    if let Some(bare) = dec.strip_prefix('0') {
+                        mids.push(format!("{head}X{bare}"));
+                    }
+                }
+            }
+        }
+    }
     for p in &spellings.patterns {
         let k = normalised_string(&p.replace("{mid}", mid));
         if !k.is_empty() && !out.contains(&k) {
             out.push(k);
         }
     }
-    for t in &trails {
-        let t = t.as_str();
+    for (t, mid) in trails
+        .iter()
+        .flat_map(|t| mids.iter().map(move |m| (t.as_str(), m.as_str())))
+    {
         for k in [
             format!("{lead}{mid}{t}"),
             format!("{t}{mid}{lead}"),
@@ -801,6 +819,10 @@ mod tests {
         assert_eq!(d("CF SHS 100x100x5"), "SHS 100x100x5 CF");
         assert_eq!(d("HSS6x6x1/4"), "HSS6x6x1/4");
         assert_eq!(d("HSS 6 x 6 x 1/4"), "HSS6x6x1/4");
+        assert_eq!(d("HSS6x6x0.25"), "HSS6x6x1/4");
+        assert_eq!(d("HSS 6x6x.250"), "HSS6x6x1/4");
+        assert_eq!(d("HSS8x8x5/16"), "HSS8x8x5/16");
+        assert_eq!(d("HSS8x8x0.3125"), "HSS8x8x5/16");
         assert_eq!(d("HSS16.000x0.500"), "HSS16.000x0.500");
         assert_eq!(d("HSS16x0.5"), "HSS16.000x0.500");
         assert_eq!(d("CHS 168.3x8.0"), "CHS 168.3x8");
