@@ -706,6 +706,7 @@ pub fn nearest(designation: &str, n: usize) -> Vec<String> {
     if query.is_empty() {
         return Vec::new();
     }
+    let query_numbers = numbers(&query);
     let mut best: Vec<(usize, usize)> = vec![(usize::MAX, usize::MAX); cat.entries.len()];
     for (key, &i) in &cat.index {
         let dist = edit_distance(query.as_bytes(), key.as_bytes());
@@ -715,11 +716,41 @@ pub fn nearest(designation: &str, n: usize) -> Vec<String> {
             }
         }
     }
-    best.sort_by_key(|&(dist, i)| (dist, i));
-    best.into_iter()
+    // Equal edit distances are ordered by how close the numbers are
+    // (sum of |ln(a / b)| over the dimensions), so "W10x50" suggests
+    // "W10x54" before "W10x30".
+    let closeness = |i: usize| -> f64 {
+        let Some(key) = cat.keys.get(i) else {
+            return f64::INFINITY;
+        };
+        let theirs = numbers(key);
+        if theirs.len() != query_numbers.len() {
+            return f64::INFINITY;
+        }
+        query_numbers
+            .iter()
+            .zip(&theirs)
+            .map(|(a, b)| (a / b).ln().abs())
+            .sum::<f64>()
+    };
+    let mut ranked: Vec<(usize, f64, usize)> = best
+        .into_iter()
         .filter(|&(dist, _)| dist != usize::MAX)
+        .map(|(dist, i)| (dist, closeness(i), i))
+        .collect();
+    ranked.sort_by(|a, b| a.0.cmp(&b.0).then(a.1.total_cmp(&b.1)).then(a.2.cmp(&b.2)));
+    ranked
+        .into_iter()
         .take(n)
-        .filter_map(|(_, i)| cat.entries.get(i).map(|e| e.designation.to_string()))
+        .filter_map(|(_, _, i)| cat.entries.get(i).map(|e| e.designation.to_string()))
+        .collect()
+}
+
+/// The positive numbers in a normalised key ("HSS6X6X1/4" gives 6, 6, 1, 4).
+fn numbers(key: &str) -> Vec<f64> {
+    key.split(|c: char| !(c.is_ascii_digit() || c == '.'))
+        .filter_map(|t| t.parse::<f64>().ok())
+        .filter(|v| *v > 0.0)
         .collect()
 }
 
@@ -853,6 +884,12 @@ mod tests {
                 );
             }
             other => panic!("expected UnknownDesignation, got {other:?}"),
+        }
+        match resolve("W10x50") {
+            Err(Error::UnknownDesignation { suggestions, .. }) => {
+                assert_eq!(suggestions.first().map(String::as_str), Some("W10x54"));
+            }
+            other => panic!("{other:?}"),
         }
         match resolve("") {
             Err(Error::UnknownDesignation { suggestions, .. }) => assert!(suggestions.is_empty()),
