@@ -53,7 +53,7 @@ pub struct ModeResult {
     /// Geometric slenderness L_cr / r (for torsional modes, the equivalent
     /// slenderness that gives the same elastic critical stress).
     pub slenderness: f64,
-    /// Elastic critical load N_cr, kN.
+    /// Elastic critical load N_cr, kN (0 for the section mode, which has none).
     pub critical_kn: f64,
     /// Relative (non-dimensional) slenderness as the method defines it.
     pub relative_slenderness: f64,
@@ -265,7 +265,18 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         modes.push(t);
     }
     if assessment.refused {
-        modes.push(stability::refused_mode());
+        // Outside the code's scope: no number at all, so nothing can pass
+        // by accident; the reason is the scope warning's message.
+        let reason = warnings
+            .iter()
+            .find(|w| w.code == "outside-code-scope")
+            .map(|w| w.message.clone())
+            .unwrap_or_else(|| "the section is outside the scope of this code".into());
+        return Err(crate::error::Error::NotApplicable {
+            method: method.key(),
+            reason,
+        }
+        .in_member(&m.id));
     } else if method == Method::En1993 {
         modes.push(stability::en_section_mode(input, &assessment, &mut trace));
     }

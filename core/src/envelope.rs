@@ -51,7 +51,14 @@ pub fn sample(
         let lambda = from + (to - from) * (k as f64) / (steps as f64);
         scratch.clear();
         warnings.clear();
-        let res = method::axis(method, &input, mode, lambda * r, &mut scratch, &mut warnings)?;
+        let res = method::axis(
+            method,
+            &input,
+            mode,
+            lambda * r,
+            &mut scratch,
+            &mut warnings,
+        )?;
         out.push(Point {
             slenderness: lambda,
             euler_mpa: std::f64::consts::PI.powi(2) * e / (lambda * lambda),

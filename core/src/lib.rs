@@ -33,5 +33,6 @@ pub use error::Error;
 pub use member::Member;
 
 /// The caution shown beside every result, in every front end.
-pub const CAUTION: &str = "Strutline is a checking aid for compression members. Verify every result \
+pub const CAUTION: &str =
+    "Strutline is a checking aid for compression members. Verify every result \
 against the governing design code, its national annex and the judgement of a licensed engineer.";

@@ -317,7 +317,18 @@ fn resistance_bound_holds_for_every_method_and_entry() {
             let mut m = sizing::with_entry(&member("B", length, 100.0, method), e);
             m.gamma_m1 = gamma;
             m.k_minor = 0.7;
-            let r = check_member(&m).unwrap();
+            let r = match check_member(&m) {
+                Ok(r) => r,
+                // A section outside the method's scope (slender CHS under EN 1993 or
+                // AISC E7-7, Class 4 under CSA) is refused with no number at all.
+                Err(strutline_core::Error::InMember { source, .. })
+                    if matches!(*source, strutline_core::Error::NotApplicable { .. }) =>
+                {
+                    n += 1;
+                    continue;
+                }
+                Err(e) => panic!("{}: {e}", e),
+            };
             let section = m.section.build().unwrap();
             let material = strutline_core::material::resolve(&m.material, &section).unwrap();
             let lengths = m.buckling_lengths().unwrap();

@@ -484,18 +484,30 @@ fn en_refuses_a_chs_beyond_class_3() {
         wall_mm: 4.0,
         make: HollowMake::HotFinished,
     });
-    let r = check_member(&member(spec, Method::En1993, 2000.0)).unwrap();
-    assert!(!r.passes);
-    assert_eq!(r.governing, Mode::Section);
-    assert_eq!(r.resistance_kn, 0.0);
-    assert!(r.warnings.iter().any(|w| w.code == "outside-code-scope"));
+    // The check refuses with a typed error naming the method and the reason, so no
+    // number can be mistaken for a resistance.
+    let e = check_member(&member(spec, Method::En1993, 2000.0)).unwrap_err();
+    assert_not_applicable(&e, "en1993-1-1");
+}
+
+/// The refusal of a member outside a code's scope.
+fn assert_not_applicable(e: &strutline_core::Error, key: &str) {
+    match e {
+        strutline_core::Error::InMember { source, .. } => match source.as_ref() {
+            strutline_core::Error::NotApplicable { method, reason } => {
+                assert_eq!(*method, key);
+                assert!(!reason.is_empty());
+            }
+            other => panic!("expected NotApplicable, got {other:?}"),
+        },
+        other => panic!("expected an error in the member, got {other:?}"),
+    }
 }
 
 #[test]
 fn csa_refuses_class_4_with_a_warning() {
-    let r = check_member(&member(shs(300.0, 6.0), Method::CsaS16, 2000.0)).unwrap();
-    assert!(!r.passes);
-    assert!(r.warnings.iter().any(|w| w.code == "outside-code-scope"));
+    let e = check_member(&member(shs(300.0, 6.0), Method::CsaS16, 2000.0)).unwrap_err();
+    assert_not_applicable(&e, "csa-s16");
 }
 
 #[test]
@@ -616,8 +628,6 @@ fn aisc_round_hss_in_the_check_uses_e7_7_and_refuses_beyond_its_range() {
         wall_mm: 1.2,
         make: HollowMake::ColdFormed,
     });
-    let r = check_member(&m).unwrap();
-    assert!(!r.passes);
-    assert_eq!(r.governing, Mode::Section);
-    assert!(r.warnings.iter().any(|w| w.code == "outside-code-scope"));
+    let e = check_member(&m).unwrap_err();
+    assert_not_applicable(&e, m.method.key());
 }

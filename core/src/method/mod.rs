@@ -128,7 +128,9 @@ pub fn axis(
 ) -> Result<ModeResult> {
     match method {
         Method::En1993 => en1993::axis(input, mode, lcr_mm, trace, warnings),
-        Method::AiscLrfd => aisc360::axis(input, mode, lcr_mm, aisc360::Basis::Lrfd, trace, warnings),
+        Method::AiscLrfd => {
+            aisc360::axis(input, mode, lcr_mm, aisc360::Basis::Lrfd, trace, warnings)
+        }
         Method::AiscAsd => aisc360::axis(input, mode, lcr_mm, aisc360::Basis::Asd, trace, warnings),
         Method::CsaS16 => csa_s16::axis(input, mode, lcr_mm, trace, warnings),
         Method::En1995 => en1995::axis(input, mode, lcr_mm, trace, warnings),

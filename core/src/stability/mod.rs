@@ -320,7 +320,8 @@ pub fn en_section_mode(input: &Input<'_>, a: &Assessment, trace: &mut Trace) -> 
         mode: Mode::Section,
         buckling_length_mm: 0.0,
         slenderness: 0.0,
-        critical_kn: f64::INFINITY,
+        // The section mode has no elastic critical load; 0 marks "none".
+        critical_kn: 0.0,
         relative_slenderness: 0.0,
         reduction: if gross > 0.0 {
             n * GAMMA_M0 / gross
@@ -587,19 +588,12 @@ pub fn twist_mode(
     let n = crit.n_twist;
     let a = p.area_mm2;
     if !(n > 0.0 && n.is_finite()) {
-        warn(warnings, "no-torsional-stiffness", || {
-            "the section has no torsional or warping stiffness: its twisting critical load is zero"
-                .to_string()
+        return Err(crate::error::Error::OutOfRange {
+            field: "torsion_mm4",
+            value: input.section.props.torsion_mm4,
+            expected: "a section with torsional or warping stiffness: with none, its twisting \
+                       critical load is zero; give torsion_mm4 (and warping_mm6)",
         });
-        return Ok(Some(ModeResult {
-            mode,
-            buckling_length_mm: lengths.torsion_mm,
-            slenderness: f64::INFINITY,
-            critical_kn: 0.0,
-            relative_slenderness: f64::INFINITY,
-            reduction: 0.0,
-            resistance_kn: 0.0,
-        }));
     }
     let l_eq = PI * (e * p.i_minor_mm4 / n).sqrt();
     let lambda_eq = PI * (e * a / n).sqrt();

@@ -35,11 +35,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     Ok(if all_pass { 0 } else { 1 })
 }
 
-fn table(
-    title: &str,
-    members: &[strutline_core::Member],
-    results: &[CheckResult],
-) -> String {
+fn table(title: &str, members: &[strutline_core::Member], results: &[CheckResult]) -> String {
     let mut rows: Vec<[String; 8]> = vec![[
         "id".into(),
         "section".into(),

@@ -1,0 +1,412 @@
+//! Property-based tests over every section kind, material kind and method:
+//! no panic and no NaN or infinite result on any input the reader accepts,
+//! invalid input always a typed error, and the physical sense of the
+//! results (resistance never rises with buckling length, reductions within
+//! (0, 1], design resistance never above the squash load, Perry-Robertson
+//! tending to the lesser of Euler and yield as the bow vanishes, the two
+//! axes of a symmetric section agreeing).
+
+#![allow(
+    clippy::unwrap_used,
+    clippy::expect_used,
+    clippy::indexing_slicing,
+    clippy::panic
+)]
+
+use proptest::prelude::*;
+use strutline_core::check::{check_member, CheckResult, Mode};
+use strutline_core::material::MaterialSpec;
+use strutline_core::member::{Curve, LoadDuration, Member};
+use strutline_core::method::Method;
+use strutline_core::section::{
+    Angle, Chs, Flanged, Given, HollowMake, IMake, IShape, Rect, Rhs, Round, SectionSpec,
+};
+use strutline_core::Error;
+
+fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member {
+    Member {
+        id: "P".into(),
+        note: None,
+        section,
+        material,
+        length_mm: 3000.0,
+        k_major: 1.0,
+        k_minor: 1.0,
+        k_torsion: 1.0,
+        lcr_major_mm: None,
+        lcr_minor_mm: None,
+        lcr_torsion_mm: None,
+        axial_kn: 100.0,
+        method,
+        gamma_m1: None,
+        curve_major: None,
+        curve_minor: None,
+        bow_mm: None,
+        eccentricity_mm: None,
+        service_class: None,
+        load_duration: None,
+        csa_n: None,
+    }
+}
+
+/// Any f64 at all, including NaN, infinities, zero and negatives.
+fn wild() -> impl Strategy<Value = f64> {
+    prop_oneof![
+        Just(f64::NAN),
+        Just(f64::INFINITY),
+        Just(f64::NEG_INFINITY),
+        Just(0.0),
+        Just(-1.0),
+        Just(1e-300),
+        Just(1e300),
+        -1e6..1e6f64,
+    ]
+}
+
+/// Plausible steel sections (every shape the engine computes).
+fn steel_section() -> impl Strategy<Value = SectionSpec> {
+    prop_oneof![
+        (
+            80.0..1000.0f64,
+            0.3..1.1f64,
+            0.03..0.12f64,
+            0.3..0.9f64,
+            0.0..1.5f64,
+            any::<bool>()
+        )
+            .prop_map(|(h, bh, tfh, twtf, rtw, welded)| {
+                let b = (h * bh).max(50.0);
+                let tf = (h * tfh).max(4.0);
+                let tw = (tf * twtf).max(3.0);
+                SectionSpec::I(IShape {
+                    depth_mm: h,
+                    width_mm: b,
+                    flange_mm: tf,
+                    web_mm: tw,
+                    root_radius_mm: if welded { 0.0 } else { tw * rtw },
+                    make: if welded { IMake::Welded } else { IMake::Rolled },
+                })
+            }),
+        (
+            40.0..500.0f64,
+            0.4..1.0f64,
+            0.02..0.12f64,
+            0.0..2.5f64,
+            any::<bool>()
+        )
+            .prop_map(|(h, bh, th, ro, cold)| {
+                let t = (h * bh * th).max(2.0);
+                SectionSpec::Rhs(Rhs {
+                    depth_mm: h,
+                    width_mm: h * bh,
+                    wall_mm: t,
+                    outer_radius_mm: (t * ro).min(h * bh * 0.3),
+                    inner_radius_mm: None,
+                    make: if cold {
+                        HollowMake::ColdFormed
+                    } else {
+                        HollowMake::HotFinished
+                    },
+                })
+            }),
+        (30.0..900.0f64, 0.01..0.2f64, any::<bool>()).prop_map(|(d, td, cold)| {
+            SectionSpec::Chs(Chs {
+                diameter_mm: d,
+                wall_mm: (d * td).max(1.5),
+                make: if cold {
+                    HollowMake::ColdFormed
+                } else {
+                    HollowMake::HotFinished
+                },
+            })
+        }),
+        (30.0..250.0f64, 0.5..1.0f64, 0.06..0.15f64).prop_map(|(h, bh, th)| {
+            let t = h * th;
+            SectionSpec::Angle(Angle {
+                depth_mm: h,
+                width_mm: h * bh,
+                thickness_mm: t,
+                root_radius_mm: t,
+                toe_radius_mm: t * 0.5,
+            })
+        }),
+        (
+            80.0..400.0f64,
+            0.25..0.45f64,
+            0.04..0.08f64,
+            0.5..0.9f64,
+            any::<bool>()
+        )
+            .prop_map(|(h, bh, tfh, twtf, tee)| {
+                let tf = h * tfh;
+                let tw = tf * twtf;
+                let f = Flanged {
+                    depth_mm: h,
+                    width_mm: if tee { h * 0.9 } else { h * bh },
+                    flange_mm: tf,
+                    web_mm: tw,
+                    root_radius_mm: tw,
+                };
+                if tee {
+                    SectionSpec::Tee(f)
+                } else {
+                    SectionSpec::Channel(f)
+                }
+            }),
+        (20.0..240.0f64, 20.0..240.0f64).prop_map(|(h, b)| SectionSpec::Rect(Rect {
+            depth_mm: h,
+            width_mm: b
+        })),
+        (10.0..240.0f64).prop_map(|d| SectionSpec::Round(Round { diameter_mm: d })),
+        (1000.0..50000.0f64, 1e6..1e9f64, 0.1..1.0f64).prop_map(|(a, i, ratio)| {
+            SectionSpec::Given(Given {
+                area_mm2: a,
+                i_major_mm4: i,
+                i_minor_mm4: i * ratio,
+                torsion_mm4: None,
+                warping_mm6: None,
+            })
+        }),
+    ]
+}
+
+fn steel_material() -> impl Strategy<Value = MaterialSpec> {
+    prop_oneof![
+        prop::sample::select(vec!["S235", "S275", "S355", "S460", "A992", "A36", "350W"]).prop_map(
+            |g| MaterialSpec::Grade {
+                grade: g.to_string()
+            }
+        ),
+        (200.0..700.0f64, 190_000.0..215_000.0f64).prop_map(|(fy, e)| MaterialSpec::Custom {
+            fy_mpa: fy,
+            e_mpa: e,
+            g_mpa: None
+        }),
+    ]
+}
+
+fn steel_method() -> impl Strategy<Value = Method> {
+    prop::sample::select(vec![
+        Method::En1993,
+        Method::AiscLrfd,
+        Method::AiscAsd,
+        Method::CsaS16,
+        Method::PerryRobertson,
+        Method::Secant,
+        Method::Euler,
+    ])
+}
+
+fn timber_member() -> impl Strategy<Value = Member> {
+    (
+        40.0..400.0f64,
+        40.0..400.0f64,
+        prop::sample::select(vec!["C16", "C24", "C30", "GL24h", "GL28h", "GL32h"]),
+        1u8..=3,
+        prop::sample::select(vec![
+            LoadDuration::Permanent,
+            LoadDuration::Long,
+            LoadDuration::Medium,
+            LoadDuration::Short,
+            LoadDuration::Instantaneous,
+        ]),
+        500.0..8000.0f64,
+    )
+        .prop_map(|(h, b, grade, sc, ld, l)| {
+            let mut m = base(
+                SectionSpec::Rect(Rect {
+                    depth_mm: h,
+                    width_mm: b,
+                }),
+                MaterialSpec::Grade {
+                    grade: grade.into(),
+                },
+                Method::En1995,
+            );
+            m.service_class = Some(sc);
+            m.load_duration = Some(ld);
+            m.length_mm = l;
+            m
+        })
+}
+
+fn steel_member() -> impl Strategy<Value = Member> {
+    (
+        steel_section(),
+        steel_material(),
+        steel_method(),
+        200.0..15000.0f64,
+        0.5..2.5f64,
+        0.5..2.5f64,
+        0.0..5000.0f64,
+        prop::option::of(prop::sample::select(Curve::ALL.to_vec())),
+    )
+        .prop_map(|(s, mat, meth, l, ky, kz, n, curve)| {
+            let mut m = base(s, mat, meth);
+            m.length_mm = l;
+            m.k_major = ky;
+            m.k_minor = kz;
+            m.axial_kn = n;
+            m.curve_minor = curve;
+            m
+        })
+}
+
+fn any_member() -> impl Strategy<Value = Member> {
+    prop_oneof![4 => steel_member(), 1 => timber_member()]
+}
+
+/// The check of a plausible member: a result, or `None` when the method
+/// refuses the section as outside its scope (a typed `NotApplicable`, e.g.
+/// a slender CHS under EN 1993-1-1). Any other error fails the test.
+fn checked(m: &Member) -> Option<CheckResult> {
+    match check_member(m) {
+        Ok(r) => Some(r),
+        Err(Error::InMember { source, .. }) if matches!(*source, Error::NotApplicable { .. }) => {
+            None
+        }
+        Err(e) => panic!("plausible member refused: {e}\n{m:?}"),
+    }
+}
+
+fn finite_result(m: &Member) {
+    let Some(r) = checked(m) else { return };
+    assert!(
+        r.resistance_kn.is_finite() && r.resistance_kn > 0.0,
+        "{r:?}"
+    );
+    assert!(r.utilisation.is_finite() && r.utilisation >= 0.0, "{r:?}");
+    for mode in &r.modes {
+        assert!(
+            mode.reduction > 0.0 && mode.reduction <= 1.0 + 1e-12,
+            "reduction outside (0, 1]: {mode:?}"
+        );
+        for v in [
+            mode.buckling_length_mm,
+            mode.slenderness,
+            mode.critical_kn,
+            mode.relative_slenderness,
+            mode.resistance_kn,
+        ] {
+            assert!(v.is_finite(), "non-finite value in {mode:?}");
+        }
+    }
+    for step in &r.trace {
+        assert!(step.value.is_finite(), "non-finite step {step:?}");
+    }
+}
+
+proptest! {
+    #![proptest_config(ProptestConfig { cases: 400, .. ProptestConfig::default() })]
+
+    #[test]
+    fn plausible_members_give_finite_results(m in any_member()) {
+        finite_result(&m);
+    }
+
+    #[test]
+    fn design_resistance_never_exceeds_squash_load(m in any_member()) {
+        let Some(r) = checked(&m) else { return Ok(()) };
+        prop_assert!(r.resistance_kn <= r.squash_kn * (1.0 + 1e-9), "{} > {}", r.resistance_kn, r.squash_kn);
+    }
+
+    #[test]
+    fn resistance_never_rises_with_length(m in any_member(), stretch in 1.0..3.0f64) {
+        let Some(short) = checked(&m) else { return Ok(()) };
+        let mut longer = m.clone();
+        longer.length_mm *= stretch;
+        let long = checked(&longer).unwrap();
+        prop_assert!(
+            long.resistance_kn <= short.resistance_kn * (1.0 + 1e-9),
+            "{} at {} mm > {} at {} mm", long.resistance_kn, longer.length_mm, short.resistance_kn, m.length_mm
+        );
+    }
+
+    #[test]
+    fn any_numbers_give_a_result_or_a_typed_error(
+        s in steel_section(), mat in steel_material(), meth in steel_method(),
+        l in wild(), k in wild(), n in wild(), dim in wild(), pick in 0usize..4
+    ) {
+        let mut m = base(s, mat, meth);
+        match pick {
+            0 => m.length_mm = l,
+            1 => m.k_minor = k,
+            2 => m.axial_kn = n,
+            _ => match &mut m.section {
+                SectionSpec::I(i) => i.flange_mm = dim,
+                SectionSpec::Rhs(r) => r.wall_mm = dim,
+                SectionSpec::Chs(c) => c.wall_mm = dim,
+                SectionSpec::Angle(a) => a.thickness_mm = dim,
+                SectionSpec::Channel(f) | SectionSpec::Tee(f) => f.web_mm = dim,
+                SectionSpec::Rect(r) => r.width_mm = dim,
+                SectionSpec::Round(r) => r.diameter_mm = dim,
+                SectionSpec::Given(g) => g.area_mm2 = dim,
+                SectionSpec::Catalogue(_) => {}
+            },
+        }
+        match check_member(&m) {
+            Ok(r) => {
+                prop_assert!(r.resistance_kn.is_finite() && r.utilisation.is_finite(), "{r:?}");
+            }
+            Err(e) => prop_assert!(!e.to_string().is_empty()),
+        }
+    }
+
+    #[test]
+    fn perry_robertson_tends_to_euler_or_yield_as_bow_vanishes(m in steel_member()) {
+        let mut pr = m.clone();
+        pr.method = Method::PerryRobertson;
+        pr.bow_mm = Some(1e-9);
+        let mut eu = m;
+        eu.method = Method::Euler;
+        let (Some(a), Some(b)) = (checked(&pr), checked(&eu)) else { return Ok(()) };
+        // Flexural modes only: the torsional modes are the same for both.
+        for mode in [Mode::Major, Mode::Minor] {
+            let pa = a.modes.iter().find(|x| x.mode == mode).unwrap();
+            let pb = b.modes.iter().find(|x| x.mode == mode).unwrap();
+            let rel = (pa.resistance_kn - pb.resistance_kn).abs() / pb.resistance_kn;
+            prop_assert!(rel < 1e-3, "{mode:?}: Perry-Robertson {} vs Euler {}", pa.resistance_kn, pb.resistance_kn);
+        }
+    }
+
+    #[test]
+    fn axes_of_a_symmetric_section_agree(
+        d in 30.0..240.0f64, t in 0.02..0.15f64, meth in steel_method(), pick in 0usize..3
+    ) {
+        let s = match pick {
+            0 => SectionSpec::Chs(Chs { diameter_mm: d, wall_mm: d * t, make: HollowMake::HotFinished }),
+            1 => SectionSpec::Round(Round { diameter_mm: d }),
+            _ => SectionSpec::Rhs(Rhs {
+                depth_mm: d, width_mm: d, wall_mm: d * t * 0.5, outer_radius_mm: d * t,
+                inner_radius_mm: None, make: HollowMake::ColdFormed,
+            }),
+        };
+        let m = base(s, MaterialSpec::Grade { grade: "S355".into() }, meth);
+        let Some(r) = checked(&m) else { return Ok(()) };
+        let major = r.modes.iter().find(|x| x.mode == Mode::Major).unwrap();
+        let minor = r.modes.iter().find(|x| x.mode == Mode::Minor).unwrap();
+        let rel = (major.resistance_kn - minor.resistance_kn).abs() / major.resistance_kn;
+        prop_assert!(rel < 1e-9, "major {} minor {}", major.resistance_kn, minor.resistance_kn);
+    }
+
+    #[test]
+    fn member_file_reader_never_panics_on_text(text in ".{0,400}") {
+        let _ = strutline_core::file::parse(&text);
+    }
+
+    #[test]
+    fn member_file_reader_never_panics_on_mutated_files(cut in 0usize..900, insert in ".{0,8}") {
+        let good = include_str!("../../examples/depot-mezzanine.json");
+        let mut chars: Vec<char> = good.chars().collect();
+        let at = cut.min(chars.len());
+        chars.splice(at..at, insert.chars());
+        let text: String = chars.into_iter().collect();
+        if let Ok(file) = strutline_core::file::parse(&text) {
+            for m in &file.members {
+                if let Ok(r) = check_member(m) {
+                    prop_assert!(r.utilisation.is_finite());
+                }
+            }
+        }
+    }
+}
