@@ -2,15 +2,15 @@
 //!
 //! Euler's hyperbola sigma_cr = pi^2 E / lambda^2, the strength plateau
 //! f_y, and the design stress of the member's own method, sampled by
-//! running the method at the buckling length lambda * i. The chart and the
-//! check can therefore never disagree.
+//! running the whole check at the buckling length lambda * i. The chart and
+//! the check can therefore never disagree.
 
 use serde::Serialize;
 
-use crate::check::{Mode, Prepared, Warning};
+use crate::check::{self, Mode, Prepared};
 use crate::error::Result;
-use crate::method::{self, Method};
-use crate::trace::Trace;
+use crate::member::{MAX_LENGTH_MM, MIN_LENGTH_MM};
+use crate::method::{Input, Method};
 
 /// One sample of the envelope.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -27,6 +27,12 @@ pub struct Point {
 
 /// Samples the envelope of `prepared` for `method` about `mode`'s axis
 /// from slenderness `from` to `to` in `steps` intervals (`steps + 1` points).
+///
+/// Each sample runs the whole check ([`check::run`]) with that axis's
+/// buckling length set to `lambda * i`, so a Class 4 effective area, the
+/// AISC E7 reduction and every other part of the check shape the curve
+/// exactly as they shape the member's own result. Buckling lengths are
+/// kept within the member file's range (1 mm to 10 km).
 pub fn sample(
     prepared: &Prepared,
     method: Method,
@@ -35,36 +41,87 @@ pub fn sample(
     to: f64,
     steps: usize,
 ) -> Result<Vec<Point>> {
-    let input = prepared.input();
-    let p = &input.section.props;
+    let section = &prepared.section;
+    let p = &section.props;
     let r = match mode {
         Mode::Major => p.r_major_mm,
         _ => p.r_minor_mm,
     };
-    let (f, e) = input.material.strength_and_modulus();
+    let (f, e) = prepared.material.strength_and_modulus();
     let steps = steps.max(1);
-    let from = from.max(1e-3);
+    let from = from.max(0.0);
+    let mut probe = prepared.member.clone();
     let mut out = Vec::with_capacity(steps + 1);
-    let mut scratch = Trace::with_capacity(16);
-    let mut warnings: Vec<Warning> = Vec::new();
     for k in 0..=steps {
         let lambda = from + (to - from) * (k as f64) / (steps as f64);
-        scratch.clear();
-        warnings.clear();
-        let res = method::axis(
-            method,
-            &input,
-            mode,
-            lambda * r,
-            &mut scratch,
-            &mut warnings,
-        )?;
+        let lcr = (lambda * r).clamp(MIN_LENGTH_MM, MAX_LENGTH_MM);
+        match mode {
+            Mode::Major => probe.lcr_major_mm = Some(lcr),
+            _ => probe.lcr_minor_mm = Some(lcr),
+        }
+        let input = Input {
+            member: &probe,
+            section,
+            material: &prepared.material,
+        };
+        let result = check::run(&input, method)?;
+        let axis = result
+            .modes
+            .iter()
+            .find(|x| x.mode == mode)
+            .map_or(result.resistance_kn, |x| x.resistance_kn);
+        let lambda_used = lcr / r;
         out.push(Point {
-            slenderness: lambda,
-            euler_mpa: std::f64::consts::PI.powi(2) * e / (lambda * lambda),
+            slenderness: lambda_used,
+            euler_mpa: std::f64::consts::PI.powi(2) * e / (lambda_used * lambda_used),
             yield_mpa: f,
-            design_mpa: res.resistance_kn * 1000.0 / p.area_mm2,
+            design_mpa: axis * 1000.0 / p.area_mm2,
         });
     }
     Ok(out)
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::file;
+
+    #[test]
+    fn the_curve_passes_through_the_members_own_resistance() {
+        let text = include_str!("../../examples/depot-mezzanine.json");
+        let mut f = file::parse(text).unwrap();
+        // A Class 4 square hollow section (c/t = 71 > 42 eps = 34) under EN 1993-1-1 and AISC:
+        // its effective area must shape the curve as it shapes the check.
+        for method in ["en1993-1-1", "aisc360-lrfd"] {
+            let slender = format!(
+                r#"{{"id": "S-{method}", "section": {{"kind": "rhs", "depth_mm": 300, "width_mm": 300,
+                "wall_mm": 4, "outer_radius_mm": 8, "make": "cold-formed"}},
+                "material": {{"grade": "S355"}}, "length_mm": 4000, "axial_kn": 500,
+                "method": "{method}"}}"#
+            );
+            f.members.push(serde_json::from_str(&slender).unwrap());
+        }
+        for m in &f.members {
+            let prepared = Prepared::new(m).unwrap();
+            let own = prepared.check().unwrap();
+            for axis in [Mode::Major, Mode::Minor] {
+                let mode = own.modes.iter().find(|x| x.mode == axis).unwrap();
+                let lambda = mode.slenderness;
+                let pts = sample(&prepared, m.method, axis, lambda, lambda, 1).unwrap();
+                let design = pts[0].design_mpa * prepared.section.props.area_mm2 / 1000.0;
+                assert!(
+                    (design - mode.resistance_kn).abs() <= 1e-9 * mode.resistance_kn,
+                    "{} {axis:?}: curve {design} kN vs check {} kN",
+                    m.id,
+                    mode.resistance_kn
+                );
+            }
+        }
+    }
 }
