@@ -199,21 +199,24 @@ function thousandMembers() {
   return members;
 }
 
-async function measureThousand() {
-  const members = thousandMembers();
-  const file = memberFile("Grain store (invented, 1,000 members)", members);
-  // The engine must accept every member, or the measurement means nothing.
-  let cliChecked = null;
+const THOUSAND = memberFile("Grain store (invented, 1,000 members)", thousandMembers());
+
+// The engine must accept every member, or the measurement means nothing.
+function cliThousand() {
   try {
     const started = process.hrtime.bigint();
-    const cli = cliCheck(file);
-    cliChecked = {
+    const cli = cliCheck(THOUSAND);
+    return {
       results: cli.results.length,
       wall_ms_including_cargo: Number(process.hrtime.bigint() - started) / 1e6,
     };
   } catch (e) {
-    cliChecked = { error: String(e.message || e).slice(0, 300) };
+    return { error: String(e.message || e).slice(0, 300) };
   }
+}
+
+async function measureThousand() {
+  const file = THOUSAND;
   const text = workspaceText([file]);
   const runs = [];
   let rows = null;
@@ -256,7 +259,7 @@ async function measureThousand() {
       await close();
     }
   }
-  return { runs, rows, cliChecked };
+  return { runs, rows };
 }
 
 function machine(browserVersion) {
@@ -312,6 +315,7 @@ try {
   console.log(`edit: not measured: ${report.errors.edit}`);
 }
 
+const thousandCli = cliThousand();
 try {
   const th = await measureThousand();
   const toFrame = th.runs.map((r) => (r.ready === null ? NaN : r.frame - r.ready));
@@ -319,7 +323,7 @@ try {
   report.thousand = {
     runs: th.runs,
     rows_in_page: th.rows,
-    cli: th.cliChecked,
+    cli: thousandCli,
     ready_to_frame_median_ms: median(toFrame),
     ready_to_mounted_median_ms: median(toMount),
   };
@@ -333,7 +337,7 @@ report.dist = { gz_bytes: DIST_GZ, budget_bytes: DIST_BUDGET };
 
 const fr = report.first_render || {};
 const ed = report.edit || {};
-const th = report.thousand || {};
+const th = report.thousand || { cli: thousandCli };
 const lines = [
   "# Browser measurements",
   "",

@@ -71,7 +71,14 @@ export function ensureOut() {
 /** Runs `strutline check FILE --json` on a member file (object) and returns
  * the parsed `{"results": [...]}`. The exit status (1 when a member is
  * over capacity) is not an error; an unparsable output is. */
+const cliCache = new Map();
 export function cliCheck(memberFile) {
+  const key = JSON.stringify(memberFile);
+  if (!cliCache.has(key)) cliCache.set(key, cliCheckUncached(memberFile));
+  return cliCache.get(key);
+}
+
+function cliCheckUncached(memberFile) {
   const dir = mkdtempSync(join(tmpdir(), "strutline-cli-"));
   const file = join(dir, "members.json");
   writeFileSync(file, JSON.stringify(memberFile, null, 2));

@@ -13,7 +13,8 @@ use crate::{browser, dist, serve, util};
 /// `cargo xtask bench-web [--no-wasm-opt]`.
 pub fn run(args: &[String]) -> Result<()> {
     util::check_args(args, &[], &["--no-wasm-opt"])?;
-    let built = browser::prepare(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    let prepared = browser::prepare(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    let built = &prepared.built;
     let server = serve::Server::start(&built.dir, 0)?;
     let url = format!("http://127.0.0.1:{}/", server.port());
     let out_dir = util::root().join("bench");

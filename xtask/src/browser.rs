@@ -21,7 +21,8 @@ pub const CHROMIUM: &str = "/usr/bin/chromium";
 pub fn run(args: &[String]) -> Result<()> {
     util::check_args(args, &["--only"], &["--no-wasm-opt"])?;
     let only = util::flag_value(args, "--only")?;
-    let built = prepare(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    let prepared = prepare(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    let built = &prepared.built;
     // The tests compare the page with the command line; build it first so
     // each comparison is a quick `cargo run`. A failed build is left for
     // those tests to report, so the others still run.
@@ -48,13 +49,42 @@ pub fn run(args: &[String]) -> Result<()> {
     result
 }
 
-/// Installs what the browser scripts need and builds `dist/`.
-pub fn prepare(use_wasm_opt: bool) -> Result<dist::Built> {
+/// Installs what the browser scripts need and builds the app into a
+/// directory of this run's own (`target/xtask-browser-dist-<pid>/`,
+/// removed when the returned value drops), so that a `cargo xtask dist`
+/// run at the same time cannot pull files from under the tests.
+pub fn prepare(use_wasm_opt: bool) -> Result<Prepared> {
     ensure_chromium()?;
     ensure_node_modules()?;
-    let built = dist::build(use_wasm_opt)?;
+    let dir = util::root()
+        .join("target")
+        .join(format!("xtask-browser-dist-{}", std::process::id()));
+    let built = match dist::build_into(&dir, use_wasm_opt) {
+        Ok(b) => b,
+        Err(e) => {
+            let _ = std::fs::remove_dir_all(&dir);
+            return Err(e);
+        }
+    };
     dist::report(&built);
-    Ok(built)
+    if let Err(e) = dist::check_budget(&built) {
+        eprintln!(
+            "xtask: WARNING: {e:#} (the browser run goes on; `cargo xtask dist` fails on it)"
+        );
+    }
+    Ok(Prepared { built })
+}
+
+/// A build in a private directory, removed on drop.
+pub struct Prepared {
+    /// What was built.
+    pub built: dist::Built,
+}
+
+impl Drop for Prepared {
+    fn drop(&mut self) {
+        let _ = std::fs::remove_dir_all(&self.built.dir);
+    }
 }
 
 /// The directory of the node project.

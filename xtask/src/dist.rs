@@ -80,6 +80,14 @@ pub fn check_budget(built: &Built) -> Result<()> {
 
 /// Builds everything into `dist/` and returns what was shipped.
 pub fn build(use_wasm_opt: bool) -> Result<Built> {
+    build_into(&util::root().join("dist"), use_wasm_opt)
+}
+
+/// Builds everything into `dist` (emptied first) and returns what was
+/// shipped. The browser tests build into a directory of their own, so a
+/// `cargo xtask dist` run at the same time cannot pull files from under
+/// them.
+pub fn build_into(dist: &Path, use_wasm_opt: bool) -> Result<Built> {
     let root = util::root();
     ensure_target()?;
     util::run(util::cargo().args([
@@ -103,11 +111,10 @@ pub fn build(use_wasm_opt: bool) -> Result<Built> {
         bail!("the build left no {}", wasm_in.display());
     }
 
-    let dist = root.join("dist");
     if dist.exists() {
-        std::fs::remove_dir_all(&dist).with_context(|| format!("clearing {}", dist.display()))?;
+        std::fs::remove_dir_all(dist).with_context(|| format!("clearing {}", dist.display()))?;
     }
-    std::fs::create_dir_all(&dist)?;
+    std::fs::create_dir_all(dist)?;
 
     let mut bindgen = wasm_bindgen_cli_support::Bindgen::new();
     bindgen
@@ -118,8 +125,9 @@ pub fn build(use_wasm_opt: bool) -> Result<Built> {
         .typescript(false)
         // The library leaves out the default wasm URL that the CLI writes.
         .omit_default_module_path(false)
+        .remove_name_section(true)
         .remove_producers_section(true)
-        .generate(&dist)
+        .generate(dist)
         .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?;
 
     let wasm_out = dist.join(format!("{OUT_NAME}_bg.wasm"));
@@ -147,7 +155,7 @@ pub fn build(use_wasm_opt: bool) -> Result<Built> {
     }
 
     // Everything but the worker is precached and hashed into the cache name.
-    let shipped = util::files_under(&dist)?;
+    let shipped = util::files_under(dist)?;
     let mut hasher = Sha256::new();
     for rel in &shipped {
         let bytes = std::fs::read(dist.join(rel))?;
@@ -164,14 +172,14 @@ pub fn build(use_wasm_opt: bool) -> Result<Built> {
 
     let mut files = Vec::new();
     let mut gz_total = 0;
-    for rel in util::files_under(&dist)? {
+    for rel in util::files_under(dist)? {
         let bytes = std::fs::read(dist.join(&rel))?;
         let gz = util::gzip_len(&bytes)?;
         gz_total += gz;
         files.push((rel, bytes.len(), gz));
     }
     Ok(Built {
-        dir: dist,
+        dir: dist.to_path_buf(),
         files,
         gz_total,
         cache_name,
@@ -200,9 +208,11 @@ fn ensure_target() -> Result<()> {
     }
 }
 
-/// Runs `wasm-opt -Oz` in place when it is on PATH. A wasm-opt that fails
-/// (an old binaryen may not know a feature of the module) leaves the
-/// unoptimised module in place, with a warning.
+/// Runs `wasm-opt -Oz` when it is on PATH and keeps its output only when
+/// that is smaller gzipped (the budget counts gzipped bytes, and an old
+/// binaryen can make rustc's already size-optimised module compress
+/// worse). A wasm-opt that fails (an old binaryen may not know a feature
+/// of the module) leaves the module as it was, with a warning.
 fn optimise(wasm: &Path) -> Result<()> {
     if !util::on_path("wasm-opt") {
         eprintln!("xtask: note: wasm-opt is not on PATH; the wasm is not shrunk further");
@@ -226,7 +236,17 @@ fn optimise(wasm: &Path) -> Result<()> {
     );
     match result {
         Ok(()) => {
-            std::fs::rename(&tmp, wasm)?;
+            let before = util::gzip_len(&std::fs::read(wasm)?)?;
+            let after = util::gzip_len(&std::fs::read(&tmp)?)?;
+            if after < before {
+                std::fs::rename(&tmp, wasm)?;
+                eprintln!("xtask: wasm-opt: {before} B -> {after} B gzipped; kept");
+            } else {
+                std::fs::remove_file(&tmp)?;
+                eprintln!(
+                    "xtask: wasm-opt: {before} B -> {after} B gzipped, no smaller; kept the module as wasm-bindgen wrote it"
+                );
+            }
             Ok(())
         }
         Err(e) => {
