@@ -328,10 +328,8 @@ impl SectionSpec {
     /// Validates the dimensions and computes the properties.
     pub fn build(&self) -> Result<Section> {
         if let SectionSpec::Catalogue(c) = self {
-            let entry = crate::catalogue::resolve(&c.designation)?;
-            let mut section = entry.spec.build()?;
-            section.designation = Some(entry.designation.to_string());
-            return Ok(section);
+            // Built once per entry and kept by the catalogue.
+            return crate::catalogue::section(&c.designation);
         }
         let props = shapes::properties(self)?;
         Ok(Section {
