@@ -461,7 +461,12 @@ const POLY: usize = 64;
 pub struct Poly {
     pts: [(f64, f64); POLY],
     n: usize,
+    /// The arcs drawn with [`Poly::arc`]: (centre y, centre z, r, a0, a1).
+    arcs: [(f64, f64, f64, f64, f64); ARCS],
+    n_arcs: usize,
 }
+
+const ARCS: usize = 8;
 
 impl Default for Poly {
     fn default() -> Self {
@@ -475,6 +480,8 @@ impl Poly {
         Poly {
             pts: [(0.0, 0.0); POLY],
             n: 0,
+            arcs: [(0.0, 0.0, 0.0, 0.0, 0.0); ARCS],
+            n_arcs: 0,
         }
     }
 
@@ -498,6 +505,10 @@ impl Poly {
         if r <= 0.0 {
             self.push(cy, cz);
             return;
+        }
+        if let Some(slot) = self.arcs.get_mut(self.n_arcs) {
+            *slot = (cy, cz, r, a0, a1);
+            self.n_arcs += 1;
         }
         let segs = segs.max(1);
         if let Some(()) = self.quarter_arc(cy, cz, r, a0, a1, segs) {
@@ -575,6 +586,34 @@ impl Poly {
             p.0 += dy;
             p.1 += dz;
         }
+        let n_arcs = self.n_arcs;
+        for a in self.arcs.iter_mut().take(n_arcs) {
+            a.0 += dy;
+            a.1 += dz;
+        }
+    }
+
+    /// Largest |t| (t = -y sinθ + z cosθ) over the outline: the vertices
+    /// and, exactly, the recorded arcs (whose farthest point may lie
+    /// between two vertices).
+    pub fn extreme_t(&self, sin: f64, cos: f64) -> f64 {
+        let theta = sin.atan2(cos);
+        let mut far = self
+            .points()
+            .iter()
+            .fold(0.0f64, |m, (y, z)| m.max((-y * sin + z * cos).abs()));
+        for &(cy, cz, r, a0, a1) in self.arcs.iter().take(self.n_arcs) {
+            // On the arc t(φ) = t_c + r sin(φ - θ): extremes at φ = θ ± π/2.
+            let tc = -cy * sin + cz * cos;
+            let (lo, hi) = (a0.min(a1), a0.max(a1));
+            for (phi, t) in [(theta + 0.5 * PI, tc + r), (theta - 0.5 * PI, tc - r)] {
+                let turns = ((phi - lo) / (2.0 * PI)).floor();
+                if phi - 2.0 * PI * turns <= hi {
+                    far = far.max(t.abs());
+                }
+            }
+        }
+        far
     }
 
     fn edges(&self) -> impl Iterator<Item = ((f64, f64), (f64, f64))> + '_ {
@@ -623,7 +662,7 @@ impl Poly {
     }
 
     /// Bending about an axis through the origin at angle θ: (plastic
-    /// modulus, largest distance of a vertex from the axis). The
+    /// modulus, largest distance of the outline from the axis, arcs exact). The
     /// equal-area line parallel to the axis is found by
     /// [`solve_increasing`] starting at the origin (put the centroid
     /// there); `area` is the polygon's own area.
@@ -650,7 +689,7 @@ impl Poly {
             1e-10 * half.abs(),
         );
         let (_, m_hi, _, m_lo, _) = split_rotated(st, c);
-        (m_hi - m_lo, lo.abs().max(hi.abs()))
+        (m_hi - m_lo, self.extreme_t(sin, cos))
     }
 
     /// Plastic modulus for bending about an axis through the origin at angle θ.
@@ -906,6 +945,29 @@ mod tests {
                 assert!((z - 2.0 - 3.0 * a.sin()).abs() < 1e-14, "{a0} {a1} {k}");
             }
         }
+    }
+
+    #[test]
+    fn extreme_distance_uses_the_arc_not_its_chords() {
+        // A quarter disc of radius 1 about the origin, drawn with 8 chords
+        // (vertices every π/16). In the direction 45° + π/32, halfway
+        // between two vertices, the arc reaches 1 but the vertices only
+        // cos(π/32).
+        let mut p = Poly::new();
+        p.push(0.0, 0.0);
+        p.arc(0.0, 0.0, 1.0, 0.0, 0.5 * PI, 8);
+        let theta = 0.25 * PI + PI / 32.0 - 0.5 * PI; // normal direction at 45° + π/32
+        let (s, c) = theta.sin_cos();
+        close(p.extreme_t(s, c), 1.0, 1e-15);
+        let vertices = p
+            .points()
+            .iter()
+            .fold(0.0f64, |m, (y, z)| m.max((-y * s + z * c).abs()));
+        assert!(vertices < 1.0 - 1e-3);
+        // Shifting moves the arcs too.
+        p.shift(2.0, 0.0);
+        let (s, c) = (0.0f64.sin(), 0.0f64.cos());
+        close(p.extreme_t(s, c), 1.0, 1e-15);
     }
 
     #[test]

@@ -90,6 +90,21 @@ def cases():
            {"kind": "tee", "depth_mm": 150, "width_mm": 100, "flange_mm": 10, "web_mm": 8,
             "root_radius_mm": 10},
            ss.tee_section(d=150, b=100, t_f=10, t_w=8, r=10, n_r=N_R), 0.8)
+    yield ("cold-formed SHS 100x100x5 ro10 (EN 10219 corner rule)",
+           {"kind": "rhs", "depth_mm": 100, "width_mm": 100, "wall_mm": 5, "outer_radius_mm": 10,
+            "make": "cold-formed"},
+           ss.rectangular_hollow_section(d=100, b=100, t=5, r_out=10, n_r=N_R), 0.5)
+    yield ("unequal angle 200x100x15 r1=15 r2=7.5",
+           {"kind": "angle", "depth_mm": 200, "width_mm": 100, "thickness_mm": 15,
+            "root_radius_mm": 15, "toe_radius_mm": 7.5},
+           ss.angle_section(d=200, b=100, t=15, r_r=15, r_t=7.5, n_r=N_R), 1.5)
+    yield ("sharp channel 150x75x10x6 (no root radius)",
+           {"kind": "channel", "depth_mm": 150, "width_mm": 75, "flange_mm": 10, "web_mm": 6,
+            "root_radius_mm": 0},
+           ss.channel_section(d=150, b=75, t_f=10, t_w=6, r=0, n_r=1), 0.8)
+    yield ("round bar 60",
+           {"kind": "round", "diameter_mm": 60},
+           ps.circular_section(d=60, n=N_CIRCLE).shift_section(30, 30), 0.8)
     yield ("solid rectangle 100x40",
            {"kind": "rect", "depth_mm": 100, "width_mm": 40},
            ps.rectangular_section(d=100, b=40), 2.0)
