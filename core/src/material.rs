@@ -642,14 +642,60 @@ fn normalise(name: &str) -> String {
         .collect()
 }
 
+/// A grade name normalised on the stack (upper case, letters and digits
+/// only), so the lookup in the check's hot path allocates nothing.
+struct Key {
+    buf: [u8; 24],
+    len: usize,
+}
+
+impl Key {
+    /// `None` when the name has more than 24 letters and digits (no grade has).
+    fn new(name: &str) -> Option<Key> {
+        let mut key = Key {
+            buf: [0; 24],
+            len: 0,
+        };
+        for b in name.bytes().filter(u8::is_ascii_alphanumeric) {
+            *key.buf.get_mut(key.len)? = b.to_ascii_uppercase();
+            key.len += 1;
+        }
+        Some(key)
+    }
+
+    fn as_str(&self) -> &str {
+        self.buf
+            .get(..self.len)
+            .and_then(|b| std::str::from_utf8(b).ok())
+            .unwrap_or("")
+    }
+}
+
+/// Whether `name` normalises to `key` (compared without allocating).
+fn same_name(name: &str, key: &str) -> bool {
+    let mut a = name
+        .bytes()
+        .filter(u8::is_ascii_alphanumeric)
+        .map(|b| b.to_ascii_uppercase());
+    let mut b = key.bytes();
+    loop {
+        match (a.next(), b.next()) {
+            (None, None) => return true,
+            (Some(x), Some(y)) if x == y => {}
+            _ => return false,
+        }
+    }
+}
+
 fn find(name: &str) -> Option<Found> {
-    let n = normalise(name);
+    let key = Key::new(name)?;
+    let n = key.as_str();
     // Timber classes.
-    if let Some(t) = TIMBER.iter().find(|t| normalise(t.name) == n) {
+    if let Some(t) = TIMBER.iter().find(|t| same_name(t.name, n)) {
         return Some(Found::Timber(t));
     }
     // ASTM.
-    let astm = n.strip_prefix("ASTM").unwrap_or(&n);
+    let astm = n.strip_prefix("ASTM").unwrap_or(n);
     match astm {
         "A992" | "A992M" => return Some(Found::Steel(&A992)),
         "A36" | "A36M" => return Some(Found::Steel(&A36)),
@@ -662,7 +708,7 @@ fn find(name: &str) -> Option<Found> {
         _ => {}
     }
     // CSA G40.21 (the W grades; "350WT" toughness variants as well).
-    let csa = n.strip_prefix("CSA").unwrap_or(&n);
+    let csa = n.strip_prefix("CSA").unwrap_or(n);
     let csa = csa.strip_prefix("G4021").unwrap_or(csa);
     match csa {
         "350W" | "350WT" => return Some(Found::Steel(&G40_350W)),
