@@ -208,53 +208,75 @@ fn ensure_target() -> Result<()> {
     }
 }
 
-/// Runs `wasm-opt -Oz` when it is on PATH and keeps its output only when
-/// that is smaller gzipped (the budget counts gzipped bytes, and an old
-/// binaryen can make rustc's already size-optimised module compress
-/// worse). A wasm-opt that fails (an old binaryen may not know a feature
-/// of the module) leaves the module as it was, with a warning.
+/// The wasm-opt levels tried, in order.
+const WASM_OPT_LEVELS: [&[&str]; 2] = [&["-Oz"], &["-O1", "--converge"]];
+
+/// The features the module may use, for wasm-opt.
+const WASM_FEATURES: [&str; 6] = [
+    "--enable-bulk-memory",
+    "--enable-nontrapping-float-to-int",
+    "--enable-reference-types",
+    "--enable-multivalue",
+    "--enable-sign-ext",
+    "--enable-mutable-globals",
+];
+
+/// Runs `wasm-opt` at each of [`WASM_OPT_LEVELS`] when it is on PATH and
+/// keeps whichever module is smallest gzipped, the one wasm-bindgen wrote
+/// included: the budget counts gzipped bytes, and binaryen's `-Oz` can make
+/// rustc's already size-optimised module compress worse (its function
+/// reordering breaks up similar code), where the lighter `-O1` still
+/// shrinks it. A wasm-opt that fails (an old binaryen may not know a
+/// feature of the module) is skipped with a warning.
 fn optimise(wasm: &Path) -> Result<()> {
     if !util::on_path("wasm-opt") {
         eprintln!("xtask: note: wasm-opt is not on PATH; the wasm is not shrunk further");
         return Ok(());
     }
-    let tmp = wasm.with_extension("opt.wasm");
-    let result = util::run(
-        std::process::Command::new("wasm-opt")
-            .arg("-Oz")
-            .args([
-                "--enable-bulk-memory",
-                "--enable-nontrapping-float-to-int",
-                "--enable-reference-types",
-                "--enable-multivalue",
-                "--enable-sign-ext",
-                "--enable-mutable-globals",
-            ])
-            .arg(wasm)
-            .arg("-o")
-            .arg(&tmp),
-    );
-    match result {
-        Ok(()) => {
-            let before = util::gzip_len(&std::fs::read(wasm)?)?;
-            let after = util::gzip_len(&std::fs::read(&tmp)?)?;
-            if after < before {
-                std::fs::rename(&tmp, wasm)?;
-                eprintln!("xtask: wasm-opt: {before} B -> {after} B gzipped; kept");
-            } else {
-                std::fs::remove_file(&tmp)?;
-                eprintln!(
-                    "xtask: wasm-opt: {before} B -> {after} B gzipped, no smaller; kept the module as wasm-bindgen wrote it"
-                );
+    let original = util::gzip_len(&std::fs::read(wasm)?)?;
+    let mut best: Option<(usize, PathBuf, String)> = None;
+    for (i, level) in WASM_OPT_LEVELS.iter().enumerate() {
+        let out = wasm.with_extension(format!("opt{i}.wasm"));
+        let result = util::run(
+            std::process::Command::new("wasm-opt")
+                .args(level.iter())
+                .args(WASM_FEATURES)
+                .arg(wasm)
+                .arg("-o")
+                .arg(&out),
+        );
+        let name = level.join(" ");
+        match result {
+            Ok(()) => {
+                let gz = util::gzip_len(&std::fs::read(&out)?)?;
+                eprintln!("xtask: wasm-opt {name}: {original} B -> {gz} B gzipped");
+                if best.as_ref().is_none_or(|(b, _, _)| gz < *b) {
+                    if let Some((_, old, _)) = best.take() {
+                        let _ = std::fs::remove_file(old);
+                    }
+                    best = Some((gz, out, name));
+                } else {
+                    let _ = std::fs::remove_file(&out);
+                }
             }
-            Ok(())
-        }
-        Err(e) => {
-            let _ = std::fs::remove_file(&tmp);
-            eprintln!("xtask: WARNING: wasm-opt failed, keeping the unoptimised wasm: {e:#}");
-            Ok(())
+            Err(e) => {
+                let _ = std::fs::remove_file(&out);
+                eprintln!("xtask: WARNING: wasm-opt {name} failed: {e:#}");
+            }
         }
     }
+    match best {
+        Some((gz, path, name)) if gz < original => {
+            std::fs::rename(&path, wasm)?;
+            eprintln!("xtask: kept the wasm-opt {name} module ({gz} B gzipped)");
+        }
+        Some((_, path, _)) => {
+            let _ = std::fs::remove_file(path);
+            eprintln!("xtask: kept the module as wasm-bindgen wrote it ({original} B gzipped, the smallest)");
+        }
+        None => {}
+    }
+    Ok(())
 }
 
 /// Fills the worker template with the cache name and the precache list.
