@@ -27,7 +27,7 @@ const THEME_KEY: &str = "strutline.v1.theme";
 /// Something deleted that can be put back.
 #[derive(Debug, Clone)]
 enum Undo {
-    Member { list: usize, deleted: Deleted },
+    Member { list: usize, deleted: Box<Deleted> },
     List(DeletedList),
 }
 
@@ -295,7 +295,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
         <div class="banners" aria-live="polite">
             {move || ctx.update_ready.get().then(|| view! {
                 <div class="banner banner-info" data-testid="update-ready" role="status">
-                    <span>"⟳ A new version of Strutline is ready."</span>
+                    <span>"↻ A new version of Strutline is ready."</span>
                     <button type="button" on:click=move |_| browser::apply_update()>"Reload to update"</button>
                     <button type="button" class="quiet" on:click=move |_| ctx.update_ready.set(false)>"Later"</button>
                 </div>
@@ -318,7 +318,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                             <button type="button" data-testid="download-unreadable" on:click=move |_| {
                                 let name = format!("strutline-unreadable-{}.json", browser::now_ms() as u64);
                                 let _ = browser::download(&name, &raw, "application/json");
-                            }>"⬇ Download the unreadable copy"</button>
+                            }>"Download the unreadable copy"</button>
                             <button type="button" data-testid="discard-unreadable" on:click=move |_| {
                                 if let Some(k) = &aside {
                                     browser::remove(k);
@@ -338,7 +338,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                         let name = format!("strutline-workspace-{}.json", browser::now_ms() as u64);
                         let text = ctx.ws.with_untracked(encode);
                         let _ = browser::download(&name, &text, "application/json");
-                    }>"⬇ Download the workspace"</button>
+                    }>"Download the workspace"</button>
                 </div>
             })}
             {move || ctx.other_tab.get().map(|theirs| {
@@ -378,7 +378,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                 };
                 view! {
                     <div class="banner banner-undo" role="status">
-                        <span>"🗑 " {what}</span>
+                        <span>{what}</span>
                         <button type="button" data-testid="undo" on:click=move |_| {
                             if let Some(u) = ctx.undo.get_untracked() {
                                 ctx.undo.set(None);
@@ -388,7 +388,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                                         ctx.ws.update(|w| {
                                             w.active = list.min(w.lists.len().saturating_sub(1));
                                             if let Some(l) = w.active_list_mut() {
-                                                at = Some(listops::undo_delete(&mut l.members, deleted));
+                                                at = Some(listops::undo_delete(&mut l.members, *deleted));
                                             }
                                         });
                                         ctx.select(at.unwrap_or(0));
@@ -432,6 +432,14 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
         })
     });
     let title_error = RwSignal::new(None::<String>);
+    let selected_id = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.ws.with(|w| {
+            w.active_list()
+                .and_then(|l| l.members.get(sel))
+                .map(|m| m.id.clone())
+        })
+    });
     view! {
         <h2 id="h-list" class="pane-title">"Member lists"</h2>
         <div class="list-bar">
@@ -452,7 +460,7 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                     {move || titles.get().into_iter().enumerate().map(|(i, t)| {
                         let label = if t.is_empty() { format!("(untitled list {})", i + 1) } else { t };
                         view! { <option value=i.to_string() selected=move || active.get() == i>{label}</option> }
-                    }).collect_view()}
+                    }.into_any()).collect::<Vec<_>>()}
                 </select>
             </div>
             {move || {
@@ -489,7 +497,7 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                         w.active = w.lists.len() - 1;
                     });
                     ctx.select(0);
-                }>"＋ New list"</button>
+                }>"+ New list"</button>
                 <button type="button" data-testid="delete-list" on:click=move |_| {
                     let mut gone = None;
                     ctx.ws.update(|w| {
@@ -501,7 +509,7 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                         ctx.undo.set(Some(Undo::List(d)));
                         ctx.select(0);
                     }
-                } disabled=move || titles.with(|t| t.len() <= 1)>"🗑 Delete list"</button>
+                } disabled=move || titles.with(|t| t.len() <= 1)>"Delete list"</button>
             </div>
         </div>
         <p class="list-summary" role="status">
@@ -514,21 +522,21 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
             if let Some(i) = ctx.with_members(|ms| listops::add(ms, &demo::new_member())) {
                 ctx.select(i);
             }
-        }>"＋ Add member"</button>
+        }>"+ Add member"</button>
         <ol class="member-list">
             <For
                 each=move || {
                     ctx.checks.get().0.iter().cloned().collect::<Vec<_>>()
                 }
                 key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
-                children=move |c| view! { <MemberRow ctx=ctx checked=c /> }
+                children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id /> }
             />
         </ol>
     }
 }
 
 #[component]
-fn MemberRow(ctx: Ctx, checked: Arc<Checked>) -> impl IntoView {
+fn MemberRow(ctx: Ctx, checked: Arc<Checked>, selected_id: Memo<Option<String>>) -> impl IntoView {
     let m = &checked.member;
     let id = m.id.clone();
     let standing = Standing::of(&checked.outcome);
@@ -542,27 +550,27 @@ fn MemberRow(ctx: Ctx, checked: Arc<Checked>) -> impl IntoView {
         m.method.key()
     );
     let id_sel = id.clone();
-    let is_selected = Memo::new(move |_| {
-        let sel = ctx.selected.get();
-        ctx.ws.with(|w| {
-            w.active_list()
-                .and_then(|l| l.members.get(sel))
-                .map(|m| m.id == id_sel)
-                .unwrap_or(false)
-        })
-    });
+    let is_selected =
+        Memo::new(move |_| selected_id.with(|s| s.as_deref() == Some(id_sel.as_str())));
     let (i1, i2, i3, i4, i5) = (id.clone(), id.clone(), id.clone(), id.clone(), id.clone());
     view! {
-        <li class="member-row" class:selected=move || is_selected.get() data-testid="member-row" data-id=id.clone()>
+        <li
+            class="member-row"
+            class:selected=move || is_selected.get()
+            data-testid="member-row"
+            data-id=id.clone()
+            on:click=move |_| {
+                if let Some(i) = ctx.index_of(&i1) {
+                    if ctx.selected.get_untracked() != i || !is_selected.get_untracked() {
+                        ctx.select(i);
+                    }
+                }
+            }
+        >
             <button
                 type="button"
                 class="row-main"
                 aria-current=move || if is_selected.get() { "true" } else { "false" }
-                on:click=move |_| {
-                    if let Some(i) = ctx.index_of(&i1) {
-                        ctx.select(i);
-                    }
-                }
             >
                 <span class="row-id">{id.clone()}</span>
                 <span class=format!("row-status {}", standing.class()) data-testid="member-status">{status}</span>
@@ -570,31 +578,35 @@ fn MemberRow(ctx: Ctx, checked: Arc<Checked>) -> impl IntoView {
                 <span class="row-detail">{detail}</span>
             </button>
             <div class="row-actions">
-                <button type="button" aria-label=format!("Move {id} up") title="move up" on:click=move |_| {
+                <button type="button" aria-label=format!("Move {id} up")  on:click=move |e: ev::MouseEvent| {
+                    e.stop_propagation();
                     if let Some(i) = ctx.index_of(&i2) {
                         if let Some(Some(j)) = ctx.with_members(|ms| listops::move_up(ms, i)) { ctx.select(j); }
                     }
                 }>"↑"</button>
-                <button type="button" aria-label=format!("Move {id} down") title="move down" on:click=move |_| {
+                <button type="button" aria-label=format!("Move {id} down")  on:click=move |e: ev::MouseEvent| {
+                    e.stop_propagation();
                     if let Some(i) = ctx.index_of(&i3) {
                         if let Some(Some(j)) = ctx.with_members(|ms| listops::move_down(ms, i)) { ctx.select(j); }
                     }
                 }>"↓"</button>
-                <button type="button" data-testid="duplicate-member" aria-label=format!("Duplicate {id}") title="duplicate" on:click=move |_| {
+                <button type="button" data-testid="duplicate-member" aria-label=format!("Duplicate {id}")  on:click=move |e: ev::MouseEvent| {
+                    e.stop_propagation();
                     if let Some(i) = ctx.index_of(&i4) {
                         if let Some(Some(j)) = ctx.with_members(|ms| listops::duplicate(ms, i)) { ctx.select(j); }
                     }
-                }>"⧉"</button>
-                <button type="button" data-testid="delete-member" aria-label=format!("Delete {id}") title="delete" on:click=move |_| {
+                }>"Copy"</button>
+                <button type="button" data-testid="delete-member" aria-label=format!("Delete {id}")  on:click=move |e: ev::MouseEvent| {
+                    e.stop_propagation();
                     if let Some(i) = ctx.index_of(&i5) {
                         let list = ctx.ws.with_untracked(|w| w.active);
                         if let Some(Some(d)) = ctx.with_members(|ms| listops::delete(ms, i)) {
-                            ctx.undo.set(Some(Undo::Member { list, deleted: d }));
+                            ctx.undo.set(Some(Undo::Member { list, deleted: Box::new(d) }));
                             let len = ctx.ws.with_untracked(|w| w.active_list().map_or(0, |l| l.members.len()));
                             ctx.select(i.min(len.saturating_sub(1)));
                         }
                     }
-                }>"🗑"</button>
+                }>"Delete"</button>
             </div>
         </li>
     }
@@ -681,7 +693,7 @@ fn ChoiceField(ctx: Ctx, choice: Choice) -> impl IntoView {
                 {choice.options.iter().map(|(v, label)| {
                     let sel = current == *v || (current.is_empty() && v.is_empty());
                     view! { <option value=*v selected=sel>{*label}</option> }
-                }).collect_view()}
+                }.into_any()).collect::<Vec<_>>()}
             </select>
             {move || error.get().map(|msg| view! { <p class="field-error" data-testid="field-error">"✎ " {msg}</p> })}
         </div>
@@ -777,7 +789,7 @@ fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                 }>
                     {Restraint::all().into_iter().map(|r| view! {
                         <option value=r.value() selected=move || restraint.get_untracked() == r>{r.label()}</option>
-                    }).collect_view()}
+                    }.into_any()).collect::<Vec<_>>()}
                 </select>
             </div>
             {move || {
@@ -797,7 +809,7 @@ fn Editor(ctx: Ctx) -> impl IntoView {
     let Some(member) = ctx.current() else {
         return view! {
             <h2 id="h-editor" class="pane-title">"Member"</h2>
-            <p class="empty">"This list has no members yet. Use “＋ Add member” to start one."</p>
+            <p class="empty">"This list has no members yet. Use “+ Add member” to start one."</p>
         }
         .into_any();
     };
@@ -857,15 +869,15 @@ fn Editor(ctx: Ctx) -> impl IntoView {
                     }>
                         {fields::KINDS.iter().map(|(k, label)| view! {
                             <option value=*k selected=*k == initial_kind>{*label}</option>
-                        }).collect_view()}
+                        }.into_any()).collect::<Vec<_>>()}
                     </select>
                 </div>
                 {move || {
                     let k = kind.get();
                     view! {
                         <div class="field-grid">
-                            {fields::section_fields(k).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }).collect_view()}
-                            {fields::section_choices(k).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }).collect_view()}
+                            {fields::section_fields(k).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }.into_any()).collect::<Vec<_>>()}
+                            {fields::section_choices(k).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
                         </div>
                     }
                 }}
@@ -888,18 +900,18 @@ fn Editor(ctx: Ctx) -> impl IntoView {
                                 MaterialMode::Timber => "custom timber values",
                             };
                             view! { <option value=mm.value() selected=mm == initial_mode>{label}</option> }
-                        }).collect_view()}
+                        }.into_any()).collect::<Vec<_>>()}
                     </select>
                 </div>
                 <datalist id="grades">
-                    {fields::GRADE_SUGGESTIONS.iter().map(|g| view! { <option value=*g></option> }).collect_view()}
+                    {fields::GRADE_SUGGESTIONS.iter().map(|g| view! { <option value=*g></option> }.into_any()).collect::<Vec<_>>()}
                 </datalist>
                 {move || {
                     let mode = mat_mode.get();
                     view! {
                         <div class="field-grid">
-                            {fields::material_fields(mode).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }).collect_view()}
-                            {fields::material_choices(mode).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }).collect_view()}
+                            {fields::material_fields(mode).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }.into_any()).collect::<Vec<_>>()}
+                            {fields::material_choices(mode).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
                         </div>
                     }
                 }}
@@ -928,15 +940,15 @@ fn Editor(ctx: Ctx) -> impl IntoView {
                     }>
                         {Method::ALL.iter().map(|me| view! {
                             <option value=me.key() selected=*me == initial_method>{me.title()}</option>
-                        }).collect_view()}
+                        }.into_any()).collect::<Vec<_>>()}
                     </select>
                 </div>
                 {move || {
                     let me = method.get();
                     view! {
                         <div class="field-grid">
-                            {fields::option_fields(me).into_iter().map(|f| view! { <NumField ctx=ctx field=f /> }).collect_view()}
-                            {fields::method_choices(me).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }).collect_view()}
+                            {fields::option_fields(me).into_iter().map(|f| view! { <NumField ctx=ctx field=f /> }.into_any()).collect::<Vec<_>>()}
+                            {fields::method_choices(me).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
                         </div>
                     }
                 }}
@@ -968,13 +980,14 @@ fn Results(ctx: Ctx) -> impl IntoView {
         <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
         {move || match current.get() {
             None => view! { <p class="empty">"No member selected."</p> }.into_any(),
-            Some(c) => result_view(&c).into_any(),
+            Some(c) => verdict_view(&c).into_any(),
         }}
         <Chart ctx=ctx current=current />
+        {move || current.get().map(|c| working_view(&c))}
     }
 }
 
-fn result_view(c: &Checked) -> impl IntoView {
+fn verdict_view(c: &Checked) -> impl IntoView {
     let standing = Standing::of(&c.outcome);
     match &c.outcome {
         Err(e) => view! {
@@ -990,23 +1003,7 @@ fn result_view(c: &Checked) -> impl IntoView {
         }
         .into_any(),
         Ok(r) => {
-            let modes = r.modes.clone();
             let warnings = r.warnings.clone();
-            let scopes = [
-                Scope::Member,
-                Scope::Section,
-                Scope::Major,
-                Scope::Minor,
-                Scope::Torsional,
-                Scope::FlexuralTorsional,
-            ];
-            let groups: Vec<_> = scopes
-                .into_iter()
-                .filter_map(|s| {
-                    let steps: Vec<_> = r.trace.iter().filter(|t| t.scope == s).cloned().collect();
-                    (!steps.is_empty()).then_some((s, steps))
-                })
-                .collect();
             view! {
                 <div class=format!("verdict {}", standing.class()) role="status">
                     <p class="verdict-status">{status_text(&c.outcome)}</p>
@@ -1025,9 +1022,36 @@ fn result_view(c: &Checked) -> impl IntoView {
                 </div>
                 {(!warnings.is_empty()).then(|| view! {
                     <ul class="warnings" data-testid="warnings">
-                        {warnings.into_iter().map(|w| view! { <li>"⚠ " {w.message} " " <code>{w.code}</code></li> }).collect_view()}
+                        {warnings.into_iter().map(|w| view! { <li>"⚠ " {w.message} " " <code>{w.code}</code></li> }.into_any()).collect::<Vec<_>>()}
                     </ul>
                 })}
+            }
+            .into_any()
+        }
+    }
+}
+
+fn working_view(c: &Checked) -> impl IntoView {
+    let Ok(r) = &c.outcome else {
+        return ().into_any();
+    };
+    let modes = r.modes.clone();
+    let scopes = [
+        Scope::Member,
+        Scope::Section,
+        Scope::Major,
+        Scope::Minor,
+        Scope::Torsional,
+        Scope::FlexuralTorsional,
+    ];
+    let groups: Vec<_> = scopes
+        .into_iter()
+        .filter_map(|s| {
+            let steps: Vec<_> = r.trace.iter().filter(|t| t.scope == s).cloned().collect();
+            (!steps.is_empty()).then_some((s, steps))
+        })
+        .collect();
+    view! {
                 <div class="table-wrap">
                     <table class="modes">
                         <caption>"Modes checked"</caption>
@@ -1049,7 +1073,7 @@ fn result_view(c: &Checked) -> impl IntoView {
                                         <td>{fixed(m.resistance_kn, 1)}</td>
                                     </tr>
                                 }
-                            }).collect_view()}
+                            }.into_any()).collect::<Vec<_>>()}
                         </tbody>
                     </table>
                 </div>
@@ -1068,16 +1092,14 @@ fn result_view(c: &Checked) -> impl IntoView {
                                             <td class="num">{working(st.value)} " " {if st.unit == "-" { "" } else { st.unit }}</td>
                                             <td class="clause">{st.clause}</td>
                                         </tr>
-                                    }).collect_view()}
+                                    }.into_any()).collect::<Vec<_>>()}
                                 </tbody>
                             </table>
                         </div>
                     </details>
-                }).collect_view()}
-            }
-            .into_any()
-        }
+                }.into_any()).collect::<Vec<_>>()}
     }
+    .into_any()
 }
 
 #[component]
@@ -1149,6 +1171,20 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
             </div>
             <canvas id="envelope" class="envelope" node_ref=canvas role="img"
                 aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+            <ul class="chart-legend" aria-label="Chart legend">
+                <li><span class="sw sw-shade"></span>"within capacity (shaded)"</li>
+                <li><span class="sw sw-major"></span>"design curve, major axis (solid)"</li>
+                <li><span class="sw sw-minor"></span>"design curve, minor axis (dashed)"</li>
+                <li><span class="sw sw-plateau"></span>"strength plateau f_y or f_c,0,k (dashed)"</li>
+                <li><span class="sw sw-euler"></span>"Euler π²E / (L_cr/i)² (dotted)"</li>
+                <li><span class="sym">"●"</span>"applied stress N_Ed / A (larger dot: governing axis)"</li>
+                <li><span class="sym">"□"</span>"resistance N_Rd / A of that axis, on its curve"</li>
+                {move || ctx.perry.get().then(|| view! {
+                    <li><span class="sw sw-perry1"></span>"Perry-Robertson, bow L_cr/250"</li>
+                    <li><span class="sw sw-perry2"></span>"Perry-Robertson, bow L_cr/500"</li>
+                    <li><span class="sw sw-perry3"></span>"Perry-Robertson, bow L_cr/1000"</li>
+                })}
+            </ul>
             <p class="chart-description">{move || described.get()}</p>
             {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
         </div>

@@ -128,7 +128,7 @@ pub fn demo_lists() -> Vec<MemberFile> {
         }),
         steel(355.0),
         4200.0,
-        310.0,
+        220.0,
         Method::AiscLrfd,
     );
 
@@ -137,7 +137,7 @@ pub fn demo_lists() -> Vec<MemberFile> {
         SectionSpec::Round(Round { diameter_mm: 32.0 }),
         steel(275.0),
         3100.0,
-        24.0,
+        11.0,
         Method::PerryRobertson,
     );
     brace.bow_mm = Some(3.1);
@@ -151,7 +151,7 @@ pub fn demo_lists() -> Vec<MemberFile> {
         }),
         steel(275.0),
         1600.0,
-        180.0,
+        90.0,
         Method::Secant,
     );
     flat.eccentricity_mm = Some(6.0);

@@ -538,7 +538,7 @@ fn default_json(kind: &str) -> Value {
 /// kind also has (depth, width, diameter).
 pub fn section_of_kind(kind: &str, from: &SectionSpec) -> SectionSpec {
     let mut new = default_json(kind);
-    let old = serde_json::to_value(from).unwrap_or(Value::Null);
+    let old = as_value(from);
     if let (Some(n), Some(o)) = (new.as_object_mut(), old.as_object()) {
         for key in ["depth_mm", "width_mm", "diameter_mm"] {
             if n.contains_key(key) {
@@ -548,10 +548,38 @@ pub fn section_of_kind(kind: &str, from: &SectionSpec) -> SectionSpec {
             }
         }
     }
-    serde_json::from_value(new).unwrap_or_else(|_| from.clone())
+    section_from_value(new).unwrap_or_else(|| from.clone())
 }
 
-fn place_of<'a>(obj: &'a Value, place: Place) -> Option<&'a Map<String, Value>> {
+/// Any serialisable value as a JSON value, through the same pretty writer
+/// the member file uses (one serialiser in the wasm, not two).
+fn as_value<T: serde::Serialize>(x: &T) -> Value {
+    serde_json::to_string_pretty(x)
+        .ok()
+        .and_then(|t| serde_json::from_str(&t).ok())
+        .unwrap_or(Value::Null)
+}
+
+/// A member from its JSON value, through the member file's own reader.
+fn member_from(v: &Value) -> Result<Member, Error> {
+    strutline_core::file::member_from_value(v, 0)
+}
+
+/// A section from its JSON value, read as part of a throwaway member so
+/// that the member file's reader is the only one.
+fn section_from_value(section: Value) -> Option<SectionSpec> {
+    let probe = serde_json::json!({
+        "id": "probe",
+        "section": section,
+        "material": {"fy_mpa": 1, "e_mpa": 1},
+        "length_mm": 1,
+        "axial_kn": 0,
+        "method": "euler"
+    });
+    member_from(&probe).ok().map(|m| m.section)
+}
+
+fn place_of(obj: &Value, place: Place) -> Option<&Map<String, Value>> {
     match place {
         Place::Member => obj.as_object(),
         Place::Section => obj.get("section").and_then(Value::as_object),
@@ -569,7 +597,7 @@ fn place_of_mut(obj: &mut Value, place: Place) -> Option<&mut Map<String, Value>
 
 /// The text a field shows for a member ("" for an absent option).
 pub fn read(member: &Member, place: Place, key: &str) -> String {
-    let v = serde_json::to_value(member).unwrap_or(Value::Null);
+    let v = as_value(member);
     match place_of(&v, place).and_then(|o| o.get(key)) {
         Some(Value::Number(n)) => n.as_f64().map(for_input).unwrap_or_default(),
         Some(Value::String(s)) => s.clone(),
@@ -583,7 +611,7 @@ pub fn read(member: &Member, place: Place, key: &str) -> String {
 }
 
 fn set(member: &Member, place: Place, key: &str, value: Option<Value>) -> Result<Member, String> {
-    let mut v = serde_json::to_value(member).map_err(|e| format!("{key}: {e}"))?;
+    let mut v = as_value(member);
     let obj = place_of_mut(&mut v, place).ok_or_else(|| format!("{key}: cannot be set here"))?;
     match value {
         Some(x) => {
@@ -593,7 +621,7 @@ fn set(member: &Member, place: Place, key: &str, value: Option<Value>) -> Result
             obj.remove(key);
         }
     }
-    serde_json::from_value(v).map_err(|e| format!("{key}: {e}"))
+    member_from(&v).map_err(|e| format!("{key}: {}", error_text(&e)))
 }
 
 fn number(v: f64) -> Value {

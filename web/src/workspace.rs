@@ -60,15 +60,16 @@ impl Workspace {
 /// The workspace as JSON text ("revision" comes first so that
 /// [`peek_revision`] finds it without parsing the whole text).
 pub fn encode(ws: &Workspace) -> String {
-    let lists: Vec<Value> = ws
-        .lists
-        .iter()
-        .map(|l| serde_json::to_value(l).unwrap_or(Value::Null))
-        .collect();
-    // Written by hand for the key order; serde_json::Map sorts keys.
-    let lists = serde_json::to_string(&lists).unwrap_or_else(|_| "[]".into());
+    // Each list is written by the member file's own writer.
+    let mut lists = String::with_capacity(ws.lists.len() * 4096);
+    for (i, l) in ws.lists.iter().enumerate() {
+        if i > 0 {
+            lists.push(',');
+        }
+        lists.push_str(&l.to_json());
+    }
     format!(
-        "{{\"revision\":{},\"format\":\"{FORMAT}\",\"version\":{VERSION},\"active\":{},\"lists\":{lists}}}",
+        "{{\"revision\":{},\"format\":\"{FORMAT}\",\"version\":{VERSION},\"active\":{},\"lists\":[{lists}]}}",
         ws.revision, ws.active
     )
 }
@@ -188,7 +189,7 @@ mod tests {
         let future = good.replace("\"version\":1,\"active\"", "\"version\":2,\"active\"");
         assert!(decode(&future).unwrap_err().contains("version 2"));
         // A member inside refused: the whole workspace is refused, naming the list.
-        let bad_member = good.replacen("\"length_mm\":2800.0", "\"length_mm\":\"long\"", 1);
+        let bad_member = good.replacen("\"length_mm\": 2800.0", "\"length_mm\": \"long\"", 1);
         assert_ne!(bad_member, good);
         let e = decode(&bad_member).unwrap_err();
         assert!(e.contains("list 1") && e.contains("length_mm"), "{e}");

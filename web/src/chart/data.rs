@@ -91,7 +91,8 @@ pub fn build(
     let furthest = flexural.iter().map(|m| m.slenderness).fold(0.0, f64::max);
     let x_max = nice_ceiling((furthest * 1.25).max(200.0), 50.0).min(1000.0);
     let applied = result_applied_mpa(prepared, area);
-    let y_max = nice_ceiling((f * 1.15).max(applied * 1.1), 50.0);
+    let top = (f * 1.15).max(applied * 1.1);
+    let y_max = nice_ceiling(top, if top <= 100.0 { 10.0 } else { 50.0 });
 
     // Euler: from where it crosses the top of the chart.
     let lambda_top = std::f64::consts::PI * (e / y_max).sqrt();
@@ -232,7 +233,7 @@ mod tests {
     #[test]
     fn range_grows_for_slender_members() {
         let mut m = sample_member("A");
-        m.length_mm = 20_000.0;
+        m.length_mm = 12_000.0;
         let p = Prepared::new(&m).unwrap();
         let r = p.check().unwrap();
         let d = build(&p, &r, false).unwrap();

@@ -148,9 +148,7 @@ where
     };
     chart
         .draw_series(AreaSeries::new(lower, 0.0, pal.shade.filled()))
-        .map_err(err)?
-        .label("within capacity (shaded)")
-        .legend(move |(x, y)| Rectangle::new([(x, y - 5), (x + 18, y + 5)], pal.shade.filled()));
+        .map_err(err)?;
 
     let plateau = [(0.0, data.yield_mpa), (data.x_max, data.yield_mpa)];
     chart
@@ -160,11 +158,7 @@ where
             s(5.0),
             pal.plateau.stroke_width(s(1.5)),
         ))
-        .map_err(err)?
-        .label(format!("strength plateau {:.0} MPa", data.yield_mpa))
-        .legend(move |(x, y)| {
-            PathElement::new([(x, y), (x + 18, y)], pal.plateau.stroke_width(s(1.5)))
-        });
+        .map_err(err)?;
 
     if !data.euler.is_empty() {
         let euler = data.euler.clone();
@@ -175,11 +169,7 @@ where
                 s(3.0),
                 pal.euler.stroke_width(s(1.5)),
             ))
-            .map_err(err)?
-            .label("Euler π²E/λ²")
-            .legend(move |(x, y)| {
-                PathElement::new([(x, y), (x + 18, y)], pal.euler.stroke_width(s(1.5)))
-            });
+            .map_err(err)?;
     }
 
     for (i, curve) in data.perry.iter().enumerate() {
@@ -189,9 +179,7 @@ where
                 curve.points.iter().copied(),
                 c.stroke_width(s(1.0)),
             ))
-            .map_err(err)?
-            .label(curve.label.clone())
-            .legend(move |(x, y)| PathElement::new([(x, y), (x + 18, y)], c.stroke_width(s(1.0))));
+            .map_err(err)?;
     }
 
     for (mode, curve) in &data.design {
@@ -199,17 +187,11 @@ where
             Mode::Major => (pal.major, 2.5),
             _ => (pal.minor, 2.5),
         };
-        let label = match mode {
-            Mode::Major => "design curve, major axis (solid)",
-            _ => "design curve, minor axis (long dashes)",
-        };
         let style = c.stroke_width(s(width));
         if *mode == Mode::Major {
             chart
                 .draw_series(LineSeries::new(curve.points.iter().copied(), style))
-                .map_err(err)?
-                .label(label)
-                .legend(move |(x, y)| PathElement::new([(x, y), (x + 18, y)], style));
+                .map_err(err)?;
         } else {
             chart
                 .draw_series(DashedLineSeries::new(
@@ -218,9 +200,7 @@ where
                     s(5.0),
                     style,
                 ))
-                .map_err(err)?
-                .label(label)
-                .legend(move |(x, y)| PathElement::new([(x, y), (x + 18, y)], style));
+                .map_err(err)?;
         }
     }
 
@@ -240,12 +220,6 @@ where
             .draw_series(std::iter::once(PathElement::new(
                 [(x, applied), (x, res)],
                 c.stroke_width(s(1.0)),
-            )))
-            .map_err(err)?;
-        chart
-            .draw_series(std::iter::once(Rectangle::new(
-                [(x, res), (x, res)],
-                c.stroke_width(s(2.0)),
             )))
             .map_err(err)?;
         let (rx, ry) = chart.backend_coord(&(x, res));
@@ -285,15 +259,5 @@ where
         }
     }
 
-    chart
-        .configure_series_labels()
-        .position(SeriesLabelPosition::UpperRight)
-        .background_style(pal.background.mix(0.9))
-        .border_style(pal.grid)
-        .label_font(font(if narrow { 10.0 } else { 12.0 }))
-        .margin(s(6.0))
-        .legend_area_size(s(24.0))
-        .draw()
-        .map_err(err)?;
     Ok(governing)
 }
