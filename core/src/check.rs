@@ -161,6 +161,9 @@ impl Prepared {
     /// Validates the member and resolves its section and material.
     pub fn new(member: &Member) -> Result<Prepared> {
         let (section, material) = resolve(member)?;
+        member
+            .buckling_lengths()
+            .map_err(|e| e.in_member(&member.id))?;
         Ok(Prepared {
             member: member.clone(),
             section,
@@ -309,12 +312,12 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     })
 }
 
-/// Validates a member and resolves its section and material without
+/// Validates a member's options and resolves its section and material (its
+/// buckling lengths are checked where they are used) without
 /// copying the member.
 pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    member.buckling_lengths().map_err(wrap)?;
     let section = member.section.build().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     Ok((section, material))

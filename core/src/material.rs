@@ -690,9 +690,11 @@ fn same_name(name: &str, key: &str) -> bool {
 fn find(name: &str) -> Option<Found> {
     let key = Key::new(name)?;
     let n = key.as_str();
-    // Timber classes.
-    if let Some(t) = TIMBER.iter().find(|t| same_name(t.name, n)) {
-        return Some(Found::Timber(t));
+    // Timber classes (EN 338 "C..", EN 14080 "GL..").
+    if n.starts_with('C') || n.starts_with('G') {
+        if let Some(t) = TIMBER.iter().find(|t| same_name(t.name, n)) {
+            return Some(Found::Timber(t));
+        }
     }
     // ASTM.
     let astm = n.strip_prefix("ASTM").unwrap_or(n);

@@ -21,34 +21,65 @@ use crate::trace::{push, Trace};
 /// slenderness `lambda` = L_cr / i and eccentricity ratio `ecc` = e c / i^2.
 pub fn first_yield_stress(f: f64, e: f64, lambda: f64, ecc: f64) -> f64 {
     let sigma_e = std::f64::consts::PI.powi(2) * e / (lambda * lambda);
-    // g(s) < 0 below the root, > 0 above; theta >= pi/2 counts as above.
-    let g = |s: f64| -> f64 {
-        let theta = 0.5 * lambda * (s / e).sqrt();
-        if theta >= FRAC_PI_2 {
-            return f64::INFINITY;
-        }
-        s * (1.0 + ecc / theta.cos()) - f
+    // The secant condition s (1 + ecc sec theta) = f multiplied through by
+    // cos theta, h(s) = s (cos theta + ecc) - f cos theta, has the same root
+    // on (0, sigma_E) and stays finite up to sigma_E (theta = pi/2), so a
+    // bracketing solver can use it: h(0) = -f < 0, and h > 0 above the root.
+    let h = |s: f64| -> f64 {
+        let theta = (0.5 * lambda * (s.max(0.0) / e).sqrt()).min(FRAC_PI_2);
+        let c = theta.cos();
+        s * (c + ecc) - f * c
     };
-    let mut lo = 0.0_f64;
-    let mut hi = f.min(sigma_e);
-    if !(hi.is_finite() && hi > 0.0) {
+    let hi0 = f.min(sigma_e);
+    if !(hi0.is_finite() && hi0 > 0.0) {
         return 0.0;
     }
-    if g(hi) <= 0.0 {
-        return hi;
+    let (mut lo, mut hi) = (0.0_f64, hi0);
+    let (mut h_lo, mut h_hi) = (-f, h(hi0));
+    if h_hi <= 0.0 {
+        return hi0;
     }
+    // Illinois variant of regula falsi: superlinear, and never leaves the
+    // bracket, so it converges as surely as bisection in a few steps.
+    let mut side = 0i8;
     for _ in 0..200 {
-        let mid = 0.5 * (lo + hi);
-        if g(mid) <= 0.0 {
+        let denom = h_hi - h_lo;
+        let mut mid = if denom > 0.0 {
+            hi - h_hi * (hi - lo) / denom
+        } else {
+            0.5 * (lo + hi)
+        };
+        if !(mid > lo && mid < hi) {
+            mid = 0.5 * (lo + hi);
+        }
+        let h_mid = h(mid);
+        if h_mid.abs() <= 1e-14 * f {
+            return mid;
+        }
+        if h_mid <= 0.0 {
             lo = mid;
+            h_lo = h_mid;
+            if side == -1 {
+                h_hi *= 0.5;
+            }
+            side = -1;
         } else {
             hi = mid;
+            h_hi = h_mid;
+            if side == 1 {
+                h_lo *= 0.5;
+            }
+            side = 1;
         }
         if hi - lo <= 1e-13 * hi {
             break;
         }
     }
-    0.5 * (lo + hi)
+    if h_lo.abs() <= h_hi.abs() {
+        lo
+    } else {
+        hi
+    }
 }
 
 /// Member-level working.
@@ -165,6 +196,49 @@ mod tests {
     )]
 
     use super::*;
+
+    /// Plain bisection of the secant condition itself, as the reference.
+    fn bisected(f: f64, e: f64, lambda: f64, ecc: f64) -> f64 {
+        let sigma_e = std::f64::consts::PI.powi(2) * e / (lambda * lambda);
+        let g = |s: f64| {
+            let theta = 0.5 * lambda * (s / e).sqrt();
+            if theta >= FRAC_PI_2 {
+                f64::INFINITY
+            } else {
+                s * (1.0 + ecc / theta.cos()) - f
+            }
+        };
+        let (mut lo, mut hi) = (0.0, f.min(sigma_e));
+        if g(hi) <= 0.0 {
+            return hi;
+        }
+        for _ in 0..300 {
+            let mid = 0.5 * (lo + hi);
+            if g(mid) <= 0.0 {
+                lo = mid;
+            } else {
+                hi = mid;
+            }
+        }
+        0.5 * (lo + hi)
+    }
+
+    #[test]
+    fn the_fast_solver_agrees_with_bisection_everywhere() {
+        for f in [235.0, 355.0, 690.0] {
+            for k in 1..=60 {
+                let lambda = 5.0 * f64::from(k);
+                for ecc in [0.0, 1e-4, 0.01, 0.1, 0.3, 1.0, 3.0, 10.0] {
+                    let a = first_yield_stress(f, 210_000.0, lambda, ecc);
+                    let b = bisected(f, 210_000.0, lambda, ecc);
+                    assert!(
+                        (a - b).abs() <= 1e-9 * b.max(1e-9),
+                        "f={f} lambda={lambda} ecc={ecc}: {a} vs {b}"
+                    );
+                }
+            }
+        }
+    }
 
     #[test]
     fn root_satisfies_the_formula() {

@@ -12,6 +12,7 @@ use serde::{Deserialize, Serialize};
 
 use crate::error::Result;
 
+mod cache;
 pub mod geometry;
 pub mod outline;
 pub mod plates;
@@ -331,7 +332,7 @@ impl SectionSpec {
             // Built once per entry and kept by the catalogue.
             return crate::catalogue::section(&c.designation);
         }
-        let props = shapes::properties(self)?;
+        let props = cache::properties(self)?;
         Ok(Section {
             spec: self.clone(),
             family: self.family(),

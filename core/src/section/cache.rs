@@ -1,0 +1,206 @@
+//! A small per-thread memo of computed section properties.
+//!
+//! The members of a list share a handful of sections, and every edit in the
+//! app re-checks members whose section did not change, so the properties of
+//! a dimensional spec are computed once and then looked up. The key is the
+//! exact bit pattern of every dimension, so a hit returns exactly what the
+//! computation would; errors are not kept (they are cheap and carry text).
+//! Lookups allocate nothing; the memo is cleared when it reaches its cap.
+
+use std::cell::RefCell;
+use std::collections::HashMap;
+use std::hash::{BuildHasherDefault, Hasher};
+
+use super::{HollowMake, IMake, Properties, SectionSpec};
+use crate::error::Result;
+
+/// Entries kept before the memo starts again.
+const CAP: usize = 4096;
+
+/// The bits of an absent optional dimension (a NaN no parser produces).
+const NONE: u64 = 0x7ff8_dead_beef_0001;
+
+type Key = [u64; 8];
+
+/// FNV-1a style mixing over the key's words.
+#[derive(Default)]
+struct Fnv(u64);
+
+impl Hasher for Fnv {
+    fn finish(&self) -> u64 {
+        self.0
+    }
+    fn write(&mut self, bytes: &[u8]) {
+        let mut h = if self.0 == 0 {
+            0xcbf2_9ce4_8422_2325
+        } else {
+            self.0
+        };
+        for b in bytes {
+            h ^= u64::from(*b);
+            h = h.wrapping_mul(0x0100_0000_01b3);
+        }
+        self.0 = h;
+    }
+    fn write_u64(&mut self, v: u64) {
+        // Word at a time: the key is eight words, hashed in eight steps.
+        let h = if self.0 == 0 {
+            0xcbf2_9ce4_8422_2325
+        } else {
+            self.0
+        };
+        self.0 = (h ^ v).wrapping_mul(0x0100_0000_01b3).rotate_left(29);
+    }
+}
+
+thread_local! {
+    static MEMO: RefCell<HashMap<Key, Properties, BuildHasherDefault<Fnv>>> =
+        RefCell::new(HashMap::with_capacity_and_hasher(64, BuildHasherDefault::default()));
+}
+
+fn opt(v: Option<f64>) -> u64 {
+    v.map_or(NONE, f64::to_bits)
+}
+
+/// The memo key of a dimensional spec; `None` for catalogue references.
+fn key(spec: &SectionSpec) -> Option<Key> {
+    let k = match spec {
+        SectionSpec::I(s) => [
+            1,
+            s.depth_mm.to_bits(),
+            s.width_mm.to_bits(),
+            s.flange_mm.to_bits(),
+            s.web_mm.to_bits(),
+            s.root_radius_mm.to_bits(),
+            u64::from(s.make == IMake::Welded),
+            0,
+        ],
+        SectionSpec::Rhs(s) => [
+            2,
+            s.depth_mm.to_bits(),
+            s.width_mm.to_bits(),
+            s.wall_mm.to_bits(),
+            s.outer_radius_mm.to_bits(),
+            opt(s.inner_radius_mm),
+            u64::from(s.make == HollowMake::ColdFormed),
+            0,
+        ],
+        SectionSpec::Chs(s) => [
+            3,
+            s.diameter_mm.to_bits(),
+            s.wall_mm.to_bits(),
+            u64::from(s.make == HollowMake::ColdFormed),
+            0,
+            0,
+            0,
+            0,
+        ],
+        SectionSpec::Angle(s) => [
+            4,
+            s.depth_mm.to_bits(),
+            s.width_mm.to_bits(),
+            s.thickness_mm.to_bits(),
+            s.root_radius_mm.to_bits(),
+            s.toe_radius_mm.to_bits(),
+            0,
+            0,
+        ],
+        SectionSpec::Channel(s) | SectionSpec::Tee(s) => [
+            if matches!(spec, SectionSpec::Channel(_)) {
+                5
+            } else {
+                6
+            },
+            s.depth_mm.to_bits(),
+            s.width_mm.to_bits(),
+            s.flange_mm.to_bits(),
+            s.web_mm.to_bits(),
+            s.root_radius_mm.to_bits(),
+            0,
+            0,
+        ],
+        SectionSpec::Rect(s) => [7, s.depth_mm.to_bits(), s.width_mm.to_bits(), 0, 0, 0, 0, 0],
+        SectionSpec::Round(s) => [8, s.diameter_mm.to_bits(), 0, 0, 0, 0, 0, 0],
+        SectionSpec::Given(s) => [
+            9,
+            s.area_mm2.to_bits(),
+            s.i_major_mm4.to_bits(),
+            s.i_minor_mm4.to_bits(),
+            opt(s.torsion_mm4),
+            opt(s.warping_mm6),
+            0,
+            0,
+        ],
+        SectionSpec::Catalogue(_) => return None,
+    };
+    Some(k)
+}
+
+/// The properties of `spec`, from the memo when it has them.
+pub fn properties(spec: &SectionSpec) -> Result<Properties> {
+    let Some(k) = key(spec) else {
+        return super::shapes::properties(spec);
+    };
+    let hit = MEMO.with(|m| m.try_borrow().ok().and_then(|m| m.get(&k).copied()));
+    if let Some(p) = hit {
+        return Ok(p);
+    }
+    let p = super::shapes::properties(spec)?;
+    MEMO.with(|m| {
+        if let Ok(mut m) = m.try_borrow_mut() {
+            if m.len() >= CAP {
+                m.clear();
+            }
+            m.insert(k, p);
+        }
+    });
+    Ok(p)
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::section::{Rect, Rhs};
+
+    #[test]
+    fn a_hit_is_exactly_the_computation() {
+        let spec = SectionSpec::Rhs(Rhs {
+            depth_mm: 150.0,
+            width_mm: 100.0,
+            wall_mm: 6.0,
+            outer_radius_mm: 9.0,
+            inner_radius_mm: Some(6.0),
+            make: HollowMake::HotFinished,
+        });
+        let first = properties(&spec).unwrap();
+        let again = properties(&spec).unwrap();
+        assert_eq!(first, super::super::shapes::properties(&spec).unwrap());
+        assert_eq!(first, again);
+    }
+
+    #[test]
+    fn different_dimensions_never_share_an_entry() {
+        let a = properties(&SectionSpec::Rect(Rect {
+            depth_mm: 100.0,
+            width_mm: 50.0,
+        }))
+        .unwrap();
+        let b = properties(&SectionSpec::Rect(Rect {
+            depth_mm: 50.0,
+            width_mm: 100.0,
+        }))
+        .unwrap();
+        assert_ne!(a.i_y_mm4, b.i_y_mm4);
+        let bad = properties(&SectionSpec::Rect(Rect {
+            depth_mm: -1.0,
+            width_mm: 50.0,
+        }));
+        assert!(bad.is_err());
+    }
+}
