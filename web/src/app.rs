@@ -299,7 +299,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                     <button type="button" on:click=move |_| browser::apply_update()>"Reload to update"</button>
                     <button type="button" class="quiet" on:click=move |_| ctx.update_ready.set(false)>"Later"</button>
                 </div>
-            })}
+            }.into_any())}
             {move || ctx.problem.get().map(|p| {
                 let raw = p.raw.clone();
                 let aside = p.aside.clone();
@@ -329,7 +329,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                             }>"Discard the unreadable copy and save from now on"</button>
                         </div>
                     </div>
-                }
+                }.into_any()
             })}
             {move || ctx.save_problem.get().map(|msg| view! {
                 <div class="banner banner-problem" data-testid="save-problem" role="alert">
@@ -340,7 +340,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                         let _ = browser::download(&name, &text, "application/json");
                     }>"Download the workspace"</button>
                 </div>
-            })}
+            }.into_any())}
             {move || ctx.other_tab.get().map(|theirs| {
                 let theirs2 = theirs.clone();
                 view! {
@@ -369,7 +369,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                             schedule_save(ctx);
                         }>"Keep mine (and save it)"</button>
                     </div>
-                }
+                }.into_any()
             })}
             {move || ctx.undo.get().map(|u| {
                 let what = match &u {
@@ -405,7 +405,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                         }>"↶ Undo"</button>
                         <button type="button" class="quiet" on:click=move |_| ctx.undo.set(None)>"Dismiss"</button>
                     </div>
-                }
+                }.into_any()
             })}
         </div>
     }
@@ -590,7 +590,7 @@ fn MemberRow(ctx: Ctx, checked: Arc<Checked>, selected_id: Memo<Option<String>>)
                         if let Some(Some(j)) = ctx.with_members(|ms| listops::move_down(ms, i)) { ctx.select(j); }
                     }
                 }>"↓"</button>
-                <button type="button" data-testid="duplicate-member" aria-label=format!("Duplicate {id}")  on:click=move |e: ev::MouseEvent| {
+                <button type="button" data-testid="duplicate-member" aria-label=format!("Copy {id}")  on:click=move |e: ev::MouseEvent| {
                     e.stop_propagation();
                     if let Some(i) = ctx.index_of(&i4) {
                         if let Some(Some(j)) = ctx.with_members(|ms| listops::duplicate(ms, i)) { ctx.select(j); }
@@ -1052,7 +1052,7 @@ fn working_view(c: &Checked) -> impl IntoView {
         })
         .collect();
     view! {
-                <div class="table-wrap">
+                <div class="table-wrap" tabindex="0" role="region" aria-label="Modes checked">
                     <table class="modes">
                         <caption>"Modes checked"</caption>
                         <thead><tr>
@@ -1081,7 +1081,7 @@ fn working_view(c: &Checked) -> impl IntoView {
                 {groups.into_iter().map(|(s, steps)| view! {
                     <details class="working" open=true>
                         <summary>{scope_title(s)}</summary>
-                        <div class="table-wrap">
+                        <div class="table-wrap" tabindex="0" role="region" aria-label=format!("Working: {}", scope_title(s))>
                             <table>
                                 <thead><tr><th scope="col">"symbol"</th><th scope="col">"meaning"</th><th scope="col">"value"</th><th scope="col">"from"</th></tr></thead>
                                 <tbody>
@@ -1169,8 +1169,10 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
                     " show Perry-Robertson bows L/250, L/500, L/1000"
                 </label>
             </div>
-            <canvas id="envelope" class="envelope" node_ref=canvas role="img"
-                aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+            <div class="canvas-frame">
+                <canvas id="envelope" class="envelope" node_ref=canvas role="img"
+                    aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+            </div>
             <ul class="chart-legend" aria-label="Chart legend">
                 <li><span class="sw sw-shade"></span>"within capacity (shaded)"</li>
                 <li><span class="sw sw-major"></span>"design curve, major axis (solid)"</li>
