@@ -136,11 +136,14 @@ fn ensure_chromium() -> Result<()> {
 }
 
 /// Runs `npm ci` (or `npm install` when that fails) in tests/browser when
-/// playwright-core or axe-core is not installed there.
+/// playwright-core, axe-core or binaryen is not installed there.
 fn ensure_node_modules() -> Result<()> {
     let dir = tests_dir();
     let modules = dir.join("node_modules");
-    if modules.join("playwright-core").is_dir() && modules.join("axe-core").is_dir() {
+    if ["playwright-core", "axe-core", "binaryen"]
+        .iter()
+        .all(|m| modules.join(m).is_dir())
+    {
         return Ok(());
     }
     if !util::on_path("node") || !util::on_path("npm") {

@@ -130,6 +130,10 @@ pub fn build_into(dist: &Path, use_wasm_opt: bool) -> Result<Built> {
         .generate(dist)
         .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?;
 
+    let glue = dist.join(format!("{OUT_NAME}.js"));
+    let text = std::fs::read_to_string(&glue)?;
+    std::fs::write(&glue, tidy_glue(&text))?;
+
     let wasm_out = dist.join(format!("{OUT_NAME}_bg.wasm"));
     if use_wasm_opt {
         optimise(&wasm_out)?;
@@ -221,62 +225,245 @@ const WASM_FEATURES: [&str; 6] = [
     "--enable-mutable-globals",
 ];
 
-/// Runs `wasm-opt` at each of [`WASM_OPT_LEVELS`] when it is on PATH and
-/// keeps whichever module is smallest gzipped, the one wasm-bindgen wrote
-/// included: the budget counts gzipped bytes, and binaryen's `-Oz` can make
-/// rustc's already size-optimised module compress worse (its function
-/// reordering breaks up similar code), where the lighter `-O1` still
-/// shrinks it. A wasm-opt that fails (an old binaryen may not know a
-/// feature of the module) is skipped with a warning.
+/// The wasm-opt programs to try: binaryen from the npm registry when the
+/// node project of the browser tests has it installed (pinned there by its
+/// lock file), then the one on PATH (Debian's).
+fn wasm_opt_programs() -> Vec<PathBuf> {
+    let mut out = Vec::new();
+    let npm = util::root().join("tests/browser/node_modules/.bin/wasm-opt");
+    if npm.is_file() && util::on_path("node") {
+        out.push(npm);
+    }
+    if util::on_path("wasm-opt") {
+        out.push(PathBuf::from("wasm-opt"));
+    }
+    out
+}
+
+/// Runs each wasm-opt of [`wasm_opt_programs`] at each of
+/// [`WASM_OPT_LEVELS`] and keeps whichever module is smallest gzipped, the
+/// one wasm-bindgen wrote included: the budget counts gzipped bytes, and
+/// binaryen's `-Oz` can make rustc's already size-optimised module
+/// compress worse (its function reordering breaks up similar code), where
+/// the lighter `-O1` still shrinks it. An output whose exported tables
+/// changed their element type is refused: Debian's binaryen 108 moves the
+/// export of wasm-bindgen's externref table onto the function table, and
+/// the page then fails to start. A wasm-opt that fails is skipped with a
+/// warning.
 fn optimise(wasm: &Path) -> Result<()> {
-    if !util::on_path("wasm-opt") {
-        eprintln!("xtask: note: wasm-opt is not on PATH; the wasm is not shrunk further");
+    let programs = wasm_opt_programs();
+    if programs.is_empty() {
+        eprintln!("xtask: note: no wasm-opt found; the wasm is not shrunk further");
         return Ok(());
     }
-    let original = util::gzip_len(&std::fs::read(wasm)?)?;
+    let original_bytes = std::fs::read(wasm)?;
+    let original = util::gzip_len(&original_bytes)?;
+    let tables = exported_tables(&original_bytes)
+        .with_context(|| format!("reading the tables of {}", wasm.display()))?;
     let mut best: Option<(usize, PathBuf, String)> = None;
-    for (i, level) in WASM_OPT_LEVELS.iter().enumerate() {
-        let out = wasm.with_extension(format!("opt{i}.wasm"));
-        let result = util::run(
-            std::process::Command::new("wasm-opt")
-                .args(level.iter())
-                .args(WASM_FEATURES)
-                .arg(wasm)
-                .arg("-o")
-                .arg(&out),
-        );
-        let name = level.join(" ");
-        match result {
-            Ok(()) => {
-                let gz = util::gzip_len(&std::fs::read(&out)?)?;
-                eprintln!("xtask: wasm-opt {name}: {original} B -> {gz} B gzipped");
-                if best.as_ref().is_none_or(|(b, _, _)| gz < *b) {
-                    if let Some((_, old, _)) = best.take() {
-                        let _ = std::fs::remove_file(old);
-                    }
-                    best = Some((gz, out, name));
-                } else {
+    let mut n = 0;
+    for program in &programs {
+        for level in WASM_OPT_LEVELS {
+            n += 1;
+            let out = wasm.with_extension(format!("opt{n}.wasm"));
+            let name = format!("{} {}", program.display(), level.join(" "));
+            let result = util::run(
+                std::process::Command::new(program)
+                    .args(level.iter())
+                    .args(WASM_FEATURES)
+                    .arg(wasm)
+                    .arg("-o")
+                    .arg(&out),
+            );
+            if let Err(e) = result {
+                let _ = std::fs::remove_file(&out);
+                eprintln!("xtask: WARNING: {name} failed: {e:#}");
+                continue;
+            }
+            let bytes = std::fs::read(&out)?;
+            match exported_tables(&bytes) {
+                Ok(t) if t == tables => {}
+                Ok(t) => {
                     let _ = std::fs::remove_file(&out);
+                    eprintln!(
+                        "xtask: WARNING: {name} changed the exported tables ({tables:?} -> {t:?}); its output is not used"
+                    );
+                    continue;
+                }
+                Err(e) => {
+                    let _ = std::fs::remove_file(&out);
+                    eprintln!("xtask: WARNING: {name} wrote a module that cannot be read ({e:#}); not used");
+                    continue;
                 }
             }
-            Err(e) => {
+            let gz = util::gzip_len(&bytes)?;
+            eprintln!("xtask: {name}: {original} B -> {gz} B gzipped");
+            if best.as_ref().is_none_or(|(b, _, _)| gz < *b) {
+                if let Some((_, old, _)) = best.take() {
+                    let _ = std::fs::remove_file(old);
+                }
+                best = Some((gz, out, name));
+            } else {
                 let _ = std::fs::remove_file(&out);
-                eprintln!("xtask: WARNING: wasm-opt {name} failed: {e:#}");
             }
         }
     }
     match best {
         Some((gz, path, name)) if gz < original => {
             std::fs::rename(&path, wasm)?;
-            eprintln!("xtask: kept the wasm-opt {name} module ({gz} B gzipped)");
+            eprintln!("xtask: kept the output of {name} ({gz} B gzipped)");
         }
         Some((_, path, _)) => {
             let _ = std::fs::remove_file(path);
             eprintln!("xtask: kept the module as wasm-bindgen wrote it ({original} B gzipped, the smallest)");
         }
-        None => {}
+        None => {
+            eprintln!("xtask: kept the module as wasm-bindgen wrote it (no usable wasm-opt output)")
+        }
     }
     Ok(())
+}
+
+/// The exported tables of a wasm module: (export name, element type byte:
+/// 0x70 funcref, 0x6f externref), sorted by name. Reads only the import,
+/// table and export sections.
+pub fn exported_tables(bytes: &[u8]) -> Result<Vec<(String, u8)>> {
+    struct Reader<'a> {
+        bytes: &'a [u8],
+        at: usize,
+    }
+    impl Reader<'_> {
+        fn byte(&mut self) -> Result<u8> {
+            let b = *self
+                .bytes
+                .get(self.at)
+                .ok_or_else(|| anyhow::anyhow!("the module ends early"))?;
+            self.at += 1;
+            Ok(b)
+        }
+        fn leb(&mut self) -> Result<u64> {
+            let mut value = 0u64;
+            for shift in (0..64).step_by(7) {
+                let b = self.byte()?;
+                value |= u64::from(b & 0x7f) << shift;
+                if b & 0x80 == 0 {
+                    return Ok(value);
+                }
+            }
+            bail!("a number in the module is too long")
+        }
+        fn name(&mut self) -> Result<String> {
+            let n = usize::try_from(self.leb()?)?;
+            let s = self
+                .bytes
+                .get(self.at..self.at + n)
+                .ok_or_else(|| anyhow::anyhow!("the module ends early"))?;
+            self.at += n;
+            Ok(String::from_utf8_lossy(s).into_owned())
+        }
+        fn limits(&mut self) -> Result<()> {
+            let flags = self.byte()?;
+            self.leb()?;
+            if flags & 1 != 0 {
+                self.leb()?;
+            }
+            Ok(())
+        }
+    }
+    if bytes.get(..4) != Some(b"\0asm".as_slice()) {
+        bail!("not a wasm module");
+    }
+    let mut r = Reader { bytes, at: 8 };
+    let mut table_types: Vec<u8> = Vec::new();
+    let mut exports: Vec<(String, u64)> = Vec::new();
+    while r.at < bytes.len() {
+        let id = r.byte()?;
+        let size = r.leb()?;
+        let end = r.at + usize::try_from(size)?;
+        match id {
+            2 => {
+                for _ in 0..r.leb()? {
+                    r.name()?;
+                    r.name()?;
+                    match r.byte()? {
+                        0 => {
+                            r.leb()?;
+                        }
+                        1 => {
+                            table_types.push(r.byte()?);
+                            r.limits()?;
+                        }
+                        2 => r.limits()?,
+                        3 => {
+                            r.byte()?;
+                            r.byte()?;
+                        }
+                        4 => {
+                            r.byte()?;
+                            r.leb()?;
+                        }
+                        k => bail!("unknown import kind {k}"),
+                    }
+                }
+            }
+            4 => {
+                for _ in 0..r.leb()? {
+                    table_types.push(r.byte()?);
+                    r.limits()?;
+                }
+            }
+            7 => {
+                for _ in 0..r.leb()? {
+                    let name = r.name()?;
+                    let kind = r.byte()?;
+                    let index = r.leb()?;
+                    if kind == 1 {
+                        exports.push((name, index));
+                    }
+                }
+            }
+            _ => {}
+        }
+        r.at = end;
+        if r.at > bytes.len() {
+            bail!("a section runs past the end of the module");
+        }
+    }
+    let mut out = Vec::with_capacity(exports.len());
+    for (name, index) in exports {
+        let ty = usize::try_from(index)
+            .ok()
+            .and_then(|i| table_types.get(i))
+            .copied()
+            .ok_or_else(|| anyhow::anyhow!("export {name} names a table that does not exist"))?;
+        out.push((name, ty));
+    }
+    out.sort();
+    Ok(out)
+}
+
+/// Drops the indentation, the blank lines and the whole-line `//`
+/// comments of wasm-bindgen's JS glue (about a tenth of its gzipped size).
+/// Only when no line could be inside a multi-line string: every line has
+/// an even number of backticks and none ends in a backslash; otherwise the
+/// text is returned as it is.
+pub fn tidy_glue(js: &str) -> String {
+    let safe = js
+        .lines()
+        .all(|l| l.matches('`').count() % 2 == 0 && !l.trim_end().ends_with('\\'));
+    if !safe {
+        return js.to_string();
+    }
+    let mut out = String::with_capacity(js.len());
+    for line in js.lines() {
+        let t = line.trim();
+        if t.is_empty() || t.starts_with("//") {
+            continue;
+        }
+        out.push_str(t);
+        out.push('\n');
+    }
+    out
 }
 
 /// Fills the worker template with the cache name and the precache list.
@@ -465,6 +652,42 @@ mod tests {
         // Mid-height the strut is bowed right of the centre line.
         let mid = at(37, 32);
         assert_eq!(mid, &[232, 163, 61]);
+    }
+
+    /// A module with a function table and an externref table, exporting
+    /// the externref one as wasm-bindgen does (hand-assembled from the
+    /// binary format: magic, version, table section, export section).
+    fn two_tables(export_index: u8) -> Vec<u8> {
+        let mut m = b"\0asm\x01\0\0\0".to_vec();
+        m.extend([4, 7, 2, 0x70, 0, 1, 0x6f, 0, 4]);
+        m.extend([7, 8, 1, 4, b'r', b'e', b'f', b's', 1]);
+        m.push(export_index);
+        m
+    }
+
+    #[test]
+    fn exported_tables_follow_the_index() {
+        assert_eq!(
+            exported_tables(&two_tables(1)).unwrap(),
+            vec![("refs".to_string(), 0x6f)]
+        );
+        assert_eq!(
+            exported_tables(&two_tables(0)).unwrap(),
+            vec![("refs".to_string(), 0x70)]
+        );
+        assert!(exported_tables(&two_tables(2)).is_err());
+        assert!(exported_tables(b"\0asm\x01\0\0\0\x04\x09").is_err());
+        assert!(exported_tables(b"nope").is_err());
+    }
+
+    #[test]
+    fn glue_is_tidied_only_when_safe() {
+        let js = "function f() {\n    // a note\n\n    return `${x}`;\n}\n";
+        assert_eq!(tidy_glue(js), "function f() {\nreturn `${x}`;\n}\n");
+        let multi = "const s = `one\n    // not a comment\n`;\n";
+        assert_eq!(tidy_glue(multi), multi);
+        let cont = "const s = 'a\\\n    b';\n";
+        assert_eq!(tidy_glue(cont), cont);
     }
 
     #[test]
