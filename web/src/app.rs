@@ -113,6 +113,22 @@ impl Ctx {
     }
 }
 
+/// A view made afresh whenever `key` changes. A plain reactive block would
+/// patch the old inputs in place, and an input the person has typed in keeps
+/// its text whatever its `value` attribute says; a new key makes new inputs.
+/// One function for every such block, so the keyed list is compiled once.
+fn made_afresh(key: Signal<u64>, make: Arc<dyn Fn() -> AnyView + Send + Sync>) -> impl IntoView {
+    view! { <For each=move || std::iter::once(key.get()) key=|k| *k children=move |_| make() /> }
+}
+
+/// A key for [`made_afresh`] from any hashable value.
+fn key_of<T: std::hash::Hash>(t: &T) -> u64 {
+    use std::hash::Hasher;
+    let mut h = std::collections::hash_map::DefaultHasher::new();
+    t.hash(&mut h);
+    h.finish()
+}
+
 fn set_problem(ctx: Ctx, raw: String, reason: String) {
     let aside = format!("{UNREADABLE_PREFIX}{}", browser::now_ms() as u64);
     let aside = browser::set(&aside, &raw).ok().map(|()| aside);
@@ -254,6 +270,7 @@ pub fn App() -> impl IntoView {
         orient_listener.remove();
     });
     browser::register_service_worker(move || ctx.update_ready.set(true));
+    let active_list = Memo::new(move |_| ws.with(|w| w.active));
 
     view! {
         <div class="app">
@@ -276,10 +293,9 @@ pub fn App() -> impl IntoView {
                     <ListPanel ctx=ctx />
                 </section>
                 <section class="pane pane-editor" aria-labelledby="h-editor">
-                    {move || {
-                        let _ = (ctx.generation.get(), ctx.ws.with(|w| w.active));
+                    {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
                         view! { <Editor ctx=ctx /> }
-                    }}
+                    }.into_any()))}
                 </section>
                 <section class="pane pane-results" aria-labelledby="h-results">
                     <Results ctx=ctx />
@@ -463,8 +479,7 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                     }.into_any()).collect::<Vec<_>>()}
                 </select>
             </div>
-            {move || {
-                let _ = active.get();
+            {made_afresh(Signal::derive(move || key_of(&active.get())), Arc::new(move || {
                 let title = ctx.ws.with_untracked(|w| w.active_list().map(|l| l.title.clone()).unwrap_or_default());
                 view! {
                     <div class="field">
@@ -488,7 +503,7 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                         {move || title_error.get().map(|m| view! { <p class="field-error" data-testid="field-error">{m}</p> })}
                     </div>
                 }
-            }}
+            }.into_any()))}
             <div class="button-row">
                 <button type="button" data-testid="new-list" on:click=move |_| {
                     ctx.ws.update(|w| {
@@ -792,14 +807,12 @@ fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                     }.into_any()).collect::<Vec<_>>()}
                 </select>
             </div>
-            {move || {
-                let _ = generation.get();
-                if is_length.get() {
+            {made_afresh(Signal::derive(move || key_of(&(generation.get(), is_length.get()))), Arc::new(move || {let length = is_length.get_untracked(); if length {
                     view! { <NumField ctx=ctx field=lf /> }.into_any()
                 } else {
                     view! { <NumField ctx=ctx field=kf after=after /> }.into_any()
                 }
-            }}
+            }.into_any()))}
         </div>
     }
 }
@@ -872,15 +885,14 @@ fn Editor(ctx: Ctx) -> impl IntoView {
                         }.into_any()).collect::<Vec<_>>()}
                     </select>
                 </div>
-                {move || {
-                    let k = kind.get();
+                {made_afresh(Signal::derive(move || key_of(&kind.get())), Arc::new(move || {let k = kind.get_untracked();
                     view! {
                         <div class="field-grid">
                             {fields::section_fields(k).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }.into_any()).collect::<Vec<_>>()}
                             {fields::section_choices(k).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
                         </div>
                     }
-                }}
+                }.into_any()))}
             </fieldset>
             <fieldset>
                 <legend>"Material"</legend>
@@ -906,15 +918,14 @@ fn Editor(ctx: Ctx) -> impl IntoView {
                 <datalist id="grades">
                     {fields::GRADE_SUGGESTIONS.iter().map(|g| view! { <option value=*g></option> }.into_any()).collect::<Vec<_>>()}
                 </datalist>
-                {move || {
-                    let mode = mat_mode.get();
+                {made_afresh(Signal::derive(move || key_of(&mat_mode.get())), Arc::new(move || {let mode = mat_mode.get_untracked();
                     view! {
                         <div class="field-grid">
                             {fields::material_fields(mode).iter().map(|f| view! { <NumField ctx=ctx field=*f /> }.into_any()).collect::<Vec<_>>()}
                             {fields::material_choices(mode).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
                         </div>
                     }
-                }}
+                }.into_any()))}
             </fieldset>
             <fieldset>
                 <legend>"Length and restraint"</legend>
@@ -943,15 +954,14 @@ fn Editor(ctx: Ctx) -> impl IntoView {
                         }.into_any()).collect::<Vec<_>>()}
                     </select>
                 </div>
-                {move || {
-                    let me = method.get();
+                {made_afresh(Signal::derive(move || key_of(&method.get())), Arc::new(move || {let me = method.get_untracked();
                     view! {
                         <div class="field-grid">
                             {fields::option_fields(me).into_iter().map(|f| view! { <NumField ctx=ctx field=f /> }.into_any()).collect::<Vec<_>>()}
                             {fields::method_choices(me).into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
                         </div>
                     }
-                }}
+                }.into_any()))}
             </fieldset>
         </form>
     }

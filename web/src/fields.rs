@@ -227,7 +227,7 @@ pub const LCR_MINOR: Field = f(
 );
 
 /// How the material is given.
-#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
 pub enum MaterialMode {
     /// A named grade or strength class.
     Grade,

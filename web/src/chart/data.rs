@@ -55,17 +55,18 @@ pub struct ChartData {
     pub design: Vec<(Mode, Curve)>,
     /// The Perry-Robertson family (empty unless asked for).
     pub perry: Vec<Curve>,
-    /// The member's markers, one per flexural axis.
+    /// The member's markers, one per mode checked.
     pub markers: Vec<Marker>,
 }
 
 impl ChartData {
-    /// The governing marker (or the first).
+    /// The governing marker (or the one of least resistance).
     pub fn governing(&self) -> Option<&Marker> {
-        self.markers
-            .iter()
-            .find(|m| m.governing)
-            .or_else(|| self.markers.first())
+        self.markers.iter().find(|m| m.governing).or_else(|| {
+            self.markers
+                .iter()
+                .min_by(|a, b| a.resistance_mpa.total_cmp(&b.resistance_mpa))
+        })
     }
 }
 
@@ -122,7 +123,10 @@ pub fn build(
         Vec::new()
     };
 
-    let markers = flexural
+    // Every mode is marked at its slenderness (torsional modes at their
+    // equivalent slenderness), so a torsional mode that governs is shown.
+    let markers = result
+        .modes
         .iter()
         .map(|m| Marker {
             mode: m.mode,
@@ -207,7 +211,7 @@ mod tests {
         let p = Prepared::new(&m).unwrap();
         let r = p.check().unwrap();
         let d = build(&p, &r, true).unwrap();
-        assert_eq!(d.markers.len(), 2);
+        assert_eq!(d.markers.len(), r.modes.len());
         let g = d.governing().unwrap();
         assert_eq!(g.mode, r.governing);
         // The governing marker's design stress is the check's resistance over A.

@@ -9,6 +9,7 @@
 
 use plotters::coord::Shift;
 use plotters::prelude::*;
+use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters_canvas::CanvasBackend;
 use strutline_core::check::Mode;
 use web_sys::HtmlCanvasElement;
@@ -204,16 +205,22 @@ where
         }
     }
 
-    // Markers: applied stress (filled circle, governing larger) and the
-    // axis resistance on its design curve (open square), joined by a line.
+    // Markers: applied stress (filled dot, larger for the governing mode)
+    // and the mode's resistance (open square), joined by a line. Labels sit
+    // right of the dot unless that would leave the plot, and stack
+    // downwards when two markers are close.
     let mut governing = None;
-    for m in &data.markers {
-        let c = if m.mode == Mode::Major {
-            pal.major
-        } else {
-            pal.minor
+    let (plot_x, _) = chart.plotting_area().get_pixel_range();
+    let mut taken: Vec<(i32, i32)> = Vec::with_capacity(data.markers.len());
+    let mut order: Vec<&super::data::Marker> = data.markers.iter().collect();
+    order.sort_by_key(|m| !m.governing);
+    for m in order {
+        let c = match m.mode {
+            Mode::Major => pal.major,
+            Mode::Minor => pal.minor,
+            _ => pal.ink,
         };
-        let x = m.slenderness.min(data.x_max);
+        let x = m.slenderness.clamp(0.0, data.x_max);
         let applied = m.applied_mpa.min(data.y_max);
         let res = m.resistance_mpa.min(data.y_max);
         chart
@@ -239,23 +246,49 @@ where
             pal.background.stroke_width(s(1.5)),
         ))
         .map_err(err)?;
-        let tag = format!(
-            "{} {}",
-            if m.mode == Mode::Major {
-                "major"
-            } else {
-                "minor"
-            },
-            if m.governing { "(governs)" } else { "" }
-        );
-        root.draw(&Text::new(
-            tag,
-            (ax + r as i32 + s(4.0) as i32, ay - s(16.0) as i32),
-            font(12.0),
-        ))
-        .map_err(err)?;
+        let name = match m.mode {
+            Mode::Major => "major axis",
+            Mode::Minor => "minor axis",
+            Mode::Torsional => "torsional",
+            Mode::FlexuralTorsional => "flexural-torsional",
+            Mode::Section => "cross-section",
+        };
+        let tag = if m.governing {
+            format!("{name} · governs")
+        } else {
+            name.to_string()
+        };
+        let probe = font(12.0);
+        let (tw, th) = root.estimate_text_size(&tag, &probe).map_err(err)?;
+        let gap = r as i32 + s(5.0) as i32;
+        let right = ax + gap + tw as i32 <= plot_x.end;
+        let (anchor, lx) = if right {
+            (HPos::Left, ax + gap)
+        } else {
+            (HPos::Right, ax - gap)
+        };
+        let mut ly = ay;
+        let step = th as i32 + s(3.0) as i32;
+        while taken
+            .iter()
+            .any(|&(tx, ty)| (tx - lx).abs() < tw as i32 && (ty - ly).abs() < step)
+        {
+            ly += step;
+        }
+        taken.push((lx, ly));
+        let style = font(12.0).pos(Pos::new(anchor, VPos::Center));
+        root.draw(&Text::new(tag, (lx, ly), style)).map_err(err)?;
         if m.governing {
             governing = Some((m.slenderness, m.applied_mpa, (ax, ay)));
+        }
+    }
+    if governing.is_none() {
+        if let Some(g) = data.governing() {
+            let (ax, ay) = chart.backend_coord(&(
+                g.slenderness.clamp(0.0, data.x_max),
+                g.applied_mpa.min(data.y_max),
+            ));
+            governing = Some((g.slenderness, g.applied_mpa, (ax, ay)));
         }
     }
 
