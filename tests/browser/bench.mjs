@@ -44,20 +44,29 @@ const quantile = (xs, q) => {
 };
 
 // Runs in the page before its scripts: records when the first member row
-// becomes visible (and the start of the frame after it).
-function watchFirstRow() {
+// becomes visible, and when `want` rows are in the page, each with the
+// time at the start of the next animation frame's callbacks.
+function watchRows(want) {
   window.__strutlineFirstRow = null;
+  window.__strutlineAllRows = null;
+  const mark = (slot) => {
+    const seen = performance.now();
+    window[slot] = { seen };
+    // performance.now() in the callback, not the callback's argument:
+    // that is the frame's start, which can lie before the moment seen.
+    requestAnimationFrame(() => {
+      window[slot].frame = performance.now();
+    });
+  };
   const look = () => {
-    if (window.__strutlineFirstRow) return;
-    const row = document.querySelector("[data-testid=member-row]");
-    if (row && row.getBoundingClientRect().height > 0) {
-      const seen = performance.now();
-      window.__strutlineFirstRow = { seen };
-      requestAnimationFrame((frame) => {
-        window.__strutlineFirstRow.frame = frame;
-      });
-      observer.disconnect();
+    const rows = document.querySelectorAll("[data-testid=member-row]");
+    if (!window.__strutlineFirstRow && rows.length > 0 && rows[0].getBoundingClientRect().height > 0) {
+      mark("__strutlineFirstRow");
     }
+    if (!window.__strutlineAllRows && rows.length >= want) {
+      mark("__strutlineAllRows");
+    }
+    if (window.__strutlineFirstRow && window.__strutlineAllRows) observer.disconnect();
   };
   const observer = new MutationObserver(look);
   document.addEventListener("DOMContentLoaded", () => {
@@ -89,7 +98,7 @@ async function measureFirstRender() {
   for (let run = 0; run < 3; run += 1) {
     const { context, close } = await launch();
     try {
-      await context.addInitScript(watchFirstRow);
+      await context.addInitScript(watchRows, 1);
       const page = await firstPage(context);
       await page.goto(BASE.href, { waitUntil: "load" });
       cold.push(await firstRow(page));
@@ -132,7 +141,7 @@ async function measureEdits(count = 100) {
             done = true;
             observer.disconnect();
             clearTimeout(timer);
-            requestAnimationFrame((frameAt) => resolve({ changedAt, frameAt }));
+            requestAnimationFrame(() => resolve({ changedAt, frameAt: performance.now() }));
           };
           const observer = new MutationObserver(() => {
             if ((result()?.textContent ?? "") !== before) finish(performance.now());
@@ -232,26 +241,23 @@ async function measureThousand() {
         },
         [STORAGE_KEY, text],
       );
+      await context.addInitScript(watchRows, 1000);
       const page = await firstPage(context);
       await page.goto(BASE.href, { waitUntil: "load" });
-      await page.locator("[data-testid=member-row]").first().waitFor({ state: "visible", timeout: 30_000 });
-      const r = await page.evaluate(
-        () =>
-          new Promise((resolve) => {
-            requestAnimationFrame((frame) => {
-              const ready = performance.getEntriesByName("strutline-wasm-ready")[0]?.startTime ?? null;
-              const mounted = performance.getEntriesByName("strutline-mounted")[0]?.startTime ?? null;
-              const statuses = [...document.querySelectorAll("[data-testid=member-status]")];
-              resolve({
-                ready,
-                mounted,
-                frame,
-                rows: document.querySelectorAll("[data-testid=member-row]").length,
-                statuses_with_text: statuses.filter((s) => (s.textContent || "").trim() !== "").length,
-              });
-            });
-          }),
-      );
+      await page.waitForFunction(() => window.__strutlineAllRows && window.__strutlineAllRows.frame, null, {
+        timeout: 30_000,
+      });
+      const r = await page.evaluate(() => {
+        const statuses = [...document.querySelectorAll("[data-testid=member-status]")];
+        return {
+          ready: performance.getEntriesByName("strutline-wasm-ready")[0]?.startTime ?? null,
+          mounted: performance.getEntriesByName("strutline-mounted")[0]?.startTime ?? null,
+          all_rows_seen: window.__strutlineAllRows.seen,
+          frame: window.__strutlineAllRows.frame,
+          rows: document.querySelectorAll("[data-testid=member-row]").length,
+          statuses_with_text: statuses.filter((s) => (s.textContent || "").trim() !== "").length,
+        };
+      });
       const problem = await page.locator("[data-testid=storage-problem]").count();
       runs.push({ ...r, storage_problem: problem > 0 });
       rows = r.rows;
@@ -360,6 +366,7 @@ const lines = [
   `| edit: recheck and redraw to next frame (median of ${ed.edits ?? 0}) | ${fmt(ed.frame_median_ms, 2)} ms (p90 ${fmt(ed.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.frame_median_ms, TARGETS.edit_ms)} |`,
   `| edit: recheck until the result text changes (median) | ${fmt(ed.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.dom_median_ms, TARGETS.edit_ms)} |`,
   `| 1,000-member list: module ready to first frame (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
+  `| 1,000-member list: inside start() (module ready to mounted, median) | ${fmt(th.ready_to_mounted_median_ms)} ms | (part of the above) | |`,
   `| dist/ gzipped | ${Number.isFinite(DIST_GZ) ? `${DIST_GZ} B (${fmt(DIST_GZ / 1024)} KB)` : "n/a"} | ≤ ${DIST_BUDGET} B (${DIST_BUDGET / 1024} KB) | ${verdict(DIST_GZ, DIST_BUDGET)} |`,
   "",
   "## How each is measured",
@@ -373,7 +380,9 @@ const lines = [
   "  60 Hz, so the frame figure includes up to one frame of waiting for the clock.",
   "- 1,000 members: a stored workspace of 1,000 invented members of five shapes and all steel and timber",
   "  methods; from the mark `strutline-wasm-ready` (the module is compiled, `start()` is about to run)",
-  "  to the start of the first animation frame after the rows are in the page.",
+  "  to the first animation frame after all 1,000 rows are in the page (a MutationObserver notes the moment;",
+  "  the time is read with performance.now() inside the next requestAnimationFrame callback). The second",
+  "  row is the part spent inside the app's synchronous `start()` (load, parse, check and build the view).",
   `  Rows in the page: ${th.rows_in_page ?? "n/a"}; status texts filled: ${th.runs?.[0]?.statuses_with_text ?? "n/a"};`,
   `  the command line checked ${th.cli?.results ?? "n/a"} of them${th.cli?.error ? ` (error: ${th.cli.error})` : ""}.`,
   "",
