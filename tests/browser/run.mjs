@@ -6,7 +6,7 @@
 // status is 1 when any test failed.
 
 import assert from "node:assert/strict";
-import { readFileSync } from "node:fs";
+import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
 import { join } from "node:path";
@@ -32,6 +32,9 @@ if (!URL_ARG) {
 }
 const BASE = new URL(URL_ARG);
 const ONLY = arg("--only");
+// The served build directory (this run's own, from cargo xtask
+// browser-test); the update test rewrites its sw.js and restores it.
+const DIST = arg("--dist");
 const OUT = ensureOut();
 
 // An invented member for the typing tests: a rolled I column of a
@@ -379,6 +382,54 @@ test("unreadable-storage-kept", async () => {
     await page.locator("[data-testid=caution]").first().waitFor({ state: "visible", timeout: 15_000 });
     assert.ok(await keep(), "the unreadable text is gone after a second start");
   });
+});
+
+test("update-ready", async () => {
+  assert.ok(DIST, "--dist DIR is needed to publish a new build (cargo xtask browser-test passes it)");
+  const swPath = join(DIST, "sw.js");
+  const original = readFileSync(swPath, "utf8");
+  const oldName = original.match(/const CACHE_NAME = "([^"]+)";/)?.[1];
+  assert.ok(oldName, "sw.js has no stamped cache name");
+  const newName = `${oldName}-next`;
+  try {
+    await withApp("update-ready", async (page, log) => {
+      await open(page);
+      await waitForWorker(page);
+      // Publish a "new build": same files, a new cache name.
+      writeFileSync(swPath, original.replace(`const CACHE_NAME = "${oldName}";`, `const CACHE_NAME = "${newName}";`));
+      await page.evaluate(async () => {
+        const reg = await navigator.serviceWorker.getRegistration();
+        await reg.update();
+      });
+      const banner = page.locator("[data-testid=update-ready]").first();
+      await banner.waitFor({ state: "visible", timeout: 20_000 });
+      await page.screenshot({ path: join(OUT, "update-ready.png") });
+      // Until the person asks, the old worker and its cache stay.
+      const before = await page.evaluate(async () => ({
+        caches: await caches.keys(),
+        waiting: Boolean((await navigator.serviceWorker.getRegistration()).waiting),
+      }));
+      assert.ok(before.waiting, "no waiting worker while the banner shows");
+      assert.ok(before.caches.includes(oldName), "the old cache went before the update was applied");
+      const reloaded = page.waitForEvent("load", { timeout: 20_000 });
+      await banner.locator("button").first().click();
+      await reloaded;
+      await page.locator("[data-testid=caution]").first().waitFor({ state: "visible", timeout: 15_000 });
+      const after = await page.evaluate(async () => {
+        for (let i = 0; i < 50; i += 1) {
+          const keys = await caches.keys();
+          if (keys.length === 1) break;
+          await new Promise((r) => setTimeout(r, 100));
+        }
+        return { caches: await caches.keys(), controlled: Boolean(navigator.serviceWorker.controller) };
+      });
+      assert.ok(after.controlled, "the page is not controlled after the update");
+      assert.deepEqual(after.caches, [newName], "the old cache was not deleted, or the new one is missing");
+      assertNoErrors(log.errors);
+    });
+  } finally {
+    writeFileSync(swPath, original);
+  }
 });
 
 test("accessibility-axe", async () => {

@@ -29,9 +29,13 @@ self.addEventListener("activate", (event) => {
   })());
 });
 
+// The page asks a waiting worker to take over. "activate-update" is the
+// agreed message; "skip-waiting" is accepted as well.
+const TAKE_OVER = ["activate-update", "skip-waiting"];
+
 self.addEventListener("message", (event) => {
   const data = event.data;
-  if (data && typeof data === "object" && data.type === "activate-update") {
+  if (data && typeof data === "object" && TAKE_OVER.includes(data.type)) {
     self.skipWaiting();
   }
 });

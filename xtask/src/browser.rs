@@ -41,6 +41,8 @@ pub fn run(args: &[String]) -> Result<()> {
     let url = format!("http://127.0.0.1:{}/", server.port());
     println!("xtask: serving dist/ at {url} for the browser tests");
     let mut cmd = node_script("run.mjs", &url);
+    // The update test rewrites sw.js in this run's own build directory.
+    cmd.arg("--dist").arg(&built.dir);
     if let Some(name) = only {
         cmd.args(["--only", &name]);
     }
