@@ -305,126 +305,213 @@ pub fn App() -> impl IntoView {
     }
 }
 
-#[component]
-fn Banners(ctx: Ctx) -> impl IntoView {
+/// A button of a banner.
+struct Action {
+    label: &'static str,
+    testid: &'static str,
+    quiet: bool,
+    run: Callback<()>,
+}
+
+fn act(
+    label: &'static str,
+    testid: &'static str,
+    quiet: bool,
+    run: impl Fn() + Send + Sync + 'static,
+) -> Action {
+    Action {
+        label,
+        testid,
+        quiet,
+        run: Callback::new(move |()| run()),
+    }
+}
+
+/// One banner: its lines of text and its buttons. Every banner goes
+/// through this one view, so each costs only its words and actions.
+fn banner(
+    testid: &'static str,
+    class: &'static str,
+    alert: bool,
+    lines: Vec<String>,
+    actions: Vec<Action>,
+) -> AnyView {
     view! {
-        <div class="banners" aria-live="polite">
-            {move || ctx.update_ready.get().then(|| view! {
-                <div class="banner banner-info" data-testid="update-ready" role="status">
-                    <span>"↻ A new version of Strutline is ready."</span>
-                    <button type="button" on:click=move |_| browser::apply_update()>"Reload to update"</button>
-                    <button type="button" class="quiet" on:click=move |_| ctx.update_ready.set(false)>"Later"</button>
-                </div>
-            }.into_any())}
-            {move || ctx.problem.get().map(|p| {
-                let raw = p.raw.clone();
-                let aside = p.aside.clone();
-                let where_kept = match &p.aside {
-                    Some(k) => format!("It is left untouched, with a copy under the storage key \"{k}\"."),
-                    None => "It is left untouched (a spare copy could not be stored).".to_string(),
-                };
-                view! {
-                    <div class="banner banner-problem" data-testid="storage-problem" role="alert">
-                        <p>
-                            <strong>"⚠ The saved workspace could not be read: "</strong>
-                            {p.reason.clone()}
-                        </p>
-                        <p>{where_kept} " You are looking at the demo list; nothing is saved until you decide."</p>
-                        <div class="banner-actions">
-                            <button type="button" data-testid="download-unreadable" on:click=move |_| {
-                                let name = format!("strutline-unreadable-{}.json", browser::now_ms() as u64);
-                                let _ = browser::download(&name, &raw, "application/json");
-                            }>"Download the unreadable copy"</button>
-                            <button type="button" data-testid="discard-unreadable" on:click=move |_| {
-                                if let Some(k) = &aside {
-                                    browser::remove(k);
-                                }
-                                ctx.overwrite_ok.set_value(true);
-                                ctx.problem.set(None);
-                                schedule_save(ctx);
-                            }>"Discard the unreadable copy and save from now on"</button>
-                        </div>
-                    </div>
-                }.into_any()
-            })}
-            {move || ctx.save_problem.get().map(|msg| view! {
-                <div class="banner banner-problem" data-testid="save-problem" role="alert">
-                    <span>"⚠ " {msg}</span>
-                    <button type="button" on:click=move |_| {
-                        let name = format!("strutline-workspace-{}.json", browser::now_ms() as u64);
-                        let text = ctx.ws.with_untracked(encode);
-                        let _ = browser::download(&name, &text, "application/json");
-                    }>"Download the workspace"</button>
-                </div>
-            }.into_any())}
-            {move || ctx.other_tab.get().map(|theirs| {
-                let theirs2 = theirs.clone();
-                view! {
-                    <div class="banner banner-info" data-testid="other-tab" role="alert">
-                        <span>"⇄ This workspace was changed in another tab or window. Which version do you want to keep?"</span>
-                        <button type="button" data-testid="load-theirs" on:click=move |_| {
-                            match decode(&theirs) {
-                                Ok(w) => {
-                                    ctx.loaded_rev.set_value(w.revision);
-                                    ctx.other_tab.set(None);
-                                    ctx.ws.set(w);
-                                    ctx.undo.set(None);
-                                    ctx.select(0);
-                                }
-                                Err(reason) => {
-                                    ctx.other_tab.set(None);
-                                    set_problem(ctx, theirs.clone(), reason);
-                                }
-                            }
-                        }>"Load theirs"</button>
-                        <button type="button" data-testid="keep-mine" on:click=move |_| {
-                            let mine = ctx.loaded_rev.get_value();
-                            ctx.loaded_rev.set_value(peek_revision(&theirs2).unwrap_or(mine));
-                            ctx.overwrite_ok.set_value(true);
-                            ctx.other_tab.set(None);
-                            schedule_save(ctx);
-                        }>"Keep mine (and save it)"</button>
-                    </div>
-                }.into_any()
-            })}
-            {move || ctx.undo.get().map(|u| {
-                let what = match &u {
-                    Undo::Member { deleted, .. } => format!("Member \"{}\" deleted.", deleted.member.id),
-                    Undo::List(d) => format!("List \"{}\" deleted.", d.list.title),
-                };
-                view! {
-                    <div class="banner banner-undo" role="status">
-                        <span>{what}</span>
-                        <button type="button" data-testid="undo" on:click=move |_| {
-                            if let Some(u) = ctx.undo.get_untracked() {
-                                ctx.undo.set(None);
-                                match u {
-                                    Undo::Member { list, deleted } => {
-                                        let mut at = None;
-                                        ctx.ws.update(|w| {
-                                            w.active = list.min(w.lists.len().saturating_sub(1));
-                                            if let Some(l) = w.active_list_mut() {
-                                                at = Some(listops::undo_delete(&mut l.members, *deleted));
-                                            }
-                                        });
-                                        ctx.select(at.unwrap_or(0));
-                                    }
-                                    Undo::List(d) => {
-                                        ctx.ws.update(|w| {
-                                            let at = listops::undo_delete_list(&mut w.lists, d);
-                                            w.active = at;
-                                        });
-                                        ctx.select(0);
-                                    }
-                                }
-                            }
-                        }>"↶ Undo"</button>
-                        <button type="button" class="quiet" on:click=move |_| ctx.undo.set(None)>"Dismiss"</button>
-                    </div>
-                }.into_any()
-            })}
+        <div class=format!("banner {class}") data-testid=testid role=if alert { "alert" } else { "status" }>
+            {lines.into_iter().map(|l| view! { <p>{l}</p> }).collect::<Vec<_>>()}
+            <div class="banner-actions">
+                {actions.into_iter().map(|a| {
+                    let run = a.run;
+                    view! {
+                        <button type="button" class:quiet=a.quiet data-testid=(!a.testid.is_empty()).then_some(a.testid)
+                            on:click=move |_| run.run(())>{a.label}</button>
+                    }
+                }).collect::<Vec<_>>()}
+            </div>
         </div>
     }
+    .into_any()
+}
+
+fn undo_now(ctx: Ctx) {
+    let Some(u) = ctx.undo.get_untracked() else {
+        return;
+    };
+    ctx.undo.set(None);
+    match u {
+        Undo::Member { list, deleted } => {
+            let mut at = None;
+            ctx.ws.update(|w| {
+                w.active = list.min(w.lists.len().saturating_sub(1));
+                if let Some(l) = w.active_list_mut() {
+                    at = Some(listops::undo_delete(&mut l.members, *deleted));
+                }
+            });
+            ctx.select(at.unwrap_or(0));
+        }
+        Undo::List(d) => {
+            ctx.ws.update(|w| {
+                let at = listops::undo_delete_list(&mut w.lists, d);
+                w.active = at;
+            });
+            ctx.select(0);
+        }
+    }
+}
+
+fn load_theirs(ctx: Ctx, theirs: &str) {
+    match decode(theirs) {
+        Ok(w) => {
+            ctx.loaded_rev.set_value(w.revision);
+            ctx.other_tab.set(None);
+            ctx.ws.set(w);
+            ctx.undo.set(None);
+            ctx.select(0);
+        }
+        Err(reason) => {
+            ctx.other_tab.set(None);
+            set_problem(ctx, theirs.to_string(), reason);
+        }
+    }
+}
+
+fn keep_mine(ctx: Ctx, theirs: &str) {
+    let mine = ctx.loaded_rev.get_value();
+    ctx.loaded_rev
+        .set_value(peek_revision(theirs).unwrap_or(mine));
+    ctx.overwrite_ok.set_value(true);
+    ctx.other_tab.set(None);
+    schedule_save(ctx);
+}
+
+fn download_workspace(ctx: Ctx) {
+    let name = format!("strutline-workspace-{}.json", browser::now_ms() as u64);
+    let text = ctx.ws.with_untracked(encode);
+    let _ = browser::download(&name, &text, "application/json");
+}
+
+fn discard_unreadable(ctx: Ctx, aside: Option<&str>) {
+    if let Some(k) = aside {
+        browser::remove(k);
+    }
+    ctx.overwrite_ok.set_value(true);
+    ctx.problem.set(None);
+    schedule_save(ctx);
+}
+
+#[component]
+fn Banners(ctx: Ctx) -> impl IntoView {
+    let update = move || {
+        ctx.update_ready.get().then(|| {
+            banner(
+                "update-ready",
+                "banner-info",
+                false,
+                vec!["↻ A new version of Strutline is ready.".into()],
+                vec![
+                    act("Reload to update", "", false, browser::apply_update),
+                    act("Later", "", true, move || ctx.update_ready.set(false)),
+                ],
+            )
+        })
+    };
+    let problem = move || {
+        ctx.problem.get().map(|p| {
+            let where_kept = match &p.aside {
+                Some(k) => format!("It is left untouched, with a copy under the storage key \"{k}\"."),
+                None => "It is left untouched (a spare copy could not be stored).".to_string(),
+            };
+            let raw = p.raw.clone();
+            let aside = p.aside.clone();
+            banner(
+                "storage-problem",
+                "banner-problem",
+                true,
+                vec![
+                    format!("⚠ The saved workspace could not be read: {}", p.reason),
+                    format!("{where_kept} You are looking at the demo list; nothing is saved until you decide."),
+                ],
+                vec![
+                    act("Download the unreadable copy", "download-unreadable", false, move || {
+                        let name = format!("strutline-unreadable-{}.json", browser::now_ms() as u64);
+                        let _ = browser::download(&name, &raw, "application/json");
+                    }),
+                    act("Discard the unreadable copy and save from now on", "discard-unreadable", false, move || {
+                        discard_unreadable(ctx, aside.as_deref())
+                    }),
+                ],
+            )
+        })
+    };
+    let save = move || {
+        ctx.save_problem.get().map(|msg| {
+            banner(
+                "save-problem",
+                "banner-problem",
+                true,
+                vec![format!("⚠ {msg}")],
+                vec![act("Download the workspace", "", false, move || {
+                    download_workspace(ctx)
+                })],
+            )
+        })
+    };
+    let other = move || {
+        ctx.other_tab.get().map(|theirs| {
+            let t1 = theirs.clone();
+            banner(
+                "other-tab",
+                "banner-info",
+                true,
+                vec!["⇄ This workspace was changed in another tab or window. Which version do you want to keep?".into()],
+                vec![
+                    act("Load theirs", "load-theirs", false, move || load_theirs(ctx, &t1)),
+                    act("Keep mine (and save it)", "keep-mine", false, move || keep_mine(ctx, &theirs)),
+                ],
+            )
+        })
+    };
+    let undo = move || {
+        ctx.undo.get().map(|u| {
+            let what = match &u {
+                Undo::Member { deleted, .. } => {
+                    format!("Member \"{}\" deleted.", deleted.member.id)
+                }
+                Undo::List(d) => format!("List \"{}\" deleted.", d.list.title),
+            };
+            banner(
+                "undo-bar",
+                "banner-undo",
+                false,
+                vec![what],
+                vec![
+                    act("↶ Undo", "undo", false, move || undo_now(ctx)),
+                    act("Dismiss", "", true, move || ctx.undo.set(None)),
+                ],
+            )
+        })
+    };
+    view! { <div class="banners" aria-live="polite">{update}{problem}{save}{other}{undo}</div> }
 }
 
 #[component]

@@ -128,6 +128,8 @@ pub fn build(
     let markers = result
         .modes
         .iter()
+        // The cross-section mode has no slenderness: marked only when it governs.
+        .filter(|m| m.mode != Mode::Section || m.mode == result.governing)
         .map(|m| Marker {
             mode: m.mode,
             slenderness: m.slenderness,
@@ -194,6 +196,98 @@ pub fn perry_family(prepared: &Prepared, x_max: f64) -> Result<Vec<Curve>, Error
     Ok(out)
 }
 
+/// The plot rectangle in device pixels and the linear map from
+/// (slenderness, stress) to pixels.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Frame {
+    /// Left edge of the plot, px.
+    pub left: f64,
+    /// Top edge, px.
+    pub top: f64,
+    /// Right edge, px.
+    pub right: f64,
+    /// Bottom edge, px.
+    pub bottom: f64,
+    /// Slenderness at the right edge.
+    pub x_max: f64,
+    /// Stress at the top edge, MPa.
+    pub y_max: f64,
+}
+
+impl Frame {
+    /// The pixel of a point (clamped to the plot).
+    pub fn px(&self, x: f64, y: f64) -> (i32, i32) {
+        let fx = (x / self.x_max).clamp(0.0, 1.0);
+        let fy = (y / self.y_max).clamp(0.0, 1.0);
+        let px = self.left + fx * (self.right - self.left);
+        let py = self.bottom - fy * (self.bottom - self.top);
+        (px.round() as i32, py.round() as i32)
+    }
+}
+
+/// A step of about `max / count` rounded to 1, 2 or 5 times a power of ten.
+pub fn tick_step(max: f64, count: f64) -> f64 {
+    let raw = (max / count.max(1.0)).max(1e-9);
+    let p = 10f64.powf(raw.log10().floor());
+    let m = raw / p;
+    let nice = if m <= 1.0 {
+        1.0
+    } else if m <= 2.0 {
+        2.0
+    } else if m <= 5.0 {
+        5.0
+    } else {
+        10.0
+    };
+    nice * p
+}
+
+/// Splits a polyline into dashes of `on` pixels with gaps of `off`.
+pub fn dashes(points: &[(i32, i32)], on: f64, off: f64) -> Vec<Vec<(i32, i32)>> {
+    let mut out = Vec::new();
+    let mut current: Vec<(i32, i32)> = Vec::new();
+    let (on, off) = (on.max(1.0), off.max(1.0));
+    let mut drawing = true;
+    let mut left = on;
+    for pair in points.windows(2) {
+        let (a, b) = match pair {
+            [a, b] => (*a, *b),
+            _ => continue,
+        };
+        let (ax, ay) = (f64::from(a.0), f64::from(a.1));
+        let (dx, dy) = (f64::from(b.0) - ax, f64::from(b.1) - ay);
+        let len = (dx * dx + dy * dy).sqrt();
+        let mut t = 0.0;
+        if drawing && current.is_empty() {
+            current.push(a);
+        }
+        while len - t > left {
+            t += left;
+            let p = (
+                (ax + dx * t / len).round() as i32,
+                (ay + dy * t / len).round() as i32,
+            );
+            if drawing {
+                current.push(p);
+                out.push(std::mem::take(&mut current));
+                left = off;
+            } else {
+                current.push(p);
+                left = on;
+            }
+            drawing = !drawing;
+        }
+        left -= len - t;
+        if drawing {
+            current.push(b);
+        }
+    }
+    if current.len() > 1 {
+        out.push(current);
+    }
+    out
+}
+
 #[cfg(test)]
 mod tests {
     #![allow(
@@ -211,7 +305,12 @@ mod tests {
         let p = Prepared::new(&m).unwrap();
         let r = p.check().unwrap();
         let d = build(&p, &r, true).unwrap();
-        assert_eq!(d.markers.len(), r.modes.len());
+        let shown = r
+            .modes
+            .iter()
+            .filter(|m| m.mode != Mode::Section || m.mode == r.governing)
+            .count();
+        assert_eq!(d.markers.len(), shown);
         let g = d.governing().unwrap();
         assert_eq!(g.mode, r.governing);
         // The governing marker's design stress is the check's resistance over A.
@@ -244,5 +343,39 @@ mod tests {
         let far = d.markers.iter().map(|k| k.slenderness).fold(0.0, f64::max);
         assert!(d.x_max >= far * 1.2, "{} {}", d.x_max, far);
         assert_eq!(d.x_max % 50.0, 0.0);
+    }
+    #[test]
+    fn frame_maps_corners() {
+        let f = Frame {
+            left: 50.0,
+            top: 10.0,
+            right: 450.0,
+            bottom: 310.0,
+            x_max: 200.0,
+            y_max: 400.0,
+        };
+        assert_eq!(f.px(0.0, 0.0), (50, 310));
+        assert_eq!(f.px(200.0, 400.0), (450, 10));
+        assert_eq!(f.px(100.0, 200.0), (250, 160));
+        assert_eq!(f.px(999.0, -5.0), (450, 310), "clamped to the plot");
+    }
+
+    #[test]
+    fn ticks_are_round() {
+        assert_eq!(tick_step(200.0, 10.0), 20.0);
+        assert_eq!(tick_step(400.0, 8.0), 50.0);
+        assert_eq!(tick_step(30.0, 8.0), 5.0);
+        assert_eq!(tick_step(1000.0, 5.0), 200.0);
+    }
+
+    #[test]
+    fn dashes_split_a_line() {
+        let d = dashes(&[(0, 0), (100, 0)], 10.0, 10.0);
+        assert_eq!(d.len(), 5);
+        assert_eq!(d[0], vec![(0, 0), (10, 0)]);
+        assert_eq!(d[1], vec![(20, 0), (30, 0)]);
+        // Dashes carry on across the corners of a polyline.
+        let d = dashes(&[(0, 0), (5, 0), (5, 5)], 8.0, 2.0);
+        assert_eq!(d[0], vec![(0, 0), (5, 0), (5, 3)]);
     }
 }

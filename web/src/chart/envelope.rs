@@ -8,13 +8,15 @@
 //! and font scaled by that ratio, so lines and text stay crisp.
 
 use plotters::coord::Shift;
-use plotters::prelude::*;
+use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
+use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
+use plotters::style::{Color, FontTransform, IntoFont, RGBAColor, RGBColor};
 use plotters_canvas::CanvasBackend;
 use strutline_core::check::Mode;
 use web_sys::HtmlCanvasElement;
 
-use super::data::ChartData;
+use super::data::{dashes, tick_step, ChartData, Frame};
 
 /// Colours of one theme.
 struct Palette {
@@ -111,30 +113,74 @@ where
     DB::ErrorType: 'static,
 {
     let s = |v: f64| (v * dpr).round().max(1.0) as u32;
+    let si = |v: f64| (v * dpr).round() as i32;
     let font = |size: f64| ("sans-serif", size * dpr).into_font().color(&pal.ink);
     root.fill(&pal.background).map_err(err)?;
-    let (w, _) = root.dim_in_pixel();
+    let (w, h) = root.dim_in_pixel();
     let narrow = f64::from(w) / dpr < 480.0;
-    let mut chart = ChartBuilder::on(root)
-        .margin(s(10.0))
-        .margin_right(s(18.0))
-        .x_label_area_size(s(46.0))
-        .y_label_area_size(s(if narrow { 52.0 } else { 62.0 }))
-        .build_cartesian_2d(0.0..data.x_max, 0.0..data.y_max)
-        .map_err(err)?;
-    chart
-        .configure_mesh()
-        .x_desc("slenderness L_cr / i  (–)")
-        .y_desc("failure stress N / A  (MPa)")
-        .label_style(font(if narrow { 11.0 } else { 13.0 }))
-        .axis_desc_style(font(if narrow { 12.0 } else { 14.0 }))
-        .bold_line_style(pal.grid.stroke_width(s(1.0)))
-        .light_line_style(pal.grid.mix(0.35).stroke_width(s(1.0)))
-        .axis_style(pal.ink.stroke_width(s(1.0)))
-        .x_labels(if narrow { 5 } else { 10 })
-        .y_labels(8)
-        .draw()
-        .map_err(err)?;
+    let frame = Frame {
+        left: (if narrow { 52.0 } else { 64.0 }) * dpr,
+        top: 12.0 * dpr,
+        right: f64::from(w) - 18.0 * dpr,
+        bottom: f64::from(h) - 48.0 * dpr,
+        x_max: data.x_max,
+        y_max: data.y_max,
+    };
+    let px = |x: f64, y: f64| frame.px(x, y);
+    let line = |pts: Vec<(i32, i32)>, c: RGBColor, width: f64| {
+        PathElement::new(pts, c.stroke_width(s(width)))
+    };
+    let path = |pts: &[(f64, f64)]| pts.iter().map(|&(x, y)| px(x, y)).collect::<Vec<_>>();
+    let label = font(if narrow { 11.0 } else { 13.0 });
+
+    // Grid, ticks and their values.
+    let xs = tick_step(data.x_max, if narrow { 5.0 } else { 10.0 });
+    let ys = tick_step(data.y_max, 8.0);
+    let mut k = 0.0;
+    while k * xs <= data.x_max + 1e-9 {
+        let x = k * xs;
+        root.draw(&line(vec![px(x, 0.0), px(x, data.y_max)], pal.grid, 1.0))
+            .map_err(err)?;
+        let (tx, ty) = px(x, 0.0);
+        let style = label.clone().pos(Pos::new(HPos::Center, VPos::Top));
+        root.draw(&Text::new(format!("{x:.0}"), (tx, ty + si(5.0)), style))
+            .map_err(err)?;
+        k += 1.0;
+    }
+    let mut k = 0.0;
+    while k * ys <= data.y_max + 1e-9 {
+        let y = k * ys;
+        root.draw(&line(vec![px(0.0, y), px(data.x_max, y)], pal.grid, 1.0))
+            .map_err(err)?;
+        let (tx, ty) = px(0.0, y);
+        let style = label.clone().pos(Pos::new(HPos::Right, VPos::Center));
+        root.draw(&Text::new(format!("{y:.0}"), (tx - si(6.0), ty), style))
+            .map_err(err)?;
+        k += 1.0;
+    }
+    root.draw(&line(
+        vec![px(0.0, data.y_max), px(0.0, 0.0), px(data.x_max, 0.0)],
+        pal.ink,
+        1.5,
+    ))
+    .map_err(err)?;
+    let title = font(if narrow { 12.0 } else { 14.0 });
+    let (cx, _) = px(data.x_max / 2.0, 0.0);
+    root.draw(&Text::new(
+        "slenderness L_cr / i  (–)",
+        (cx, h as i32 - si(6.0)),
+        title.clone().pos(Pos::new(HPos::Center, VPos::Bottom)),
+    ))
+    .map_err(err)?;
+    let (_, cy) = px(0.0, data.y_max / 2.0);
+    root.draw(&Text::new(
+        "failure stress N / A  (MPa)",
+        (si(4.0), cy),
+        title
+            .transform(FontTransform::Rotate270)
+            .pos(Pos::new(HPos::Center, VPos::Top)),
+    ))
+    .map_err(err)?;
 
     // The region within capacity: below the lower of the two design curves.
     let lower: Vec<(f64, f64)> = match (data.design.first(), data.design.get(1)) {
@@ -147,61 +193,39 @@ where
         (Some((_, a)), None) => a.points.clone(),
         _ => Vec::new(),
     };
-    chart
-        .draw_series(AreaSeries::new(lower, 0.0, pal.shade.filled()))
-        .map_err(err)?;
-
-    let plateau = [(0.0, data.yield_mpa), (data.x_max, data.yield_mpa)];
-    chart
-        .draw_series(DashedLineSeries::new(
-            plateau,
-            s(8.0),
-            s(5.0),
-            pal.plateau.stroke_width(s(1.5)),
-        ))
-        .map_err(err)?;
-
-    if !data.euler.is_empty() {
-        let euler = data.euler.clone();
-        chart
-            .draw_series(DashedLineSeries::new(
-                euler,
-                s(3.0),
-                s(3.0),
-                pal.euler.stroke_width(s(1.5)),
-            ))
+    if let (Some(first), Some(last)) = (lower.first(), lower.last()) {
+        let mut area = vec![px(first.0, 0.0)];
+        area.extend(path(&lower));
+        area.push(px(last.0, 0.0));
+        root.draw(&Polygon::new(area, pal.shade.filled()))
             .map_err(err)?;
     }
 
+    let dashed =
+        |pts: Vec<(i32, i32)>, on: f64, off: f64, c: RGBColor, width: f64| -> Result<(), String> {
+            for d in dashes(&pts, on * dpr, off * dpr) {
+                root.draw(&line(d, c, width)).map_err(err)?;
+            }
+            Ok(())
+        };
+    dashed(
+        path(&[(0.0, data.yield_mpa), (data.x_max, data.yield_mpa)]),
+        8.0,
+        5.0,
+        pal.plateau,
+        1.5,
+    )?;
+    dashed(path(&data.euler), 2.0, 3.0, pal.euler, 1.5)?;
     for (i, curve) in data.perry.iter().enumerate() {
         let c = pal.perry.get(i).copied().unwrap_or(pal.ink);
-        chart
-            .draw_series(LineSeries::new(
-                curve.points.iter().copied(),
-                c.stroke_width(s(1.0)),
-            ))
-            .map_err(err)?;
+        root.draw(&line(path(&curve.points), c, 1.0)).map_err(err)?;
     }
-
     for (mode, curve) in &data.design {
-        let (c, width) = match mode {
-            Mode::Major => (pal.major, 2.5),
-            _ => (pal.minor, 2.5),
-        };
-        let style = c.stroke_width(s(width));
         if *mode == Mode::Major {
-            chart
-                .draw_series(LineSeries::new(curve.points.iter().copied(), style))
+            root.draw(&line(path(&curve.points), pal.major, 2.5))
                 .map_err(err)?;
         } else {
-            chart
-                .draw_series(DashedLineSeries::new(
-                    curve.points.iter().copied(),
-                    s(10.0),
-                    s(5.0),
-                    style,
-                ))
-                .map_err(err)?;
+            dashed(path(&curve.points), 10.0, 5.0, pal.minor, 2.5)?;
         }
     }
 
@@ -210,7 +234,6 @@ where
     // right of the dot unless that would leave the plot, and stack
     // downwards when two markers are close.
     let mut governing = None;
-    let (plot_x, _) = chart.plotting_area().get_pixel_range();
     let mut taken: Vec<(i32, i32)> = Vec::with_capacity(data.markers.len());
     let mut order: Vec<&super::data::Marker> = data.markers.iter().collect();
     order.sort_by_key(|m| !m.governing);
@@ -220,23 +243,16 @@ where
             Mode::Minor => pal.minor,
             _ => pal.ink,
         };
-        let x = m.slenderness.clamp(0.0, data.x_max);
-        let applied = m.applied_mpa.min(data.y_max);
-        let res = m.resistance_mpa.min(data.y_max);
-        chart
-            .draw_series(std::iter::once(PathElement::new(
-                [(x, applied), (x, res)],
-                c.stroke_width(s(1.0)),
-            )))
+        let (ax, ay) = px(m.slenderness, m.applied_mpa);
+        let (rx, ry) = px(m.slenderness, m.resistance_mpa);
+        root.draw(&line(vec![(ax, ay), (rx, ry)], c, 1.0))
             .map_err(err)?;
-        let (rx, ry) = chart.backend_coord(&(x, res));
-        let half = s(5.0) as i32;
+        let half = si(5.0);
         root.draw(&Rectangle::new(
             [(rx - half, ry - half), (rx + half, ry + half)],
             c.stroke_width(s(2.0)),
         ))
         .map_err(err)?;
-        let (ax, ay) = chart.backend_coord(&(x, applied));
         let r = s(if m.governing { 7.0 } else { 5.0 });
         root.draw(&Circle::new((ax, ay), r, pal.applied.filled()))
             .map_err(err)?;
@@ -260,15 +276,15 @@ where
         };
         let probe = font(12.0);
         let (tw, th) = root.estimate_text_size(&tag, &probe).map_err(err)?;
-        let gap = r as i32 + s(5.0) as i32;
-        let right = ax + gap + tw as i32 <= plot_x.end;
+        let gap = r as i32 + si(5.0);
+        let right = f64::from(ax + gap + tw as i32) <= frame.right;
         let (anchor, lx) = if right {
             (HPos::Left, ax + gap)
         } else {
             (HPos::Right, ax - gap)
         };
         let mut ly = ay;
-        let step = th as i32 + s(3.0) as i32;
+        let step = th as i32 + si(3.0);
         while taken
             .iter()
             .any(|&(tx, ty)| (tx - lx).abs() < tw as i32 && (ty - ly).abs() < step)
@@ -284,13 +300,12 @@ where
     }
     if governing.is_none() {
         if let Some(g) = data.governing() {
-            let (ax, ay) = chart.backend_coord(&(
-                g.slenderness.clamp(0.0, data.x_max),
-                g.applied_mpa.min(data.y_max),
+            governing = Some((
+                g.slenderness,
+                g.applied_mpa,
+                px(g.slenderness, g.applied_mpa),
             ));
-            governing = Some((g.slenderness, g.applied_mpa, (ax, ay)));
         }
     }
-
     Ok(governing)
 }
