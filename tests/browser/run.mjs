@@ -432,6 +432,26 @@ test("update-ready", async () => {
   }
 });
 
+test("tablet-fits", async () => {
+  // A portrait tablet: the viewport meta applies and nothing is wider
+  // than the screen (no sideways scrolling of the page itself).
+  for (const viewport of [{ width: 768, height: 1024 }, { width: 1024, height: 768 }]) {
+    await withApp(`tablet-fits-${viewport.width}`, async (page) => {
+      await open(page);
+      await page.locator("[data-testid=add-member]").first().click();
+      await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
+      await page.screenshot({ path: join(OUT, `tablet-${viewport.width}x${viewport.height}.png`) });
+      const m = await page.evaluate(() => ({
+        scroll: document.scrollingElement.scrollWidth,
+        client: document.scrollingElement.clientWidth,
+        inner: window.innerWidth,
+      }));
+      assert.equal(m.inner, viewport.width, "the viewport meta did not give the device width");
+      assert.ok(m.scroll <= m.client + 1, `the page is ${m.scroll} px wide on a ${m.client} px screen`);
+    }, { viewport, isMobile: true, hasTouch: true, deviceScaleFactor: 2 });
+  }
+});
+
 test("accessibility-axe", async () => {
   const require = createRequire(import.meta.url);
   const axeSource = readFileSync(require.resolve("axe-core/axe.min.js"), "utf8");
@@ -440,13 +460,28 @@ test("accessibility-axe", async () => {
   await withApp("accessibility-axe", async (page) => {
     await open(page);
     await page.evaluate(axeSource);
-    const result = await page.evaluate(async () => {
-      // eslint-disable-next-line no-undef
-      const r = await axe.run(document, { resultTypes: ["violations"] });
-      return r.violations.map((v) => ({ id: v.id, impact: v.impact, help: v.help, nodes: v.nodes.length, target: v.nodes[0]?.target }));
-    });
-    const serious = result.filter((v) => v.impact === "serious" || v.impact === "critical");
-    for (const v of result) console.log(`    axe: ${v.impact} ${v.id} (${v.nodes}): ${v.help} ${JSON.stringify(v.target)}`);
+    const check = async (state) => {
+      const result = await page.evaluate(async () => {
+        // eslint-disable-next-line no-undef
+        const r = await axe.run(document, { resultTypes: ["violations"] });
+        return r.violations.map((v) => ({
+          id: v.id,
+          impact: v.impact,
+          help: v.help,
+          nodes: v.nodes.length,
+          target: v.nodes[0]?.target,
+        }));
+      });
+      for (const v of result) {
+        console.log(`    axe (${state}): ${v.impact} ${v.id} (${v.nodes}): ${v.help} ${JSON.stringify(v.target)}`);
+      }
+      return result.filter((v) => v.impact === "serious" || v.impact === "critical").map((v) => ({ state, ...v }));
+    };
+    const serious = await check("as opened");
+    // Again with a new member in the editor and its result shown.
+    await page.locator("[data-testid=add-member]").first().click();
+    await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
+    serious.push(...(await check("editing a new member")));
     assert.deepEqual(serious, [], "serious or critical accessibility violations");
   }, { bypassCSP: true });
 });
