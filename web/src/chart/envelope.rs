@@ -283,13 +283,23 @@ where
         } else {
             (HPos::Right, ax - gap)
         };
-        let mut ly = ay;
         let step = th as i32 + si(3.0);
-        while taken
-            .iter()
-            .any(|&(tx, ty)| (tx - lx).abs() < tw as i32 && (ty - ly).abs() < step)
-        {
+        let clash = |ly: i32| {
+            taken
+                .iter()
+                .any(|&(tx, ty)| (tx - lx).abs() < tw as i32 && (ty - ly).abs() < step)
+        };
+        // Downwards while that stays inside the plot, else upwards.
+        let floor = frame.bottom as i32 - step / 2;
+        let mut ly = ay;
+        while clash(ly) && ly + step <= floor {
             ly += step;
+        }
+        if clash(ly) || ly > floor {
+            ly = ay.min(floor);
+            while clash(ly) && ly - step >= frame.top as i32 {
+                ly -= step;
+            }
         }
         taken.push((lx, ly));
         let style = font(12.0).pos(Pos::new(anchor, VPos::Center));
