@@ -135,12 +135,30 @@ fn set_problem(ctx: Ctx, raw: String, reason: String) {
     ctx.problem.set(Some(Problem { reason, aside, raw }));
 }
 
+/// Milliseconds a save waits for more changes: typing into a field saves
+/// once, not on every key; leaving the page saves at once.
+const SAVE_DELAY_MS: u64 = 250;
+
 fn schedule_save(ctx: Ctx) {
     if ctx.save_pending.get_value() {
         return;
     }
     ctx.save_pending.set_value(true);
-    set_timeout(move || do_save(ctx), std::time::Duration::from_millis(0));
+    set_timeout(
+        move || {
+            if ctx.save_pending.get_value() {
+                do_save(ctx);
+            }
+        },
+        std::time::Duration::from_millis(SAVE_DELAY_MS),
+    );
+}
+
+/// Saves now if a save is waiting (the page is being hidden or left).
+fn flush_save(ctx: Ctx) {
+    if ctx.save_pending.get_value() {
+        do_save(ctx);
+    }
 }
 
 fn do_save(ctx: Ctx) {
@@ -262,12 +280,17 @@ pub fn App() -> impl IntoView {
     });
     let resize_listener =
         window_event_listener(ev::resize, move |_| ctx.resize.update(|n| *n += 1));
+    let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
+    let visibility_listener =
+        window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
     let orient_listener =
         window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
     on_cleanup(move || {
         storage_listener.remove();
         resize_listener.remove();
         orient_listener.remove();
+        hide_listener.remove();
+        visibility_listener.remove();
     });
     browser::register_service_worker(move || ctx.update_ready.set(true));
     let active_list = Memo::new(move |_| ws.with(|w| w.active));
