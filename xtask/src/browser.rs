@@ -1,11 +1,14 @@
 //! `cargo xtask browser-test [--only NAME]`: runs the browser tests in
-//! `tests/browser/` against a fresh `dist/`.
+//! `tests/browser/` against a fresh build of the app.
 //!
 //! It makes sure Chromium (Debian's `/usr/bin/chromium`) and the node
-//! packages are installed, builds `dist/` and the `strutline` command line
-//! (the tests compare the page with it), serves `dist/` from a thread on a
-//! free 127.0.0.1 port and runs `node tests/browser/run.mjs --url ...`.
-//! It never downloads a browser: playwright-core drives the system one.
+//! packages are installed, builds the app into a directory of this run's
+//! own (so a `cargo xtask dist` at the same time cannot disturb it) and the
+//! `strutline` command line (the tests compare the page with it), serves
+//! the build from a thread on a free 127.0.0.1 port and runs
+//! `node tests/browser/run.mjs --url ... --dist ...`. It fails when a test
+//! fails or, after the tests, when the build is over the size budget. It
+//! never downloads a browser: playwright-core drives the system one.
 
 use std::path::{Path, PathBuf};
 use std::process::Command;

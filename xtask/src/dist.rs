@@ -2,12 +2,13 @@
 //!
 //! Steps: make sure the wasm32 target is installed, build `strutline-web`
 //! with the `wasm-release` profile, generate the JS bindings with the
-//! wasm-bindgen library (`--target web`), shrink the wasm with `wasm-opt`
-//! when it is on PATH, copy the shell (index.html, boot.js, style.css,
-//! manifest), draw the icons, then write `sw.js` with a cache name stamped
-//! from a SHA-256 over every other shipped file and the list of files to
-//! precache. Finally the gzipped total is printed and checked against the
-//! size budget.
+//! wasm-bindgen library (`--target web`) and tidy their whitespace and
+//! comments, shrink the wasm with `wasm-opt` where one is installed (the
+//! smallest gzipped result that keeps the module's exported tables wins),
+//! copy the shell (index.html, boot.js, style.css, manifest), draw the
+//! icons, then write `sw.js` with a cache name stamped from a SHA-256 over
+//! every other shipped file and the list of files to precache. Finally
+//! the gzipped total is printed and checked against the size budget.
 
 use std::path::{Path, PathBuf};
 
@@ -286,7 +287,9 @@ fn optimise(wasm: &Path) -> Result<()> {
                 Ok(t) => {
                     let _ = std::fs::remove_file(&out);
                     eprintln!(
-                        "xtask: WARNING: {name} changed the exported tables ({tables:?} -> {t:?}); its output is not used"
+                        "xtask: WARNING: {name} changed the exported tables ({} -> {}); its output is not used",
+                        show_tables(&tables),
+                        show_tables(&t)
                     );
                     continue;
                 }
@@ -322,6 +325,18 @@ fn optimise(wasm: &Path) -> Result<()> {
         }
     }
     Ok(())
+}
+
+fn show_tables(tables: &[(String, u8)]) -> String {
+    let kinds: Vec<String> = tables
+        .iter()
+        .map(|(name, ty)| match ty {
+            0x70 => format!("{name}: funcref"),
+            0x6f => format!("{name}: externref"),
+            other => format!("{name}: type 0x{other:02x}"),
+        })
+        .collect();
+    kinds.join(", ")
 }
 
 /// The exported tables of a wasm module: (export name, element type byte:
