@@ -288,6 +288,13 @@ pub fn dashes(points: &[(i32, i32)], on: f64, off: f64) -> Vec<Vec<(i32, i32)>> 
     out
 }
 
+/// The rough box of a line of sans-serif text at `size_px`: width from an
+/// average advance of 0.56 em per character, height 1.2 em (common
+/// practice for proportional fonts; enough to keep labels apart).
+pub fn text_box(text: &str, size_px: f64) -> (f64, f64) {
+    (text.chars().count() as f64 * 0.56 * size_px, 1.2 * size_px)
+}
+
 #[cfg(test)]
 mod tests {
     #![allow(
@@ -377,5 +384,12 @@ mod tests {
         // Dashes carry on across the corners of a polyline.
         let d = dashes(&[(0, 0), (5, 0), (5, 5)], 8.0, 2.0);
         assert_eq!(d[0], vec![(0, 0), (5, 0), (5, 3)]);
+    }
+    #[test]
+    fn text_box_grows_with_text_and_size() {
+        let (w1, h1) = text_box("major axis", 12.0);
+        let (w2, h2) = text_box("major axis · governs", 24.0);
+        assert!((w1 - 10.0 * 0.56 * 12.0).abs() < 1e-9);
+        assert!(w2 > 3.0 * w1 && h2 == 2.0 * h1);
     }
 }

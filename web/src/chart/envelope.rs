@@ -16,7 +16,7 @@ use plotters_canvas::CanvasBackend;
 use strutline_core::check::Mode;
 use web_sys::HtmlCanvasElement;
 
-use super::data::{dashes, tick_step, ChartData, Frame};
+use super::data::{dashes, text_box, tick_step, ChartData, Frame};
 
 /// Colours of one theme.
 struct Palette {
@@ -274,8 +274,10 @@ where
         } else {
             name.to_string()
         };
-        let probe = font(12.0);
-        let (tw, th) = root.estimate_text_size(&tag, &probe).map_err(err)?;
+        // Estimated, not measured: plotters measures text with a styled
+        // element, which the page's style-src policy refuses.
+        let (tw, th) = text_box(&tag, 12.0 * dpr);
+        let (tw, th) = (tw.round() as u32, th.round() as u32);
         let gap = r as i32 + si(5.0);
         let right = f64::from(ax + gap + tw as i32) <= frame.right;
         let (anchor, lx) = if right {
