@@ -752,7 +752,7 @@ fn NumField(
     let error = RwSignal::new(None::<String>);
     let input_id = format!("f-{}", field.key);
     let err_id = format!("e-{}", field.key);
-    let numeric = !matches!(field.rule, fields::Rule::Text);
+    let numeric = !matches!(field.rule, fields::Rule::Text | fields::Rule::OptText);
     let err_id2 = err_id.clone();
     view! {
         <div class="field" class:has-error=move || error.with(Option::is_some)>
@@ -978,6 +978,7 @@ fn Editor(ctx: Ctx) -> impl IntoView {
             <fieldset>
                 <legend>"Identity"</legend>
                 <IdField ctx=ctx />
+                <NumField ctx=ctx field=fields::NOTE />
             </fieldset>
             <fieldset>
                 <legend>"Section"</legend>

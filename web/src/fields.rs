@@ -39,6 +39,8 @@ pub enum Rule {
     OptNonNegative,
     /// Text, required.
     Text,
+    /// Text, optional (empty removes the key).
+    OptText,
 }
 
 /// One text field of the editor.
@@ -73,7 +75,7 @@ const fn f(
 }
 
 use Place::{Material as Mat, Member as Mem, Section as Sec};
-use Rule::{NonNegative, OptNonNegative, OptPositive, Positive, Text};
+use Rule::{NonNegative, OptNonNegative, OptPositive, OptText, Positive, Text};
 
 /// The section kinds, member-file key and words.
 pub const KINDS: [(&str, &str); 10] = [
@@ -204,6 +206,9 @@ pub const MEMBER_FIELDS: [Field; 2] = [
         NonNegative,
     ),
 ];
+
+/// The member's free-text note.
+pub const NOTE: Field = f("note", "note (optional)", "", Mem, OptText);
 
 /// Effective-length factor and buckling length of each axis.
 pub const K_MAJOR: Field = f("k_major", "factor K, major axis", "", Mem, Positive);
@@ -640,6 +645,10 @@ pub fn apply(member: &Member, field: &Field, text: &str) -> Result<Member, Strin
             }
             Some(Value::String(t.to_string()))
         }
+        Rule::OptText => {
+            let t = text.trim();
+            (!t.is_empty()).then(|| Value::String(t.to_string()))
+        }
         Rule::Positive | Rule::NonNegative => {
             let x = parse_number(text).map_err(|e| e.message(key))?;
             check_sign(key, x, field.rule)?;
@@ -861,5 +870,29 @@ mod tests {
                 }
             }
         }
+    }
+    #[test]
+    fn default_grade_and_catalogue_resolve_in_the_engine() {
+        // The starting values the editor offers must check as they are.
+        let mut m = sample_member("A");
+        m.material = MaterialMode::Grade.default_spec();
+        assert!(
+            strutline_core::check_member(&m).is_ok(),
+            "{:?}",
+            strutline_core::check_member(&m).err()
+        );
+        m.material = MaterialMode::Steel.default_spec();
+        for (kind, _) in KINDS {
+            m.section = section_of_kind(kind, &sample_member("A").section);
+            let r = strutline_core::check_member(&m);
+            assert!(r.is_ok(), "{kind}: {:?}", r.err());
+        }
+    }
+    #[test]
+    fn note_is_optional_text() {
+        let m = sample_member("A");
+        let with = apply(&m, &NOTE, " stair post ").unwrap();
+        assert_eq!(with.note.as_deref(), Some("stair post"));
+        assert_eq!(apply(&with, &NOTE, "  ").unwrap().note, None);
     }
 }
