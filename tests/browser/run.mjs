@@ -153,7 +153,7 @@ test("shell-files", async () => {
   const csp = text.match(/http-equiv="Content-Security-Policy" content="([^"]+)"/)?.[1];
   assert.equal(
     csp,
-    "default-src 'self'; script-src 'self' 'wasm-unsafe-eval'; style-src 'self'; style-src-attr 'unsafe-inline'; " +
+    "default-src 'self'; script-src 'self' 'wasm-unsafe-eval'; style-src 'self'; " +
       "img-src 'self' data: blob:; connect-src 'self'; worker-src 'self'; manifest-src 'self'; object-src 'none'; " +
       "base-uri 'none'; form-action 'none'",
     "the Content-Security-Policy differs from the agreed one",
@@ -251,7 +251,7 @@ test("envelope-drawn-with-marker", async () => {
   assert.ok(expected, "the command line gave no result for the member");
   const governing = expected.modes.find((m) => JSON.stringify(m.mode) === JSON.stringify(expected.governing));
   assert.ok(governing, "the command line's governing mode is not among its modes");
-  await withApp("envelope-drawn-with-marker", async (page) => {
+  await withApp("envelope-drawn-with-marker", async (page, log) => {
     await open(page);
     await typeMember(page, TYPED);
     await selectMember(page, TYPED.id);
@@ -315,6 +315,7 @@ test("envelope-drawn-with-marker", async () => {
       rel <= 0.01,
       `marker slenderness ${facts.slenderness}, the command line's governing mode ${governing.slenderness}`,
     );
+    assertNoErrors(log.errors);
   });
 });
 
