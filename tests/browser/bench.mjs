@@ -255,6 +255,9 @@ async function measureThousand() {
           all_rows_seen: window.__strutlineAllRows.seen,
           frame: window.__strutlineAllRows.frame,
           rows: document.querySelectorAll("[data-testid=member-row]").length,
+          // The app's own timing of its last list re-check (engine work only).
+          recheck_ms: window.strutlineRecheck ? window.strutlineRecheck.ms : null,
+          recheck_fresh: window.strutlineRecheck ? window.strutlineRecheck.fresh : null,
           statuses_with_text: statuses.filter((s) => (s.textContent || "").trim() !== "").length,
         };
       });
@@ -332,6 +335,7 @@ try {
     cli: thousandCli,
     ready_to_frame_median_ms: median(toFrame),
     ready_to_mounted_median_ms: median(toMount),
+    recheck_median_ms: median(th.runs.map((r) => (r.recheck_fresh === 1000 ? r.recheck_ms : NaN))),
   };
   console.log(`1,000 members: ${fmt(report.thousand.ready_to_frame_median_ms)} ms to the frame (${th.rows} rows in the page)`);
 } catch (e) {
@@ -365,7 +369,8 @@ const lines = [
   `| first render, reload (median of ${fr.warm_runs?.length ?? 0}) | ${fmt(fr.warm_median_ms)} ms | ≤ ${TARGETS.first_render_ms} ms | ${verdict(fr.warm_median_ms, TARGETS.first_render_ms)} |`,
   `| edit: recheck and redraw to next frame (median of ${ed.edits ?? 0}) | ${fmt(ed.frame_median_ms, 2)} ms (p90 ${fmt(ed.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.frame_median_ms, TARGETS.edit_ms)} |`,
   `| edit: recheck until the result text changes (median) | ${fmt(ed.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.dom_median_ms, TARGETS.edit_ms)} |`,
-  `| 1,000-member list: module ready to first frame (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
+  `| 1,000-member list: re-check of every member (engine, in the page; median of ${th.runs?.length ?? 0}) | ${fmt(th.recheck_median_ms, 2)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.recheck_median_ms, TARGETS.thousand_ms)} |`,
+  `| 1,000-member list: module ready to first frame, rows built (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
   `| 1,000-member list: inside start() (module ready to mounted, median) | ${fmt(th.ready_to_mounted_median_ms)} ms | (part of the above) | |`,
   `| dist/ gzipped | ${Number.isFinite(DIST_GZ) ? `${DIST_GZ} B (${fmt(DIST_GZ / 1024)} KB)` : "n/a"} | ≤ ${DIST_BUDGET} B (${DIST_BUDGET / 1024} KB) | ${verdict(DIST_GZ, DIST_BUDGET)} |`,
   "",
@@ -383,6 +388,8 @@ const lines = [
   "  to the first animation frame after all 1,000 rows are in the page (a MutationObserver notes the moment;",
   "  the time is read with performance.now() inside the next requestAnimationFrame callback). The second",
   "  row is the part spent inside the app's synchronous `start()` (load, parse, check and build the view).",
+  "  The re-check row is the app's own `performance.now()` around its list re-check when all 1,000 members",
+  "  are worked afresh (`window.strutlineRecheck`, set by the app after each re-check): the engine's part.",
   `  Rows in the page: ${th.rows_in_page ?? "n/a"}; status texts filled: ${th.runs?.[0]?.statuses_with_text ?? "n/a"};`,
   `  the command line checked ${th.cli?.results ?? "n/a"} of them${th.cli?.error ? ` (error: ${th.cli.error})` : ""}.`,
   "",

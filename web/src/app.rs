@@ -230,7 +230,10 @@ pub fn App() -> impl IntoView {
         let out = ws.with(|w| {
             let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
             let mut got = Vec::new();
-            checker.update_value(|c| got = c.refresh(members).0);
+            let mut fresh = 0;
+            let t0 = browser::precise_ms();
+            checker.update_value(|c| (got, fresh) = c.refresh(members));
+            browser::note_recheck(browser::precise_ms() - t0, fresh);
             got
         });
         Checks(Arc::new(out))

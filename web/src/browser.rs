@@ -15,6 +15,25 @@ pub fn now_ms() -> f64 {
     js_sys::Date::now()
 }
 
+/// A high-resolution clock, ms (`performance.now()`; 0 when absent).
+pub fn precise_ms() -> f64 {
+    web_sys::window()
+        .and_then(|w| w.performance())
+        .map_or(0.0, |p| p.now())
+}
+
+/// Leaves the duration of the last list re-check where the benchmarks read
+/// it: `window.strutlineRecheck = {ms, fresh}` (`fresh`: members worked
+/// afresh rather than reused).
+pub fn note_recheck(ms: f64, fresh: usize) {
+    if let Some(w) = web_sys::window() {
+        let o = js_sys::Object::new();
+        let _ = js_sys::Reflect::set(&o, &"ms".into(), &ms.into());
+        let _ = js_sys::Reflect::set(&o, &"fresh".into(), &(fresh as f64).into());
+        let _ = js_sys::Reflect::set(&w, &"strutlineRecheck".into(), &o);
+    }
+}
+
 /// Reads a key ("" never stands for absent).
 pub fn get(key: &str) -> Option<String> {
     storage()?.get_item(key).ok().flatten()
