@@ -667,7 +667,7 @@ pub fn section(designation: &str) -> Result<Section> {
         (Some(entry), Some(slot)) => slot
             .get_or_init(|| {
                 entry.spec.build().map(|mut s| {
-                    s.designation = Some(entry.designation.to_string());
+                    s.designation = Some(entry.designation);
                     s
                 })
             })
@@ -941,7 +941,7 @@ mod tests {
         ] {
             let entry = resolve(name).unwrap();
             let mut fresh = entry.spec.build().unwrap();
-            fresh.designation = Some(entry.designation.to_string());
+            fresh.designation = Some(entry.designation);
             assert_eq!(section(name).unwrap(), fresh, "{name}");
             assert_eq!(section(name).unwrap(), fresh, "{name} (cached)");
         }

@@ -105,7 +105,7 @@ impl<'a> Sizer<'a> {
             .into_iter()
             .map(|e| {
                 let section = e.spec.build().map(|mut s| {
-                    s.designation = Some(e.designation.to_string());
+                    s.designation = Some(e.designation);
                     s
                 });
                 (e, section)

@@ -83,7 +83,12 @@ fn steel_section() -> impl Strategy<Value = SectionSpec> {
                     width_mm: b,
                     flange_mm: tf,
                     web_mm: tw,
-                    root_radius_mm: if welded { 0.0 } else { tw * rtw },
+                    // A root radius that fits: web + 2 r within the flange width.
+                    root_radius_mm: if welded {
+                        0.0
+                    } else {
+                        (tw * rtw).min(0.45 * (b - tw))
+                    },
                     make: if welded { IMake::Welded } else { IMake::Rolled },
                 })
             }),

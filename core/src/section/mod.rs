@@ -286,7 +286,7 @@ pub struct Section {
     /// Its properties.
     pub props: Properties,
     /// The catalogue designation when it came from the catalogue.
-    pub designation: Option<String>,
+    pub designation: Option<&'static str>,
 }
 
 impl SectionSpec {
