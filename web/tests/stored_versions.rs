@@ -2,7 +2,12 @@
 //! fixture per storage version under `tests/fixtures/stored/`. A new storage
 //! version adds its predecessor's fixture here, never removes one.
 
-#![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing, clippy::panic)]
+#![allow(
+    clippy::unwrap_used,
+    clippy::expect_used,
+    clippy::indexing_slicing,
+    clippy::panic
+)]
 
 use strutline_web::workspace;
 
@@ -21,8 +26,11 @@ fn workspace_version_1_fixture_loads() {
 
 #[test]
 fn a_future_storage_version_is_refused_with_words() {
-    let text = include_str!("../../tests/fixtures/stored/workspace-v1.json")
-        .replacen("\"version\": 1,\n \"active\"", "\"version\": 99,\n \"active\"", 1);
+    let text = include_str!("../../tests/fixtures/stored/workspace-v1.json").replacen(
+        "\"version\": 1,\n \"active\"",
+        "\"version\": 99,\n \"active\"",
+        1,
+    );
     assert!(text.contains("\"version\": 99"), "fixture layout changed");
     let e = workspace::decode(&text).unwrap_err();
     assert!(e.contains("version 99"), "{e}");
