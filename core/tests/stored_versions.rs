@@ -2,7 +2,12 @@
 //! version under `tests/fixtures/stored/`, read and checked member by member.
 //! A new version adds its predecessor's fixture here, never removes one.
 
-#![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing, clippy::panic)]
+#![allow(
+    clippy::unwrap_used,
+    clippy::expect_used,
+    clippy::indexing_slicing,
+    clippy::panic
+)]
 
 use strutline_core::file;
 use strutline_core::section::SectionSpec;
@@ -30,7 +35,18 @@ fn version_1_fixture_loads_and_checks() {
             SectionSpec::Catalogue(_) => "catalogue",
         })
         .collect();
-    for k in ["i", "rhs", "chs", "angle", "channel", "tee", "rect", "round", "given", "catalogue"] {
+    for k in [
+        "i",
+        "rhs",
+        "chs",
+        "angle",
+        "channel",
+        "tee",
+        "rect",
+        "round",
+        "given",
+        "catalogue",
+    ] {
         assert!(kinds.contains(&k), "fixture lacks kind {k}");
     }
     // Options survive as written.
@@ -42,7 +58,11 @@ fn version_1_fixture_loads_and_checks() {
     // Every member checks (or is refused with a typed reason), none panics.
     for m in &f.members {
         let r = strutline_core::check_member(m).unwrap_or_else(|e| panic!("{e}"));
-        assert!(r.utilisation.is_finite() && r.resistance_kn > 0.0, "{}", m.id);
+        assert!(
+            r.utilisation.is_finite() && r.resistance_kn > 0.0,
+            "{}",
+            m.id
+        );
     }
     // Written again, it reads back the same.
     assert_eq!(file::parse(&f.to_json()).unwrap(), f);
