@@ -286,7 +286,13 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     let governing = modes
         .iter()
         .copied()
-        .min_by(|a, b| a.resistance_kn.total_cmp(&b.resistance_kn))
+        // Lowest resistance governs; on a tie (both axes capped at the squash
+        // load, say) the more slender mode is named, as an engineer would.
+        .min_by(|a, b| {
+            a.resistance_kn
+                .total_cmp(&b.resistance_kn)
+                .then(b.slenderness.total_cmp(&a.slenderness))
+        })
         .unwrap_or(major);
     let resistance_kn = governing.resistance_kn;
     let utilisation = if resistance_kn > 0.0 {
