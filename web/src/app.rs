@@ -332,14 +332,14 @@ pub fn App() -> impl IntoView {
 }
 
 /// A button of a banner.
-struct Action {
+pub(crate) struct Action {
     label: &'static str,
     testid: &'static str,
     quiet: bool,
     run: Callback<()>,
 }
 
-fn act(
+pub(crate) fn act(
     label: &'static str,
     testid: &'static str,
     quiet: bool,
@@ -355,7 +355,7 @@ fn act(
 
 /// One banner: its lines of text and its buttons. Every banner goes
 /// through this one view, so each costs only its words and actions.
-fn banner(
+pub(crate) fn banner(
     testid: &'static str,
     class: &'static str,
     alert: bool,

@@ -11,11 +11,14 @@ pub mod browser;
 pub mod chart;
 pub mod checks;
 pub mod demo;
+pub mod exchange;
 pub mod fields;
 pub mod listops;
 pub mod numtext;
+pub mod print;
 pub mod restraint;
 pub mod status;
+pub mod units_view;
 pub mod workspace;
 
 /// Mounts the app into the element with id `app`, or into `<body>`.
