@@ -1,0 +1,304 @@
+//! Member lists in and out of the app: the open list downloaded as the
+//! member file (JSON) or as CSV, and a file read back in.
+//!
+//! An import never destroys anything. The file is read into an
+//! [`Incoming`] first; its problems are shown row by row and field by
+//! field; only then does the person open it as a new list or merge its
+//! valid members into the open one (ids that clash get a free one).
+
+use leptos::prelude::*;
+use strutline_core::csv::{self, Format, RowProblem};
+use strutline_core::file::{self, MemberFile, MAX_BYTES};
+use strutline_core::Member;
+use wasm_bindgen::closure::Closure;
+use wasm_bindgen::JsCast;
+
+use crate::app::{act, banner};
+use crate::browser;
+use crate::listops;
+use crate::workspace::Workspace;
+
+/// A file read but not yet taken in.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Incoming {
+    /// The file's name as the browser gave it.
+    pub name: String,
+    /// The valid members, titled.
+    pub list: MemberFile,
+    /// Every problem found (CSV only; a JSON file is all or nothing).
+    pub problems: Vec<RowProblem>,
+}
+
+/// The refusal of a file too large to read, by its size in bytes.
+pub fn too_big(size: f64) -> Option<String> {
+    (size > MAX_BYTES as f64).then(|| {
+        format!(
+            "The file is {:.1} MB; files over 5 MB are not read.",
+            size / 1_048_576.0
+        )
+    })
+}
+
+/// Reads a file's text. A JSON file that cannot be read is refused with
+/// the engine's message; a CSV file keeps its valid rows and lists the rest.
+pub fn read(name: &str, text: &str) -> Result<Incoming, String> {
+    let (list, problems) = match csv::detect_format(name, text) {
+        Format::Json => (
+            file::parse(text).map_err(|e| format!("{name}: {e}"))?,
+            Vec::new(),
+        ),
+        Format::Csv => csv::read_csv_lenient(name, text),
+    };
+    if list.members.is_empty() && problems.is_empty() {
+        return Err(format!("{name}: the file holds no members"));
+    }
+    Ok(Incoming {
+        name: name.to_string(),
+        list,
+        problems,
+    })
+}
+
+/// Adds `incoming` to the end of `members`, giving each member whose id
+/// is taken a free one. Returns how many were renamed.
+pub fn merge(members: &mut Vec<Member>, incoming: &[Member]) -> usize {
+    let mut renamed = 0;
+    for m in incoming {
+        let mut m = m.clone();
+        if members.iter().any(|o| o.id == m.id) {
+            m.id = listops::free_id(members, &m.id);
+            renamed += 1;
+        }
+        members.push(m);
+    }
+    renamed
+}
+
+/// A file name for a list's title: letters, digits and `-` only.
+pub fn file_name(title: &str, ext: &str) -> String {
+    let mut s = String::new();
+    for c in title.trim().chars() {
+        if c.is_alphanumeric() {
+            s.extend(c.to_lowercase());
+        } else if !s.ends_with('-') && !s.is_empty() {
+            s.push('-');
+        }
+    }
+    let s = s.trim_end_matches('-');
+    format!("{}.{ext}", if s.is_empty() { "members" } else { s })
+}
+
+/// One line of the import summary.
+pub fn summary(inc: &Incoming) -> String {
+    let n = inc.list.members.len();
+    let p = inc.problems.len();
+    if p == 0 {
+        format!("{}: {n} members read, no problems.", inc.name)
+    } else {
+        format!(
+            "{}: {n} members read; {p} problem{} (nothing changes until you choose):",
+            inc.name,
+            if p == 1 { "" } else { "s" }
+        )
+    }
+}
+
+fn export(ws: RwSignal<Workspace>, csv_too: bool) {
+    let Some(l) = ws.with_untracked(|w| w.active_list().cloned()) else {
+        return;
+    };
+    let _ = if csv_too {
+        browser::download(&file_name(&l.title, "csv"), &csv::to_csv(&l), "text/csv")
+    } else {
+        browser::download(
+            &file_name(&l.title, "json"),
+            &l.to_json(),
+            "application/json",
+        )
+    };
+}
+
+/// Reads the chosen file of an `<input type=file>` into `out`.
+fn pick(e: web_sys::Event, out: RwSignal<Option<Result<Incoming, String>>>) {
+    let Some(input) = e
+        .target()
+        .and_then(|t| t.dyn_into::<web_sys::HtmlInputElement>().ok())
+    else {
+        return;
+    };
+    let Some(f) = input.files().and_then(|l| l.get(0)) else {
+        return;
+    };
+    input.set_value("");
+    if let Some(msg) = too_big(f.size()) {
+        out.set(Some(Err(msg)));
+        return;
+    }
+    let name = f.name();
+    let done = Closure::once(move |v: wasm_bindgen::JsValue| {
+        let text = v.as_string().unwrap_or_default();
+        out.set(Some(read(&name, &text)));
+    });
+    let failed = Closure::once(move |_: wasm_bindgen::JsValue| {
+        out.set(Some(Err("The browser could not read the file.".into())));
+    });
+    let _ = f.text().then2(&done, &failed);
+    done.forget();
+    failed.forget();
+}
+
+/// Export buttons, the file picker and the pending import (shown as a
+/// banner: the summary, one line a problem, and the choices).
+#[component]
+pub fn Exchange(ws: RwSignal<Workspace>, select: Callback<usize>) -> impl IntoView {
+    let pending = RwSignal::new(None::<Result<Incoming, String>>);
+    let take = move |merge_in: bool| {
+        let Some(Ok(inc)) = pending.get_untracked() else {
+            return;
+        };
+        ws.update(|w| {
+            if merge_in {
+                if let Some(l) = w.active_list_mut() {
+                    merge(&mut l.members, &inc.list.members);
+                }
+            } else {
+                let mut l = inc.list;
+                l.title = listops::free_title(&w.lists, &l.title);
+                w.lists.push(l);
+                w.active = w.lists.len() - 1;
+            }
+        });
+        pending.set(None);
+        select.run(0);
+    };
+    let report = move || {
+        pending.get().map(|p| {
+            let cancel = act("Cancel", "import-cancel", true, move || pending.set(None));
+            match p {
+                Err(msg) => banner(
+                    "import-report",
+                    "banner-problem",
+                    true,
+                    vec![msg],
+                    vec![cancel],
+                ),
+                Ok(inc) => {
+                    let mut lines = vec![summary(&inc)];
+                    lines.extend(inc.problems.iter().map(RowProblem::to_string));
+                    let mut acts = Vec::new();
+                    if !inc.list.members.is_empty() {
+                        acts.push(act("Open as a new list", "import-new", false, move || {
+                            take(false)
+                        }));
+                        acts.push(act(
+                            "Add to the open list",
+                            "import-merge",
+                            false,
+                            move || take(true),
+                        ));
+                    }
+                    acts.push(cancel);
+                    banner("import-report", "banner-info", false, lines, acts)
+                }
+            }
+        })
+    };
+    view! {
+        <div class="button-row screen-only">
+            <button type="button" data-testid="export-json" on:click=move |_| export(ws, false)>"⤓ Member file"</button>
+            <button type="button" data-testid="export-csv" on:click=move |_| export(ws, true)>"⤓ CSV"</button>
+            <label class="file-pick">"⤒ Import "
+                <input type="file" accept=".json,.csv,.tsv,.txt" data-testid="import-file"
+                    on:change=move |e| pick(e, pending) />
+            </label>
+        </div>
+        {report}
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::demo::demo_lists;
+
+    #[test]
+    fn json_and_csv_round_trip() {
+        let l = demo_lists().remove(0);
+        let back = read("a.json", &l.to_json()).unwrap();
+        assert_eq!(back.list, l);
+        assert!(back.problems.is_empty());
+        let back = read("a.csv", &csv::to_csv(&l)).unwrap();
+        assert_eq!(back.list.members, l.members);
+        assert_eq!(back.list.title, "a");
+    }
+
+    #[test]
+    fn csv_problems_keep_valid_rows() {
+        let mut l = demo_lists().remove(0);
+        let p1 = l.members[0].clone();
+        l.members = (1..=3)
+            .map(|i| Member {
+                id: format!("P{i}"),
+                note: None,
+                ..p1.clone()
+            })
+            .collect();
+        let text = csv::to_csv(&l);
+        let mut lines: Vec<String> = text.lines().map(str::to_string).collect();
+        let header: Vec<&str> = lines[0].split(',').collect();
+        let col = header.iter().position(|h| *h == "axial_kn").unwrap();
+        let mut cells: Vec<String> = lines[2].split(',').map(str::to_string).collect();
+        cells[col] = "lots".into();
+        lines[2] = cells.join(",");
+        let inc = read("bad.csv", &lines.join("\n")).unwrap();
+        assert_eq!(inc.list.members.len(), l.members.len() - 1);
+        assert_eq!(inc.problems.len(), 1);
+        let p = &inc.problems[0];
+        assert_eq!((p.line, p.column.as_str()), (3, "axial_kn"));
+        let s = p.to_string();
+        assert!(s.starts_with("line 3, column axial_kn"), "{s}");
+        assert!(summary(&inc).contains("1 problem "), "{}", summary(&inc));
+    }
+
+    #[test]
+    fn broken_json_and_empty_files_refused() {
+        assert!(read("x.json", "{\"format\":").is_err());
+        let empty = read("x.csv", "").unwrap();
+        assert!(empty.list.members.is_empty());
+        assert_eq!(empty.problems[0].line, 0);
+        assert!(read(
+            "x.json",
+            "{\"format\":\"strutline.members\",\"version\":1,\"members\":[]}"
+        )
+        .unwrap_err()
+        .contains("no members"));
+    }
+
+    #[test]
+    fn merge_renames_clashing_ids() {
+        let l = demo_lists().remove(0);
+        let mut ms = l.members.clone();
+        let n = ms.len();
+        assert_eq!(merge(&mut ms, &l.members[..2]), 2);
+        assert_eq!(ms.len(), n + 2);
+        let mut ids: Vec<_> = ms.iter().map(|m| m.id.clone()).collect();
+        ids.sort();
+        ids.dedup();
+        assert_eq!(ids.len(), n + 2);
+        assert_eq!(ms[n].axial_kn, l.members[0].axial_kn);
+    }
+
+    #[test]
+    fn size_limit_and_names() {
+        assert!(too_big(5.0 * 1_048_576.0).is_none());
+        assert!(too_big(5.0 * 1_048_576.0 + 1.0).unwrap().contains("5.0 MB"));
+        assert_eq!(file_name("Depot — Hall 2", "csv"), "depot-hall-2.csv");
+        assert_eq!(file_name("  ", "json"), "members.json");
+    }
+}

@@ -1,0 +1,168 @@
+//! The units the person sees and types in: SI (as stored) or US customary.
+//!
+//! A display preference only, kept under its own storage key: the member
+//! file keeps its SI values whatever is shown, and rounding is applied to
+//! the text on screen, never to a stored value. In SI the app shows the
+//! member file's own units (mm, kN, MPa); in US customary the engine's
+//! exact factors ([`strutline_core::units`]) convert for display and back.
+
+use leptos::prelude::*;
+use strutline_core::units::{self, Quantity, UnitSystem};
+
+use crate::browser;
+use crate::numtext::{for_input, parse_number, working};
+
+/// The storage key of the preference.
+pub const KEY: &str = "strutline.v1.units";
+
+/// The stored preference (SI when none).
+pub fn load() -> UnitSystem {
+    if browser::get(KEY).as_deref() == Some("us") {
+        UnitSystem::Us
+    } else {
+        UnitSystem::Si
+    }
+}
+
+/// The preference as stored.
+pub fn stored_text(s: UnitSystem) -> &'static str {
+    match s {
+        UnitSystem::Si => "si",
+        UnitSystem::Us => "us",
+    }
+}
+
+/// The unit system shown, from the app's context (SI outside the app).
+pub fn current() -> UnitSystem {
+    use_context::<RwSignal<UnitSystem>>().map_or(UnitSystem::Si, |s| s.get())
+}
+
+/// The unit system shown, without tracking (for views made afresh).
+pub fn now() -> UnitSystem {
+    use_context::<RwSignal<UnitSystem>>().map_or(UnitSystem::Si, |s| s.get_untracked())
+}
+
+/// The quantity of an engine unit ("mm", "kN", ...); spans are "mm" too.
+fn of_unit(unit: &str, span: bool) -> Option<Quantity> {
+    match Quantity::of_unit(unit)? {
+        Quantity::Length if span => Some(Quantity::Span),
+        q => Some(q),
+    }
+}
+
+/// A stored value given in engine unit `unit`, converted for display:
+/// (value, unit). SI is shown as stored; `span` shows US lengths in ft.
+pub fn shown(system: UnitSystem, unit: &'static str, v: f64, span: bool) -> (f64, &'static str) {
+    match (system, of_unit(unit, span)) {
+        (UnitSystem::Us, Some(q)) => (
+            units::to_display(system, q, v),
+            units::display_unit(system, q),
+        ),
+        _ => (v, if unit == "-" { "" } else { unit }),
+    }
+}
+
+/// A value of the working with its unit ("12.3 kip").
+pub fn step_text(system: UnitSystem, unit: &'static str, v: f64) -> String {
+    let (v, u) = shown(system, unit, v, false);
+    if u.is_empty() {
+        working(v)
+    } else {
+        format!("{} {u}", working(v))
+    }
+}
+
+/// A result with `decimals` in SI, three significant figures more in US.
+pub fn result_text(system: UnitSystem, unit: &'static str, v: f64, decimals: usize) -> String {
+    let (d, u) = shown(system, unit, v, false);
+    let n = match system {
+        UnitSystem::Si => crate::numtext::fixed(d, decimals),
+        UnitSystem::Us => units::format_display(d, 4),
+    };
+    format!("{n} {u}")
+}
+
+/// The unit of an editor field with member-file key `key`.
+pub fn field_unit(system: UnitSystem, key: &str, si_unit: &'static str) -> &'static str {
+    match (system, Quantity::of_key(key)) {
+        (UnitSystem::Us, Some(q)) if q != Quantity::Dimensionless => units::display_unit(system, q),
+        _ => si_unit,
+    }
+}
+
+/// The text a field shows for the stored text `si` of key `key`.
+pub fn to_field(system: UnitSystem, key: &str, si: &str) -> String {
+    if system == UnitSystem::Si || Quantity::of_key(key).is_none() {
+        return si.to_string();
+    }
+    match parse_number(si) {
+        Ok(v) => for_input(units::key_to_display(system, key, v).0),
+        Err(_) => si.to_string(),
+    }
+}
+
+/// What the person typed in the display unit, as text in the stored unit
+/// (left as typed when it is not a number, so the field's own check
+/// reports it).
+pub fn from_field(system: UnitSystem, key: &str, typed: &str) -> String {
+    if system == UnitSystem::Si || Quantity::of_key(key).is_none() || typed.trim().is_empty() {
+        return typed.to_string();
+    }
+    match parse_number(typed) {
+        Ok(v) => format!("{:?}", units::key_from_display(system, key, v)),
+        Err(_) => typed.to_string(),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use UnitSystem::{Si, Us};
+
+    #[test]
+    fn si_is_shown_as_stored() {
+        assert_eq!(shown(Si, "kN", 123.4, false), (123.4, "kN"));
+        assert_eq!(shown(Si, "-", 0.5, false), (0.5, ""));
+        assert_eq!(to_field(Si, "length_mm", "2800"), "2800");
+        assert_eq!(from_field(Si, "axial_kn", "12,5"), "12,5");
+        assert_eq!(field_unit(Si, "axial_kn", "kN"), "kN");
+    }
+
+    #[test]
+    fn us_conversion_uses_exact_factors() {
+        // 1 kip = 4.4482216152605 kN (NIST SP 811, 2008, App. B: 1 lbf =
+        // 4.448 221 615 260 5 N), so 444.82216152605 kN is 100 kip.
+        let (v, u) = shown(Us, "kN", 444.822_161_526_05, false);
+        assert_eq!(u, "kip");
+        assert!((v - 100.0).abs() < 1e-9, "{v}");
+        assert_eq!(result_text(Us, "kN", 444.822_161_526_05, 1), "100 kip");
+        // 1 ksi = 6.894 757 293 168 MPa (same source): 355 MPa = 51.49 ksi.
+        assert_eq!(result_text(Us, "MPa", 355.0, 1), "51.49 ksi");
+        // 1 ft = 304.8 mm exactly; a span of 3048 mm is 10 ft.
+        assert_eq!(shown(Us, "mm", 3048.0, true), (10.0, "ft"));
+        assert_eq!(shown(Us, "mm", 25.4, false), (1.0, "in"));
+        assert_eq!(step_text(Us, "-", 0.5), "0.5");
+    }
+
+    #[test]
+    fn fields_convert_both_ways() {
+        assert_eq!(field_unit(Us, "length_mm", "mm"), "ft");
+        assert_eq!(field_unit(Us, "depth_mm", "mm"), "in");
+        assert_eq!(field_unit(Us, "k_minor", ""), "");
+        assert_eq!(to_field(Us, "length_mm", "3048"), "10");
+        assert_eq!(to_field(Us, "axial_kn", ""), "");
+        assert_eq!(to_field(Us, "k_minor", "0.7"), "0.7");
+        let back: f64 = from_field(Us, "length_mm", "10").parse().unwrap();
+        assert!((back - 3048.0).abs() < 1e-9);
+        let back: f64 = from_field(Us, "fy_mpa", "50").parse().unwrap();
+        assert!((back - 344.737_864_658_4).abs() < 1e-6, "{back}");
+        assert_eq!(from_field(Us, "axial_kn", "lots"), "lots");
+        assert_eq!(from_field(Us, "id", "C1"), "C1");
+    }
+}
