@@ -1226,6 +1226,29 @@ fn working_view(c: &Checked) -> impl IntoView {
     .into_any()
 }
 
+/// The chart's legend as text: one element for the app to build, not
+/// one per item.
+fn legend_html(perry: bool) -> String {
+    let mut h = String::from(
+        "<li><span class=\"sw sw-shade\"></span>within capacity (shaded)</li>\
+         <li><span class=\"sw sw-major\"></span>design curve, major axis (solid)</li>\
+         <li><span class=\"sw sw-minor\"></span>design curve, minor axis (dashed)</li>\
+         <li><span class=\"sw sw-plateau\"></span>strength plateau f_y or f_c,0,k (dashed)</li>\
+         <li><span class=\"sw sw-euler\"></span>Euler π²E / (L_cr/i)² (dotted)</li>\
+         <li><span class=\"sym\">●</span>applied stress N_Ed / A (larger dot: governing axis)</li>\
+         <li><span class=\"sym\">□</span>resistance N_Rd / A of that axis, on its curve</li>",
+    );
+    if perry {
+        for (i, bow) in ["250", "500", "1000"].iter().enumerate() {
+            h.push_str(&format!(
+                "<li><span class=\"sw sw-perry{}\"></span>Perry-Robertson, bow L_cr/{bow}</li>",
+                i + 1
+            ));
+        }
+    }
+    h
+}
+
 #[component]
 fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
     let canvas = NodeRef::<leptos::html::Canvas>::new();
@@ -1303,20 +1326,7 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
                 <canvas id="envelope" class="envelope" node_ref=canvas role="img"
                     aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
             </div>
-            <ul class="chart-legend" aria-label="Chart legend">
-                <li><span class="sw sw-shade"></span>"within capacity (shaded)"</li>
-                <li><span class="sw sw-major"></span>"design curve, major axis (solid)"</li>
-                <li><span class="sw sw-minor"></span>"design curve, minor axis (dashed)"</li>
-                <li><span class="sw sw-plateau"></span>"strength plateau f_y or f_c,0,k (dashed)"</li>
-                <li><span class="sw sw-euler"></span>"Euler π²E / (L_cr/i)² (dotted)"</li>
-                <li><span class="sym">"●"</span>"applied stress N_Ed / A (larger dot: governing axis)"</li>
-                <li><span class="sym">"□"</span>"resistance N_Rd / A of that axis, on its curve"</li>
-                {move || ctx.perry.get().then(|| view! {
-                    <li><span class="sw sw-perry1"></span>"Perry-Robertson, bow L_cr/250"</li>
-                    <li><span class="sw sw-perry2"></span>"Perry-Robertson, bow L_cr/500"</li>
-                    <li><span class="sw sw-perry3"></span>"Perry-Robertson, bow L_cr/1000"</li>
-                })}
-            </ul>
+            <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend_html(ctx.perry.get())></ul>
             <p class="chart-description">{move || described.get()}</p>
             {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
         </div>

@@ -15,6 +15,7 @@ pub mod exchange;
 pub mod fields;
 pub mod listops;
 pub mod numtext;
+pub mod picker;
 pub mod print;
 pub mod restraint;
 pub mod status;
