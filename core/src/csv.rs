@@ -1176,9 +1176,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
     member.insert("section".into(), Value::Object(section));
     member.insert("material".into(), Value::Object(material));
     let value = Value::Object(member);
-    serde_path_to_error::deserialize::<_, Member>(&value).map_err(|e| {
-        let path = e.path().to_string();
-        let inner = e.into_inner().to_string();
+    file::deserialize_member(&value).map_err(|(path, inner)| {
         let key = missing_field(&inner).unwrap_or_else(|| {
             path.rsplit('.')
                 .next()

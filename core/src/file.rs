@@ -158,26 +158,48 @@ pub fn parse(text: &str) -> Result<MemberFile> {
 }
 
 /// A member from a JSON value; `index` (0-based) names it when it has no id.
+///
+/// Natively the error names the field's path (`section.depth_mm: ...`). In
+/// the browser build the path tracking is left out to keep the app within
+/// its download budget; the message still names the member and what was
+/// wrong, and serde's own words name a missing or unknown field.
 pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
     let name = raw
         .get("id")
         .and_then(Value::as_str)
         .map(str::to_string)
         .unwrap_or_else(|| format!("#{}", index + 1));
-    serde_path_to_error::deserialize::<_, Member>(raw).map_err(|e| {
-        let path = e.path().to_string();
-        let inner = e.into_inner().to_string();
+    let outcome = deserialize_member(raw).map_err(|(path, inner)| {
+        if path.is_empty() || path == "." {
+            inner
+        } else {
+            format!("{path}: {inner}")
+        }
+    });
+    outcome.map_err(|message| {
         Error::Syntax {
             line: 0,
             column: 0,
-            message: if path == "." {
-                inner
-            } else {
-                format!("{path}: {inner}")
-            },
+            message,
         }
         .in_member(&name)
     })
+}
+
+/// Deserialises a member, giving on failure the path of the field at fault
+/// (natively; empty in the browser build) and serde's message.
+pub fn deserialize_member(raw: &Value) -> std::result::Result<Member, (String, String)> {
+    #[cfg(not(target_arch = "wasm32"))]
+    {
+        serde_path_to_error::deserialize::<_, Member>(raw).map_err(|e| {
+            let path = e.path().to_string();
+            (path, e.into_inner().to_string())
+        })
+    }
+    #[cfg(target_arch = "wasm32")]
+    {
+        <Member as serde::Deserialize>::deserialize(raw).map_err(|e| (String::new(), e.to_string()))
+    }
 }
 
 /// Refuses a list in which two members share an id.

@@ -46,10 +46,15 @@ pub fn run(args: &[String]) -> Result<()> {
     let mut cmd = node_script("run.mjs", &url);
     // The update test rewrites sw.js in this run's own build directory.
     cmd.arg("--dist").arg(&built.dir);
-    if let Some(name) = only {
+    if let Some(name) = &only {
         cmd.args(["--only", &name]);
     }
-    let result = util::run(&mut cmd);
+    let mut result = util::run(&mut cmd);
+    if only.is_none() {
+        // The exchange of member lists: export, import, refusals.
+        let exchange = util::run(&mut node_script("exchange.mjs", &url));
+        result = result.and(exchange);
+    }
     server.stop();
     result?;
     // The tests ran on the build either way; over the budget still fails.

@@ -213,8 +213,22 @@ fn ensure_target() -> Result<()> {
     }
 }
 
-/// The wasm-opt levels tried, in order.
-const WASM_OPT_LEVELS: [&[&str]; 2] = [&["-Oz"], &["-O1", "--converge"]];
+/// The wasm-opt levels tried, in order. The levels from -O2 up reorder
+/// functions by use and inline, which makes the module smaller raw but
+/// larger gzipped (measured: -Oz 358 KB against -O1 334 KB gzipped), so the
+/// third choice is -O1 with the passes that shrink without reordering:
+/// dead-argument elimination and code folding.
+const WASM_OPT_LEVELS: [&[&str]; 3] = [
+    &["-Oz"],
+    &["-O1", "--converge"],
+    &[
+        "-O1",
+        "--converge",
+        "--dae-optimizing",
+        "--code-folding",
+        "-O1",
+    ],
+];
 
 /// The features the module may use, for wasm-opt.
 const WASM_FEATURES: [&str; 6] = [
