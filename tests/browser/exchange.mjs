@@ -113,6 +113,29 @@ test("markup-in-an-import-stays-text", () =>
   }),
 );
 
+test("deeply-nested-refused", () =>
+  withApp("deeply-nested-refused", async (page) => {
+    const before = await stored(page);
+    const deep = "[".repeat(100_000) + "]".repeat(100_000);
+    await importText(page, "deep.json", deep);
+    assert.match(await page.locator("[data-testid=import-report]").textContent(), /deep\.json/);
+    assert.deepEqual(await stored(page), before, "nothing changed");
+  }),
+);
+
+test("thousands-of-members-read", () =>
+  withApp("thousands-of-members-read", async (page) => {
+    const before = await stored(page);
+    const file = await download(page, "export-json");
+    const f = JSON.parse(file.text);
+    const one = f.members[0];
+    f.members = Array.from({ length: 3000 }, (_, i) => ({ ...one, id: `T${i + 1}` }));
+    await importText(page, "many.json", JSON.stringify(f));
+    assert.match(await page.locator("[data-testid=import-report]").textContent(), /3000 members/);
+    assert.deepEqual(await stored(page), before, "nothing changed before the person chooses");
+  }),
+);
+
 test("oversize-refused", () =>
   withApp("oversize-refused", async (page) => {
     const before = await stored(page);

@@ -355,9 +355,14 @@ test("offline-reload", async () => {
   });
 });
 
-test("unreadable-storage-kept", async () => {
-  const broken = '{"format":"strutline.workspace", broken';
-  await withApp("unreadable-storage-kept", async (page, log, context) => {
+for (const [name, broken] of [
+  ["unreadable-storage-kept", '{"format":"strutline.workspace", broken'],
+  // Truncated, of a future version, not ours: each kept aside and reported too.
+  ["truncated-storage-kept", '{"revision":3,"format":"strutline.workspace","version":1,"active":0,"lists":[{"format":"strut'],
+  ["future-storage-kept", '{"revision":1,"format":"strutline.workspace","version":7,"active":0,"lists":[]}'],
+  ["foreign-storage-kept", '{"todo":["milk","eggs"]}'],
+]) test(name, async () => {
+  await withApp(name, async (page, log, context) => {
     // Put the broken text in place before the app's first start, once.
     await context.addInitScript(([key, text]) => {
       if (!sessionStorage.getItem("strutline-test-seeded")) {
@@ -368,7 +373,7 @@ test("unreadable-storage-kept", async () => {
     await open(page);
     const problem = page.locator("[data-testid=storage-problem]").first();
     await problem.waitFor({ state: "visible", timeout: 10_000 });
-    await page.screenshot({ path: join(OUT, "storage-problem.png"), fullPage: true });
+    await page.screenshot({ path: join(OUT, `${name}.png`), fullPage: true });
     const keep = async () =>
       page.evaluate(
         ([key, prefix, text]) => {
@@ -382,6 +387,29 @@ test("unreadable-storage-kept", async () => {
     await page.reload({ waitUntil: "load" });
     await page.locator("[data-testid=caution]").first().waitFor({ state: "visible", timeout: 15_000 });
     assert.ok(await keep(), "the unreadable text is gone after a second start");
+  });
+});
+
+test("full-storage-reported-edit-kept", async () => {
+  await withApp("full-storage-reported-edit-kept", async (page, log, context) => {
+    // Every write refused as a full quota would be.
+    await context.addInitScript(() => {
+      const original = Storage.prototype.setItem;
+      Storage.prototype.setItem = function (key, value) {
+        if (String(key).startsWith("strutline.v1.workspace")) {
+          throw new DOMException("The quota has been exceeded.", "QuotaExceededError");
+        }
+        return original.call(this, key, value);
+      };
+    });
+    await open(page);
+    await page.locator("[data-testid=member-row]").first().click();
+    const load = page.locator("input[name=axial_kn]");
+    await load.fill("123,5");
+    await page.locator("[data-testid=save-problem]").first().waitFor({ state: "visible", timeout: 10_000 });
+    assert.equal(await load.inputValue(), "123,5", "the edit stays on screen");
+    const row = page.locator("[data-testid=member-row]").first();
+    assert.match(await row.textContent(), /123[.,]5/, "the list shows the unsaved edit");
   });
 });
 
