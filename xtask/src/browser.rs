@@ -47,7 +47,7 @@ pub fn run(args: &[String]) -> Result<()> {
     // The update test rewrites sw.js in this run's own build directory.
     cmd.arg("--dist").arg(&built.dir);
     if let Some(name) = &only {
-        cmd.args(["--only", &name]);
+        cmd.args(["--only", name]);
     }
     let mut result = util::run(&mut cmd);
     if only.is_none() {
