@@ -65,6 +65,24 @@ pub struct Basics {
     pub sigma_e_mpa: f64,
 }
 
+impl Basics {
+    /// The mode result of a first-principles method whose failure stress
+    /// is `stress_mpa` (mean stress N/A) and design resistance
+    /// `resistance_kn`: the reduction is the stress over the strength and
+    /// the relative slenderness sqrt(f / sigma_E).
+    pub fn stress_mode(&self, mode: Mode, stress_mpa: f64, resistance_kn: f64) -> ModeResult {
+        ModeResult {
+            mode,
+            buckling_length_mm: self.lcr_mm,
+            slenderness: self.slenderness,
+            critical_kn: self.n_cr_kn,
+            relative_slenderness: (self.f_mpa / self.sigma_e_mpa).sqrt(),
+            reduction: (stress_mpa / self.f_mpa).clamp(f64::MIN_POSITIVE, 1.0),
+            resistance_kn,
+        }
+    }
+}
+
 /// Checks the inputs of an axis and works its basics (no trace, no allocation).
 pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
     let lcr = positive("lcr_mm", lcr_mm)?;

@@ -175,15 +175,7 @@ pub fn axis(
         "kN",
         "secant formula",
     );
-    Ok(ModeResult {
-        mode,
-        buckling_length_mm: b.lcr_mm,
-        slenderness: b.slenderness,
-        critical_kn: b.n_cr_kn,
-        relative_slenderness: (b.f_mpa / b.sigma_e_mpa).sqrt(),
-        reduction: (s / b.f_mpa).clamp(f64::MIN_POSITIVE, 1.0),
-        resistance_kn: resistance,
-    })
+    Ok(b.stress_mode(mode, s, resistance))
 }
 
 #[cfg(test)]
