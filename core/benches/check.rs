@@ -172,6 +172,7 @@ fn member(i: usize) -> Member {
         service_class: None,
         load_duration: None,
         csa_n: None,
+        angle_connection: None,
     }
 }
 

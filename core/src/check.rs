@@ -232,18 +232,27 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         &mut warnings,
     )
     .map_err(wrap)?;
-    let mut minor = method::axis(
-        method,
-        &axes,
-        Mode::Minor,
-        lengths.minor_mm,
-        &mut trace,
-        &mut warnings,
-    )
+    // Angle branch: AISC 360-16 E5 for an angle connected through one leg
+    // replaces the minor-axis mode and may waive the E4 mode.
+    let e5 = method::aisc360::e5_connection(method, input, &mut warnings);
+    let mut minor = match e5 {
+        Some((c, basis)) => method::aisc360::e5(&axes, c, basis, &mut trace, &mut warnings),
+        None => method::axis(
+            method,
+            &axes,
+            Mode::Minor,
+            lengths.minor_mm,
+            &mut trace,
+            &mut warnings,
+        ),
+    }
     .map_err(wrap)?;
-    let mut twist =
+    let mut twist = if e5.is_some() && !method::aisc360::e5_twist(input, &mut trace) {
+        None
+    } else {
         stability::twist_mode(method, input, &axes, &lengths, &mut trace, &mut warnings)
-            .map_err(wrap)?;
+            .map_err(wrap)?
+    };
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     if aisc {
         if let Some(c) = assessment.classified.filter(|c| c.is_slender()) {
@@ -253,11 +262,11 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
                 stability::aisc_slender(t, &c, input, &mut trace);
             }
         }
-        if input.section.family == Family::Angle {
+        if input.section.family == Family::Angle && e5.is_none() {
             warnings.push(Warning::new(
                 "angle-e5-not-applied",
                 "the single angle is checked as loaded through its centroid (AISC 360-16 E3, E4, E7); \
-                 the E5 effective slenderness for angles connected through one leg is not applied",
+                 the E5 effective slenderness for one-leg connections is not applied (set angle_connection)",
             ));
         }
     }

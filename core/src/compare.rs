@@ -149,6 +149,7 @@ mod tests {
             service_class: None,
             load_duration: None,
             csa_n: None,
+            angle_connection: None,
         }
     }
 

@@ -1,4 +1,4 @@
-//! The member file: `{"format": "strutline.members", "version": 1,
+//! The member file: `{"format": "strutline.members", "version": 2,
 //! "title": ..., "members": [...]}`.
 //!
 //! Reading goes text -> JSON value -> (migration to the current version)
@@ -16,7 +16,10 @@ use crate::member::Member;
 pub const FORMAT: &str = "strutline.members";
 
 /// The version this build writes; it reads every version from 1 to this.
-pub const VERSION: u64 = 1;
+///
+/// Version 2 added the optional member key `angle_connection` (AISC 360-16
+/// E5); a version-1 file reads as it was written.
+pub const VERSION: u64 = 2;
 
 /// The largest member-file text accepted, bytes (5 MiB).
 pub const MAX_BYTES: usize = 5 * 1024 * 1024;
@@ -68,11 +71,15 @@ fn syntax(e: &serde_json::Error) -> Error {
     }
 }
 
-/// Lifts a file of `version` to the next version. Version 1 is the first,
-/// so there is nothing to lift yet; each later version adds one arm here.
-fn migrate(value: Value, version: u64) -> Result<Value> {
-    // Future: `if version == 1 { rename or default keys of version 1 into version 2 }`.
-    let _ = version;
+/// Lifts a file of `version` to the next version; each version adds one arm.
+fn migrate(mut value: Value, version: u64) -> Result<Value> {
+    // 1 -> 2: version 2 only adds an optional key, so a version-1 file is
+    // version 2 as it stands.
+    if version == 1 {
+        if let Some(o) = value.as_object_mut() {
+            o.insert("version".into(), Value::from(2u64));
+        }
+    }
     Ok(value)
 }
 
@@ -248,7 +255,32 @@ mod tests {
                 newest: VERSION
             }
         );
-        assert!(e.to_string().contains("versions 1 to 1"));
+        assert!(e.to_string().contains("versions 1 to 2"));
+    }
+
+    #[test]
+    fn version_1_lifts_and_version_2_keeps_the_angle_connection() {
+        let f = parse(ONE).unwrap();
+        assert_eq!((f.version, f.members[0].angle_connection), (2, None));
+        assert_eq!(migrate(parse_value(ONE), 1).unwrap()["version"], 2);
+        let two = ONE.replace("\"version\": 1", "\"version\": 2").replace(
+            "\"method\": \"euler\"",
+            "\"method\": \"euler\", \"angle_connection\": {\"leg\": \"short\", \"truss\": \"space\"}",
+        );
+        let c = parse(&two).unwrap().members[0].angle_connection.unwrap();
+        assert_eq!(
+            (c.leg, c.truss),
+            (crate::member::Leg::Short, crate::member::Truss::Space)
+        );
+        let f = parse(&two).unwrap();
+        assert_eq!(parse(&f.to_json()).unwrap(), f);
+        let bad = two.replace("\"short\"", "\"middle\"");
+        let e = parse(&bad).unwrap_err().to_string();
+        assert!(e.contains("angle_connection"), "{e}");
+    }
+
+    fn parse_value(text: &str) -> Value {
+        serde_json::from_str(text).unwrap()
     }
 
     #[test]

@@ -67,6 +67,41 @@ pub enum LoadDuration {
     Instantaneous,
 }
 
+/// Which leg of a single angle its end connections load (AISC 360-16 E5).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
+#[serde(rename_all = "lowercase")]
+pub enum Leg {
+    /// The longer leg (either leg of an equal angle).
+    Long,
+    /// The shorter leg.
+    Short,
+}
+
+/// The kind of member E5 distinguishes.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize, Default)]
+#[serde(rename_all = "lowercase")]
+pub enum Truss {
+    /// E5(a): an individual member, or a web member of a planar truss
+    /// with adjacent web members on the same side of the gusset or chord.
+    #[default]
+    Planar,
+    /// E5(b): a web member of a box or space truss with adjacent web
+    /// members on the same side of the gusset or chord.
+    Space,
+}
+
+/// A single angle loaded at its ends through one leg (member file
+/// version 2, key `angle_connection`). Absent: loaded through the centroid.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct AngleConnection {
+    /// The connected leg.
+    pub leg: Leg,
+    /// E5(a) or E5(b); default planar.
+    #[serde(default)]
+    pub truss: Truss,
+}
+
 /// CSA S16-19 13.3.1 exponent n: 1.34 for most members, 2.24 for
 /// hot-finished hollow sections and stress-relieved welded sections.
 pub const CSA_N_DEFAULT: f64 = 1.34;
@@ -140,6 +175,9 @@ pub struct Member {
     /// CSA S16 exponent n (1.34 or 2.24; default by section make).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub csa_n: Option<f64>,
+    /// A single angle connected through one leg (AISC 360-16 E5; version 2).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub angle_connection: Option<AngleConnection>,
 }
 
 /// The longest length or buckling length accepted, mm (10 km): beyond it

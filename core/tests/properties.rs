@@ -46,6 +46,7 @@ fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member 
         service_class: None,
         load_duration: None,
         csa_n: None,
+        angle_connection: None,
     }
 }
 

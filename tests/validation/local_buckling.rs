@@ -428,6 +428,7 @@ fn member(section: SectionSpec, method: Method, length: f64) -> Member {
         service_class: None,
         load_duration: None,
         csa_n: None,
+        angle_connection: None,
     }
 }
 

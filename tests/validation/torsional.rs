@@ -147,6 +147,7 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
         service_class: None,
         load_duration: None,
         csa_n: None,
+        angle_connection: None,
     };
     let r = check_member(&member).unwrap();
     let tor = r
@@ -401,6 +402,7 @@ fn strut(section: SectionSpec, material: MaterialSpec, method: Method, length: f
         service_class: None,
         load_duration: None,
         csa_n: None,
+        angle_connection: None,
     }
 }
 

@@ -52,6 +52,7 @@ pub fn member(
         service_class: None,
         load_duration: None,
         csa_n: None,
+        angle_connection: None,
     }
 }
 

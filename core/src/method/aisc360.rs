@@ -6,11 +6,33 @@
 //! F_cr = 0.877 F_e (Eq. E3-3); P_n = F_cr A_g (Eq. E3-1). LRFD gives
 //! phi_c P_n with phi_c = 0.90, ASD P_n / Omega_c with Omega_c = 1.67
 //! (E1). A caution is raised when L_c / r exceeds 200 (user note to E2).
+//!
+//! E5, a single angle loaded at its ends through one leg ([`e5`]): the
+//! eccentricity is neglected and the angle checked by E3 (and E7) at an
+//! effective slenderness, with L the length between work points and r_a
+//! the radius of gyration about the geometric axis parallel to the
+//! connected leg. E5(a), individual members and webs of planar trusses:
+//! L_c/r = 72 + 0.75 L/r_a for L/r_a <= 80 (Eq. E5-1), else
+//! 32 + 1.25 L/r_a (Eq. E5-2). E5(b), webs of box or space trusses:
+//! 60 + 0.8 L/r_a for L/r_a <= 75 (Eq. E5-3), else 45 + L/r_a (Eq. E5-4).
+//! An unequal angle connected through its shorter leg adds
+//! 4[(b_l/b_s)^2 - 1] (a) or 6[(b_l/b_s)^2 - 1] (b), but not below
+//! 0.95 L/r_z (a) or 0.82 L/r_z (b). E5 covers angles with L_c/r <= 200
+//! and leg ratio under 1.7 (the shorter leg connected) or at most 1.7
+//! (E5(c): beyond, Chapter H); others are refused, as Chapter H is not
+//! implemented. Flexural-torsional buckling (E4) need not be considered
+//! when b/t <= 0.71 sqrt(E/F_y) ([`e5_twist`]); otherwise the concentric
+//! E4 mode is kept. The E5 text is recalled from memory of the 2016
+//! edition (not checked against a copy here), including: the 200 limit
+//! taken on the final value, the 1.7 limits, and the 0.71 sqrt(E/F_y)
+//! exemption; the validation file works each branch by hand.
 
 use crate::check::{Mode, ModeResult, Warning};
-use crate::error::Result;
+use crate::error::{Error, Result};
+use crate::member::{AngleConnection, Leg, Truss};
 use crate::method::euler::{basics, push_geometry, push_material, require_steel, warn_once};
-use crate::method::Input;
+use crate::method::{Input, Method};
+use crate::section::{Family, SectionSpec};
 use crate::trace::{push, Scope, Trace};
 
 /// LRFD or ASD.
@@ -198,6 +220,207 @@ pub fn axis(
         reduction: (fcr / b.f_mpa).clamp(f64::MIN_POSITIVE, 1.0),
         resistance_kn: design,
     })
+}
+
+/// The connection and basis E5 uses: `Some` for an angle under AISC with
+/// `angle_connection`; else `None`, warning when the key is given.
+pub fn e5_connection(
+    method: Method,
+    input: &Input<'_>,
+    warnings: &mut Vec<Warning>,
+) -> Option<(AngleConnection, Basis)> {
+    let c = input.member.angle_connection?;
+    let basis = match method {
+        Method::AiscLrfd => Basis::Lrfd,
+        Method::AiscAsd => Basis::Asd,
+        _ => Basis::Lrfd,
+    };
+    if matches!(method, Method::AiscLrfd | Method::AiscAsd) && input.section.family == Family::Angle
+    {
+        return Some((c, basis));
+    }
+    warnings.push(Warning::new(
+        "angle-connection-ignored",
+        "angle_connection is used only for an angle under AISC 360 (E5); \
+         here the section is loaded through its centroid",
+    ));
+    None
+}
+
+/// AISC 360-16 E5: the single angle connected through one leg, worked as
+/// the minor-axis mode by E3 at the effective slenderness (module docs).
+pub fn e5(
+    input: &Input<'_>,
+    c: AngleConnection,
+    basis: Basis,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Result<ModeResult> {
+    let refuse = |reason: String| Error::NotApplicable {
+        method: key(basis),
+        reason,
+    };
+    let SectionSpec::Angle(s) = &input.section.spec else {
+        return Err(refuse("E5 is for single angles".into()));
+    };
+    let p = &input.section.props;
+    let l = input.member.length_mm;
+    let (bl, bs) = (s.depth_mm.max(s.width_mm), s.depth_mm.min(s.width_mm));
+    let ratio = bl / bs;
+    let short = c.leg == Leg::Short && ratio > 1.0;
+    if ratio > 1.7 || (short && ratio >= 1.7) {
+        return Err(refuse(format!(
+            "AISC 360-16 E5: leg ratio {ratio:.2} is too large (limit 1.7); \
+             Chapter H (axial and bending) is not covered"
+        )));
+    }
+    // The depth leg lies along z, so the axis parallel to it is z.
+    let i_a = if (c.leg == Leg::Long) == (s.depth_mm >= s.width_mm) {
+        p.i_z_mm4
+    } else {
+        p.i_y_mm4
+    };
+    let r_a = (i_a / p.area_mm2).sqrt();
+    let r_z = p.r_minor_mm;
+    let x = l / r_a;
+    let planar = c.truss == Truss::Planar;
+    let sc = Scope::Minor;
+    let (sub, mut lc_r, label, eq) = match (planar, x <= if planar { 80.0 } else { 75.0 }) {
+        (true, true) => (
+            "AISC 360-16 E5(a)",
+            72.0 + 0.75 * x,
+            "72 + 0.75 L/r_a",
+            "AISC 360-16 Eq. E5-1",
+        ),
+        (true, false) => (
+            "AISC 360-16 E5(a)",
+            32.0 + 1.25 * x,
+            "32 + 1.25 L/r_a",
+            "AISC 360-16 Eq. E5-2",
+        ),
+        (false, true) => (
+            "AISC 360-16 E5(b)",
+            60.0 + 0.8 * x,
+            "60 + 0.8 L/r_a",
+            "AISC 360-16 Eq. E5-3",
+        ),
+        (false, false) => (
+            "AISC 360-16 E5(b)",
+            45.0 + x,
+            "45 + L/r_a",
+            "AISC 360-16 Eq. E5-4",
+        ),
+    };
+    push(trace, sc, "L", "length between work points", l, "mm", sub);
+    push(trace, sc, "b_l/b_s", "long over short leg", ratio, "-", sub);
+    push(
+        trace,
+        sc,
+        "r_a",
+        "r about the geometric axis parallel to the connected leg",
+        r_a,
+        "mm",
+        sub,
+    );
+    push(
+        trace,
+        sc,
+        "L/r_a",
+        "slenderness about that axis",
+        x,
+        "-",
+        sub,
+    );
+    push(trace, sc, "L_c/r", label, lc_r, "-", eq);
+    if short {
+        let (f, k, add_label, floor_label) = if planar {
+            (
+                4.0,
+                0.95,
+                "shorter leg connected: + 4[(b_l/b_s)^2 - 1]",
+                "lower bound 0.95 L/r_z",
+            )
+        } else {
+            (
+                6.0,
+                0.82,
+                "shorter leg connected: + 6[(b_l/b_s)^2 - 1]",
+                "lower bound 0.82 L/r_z",
+            )
+        };
+        let add = f * (ratio * ratio - 1.0);
+        let floor = k * l / r_z;
+        push(trace, sc, "dL_c/r", add_label, add, "-", sub);
+        push(
+            trace,
+            sc,
+            "r_z",
+            "r about the minor principal axis",
+            r_z,
+            "mm",
+            sub,
+        );
+        push(trace, sc, "L_c/r,min", floor_label, floor, "-", sub);
+        lc_r = (lc_r + add).max(floor);
+        push(
+            trace,
+            sc,
+            "L_c/r",
+            "effective slenderness used",
+            lc_r,
+            "-",
+            sub,
+        );
+    }
+    if lc_r.is_nan() || lc_r > 200.0 {
+        return Err(refuse(format!(
+            "AISC 360-16 E5: L_c/r = {lc_r:.0} exceeds 200; Chapter H is not covered"
+        )));
+    }
+    warnings.push(Warning::new(
+        "e5-conditions",
+        "AISC 360-16 E5 assumes: loaded at both ends through the same leg, welded or with \
+         at least two bolts, no transverse load between, truss webs beside it on the same \
+         side of the gusset or chord; confirm these. L is length_mm; k and lcr are not used",
+    ));
+    let start = trace.len();
+    let r = axis(input, Mode::Minor, lc_r * r_z, basis, trace, warnings)?;
+    if let Some(st) = trace.iter_mut().skip(start).find(|st| st.symbol == "L_cr") {
+        st.label = "equivalent length (L_c/r) r_z entering E3";
+        st.clause = sub;
+    }
+    Ok(r)
+}
+
+/// Whether E4 flexural-torsional buckling is still checked for an E5
+/// angle: not when b/t <= 0.71 sqrt(E/F_y), b the longer leg (E5).
+pub fn e5_twist(input: &Input<'_>, trace: &mut Trace) -> bool {
+    let SectionSpec::Angle(s) = &input.section.spec else {
+        return true;
+    };
+    let (fy, e) = input.material.strength_and_modulus();
+    let bt = s.depth_mm.max(s.width_mm) / s.thickness_mm;
+    let limit = 0.71 * (e / fy).sqrt();
+    let sc = Scope::FlexuralTorsional;
+    push(
+        trace,
+        sc,
+        "b/t",
+        "longer leg over thickness",
+        bt,
+        "-",
+        "AISC 360-16 E5",
+    );
+    push(
+        trace,
+        sc,
+        "0.71 sqrt(E/F_y)",
+        "at or below it flexural-torsional buckling need not be considered",
+        limit,
+        "-",
+        "AISC 360-16 E5",
+    );
+    bt > limit
 }
 
 #[cfg(test)]

@@ -536,6 +536,7 @@ pub(crate) mod tests {
             service_class: None,
             load_duration: None,
             csa_n: None,
+            angle_connection: None,
         }
     }
 
