@@ -270,8 +270,8 @@ pub fn e5(
     let short = c.leg == Leg::Short && ratio > 1.0;
     if ratio > 1.7 || (short && ratio >= 1.7) {
         return Err(refuse(format!(
-            "AISC 360-16 E5: leg ratio {ratio:.2} is too large (limit 1.7); \
-             Chapter H (axial and bending) is not covered"
+            "angle_connection: leg ratio {ratio:.2} is outside AISC 360-16 E5 \
+             (limit 1.7); Chapter H (axial and bending) is not covered"
         )));
     }
     // The depth leg lies along z, so the axis parallel to it is z.
@@ -374,7 +374,8 @@ pub fn e5(
     }
     if lc_r.is_nan() || lc_r > 200.0 {
         return Err(refuse(format!(
-            "AISC 360-16 E5: L_c/r = {lc_r:.0} exceeds 200; Chapter H is not covered"
+            "angle_connection: AISC 360-16 E5 gives L_c/r = {lc_r:.0}, over 200; \
+             Chapter H is not covered"
         )));
     }
     warnings.push(Warning::new(
@@ -445,5 +446,109 @@ mod tests {
         assert!((a - b).abs() / a < 2e-3);
         assert!((f_cr(fy, fe) - a).abs() < 1e-9);
         assert_eq!(f_cr(fy, 1e12), fy.min(0.658f64.powf(fy / 1e12) * fy));
+    }
+
+    fn member(section: serde_json::Value, method: &str, conn: bool) -> crate::Member {
+        let mut v = serde_json::json!({"id": "A1", "section": section,
+            "material": {"fy_mpa": 345, "e_mpa": 200000}, "length_mm": 2000,
+            "axial_kn": 50, "method": method});
+        if conn {
+            v["angle_connection"] = serde_json::json!({"leg": "long"});
+        }
+        serde_json::from_value(v).unwrap()
+    }
+
+    fn angle(b: f64, t: f64) -> serde_json::Value {
+        serde_json::json!({"kind": "angle", "depth_mm": b, "width_mm": b, "thickness_mm": t})
+    }
+
+    fn codes(r: &crate::CheckResult) -> Vec<&'static str> {
+        r.warnings.iter().map(|w| w.code).collect()
+    }
+
+    #[test]
+    fn connection_is_ignored_with_a_warning_off_aisc_or_off_angles() {
+        let rhs =
+            serde_json::json!({"kind": "rhs", "depth_mm": 100, "width_mm": 100, "wall_mm": 5});
+        for (section, method) in [
+            (rhs, "aisc360-lrfd"),
+            (angle(100.0, 10.0), "en1993-1-1"),
+            (angle(100.0, 10.0), "csa-s16"),
+        ] {
+            let with = crate::check_member(&member(section.clone(), method, true)).unwrap();
+            let without = crate::check_member(&member(section, method, false)).unwrap();
+            assert!(
+                codes(&with).contains(&"angle-connection-ignored"),
+                "{method}"
+            );
+            assert!(!codes(&without).contains(&"angle-connection-ignored"));
+            assert_eq!(with.resistance_kn, without.resistance_kn, "{method}");
+            assert_eq!(with.trace, without.trace, "{method}");
+        }
+    }
+
+    #[test]
+    fn e5_replaces_the_centroid_warning_and_asks_for_its_conditions() {
+        let with = crate::check_member(&member(angle(100.0, 10.0), "aisc360-lrfd", true)).unwrap();
+        let without =
+            crate::check_member(&member(angle(100.0, 10.0), "aisc360-lrfd", false)).unwrap();
+        assert_eq!(codes(&with), ["e5-conditions"]);
+        assert_eq!(codes(&without), ["angle-e5-not-applied"]);
+        // The eccentric connection costs capacity here.
+        assert!(with.resistance_kn < without.resistance_kn);
+    }
+
+    #[test]
+    fn e4_is_waived_only_up_to_b_over_t_of_0_71_sqrt_e_over_fy() {
+        // 0.71 sqrt(200000/345) = 17.09: b/t = 10 waives E4, b/t = 20 keeps it.
+        let r = crate::check_member(&member(angle(100.0, 10.0), "aisc360-lrfd", true)).unwrap();
+        assert!(r.modes.iter().all(|m| m.mode != Mode::FlexuralTorsional));
+        let bt = r
+            .trace
+            .iter()
+            .find(|s| s.symbol == "b/t" && s.clause == "AISC 360-16 E5")
+            .unwrap();
+        assert_eq!((bt.value, bt.scope), (10.0, Scope::FlexuralTorsional));
+        let r = crate::check_member(&member(angle(100.0, 5.0), "aisc360-lrfd", true)).unwrap();
+        assert!(r.modes.iter().any(|m| m.mode == Mode::FlexuralTorsional));
+        // b/t = 20 > 0.45 sqrt(E/F_y) = 10.8: E7 reduces the E5 mode too.
+        let minor = r.modes.iter().find(|m| m.mode == Mode::Minor).unwrap();
+        let pn = r
+            .trace
+            .iter()
+            .find(|s| s.scope == Scope::Minor && s.clause == "AISC 360-16 E1(a)")
+            .unwrap()
+            .value;
+        assert!(
+            minor.resistance_kn < pn * 0.999,
+            "{} vs {pn}",
+            minor.resistance_kn
+        );
+        assert!(r
+            .trace
+            .iter()
+            .any(|s| s.scope == Scope::Minor && s.clause == "AISC 360-16 Eq. E7-1"));
+    }
+
+    #[test]
+    fn refusals_are_typed_and_name_the_key() {
+        let mut m = member(
+            serde_json::json!({"kind": "angle", "depth_mm": 200, "width_mm": 100, "thickness_mm": 12}),
+            "aisc360-asd",
+            true,
+        );
+        let e = crate::check_member(&m).unwrap_err();
+        assert_eq!(e.field(), Some("method"));
+        assert!(
+            e.to_string().contains("angle_connection: leg ratio 2.00"),
+            "{e}"
+        );
+        m.section = serde_json::from_value(angle(100.0, 10.0)).unwrap();
+        m.length_mm = 6000.0;
+        let e = crate::check_member(&m).unwrap_err().to_string();
+        assert!(
+            e.contains("angle_connection") && e.contains("over 200"),
+            "{e}"
+        );
     }
 }
