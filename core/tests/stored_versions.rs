@@ -67,3 +67,31 @@ fn version_1_fixture_loads_and_checks() {
     // Written again, it reads back the same.
     assert_eq!(file::parse(&f.to_json()).unwrap(), f);
 }
+
+#[test]
+fn version_2_fixture_loads_and_checks() {
+    use strutline_core::member::{Leg, Truss};
+    let text = include_str!("../../tests/fixtures/stored/member-file-v2.json");
+    let f = file::parse(text).unwrap();
+    assert_eq!(f.members.len(), 3);
+    let c = f.member("F-E5B").unwrap().angle_connection.unwrap();
+    assert_eq!((c.leg, c.truss), (Leg::Short, Truss::Space));
+    // "truss" defaults to planar.
+    let c = f.member("F-E5X").unwrap().angle_connection.unwrap();
+    assert_eq!((c.leg, c.truss), (Leg::Short, Truss::Planar));
+    for m in &f.members {
+        let r = strutline_core::check_member(m).unwrap_or_else(|e| panic!("{e}"));
+        assert!(
+            r.utilisation.is_finite() && r.resistance_kn > 0.0,
+            "{}",
+            m.id
+        );
+        let code = if m.id == "F-E5X" {
+            "angle-connection-ignored"
+        } else {
+            "e5-conditions"
+        };
+        assert!(r.warnings.iter().any(|w| w.code == code), "{}", m.id);
+    }
+    assert_eq!(file::parse(&f.to_json()).unwrap(), f);
+}

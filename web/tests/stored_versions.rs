@@ -9,6 +9,7 @@
     clippy::panic
 )]
 
+use strutline_core::file;
 use strutline_web::workspace;
 
 #[test]
@@ -22,6 +23,26 @@ fn workspace_version_1_fixture_loads() {
     assert_eq!(ws.lists[1].members[0].id, "F-R");
     // Encoded again, it decodes to the same workspace.
     assert_eq!(workspace::decode(&workspace::encode(&ws)).unwrap(), ws);
+}
+
+#[test]
+fn stored_member_file_version_1_lists_lift_to_the_current_version() {
+    // The workspace fixture stores its lists as member-file version 1;
+    // member file version 2 (angle_connection) reads them unchanged.
+    let text = include_str!("../../tests/fixtures/stored/workspace-v1.json");
+    assert!(text.contains("\"format\": \"strutline.members\",\n   \"version\": 1,"));
+    let ws = workspace::decode(text).unwrap();
+    for list in &ws.lists {
+        assert_eq!(list.version, file::VERSION);
+        assert!(list.members.iter().all(|m| m.angle_connection.is_none()));
+    }
+    // Saved again, the lists are written in the current version.
+    let again = workspace::encode(&ws);
+    let lifted = format!(
+        "\"format\": \"strutline.members\",\n  \"version\": {}",
+        file::VERSION
+    );
+    assert_eq!(again.matches(&lifted).count(), ws.lists.len(), "{again}");
 }
 
 #[test]
