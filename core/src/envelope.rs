@@ -51,6 +51,9 @@ pub fn sample(
     let steps = steps.max(1);
     let from = from.max(0.0);
     let mut probe = prepared.member.clone();
+    // An AISC E5 angle's mode is E3 at its effective slenderness, which
+    // ignores lcr: the curve is E3 itself, and the mode lies on it.
+    probe.angle_connection = None;
     let mut out = Vec::with_capacity(steps + 1);
     for k in 0..=steps {
         let lambda = from + (to - from) * (k as f64) / (steps as f64);
