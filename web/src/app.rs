@@ -1212,10 +1212,10 @@ fn working_view(c: &Checked) -> impl IntoView {
                                 <tbody>
                                     {steps.into_iter().map(|st| view! {
                                         <tr>
-                                            <th scope="row"><code>{st.symbol}</code></th>
-                                            <td>{st.label}</td>
-                                            <td class="num">{working(st.value)} " " {if st.unit == "-" { "" } else { st.unit }}</td>
-                                            <td class="clause">{st.clause}</td>
+                                            <th scope="row"><code>{st.symbol.as_str()}</code></th>
+                                            <td>{st.label.as_str()}</td>
+                                            <td class="num">{working(st.value)} " " {if st.unit == "-" { "" } else { st.unit.as_str() }}</td>
+                                            <td class="clause">{st.clause.as_str()}</td>
                                         </tr>
                                     }.into_any()).collect::<Vec<_>>()}
                                 </tbody>

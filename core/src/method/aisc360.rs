@@ -33,7 +33,7 @@ use crate::member::{AngleConnection, Leg, Truss};
 use crate::method::euler::{basics, push_geometry, push_material, require_steel, warn_once};
 use crate::method::{Input, Method};
 use crate::section::{Family, SectionSpec};
-use crate::trace::{push, Scope, Trace};
+use crate::trace::{held, push, step, sym, Scope, Trace};
 
 /// LRFD or ASD.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -89,7 +89,7 @@ pub fn prelude(
     require_steel(input, key(basis))?;
     push_material(input, trace, warnings);
     match basis {
-        Basis::Lrfd => push(
+        Basis::Lrfd => step!(
             trace,
             Scope::Member,
             "phi_c",
@@ -98,7 +98,7 @@ pub fn prelude(
             "-",
             "AISC 360-16 E1(a)",
         ),
-        Basis::Asd => push(
+        Basis::Asd => step!(
             trace,
             Scope::Member,
             "Omega_c",
@@ -132,8 +132,8 @@ pub fn axis(
     let pn = fcr * b.a_mm2 / 1000.0;
     let design = pn / divisor(basis);
     let limit = 4.71 * (b.e_mpa / b.f_mpa).sqrt();
-    push_geometry(trace, &b, "AISC 360-16 E2");
-    push(
+    push_geometry(trace, &b, sym!("AISC 360-16 E2"));
+    step!(
         trace,
         b.scope,
         "4.71 sqrt(E/F_y)",
@@ -142,7 +142,7 @@ pub fn axis(
         "-",
         "AISC 360-16 E3(a)",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "F_e",
@@ -154,7 +154,7 @@ pub fn axis(
     // The branch is chosen on F_y / F_e <= 2.25, as f_cr does (E3(a) gives
     // both forms; they differ only in the third figure of the limit).
     if b.f_mpa / fe <= 2.25 {
-        push(
+        step!(
             trace,
             b.scope,
             "F_cr",
@@ -164,7 +164,7 @@ pub fn axis(
             "AISC 360-16 Eq. E3-2",
         );
     } else {
-        push(
+        step!(
             trace,
             b.scope,
             "F_cr",
@@ -174,7 +174,7 @@ pub fn axis(
             "AISC 360-16 Eq. E3-3",
         );
     }
-    push(
+    step!(
         trace,
         b.scope,
         "P_n",
@@ -184,7 +184,7 @@ pub fn axis(
         "AISC 360-16 Eq. E3-1",
     );
     match basis {
-        Basis::Lrfd => push(
+        Basis::Lrfd => step!(
             trace,
             b.scope,
             "phi_c P_n",
@@ -193,7 +193,7 @@ pub fn axis(
             "kN",
             "AISC 360-16 E1(a)",
         ),
-        Basis::Asd => push(
+        Basis::Asd => step!(
             trace,
             b.scope,
             "P_n/Omega_c",
@@ -387,8 +387,8 @@ pub fn e5(
     let start = trace.len();
     let r = axis(input, Mode::Minor, lc_r * r_z, basis, trace, warnings)?;
     if let Some(st) = trace.iter_mut().skip(start).find(|st| st.symbol == "L_cr") {
-        st.label = "equivalent length (L_c/r) r_z entering E3";
-        st.clause = sub;
+        st.label = held("equivalent length (L_c/r) r_z entering E3");
+        st.clause = held(sub);
     }
     Ok(r)
 }
@@ -403,7 +403,7 @@ pub fn e5_twist(input: &Input<'_>, trace: &mut Trace) -> bool {
     let bt = s.depth_mm.max(s.width_mm) / s.thickness_mm;
     let limit = 0.71 * (e / fy).sqrt();
     let sc = Scope::FlexuralTorsional;
-    push(
+    step!(
         trace,
         sc,
         "b/t",
@@ -412,7 +412,7 @@ pub fn e5_twist(input: &Input<'_>, trace: &mut Trace) -> bool {
         "-",
         "AISC 360-16 E5",
     );
-    push(
+    step!(
         trace,
         sc,
         "0.71 sqrt(E/F_y)",

@@ -14,7 +14,7 @@ use crate::method::euler::{
     basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
 };
 use crate::method::Input;
-use crate::trace::{push, Scope, Trace};
+use crate::trace::{step, sym, Scope, Sym, Trace};
 
 const KEY: &str = "csa-s16";
 
@@ -40,14 +40,17 @@ pub fn reduction(lambda: f64, n: f64) -> f64 {
 }
 
 /// The exponent n with the label saying where it came from.
-fn exponent(input: &Input<'_>) -> (f64, &'static str) {
+fn exponent(input: &Input<'_>) -> (f64, Sym) {
     match input.member.csa_n {
-        Some(n) => (n, "exponent n (given)"),
+        Some(n) => (n, sym!("exponent n (given)")),
         None if is_hot_finished_hollow(input) => (
             N_CLASS_H,
-            "exponent n, 2.24 for a class H hollow section (default)",
+            sym!("exponent n, 2.24 for a class H hollow section (default)"),
         ),
-        None => (CSA_N_DEFAULT, "exponent n, 1.34 for this section (default)"),
+        None => (
+            CSA_N_DEFAULT,
+            sym!("exponent n, 1.34 for this section (default)"),
+        ),
     }
 }
 
@@ -55,7 +58,7 @@ fn exponent(input: &Input<'_>) -> (f64, &'static str) {
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
     require_steel(input, KEY)?;
     push_material(input, trace, warnings);
-    push(
+    step!(
         trace,
         Scope::Member,
         "phi",
@@ -65,7 +68,7 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
         "CSA S16-19 13.1(a)",
     );
     let (n, label) = exponent(input);
-    push(
+    step!(
         trace,
         Scope::Member,
         "n",
@@ -97,8 +100,8 @@ pub fn axis(
     let lambda = (b.f_mpa / fe).sqrt();
     let red = reduction(lambda, n);
     let c_r = PHI * b.n_pl_kn * red;
-    push_geometry(trace, &b, "CSA S16-19 13.3.1");
-    push(
+    push_geometry(trace, &b, sym!("CSA S16-19 13.3.1"));
+    step!(
         trace,
         b.scope,
         "F_e",
@@ -107,7 +110,7 @@ pub fn axis(
         "MPa",
         "CSA S16-19 13.3.1",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "lambda",
@@ -116,7 +119,7 @@ pub fn axis(
         "-",
         "CSA S16-19 13.3.1",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "(1+lambda^2n)^-1/n",
@@ -125,7 +128,7 @@ pub fn axis(
         "-",
         "CSA S16-19 13.3.1",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "C_r",

@@ -26,14 +26,14 @@ use crate::method::euler::{
 };
 use crate::method::Input;
 use crate::section::{Family, IMake, SectionSpec};
-use crate::trace::{push, Scope, Trace};
+use crate::trace::{step, sym, Scope, Sym, Trace};
 
 const KEY: &str = "en1993-1-1";
 
 /// The Table 6.2 row a section falls in, with the curves about y-y and
 /// z-z for S235-S420 and for S460.
 struct Row {
-    reason: &'static str,
+    reason: Sym,
     y: Curve,
     z: Curve,
     y460: Curve,
@@ -57,7 +57,7 @@ fn row(input: &Input<'_>) -> Row {
                 IMake::Rolled => {
                     if hb > 1.2 && tf <= 40.0 {
                         r(
-                            "EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, t_f <= 40 mm",
+                            sym!("EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, t_f <= 40 mm"),
                             A,
                             B,
                             A0,
@@ -65,7 +65,7 @@ fn row(input: &Input<'_>) -> Row {
                         )
                     } else if hb > 1.2 && tf <= 100.0 {
                         r(
-                            "EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, 40 < t_f <= 100 mm",
+                            sym!("EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, 40 < t_f <= 100 mm"),
                             B,
                             C,
                             A,
@@ -73,21 +73,39 @@ fn row(input: &Input<'_>) -> Row {
                         )
                     } else if tf <= 100.0 {
                         r(
-                            "EN 1993-1-1 Table 6.2: rolled I, h/b <= 1.2, t_f <= 100 mm",
+                            sym!("EN 1993-1-1 Table 6.2: rolled I, h/b <= 1.2, t_f <= 100 mm"),
                             B,
                             C,
                             A,
                             A,
                         )
                     } else {
-                        r("EN 1993-1-1 Table 6.2: rolled I, t_f > 100 mm", D, D, C, C)
+                        r(
+                            sym!("EN 1993-1-1 Table 6.2: rolled I, t_f > 100 mm"),
+                            D,
+                            D,
+                            C,
+                            C,
+                        )
                     }
                 }
                 IMake::Welded => {
                     if tf <= 40.0 {
-                        r("EN 1993-1-1 Table 6.2: welded I, t_f <= 40 mm", B, C, B, C)
+                        r(
+                            sym!("EN 1993-1-1 Table 6.2: welded I, t_f <= 40 mm"),
+                            B,
+                            C,
+                            B,
+                            C,
+                        )
                     } else {
-                        r("EN 1993-1-1 Table 6.2: welded I, t_f > 40 mm", C, D, C, D)
+                        r(
+                            sym!("EN 1993-1-1 Table 6.2: welded I, t_f > 40 mm"),
+                            C,
+                            D,
+                            C,
+                            D,
+                        )
                     }
                 }
             }
@@ -95,7 +113,7 @@ fn row(input: &Input<'_>) -> Row {
         SectionSpec::Rhs(_) | SectionSpec::Chs(_) => {
             if is_hot_finished_hollow(input) {
                 r(
-                    "EN 1993-1-1 Table 6.2: hot-finished hollow section",
+                    sym!("EN 1993-1-1 Table 6.2: hot-finished hollow section"),
                     A,
                     A,
                     A0,
@@ -103,7 +121,7 @@ fn row(input: &Input<'_>) -> Row {
                 )
             } else {
                 r(
-                    "EN 1993-1-1 Table 6.2: cold-formed hollow section",
+                    sym!("EN 1993-1-1 Table 6.2: cold-formed hollow section"),
                     C,
                     C,
                     C,
@@ -111,23 +129,23 @@ fn row(input: &Input<'_>) -> Row {
                 )
             }
         }
-        SectionSpec::Angle(_) => r("EN 1993-1-1 Table 6.2: L-section", B, B, B, B),
+        SectionSpec::Angle(_) => r(sym!("EN 1993-1-1 Table 6.2: L-section"), B, B, B, B),
         SectionSpec::Channel(_) | SectionSpec::Tee(_) => r(
-            "EN 1993-1-1 Table 6.2: U-, T- and solid sections",
+            sym!("EN 1993-1-1 Table 6.2: U-, T- and solid sections"),
             C,
             C,
             C,
             C,
         ),
         SectionSpec::Rect(_) | SectionSpec::Round(_) => r(
-            "EN 1993-1-1 Table 6.2: U-, T- and solid sections",
+            sym!("EN 1993-1-1 Table 6.2: U-, T- and solid sections"),
             C,
             C,
             C,
             C,
         ),
         SectionSpec::Given(_) | SectionSpec::Catalogue(_) => r(
-            "assumed curve c: the section's make is not known (Table 6.2 needs it)",
+            sym!("assumed curve c: the section's make is not known (Table 6.2 needs it)"),
             C,
             C,
             C,
@@ -141,13 +159,17 @@ fn is_s460(steel: &Steel) -> bool {
 }
 
 /// The curve for an axis, whether it was given, and the clause to cite.
-fn curve_for(input: &Input<'_>, steel: &Steel, mode: Mode) -> (Curve, bool, &'static str) {
+fn curve_for(input: &Input<'_>, steel: &Steel, mode: Mode) -> (Curve, bool, Sym) {
     let given = match mode {
         Mode::Major => input.member.curve_major,
         _ => input.member.curve_minor,
     };
     if let Some(c) = given {
-        return (c, true, "given in the member (curve_major / curve_minor)");
+        return (
+            c,
+            true,
+            sym!("given in the member (curve_major / curve_minor)"),
+        );
     }
     let row = row(input);
     let c = match (mode, is_s460(steel)) {
@@ -159,18 +181,18 @@ fn curve_for(input: &Input<'_>, steel: &Steel, mode: Mode) -> (Curve, bool, &'st
     (c, false, row.reason)
 }
 
-fn alpha_label(curve: Curve, given: bool) -> &'static str {
+fn alpha_label(curve: Curve, given: bool) -> Sym {
     match (curve, given) {
-        (Curve::A0, false) => "imperfection factor, curve a0 (Table 6.2)",
-        (Curve::A, false) => "imperfection factor, curve a (Table 6.2)",
-        (Curve::B, false) => "imperfection factor, curve b (Table 6.2)",
-        (Curve::C, false) => "imperfection factor, curve c (Table 6.2)",
-        (Curve::D, false) => "imperfection factor, curve d (Table 6.2)",
-        (Curve::A0, true) => "imperfection factor, curve a0 (given)",
-        (Curve::A, true) => "imperfection factor, curve a (given)",
-        (Curve::B, true) => "imperfection factor, curve b (given)",
-        (Curve::C, true) => "imperfection factor, curve c (given)",
-        (Curve::D, true) => "imperfection factor, curve d (given)",
+        (Curve::A0, false) => sym!("imperfection factor, curve a0 (Table 6.2)"),
+        (Curve::A, false) => sym!("imperfection factor, curve a (Table 6.2)"),
+        (Curve::B, false) => sym!("imperfection factor, curve b (Table 6.2)"),
+        (Curve::C, false) => sym!("imperfection factor, curve c (Table 6.2)"),
+        (Curve::D, false) => sym!("imperfection factor, curve d (Table 6.2)"),
+        (Curve::A0, true) => sym!("imperfection factor, curve a0 (given)"),
+        (Curve::A, true) => sym!("imperfection factor, curve a (given)"),
+        (Curve::B, true) => sym!("imperfection factor, curve b (given)"),
+        (Curve::C, true) => sym!("imperfection factor, curve c (given)"),
+        (Curve::D, true) => sym!("imperfection factor, curve d (given)"),
     }
 }
 
@@ -203,14 +225,14 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     require_steel(input, KEY)?;
     push_material(input, trace, warnings);
     let (g, given) = gamma_m1(input);
-    push(
+    step!(
         trace,
         Scope::Member,
         "gamma_M1",
         if given {
-            "partial factor for member instability (given)"
+            sym!("partial factor for member instability (given)")
         } else {
-            "partial factor for member instability (recommended value; the national annex may differ)"
+            sym!("partial factor for member instability (recommended value; the national annex may differ)")
         },
         g,
         "-",
@@ -245,8 +267,8 @@ pub fn axis(
     let phi = 0.5 * (1.0 + alpha * (lambda_bar - 0.2) + lambda_bar * lambda_bar);
     let x = chi(lambda_bar, alpha);
     let n_b_rd = x * b.n_pl_kn / g;
-    push_geometry(trace, &b, "L_cr / i");
-    push(
+    push_geometry(trace, &b, sym!("L_cr / i"));
+    step!(
         trace,
         b.scope,
         "N_cr",
@@ -255,7 +277,7 @@ pub fn axis(
         "kN",
         "EN 1993-1-1 6.3.1.2",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "lambda_bar",
@@ -264,7 +286,7 @@ pub fn axis(
         "-",
         "EN 1993-1-1 Eq. 6.50",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "alpha",
@@ -273,7 +295,7 @@ pub fn axis(
         "-",
         clause,
     );
-    push(
+    step!(
         trace,
         b.scope,
         "N_Ed/N_cr",
@@ -283,7 +305,7 @@ pub fn axis(
         "EN 1993-1-1 6.3.1.2(4)",
     );
     if lambda_bar <= 0.2 {
-        push(
+        step!(
             trace,
             b.scope,
             "chi",
@@ -293,7 +315,7 @@ pub fn axis(
             "EN 1993-1-1 6.3.1.2(4)",
         );
     } else {
-        push(
+        step!(
             trace,
             b.scope,
             "Phi",
@@ -302,7 +324,7 @@ pub fn axis(
             "-",
             "EN 1993-1-1 6.3.1.2(1)",
         );
-        push(
+        step!(
             trace,
             b.scope,
             "chi",
@@ -312,7 +334,7 @@ pub fn axis(
             "EN 1993-1-1 Eq. 6.49",
         );
     }
-    push(
+    step!(
         trace,
         b.scope,
         "N_b,Rd",

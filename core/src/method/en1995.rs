@@ -19,7 +19,7 @@ use crate::member::LoadDuration;
 use crate::method::euler::{basics, push_geometry, push_material, require_timber};
 use crate::method::Input;
 use crate::section::Family;
-use crate::trace::{push, Scope, Trace};
+use crate::trace::{step, sym, Scope, Sym, Trace};
 
 const KEY: &str = "en1995-1-1";
 
@@ -75,16 +75,16 @@ pub fn k_c(lambda_rel: f64, beta: f64) -> f64 {
     }
 }
 
-fn duration_label(d: LoadDuration, given_sc: bool, given_d: bool) -> &'static str {
+fn duration_label(d: LoadDuration, given_sc: bool, given_d: bool) -> Sym {
     match (d, given_sc || given_d) {
-        (LoadDuration::Permanent, _) => "modification factor, permanent load",
-        (LoadDuration::Long, _) => "modification factor, long-term load",
-        (LoadDuration::Medium, true) => "modification factor, medium-term load",
+        (LoadDuration::Permanent, _) => sym!("modification factor, permanent load"),
+        (LoadDuration::Long, _) => sym!("modification factor, long-term load"),
+        (LoadDuration::Medium, true) => sym!("modification factor, medium-term load"),
         (LoadDuration::Medium, false) => {
-            "modification factor, medium-term load, service class 1 (defaults)"
+            sym!("modification factor, medium-term load, service class 1 (defaults)")
         }
-        (LoadDuration::Short, _) => "modification factor, short-term load",
-        (LoadDuration::Instantaneous, _) => "modification factor, instantaneous load",
+        (LoadDuration::Short, _) => sym!("modification factor, short-term load"),
+        (LoadDuration::Instantaneous, _) => sym!("modification factor, instantaneous load"),
     }
 }
 
@@ -118,7 +118,7 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     let sc = input.member.service_class.unwrap_or(1);
     let d = input.member.load_duration.unwrap_or(LoadDuration::Medium);
     let (fc0d, km, g, given) = design_strength(input, t.kind, t.fc0k_mpa);
-    push(
+    step!(
         trace,
         Scope::Member,
         "service class",
@@ -127,7 +127,7 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
         "-",
         "EN 1995-1-1 2.3.1.3",
     );
-    push(
+    step!(
         trace,
         Scope::Member,
         "k_mod",
@@ -140,24 +140,24 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
         "-",
         "EN 1995-1-1 Table 3.1",
     );
-    push(
+    step!(
         trace,
         Scope::Member,
         "gamma_M",
         match (given, t.kind) {
-            (true, _) => "partial factor for the material (given)",
+            (true, _) => sym!("partial factor for the material (given)"),
             (false, TimberKind::Solid) => {
-                "partial factor, solid timber (recommended; the national annex may differ)"
+                sym!("partial factor, solid timber (recommended; the national annex may differ)")
             }
             (false, TimberKind::Glulam) => {
-                "partial factor, glulam (recommended; the national annex may differ)"
+                sym!("partial factor, glulam (recommended; the national annex may differ)")
             }
         },
         g,
         "-",
         "EN 1995-1-1 Table 2.3",
     );
-    push(
+    step!(
         trace,
         Scope::Member,
         "f_c,0,d",
@@ -166,13 +166,13 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
         "MPa",
         "EN 1995-1-1 Eq. 2.14",
     );
-    push(
+    step!(
         trace,
         Scope::Member,
         "beta_c",
         match t.kind {
-            TimberKind::Solid => "straightness factor, solid timber",
-            TimberKind::Glulam => "straightness factor, glued laminated timber",
+            TimberKind::Solid => sym!("straightness factor, solid timber"),
+            TimberKind::Glulam => sym!("straightness factor, glued laminated timber"),
         },
         beta_c(t.kind),
         "-",
@@ -197,8 +197,8 @@ pub fn axis(
     let kc = k_c(lambda_rel, beta);
     let (fc0d, _, _, _) = design_strength(input, t.kind, t.fc0k_mpa);
     let resistance = kc * fc0d * b.a_mm2 / 1000.0;
-    push_geometry(trace, &b, "EN 1995-1-1 6.3.2 (lambda)");
-    push(
+    push_geometry(trace, &b, sym!("EN 1995-1-1 6.3.2 (lambda)"));
+    step!(
         trace,
         b.scope,
         "lambda_rel",
@@ -208,7 +208,7 @@ pub fn axis(
         "EN 1995-1-1 Eqs. 6.21, 6.22",
     );
     if lambda_rel <= 0.3 {
-        push(
+        step!(
             trace,
             b.scope,
             "k_c",
@@ -218,7 +218,7 @@ pub fn axis(
             "EN 1995-1-1 6.3.2(2)",
         );
     } else {
-        push(
+        step!(
             trace,
             b.scope,
             "k",
@@ -227,7 +227,7 @@ pub fn axis(
             "-",
             "EN 1995-1-1 Eqs. 6.27, 6.28",
         );
-        push(
+        step!(
             trace,
             b.scope,
             "k_c",
@@ -237,7 +237,7 @@ pub fn axis(
             "EN 1995-1-1 Eqs. 6.25, 6.26",
         );
     }
-    push(
+    step!(
         trace,
         b.scope,
         "N_cr",
@@ -246,7 +246,7 @@ pub fn axis(
         "kN",
         "pi^2 E_0,05 I / L^2",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "N_Rd",

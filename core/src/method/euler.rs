@@ -16,7 +16,7 @@ use crate::error::{positive, Error, Result};
 use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
 use crate::section::{Family, SectionSpec};
-use crate::trace::{push, Scope, Trace};
+use crate::trace::{held, step, sym, Scope, Sym, Trace};
 
 /// Scope of the trace for an axis mode.
 pub fn scope_of(mode: Mode) -> Scope {
@@ -126,8 +126,8 @@ pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
 }
 
 /// Pushes the geometry lines every method starts an axis with.
-pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: &'static str) {
-    push(
+pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: Sym) {
+    step!(
         trace,
         b.scope,
         "L_cr",
@@ -136,7 +136,7 @@ pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: &'static str) {
         "mm",
         "input",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "i",
@@ -145,7 +145,7 @@ pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: &'static str) {
         "mm",
         "section",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "L_cr/i",
@@ -263,15 +263,15 @@ pub fn strength_label(material: &Material) -> (&'static str, &'static str) {
 }
 
 /// Where a steel's modulus comes from.
-fn modulus_source(s: &Steel) -> &'static str {
+fn modulus_source(s: &Steel) -> Sym {
     if s.standard.starts_with("EN") {
-        "EN 1993-1-1 3.2.6(1)"
+        sym!("EN 1993-1-1 3.2.6(1)")
     } else if s.standard.starts_with("ASTM") {
-        "AISC 360-16 (E = 29 000 ksi)"
+        sym!("AISC 360-16 (E = 29 000 ksi)")
     } else if s.standard.starts_with("CSA") {
-        "CSA S16-19 clause 2"
+        sym!("CSA S16-19 clause 2")
     } else {
-        "custom material"
+        sym!("custom material")
     }
 }
 
@@ -284,23 +284,23 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
     match input.material {
         Material::Steel(s) => {
             if s.name != "custom" {
-                push(
+                step!(
                     trace,
                     Scope::Member,
                     "t",
                     "governing thickness for f_y",
                     s.thickness_mm,
                     "mm",
-                    s.standard,
+                    held(s.standard),
                 );
-                push(
+                step!(
                     trace,
                     Scope::Member,
                     "f_y",
                     "yield strength for that thickness",
                     f,
                     "MPa",
-                    s.standard,
+                    held(s.standard),
                 );
                 if s.thickness_mm <= 0.0 && s.band_up_to_mm.is_finite() {
                     warn_once(warnings, "thickness-unknown", || {
@@ -312,7 +312,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                     });
                 }
             } else {
-                push(
+                step!(
                     trace,
                     Scope::Member,
                     "f_y",
@@ -322,7 +322,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                     "custom material",
                 );
             }
-            push(
+            step!(
                 trace,
                 Scope::Member,
                 "E",
@@ -343,28 +343,28 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
             }
         }
         Material::Timber(t) => {
-            push(
+            step!(
                 trace,
                 Scope::Member,
                 "f_c,0,k",
                 "characteristic compressive strength parallel to grain",
                 f,
                 "MPa",
-                t.standard,
+                held(t.standard),
             );
-            push(
+            step!(
                 trace,
                 Scope::Member,
                 "E_0,05",
                 "fifth-percentile modulus",
                 e,
                 "MPa",
-                t.standard,
+                held(t.standard),
             );
         }
     }
-    push(trace, Scope::Member, "A", "gross area", a, "mm2", "section");
-    push(
+    step!(trace, Scope::Member, "A", "gross area", a, "mm2", "section");
+    step!(
         trace,
         Scope::Member,
         "N_pl",
@@ -379,7 +379,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
 pub fn push_optional_factor(input: &Input<'_>, trace: &mut Trace) -> f64 {
     match input.member.gamma_m1 {
         Some(g) => {
-            push(
+            step!(
                 trace,
                 Scope::Member,
                 "gamma",
@@ -391,7 +391,7 @@ pub fn push_optional_factor(input: &Input<'_>, trace: &mut Trace) -> f64 {
             g
         }
         None => {
-            push(
+            step!(
                 trace,
                 Scope::Member,
                 "gamma",
@@ -453,8 +453,8 @@ pub fn axis(
     let lambda_rel = (b.n_pl_kn / b.n_cr_kn).sqrt();
     let n_fail = b.n_cr_kn.min(b.n_pl_kn);
     let resistance = n_fail / gamma;
-    push_geometry(trace, &b, "L_cr / i");
-    push(
+    push_geometry(trace, &b, sym!("L_cr / i"));
+    step!(
         trace,
         b.scope,
         "N_cr",
@@ -463,7 +463,7 @@ pub fn axis(
         "kN",
         "N_cr = pi^2 E I / L_cr^2",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "lambda_bar",
@@ -472,7 +472,7 @@ pub fn axis(
         "-",
         "sqrt(N_pl / N_cr)",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "N_R",

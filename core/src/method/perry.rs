@@ -13,7 +13,7 @@ use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
-use crate::trace::{push, Trace};
+use crate::trace::{step, sym, Trace};
 
 /// The smaller root of (f - s)(s_e - s) = eta s s_e, MPa, computed without
 /// cancellation as 2 f s_e / (B + sqrt(B^2 - 4 f s_e)), B = f + (1 + eta) s_e.
@@ -43,10 +43,10 @@ pub fn axis(
 ) -> Result<ModeResult> {
     let b = basics(input, mode, lcr_mm)?;
     let gamma = input.member.gamma_m1.unwrap_or(1.0);
-    push_geometry(trace, &b, "L_cr / i");
+    push_geometry(trace, &b, sym!("L_cr / i"));
     let e0 = match input.member.bow_mm {
         Some(e) => {
-            push(
+            step!(
                 trace,
                 b.scope,
                 "e_0",
@@ -59,7 +59,7 @@ pub fn axis(
         }
         None => {
             let e = b.lcr_mm / 1000.0;
-            push(
+            step!(
                 trace,
                 b.scope,
                 "e_0",
@@ -76,7 +76,7 @@ pub fn axis(
     let s = failure_stress(b.f_mpa, b.sigma_e_mpa, eta);
     let n_fail = s * b.a_mm2 / 1000.0;
     let resistance = n_fail / gamma;
-    push(
+    step!(
         trace,
         b.scope,
         "c",
@@ -85,7 +85,7 @@ pub fn axis(
         "mm",
         "I / W_el",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "eta",
@@ -94,7 +94,7 @@ pub fn axis(
         "-",
         "Perry-Robertson",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "sigma_E",
@@ -103,7 +103,7 @@ pub fn axis(
         "MPa",
         "Euler",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "sigma_f",
@@ -112,7 +112,7 @@ pub fn axis(
         "MPa",
         "Perry-Robertson",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "N_R",

@@ -15,7 +15,7 @@ use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
-use crate::trace::{push, Trace};
+use crate::trace::{step, sym, Trace};
 
 /// The mean stress at first yield, MPa, for strength `f`, modulus `e`,
 /// slenderness `lambda` = L_cr / i and eccentricity ratio `ecc` = e c / i^2.
@@ -97,10 +97,10 @@ pub fn axis(
 ) -> Result<ModeResult> {
     let b = basics(input, mode, lcr_mm)?;
     let gamma = input.member.gamma_m1.unwrap_or(1.0);
-    push_geometry(trace, &b, "L_cr / i");
+    push_geometry(trace, &b, sym!("L_cr / i"));
     let ecc_mm = match input.member.eccentricity_mm {
         Some(e) => {
-            push(
+            step!(
                 trace,
                 b.scope,
                 "e",
@@ -113,7 +113,7 @@ pub fn axis(
         }
         None => {
             let e = b.lcr_mm / 1000.0;
-            push(
+            step!(
                 trace,
                 b.scope,
                 "e",
@@ -130,7 +130,7 @@ pub fn axis(
     let s = first_yield_stress(b.f_mpa, b.e_mpa, b.slenderness, ratio);
     let n_fail = s * b.a_mm2 / 1000.0;
     let resistance = n_fail / gamma;
-    push(
+    step!(
         trace,
         b.scope,
         "c",
@@ -139,7 +139,7 @@ pub fn axis(
         "mm",
         "I / W_el",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "e c/i^2",
@@ -148,7 +148,7 @@ pub fn axis(
         "-",
         "secant formula",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "sigma_E",
@@ -157,7 +157,7 @@ pub fn axis(
         "MPa",
         "Euler",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "sigma_y1",
@@ -166,7 +166,7 @@ pub fn axis(
         "MPa",
         "secant formula",
     );
-    push(
+    step!(
         trace,
         b.scope,
         "N_R",

@@ -9,7 +9,7 @@
 
 use std::cell::RefCell;
 use std::collections::HashMap;
-use std::hash::{BuildHasherDefault, Hasher};
+use std::hash::{BuildHasherDefault, Hash, Hasher};
 
 use super::{HollowMake, IMake, Properties, SectionSpec};
 use crate::error::Result;
@@ -20,7 +20,19 @@ const CAP: usize = 4096;
 /// The bits of an absent optional dimension (a NaN no parser produces).
 const NONE: u64 = 0x7ff8_dead_beef_0001;
 
-type Key = [u64; 8];
+/// The exact bits of a spec's dimensions, tagged by shape.
+#[derive(PartialEq, Eq)]
+struct Key([u64; 8]);
+
+impl Hash for Key {
+    // Word by word: the derived hash of `[u64; 8]` hands the hasher one
+    // 64-byte slice, which `Fnv::write` would mix a byte at a time.
+    fn hash<H: Hasher>(&self, state: &mut H) {
+        for w in self.0 {
+            state.write_u64(w);
+        }
+    }
+}
 
 /// FNV-1a style mixing over the key's words.
 #[derive(Default)]
@@ -133,7 +145,7 @@ fn key(spec: &SectionSpec) -> Option<Key> {
         ],
         SectionSpec::Catalogue(_) => return None,
     };
-    Some(k)
+    Some(Key(k))
 }
 
 /// The properties of `spec`, from the memo when it has them.

@@ -29,6 +29,7 @@
 //! (reported as 3) from slender / Class 4 (reported as 4).
 
 use crate::section::{IMake, SectionSpec};
+use crate::trace::{sym, Sym};
 
 /// The design code whose table is used.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -76,31 +77,34 @@ pub enum Part {
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub struct Labels {
     /// Width the ratio is measured on.
-    pub width: &'static str,
+    pub width: Sym,
     /// The width-to-thickness ratio.
-    pub ratio: &'static str,
+    pub ratio: Sym,
     /// The limit of the class found (or the Class 3 / lambda_r limit it exceeds).
-    pub limit: &'static str,
+    pub limit: Sym,
     /// The class.
-    pub class: &'static str,
+    pub class: Sym,
     /// Plate slenderness / EN lambda_p.
-    pub slenderness: &'static str,
+    pub slenderness: Sym,
     /// Reduction factor rho.
-    pub rho: &'static str,
+    pub rho: Sym,
     /// Effective width.
-    pub effective: &'static str,
+    pub effective: Sym,
 }
 
 macro_rules! labels {
     ($p:literal) => {
         Labels {
-            width: concat!($p, ": width the ratio is measured on"),
-            ratio: concat!($p, ": width-to-thickness ratio"),
-            limit: concat!($p, ": limit of the class found (Class 3 limit if exceeded)"),
-            class: concat!($p, ": class (4 = slender)"),
-            slenderness: concat!($p, ": plate slenderness"),
-            rho: concat!($p, ": reduction factor"),
-            effective: concat!($p, ": effective width"),
+            width: sym!(concat!($p, ": width the ratio is measured on")),
+            ratio: sym!(concat!($p, ": width-to-thickness ratio")),
+            limit: sym!(concat!(
+                $p,
+                ": limit of the class found (Class 3 limit if exceeded)"
+            )),
+            class: sym!(concat!($p, ": class (4 = slender)")),
+            slenderness: sym!(concat!($p, ": plate slenderness")),
+            rho: sym!(concat!($p, ": reduction factor")),
+            effective: sym!(concat!($p, ": effective width")),
         }
     };
 }

@@ -21,7 +21,7 @@ use crate::material::Material;
 use crate::member::BucklingLengths;
 use crate::method::{self, Input, Method};
 use crate::section::{Family, SectionSpec};
-use crate::trace::{push, Scope, Trace};
+use crate::trace::{step, sym, Scope, Sym, Trace};
 
 pub mod classify;
 pub mod effective;
@@ -64,11 +64,11 @@ pub struct Assessment {
     pub refused: bool,
 }
 
-fn clause_ratio(code: Code) -> &'static str {
+fn clause_ratio(code: Code) -> Sym {
     match code {
-        Code::En1993 => "EN 1993-1-1 Table 5.2",
-        Code::Aisc360 => "AISC 360-16 Table B4.1a",
-        Code::CsaS16 => "CSA S16-19 Table 1",
+        Code::En1993 => sym!("EN 1993-1-1 Table 5.2"),
+        Code::Aisc360 => sym!("AISC 360-16 Table B4.1a"),
+        Code::CsaS16 => sym!("CSA S16-19 Table 1"),
     }
 }
 
@@ -76,7 +76,7 @@ fn clause_ratio(code: Code) -> &'static str {
 pub fn trace_classification(c: &Classified, trace: &mut Trace) {
     let clause = clause_ratio(c.code);
     if c.code == Code::En1993 {
-        push(
+        step!(
             trace,
             Scope::Section,
             "epsilon",
@@ -90,14 +90,14 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
         let l = e.part.labels();
         // Each code's own symbols: EN c/t (d/t for tubes), AISC and CSA b/t (D/t).
         let (w, ratio) = match (c.code, e.kind) {
-            (Code::En1993, Kind::Tube) => ("d", "d/t"),
-            (Code::En1993, _) => ("c", "c/t"),
-            (_, Kind::Tube) => ("D", "D/t"),
-            _ => ("b", "b/t"),
+            (Code::En1993, Kind::Tube) => (sym!("d"), sym!("d/t")),
+            (Code::En1993, _) => (sym!("c"), sym!("c/t")),
+            (_, Kind::Tube) => (sym!("D"), sym!("D/t")),
+            _ => (sym!("b"), sym!("b/t")),
         };
-        push(trace, Scope::Section, w, l.width, e.width_mm, "mm", clause);
-        push(trace, Scope::Section, ratio, l.ratio, e.ratio, "-", clause);
-        push(
+        step!(trace, Scope::Section, w, l.width, e.width_mm, "mm", clause);
+        step!(trace, Scope::Section, ratio, l.ratio, e.ratio, "-", clause);
+        step!(
             trace,
             Scope::Section,
             "limit",
@@ -106,7 +106,7 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
             "-",
             clause,
         );
-        push(
+        step!(
             trace,
             Scope::Section,
             "class",
@@ -116,7 +116,7 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
             clause,
         );
     }
-    push(
+    step!(
         trace,
         Scope::Section,
         "class",
@@ -127,17 +127,11 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
     );
 }
 
-fn trace_effective(
-    c: &Classified,
-    eff: &Effective,
-    scope: Scope,
-    trace: &mut Trace,
-    clause: &'static str,
-) {
+fn trace_effective(c: &Classified, eff: &Effective, scope: Scope, trace: &mut Trace, clause: Sym) {
     for (e, r) in c.elements().iter().zip(eff.reduced.iter()) {
         if let Some(r) = r {
             let l = e.part.labels();
-            push(
+            step!(
                 trace,
                 scope,
                 "lambda_p",
@@ -146,8 +140,8 @@ fn trace_effective(
                 "-",
                 clause,
             );
-            push(trace, scope, "rho", l.rho, r.rho, "-", clause);
-            push(
+            step!(trace, scope, "rho", l.rho, r.rho, "-", clause);
+            step!(
                 trace,
                 scope,
                 "b_eff",
@@ -158,7 +152,7 @@ fn trace_effective(
             );
         }
     }
-    push(
+    step!(
         trace,
         scope,
         "A_eff",
@@ -224,7 +218,7 @@ pub fn assess(
                 &eff,
                 Scope::Section,
                 trace,
-                "EN 1993-1-5 4.4 (Eq. 4.2, 4.3)",
+                sym!("EN 1993-1-5 4.4 (Eq. 4.2, 4.3)"),
             );
             out.en_effective = Some(eff);
             if eff.area_mm2 < section.props.area_mm2
@@ -293,11 +287,11 @@ pub fn refused_mode() -> ModeResult {
 pub fn en_section_mode(input: &Input<'_>, a: &Assessment, trace: &mut Trace) -> ModeResult {
     let (fy, _) = input.material.strength_and_modulus();
     let (area, clause) = match &a.en_effective {
-        Some(e) => (e.area_mm2, "EN 1993-1-1 Eq. 6.11"),
-        None => (input.section.props.area_mm2, "EN 1993-1-1 Eq. 6.10"),
+        Some(e) => (e.area_mm2, sym!("EN 1993-1-1 Eq. 6.11")),
+        None => (input.section.props.area_mm2, sym!("EN 1993-1-1 Eq. 6.10")),
     };
     let n = area * fy / GAMMA_M0 / 1000.0;
-    push(
+    step!(
         trace,
         Scope::Section,
         "gamma_M0",
@@ -306,7 +300,7 @@ pub fn en_section_mode(input: &Input<'_>, a: &Assessment, trace: &mut Trace) -> 
         "-",
         "EN 1993-1-1 6.1(1) Note 2B",
     );
-    push(
+    step!(
         trace,
         Scope::Section,
         "N_c,Rd",
@@ -342,7 +336,7 @@ pub fn aisc_slender(r: &mut ModeResult, c: &Classified, input: &Input<'_>, trace
     let fcr = r.reduction * steel.fy_mpa;
     let eff = effective::aisc_area(c, ag, steel.fy_mpa, steel.e_mpa, fcr);
     let scope = method::euler::scope_of(r.mode);
-    push(
+    step!(
         trace,
         scope,
         "F_cr",
@@ -351,11 +345,11 @@ pub fn aisc_slender(r: &mut ModeResult, c: &Classified, input: &Input<'_>, trace
         "MPa",
         "AISC 360-16 E7",
     );
-    trace_effective(c, &eff, scope, trace, "AISC 360-16 E7-2, E7-3, E7-7");
+    trace_effective(c, &eff, scope, trace, sym!("AISC 360-16 E7-2, E7-3, E7-7"));
     if ag > 0.0 {
         r.resistance_kn *= eff.area_mm2 / ag;
     }
-    push(
+    step!(
         trace,
         scope,
         "P_n",
@@ -423,32 +417,32 @@ fn twist_applies(method: Method, input: &Input<'_>, warnings: &mut Vec<Warning>)
 }
 
 struct TwistClauses {
-    n_t: &'static str,
-    single: &'static str,
-    general: &'static str,
+    n_t: Sym,
+    single: Sym,
+    general: Sym,
 }
 
 fn twist_clauses(method: Method) -> TwistClauses {
     match method {
         Method::En1993 => TwistClauses {
-            n_t: "EN 1993-1-3 6.2.3(5); EN 1993-1-1 6.3.1.4",
-            single: "EN 1993-1-3 6.2.3(7); EN 1993-1-1 6.3.1.4",
-            general: "EN 1993-1-1 6.3.1.4: smallest root of the coupled cubic (Vlasov)",
+            n_t: sym!("EN 1993-1-3 6.2.3(5); EN 1993-1-1 6.3.1.4"),
+            single: sym!("EN 1993-1-3 6.2.3(7); EN 1993-1-1 6.3.1.4"),
+            general: sym!("EN 1993-1-1 6.3.1.4: smallest root of the coupled cubic (Vlasov)"),
         },
         Method::AiscLrfd | Method::AiscAsd => TwistClauses {
-            n_t: "AISC 360-16 Eq. E4-2 / F_ez A_g",
-            single: "AISC 360-16 Eq. E4-3 (times A_g)",
-            general: "AISC 360-16 Eq. E4-4 (times A_g)",
+            n_t: sym!("AISC 360-16 Eq. E4-2 / F_ez A_g"),
+            single: sym!("AISC 360-16 Eq. E4-3 (times A_g)"),
+            general: sym!("AISC 360-16 Eq. E4-4 (times A_g)"),
         },
         Method::CsaS16 => TwistClauses {
-            n_t: "CSA S16-19 13.3.2 (F_ez A)",
-            single: "CSA S16-19 13.3.2 (F_eyz A)",
-            general: "CSA S16-19 13.3.2 (cubic, F_e A)",
+            n_t: sym!("CSA S16-19 13.3.2 (F_ez A)"),
+            single: sym!("CSA S16-19 13.3.2 (F_eyz A)"),
+            general: sym!("CSA S16-19 13.3.2 (cubic, F_e A)"),
         },
         _ => TwistClauses {
-            n_t: "thin-walled beam theory: (G I_t + pi^2 E I_w / L_T^2) / i_0^2",
-            single: "thin-walled beam theory: singly symmetric quadratic",
-            general: "thin-walled beam theory: smallest root of the coupled cubic",
+            n_t: sym!("thin-walled beam theory: (G I_t + pi^2 E I_w / L_T^2) / i_0^2"),
+            single: sym!("thin-walled beam theory: singly symmetric quadratic"),
+            general: sym!("thin-walled beam theory: smallest root of the coupled cubic"),
         },
     }
 }
@@ -491,7 +485,7 @@ pub fn twist_mode(
     } else {
         (Mode::FlexuralTorsional, Scope::FlexuralTorsional)
     };
-    push(
+    step!(
         trace,
         scope,
         "L_T",
@@ -500,8 +494,8 @@ pub fn twist_mode(
         "mm",
         "input",
     );
-    push(trace, scope, "G", "shear modulus", g, "MPa", "material");
-    push(
+    step!(trace, scope, "G", "shear modulus", g, "MPa", "material");
+    step!(
         trace,
         scope,
         "I_t",
@@ -510,7 +504,7 @@ pub fn twist_mode(
         "mm4",
         "section",
     );
-    push(
+    step!(
         trace,
         scope,
         "I_w",
@@ -519,7 +513,7 @@ pub fn twist_mode(
         "mm6",
         "section",
     );
-    push(
+    step!(
         trace,
         scope,
         "y_0",
@@ -528,7 +522,7 @@ pub fn twist_mode(
         "mm",
         "section",
     );
-    push(
+    step!(
         trace,
         scope,
         "z_0",
@@ -537,7 +531,7 @@ pub fn twist_mode(
         "mm",
         "section",
     );
-    push(
+    step!(
         trace,
         scope,
         "i_0",
@@ -546,7 +540,7 @@ pub fn twist_mode(
         "mm",
         "i_0^2 = i_y^2 + i_z^2 + y_0^2 + z_0^2",
     );
-    push(
+    step!(
         trace,
         scope,
         "N_cr,T",
@@ -558,12 +552,12 @@ pub fn twist_mode(
     match crit.symmetry {
         Symmetry::Double => {
             if crit.n_torsional >= crit.n_minor {
-                push(trace, scope, "N_cr,T/N_cr,z", "torsional over minor-axis critical load: >= 1, torsional buckling cannot govern", crit.n_torsional / crit.n_minor, "-", cl.n_t);
+                step!(trace, scope, "N_cr,T/N_cr,z", "torsional over minor-axis critical load: >= 1, torsional buckling cannot govern", crit.n_torsional / crit.n_minor, "-", cl.n_t);
                 return Ok(None);
             }
         }
         Symmetry::SingleMajor | Symmetry::SingleMinor => {
-            push(
+            step!(
                 trace,
                 scope,
                 "N_cr,TF",
@@ -574,7 +568,7 @@ pub fn twist_mode(
             );
         }
         Symmetry::None => {
-            push(
+            step!(
                 trace,
                 scope,
                 "N_cr,TF",
@@ -597,7 +591,7 @@ pub fn twist_mode(
     }
     let l_eq = PI * (e * p.i_minor_mm4 / n).sqrt();
     let lambda_eq = PI * (e * a / n).sqrt();
-    push(
+    step!(
         trace,
         scope,
         "lambda_eq",
@@ -606,7 +600,7 @@ pub fn twist_mode(
         "-",
         "same elastic critical stress",
     );
-    push(trace, scope, "L_eq", "minor-axis length with the same critical load, to enter the method's curve (minor-axis curve)", l_eq, "mm", "pi sqrt(E I_z / N_cr)");
+    step!(trace, scope, "L_eq", "minor-axis length with the same critical load, to enter the method's curve (minor-axis curve)", l_eq, "mm", "pi sqrt(E I_z / N_cr)");
     if method == Method::CsaS16 {
         return Ok(Some(csa_twist(
             input,
@@ -625,16 +619,16 @@ pub fn twist_mode(
         s.scope = scope;
         // The method's geometry lines describe the equivalent flexural
         // member; say so, so the calc sheet cannot be misread.
-        match s.symbol {
+        match s.symbol.as_str() {
             "L_cr" => {
-                s.label = "equivalent length L_eq entering the curve";
-                s.clause = "pi sqrt(E I_z / N_cr)";
+                s.label = sym!("equivalent length L_eq entering the curve");
+                s.clause = sym!("pi sqrt(E I_z / N_cr)");
             }
             "L_cr/i" | "L_c/r" | "KL/r" => {
-                s.label = "equivalent slenderness L_eq / i_z";
+                s.label = sym!("equivalent slenderness L_eq / i_z");
             }
             "N_cr" => {
-                s.label = "elastic critical load of the twisting mode (pi^2 E I_z / L_eq^2)";
+                s.label = sym!("elastic critical load of the twisting mode (pi^2 E I_z / L_eq^2)");
             }
             _ => {}
         }
@@ -669,7 +663,7 @@ fn csa_twist(
     let n = crate::member::CSA_N_DEFAULT;
     let red = reduction(lambda, n);
     let c_r = PHI * a * fy * red / 1000.0;
-    push(
+    step!(
         trace,
         scope,
         "F_e",
@@ -678,7 +672,7 @@ fn csa_twist(
         "MPa",
         "CSA S16-19 13.3.2",
     );
-    push(
+    step!(
         trace,
         scope,
         "lambda",
@@ -687,7 +681,7 @@ fn csa_twist(
         "-",
         "CSA S16-19 13.3.1",
     );
-    push(
+    step!(
         trace,
         scope,
         "n",
@@ -696,7 +690,7 @@ fn csa_twist(
         "-",
         "CSA S16-19 13.3.2",
     );
-    push(
+    step!(
         trace,
         scope,
         "(1+lambda^2n)^-1/n",
@@ -705,7 +699,7 @@ fn csa_twist(
         "-",
         "CSA S16-19 13.3.1",
     );
-    push(
+    step!(
         trace,
         scope,
         "C_r",
