@@ -18,10 +18,12 @@
 //! An unequal angle connected through its shorter leg adds
 //! 4[(b_l/b_s)^2 - 1] (a) or 6[(b_l/b_s)^2 - 1] (b), but not below
 //! 0.95 L/r_z (a) or 0.82 L/r_z (b). E5 covers angles with L_c/r <= 200
-//! and leg ratio under 1.7 (the shorter leg connected) or at most 1.7
-//! (E5(c): beyond, Chapter H); others are refused, as Chapter H is not
-//! implemented. Flexural-torsional buckling (E4) need not be considered
-//! when b/t <= 0.71 sqrt(E/F_y) ([`e5_twist`]); otherwise the concentric
+//! and a leg ratio b_l/b_s under 1.7 (beyond, Chapter H); others are
+//! refused, as Chapter H is not implemented. Whether 1.7 itself is in
+//! for an angle connected through its longer leg is not certain from
+//! memory (one recollection of E5(c) says "greater than 1.7"), so it is
+//! refused too: the safe side. Flexural-torsional buckling (E4) need not
+//! be considered when b/t <= 0.71 sqrt(E/F_y) ([`e5_twist`]); otherwise the concentric
 //! E4 mode is kept. The E5 text is recalled from memory of the 2016
 //! edition (not checked against a copy here), including: the 200 limit
 //! taken on the final value, the 1.7 limits, and the 0.71 sqrt(E/F_y)
@@ -32,7 +34,7 @@ use crate::error::{Error, Result};
 use crate::member::{AngleConnection, Leg, Truss};
 use crate::method::euler::{basics, push_geometry, push_material, require_steel, warn_once};
 use crate::method::{Input, Method};
-use crate::section::{Family, SectionSpec};
+use crate::section::SectionSpec;
 use crate::trace::{held, push, step, sym, Scope, Trace};
 
 /// LRFD or ASD.
@@ -230,19 +232,17 @@ pub fn e5_connection(
     warnings: &mut Vec<Warning>,
 ) -> Option<(AngleConnection, Basis)> {
     let c = input.member.angle_connection?;
-    let basis = match method {
-        Method::AiscLrfd => Basis::Lrfd,
-        Method::AiscAsd => Basis::Asd,
-        _ => Basis::Lrfd,
+    let basis = match (method, &input.section.spec) {
+        (Method::AiscLrfd, SectionSpec::Angle(_)) => Some(Basis::Lrfd),
+        (Method::AiscAsd, SectionSpec::Angle(_)) => Some(Basis::Asd),
+        _ => None,
     };
-    if matches!(method, Method::AiscLrfd | Method::AiscAsd) && input.section.family == Family::Angle
-    {
-        return Some((c, basis));
+    if let Some(b) = basis {
+        return Some((c, b));
     }
     warnings.push(Warning::new(
         "angle-connection-ignored",
-        "angle_connection is used only for an angle under AISC 360 (E5); \
-         here the section is loaded through its centroid",
+        "angle_connection applies to angles under AISC 360 only (E5); ignored",
     ));
     None
 }
@@ -256,23 +256,27 @@ pub fn e5(
     trace: &mut Trace,
     warnings: &mut Vec<Warning>,
 ) -> Result<ModeResult> {
-    let refuse = |reason: String| Error::NotApplicable {
+    // Outside E5: Chapter H, which is not implemented.
+    let beyond = |what: &str, v: f64, limit: f64| Error::NotApplicable {
         method: key(basis),
-        reason,
+        reason: format!(
+            "angle_connection: {what} = {v:.2} is beyond the AISC 360-16 E5 limit {limit} \
+             (Chapter H, not covered)"
+        ),
     };
     let SectionSpec::Angle(s) = &input.section.spec else {
-        return Err(refuse("E5 is for single angles".into()));
+        return Err(Error::NotApplicable {
+            method: key(basis),
+            reason: "angle_connection needs an angle".into(),
+        });
     };
     let p = &input.section.props;
     let l = input.member.length_mm;
     let (bl, bs) = (s.depth_mm.max(s.width_mm), s.depth_mm.min(s.width_mm));
     let ratio = bl / bs;
     let short = c.leg == Leg::Short && ratio > 1.0;
-    if ratio > 1.7 || (short && ratio >= 1.7) {
-        return Err(refuse(format!(
-            "angle_connection: leg ratio {ratio:.2} is outside AISC 360-16 E5 \
-             (limit 1.7); Chapter H (axial and bending) is not covered"
-        )));
+    if ratio >= 1.7 {
+        return Err(beyond("leg ratio b_l/b_s", ratio, 1.7));
     }
     // The depth leg lies along z, so the axis parallel to it is z.
     let i_a = if (c.leg == Leg::Long) == (s.depth_mm >= s.width_mm) {
@@ -373,16 +377,13 @@ pub fn e5(
         );
     }
     if lc_r.is_nan() || lc_r > 200.0 {
-        return Err(refuse(format!(
-            "angle_connection: AISC 360-16 E5 gives L_c/r = {lc_r:.0}, over 200; \
-             Chapter H is not covered"
-        )));
+        return Err(beyond("L_c/r", lc_r, 200.0));
     }
     warnings.push(Warning::new(
         "e5-conditions",
-        "AISC 360-16 E5 assumes: loaded at both ends through the same leg, welded or with \
-         at least two bolts, no transverse load between, truss webs beside it on the same \
-         side of the gusset or chord; confirm these. L is length_mm; k and lcr are not used",
+        "confirm what AISC 360-16 E5 assumes: both ends loaded through the same leg, welded \
+         or with 2+ bolts; no transverse load; adjacent truss webs on the same side. \
+         L = length_mm (k, lcr unused)",
     ));
     let start = trace.len();
     let r = axis(input, Mode::Minor, lc_r * r_z, basis, trace, warnings)?;
@@ -540,14 +541,15 @@ mod tests {
         let e = crate::check_member(&m).unwrap_err();
         assert_eq!(e.field(), Some("method"));
         assert!(
-            e.to_string().contains("angle_connection: leg ratio 2.00"),
+            e.to_string()
+                .contains("angle_connection: leg ratio b_l/b_s = 2.00"),
             "{e}"
         );
         m.section = serde_json::from_value(angle(100.0, 10.0)).unwrap();
         m.length_mm = 6000.0;
         let e = crate::check_member(&m).unwrap_err().to_string();
         assert!(
-            e.contains("angle_connection") && e.contains("over 200"),
+            e.contains("angle_connection: L_c/r") && e.contains("limit 200"),
             "{e}"
         );
     }
