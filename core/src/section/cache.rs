@@ -148,14 +148,19 @@ fn key(spec: &SectionSpec) -> Option<Key> {
     Some(Key(k))
 }
 
-/// The properties of `spec`, from the memo when it has them.
-pub fn properties(spec: &SectionSpec) -> Result<Properties> {
+/// Writes the properties of `spec` into `out`, from the memo when it has
+/// them (a hit is copied once, straight from the entry).
+pub fn fill(spec: &SectionSpec, out: &mut Properties) -> Result<()> {
     let Some(k) = key(spec) else {
-        return super::shapes::properties(spec);
+        *out = super::shapes::properties(spec)?;
+        return Ok(());
     };
-    let hit = MEMO.with(|m| m.try_borrow().ok().and_then(|m| m.get(&k).copied()));
-    if let Some(p) = hit {
-        return Ok(p);
+    let hit = MEMO.with(|m| {
+        m.try_borrow()
+            .is_ok_and(|m| m.get(&k).map(|p| *out = *p).is_some())
+    });
+    if hit {
+        return Ok(());
     }
     let p = super::shapes::properties(spec)?;
     MEMO.with(|m| {
@@ -166,7 +171,8 @@ pub fn properties(spec: &SectionSpec) -> Result<Properties> {
             m.insert(k, p);
         }
     });
-    Ok(p)
+    *out = p;
+    Ok(())
 }
 
 #[cfg(test)]
@@ -179,6 +185,12 @@ mod tests {
     )]
     use super::*;
     use crate::section::{Rect, Rhs};
+
+    fn properties(spec: &SectionSpec) -> Result<Properties> {
+        let mut p = Properties::default();
+        fill(spec, &mut p)?;
+        Ok(p)
+    }
 
     #[test]
     fn a_hit_is_exactly_the_computation() {

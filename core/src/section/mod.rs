@@ -332,13 +332,14 @@ impl SectionSpec {
             // Built once per entry and kept by the catalogue.
             return crate::catalogue::section(&c.designation);
         }
-        let props = cache::properties(self)?;
-        Ok(Section {
+        let mut section = Section {
             spec: self.clone(),
             family: self.family(),
-            props,
+            props: Properties::default(),
             designation: None,
-        })
+        };
+        cache::fill(self, &mut section.props)?;
+        Ok(section)
     }
 
     /// A short human description, e.g. "I 300x300x19x11 r27".

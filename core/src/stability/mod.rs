@@ -184,7 +184,9 @@ pub fn assess(
         return out;
     };
     let section = input.section;
-    let Some(c) = classify::classify(code, &section.spec, steel.fy_mpa, steel.e_mpa) else {
+    // Classified in place: the classification is a few hundred bytes.
+    out.classified = classify::classify(code, &section.spec, steel.fy_mpa, steel.e_mpa);
+    let Some(c) = &out.classified else {
         warn(warnings, "local-buckling-not-checked", || {
             "local buckling is not checked for typed section properties: the plates are unknown; \
              classify the section by hand (it must not be slender / Class 4)"
@@ -192,8 +194,7 @@ pub fn assess(
         });
         return out;
     };
-    trace_classification(&c, trace);
-    out.classified = Some(c);
+    trace_classification(c, trace);
     if !c.is_slender() {
         return out;
     }
@@ -212,9 +213,9 @@ pub fn assess(
                 });
                 return out;
             }
-            let eff = effective::en_area(&c, section.props.area_mm2);
+            let eff = effective::en_area(c, section.props.area_mm2);
             trace_effective(
-                &c,
+                c,
                 &eff,
                 Scope::Section,
                 trace,
