@@ -85,12 +85,14 @@ pub fn merge(members: &mut Vec<Member>, incoming: &[Member]) -> usize {
     renamed
 }
 
-/// A file name for a list's title: letters, digits and `-` only.
+/// A file name for a list's title: ASCII letters and digits, other runs
+/// of characters become one `-`.
 pub fn file_name(title: &str, ext: &str) -> String {
     let mut s = String::new();
     for c in title.trim().chars() {
-        if c.is_alphanumeric() {
-            s.extend(c.to_lowercase());
+        // ASCII rules only, so the wasm carries no Unicode case tables.
+        if c.is_ascii_alphanumeric() {
+            s.push(c.to_ascii_lowercase());
         } else if !s.ends_with('-') && !s.is_empty() {
             s.push('-');
         }

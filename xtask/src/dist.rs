@@ -43,10 +43,23 @@ pub struct Built {
     pub cache_name: String,
 }
 
-/// `cargo xtask dist [--no-wasm-opt]`.
+/// `cargo xtask dist [--no-wasm-opt] [--keep-names]`.
+///
+/// `--keep-names` is for size work: it builds into `target/names` with the
+/// symbol names kept through wasm-bindgen and wasm-opt and writes
+/// `dist-names/` instead of `dist/`, so `twiggy top
+/// dist-names/strutline_web_bg.wasm` can say where the bytes go (the names
+/// add to the size, so the budget is not checked there).
 pub fn run(args: &[String]) -> Result<()> {
-    util::check_args(args, &[], &["--no-wasm-opt"])?;
-    let built = build(!args.iter().any(|a| a == "--no-wasm-opt"))?;
+    util::check_args(args, &[], &["--no-wasm-opt", "--keep-names"])?;
+    let use_wasm_opt = !args.iter().any(|a| a == "--no-wasm-opt");
+    if args.iter().any(|a| a == "--keep-names") {
+        let built = build_with(&util::root().join("dist-names"), use_wasm_opt, true)?;
+        report(&built);
+        println!("names kept: twiggy top -n 40 dist-names/{OUT_NAME}_bg.wasm");
+        return Ok(());
+    }
+    let built = build(use_wasm_opt)?;
     report(&built);
     check_budget(&built)
 }
@@ -89,9 +102,22 @@ pub fn build(use_wasm_opt: bool) -> Result<Built> {
 /// `cargo xtask dist` run at the same time cannot pull files from under
 /// them.
 pub fn build_into(dist: &Path, use_wasm_opt: bool) -> Result<Built> {
+    build_with(dist, use_wasm_opt, false)
+}
+
+/// [`build_into`], with the symbol names kept for size analysis when
+/// `keep_names` (a build of its own under `target/names`).
+fn build_with(dist: &Path, use_wasm_opt: bool, keep_names: bool) -> Result<Built> {
     let root = util::root();
     ensure_target()?;
-    util::run(util::cargo().args([
+    let mut cargo = util::cargo();
+    if keep_names {
+        cargo
+            .env("CARGO_PROFILE_WASM_RELEASE_STRIP", "false")
+            .env("CARGO_PROFILE_WASM_RELEASE_DEBUG", "false")
+            .env("CARGO_TARGET_DIR", root.join("target/names"));
+    }
+    util::run(cargo.args([
         "build",
         "-p",
         "strutline-web",
@@ -100,10 +126,14 @@ pub fn build_into(dist: &Path, use_wasm_opt: bool) -> Result<Built> {
         "--profile",
         "wasm-release",
     ]))?;
-    let target_dir = std::env::var_os("CARGO_TARGET_DIR")
-        .map(PathBuf::from)
-        .map(|p| if p.is_absolute() { p } else { root.join(p) })
-        .unwrap_or_else(|| root.join("target"));
+    let target_dir = if keep_names {
+        root.join("target/names")
+    } else {
+        std::env::var_os("CARGO_TARGET_DIR")
+            .map(PathBuf::from)
+            .map(|p| if p.is_absolute() { p } else { root.join(p) })
+            .unwrap_or_else(|| root.join("target"))
+    };
     let wasm_in = target_dir
         .join(TARGET)
         .join("wasm-release")
@@ -126,7 +156,7 @@ pub fn build_into(dist: &Path, use_wasm_opt: bool) -> Result<Built> {
         .typescript(false)
         // The library leaves out the default wasm URL that the CLI writes.
         .omit_default_module_path(false)
-        .remove_name_section(true)
+        .remove_name_section(!keep_names)
         .remove_producers_section(true)
         .generate(dist)
         .map_err(|e| anyhow::anyhow!("wasm-bindgen: {e}"))?;
@@ -137,7 +167,7 @@ pub fn build_into(dist: &Path, use_wasm_opt: bool) -> Result<Built> {
 
     let wasm_out = dist.join(format!("{OUT_NAME}_bg.wasm"));
     if use_wasm_opt {
-        optimise(&wasm_out)?;
+        optimise(&wasm_out, keep_names)?;
     } else {
         eprintln!("xtask: wasm-opt skipped (--no-wasm-opt)");
     }
@@ -265,7 +295,7 @@ fn wasm_opt_programs() -> Vec<PathBuf> {
 /// export of wasm-bindgen's externref table onto the function table, and
 /// the page then fails to start. A wasm-opt that fails is skipped with a
 /// warning.
-fn optimise(wasm: &Path) -> Result<()> {
+fn optimise(wasm: &Path, keep_names: bool) -> Result<()> {
     let programs = wasm_opt_programs();
     if programs.is_empty() {
         eprintln!("xtask: note: no wasm-opt found; the wasm is not shrunk further");
@@ -286,6 +316,7 @@ fn optimise(wasm: &Path) -> Result<()> {
                 std::process::Command::new(program)
                     .args(level.iter())
                     .args(WASM_FEATURES)
+                    .args(keep_names.then_some("-g"))
                     .arg(wasm)
                     .arg("-o")
                     .arg(&out),
