@@ -7,17 +7,29 @@
 //! repeated. Arcs are approximated by [`super::shapes::SEGMENTS_PER_QUARTER`]
 //! chords per quarter circle. Sections without dimensions (typed
 //! properties) and invalid dimensions give no polygons.
+//!
+//! [`ineffective`] returns, in the same coordinates, the strips of a
+//! slender section that its effective widths leave out (see its docs).
 
 use super::{shapes, SectionSpec};
+use crate::stability::classify::{Classified, Kind, Part};
+use crate::stability::effective::Effective;
+
+/// The dimensions behind a catalogue reference (the spec itself otherwise).
+pub(crate) fn resolved(spec: &SectionSpec) -> Option<&SectionSpec> {
+    match spec {
+        SectionSpec::Catalogue(c) => match crate::catalogue::resolve(&c.designation) {
+            Ok(entry) if !matches!(entry.spec, SectionSpec::Catalogue(_)) => Some(&entry.spec),
+            _ => None,
+        },
+        s => Some(s),
+    }
+}
 
 /// The polygons of the section, origin at the centroid.
 pub fn outline(spec: &SectionSpec) -> Vec<Vec<(f64, f64)>> {
-    let spec = match spec {
-        SectionSpec::Catalogue(c) => match crate::catalogue::resolve(&c.designation) {
-            Ok(entry) if !matches!(entry.spec, SectionSpec::Catalogue(_)) => &entry.spec,
-            _ => return Vec::new(),
-        },
-        s => s,
+    let Some(spec) = resolved(spec) else {
+        return Vec::new();
     };
     let (Ok(props), Ok((outer, hole))) = (shapes::properties(spec), shapes::polygons(spec)) else {
         return Vec::new();
@@ -29,11 +41,108 @@ pub fn outline(spec: &SectionSpec) -> Vec<Vec<(f64, f64)>> {
         .collect()
 }
 
+/// The ineffective strips of a slender section under uniform compression,
+/// as rectangles (counter-clockwise, origin at the centroid like
+/// [`outline`]), one per reduced element, from the effective widths `eff`
+/// the check computed for the classification `c`
+/// ([`crate::stability::effective::of_check`]). Each strip is the element's
+/// width less its effective width, `c - b_eff`, across the plate thickness:
+/// in the middle of an internal element (EN 1993-1-5 Table 4.1, psi = 1:
+/// `b_e1 = b_e2 = b_eff/2` at the supported edges) and at the free tip of an
+/// outstand (Table 4.2: effective from the supported edge). AISC 360-16 E7
+/// gives widths only; they are placed the same way (common practice for
+/// drawing). Tubes (AISC E7-7 scales the whole area) and sections without
+/// dimensions give none.
+pub fn ineffective(spec: &SectionSpec, c: &Classified, eff: &Effective) -> Vec<Vec<(f64, f64)>> {
+    let mut out = Vec::new();
+    let Some(spec) = resolved(spec) else {
+        return out;
+    };
+    let Ok(props) = shapes::properties(spec) else {
+        return out;
+    };
+    let (yc, zc) = (props.centroid_y_mm, props.centroid_z_mm);
+    let mut rect = |y0: f64, y1: f64, z0: f64, z1: f64| {
+        let (y0, y1, z0, z1) = (y0 - yc, y1 - yc, z0 - zc, z1 - zc);
+        out.push(vec![(y0, z0), (y1, z0), (y1, z1), (y0, z1)]);
+    };
+    for (e, r) in c.elements().iter().zip(eff.reduced.iter()) {
+        let Some(r) = r else { continue };
+        let s = (e.width_mm - r.effective_mm).max(0.0);
+        if s <= 0.0 || matches!(e.kind, Kind::Tube | Kind::Rule) {
+            continue;
+        }
+        let t = e.thickness_mm;
+        // Reference position of each shape: see [`super::shapes`].
+        match (spec, e.part) {
+            (SectionSpec::I(d), Part::IFlange) => {
+                let (b, h, tf) = (d.width_mm, d.depth_mm, d.flange_mm);
+                for z0 in [0.0, h - tf] {
+                    rect(0.0, s, z0, z0 + tf);
+                    rect(b - s, b, z0, z0 + tf);
+                }
+            }
+            (SectionSpec::I(d), Part::IWeb) => {
+                let (b, h) = (d.width_mm, d.depth_mm);
+                rect((b - t) / 2.0, (b + t) / 2.0, (h - s) / 2.0, (h + s) / 2.0);
+            }
+            (SectionSpec::Rhs(d), Part::RhsDepthWall) => {
+                let (b, h) = (d.width_mm, d.depth_mm);
+                for y0 in [0.0, b - t] {
+                    rect(y0, y0 + t, (h - s) / 2.0, (h + s) / 2.0);
+                }
+            }
+            (SectionSpec::Rhs(d), Part::RhsWidthWall) => {
+                let (b, h) = (d.width_mm, d.depth_mm);
+                for z0 in [0.0, h - t] {
+                    rect((b - s) / 2.0, (b + s) / 2.0, z0, z0 + t);
+                }
+            }
+            (SectionSpec::Channel(d), Part::ChannelWeb) => {
+                let h = d.depth_mm;
+                rect(0.0, t, (h - s) / 2.0, (h + s) / 2.0);
+            }
+            (SectionSpec::Channel(d), Part::ChannelFlange) => {
+                let (b, h) = (d.width_mm, d.depth_mm);
+                for z0 in [0.0, h - t] {
+                    rect(b - s, b, z0, z0 + t);
+                }
+            }
+            (SectionSpec::Tee(d), Part::TeeFlange) => {
+                let (b, h) = (d.width_mm, d.depth_mm);
+                rect(0.0, s, h - t, h);
+                rect(b - s, b, h - t, h);
+            }
+            (SectionSpec::Tee(d), Part::TeeStem) => {
+                let b = d.width_mm;
+                rect((b - t) / 2.0, (b + t) / 2.0, 0.0, s);
+            }
+            (SectionSpec::Angle(d), Part::AngleLongLeg | Part::AngleShortLeg) => {
+                // The long leg is the one of length max(depth, width); the
+                // leg of length `depth_mm` runs up +z from the heel.
+                let (h, b) = (d.depth_mm, d.width_mm);
+                if (e.part == Part::AngleLongLeg) == (h >= b) {
+                    rect(0.0, t, h - s, h);
+                } else {
+                    rect(b - s, b, 0.0, t);
+                }
+            }
+            _ => {}
+        }
+    }
+    out
+}
+
 #[cfg(test)]
 mod tests {
     #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
-    use crate::section::{Angle, Given, IShape, Rhs};
+    use crate::check::{check_member, CheckResult};
+    use crate::material::MaterialSpec;
+    use crate::member::Member;
+    use crate::method::Method;
+    use crate::section::{Angle, Given, IMake, IShape, Rhs};
+    use crate::stability::effective::of_check;
 
     fn area(p: &[(f64, f64)]) -> f64 {
         let n = p.len();
@@ -126,5 +235,168 @@ mod tests {
             warping_mm6: None,
         });
         assert!(outline(&given).is_empty());
+    }
+
+    fn member(section: SectionSpec, fy_mpa: f64, method: Method) -> Member {
+        Member {
+            section,
+            material: MaterialSpec::Custom {
+                fy_mpa,
+                e_mpa: 210_000.0,
+                g_mpa: Some(81_000.0),
+            },
+            length_mm: 3000.0,
+            ..crate::method::euler::tests::member(method, "S355")
+        }
+    }
+
+    /// Checks `m` and hands its input and result to `f`.
+    fn checked<R>(m: &Member, f: impl FnOnce(&crate::method::Input<'_>, &CheckResult) -> R) -> R {
+        let r = check_member(m).unwrap();
+        let section = m.section.build().unwrap();
+        let material = crate::material::resolve(&m.material, &section).unwrap();
+        let input = crate::method::Input {
+            member: m,
+            section: &section,
+            material: &material,
+        };
+        f(&input, &r)
+    }
+
+    /// The zones of a member as the check found them, and A - A_eff (from
+    /// its working when `traced`).
+    fn zones_and_removed(m: &Member, traced: bool) -> (Vec<Vec<(f64, f64)>>, f64) {
+        checked(m, |input, r| {
+            let (c, eff) = of_check(input, r).unwrap();
+            if traced {
+                let a_eff = r
+                    .trace
+                    .iter()
+                    .find(|s| s.symbol.as_str() == "A_eff")
+                    .map(|s| s.value)
+                    .unwrap();
+                assert!(
+                    (a_eff - eff.area_mm2).abs() < 1e-9,
+                    "same A_eff as the check"
+                );
+            }
+            (
+                ineffective(&m.section, &c, &eff),
+                input.section.props.area_mm2 - eff.area_mm2,
+            )
+        })
+    }
+
+    /// The zones are the flat strips c - b_eff by t that the check takes
+    /// off, so they agree to rounding here; 0.5 % would allow a strip
+    /// running into a corner or fillet (common practice for drawing).
+    const ZONE_AREA: f64 = 5e-3;
+
+    fn zone_area(zones: &[Vec<(f64, f64)>]) -> f64 {
+        zones.iter().map(|z| area(z)).sum()
+    }
+
+    #[test]
+    fn class_1_section_has_no_zones() {
+        // HE 200 B dimensions in S235: c/t = 5.2 (flange), 14.9 (web): Class 1
+        // (EN 1993-1-1 Table 5.2: 9 eps and 33 eps with eps = 1).
+        let spec = SectionSpec::I(IShape {
+            depth_mm: 200.0,
+            width_mm: 200.0,
+            flange_mm: 15.0,
+            web_mm: 9.0,
+            root_radius_mm: 18.0,
+            make: IMake::Rolled,
+        });
+        let m = member(spec.clone(), 235.0, Method::En1993);
+        assert!(checked(&m, |input, r| of_check(input, r).is_none()));
+        let section = spec.build().unwrap();
+        let c = crate::stability::classify::classify(
+            crate::stability::classify::Code::En1993,
+            &spec,
+            235.0,
+            210_000.0,
+        )
+        .unwrap();
+        assert_eq!(c.class, 1);
+        let eff = crate::stability::effective::en_area(&c, section.props.area_mm2);
+        assert!(ineffective(&spec, &c, &eff).is_empty());
+    }
+
+    #[test]
+    fn slender_welded_i_zones_remove_a_minus_a_eff() {
+        // Welded I 600 x 400 x 12 x 6, S355: A = 13056 mm2, A_eff = 8844.69 mm2
+        // worked by hand with EN 1993-1-5 Eq. 4.2 and 4.3 in
+        // tests/validation/local_buckling.rs.
+        let spec = SectionSpec::I(IShape {
+            depth_mm: 600.0,
+            width_mm: 400.0,
+            flange_mm: 12.0,
+            web_mm: 6.0,
+            root_radius_mm: 0.0,
+            make: IMake::Welded,
+        });
+        let (zones, removed) = zones_and_removed(&member(spec, 355.0, Method::En1993), true);
+        assert!((removed - (13056.0 - 8844.69)).abs() < 0.05);
+        assert_eq!(zones.len(), 5, "four flange tips and the web middle");
+        assert!((zone_area(&zones) - removed).abs() / removed < ZONE_AREA);
+        let web = &zones[4];
+        // Table 4.1: the web's strip is in the middle (centred on the centroid).
+        assert!((web[0].1 + web[2].1).abs() < 1e-9 && (web[0].0 + web[1].0).abs() < 1e-9);
+        // Table 4.2: each flange strip reaches the free tip, |y| = b/2.
+        for z in &zones[..4] {
+            let reach = z.iter().map(|p| p.0.abs()).fold(0.0, f64::max);
+            assert!((reach - 200.0).abs() < 1e-9);
+        }
+    }
+
+    #[test]
+    fn slender_shs_zones_remove_a_minus_a_eff() {
+        // SHS 300 x 300 x 6, S355: c = 282 mm, c/t = 47 > 42 eps = 34.17 (Class 4);
+        // b_eff = 217.30 mm per wall (EN 1993-1-5 Eq. 4.2, by hand in
+        // tests/validation/local_buckling.rs), removed 4 x 64.70 x 6 = 1552.8 mm2.
+        let spec = SectionSpec::Rhs(Rhs {
+            depth_mm: 300.0,
+            width_mm: 300.0,
+            wall_mm: 6.0,
+            outer_radius_mm: 12.0,
+            inner_radius_mm: None,
+            make: Default::default(),
+        });
+        let (zones, removed) =
+            zones_and_removed(&member(spec.clone(), 355.0, Method::En1993), true);
+        assert!((removed - 4.0 * (282.0 - 217.2997) * 6.0).abs() < 0.01);
+        assert_eq!(zones.len(), 4);
+        assert!((zone_area(&zones) - removed).abs() / removed < ZONE_AREA);
+        for z in &zones {
+            // Each strip is centred on its wall: its middle lies on an axis.
+            let (my, mz) = ((z[0].0 + z[2].0) / 2.0, (z[0].1 + z[2].1) / 2.0);
+            assert!(my.abs() < 1e-9 || mz.abs() < 1e-9);
+        }
+        // AISC 360-16 E7: the same placement, with the widths at the governing F_cr.
+        let (zones, removed) = zones_and_removed(&member(spec, 355.0, Method::AiscLrfd), false);
+        assert_eq!(zones.len(), 4);
+        assert!(removed > 0.0 && (zone_area(&zones) - removed).abs() / removed < ZONE_AREA);
+    }
+
+    #[test]
+    fn slender_angle_zones_sit_at_the_leg_tips() {
+        // L 200 x 200 x 10, S355: h/t = 20 > 15 eps = 12.2, Class 4 (EN 1993-1-1 Table 5.2).
+        let spec = SectionSpec::Angle(Angle {
+            depth_mm: 200.0,
+            width_mm: 200.0,
+            thickness_mm: 10.0,
+            root_radius_mm: 15.0,
+            toe_radius_mm: 0.0,
+        });
+        let (zones, removed) =
+            zones_and_removed(&member(spec.clone(), 355.0, Method::En1993), true);
+        assert_eq!(zones.len(), 2);
+        assert!((zone_area(&zones) - removed).abs() / removed < ZONE_AREA);
+        let p = spec.build().unwrap().props;
+        let top = 200.0 - p.centroid_z_mm;
+        let right = 200.0 - p.centroid_y_mm;
+        assert!(zones[0].iter().any(|q| (q.1 - top).abs() < 1e-9));
+        assert!(zones[1].iter().any(|q| (q.0 - right).abs() < 1e-9));
     }
 }

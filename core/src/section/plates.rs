@@ -67,12 +67,8 @@ fn plate(
 
 /// The plate elements of the section.
 pub fn plates(spec: &SectionSpec) -> Vec<Plate> {
-    let spec = match spec {
-        SectionSpec::Catalogue(c) => match crate::catalogue::resolve(&c.designation) {
-            Ok(entry) if !matches!(entry.spec, SectionSpec::Catalogue(_)) => &entry.spec,
-            _ => return Vec::new(),
-        },
-        s => s,
+    let Some(spec) = super::outline::resolved(spec) else {
+        return Vec::new();
     };
     if shapes::properties(spec).is_err() {
         return Vec::new();
