@@ -284,6 +284,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
     match input.material {
         Material::Steel(s) => {
             if s.name != "custom" {
+                let standard = held(s.standard);
                 step!(
                     trace,
                     Scope::Member,
@@ -291,7 +292,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                     "governing thickness for f_y",
                     s.thickness_mm,
                     "mm",
-                    held(s.standard),
+                    standard,
                 );
                 step!(
                     trace,
@@ -300,7 +301,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                     "yield strength for that thickness",
                     f,
                     "MPa",
-                    held(s.standard),
+                    standard,
                 );
                 if s.thickness_mm <= 0.0 && s.band_up_to_mm.is_finite() {
                     warn_once(warnings, "thickness-unknown", || {
@@ -343,6 +344,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
             }
         }
         Material::Timber(t) => {
+            let standard = held(t.standard);
             step!(
                 trace,
                 Scope::Member,
@@ -350,7 +352,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                 "characteristic compressive strength parallel to grain",
                 f,
                 "MPa",
-                held(t.standard),
+                standard,
             );
             step!(
                 trace,
@@ -359,7 +361,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                 "fifth-percentile modulus",
                 e,
                 "MPa",
-                held(t.standard),
+                standard,
             );
         }
     }
