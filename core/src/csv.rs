@@ -7,7 +7,9 @@
 //! the section's keys without a prefix (`kind`, `depth_mm`, `width_mm`,
 //! `designation`, ...) and the material's keys likewise (`grade`, or
 //! `fy_mpa` and `e_mpa`, or the timber keys `fc0k_mpa`, `e005_mpa`,
-//! `e0mean_mpa`, `timber`). Header names are read without regard to case,
+//! `e0mean_mpa`, `timber`); `angle_connection`'s keys take the prefix
+//! `angle_` (`angle_leg`: `long` or `short`; `angle_truss`: `planar` or
+//! `space`, needing `angle_leg`). Header names are read without regard to case,
 //! surrounding spaces, or spaces and hyphens in place of underscores. An
 //! empty cell means the key is absent (its default applies); a quoted empty
 //! cell (`""`) is an empty text.
@@ -147,6 +149,8 @@ enum Group {
     Member,
     Section,
     Material,
+    /// `angle_connection`'s keys, written with the prefix `angle_`.
+    Angle,
 }
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -220,6 +224,8 @@ const KEYS: &[KeyInfo] = &[
     k("service_class", Group::Member, Kind::Whole),
     k("load_duration", Group::Member, Kind::Name),
     k("csa_n", Group::Member, Kind::Number),
+    k("angle_leg", Group::Angle, Kind::Name),
+    k("angle_truss", Group::Angle, Kind::Name),
 ];
 
 /// Keys every row needs (the material and section needs are per row).
@@ -825,6 +831,8 @@ fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             "timber" => "solid or glulam".into(),
             "curve_major" | "curve_minor" => "a buckling curve: a0, a, b, c or d".into(),
             "load_duration" => "permanent, long, medium, short or instantaneous".into(),
+            "angle_leg" => "long or short".into(),
+            "angle_truss" => "planar or space".into(),
             _ => "a name".into(),
         },
         Kind::Whole => "a whole number".into(),
@@ -979,6 +987,15 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
             ));
         }
     }
+    if has("angle_truss") && !has("angle_leg") {
+        problems.push(problem(
+            line,
+            ctx.header_of("angle_leg"),
+            "long or short",
+            "angle_leg is missing; angle_truss needs the connected leg",
+        ));
+    }
+
     if let Some(m) = get("method") {
         if Method::from_key(m).is_none() {
             failed.insert("method");
@@ -995,11 +1012,20 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
 
     // Names from the member file's fixed lists.
     let kind_name = get("kind");
-    for key in ["curve_major", "curve_minor", "load_duration", "make"] {
+    for key in [
+        "curve_major",
+        "curve_minor",
+        "load_duration",
+        "angle_leg",
+        "angle_truss",
+        "make",
+    ] {
         let Some(v) = get(key) else { continue };
         let allowed: &[&str] = match key {
             "curve_major" | "curve_minor" => &["a0", "a", "b", "c", "d"],
             "load_duration" => &["permanent", "long", "medium", "short", "instantaneous"],
+            "angle_leg" => &["long", "short"],
+            "angle_truss" => &["planar", "space"],
             _ => match kind_name {
                 Some("i") => &["rolled", "welded"],
                 Some("rhs" | "chs") => &["hot-finished", "cold-formed"],
@@ -1165,19 +1191,30 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
     let mut member = Map::new();
     let mut section = Map::new();
     let mut material = Map::new();
+    let mut angle = Map::new();
     for (info, value) in given {
-        let target = match info.group {
-            Group::Member => &mut member,
-            Group::Section => &mut section,
-            Group::Material => &mut material,
+        let (target, key) = match info.group {
+            Group::Member => (&mut member, info.key),
+            Group::Section => (&mut section, info.key),
+            Group::Material => (&mut material, info.key),
+            Group::Angle => (
+                &mut angle,
+                info.key.strip_prefix("angle_").unwrap_or(info.key),
+            ),
         };
-        target.insert(info.key.to_string(), value);
+        target.insert(key.to_string(), value);
     }
     member.insert("section".into(), Value::Object(section));
     member.insert("material".into(), Value::Object(material));
+    if !angle.is_empty() {
+        member.insert("angle_connection".into(), Value::Object(angle));
+    }
     let value = Value::Object(member);
     file::deserialize_member(&value).map_err(|(path, inner)| {
         let key = missing_field(&inner).unwrap_or_else(|| {
+            if let Some(k) = path.strip_prefix("angle_connection.") {
+                return format!("angle_{k}");
+            }
             path.rsplit('.')
                 .next()
                 .filter(|s| !s.is_empty() && *s != "section")
@@ -1395,6 +1432,11 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
                         ("section" | "material", Value::Object(inner)) => {
                             for (k2, v2) in inner {
                                 flat.insert(k2, v2);
+                            }
+                        }
+                        ("angle_connection", Value::Object(inner)) => {
+                            for (k2, v2) in inner {
+                                flat.insert(format!("angle_{k2}"), v2);
                             }
                         }
                         (_, value) => {
@@ -1850,6 +1892,51 @@ mod tests {
     }
 
     #[test]
+    fn angle_columns_read_and_report_bad_values() {
+        use crate::member::{AngleConnection, Leg, Truss};
+        let text = "id,kind,depth_mm,width_mm,thickness_mm,grade,length_mm,axial_kn,method,Angle Leg,angle-truss\n\
+                    A1,angle,100,75,8,A36,1500,60,aisc360-lrfd,Short,SPACE\n\
+                    A2,angle,100,75,8,A36,1500,60,aisc360-lrfd,long,\n\
+                    A3,angle,100,75,8,A36,1500,60,aisc360-lrfd,,\n\
+                    A4,angle,100,75,8,A36,1500,60,aisc360-lrfd,middle,planar\n\
+                    A5,angle,100,75,8,A36,1500,60,aisc360-lrfd,long,box\n\
+                    A6,angle,100,75,8,A36,1500,60,aisc360-lrfd,,space\n";
+        let got = parse_csv(text);
+        let conn = |leg, truss| Some(AngleConnection { leg, truss });
+        let read: Vec<_> = got
+            .members
+            .iter()
+            .map(|m| (m.id.as_str(), m.angle_connection))
+            .collect();
+        assert_eq!(
+            read,
+            vec![
+                ("A1", conn(Leg::Short, Truss::Space)),
+                ("A2", conn(Leg::Long, Truss::Planar)),
+                ("A3", None),
+            ]
+        );
+        let problems: Vec<(usize, &str, &str)> = got
+            .problems
+            .iter()
+            .map(|p| (p.line, p.column.as_str(), p.expected.as_str()))
+            .collect();
+        assert_eq!(
+            problems,
+            vec![
+                (5, "Angle Leg", "long, short"),
+                (6, "angle-truss", "planar, space"),
+                (7, "Angle Leg", "long or short"),
+            ],
+            "{:#?}",
+            got.problems
+        );
+        assert!(got.problems[0].message.contains("middle"));
+        assert!(got.problems[1].message.contains("box"));
+        assert!(got.problems[2].message.contains("angle_leg is missing"));
+    }
+
+    #[test]
     fn never_panics_on_random_input() {
         let alphabet: Vec<char> =
             "id,kind;rect\tround\"\r\n '-/.0123456789eE+−,\u{feff}sep=length_ft\u{a0}\""
@@ -1884,7 +1971,7 @@ mod tests {
 
     /// Every section kind, every material form and every member option,
     /// with awkward numbers and text.
-    const EVERY: &str = r#"{"format": "strutline.members", "version": 1, "title": "every key",
+    const EVERY: &str = r#"{"format": "strutline.members", "version": 2, "title": "every key",
       "members": [
         {"id": "I1", "note": "comma, \"quote\"\nnew line", "section": {"kind": "i", "depth_mm": 300.5,
          "width_mm": 300, "flange_mm": 19, "web_mm": 11, "root_radius_mm": 27, "make": "welded"},
@@ -1925,7 +2012,14 @@ mod tests {
          "gamma_m1": 1.0, "curve_major": "a", "load_duration": "medium"},
         {"id": "G11", "section": {"kind": "given", "area_mm2": 5e-324, "i_major_mm4": 1.7976931348623157e308,
          "i_minor_mm4": 0.1}, "material": {"fy_mpa": 1.0e-300, "e_mpa": 210000.00000000003},
-         "length_mm": -0.0, "axial_kn": -5, "method": "euler", "k_major": 1.0000000000000002}
+         "length_mm": -0.0, "axial_kn": -5, "method": "euler", "k_major": 1.0000000000000002},
+        {"id": "L12", "section": {"kind": "angle", "depth_mm": 100, "width_mm": 75, "thickness_mm": 8,
+         "root_radius_mm": 10, "toe_radius_mm": 4.8}, "material": {"grade": "A36"},
+         "length_mm": 1500, "axial_kn": 60, "method": "aisc360-lrfd",
+         "angle_connection": {"leg": "short", "truss": "space"}},
+        {"id": "L13", "section": {"kind": "angle", "depth_mm": 80, "width_mm": 80, "thickness_mm": 8},
+         "material": {"grade": "S355"}, "length_mm": 1200, "axial_kn": 50, "method": "aisc360-asd",
+         "angle_connection": {"leg": "long"}}
       ]}"#;
 
     #[test]
@@ -1936,7 +2030,7 @@ mod tests {
         // some long 17-digit values by one unit in the last place, so such
         // values are kept out of the JSON -> JSON comparison.
         let original = file::parse(EVERY).unwrap();
-        assert_eq!(original.members.len(), 11);
+        assert_eq!(original.members.len(), 13);
         let csv_text = to_csv(&original);
         let back = parse_csv(&csv_text);
         assert!(back.problems.is_empty(), "{:#?}\n{csv_text}", back.problems);
@@ -1952,6 +2046,18 @@ mod tests {
         // CSV -> JSON -> CSV gives the same text.
         assert_eq!(to_csv(&again), csv_text);
         assert!(csv_text.starts_with("id,note,kind,"));
+        // angle_connection is two flat columns, not a JSON cell.
+        let header = csv_text.lines().next().unwrap();
+        assert!(header.ends_with(",csa_n,angle_leg,angle_truss"), "{header}");
+        assert!(!csv_text.contains('{'), "{csv_text}");
+        let l12 = again.members.iter().find(|m| m.id == "L12").unwrap();
+        assert_eq!(
+            l12.angle_connection,
+            Some(crate::member::AngleConnection {
+                leg: crate::member::Leg::Short,
+                truss: crate::member::Truss::Space
+            })
+        );
         assert!(csv_text.ends_with("\r\n"));
         // Absent options stay absent; a quoted empty note stays an empty note.
         let r2 = again.members.iter().find(|m| m.id == " R2 ").unwrap();
