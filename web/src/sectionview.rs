@@ -1,0 +1,365 @@
+//! The section view: the cross-section drawn to scale as SVG text, with its
+//! centroid, shear centre, principal axes and, for a slender (Class 4)
+//! section, the parts its effective widths leave out hatched.
+//!
+//! The drawing is built as a string (no view tree) and mounted with
+//! `inner_html`. Its `viewBox` is in mm, so it stays to scale at any size;
+//! the section's `z` axis points up, SVG's down, so `z` is negated. The
+//! colours come from the `sv-*` classes of `style.css` (with a
+//! high-contrast variant); the zones are told apart by a pattern of
+//! diagonal lines, not by colour alone.
+
+use std::fmt::Write;
+
+use strutline_core::check::Prepared;
+use strutline_core::method::Method;
+use strutline_core::section::outline::{ineffective, outline};
+use strutline_core::stability::effective::of_check;
+use strutline_core::CheckResult;
+
+use crate::checks::Checked;
+use crate::numtext::working;
+use crate::report::esc;
+
+/// Polygons in mm, origin at the centroid, `y` right and `z` up.
+type Polys = Vec<Vec<(f64, f64)>>;
+
+/// The view of a checked member (empty when the member did not resolve).
+pub fn of_checked(c: &Checked) -> String {
+    match &c.prepared {
+        Some(p) => svg(p, c.outcome.as_ref().ok()),
+        None => String::new(),
+    }
+}
+
+/// Appends polygons as SVG path data, one decimal of a mm.
+fn path(out: &mut String, polys: &Polys) {
+    for p in polys {
+        for (i, (y, z)) in p.iter().enumerate() {
+            let _ = write!(out, "{}{y:.1} {:.1}", if i == 0 { 'M' } else { 'L' }, -z);
+        }
+        out.push('Z');
+    }
+}
+
+/// How far a ray from the origin along (c, s) runs inside the box.
+fn reach(c: f64, s: f64, lo: (f64, f64), hi: (f64, f64)) -> f64 {
+    let f = |d: f64, lo: f64, hi: f64| {
+        if d > 1e-12 {
+            hi / d
+        } else if d < -1e-12 {
+            lo / d
+        } else {
+            f64::INFINITY
+        }
+    };
+    f(c, lo.0, hi.0).min(f(s, lo.1, hi.1))
+}
+
+/// A round length near `x`: 1, 2 or 5 times a power of ten.
+fn nice(x: f64) -> f64 {
+    let p = 10f64.powf(x.log10().floor());
+    let f = x / p;
+    p * if f >= 5.0 {
+        5.0
+    } else if f >= 2.0 {
+        2.0
+    } else {
+        1.0
+    }
+}
+
+/// The drawing of a prepared member; `result` (its check) supplies the
+/// effective widths of a slender section. Typed sections give a short note.
+pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
+    let spec = &p.section.spec;
+    let polys = outline(spec);
+    if polys.is_empty() {
+        return "<p class=\"sv-none\" data-testid=\"section-view\">The section is given by its \
+                properties and cannot be drawn.</p>"
+            .into();
+    }
+    let zones = result
+        .and_then(|r| of_check(&p.input(), r))
+        .map(|(c, e)| ineffective(spec, &c, &e))
+        .unwrap_or_default();
+    let props = &p.section.props;
+    let (mut y0, mut y1, mut z0, mut z1) = (f64::MAX, f64::MIN, f64::MAX, f64::MIN);
+    for &(y, z) in polys.iter().flatten() {
+        (y0, y1, z0, z1) = (y0.min(y), y1.max(y), z0.min(z), z1.max(z));
+    }
+    let d = (y1 - y0).max(z1 - z0).max(1e-3);
+    let m = 0.08 * d;
+    let fs = 0.045 * d;
+    let row = 1.6 * fs;
+    let (lo, hi) = ((y0 - m, z0 - m), (y1 + m, z1 + m));
+    let rows = 4 + usize::from(!zones.is_empty());
+    let width = (hi.0 - lo.0).max(26.0 * fs);
+    let left = 0.5 * (y0 + y1) - 0.5 * width;
+    let (top, bottom) = (-hi.1, -lo.1);
+    let height = bottom - top + rows as f64 * row + 0.5 * m;
+    let name = p
+        .section
+        .designation
+        .map_or_else(|| spec.describe(), str::to_string);
+    let code = match result.map(|r| r.method) {
+        Some(Method::AiscLrfd | Method::AiscAsd) => "AISC 360-16 E7",
+        _ => "EN 1993-1-5 4.4",
+    };
+    let mut s = String::with_capacity(2048);
+    let _ = write!(
+        s,
+        "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"sv\" data-testid=\"section-view\" \
+         role=\"img\" viewBox=\"{left:.1} {top:.1} {width:.1} {height:.1}\" font-size=\"{fs:.1}\" \
+         stroke-width=\"{:.3}\" \
+         aria-label=\"Cross-section {}, A = {} mm², drawn to scale with centroid, shear centre \
+         and principal axes; {}\">",
+        d / 250.0,
+        esc(&name),
+        working(props.area_mm2),
+        if zones.is_empty() {
+            "no ineffective parts shown"
+        } else {
+            "ineffective parts of the slender section hatched"
+        }
+    );
+    // Hatch spacing in whole mm: the id carries it, so two views of the
+    // same spacing can share one pattern.
+    let k = (d / 60.0).round().max(1.0);
+    let hatch = format!("sv-hatch-{k}");
+    let _ = write!(
+        s,
+        "<defs><pattern id=\"{hatch}\" patternUnits=\"userSpaceOnUse\" width=\"{k}\" \
+         height=\"{k}\" patternTransform=\"rotate(45)\"><line class=\"sv-hatch\" x1=\"0\" \
+         y1=\"0\" x2=\"0\" y2=\"{k}\" stroke-width=\"{:.2}\"/></pattern></defs>\
+         <path class=\"sv-outline\" fill-rule=\"evenodd\" d=\"",
+        k / 3.0
+    );
+    path(&mut s, &polys);
+    s.push_str("\"/>");
+    if !zones.is_empty() {
+        let _ = write!(s, "<path class=\"sv-zone\" fill=\"url(#{hatch})\" d=\"");
+        path(&mut s, &zones);
+        s.push_str("\"/>");
+    }
+    // Principal axes through the centroid, clipped to the drawing's box.
+    let (sin, cos) = props.principal_angle_rad.sin_cos();
+    let r = 0.025 * d;
+    let dash = format!(" stroke-dasharray=\"{:.1} {:.1}\"", 2.0 * r, r);
+    for (c, sn, extra) in [(cos, sin, ""), (-sin, cos, dash.as_str())] {
+        let (a, b) = (reach(c, sn, lo, hi), reach(-c, -sn, lo, hi));
+        let _ = write!(
+            s,
+            "<line class=\"sv-axis\"{extra} x1=\"{:.1}\" y1=\"{:.1}\" x2=\"{:.1}\" y2=\"{:.1}\"/>",
+            -b * c,
+            b * sn,
+            a * c,
+            -a * sn
+        );
+    }
+    let centroid = |s: &mut String, x: f64, y: f64| {
+        let _ = write!(
+            s,
+            "<g class=\"sv-centroid\"><circle cx=\"{x:.1}\" cy=\"{y:.1}\" r=\"{r:.1}\"/>\
+             <path d=\"M{:.1} {y:.1}H{:.1}M{x:.1} {:.1}V{:.1}\"/></g>",
+            x - 1.5 * r,
+            x + 1.5 * r,
+            y - 1.5 * r,
+            y + 1.5 * r
+        );
+    };
+    let diamond = |s: &mut String, x: f64, y: f64| {
+        let _ = write!(
+            s,
+            "<path class=\"sv-shear\" d=\"M{x:.1} {y:.1}m0 {:.1}l{r:.1} {r:.1}l{:.1} {r:.1}l{:.1} {:.1}z\"/>",
+            -r,
+            -r,
+            -r,
+            -r
+        );
+    };
+    centroid(&mut s, 0.0, 0.0);
+    let (ea, eb) = (props.shear_centre_major_mm, props.shear_centre_minor_mm);
+    let sc = (ea * cos - eb * sin, ea * sin + eb * cos);
+    let apart = sc.0.hypot(sc.1) > 0.005 * d;
+    if apart {
+        diamond(&mut s, sc.0, -sc.1);
+    }
+    // Scale bar, then the legend rows, each with its mark.
+    let x = left + 0.5 * m;
+    let tx = x + 2.0 * fs;
+    let mut y = bottom + 0.5 * row;
+    let bar = nice(0.3 * width);
+    let _ = write!(
+        s,
+        "<path class=\"sv-scale\" d=\"M{x:.1} {:.1}v{:.1}h{bar:.1}v{:.1}\"/>\
+         <text x=\"{:.1}\" y=\"{:.1}\">{} mm</text>",
+        y - 0.4 * fs,
+        0.4 * fs,
+        -0.4 * fs,
+        x + bar + 0.5 * fs,
+        y + 0.35 * fs,
+        working(bar)
+    );
+    let mut line = |s: &mut String, text: &str| {
+        y += row;
+        let _ = write!(
+            s,
+            "<text x=\"{tx:.1}\" y=\"{:.1}\">{text}</text>",
+            y + 0.35 * fs
+        );
+        y
+    };
+    let cy = line(&mut s, "centroid");
+    centroid(&mut s, x + 0.6 * fs, cy);
+    if apart {
+        let cy = line(&mut s, "shear centre");
+        diamond(&mut s, x + 0.6 * fs, cy);
+    } else {
+        line(&mut s, "shear centre at the centroid");
+    }
+    let cy = line(&mut s, "principal axes (dashed: minor)");
+    let _ = write!(
+        s,
+        "<line class=\"sv-axis\" x1=\"{x:.1}\" y1=\"{cy:.1}\" x2=\"{:.1}\" y2=\"{cy:.1}\"/>",
+        x + 1.4 * fs
+    );
+    if !zones.is_empty() {
+        let cy = line(&mut s, &format!("ineffective parts ({code})"));
+        let _ = write!(
+            s,
+            "<rect class=\"sv-zone\" fill=\"url(#{hatch})\" x=\"{x:.1}\" y=\"{:.1}\" \
+             width=\"{:.1}\" height=\"{:.1}\"/>",
+            cy - 0.5 * fs,
+            1.4 * fs,
+            fs
+        );
+    }
+    s.push_str("</svg>");
+    s
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::demo::{member, steel};
+    use strutline_core::section::{Angle, Given, IMake, IShape, SectionSpec};
+
+    fn view(spec: SectionSpec, fy: f64) -> (Prepared, String) {
+        let m = member("S1", spec, steel(fy), 3000.0, 100.0, Method::En1993);
+        let c = Checked::new(&m);
+        let out = of_checked(&c);
+        (c.prepared.unwrap(), out)
+    }
+
+    /// The leading numbers of attribute `name` of the first element after `after`.
+    fn attr(svg: &str, after: &str, name: &str) -> Vec<f64> {
+        let at = svg.find(after).unwrap() + after.len();
+        let rest = &svg[at..];
+        let from = rest.find(&format!("{name}=\"")).unwrap() + name.len() + 2;
+        let value = rest[from..].trim_start_matches('M');
+        let end = value
+            .find(|c: char| !(c.is_ascii_digit() || c == '.' || c == '-' || c == ' '))
+            .unwrap();
+        value[..end]
+            .split(' ')
+            .filter(|t| !t.is_empty())
+            .map(|t| t.parse().unwrap())
+            .collect()
+    }
+
+    fn welded(h: f64, b: f64, tf: f64, tw: f64) -> SectionSpec {
+        SectionSpec::I(IShape {
+            depth_mm: h,
+            width_mm: b,
+            flange_mm: tf,
+            web_mm: tw,
+            root_radius_mm: 0.0,
+            make: IMake::Welded,
+        })
+    }
+
+    #[test]
+    fn view_box_encloses_the_outline() {
+        let spec = SectionSpec::Angle(Angle {
+            depth_mm: 150.0,
+            width_mm: 90.0,
+            thickness_mm: 10.0,
+            root_radius_mm: 12.0,
+            toe_radius_mm: 6.0,
+        });
+        let (p, s) = view(spec, 355.0);
+        assert!(s.starts_with("<svg") && s.ends_with("</svg>"));
+        assert!(s.contains("role=\"img\"") && s.contains("fill-rule=\"evenodd\""));
+        let vb = attr(&s, "<svg", "viewBox");
+        assert_eq!(vb.len(), 4);
+        for (y, z) in outline(&p.section.spec).into_iter().flatten() {
+            assert!(y >= vb[0] && y <= vb[0] + vb[2], "y {y} outside {vb:?}");
+            assert!(-z >= vb[1] && -z <= vb[1] + vb[3], "z {z} outside {vb:?}");
+        }
+        assert!(s.contains(" mm</text>"), "a scale bar with its length");
+    }
+
+    #[test]
+    fn class_4_member_has_zones_and_class_1_none() {
+        // Welded I 600 x 400 x 12 x 6 in S355: c/t = 16.4 (flange) > 14 eps and
+        // 96 (web) > 42 eps, Class 4 (EN 1993-1-1 Table 5.2).
+        let (_, slender) = view(welded(600.0, 400.0, 12.0, 6.0), 355.0);
+        assert!(slender.contains("<path class=\"sv-zone\""));
+        let d = &slender[slender.find("class=\"sv-zone\"").unwrap()..];
+        let d = &d[..d.find("/>").unwrap()];
+        assert_eq!(d.matches('Z').count(), 5, "four flange tips and the web");
+        assert!(slender.contains("ineffective parts (EN 1993-1-5 4.4)"));
+        assert!(slender.contains("hatched\""));
+        // Welded I 300 x 300 x 20 x 12 in S235: c/t = 7.2 and 21.7, Class 1.
+        let (_, stocky) = view(welded(300.0, 300.0, 20.0, 12.0), 235.0);
+        assert!(!stocky.contains("sv-zone"));
+        assert!(stocky.contains("no ineffective parts shown"));
+        // A doubly symmetric I: the shear centre is the centroid.
+        assert!(!stocky.contains("class=\"sv-shear\""));
+    }
+
+    #[test]
+    fn angle_shear_centre_marker_sits_at_the_heel() {
+        let (h, b, t) = (150.0, 90.0, 10.0);
+        let spec = SectionSpec::Angle(Angle {
+            depth_mm: h,
+            width_mm: b,
+            thickness_mm: t,
+            root_radius_mm: 12.0,
+            toe_radius_mm: 6.0,
+        });
+        let (p, s) = view(spec, 355.0);
+        let props = p.section.props;
+        let at = attr(&s, "class=\"sv-shear\"", "d");
+        // The legs' mid-lines meet at (t/2, t/2) from the heel corner (the
+        // usual thin-walled idealisation, common practice); SVG z is down.
+        let (y, z) = (t / 2.0 - props.centroid_y_mm, t / 2.0 - props.centroid_z_mm);
+        let (sy, sz) = (at[0], -at[1]);
+        assert!((sy - y).hypot(sz - z) < 0.01 * h, "{sy} {sz} vs {y} {z}");
+    }
+
+    #[test]
+    fn hostile_designation_is_escaped_and_given_is_not_drawn() {
+        let (mut p, _) = view(welded(300.0, 300.0, 20.0, 12.0), 235.0);
+        p.section.designation = Some("<script>\"x\" & 'y'</script>");
+        let s = svg(&p, None);
+        assert!(!s.contains("<script>"));
+        assert!(s.contains("&lt;script&gt;&quot;x&quot; &amp; &#39;y&#39;&lt;/script&gt;"));
+        let given = SectionSpec::Given(Given {
+            area_mm2: 1000.0,
+            i_major_mm4: 1e6,
+            i_minor_mm4: 5e5,
+            torsion_mm4: None,
+            warping_mm6: None,
+        });
+        let (_, s) = view(given, 235.0);
+        assert!(s.starts_with("<p") && s.contains("given by its properties"));
+    }
+}
