@@ -294,14 +294,15 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     }
     let governing = modes
         .iter()
-        .copied()
         // Lowest resistance governs; on a tie (both axes capped at the squash
         // load, say) the more slender mode is named, as an engineer would.
+        // Compared by reference, so only the winner is copied.
         .min_by(|a, b| {
             a.resistance_kn
                 .total_cmp(&b.resistance_kn)
                 .then(b.slenderness.total_cmp(&a.slenderness))
         })
+        .copied()
         .unwrap_or(major);
     let resistance_kn = governing.resistance_kn;
     let utilisation = if resistance_kn > 0.0 {
