@@ -1,7 +1,9 @@
 //! The built-in catalogue of standard sections.
 //!
 //! Each series is a plain data file `core/data/<series>.csv`, embedded with
-//! `include_str!` and parsed once (on first use) into static entries. A
+//! `include_str!` (through the copy `build.rs` makes, which leaves the
+//! comment lines out of the browser build only) and parsed once (on first
+//! use) into static entries. A
 //! file opens with a comment block (`#`) naming its source, then
 //! directives (`@series`, `@shape`, `@make`, `@units`, `@corners`, `@wall`,
 //! `@tokens`, `@aliases`), a header line naming the columns, and one row per section
@@ -27,20 +29,38 @@ use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, Section, Secti
 
 /// The data files, in the order they are listed.
 const FILES: &[(&str, &str)] = &[
-    ("ipe", include_str!("../data/ipe.csv")),
-    ("hea", include_str!("../data/hea.csv")),
-    ("heb", include_str!("../data/heb.csv")),
-    ("hem", include_str!("../data/hem.csv")),
-    ("uc", include_str!("../data/uc.csv")),
-    ("ub", include_str!("../data/ub.csv")),
-    ("w", include_str!("../data/w.csv")),
-    ("hss", include_str!("../data/hss.csv")),
-    ("hss-round", include_str!("../data/hss-round.csv")),
-    ("shs-en10210", include_str!("../data/shs-en10210.csv")),
-    ("rhs-en10210", include_str!("../data/rhs-en10210.csv")),
-    ("chs-en10210", include_str!("../data/chs-en10210.csv")),
-    ("shs-en10219", include_str!("../data/shs-en10219.csv")),
-    ("chs-en10219", include_str!("../data/chs-en10219.csv")),
+    ("ipe", include_str!(concat!(env!("OUT_DIR"), "/ipe.csv"))),
+    ("hea", include_str!(concat!(env!("OUT_DIR"), "/hea.csv"))),
+    ("heb", include_str!(concat!(env!("OUT_DIR"), "/heb.csv"))),
+    ("hem", include_str!(concat!(env!("OUT_DIR"), "/hem.csv"))),
+    ("uc", include_str!(concat!(env!("OUT_DIR"), "/uc.csv"))),
+    ("ub", include_str!(concat!(env!("OUT_DIR"), "/ub.csv"))),
+    ("w", include_str!(concat!(env!("OUT_DIR"), "/w.csv"))),
+    ("hss", include_str!(concat!(env!("OUT_DIR"), "/hss.csv"))),
+    (
+        "hss-round",
+        include_str!(concat!(env!("OUT_DIR"), "/hss-round.csv")),
+    ),
+    (
+        "shs-en10210",
+        include_str!(concat!(env!("OUT_DIR"), "/shs-en10210.csv")),
+    ),
+    (
+        "rhs-en10210",
+        include_str!(concat!(env!("OUT_DIR"), "/rhs-en10210.csv")),
+    ),
+    (
+        "chs-en10210",
+        include_str!(concat!(env!("OUT_DIR"), "/chs-en10210.csv")),
+    ),
+    (
+        "shs-en10219",
+        include_str!(concat!(env!("OUT_DIR"), "/shs-en10219.csv")),
+    ),
+    (
+        "chs-en10219",
+        include_str!(concat!(env!("OUT_DIR"), "/chs-en10219.csv")),
+    ),
 ];
 
 /// Millimetres per inch (exact by definition).
@@ -82,7 +102,8 @@ pub struct Series {
     pub file: &'static str,
     /// The shape family of its entries.
     pub family: Family,
-    /// The file's header comment: the source and how the values were obtained.
+    /// The file's header comment: the source and how the values were
+    /// obtained (empty in the wasm32 build, whose copy has no comments).
     pub source: String,
     /// Units of the data file as published: "metric" (mm, cm2, cm4, kg/m)
     /// or "imperial" (in, in2, in4, lb/ft).

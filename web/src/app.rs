@@ -7,7 +7,7 @@ use std::sync::Arc;
 use leptos::ev;
 use leptos::prelude::*;
 use strutline_core::method::Method;
-use strutline_core::trace::Scope;
+use strutline_core::units::UnitSystem;
 use strutline_core::{Member, CAUTION};
 
 use crate::browser;
@@ -16,9 +16,11 @@ use crate::checks::{Checked, Checker};
 use crate::demo;
 use crate::fields::{self, Choice, Field, MaterialMode};
 use crate::listops::{self, Deleted, DeletedList};
-use crate::numtext::{fixed, for_input, working};
+use crate::numtext::{for_input, working};
+use crate::report;
 use crate::restraint::Restraint;
-use crate::status::{governing_text, status_text, utilisation_text, Standing};
+use crate::status::{status_text, utilisation_text, Standing};
+use crate::units_view::step_text;
 use crate::workspace::{decode, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX};
 
 /// Storage key of the theme preference.
@@ -67,6 +69,11 @@ struct Ctx {
     loaded_rev: StoredValue<u64>,
     overwrite_ok: StoredValue<bool>,
     save_pending: StoredValue<bool>,
+    /// The units shown and typed (the stored values stay SI).
+    units: RwSignal<UnitSystem>,
+    /// The calc sheet when open: the chart image of the member it was
+    /// opened from (id, PNG data URL), if there was one.
+    sheet: RwSignal<Option<Option<(String, String)>>>,
 }
 
 impl Ctx {
@@ -255,7 +262,10 @@ pub fn App() -> impl IntoView {
         loaded_rev: StoredValue::new(rev),
         overwrite_ok: StoredValue::new(false),
         save_pending: StoredValue::new(false),
+        units: RwSignal::new(crate::units_view::load()),
+        sheet: RwSignal::new(None),
     };
+    provide_context(ctx.units);
     if let Some((raw, reason)) = problem {
         set_problem(ctx, raw, reason);
     }
@@ -314,7 +324,17 @@ pub fn App() -> impl IntoView {
                 </button>
             </header>
             <Banners ctx=ctx />
-            <main class="panes">
+            <div class="tools screen-only">
+                <button type="button" data-testid="units-toggle" on:click=move |_| {
+                    let next = if ctx.units.get_untracked() == UnitSystem::Si { UnitSystem::Us } else { UnitSystem::Si };
+                    ctx.units.set(next);
+                    let _ = browser::set(crate::units_view::KEY, crate::units_view::stored_text(next));
+                    ctx.generation.update(|g| *g += 1);
+                }>{move || if ctx.units.get() == UnitSystem::Si { "Units: SI (kN, mm, MPa) · show US" } else { "Units: US (kip, in, ft, ksi) · show SI" }}</button>
+                <button type="button" data-testid="open-sheet" on:click=move |_| ctx.sheet.set(Some(chart_image(ctx)))>"⎙ Calc sheet of this list"</button>
+            </div>
+            {move || ctx.sheet.get().map(|img| view! { <CalcSheet ctx=ctx chart=img /> })}
+            <main class="panes" class:screen-only=move || ctx.sheet.with(Option::is_some)>
                 <section class="pane pane-list" aria-labelledby="h-list">
                     <ListPanel ctx=ctx />
                     <crate::exchange::Exchange ws=ws select=Callback::new(move |i| ctx.select(i)) />
@@ -753,6 +773,8 @@ fn NumField(
         .current()
         .map(|m| fields::read(&m, field.place, field.key))
         .unwrap_or_default();
+    let sys = ctx.units.get_untracked();
+    let initial = crate::units_view::to_field(sys, field.key, &initial);
     let error = RwSignal::new(None::<String>);
     let input_id = format!("f-{}", field.key);
     let err_id = format!("e-{}", field.key);
@@ -774,7 +796,7 @@ fn NumField(
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
                     aria-describedby=move || error.with(Option::is_some).then(|| err_id2.clone())
                     on:input=move |e| {
-                        let text = event_target_value(&e);
+                        let text = crate::units_view::from_field(sys, field.key, &event_target_value(&e));
                         let Some(m) = ctx.current() else { return; };
                         match fields::apply(&m, &field, &text) {
                             Ok(new) => match fields::engine_objection(&new, field.key) {
@@ -789,7 +811,7 @@ fn NumField(
                         }
                     }
                 />
-                {(!field.unit.is_empty()).then(|| view! { <span class="unit">{field.unit}</span> })}
+                {(!field.unit.is_empty()).then(|| view! { <span class="unit">{crate::units_view::field_unit(sys, field.key, field.unit)}</span> })}
             </div>
             {move || error.get().map(|msg| view! {
                 <p class="field-error" data-testid="field-error" id=err_id.clone()>"✎ " {msg}</p>
@@ -1083,148 +1105,62 @@ fn Editor(ctx: Ctx) -> impl IntoView {
     .into_any()
 }
 
-fn scope_title(s: Scope) -> &'static str {
-    match s {
-        Scope::Member => "Member",
-        Scope::Section => "Cross-section",
-        Scope::Major => "Major axis",
-        Scope::Minor => "Minor axis",
-        Scope::Torsional => "Torsional",
-        Scope::FlexuralTorsional => "Flexural-torsional",
-    }
-}
-
 #[component]
 fn Results(ctx: Ctx) -> impl IntoView {
     let current = Memo::new(move |_| {
         let sel = ctx.selected.get();
         ctx.checks.with(|c| c.0.get(sel).cloned())
     });
+    let units = ctx.units;
     view! {
         <h2 id="h-results" class="pane-title">"Result"</h2>
         <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
-        {move || match current.get() {
-            None => view! { <p class="empty">"No member selected."</p> }.into_any(),
-            Some(c) => verdict_view(&c).into_any(),
-        }}
+        <div class="verdict-block" inner_html=move || match current.get() {
+            None => "<p class=\"empty\">No member selected.</p>".to_string(),
+            Some(c) => report::verdict_html(&c, units.get()),
+        }></div>
         <Chart ctx=ctx current=current />
-        {move || current.get().map(|c| working_view(&c))}
+        <div class="working-block" inner_html=move || {
+            let sys = units.get();
+            current.get().and_then(|c| c.outcome.as_ref().ok().map(|r| report::working_html(r, sys))).unwrap_or_default()
+        }></div>
     }
 }
 
-fn verdict_view(c: &Checked) -> impl IntoView {
-    let standing = Standing::of(&c.outcome);
-    match &c.outcome {
-        Err(e) => view! {
-            <div class=format!("verdict {}", standing.class()) role="status">
-                <p class="verdict-status">{status_text(&c.outcome)}</p>
-                <p class="verdict-error">{fields::error_text(e)}</p>
-                <dl class="verdict-numbers">
-                    <dt>"utilisation"</dt><dd><span data-testid="result-utilisation">"—"</span></dd>
-                    <dt>"resistance"</dt><dd><span data-testid="result-resistance">"—"</span></dd>
-                    <dt>"governs"</dt><dd data-testid="result-governing">"—"</dd>
-                </dl>
-            </div>
-        }
-        .into_any(),
-        Ok(r) => {
-            let warnings = r.warnings.clone();
-            view! {
-                <div class=format!("verdict {}", standing.class()) role="status">
-                    <p class="verdict-status">{status_text(&c.outcome)}</p>
-                    <dl class="verdict-numbers">
-                        <dt>"utilisation N_Ed / N_Rd"</dt>
-                        <dd><span data-testid="result-utilisation">{fixed(r.utilisation, 3)}</span></dd>
-                        <dt>"resistance N_Rd"</dt>
-                        <dd><span data-testid="result-resistance">{fixed(r.resistance_kn, 1)}</span>" kN"</dd>
-                        <dt>"design load N_Ed"</dt>
-                        <dd>{fixed(c.member.axial_kn, 1)}" kN"</dd>
-                        <dt>"governs"</dt>
-                        <dd data-testid="result-governing">{governing_text(r)}</dd>
-                        <dt>"method"</dt>
-                        <dd>{r.method.title()}</dd>
-                    </dl>
-                </div>
-                {(!warnings.is_empty()).then(|| view! {
-                    <ul class="warnings" data-testid="warnings">
-                        {warnings.into_iter().map(|w| view! { <li>"⚠ " {w.message} " " <code>{w.code}</code></li> }.into_any()).collect::<Vec<_>>()}
-                    </ul>
-                })}
-            }
-            .into_any()
-        }
-    }
+/// The selected member's id and its chart as a PNG data URL.
+fn chart_image(ctx: Ctx) -> Option<(String, String)> {
+    let id = ctx.current()?.id;
+    let el = document().get_element_by_id("envelope")?;
+    let c: web_sys::HtmlCanvasElement = wasm_bindgen::JsCast::dyn_into(el).ok()?;
+    Some((id, c.to_data_url().ok()?))
 }
 
-fn working_view(c: &Checked) -> impl IntoView {
-    let Ok(r) = &c.outcome else {
-        return ().into_any();
-    };
-    let modes = r.modes.clone();
-    let scopes = [
-        Scope::Member,
-        Scope::Section,
-        Scope::Major,
-        Scope::Minor,
-        Scope::Torsional,
-        Scope::FlexuralTorsional,
-    ];
-    let groups: Vec<_> = scopes
-        .into_iter()
-        .filter_map(|s| {
-            let steps: Vec<_> = r.trace.iter().filter(|t| t.scope == s).cloned().collect();
-            (!steps.is_empty()).then_some((s, steps))
-        })
-        .collect();
+/// The calc sheet of the open list, built as text by
+/// [`report::sheet_html`], with buttons to print it and to close it.
+#[component]
+fn CalcSheet(ctx: Ctx, chart: Option<(String, String)>) -> impl IntoView {
+    let title = ctx
+        .ws
+        .with_untracked(|w| w.active_list().map(|l| l.title.clone()).unwrap_or_default());
+    let checks = ctx.checks.get_untracked();
+    let html = report::sheet_html(
+        &title,
+        &crate::print::today(),
+        &checks.0,
+        chart.as_ref().map(|(id, url)| (id.as_str(), url.as_str())),
+        ctx.units.get_untracked(),
+    );
     view! {
-                <div class="table-wrap" tabindex="0" role="region" aria-label="Modes checked">
-                    <table class="modes">
-                        <caption>"Modes checked"</caption>
-                        <thead><tr>
-                            <th scope="col">"mode"</th><th scope="col">"L_cr (mm)"</th><th scope="col">"L_cr/i"</th>
-                            <th scope="col">"N_cr (kN)"</th><th scope="col">"λ̄"</th><th scope="col">"reduction"</th><th scope="col">"N_Rd (kN)"</th>
-                        </tr></thead>
-                        <tbody>
-                            {modes.into_iter().map(|m| {
-                                let gov = m.mode == r.governing;
-                                view! {
-                                    <tr class:governs=gov>
-                                        <th scope="row">{m.mode.key()}{gov.then_some(" ◀ governs")}</th>
-                                        <td>{working(m.buckling_length_mm)}</td>
-                                        <td>{working(m.slenderness)}</td>
-                                        <td>{working(m.critical_kn)}</td>
-                                        <td>{working(m.relative_slenderness)}</td>
-                                        <td>{working(m.reduction)}</td>
-                                        <td>{fixed(m.resistance_kn, 1)}</td>
-                                    </tr>
-                                }
-                            }.into_any()).collect::<Vec<_>>()}
-                        </tbody>
-                    </table>
-                </div>
-                <h3 class="sub-title">"Working"</h3>
-                {groups.into_iter().map(|(s, steps)| view! {
-                    <details class="working" open=true>
-                        <summary>{scope_title(s)}</summary>
-                        <div class="table-wrap" tabindex="0" role="region" aria-label=format!("Working: {}", scope_title(s))>
-                            <table>
-                                <thead><tr><th scope="col">"symbol"</th><th scope="col">"meaning"</th><th scope="col">"value"</th><th scope="col">"from"</th></tr></thead>
-                                <tbody>
-                                    {steps.into_iter().map(|st| view! {
-                                        <tr>
-                                            <th scope="row"><code>{st.symbol.as_str()}</code></th>
-                                            <td>{st.label.as_str()}</td>
-                                            <td class="num">{working(st.value)} " " {if st.unit == "-" { "" } else { st.unit.as_str() }}</td>
-                                            <td class="clause">{st.clause.as_str()}</td>
-                                        </tr>
-                                    }.into_any()).collect::<Vec<_>>()}
-                                </tbody>
-                            </table>
-                        </div>
-                    </details>
-                }.into_any()).collect::<Vec<_>>()}
+        <div class="calc-sheet" data-testid="calc-sheet">
+            <div class="button-row screen-only">
+                <button type="button" data-testid="print" on:click=move |_| {
+                    if let Some(w) = web_sys::window() { let _ = w.print(); }
+                }>"⎙ Print or save as PDF"</button>
+                <button type="button" data-testid="close-sheet" on:click=move |_| ctx.sheet.set(None)>"Close the sheet"</button>
+            </div>
+            <div inner_html=html></div>
+        </div>
     }
-    .into_any()
 }
 
 /// The chart's legend as text: one element for the app to build, not
@@ -1259,6 +1195,8 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
         let c = current.get();
         let perry = ctx.perry.get();
         let hc = ctx.high_contrast.get();
+        let sys = ctx.units.get();
+        let us = sys == UnitSystem::Us;
         let _ = ctx.resize.get();
         let Some(el) = canvas.get() else {
             return;
@@ -1280,18 +1218,18 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
         });
         match data {
             Some(Ok(d)) => {
-                match chart::envelope::draw(&el, &d, dpr, hc) {
+                match chart::envelope::draw(&el, &d, dpr, hc, us) {
                     Ok(()) => note.set(None),
                     Err(e) => note.set(Some(e)),
                 }
                 described.set(match d.governing() {
                     Some(g) => format!(
-                        "Governing axis {}: slenderness {}, applied stress {} MPa, design stress {} MPa, plateau {} MPa.",
+                        "Governing axis {}: slenderness {}, applied stress {}, design stress {}, plateau {}.",
                         g.mode.key(),
                         working(g.slenderness),
-                        working(g.applied_mpa),
-                        working(g.resistance_mpa),
-                        working(d.yield_mpa)
+                        step_text(sys, "MPa", g.applied_mpa),
+                        step_text(sys, "MPa", g.resistance_mpa),
+                        step_text(sys, "MPa", d.yield_mpa)
                     ),
                     None => String::new(),
                 });

@@ -222,21 +222,7 @@ pub fn apply(members: &mut [Member], picks: &[(String, String)]) -> Option<Vec<M
     changed.then_some(before)
 }
 
-/// Text made safe for HTML content and quoted attributes.
-pub fn esc(s: &str) -> String {
-    let mut out = String::with_capacity(s.len());
-    for c in s.chars() {
-        match c {
-            '&' => out.push_str("&amp;"),
-            '<' => out.push_str("&lt;"),
-            '>' => out.push_str("&gt;"),
-            '"' => out.push_str("&quot;"),
-            '\'' => out.push_str("&#39;"),
-            c => out.push(c),
-        }
-    }
-    out
-}
+pub use crate::report::esc;
 
 /// The candidate table: one row per entry with its mass, the member's
 /// utilisation with it (engine, on a copy) and a button whose `data-act`

@@ -14,9 +14,11 @@ use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, FontTransform, IntoFont, RGBAColor, RGBColor};
 use plotters_canvas::CanvasBackend;
 use strutline_core::check::Mode;
+use strutline_core::units;
 use web_sys::HtmlCanvasElement;
 
 use super::data::{dashes, text_box, tick_step, ChartData, Frame};
+use crate::numtext::working;
 
 /// Colours of one theme.
 struct Palette {
@@ -77,17 +79,20 @@ fn err<E: std::fmt::Debug>(e: E) -> String {
 /// Draws `data` on `canvas` (already sized to CSS size x `dpr`) and records
 /// the governing marker on the canvas element for tests:
 /// `data-marker-slenderness`, `data-marker-stress-mpa` and `data-marker-px`
-/// ("x,y" in CSS pixels within the canvas).
+/// ("x,y" in CSS pixels within the canvas). The stress axis is labelled in
+/// MPa, or in ksi when `us` (the curves are the same; only the tick values
+/// and the unit change).
 pub fn draw(
     canvas: &HtmlCanvasElement,
     data: &ChartData,
     dpr: f64,
     high_contrast: bool,
+    us: bool,
 ) -> Result<(), String> {
     let backend = CanvasBackend::with_canvas_object(canvas.clone())
         .ok_or("chart: the canvas has no 2D context")?;
     let root = backend.into_drawing_area();
-    let px = draw_on(&root, data, dpr, &palette(high_contrast))?;
+    let px = draw_on(&root, data, dpr, &palette(high_contrast), us)?;
     root.present().map_err(err)?;
     if let Some((m_lambda, m_stress, (x, y))) = px {
         let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
@@ -108,6 +113,7 @@ fn draw_on<DB: DrawingBackend>(
     data: &ChartData,
     dpr: f64,
     pal: &Palette,
+    us: bool,
 ) -> Result<Governing, String>
 where
     DB::ErrorType: 'static,
@@ -135,7 +141,9 @@ where
 
     // Grid, ticks and their values.
     let xs = tick_step(data.x_max, if narrow { 5.0 } else { 10.0 });
-    let ys = tick_step(data.y_max, 8.0);
+    // Stress ticks at round values of the unit shown.
+    let per_mpa = if us { units::mpa_to_ksi(1.0) } else { 1.0 };
+    let ys = tick_step(data.y_max * per_mpa, 8.0) / per_mpa;
     let mut k = 0.0;
     while k * xs <= data.x_max + 1e-9 {
         let x = k * xs;
@@ -154,7 +162,7 @@ where
             .map_err(err)?;
         let (tx, ty) = px(0.0, y);
         let style = label.clone().pos(Pos::new(HPos::Right, VPos::Center));
-        root.draw(&Text::new(format!("{y:.0}"), (tx - si(6.0), ty), style))
+        root.draw(&Text::new(working(y * per_mpa), (tx - si(6.0), ty), style))
             .map_err(err)?;
         k += 1.0;
     }
@@ -174,7 +182,11 @@ where
     .map_err(err)?;
     let (_, cy) = px(0.0, data.y_max / 2.0);
     root.draw(&Text::new(
-        "failure stress N / A  (MPa)",
+        if us {
+            "failure stress N / A  (ksi)"
+        } else {
+            "failure stress N / A  (MPa)"
+        },
         (si(4.0), cy),
         title
             .transform(FontTransform::Rotate270)

@@ -1,0 +1,404 @@
+//! The result, its working and the calc sheet as HTML text.
+//!
+//! These parts only show values, so they are built as text and set as one
+//! element's content: the app then carries one small view for each of
+//! them rather than compiled code for every row and cell. Everything that
+//! comes from the person or a file (ids, notes, designations) goes through
+//! [`esc`], so imported text is shown as text, never read as markup.
+//! Values are shown in the chosen unit system ([`crate::units_view`]); the
+//! engine's values stay as computed.
+
+use std::fmt::Write;
+
+use strutline_core::trace::Scope;
+use strutline_core::units::UnitSystem;
+use strutline_core::{CheckResult, CAUTION};
+
+use crate::checks::Checked;
+use crate::fields;
+use crate::numtext::{fixed, working};
+use crate::status::{governing_text, status_text, utilisation_text, Standing};
+use crate::units_view::{result_text, step_text};
+
+/// Text made safe for HTML content and quoted attributes.
+pub fn esc(s: &str) -> String {
+    let mut out = String::with_capacity(s.len());
+    for c in s.chars() {
+        match c {
+            '&' => out.push_str("&amp;"),
+            '<' => out.push_str("&lt;"),
+            '>' => out.push_str("&gt;"),
+            '"' => out.push_str("&quot;"),
+            '\'' => out.push_str("&#39;"),
+            c => out.push(c),
+        }
+    }
+    out
+}
+
+/// The heading of a part of the working.
+pub fn scope_title(s: Scope) -> &'static str {
+    match s {
+        Scope::Member => "Member",
+        Scope::Section => "Cross-section",
+        Scope::Major => "Major axis",
+        Scope::Minor => "Minor axis",
+        Scope::Torsional => "Torsional",
+        Scope::FlexuralTorsional => "Flexural-torsional",
+    }
+}
+
+/// The parts of the working in the order they are shown.
+const SCOPES: [Scope; 6] = [
+    Scope::Member,
+    Scope::Section,
+    Scope::Major,
+    Scope::Minor,
+    Scope::Torsional,
+    Scope::FlexuralTorsional,
+];
+
+/// The verdict of one member: status, utilisation, resistance, load,
+/// governing mode and method, then its warnings; or what stops the check.
+pub fn verdict_html(c: &Checked, sys: UnitSystem) -> String {
+    let standing = Standing::of(&c.outcome);
+    let mut h = format!(
+        "<div class=\"verdict {}\" role=\"status\"><p class=\"verdict-status\">{}</p>",
+        standing.class(),
+        status_text(&c.outcome)
+    );
+    let dash = "<span data-testid=\"result-utilisation\">—</span>";
+    match &c.outcome {
+        Err(e) => {
+            let _ = write!(
+                h,
+                "<p class=\"verdict-error\">{}</p><dl class=\"verdict-numbers\">\
+                 <dt>utilisation</dt><dd>{dash}</dd>\
+                 <dt>resistance</dt><dd><span data-testid=\"result-resistance\">—</span></dd>\
+                 <dt>governs</dt><dd data-testid=\"result-governing\">—</dd></dl></div>",
+                esc(&fields::error_text(e))
+            );
+        }
+        Ok(r) => {
+            let rd_text = result_text(sys, "kN", r.resistance_kn, 1);
+            let (rd, ru) = split_unit(&rd_text);
+            let _ = write!(
+                h,
+                "<dl class=\"verdict-numbers\">\
+                 <dt>utilisation N_Ed / N_Rd</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
+                 <dt>resistance N_Rd</dt><dd><span data-testid=\"result-resistance\">{rd}</span> {ru}</dd>\
+                 <dt>design load N_Ed</dt><dd>{}</dd>\
+                 <dt>governs</dt><dd data-testid=\"result-governing\">{}</dd>\
+                 <dt>method</dt><dd>{}</dd></dl></div>",
+                fixed(r.utilisation, 3),
+                result_text(sys, "kN", c.member.axial_kn, 1),
+                governing_text(r),
+                r.method.title(),
+            );
+            h.push_str(&warnings_html(r));
+        }
+    }
+    h
+}
+
+/// "12.3 kN" as ("12.3", "kN").
+fn split_unit(s: &str) -> (&str, &str) {
+    s.split_once(' ').unwrap_or((s, ""))
+}
+
+/// The warnings of a result as a list (empty text when there are none).
+pub fn warnings_html(r: &CheckResult) -> String {
+    if r.warnings.is_empty() {
+        return String::new();
+    }
+    let mut h = String::from("<ul class=\"warnings\" data-testid=\"warnings\">");
+    for w in &r.warnings {
+        let _ = write!(h, "<li>⚠ {} <code>{}</code></li>", esc(&w.message), w.code);
+    }
+    h.push_str("</ul>");
+    h
+}
+
+/// A table cell with a value converted for display, unit in the header.
+fn cell(sys: UnitSystem, unit: &'static str, v: f64) -> String {
+    let t = step_text(sys, unit, v);
+    format!("<td class=\"num\">{}</td>", split_unit(&t).0)
+}
+
+/// The unit a column of the modes table is headed with.
+fn head_unit(sys: UnitSystem, unit: &'static str) -> &'static str {
+    crate::units_view::shown(sys, unit, 1.0, false).1
+}
+
+/// Every mode checked, the governing one marked, then each part of the
+/// working with its symbol, meaning, value and unit, and clause.
+pub fn working_html(r: &CheckResult, sys: UnitSystem) -> String {
+    let mut h = format!(
+        "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Modes checked\">\
+         <table class=\"modes\"><caption>Modes checked</caption><thead><tr>\
+         <th scope=\"col\">mode</th><th scope=\"col\">L_cr ({})</th><th scope=\"col\">L_cr/i</th>\
+         <th scope=\"col\">N_cr ({})</th><th scope=\"col\">λ̄</th><th scope=\"col\">reduction</th>\
+         <th scope=\"col\">N_Rd ({})</th></tr></thead><tbody>",
+        head_unit(sys, "mm"),
+        head_unit(sys, "kN"),
+        head_unit(sys, "kN"),
+    );
+    for m in &r.modes {
+        let gov = m.mode == r.governing;
+        let _ = write!(
+            h,
+            "<tr{}><th scope=\"row\">{}{}</th>{}<td class=\"num\">{}</td>{}<td class=\"num\">{}</td><td class=\"num\">{}</td>{}</tr>",
+            if gov { " class=\"governs\"" } else { "" },
+            m.mode.key(),
+            if gov { " ◀ governs" } else { "" },
+            cell(sys, "mm", m.buckling_length_mm),
+            working(m.slenderness),
+            cell(sys, "kN", m.critical_kn),
+            working(m.relative_slenderness),
+            working(m.reduction),
+            cell(sys, "kN", m.resistance_kn),
+        );
+    }
+    h.push_str("</tbody></table></div><h3 class=\"sub-title\">Working</h3>");
+    for s in SCOPES {
+        let mut rows = String::new();
+        for st in r.trace.iter().filter(|t| t.scope == s) {
+            let _ = write!(
+                rows,
+                "<tr><th scope=\"row\"><code>{}</code></th><td>{}</td><td class=\"num\">{}</td><td class=\"clause\">{}</td></tr>",
+                esc(st.symbol.as_str()),
+                esc(st.label.as_str()),
+                step_text(sys, st.unit.as_str(), st.value),
+                esc(st.clause.as_str()),
+            );
+        }
+        if rows.is_empty() {
+            continue;
+        }
+        let title = scope_title(s);
+        let _ = write!(
+            h,
+            "<details class=\"working\" open><summary>{title}</summary>\
+             <div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Working: {title}\"><table>\
+             <thead><tr><th scope=\"col\">symbol</th><th scope=\"col\">meaning</th><th scope=\"col\">value</th>\
+             <th scope=\"col\">from</th></tr></thead><tbody>{rows}</tbody></table></div></details>"
+        );
+    }
+    h
+}
+
+/// The section properties a result reports, as a definition list.
+fn properties_html(r: &CheckResult, sys: UnitSystem) -> String {
+    let p = &r.section;
+    let rows: [(&str, &'static str, f64); 7] = [
+        ("A", "mm2", p.area_mm2),
+        ("I major", "mm4", p.i_major_mm4),
+        ("I minor", "mm4", p.i_minor_mm4),
+        ("i major", "mm", p.r_major_mm),
+        ("i minor", "mm", p.r_minor_mm),
+        ("I_t", "mm4", p.torsion_mm4),
+        ("I_w", "mm6", p.warping_mm6),
+    ];
+    let mut h = String::from("<dl class=\"sheet-props\">");
+    for (name, unit, v) in rows {
+        let _ = write!(h, "<dt>{name}</dt><dd>{}</dd>", step_text(sys, unit, v));
+    }
+    let _ = write!(
+        h,
+        "<dt>f</dt><dd>{}</dd><dt>E</dt><dd>{}</dd></dl>",
+        step_text(sys, "MPa", r.strength_mpa),
+        step_text(sys, "MPa", r.modulus_mpa)
+    );
+    h
+}
+
+/// The calc sheet of a list: a summary page, then a page for each member
+/// with its inputs, section properties, verdict, modes and working,
+/// warnings, the envelope of the member it was opened from (`chart`: id
+/// and image URL) and the caution on every page.
+pub fn sheet_html(
+    title: &str,
+    date: &str,
+    checks: &[std::sync::Arc<Checked>],
+    chart: Option<(&str, &str)>,
+    sys: UnitSystem,
+) -> String {
+    let title = esc(title);
+    let caution = format!("<p class=\"caution\">⚠ {CAUTION}</p>");
+    let mut h = format!(
+        "<section class=\"sheet-page\" data-testid=\"sheet-summary\"><h2>Calculation: {title}</h2>\
+         <p class=\"sheet-meta\">{date} · {} members · {}</p>\
+         <table class=\"sheet-summary\"><thead><tr><th scope=\"col\">member</th><th scope=\"col\">section</th>\
+         <th scope=\"col\">method</th><th scope=\"col\">N_Ed</th><th scope=\"col\">N_Rd</th>\
+         <th scope=\"col\">utilisation</th><th scope=\"col\">status</th></tr></thead><tbody>",
+        checks.len(),
+        sys_name(sys),
+    );
+    for c in checks {
+        let rd = c
+            .outcome
+            .as_ref()
+            .map_or("—".into(), |r| result_text(sys, "kN", r.resistance_kn, 1));
+        let _ = write!(
+            h,
+            "<tr><th scope=\"row\">{}</th><td>{}</td><td>{}</td><td class=\"num\">{}</td><td class=\"num\">{rd}</td>\
+             <td class=\"num\">{}</td><td>{}</td></tr>",
+            esc(&c.member.id),
+            esc(&c.member.section.describe()),
+            c.member.method.title(),
+            result_text(sys, "kN", c.member.axial_kn, 1),
+            utilisation_text(&c.outcome),
+            status_text(&c.outcome),
+        );
+    }
+    let _ = write!(h, "</tbody></table>{caution}</section>");
+    for c in checks {
+        let id = esc(&c.member.id);
+        let _ = write!(
+            h,
+            "<section class=\"sheet-page\" data-testid=\"sheet-page\"><h2>Member {id}</h2>\
+             <p class=\"sheet-meta\">{title} · {date} · {}</p><h3>Inputs</h3><dl class=\"sheet-inputs\">",
+            esc(&c.member.section.describe())
+        );
+        for (k, v) in crate::print::inputs(sys, &c.member) {
+            let _ = write!(h, "<dt>{}</dt><dd>{}</dd>", esc(&k), esc(&v));
+        }
+        h.push_str("</dl>");
+        if let Ok(r) = &c.outcome {
+            h.push_str("<h3>Section and material</h3>");
+            h.push_str(&properties_html(r, sys));
+        }
+        h.push_str("<h3>Result</h3>");
+        h.push_str(&verdict_html(c, sys));
+        if let Ok(r) = &c.outcome {
+            h.push_str(&working_html(r, sys));
+        }
+        if let Some((_, url)) = chart.filter(|(cid, _)| *cid == c.member.id) {
+            let _ = write!(
+                h,
+                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {id}\">",
+                esc(url)
+            );
+        }
+        let _ = write!(h, "{caution}</section>");
+    }
+    h
+}
+
+/// The unit system in words, for the sheet.
+fn sys_name(sys: UnitSystem) -> &'static str {
+    match sys {
+        UnitSystem::Si => "SI units (kN, mm, MPa)",
+        UnitSystem::Us => "US customary units (kip, in, ft, ksi)",
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::demo;
+    use std::sync::Arc;
+
+    fn checked(id: &str) -> Checked {
+        Checked::new(&demo::sample_member(id))
+    }
+
+    #[test]
+    fn escapes_markup() {
+        assert_eq!(esc("<b a=\"x\">&'"), "&lt;b a=&quot;x&quot;&gt;&amp;&#39;");
+    }
+
+    #[test]
+    fn verdict_shows_the_engine_figures() {
+        let c = checked("C1");
+        let r = c.outcome.as_ref().unwrap();
+        let h = verdict_html(&c, UnitSystem::Si);
+        assert!(h.contains(&format!(
+            "<span data-testid=\"result-utilisation\">{:.3}</span>",
+            r.utilisation
+        )));
+        assert!(h.contains(&format!("{:.1}</span> kN", r.resistance_kn)));
+        // 1 kip = 4.4482216152605 kN exactly (the pound-force by definition).
+        let us = verdict_html(&c, UnitSystem::Us);
+        let kip = r.resistance_kn / 4.448_221_615_260_5;
+        let shown: f64 = us
+            .split("result-resistance\">")
+            .nth(1)
+            .unwrap()
+            .split('<')
+            .next()
+            .unwrap()
+            .parse()
+            .unwrap();
+        // Shown to four significant figures.
+        assert!((shown - kip).abs() <= kip.abs() * 5e-4, "{shown} vs {kip}");
+        assert!(us.contains("</span> kip"));
+    }
+
+    #[test]
+    fn input_errors_are_text_not_markup() {
+        let mut m = demo::sample_member("<img src=x>");
+        m.length_mm = -1.0;
+        let c = Checked::new(&m);
+        let h = verdict_html(&c, UnitSystem::Si);
+        assert!(h.contains("fix input"));
+        assert!(!h.contains("<img"));
+        let sheet = sheet_html(
+            "<script>",
+            "2026-12-01",
+            &[Arc::new(c)],
+            None,
+            UnitSystem::Si,
+        );
+        assert!(!sheet.contains("<script>") && !sheet.contains("<img src=x>"));
+        assert!(sheet.contains("&lt;img src=x&gt;"));
+    }
+
+    #[test]
+    fn working_marks_the_governing_mode_and_every_step() {
+        let c = checked("C2");
+        let r = c.outcome.as_ref().unwrap();
+        let h = working_html(r, UnitSystem::Si);
+        assert_eq!(h.matches("◀ governs").count(), 1);
+        assert_eq!(
+            h.matches("<tr><th scope=\"row\"><code>").count(),
+            r.trace.len()
+        );
+        assert_eq!(
+            h.matches("<tr").count(),
+            r.trace.len() + r.modes.len() + 1 + groups(r)
+        );
+    }
+
+    fn groups(r: &CheckResult) -> usize {
+        SCOPES
+            .iter()
+            .filter(|s| r.trace.iter().any(|t| t.scope == **s))
+            .count()
+    }
+
+    #[test]
+    fn sheet_has_a_page_per_member_and_the_caution_on_each() {
+        let cs: Vec<_> = ["A1", "A2", "A3"]
+            .iter()
+            .map(|i| Arc::new(checked(i)))
+            .collect();
+        let h = sheet_html(
+            "Depot",
+            "2026-12-01",
+            &cs,
+            Some(("A2", "data:image/png;base64,AA")),
+            UnitSystem::Si,
+        );
+        assert_eq!(h.matches("data-testid=\"sheet-page\"").count(), 3);
+        assert_eq!(h.matches(CAUTION).count(), 4);
+        assert_eq!(h.matches("<img class=\"sheet-chart\"").count(), 1);
+        assert!(h.contains("Member A2"));
+    }
+}
