@@ -25,12 +25,11 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     let all_pass = results.iter().all(|r| r.passes);
     if json {
         let out = serde_json::json!({ "results": results, "caution": CAUTION });
-        println!(
-            "{}",
-            serde_json::to_string_pretty(&out).map_err(|e| e.to_string())?
-        );
+        let mut text = serde_json::to_string_pretty(&out).map_err(|e| e.to_string())?;
+        text.push('\n');
+        crate::emit(&text)?;
     } else {
-        print!("{}", table(&file.title, &file.members, &results));
+        crate::emit(&table(&file.title, &file.members, &results))?;
     }
     Ok(if all_pass { 0 } else { 1 })
 }

@@ -77,7 +77,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
                 }
             }
             "-h" | "--help" => {
-                println!("{USAGE}");
+                crate::emit(&format!("{USAGE}\n"))?;
                 return Ok(0);
             }
             flag if flag.starts_with("--") => {
@@ -94,10 +94,10 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     let out_format = output_format(output)?;
     if let Ok(meta) = std::fs::metadata(input) {
         if meta.len() > MAX_BYTES as u64 {
-            eprintln!(
+            crate::note(&format!(
                 "{input}: the file is {} bytes; the largest accepted is {MAX_BYTES} bytes",
                 meta.len()
-            );
+            ));
             return Ok(2);
         }
     }
@@ -106,8 +106,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         Format::Json => match file::parse(&text) {
             Ok(f) => (f, Vec::new()),
             Err(e) => {
-                eprintln!("{input}: {e}");
-                eprintln!("nothing written");
+                crate::note(&format!("{input}: {e}\nnothing written"));
                 return Ok(2);
             }
         },
@@ -117,16 +116,16 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         }
     };
     for p in &problems {
-        eprintln!("{input}: {p}");
+        crate::note(&format!("{input}: {p}"));
     }
     if !problems.is_empty() && !take_valid {
-        eprintln!(
+        crate::note(&format!(
             "{input}: {} problem{}; nothing written (fix them, or give --take-valid to write the {} valid member{})",
             problems.len(),
             if problems.len() == 1 { "" } else { "s" },
             members.members.len(),
             if members.members.len() == 1 { "" } else { "s" },
-        );
+        ));
         return Ok(2);
     }
     let body = match out_format {
@@ -134,11 +133,11 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         Format::Csv => csv::to_csv_in(&members, system),
     };
     write_atomically(output, &body)?;
-    println!(
-        "{output}: {} member{} written",
+    crate::emit(&format!(
+        "{output}: {} member{} written\n",
         members.members.len(),
         if members.members.len() == 1 { "" } else { "s" }
-    );
+    ))?;
     Ok(if problems.is_empty() { 0 } else { 2 })
 }
 

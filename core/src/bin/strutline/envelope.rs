@@ -25,20 +25,12 @@ pub fn run(args: &[String]) -> Result<i32, String> {
             .ok_or("--steps: expected a whole number from 1 to 100000")?,
         None => 125,
     };
-    let mut skip_next = false;
     let mut path = None;
-    for a in args {
-        if skip_next {
-            skip_next = false;
-            continue;
-        }
-        if matches!(a.as_str(), "--member" | "--to" | "--steps") {
-            skip_next = true;
-        } else if a.starts_with("--") {
+    for a in crate::others(args, &["--member", "--to", "--steps"]) {
+        if a.starts_with("--") {
             return Err(format!("envelope: unknown option {a}"));
-        } else {
-            path = Some(a.as_str());
         }
+        path = Some(a);
     }
     let path = path.ok_or("envelope needs a FILE")?;
     let file = crate::read_members(path)?;
@@ -51,12 +43,14 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         .map_err(|e| format!("{path}: {e}"))?;
     let minor = envelope::sample(&prepared, method, Mode::Minor, 0.0, to, steps)
         .map_err(|e| format!("{path}: {e}"))?;
-    println!("slenderness,euler_mpa,yield_mpa,design_major_mpa,design_minor_mpa");
+    let mut text = String::with_capacity(48 * (major.len() + 1));
+    text.push_str("slenderness,euler_mpa,yield_mpa,design_major_mpa,design_minor_mpa\n");
     for (a, b) in major.iter().zip(minor.iter()) {
-        println!(
-            "{:.3},{:.3},{:.3},{:.3},{:.3}",
+        text.push_str(&format!(
+            "{:.3},{:.3},{:.3},{:.3},{:.3}\n",
             a.slenderness, a.euler_mpa, a.yield_mpa, a.design_mpa, b.design_mpa
-        );
+        ));
     }
+    crate::emit(&text)?;
     Ok(0)
 }

@@ -11,18 +11,6 @@ use strutline_core::section::Family;
 
 const USAGE: &str = "usage: strutline sections [--series NAME] [--family i|rhs|chs] [--json]";
 
-/// Writes `text` to standard output; a closed pipe (`| head`) is not an
-/// error.
-pub fn emit(text: &str) -> Result<(), String> {
-    use std::io::Write;
-    let mut out = std::io::stdout().lock();
-    match out.write_all(text.as_bytes()).and_then(|()| out.flush()) {
-        Ok(()) => Ok(()),
-        Err(e) if e.kind() == std::io::ErrorKind::BrokenPipe => Ok(()),
-        Err(e) => Err(format!("cannot write the output: {e}")),
-    }
-}
-
 /// The known series, for messages.
 pub fn known_series() -> String {
     catalogue::series()
@@ -40,6 +28,24 @@ pub fn family(name: &str) -> Option<Family> {
         "chs" | "tube" | "pipe" => Some(Family::Chs),
         _ => None,
     }
+}
+
+/// The flags that name candidate sections, each taking a value.
+pub const CANDIDATE_FLAGS: [&str; 2] = ["--series", "--family"];
+
+/// The values of `--series NAME` and `--family F`, if given.
+pub fn candidate_flags<'a>(
+    args: &'a [String],
+    usage: &str,
+) -> Result<(Option<&'a str>, Option<&'a str>), String> {
+    let value = |flag| crate::flag_value(args, flag).map_err(|e| format!("{e}; {usage}"));
+    Ok((value("--series")?, value("--family")?))
+}
+
+/// Prints `usage` and the known series; status 0.
+pub fn help(usage: &str) -> Result<i32, String> {
+    crate::emit(&format!("{usage}\nknown series: {}\n", known_series()))?;
+    Ok(0)
 }
 
 /// A selection of entries: a label and the entries.
@@ -189,36 +195,19 @@ fn table(entries: &[&Entry]) -> String {
 
 /// Runs the subcommand with the arguments after `sections`.
 pub fn run(args: &[String]) -> Result<i32, String> {
-    let mut series: Option<&str> = None;
-    let mut family_name: Option<&str> = None;
+    let (series, family_name) = candidate_flags(args, USAGE)?;
     let mut json_out = false;
-    let mut it = args.iter();
-    while let Some(a) = it.next() {
-        match a.as_str() {
-            "--series" => {
-                series = Some(
-                    it.next()
-                        .ok_or_else(|| format!("--series needs a name; {USAGE}"))?,
-                )
-            }
-            "--family" => {
-                family_name = Some(
-                    it.next()
-                        .ok_or_else(|| format!("--family needs i, rhs or chs; {USAGE}"))?,
-                )
-            }
+    for a in crate::others(args, &CANDIDATE_FLAGS) {
+        match a {
             "--json" => json_out = true,
-            "--help" | "-h" => {
-                println!("{USAGE}\nknown series: {}", known_series());
-                return Ok(0);
-            }
+            "--help" | "-h" => return help(USAGE),
             other => return Err(format!("sections: unknown argument \"{other}\"; {USAGE}")),
         }
     }
     let selection = match select(series, family_name) {
         Ok(s) => s,
         Err(message) => {
-            eprintln!("strutline: {message}");
+            crate::note(&format!("strutline: {message}"));
             return Ok(2);
         }
     };
@@ -227,7 +216,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         let doc = json!({ "sections": sections });
         let mut text = serde_json::to_string_pretty(&doc).map_err(|e| e.to_string())?;
         text.push('\n');
-        emit(&text)?;
+        crate::emit(&text)?;
     } else {
         let mut text = table(&selection.entries);
         if selection
@@ -245,7 +234,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
             selection.entries.len(),
             selection.label
         ));
-        emit(&text)?;
+        crate::emit(&text)?;
     }
     Ok(0)
 }

@@ -111,42 +111,22 @@ fn table(results: &[SizingResult<'_>]) -> String {
 /// Runs the subcommand with the arguments after `size`.
 pub fn run(args: &[String]) -> Result<i32, String> {
     let mut path: Option<&str> = None;
-    let mut series: Option<&str> = None;
-    let mut family: Option<&str> = None;
-    let mut limit = 1.0;
+    let (series, family) = crate::sections::candidate_flags(args, USAGE)?;
+    let limit = match crate::flag_value(args, "--limit").map_err(|e| format!("{e}; {USAGE}"))? {
+        None => 1.0,
+        Some(v) => v
+            .parse::<f64>()
+            .ok()
+            .filter(|u| u.is_finite() && *u > 0.0)
+            .ok_or_else(|| {
+                format!("--limit: \"{v}\" is not a utilisation limit greater than 0, such as 0.9")
+            })?,
+    };
     let mut json_out = false;
-    let mut it = args.iter();
-    while let Some(a) = it.next() {
-        match a.as_str() {
-            "--series" => {
-                series = Some(
-                    it.next()
-                        .ok_or_else(|| format!("--series needs a name; {USAGE}"))?,
-                )
-            }
-            "--family" => {
-                family = Some(
-                    it.next()
-                        .ok_or_else(|| format!("--family needs i, rhs or chs; {USAGE}"))?,
-                )
-            }
-            "--limit" => {
-                let v = it
-                    .next()
-                    .ok_or_else(|| format!("--limit needs a number such as 0.9; {USAGE}"))?;
-                limit = v
-                    .parse::<f64>()
-                    .ok()
-                    .filter(|u| u.is_finite() && *u > 0.0)
-                    .ok_or_else(|| {
-                        format!("--limit: \"{v}\" is not a utilisation limit greater than 0, such as 0.9")
-                    })?;
-            }
+    for a in crate::others(args, &["--series", "--family", "--limit"]) {
+        match a {
             "--json" => json_out = true,
-            "--help" | "-h" => {
-                println!("{USAGE}\nknown series: {}", crate::sections::known_series());
-                return Ok(0);
-            }
+            "--help" | "-h" => return crate::sections::help(USAGE),
             other if other.starts_with("--") => {
                 return Err(format!("size: unknown option \"{other}\"; {USAGE}"))
             }
@@ -168,7 +148,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
     let selection = match crate::sections::select(series, family) {
         Ok(s) => s,
         Err(message) => {
-            eprintln!("strutline: {message}");
+            crate::note(&format!("strutline: {message}"));
             return Ok(2);
         }
     };
@@ -184,7 +164,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
         });
         let mut text = serde_json::to_string_pretty(&doc).map_err(|e| e.to_string())?;
         text.push('\n');
-        crate::sections::emit(&text)?;
+        crate::emit(&text)?;
     } else {
         let text = format!(
             "{} members against {} ({} sections), utilisation limit {limit}\n{}",
@@ -193,7 +173,7 @@ pub fn run(args: &[String]) -> Result<i32, String> {
             sizer.len(),
             table(&results)
         );
-        crate::sections::emit(&text)?;
+        crate::emit(&text)?;
     }
     Ok(0)
 }
