@@ -336,14 +336,8 @@ fn rhs_flat(side: f64, t: f64, outer: f64, inner: Option<f64>) -> f64 {
 pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Option<Classified> {
     let epsilon = (235.0 / fy_mpa).sqrt();
     let mut out = Classified::new(code, epsilon);
-    let mut raws = [raw(Part::IWeb, Kind::Rule, 0.0, 1.0, 0, 0); 4];
-    let mut n = 0usize;
-    let mut add = |r: Raw| {
-        if let Some(slot) = raws.get_mut(n) {
-            *slot = r;
-            n += 1;
-        }
-    };
+    // Each plate is classified as it is found (no list of raw plates first).
+    let mut add = |r: Raw| out.push(element(code, epsilon, fy_mpa, e_mpa, &r));
     let en = code == Code::En1993;
     let aisc = code == Code::Aisc360;
     match spec {
@@ -534,51 +528,53 @@ pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Opti
             return classify(code, &entry.spec, fy_mpa, e_mpa);
         }
     }
-    for r in raws.iter().take(n) {
-        let ratio = if r.t > 0.0 {
-            r.width / r.t
-        } else {
-            f64::INFINITY
-        };
-        let (class, limit, limit_slender) = match code {
-            Code::En1993 => {
-                if r.kind == Kind::Rule {
-                    let l = if r.part == Part::AngleDepthRule {
-                        15.0 * epsilon
-                    } else {
-                        11.5 * epsilon
-                    };
-                    (if ratio <= l { 3 } else { 4 }, l, l)
-                } else {
-                    let lim = en_limits(r.kind, epsilon);
-                    let (c, l) = en_class(ratio, lim);
-                    (c, l, lim[2])
-                }
-            }
-            Code::Aisc360 => {
-                let l = aisc_lambda_r(r.case, e_mpa, fy_mpa, r.kc);
-                (if ratio <= l { 3 } else { 4 }, l, l)
-            }
-            Code::CsaS16 => {
-                let l = csa_limit(r.part, fy_mpa);
-                (if ratio <= l { 3 } else { 4 }, l, l)
-            }
-        };
-        out.push(Element {
-            part: r.part,
-            kind: r.kind,
-            width_mm: r.width,
-            eff_width_mm: r.eff_width,
-            thickness_mm: r.t,
-            count: r.count,
-            ratio,
-            limit,
-            limit_slender,
-            class,
-            aisc_case: r.case,
-        });
-    }
     Some(out)
+}
+
+/// Classifies one plate by the code's limits.
+fn element(code: Code, epsilon: f64, fy_mpa: f64, e_mpa: f64, r: &Raw) -> Element {
+    let ratio = if r.t > 0.0 {
+        r.width / r.t
+    } else {
+        f64::INFINITY
+    };
+    let (class, limit, limit_slender) = match code {
+        Code::En1993 => {
+            if r.kind == Kind::Rule {
+                let l = if r.part == Part::AngleDepthRule {
+                    15.0 * epsilon
+                } else {
+                    11.5 * epsilon
+                };
+                (if ratio <= l { 3 } else { 4 }, l, l)
+            } else {
+                let lim = en_limits(r.kind, epsilon);
+                let (c, l) = en_class(ratio, lim);
+                (c, l, lim[2])
+            }
+        }
+        Code::Aisc360 => {
+            let l = aisc_lambda_r(r.case, e_mpa, fy_mpa, r.kc);
+            (if ratio <= l { 3 } else { 4 }, l, l)
+        }
+        Code::CsaS16 => {
+            let l = csa_limit(r.part, fy_mpa);
+            (if ratio <= l { 3 } else { 4 }, l, l)
+        }
+    };
+    Element {
+        part: r.part,
+        kind: r.kind,
+        width_mm: r.width,
+        eff_width_mm: r.eff_width,
+        thickness_mm: r.t,
+        count: r.count,
+        ratio,
+        limit,
+        limit_slender,
+        class,
+        aisc_case: r.case,
+    }
 }
 
 #[cfg(test)]
