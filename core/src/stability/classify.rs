@@ -199,13 +199,14 @@ pub struct Classified {
 }
 
 impl Classified {
-    fn new(code: Code, epsilon: f64) -> Classified {
+    /// No elements yet, for `code` and yield strength `fy_mpa`.
+    pub(crate) fn start(code: Code, fy_mpa: f64) -> Classified {
         Classified {
             items: [EMPTY; 4],
             len: 0,
             code,
             class: 1,
-            epsilon,
+            epsilon: (235.0 / fy_mpa).sqrt(),
         }
     }
 
@@ -334,8 +335,15 @@ fn rhs_flat(side: f64, t: f64, outer: f64, inner: Option<f64>) -> f64 {
 /// when the section has no known plates (typed properties, unknown
 /// catalogue entries); a solid section has no elements and is Class 1.
 pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Option<Classified> {
-    let epsilon = (235.0 / fy_mpa).sqrt();
-    let mut out = Classified::new(code, epsilon);
+    let mut out = Classified::start(code, fy_mpa);
+    fill(spec, fy_mpa, e_mpa, &mut out).then_some(out)
+}
+
+/// [`classify`] into `out`, a [`Classified::start`] of the code and f_y
+/// (the check classifies in place); `false` when the section has no known
+/// plates.
+pub(crate) fn fill(spec: &SectionSpec, fy_mpa: f64, e_mpa: f64, out: &mut Classified) -> bool {
+    let (code, epsilon) = (out.code, out.epsilon);
     // Each plate is classified as it is found (no list of raw plates first).
     let mut add = |r: Raw| out.push(element(code, epsilon, fy_mpa, e_mpa, &r));
     let en = code == Code::En1993;
@@ -522,13 +530,13 @@ pub fn classify(code: Code, spec: &SectionSpec, fy_mpa: f64, e_mpa: f64) -> Opti
             }
         }
         SectionSpec::Rect(_) | SectionSpec::Round(_) => {}
-        SectionSpec::Given(_) => return None,
+        SectionSpec::Given(_) => return false,
         SectionSpec::Catalogue(c) => {
-            let entry = crate::catalogue::resolve(&c.designation).ok()?;
-            return classify(code, &entry.spec, fy_mpa, e_mpa);
+            return crate::catalogue::resolve(&c.designation)
+                .is_ok_and(|entry| fill(&entry.spec, fy_mpa, e_mpa, out));
         }
     }
-    Some(out)
+    true
 }
 
 /// Classifies one plate by the code's limits.

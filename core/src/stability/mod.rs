@@ -185,15 +185,19 @@ pub fn assess(
     };
     let section = input.section;
     // Classified in place: the classification is a few hundred bytes.
-    out.classified = classify::classify(code, &section.spec, steel.fy_mpa, steel.e_mpa);
-    let Some(c) = &out.classified else {
+    let c = out
+        .classified
+        .insert(classify::Classified::start(code, steel.fy_mpa));
+    if !classify::fill(&section.spec, steel.fy_mpa, steel.e_mpa, c) {
+        out.classified = None;
         warn(warnings, "local-buckling-not-checked", || {
             "local buckling is not checked for typed section properties: the plates are unknown; \
              classify the section by hand (it must not be slender / Class 4)"
                 .to_string()
         });
         return out;
-    };
+    }
+    let c = &*c;
     trace_classification(c, trace);
     if !c.is_slender() {
         return out;
