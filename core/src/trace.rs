@@ -1,11 +1,12 @@
 //! The working of a check: each intermediate value with its symbol, meaning,
 //! unit and the clause or equation it comes from.
 //!
-//! A check writes some forty lines of working, so a line is kept small: its
-//! four texts are [`Sym`]s, one pointer each (natively) to a static `&str`. Write lines
-//! with [`step!`](crate::trace::step), which takes the texts as literals (or
-//! as [`Sym`]s chosen at run time); [`push`] takes plain `&'static str`s for
-//! text that only exists as such.
+//! A check writes some forty lines of working, so a line is kept small
+//! (natively 40 bytes, was 80): the symbol and its unit are one [`Symbol`],
+//! label and clause a [`Sym`] each, every one a single pointer to static
+//! text. Write lines with [`step!`](crate::trace::step), which takes the
+//! texts as literals (label and clause also as [`Sym`]s chosen at run time);
+//! [`push`] takes plain `&'static str`s for text that only exists as such.
 
 #[cfg(not(target_arch = "wasm32"))]
 use std::cell::RefCell;
@@ -36,7 +37,7 @@ pub enum Scope {
 ///
 /// Natively it is one pointer, to a static `&str` (a string literal's,
 /// through [`sym!`](crate::trace::sym) or [`step!`](crate::trace::step)),
-/// which makes a step 48 bytes instead of 80. In the browser build a `&str`
+/// which keeps a step small. In the browser build a `&str`
 /// is already 8 bytes, so there it is the `&str` itself and the module
 /// carries no table of pointers.
 #[derive(Clone, Copy, PartialEq, Eq)]
@@ -132,38 +133,168 @@ pub fn held(s: &'static str) -> Sym {
     }
 }
 
-/// One line of the working.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+/// A step's symbol together with its unit; reads as the symbol.
+///
+/// Natively one pointer, to a static pair (a literal pair's, through
+/// [`step!`](crate::trace::step)), so symbol and unit cost one word of the
+/// step; in the browser build the pair itself.
+#[derive(Clone, Copy, PartialEq, Eq)]
+pub struct Symbol(
+    #[cfg(not(target_arch = "wasm32"))] &'static (&'static str, &'static str),
+    #[cfg(target_arch = "wasm32")] (&'static str, &'static str),
+);
+
+impl Symbol {
+    /// The symbol as a `&str`.
+    #[inline]
+    pub fn as_str(self) -> &'static str {
+        self.0 .0
+    }
+
+    /// The unit of the step's value.
+    #[inline]
+    pub fn unit(self) -> &'static str {
+        self.0 .1
+    }
+}
+
+impl From<&'static (&'static str, &'static str)> for Symbol {
+    // Always inlined, as `Sym::from`.
+    #[inline(always)]
+    fn from(p: &'static (&'static str, &'static str)) -> Symbol {
+        #[cfg(not(target_arch = "wasm32"))]
+        return Symbol(p);
+        #[cfg(target_arch = "wasm32")]
+        return Symbol(*p);
+    }
+}
+
+impl Deref for Symbol {
+    type Target = str;
+    fn deref(&self) -> &str {
+        self.as_str()
+    }
+}
+
+impl fmt::Debug for Symbol {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        fmt::Debug::fmt(self.as_str(), f)
+    }
+}
+
+impl fmt::Display for Symbol {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.write_str(self.as_str())
+    }
+}
+
+impl PartialEq<str> for Symbol {
+    fn eq(&self, other: &str) -> bool {
+        self.as_str() == other
+    }
+}
+
+impl PartialEq<&str> for Symbol {
+    fn eq(&self, other: &&str) -> bool {
+        self.as_str() == *other
+    }
+}
+
+#[cfg(not(target_arch = "wasm32"))]
+thread_local! {
+    static PAIRS: RefCell<Vec<&'static (&'static str, &'static str)>> =
+        const { RefCell::new(Vec::new()) };
+}
+
+/// A [`Symbol`] for a symbol and unit known only at run time, held as
+/// [`held`] holds a text.
+pub fn held_symbol(symbol: &'static str, unit: &'static str) -> Symbol {
+    #[cfg(target_arch = "wasm32")]
+    return Symbol((symbol, unit));
+    #[cfg(not(target_arch = "wasm32"))]
+    {
+        let same = |p: &&'static (&'static str, &'static str)| {
+            std::ptr::eq(p.0, symbol) && std::ptr::eq(p.1, unit)
+        };
+        let held = PAIRS.with(|h| {
+            let mut h = h.try_borrow_mut().ok()?;
+            if let Some(p) = h.iter().copied().find(same) {
+                return Some(p);
+            }
+            let p: &'static (&'static str, &'static str) = Box::leak(Box::new((symbol, unit)));
+            h.push(p);
+            Some(p)
+        });
+        Symbol(held.unwrap_or_else(|| Box::leak(Box::new((symbol, unit)))))
+    }
+}
+
+/// One line of the working. Its unit is kept with its symbol (see
+/// [`Symbol`]) and read with [`Step::unit`]; it serialises with the six
+/// fields scope, symbol, label, value, unit, clause.
+#[derive(Clone, PartialEq)]
 pub struct Step {
     /// Part of the check this belongs to.
     pub scope: Scope,
-    /// The standard's symbol, plain text (e.g. "lambda_bar", "chi", "N_b,Rd").
-    pub symbol: Sym,
+    /// The standard's symbol, plain text (e.g. "lambda_bar", "chi", "N_b,Rd"), with the unit.
+    pub symbol: Symbol,
     /// What the value is, in words.
     pub label: Sym,
-    /// The value in `unit`.
+    /// The value in the step's [`unit`](Step::unit).
     pub value: f64,
-    /// Unit ("mm", "mm2", "mm4", "MPa", "kN", "-" for dimensionless).
-    pub unit: Sym,
     /// Where it comes from: clause, equation or table ("EN 1993-1-1 Eq. 6.49").
     pub clause: Sym,
+}
+
+impl Step {
+    /// Unit ("mm", "mm2", "mm4", "MPa", "kN", "-" for dimensionless).
+    pub fn unit(&self) -> &'static str {
+        self.symbol.unit()
+    }
+}
+
+impl Serialize for Step {
+    fn serialize<S: Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        use serde::ser::SerializeStruct;
+        let mut st = s.serialize_struct("Step", 6)?;
+        st.serialize_field("scope", &self.scope)?;
+        st.serialize_field("symbol", self.symbol.as_str())?;
+        st.serialize_field("label", &self.label)?;
+        st.serialize_field("value", &self.value)?;
+        st.serialize_field("unit", self.unit())?;
+        st.serialize_field("clause", &self.clause)?;
+        st.end()
+    }
+}
+
+impl fmt::Debug for Step {
+    fn fmt(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+        f.debug_struct("Step")
+            .field("scope", &self.scope)
+            .field("symbol", &self.symbol)
+            .field("label", &self.label)
+            .field("value", &self.value)
+            .field("unit", &self.unit())
+            .field("clause", &self.clause)
+            .finish()
+    }
 }
 
 /// The working, in order.
 pub type Trace = Vec<Step>;
 
 /// Appends a step: `step!(trace, scope, symbol, label, value, unit, clause)`,
-/// each text a string literal (or constant) or a [`Sym`], so method modules
-/// read like a hand calculation.
+/// the symbol and unit string literals, label and clause each a string
+/// literal (or constant) or a [`Sym`], so method modules read like a hand
+/// calculation.
 macro_rules! step {
     ($trace:expr, $scope:expr, $symbol:expr, $label:expr, $value:expr, $unit:expr, $clause:expr $(,)?) => {
         $crate::trace::put(
             $trace,
             $scope,
-            $crate::trace::Sym::from(&$symbol),
+            $crate::trace::Symbol::from(&($symbol, $unit)),
             $crate::trace::Sym::from(&$label),
             $value,
-            $crate::trace::Sym::from(&$unit),
             $crate::trace::Sym::from(&$clause),
         )
     };
@@ -173,24 +304,23 @@ pub(crate) use step;
 /// Appends a step (what [`step!`] calls: one call per line of working keeps
 /// the browser build small; native builds inline it).
 #[inline]
-pub fn put(
-    trace: &mut Trace,
-    scope: Scope,
-    symbol: Sym,
-    label: Sym,
-    value: f64,
-    unit: Sym,
-    clause: Sym,
-) {
+pub fn put(trace: &mut Trace, scope: Scope, symbol: Symbol, label: Sym, value: f64, clause: Sym) {
     trace.push(Step {
         scope,
         symbol,
         label,
         value,
-        unit,
         clause,
     });
 }
+
+/// A [`Symbol`] from a literal symbol and unit: `symbol!("c/t", "-")`.
+macro_rules! symbol {
+    ($s:expr, $u:expr) => {
+        $crate::trace::Symbol::from(&($s, $u))
+    };
+}
+pub(crate) use symbol;
 
 /// A [`Sym`] from a string literal: `sym!("text")`.
 macro_rules! sym {
@@ -214,10 +344,9 @@ pub fn push(
     put(
         trace,
         scope,
-        held(symbol),
+        held_symbol(symbol, unit),
         held(label),
         value,
-        held(unit),
         held(clause),
     );
 }
@@ -257,7 +386,8 @@ mod tests {
         assert_eq!(t[0].symbol, "chi");
         assert!(t[0].label.contains("reduction"));
         assert_eq!(t[1].clause.as_str(), clause);
-        assert_eq!(format!("{:?}", t[0].unit), "\"-\"");
+        assert_eq!(t[0].unit(), "-");
+        assert!(format!("{:?}", t[0]).contains("unit: \"-\""));
         let json = serde_json::to_string(&t[1]).unwrap();
         assert_eq!(
             json,
@@ -272,5 +402,8 @@ mod tests {
         let b = held(s);
         assert!(std::ptr::eq(a.0, b.0));
         assert_eq!(a, "EN 10025-2:2019 Table 7");
+        let (p, q) = (held_symbol("t", "mm"), held_symbol("t", "mm"));
+        assert!(std::ptr::eq(p.0, q.0));
+        assert_eq!((p.as_str(), p.unit()), ("t", "mm"));
     }
 }

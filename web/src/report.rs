@@ -168,7 +168,7 @@ pub fn working_html(r: &CheckResult, sys: UnitSystem) -> String {
                 "<tr><th scope=\"row\"><code>{}</code></th><td>{}</td><td class=\"num\">{}</td><td class=\"clause\">{}</td></tr>",
                 esc(st.symbol.as_str()),
                 esc(st.label.as_str()),
-                step_text(sys, st.unit.as_str(), st.value),
+                step_text(sys, st.unit(), st.value),
                 esc(st.clause.as_str()),
             );
         }

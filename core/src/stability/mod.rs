@@ -21,7 +21,7 @@ use crate::material::Material;
 use crate::member::BucklingLengths;
 use crate::method::{self, Input, Method};
 use crate::section::{Family, SectionSpec};
-use crate::trace::{step, sym, Scope, Sym, Trace};
+use crate::trace::{put, step, sym, symbol, Scope, Sym, Trace};
 
 pub mod classify;
 pub mod effective;
@@ -90,13 +90,13 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
         let l = e.part.labels();
         // Each code's own symbols: EN c/t (d/t for tubes), AISC and CSA b/t (D/t).
         let (w, ratio) = match (c.code, e.kind) {
-            (Code::En1993, Kind::Tube) => (sym!("d"), sym!("d/t")),
-            (Code::En1993, _) => (sym!("c"), sym!("c/t")),
-            (_, Kind::Tube) => (sym!("D"), sym!("D/t")),
-            _ => (sym!("b"), sym!("b/t")),
+            (Code::En1993, Kind::Tube) => (symbol!("d", "mm"), symbol!("d/t", "-")),
+            (Code::En1993, _) => (symbol!("c", "mm"), symbol!("c/t", "-")),
+            (_, Kind::Tube) => (symbol!("D", "mm"), symbol!("D/t", "-")),
+            _ => (symbol!("b", "mm"), symbol!("b/t", "-")),
         };
-        step!(trace, Scope::Section, w, l.width, e.width_mm, "mm", clause);
-        step!(trace, Scope::Section, ratio, l.ratio, e.ratio, "-", clause);
+        put(trace, Scope::Section, w, l.width, e.width_mm, clause);
+        put(trace, Scope::Section, ratio, l.ratio, e.ratio, clause);
         step!(
             trace,
             Scope::Section,
