@@ -27,6 +27,7 @@ pub mod solve;
 pub mod stability;
 pub mod trace;
 pub mod units;
+pub mod wire;
 
 pub use check::{check_member, CheckResult, Mode, ModeResult};
 pub use error::Error;

@@ -331,7 +331,7 @@ pub fn App() -> impl IntoView {
                     let _ = browser::set(crate::units_view::KEY, crate::units_view::stored_text(next));
                     ctx.generation.update(|g| *g += 1);
                 }>{move || if ctx.units.get() == UnitSystem::Si { "Units: SI (kN, mm, MPa) · show US" } else { "Units: US (kip, in, ft, ksi) · show SI" }}</button>
-                <button type="button" data-testid="open-sheet" on:click=move |_| ctx.sheet.set(Some(chart_image(ctx)))>"⎙ Calc sheet of this list"</button>
+                <button type="button" data-testid="open-sheet" on:click=move |_| ctx.sheet.set(Some(chart_image(ctx)))>"Calc sheet of this list"</button>
             </div>
             {move || ctx.sheet.get().map(|img| view! { <CalcSheet ctx=ctx chart=img /> })}
             <main class="panes" class:screen-only=move || ctx.sheet.with(Option::is_some)>
@@ -1120,6 +1120,7 @@ fn Results(ctx: Ctx) -> impl IntoView {
             Some(c) => report::verdict_html(&c, units.get()),
         }></div>
         <Chart ctx=ctx current=current />
+        <div class="section-view" inner_html=move || current.get().map(|c| crate::sectionview::of_checked(&c)).unwrap_or_default()></div>
         <div class="working-block" inner_html=move || {
             let sys = units.get();
             current.get().and_then(|c| c.outcome.as_ref().ok().map(|r| report::working_html(r, sys))).unwrap_or_default()
@@ -1155,7 +1156,7 @@ fn CalcSheet(ctx: Ctx, chart: Option<(String, String)>) -> impl IntoView {
             <div class="button-row screen-only">
                 <button type="button" data-testid="print" on:click=move |_| {
                     if let Some(w) = web_sys::window() { let _ = w.print(); }
-                }>"⎙ Print or save as PDF"</button>
+                }>"Print or save as PDF"</button>
                 <button type="button" data-testid="close-sheet" on:click=move |_| ctx.sheet.set(None)>"Close the sheet"</button>
             </div>
             <div inner_html=html></div>

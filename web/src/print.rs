@@ -18,6 +18,10 @@ pub fn inputs(system: UnitSystem, m: &Member) -> Vec<(String, String)> {
     if let Ok(v) = serde_json::to_value(m) {
         flatten(system, &v, &mut out);
     }
+    // A JSON object's keys come back sorted; put them back in the member
+    // file's own order (the order the struct writes them).
+    let text = serde_json::to_string(m).unwrap_or_default();
+    out.sort_by_key(|(k, _)| text.find(&format!("\"{k}\":")).unwrap_or(usize::MAX));
     out
 }
 

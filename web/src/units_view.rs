@@ -10,7 +10,7 @@ use leptos::prelude::*;
 use strutline_core::units::{self, Quantity, UnitSystem};
 
 use crate::browser;
-use crate::numtext::{for_input, parse_number, working};
+use crate::numtext::{parse_number, working};
 
 /// The storage key of the preference.
 pub const KEY: &str = "strutline.v1.units";
@@ -95,8 +95,10 @@ pub fn to_field(system: UnitSystem, key: &str, si: &str) -> String {
     if system == UnitSystem::Si || Quantity::of_key(key).is_none() {
         return si.to_string();
     }
+    // Six significant figures: the field shows the stored value converted,
+    // and only a field the person edits is converted back (exactly).
     match parse_number(si) {
-        Ok(v) => for_input(units::key_to_display(system, key, v).0),
+        Ok(v) => units::format_display(units::key_to_display(system, key, v).0, 6),
         Err(_) => si.to_string(),
     }
 }

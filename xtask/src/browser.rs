@@ -53,7 +53,9 @@ pub fn run(args: &[String]) -> Result<()> {
     if only.is_none() {
         // The exchange of member lists: export, import, refusals.
         let exchange = util::run(&mut node_script("exchange.mjs", &url));
-        result = result.and(exchange);
+        // The unit switch and the printed calc sheet.
+        let records = util::run(&mut node_script("records.mjs", &url));
+        result = result.and(exchange).and(records);
     }
     server.stop();
     result?;

@@ -183,7 +183,8 @@ fn build_with(dist: &Path, use_wasm_opt: bool, keep_names: bool) -> Result<Built
     )?;
     let style = root.join("web/style.css");
     if style.is_file() {
-        copy(&style, &dist.join("style.css"))?;
+        let css = std::fs::read_to_string(&style)?;
+        std::fs::write(dist.join("style.css"), tidy_css(&css))?;
     } else {
         eprintln!("xtask: WARNING: web/style.css is missing; dist/ has no style.css");
     }
@@ -222,6 +223,26 @@ fn build_with(dist: &Path, use_wasm_opt: bool, keep_names: bool) -> Result<Built
         gz_total,
         cache_name,
     })
+}
+
+/// The style sheet without its comments, indentation and blank lines (the
+/// rules themselves are left as written).
+pub fn tidy_css(css: &str) -> String {
+    let mut out = String::with_capacity(css.len());
+    let mut rest = css;
+    while let Some(i) = rest.find("/*") {
+        out.push_str(rest.get(..i).unwrap_or_default());
+        rest = match rest.get(i + 2..).and_then(|r| r.find("*/").map(|j| (r, j))) {
+            Some((r, j)) => r.get(j + 2..).unwrap_or_default(),
+            None => "",
+        };
+    }
+    out.push_str(rest);
+    out.lines()
+        .map(str::trim)
+        .filter(|l| !l.is_empty())
+        .collect::<Vec<_>>()
+        .join("\n")
 }
 
 fn copy(from: &Path, to: &Path) -> Result<()> {
@@ -722,11 +743,54 @@ fn icon_pixels(size: u32) -> Vec<u8> {
 pub fn icon_png(size: u32) -> Result<Vec<u8>> {
     use std::io::Write;
     let pixels = icon_pixels(size);
-    let row = (size * 3) as usize;
+    // The icon is drawn in a few flat colours: an indexed PNG with the
+    // fewest bits per pixel that holds them is about a third of the RGB
+    // one (RGB remains for more than 256 colours).
+    let mut palette: Vec<[u8; 3]> = Vec::new();
+    let mut index = Vec::with_capacity(pixels.len() / 3);
+    for px in pixels.chunks(3) {
+        let at = |k: usize| px.get(k).copied().unwrap_or(0);
+        let c = [at(0), at(1), at(2)];
+        let i = match palette.iter().position(|p| *p == c) {
+            Some(i) => i,
+            None => {
+                palette.push(c);
+                palette.len() - 1
+            }
+        };
+        index.push(i);
+    }
+    let indexed = palette.len() <= 256;
+    let depth: usize = match palette.len() {
+        0..=2 => 1,
+        3..=4 => 2,
+        5..=16 => 4,
+        _ => 8,
+    };
     let mut raw = Vec::with_capacity(pixels.len() + size as usize);
-    for line in pixels.chunks(row) {
-        raw.push(0u8); // filter: none
-        raw.extend_from_slice(line);
+    if indexed {
+        for line in index.chunks(size as usize) {
+            raw.push(0u8); // filter: none
+            let mut byte = 0u8;
+            let mut used = 0;
+            for &i in line {
+                byte |= (i as u8) << (8 - depth - used);
+                used += depth;
+                if used == 8 {
+                    raw.push(byte);
+                    byte = 0;
+                    used = 0;
+                }
+            }
+            if used > 0 {
+                raw.push(byte);
+            }
+        }
+    } else {
+        for line in pixels.chunks((size * 3) as usize) {
+            raw.push(0u8); // filter: none
+            raw.extend_from_slice(line);
+        }
     }
     let mut z = flate2::write::ZlibEncoder::new(Vec::new(), flate2::Compression::best());
     z.write_all(&raw)?;
@@ -735,10 +799,18 @@ pub fn icon_png(size: u32) -> Result<Vec<u8>> {
     let mut ihdr = Vec::with_capacity(13);
     ihdr.extend_from_slice(&size.to_be_bytes());
     ihdr.extend_from_slice(&size.to_be_bytes());
-    ihdr.extend_from_slice(&[8, 2, 0, 0, 0]); // depth 8, RGB, deflate, filter 0, no interlace
+    if indexed {
+        // depth, palette colour, deflate, filter 0, no interlace
+        ihdr.extend_from_slice(&[depth as u8, 3, 0, 0, 0]);
+    } else {
+        ihdr.extend_from_slice(&[8, 2, 0, 0, 0]); // depth 8, RGB
+    }
 
     let mut png = vec![0x89, b'P', b'N', b'G', 0x0d, 0x0a, 0x1a, 0x0a];
     chunk(&mut png, b"IHDR", &ihdr);
+    if indexed {
+        chunk(&mut png, b"PLTE", &palette.concat());
+    }
     chunk(&mut png, b"IDAT", &idat);
     chunk(&mut png, b"IEND", &[]);
     Ok(png)
@@ -804,6 +876,42 @@ mod tests {
         assert_eq!(u32::from_be_bytes(png[16..20].try_into().unwrap()), 192);
         assert_eq!(u32::from_be_bytes(png[20..24].try_into().unwrap()), 192);
         assert_eq!(&png[png.len() - 8..png.len() - 4], b"IEND");
+    }
+
+    #[test]
+    fn css_loses_comments_and_indentation_only() {
+        let css =
+            "/* a */\n.x {\n  color: red; /* b\n c */\n}\n\n@media print {\n  .y { a: b; }\n}\n";
+        assert_eq!(
+            tidy_css(css),
+            ".x {\ncolor: red;\n}\n@media print {\n.y { a: b; }\n}"
+        );
+        assert_eq!(tidy_css("a { b: c; } /* open"), "a { b: c; }");
+    }
+
+    #[test]
+    fn icon_is_indexed_and_its_rows_inflate_to_the_image() {
+        use std::io::Read;
+        let png = icon_png(192).unwrap();
+        let find = |kind: &[u8]| png.windows(4).position(|w| w == kind).unwrap();
+        let ihdr = find(b"IHDR") + 4;
+        let (depth, colour) = (png[ihdr + 8], png[ihdr + 9]);
+        assert_eq!(colour, 3, "palette colour");
+        let plte = find(b"PLTE");
+        let n = u32::from_be_bytes(png[plte - 4..plte].try_into().unwrap()) as usize;
+        assert!(
+            n.is_multiple_of(3) && n / 3 <= 1 << depth,
+            "{} colours for depth {depth}",
+            n / 3
+        );
+        let idat = find(b"IDAT");
+        let len = u32::from_be_bytes(png[idat - 4..idat].try_into().unwrap()) as usize;
+        let mut raw = Vec::new();
+        flate2::read::ZlibDecoder::new(&png[idat + 4..idat + 4 + len])
+            .read_to_end(&mut raw)
+            .unwrap();
+        let row = 1 + (192 * depth as usize).div_ceil(8);
+        assert_eq!(raw.len(), 192 * row);
     }
 
     #[test]

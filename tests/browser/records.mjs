@@ -1,0 +1,163 @@
+// Browser tests of the records tools: the unit switch (SI / US customary)
+// and the printed calc sheet. `node tests/browser/records.mjs --url URL
+// [--only NAME]` against a served dist/. Each test runs in a fresh Chromium
+// profile; a failing one leaves a screenshot in tests/browser/out/. The last
+// line is "records: N passed, N failed"; the exit status is 1 when any failed.
+//
+// Conversion factors are the definitions (exact): 1 in = 25.4 mm,
+// 1 ft = 304.8 mm, 1 lbf = 4.4482216152605 N, so 1 kip = 4.4482216152605 kN.
+
+import assert from "node:assert/strict";
+import { writeFileSync } from "node:fs";
+import { join } from "node:path";
+import { arg, ensureOut, firstPage, launch, STORAGE_KEY } from "./lib.mjs";
+
+const URL_ARG = arg("--url");
+if (!URL_ARG) {
+  console.error("usage: node records.mjs --url http://127.0.0.1:PORT/ [--only NAME]");
+  process.exit(2);
+}
+const ONLY = arg("--only");
+const OUT = ensureOut();
+const KN_PER_KIP = 4.4482216152605;
+const MM_PER_FT = 304.8;
+
+const tests = [];
+const test = (name, fn) => tests.push({ name, fn });
+
+async function withApp(name, fn) {
+  const { context, close } = await launch();
+  const page = await firstPage(context);
+  const errors = [];
+  page.on("pageerror", (e) => errors.push(e.message));
+  page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
+  try {
+    await page.goto(URL_ARG, { waitUntil: "load" });
+    await page.locator("[data-testid=caution]").first().waitFor({ timeout: 15_000 });
+    await fn(page);
+    assert.deepEqual(errors, [], "console errors");
+  } catch (e) {
+    await page.screenshot({ path: join(OUT, `${name}-failed.png`), fullPage: true }).catch(() => {});
+    throw e;
+  } finally {
+    await close();
+  }
+}
+
+const number = (t) => Number(String(t).replace(/[^0-9.eE+-]/g, ""));
+
+async function resistance(page) {
+  const el = page.locator("[data-testid=result-resistance]");
+  await el.waitFor();
+  const dd = await el.locator("xpath=..").textContent();
+  return { value: number(await el.textContent()), text: dd.trim() };
+}
+
+async function storedMember(page, index) {
+  await page.waitForTimeout(600);
+  const w = JSON.parse(await page.evaluate((k) => localStorage.getItem(k), STORAGE_KEY));
+  return w.lists[w.active].members[index];
+}
+
+test("units-switch-converts-both-ways", () =>
+  withApp("units-switch-converts-both-ways", async (page) => {
+    await page.locator("[data-testid=member-row]").first().click();
+    const si = await resistance(page);
+    assert.match(si.text, /kN$/, `SI resistance "${si.text}"`);
+    const lengthSi = number(await page.inputValue("input[name=length_mm]"));
+    const stored = await storedMember(page, 0);
+    assert.equal(lengthSi, stored.length_mm, "SI shows the stored length");
+
+    await page.click("[data-testid=units-toggle]");
+    const us = await resistance(page);
+    assert.match(us.text, /kip$/, `US resistance "${us.text}"`);
+    // Shown to four significant figures.
+    const expected = si.value / KN_PER_KIP;
+    assert.ok(Math.abs(us.value - expected) <= Math.abs(expected) * 5e-4 + 0.05 / KN_PER_KIP,
+      `US ${us.value} kip against ${si.value} kN / ${KN_PER_KIP} = ${expected}`);
+    const lengthUs = number(await page.inputValue("input[name=length_mm]"));
+    assert.ok(Math.abs(lengthUs - stored.length_mm / MM_PER_FT) < 1e-6 * lengthUs,
+      `length field ${lengthUs} ft for ${stored.length_mm} mm`);
+    const unit = await page.locator("input[name=length_mm] + .unit").textContent();
+    assert.equal(unit.trim(), "ft");
+    assert.deepEqual(await storedMember(page, 0), stored, "switching units changes no stored value");
+    await page.locator(".working-block td.num").first().waitFor();
+    await page.screenshot({ path: join(OUT, "units-us.png"), fullPage: true });
+
+    // Typing in US units stores the exact SI value.
+    await page.fill("input[name=length_mm]", "12.5");
+    await page.waitForTimeout(100);
+    const typed = await storedMember(page, 0);
+    assert.ok(Math.abs(typed.length_mm - 12.5 * MM_PER_FT) < 1e-9, `12.5 ft stored as ${typed.length_mm} mm`);
+
+    // The preference survives a reload, and switching back shows SI again.
+    await page.reload({ waitUntil: "load" });
+    await page.locator("[data-testid=member-row]").first().click();
+    assert.match((await resistance(page)).text, /kip$/, "US kept after a reload");
+    await page.click("[data-testid=units-toggle]");
+    assert.match((await resistance(page)).text, /kN$/);
+    assert.equal(number(await page.inputValue("input[name=length_mm]")), 12.5 * MM_PER_FT);
+  }),
+);
+
+/** Pages of a PDF: its page objects ("/Type /Page", not "/Pages"). */
+function pdfPages(buf) {
+  return (buf.toString("latin1").match(/\/Type\s*\/Page(?![s\w])/g) || []).length;
+}
+
+test("calc-sheet-prints-one-member-a-page", () =>
+  withApp("calc-sheet-prints-one-member-a-page", async (page) => {
+    const members = await page.locator("[data-testid=member-row]").count();
+    assert.ok(members >= 2, "the demo list has members");
+    await page.locator("[data-testid=member-row]").first().click();
+    await page.click("[data-testid=open-sheet]");
+    await page.locator("[data-testid=calc-sheet]").waitFor();
+    assert.equal(await page.locator("[data-testid=sheet-page]").count(), members, "a page per member");
+    const first = page.locator("[data-testid=sheet-page]").first();
+    for (const part of ["Inputs", "Section and material", "Result", "Modes checked", "Working"]) {
+      assert.ok((await first.textContent()).includes(part), `the member page has "${part}"`);
+    }
+    assert.equal(await page.locator("[data-testid=sheet-page] img.sheet-chart").count(), 1, "the envelope of the member it was opened from");
+    assert.equal(await page.locator(".calc-sheet .caution").count(), members + 1, "the caution on every page");
+
+    await page.emulateMedia({ media: "print" });
+    const style = await page.evaluate(() => {
+      const pages = [...document.querySelectorAll("[data-testid=sheet-page]")];
+      return {
+        breaks: pages.map((p) => getComputedStyle(p).breakBefore),
+        panes: getComputedStyle(document.querySelector("main.panes")).display,
+        tools: getComputedStyle(document.querySelector(".tools")).display,
+      };
+    });
+    assert.deepEqual(style.breaks, Array(members).fill("page"), "every member starts a page");
+    assert.equal(style.panes, "none", "the app itself is not printed");
+    assert.equal(style.tools, "none");
+    for (const format of ["A4", "Letter"]) {
+      const pdf = await page.pdf({ format, printBackground: false });
+      writeFileSync(join(OUT, `calc-sheet-${format}.pdf`), pdf);
+      const n = pdfPages(pdf);
+      assert.ok(n >= members + 1, `${format}: ${n} pages for a summary and ${members} members`);
+    }
+    await page.emulateMedia({ media: "screen" });
+    await page.screenshot({ path: join(OUT, "calc-sheet.png"), fullPage: false });
+    await page.click("[data-testid=close-sheet]");
+    assert.equal(await page.locator("[data-testid=calc-sheet]").count(), 0);
+  }),
+);
+
+let passed = 0;
+let failed = 0;
+for (const t of tests) {
+  if (ONLY && t.name !== ONLY) continue;
+  const t0 = Date.now();
+  try {
+    await t.fn();
+    passed += 1;
+    console.log(`ok   ${t.name} (${Date.now() - t0} ms)`);
+  } catch (e) {
+    failed += 1;
+    console.log(`FAIL ${t.name}: ${e.stack || e}`);
+  }
+}
+console.log(`records: ${passed} passed, ${failed} failed`);
+process.exit(failed ? 1 : 0);
