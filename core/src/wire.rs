@@ -130,7 +130,12 @@ fn unexpected(v: &Value) -> String {
 
 #[cfg(all(test, not(target_arch = "wasm32")))]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
     use super::*;
     use serde_json::json;
 
