@@ -10,7 +10,7 @@
 import assert from "node:assert/strict";
 import { writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { arg, ensureOut, firstPage, launch, STORAGE_KEY } from "./lib.mjs";
+import { arg, ensureOut, firstPage, launch, memberFile, STORAGE_KEY, workspaceText } from "./lib.mjs";
 
 const URL_ARG = arg("--url");
 if (!URL_ARG) {
@@ -144,6 +144,36 @@ test("calc-sheet-prints-one-member-a-page", () =>
     assert.equal(await page.locator("[data-testid=calc-sheet]").count(), 0);
   }),
 );
+
+test("section-view-to-scale-with-zones", async () => {
+  // Invented members: a stocky rolled I and a slender welded I (its flanges
+  // and web are Class 4 in S355 by EN 1993-1-1 Table 5.2), both EN 1993-1-1.
+  const base = { material: { grade: "S355" }, length_mm: 3000, axial_kn: 500, method: "en1993-1-1" };
+  const members = [
+    { id: "VS-1", section: { kind: "i", depth_mm: 200, width_mm: 200, flange_mm: 15, web_mm: 9, root_radius_mm: 18 }, ...base },
+    { id: "VS-2", section: { kind: "i", depth_mm: 600, width_mm: 400, flange_mm: 12, web_mm: 6, make: "welded" }, ...base },
+  ];
+  const { context, close } = await launch();
+  try {
+    const page = await firstPage(context);
+    await page.addInitScript(([k, v]) => { if (!localStorage.getItem(k)) localStorage.setItem(k, v); }, [STORAGE_KEY, workspaceText([memberFile("Section views (invented)", members)])]);
+    await page.goto(URL_ARG, { waitUntil: "load" });
+    const view = page.locator("svg[data-testid=section-view]");
+    await view.waitFor({ timeout: 15_000 });
+    const box = (await view.getAttribute("viewBox")).split(" ").map(Number);
+    // To scale: the viewBox is in mm and holds the 200 x 200 section.
+    assert.ok(box[2] >= 200 && box[3] >= 200 && box[2] < 600, `viewBox ${box}`);
+    assert.equal(await page.locator("svg[data-testid=section-view] .sv-zone").count(), 0, "a Class 1 I has no ineffective parts");
+    assert.match(await view.getAttribute("aria-label"), /200/);
+    await page.locator("[data-testid=member-row]").nth(1).click();
+    await page.waitForFunction(() => document.querySelectorAll("svg[data-testid=section-view] .sv-zone").length > 0);
+    const wide = (await view.getAttribute("viewBox")).split(" ").map(Number);
+    assert.ok(wide[2] >= 400 && wide[3] >= 600, `viewBox ${wide} holds 400 x 600 mm`);
+    await view.screenshot({ path: join(OUT, "section-view-class4.png") });
+  } finally {
+    await close();
+  }
+});
 
 let passed = 0;
 let failed = 0;
