@@ -1120,10 +1120,18 @@ fn Results(ctx: Ctx) -> impl IntoView {
             Some(c) => report::verdict_html(&c, units.get()),
         }></div>
         <Chart ctx=ctx current=current />
-        <div class="section-view" inner_html=move || current.get().map(|c| crate::sectionview::of_checked(&c)).unwrap_or_default()></div>
         <div class="working-block" inner_html=move || {
             let sys = units.get();
-            current.get().and_then(|c| c.outcome.as_ref().ok().map(|r| report::working_html(r, sys))).unwrap_or_default()
+            current.get().map(|c| {
+                let mut h = crate::sectionview::of_checked(&c);
+                if let Ok(r) = &c.outcome {
+                    h.push_str(&report::working_html(r, sys));
+                }
+                if let Some(p) = &c.prepared {
+                    h.push_str(&report::whatif_html(p, sys));
+                }
+                h
+            }).unwrap_or_default()
         }></div>
     }
 }

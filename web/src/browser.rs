@@ -66,7 +66,12 @@ pub fn remove(key: &str) {
 
 /// Offers `text` as a file download named `filename`.
 pub fn download(filename: &str, text: &str, mime: &str) -> Result<(), String> {
-    let err = |e: JsValue| format!("download failed: {e:?}");
+    // The browser's own words when it gives them as text (its error
+    // objects are not formatted: that would ship a JS value formatter).
+    let err = |e: JsValue| match e.as_string() {
+        Some(m) => format!("download failed: {m}"),
+        None => "download failed: the browser refused to make the file".to_string(),
+    };
     let parts = js_sys::Array::of1(&JsValue::from_str(text));
     let opts = web_sys::BlobPropertyBag::new();
     opts.set_type(mime);

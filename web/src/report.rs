@@ -10,6 +10,9 @@
 
 use std::fmt::Write;
 
+use strutline_core::check::Prepared;
+use strutline_core::compare::{self, Outcome};
+use strutline_core::solve::{self, LengthAnswer, LengthLimit};
 use strutline_core::trace::Scope;
 use strutline_core::units::UnitSystem;
 use strutline_core::{CheckResult, CAUTION};
@@ -187,6 +190,92 @@ pub fn working_html(r: &CheckResult, sys: UnitSystem) -> String {
     h
 }
 
+/// What-if answers for the member: every method side by side (resistance,
+/// utilisation, governing mode, or why it does not apply), the longest
+/// buckling length that still carries the design load and the largest
+/// load at the member's own length, all worked by the engine
+/// ([`strutline_core::compare`], [`strutline_core::solve`]).
+pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> String {
+    let mut h = String::from(
+        "<details class=\"whatif\" data-testid=\"whatif\" open><summary>What if</summary>\
+         <div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Every method\">\
+         <table class=\"compare\"><caption>Every method</caption><thead><tr>\
+         <th scope=\"col\">method</th><th scope=\"col\">N_Rd</th><th scope=\"col\">utilisation</th>\
+         <th scope=\"col\">governs</th></tr></thead><tbody>",
+    );
+    for c in compare::compare(p) {
+        let mark = if c.own { " class=\"governs\"" } else { "" };
+        let _ = match &c.outcome {
+            Outcome::Checked {
+                resistance_kn,
+                utilisation,
+                governing,
+                ..
+            } => write!(
+                h,
+                "<tr{mark}><th scope=\"row\">{}{}</th><td class=\"num\">{}</td><td class=\"num\">{}</td><td>{}</td></tr>",
+                c.title,
+                if c.own { " (this member's)" } else { "" },
+                result_text(sys, "kN", *resistance_kn, 1),
+                fixed(*utilisation, 3),
+                governing.key(),
+            ),
+            Outcome::NotApplicable { reason } | Outcome::Refused { message: reason } => write!(
+                h,
+                "<tr{mark}><th scope=\"row\">{}</th><td colspan=\"3\">does not apply: {}</td></tr>",
+                c.title,
+                esc(reason)
+            ),
+        };
+    }
+    h.push_str("</tbody></table></div><ul class=\"reverse\">");
+    let method = p.member.method;
+    let _ = match solve::longest_length(p, method) {
+        Ok(LengthAnswer::Found(f)) => write!(
+            h,
+            "<li data-testid=\"longest-length\">Longest length that still carries N_Ed: <b>{}</b> \
+             (L_cr scaled alike: {} / {}; utilisation {}, governs {}{})</li>",
+            span_text(sys, f.length_mm),
+            span_text(sys, f.lcr_major_mm),
+            span_text(sys, f.lcr_minor_mm),
+            fixed(f.utilisation, 3),
+            f.governing.key(),
+            match &f.limit {
+                LengthLimit::Load => String::new(),
+                LengthLimit::MethodRange { reason } => format!("; the method's range ends there: {}", esc(reason)),
+            }
+        ),
+        Ok(LengthAnswer::NoLength { .. }) => write!(
+            h,
+            "<li data-testid=\"longest-length\">No length carries N_Ed: the section or material \
+             is too weak at any length.</li>"
+        ),
+        Ok(LengthAnswer::AnyLength { tried_mm, .. }) => write!(
+            h,
+            "<li data-testid=\"longest-length\">N_Ed is carried up to the longest length tried, {}.</li>",
+            span_text(sys, tried_mm)
+        ),
+        Err(e) => write!(h, "<li>Longest length: {}</li>", esc(&fields::error_text(&e))),
+    };
+    if let Ok(l) = solve::largest_load(p, method) {
+        let _ = write!(
+            h,
+            "<li data-testid=\"largest-load\">Largest load at this length: <b>{}</b> (governs {}; reserve {})</li>",
+            result_text(sys, "kN", l.load_kn, 1),
+            l.governing.key(),
+            result_text(sys, "kN", l.reserve_kn, 1),
+        );
+    }
+    h.push_str("</ul></details>");
+    h
+}
+
+/// A member length in the display units (mm in SI, ft in US).
+fn span_text(sys: UnitSystem, mm: f64) -> String {
+    let (v, u) = crate::units_view::shown(sys, "mm", mm, true);
+    format!("{} {u}", working(v))
+}
+
 /// The section properties a result reports, as a definition list.
 fn properties_html(r: &CheckResult, sys: UnitSystem) -> String {
     let p = &r.section;
@@ -268,6 +357,7 @@ pub fn sheet_html(
             h.push_str("<h3>Section and material</h3>");
             h.push_str(&properties_html(r, sys));
         }
+        h.push_str(&crate::sectionview::of_checked(c));
         h.push_str("<h3>Result</h3>");
         h.push_str(&verdict_html(c, sys));
         if let Ok(r) = &c.outcome {
@@ -381,6 +471,30 @@ mod tests {
             .iter()
             .filter(|s| r.trace.iter().any(|t| t.scope == **s))
             .count()
+    }
+
+    #[test]
+    fn whatif_compares_every_method_and_solves_both_ways() {
+        let c = checked("W1");
+        let p = c.prepared.as_ref().unwrap();
+        let h = whatif_html(p, UnitSystem::Si);
+        assert_eq!(
+            h.matches("<tr").count(),
+            strutline_core::method::Method::ALL.len() + 1,
+            "a row per method and the header"
+        );
+        assert_eq!(h.matches("(this member's)").count(), 1);
+        let longest = match solve::longest_length(p, p.member.method).unwrap() {
+            LengthAnswer::Found(f) => f.length_mm,
+            other => panic!("{other:?}"),
+        };
+        assert!(
+            h.contains(&format!("<b>{} mm</b>", working(longest))),
+            "{h}"
+        );
+        let largest = solve::largest_load(p, p.member.method).unwrap();
+        assert!(h.contains(&format!("<b>{:.1} kN</b>", largest.load_kn)));
+        assert!((largest.load_kn - c.outcome.as_ref().unwrap().resistance_kn).abs() < 1e-9);
     }
 
     #[test]

@@ -72,8 +72,11 @@ fn palette(high_contrast: bool) -> Palette {
     }
 }
 
-fn err<E: std::fmt::Debug>(e: E) -> String {
-    format!("chart: {e:?}")
+/// A drawing error in words. The canvas's own error object is not
+/// formatted (that would ship a JS value formatter for a message no one
+/// can act on); the chart simply says it could not draw.
+fn err<E>(_: E) -> String {
+    "chart: the canvas could not be drawn on (try reloading the page)".to_string()
 }
 
 /// Draws `data` on `canvas` (already sized to CSS size x `dpr`) and records
