@@ -228,7 +228,11 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> String {
             ),
         };
     }
-    h.push_str("</tbody></table></div><ul class=\"reverse\">");
+    h.push_str(
+        "</tbody></table></div><p class=\"hint\">Every method is given this member's N_Ed: a \
+         factored load for the limit-state methods, while AISC ASD expects a service load, so \
+         compare resistances rather than utilisations across the two.</p><ul class=\"reverse\">",
+    );
     let method = p.member.method;
     let _ = match solve::longest_length(p, method) {
         Ok(LengthAnswer::Found(f)) => write!(
