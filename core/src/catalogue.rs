@@ -542,9 +542,8 @@ fn parse_row(
             .position(|h| *h == name)
             .ok_or_else(|| format!("{designation}: no column {name}"))?;
         let cell = cells.get(i).copied().unwrap_or("");
-        let v: f64 = cell
-            .parse()
-            .map_err(|_| format!("{designation}: {name} \"{cell}\" is not a number"))?;
+        let v: f64 = crate::decimal::parse(cell)
+            .ok_or_else(|| format!("{designation}: {name} \"{cell}\" is not a number"))?;
         if v.is_finite() && v > 0.0 {
             Ok(v)
         } else {
@@ -770,7 +769,7 @@ pub fn nearest(designation: &str, n: usize) -> Vec<String> {
 /// The positive numbers in a normalised key ("HSS6X6X1/4" gives 6, 6, 1, 4).
 fn numbers(key: &str) -> Vec<f64> {
     key.split(|c: char| !(c.is_ascii_digit() || c == '.'))
-        .filter_map(|t| t.parse::<f64>().ok())
+        .filter_map(crate::decimal::parse)
         .filter(|v| *v > 0.0)
         .collect()
 }

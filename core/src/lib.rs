@@ -15,6 +15,7 @@ pub mod catalogue;
 pub mod check;
 pub mod compare;
 pub mod csv;
+pub mod decimal;
 pub mod envelope;
 pub mod error;
 pub mod file;

@@ -6,6 +6,7 @@
 // status is 1 when any test failed.
 
 import assert from "node:assert/strict";
+import { register as registerPicker } from "./picker.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -559,6 +560,9 @@ test("keyboard-only-member", async () => {
       .waitFor({ state: "visible", timeout: 10_000 });
   });
 });
+
+// The section picker and "lightest that works" (tests/browser/picker.mjs).
+registerPicker(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

@@ -23,14 +23,27 @@ use crate::status::{status_text, utilisation_text, Standing};
 use crate::units_view::step_text;
 use crate::workspace::{decode, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX};
 
+#[path = "panels.rs"]
+mod panels;
+
 /// Storage key of the theme preference.
 const THEME_KEY: &str = "strutline.v1.theme";
 
 /// Something deleted that can be put back.
 #[derive(Debug, Clone)]
 enum Undo {
-    Member { list: usize, deleted: Box<Deleted> },
+    Member {
+        list: usize,
+        deleted: Box<Deleted>,
+    },
     List(DeletedList),
+    /// Members changed together (sections picked for a list): the list's
+    /// members as they were.
+    Edit {
+        list: usize,
+        what: String,
+        before: Vec<Member>,
+    },
 }
 
 /// Stored data that could not be read.
@@ -343,6 +356,7 @@ pub fn App() -> impl IntoView {
                     {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
                         view! { <Editor ctx=ctx /> }
                     }.into_any()))}
+                    <panels::SectionPicker ctx=ctx />
                 </section>
                 <section class="pane pane-results" aria-labelledby="h-results">
                     <Results ctx=ctx />
@@ -422,6 +436,15 @@ fn undo_now(ctx: Ctx) {
                 w.active = at;
             });
             ctx.select(0);
+        }
+        Undo::Edit { list, before, .. } => {
+            ctx.ws.update(|w| {
+                if let Some(l) = w.lists.get_mut(list) {
+                    l.members = before;
+                    w.active = list;
+                }
+            });
+            ctx.select(ctx.selected.get_untracked());
         }
     }
 }
@@ -545,6 +568,7 @@ fn Banners(ctx: Ctx) -> impl IntoView {
                     format!("Member \"{}\" deleted.", deleted.member.id)
                 }
                 Undo::List(d) => format!("List \"{}\" deleted.", d.list.title),
+                Undo::Edit { what, .. } => what.clone(),
             };
             banner(
                 "undo-bar",

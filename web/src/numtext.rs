@@ -60,10 +60,7 @@ pub fn parse_number(text: &str) -> Result<f64, NumError> {
     {
         return Err(NumError::NotNumber);
     }
-    match normal.parse::<f64>() {
-        Ok(v) if v.is_finite() => Ok(v),
-        _ => Err(NumError::NotNumber),
-    }
+    strutline_core::decimal::parse(&normal).ok_or(NumError::NotNumber)
 }
 
 /// Reads an optional number: empty text is `None`.

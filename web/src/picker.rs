@@ -319,11 +319,7 @@ pub fn form_html() -> String {
 
 /// A utilisation limit typed by the person: a positive finite number.
 pub fn parse_limit(text: &str) -> Option<f64> {
-    text.trim()
-        .replace(',', ".")
-        .parse::<f64>()
-        .ok()
-        .filter(|v| *v > 0.0 && v.is_finite())
+    strutline_core::decimal::parse(&text.trim().replace(',', ".")).filter(|v| *v > 0.0)
 }
 
 /// The (id, designation) pairs to apply for an accept of member `id`, or
