@@ -26,11 +26,17 @@ pub fn precise_ms() -> f64 {
 /// it: `window.strutlineRecheck = {ms, fresh}` (`fresh`: members worked
 /// afresh rather than reused).
 pub fn note_recheck(ms: f64, fresh: usize) {
+    note_timing("strutlineRecheck", "fresh", ms, fresh);
+}
+
+/// Records a timing on `window[key]` as `{ms, <what>: n}` for the
+/// benchmarks (the sizing of a list: `strutlineSizing`, `members`).
+pub fn note_timing(key: &str, what: &str, ms: f64, n: usize) {
     if let Some(w) = web_sys::window() {
         let o = js_sys::Object::new();
         let _ = js_sys::Reflect::set(&o, &"ms".into(), &ms.into());
-        let _ = js_sys::Reflect::set(&o, &"fresh".into(), &(fresh as f64).into());
-        let _ = js_sys::Reflect::set(&w, &"strutlineRecheck".into(), &o);
+        let _ = js_sys::Reflect::set(&o, &what.into(), &(n as f64).into());
+        let _ = js_sys::Reflect::set(&w, &key.into(), &o);
     }
 }
 

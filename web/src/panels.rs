@@ -78,7 +78,10 @@ fn clicked((ctx, st): Picker, e: &leptos::ev::MouseEvent) {
                 ctx.current().into_iter().collect()
             };
             st.update(|s| {
+                let t0 = crate::browser::precise_ms();
                 s.left = picker::propose(&ms, &s.series, &s.shape, s.limit.unwrap_or(1.0));
+                let spent = crate::browser::precise_ms() - t0;
+                crate::browser::note_timing("strutlineSizing", "members", spent, ms.len());
             });
         }
         _ => {}
