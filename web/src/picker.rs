@@ -140,33 +140,38 @@ pub fn propose(members: &[Member], series: &str, shape: &str, limit: f64) -> Vec
         .map(|m| {
             let pool = sizing_pool(m, series, shape);
             // Every candidate is checked; the lightest passing one is kept,
-            // and the heaviest failing one lighter than it.
-            let mut chosen: Option<(&Entry, String)> = None;
-            let mut fails: Vec<(&Entry, String)> = Vec::new();
+            // and the heaviest failing one lighter than it. The loop works
+            // with the entry's own dimensions (the section its designation
+            // resolves to) and keeps only utilisations; the two texts shown
+            // are worked afresh from the designation at the end.
+            let mut work = m.clone();
+            let mut chosen: Option<&Entry> = None;
+            let mut fails: Vec<&Entry> = Vec::new();
             for e in pool.iter().copied() {
-                let (u, text) = match check_member(&sizing::with_entry(m, e)) {
-                    Ok(r) => (
-                        r.utilisation,
-                        format!("{} ({})", fixed(r.utilisation, 3), r.governing.key()),
-                    ),
-                    Err(err) => (f64::INFINITY, crate::fields::error_text(&err)),
-                };
+                work.section = e.spec.clone();
+                let u = check_member(&work).map_or(f64::INFINITY, |r| r.utilisation);
                 if u <= limit {
-                    if chosen.as_ref().is_none_or(|(c, _)| lighter(e, c)) {
-                        chosen = Some((e, text));
+                    if chosen.is_none_or(|c| lighter(e, c)) {
+                        chosen = Some(e);
                     }
                 } else {
-                    fails.push((e, text));
+                    fails.push(e);
                 }
             }
-            let mut next: Option<&(&Entry, String)> = None;
-            for f in &fails {
-                let below = chosen.as_ref().is_none_or(|(c, _)| lighter(f.0, c));
-                if below && next.is_none_or(|n| lighter(n.0, f.0)) {
+            let mut next: Option<&Entry> = None;
+            for f in fails.iter().copied() {
+                let below = chosen.is_none_or(|c| lighter(f, c));
+                if below && next.is_none_or(|n| lighter(n, f)) {
                     next = Some(f);
                 }
             }
-            let lighter_text = next.map_or_else(
+            let text = |e: &Entry| match check_member(&sizing::with_entry(m, e)) {
+                Ok(r) => format!("{} ({})", fixed(r.utilisation, 3), r.governing.key()),
+                Err(err) => crate::fields::error_text(&err),
+            };
+            let chosen = chosen.map(|e| (e, text(e)));
+            let next = next.map(|e| (e, text(e)));
+            let lighter_text = next.as_ref().map_or_else(
                 || "— (lightest of the set)".to_string(),
                 |(e, t)| format!("{}: {t}", e.designation),
             );
@@ -341,6 +346,7 @@ mod tests {
     )]
     use super::*;
     use crate::demo::sample_member;
+    use strutline_core::method::Method;
     use strutline_core::section::{CatalogueRef, SectionSpec};
 
     fn names(v: &[&Entry]) -> Vec<&'static str> {
@@ -399,6 +405,23 @@ mod tests {
         let first = utilisation_with(&m, &s[0]).unwrap();
         let last = utilisation_with(&m, s.last().unwrap()).unwrap();
         assert!(last < first);
+    }
+
+    #[test]
+    fn an_entry_checks_the_same_by_its_dimensions_and_by_its_designation() {
+        // propose() screens with the entry's dimensions and shows the
+        // designation's result: the two must agree for every entry.
+        let mut m = sample_member("D");
+        for method in [Method::En1993, Method::AiscLrfd, Method::CsaS16] {
+            m.method = method;
+            for e in catalogue::entries() {
+                let mut by_dims = m.clone();
+                by_dims.section = e.spec.clone();
+                let a = check_member(&by_dims).map(|r| r.utilisation.to_bits());
+                let b = check_member(&sizing::with_entry(&m, e)).map(|r| r.utilisation.to_bits());
+                assert_eq!(a.ok(), b.ok(), "{} under {method:?}", e.designation);
+            }
+        }
     }
 
     #[test]
