@@ -21,8 +21,10 @@
 //! Adding a series is adding a data file and one line in [`FILES`].
 
 use std::collections::HashMap;
-use std::hash::{BuildHasherDefault, Hasher};
+use std::hash::BuildHasherDefault;
 use std::sync::OnceLock;
+
+use crate::fnv::Fnv;
 
 use crate::error::{Error, Result};
 use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, Section, SectionSpec};
@@ -116,28 +118,6 @@ impl Series {
     /// The entries of the series, in file order.
     pub fn entries(&self) -> &'static [Entry] {
         catalogue().entries.get(self.first..self.end).unwrap_or(&[])
-    }
-}
-
-/// FNV-1a, a fast hash for the short keys of the index.
-#[derive(Default)]
-struct Fnv(u64);
-
-impl Hasher for Fnv {
-    fn finish(&self) -> u64 {
-        self.0
-    }
-    fn write(&mut self, bytes: &[u8]) {
-        let mut h = if self.0 == 0 {
-            0xcbf2_9ce4_8422_2325
-        } else {
-            self.0
-        };
-        for b in bytes {
-            h ^= u64::from(*b);
-            h = h.wrapping_mul(0x0100_0000_01b3);
-        }
-        self.0 = h;
     }
 }
 

@@ -19,6 +19,7 @@ pub mod decimal;
 pub mod envelope;
 pub mod error;
 pub mod file;
+mod fnv;
 pub mod material;
 pub mod member;
 pub mod method;

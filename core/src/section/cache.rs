@@ -13,6 +13,7 @@ use std::hash::{BuildHasherDefault, Hash, Hasher};
 
 use super::{HollowMake, IMake, Properties, SectionSpec};
 use crate::error::Result;
+use crate::fnv::Fnv;
 
 /// Entries kept before the memo starts again.
 const CAP: usize = 4096;
@@ -31,37 +32,6 @@ impl Hash for Key {
         for w in self.0 {
             state.write_u64(w);
         }
-    }
-}
-
-/// FNV-1a style mixing over the key's words.
-#[derive(Default)]
-struct Fnv(u64);
-
-impl Hasher for Fnv {
-    fn finish(&self) -> u64 {
-        self.0
-    }
-    fn write(&mut self, bytes: &[u8]) {
-        let mut h = if self.0 == 0 {
-            0xcbf2_9ce4_8422_2325
-        } else {
-            self.0
-        };
-        for b in bytes {
-            h ^= u64::from(*b);
-            h = h.wrapping_mul(0x0100_0000_01b3);
-        }
-        self.0 = h;
-    }
-    fn write_u64(&mut self, v: u64) {
-        // Word at a time: the key is eight words, hashed in eight steps.
-        let h = if self.0 == 0 {
-            0xcbf2_9ce4_8422_2325
-        } else {
-            self.0
-        };
-        self.0 = (h ^ v).wrapping_mul(0x0100_0000_01b3).rotate_left(29);
     }
 }
 
