@@ -7,8 +7,7 @@
 
 import assert from "node:assert/strict";
 import { readFileSync } from "node:fs";
-import { join } from "node:path";
-import { arg, ensureOut, firstPage, launch, STORAGE_KEY } from "./lib.mjs";
+import { STORAGE_KEY, arg, runTests, withOpenApp } from "./lib.mjs";
 
 const URL_ARG = arg("--url");
 if (!URL_ARG) {
@@ -16,29 +15,11 @@ if (!URL_ARG) {
   process.exit(2);
 }
 const ONLY = arg("--only");
-const OUT = ensureOut();
 
 const tests = [];
 const test = (name, fn) => tests.push({ name, fn });
 
-async function withApp(name, fn) {
-  const { context, close } = await launch({ acceptDownloads: true });
-  const page = await firstPage(context);
-  const errors = [];
-  page.on("pageerror", (e) => errors.push(e.message));
-  page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
-  try {
-    await page.goto(URL_ARG, { waitUntil: "load" });
-    await page.locator("[data-testid=caution]").first().waitFor({ timeout: 15_000 });
-    await fn(page);
-    assert.deepEqual(errors, [], "console errors");
-  } catch (e) {
-    await page.screenshot({ path: join(OUT, `${name}-failed.png`), fullPage: true }).catch(() => {});
-    throw e;
-  } finally {
-    await close();
-  }
-}
+const withApp = (name, fn) => withOpenApp(URL_ARG, name, fn, { acceptDownloads: true });
 
 /** The stored workspace, once the app has saved (it waits 250 ms). */
 async function stored(page) {
@@ -145,18 +126,4 @@ test("oversize-refused", () =>
   }),
 );
 
-let passed = 0;
-let failed = 0;
-for (const t of ONLY ? tests.filter((t) => t.name === ONLY) : tests) {
-  const started = Date.now();
-  try {
-    await t.fn();
-    passed += 1;
-    console.log(`ok   ${t.name} (${Date.now() - started} ms)`);
-  } catch (e) {
-    failed += 1;
-    console.log(`FAIL ${t.name}\n     ${String(e && e.stack ? e.stack : e).split("\n").slice(0, 10).join("\n     ")}`);
-  }
-}
-console.log(`exchange: ${passed} passed, ${failed} failed`);
-process.exit(failed > 0 ? 1 : 0);
+await runTests("exchange", tests, ONLY);

@@ -178,3 +178,46 @@ export async function waitForText(locator, accept, timeout = 10_000) {
   }
   throw new Error(`timed out waiting for a text; last seen: ${JSON.stringify(last)}`);
 }
+
+/** Opens the app at `url` in a fresh profile (with `launchOptions`), waits
+ * for it to show its caution, runs `fn(page)` and fails on any console or
+ * page error; a failure leaves `OUT/<name>-failed.png`. */
+export async function withOpenApp(url, name, fn, launchOptions = {}) {
+  const { context, close } = await launch(launchOptions);
+  const page = await firstPage(context);
+  const errors = [];
+  page.on("pageerror", (e) => errors.push(e.message));
+  page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
+  try {
+    await page.goto(url, { waitUntil: "load" });
+    await page.locator("[data-testid=caution]").first().waitFor({ timeout: 15_000 });
+    await fn(page);
+    if (errors.length) throw new Error(`console errors: ${errors.join(" | ")}`);
+  } catch (e) {
+    await page.screenshot({ path: join(ensureOut(), `${name}-failed.png`), fullPage: true }).catch(() => {});
+    throw e;
+  } finally {
+    await close();
+  }
+}
+
+/** Runs `tests` ({name, fn}) one after another (only the one named `only`
+ * when given), prints "ok"/"FAIL" lines and "<label>: N passed, N failed",
+ * and exits 1 when any failed. */
+export async function runTests(label, tests, only) {
+  let passed = 0;
+  let failed = 0;
+  for (const t of only ? tests.filter((t) => t.name === only) : tests) {
+    const started = Date.now();
+    try {
+      await t.fn();
+      passed += 1;
+      console.log(`ok   ${t.name} (${Date.now() - started} ms)`);
+    } catch (e) {
+      failed += 1;
+      console.log(`FAIL ${t.name}\n     ${String(e && e.stack ? e.stack : e).split("\n").slice(0, 10).join("\n     ")}`);
+    }
+  }
+  console.log(`${label}: ${passed} passed, ${failed} failed`);
+  process.exit(failed > 0 ? 1 : 0);
+}

@@ -10,7 +10,7 @@
 import assert from "node:assert/strict";
 import { writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { arg, ensureOut, firstPage, launch, memberFile, STORAGE_KEY, workspaceText } from "./lib.mjs";
+import { STORAGE_KEY, arg, ensureOut, firstPage, launch, memberFile, runTests, withOpenApp, workspaceText } from "./lib.mjs";
 
 const URL_ARG = arg("--url");
 if (!URL_ARG) {
@@ -25,24 +25,7 @@ const MM_PER_FT = 304.8;
 const tests = [];
 const test = (name, fn) => tests.push({ name, fn });
 
-async function withApp(name, fn) {
-  const { context, close } = await launch();
-  const page = await firstPage(context);
-  const errors = [];
-  page.on("pageerror", (e) => errors.push(e.message));
-  page.on("console", (m) => m.type() === "error" && errors.push(m.text()));
-  try {
-    await page.goto(URL_ARG, { waitUntil: "load" });
-    await page.locator("[data-testid=caution]").first().waitFor({ timeout: 15_000 });
-    await fn(page);
-    assert.deepEqual(errors, [], "console errors");
-  } catch (e) {
-    await page.screenshot({ path: join(OUT, `${name}-failed.png`), fullPage: true }).catch(() => {});
-    throw e;
-  } finally {
-    await close();
-  }
-}
+const withApp = (name, fn) => withOpenApp(URL_ARG, name, fn);
 
 const number = (t) => Number(String(t).replace(/[^0-9.eE+-]/g, ""));
 
@@ -211,19 +194,4 @@ test("whatif-every-method-and-longest-length", () =>
   }),
 );
 
-let passed = 0;
-let failed = 0;
-for (const t of tests) {
-  if (ONLY && t.name !== ONLY) continue;
-  const t0 = Date.now();
-  try {
-    await t.fn();
-    passed += 1;
-    console.log(`ok   ${t.name} (${Date.now() - t0} ms)`);
-  } catch (e) {
-    failed += 1;
-    console.log(`FAIL ${t.name}: ${e.stack || e}`);
-  }
-}
-console.log(`records: ${passed} passed, ${failed} failed`);
-process.exit(failed ? 1 : 0);
+await runTests("records", tests, ONLY);
