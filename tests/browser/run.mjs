@@ -246,6 +246,16 @@ test("typed-member-matches-cli", async () => {
   });
 });
 
+/** Opens the app, types and selects TYPED and waits for its chart. */
+async function typedChart(page) {
+  await open(page);
+  await typeMember(page, TYPED);
+  await selectMember(page, TYPED.id);
+  const canvas = page.locator("canvas#envelope");
+  await canvas.waitFor({ state: "visible", timeout: 10_000 });
+  return canvas;
+}
+
 test("envelope-drawn-with-marker", async () => {
   const cli = cliCheck(memberFile("typed", [TYPED]));
   const expected = cli.results.find((r) => r.id === TYPED.id);
@@ -253,11 +263,7 @@ test("envelope-drawn-with-marker", async () => {
   const governing = expected.modes.find((m) => JSON.stringify(m.mode) === JSON.stringify(expected.governing));
   assert.ok(governing, "the command line's governing mode is not among its modes");
   await withApp("envelope-drawn-with-marker", async (page, log) => {
-    await open(page);
-    await typeMember(page, TYPED);
-    await selectMember(page, TYPED.id);
-    const canvas = page.locator("canvas#envelope");
-    await canvas.waitFor({ state: "visible", timeout: 10_000 });
+    const canvas = await typedChart(page);
     // Wait for the marker of this member to be drawn.
     await page.waitForFunction(() => {
       const c = document.querySelector("canvas#envelope");
@@ -316,6 +322,71 @@ test("envelope-drawn-with-marker", async () => {
       rel <= 0.01,
       `marker slenderness ${facts.slenderness}, the command line's governing mode ${governing.slenderness}`,
     );
+    assertNoErrors(log.errors);
+  });
+});
+
+test("envelope-compares-methods", async () => {
+  // The typed steel I column under EN 1993-1-1: every other steel method
+  // and the elastic ones apply to it, the timber method does not.
+  const others = [
+    ["aisc360-lrfd", "AISC 360-16 E3, LRFD"],
+    ["aisc360-asd", "AISC 360-16 E3, ASD"],
+    ["csa-s16", "CSA S16-19 13.3"],
+    ["perry-robertson", "Perry-Robertson, initial bow"],
+    ["secant", "Secant formula, eccentric load"],
+    ["euler", "Euler, capped at squash load"],
+  ];
+  await withApp("envelope-compares-methods", async (page, log) => {
+    const canvas = await typedChart(page);
+    const drawn = (n) =>
+      page.waitForFunction((n) => document.querySelector("canvas#envelope")?.dataset.curves === String(n), n, {
+        timeout: 10_000,
+      });
+    const pixels = () =>
+      page.evaluate(() => {
+        const c = document.querySelector("canvas#envelope");
+        const d = c.getContext("2d").getImageData(0, 0, c.width, c.height).data;
+        let h = 0;
+        for (let i = 0; i < d.length; i += 1) h = (Math.imul(h, 31) + d[i]) | 0;
+        return h;
+      });
+    const listed = () =>
+      page.evaluate(() =>
+        [...document.querySelectorAll(".chart-legend li[data-method]")].map((li) => [li.dataset.method, li.textContent]),
+      );
+    await drawn(2);
+    const before = await pixels();
+    assert.deepEqual(await listed(), [], "the legend lists other methods before the option is ticked");
+
+    const toggle = page.locator("[data-testid=toggle-compare]");
+    await toggle.check();
+    await drawn(2 + others.length);
+    const items = await listed();
+    assert.deepEqual(
+      items.map(([k]) => k),
+      others.map(([k]) => k),
+      "the legend names each other method that applies, in order",
+    );
+    for (const [key, title] of others) {
+      const text = items.find(([k]) => k === key)[1];
+      assert.ok(text.startsWith(title), `legend item ${key}: ${text}`);
+      assert.equal(/allowable/.test(text), key === "aisc360-asd", `legend item ${key}: ${text}`);
+    }
+    const legend = await page.locator(".chart-legend").innerText();
+    assert.ok(!/EN 1995/.test(legend), "the timber method is listed for a steel member");
+    assert.notEqual(await pixels(), before, "the canvas did not change when the methods were compared");
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+    await canvas.screenshot({ path: join(OUT, "envelope-compare.png") });
+    await page.locator("[data-testid=contrast-toggle]").click();
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+    await page.locator(".chart-block").screenshot({ path: join(OUT, "envelope-compare-hc.png") });
+    await page.locator("[data-testid=contrast-toggle]").click();
+
+    await toggle.uncheck();
+    await drawn(2);
+    assert.deepEqual(await listed(), [], "unticking left other methods in the legend");
+    assert.equal(await pixels(), before, "unticking did not restore the chart");
     assertNoErrors(log.errors);
   });
 });

@@ -74,6 +74,8 @@ struct Ctx {
     checks: Memo<Checks>,
     high_contrast: RwSignal<bool>,
     perry: RwSignal<bool>,
+    /// Whether the chart also draws the other methods that apply.
+    compare: RwSignal<bool>,
     problem: RwSignal<Option<Problem>>,
     save_problem: RwSignal<Option<String>>,
     other_tab: RwSignal<Option<String>>,
@@ -267,6 +269,7 @@ pub fn App() -> impl IntoView {
         checks,
         high_contrast,
         perry: RwSignal::new(false),
+        compare: RwSignal::new(false),
         problem: RwSignal::new(None),
         save_problem: RwSignal::new(None),
         other_tab: RwSignal::new(None),
@@ -1197,8 +1200,9 @@ fn CalcSheet(ctx: Ctx, chart: Option<(String, String)>) -> impl IntoView {
 }
 
 /// The chart's legend as text: one element for the app to build, not
-/// one per item.
-fn legend_html(perry: bool) -> String {
+/// one per item. `others` is `Some` when the other methods are compared:
+/// one item each, named by the method's title.
+fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Curve)]>) -> String {
     let mut h = String::from(
         "<li><span class=\"sw sw-shade\"></span>within capacity (shaded)</li>\
          <li><span class=\"sw sw-major\"></span>design curve, major axis (solid)</li>\
@@ -1216,6 +1220,22 @@ fn legend_html(perry: bool) -> String {
             ));
         }
     }
+    match others {
+        Some([]) => h.push_str("<li>no other method applies to this member</li>"),
+        Some(list) => {
+            h.push_str("<li>other methods, each the lower of its two axis curves:</li>");
+            for (m, c) in list {
+                h.push_str("<li data-method=\"");
+                h.push_str(m.key());
+                h.push_str("\"><span class=\"sw sw-m sw-m");
+                h.push(char::from(b'0' + *m as u8));
+                h.push_str("\"></span>");
+                h.push_str(&report::esc(&c.label));
+                h.push_str("</li>");
+            }
+        }
+        None => {}
+    }
     h
 }
 
@@ -1224,9 +1244,11 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
     let canvas = NodeRef::<leptos::html::Canvas>::new();
     let note = RwSignal::new(None::<String>);
     let described = RwSignal::new(String::new());
+    let legend = RwSignal::new(String::new());
     Effect::new(move |_| {
         let c = current.get();
         let perry = ctx.perry.get();
+        let others = ctx.compare.get();
         let hc = ctx.high_contrast.get();
         let sys = ctx.units.get();
         let us = sys == UnitSystem::Us;
@@ -1246,11 +1268,12 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
             el.set_height(bh);
         }
         let data = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
-            (Some(p), Ok(r)) => Some(chart::data::build(p, r, perry)),
+            (Some(p), Ok(r)) => Some(chart::data::build(p, r, perry, others)),
             _ => None,
         });
         match data {
             Some(Ok(d)) => {
+                legend.set(legend_html(perry, others.then_some(d.others.as_slice())));
                 match chart::envelope::draw(&el, &d, dpr, hc, us) {
                     Ok(()) => note.set(None),
                     Err(e) => note.set(Some(e)),
@@ -1267,9 +1290,14 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
                     None => String::new(),
                 });
             }
-            Some(Err(e)) => note.set(Some(fields::error_text(&e))),
+            Some(Err(e)) => {
+                legend.set(legend_html(perry, None));
+                note.set(Some(fields::error_text(&e)));
+            }
             None => {
+                legend.set(legend_html(perry, None));
                 for a in [
+                    "data-curves",
                     "data-marker-slenderness",
                     "data-marker-stress-mpa",
                     "data-marker-px",
@@ -1285,20 +1313,33 @@ fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
     });
     view! {
         <div class="chart-block">
-            <div class="chart-head">
+            // One handler for both options, told apart by the box's name;
+            // the boxes are the only writers of their signals, so they need
+            // not follow them.
+            <div class="chart-head" on:change=move |e| {
+                let on = event_target_checked(&e);
+                let name = event_target::<web_sys::Element>(&e).get_attribute("name");
+                if name.as_deref() == Some("compare_methods") {
+                    ctx.compare.set(on);
+                } else {
+                    ctx.perry.set(on);
+                }
+            }>
                 <h3 class="sub-title">"Capacity envelope"</h3>
                 <label class="check">
-                    <input type="checkbox" name="show_bows" data-testid="toggle-bows"
-                        prop:checked=move || ctx.perry.get()
-                        on:change=move |e| ctx.perry.set(event_target_checked(&e)) />
+                    <input type="checkbox" name="show_bows" data-testid="toggle-bows" />
                     " show Perry-Robertson bows L/250, L/500, L/1000"
+                </label>
+                <label class="check">
+                    <input type="checkbox" name="compare_methods" data-testid="toggle-compare" />
+                    " compare every method that applies"
                 </label>
             </div>
             <div class="canvas-frame">
                 <canvas id="envelope" class="envelope" node_ref=canvas role="img"
                     aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
             </div>
-            <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend_html(ctx.perry.get())></ul>
+            <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend.get()></ul>
             <p class="chart-description">{move || described.get()}</p>
             {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
         </div>

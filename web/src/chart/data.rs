@@ -3,6 +3,7 @@
 //! never disagree), the axis ranges and the member's markers.
 
 use strutline_core::check::{Mode, Prepared};
+use strutline_core::compare::{self, Outcome};
 use strutline_core::envelope;
 use strutline_core::method::{self, Input, Method};
 use strutline_core::trace::Trace;
@@ -55,6 +56,10 @@ pub struct ChartData {
     pub design: Vec<(Mode, Curve)>,
     /// The Perry-Robertson family (empty unless asked for).
     pub perry: Vec<Curve>,
+    /// Every other method that applies to the member, each by the lower of
+    /// its two axis curves (empty unless asked for), in [`Method::ALL`]
+    /// order.
+    pub others: Vec<(Method, Curve)>,
     /// The member's markers, one per mode checked.
     pub markers: Vec<Marker>,
 }
@@ -74,11 +79,14 @@ fn nice_ceiling(v: f64, step: f64) -> f64 {
     ((v / step).ceil() * step).max(step)
 }
 
-/// Works the chart for a prepared member and its check.
+/// Works the chart for a prepared member and its check, with the
+/// Perry-Robertson family when `with_perry` and the other methods' curves
+/// when `with_others`.
 pub fn build(
     prepared: &Prepared,
     result: &CheckResult,
     with_perry: bool,
+    with_others: bool,
 ) -> Result<ChartData, Error> {
     let area = prepared.section.props.area_mm2;
     let (f, e) = prepared.material.strength_and_modulus();
@@ -122,6 +130,11 @@ pub fn build(
     } else {
         Vec::new()
     };
+    let others = if with_others {
+        other_methods(prepared, x_max)
+    } else {
+        Vec::new()
+    };
 
     // Every mode is marked at its slenderness (torsional modes at their
     // equivalent slenderness), so a torsional mode that governs is shown.
@@ -147,8 +160,55 @@ pub fn build(
         euler,
         design,
         perry,
+        others,
         markers,
     })
+}
+
+/// At each slenderness the lower of two curves sampled at the same
+/// slenderness steps (the first curve's slenderness is kept).
+pub fn lower(a: &[(f64, f64)], b: &[(f64, f64)]) -> Vec<(f64, f64)> {
+    a.iter()
+        .zip(b)
+        .map(|(&(x, ya), &(_, yb))| (x, ya.min(yb)))
+        .collect()
+}
+
+/// The curve of every method other than the member's own that applies to
+/// it ([`compare::compare`] checks it), in [`Method::ALL`] order: at each
+/// slenderness the lower of the method's major- and minor-axis design
+/// stresses, both axes taken at that slenderness, so it is the method's
+/// flexural-buckling curve for this section whichever axis governs. A
+/// method that does not apply, or refuses this member, or refuses some
+/// slenderness of the range, is left out. AISC 360 ASD's curve is its
+/// allowable stress P_n / (Omega_c A), and its label says so.
+pub fn other_methods(prepared: &Prepared, x_max: f64) -> Vec<(Method, Curve)> {
+    let mut out = Vec::new();
+    for row in compare::compare(prepared) {
+        if row.own || !matches!(row.outcome, Outcome::Checked { .. }) {
+            continue;
+        }
+        let axis = |mode| envelope::sample(prepared, row.method, mode, 0.0, x_max, STEPS);
+        let (Ok(major), Ok(minor)) = (axis(Mode::Major), axis(Mode::Minor)) else {
+            continue;
+        };
+        let stress = |pts: Vec<envelope::Point>| -> Vec<(f64, f64)> {
+            pts.iter().map(|p| (p.slenderness, p.design_mpa)).collect()
+        };
+        let label = if row.method == Method::AiscAsd {
+            "AISC 360-16 E3, ASD: allowable stress P_n / (Ω_c A)"
+        } else {
+            row.title
+        };
+        out.push((
+            row.method,
+            Curve {
+                label: label.to_string(),
+                points: lower(&stress(major), &stress(minor)),
+            },
+        ));
+    }
+    out
 }
 
 fn result_applied_mpa(prepared: &Prepared, area: f64) -> f64 {
@@ -311,7 +371,7 @@ mod tests {
         let m = sample_member("A");
         let p = Prepared::new(&m).unwrap();
         let r = p.check().unwrap();
-        let d = build(&p, &r, true).unwrap();
+        let d = build(&p, &r, true, false).unwrap();
         let shown = r
             .modes
             .iter()
@@ -336,8 +396,119 @@ mod tests {
             assert!(c.points.first().unwrap().1 >= c.points.last().unwrap().1);
         }
         assert_eq!(d.perry.len(), 3);
-        let no_family = build(&p, &r, false).unwrap();
+        let no_family = build(&p, &r, false, false).unwrap();
         assert!(no_family.perry.is_empty());
+        assert!(d.others.is_empty() && no_family.others.is_empty());
+    }
+
+    /// The other method's curve at slenderness `lambda`, worked as an
+    /// ordinary check of a copy of the member with both buckling lengths
+    /// set to `lambda` times the axis's radius of gyration.
+    fn checked_at(p: &Prepared, method: Method, lambda: f64) -> f64 {
+        let props = &p.section.props;
+        let mut m = p.member.clone();
+        m.method = method;
+        m.lcr_major_mm = Some(lambda * props.r_major_mm);
+        m.lcr_minor_mm = Some(lambda * props.r_minor_mm);
+        let r = Prepared::new(&m).unwrap().check().unwrap();
+        let axis = |mode| {
+            r.modes
+                .iter()
+                .find(|x| x.mode == mode)
+                .unwrap()
+                .resistance_kn
+        };
+        axis(Mode::Major).min(axis(Mode::Minor)) * 1000.0 / props.area_mm2
+    }
+
+    #[test]
+    fn other_methods_are_the_engines_own_curves() {
+        // A steel member under EN 1993-1-1: every steel method but its own
+        // is drawn, the timber method is not.
+        let mut m = sample_member("C");
+        m.method = Method::En1993;
+        let p = Prepared::new(&m).unwrap();
+        let r = p.check().unwrap();
+        let d = build(&p, &r, false, true).unwrap();
+        let drawn: Vec<Method> = d.others.iter().map(|(m, _)| *m).collect();
+        assert_eq!(
+            drawn,
+            [
+                Method::AiscLrfd,
+                Method::AiscAsd,
+                Method::CsaS16,
+                Method::PerryRobertson,
+                Method::Secant,
+                Method::Euler
+            ]
+        );
+        // The member's own curves are drawn as without the comparison.
+        assert_eq!(d.design, build(&p, &r, false, false).unwrap().design);
+        for (method, c) in &d.others {
+            assert_eq!(c.points.len(), STEPS + 1);
+            for k in [20, 60, 119] {
+                let (lambda, stress) = c.points[k];
+                let want = checked_at(&p, *method, lambda);
+                assert!(
+                    (stress - want).abs() <= 1e-9 * want.max(1.0),
+                    "{method:?} at {lambda}: {stress} vs {want}"
+                );
+            }
+            let allowable = c.label.contains("allowable");
+            assert_eq!(allowable, *method == Method::AiscAsd, "{}", c.label);
+            assert!(c.label.starts_with(method.title()));
+        }
+        // ASD's allowable stress is LRFD's design stress times
+        // 1 / (0.90 x 1.67) at every slenderness.
+        let curve = |m: Method| &d.others.iter().find(|(x, _)| *x == m).unwrap().1;
+        for (a, l) in curve(Method::AiscAsd)
+            .points
+            .iter()
+            .zip(&curve(Method::AiscLrfd).points)
+        {
+            assert!((a.1 * 0.90 * 1.67 - l.1).abs() < 1e-9 * l.1.max(1.0));
+        }
+    }
+
+    #[test]
+    fn methods_that_do_not_apply_are_left_out() {
+        let list = &crate::demo::demo_lists()[0];
+        let post = &list.members[0];
+        assert!(
+            matches!(
+                post.material,
+                strutline_core::material::MaterialSpec::Timber { .. }
+            ),
+            "{post:?}"
+        );
+        let p = Prepared::new(post).unwrap();
+        let r = p.check().unwrap();
+        let d = build(&p, &r, false, true).unwrap();
+        let rows = compare::compare(&p);
+        for (method, _) in &d.others {
+            let row = rows.iter().find(|x| x.method == *method).unwrap();
+            assert!(matches!(row.outcome, Outcome::Checked { .. }) && !row.own);
+        }
+        for steel in [
+            Method::En1993,
+            Method::AiscLrfd,
+            Method::AiscAsd,
+            Method::CsaS16,
+        ] {
+            assert!(d.others.iter().all(|(m, _)| *m != steel), "{steel:?}");
+        }
+        assert!(d.others.iter().all(|(m, _)| *m != post.method));
+    }
+
+    #[test]
+    fn method_slots_follow_the_method_order() {
+        for (i, m) in Method::ALL.into_iter().enumerate() {
+            assert_eq!(m as usize, i);
+        }
+        assert_eq!(
+            lower(&[(1.0, 5.0), (2.0, 3.0)], &[(1.1, 4.0), (2.1, 6.0)]),
+            [(1.0, 4.0), (2.0, 3.0)]
+        );
     }
 
     #[test]
@@ -346,7 +517,7 @@ mod tests {
         m.length_mm = 12_000.0;
         let p = Prepared::new(&m).unwrap();
         let r = p.check().unwrap();
-        let d = build(&p, &r, false).unwrap();
+        let d = build(&p, &r, false, false).unwrap();
         let far = d.markers.iter().map(|k| k.slenderness).fold(0.0, f64::max);
         assert!(d.x_max >= far * 1.2, "{} {}", d.x_max, far);
         assert_eq!(d.x_max % 50.0, 0.0);

@@ -1,7 +1,8 @@
 //! Draws the capacity envelope on a canvas with plotters: failure stress
 //! against slenderness, Euler's hyperbola, the strength plateau, the
 //! method's design curve about each axis with the region within capacity
-//! shaded, the optional Perry-Robertson family and the member's markers.
+//! shaded, the optional Perry-Robertson family, the optional curves of the
+//! other methods that apply and the member's markers.
 //!
 //! The canvas is drawn in device pixels (its width and height are its CSS
 //! size times the device pixel ratio, set by the caller) with every length
@@ -17,7 +18,7 @@ use strutline_core::check::Mode;
 use strutline_core::units;
 use web_sys::HtmlCanvasElement;
 
-use super::data::{dashes, text_box, tick_step, ChartData, Frame};
+use super::data::{dashes, lower, text_box, tick_step, ChartData, Frame};
 use crate::numtext::working;
 
 /// Colours of one theme.
@@ -33,6 +34,35 @@ struct Palette {
     perry: [RGBColor; 3],
     applied: RGBColor,
 }
+
+/// Colour of each method's curve when compared, in `Method::ALL` order:
+/// one set for both themes, each at least 4.5:1 against white, so the
+/// high-contrast theme needs no set of its own.
+const METHOD_COLOUR: [RGBColor; 8] = [
+    RGBColor(0, 120, 120),
+    RGBColor(170, 30, 130),
+    RGBColor(110, 110, 0),
+    RGBColor(200, 30, 30),
+    RGBColor(120, 70, 20),
+    RGBColor(95, 50, 180),
+    RGBColor(30, 130, 30),
+    RGBColor(60, 75, 95),
+];
+
+/// Dash and gap (CSS px) of each method's curve when compared, in
+/// `Method::ALL` order; the legend's swatches (style.css `.sw-m0` to
+/// `.sw-m7`) draw the same colour and pattern, so a curve is told by its
+/// dash as well as its colour.
+const METHOD_DASH: [(f64, f64); 8] = [
+    (14.0, 4.0),
+    (6.0, 3.0),
+    (2.0, 4.0),
+    (18.0, 4.0),
+    (9.0, 9.0),
+    (3.0, 8.0),
+    (5.0, 2.0),
+    (24.0, 6.0),
+];
 
 fn palette(high_contrast: bool) -> Palette {
     if high_contrast {
@@ -80,9 +110,10 @@ fn err<E>(_: E) -> String {
 }
 
 /// Draws `data` on `canvas` (already sized to CSS size x `dpr`) and records
-/// the governing marker on the canvas element for tests:
-/// `data-marker-slenderness`, `data-marker-stress-mpa` and `data-marker-px`
-/// ("x,y" in CSS pixels within the canvas). The stress axis is labelled in
+/// on the canvas element for tests the number of curves drawn
+/// (`data-curves`: design, Perry-Robertson and other methods) and the
+/// governing marker: `data-marker-slenderness`, `data-marker-stress-mpa`
+/// and `data-marker-px` ("x,y" in CSS pixels within the canvas). The stress axis is labelled in
 /// MPa, or in ksi when `us` (the curves are the same; only the tick values
 /// and the unit change).
 pub fn draw(
@@ -97,8 +128,10 @@ pub fn draw(
     let root = backend.into_drawing_area();
     let px = draw_on(&root, data, dpr, &palette(high_contrast), us)?;
     root.present().map_err(err)?;
+    let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
+    let curves = data.design.len() + data.perry.len() + data.others.len();
+    set("data-curves", curves.to_string())?;
     if let Some((m_lambda, m_stress, (x, y))) = px {
-        let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
         set("data-marker-slenderness", format!("{m_lambda:.2}"))?;
         set("data-marker-stress-mpa", format!("{m_stress:.2}"))?;
         set(
@@ -198,19 +231,14 @@ where
     .map_err(err)?;
 
     // The region within capacity: below the lower of the two design curves.
-    let lower: Vec<(f64, f64)> = match (data.design.first(), data.design.get(1)) {
-        (Some((_, a)), Some((_, b))) => a
-            .points
-            .iter()
-            .zip(b.points.iter())
-            .map(|(&(x, ya), &(_, yb))| (x, ya.min(yb)))
-            .collect(),
+    let within: Vec<(f64, f64)> = match (data.design.first(), data.design.get(1)) {
+        (Some((_, a)), Some((_, b))) => lower(&a.points, &b.points),
         (Some((_, a)), None) => a.points.clone(),
         _ => Vec::new(),
     };
-    if let (Some(first), Some(last)) = (lower.first(), lower.last()) {
+    if let (Some(first), Some(last)) = (within.first(), within.last()) {
         let mut area = vec![px(first.0, 0.0)];
-        area.extend(path(&lower));
+        area.extend(path(&within));
         area.push(px(last.0, 0.0));
         root.draw(&Polygon::new(area, pal.shade.filled()))
             .map_err(err)?;
@@ -234,6 +262,14 @@ where
     for (i, curve) in data.perry.iter().enumerate() {
         let c = pal.perry.get(i).copied().unwrap_or(pal.ink);
         root.draw(&line(path(&curve.points), c, 1.0)).map_err(err)?;
+    }
+    // Other methods under the member's own curves, thinner, each in its
+    // own colour and dash.
+    for (method, curve) in &data.others {
+        let i = *method as usize;
+        let c = METHOD_COLOUR.get(i).copied().unwrap_or(pal.ink);
+        let (on, off) = METHOD_DASH.get(i).copied().unwrap_or((4.0, 4.0));
+        dashed(path(&curve.points), on, off, c, 1.75)?;
     }
     for (mode, curve) in &data.design {
         if *mode == Mode::Major {
