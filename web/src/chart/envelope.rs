@@ -355,6 +355,15 @@ where
             }
         }
         taken.push((lx, ly));
+        // On a patch of the background, so curves passing under the label
+        // (many when methods are compared) do not cut through its text.
+        let x0 = if right { lx } else { lx - tw as i32 };
+        let half = th as i32 / 2;
+        root.draw(&Rectangle::new(
+            [(x0, ly - half), (x0 + tw as i32, ly + half)],
+            pal.background.mix(0.85).filled(),
+        ))
+        .map_err(err)?;
         let style = font(12.0).pos(Pos::new(anchor, VPos::Center));
         root.draw(&Text::new(tag, (lx, ly), style)).map_err(err)?;
         if m.governing {
