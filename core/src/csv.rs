@@ -69,7 +69,6 @@
 //! (RFC 4180) and the shortest text that reads back to the same number, so
 //! JSON -> CSV -> JSON keeps every member exactly.
 
-use std::collections::{BTreeSet, HashSet};
 use std::fmt;
 
 use serde::Serialize;
@@ -414,12 +413,15 @@ fn parse_number(raw: &str, file_mark: Mark) -> Result<f64, String> {
             .unwrap_or(false);
         let ok_rest = groups.iter().skip(1).all(|g| g.len() == 3);
         let one_separator = {
-            let seps: BTreeSet<char> = int_part
-                .chars()
-                .filter(|c| !c.is_ascii_digit())
-                .map(|c| if is_group_space(c) { ' ' } else { c })
-                .collect();
-            seps.len() == 1
+            let mut seps = int_part.chars().filter(|c| !c.is_ascii_digit()).map(|c| {
+                if is_group_space(c) {
+                    ' '
+                } else {
+                    c
+                }
+            });
+            let first = seps.next();
+            seps.all(|c| Some(c) == first)
         };
         if !(ok_first && ok_rest && one_separator) {
             return Err(format!(
@@ -451,7 +453,8 @@ fn parse_number(raw: &str, file_mark: Mark) -> Result<f64, String> {
         normal.push('e');
         normal.push_str(e);
     }
-    let v: f64 = normal.parse().map_err(|_| not_number())?;
+    // Through serde_json's reader: the wasm then carries one float parser.
+    let v = crate::decimal::parse(&normal).ok_or_else(not_number)?;
     if v.is_finite() {
         Ok(v)
     } else {
@@ -462,7 +465,8 @@ fn parse_number(raw: &str, file_mark: Mark) -> Result<f64, String> {
 /// Feet-and-inches text in millimetres; `None` when the text has no foot or
 /// inch mark (then it is a plain number in the column's unit).
 fn parse_feet_inches(raw: &str, mark: Mark) -> Option<Result<f64, String>> {
-    let mut t = raw.trim().to_lowercase();
+    // ASCII case only: the marks and words matched are ASCII or caseless.
+    let mut t = raw.trim().to_ascii_lowercase();
     for (from, to) in [
         ("′", "'"),
         ("’", "'"),
@@ -765,14 +769,14 @@ fn normalise_header(h: &str) -> String {
     h.trim()
         .trim_start_matches('\u{feff}')
         .trim()
-        .to_lowercase()
+        .to_ascii_lowercase()
         .chars()
         .map(|c| if c == ' ' || c == '-' { '_' } else { c })
         .collect()
 }
 
 fn read_header(record: &Record, problems: &mut Vec<RowProblem>) -> Vec<Column> {
-    let mut seen: HashSet<&'static str> = HashSet::new();
+    let mut seen: Vec<&'static str> = Vec::new();
     let mut columns = Vec::with_capacity(record.fields.len());
     for f in &record.fields {
         let header = f.text.trim().trim_start_matches('\u{feff}').to_string();
@@ -799,7 +803,7 @@ fn read_header(record: &Record, problems: &mut Vec<RowProblem>) -> Vec<Column> {
             ));
         }
         let info = match info {
-            Some(i) if !seen.insert(i.key) => {
+            Some(i) if seen.contains(&i.key) => {
                 problems.push(problem(
                     record.line,
                     header.clone(),
@@ -813,6 +817,9 @@ fn read_header(record: &Record, problems: &mut Vec<RowProblem>) -> Vec<Column> {
             }
             other => other,
         };
+        if let Some(i) = info {
+            seen.push(i.key);
+        }
         columns.push(Column { header, info, unit });
     }
     columns
@@ -889,7 +896,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
     let line = record.line;
     let mut problems = Vec::new();
     let mut given: Vec<(&'static KeyInfo, Value)> = Vec::new();
-    let mut failed: HashSet<&'static str> = HashSet::new();
+    let mut failed: Vec<&'static str> = Vec::new();
     for (index, field) in record.fields.iter().enumerate() {
         let column = ctx.columns.get(index);
         let empty = !field.quoted && field.text.trim().is_empty();
@@ -924,7 +931,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
         let value = match info.kind {
             Kind::Text => Ok(Value::String(field.text.clone())),
             Kind::Name => {
-                let t = field.text.trim().to_lowercase();
+                let t = field.text.trim().to_ascii_lowercase();
                 if t.is_empty() {
                     continue;
                 }
@@ -957,7 +964,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
         match value {
             Ok(v) => given.push((info, v)),
             Err(message) => {
-                failed.insert(info.key);
+                failed.push(info.key);
                 problems.push(problem(
                     line,
                     column.header.clone(),
@@ -967,7 +974,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
             }
         }
     }
-    let has = |key: &str| given.iter().any(|(i, _)| i.key == key) || failed.contains(key);
+    let has = |key: &str| given.iter().any(|(i, _)| i.key == key) || failed.contains(&key);
     let get = |key: &str| {
         given
             .iter()
@@ -998,7 +1005,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
 
     if let Some(m) = get("method") {
         if Method::from_key(m).is_none() {
-            failed.insert("method");
+            failed.push("method");
             problems.push(problem(
                 line,
                 ctx.header_of("method"),
@@ -1034,7 +1041,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
             },
         };
         if !allowed.contains(&v) {
-            failed.insert(key);
+            failed.push(key);
             problems.push(problem(
                 line,
                 ctx.header_of(key),
@@ -1059,7 +1066,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
     };
     let section_given = in_group(Group::Section);
     match get("kind") {
-        None if !failed.contains("kind") => problems.push(problem(
+        None if !failed.contains(&"kind") => problems.push(problem(
             line,
             ctx.header_of("kind"),
             key_info("kind")
@@ -1070,7 +1077,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
         None => {}
         Some(kind) => match KINDS.iter().find(|(name, _, _)| *name == kind) {
             None => {
-                failed.insert("kind");
+                failed.push("kind");
                 problems.push(problem(
                     line,
                     ctx.header_of("kind"),
@@ -1151,7 +1158,7 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
         }
         if let Some(t) = get("timber") {
             if t != "solid" && t != "glulam" {
-                failed.insert("timber");
+                failed.push("timber");
                 problems.push(problem(
                     line,
                     ctx.header_of("timber"),
@@ -1322,11 +1329,11 @@ pub fn parse_csv(text: &str) -> CsvImport {
         columns: &columns,
         mark,
     };
-    let mut ids: HashSet<String> = HashSet::new();
     for record in &rows {
         match read_row(record, &ctx) {
             Ok(member) => {
-                if ids.insert(member.id.clone()) {
+                // A linear search: a hash set would add its code to the wasm.
+                if !out.members.iter().any(|m| m.id == member.id) {
                     out.members.push(member);
                     out.member_lines.push(record.line);
                 } else {
@@ -1448,10 +1455,14 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
             flat
         })
         .collect();
-    let used: BTreeSet<&str> = rows
-        .iter()
-        .flat_map(|r| r.keys().map(String::as_str))
-        .collect();
+    // The keys used, in the order first met (a sort would add its code to
+    // the wasm).
+    let mut used: Vec<&str> = Vec::new();
+    for key in rows.iter().flat_map(|r| r.keys()) {
+        if !used.contains(&key.as_str()) {
+            used.push(key);
+        }
+    }
     let mut columns: Vec<&str> = KEYS
         .iter()
         .map(|i| i.key)
@@ -1470,28 +1481,28 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
             UnitSystem::Si => None,
         })
         .collect();
-    let headers: Vec<&str> = columns
-        .iter()
-        .zip(&us)
-        .map(|(key, u)| u.as_ref().map(|(h, _)| h.as_str()).unwrap_or(key))
-        .collect();
     let mut out = String::with_capacity(64 * (rows.len() + 1));
-    out.push_str(&headers.join(","));
+    for (i, (key, u)) in columns.iter().zip(&us).enumerate() {
+        if i > 0 {
+            out.push(',');
+        }
+        out.push_str(u.as_ref().map(|(h, _)| h.as_str()).unwrap_or(key));
+    }
     out.push_str("\r\n");
     for row in &rows {
-        let cells: Vec<String> = columns
-            .iter()
-            .zip(&us)
-            .map(|(key, u)| match (row.get(*key), u) {
-                (None, _) => String::new(),
+        for (i, (key, u)) in columns.iter().zip(&us).enumerate() {
+            if i > 0 {
+                out.push(',');
+            }
+            match (row.get(*key), u) {
+                (None, _) => {}
                 (Some(Value::Number(n)), Some((_, unit))) => match n.as_f64() {
-                    Some(f) => format!("{}", unit.from_si(f)),
-                    None => n.to_string(),
+                    Some(f) => out.push_str(&format!("{}", unit.from_si(f))),
+                    None => out.push_str(&n.to_string()),
                 },
-                (Some(v), _) => quote(&cell_text(v), matches!(v, Value::String(_))),
-            })
-            .collect();
-        out.push_str(&cells.join(","));
+                (Some(v), _) => out.push_str(&quote(&cell_text(v), matches!(v, Value::String(_)))),
+            }
+        }
         out.push_str("\r\n");
     }
     out
@@ -1588,6 +1599,7 @@ mod tests {
         clippy::panic
     )]
     use super::*;
+    use std::collections::BTreeSet;
 
     #[test]
     fn numbers_follow_the_documented_rules() {

@@ -28,6 +28,7 @@ pub mod sizing;
 pub mod solve;
 pub mod stability;
 pub mod trace;
+pub mod trig;
 pub mod units;
 pub mod wire;
 

@@ -143,7 +143,7 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
         s.push_str("\"/>");
     }
     // Principal axes through the centroid, clipped to the drawing's box.
-    let (sin, cos) = props.principal_angle_rad.sin_cos();
+    let (sin, cos) = strutline_core::trig::sin_cos(props.principal_angle_rad);
     let r = 0.025 * d;
     let dash = format!(" stroke-dasharray=\"{:.1} {:.1}\"", 2.0 * r, r);
     for (c, sn, extra) in [(cos, sin, ""), (-sin, cos, dash.as_str())] {

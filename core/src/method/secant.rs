@@ -27,7 +27,7 @@ pub fn first_yield_stress(f: f64, e: f64, lambda: f64, ecc: f64) -> f64 {
     // bracketing solver can use it: h(0) = -f < 0, and h > 0 above the root.
     let h = |s: f64| -> f64 {
         let theta = (0.5 * lambda * (s.max(0.0) / e).sqrt()).min(FRAC_PI_2);
-        let c = theta.cos();
+        let c = crate::trig::cos(theta);
         s * (c + ecc) - f * c
     };
     let hi0 = f.min(sigma_e);

@@ -515,8 +515,8 @@ impl Poly {
             return;
         }
         // Rotate the radius vector step by step: two sin_cos per arc.
-        let (ds, dc) = ((a1 - a0) / segs as f64).sin_cos();
-        let (mut s, mut c) = a0.sin_cos();
+        let (ds, dc) = crate::trig::sin_cos((a1 - a0) / segs as f64);
+        let (mut s, mut c) = crate::trig::sin_cos(a0);
         for _ in 0..=segs {
             self.push(cy + r * c, cz + r * s);
             (c, s) = (c * dc - s * ds, s * dc + c * ds);
@@ -667,7 +667,7 @@ impl Poly {
     /// [`solve_increasing`] starting at the origin (put the centroid
     /// there); `area` is the polygon's own area.
     pub fn bending(&self, theta: f64, area: f64) -> (f64, f64) {
-        let (sin, cos) = theta.sin_cos();
+        let (sin, cos) = crate::trig::sin_cos(theta);
         let (st, n) = self.rotated(sin, cos);
         let st = st.get(..n).unwrap_or(&[]);
         let half = 0.5 * area;

@@ -201,7 +201,7 @@ fn finish(raw: Raw) -> Result<Properties> {
             p.principal_angle_rad = theta;
             p.i_major_mm4 = mean + half;
             p.i_minor_mm4 = (mean - half).max(0.0);
-            (sin, cos) = theta.sin_cos();
+            (sin, cos) = crate::trig::sin_cos(theta);
             poly.shift(-yc, -zc);
             let poly_area = poly.area();
             let (w_pl, extreme) = poly.bending(theta, poly_area);

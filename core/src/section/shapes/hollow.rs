@@ -192,7 +192,8 @@ pub(super) fn circle(c: f64, r: f64, hole: bool) -> Poly {
     let mut o = Poly::new();
     for i in 0..n {
         let a = 2.0 * PI * i as f64 / n as f64;
-        o.push(c + r * a.cos(), c + r * a.sin());
+        let (sa, ca) = crate::trig::sin_cos(a);
+        o.push(c + r * ca, c + r * sa);
     }
     if hole {
         o.reverse();
