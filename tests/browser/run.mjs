@@ -7,6 +7,7 @@
 
 import assert from "node:assert/strict";
 import { register as registerPicker } from "./picker.mjs";
+import { register as registerListTools } from "./listtools.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -634,6 +635,9 @@ test("keyboard-only-member", async () => {
 
 // The section picker and "lightest that works" (tests/browser/picker.mjs).
 registerPicker(test, { withApp, open, OUT });
+
+// Order, filters, picks and the change of several members (tests/browser/listtools.mjs).
+registerListTools(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

@@ -15,7 +15,7 @@ use crate::chart;
 use crate::checks::{Checked, Checker};
 use crate::demo;
 use crate::fields::{self, Choice, Field, MaterialMode};
-use crate::listops::{self, Deleted, DeletedList};
+use crate::listops::{self, Deleted, DeletedList, ListTools};
 use crate::numtext::{for_input, working};
 use crate::report;
 use crate::restraint::Restraint;
@@ -25,6 +25,9 @@ use crate::workspace::{decode, encode, peek_revision, Workspace, KEY, UNREADABLE
 
 #[path = "panels.rs"]
 mod panels;
+
+#[path = "listbar.rs"]
+mod listbar;
 
 /// Storage key of the theme preference.
 const THEME_KEY: &str = "strutline.v1.theme";
@@ -609,6 +612,7 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
         })
     });
     let title_error = RwSignal::new(None::<String>);
+    let tools = RwSignal::new(ListTools::default());
     let selected_id = Memo::new(move |_| {
         let sel = ctx.selected.get();
         ctx.ws.with(|w| {
@@ -629,6 +633,8 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                     prop:value=move || active.get().to_string()
                     on:change=move |e| {
                         if let Ok(i) = event_target_value(&e).parse::<usize>() {
+                            // Picks are ids of the list they were made in.
+                            tools.update(|t| t.picks.clear());
                             ctx.ws.update(|w| w.active = i.min(w.lists.len().saturating_sub(1)));
                             ctx.select(0);
                         }
@@ -699,20 +705,24 @@ fn ListPanel(ctx: Ctx) -> impl IntoView {
                 ctx.select(i);
             }
         }>"+ Add member"</button>
+        <listbar::ListBar ctx=ctx tools=tools />
         <ol class="member-list">
             <For
-                each=move || {
-                    ctx.checks.get().0.iter().cloned().collect::<Vec<_>>()
-                }
+                each=move || tools.with(|t| ctx.checks.with(|c| t.shown(&c.0)))
                 key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
-                children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id /> }
+                children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id tools=tools /> }
             />
         </ol>
     }
 }
 
 #[component]
-fn MemberRow(ctx: Ctx, checked: Arc<Checked>, selected_id: Memo<Option<String>>) -> impl IntoView {
+fn MemberRow(
+    ctx: Ctx,
+    checked: Arc<Checked>,
+    selected_id: Memo<Option<String>>,
+    tools: RwSignal<ListTools>,
+) -> impl IntoView {
     let m = &checked.member;
     let id = m.id.clone();
     let standing = Standing::of(&checked.outcome);
@@ -729,13 +739,19 @@ fn MemberRow(ctx: Ctx, checked: Arc<Checked>, selected_id: Memo<Option<String>>)
     let is_selected =
         Memo::new(move |_| selected_id.with(|s| s.as_deref() == Some(id_sel.as_str())));
     let (i1, i2, i3, i4, i5) = (id.clone(), id.clone(), id.clone(), id.clone(), id.clone());
+    let i6 = id.clone();
     view! {
         <li
             class="member-row"
             class:selected=move || is_selected.get()
             data-testid="member-row"
             data-id=id.clone()
-            on:click=move |_| {
+            on:click=move |e: ev::MouseEvent| {
+                // The pick box answers here, so the row is not selected.
+                if panels::action(&e).is_some_and(|(act, _)| act == "pick") {
+                    tools.update(|t| t.toggle(&i1));
+                    return;
+                }
                 if let Some(i) = ctx.index_of(&i1) {
                     if ctx.selected.get_untracked() != i || !is_selected.get_untracked() {
                         ctx.select(i);
@@ -743,6 +759,8 @@ fn MemberRow(ctx: Ctx, checked: Arc<Checked>, selected_id: Memo<Option<String>>)
                 }
             }
         >
+            <input type="checkbox" class="row-pick" data-testid="member-pick" data-act="pick" data-v=""
+                aria-label=format!("Pick {id}") prop:checked=move || tools.with(|t| t.is_picked(&i6)) />
             <button
                 type="button"
                 class="row-main"

@@ -1,9 +1,20 @@
 //! Operations on a member list and on the lists of a workspace: add,
-//! duplicate, rename, delete with undo, reorder. Pure, so they are tested
-//! on the host.
+//! duplicate, rename, delete with undo, reorder; and the list tools: the
+//! order and filters of what is shown, the members picked, and one change
+//! applied to all of them. Pure, so they are tested on the host.
+
+use std::cmp::Ordering;
+use std::sync::Arc;
 
 use strutline_core::file::MemberFile;
+use strutline_core::material::{MaterialSpec, KNOWN_GRADES};
+use strutline_core::method::Method;
 use strutline_core::Member;
+
+use crate::checks::Checked;
+use crate::numtext::{for_input, parse_optional};
+use crate::report::esc;
+use crate::status::Standing;
 
 /// An id not used in `members`: `base` itself when free, else `base` with
 /// the smallest free suffix "-2", "-3", ...
@@ -193,6 +204,382 @@ pub fn undo_delete_list(lists: &mut Vec<MemberFile>, d: DeletedList) -> usize {
     at
 }
 
+/// The order the list is shown in; the stored order never changes.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
+pub enum Order {
+    /// As entered.
+    #[default]
+    Entered,
+    /// Highest utilisation first; members without one last.
+    UtilDown,
+    /// Lowest utilisation first; members without one last.
+    UtilUp,
+    /// By id, digits compared as numbers ("C2" before "C10").
+    Id,
+}
+
+/// The list's order and filters, the members picked, and the change typed
+/// for them.
+#[derive(Debug, Clone, Default, PartialEq)]
+pub struct ListTools {
+    /// The order shown.
+    pub order: Order,
+    /// Only members that stand so.
+    pub status: Option<Standing>,
+    /// Only members checked by this method.
+    pub method: Option<Method>,
+    /// Only members whose id, note or section has this text (ASCII case
+    /// ignored).
+    pub text: String,
+    /// Ids of the members picked.
+    pub picks: Vec<String>,
+    /// The change form: grade, method key, K major, K minor ("" leaves it).
+    pub change: [String; 4],
+    /// Why the last change was refused.
+    pub message: Option<String>,
+}
+
+impl ListTools {
+    /// Takes the value of a control of the bar or of the change form, by
+    /// its name; true when what is shown changes.
+    pub fn set(&mut self, name: &str, v: &str) -> bool {
+        match name {
+            "list_order" => {
+                self.order = match v {
+                    "util-down" => Order::UtilDown,
+                    "util-up" => Order::UtilUp,
+                    "id" => Order::Id,
+                    _ => Order::Entered,
+                }
+            }
+            "list_status" => {
+                self.status = match v {
+                    "holds" => Some(Standing::Holds),
+                    "exceeds" => Some(Standing::Exceeds),
+                    "input" => Some(Standing::NeedsInput),
+                    _ => None,
+                }
+            }
+            "list_method" => self.method = Method::from_key(v),
+            "list_text" => self.text = v.to_string(),
+            _ => {
+                let slot = CHANGE_KEYS.iter().position(|k| *k == name);
+                if let Some(s) = slot.and_then(|i| self.change.get_mut(i)) {
+                    *s = v.to_string();
+                }
+                return false;
+            }
+        }
+        true
+    }
+
+    /// Whether member `id` is picked.
+    pub fn is_picked(&self, id: &str) -> bool {
+        self.picks.iter().any(|p| p == id)
+    }
+
+    /// Picks member `id`, or lets it go when it was picked.
+    pub fn toggle(&mut self, id: &str) {
+        let before = self.picks.len();
+        self.picks.retain(|p| p != id);
+        if self.picks.len() == before {
+            self.picks.push(id.to_string());
+        }
+    }
+
+    /// Whether a member passes the filters.
+    fn keeps(&self, c: &Checked) -> bool {
+        let m = &c.member;
+        let needle = self.text.trim().to_ascii_lowercase();
+        let has = |hay: &str| hay.to_ascii_lowercase().contains(&needle);
+        self.status.is_none_or(|s| s == Standing::of(&c.outcome))
+            && self.method.is_none_or(|k| k == m.method)
+            && (needle.is_empty()
+                || has(&m.id)
+                || m.note.as_deref().is_some_and(has)
+                || has(&m.section.describe()))
+    }
+
+    /// How two members compare in the chosen order.
+    fn compare(&self, a: &Checked, b: &Checked) -> Ordering {
+        let util = |c: &Checked| c.outcome.as_ref().ok().map(|r| r.utilisation);
+        match (self.order, util(a), util(b)) {
+            (Order::Entered, ..) => Ordering::Equal,
+            (Order::Id, ..) => natural(&a.member.id, &b.member.id),
+            (Order::UtilDown, Some(x), Some(y)) => y.total_cmp(&x),
+            (_, Some(x), Some(y)) => x.total_cmp(&y),
+            (_, x, y) => y.is_some().cmp(&x.is_some()),
+        }
+    }
+
+    /// The members shown, filtered and in the chosen order (equal ones as
+    /// entered). A binary insertion sort: lists are short, and it compiles
+    /// to far less than the standard sort.
+    pub fn shown(&self, checks: &[Arc<Checked>]) -> Vec<Arc<Checked>> {
+        let mut out: Vec<Arc<Checked>> = Vec::with_capacity(checks.len());
+        for c in checks.iter().filter(|c| self.keeps(c)) {
+            let at = out.partition_point(|x| self.compare(x, c) != Ordering::Greater);
+            out.insert(at, Arc::clone(c));
+        }
+        out
+    }
+
+    /// Picks every member shown, keeping the picks already made.
+    pub fn pick_shown(&mut self, checks: &[Arc<Checked>]) {
+        for c in checks {
+            if self.keeps(c) && !self.is_picked(&c.member.id) {
+                self.picks.push(c.member.id.clone());
+            }
+        }
+    }
+
+    /// "Showing 4 of 6 · 2 picked (1 not shown)".
+    pub fn tally(&self, checks: &[Arc<Checked>]) -> String {
+        let (mut shown, mut picked, mut hidden) = (0, 0, 0);
+        for c in checks {
+            let keep = self.keeps(c);
+            let pick = self.is_picked(&c.member.id);
+            shown += usize::from(keep);
+            picked += usize::from(pick);
+            hidden += usize::from(pick && !keep);
+        }
+        let mut t = String::from("Showing ");
+        let parts = [
+            (shown, " of "),
+            (checks.len(), ""),
+            (picked, " picked"),
+            (hidden, " not shown)"),
+        ];
+        for (i, (n, after)) in parts.into_iter().enumerate() {
+            match i {
+                2 if picked == 0 => break,
+                2 => t.push_str(" · "),
+                3 if hidden == 0 => break,
+                3 => t.push_str(" ("),
+                _ => {}
+            }
+            t.push_str(&n.to_string());
+            t.push_str(after);
+        }
+        t
+    }
+
+    /// The tally and, after a refused change, why, as HTML.
+    pub fn status_html(&self, checks: &[Arc<Checked>]) -> String {
+        let mut h = String::from("<span data-testid=\"list-tally\">");
+        h.push_str(&self.tally(checks));
+        h.push_str("</span>");
+        if let Some(m) = &self.message {
+            h.push_str("<span class=\"field-error\" data-testid=\"field-error\" role=\"alert\">✎ ");
+            h.push_str(&esc(m));
+            h.push_str("</span>");
+        }
+        h
+    }
+
+    /// Applies the change form to the picked members of `members`. Nothing
+    /// changes when a value is wrong or nothing is picked; otherwise the
+    /// members as they were and the sentence for the undo bar.
+    pub fn apply(&self, members: &mut [Member]) -> Result<(Vec<Member>, String), String> {
+        let [grade, method, k_major, k_minor] = &self.change;
+        let grade = grade.trim();
+        if !grade.is_empty() && !KNOWN_GRADES.contains(&grade) {
+            return Err("grade: not a grade this app knows; choose one from the list".into());
+        }
+        let method = match method.trim() {
+            "" => None,
+            key => Some(
+                Method::from_key(key)
+                    .ok_or_else(|| String::from("method: not a method this app knows"))?,
+            ),
+        };
+        let factor = |key: &str, text: &str| -> Result<Option<f64>, String> {
+            let k = parse_optional(text).map_err(|e| e.message(key))?;
+            match k {
+                Some(v) if !(v > 0.0 && v.is_finite()) => Err(key.to_string()
+                    + ": an effective-length factor must be a number greater than zero"),
+                _ => Ok(k),
+            }
+        };
+        let k_major = factor("k_major", k_major)?;
+        let k_minor = factor("k_minor", k_minor)?;
+        let mut what = String::new();
+        let (kx, ky) = (k_major.map(for_input), k_minor.map(for_input));
+        let said = [
+            ("grade set to ", Some(grade).filter(|g| !g.is_empty())),
+            ("method set to ", method.map(Method::title)),
+            ("K major set to ", kx.as_deref()),
+            ("K minor set to ", ky.as_deref()),
+        ];
+        for (a, b) in said.iter().filter_map(|(a, b)| Some((a, (*b)?))) {
+            if !what.is_empty() {
+                what.push_str(", ");
+            }
+            what.push_str(a);
+            what.push_str(b);
+        }
+        if let Some(c) = what.get_mut(0..1) {
+            c.make_ascii_uppercase();
+        }
+        if what.is_empty() {
+            return Err(
+                "Nothing to change: choose a grade or a method, or type a factor K.".into(),
+            );
+        }
+        let n = members.iter().filter(|m| self.is_picked(&m.id)).count();
+        if n == 0 {
+            return Err("No member is picked: tick the box of each member to change.".into());
+        }
+        let before = members.to_vec();
+        for m in members.iter_mut().filter(|m| self.is_picked(&m.id)) {
+            if !grade.is_empty() {
+                m.material = MaterialSpec::Grade {
+                    grade: grade.to_string(),
+                };
+            }
+            if let Some(x) = method {
+                m.method = x;
+            }
+            if let Some(v) = k_major {
+                m.k_major = v;
+                m.lcr_major_mm = None;
+            }
+            if let Some(v) = k_minor {
+                m.k_minor = v;
+                m.lcr_minor_mm = None;
+            }
+        }
+        what.push_str(" for ");
+        what.push_str(&n.to_string());
+        what.push_str(if n == 1 { " member." } else { " members." });
+        Ok((before, what))
+    }
+}
+
+/// The names of the change form's controls, in the order of
+/// [`ListTools::change`].
+pub const CHANGE_KEYS: [&str; 4] = [
+    "change_grade",
+    "change_method",
+    "change_k_major",
+    "change_k_minor",
+];
+
+/// Digits without their leading zeros.
+fn zeroless(d: &[u8]) -> &[u8] {
+    d.split_at(d.iter().take_while(|c| **c == b'0').count()).1
+}
+
+/// Ids compared with ASCII case ignored and runs of digits as numbers.
+pub fn natural(a: &str, b: &str) -> Ordering {
+    let (mut x, mut y) = (a.as_bytes(), b.as_bytes());
+    loop {
+        let (Some(&p), Some(&q)) = (x.first(), y.first()) else {
+            return x.len().cmp(&y.len());
+        };
+        let o = if p.is_ascii_digit() && q.is_ascii_digit() {
+            let digits = |s: &[u8]| s.iter().take_while(|c| c.is_ascii_digit()).count();
+            let (dx, rx) = x.split_at(digits(x));
+            let (dy, ry) = y.split_at(digits(y));
+            (x, y) = (rx, ry);
+            let (tx, ty) = (zeroless(dx), zeroless(dy));
+            tx.len().cmp(&ty.len()).then(tx.cmp(ty))
+        } else {
+            (x, y) = (x.split_at(1).1, y.split_at(1).1);
+            p.to_ascii_lowercase().cmp(&q.to_ascii_lowercase())
+        };
+        if o != Ordering::Equal {
+            return o;
+        }
+    }
+}
+
+/// Adds a labelled select of `opts` (value, text) to `out`.
+fn select_html(out: &mut String, name: &str, label: &str, opts: &[(&str, &str)]) {
+    for part in [
+        "<label class=\"field\">",
+        label,
+        "<select name=\"",
+        name,
+        "\">",
+    ] {
+        out.push_str(part);
+    }
+    for (v, l) in opts {
+        for part in ["<option value=\"", v, "\">", l, "</option>"] {
+            out.push_str(part);
+        }
+    }
+    out.push_str("</select></label>");
+}
+
+/// The bar above the list (order, filters, picking) and the change form
+/// for the picked members, as HTML; their controls are told apart by name
+/// and their buttons by `data-act`. Every text in them is the app's own.
+pub fn tools_html() -> (String, String) {
+    let leave = ("", "(leave as is)");
+    let mut methods = vec![("", "all")];
+    methods.extend(Method::ALL.iter().map(|m| (m.key(), m.title())));
+    let mut bar = String::from("<div class=\"field-grid\">");
+    select_html(
+        &mut bar,
+        "list_order",
+        "order",
+        &[
+            ("", "as entered"),
+            ("util-down", "utilisation, high to low"),
+            ("util-up", "utilisation, low to high"),
+            ("id", "id"),
+        ],
+    );
+    select_html(
+        &mut bar,
+        "list_status",
+        "status",
+        &[
+            ("", "all"),
+            ("holds", "✓ holds"),
+            ("exceeds", "✗ exceeds"),
+            ("input", "✎ needs input"),
+        ],
+    );
+    select_html(&mut bar, "list_method", "method", &methods);
+    bar.push_str(
+        "<label class=\"field\">find<input type=\"search\" name=\"list_text\" autocomplete=\"off\" \
+         spellcheck=\"false\" placeholder=\"id, note or section\"></label></div><div class=\"button-row\">\
+         <button type=\"button\" data-act=\"pick-shown\" data-v=\"\">Pick all shown</button>\
+         <button type=\"button\" data-act=\"clear-picks\" data-v=\"\">Clear picks</button></div>",
+    );
+    let mut form =
+        String::from(
+        "<details class=\"list-change\" data-testid=\"list-change\"><summary>Change the picked members</summary>\
+         <div class=\"field-grid\">",
+    );
+    let mut grades = vec![leave];
+    grades.extend(KNOWN_GRADES.iter().map(|g| (*g, *g)));
+    select_html(&mut form, "change_grade", "grade", &grades);
+    if let Some(first) = methods.first_mut() {
+        *first = leave;
+    }
+    select_html(&mut form, "change_method", "method", &methods);
+    for (name, axis) in [("change_k_major", "major"), ("change_k_minor", "minor")] {
+        for part in [
+            "<label class=\"field\">factor K, ",
+            axis,
+            " axis<input type=\"text\" name=\"",
+            name,
+            "\" inputmode=\"decimal\" autocomplete=\"off\" placeholder=\"(leave as is)\"></label>",
+        ] {
+            form.push_str(part);
+        }
+    }
+    form.push_str(
+        "</div><p class=\"hint\">A factor K replaces a buckling length typed for that axis.</p>\
+         <button type=\"button\" data-testid=\"apply-change\" data-act=\"apply\" data-v=\"\">Apply to the picked members</button></details>",
+    );
+    (bar, form)
+}
+
 #[cfg(test)]
 mod tests {
     #![allow(
@@ -283,5 +670,225 @@ mod tests {
         assert_eq!(delete_list(&mut ls, 0), None, "the last list stays");
         assert_eq!(undo_delete_list(&mut ls, d), 0);
         assert_eq!(ls[0].title, "Job");
+    }
+
+    fn checked(ms: &[Member]) -> Vec<Arc<Checked>> {
+        ms.iter().map(|m| Arc::new(Checked::new(m))).collect()
+    }
+
+    fn shown_ids(t: &ListTools, cs: &[Arc<Checked>]) -> Vec<String> {
+        t.shown(cs).iter().map(|c| c.member.id.clone()).collect()
+    }
+
+    /// C10 holds lightly, C2 holds heavily, b3 exceeds, X1 needs input.
+    fn mixed() -> Vec<Member> {
+        let mut a = sample_member("C10");
+        a.axial_kn = 10.0;
+        let mut b = sample_member("C2");
+        b.axial_kn = 100.0;
+        b.note = Some("Stair Trimmer".into());
+        let mut c = sample_member("b3");
+        c.axial_kn = 1e5;
+        c.method = Method::En1993;
+        let mut d = sample_member("X1");
+        d.length_mm = 0.0;
+        vec![a, b, c, d]
+    }
+
+    #[test]
+    fn orders_without_touching_the_list() {
+        let ms = mixed();
+        let cs = checked(&ms);
+        let mut t = ListTools::default();
+        assert_eq!(shown_ids(&t, &cs), ["C10", "C2", "b3", "X1"]);
+        assert!(t.set("list_order", "util-down"));
+        assert_eq!(
+            shown_ids(&t, &cs),
+            ["b3", "C2", "C10", "X1"],
+            "no utilisation goes last"
+        );
+        t.set("list_order", "util-up");
+        assert_eq!(shown_ids(&t, &cs), ["C10", "C2", "b3", "X1"]);
+        t.set("list_order", "id");
+        assert_eq!(shown_ids(&t, &cs), ["b3", "C2", "C10", "X1"]);
+        assert_eq!(
+            ids(&ms),
+            ["C10", "C2", "b3", "X1"],
+            "the stored order stays"
+        );
+        t.set("list_order", "");
+        assert_eq!(t.order, Order::Entered);
+    }
+
+    #[test]
+    fn natural_order_of_ids() {
+        assert_eq!(natural("C2", "C10"), Ordering::Less);
+        assert_eq!(natural("c2", "C2"), Ordering::Equal);
+        assert_eq!(natural("C02", "C2"), Ordering::Equal);
+        assert_eq!(natural("B9", "C1"), Ordering::Less);
+        assert_eq!(natural("C1", "C1a"), Ordering::Less);
+        assert_eq!(natural("C1-10", "C1-9"), Ordering::Greater);
+        assert_eq!(natural("", "A"), Ordering::Less);
+    }
+
+    #[test]
+    fn filters_by_status_method_and_text() {
+        let cs = checked(&mixed());
+        let mut t = ListTools::default();
+        t.set("list_status", "holds");
+        assert_eq!(shown_ids(&t, &cs), ["C10", "C2"]);
+        t.set("list_status", "exceeds");
+        assert_eq!(shown_ids(&t, &cs), ["b3"]);
+        t.set("list_status", "input");
+        assert_eq!(shown_ids(&t, &cs), ["X1"]);
+        t.set("list_status", "");
+        t.set("list_method", "en1993-1-1");
+        assert_eq!(shown_ids(&t, &cs), ["b3"]);
+        t.set("list_method", "");
+        t.set("list_text", " sTAIR ");
+        assert_eq!(shown_ids(&t, &cs), ["C2"], "the note, case ignored");
+        t.set("list_text", "x1");
+        assert_eq!(shown_ids(&t, &cs), ["X1"], "the id");
+        let described = cs[0].member.section.describe();
+        t.set("list_text", &described.to_ascii_uppercase());
+        assert_eq!(shown_ids(&t, &cs).len(), 4, "the section: {described}");
+        t.set("list_text", "nothing like it");
+        assert!(t.shown(&cs).is_empty());
+        assert_eq!(t.tally(&cs), "Showing 0 of 4");
+    }
+
+    #[test]
+    fn picks() {
+        let cs = checked(&mixed());
+        let mut t = ListTools::default();
+        t.toggle("C2");
+        t.toggle("X1");
+        t.toggle("X1");
+        assert_eq!(t.picks, ["C2"]);
+        t.set("list_status", "holds");
+        t.pick_shown(&cs);
+        assert_eq!(t.picks, ["C2", "C10"], "no id twice");
+        t.toggle("b3");
+        assert_eq!(t.tally(&cs), "Showing 2 of 4 · 3 picked (1 not shown)");
+        t.message = Some("k_major: <b>".into());
+        assert_eq!(
+            t.status_html(&cs),
+            "<span data-testid=\"list-tally\">Showing 2 of 4 · 3 picked (1 not shown)</span><span \
+             class=\"field-error\" data-testid=\"field-error\" role=\"alert\">✎ k_major: &lt;b&gt;</span>"
+        );
+        t.picks.clear();
+        assert_eq!(t.tally(&cs), "Showing 2 of 4");
+    }
+
+    #[test]
+    fn change_applies_to_the_picked_only_and_undoes() {
+        let original = mixed();
+        let mut ms = original.clone();
+        ms[1].lcr_major_mm = Some(1234.0);
+        let original = ms.clone();
+        let mut t = ListTools::default();
+        t.toggle("C10");
+        t.toggle("C2");
+        assert!(
+            !t.set("change_method", "aisc360-lrfd"),
+            "the form does not change what is shown"
+        );
+        t.set("change_k_major", "0,7");
+        let (before, what) = t.apply(&mut ms).unwrap();
+        assert_eq!(before, original);
+        assert_eq!(
+            what,
+            "Method set to AISC 360-16 E3, LRFD, K major set to 0.7 for 2 members."
+        );
+        for m in &ms[..2] {
+            assert_eq!(
+                (m.method, m.k_major, m.lcr_major_mm),
+                (Method::AiscLrfd, 0.7, None)
+            );
+            assert_eq!(m.k_minor, 1.0);
+        }
+        assert_eq!(ms[2..], original[2..], "members not picked stay");
+        ms.clone_from_slice(&before);
+        assert_eq!(ms, original);
+
+        t.change = Default::default();
+        t.set("change_grade", "S355");
+        t.picks = vec!["b3".into()];
+        let (_, what) = t.apply(&mut ms).unwrap();
+        assert_eq!(what, "Grade set to S355 for 1 member.");
+        assert_eq!(
+            ms[2].material,
+            MaterialSpec::Grade {
+                grade: "S355".into()
+            }
+        );
+    }
+
+    #[test]
+    fn a_bad_change_changes_nothing() {
+        let mut ms = mixed();
+        let original = ms.clone();
+        let mut t = ListTools::default();
+        let refused = |t: &ListTools, ms: &mut Vec<Member>| t.apply(ms).unwrap_err();
+        assert!(refused(&t, &mut ms).starts_with("Nothing to change"));
+        t.set("change_method", "euler");
+        assert!(refused(&t, &mut ms).starts_with("No member is picked"));
+        t.toggle("C2");
+        t.toggle("gone");
+        t.set("change_k_minor", "0.8.1");
+        assert!(refused(&t, &mut ms).starts_with("k_minor: must be a number"));
+        t.set("change_k_minor", "-1");
+        assert_eq!(
+            refused(&t, &mut ms),
+            "k_minor: an effective-length factor must be a number greater than zero"
+        );
+        t.set("change_k_minor", "0");
+        assert!(refused(&t, &mut ms).starts_with("k_minor:"));
+        t.set("change_k_minor", "");
+        t.set("change_k_major", "1,2.0");
+        assert!(refused(&t, &mut ms).starts_with("k_major:"));
+        t.set("change_k_major", "");
+        t.set("change_grade", "S999");
+        assert!(refused(&t, &mut ms).starts_with("grade: not a grade"));
+        t.set("change_grade", "");
+        t.set("change_method", "guesswork");
+        assert!(refused(&t, &mut ms).starts_with("method:"));
+        assert_eq!(ms, original);
+        t.set("change_method", "euler");
+        assert_eq!(
+            t.apply(&mut ms).unwrap().1,
+            "Method set to Euler, capped at squash load for 1 member."
+        );
+    }
+
+    #[test]
+    fn the_bar_offers_every_choice() {
+        let (bar, form) = tools_html();
+        for m in Method::ALL {
+            assert!(bar.contains(&format!("value=\"{}\"", m.key())), "{m:?}");
+            assert!(form.contains(&format!("value=\"{}\"", m.key())), "{m:?}");
+        }
+        for g in KNOWN_GRADES {
+            assert!(
+                form.contains(&format!("<option value=\"{g}\">{g}</option>")),
+                "{g}"
+            );
+        }
+        for name in ["list_order", "list_status", "list_method", "list_text"] {
+            assert!(bar.contains(&format!("name=\"{name}\"")), "{name}");
+        }
+        for name in CHANGE_KEYS {
+            assert!(form.contains(&format!("name=\"{name}\"")), "{name}");
+        }
+        let mut t = ListTools::default();
+        for (name, v) in [
+            ("change_grade", "A36"),
+            ("change_method", "euler"),
+            ("change_k_major", "2"),
+            ("change_k_minor", "3"),
+        ] {
+            t.set(name, v);
+        }
+        assert_eq!(t.change, ["A36", "euler", "2", "3"]);
     }
 }

@@ -14,7 +14,7 @@ use super::{Ctx, Undo};
 use crate::picker::{self, Proposal};
 
 /// The `data-act` and `data-v` of the button under a click, if any.
-fn action(e: &leptos::ev::MouseEvent) -> Option<(String, String)> {
+pub(super) fn action(e: &leptos::ev::MouseEvent) -> Option<(String, String)> {
     let t: web_sys::Element = wasm_bindgen::JsCast::dyn_into(e.target()?).ok()?;
     let b = t.closest("[data-act]").ok()??;
     Some((b.get_attribute("data-act")?, b.get_attribute("data-v")?))

@@ -1,0 +1,64 @@
+//! The list tools above the member list: order, filters, picking, and the
+//! change form for the picked members. A child of the app module so it
+//! shares its state; the controls are HTML text from
+//! [`crate::listops::tools_html`], answered by one delegated input handler
+//! and one delegated click handler, and all the logic is in
+//! [`crate::listops::ListTools`]. Applying a change sets `Undo::Edit`.
+
+use leptos::prelude::*;
+
+use super::panels::action;
+use super::{Ctx, Undo};
+use crate::listops::{tools_html, ListTools};
+
+type Tools = (Ctx, RwSignal<ListTools>);
+
+/// Takes a control's value; only the order and filters re-render the list.
+fn typed((_, tools): Tools, e: &leptos::ev::Event) {
+    let name = event_target::<web_sys::Element>(e).get_attribute("name");
+    let v = event_target_value(e);
+    if let Some(name) = name {
+        tools.update(|t| {
+            t.set(&name, &v);
+        });
+    }
+}
+
+/// Answers a button of the bar or of the change form.
+fn clicked((ctx, tools): Tools, e: &leptos::ev::MouseEvent) {
+    let Some((act, _)) = action(e) else {
+        return;
+    };
+    match act.as_str() {
+        "pick-shown" => ctx
+            .checks
+            .with_untracked(|c| tools.update(|t| t.pick_shown(&c.0))),
+        "clear-picks" => tools.update(|t| t.picks.clear()),
+        "apply" => {
+            let list = ctx.ws.with_untracked(|w| w.active);
+            let done = tools.with(|t| ctx.with_members(|ms| t.apply(ms)));
+            match done {
+                Some(Ok((before, what))) => {
+                    tools.update(|t| t.message = None);
+                    ctx.undo.set(Some(Undo::Edit { list, what, before }));
+                    ctx.select(ctx.selected.get_untracked());
+                }
+                Some(Err(msg)) => tools.update(|t| t.message = Some(msg)),
+                None => {}
+            }
+        }
+        _ => {}
+    }
+}
+
+/// The bar, the change form (folded until opened) and the tally.
+#[component]
+pub(super) fn ListBar(ctx: Ctx, tools: RwSignal<ListTools>) -> impl IntoView {
+    let p: Tools = (ctx, tools);
+    let (bar, form) = tools_html();
+    view! {
+        <div class="list-tools"
+            on:input=move |e| typed(p, &e) on:click=move |e| clicked(p, &e) inner_html=bar + &form></div>
+        <p class="list-summary" role="status" inner_html=move || tools.with(|t| ctx.checks.with(|c| t.status_html(&c.0)))></p>
+    }
+}
