@@ -12,6 +12,7 @@ import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
 import { join } from "node:path";
+import { gzipSync } from "node:zlib";
 import {
   arg,
   cliCheck,
@@ -139,6 +140,22 @@ test("loads-clean", async () => {
     });
     assert.deepEqual(foreign, [], "requests to another origin");
     assert.ok(log.requests.length > 0, "no request was seen at all");
+    // What the first visit took over the wire, measured by the browser:
+    // the module arrives gzip-encoded and the app's files fit the size
+    // budget (350 KB, as xtask/src/dist.rs checks on dist/).
+    const sizes = await page.evaluate(() =>
+      [...performance.getEntriesByType("navigation"), ...performance.getEntriesByType("resource")].map((e) => ({
+        name: e.name,
+        encoded: e.encodedBodySize,
+        decoded: e.decodedBodySize,
+      })),
+    );
+    const wasm = sizes.find((e) => e.name.endsWith("strutline_web_bg.wasm"));
+    assert.ok(wasm, `the module is not among the loaded resources: ${JSON.stringify(sizes)}`);
+    assert.ok(wasm.encoded > 0 && wasm.encoded < wasm.decoded / 2, `the module was not sent compressed: ${JSON.stringify(wasm)}`);
+    const total = sizes.reduce((n, e) => n + e.encoded, 0);
+    assert.ok(total <= 350 * 1024, `the first visit took ${total} B, over the 358400 B budget`);
+    console.log(`     first visit: ${total} B over the wire (module ${wasm.encoded} B of ${wasm.decoded} B)`);
   });
 });
 
@@ -490,6 +507,7 @@ test("update-ready", async () => {
   assert.ok(DIST, "--dist DIR is needed to publish a new build (cargo xtask browser-test passes it)");
   const swPath = join(DIST, "sw.js");
   const original = readFileSync(swPath, "utf8");
+  const originalGz = readFileSync(`${swPath}.gz`);
   const oldName = original.match(/const CACHE_NAME = "([^"]+)";/)?.[1];
   assert.ok(oldName, "sw.js has no stamped cache name");
   const newName = `${oldName}-next`;
@@ -497,8 +515,11 @@ test("update-ready", async () => {
     await withApp("update-ready", async (page, log) => {
       await open(page);
       await waitForWorker(page);
-      // Publish a "new build": same files, a new cache name.
-      writeFileSync(swPath, original.replace(`const CACHE_NAME = "${oldName}";`, `const CACHE_NAME = "${newName}";`));
+      // Publish a "new build": same files, a new cache name (and its
+      // precompressed copy, which the server sends to a browser).
+      const next = original.replace(`const CACHE_NAME = "${oldName}";`, `const CACHE_NAME = "${newName}";`);
+      writeFileSync(swPath, next);
+      writeFileSync(`${swPath}.gz`, gzipSync(next));
       await page.evaluate(async () => {
         const reg = await navigator.serviceWorker.getRegistration();
         await reg.update();
@@ -531,6 +552,7 @@ test("update-ready", async () => {
     });
   } finally {
     writeFileSync(swPath, original);
+    writeFileSync(`${swPath}.gz`, originalGz);
   }
 });
 

@@ -8,7 +8,9 @@
 //! copy the shell (index.html, boot.js, style.css, manifest), draw the
 //! icons, then write `sw.js` with a cache name stamped from a SHA-256 over
 //! every other shipped file and the list of files to precache. Finally
-//! the gzipped total is printed and checked against the size budget.
+//! each file is gzipped beside itself by zopfli (`F.gz`, where smaller; the
+//! server sends it to browsers that take gzip), and the total of the bytes
+//! sent is printed and checked against the size budget.
 
 use std::path::{Path, PathBuf};
 
@@ -17,7 +19,8 @@ use sha2::{Digest, Sha256};
 
 use crate::util;
 
-/// The size budget: 350 KB gzipped, summed over every file in `dist/`.
+/// The size budget: 350 KB gzipped, summed over every file in `dist/` as
+/// it is sent (its `.gz` where one was written).
 pub const BUDGET_GZ_BYTES: usize = 350 * 1024;
 
 /// The wasm target.
@@ -37,8 +40,12 @@ pub struct Built {
     pub dir: PathBuf,
     /// Every shipped file with its raw and gzipped size, sorted by path.
     pub files: Vec<(String, usize, usize)>,
-    /// Sum of the gzipped sizes.
+    /// Sum of the bytes sent: each file's `.gz` (zopfli) where one was
+    /// written, else the file itself. The budget counts this.
     pub gz_total: usize,
+    /// Sum of the sizes gzipped by flate2 at its best level, about what a
+    /// host that compresses on the fly sends (printed for comparison).
+    pub flate_total: usize,
     /// The stamped cache name written into `sw.js`.
     pub cache_name: String,
 }
@@ -71,11 +78,14 @@ pub fn report(built: &Built) {
         println!("  {path:<32} {raw:>9} B  {gz:>8} B gz");
     }
     println!(
-        "  total gzipped: {} B ({:.1} KB) of a {} B ({} KB) budget",
+        "  total gzipped: {} B ({:.1} KB) of a {} B ({} KB) budget (each file as sent, \
+         its zopfli .gz where smaller; by flate2 -9 on the fly, as some hosts \
+         would: {} B)",
         built.gz_total,
         built.gz_total as f64 / 1024.0,
         BUDGET_GZ_BYTES,
-        BUDGET_GZ_BYTES / 1024
+        BUDGET_GZ_BYTES / 1024,
+        built.flate_total
     );
 }
 
@@ -215,18 +225,29 @@ fn build_with(dist: &Path, use_wasm_opt: bool, keep_names: bool) -> Result<Built
     // read back by the update test and by people looking at a deployment.
     std::fs::write(dist.join("sw.js"), sw)?;
 
+    // Each file is also written gzipped beside itself (`F.gz`, by zopfli)
+    // when that is smaller, for a server that sends precompressed files
+    // (as `cargo xtask serve` does); those are the bytes the budget counts.
     let mut files = Vec::new();
-    let mut gz_total = 0;
+    let (mut gz_total, mut flate_total) = (0, 0);
     for rel in util::files_under(dist)? {
         let bytes = std::fs::read(dist.join(&rel))?;
-        let gz = util::gzip_len(&bytes)?;
-        gz_total += gz;
-        files.push((rel, bytes.len(), gz));
+        let gz = util::zopfli_gzip(&bytes)?;
+        let sent = if gz.len() < bytes.len() {
+            std::fs::write(dist.join(format!("{rel}.gz")), &gz)?;
+            gz.len()
+        } else {
+            bytes.len()
+        };
+        gz_total += sent;
+        flate_total += util::gzip_len(&bytes)?;
+        files.push((rel, bytes.len(), sent));
     }
     Ok(Built {
         dir: dist.to_path_buf(),
         files,
         gz_total,
+        flate_total,
         cache_name,
     })
 }

@@ -138,19 +138,20 @@ fn accept_loop(listener: &TcpListener, root: &Path, stop: &AtomicBool) {
 }
 
 /// The request line's method and target, or None for a malformed head.
-fn read_head(stream: &TcpStream) -> Option<(String, String)> {
+fn read_head(stream: &TcpStream) -> Option<(String, String, bool)> {
     let mut reader = BufReader::new(stream.take(MAX_HEAD as u64));
     let mut first = String::new();
     reader.read_line(&mut first).ok()?;
     // Drain the header lines up to the blank line (bodies are not read:
     // only GET and HEAD are served).
     let mut line = String::new();
+    let mut gzip = false;
     loop {
         line.clear();
         match reader.read_line(&mut line) {
             Ok(0) => return None,
             Ok(_) if line == "\r\n" || line == "\n" => break,
-            Ok(_) => {}
+            Ok(_) => gzip |= accepts_gzip(&line),
             Err(_) => return None,
         }
     }
@@ -161,13 +162,30 @@ fn read_head(stream: &TcpStream) -> Option<(String, String)> {
     if !version.starts_with("HTTP/1.") || parts.next().is_some() {
         return None;
     }
-    Some((method, target))
+    Some((method, target, gzip))
+}
+
+/// Whether a header line is an Accept-Encoding that takes gzip (listed,
+/// and not with `q=0`).
+fn accepts_gzip(line: &str) -> bool {
+    let Some((name, value)) = line.split_once(':') else {
+        return false;
+    };
+    name.trim().eq_ignore_ascii_case("accept-encoding")
+        && value.split(',').any(|coding| {
+            let mut parts = coding.split(';').map(str::trim);
+            let is_gzip = parts.next().is_some_and(|c| c.eq_ignore_ascii_case("gzip"));
+            let q = parts
+                .find_map(|p| p.strip_prefix("q="))
+                .map_or(Some(1.0), |q| q.trim().parse::<f64>().ok());
+            is_gzip && q.is_some_and(|q| q > 0.0)
+        })
 }
 
 fn handle(mut stream: TcpStream, root: &Path) {
     let _ = stream.set_read_timeout(Some(Duration::from_secs(10)));
     let _ = stream.set_write_timeout(Some(Duration::from_secs(10)));
-    let Some((method, target)) = read_head(&stream) else {
+    let Some((method, target, gzip)) = read_head(&stream) else {
         let _ = respond(&mut stream, 400, TEXT, b"bad request\n", false);
         return;
     };
@@ -180,6 +198,17 @@ fn handle(mut stream: TcpStream, root: &Path) {
         let _ = respond(&mut stream, 400, TEXT, b"bad path\n", head_only);
         return;
     };
+    // The file's precompressed `.gz` beside it (written by `cargo xtask
+    // dist`) is sent when the client takes gzip.
+    let mut packed = path.clone().into_os_string();
+    packed.push(".gz");
+    let packed = PathBuf::from(packed);
+    if gzip && path.is_file() && packed.is_file() {
+        if let Ok(bytes) = std::fs::read(&packed) {
+            let _ = respond_as(&mut stream, mime(&path), &bytes, head_only, true);
+            return;
+        }
+    }
     match std::fs::read(&path) {
         Ok(bytes) => {
             let _ = respond(&mut stream, 200, mime(&path), &bytes, head_only);
@@ -283,6 +312,28 @@ fn respond(
     body: &[u8],
     head_only: bool,
 ) -> std::io::Result<()> {
+    respond_with(stream, status, content_type, body, head_only, false)
+}
+
+/// A 200 answer, its body gzip-encoded when `gzipped`.
+fn respond_as(
+    stream: &mut TcpStream,
+    content_type: &str,
+    body: &[u8],
+    head_only: bool,
+    gzipped: bool,
+) -> std::io::Result<()> {
+    respond_with(stream, 200, content_type, body, head_only, gzipped)
+}
+
+fn respond_with(
+    stream: &mut TcpStream,
+    status: u16,
+    content_type: &str,
+    body: &[u8],
+    head_only: bool,
+    gzipped: bool,
+) -> std::io::Result<()> {
     let mut head = format!(
         "HTTP/1.1 {status} {}\r\nContent-Type: {content_type}\r\nContent-Length: {}\r\nCache-Control: no-cache\r\nX-Content-Type-Options: nosniff\r\nConnection: close\r\n",
         reason(status),
@@ -290,6 +341,12 @@ fn respond(
     );
     if status == 405 {
         head.push_str("Allow: GET, HEAD\r\n");
+    }
+    if gzipped {
+        head.push_str("Content-Encoding: gzip\r\n");
+    }
+    if status == 200 {
+        head.push_str("Vary: Accept-Encoding\r\n");
     }
     head.push_str("\r\n");
     stream.write_all(head.as_bytes())?;
@@ -384,6 +441,57 @@ mod tests {
 
         server.stop();
         std::fs::remove_dir_all(&root).unwrap();
+    }
+
+    #[test]
+    fn sends_the_precompressed_file_to_clients_that_take_gzip() {
+        let root = temp_root();
+        let packed = crate::util::zopfli_gzip(b"\0asm").unwrap();
+        std::fs::write(root.join("app.wasm.gz"), &packed).unwrap();
+        let server = Server::start(&root, 0).unwrap();
+        let port = server.port();
+        let ask = |enc: &str| {
+            let mut s = TcpStream::connect(("127.0.0.1", port)).unwrap();
+            s.write_all(format!("GET /app.wasm HTTP/1.1\r\n{enc}\r\n").as_bytes())
+                .unwrap();
+            let _ = s.shutdown(std::net::Shutdown::Write);
+            let mut out = Vec::new();
+            let _ = s.read_to_end(&mut out);
+            out
+        };
+        let gz = ask("Accept-Encoding: br, gzip, deflate\r\n");
+        let head = String::from_utf8_lossy(&gz);
+        assert!(head.contains("Content-Encoding: gzip\r\n"), "{head}");
+        assert!(
+            head.contains("Content-Type: application/wasm\r\n"),
+            "{head}"
+        );
+        assert!(
+            head.contains(&format!("Content-Length: {}\r\n", packed.len())),
+            "{head}"
+        );
+        assert!(gz.ends_with(&packed), "the body is the .gz file");
+        for refused in [
+            "",
+            "Accept-Encoding: br\r\n",
+            "accept-encoding: gzip;q=0\r\n",
+        ] {
+            let plain = String::from_utf8(ask(refused)).unwrap();
+            assert!(!plain.contains("Content-Encoding"), "{refused:?}: {plain}");
+            assert!(plain.ends_with("\r\n\r\n\0asm"), "{refused:?}: {plain}");
+        }
+        server.stop();
+        std::fs::remove_dir_all(&root).unwrap();
+    }
+
+    #[test]
+    fn reads_accept_encoding() {
+        assert!(accepts_gzip("Accept-Encoding: gzip, deflate, br\r\n"));
+        assert!(accepts_gzip("accept-encoding:GZIP;q=0.5\r\n"));
+        assert!(!accepts_gzip("Accept-Encoding: gzip;q=0\r\n"));
+        assert!(!accepts_gzip("Accept-Encoding: br, deflate\r\n"));
+        assert!(!accepts_gzip("X-Accept-Encoding: gzip\r\n"));
+        assert!(!accepts_gzip("Accept-Encoding: x-gzip\r\n"));
     }
 
     #[test]

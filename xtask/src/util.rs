@@ -86,6 +86,19 @@ pub fn gzip_len(bytes: &[u8]) -> Result<usize> {
     Ok(enc.finish()?.len())
 }
 
+/// `bytes` in the gzip format, compressed by zopfli (slow, and some 5%
+/// smaller than the best level of zlib; any gzip reader reads it).
+pub fn zopfli_gzip(bytes: &[u8]) -> Result<Vec<u8>> {
+    let mut out = Vec::new();
+    zopfli::compress(
+        zopfli::Options::default(),
+        zopfli::Format::Gzip,
+        bytes,
+        &mut out,
+    )?;
+    Ok(out)
+}
+
 /// Every file under `dir`, as paths relative to `dir` with `/`
 /// separators, sorted.
 pub fn files_under(dir: &Path) -> Result<Vec<String>> {
