@@ -1,6 +1,5 @@
-// Browser tests of the exchange of member lists (member files, JSON; the
-// browser build leaves CSV to the command line to keep within its size
-// budget): `node tests/browser/exchange.mjs --url URL [--only NAME]`
+// Browser tests of the exchange of member lists (member files, JSON, and
+// CSV): `node tests/browser/exchange.mjs --url URL [--only NAME]`
 // against a served dist/. Each test runs in a fresh Chromium profile; a
 // failing one leaves a screenshot in tests/browser/out/. The last line is
 // "exchange: N passed, N failed"; the exit status is 1 when any failed.
@@ -66,12 +65,87 @@ test("broken-file-changes-nothing", () =>
   }),
 );
 
-test("csv-points-to-the-command-line", () =>
-  withApp("csv-points-to-the-command-line", async (page) => {
+test("round-trip-csv", () =>
+  withApp("round-trip-csv", async (page) => {
     const before = await stored(page);
-    await importText(page, "members.csv", "id,kind,diameter_mm,grade,length_mm,axial_kn,method\nA,round,40,S355,2000,10,euler\n");
-    assert.match(await page.locator("[data-testid=import-report]").textContent(), /strutline convert/);
-    assert.deepEqual(await stored(page), before, "nothing changed");
+    const file = await download(page, "export-csv");
+    assert.ok(file.name.endsWith(".csv"), file.name);
+    assert.match(file.text.split("\n")[0], /\baxial_kn\b/, "SI columns by default");
+    await importText(page, file.name, file.text);
+    const report = await page.locator("[data-testid=import-report]").textContent();
+    assert.match(report, /no problems/, report);
+    await page.click("[data-testid=import-new]");
+    const after = await stored(page);
+    assert.equal(after.lists.length, before.lists.length + 1);
+    assert.deepEqual(after.lists.at(-1).members, before.lists[before.active].members, "the same members back");
+
+    // With US units shown, the CSV has US columns, and reads back the same.
+    await page.click("[data-testid=units-toggle]");
+    const us = await download(page, "export-csv");
+    const head = us.text.split("\n")[0];
+    assert.match(head, /\baxial_kip\b/, head);
+    assert.doesNotMatch(head, /\baxial_kn\b/, head);
+    await importText(page, us.name, us.text);
+    await page.click("[data-testid=import-new]");
+    const again = await stored(page);
+    const back = again.lists.at(-1).members;
+    const orig = before.lists[before.active].members;
+    assert.equal(back.length, orig.length);
+    back.forEach((m, i) => {
+      assert.equal(m.id, orig[i].id);
+      assert.ok(Math.abs(m.axial_kn - orig[i].axial_kn) <= 1e-9 * Math.abs(orig[i].axial_kn), `${m.id}: ${m.axial_kn} kN back for ${orig[i].axial_kn}`);
+      assert.ok(Math.abs(m.length_mm - orig[i].length_mm) <= 1e-9 * orig[i].length_mm, `${m.id}: ${m.length_mm} mm back for ${orig[i].length_mm}`);
+    });
+  }),
+);
+
+test("csv-with-errors-reported-nothing-changed", () =>
+  withApp("csv-with-errors-reported-nothing-changed", async (page) => {
+    const before = await stored(page);
+    const csv = [
+      "id,kind,diameter_mm,grade,length_mm,axial_kn,method",
+      "A,round,40,S355,2000,10,euler",
+      "B,round,40,S355,2000,lots,euler",
+      "C,round,40,S355,2000,10,guesswork",
+      "D,round,50,S355,2500,12,euler",
+      "",
+    ].join("\n");
+    await importText(page, "site.csv", csv);
+    const lines = await page.locator("[data-testid=import-report] p").allTextContents();
+    const text = lines.join("\n");
+    assert.match(text, /site\.csv: 2 members read; 2 problems/, text);
+    assert.ok(lines.some((l) => /^line 3, column axial_kn: .*expected a number in kN/.test(l)), text);
+    assert.ok(lines.some((l) => /^line 4, column method: .*unknown method "guesswork"/.test(l)), text);
+    assert.deepEqual(await stored(page), before, "nothing changed before the person chooses");
+    await page.click("[data-testid=import-new]");
+    const after = await stored(page);
+    const taken = after.lists.at(-1);
+    assert.deepEqual(taken.members.map((m) => m.id), ["A", "D"], "the valid rows are taken");
+    assert.equal(taken.title, "site");
+    assert.deepEqual(after.lists.slice(0, -1), before.lists, "the lists there before are untouched");
+  }),
+);
+
+test("csv-spreadsheet-export-us-columns", () =>
+  withApp("csv-spreadsheet-export-us-columns", async (page) => {
+    // As a spreadsheet in a decimal-comma locale saves it: a byte-order
+    // mark, semicolons, decimal commas, feet and inches, quoted text and
+    // blank trailing rows.
+    const csv =
+      "\ufeffid;kind;diameter_in;grade;length_ft;axial_kip;method;note\r\n" +
+      'R1;round;1,5;S355;13\'-6";2,5;euler;"east bay; by the door"\r\n' +
+      ";;;;;;;\r\n\r\n";
+    await importText(page, "export.csv", csv);
+    const report = await page.locator("[data-testid=import-report]").textContent();
+    assert.match(report, /1 member read, no problems/, report);
+    await page.click("[data-testid=import-new]");
+    const m = (await stored(page)).lists.at(-1).members[0];
+    assert.equal(m.id, "R1");
+    assert.equal(m.note, "east bay; by the door");
+    assert.ok(Math.abs(m.section.diameter_mm - 38.1) < 1e-9, `diameter ${m.section.diameter_mm} mm`);
+    assert.ok(Math.abs(m.length_mm - 13.5 * 304.8) < 1e-9, `length ${m.length_mm} mm`);
+    // 2.5 kip = 2500 lbf x 4.4482216152605 N = 11.12055403815 kN.
+    assert.ok(Math.abs(m.axial_kn - 11.12055403815) < 1e-9, `load ${m.axial_kn} kN`);
   }),
 );
 

@@ -356,7 +356,7 @@ pub fn App() -> impl IntoView {
             <main class="panes" class:screen-only=move || ctx.sheet.with(Option::is_some)>
                 <section class="pane pane-list" aria-labelledby="h-list">
                     <ListPanel ctx=ctx />
-                    <crate::exchange::Exchange ws=ws select=Callback::new(move |i| ctx.select(i)) />
+                    <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />
                 </section>
                 <section class="pane pane-editor" aria-labelledby="h-editor">
                     {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {

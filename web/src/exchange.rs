@@ -9,6 +9,7 @@
 use leptos::prelude::*;
 use strutline_core::csv::{self, Format, RowProblem};
 use strutline_core::file::{self, MemberFile, MAX_BYTES};
+use strutline_core::units::UnitSystem;
 use strutline_core::Member;
 use wasm_bindgen::closure::Closure;
 use wasm_bindgen::JsCast;
@@ -29,16 +30,6 @@ pub struct Incoming {
     pub problems: Vec<RowProblem>,
 }
 
-/// Whether this build of the app reads and writes CSV itself. The browser
-/// build leaves CSV out to stay within its download budget (the CSV reader
-/// alone adds about 14 KB gzipped); the command line converts both ways.
-/// Host builds keep it so the view logic stays tested with it.
-pub const CSV_IN_APP: bool = cfg!(not(target_arch = "wasm32"));
-
-/// What the browser build says of a CSV file.
-pub const CSV_ELSEWHERE: &str = "this app reads member files (JSON); convert a CSV file first with \
-     `strutline convert members.csv members.json` (the command line reads CSV, including US columns)";
-
 /// The refusal of a file too large to read, by its size in bytes.
 pub fn too_big(size: f64) -> Option<String> {
     (size > MAX_BYTES as f64).then(|| {
@@ -57,8 +48,7 @@ pub fn read(name: &str, text: &str) -> Result<Incoming, String> {
             file::parse(text).map_err(|e| format!("{name}: {e}"))?,
             Vec::new(),
         ),
-        Format::Csv if CSV_IN_APP => csv::read_csv_lenient(name, text),
-        Format::Csv => return Err(format!("{name}: {CSV_ELSEWHERE}")),
+        Format::Csv => csv::read_csv_lenient(name, text),
     };
     if list.members.is_empty() && problems.is_empty() {
         return Err(format!("{name}: the file holds no members"));
@@ -101,27 +91,43 @@ pub fn file_name(title: &str, ext: &str) -> String {
     format!("{}.{ext}", if s.is_empty() { "members" } else { s })
 }
 
+/// "s" unless there is one.
+fn plural(n: usize) -> &'static str {
+    if n == 1 {
+        ""
+    } else {
+        "s"
+    }
+}
+
 /// One line of the import summary.
 pub fn summary(inc: &Incoming) -> String {
     let n = inc.list.members.len();
     let p = inc.problems.len();
     if p == 0 {
-        format!("{}: {n} members read, no problems.", inc.name)
+        format!("{}: {n} member{} read, no problems.", inc.name, plural(n))
     } else {
         format!(
-            "{}: {n} members read; {p} problem{} (nothing changes until you choose):",
+            "{}: {n} member{} read; {p} problem{} (nothing changes until you choose):",
             inc.name,
-            if p == 1 { "" } else { "s" }
+            plural(n),
+            plural(p)
         )
     }
 }
 
-fn export(ws: RwSignal<Workspace>, csv_too: bool) {
+/// Downloads the open list as the member file, or as CSV with the columns
+/// of `csv_units` (US columns carry `_ft`, `_kip`, ... suffixes).
+fn export(ws: RwSignal<Workspace>, csv_units: Option<UnitSystem>) {
     let Some(l) = ws.with_untracked(|w| w.active_list().cloned()) else {
         return;
     };
-    let _ = if csv_too && CSV_IN_APP {
-        browser::download(&file_name(&l.title, "csv"), &csv::to_csv(&l), "text/csv")
+    let _ = if let Some(system) = csv_units {
+        browser::download(
+            &file_name(&l.title, "csv"),
+            &csv::to_csv_in(&l, system),
+            "text/csv",
+        )
     } else {
         browser::download(
             &file_name(&l.title, "json"),
@@ -163,7 +169,11 @@ fn pick(e: web_sys::Event, out: RwSignal<Option<Result<Incoming, String>>>) {
 /// Export buttons, the file picker and the pending import (shown as a
 /// banner: the summary, one line a problem, and the choices).
 #[component]
-pub fn Exchange(ws: RwSignal<Workspace>, select: Callback<usize>) -> impl IntoView {
+pub fn Exchange(
+    ws: RwSignal<Workspace>,
+    units: RwSignal<UnitSystem>,
+    select: Callback<usize>,
+) -> impl IntoView {
     let pending = RwSignal::new(None::<Result<Incoming, String>>);
     let take = move |merge_in: bool| {
         let Some(Ok(inc)) = pending.get_untracked() else {
@@ -218,10 +228,10 @@ pub fn Exchange(ws: RwSignal<Workspace>, select: Callback<usize>) -> impl IntoVi
     };
     view! {
         <div class="button-row screen-only">
-            <button type="button" data-testid="export-json" on:click=move |_| export(ws, false)>"⤓ Member file"</button>
-            {CSV_IN_APP.then(|| view! {
-                <button type="button" data-testid="export-csv" on:click=move |_| export(ws, true)>"⤓ CSV"</button>
-            })}
+            <button type="button" data-testid="export-json" on:click=move |_| export(ws, None)>"⤓ Member file"</button>
+            <button type="button" data-testid="export-csv" on:click=move |_| export(ws, Some(units.get_untracked()))>
+                {move || if units.get() == UnitSystem::Us { "⤓ CSV (US columns)" } else { "⤓ CSV" }}
+            </button>
             <label class="file-pick">"⤒ Import "
                 <input type="file" accept=".json,.csv,.tsv,.txt,application/json" data-testid="import-file"
                     on:change=move |e| pick(e, pending) />
@@ -279,6 +289,36 @@ mod tests {
         let s = p.to_string();
         assert!(s.starts_with("line 3, column axial_kn"), "{s}");
         assert!(summary(&inc).contains("1 problem "), "{}", summary(&inc));
+    }
+
+    #[test]
+    fn us_columns_read_back() {
+        let l = demo_lists().remove(0);
+        let text = csv::to_csv_in(&l, UnitSystem::Us);
+        assert!(text.lines().next().unwrap().contains("axial_kip"), "{text}");
+        let back = read("us.csv", &text).unwrap();
+        assert!(back.problems.is_empty(), "{:?}", back.problems);
+        assert_eq!(back.list.members.len(), l.members.len());
+        for (a, b) in back.list.members.iter().zip(&l.members) {
+            assert_eq!(a.id, b.id);
+            let rel = (a.axial_kn - b.axial_kn).abs() / b.axial_kn.abs().max(1e-9);
+            assert!(
+                rel < 1e-9,
+                "{}: {} kN back as {} kN",
+                b.id,
+                b.axial_kn,
+                a.axial_kn
+            );
+        }
+        assert!(summary(&back).contains("members read, no problems"));
+    }
+
+    #[test]
+    fn summary_counts_in_words() {
+        let mut l = demo_lists().remove(0);
+        l.members.truncate(1);
+        let one = read("one.json", &l.to_json()).unwrap();
+        assert_eq!(summary(&one), "one.json: 1 member read, no problems.");
     }
 
     #[test]
