@@ -48,20 +48,16 @@ fn reduce(x: f64) -> (i64, f64, f64) {
     let mut w = f * PIO2_1T;
     let mut y0 = r - w;
     let ex = exponent(x);
-    if ex - exponent(y0) > 16 {
-        // Cancellation: take the next 33 bits of π/2.
-        let t = r;
-        w = f * PIO2_2;
-        r = t - w;
-        w = f * PIO2_2T - ((t - r) - w);
-        y0 = r - w;
-        if ex - exponent(y0) > 49 {
-            let t = r;
-            w = f * PIO2_3;
-            r = t - w;
-            w = f * PIO2_3T - ((t - r) - w);
-            y0 = r - w;
+    // On cancellation, take the next 33 bits of π/2, then the last ones.
+    for (part, tail, bits) in [(PIO2_2, PIO2_2T, 16), (PIO2_3, PIO2_3T, 49)] {
+        if ex - exponent(y0) <= bits {
+            break;
         }
+        let t = r;
+        w = f * part;
+        r = t - w;
+        w = f * tail - ((t - r) - w);
+        y0 = r - w;
     }
     let y1 = (r - y0) - w;
     // `f` is a whole number of modest size here; NaN and infinity give 0
