@@ -93,6 +93,9 @@ test("calc-sheet-prints-one-member-a-page", () =>
     const members = await page.locator("[data-testid=member-row]").count();
     assert.ok(members >= 2, "the demo list has members");
     await page.locator("[data-testid=member-row]").first().click();
+    // Compared methods on the chart are named in the sheet's legend too.
+    await page.locator("[data-testid=toggle-compare]").check();
+    await page.locator(".chart-legend li[data-method]").first().waitFor();
     await page.click("[data-testid=open-sheet]");
     await page.locator("[data-testid=calc-sheet]").waitFor();
     assert.equal(await page.locator("[data-testid=sheet-page]").count(), members, "a page per member");
@@ -101,6 +104,10 @@ test("calc-sheet-prints-one-member-a-page", () =>
       assert.ok((await first.textContent()).includes(part), `the member page has "${part}"`);
     }
     assert.equal(await page.locator("[data-testid=sheet-page] img.sheet-chart").count(), 1, "the envelope of the member it was opened from");
+    const legend = page.locator("[data-testid=sheet-page] .sheet-legend");
+    assert.equal(await legend.count(), 1, "a legend beside the sheet's chart");
+    assert.match(await legend.textContent(), /Euler/);
+    assert.ok((await legend.locator("li[data-method]").count()) >= 1, "the compared methods are named");
     assert.equal(await page.locator(".calc-sheet .caution").count(), members + 1, "the caution on every page");
 
     await page.emulateMedia({ media: "print" });

@@ -91,7 +91,7 @@ struct Ctx {
     units: RwSignal<UnitSystem>,
     /// The calc sheet when open: the chart image of the member it was
     /// opened from (id, PNG data URL), if there was one.
-    sheet: RwSignal<Option<Option<(String, String)>>>,
+    sheet: RwSignal<Option<Option<(String, String, String)>>>,
 }
 
 impl Ctx {
@@ -1182,17 +1182,24 @@ fn Results(ctx: Ctx) -> impl IntoView {
 }
 
 /// The selected member's id and its chart as a PNG data URL.
-fn chart_image(ctx: Ctx) -> Option<(String, String)> {
+fn chart_image(ctx: Ctx) -> Option<(String, String, String)> {
     let id = ctx.current()?.id;
     let el = document().get_element_by_id("envelope")?;
     let c: web_sys::HtmlCanvasElement = wasm_bindgen::JsCast::dyn_into(el).ok()?;
-    Some((id, c.to_data_url().ok()?))
+    // The legend's items as drawn (the app's own markup, texts escaped).
+    let legend = document()
+        .query_selector(".chart-legend")
+        .ok()
+        .flatten()
+        .map(|l| l.inner_html())
+        .unwrap_or_default();
+    Some((id, c.to_data_url().ok()?, legend))
 }
 
 /// The calc sheet of the open list, built as text by
 /// [`report::sheet_html`], with buttons to print it and to close it.
 #[component]
-fn CalcSheet(ctx: Ctx, chart: Option<(String, String)>) -> impl IntoView {
+fn CalcSheet(ctx: Ctx, chart: Option<(String, String, String)>) -> impl IntoView {
     let title = ctx
         .ws
         .with_untracked(|w| w.active_list().map(|l| l.title.clone()).unwrap_or_default());
@@ -1201,7 +1208,9 @@ fn CalcSheet(ctx: Ctx, chart: Option<(String, String)>) -> impl IntoView {
         &title,
         &crate::print::today(),
         &checks.0,
-        chart.as_ref().map(|(id, url)| (id.as_str(), url.as_str())),
+        chart
+            .as_ref()
+            .map(|(id, url, legend)| (id.as_str(), url.as_str(), legend.as_str())),
         ctx.units.get_untracked(),
     );
     view! {

@@ -307,13 +307,14 @@ fn properties_html(r: &CheckResult, sys: UnitSystem) -> String {
 
 /// The calc sheet of a list: a summary page, then a page for each member
 /// with its inputs, section properties, verdict, modes and working,
-/// warnings, the envelope of the member it was opened from (`chart`: id
-/// and image URL) and the caution on every page.
+/// warnings, the envelope of the member it was opened from (`chart`: id,
+/// image URL, and the legend's items as the app drew them, its own
+/// markup with every text escaped) and the caution on every page.
 pub fn sheet_html(
     title: &str,
     date: &str,
     checks: &[std::sync::Arc<Checked>],
-    chart: Option<(&str, &str)>,
+    chart: Option<(&str, &str, &str)>,
     sys: UnitSystem,
 ) -> String {
     let title = esc(title);
@@ -367,10 +368,11 @@ pub fn sheet_html(
         if let Ok(r) = &c.outcome {
             h.push_str(&working_html(r, sys));
         }
-        if let Some((_, url)) = chart.filter(|(cid, _)| *cid == c.member.id) {
+        if let Some((_, url, legend)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
             let _ = write!(
                 h,
-                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {id}\">",
+                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {id}\">\
+                 <ul class=\"chart-legend sheet-legend\">{legend}</ul>",
                 esc(url)
             );
         }
@@ -511,12 +513,17 @@ mod tests {
             "Depot",
             "2026-12-01",
             &cs,
-            Some(("A2", "data:image/png;base64,AA")),
+            Some(("A2", "data:image/png;base64,AA", "<li>Euler</li>")),
             UnitSystem::Si,
         );
         assert_eq!(h.matches("data-testid=\"sheet-page\"").count(), 3);
         assert_eq!(h.matches(CAUTION).count(), 4);
         assert_eq!(h.matches("<img class=\"sheet-chart\"").count(), 1);
+        assert_eq!(
+            h.matches("<li>Euler</li>").count(),
+            1,
+            "the legend beside the chart"
+        );
         assert!(h.contains("Member A2"));
     }
 }
