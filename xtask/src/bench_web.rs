@@ -25,6 +25,8 @@ pub fn run(args: &[String]) -> Result<()> {
         &built.gz_total.to_string(),
         "--dist-budget",
         &dist::BUDGET_GZ_BYTES.to_string(),
+        "--dist-zlib",
+        &built.flate_total.to_string(),
         "--cache-name",
         &built.cache_name,
         "--out",
