@@ -108,14 +108,18 @@ test("csv-with-errors-reported-nothing-changed", () =>
       "B,round,40,S355,2000,lots,euler",
       "C,round,40,S355,2000,10,guesswork",
       "D,round,50,S355,2500,12,euler",
+      "E,round,50,S355,2500,12,<b>bold</b>",
       "",
     ].join("\n");
     await importText(page, "site.csv", csv);
     const lines = await page.locator("[data-testid=import-report] p").allTextContents();
     const text = lines.join("\n");
-    assert.match(text, /site\.csv: 2 members read; 2 problems/, text);
+    assert.match(text, /site\.csv: 2 members read; 3 problems/, text);
     assert.ok(lines.some((l) => /^line 3, column axial_kn: .*expected a number in kN/.test(l)), text);
     assert.ok(lines.some((l) => /^line 4, column method: .*unknown method "guesswork"/.test(l)), text);
+    // A cell's text in a problem is shown as text, never made into markup.
+    assert.ok(lines.some((l) => l.includes('unknown method "<b>bold</b>"')), text);
+    assert.equal(await page.locator("[data-testid=import-report] b").count(), 0, "no element made from the file");
     assert.deepEqual(await stored(page), before, "nothing changed before the person chooses");
     await page.click("[data-testid=import-new]");
     const after = await stored(page);
