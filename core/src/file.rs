@@ -193,6 +193,16 @@ pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
     })
 }
 
+/// A member as the JSON value of its member-file form, or `None` if it
+/// cannot be written (it always can). Written as text and read back rather
+/// than through `serde_json::to_value`: the app already carries both of
+/// those for its storage and files, and a second serializer of every type
+/// would add several kilobytes to the wasm. The values are the same
+/// (numbers round-trip exactly with `float_roundtrip`).
+pub fn member_value(m: &Member) -> Option<Value> {
+    serde_json::from_str(&serde_json::to_string(m).ok()?).ok()
+}
+
 /// Deserialises a member, giving on failure the path of the field at fault
 /// (natively; empty in the browser build) and serde's message.
 pub fn deserialize_member(raw: &Value) -> std::result::Result<Member, (String, String)> {
@@ -277,6 +287,14 @@ mod tests {
         let bad = two.replace("\"short\"", "\"middle\"");
         let e = parse(&bad).unwrap_err().to_string();
         assert!(e.contains("angle_connection"), "{e}");
+    }
+
+    #[test]
+    fn member_value_is_to_value() {
+        let f = parse(include_str!("../../examples/depot-mezzanine.json")).unwrap();
+        for m in &f.members {
+            assert_eq!(member_value(m), Some(serde_json::to_value(m).unwrap()));
+        }
     }
 
     fn parse_value(text: &str) -> Value {

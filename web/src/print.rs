@@ -15,7 +15,7 @@ use crate::numtext::for_input;
 /// member file's order, shown in `system`'s units.
 pub fn inputs(system: UnitSystem, m: &Member) -> Vec<(String, String)> {
     let mut out = Vec::new();
-    if let Ok(v) = serde_json::to_value(m) {
+    if let Some(v) = strutline_core::file::member_value(m) {
         flatten(system, &v, &mut out);
     }
     // A JSON object's keys come back sorted; put them back in the member
