@@ -194,13 +194,14 @@ pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
 }
 
 /// A member as the JSON value of its member-file form, or `None` if it
-/// cannot be written (it always can). Written as text and read back rather
-/// than through `serde_json::to_value`: the app already carries both of
-/// those for its storage and files, and a second serializer of every type
-/// would add several kilobytes to the wasm. The values are the same
-/// (numbers round-trip exactly with `float_roundtrip`).
+/// cannot be written (it always can). Written as text by the same pretty
+/// writer as [`MemberFile::to_json`] and read back, rather than through
+/// `serde_json::to_value`: the app already carries that writer and the
+/// reader, and another serializer of every type would add several
+/// kilobytes to the wasm. The values are the same (numbers round-trip
+/// exactly with `float_roundtrip`).
 pub fn member_value(m: &Member) -> Option<Value> {
-    serde_json::from_str(&serde_json::to_string(m).ok()?).ok()
+    serde_json::from_str(&serde_json::to_string_pretty(m).ok()?).ok()
 }
 
 /// Deserialises a member, giving on failure the path of the field at fault

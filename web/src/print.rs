@@ -20,7 +20,8 @@ pub fn inputs(system: UnitSystem, m: &Member) -> Vec<(String, String)> {
     }
     // A JSON object's keys come back sorted; put them back in the member
     // file's own order (the order the struct writes them).
-    let text = serde_json::to_string(m).unwrap_or_default();
+    // (The pretty writer, the one the app carries: `"key": value`.)
+    let text = serde_json::to_string_pretty(m).unwrap_or_default();
     out.sort_by_key(|(k, _)| text.find(&format!("\"{k}\":")).unwrap_or(usize::MAX));
     out
 }

@@ -126,7 +126,8 @@ pub fn decode(text: &str) -> Result<Workspace, String> {
     let mut lists = Vec::with_capacity(raw_lists.len());
     for (i, raw) in raw_lists.iter().enumerate() {
         let title = raw.get("title").and_then(Value::as_str).unwrap_or("");
-        let text = serde_json::to_string(raw).unwrap_or_default();
+        // The pretty writer: the one the app already carries.
+        let text = serde_json::to_string_pretty(raw).unwrap_or_default();
         let list = file::parse(&text)
             .map_err(|e| format!("list {} (\"{title}\") cannot be read: {e}", i + 1))?;
         lists.push(list);
