@@ -1433,7 +1433,7 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
         .iter()
         .map(|m| {
             let mut flat = Map::new();
-            if let Some(Value::Object(obj)) = file::member_value(m) {
+            if let Some(Value::Object(obj)) = file::json_value(m) {
                 for (key, value) in obj {
                     match (key.as_str(), value) {
                         ("section" | "material", Value::Object(inner)) => {

@@ -193,15 +193,15 @@ pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
     })
 }
 
-/// A member as the JSON value of its member-file form, or `None` if it
-/// cannot be written (it always can). Written as text by the same pretty
-/// writer as [`MemberFile::to_json`] and read back, rather than through
-/// `serde_json::to_value`: the app already carries that writer and the
-/// reader, and another serializer of every type would add several
-/// kilobytes to the wasm. The values are the same (numbers round-trip
-/// exactly with `float_roundtrip`).
-pub fn member_value(m: &Member) -> Option<Value> {
-    serde_json::from_str(&serde_json::to_string_pretty(m).ok()?).ok()
+/// A value of the member file's types (a member, a section, ...) as JSON,
+/// or `None` if it cannot be written (the file's types always can).
+/// Written as text by the same pretty writer as [`MemberFile::to_json`]
+/// and read back, rather than through `serde_json::to_value`: the app
+/// already carries that writer and the reader, and another serializer of
+/// every type would add several kilobytes to the wasm. The values are the
+/// same (numbers round-trip exactly with `float_roundtrip`).
+pub fn json_value<T: Serialize>(x: &T) -> Option<Value> {
+    serde_json::from_str(&serde_json::to_string_pretty(x).ok()?).ok()
 }
 
 /// Deserialises a member, giving on failure the path of the field at fault
@@ -291,10 +291,10 @@ mod tests {
     }
 
     #[test]
-    fn member_value_is_to_value() {
+    fn json_value_is_to_value() {
         let f = parse(include_str!("../../examples/depot-mezzanine.json")).unwrap();
         for m in &f.members {
-            assert_eq!(member_value(m), Some(serde_json::to_value(m).unwrap()));
+            assert_eq!(json_value(m), Some(serde_json::to_value(m).unwrap()));
         }
     }
 

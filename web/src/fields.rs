@@ -556,13 +556,10 @@ pub fn section_of_kind(kind: &str, from: &SectionSpec) -> SectionSpec {
     section_from_value(new).unwrap_or_else(|| from.clone())
 }
 
-/// Any serialisable value as a JSON value, through the same pretty writer
-/// the member file uses (one serialiser in the wasm, not two).
+/// Any serialisable value as a JSON value, through the member file's
+/// writer and reader ([`strutline_core::file::json_value`]).
 fn as_value<T: serde::Serialize>(x: &T) -> Value {
-    serde_json::to_string_pretty(x)
-        .ok()
-        .and_then(|t| serde_json::from_str(&t).ok())
-        .unwrap_or(Value::Null)
+    strutline_core::file::json_value(x).unwrap_or(Value::Null)
 }
 
 /// A member from its JSON value, through the member file's own reader.

@@ -228,8 +228,8 @@ pub struct ListTools {
     pub status: Option<Standing>,
     /// Only members checked by this method.
     pub method: Option<Method>,
-    /// Only members whose id, note or section has this text (ASCII case
-    /// ignored).
+    /// Only members whose id, note or section has this text (trimmed and
+    /// in ASCII lower case, as [`ListTools::set`] keeps it).
     pub text: String,
     /// Ids of the members picked.
     pub picks: Vec<String>,
@@ -261,7 +261,8 @@ impl ListTools {
                 }
             }
             "list_method" => self.method = Method::from_key(v),
-            "list_text" => self.text = v.to_string(),
+            // Kept as it is matched: trimmed, ASCII case folded.
+            "list_text" => self.text = v.trim().to_ascii_lowercase(),
             _ => {
                 let slot = CHANGE_KEYS.iter().position(|k| *k == name);
                 if let Some(s) = slot.and_then(|i| self.change.get_mut(i)) {
@@ -290,8 +291,8 @@ impl ListTools {
     /// Whether a member passes the filters.
     fn keeps(&self, c: &Checked) -> bool {
         let m = &c.member;
-        let needle = self.text.trim().to_ascii_lowercase();
-        let has = |hay: &str| hay.to_ascii_lowercase().contains(&needle);
+        let needle = self.text.as_str();
+        let has = |hay: &str| hay.to_ascii_lowercase().contains(needle);
         self.status.is_none_or(|s| s == Standing::of(&c.outcome))
             && self.method.is_none_or(|k| k == m.method)
             && (needle.is_empty()

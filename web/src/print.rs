@@ -15,13 +15,14 @@ use crate::numtext::for_input;
 /// member file's order, shown in `system`'s units.
 pub fn inputs(system: UnitSystem, m: &Member) -> Vec<(String, String)> {
     let mut out = Vec::new();
-    if let Some(v) = strutline_core::file::member_value(m) {
+    // Written once by the member file's pretty writer (`"key": value`)
+    // and read back as a value.
+    let text = serde_json::to_string_pretty(m).unwrap_or_default();
+    if let Ok(v) = serde_json::from_str::<Value>(&text) {
         flatten(system, &v, &mut out);
     }
     // A JSON object's keys come back sorted; put them back in the member
-    // file's own order (the order the struct writes them).
-    // (The pretty writer, the one the app carries: `"key": value`.)
-    let text = serde_json::to_string_pretty(m).unwrap_or_default();
+    // file's own order (the order the text has them in).
     out.sort_by_key(|(k, _)| text.find(&format!("\"{k}\":")).unwrap_or(usize::MAX));
     out
 }

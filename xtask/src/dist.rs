@@ -38,7 +38,8 @@ const SW_FILES_LINE: &str = "const PRECACHE = [];";
 pub struct Built {
     /// The `dist/` directory.
     pub dir: PathBuf,
-    /// Every shipped file with its raw and gzipped size, sorted by path.
+    /// Every shipped file with its raw size and the bytes sent (its `.gz`
+    /// where one was written), sorted by path.
     pub files: Vec<(String, usize, usize)>,
     /// Sum of the bytes sent: each file's `.gz` (zopfli) where one was
     /// written, else the file itself. The budget counts this.

@@ -205,7 +205,7 @@ fn handle(mut stream: TcpStream, root: &Path) {
     let packed = PathBuf::from(packed);
     if gzip && path.is_file() && packed.is_file() {
         if let Ok(bytes) = std::fs::read(&packed) {
-            let _ = respond_as(&mut stream, mime(&path), &bytes, head_only, true);
+            let _ = respond_with(&mut stream, 200, mime(&path), &bytes, head_only, true);
             return;
         }
     }
@@ -315,17 +315,7 @@ fn respond(
     respond_with(stream, status, content_type, body, head_only, false)
 }
 
-/// A 200 answer, its body gzip-encoded when `gzipped`.
-fn respond_as(
-    stream: &mut TcpStream,
-    content_type: &str,
-    body: &[u8],
-    head_only: bool,
-    gzipped: bool,
-) -> std::io::Result<()> {
-    respond_with(stream, 200, content_type, body, head_only, gzipped)
-}
-
+/// [`respond`], saying the body is gzip-encoded when `gzipped`.
 fn respond_with(
     stream: &mut TcpStream,
     status: u16,
@@ -380,13 +370,17 @@ mod tests {
         dir.canonicalize().unwrap()
     }
 
-    fn get(port: u16, raw: &str) -> String {
+    fn get_bytes(port: u16, raw: &str) -> Vec<u8> {
         let mut s = TcpStream::connect(("127.0.0.1", port)).unwrap();
         s.write_all(raw.as_bytes()).unwrap();
         let _ = s.shutdown(std::net::Shutdown::Write);
-        let mut out = String::new();
-        let _ = s.read_to_string(&mut out);
+        let mut out = Vec::new();
+        let _ = s.read_to_end(&mut out);
         out
+    }
+
+    fn get(port: u16, raw: &str) -> String {
+        String::from_utf8_lossy(&get_bytes(port, raw)).into_owned()
     }
 
     #[test]
@@ -450,15 +444,7 @@ mod tests {
         std::fs::write(root.join("app.wasm.gz"), &packed).unwrap();
         let server = Server::start(&root, 0).unwrap();
         let port = server.port();
-        let ask = |enc: &str| {
-            let mut s = TcpStream::connect(("127.0.0.1", port)).unwrap();
-            s.write_all(format!("GET /app.wasm HTTP/1.1\r\n{enc}\r\n").as_bytes())
-                .unwrap();
-            let _ = s.shutdown(std::net::Shutdown::Write);
-            let mut out = Vec::new();
-            let _ = s.read_to_end(&mut out);
-            out
-        };
+        let ask = |enc: &str| get_bytes(port, &format!("GET /app.wasm HTTP/1.1\r\n{enc}\r\n"));
         let gz = ask("Accept-Encoding: br, gzip, deflate\r\n");
         let head = String::from_utf8_lossy(&gz);
         assert!(head.contains("Content-Encoding: gzip\r\n"), "{head}");
