@@ -284,14 +284,20 @@ pub(crate) fn roark_rect(a: f64, b: f64) -> f64 {
 
 /// A short description, e.g. "I 300x300x19x11 r27".
 pub fn describe(spec: &SectionSpec) -> String {
+    // Six significant figures: a dimension typed in inches (6 in =
+    // 152.39999999999998 mm) reads 152.4; the stored value is untouched.
+    let n = |v: f64| crate::units::format_display(v, 6);
     match spec {
         SectionSpec::I(s) => {
             let mut d = format!(
                 "I {}x{}x{}x{}",
-                s.depth_mm, s.width_mm, s.flange_mm, s.web_mm
+                n(s.depth_mm),
+                n(s.width_mm),
+                n(s.flange_mm),
+                n(s.web_mm)
             );
             if s.root_radius_mm > 0.0 {
-                d.push_str(&format!(" r{}", s.root_radius_mm));
+                d.push_str(&format!(" r{}", n(s.root_radius_mm)));
             }
             if s.make == super::IMake::Welded {
                 d.push_str(" welded");
@@ -304,12 +310,17 @@ pub fn describe(spec: &SectionSpec) -> String {
             } else {
                 "RHS"
             };
-            let mut d = format!("{name} {}x{}x{}", s.depth_mm, s.width_mm, s.wall_mm);
+            let mut d = format!(
+                "{name} {}x{}x{}",
+                n(s.depth_mm),
+                n(s.width_mm),
+                n(s.wall_mm)
+            );
             if s.outer_radius_mm > 0.0 {
-                d.push_str(&format!(" ro{}", s.outer_radius_mm));
+                d.push_str(&format!(" ro{}", n(s.outer_radius_mm)));
             }
             if let Some(ri) = s.inner_radius_mm {
-                d.push_str(&format!(" ri{ri}"));
+                d.push_str(&format!(" ri{}", n(ri)));
             }
             if s.make == super::HollowMake::ColdFormed {
                 d.push_str(" cold-formed");
@@ -317,16 +328,21 @@ pub fn describe(spec: &SectionSpec) -> String {
             d
         }
         SectionSpec::Chs(s) => {
-            let mut d = format!("CHS {}x{}", s.diameter_mm, s.wall_mm);
+            let mut d = format!("CHS {}x{}", n(s.diameter_mm), n(s.wall_mm));
             if s.make == super::HollowMake::ColdFormed {
                 d.push_str(" cold-formed");
             }
             d
         }
         SectionSpec::Angle(s) => {
-            let mut d = format!("L {}x{}x{}", s.depth_mm, s.width_mm, s.thickness_mm);
+            let mut d = format!(
+                "L {}x{}x{}",
+                n(s.depth_mm),
+                n(s.width_mm),
+                n(s.thickness_mm)
+            );
             if s.root_radius_mm > 0.0 || s.toe_radius_mm > 0.0 {
-                d.push_str(&format!(" r{}/{}", s.root_radius_mm, s.toe_radius_mm));
+                d.push_str(&format!(" r{}/{}", n(s.root_radius_mm), n(s.toe_radius_mm)));
             }
             d
         }
@@ -338,18 +354,23 @@ pub fn describe(spec: &SectionSpec) -> String {
             };
             let mut d = format!(
                 "{name} {}x{}x{}x{}",
-                s.depth_mm, s.width_mm, s.flange_mm, s.web_mm
+                n(s.depth_mm),
+                n(s.width_mm),
+                n(s.flange_mm),
+                n(s.web_mm)
             );
             if s.root_radius_mm > 0.0 {
-                d.push_str(&format!(" r{}", s.root_radius_mm));
+                d.push_str(&format!(" r{}", n(s.root_radius_mm)));
             }
             d
         }
-        SectionSpec::Rect(s) => format!("rect {}x{}", s.depth_mm, s.width_mm),
-        SectionSpec::Round(s) => format!("round {}", s.diameter_mm),
+        SectionSpec::Rect(s) => format!("rect {}x{}", n(s.depth_mm), n(s.width_mm)),
+        SectionSpec::Round(s) => format!("round {}", n(s.diameter_mm)),
         SectionSpec::Given(s) => format!(
             "given A={} I={}/{}",
-            s.area_mm2, s.i_major_mm4, s.i_minor_mm4
+            n(s.area_mm2),
+            n(s.i_major_mm4),
+            n(s.i_minor_mm4)
         ),
         SectionSpec::Catalogue(c) => c.designation.clone(),
     }
@@ -368,6 +389,24 @@ mod tests {
             ((a - b) / b).abs()
         };
         assert!(rel <= tol, "{what}: {a} vs {b} (rel {rel:.3e} > {tol:.1e})");
+    }
+
+    #[test]
+    fn describe_reads_inch_dimensions_as_typed() {
+        let r = SectionSpec::Rect(Rect {
+            depth_mm: 6.0 * 25.4,
+            width_mm: 4.0 * 25.4,
+        });
+        assert_ne!(6.0 * 25.4, 152.4, "the product is not 152.4 in binary");
+        assert_eq!(describe(&r), "rect 152.4x101.6");
+        let g = SectionSpec::Given(Given {
+            area_mm2: 2850.0,
+            i_major_mm4: 9_200_000.0,
+            i_minor_mm4: 3_100_000.0,
+            torsion_mm4: None,
+            warping_mm6: None,
+        });
+        assert_eq!(describe(&g), "given A=2850 I=9200000/3100000");
     }
 
     fn i(h: f64, b: f64, tf: f64, tw: f64, r: f64) -> SectionSpec {
