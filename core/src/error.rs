@@ -83,6 +83,14 @@ pub enum Error {
         /// The repeated id.
         id: String,
     },
+    /// A key inside a structured member-file value (the buckling model,
+    /// with its place in a list) is wrong.
+    Key {
+        /// The key's path, e.g. "buckling_model.restraints[1].at_mm".
+        key: String,
+        /// Why, in words, and how to put it right.
+        reason: String,
+    },
     /// An error inside one member of a list.
     InMember {
         /// The member's id (or its position when it has none).
@@ -98,6 +106,16 @@ impl Error {
         Error::InMember {
             id: id.to_string(),
             source: Box::new(self),
+        }
+    }
+
+    /// The full path of the key this error is about: [`Error::field`], or
+    /// the path of an [`Error::Key`] ("buckling_model.segments[0].length_mm").
+    pub fn key(&self) -> Option<&str> {
+        match self {
+            Error::Key { key, .. } => Some(key),
+            Error::InMember { source, .. } => source.key(),
+            other => other.field(),
         }
     }
 
@@ -188,6 +206,7 @@ impl fmt::Display for Error {
                 f,
                 "id: \"{id}\" is used by more than one member; give each member its own id"
             ),
+            Error::Key { key, reason } => write!(f, "{key}: {reason}"),
             Error::InMember { id, source } => write!(f, "member \"{id}\": {source}"),
         }
     }
