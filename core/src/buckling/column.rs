@@ -162,6 +162,32 @@ fn holds(f: Fixity) -> bool {
 }
 
 impl Column {
+    /// A prismatic column of one stiffness, supported at its ends and
+    /// loaded by `top_kn` at end B, with no braces.
+    pub fn uniform(
+        axis: Axis,
+        length_mm: f64,
+        ei_nmm2: f64,
+        a: Support,
+        b: Support,
+        top_kn: f64,
+    ) -> Column {
+        Column {
+            axis,
+            length_mm,
+            parts: vec![Part { length_mm, ei_nmm2 }],
+            a,
+            b,
+            braces: vec![],
+            loads: vec![Load {
+                index: 0,
+                at_mm: length_mm,
+                axial_kn: top_kn,
+            }],
+            distributed_kn_per_m: 0.0,
+        }
+    }
+
     /// Checks every key; the errors name them as in the member file.
     pub fn validate(&self) -> Result<()> {
         let l = self.length_mm;
@@ -706,23 +732,7 @@ mod tests {
     const L: f64 = 4000.0;
 
     pub fn column(a: Support, b: Support) -> Column {
-        Column {
-            axis: Axis::Major,
-            length_mm: L,
-            parts: vec![Part {
-                length_mm: L,
-                ei_nmm2: EI,
-            }],
-            a,
-            b,
-            braces: vec![],
-            loads: vec![Load {
-                index: 0,
-                at_mm: L,
-                axial_kn: 1.0,
-            }],
-            distributed_kn_per_m: 0.0,
-        }
+        Column::uniform(Axis::Major, L, EI, a, b, 1.0)
     }
 
     /// EI/L^2 in kN.
