@@ -173,6 +173,9 @@ fn member(i: usize) -> Member {
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        frame_major: None,
+        frame_minor: None,
+        buckling_model: None,
     }
 }
 

@@ -198,10 +198,21 @@ impl Prepared {
 /// instead of cloning so the hot path allocates only the result.
 pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     let m = input.member;
+    if m.buckling_model.is_some() {
+        return crate::buckling::model::check(input, method);
+    }
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
     let lengths = m.buckling_lengths().map_err(wrap)?;
     let mut trace = Trace::with_capacity(96);
     let mut warnings = Vec::new();
+    for (frame, which) in [
+        (m.frame_major, crate::buckling::chart::FrameKey::Major),
+        (m.frame_minor, crate::buckling::chart::FrameKey::Minor),
+    ] {
+        if let Some(f) = frame {
+            crate::buckling::chart::work(&f, which, &mut trace).map_err(wrap)?;
+        }
+    }
     method::prelude(method, input, &mut trace, &mut warnings).map_err(wrap)?;
     let assessment = stability::assess(method, input, &mut trace, &mut warnings);
     // EN 1993-1-1 6.3.1.3 / 6.3.1.4 for Class 4: the method's formulas with

@@ -1,4 +1,4 @@
-//! The member file: `{"format": "strutline.members", "version": 2,
+//! The member file: `{"format": "strutline.members", "version": 3,
 //! "title": ..., "members": [...]}`.
 //!
 //! Reading goes text -> JSON value -> (migration to the current version)
@@ -18,8 +18,9 @@ pub const FORMAT: &str = "strutline.members";
 /// The version this build writes; it reads every version from 1 to this.
 ///
 /// Version 2 added the optional member key `angle_connection` (AISC 360-16
-/// E5); a version-1 file reads as it was written.
-pub const VERSION: u64 = 2;
+/// E5); version 3 the optional keys `frame_major`, `frame_minor` and
+/// `buckling_model`. An older file reads as it was written.
+pub const VERSION: u64 = 3;
 
 /// The largest member-file text accepted, bytes (5 MiB).
 pub const MAX_BYTES: usize = 5 * 1024 * 1024;
@@ -73,11 +74,11 @@ fn syntax(e: &serde_json::Error) -> Error {
 
 /// Lifts a file of `version` to the next version; each version adds one arm.
 fn migrate(mut value: Value, version: u64) -> Result<Value> {
-    // 1 -> 2: version 2 only adds an optional key, so a version-1 file is
-    // version 2 as it stands.
-    if version == 1 {
+    // 1 -> 2 and 2 -> 3: each only adds optional keys, so a file of the
+    // version before is the next version as it stands.
+    if version == 1 || version == 2 {
         if let Some(o) = value.as_object_mut() {
-            o.insert("version".into(), Value::from(2u64));
+            o.insert("version".into(), Value::from(version + 1));
         }
     }
     Ok(value)
@@ -266,13 +267,13 @@ mod tests {
                 newest: VERSION
             }
         );
-        assert!(e.to_string().contains("versions 1 to 2"));
+        assert!(e.to_string().contains("versions 1 to 3"));
     }
 
     #[test]
     fn version_1_lifts_and_version_2_keeps_the_angle_connection() {
         let f = parse(ONE).unwrap();
-        assert_eq!((f.version, f.members[0].angle_connection), (2, None));
+        assert_eq!((f.version, f.members[0].angle_connection), (3, None));
         assert_eq!(migrate(parse_value(ONE), 1).unwrap()["version"], 2);
         let two = ONE.replace("\"version\": 1", "\"version\": 2").replace(
             "\"method\": \"euler\"",

@@ -3,6 +3,8 @@
 
 use serde::{Deserialize, Serialize};
 
+use crate::buckling::chart::{self, Frame, FrameKey};
+use crate::buckling::model::BucklingModel;
 use crate::error::{non_negative, positive, Error, Result};
 use crate::material::MaterialSpec;
 use crate::method::Method;
@@ -178,6 +180,17 @@ pub struct Member {
     /// A single angle connected through one leg (AISC 360-16 E5; version 2).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub angle_connection: Option<AngleConnection>,
+    /// A column in a frame, major axis: k from the alignment-chart
+    /// equations (version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub frame_major: Option<Frame>,
+    /// A column in a frame, minor axis (version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub frame_minor: Option<Frame>,
+    /// A general elastic buckling model: the flexural buckling lengths
+    /// come from its critical load analysis (version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub buckling_model: Option<BucklingModel>,
 }
 
 /// The longest length or buckling length accepted, mm (10 km): beyond it
@@ -202,6 +215,29 @@ fn bounded(field: &'static str, value: f64) -> Result<f64> {
     Ok(v)
 }
 
+/// k about one axis: the alignment-chart k when the member gives a frame
+/// (refused together with its k or buckling length), else `k`.
+fn framed(frame: Option<Frame>, which: FrameKey, k: f64, lcr: Option<f64>) -> Result<f64> {
+    let field = match which {
+        FrameKey::Major => "k_major",
+        FrameKey::Minor => "k_minor",
+    };
+    let k = positive(field, k)?;
+    let Some(f) = frame else {
+        return Ok(k);
+    };
+    if lcr.is_some() || k != 1.0 {
+        return Err(Error::Geometry {
+            field: which.key(),
+            reason: format!(
+                "give either {} or the axis' k or buckling length, not both",
+                which.key()
+            ),
+        });
+    }
+    chart::k_factor(&f, which)
+}
+
 /// Buckling lengths of a member, mm.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct BucklingLengths {
@@ -218,8 +254,18 @@ impl Member {
     /// which check themselves) and returns its buckling lengths.
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
         let length = bounded("length_mm", self.length_mm)?;
-        let k_major = positive("k_major", self.k_major)?;
-        let k_minor = positive("k_minor", self.k_minor)?;
+        let k_major = framed(
+            self.frame_major,
+            FrameKey::Major,
+            self.k_major,
+            self.lcr_major_mm,
+        )?;
+        let k_minor = framed(
+            self.frame_minor,
+            FrameKey::Minor,
+            self.k_minor,
+            self.lcr_minor_mm,
+        )?;
         let k_torsion = positive("k_torsion", self.k_torsion)?;
         let pick = |given: Option<f64>, field: &'static str, k: f64| -> Result<f64> {
             match given {
@@ -277,6 +323,25 @@ impl Member {
                     field: "csa_n",
                     value: n,
                     expected: "1.34 or 2.24 (CSA S16-19 13.3.1)",
+                });
+            }
+        }
+        if self.buckling_model.is_some() {
+            let given = [
+                ("frame_major", self.frame_major.is_some()),
+                ("frame_minor", self.frame_minor.is_some()),
+                ("lcr_major_mm", self.lcr_major_mm.is_some()),
+                ("lcr_minor_mm", self.lcr_minor_mm.is_some()),
+                ("k_major", self.k_major != 1.0),
+                ("k_minor", self.k_minor != 1.0),
+            ];
+            if let Some((field, _)) = given.iter().find(|(_, set)| *set) {
+                return Err(Error::Geometry {
+                    field,
+                    reason:
+                        "the buckling_model gives the flexural buckling lengths; remove this key \
+                             or the model"
+                            .into(),
                 });
             }
         }

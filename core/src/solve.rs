@@ -344,6 +344,9 @@ mod tests {
             load_duration: None,
             csa_n: None,
             angle_connection: None,
+            frame_major: None,
+            frame_minor: None,
+            buckling_model: None,
         }
     }
 

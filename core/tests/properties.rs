@@ -47,6 +47,9 @@ fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member 
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        frame_major: None,
+        frame_minor: None,
+        buckling_model: None,
     }
 }
 

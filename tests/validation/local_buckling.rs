@@ -429,6 +429,9 @@ fn member(section: SectionSpec, method: Method, length: f64) -> Member {
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        frame_major: None,
+        frame_minor: None,
+        buckling_model: None,
     }
 }
 

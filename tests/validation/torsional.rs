@@ -148,6 +148,9 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        frame_major: None,
+        frame_minor: None,
+        buckling_model: None,
     };
     let r = check_member(&member).unwrap();
     let tor = r
@@ -403,6 +406,9 @@ fn strut(section: SectionSpec, material: MaterialSpec, method: Method, length: f
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        frame_major: None,
+        frame_minor: None,
+        buckling_model: None,
     }
 }
 

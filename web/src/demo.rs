@@ -53,6 +53,9 @@ pub fn member(
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        frame_major: None,
+        frame_minor: None,
+        buckling_model: None,
     }
 }
 

@@ -54,6 +54,16 @@ impl Band {
         }
     }
 
+    /// A(i, j) (zero outside the band).
+    pub fn get(&self, i: usize, j: usize) -> f64 {
+        let (i, j) = if i <= j { (i, j) } else { (j, i) };
+        self.rows
+            .get(i)
+            .and_then(|r| r.get(j - i))
+            .copied()
+            .unwrap_or(0.0)
+    }
+
     /// A(i, i).
     pub fn diagonal(&self, i: usize) -> f64 {
         self.rows.get(i).map_or(0.0, |r| r[0])

@@ -521,6 +521,15 @@ pub struct Solution {
     pub segment_kn: Vec<f64>,
 }
 
+/// The elastic and geometric stiffness matrices of about `elements`
+/// elements, fixed unknowns removed (for cross-checks and benchmarks of
+/// other solvers against [`solve`]). Validates first.
+pub fn matrices(c: &Column, elements: usize) -> Result<(Band, Band)> {
+    c.validate()?;
+    let m = Model::new(c, elements.max(1));
+    Ok((m.k, m.kg))
+}
+
 /// The number of eigenvalues of (K, K_g) below `s`.
 fn below(k: &Band, kg: &Band, s: f64) -> usize {
     k.shifted(s, kg).factor().negatives

@@ -10,6 +10,7 @@
 pub mod band;
 pub mod chart;
 pub mod column;
+pub mod model;
 
 use serde::de::{self, Deserializer, Visitor};
 use serde::{Deserialize, Serialize, Serializer};
