@@ -11,10 +11,10 @@
 
 use std::f64::consts::PI;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::{positive, Error, Result};
 use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{held, step, sym, Scope, Sym, Trace};
 

@@ -9,10 +9,10 @@
 
 use serde::{Deserialize, Serialize};
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::material::Material;
 use crate::member::Member;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::Section;
 use crate::trace::Trace;
 
