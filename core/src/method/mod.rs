@@ -17,6 +17,7 @@ use crate::section::Section;
 use crate::trace::Trace;
 
 pub mod aisc360;
+pub mod common;
 pub mod csa_s16;
 pub mod en1993;
 pub mod en1995;
