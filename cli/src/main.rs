@@ -1,5 +1,6 @@
 //! The `strutline` command line: check a member file, print an envelope,
-//! list catalogue sections, size members, convert between JSON and CSV.
+//! list catalogue sections, size members, convert between JSON and CSV,
+//! analyse buckling models.
 //!
 //! The commands and their options are declared once, as the types below
 //! (`clap`'s derive), and the help text is generated from them: `strutline
@@ -18,6 +19,7 @@
 
 use clap::{CommandFactory, FromArgMatches, Parser, Subcommand};
 
+mod buckle;
 mod check;
 mod convert;
 mod envelope;
@@ -52,6 +54,8 @@ enum Command {
     Size(size::Args),
     /// Convert a member file between JSON and CSV
     Convert(convert::Args),
+    /// Find the elastic critical load of each member with a buckling_model
+    Buckle(buckle::Args),
 }
 
 fn main() {
@@ -82,6 +86,7 @@ fn run(command: Command) -> Result<i32, String> {
         Command::Sections(a) => sections::run(&a),
         Command::Size(a) => size::run(&a),
         Command::Convert(a) => convert::run(&a),
+        Command::Buckle(a) => buckle::run(&a),
     }
 }
 

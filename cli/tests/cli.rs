@@ -134,7 +134,10 @@ fn help_is_generated_for_every_command_and_exits_0() {
     }
     let (code, text, _) = run(&["help", "size"]);
     assert_eq!(code, Some(0));
-    assert!(text.contains("--limit") && text.contains("known series"), "{text}");
+    assert!(
+        text.contains("--limit") && text.contains("known series"),
+        "{text}"
+    );
     // No command: the help, on stderr, status 2 (a script called it wrongly).
     let (code, _, err) = run(&[]);
     assert_eq!(code, Some(2));
@@ -158,4 +161,32 @@ fn exit_status_says_within_over_or_invalid() {
     let (code, _, err) = run(&["envelope", &example(), "--member", "M1", "--to", "-1"]);
     assert_eq!(code, Some(2));
     assert!(err.contains("--to"), "{err}");
+}
+
+#[test]
+fn buckle_prints_both_axes_of_each_model_as_json() {
+    let path =
+        PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("../examples/tarnbeck-crane-hall.json");
+    let out = Command::new(BIN)
+        .args(["buckle", path.to_str().unwrap(), "--json"])
+        .output()
+        .unwrap();
+    assert_eq!(out.status.code(), Some(0));
+    let v: serde_json::Value = serde_json::from_slice(&out.stdout).unwrap();
+    let results = v["results"].as_array().unwrap();
+    // Only K1 has a model; W2 uses frame_major.
+    assert_eq!(results.len(), 1);
+    assert_eq!(results[0]["id"], "K1");
+    for axis in ["major", "minor"] {
+        let b = &results[0][axis];
+        let alpha = b["load_factor"].as_f64().unwrap();
+        // The largest compression: 420 + 130 + 1.2 x 9 = 560.8 kN at end A.
+        let n_cr = b["critical_kn"].as_f64().unwrap();
+        assert!((n_cr - alpha * 560.8).abs() < 1e-9 * n_cr, "{axis}");
+        assert!(b["buckling_length_mm"].as_f64().unwrap() > 0.0);
+        let mode = b["mode"].as_array().unwrap();
+        assert_eq!(mode[0][0].as_f64(), Some(0.0));
+        assert_eq!(mode.last().unwrap()[0].as_f64(), Some(9000.0));
+    }
+    assert!(v["caution"].as_str().unwrap().contains("checking aid"));
 }
