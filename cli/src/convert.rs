@@ -118,7 +118,12 @@ pub fn run(args: &Args) -> Result<i32, String> {
     }
     let body = match out_format {
         Format::Json => members.to_json(),
-        Format::Csv => csv::to_csv_in(&members, system),
+        Format::Csv => {
+            if let Some(lost) = csv::left_out(&members) {
+                crate::note(&format!("{output}: {lost}"));
+            }
+            csv::to_csv_in(&members, system)
+        }
     };
     write_atomically(output, &body)?;
     crate::emit(&format!(

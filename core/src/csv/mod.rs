@@ -86,7 +86,7 @@ use crate::member::Member;
 
 pub use number::parse_typed;
 pub use read::parse_csv;
-pub use write::{to_csv, to_csv_in};
+pub use write::{left_out, to_csv, to_csv_in, NOT_IN_CSV};
 
 /// The largest number of member rows accepted.
 pub const MAX_ROWS: usize = 10_000;

@@ -659,3 +659,24 @@ mod fuzz {
         }
     }
 }
+
+#[test]
+fn version_3_keys_are_left_out_and_said_so() {
+    let f = crate::file::parse(include_str!("../../../examples/tarnbeck-crane-hall.json")).unwrap();
+    let text = to_csv(&f);
+    for key in NOT_IN_CSV {
+        assert!(!text.contains(key), "{key} in {text}");
+    }
+    let said = left_out(&f).unwrap();
+    assert!(
+        said.contains("member \"K1\": buckling_model") && said.contains("member \"W2\": frame_major"),
+        "{said}"
+    );
+    // The rest reads back.
+    let back = parse_csv(&text);
+    assert!(back.problems.is_empty(), "{:?}", back.problems);
+    assert_eq!(back.members.len(), 2);
+    let mut again = crate::file::MemberFile::new("t");
+    again.members = back.members;
+    assert!(left_out(&again).is_none());
+}

@@ -37,6 +37,40 @@ pub fn to_csv(file: &MemberFile) -> String {
     to_csv_in(file, UnitSystem::Si)
 }
 
+/// The member keys (version 3) a CSV row does not carry.
+pub const NOT_IN_CSV: [&str; 3] = [NOT_IN_CSV_0, NOT_IN_CSV_1, NOT_IN_CSV_2];
+const NOT_IN_CSV_0: &str = "buckling_model";
+const NOT_IN_CSV_1: &str = "frame_major";
+const NOT_IN_CSV_2: &str = "frame_minor";
+
+/// What [`to_csv`] leaves out of `file`, in words for the person
+/// exporting ("member \"K1\": buckling_model"), or `None` when the CSV
+/// carries everything. Keep the JSON file for these keys.
+pub fn left_out(file: &MemberFile) -> Option<String> {
+    let lost: Vec<String> = file
+        .members
+        .iter()
+        .filter_map(|m| {
+            let keys: Vec<&str> = [
+                m.buckling_model.is_some(),
+                m.frame_major.is_some(),
+                m.frame_minor.is_some(),
+            ]
+            .iter()
+            .zip(NOT_IN_CSV)
+            .filter_map(|(given, key)| given.then_some(key))
+            .collect();
+            (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
+        })
+        .collect();
+    (!lost.is_empty()).then(|| {
+        format!(
+            "CSV does not carry these keys, which are left out (keep the JSON file for them): {}",
+            lost.join("; ")
+        )
+    })
+}
+
 /// The US customary column for an SI key: member lengths in feet, other
 /// lengths in inches, then in2, in4, in6, kip, ksi, kip-ft.
 pub(super) fn us_column(key: &str) -> Option<(String, UsUnit)> {
@@ -75,6 +109,8 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
                                 flat.insert(k2, v2);
                             }
                         }
+                        // Not carried by CSV; see [`left_out`].
+                        (NOT_IN_CSV_0 | NOT_IN_CSV_1 | NOT_IN_CSV_2, _) => {}
                         ("angle_connection", Value::Object(inner)) => {
                             for (k2, v2) in inner {
                                 flat.insert(format!("angle_{k2}"), v2);
