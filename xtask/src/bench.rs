@@ -1,5 +1,5 @@
 //! `cargo xtask bench`: the engine benchmarks (Criterion: member checks a
-//! second, sizing) and the browser measurements (`bench-web`), written
+//! second, sizing, the buckling analysis) and the browser measurements (`bench-web`), written
 //! with a description of the machine to `bench/RESULTS.md`, and compared
 //! with the figures recorded in `bench/baseline.json`.
 //!
@@ -69,6 +69,37 @@ pub fn run(args: &[String]) -> Result<()> {
                 target: 100.0,
             });
         }
+    }
+
+    if root.join("core/benches/buckling.rs").exists() {
+        util::run(util::cargo().args([
+            "bench",
+            "-p",
+            "strutline-core",
+            "--bench",
+            "buckling",
+            "--",
+            "--noplot",
+        ]))?;
+        let criterion = root.join("target/criterion/buckling");
+        let ns = criterion_mean_ns(&criterion.join("200_elements_banded"))?;
+        figures.push(Figure {
+            name: "buckling analysis, 200 elements: alpha_cr and mode (native)",
+            value: ns * 1e-6,
+            unit: "ms",
+            higher_is_better: false,
+            target: 5.0,
+        });
+        // For the record of the banded solver's reason: the dense
+        // eigenvalues of the same matrices (no target of its own).
+        let ns = criterion_mean_ns(&criterion.join("200_elements_dense_nalgebra"))?;
+        figures.push(Figure {
+            name: "the same, alpha_cr alone by a dense nalgebra eigen-solution (for comparison)",
+            value: ns * 1e-6,
+            unit: "ms",
+            higher_is_better: false,
+            target: f64::INFINITY,
+        });
     }
 
     let mut web = String::new();
