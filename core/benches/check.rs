@@ -140,6 +140,10 @@ fn member(i: usize) -> Member {
                 i_minor_mm4: 1.5e7,
                 torsion_mm4: None,
                 warping_mm6: None,
+                w_el_major_mm3: None,
+                w_el_minor_mm3: None,
+                w_pl_major_mm3: None,
+                w_pl_minor_mm3: None,
             }),
             MaterialSpec::Timber {
                 fc0k_mpa: 24.0,
@@ -173,6 +177,18 @@ fn member(i: usize) -> Member {
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     }
 }
 

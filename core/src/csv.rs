@@ -162,6 +162,8 @@ enum Kind {
     Number,
     /// A whole number.
     Whole,
+    /// Yes or no (`true`/`false`, `yes`/`no`, `1`/`0`).
+    Bool,
 }
 
 #[derive(Debug)]
@@ -198,6 +200,10 @@ const KEYS: &[KeyInfo] = &[
     k("i_minor_mm4", Group::Section, Kind::Number),
     k("torsion_mm4", Group::Section, Kind::Number),
     k("warping_mm6", Group::Section, Kind::Number),
+    k("w_el_major_mm3", Group::Section, Kind::Number),
+    k("w_el_minor_mm3", Group::Section, Kind::Number),
+    k("w_pl_major_mm3", Group::Section, Kind::Number),
+    k("w_pl_minor_mm3", Group::Section, Kind::Number),
     k("grade", Group::Material, Kind::Text),
     k("fy_mpa", Group::Material, Kind::Number),
     k("e_mpa", Group::Material, Kind::Number),
@@ -225,6 +231,18 @@ const KEYS: &[KeyInfo] = &[
     k("csa_n", Group::Member, Kind::Number),
     k("angle_leg", Group::Angle, Kind::Name),
     k("angle_truss", Group::Angle, Kind::Name),
+    k("m_major_a_knm", Group::Member, Kind::Number),
+    k("m_major_b_knm", Group::Member, Kind::Number),
+    k("m_major_span_knm", Group::Member, Kind::Number),
+    k("span_load_major", Group::Member, Kind::Name),
+    k("m_minor_a_knm", Group::Member, Kind::Number),
+    k("m_minor_b_knm", Group::Member, Kind::Number),
+    k("m_minor_span_knm", Group::Member, Kind::Number),
+    k("span_load_minor", Group::Member, Kind::Name),
+    k("k_lt", Group::Member, Kind::Number),
+    k("lcr_lt_mm", Group::Member, Kind::Number),
+    k("lt_restrained", Group::Member, Kind::Bool),
+    k("load_level", Group::Member, Kind::Name),
 ];
 
 /// Keys every row needs (the material and section needs are per row).
@@ -267,7 +285,14 @@ const KINDS: &[(&str, &[&str], &[&str])] = &[
     (
         "given",
         &["area_mm2", "i_major_mm4", "i_minor_mm4"],
-        &["torsion_mm4", "warping_mm6"],
+        &[
+            "torsion_mm4",
+            "warping_mm6",
+            "w_el_major_mm3",
+            "w_el_minor_mm3",
+            "w_pl_major_mm3",
+            "w_pl_minor_mm3",
+        ],
     ),
     ("catalogue", &["designation"], &[]),
 ];
@@ -840,9 +865,12 @@ fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             "load_duration" => "permanent, long, medium, short or instantaneous".into(),
             "angle_leg" => "long or short".into(),
             "angle_truss" => "planar or space".into(),
+            "span_load_major" | "span_load_minor" => "uniform or point".into(),
+            "load_level" => "shear-centre, compression-flange or tension-flange".into(),
             _ => "a name".into(),
         },
         Kind::Whole => "a whole number".into(),
+        Kind::Bool => "true or false".into(),
         Kind::Number => match unit {
             Some(UsUnit::Ft) => "a length in feet, e.g. 13.5 or 13'-6\"".into(),
             Some(UsUnit::In) => "a length in inches, e.g. 6.5 or 6-1/2\"".into(),
@@ -854,6 +882,8 @@ fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
                 Some("mm6") => "a number in mm6".into(),
                 Some("kn") => "a number in kN".into(),
                 Some("mpa") => "a number in MPa".into(),
+                Some("mm3") => "a number in mm3".into(),
+                Some("knm") => "a number in kNm".into(),
                 _ => "a number".into(),
             },
         },
@@ -947,6 +977,12 @@ fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProb
                         .ok_or_else(|| "not a finite number".to_string())
                 })
             }
+            Kind::Bool => match field.text.trim().to_ascii_lowercase().as_str() {
+                "" => continue,
+                "true" | "yes" | "y" | "1" => Ok(Value::Bool(true)),
+                "false" | "no" | "n" | "0" => Ok(Value::Bool(false)),
+                other => Err(format!("\"{other}\" is not true or false")),
+            },
             Kind::Whole => {
                 if field.text.trim().is_empty() {
                     continue;
@@ -1983,7 +2019,7 @@ mod tests {
 
     /// Every section kind, every material form and every member option,
     /// with awkward numbers and text.
-    const EVERY: &str = r#"{"format": "strutline.members", "version": 2, "title": "every key",
+    const EVERY: &str = r#"{"format": "strutline.members", "version": 3, "title": "every key",
       "members": [
         {"id": "I1", "note": "comma, \"quote\"\nnew line", "section": {"kind": "i", "depth_mm": 300.5,
          "width_mm": 300, "flange_mm": 19, "web_mm": 11, "root_radius_mm": 27, "make": "welded"},
@@ -2031,7 +2067,15 @@ mod tests {
          "angle_connection": {"leg": "short", "truss": "space"}},
         {"id": "L13", "section": {"kind": "angle", "depth_mm": 80, "width_mm": 80, "thickness_mm": 8},
          "material": {"grade": "S355"}, "length_mm": 1200, "axial_kn": 50, "method": "aisc360-asd",
-         "angle_connection": {"leg": "long"}}
+         "angle_connection": {"leg": "long"}},
+        {"id": "B14", "section": {"kind": "given", "area_mm2": 5380, "i_major_mm4": 5.79e7,
+         "i_minor_mm4": 4.2e6, "w_el_major_mm3": 4.29e5, "w_el_minor_mm3": 5.84e4,
+         "w_pl_major_mm3": 4.84e5, "w_pl_minor_mm3": 9.1e4}, "material": {"grade": "S355"},
+         "length_mm": 5400, "axial_kn": 0, "method": "en1993-1-1", "m_major_a_knm": -42.5,
+         "m_major_b_knm": 17.25, "m_major_span_knm": 60.75, "span_load_major": "point",
+         "m_minor_a_knm": 1.5, "m_minor_b_knm": 1.5, "m_minor_span_knm": -0.125,
+         "span_load_minor": "uniform", "k_lt": 0.5, "lcr_lt_mm": 1800, "lt_restrained": true,
+         "load_level": "compression-flange"}
       ]}"#;
 
     #[test]
@@ -2042,7 +2086,7 @@ mod tests {
         // some long 17-digit values by one unit in the last place, so such
         // values are kept out of the JSON -> JSON comparison.
         let original = file::parse(EVERY).unwrap();
-        assert_eq!(original.members.len(), 13);
+        assert_eq!(original.members.len(), 14);
         let csv_text = to_csv(&original);
         let back = parse_csv(&csv_text);
         assert!(back.problems.is_empty(), "{:#?}\n{csv_text}", back.problems);
@@ -2060,7 +2104,12 @@ mod tests {
         assert!(csv_text.starts_with("id,note,kind,"));
         // angle_connection is two flat columns, not a JSON cell.
         let header = csv_text.lines().next().unwrap();
-        assert!(header.ends_with(",csa_n,angle_leg,angle_truss"), "{header}");
+        assert!(
+            header.contains(",csa_n,angle_leg,angle_truss,m_major_a_knm,"),
+            "{header}"
+        );
+        let b14 = again.members.iter().find(|m| m.id == "B14").unwrap();
+        assert!(b14.lt_restrained && b14.m_minor_span_knm == -0.125);
         assert!(!csv_text.contains('{'), "{csv_text}");
         let l12 = again.members.iter().find(|m| m.id == "L12").unwrap();
         assert_eq!(
