@@ -311,6 +311,13 @@ pub struct Section {
     pub designation: Option<&'static str>,
 }
 
+impl Section {
+    /// Whether the section is a channel.
+    pub fn spec_is_channel(&self) -> bool {
+        matches!(self.spec, SectionSpec::Channel(_))
+    }
+}
+
 impl SectionSpec {
     /// The section's family.
     pub fn family(&self) -> Family {
