@@ -15,9 +15,8 @@
 //! phi M_u. omega_2 = 4 M_max / sqrt(M_max^2 + 4 M_a^2 + 7 M_b^2 + 4 M_c^2)
 //! <= 2.5 from the diagram; 1.0 where the diagram over the unbraced length
 //! is not the member's. With the load on the compression flange omega_2 =
-//! 1.0 and the unbraced length is taken 1.2 L (13.6(c)? recalled from
-//! memory as the standard's treatment of destabilising load; said in a
-//! warning). Channels are worked with the same formula and their own J and
+//! 1.0 and the unbraced length is taken 1.2 L (the standard's treatment of
+//! destabilising load in 13.6, recalled from memory; said in a warning). Channels are worked with the same formula and their own J and
 //! C_w (a warning says so); rectangular HSS and solid rectangles too (C_w
 //! about zero, rarely governs); circular sections do not buckle laterally.
 //! A given section: F_y S with its class unknown, refused for
