@@ -50,6 +50,18 @@ fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member 
         frame_major: None,
         frame_minor: None,
         buckling_model: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     }
 }
 
@@ -174,6 +186,10 @@ fn steel_section() -> impl Strategy<Value = SectionSpec> {
                 i_minor_mm4: i * ratio,
                 torsion_mm4: None,
                 warping_mm6: None,
+                w_el_major_mm3: None,
+                w_el_minor_mm3: None,
+                w_pl_major_mm3: None,
+                w_pl_minor_mm3: None,
             })
         }),
     ]

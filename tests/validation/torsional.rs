@@ -124,6 +124,10 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
             i_minor_mm4: i,
             torsion_mm4: Some(it),
             warping_mm6: Some(0.0),
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         }),
         material: MaterialSpec::Custom {
             fy_mpa: 355.0,
@@ -151,6 +155,18 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
         frame_major: None,
         frame_minor: None,
         buckling_model: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     };
     let r = check_member(&member).unwrap();
     let tor = r
@@ -409,6 +425,18 @@ fn strut(section: SectionSpec, material: MaterialSpec, method: Method, length: f
         frame_major: None,
         frame_minor: None,
         buckling_model: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     }
 }
 
