@@ -31,7 +31,6 @@ pub mod stability;
 pub mod trace;
 pub mod trig;
 pub mod units;
-pub mod wire;
 
 pub use check::{check_member, CheckResult};
 pub use error::Error;

@@ -29,10 +29,8 @@ pub enum TimberKind {
     Glulam,
 }
 
-/// A material as written in the member file. The browser build reads it
-/// through [`crate::wire::material`] (smaller code, same rules).
-#[derive(Debug, Clone, PartialEq, Serialize)]
-#[cfg_attr(not(target_arch = "wasm32"), derive(Deserialize))]
+/// A material as written in the member file.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(untagged)]
 pub enum MaterialSpec {
     /// A named grade or strength class ("S355", "A992", "C24", "GL28h").
@@ -61,13 +59,6 @@ pub enum MaterialSpec {
         #[serde(default, skip_serializing_if = "Option::is_none")]
         g_mpa: Option<f64>,
     },
-}
-
-#[cfg(target_arch = "wasm32")]
-impl<'de> Deserialize<'de> for MaterialSpec {
-    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> std::result::Result<Self, D::Error> {
-        crate::wire::material(serde_json::Value::deserialize(d)?).map_err(serde::de::Error::custom)
-    }
 }
 
 /// A resolved steel (or custom elastic-plastic) material.

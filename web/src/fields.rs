@@ -497,20 +497,10 @@ pub fn method_choices(method: Method) -> Vec<Choice> {
     }
 }
 
-/// The member-file key of a section's kind ("i", "rhs", ...).
+/// The member-file key of a section's kind ("i", "rhs", ...), from core's
+/// one description of the kinds (`section::schema`).
 pub fn kind_of(spec: &SectionSpec) -> &'static str {
-    match spec {
-        SectionSpec::I(_) => "i",
-        SectionSpec::Rhs(_) => "rhs",
-        SectionSpec::Chs(_) => "chs",
-        SectionSpec::Angle(_) => "angle",
-        SectionSpec::Channel(_) => "channel",
-        SectionSpec::Tee(_) => "tee",
-        SectionSpec::Rect(_) => "rect",
-        SectionSpec::Round(_) => "round",
-        SectionSpec::Given(_) => "given",
-        SectionSpec::Catalogue(_) => "catalogue",
-    }
+    spec.kind()
 }
 
 fn default_json(kind: &str) -> Value {
@@ -740,6 +730,66 @@ mod tests {
             .chain([K_MAJOR, LCR_MINOR])
             .find(|f| f.key == key)
             .unwrap()
+    }
+
+    /// The editor edits exactly the keys of core's one description of the
+    /// section kinds (`strutline_core::section::schema`), with the rule its
+    /// default implies, and offers every kind in the same order.
+    #[test]
+    fn editor_fields_match_the_section_schema() {
+        use strutline_core::section::schema::{self, Default as Absent, Value as Holds};
+        let listed: Vec<&str> = KINDS.iter().map(|(k, _)| *k).collect();
+        let described: Vec<&str> = schema::kind_names().collect();
+        assert_eq!(
+            listed, described,
+            "fields::KINDS against section::schema::KINDS"
+        );
+        for kind in &schema::KINDS {
+            let fields = section_fields(kind.name);
+            let choices = section_choices(kind.name);
+            for key in kind.keys {
+                match key.value {
+                    Holds::Choice(options) => {
+                        let choice =
+                            choices
+                                .iter()
+                                .find(|c| c.key == key.key)
+                                .unwrap_or_else(|| {
+                                    panic!(
+                                        "kind \"{}\": no editor choice for \"{}\"",
+                                        kind.name, key.key
+                                    )
+                                });
+                        let offered: Vec<&str> = choice.options.iter().map(|(v, _)| *v).collect();
+                        assert_eq!(offered, options, "{} {}", kind.name, key.key);
+                    }
+                    Holds::Number | Holds::Text => {
+                        let field = fields.iter().find(|f| f.key == key.key).unwrap_or_else(|| {
+                            panic!(
+                                "kind \"{}\": no editor field for \"{}\"",
+                                kind.name, key.key
+                            )
+                        });
+                        let optional = matches!(
+                            field.rule,
+                            Rule::OptNonNegative | Rule::OptPositive | Rule::OptText
+                        );
+                        assert_eq!(optional, key.default != Absent::Required, "{}", key.key);
+                    }
+                }
+            }
+            for key in fields
+                .iter()
+                .map(|f| f.key)
+                .chain(choices.iter().map(|c| c.key))
+            {
+                assert!(
+                    kind.key(key).is_some(),
+                    "the editor shows \"{key}\" for kind \"{}\", which section::schema does not describe",
+                    kind.name
+                );
+            }
+        }
     }
 
     #[test]

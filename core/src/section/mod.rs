@@ -16,6 +16,7 @@ mod cache;
 pub mod geometry;
 pub mod outline;
 pub mod plates;
+pub mod schema;
 pub mod shapes;
 
 /// How an I/H section was made: it selects the EN 1993-1-1 buckling curve.
@@ -166,11 +167,9 @@ pub struct Given {
     pub warping_mm6: Option<f64>,
 }
 
-/// A section as written in the member file, selected by `"kind"`. The
-/// browser build reads it through [`crate::wire::section`] (smaller code,
-/// same rules).
-#[derive(Debug, Clone, PartialEq, Serialize)]
-#[cfg_attr(not(target_arch = "wasm32"), derive(Deserialize))]
+/// A section as written in the member file, selected by `"kind"`; its keys,
+/// units and defaults are described once in [`schema`].
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(tag = "kind", rename_all = "kebab-case")]
 pub enum SectionSpec {
     /// Doubly symmetric I/H.
@@ -193,13 +192,6 @@ pub enum SectionSpec {
     Given(Given),
     /// An entry of the built-in catalogue of standard sections, by designation.
     Catalogue(CatalogueRef),
-}
-
-#[cfg(target_arch = "wasm32")]
-impl<'de> Deserialize<'de> for SectionSpec {
-    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> std::result::Result<Self, D::Error> {
-        crate::wire::section(serde_json::Value::deserialize(d)?).map_err(serde::de::Error::custom)
-    }
 }
 
 /// A reference to a catalogue entry; the member file keeps the designation.
