@@ -136,7 +136,7 @@ struct Catalogue {
 
 fn catalogue() -> &'static Catalogue {
     static CATALOGUE: OnceLock<Catalogue> = OnceLock::new();
-    CATALOGUE.get_or_init(build)
+    CATALOGUE.get_or_init(load)
 }
 
 /// Longest normalised key, bytes.
@@ -347,7 +347,7 @@ struct Spellings {
     patterns: Vec<&'static str>,
 }
 
-fn build() -> Catalogue {
+fn load() -> Catalogue {
     let mut cat = Catalogue {
         entries: Vec::new(),
         series: Vec::new(),
@@ -676,6 +676,37 @@ pub fn section(designation: &str) -> Result<Section> {
     }
 }
 
+/// Builds any section spec: a catalogue reference through [`section`] (an
+/// unknown designation is [`Error::UnknownDesignation`]), any other spec
+/// from its dimensions.
+pub fn build(spec: &SectionSpec) -> Result<Section> {
+    match spec {
+        SectionSpec::Catalogue(c) => section(&c.designation),
+        other => other.build(),
+    }
+}
+
+/// The family of any section spec, resolving a catalogue reference (an
+/// unknown designation is [`Error::UnknownDesignation`]).
+pub fn family(spec: &SectionSpec) -> Result<Family> {
+    match spec {
+        SectionSpec::Catalogue(c) => family(&resolve(&c.designation)?.spec),
+        other => other.family().ok_or_else(|| unknown("")),
+    }
+}
+
+/// The spec with dimensions behind any spec: the catalogue entry's for a
+/// reference (`None` when the designation is unknown), the spec otherwise.
+pub fn dimensions(spec: &SectionSpec) -> Option<&SectionSpec> {
+    match spec {
+        SectionSpec::Catalogue(c) => resolve(&c.designation)
+            .ok()
+            .map(|e| &e.spec)
+            .filter(|s| !matches!(s, SectionSpec::Catalogue(_))),
+        other => Some(other),
+    }
+}
+
 /// Levenshtein distance between two byte strings.
 fn edit_distance(a: &[u8], b: &[u8]) -> usize {
     let mut prev: Vec<usize> = (0..=b.len()).collect();
@@ -786,7 +817,7 @@ pub fn find_series(name: &str) -> Option<&'static Series> {
 pub fn family_entries(family: Family) -> Vec<&'static Entry> {
     entries()
         .iter()
-        .filter(|e| e.spec.family() == family)
+        .filter(|e| e.spec.family() == Some(family))
         .collect()
 }
 

@@ -79,6 +79,20 @@ pub struct CheckResult {
     pub trace: Trace,
 }
 
+impl CheckResult {
+    /// The classification and effective widths this result used, for
+    /// drawing them (see [`stability::effective::of_check`]).
+    pub fn effective(
+        &self,
+        input: &Input<'_>,
+    ) -> Option<(
+        stability::classify::Classified,
+        stability::effective::Effective,
+    )> {
+        stability::effective::of_check(input, self.method, &self.modes, self.governing)
+    }
+}
+
 /// A member ready to check: section built and material resolved once.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Prepared {
@@ -267,7 +281,7 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
 pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let section = member.section.build().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     Ok((section, material))
 }
@@ -278,7 +292,7 @@ pub fn check_member(member: &Member) -> Result<CheckResult> {
     // stays, not moved through a returned pair (a few hundred bytes a check).
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let section = member.section.build().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     let input = Input {
         member,

@@ -409,7 +409,7 @@ fn hollow_make(section: &Section) -> Option<HollowMake> {
 pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
     match spec {
         MaterialSpec::Grade { grade } => {
-            let t = section.spec.governing_thickness_mm();
+            let t = section.governing_thickness_mm();
             match find(grade) {
                 Some(Found::Steel(g)) => Ok(Material::Steel(steel_at(g, t)?)),
                 Some(Found::Hollow(hot, cold)) => {
@@ -457,7 +457,7 @@ pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
                     Some(g) => positive("g_mpa", *g)?,
                     None => e / 2.6,
                 },
-                thickness_mm: section.spec.governing_thickness_mm().max(0.0),
+                thickness_mm: section.governing_thickness_mm().max(0.0),
                 band_up_to_mm: f64::INFINITY,
             }))
         }

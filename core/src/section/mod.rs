@@ -291,10 +291,19 @@ pub struct Section {
     pub designation: Option<&'static str>,
 }
 
+impl Section {
+    /// The thickest plate, mm (see [`SectionSpec::governing_thickness_mm`]);
+    /// a built section always has dimensions, or 0 for given properties.
+    pub fn governing_thickness_mm(&self) -> f64 {
+        self.spec.governing_thickness_mm().unwrap_or(0.0)
+    }
+}
+
 impl SectionSpec {
-    /// The section's family.
-    pub fn family(&self) -> Family {
-        match self {
+    /// The section's family; `None` for a catalogue reference, whose
+    /// family the catalogue knows (`catalogue::family`).
+    pub fn family(&self) -> Option<Family> {
+        Some(match self {
             SectionSpec::I(_) => Family::I,
             SectionSpec::Rhs(_) => Family::Rhs,
             SectionSpec::Chs(_) => Family::Chs,
@@ -304,16 +313,16 @@ impl SectionSpec {
             SectionSpec::Rect(_) => Family::Rect,
             SectionSpec::Round(_) => Family::Round,
             SectionSpec::Given(_) => Family::Given,
-            SectionSpec::Catalogue(c) => crate::catalogue::resolve(&c.designation)
-                .map(|e| e.spec.family())
-                .unwrap_or(Family::Given),
-        }
+            SectionSpec::Catalogue(_) => return None,
+        })
     }
 
     /// The thickest plate of the section, mm: the thickness that sets the
-    /// yield strength in the material standards (0 for given sections).
-    pub fn governing_thickness_mm(&self) -> f64 {
-        match self {
+    /// yield strength in the material standards (0 for given sections,
+    /// which do not tell it); `None` for a catalogue reference, which is
+    /// resolved first (a built [`Section`]'s spec never is one).
+    pub fn governing_thickness_mm(&self) -> Option<f64> {
+        Some(match self {
             SectionSpec::I(s) => s.flange_mm.max(s.web_mm),
             SectionSpec::Rhs(s) => s.wall_mm,
             SectionSpec::Chs(s) => s.wall_mm,
@@ -322,21 +331,25 @@ impl SectionSpec {
             SectionSpec::Rect(s) => s.depth_mm.min(s.width_mm),
             SectionSpec::Round(s) => s.diameter_mm,
             SectionSpec::Given(_) => 0.0,
-            SectionSpec::Catalogue(c) => crate::catalogue::resolve(&c.designation)
-                .map(|e| e.spec.governing_thickness_mm())
-                .unwrap_or(0.0),
-        }
+            SectionSpec::Catalogue(_) => return None,
+        })
     }
 
-    /// Validates the dimensions and computes the properties.
+    /// Validates the dimensions and computes the properties. A catalogue
+    /// reference is an error here: the catalogue builds it
+    /// (`catalogue::build`), which the check does when it prepares a member.
     pub fn build(&self) -> Result<Section> {
-        if let SectionSpec::Catalogue(c) = self {
-            // Built once per entry and kept by the catalogue.
-            return crate::catalogue::section(&c.designation);
-        }
+        let Some(family) = self.family() else {
+            return Err(crate::error::Error::Geometry {
+                field: "designation",
+                reason: "a catalogue reference has no dimensions of its own; it is resolved \
+                         through the catalogue"
+                    .into(),
+            });
+        };
         let mut section = Section {
             spec: self.clone(),
-            family: self.family(),
+            family,
             props: Properties::default(),
             designation: None,
         };

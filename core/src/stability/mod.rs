@@ -25,6 +25,7 @@ use crate::trace::{put, step, sym, symbol, Scope, Sym, Trace};
 
 pub mod classify;
 pub mod effective;
+pub mod ineffective;
 pub mod torsional;
 
 use classify::{Classified, Code, Kind};
