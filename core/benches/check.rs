@@ -151,28 +151,15 @@ fn member(i: usize) -> Member {
         ),
     };
     Member {
-        id: format!("B{i}"),
-        note: None,
-        section,
-        material,
-        length_mm: 2500.0 + 50.0 * f,
-        k_major: 1.0,
         k_minor: if i.is_multiple_of(3) { 0.7 } else { 1.0 },
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 150.0 + 10.0 * f,
-        method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
+        ..Member::new(
+            format!("B{i}"),
+            section,
+            material,
+            2500.0 + 50.0 * f,
+            150.0 + 10.0 * f,
+            method,
+        )
     }
 }
 

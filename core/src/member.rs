@@ -213,6 +213,44 @@ pub struct BucklingLengths {
 }
 
 impl Member {
+    /// A member with the keys every member needs and every option at its
+    /// member-file default (effective-length factors 1, no buckling
+    /// lengths, factors, curves or other options given), as a member file
+    /// that gives only those keys reads. Set options on the result.
+    pub fn new(
+        id: impl Into<String>,
+        section: SectionSpec,
+        material: MaterialSpec,
+        length_mm: f64,
+        axial_kn: f64,
+        method: Method,
+    ) -> Member {
+        Member {
+            id: id.into(),
+            note: None,
+            section,
+            material,
+            length_mm,
+            k_major: 1.0,
+            k_minor: 1.0,
+            k_torsion: 1.0,
+            lcr_major_mm: None,
+            lcr_minor_mm: None,
+            lcr_torsion_mm: None,
+            axial_kn,
+            method,
+            gamma_m1: None,
+            curve_major: None,
+            curve_minor: None,
+            bow_mm: None,
+            eccentricity_mm: None,
+            service_class: None,
+            load_duration: None,
+            csa_n: None,
+            angle_connection: None,
+        }
+    }
+
     /// The member's section, built: a catalogue designation is resolved
     /// here, once, and an unknown one is [`Error::UnknownDesignation`].
     pub fn build_section(&self) -> Result<Section> {

@@ -317,34 +317,18 @@ mod tests {
     use crate::section::{Given, Rect, Round, SectionSpec};
 
     fn member(section: SectionSpec, axial_kn: f64, method: Method) -> Member {
-        Member {
-            id: "S1".into(),
-            note: None,
+        Member::new(
+            "S1",
             section,
-            material: MaterialSpec::Custom {
+            MaterialSpec::Custom {
                 fy_mpa: 275.0,
                 e_mpa: 205_000.0,
                 g_mpa: None,
             },
-            length_mm: 2500.0,
-            k_major: 1.0,
-            k_minor: 1.0,
-            k_torsion: 1.0,
-            lcr_major_mm: None,
-            lcr_minor_mm: None,
-            lcr_torsion_mm: None,
+            2500.0,
             axial_kn,
             method,
-            gamma_m1: None,
-            curve_major: None,
-            curve_minor: None,
-            bow_mm: None,
-            eccentricity_mm: None,
-            service_class: None,
-            load_duration: None,
-            csa_n: None,
-            angle_connection: None,
-        }
+        )
     }
 
     fn rect() -> SectionSpec {

@@ -93,35 +93,19 @@ pub(crate) mod tests {
     use std::f64::consts::PI;
 
     pub(crate) fn member(method: Method, grade: &str) -> Member {
-        Member {
-            id: "T1".into(),
-            note: None,
-            section: SectionSpec::Rect(Rect {
+        Member::new(
+            "T1",
+            SectionSpec::Rect(Rect {
                 depth_mm: 100.0,
                 width_mm: 50.0,
             }),
-            material: MaterialSpec::Grade {
+            MaterialSpec::Grade {
                 grade: grade.into(),
             },
-            length_mm: 2000.0,
-            k_major: 1.0,
-            k_minor: 1.0,
-            k_torsion: 1.0,
-            lcr_major_mm: None,
-            lcr_minor_mm: None,
-            lcr_torsion_mm: None,
-            axial_kn: 100.0,
+            2000.0,
+            100.0,
             method,
-            gamma_m1: None,
-            curve_major: None,
-            curve_minor: None,
-            bow_mm: None,
-            eccentricity_mm: None,
-            service_class: None,
-            load_duration: None,
-            csa_n: None,
-            angle_connection: None,
-        }
+        )
     }
 
     #[test]
