@@ -21,10 +21,7 @@
 //! Adding a series is adding a data file and one line in [`FILES`].
 
 use std::collections::HashMap;
-use std::hash::BuildHasherDefault;
 use std::sync::OnceLock;
-
-use crate::fnv::Fnv;
 
 use crate::error::{Error, Result};
 use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, Section, SectionSpec};
@@ -121,7 +118,7 @@ impl Series {
     }
 }
 
-type Index = HashMap<Box<str>, usize, BuildHasherDefault<Fnv>>;
+type Index = HashMap<Box<str>, usize, rustc_hash::FxBuildHasher>;
 
 struct Catalogue {
     entries: Vec<Entry>,
@@ -707,27 +704,6 @@ pub fn dimensions(spec: &SectionSpec) -> Option<&SectionSpec> {
     }
 }
 
-/// Levenshtein distance between two byte strings.
-fn edit_distance(a: &[u8], b: &[u8]) -> usize {
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur = vec![0; b.len() + 1];
-    for (i, ca) in a.iter().enumerate() {
-        if let Some(c0) = cur.first_mut() {
-            *c0 = i + 1;
-        }
-        for (j, cb) in b.iter().enumerate() {
-            let sub = prev.get(j).copied().unwrap_or(0) + usize::from(ca != cb);
-            let del = prev.get(j + 1).copied().unwrap_or(0) + 1;
-            let ins = cur.get(j).copied().unwrap_or(0) + 1;
-            if let Some(slot) = cur.get_mut(j + 1) {
-                *slot = sub.min(del).min(ins);
-            }
-        }
-        std::mem::swap(&mut prev, &mut cur);
-    }
-    prev.get(b.len()).copied().unwrap_or(0)
-}
-
 /// Up to `n` designations nearest to `designation`, nearest first: the
 /// smallest edit distance between normalised keys over every spelling of
 /// each entry.
@@ -740,7 +716,7 @@ pub fn nearest(designation: &str, n: usize) -> Vec<String> {
     let query_numbers = numbers(&query);
     let mut best: Vec<(usize, usize)> = vec![(usize::MAX, usize::MAX); cat.entries.len()];
     for (key, &i) in &cat.index {
-        let dist = edit_distance(query.as_bytes(), key.as_bytes());
+        let dist = crate::names::edit_distance(query.as_bytes(), key.as_bytes());
         if let Some(slot) = best.get_mut(i) {
             if dist < slot.0 {
                 *slot = (dist, i);
@@ -1037,12 +1013,5 @@ mod tests {
             text = if upper { text.to_uppercase() } else { text.to_lowercase() };
             proptest::prop_assert_eq!(resolve(&text).map(|r| r.designation), Ok(e.designation));
         }
-    }
-
-    #[test]
-    fn edit_distance_is_levenshtein() {
-        assert_eq!(edit_distance(b"kitten", b"sitting"), 3);
-        assert_eq!(edit_distance(b"", b"abc"), 3);
-        assert_eq!(edit_distance(b"HE200B", b"HE200B"), 0);
     }
 }

@@ -17,6 +17,7 @@
 use serde::{Deserialize, Serialize};
 
 use crate::error::{positive, Error, Result};
+use crate::names;
 use crate::section::{Family, HollowMake, Section, SectionSpec};
 
 /// Solid (sawn) timber or glued laminated timber: sets beta_c and gamma_M.
@@ -123,9 +124,10 @@ impl Material {
     }
 }
 
-/// 1 ksi in MPa (exact to the digits given: 1 ksi = 1000 lbf/in2 =
-/// 6.894757 MPa, NIST SP 811 Appendix B).
-pub const KSI: f64 = 6.894757;
+/// 1 ksi in MPa: [`crate::units::MPA_PER_KSI`], worked from the exact
+/// definitions of the inch and the pound-force (NIST SP 811 Appendix B
+/// gives 6.894757 MPa to seven digits).
+pub const KSI: f64 = crate::units::MPA_PER_KSI;
 
 /// E for EN grades, MPa (EN 1993-1-1:2005 3.2.6(1)).
 pub const E_EN: f64 = 210_000.0;
@@ -210,14 +212,6 @@ enum Found {
         &'static SteelGrade,
     ),
     Timber(&'static TimberClass),
-}
-
-/// Upper case, letters and digits only.
-fn normalise(name: &str) -> String {
-    name.chars()
-        .filter(|c| c.is_ascii_alphanumeric())
-        .map(|c| c.to_ascii_uppercase())
-        .collect()
 }
 
 /// A grade name normalised on the stack (upper case, letters and digits
@@ -323,42 +317,20 @@ fn find(name: &str) -> Option<Found> {
     Some(found)
 }
 
-/// Edit distance between two short strings (Levenshtein), for suggestions.
-fn edit_distance(a: &str, b: &str) -> usize {
-    let b: Vec<char> = b.chars().collect();
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur: Vec<usize> = vec![0; b.len() + 1];
-    for (i, ca) in a.chars().enumerate() {
-        if let Some(first) = cur.first_mut() {
-            *first = i + 1;
-        }
-        for (j, cb) in b.iter().enumerate() {
-            let sub = prev.get(j).copied().unwrap_or(usize::MAX - 1) + usize::from(ca != *cb);
-            let del = prev.get(j + 1).copied().unwrap_or(usize::MAX - 1) + 1;
-            let ins = cur.get(j).copied().unwrap_or(usize::MAX - 1) + 1;
-            if let Some(slot) = cur.get_mut(j + 1) {
-                *slot = sub.min(del).min(ins);
-            }
-        }
-        std::mem::swap(&mut prev, &mut cur);
-    }
-    prev.last().copied().unwrap_or(0)
-}
-
 /// Known grade names nearest to `grade`, nearest first (at most four).
 pub fn suggestions(grade: &str) -> Vec<String> {
-    let n = normalise(grade);
+    let n = names::alnum_upper(grade);
     let mut scored: Vec<(usize, &str)> = KNOWN_GRADES
         .iter()
         .map(|k| {
-            let kn = normalise(k);
-            let d = edit_distance(&n, &kn);
+            let kn = names::alnum_upper(k);
+            let d = names::edit_distance(n.as_bytes(), kn.as_bytes());
             // A shared prefix of two or more characters counts as close.
             let prefix =
                 !n.is_empty() && n.len() >= 2 && (kn.starts_with(&n) || n.starts_with(&kn));
             (if prefix { d.min(1) } else { d }, *k)
         })
-        .filter(|(d, k)| *d <= 2.max(normalise(k).len() / 2))
+        .filter(|(d, k)| *d <= 2.max(names::alnum_upper(k).len() / 2))
         .collect();
     scored.sort_by_key(|(d, _)| *d);
     scored

@@ -9,14 +9,13 @@
 
 use std::cell::RefCell;
 use std::collections::HashMap;
-use std::hash::{BuildHasherDefault, Hash, Hasher};
+use std::hash::{Hash, Hasher};
 
 use super::{
     Angle, CatalogueRef, Chs, Flanged, Given, HollowMake, IMake, IShape, Properties, Rect, Rhs,
     Round, SectionSpec,
 };
 use crate::error::Result;
-use crate::fnv::Fnv;
 
 /// Entries kept before the memo starts again.
 const CAP: usize = 4096;
@@ -30,7 +29,7 @@ struct Key([u64; 8]);
 
 impl Hash for Key {
     // Word by word: the derived hash of `[u64; 8]` hands the hasher one
-    // 64-byte slice, which `Fnv::write` would mix a byte at a time.
+    // 64-byte slice (and its length) instead.
     fn hash<H: Hasher>(&self, state: &mut H) {
         for w in self.0 {
             state.write_u64(w);
@@ -39,8 +38,8 @@ impl Hash for Key {
 }
 
 thread_local! {
-    static MEMO: RefCell<HashMap<Key, Properties, BuildHasherDefault<Fnv>>> =
-        RefCell::new(HashMap::with_capacity_and_hasher(64, BuildHasherDefault::default()));
+    static MEMO: RefCell<HashMap<Key, Properties, rustc_hash::FxBuildHasher>> =
+        RefCell::new(HashMap::with_capacity_and_hasher(64, rustc_hash::FxBuildHasher));
 }
 
 fn opt(v: Option<f64>) -> u64 {
