@@ -692,18 +692,6 @@ pub fn family(spec: &SectionSpec) -> Result<Family> {
     }
 }
 
-/// The spec with dimensions behind any spec: the catalogue entry's for a
-/// reference (`None` when the designation is unknown), the spec otherwise.
-pub fn dimensions(spec: &SectionSpec) -> Option<&SectionSpec> {
-    match spec {
-        SectionSpec::Catalogue(c) => resolve(&c.designation)
-            .ok()
-            .map(|e| &e.spec)
-            .filter(|s| !matches!(s, SectionSpec::Catalogue(_))),
-        other => Some(other),
-    }
-}
-
 /// Up to `n` designations nearest to `designation`, nearest first: the
 /// smallest edit distance between normalised keys over every spelling of
 /// each entry.
