@@ -58,7 +58,7 @@ fn table(title: &str, members: &[strutline_core::Member], results: &[CheckResult
             format!("{:.1}", m.axial_kn),
             format!("{:.1}", r.resistance_kn),
             format!("{:.3}", r.utilisation),
-            r.governing.key().to_string(),
+            r.governing_check.to_string(),
             if r.passes { "ok".into() } else { "OVER".into() },
         ]);
     }

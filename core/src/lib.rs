@@ -11,6 +11,7 @@
 //! against the governing code, its national annex and the judgement of a
 //! licensed engineer.
 
+pub mod bending;
 pub mod catalogue;
 pub mod check;
 pub mod compare;

@@ -26,7 +26,7 @@ const LAYERS: &[(&str, &[&str])] = &[
     ("member", &["member"]),
     ("outcome types", &["outcome"]),
     ("methods", &["method"]),
-    ("other limit states", &["stability"]),
+    ("other limit states", &["stability", "bending"]),
     ("the check", &["check"]),
     ("orchestration", &["envelope", "compare", "solve", "sizing"]),
     ("the member file", &["file"]),

@@ -148,6 +148,10 @@ fn steel_section() -> impl Strategy<Value = SectionSpec> {
                 i_minor_mm4: i * ratio,
                 torsion_mm4: None,
                 warping_mm6: None,
+                w_el_major_mm3: None,
+                w_el_minor_mm3: None,
+                w_pl_major_mm3: None,
+                w_pl_minor_mm3: None,
             })
         }),
     ]

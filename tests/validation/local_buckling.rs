@@ -561,6 +561,10 @@ fn limit_states_a_method_does_not_cover_are_warned() {
         i_minor_mm4: 2e7,
         torsion_mm4: None,
         warping_mm6: None,
+        w_el_major_mm3: None,
+        w_el_minor_mm3: None,
+        w_pl_major_mm3: None,
+        w_pl_minor_mm3: None,
     });
     let r = check_member(&member(given, Method::En1993, 3000.0)).unwrap();
     assert!(r

@@ -123,6 +123,10 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
             i_minor_mm4: i,
             torsion_mm4: Some(it),
             warping_mm6: Some(0.0),
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         }),
         MaterialSpec::Custom {
             fy_mpa: 355.0,

@@ -146,7 +146,7 @@ const RECT_FIELDS: [Field; 2] = [
     f("width_mm", "width b", "mm", Sec, Positive),
 ];
 const ROUND_FIELDS: [Field; 1] = [f("diameter_mm", "diameter d", "mm", Sec, Positive)];
-const GIVEN_FIELDS: [Field; 5] = [
+const GIVEN_FIELDS: [Field; 9] = [
     f("area_mm2", "area A", "mm²", Sec, Positive),
     f(
         "i_major_mm4",
@@ -173,6 +173,34 @@ const GIVEN_FIELDS: [Field; 5] = [
         "warping_mm6",
         "warping constant I_w (optional)",
         "mm⁶",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_el_major_mm3",
+        "elastic modulus W_el, major axis (optional)",
+        "mm³",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_el_minor_mm3",
+        "elastic modulus W_el, minor axis (optional)",
+        "mm³",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_pl_major_mm3",
+        "plastic modulus W_pl, major axis (optional)",
+        "mm³",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_pl_minor_mm3",
+        "plastic modulus W_pl, minor axis (optional)",
+        "mm³",
         Sec,
         OptPositive,
     ),

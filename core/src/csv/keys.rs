@@ -20,6 +20,8 @@ pub(super) enum Kind {
     Number,
     /// A whole number.
     Whole,
+    /// Yes or no (`true`/`false`, `yes`/`no`, `1`/`0`).
+    Bool,
 }
 
 #[derive(Debug)]
@@ -56,6 +58,10 @@ pub(super) const KEYS: &[KeyInfo] = &[
     k("i_minor_mm4", Group::Section, Kind::Number),
     k("torsion_mm4", Group::Section, Kind::Number),
     k("warping_mm6", Group::Section, Kind::Number),
+    k("w_el_major_mm3", Group::Section, Kind::Number),
+    k("w_el_minor_mm3", Group::Section, Kind::Number),
+    k("w_pl_major_mm3", Group::Section, Kind::Number),
+    k("w_pl_minor_mm3", Group::Section, Kind::Number),
     k("grade", Group::Material, Kind::Text),
     k("fy_mpa", Group::Material, Kind::Number),
     k("e_mpa", Group::Material, Kind::Number),
@@ -83,6 +89,18 @@ pub(super) const KEYS: &[KeyInfo] = &[
     k("csa_n", Group::Member, Kind::Number),
     k("angle_leg", Group::Angle, Kind::Name),
     k("angle_truss", Group::Angle, Kind::Name),
+    k("m_major_a_knm", Group::Member, Kind::Number),
+    k("m_major_b_knm", Group::Member, Kind::Number),
+    k("m_major_span_knm", Group::Member, Kind::Number),
+    k("span_load_major", Group::Member, Kind::Name),
+    k("m_minor_a_knm", Group::Member, Kind::Number),
+    k("m_minor_b_knm", Group::Member, Kind::Number),
+    k("m_minor_span_knm", Group::Member, Kind::Number),
+    k("span_load_minor", Group::Member, Kind::Name),
+    k("k_lt", Group::Member, Kind::Number),
+    k("lcr_lt_mm", Group::Member, Kind::Number),
+    k("lt_restrained", Group::Member, Kind::Bool),
+    k("load_level", Group::Member, Kind::Name),
 ];
 
 /// Keys every row needs (the material and section needs are per row).

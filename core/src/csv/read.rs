@@ -102,9 +102,12 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             "load_duration" => "permanent, long, medium, short or instantaneous".into(),
             "angle_leg" => "long or short".into(),
             "angle_truss" => "planar or space".into(),
+            "span_load_major" | "span_load_minor" => "uniform or point".into(),
+            "load_level" => "shear-centre, compression-flange or tension-flange".into(),
             _ => "a name".into(),
         },
         Kind::Whole => "a whole number".into(),
+        Kind::Bool => "true or false".into(),
         Kind::Number => match unit {
             Some(UsUnit::Ft) => "a length in feet, e.g. 13.5 or 13'-6\"".into(),
             Some(UsUnit::In) => "a length in inches, e.g. 6.5 or 6-1/2\"".into(),
@@ -116,6 +119,8 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
                 Some("mm6") => "a number in mm6".into(),
                 Some("kn") => "a number in kN".into(),
                 Some("mpa") => "a number in MPa".into(),
+                Some("mm3") => "a number in mm3".into(),
+                Some("knm") => "a number in kNm".into(),
                 _ => "a number".into(),
             },
         },
@@ -209,6 +214,12 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                         .ok_or_else(|| "not a finite number".to_string())
                 })
             }
+            Kind::Bool => match field.text.trim().to_ascii_lowercase().as_str() {
+                "" => continue,
+                "true" | "yes" | "y" | "1" => Ok(Value::Bool(true)),
+                "false" | "no" | "n" | "0" => Ok(Value::Bool(false)),
+                other => Err(format!("\"{other}\" is not true or false")),
+            },
             Kind::Whole => {
                 if field.text.trim().is_empty() {
                     continue;
@@ -287,6 +298,9 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
         "load_duration",
         "angle_leg",
         "angle_truss",
+        "span_load_major",
+        "span_load_minor",
+        "load_level",
         "make",
     ] {
         let Some(v) = get(key) else { continue };
@@ -295,6 +309,8 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             "load_duration" => &["permanent", "long", "medium", "short", "instantaneous"],
             "angle_leg" => &["long", "short"],
             "angle_truss" => &["planar", "space"],
+            "span_load_major" | "span_load_minor" => &["uniform", "point"],
+            "load_level" => &["shear-centre", "compression-flange", "tension-flange"],
             // The section kind's choices (section::schema); other kinds
             // have no make, and the section check says so.
             _ => match kind_name.and_then(schema::kind).and_then(|k| k.key(key)) {

@@ -395,7 +395,7 @@ fn never_panics_on_random_input() {
 
 /// Every section kind, every material form and every member option,
 /// with awkward numbers and text.
-const EVERY: &str = r#"{"format": "strutline.members", "version": 2, "title": "every key",
+const EVERY: &str = r#"{"format": "strutline.members", "version": 3, "title": "every key",
   "members": [
     {"id": "I1", "note": "comma, \"quote\"\nnew line", "section": {"kind": "i", "depth_mm": 300.5,
      "width_mm": 300, "flange_mm": 19, "web_mm": 11, "root_radius_mm": 27, "make": "welded"},
@@ -443,7 +443,15 @@ const EVERY: &str = r#"{"format": "strutline.members", "version": 2, "title": "e
      "angle_connection": {"leg": "short", "truss": "space"}},
     {"id": "L13", "section": {"kind": "angle", "depth_mm": 80, "width_mm": 80, "thickness_mm": 8},
      "material": {"grade": "S355"}, "length_mm": 1200, "axial_kn": 50, "method": "aisc360-asd",
-     "angle_connection": {"leg": "long"}}
+     "angle_connection": {"leg": "long"}},
+    {"id": "B14", "section": {"kind": "given", "area_mm2": 5380, "i_major_mm4": 5.79e7,
+     "i_minor_mm4": 4.2e6, "w_el_major_mm3": 4.29e5, "w_el_minor_mm3": 5.84e4,
+     "w_pl_major_mm3": 4.84e5, "w_pl_minor_mm3": 9.1e4}, "material": {"grade": "S355"},
+     "length_mm": 5400, "axial_kn": 0, "method": "en1993-1-1", "m_major_a_knm": -42.5,
+     "m_major_b_knm": 17.25, "m_major_span_knm": 60.75, "span_load_major": "point",
+     "m_minor_a_knm": 1.5, "m_minor_b_knm": 1.5, "m_minor_span_knm": -0.125,
+     "span_load_minor": "uniform", "k_lt": 0.5, "lcr_lt_mm": 1800, "lt_restrained": true,
+     "load_level": "compression-flange"}
   ]}"#;
 
 #[test]
@@ -454,7 +462,7 @@ fn json_csv_json_keeps_every_member_exactly() {
     // some long 17-digit values by one unit in the last place, so such
     // values are kept out of the JSON -> JSON comparison.
     let original = file::parse(EVERY).unwrap();
-    assert_eq!(original.members.len(), 13);
+    assert_eq!(original.members.len(), 14);
     let csv_text = to_csv(&original);
     let back = parse_csv(&csv_text);
     assert!(back.problems.is_empty(), "{:#?}\n{csv_text}", back.problems);
@@ -472,7 +480,12 @@ fn json_csv_json_keeps_every_member_exactly() {
     assert!(csv_text.starts_with("id,note,kind,"));
     // angle_connection is two flat columns, not a JSON cell.
     let header = csv_text.lines().next().unwrap();
-    assert!(header.ends_with(",csa_n,angle_leg,angle_truss"), "{header}");
+    assert!(
+        header.contains(",csa_n,angle_leg,angle_truss,m_major_a_knm,"),
+        "{header}"
+    );
+    let b14 = again.members.iter().find(|m| m.id == "B14").unwrap();
+    assert!(b14.lt_restrained && b14.m_minor_span_knm == -0.125);
     assert!(!csv_text.contains('{'), "{csv_text}");
     let l12 = again.members.iter().find(|m| m.id == "L12").unwrap();
     assert_eq!(

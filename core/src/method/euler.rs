@@ -173,6 +173,10 @@ pub(crate) mod tests {
                     i_minor_mm4: i_major * i_ratio,
                     torsion_mm4: None,
                     warping_mm6: None,
+                    w_el_major_mm3: None,
+                    w_el_minor_mm3: None,
+                    w_pl_major_mm3: None,
+                    w_pl_minor_mm3: None,
                 });
                 match kind {
                     0 => m.bow_mm = Some(bow),

@@ -146,12 +146,30 @@ fn key(spec: &SectionSpec) -> Option<Key> {
             [7, depth_mm.to_bits(), width_mm.to_bits(), 0, 0, 0, 0, 0]
         }
         SectionSpec::Round(Round { diameter_mm }) => [8, diameter_mm.to_bits(), 0, 0, 0, 0, 0, 0],
+        // Typed moduli do not fit the key; a given section is cheap to build.
+        SectionSpec::Given(Given {
+            w_el_major_mm3,
+            w_el_minor_mm3,
+            w_pl_major_mm3,
+            w_pl_minor_mm3,
+            ..
+        }) if w_el_major_mm3.is_some()
+            || w_el_minor_mm3.is_some()
+            || w_pl_major_mm3.is_some()
+            || w_pl_minor_mm3.is_some() =>
+        {
+            return None
+        }
         SectionSpec::Given(Given {
             area_mm2,
             i_major_mm4,
             i_minor_mm4,
             torsion_mm4,
             warping_mm6,
+            w_el_major_mm3: _,
+            w_el_minor_mm3: _,
+            w_pl_major_mm3: _,
+            w_pl_minor_mm3: _,
         }) => [
             9,
             area_mm2.to_bits(),

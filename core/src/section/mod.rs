@@ -165,6 +165,18 @@ pub struct Given {
     /// Warping constant (optional).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub warping_mm6: Option<f64>,
+    /// Elastic modulus about the major axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_el_major_mm3: Option<f64>,
+    /// Elastic modulus about the minor axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_el_minor_mm3: Option<f64>,
+    /// Plastic modulus about the major axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_pl_major_mm3: Option<f64>,
+    /// Plastic modulus about the minor axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_pl_minor_mm3: Option<f64>,
 }
 
 /// A section as written in the member file, selected by `"kind"`; its keys,
@@ -296,6 +308,11 @@ impl Section {
     /// a built section always has dimensions, or 0 for given properties.
     pub fn governing_thickness_mm(&self) -> f64 {
         self.spec.governing_thickness_mm().unwrap_or(0.0)
+    }
+
+    /// Whether the section is a channel.
+    pub fn spec_is_channel(&self) -> bool {
+        matches!(self.spec, SectionSpec::Channel(_))
     }
 }
 

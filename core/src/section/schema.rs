@@ -181,6 +181,10 @@ const GIVEN: Kind = Kind {
         number("i_minor_mm4", R),
         number("torsion_mm4", ABSENT),
         number("warping_mm6", ABSENT),
+        number("w_el_major_mm3", ABSENT),
+        number("w_el_minor_mm3", ABSENT),
+        number("w_pl_major_mm3", ABSENT),
+        number("w_pl_minor_mm3", ABSENT),
     ],
 };
 const CATALOGUE: Kind = Kind {
@@ -297,6 +301,10 @@ mod tests {
                 i_minor_mm4: 4.073e7,
                 torsion_mm4: Some(595_700.0),
                 warping_mm6: Some(1.709e12),
+                w_el_major_mm3: Some(1.0e6),
+                w_el_minor_mm3: Some(3.0e5),
+                w_pl_major_mm3: Some(1.1e6),
+                w_pl_minor_mm3: Some(4.0e5),
             }),
             SectionSpec::Catalogue(CatalogueRef {
                 designation: "HE 200 B".into(),
