@@ -700,6 +700,27 @@ mod tests {
     }
 
     #[test]
+    fn new_is_what_a_file_with_only_the_needed_keys_reads() {
+        let text = r#"{"id": "N1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
+            "material": {"grade": "S355"}, "length_mm": 2000, "axial_kn": 10, "method": "euler"}"#;
+        let read: Member = serde_json::from_str(text).unwrap();
+        let made = Member::new(
+            "N1",
+            SectionSpec::Rect(crate::section::Rect {
+                depth_mm: 100.0,
+                width_mm: 50.0,
+            }),
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
+            2000.0,
+            10.0,
+            Method::Euler,
+        );
+        assert_eq!(read, made);
+    }
+
+    #[test]
     fn bending_keys_are_validated_by_name() {
         let text = r#"{"id": "B1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
             "material": {"fy_mpa": 235, "e_mpa": 210000}, "length_mm": 2000, "axial_kn": 0,
