@@ -429,6 +429,17 @@ pub fn is_hot_finished_hollow(input: &Input<'_>) -> bool {
     }
 }
 
+/// Whether the section is a hollow section whose make the member file does
+/// not give (read as cold-formed: the lower resistance).
+pub fn hollow_make_unstated(input: &Input<'_>) -> bool {
+    use crate::section::HollowMake;
+    match &input.section.spec {
+        SectionSpec::Rhs(s) => s.make == HollowMake::Unstated,
+        SectionSpec::Chs(s) => s.make == HollowMake::Unstated,
+        _ => false,
+    }
+}
+
 /// Whether the section family is a hollow one.
 pub fn is_hollow(input: &Input<'_>) -> bool {
     matches!(input.section.family, Family::Rhs | Family::Chs)
@@ -595,7 +606,7 @@ pub(crate) mod tests {
                 r_major in 1.0f64..500.0,
                 lcr in 1e-3f64..1e7,
                 bow in 0.0f64..1e3,
-                gamma in 0.5f64..3.0,
+                gamma in 1.0f64..3.0,
                 timber in any::<bool>(),
                 kind in 0usize..3,
             ) {
