@@ -23,6 +23,7 @@ mod fnv;
 pub mod material;
 pub mod member;
 pub mod method;
+pub mod outcome;
 pub mod section;
 pub mod sizing;
 pub mod solve;
@@ -32,9 +33,10 @@ pub mod trig;
 pub mod units;
 pub mod wire;
 
-pub use check::{check_member, CheckResult, Mode, ModeResult};
+pub use check::{check_member, CheckResult};
 pub use error::Error;
 pub use member::Member;
+pub use outcome::{Mode, ModeResult, Warning};
 
 /// The caution shown beside every result, in every front end.
 pub const CAUTION: &str =

@@ -16,7 +16,6 @@
 //! S16-19, numbering recalled from memory) is not applied, and the result
 //! says so.
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::member::CSA_N_DEFAULT;
 use crate::method::euler::{
@@ -24,6 +23,7 @@ use crate::method::euler::{
     require_steel, warn_once,
 };
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::SectionSpec;
 use crate::trace::{step, sym, Scope, Sym, Trace};
 
