@@ -1,11 +1,12 @@
 //! Cross-sections: the parametric shapes of the member file and their
 //! properties.
 //!
-//! Axes: `y` is the major (strong) axis and `z` the minor axis for the
-//! doubly and singly symmetric shapes, with depth running along the web
-//! (bending about `y` loads the web in its plane). For angles the
-//! properties are also given about the principal axes `u` (major) and `v`
-//! (minor). Every property is computed from the dimensions, with root and
+//! Axes: `y` and `z` are the geometric axes, with depth running along the
+//! web (bending about `y` loads the web in its plane; for an I, y-y is
+//! parallel to the flanges, as EN 1993-1-1 Table 6.2 names it). `major`
+//! and `minor` are the principal axes, major the stiffer: y for the usual
+//! shapes, z for one wider than deep ([`Section::major_is_z`]). For angles
+//! the principal axes are `u` (major) and `v` (minor). Every property is computed from the dimensions, with root and
 //! corner radii as true circular arcs.
 
 use serde::{Deserialize, Serialize};
