@@ -384,13 +384,16 @@ pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
             let t = section.governing_thickness_mm();
             match find(grade) {
                 Some(Found::Steel(g)) => Ok(Material::Steel(steel_at(g, t)?)),
-                Some(Found::Hollow(hot, cold)) => {
-                    let g = match hollow_make(section) {
-                        Some(HollowMake::ColdFormed) => cold,
-                        _ => hot,
-                    };
-                    Ok(Material::Steel(steel_at(g, t)?))
-                }
+                Some(Found::Hollow(hot, cold)) => match hollow_make(section) {
+                    Some(HollowMake::ColdFormed) => Ok(Material::Steel(steel_at(cold, t)?)),
+                    // Make not given: cold-formed (the lower resistance, see
+                    // `section::HollowMake`), whose EN 10219-1 table stops at a
+                    // 40 mm wall; a thicker wall can only be hot-finished.
+                    Some(HollowMake::Unstated) => Ok(Material::Steel(
+                        steel_at(cold, t).or_else(|_| steel_at(hot, t))?,
+                    )),
+                    _ => Ok(Material::Steel(steel_at(hot, t)?)),
+                },
                 Some(Found::A500(round, shaped, unknown)) => {
                     let g = match section.family {
                         Family::Chs => round,

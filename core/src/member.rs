@@ -535,11 +535,15 @@ impl Member {
             });
         }
         if let Some(g) = self.gamma_m1 {
-            if !(g.is_finite() && (0.5..=3.0).contains(&g)) {
+            // No code here has a material (partial) factor below 1.0
+            // (EN 1993-1-1 6.1(1) Note 2B recommends 1.00); below it the
+            // resistance would exceed the squash load.
+            if !(g.is_finite() && (1.0..=3.0).contains(&g)) {
                 return Err(Error::OutOfRange {
                     field: "gamma_m1",
                     value: g,
-                    expected: "a partial factor between 0.5 and 3.0",
+                    expected:
+                        "a partial factor from 1.0 to 3.0 (none of the codes has one below 1.0)",
                 });
             }
         }

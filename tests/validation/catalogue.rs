@@ -313,7 +313,7 @@ fn resistance_bound_holds_for_every_method_and_entry() {
     let mut n = 0;
     for (k, e) in catalogue::entries().iter().enumerate() {
         let method = methods[k % methods.len()];
-        for (length, gamma) in [(500.0, None), (3500.0, Some(0.8)), (12000.0, Some(1.1))] {
+        for (length, gamma) in [(500.0, None), (3500.0, Some(1.0)), (12000.0, Some(1.1))] {
             let mut m = sizing::with_entry(&member("B", length, 100.0, method), e);
             m.gamma_m1 = gamma;
             m.k_minor = 0.7;

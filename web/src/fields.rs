@@ -427,20 +427,26 @@ pub struct Choice {
     pub options: Vec<(&'static str, &'static str)>,
 }
 
-/// The choices of a section kind (how it was made).
+/// The choices of a section kind (how it was made). "" leaves the make
+/// out: the engine takes the make of lower resistance and says so.
 pub fn section_choices(kind: &str) -> Vec<Choice> {
     match kind {
         "i" => vec![Choice {
             key: "make",
             label: "made",
             place: Sec,
-            options: vec![("rolled", "hot-rolled"), ("welded", "welded from plates")],
+            options: vec![
+                ("", "not known: the lower-resistance make is taken"),
+                ("rolled", "hot-rolled"),
+                ("welded", "welded from plates"),
+            ],
         }],
         "rhs" | "chs" => vec![Choice {
             key: "make",
             label: "made",
             place: Sec,
             options: vec![
+                ("", "not known: taken as cold-formed (lower resistance)"),
                 ("hot-finished", "hot-finished"),
                 ("cold-formed", "cold-formed"),
             ],
@@ -915,6 +921,11 @@ mod tests {
         assert!(
             matches!(welded.section, SectionSpec::I(ref s) if s.make == strutline_core::section::IMake::Welded)
         );
+        // The first option leaves the make out: not known, shown as such.
+        assert_eq!(make.options[0].0, "");
+        let unknown = apply_choice(&welded, make, "").unwrap();
+        assert!(matches!(unknown.section, SectionSpec::I(ref s) if s.make.is_unstated()));
+        assert_eq!(read(&unknown, Sec, "make"), "");
     }
 
     #[test]

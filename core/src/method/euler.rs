@@ -161,7 +161,7 @@ pub(crate) mod tests {
                 r_major in 1.0f64..500.0,
                 lcr in 1e-3f64..1e7,
                 bow in 0.0f64..1e3,
-                gamma in 0.5f64..3.0,
+                gamma in 1.0f64..3.0,
                 timber in any::<bool>(),
                 kind in 0usize..3,
             ) {

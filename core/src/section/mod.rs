@@ -1,11 +1,12 @@
 //! Cross-sections: the parametric shapes of the member file and their
 //! properties.
 //!
-//! Axes: `y` is the major (strong) axis and `z` the minor axis for the
-//! doubly and singly symmetric shapes, with depth running along the web
-//! (bending about `y` loads the web in its plane). For angles the
-//! properties are also given about the principal axes `u` (major) and `v`
-//! (minor). Every property is computed from the dimensions, with root and
+//! Axes: `y` and `z` are the geometric axes, with depth running along the
+//! web (bending about `y` loads the web in its plane; for an I, y-y is
+//! parallel to the flanges, as EN 1993-1-1 Table 6.2 names it). `major`
+//! and `minor` are the principal axes, major the stiffer: y for the usual
+//! shapes, z for one wider than deep ([`Section::major_is_z`]). For angles
+//! the principal axes are `u` (major) and `v` (minor). Every property is computed from the dimensions, with root and
 //! corner radii as true circular arcs.
 
 use serde::{Deserialize, Serialize};
@@ -19,26 +20,55 @@ pub mod plates;
 pub mod schema;
 pub mod shapes;
 
-/// How an I/H section was made: it selects the EN 1993-1-1 buckling curve.
+/// How an I/H section was made: it selects the EN 1993-1-1 buckling curve
+/// (and the AISC 360-16 Table B4.1a case of the flanges).
+///
+/// A member file that does not say (`make` absent) gets [`IMake::Unstated`]:
+/// each method then takes the make that gives the lower resistance and says
+/// so on the result (see [`crate::method::make`]). `Unstated` is never
+/// written to a file (the key is left out), nor read from one.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "kebab-case")]
 pub enum IMake {
     /// Hot-rolled, with root radii.
-    #[default]
     Rolled,
     /// Welded from plates, no radii.
     Welded,
+    /// Not given: the lower-resistance make is taken.
+    #[default]
+    #[serde(skip)]
+    Unstated,
+}
+
+impl IMake {
+    /// Whether the member file left the make out.
+    pub fn is_unstated(&self) -> bool {
+        *self == IMake::Unstated
+    }
 }
 
 /// How a hollow section was made.
+///
+/// Absent in the member file: [`HollowMake::Unstated`], read as cold-formed
+/// (the lower resistance, see [`crate::method::make`]).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "kebab-case")]
 pub enum HollowMake {
     /// Hot-finished (EN 10210, or seamless).
-    #[default]
     HotFinished,
     /// Cold-formed (EN 10219, ASTM A500 electric-resistance-welded).
     ColdFormed,
+    /// Not given: the lower-resistance make is taken.
+    #[default]
+    #[serde(skip)]
+    Unstated,
+}
+
+impl HollowMake {
+    /// Whether the member file left the make out.
+    pub fn is_unstated(&self) -> bool {
+        *self == HollowMake::Unstated
+    }
 }
 
 /// A doubly symmetric I or H section.
@@ -56,8 +86,8 @@ pub struct IShape {
     /// Root radius r between web and flange (0 for welded).
     #[serde(default)]
     pub root_radius_mm: f64,
-    /// Rolled or welded.
-    #[serde(default)]
+    /// Rolled or welded; absent: not stated.
+    #[serde(default, skip_serializing_if = "IMake::is_unstated")]
     pub make: IMake,
 }
 
@@ -77,8 +107,8 @@ pub struct Rhs {
     /// Inner corner radius r_i; when absent, max(r_o - t, 0).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub inner_radius_mm: Option<f64>,
-    /// Hot-finished or cold-formed.
-    #[serde(default)]
+    /// Hot-finished or cold-formed; absent: not stated.
+    #[serde(default, skip_serializing_if = "HollowMake::is_unstated")]
     pub make: HollowMake,
 }
 
@@ -90,8 +120,8 @@ pub struct Chs {
     pub diameter_mm: f64,
     /// Wall thickness t.
     pub wall_mm: f64,
-    /// Hot-finished or cold-formed.
-    #[serde(default)]
+    /// Hot-finished or cold-formed; absent: not stated.
+    #[serde(default, skip_serializing_if = "HollowMake::is_unstated")]
     pub make: HollowMake,
 }
 
@@ -313,6 +343,28 @@ impl Section {
     /// Whether the section is a channel.
     pub fn spec_is_channel(&self) -> bool {
         matches!(self.spec, SectionSpec::Channel(_))
+    }
+
+    /// Whether the principal major axis is the geometric z-z axis (parallel
+    /// to the depth, the web of an I): a section stiffer about it than about
+    /// y-y, such as an I wider than deep (principal angle 90°).
+    pub fn major_is_z(&self) -> bool {
+        (self.props.principal_angle_rad - std::f64::consts::FRAC_PI_2).abs() < 1e-9
+    }
+
+    /// The geometric axis the principal major (`major` true) or minor axis
+    /// is, as the codes' tables name it: "y-y" (parallel to the width, the
+    /// flanges of an I) or "z-z" (parallel to the depth, the web). `None`
+    /// for angles (principal axes u-u, v-v) and typed properties.
+    pub fn axis_name(&self, major: bool) -> Option<&'static str> {
+        if matches!(self.family, Family::Angle | Family::Given) {
+            return None;
+        }
+        Some(if major != self.major_is_z() {
+            "y-y"
+        } else {
+            "z-z"
+        })
     }
 }
 
