@@ -2,7 +2,7 @@
 //! every member with a `buckling_model`, about both axes.
 
 use strutline_core::buckling::column::Buckle;
-use strutline_core::buckling::model::buckle_all;
+use strutline_core::check::buckle::buckle_all;
 use strutline_core::CAUTION;
 
 /// `strutline buckle`'s options.
