@@ -795,7 +795,14 @@ mod tests {
                                     )
                                 });
                         let offered: Vec<&str> = choice.options.iter().map(|(v, _)| *v).collect();
-                        assert_eq!(offered, options, "{} {}", kind.name, key.key);
+                        // A choice whose absence means "not stated" offers
+                        // that first, as the empty value.
+                        let mut described: Vec<&str> = Vec::new();
+                        if key.default == Absent::Absent {
+                            described.push("");
+                        }
+                        described.extend_from_slice(options);
+                        assert_eq!(offered, described, "{} {}", kind.name, key.key);
                     }
                     Holds::Number | Holds::Text => {
                         let field = fields.iter().find(|f| f.key == key.key).unwrap_or_else(|| {

@@ -102,10 +102,9 @@ const fn make(options: &'static [&'static str]) -> Key {
     Key {
         key: "make",
         value: Value::Choice(options),
-        default: Default::Choice(match options {
-            [first, ..] => first,
-            [] => "",
-        }),
+        // Absent: the make is not stated, and each method takes the one that
+        // gives the lower resistance and says so (`make-assumed`).
+        default: Default::Absent,
     }
 }
 
