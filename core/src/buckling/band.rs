@@ -221,7 +221,7 @@ mod tests {
                 let j = i + t;
                 if j < n {
                     let v = if t == 0 {
-                        4.0 + (i as f64).sin() - shift
+                        4.0 + crate::trig::sin(i as f64) - shift
                     } else {
                         1.0 / (1.0 + t as f64 + 0.1 * i as f64)
                     };

@@ -235,11 +235,11 @@ mod tests {
     fn printed(sway: bool, g_a: f64, g_b: f64, k: f64) -> f64 {
         let x = std::f64::consts::PI / k;
         if sway {
-            (g_a * g_b * x * x - 36.0) / (6.0 * (g_a + g_b)) - x / x.tan()
+            (g_a * g_b * x * x - 36.0) / (6.0 * (g_a + g_b)) - x / crate::trig::tan(x)
         } else {
             g_a * g_b / 4.0 * x * x
-                + (g_a + g_b) / 2.0 * (1.0 - x / x.tan())
-                + 2.0 * (x / 2.0).tan() / x
+                + (g_a + g_b) / 2.0 * (1.0 - x / crate::trig::tan(x))
+                + 2.0 * crate::trig::tan(x / 2.0) / x
                 - 1.0
         }
     }
