@@ -731,7 +731,16 @@ mod tests {
             w_pl_major_mm3: None,
             w_pl_minor_mm3: None,
         }));
-        assert!(matches!(tiny, Err(Error::OutOfRange { field: "area_mm2", .. })), "{tiny:?}");
+        assert!(
+            matches!(
+                tiny,
+                Err(Error::OutOfRange {
+                    field: "area_mm2",
+                    ..
+                })
+            ),
+            "{tiny:?}"
+        );
     }
 
     #[test]
