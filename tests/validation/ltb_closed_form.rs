@@ -109,7 +109,7 @@ fn ipe_300_s355_en_6_3_2_3_by_hand() {
     // k_c = 1: f = 1 - 0.5 (1 - 1)(...) = 1, chi_mod = chi.
     let mb = chi * wpl * fy / 1e6; // gamma_M1 = 1.0
     let m = beam(
-        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15}),
+        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15, "make": "rolled"}),
         l,
         json!({}),
     );
