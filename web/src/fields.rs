@@ -795,14 +795,13 @@ mod tests {
                                     )
                                 });
                         let offered: Vec<&str> = choice.options.iter().map(|(v, _)| *v).collect();
-                        // A choice whose absence means "not stated" offers
-                        // that first, as the empty value.
-                        let mut described: Vec<&str> = Vec::new();
+                        // A key that may be absent is offered as "" first.
+                        let mut expected: Vec<&str> = Vec::new();
                         if key.default == Absent::Absent {
-                            described.push("");
+                            expected.push("");
                         }
-                        described.extend_from_slice(options);
-                        assert_eq!(offered, described, "{} {}", kind.name, key.key);
+                        expected.extend_from_slice(options);
+                        assert_eq!(offered, expected, "{} {}", kind.name, key.key);
                     }
                     Holds::Number | Holds::Text => {
                         let field = fields.iter().find(|f| f.key == key.key).unwrap_or_else(|| {
