@@ -16,6 +16,31 @@ use crate::section::{Family, Properties, Section};
 use crate::stability;
 use crate::trace::Trace;
 
+impl CheckResult {
+    /// Whether the member meets the limits its code sets apart from the
+    /// load: CSA S16-19 10.4.2.1 (the slenderness ratio of a compression
+    /// member shall not exceed 200). [`CheckResult::passes`] includes it.
+    pub fn within_limits(&self) -> bool {
+        !(self.method == Method::CsaS16 && method::csa_s16::over_slenderness_limit(&self.modes))
+    }
+
+    /// Why the member fails a limit of its code whatever its load (the
+    /// result's own warning), when it does.
+    pub fn limit_exceeded(&self) -> Option<&str> {
+        if self.within_limits() {
+            return None;
+        }
+        Some(
+            self.warnings
+                .iter()
+                .find(|w| w.code == "slenderness-over-200")
+                .map_or("a slenderness limit of the code is exceeded", |w| {
+                    w.message.as_str()
+                }),
+        )
+    }
+}
+
 /// The properties a result reports.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct SectionSummary {
@@ -87,6 +112,20 @@ pub struct CheckResult {
     pub warnings: Vec<Warning>,
     /// The working.
     pub trace: Trace,
+}
+
+impl CheckResult {
+    /// The classification and effective widths this result used, for
+    /// drawing them (see [`stability::effective::of_check`]).
+    pub fn effective(
+        &self,
+        input: &Input<'_>,
+    ) -> Option<(
+        stability::classify::Classified,
+        stability::effective::Effective,
+    )> {
+        stability::effective::of_check(input, self.method, &self.modes, self.governing)
+    }
 }
 
 /// A member ready to check: section built and material resolved once.
@@ -290,10 +329,10 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         }
     };
     let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
-    Ok(CheckResult {
+    let mut r = CheckResult {
         id: m.id.clone(),
         method,
-        passes,
+        passes: false,
         utilisation,
         governing_check,
         resistance_kn,
@@ -306,7 +345,9 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         bending,
         warnings,
         trace,
-    })
+    };
+    r.passes = passes && r.within_limits();
+    Ok(r)
 }
 
 /// Validates a member's options and resolves its section and material (its
@@ -315,7 +356,7 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
 pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let section = member.section.build().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     Ok((section, material))
 }
@@ -326,7 +367,7 @@ pub fn check_member(member: &Member) -> Result<CheckResult> {
     // stays, not moved through a returned pair (a few hundred bytes a check).
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let section = member.section.build().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     let input = Input {
         member,
