@@ -220,6 +220,19 @@ fn bench(c: &mut Criterion) {
             black_box(passing)
         })
     });
+    // The same members without their moments: the cost of the bending side.
+    let plain: Vec<Member> = (0..MEMBERS).map(|i| member((i / 6) * 10 + i % 6)).collect();
+    group.bench_function("10k_same_members_without_moments", |b| {
+        b.iter(|| {
+            let mut passing = 0usize;
+            for m in &plain {
+                if let Ok(r) = strutline_core::check_member(black_box(m)) {
+                    passing += usize::from(r.passes);
+                }
+            }
+            black_box(passing)
+        })
+    });
     group.bench_function("10k_members_with_moments", |b| {
         b.iter(|| {
             let mut passing = 0usize;
