@@ -134,7 +134,10 @@ fn help_is_generated_for_every_command_and_exits_0() {
     }
     let (code, text, _) = run(&["help", "size"]);
     assert_eq!(code, Some(0));
-    assert!(text.contains("--limit") && text.contains("known series"), "{text}");
+    assert!(
+        text.contains("--limit") && text.contains("known series"),
+        "{text}"
+    );
     // No command: the help, on stderr, status 2 (a script called it wrongly).
     let (code, _, err) = run(&[]);
     assert_eq!(code, Some(2));
