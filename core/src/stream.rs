@@ -75,11 +75,22 @@ impl<X: fmt::Display> fmt::Display for Stop<X> {
 /// with [`Error::DuplicateId`] naming it, after the members before it were
 /// handed over, so a caller that writes as it goes must mark its output
 /// incomplete when reading stops.
-pub fn members<R, F, X>(reader: R, each: F) -> Result<Head, Stop<X>>
+pub fn members<R, F, X>(mut reader: R, each: F) -> Result<Head, Stop<X>>
 where
     R: Read,
     F: FnMut(&Head, Member) -> Result<(), X>,
 {
+    // A UTF-8 byte-order mark at the start is dropped.
+    let mut start = Vec::with_capacity(3);
+    if let Err(e) = (&mut reader).take(3).read_to_end(&mut start) {
+        return Err(Stop::Bad(Error::NotMemberFile {
+            reason: format!("it cannot be read: {e}"),
+        }));
+    }
+    if start == [0xEF, 0xBB, 0xBF] {
+        start.clear();
+    }
+    let reader = std::io::Cursor::new(start).chain(reader);
     let mut state = State {
         head: Head::default(),
         format_seen: false,
@@ -88,10 +99,8 @@ where
         stop: None,
         each,
     };
-    let mut de = serde_json::Deserializer::from_reader(std::io::BufReader::with_capacity(
-        1 << 16,
-        SkipBom::new(reader),
-    ));
+    let mut de =
+        serde_json::Deserializer::from_reader(std::io::BufReader::with_capacity(1 << 16, reader));
     let read = FileSeed(&mut state)
         .deserialize(&mut de)
         .and_then(|()| de.end());
@@ -328,48 +337,6 @@ where
             }
         }
         Ok(())
-    }
-}
-
-/// A reader that drops a UTF-8 byte-order mark at the start.
-struct SkipBom<R> {
-    inner: R,
-    start: bool,
-}
-
-impl<R: Read> SkipBom<R> {
-    fn new(inner: R) -> SkipBom<R> {
-        SkipBom { inner, start: true }
-    }
-}
-
-impl<R: Read> Read for SkipBom<R> {
-    fn read(&mut self, buf: &mut [u8]) -> std::io::Result<usize> {
-        if !std::mem::take(&mut self.start) {
-            return self.inner.read(buf);
-        }
-        let mut head = [0u8; 3];
-        let mut got = 0;
-        while got < 3 {
-            let n = self.inner.read(&mut head[got..])?;
-            if n == 0 {
-                break;
-            }
-            got += n;
-        }
-        let keep: &[u8] = if head[..got] == [0xEF, 0xBB, 0xBF] {
-            &[]
-        } else {
-            &head[..got]
-        };
-        if keep.len() > buf.len() {
-            return Err(std::io::Error::other("read buffer too small"));
-        }
-        buf[..keep.len()].copy_from_slice(keep);
-        if keep.is_empty() && got == 3 {
-            return self.inner.read(buf);
-        }
-        Ok(keep.len())
     }
 }
 
