@@ -122,12 +122,15 @@ fn render(m: &Member, form: Form, working: bool) -> Result<(bool, String), Strin
         Working::Skipped
     };
     let r = check_member_as(m, kept).map_err(|e| e.to_string())?;
-    let text = match form {
-        Form::Table => Ok(String::new()),
-        _ if working => serde_json::to_string(&r),
-        _ => serde_json::to_string(&Summary::from(&r)),
+    // Written into room for a typical summary, so the text is not regrown.
+    let mut text = Vec::with_capacity(if working { 8192 } else { 1024 });
+    match form {
+        Form::Table => Ok(()),
+        _ if working => serde_json::to_writer(&mut text, &r),
+        _ => serde_json::to_writer(&mut text, &Summary::from(&r)),
     }
     .map_err(|e| e.to_string())?;
+    let text = String::from_utf8(text).map_err(|e| e.to_string())?;
     Ok((r.passes, text))
 }
 

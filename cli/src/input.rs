@@ -31,7 +31,41 @@ pub fn format_of(path: &str) -> Result<Format, String> {
 /// number of members once the whole file was read and found valid; an
 /// error names the file and the member or the line. `block` may stop the
 /// reading with an error of its own.
+///
+/// The file is read on a thread of its own, a block or two ahead of
+/// `block`, so reading and checking overlap.
 pub fn members(
+    path: &str,
+    mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
+) -> Result<(String, usize), String> {
+    let (tx, rx) = std::sync::mpsc::sync_channel::<(String, Vec<Member>)>(2);
+    std::thread::scope(|s| {
+        let reader = s.spawn(move || {
+            read_blocks(path, |title, b| {
+                tx.send((title.to_string(), b))
+                    .map_err(|_| String::from("stopped"))
+            })
+        });
+        let mut failed = None;
+        for (title, b) in rx.iter() {
+            if let Err(e) = block(&title, b) {
+                failed = Some(e);
+                break;
+            }
+        }
+        drop(rx);
+        let read = reader
+            .join()
+            .unwrap_or_else(|_| Err(format!("{path}: the reader stopped unexpectedly")));
+        match failed {
+            Some(e) => Err(e),
+            None => read,
+        }
+    })
+}
+
+/// [`members`] on the calling thread.
+fn read_blocks(
     path: &str,
     mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {

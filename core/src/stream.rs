@@ -95,7 +95,7 @@ where
         head: Head::default(),
         format_seen: false,
         members_seen: false,
-        ids: HashSet::new(),
+        ids: HashSet::default(),
         stop: None,
         each,
     };
@@ -193,7 +193,7 @@ struct State<F, X> {
     head: Head,
     format_seen: bool,
     members_seen: bool,
-    ids: HashSet<Box<str>>,
+    ids: HashSet<Box<str>, std::hash::BuildHasherDefault<crate::fnv::Fnv>>,
     stop: Option<Stop<X>>,
     each: F,
 }
