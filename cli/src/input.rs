@@ -95,8 +95,136 @@ fn read_blocks(
                 Err(Stop::MembersFirst) => whole(path, block),
             }
         }
-        Format::Csv => whole(path, block),
+        Format::Csv => csv_blocks(path, block),
     }
+}
+
+/// Reads a CSV file a block of rows at a time: the header (with any blank
+/// lines and `sep=` line before it) is read once and put before each block,
+/// which the engine's CSV reader reads as a file of its own; line numbers
+/// are the file's. A tab-separated file, whose decimal mark may be set by a
+/// number far down the file, is read whole.
+fn csv_blocks(
+    path: &str,
+    mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
+) -> Result<(String, usize), String> {
+    use std::io::BufRead;
+    let cannot = |e: std::io::Error| format!("{path}: cannot read: {e}");
+    let mut reader = std::io::BufReader::with_capacity(1 << 16, File::open(path).map_err(cannot)?);
+    // One record: lines up to a line end outside quotes.
+    let mut record = |into: &mut String| -> Result<usize, String> {
+        let mut lines = 0;
+        let mut quotes = 0usize;
+        loop {
+            let start = into.len();
+            let n = reader.read_line(into).map_err(cannot)?;
+            if n == 0 {
+                return Ok(lines);
+            }
+            lines += 1;
+            quotes += into.get(start..).unwrap_or("").matches('"').count();
+            if quotes.is_multiple_of(2) {
+                return Ok(lines);
+            }
+        }
+    };
+    let mut head = String::new();
+    loop {
+        let start = head.len();
+        if record(&mut head)? == 0 {
+            break;
+        }
+        let text = head
+            .get(start..)
+            .unwrap_or("")
+            .trim_start_matches('\u{feff}');
+        let blank = text.trim_matches([' ', '\t', '\r', '\n']).is_empty();
+        let sep_line = text
+            .trim_start_matches(' ')
+            .to_ascii_lowercase()
+            .starts_with("sep=");
+        if !blank && !sep_line {
+            break;
+        }
+    }
+    if !head.ends_with('\n') {
+        head.push('\n');
+    }
+    if csv::separator(&head) == '\t' {
+        return whole(path, block);
+    }
+    let head_lines = head.matches('\n').count();
+    let title = csv::title_from_path(path);
+    let mut ids: std::collections::HashSet<String> = std::collections::HashSet::new();
+    let mut next_line = head_lines + 1;
+    let mut count = 0usize;
+    let mut text = String::with_capacity(head.len() + BLOCK * 128);
+    loop {
+        text.clear();
+        text.push_str(&head);
+        let first_line = next_line;
+        let mut rows = 0;
+        while rows < BLOCK {
+            let n = record(&mut text)?;
+            if n == 0 {
+                break;
+            }
+            next_line += n;
+            rows += 1;
+        }
+        if rows == 0 && count > 0 {
+            break;
+        }
+        let import = csv::parse_csv(&text);
+        // The block's lines as the file's; the header's problems once.
+        let file_line = |l: usize| {
+            if l > head_lines {
+                l - head_lines - 1 + first_line
+            } else {
+                l
+            }
+        };
+        let mut problems: Vec<String> = import
+            .problems
+            .iter()
+            .filter(|p| count == 0 || p.line > head_lines)
+            .map(|p| {
+                let mut p = p.clone();
+                p.line = file_line(p.line);
+                p.to_string()
+            })
+            .collect();
+        for (m, line) in import.members.iter().zip(&import.member_lines) {
+            if !ids.insert(m.id.clone()) {
+                problems.push(format!(
+                    "line {}, column id: id \"{}\" is already used by an earlier row; give each member its own id (expected an id no other row uses)",
+                    file_line(*line),
+                    m.id
+                ));
+            }
+        }
+        if !problems.is_empty() {
+            let mut message = format!(
+                "{path}: {} problem{} in the CSV file (read up to line {}):",
+                problems.len(),
+                if problems.len() == 1 { "" } else { "s" },
+                next_line.saturating_sub(1)
+            );
+            for p in &problems {
+                message.push_str("\n  ");
+                message.push_str(p);
+            }
+            return Err(message);
+        }
+        count += import.members.len();
+        if !import.members.is_empty() {
+            block(&title, import.members)?;
+        }
+        if rows < BLOCK {
+            break;
+        }
+    }
+    Ok((title, count))
 }
 
 /// Reads the whole file at once (a JSON file whose members come before its

@@ -288,3 +288,62 @@ fn malformed_lists_are_named_and_never_look_complete() {
         std::fs::remove_file(path).unwrap();
     }
 }
+
+/// A CSV list of `n` round struts, one a row; `row` may change row `i`.
+fn csv_file(name: &str, n: usize, row: impl Fn(usize) -> String) -> PathBuf {
+    let mut text =
+        String::from("sep=;\nid;note;kind;diameter_mm;fy_mpa;e_mpa;length_mm;axial_kn;method\n");
+    for i in 0..n {
+        text.push_str(&row(i));
+    }
+    let path = std::env::temp_dir().join(format!("strutline-{name}-{}.csv", std::process::id()));
+    std::fs::write(&path, text).unwrap();
+    path
+}
+
+fn strut(i: usize) -> String {
+    format!("R{i};\"strut\nof the lattice\";round;60;355;210000;1800;120,5;perry-robertson\n")
+}
+
+#[test]
+fn long_csv_lists_are_read_in_blocks_with_the_files_line_numbers() {
+    // Each row spans two lines (a quoted line break in the note).
+    let good = csv_file("csvgood", 10_000, strut);
+    let (code, text, err) = run(&["check", good.to_str().unwrap(), "--jsonl"]);
+    assert_eq!(code, Some(0), "{err}");
+    let lines: Vec<&str> = text.lines().collect();
+    assert_eq!(lines.len(), 10_001);
+    assert!(lines[9_999].contains("\"id\":\"R9999\""));
+    // The same member as the JSON member file gives.
+    let one: serde_json::Value = serde_json::from_str(lines[0]).unwrap();
+    assert!(
+        (one["resistance_kn"].as_f64().unwrap() - 353.8).abs() < 0.1,
+        "{one}"
+    );
+    // A bad cell and a repeated id far down: named by the file's line.
+    let bad = csv_file("csvbad", 10_000, |i| {
+        if i == 9_000 {
+            strut(i).replace(";60;", ";sixty;")
+        } else {
+            strut(i)
+        }
+    });
+    let (code, out, err) = run(&["check", bad.to_str().unwrap()]);
+    assert_eq!(code, Some(2));
+    // Row 9,000 starts on line 3 + 2 * 9,000.
+    assert!(err.contains("line 18003, column diameter_mm"), "{err}");
+    assert!(!out.contains("checking aid"));
+    let dup = csv_file("csvdup", 10_000, |i| {
+        if i == 9_500 {
+            strut(3)
+        } else {
+            strut(i)
+        }
+    });
+    let (code, _, err) = run(&["check", dup.to_str().unwrap(), "--json"]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("line 19003, column id: id \"R3\""), "{err}");
+    for p in [good, bad, dup] {
+        std::fs::remove_file(p).unwrap();
+    }
+}

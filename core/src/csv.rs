@@ -53,8 +53,10 @@
 //! line (a first line `sep=;` as some spreadsheets write also sets it). A
 //! UTF-8 byte-order mark, CRLF or LF line ends, quoted fields with doubled
 //! quotes and embedded separators or line breaks, and blank rows (also
-//! rows of empty cells) are accepted. Files over [`crate::file::MAX_BYTES`]
-//! bytes or with more than [`MAX_ROWS`] rows are refused.
+//! rows of empty cells) are accepted. The engine sets no limit on a file's
+//! size or rows; an edge that needs one (the app's import) applies its own
+//! ([`parse_csv_within`]), and the command line reads long files a block of
+//! rows at a time ([`separator`] tells how to cut them).
 //!
 //! Reading never stops at the first problem: every row and every field is
 //! checked, and each problem names the line, the column and what was
@@ -74,13 +76,10 @@ use std::fmt;
 use serde::Serialize;
 use serde_json::{Map, Value};
 
-use crate::file::{self, MemberFile, MAX_BYTES};
+use crate::file::{self, MemberFile};
 use crate::member::Member;
 use crate::method::Method;
 use crate::units::{self, Quantity, UnitSystem, UsUnit};
-
-/// The largest number of member rows accepted.
-pub const MAX_ROWS: usize = 10_000;
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]
@@ -692,7 +691,7 @@ fn tokenize(
             if !record.is_blank() {
                 non_blank += 1;
                 if non_blank > limit {
-                    problems.push(too_many_rows());
+                    problems.push(too_many_rows(limit - 1));
                     return (records, problems);
                 }
                 records.push(record);
@@ -728,7 +727,7 @@ fn tokenize(
     if !record.is_blank() {
         non_blank += 1;
         if non_blank > limit {
-            problems.push(too_many_rows());
+            problems.push(too_many_rows(limit - 1));
             return (records, problems);
         }
         records.push(record);
@@ -736,12 +735,12 @@ fn tokenize(
     (records, problems)
 }
 
-fn too_many_rows() -> RowProblem {
+fn too_many_rows(max_rows: usize) -> RowProblem {
     problem(
         0,
         "",
-        format!("at most {MAX_ROWS} member rows"),
-        format!("the file has more than {MAX_ROWS} rows; split it into smaller files"),
+        format!("at most {max_rows} member rows"),
+        format!("the file has more than {max_rows} rows; split it into smaller files"),
     )
 }
 
@@ -1253,22 +1252,16 @@ fn missing_field(message: &str) -> Option<String> {
 
 /// Reads a CSV member file. See the module documentation for the rules.
 pub fn parse_csv(text: &str) -> CsvImport {
+    parse_csv_within(text, usize::MAX)
+}
+
+/// [`parse_csv`], refusing a file of more than `max_rows` member rows with
+/// one problem that says so (a limit an edge may set as its policy).
+pub fn parse_csv_within(text: &str, max_rows: usize) -> CsvImport {
     let mut out = CsvImport::default();
-    if text.len() > MAX_BYTES {
-        out.problems.push(problem(
-            0,
-            "",
-            format!("a file of at most {MAX_BYTES} bytes"),
-            format!(
-                "the file is {} bytes; the largest accepted is {MAX_BYTES} bytes (5 MiB); split it",
-                text.len()
-            ),
-        ));
-        return out;
-    }
     let text = text.strip_prefix('\u{feff}').unwrap_or(text);
     let (sep, body, skipped) = detect_separator(text);
-    let (records, problems) = tokenize(body, sep, 1 + skipped, MAX_ROWS + 1);
+    let (records, problems) = tokenize(body, sep, 1 + skipped, max_rows.saturating_add(1));
     if problems.iter().any(|p| p.line == 0) {
         out.problems = problems;
         return out;
@@ -1544,6 +1537,13 @@ pub fn detect_format(path_text: &str, contents: &str) -> Format {
             }
         }
     }
+}
+
+/// The separator a CSV text uses (`,`, `;` or tab), by the rules of the
+/// module documentation; with `,` or `;` the decimal mark follows from it,
+/// so blocks of rows can be read apart under the same header.
+pub fn separator(text: &str) -> char {
+    detect_separator(text.strip_prefix('\u{feff}').unwrap_or(text)).0
 }
 
 /// The file name without folders and extension, for the title of a CSV file.
@@ -1855,17 +1855,14 @@ mod tests {
     }
 
     #[test]
-    fn refuses_oversized_and_headless_files() {
-        let big = "x".repeat(MAX_BYTES + 1);
-        let got = parse_csv(&big);
-        assert!(got.members.is_empty());
-        assert!(got.problems[0].message.contains("bytes"));
+    fn refuses_rows_over_a_given_limit_and_headless_files() {
         let mut many = String::from("id,kind,diameter_mm,grade,length_mm,axial_kn,method\n");
-        for i in 0..=MAX_ROWS {
+        for i in 0..=10_000 {
             many.push_str(&format!("{i},round,1,S,1,1,euler\n"));
         }
-        assert!(many.len() < MAX_BYTES);
-        let got = parse_csv(&many);
+        // No limit of its own: every row read.
+        assert_eq!(parse_csv(&many).rows, 10_001);
+        let got = parse_csv_within(&many, 10_000);
         assert!(got.members.is_empty());
         assert!(
             got.problems[0].message.contains("more than 10000 rows"),

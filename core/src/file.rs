@@ -21,9 +21,6 @@ pub const FORMAT: &str = "strutline.members";
 /// E5); a version-1 file reads as it was written.
 pub const VERSION: u64 = 2;
 
-/// The largest member-file text accepted, bytes (5 MiB).
-pub const MAX_BYTES: usize = 5 * 1024 * 1024;
-
 /// A list of members with a title.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct MemberFile {
@@ -136,15 +133,6 @@ pub fn parse(text: &str) -> Result<MemberFile> {
 /// [`parse`]; `name_range` lets a number out of range be looked for once
 /// (see [`out_of_range`]), not again in the text read a second time.
 fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
-    if text.len() > MAX_BYTES {
-        return Err(Error::NotMemberFile {
-            reason: format!(
-                "it is {} bytes; the largest file accepted is {} bytes",
-                text.len(),
-                MAX_BYTES
-            ),
-        });
-    }
     let text = text.trim_start_matches('\u{feff}');
     let mut value: Value = match serde_json::from_str(text) {
         Ok(v) => v,
