@@ -16,6 +16,7 @@ use std::io::Write;
 
 use rayon::prelude::*;
 use serde::Serialize;
+use strutline_core::bending::Bending;
 use strutline_core::check::{check_member_as, CheckResult, ModeResult, Warning, Working};
 use strutline_core::method::Method;
 use strutline_core::{Member, Mode, CAUTION};
@@ -50,10 +51,15 @@ pub struct Summary<'a> {
     pub utilisation: f64,
     /// Design resistance of the governing mode, kN.
     pub resistance_kn: f64,
+    /// What governs: the governing mode's key, a bending check, or
+    /// "combined-not-checked" (see `CheckResult::governing_check`).
+    pub governing_check: &'static str,
     /// The governing mode.
     pub governing: Mode,
     /// Every mode checked.
     pub modes: &'a [ModeResult],
+    /// The bending side, `null` without moments.
+    pub bending: &'a Option<Bending>,
     /// The result's warnings.
     pub warnings: &'a [Warning],
 }
@@ -66,8 +72,10 @@ impl<'a> From<&'a CheckResult> for Summary<'a> {
             passes: r.passes,
             utilisation: r.utilisation,
             resistance_kn: r.resistance_kn,
+            governing_check: r.governing_check,
             governing: r.governing,
             modes: &r.modes,
+            bending: &r.bending,
             warnings: &r.warnings,
         }
     }
@@ -252,7 +260,7 @@ fn cells(m: &Member, r: &CheckResult) -> [String; 8] {
         format!("{:.1}", m.axial_kn),
         format!("{:.1}", r.resistance_kn),
         format!("{:.3}", r.utilisation),
-        r.governing.key().to_string(),
+        r.governing_check.to_string(),
         if r.passes { "ok".into() } else { "OVER".into() },
     ]
 }

@@ -150,6 +150,18 @@ mod tests {
             load_duration: None,
             csa_n: None,
             angle_connection: None,
+            m_major_a_knm: 0.0,
+            m_major_b_knm: 0.0,
+            m_major_span_knm: 0.0,
+            span_load_major: Default::default(),
+            m_minor_a_knm: 0.0,
+            m_minor_b_knm: 0.0,
+            m_minor_span_knm: 0.0,
+            span_load_minor: Default::default(),
+            k_lt: 1.0,
+            lcr_lt_mm: None,
+            lt_restrained: false,
+            load_level: Default::default(),
         }
     }
 

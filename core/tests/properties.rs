@@ -47,6 +47,18 @@ fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member 
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     }
 }
 
@@ -171,6 +183,10 @@ fn steel_section() -> impl Strategy<Value = SectionSpec> {
                 i_minor_mm4: i * ratio,
                 torsion_mm4: None,
                 warping_mm6: None,
+                w_el_major_mm3: None,
+                w_el_minor_mm3: None,
+                w_pl_major_mm3: None,
+                w_pl_minor_mm3: None,
             })
         }),
     ]
@@ -306,8 +322,14 @@ fn finite_result(m: &Member) {
 /// working: what must not change when the working is skipped.
 fn bits(r: &CheckResult) -> Vec<String> {
     let mut out = vec![
-        format!("{} {:?} {} {:?}", r.id, r.method, r.passes, r.governing),
+        format!(
+            "{} {:?} {} {:?} {}",
+            r.id, r.method, r.passes, r.governing, r.governing_check
+        ),
         format!("{:?}", r.warnings),
+        // Debug writes each number in its shortest form that reads back
+        // to the same bits.
+        format!("{:?}", r.bending),
     ];
     let s = &r.section;
     let mut nums = vec![

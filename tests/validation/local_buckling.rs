@@ -429,6 +429,18 @@ fn member(section: SectionSpec, method: Method, length: f64) -> Member {
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     }
 }
 
@@ -577,6 +589,10 @@ fn limit_states_a_method_does_not_cover_are_warned() {
         i_minor_mm4: 2e7,
         torsion_mm4: None,
         warping_mm6: None,
+        w_el_major_mm3: None,
+        w_el_minor_mm3: None,
+        w_pl_major_mm3: None,
+        w_pl_minor_mm3: None,
     });
     let r = check_member(&member(given, Method::En1993, 3000.0)).unwrap();
     assert!(r

@@ -124,6 +124,10 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
             i_minor_mm4: i,
             torsion_mm4: Some(it),
             warping_mm6: Some(0.0),
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         }),
         material: MaterialSpec::Custom {
             fy_mpa: 355.0,
@@ -148,6 +152,18 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     };
     let r = check_member(&member).unwrap();
     let tor = r
@@ -403,6 +419,18 @@ fn strut(section: SectionSpec, material: MaterialSpec, method: Method, length: f
         load_duration: None,
         csa_n: None,
         angle_connection: None,
+        m_major_a_knm: 0.0,
+        m_major_b_knm: 0.0,
+        m_major_span_knm: 0.0,
+        span_load_major: Default::default(),
+        m_minor_a_knm: 0.0,
+        m_minor_b_knm: 0.0,
+        m_minor_span_knm: 0.0,
+        span_load_minor: Default::default(),
+        k_lt: 1.0,
+        lcr_lt_mm: None,
+        lt_restrained: false,
+        load_level: Default::default(),
     }
 }
 

@@ -358,6 +358,10 @@ mod tests {
             i_minor_mm4: 5e5,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         });
         let (_, s) = view(given, 235.0);
         assert!(s.starts_with("<p") && s.contains("given by its properties"));

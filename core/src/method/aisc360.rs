@@ -29,11 +29,11 @@
 //! taken on the final value, the 1.7 limits, and the 0.71 sqrt(E/F_y)
 //! exemption; the validation file works each branch by hand.
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::{Error, Result};
 use crate::member::{AngleConnection, Leg, Truss};
 use crate::method::euler::{basics, push_geometry, push_material, require_steel, warn_once};
 use crate::method::{Input, Method};
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::SectionSpec;
 use crate::trace::{held, push, step, sym, Scope, Trace};
 

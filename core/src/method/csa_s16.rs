@@ -7,13 +7,13 @@
 //! H); `csa_n` overrides. A caution is raised when K L / r exceeds 200,
 //! the limit of 10.4.2.1 for compression members.
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::member::CSA_N_DEFAULT;
 use crate::method::euler::{
     basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
 };
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::trace::{step, sym, Scope, Sym, Trace};
 
 const KEY: &str = "csa-s16";

@@ -17,7 +17,6 @@
 //! (it is conservative: where the ratio applies, N_b,Rd from the curve is
 //! well above N_Ed anyway).
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::material::Steel;
 use crate::member::Curve;
@@ -25,6 +24,7 @@ use crate::method::euler::{
     basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
 };
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, IMake, SectionSpec};
 use crate::trace::{step, sym, Scope, Sym, Trace};
 

@@ -12,12 +12,12 @@
 
 use std::f64::consts::PI;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::{Error, Result};
 use crate::material::TimberKind;
 use crate::member::LoadDuration;
 use crate::method::euler::{basics, push_geometry, push_material, require_timber};
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::Family;
 use crate::trace::{step, sym, Scope, Sym, Trace};
 

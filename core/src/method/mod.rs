@@ -9,14 +9,15 @@
 
 use serde::{Deserialize, Serialize};
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::material::Material;
 use crate::member::Member;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::Section;
 use crate::trace::Trace;
 
 pub mod aisc360;
+pub mod common;
 pub mod csa_s16;
 pub mod en1993;
 pub mod en1995;

@@ -11,10 +11,10 @@
 
 use std::f64::consts::FRAC_PI_2;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::trace::{step, sym, Trace};
 
 /// The mean stress at first yield, MPa, for strength `f`, modulus `e`,

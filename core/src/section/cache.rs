@@ -103,6 +103,15 @@ fn key(spec: &SectionSpec) -> Option<Key> {
         ],
         SectionSpec::Rect(s) => [7, s.depth_mm.to_bits(), s.width_mm.to_bits(), 0, 0, 0, 0, 0],
         SectionSpec::Round(s) => [8, s.diameter_mm.to_bits(), 0, 0, 0, 0, 0, 0],
+        // Typed moduli do not fit the key; a given section is cheap to build.
+        SectionSpec::Given(s)
+            if s.w_el_major_mm3.is_some()
+                || s.w_el_minor_mm3.is_some()
+                || s.w_pl_major_mm3.is_some()
+                || s.w_pl_minor_mm3.is_some() =>
+        {
+            return None
+        }
         SectionSpec::Given(s) => [
             9,
             s.area_mm2.to_bits(),

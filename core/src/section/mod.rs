@@ -164,6 +164,18 @@ pub struct Given {
     /// Warping constant (optional).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub warping_mm6: Option<f64>,
+    /// Elastic modulus about the major axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_el_major_mm3: Option<f64>,
+    /// Elastic modulus about the minor axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_el_minor_mm3: Option<f64>,
+    /// Plastic modulus about the major axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_pl_major_mm3: Option<f64>,
+    /// Plastic modulus about the minor axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_pl_minor_mm3: Option<f64>,
 }
 
 /// A section as written in the member file, selected by `"kind"`. The
@@ -297,6 +309,13 @@ pub struct Section {
     pub props: Properties,
     /// The catalogue designation when it came from the catalogue.
     pub designation: Option<&'static str>,
+}
+
+impl Section {
+    /// Whether the section is a channel.
+    pub fn spec_is_channel(&self) -> bool {
+        matches!(self.spec, SectionSpec::Channel(_))
+    }
 }
 
 impl SectionSpec {

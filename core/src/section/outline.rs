@@ -233,6 +233,10 @@ mod tests {
             i_minor_mm4: 1.0,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         });
         assert!(outline(&given).is_empty());
     }

@@ -15,11 +15,11 @@
 
 use std::f64::consts::PI;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::material::Material;
 use crate::member::BucklingLengths;
 use crate::method::{self, Input, Method};
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{put, step, sym, symbol, Scope, Sym, Trace};
 
