@@ -281,6 +281,10 @@ where
                         state.stop = Some(Stop::MembersFirst);
                         return Err(de::Error::custom("stopped"));
                     }
+                    if state.members_seen {
+                        let reason = "it has two \"members\" lists".to_string();
+                        return Err(state.bad(Error::NotMemberFile { reason }));
+                    }
                     state.members_seen = true;
                     map.next_value_seed(MembersSeed(&mut *state))?;
                 }
