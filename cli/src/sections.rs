@@ -84,7 +84,7 @@ pub fn select(series: Option<&str>, family_name: Option<&str>) -> Result<Selecti
     let entries: Vec<&'static Entry> = match fam {
         Some(f) => entries
             .into_iter()
-            .filter(|e| e.spec.family() == f)
+            .filter(|e| e.spec.family() == Some(f))
             .collect(),
         None => entries,
     };
@@ -121,7 +121,7 @@ fn entry_json(e: &Entry) -> Value {
     let mut v = json!({
         "designation": e.designation,
         "series": e.series,
-        "family": family_key(e.spec.family()),
+        "family": e.spec.family().map(family_key),
         "tabulated": {
             "area_mm2": e.area_mm2,
             "i_major_mm4": e.i_major_mm4,
@@ -251,7 +251,10 @@ mod tests {
         assert_eq!(select(Some("heb"), None).unwrap().entries.len(), 24);
         assert_eq!(select(Some("HE B"), None).unwrap().label, "HE B");
         let chs = select(None, Some("CHS")).unwrap();
-        assert!(chs.entries.iter().all(|e| e.spec.family() == Family::Chs));
+        assert!(chs
+            .entries
+            .iter()
+            .all(|e| e.spec.family() == Some(Family::Chs)));
         assert_eq!(chs.entries.len(), 11 + 68 + 68);
         let all = select(None, None).unwrap();
         assert_eq!(all.entries.len(), catalogue::entries().len());

@@ -16,6 +16,31 @@ use crate::section::{Family, Properties, Section};
 use crate::stability;
 use crate::trace::Trace;
 
+impl CheckResult {
+    /// Whether the member meets the limits its code sets apart from the
+    /// load: CSA S16-19 10.4.2.1 (the slenderness ratio of a compression
+    /// member shall not exceed 200). [`CheckResult::passes`] includes it.
+    pub fn within_limits(&self) -> bool {
+        !(self.method == Method::CsaS16 && method::csa_s16::over_slenderness_limit(&self.modes))
+    }
+
+    /// Why the member fails a limit of its code whatever its load (the
+    /// result's own warning), when it does.
+    pub fn limit_exceeded(&self) -> Option<&str> {
+        if self.within_limits() {
+            return None;
+        }
+        Some(
+            self.warnings
+                .iter()
+                .find(|w| w.code == "slenderness-over-200")
+                .map_or("a slenderness limit of the code is exceeded", |w| {
+                    w.message.as_str()
+                }),
+        )
+    }
+}
+
 /// The properties a result reports.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
 pub struct SectionSummary {
@@ -93,9 +118,9 @@ pub struct CheckResult {
 ///
 /// The numbers are the same either way (a property test compares every
 /// result with and without working, bit for bit); without it a check
-/// allocates nothing for the working and is several times faster, for the
-/// checks nobody reads the working of: a batch's summaries, sizing
-/// candidates, envelope samples, reverse solves, a list's recheck.
+/// allocates nothing for the working and skips the text look-ups of the
+/// working, for the checks nobody reads the working of: a batch's
+/// summaries, sizing candidates, envelope samples, reverse solves.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Default)]
 pub enum Working {
     /// Every step, with its clause (what a result shown to a person needs).
@@ -112,6 +137,20 @@ impl Working {
             Working::Kept => Trace::with_capacity(96),
             Working::Skipped => Trace::off(),
         }
+    }
+}
+
+impl CheckResult {
+    /// The classification and effective widths this result used, for
+    /// drawing them (see [`stability::effective::of_check`]).
+    pub fn effective(
+        &self,
+        input: &Input<'_>,
+    ) -> Option<(
+        stability::classify::Classified,
+        stability::effective::Effective,
+    )> {
+        stability::effective::of_check(input, self.method, &self.modes, self.governing)
     }
 }
 
@@ -326,10 +365,10 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         }
     };
     let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
-    Ok(CheckResult {
+    let mut r = CheckResult {
         id: m.id.clone(),
         method,
-        passes,
+        passes: false,
         utilisation,
         governing_check,
         resistance_kn,
@@ -342,7 +381,9 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         bending,
         warnings,
         trace,
-    })
+    };
+    r.passes = passes && r.within_limits();
+    Ok(r)
 }
 
 /// Validates a member's options and resolves its section and material (its
@@ -351,7 +392,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
 pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let section = member.section.build().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     Ok((section, material))
 }
@@ -367,7 +408,7 @@ pub fn check_member_as(member: &Member, working: Working) -> Result<CheckResult>
     // stays, not moved through a returned pair (a few hundred bytes a check).
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let section = member.section.build().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
     let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
     let input = Input {
         member,

@@ -124,45 +124,17 @@ mod tests {
     use crate::section::{Rect, SectionSpec};
 
     fn member(material: MaterialSpec, method: Method) -> Member {
-        Member {
-            id: "K7".into(),
-            note: None,
-            section: SectionSpec::Rect(Rect {
+        Member::new(
+            "K7",
+            SectionSpec::Rect(Rect {
                 depth_mm: 140.0,
                 width_mm: 90.0,
             }),
             material,
-            length_mm: 2700.0,
-            k_major: 1.0,
-            k_minor: 1.0,
-            k_torsion: 1.0,
-            lcr_major_mm: None,
-            lcr_minor_mm: None,
-            lcr_torsion_mm: None,
-            axial_kn: 40.0,
+            2700.0,
+            40.0,
             method,
-            gamma_m1: None,
-            curve_major: None,
-            curve_minor: None,
-            bow_mm: None,
-            eccentricity_mm: None,
-            service_class: None,
-            load_duration: None,
-            csa_n: None,
-            angle_connection: None,
-            m_major_a_knm: 0.0,
-            m_major_b_knm: 0.0,
-            m_major_span_knm: 0.0,
-            span_load_major: Default::default(),
-            m_minor_a_knm: 0.0,
-            m_minor_b_knm: 0.0,
-            m_minor_span_knm: 0.0,
-            span_load_minor: Default::default(),
-            k_lt: 1.0,
-            lcr_lt_mm: None,
-            lt_restrained: false,
-            load_level: Default::default(),
-        }
+        )
     }
 
     fn steel() -> MaterialSpec {

@@ -17,6 +17,7 @@
 use serde::{Deserialize, Serialize};
 
 use crate::error::{positive, Error, Result};
+use crate::names;
 use crate::section::{Family, HollowMake, Section, SectionSpec};
 
 /// Solid (sawn) timber or glued laminated timber: sets beta_c and gamma_M.
@@ -29,10 +30,8 @@ pub enum TimberKind {
     Glulam,
 }
 
-/// A material as written in the member file. The browser build reads it
-/// through [`crate::wire::material`] (smaller code, same rules).
-#[derive(Debug, Clone, PartialEq, Serialize)]
-#[cfg_attr(not(target_arch = "wasm32"), derive(Deserialize))]
+/// A material as written in the member file.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(untagged)]
 pub enum MaterialSpec {
     /// A named grade or strength class ("S355", "A992", "C24", "GL28h").
@@ -61,13 +60,6 @@ pub enum MaterialSpec {
         #[serde(default, skip_serializing_if = "Option::is_none")]
         g_mpa: Option<f64>,
     },
-}
-
-#[cfg(target_arch = "wasm32")]
-impl<'de> Deserialize<'de> for MaterialSpec {
-    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> std::result::Result<Self, D::Error> {
-        crate::wire::material(serde_json::Value::deserialize(d)?).map_err(serde::de::Error::custom)
-    }
 }
 
 /// A resolved steel (or custom elastic-plastic) material.
@@ -132,9 +124,10 @@ impl Material {
     }
 }
 
-/// 1 ksi in MPa (exact to the digits given: 1 ksi = 1000 lbf/in2 =
-/// 6.894757 MPa, NIST SP 811 Appendix B).
-pub const KSI: f64 = 6.894757;
+/// 1 ksi in MPa: [`crate::units::MPA_PER_KSI`], worked from the exact
+/// definitions of the inch and the pound-force (NIST SP 811 Appendix B
+/// gives 6.894757 MPa to seven digits).
+pub const KSI: f64 = crate::units::MPA_PER_KSI;
 
 /// E for EN grades, MPa (EN 1993-1-1:2005 3.2.6(1)).
 pub const E_EN: f64 = 210_000.0;
@@ -219,14 +212,6 @@ enum Found {
         &'static SteelGrade,
     ),
     Timber(&'static TimberClass),
-}
-
-/// Upper case, letters and digits only.
-fn normalise(name: &str) -> String {
-    name.chars()
-        .filter(|c| c.is_ascii_alphanumeric())
-        .map(|c| c.to_ascii_uppercase())
-        .collect()
 }
 
 /// A grade name normalised on the stack (upper case, letters and digits
@@ -332,42 +317,20 @@ fn find(name: &str) -> Option<Found> {
     Some(found)
 }
 
-/// Edit distance between two short strings (Levenshtein), for suggestions.
-fn edit_distance(a: &str, b: &str) -> usize {
-    let b: Vec<char> = b.chars().collect();
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur: Vec<usize> = vec![0; b.len() + 1];
-    for (i, ca) in a.chars().enumerate() {
-        if let Some(first) = cur.first_mut() {
-            *first = i + 1;
-        }
-        for (j, cb) in b.iter().enumerate() {
-            let sub = prev.get(j).copied().unwrap_or(usize::MAX - 1) + usize::from(ca != *cb);
-            let del = prev.get(j + 1).copied().unwrap_or(usize::MAX - 1) + 1;
-            let ins = cur.get(j).copied().unwrap_or(usize::MAX - 1) + 1;
-            if let Some(slot) = cur.get_mut(j + 1) {
-                *slot = sub.min(del).min(ins);
-            }
-        }
-        std::mem::swap(&mut prev, &mut cur);
-    }
-    prev.last().copied().unwrap_or(0)
-}
-
 /// Known grade names nearest to `grade`, nearest first (at most four).
 pub fn suggestions(grade: &str) -> Vec<String> {
-    let n = normalise(grade);
+    let n = names::alnum_upper(grade);
     let mut scored: Vec<(usize, &str)> = KNOWN_GRADES
         .iter()
         .map(|k| {
-            let kn = normalise(k);
-            let d = edit_distance(&n, &kn);
+            let kn = names::alnum_upper(k);
+            let d = names::edit_distance(n.as_bytes(), kn.as_bytes());
             // A shared prefix of two or more characters counts as close.
             let prefix =
                 !n.is_empty() && n.len() >= 2 && (kn.starts_with(&n) || n.starts_with(&kn));
             (if prefix { d.min(1) } else { d }, *k)
         })
-        .filter(|(d, k)| *d <= 2.max(normalise(k).len() / 2))
+        .filter(|(d, k)| *d <= 2.max(names::alnum_upper(k).len() / 2))
         .collect();
     scored.sort_by_key(|(d, _)| *d);
     scored
@@ -418,16 +381,19 @@ fn hollow_make(section: &Section) -> Option<HollowMake> {
 pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
     match spec {
         MaterialSpec::Grade { grade } => {
-            let t = section.spec.governing_thickness_mm();
+            let t = section.governing_thickness_mm();
             match find(grade) {
                 Some(Found::Steel(g)) => Ok(Material::Steel(steel_at(g, t)?)),
-                Some(Found::Hollow(hot, cold)) => {
-                    let g = match hollow_make(section) {
-                        Some(HollowMake::ColdFormed) => cold,
-                        _ => hot,
-                    };
-                    Ok(Material::Steel(steel_at(g, t)?))
-                }
+                Some(Found::Hollow(hot, cold)) => match hollow_make(section) {
+                    Some(HollowMake::ColdFormed) => Ok(Material::Steel(steel_at(cold, t)?)),
+                    // Make not given: cold-formed (the lower resistance, see
+                    // `section::HollowMake`), whose EN 10219-1 table stops at a
+                    // 40 mm wall; a thicker wall can only be hot-finished.
+                    Some(HollowMake::Unstated) => Ok(Material::Steel(
+                        steel_at(cold, t).or_else(|_| steel_at(hot, t))?,
+                    )),
+                    _ => Ok(Material::Steel(steel_at(hot, t)?)),
+                },
                 Some(Found::A500(round, shaped, unknown)) => {
                     let g = match section.family {
                         Family::Chs => round,
@@ -466,7 +432,7 @@ pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
                     Some(g) => positive("g_mpa", *g)?,
                     None => e / 2.6,
                 },
-                thickness_mm: section.spec.governing_thickness_mm().max(0.0),
+                thickness_mm: section.governing_thickness_mm().max(0.0),
                 band_up_to_mm: f64::INFINITY,
             }))
         }

@@ -5,8 +5,7 @@ use serde::{Deserialize, Serialize};
 
 use crate::error::{non_negative, positive, Error, Result};
 use crate::material::MaterialSpec;
-use crate::method::Method;
-use crate::section::SectionSpec;
+use crate::section::{Section, SectionSpec};
 
 /// EN 1993-1-1 buckling curves (Table 6.1).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
@@ -379,6 +378,62 @@ pub struct BucklingLengths {
 }
 
 impl Member {
+    /// A member with the keys every member needs and every option at its
+    /// member-file default (effective-length factors 1, no buckling
+    /// lengths, factors, curves, moments or other options given), as a
+    /// member file that gives only those keys reads (checked by a test). Set options on the result.
+    pub fn new(
+        id: impl Into<String>,
+        section: SectionSpec,
+        material: MaterialSpec,
+        length_mm: f64,
+        axial_kn: f64,
+        method: Method,
+    ) -> Member {
+        Member {
+            id: id.into(),
+            note: None,
+            section,
+            material,
+            length_mm,
+            k_major: 1.0,
+            k_minor: 1.0,
+            k_torsion: 1.0,
+            lcr_major_mm: None,
+            lcr_minor_mm: None,
+            lcr_torsion_mm: None,
+            axial_kn,
+            method,
+            gamma_m1: None,
+            curve_major: None,
+            curve_minor: None,
+            bow_mm: None,
+            eccentricity_mm: None,
+            service_class: None,
+            load_duration: None,
+            csa_n: None,
+            angle_connection: None,
+            m_major_a_knm: 0.0,
+            m_major_b_knm: 0.0,
+            m_major_span_knm: 0.0,
+            span_load_major: SpanLoad::default(),
+            m_minor_a_knm: 0.0,
+            m_minor_b_knm: 0.0,
+            m_minor_span_knm: 0.0,
+            span_load_minor: SpanLoad::default(),
+            k_lt: 1.0,
+            lcr_lt_mm: None,
+            lt_restrained: false,
+            load_level: LoadLevel::default(),
+        }
+    }
+
+    /// The member's section, built: a catalogue designation is resolved
+    /// here, once, and an unknown one is [`Error::UnknownDesignation`].
+    pub fn build_section(&self) -> Result<Section> {
+        crate::catalogue::build(&self.section)
+    }
+
     /// Checks every scalar field of the member (not the section or material,
     /// which check themselves) and returns its buckling lengths.
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
@@ -480,11 +535,15 @@ impl Member {
             });
         }
         if let Some(g) = self.gamma_m1 {
-            if !(g.is_finite() && (0.5..=3.0).contains(&g)) {
+            // No code here has a material (partial) factor below 1.0
+            // (EN 1993-1-1 6.1(1) Note 2B recommends 1.00); below it the
+            // resistance would exceed the squash load.
+            if !(g.is_finite() && (1.0..=3.0).contains(&g)) {
                 return Err(Error::OutOfRange {
                     field: "gamma_m1",
                     value: g,
-                    expected: "a partial factor between 0.5 and 3.0",
+                    expected:
+                        "a partial factor from 1.0 to 3.0 (none of the codes has one below 1.0)",
                 });
             }
         }
@@ -519,6 +578,87 @@ impl Member {
             });
         }
         Ok(())
+    }
+}
+
+/// The design method of a member, as named in the member file.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
+pub enum Method {
+    /// EN 1993-1-1 6.3.1 flexural buckling.
+    #[serde(rename = "en1993-1-1")]
+    En1993,
+    /// AISC 360-16 chapter E, LRFD (phi_c = 0.90).
+    #[serde(rename = "aisc360-lrfd")]
+    AiscLrfd,
+    /// AISC 360-16 chapter E, ASD (Omega_c = 1.67).
+    #[serde(rename = "aisc360-asd")]
+    AiscAsd,
+    /// CSA S16-19 13.3.
+    #[serde(rename = "csa-s16")]
+    CsaS16,
+    /// EN 1995-1-1 6.3.2 timber columns.
+    #[serde(rename = "en1995-1-1")]
+    En1995,
+    /// Perry-Robertson with an explicit initial bow.
+    #[serde(rename = "perry-robertson")]
+    PerryRobertson,
+    /// Secant formula for an eccentric load, first yield.
+    #[serde(rename = "secant")]
+    Secant,
+    /// Euler's elastic critical load capped by the squash load.
+    #[serde(rename = "euler")]
+    Euler,
+}
+
+impl Method {
+    /// Every method, in the order the app lists them.
+    pub const ALL: [Method; 8] = [
+        Method::En1993,
+        Method::AiscLrfd,
+        Method::AiscAsd,
+        Method::CsaS16,
+        Method::En1995,
+        Method::PerryRobertson,
+        Method::Secant,
+        Method::Euler,
+    ];
+
+    /// The name used in the member file.
+    pub fn key(self) -> &'static str {
+        match self {
+            Method::En1993 => "en1993-1-1",
+            Method::AiscLrfd => "aisc360-lrfd",
+            Method::AiscAsd => "aisc360-asd",
+            Method::CsaS16 => "csa-s16",
+            Method::En1995 => "en1995-1-1",
+            Method::PerryRobertson => "perry-robertson",
+            Method::Secant => "secant",
+            Method::Euler => "euler",
+        }
+    }
+
+    /// A readable title.
+    pub fn title(self) -> &'static str {
+        match self {
+            Method::En1993 => "EN 1993-1-1 flexural buckling",
+            Method::AiscLrfd => "AISC 360-16 E3, LRFD",
+            Method::AiscAsd => "AISC 360-16 E3, ASD",
+            Method::CsaS16 => "CSA S16-19 13.3",
+            Method::En1995 => "EN 1995-1-1 timber column",
+            Method::PerryRobertson => "Perry-Robertson, initial bow",
+            Method::Secant => "Secant formula, eccentric load",
+            Method::Euler => "Euler, capped at squash load",
+        }
+    }
+
+    /// Parses the member-file name.
+    pub fn from_key(key: &str) -> Option<Method> {
+        Method::ALL.into_iter().find(|m| m.key() == key)
+    }
+
+    /// Whether the method is for timber (true) or for steel and custom elastic materials (false).
+    pub fn is_timber(self) -> bool {
+        matches!(self, Method::En1995)
     }
 }
 
@@ -561,6 +701,27 @@ mod tests {
         };
         assert!((e.max_abs_knm() - 45.0).abs() < 1e-12);
         assert!(Moments::default().is_zero());
+    }
+
+    #[test]
+    fn new_is_what_a_file_with_only_the_needed_keys_reads() {
+        let text = r#"{"id": "N1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
+            "material": {"grade": "S355"}, "length_mm": 2000, "axial_kn": 10, "method": "euler"}"#;
+        let read: Member = serde_json::from_str(text).unwrap();
+        let made = Member::new(
+            "N1",
+            SectionSpec::Rect(crate::section::Rect {
+                depth_mm: 100.0,
+                width_mm: 50.0,
+            }),
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
+            2000.0,
+            10.0,
+            Method::Euler,
+        );
+        assert_eq!(read, made);
     }
 
     #[test]

@@ -193,7 +193,7 @@ struct State<F, X> {
     head: Head,
     format_seen: bool,
     members_seen: bool,
-    ids: HashSet<Box<str>, std::hash::BuildHasherDefault<crate::fnv::Fnv>>,
+    ids: HashSet<Box<str>>,
     stop: Option<Stop<X>>,
     each: F,
 }

@@ -24,42 +24,7 @@ use strutline_core::section::{
 use strutline_core::Error;
 
 fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member {
-    Member {
-        id: "P".into(),
-        note: None,
-        section,
-        material,
-        length_mm: 3000.0,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 100.0,
-        method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-        m_major_a_knm: 0.0,
-        m_major_b_knm: 0.0,
-        m_major_span_knm: 0.0,
-        span_load_major: Default::default(),
-        m_minor_a_knm: 0.0,
-        m_minor_b_knm: 0.0,
-        m_minor_span_knm: 0.0,
-        span_load_minor: Default::default(),
-        k_lt: 1.0,
-        lcr_lt_mm: None,
-        lt_restrained: false,
-        load_level: Default::default(),
-    }
+    Member::new("P", section, material, 3000.0, 100.0, method)
 }
 
 /// Any f64 at all, including NaN, infinities, zero and negatives.

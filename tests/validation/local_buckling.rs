@@ -402,46 +402,18 @@ fn class_1_to_3_sections_keep_their_gross_area_and_class_4_never_gains() {
 }
 
 fn member(section: SectionSpec, method: Method, length: f64) -> Member {
-    Member {
-        id: "T1".into(),
-        note: None,
+    Member::new(
+        "T1",
         section,
-        material: MaterialSpec::Custom {
+        MaterialSpec::Custom {
             fy_mpa: 355.0,
             e_mpa: 210_000.0,
             g_mpa: Some(81_000.0),
         },
-        length_mm: length,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 10.0,
+        length,
+        10.0,
         method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-        m_major_a_knm: 0.0,
-        m_major_b_knm: 0.0,
-        m_major_span_knm: 0.0,
-        span_load_major: Default::default(),
-        m_minor_a_knm: 0.0,
-        m_minor_b_knm: 0.0,
-        m_minor_span_knm: 0.0,
-        span_load_minor: Default::default(),
-        k_lt: 1.0,
-        lcr_lt_mm: None,
-        lt_restrained: false,
-        load_level: Default::default(),
-    }
+    )
 }
 
 #[test]

@@ -13,8 +13,8 @@ use std::fmt::Write;
 
 use strutline_core::check::Prepared;
 use strutline_core::method::Method;
-use strutline_core::section::outline::{ineffective, outline};
-use strutline_core::stability::effective::of_check;
+use strutline_core::section::outline::outline;
+use strutline_core::stability::ineffective::ineffective;
 use strutline_core::CheckResult;
 
 use crate::checks::Checked;
@@ -80,7 +80,7 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
             .into();
     }
     let zones = result
-        .and_then(|r| of_check(&p.input(), r))
+        .and_then(|r| r.effective(&p.input()))
         .map(|(c, e)| ineffective(spec, &c, &e))
         .unwrap_or_default();
     let props = &p.section.props;

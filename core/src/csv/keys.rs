@@ -110,50 +110,5 @@ pub(super) fn key_info(key: &str) -> Option<&'static KeyInfo> {
     KEYS.iter().find(|i| i.key == key)
 }
 
-/// Section kinds: (kind, required keys, optional keys).
-pub(super) const KINDS: &[(&str, &[&str], &[&str])] = &[
-    (
-        "i",
-        &["depth_mm", "width_mm", "flange_mm", "web_mm"],
-        &["root_radius_mm", "make"],
-    ),
-    (
-        "rhs",
-        &["depth_mm", "width_mm", "wall_mm"],
-        &["outer_radius_mm", "inner_radius_mm", "make"],
-    ),
-    ("chs", &["diameter_mm", "wall_mm"], &["make"]),
-    (
-        "angle",
-        &["depth_mm", "width_mm", "thickness_mm"],
-        &["root_radius_mm", "toe_radius_mm"],
-    ),
-    (
-        "channel",
-        &["depth_mm", "width_mm", "flange_mm", "web_mm"],
-        &["root_radius_mm"],
-    ),
-    (
-        "tee",
-        &["depth_mm", "width_mm", "flange_mm", "web_mm"],
-        &["root_radius_mm"],
-    ),
-    ("rect", &["depth_mm", "width_mm"], &[]),
-    ("round", &["diameter_mm"], &[]),
-    (
-        "given",
-        &["area_mm2", "i_major_mm4", "i_minor_mm4"],
-        &[
-            "torsion_mm4",
-            "warping_mm6",
-            "w_el_major_mm3",
-            "w_el_minor_mm3",
-            "w_pl_major_mm3",
-            "w_pl_minor_mm3",
-        ],
-    ),
-    ("catalogue", &["designation"], &[]),
-];
-
 pub(super) const TIMBER_KEYS: [&str; 4] = ["fc0k_mpa", "e005_mpa", "e0mean_mpa", "timber"];
 pub(super) const CUSTOM_KEYS: [&str; 3] = ["fy_mpa", "e_mpa", "g_mpa"];

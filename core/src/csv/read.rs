@@ -9,6 +9,7 @@ use super::*;
 use crate::file;
 use crate::member::Member;
 use crate::method::Method;
+use crate::section::schema;
 use crate::units::{self, UsUnit};
 
 #[derive(Debug, Clone)]
@@ -86,8 +87,13 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
         Kind::Text => "text".into(),
         Kind::Name => match info.key {
             "kind" => {
-                "a section kind: i, rhs, chs, angle, channel, tee, rect, round, given or catalogue"
-                    .into()
+                let names: Vec<&str> = schema::kind_names().collect();
+                match names.split_last() {
+                    Some((last, rest)) => {
+                        format!("a section kind: {} or {last}", rest.join(", "))
+                    }
+                    None => "a section kind".into(),
+                }
             }
             "method" => format!("a method: {}", Method::ALL.map(Method::key).join(", ")),
             "make" => "rolled or welded (i); hot-finished or cold-formed (rhs, chs)".into(),
@@ -305,10 +311,13 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             "angle_truss" => &["planar", "space"],
             "span_load_major" | "span_load_minor" => &["uniform", "point"],
             "load_level" => &["shear-centre", "compression-flange", "tension-flange"],
-            _ => match kind_name {
-                Some("i") => &["rolled", "welded"],
-                Some("rhs" | "chs") => &["hot-finished", "cold-formed"],
-                // Other kinds have no make; the section check says so.
+            // The section kind's choices (section::schema); other kinds
+            // have no make, and the section check says so.
+            _ => match kind_name.and_then(schema::kind).and_then(|k| k.key(key)) {
+                Some(schema::Key {
+                    value: schema::Value::Choice(options),
+                    ..
+                }) => options,
                 _ => continue,
             },
         };
@@ -347,7 +356,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             "kind is missing; every member needs a section kind",
         )),
         None => {}
-        Some(kind) => match KINDS.iter().find(|(name, _, _)| *name == kind) {
+        Some(kind) => match schema::kind(kind) {
             None => {
                 failed.push("kind");
                 problems.push(problem(
@@ -359,9 +368,15 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                     format!("unknown section kind \"{kind}\""),
                 ));
             }
-            Some((name, required, optional)) => {
-                for key in required.iter() {
-                    if !section_given.contains(key) {
+            Some(described) => {
+                let name = described.name;
+                for key in described
+                    .keys
+                    .iter()
+                    .filter(|k| k.required())
+                    .map(|k| k.key)
+                {
+                    if !section_given.contains(&key) {
                         problems.push(problem(
                             line,
                             ctx.header_of(key),
@@ -373,9 +388,8 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                     }
                 }
                 for key in &section_given {
-                    if !required.contains(key) && !optional.contains(key) {
-                        let takes: Vec<&str> =
-                            required.iter().chain(optional.iter()).copied().collect();
+                    if described.key(key).is_none() {
+                        let takes: Vec<&str> = described.keys.iter().map(|k| k.key).collect();
                         problems.push(problem(
                             line,
                             ctx.header_of(key),

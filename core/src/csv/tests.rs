@@ -4,6 +4,7 @@
     clippy::indexing_slicing,
     clippy::panic
 )]
+use super::keys;
 use super::number::*;
 use super::read::*;
 use super::*;
@@ -666,5 +667,38 @@ mod fuzz {
             let got = parse_csv(&text);
             prop_assert_eq!(got.members.len(), got.member_lines.len());
         }
+    }
+}
+
+/// The CSV columns cover every section key of the one description
+/// (`section::schema::KINDS`), each as a section column of the right kind.
+#[test]
+fn every_described_section_key_is_a_column() {
+    use crate::section::schema;
+    use keys::{key_info, Group, Kind};
+    for described in &schema::KINDS {
+        for key in described.keys {
+            let info = key_info(key.key).unwrap_or_else(|| {
+                panic!(
+                    "section kind \"{}\" has key \"{}\", which csv::keys::KEYS does not list",
+                    described.name, key.key
+                )
+            });
+            assert_eq!(info.group, Group::Section, "{}", key.key);
+            let expected = match key.value {
+                schema::Value::Number => Kind::Number,
+                schema::Value::Text => Kind::Text,
+                schema::Value::Choice(_) => Kind::Name,
+            };
+            assert_eq!(info.kind, expected, "{}", key.key);
+        }
+    }
+    // And no section column that no kind has.
+    for info in keys::KEYS.iter().filter(|i| i.group == Group::Section) {
+        assert!(
+            info.key == "kind" || schema::KINDS.iter().any(|k| k.key(info.key).is_some()),
+            "csv::keys::KEYS lists section column \"{}\", which no kind describes",
+            info.key
+        );
     }
 }

@@ -432,6 +432,17 @@ pub fn is_hot_finished_hollow(input: &Input<'_>) -> bool {
     }
 }
 
+/// Whether the section is a hollow section whose make the member file does
+/// not give (read as cold-formed: the lower resistance).
+pub fn hollow_make_unstated(input: &Input<'_>) -> bool {
+    use crate::section::HollowMake;
+    match &input.section.spec {
+        SectionSpec::Rhs(s) => s.make == HollowMake::Unstated,
+        SectionSpec::Chs(s) => s.make == HollowMake::Unstated,
+        _ => false,
+    }
+}
+
 /// Whether the section family is a hollow one.
 pub fn is_hollow(input: &Input<'_>) -> bool {
     matches!(input.section.family, Family::Rhs | Family::Chs)
