@@ -328,6 +328,13 @@ impl Trace {
         !self.off
     }
 
+    /// Makes room for `n` more steps when steps are kept.
+    pub fn reserve(&mut self, n: usize) {
+        if !self.off {
+            self.steps.reserve(n);
+        }
+    }
+
     /// Removes every step (whether it keeps steps stays as it was).
     pub fn clear(&mut self) {
         self.steps.clear();
