@@ -23,6 +23,7 @@ mod buckle;
 mod check;
 mod convert;
 mod envelope;
+mod input;
 mod sections;
 mod size;
 

@@ -92,19 +92,57 @@ pub fn verdict_html(c: &Checked, sys: UnitSystem) -> String {
             let _ = write!(
                 h,
                 "<dl class=\"verdict-numbers\">\
-                 <dt>utilisation N_Ed / N_Rd</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
+                 <dt>utilisation {}</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
                  <dt>resistance N_Rd</dt><dd><span data-testid=\"result-resistance\">{rd}</span> {ru}</dd>\
                  <dt>design load N_Ed</dt><dd>{}</dd>\
                  <dt>governs</dt><dd data-testid=\"result-governing\">{}</dd>\
                  <dt>method</dt><dd>{}</dd></dl></div>",
+                if r.bending.is_some() {
+                    "(largest)"
+                } else {
+                    "N_Ed / N_Rd"
+                },
                 fixed(r.utilisation, 3),
                 result_text(sys, "kN", c.member.axial_kn, 1),
                 governing_text(r),
                 r.method.title(),
             );
+            if let Some(b) = &r.bending {
+                h.push_str(&bending_html(b, sys));
+            }
             h.push_str(&warnings_html(r));
         }
     }
+    h
+}
+
+/// The bending side of a result: per axis the largest design moment, the
+/// design resistance, the elastic critical moment, the reduction and the
+/// moment factor (a dash where none applies).
+pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> String {
+    let mut h = format!(
+        "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Bending\">\
+         <table class=\"modes\" data-testid=\"bending\"><caption>Bending</caption><thead><tr>\
+         <th scope=\"col\">axis</th><th scope=\"col\">M_Ed ({u})</th><th scope=\"col\">M_Rd ({u})</th>\
+         <th scope=\"col\">M_cr ({u})</th><th scope=\"col\">reduction</th>\
+         <th scope=\"col\">moment factor</th><th scope=\"col\">utilisation</th></tr></thead><tbody>",
+        u = head_unit(sys, "kNm"),
+    );
+    for (name, a) in [("major", &b.major), ("minor", &b.minor)] {
+        let _ = write!(
+            h,
+            "<tr><th scope=\"row\">{name}</th>{}{}{}<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>",
+            cell(sys, "kNm", a.demand_knm),
+            cell(sys, "kNm", a.resistance_knm),
+            a.critical_knm
+                .map(|v| cell(sys, "kNm", v))
+                .unwrap_or_else(|| "<td class=\"num\">—</td>".into()),
+            working(a.reduction),
+            a.moment_factor.map(working).unwrap_or_else(|| "—".into()),
+            fixed(a.utilisation(), 3),
+        );
+    }
+    h.push_str("</tbody></table></div>");
     h
 }
 
@@ -439,6 +477,29 @@ mod tests {
         // Shown to four significant figures.
         assert!((shown - kip).abs() <= kip.abs() * 5e-4, "{shown} vs {kip}");
         assert!(us.contains("</span> kip"));
+    }
+
+    #[test]
+    fn verdict_shows_the_bending_side() {
+        let mut m = demo::sample_member("B1");
+        m.axial_kn = 0.0;
+        m.method = strutline_core::method::Method::En1993;
+        m.m_major_span_knm = 1.5;
+        let c = Checked::new(&m);
+        let r = c.outcome.as_ref().unwrap();
+        let b = r.bending.unwrap();
+        let h = verdict_html(&c, UnitSystem::Si);
+        assert!(h.contains("data-testid=\"bending\""), "{h}");
+        assert!(h.contains("bending, major axis"), "{h}");
+        assert!(h.contains(&format!(
+            "<td class=\"num\">{}</td>",
+            fixed(b.major.utilisation(), 3)
+        )));
+        let w = working_html(r, UnitSystem::Si);
+        assert!(
+            w.contains("Bending, major axis") && w.contains("M_b,Rd"),
+            "{w}"
+        );
     }
 
     #[test]

@@ -234,7 +234,11 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
             reason: "no segment is compressed by the load pattern".into(),
         }));
     };
-    let mut trace: Trace = Vec::with_capacity(result.trace.len() + 8 + 2 * r.lengths.len());
+    let mut trace = if result.trace.is_on() {
+        Trace::with_capacity(result.trace.len() + 8 + 2 * r.lengths.len())
+    } else {
+        Trace::off()
+    };
     for (scope, b, sym_alpha) in [
         (Scope::Major, &major, symbol!("alpha_cr,y", "-")),
         (Scope::Minor, &minor, symbol!("alpha_cr,z", "-")),
@@ -286,7 +290,9 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         "-",
         "highest utilisation"
     );
-    trace.append(&mut result.trace);
+    for s in std::mem::take(&mut result.trace).into_steps() {
+        put(&mut trace, s.scope, s.symbol, s.label, s.value, s.clause);
+    }
     result.trace = trace;
     warnings.push(Warning::new(
         "buckling-model",

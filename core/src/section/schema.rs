@@ -99,11 +99,11 @@ const I_MAKES: &[&str] = &["rolled", "welded"];
 const HOLLOW_MAKES: &[&str] = &["hot-finished", "cold-formed"];
 
 const fn make(options: &'static [&'static str]) -> Key {
+    // Absent: not stated; each method takes the make that gives the lower
+    // resistance and says so (crate::method::make).
     Key {
         key: "make",
         value: Value::Choice(options),
-        // Absent: the make is not stated, and each method takes the one that
-        // gives the lower resistance and says so (`make-assumed`).
         default: Default::Absent,
     }
 }
