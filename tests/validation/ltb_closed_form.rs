@@ -186,3 +186,44 @@ fn destabilising_load_lowers_m_cr_and_stabilising_raises_it() {
     );
     assert!(top < centre && centre < bottom, "{top} {centre} {bottom}");
 }
+
+/// Ends restrained against lateral rotation (k_lt = 0.5) with a uniform load
+/// in the span: ENV 1993-1-1:1992 Annex F Table F.1.2 gives C1 = 0.972 (simply
+/// supported in bending) and 0.712 (ends fixed in bending) at k = 0.5
+/// (recalled from memory), both below the uniform-moment value 1.0; the
+/// engine takes the lower, 0.712, and M_cr follows the three-factor formula
+/// with it.
+#[test]
+fn restrained_ends_with_span_load_take_the_lowest_tabulated_c1() {
+    let section = json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15, "make": "rolled"});
+    let half = beam(
+        section.clone(),
+        6000.0,
+        json!({"m_major_a_knm": 0, "m_major_b_knm": 0, "m_major_span_knm": 40, "k_lt": 0.5}),
+    );
+    let r = strutline_core::check_member(&half).unwrap();
+    let b = r.bending.unwrap();
+    assert_close(
+        b.major.moment_factor.unwrap(),
+        0.712,
+        EXACT,
+        "C1, ENV 1993-1-1 Table F.1.2, k = 0.5",
+    );
+    // The same member with k_lt = 1 keeps the tabulated 1.132 for its own
+    // diagram (Table F.1.2, k = 1).
+    let full = beam(
+        section,
+        6000.0,
+        json!({"m_major_a_knm": 0, "m_major_b_knm": 0, "m_major_span_knm": 40}),
+    );
+    let f = strutline_core::check_member(&full)
+        .unwrap()
+        .bending
+        .unwrap();
+    assert_close(
+        f.major.moment_factor.unwrap(),
+        1.132,
+        EXACT,
+        "C1, ENV 1993-1-1 Table F.1.2, k = 1",
+    );
+}

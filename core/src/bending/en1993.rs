@@ -366,7 +366,24 @@ fn axis(
     // Lateral-torsional buckling about the major axis.
     let l_lt = input.member.lt_length_mm()?;
     let segment = diagram_is_segment(input);
-    let c = c_factors(&m, segment);
+    let mut c = c_factors(&m, segment);
+    if input.member.lcr_lt_mm.is_none() && input.member.k_lt < 1.0 && m.span_knm != 0.0 {
+        // With ends restrained against lateral rotation (k < 1) and load in
+        // the span, C1 falls below 1 (ENV 1993-1-1:1992 Table F.1.2, k = 0.5:
+        // 0.972 for a uniform load, 0.712 for a uniform load between fixed
+        // ends, recalled from memory): the lowest value is taken.
+        c = super::CFactors {
+            c1: c.c1.min(super::C1_RESTRAINED_SPAN),
+            c2: c.c2,
+            source: super::CSource::RestrainedSpan,
+        };
+        if input.member.k_lt < 0.5 {
+            warn_once(warnings, "c1-below-table", || {
+                "bending: k_lt is below 0.5, beyond the moment-factor tables (k = 1 and 0.5);                  C1 is taken as their lowest value, 0.712, which may still overstate M_cr:                  check the elastic critical moment by analysis"
+                    .into()
+            });
+        }
+    }
     let swapped = p.principal_angle_rad != 0.0;
     let (h, b) = depth_width(&input.section.spec, swapped);
     let zg = if m.span_knm != 0.0 {

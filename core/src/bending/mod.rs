@@ -294,7 +294,15 @@ pub enum CSource {
     Span,
     /// Conservative C1 = 1.0 (combined diagram, or the segment's diagram is not known).
     Conservative,
+    /// Span load with ends restrained against lateral rotation (k_lt < 1):
+    /// C1 no more than [`C1_RESTRAINED_SPAN`].
+    RestrainedSpan,
 }
+
+/// The lowest C1 of ENV 1993-1-1:1992 Annex F Table F.1.2 at k = 0.5 (a
+/// uniform load between ends fixed in the plane of bending; recalled from
+/// memory), taken for any span load when k_lt < 1.
+pub const C1_RESTRAINED_SPAN: f64 = 0.712;
 
 /// C1 and C2 for a diagram (k = 1, the diagram over the unbraced segment).
 ///
@@ -489,6 +497,15 @@ pub fn push_c_factors(trace: &mut Trace, c: &CFactors, z_g_mm: f64) {
             c.c1,
             "-",
             "conservative choice; EN 1993-1-1 gives no C1"
+        ),
+        CSource::RestrainedSpan => step!(
+            trace,
+            s,
+            "C1",
+            "moment factor with load in the span and k_lt < 1: no more than the lowest tabulated              value for k = 0.5 (0.712), conservative",
+            c.c1,
+            "-",
+            "ENV 1993-1-1:1992 Annex F Table F.1.2, k = 0.5 (recalled)"
         ),
     }
     if z_g_mm != 0.0 {
