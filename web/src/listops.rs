@@ -1,7 +1,8 @@
 //! Operations on a member list and on the lists of a workspace: add,
 //! duplicate, rename, delete with undo, reorder; and the list tools: the
 //! order and filters of what is shown, the members picked, and one change
-//! applied to all of them. Pure, so they are tested on the host.
+//! applied to all of them. Pure, so they are tested on the host; their
+//! controls' markup is [`crate::toolbar`]'s.
 
 use std::cmp::Ordering;
 use std::sync::Arc;
@@ -13,7 +14,6 @@ use strutline_core::Member;
 
 use crate::checks::Checked;
 use crate::numtext::{for_input, parse_optional};
-use crate::report::esc;
 use crate::status::Standing;
 
 /// An id not used in `members`: `base` itself when free, else `base` with
@@ -365,19 +365,6 @@ impl ListTools {
         t
     }
 
-    /// The tally and, after a refused change, why, as HTML.
-    pub fn status_html(&self, checks: &[Arc<Checked>]) -> String {
-        let mut h = String::from("<span data-testid=\"list-tally\">");
-        h.push_str(&self.tally(checks));
-        h.push_str("</span>");
-        if let Some(m) = &self.message {
-            h.push_str("<span class=\"field-error\" data-testid=\"field-error\" role=\"alert\">✎ ");
-            h.push_str(&esc(m));
-            h.push_str("</span>");
-        }
-        h
-    }
-
     /// Applies the change form to the picked members of `members`. Nothing
     /// changes when a value is wrong or nothing is picked; otherwise the
     /// members as they were and the sentence for the undo bar.
@@ -493,92 +480,6 @@ pub fn natural(a: &str, b: &str) -> Ordering {
             return o;
         }
     }
-}
-
-/// Adds a labelled select of `opts` (value, text) to `out`.
-fn select_html(out: &mut String, name: &str, label: &str, opts: &[(&str, &str)]) {
-    for part in [
-        "<label class=\"field\">",
-        label,
-        "<select name=\"",
-        name,
-        "\">",
-    ] {
-        out.push_str(part);
-    }
-    for (v, l) in opts {
-        for part in ["<option value=\"", v, "\">", l, "</option>"] {
-            out.push_str(part);
-        }
-    }
-    out.push_str("</select></label>");
-}
-
-/// The bar above the list (order, filters, picking) and the change form
-/// for the picked members, as HTML; their controls are told apart by name
-/// and their buttons by `data-act`. Every text in them is the app's own.
-pub fn tools_html() -> (String, String) {
-    let leave = ("", "(leave as is)");
-    let mut methods = vec![("", "all")];
-    methods.extend(Method::ALL.iter().map(|m| (m.key(), m.title())));
-    let mut bar = String::from("<div class=\"field-grid\">");
-    select_html(
-        &mut bar,
-        "list_order",
-        "order",
-        &[
-            ("", "as entered"),
-            ("util-down", "utilisation, high to low"),
-            ("util-up", "utilisation, low to high"),
-            ("id", "id"),
-        ],
-    );
-    select_html(
-        &mut bar,
-        "list_status",
-        "status",
-        &[
-            ("", "all"),
-            ("holds", "✓ holds"),
-            ("exceeds", "✗ exceeds"),
-            ("input", "✎ needs input"),
-        ],
-    );
-    select_html(&mut bar, "list_method", "method", &methods);
-    bar.push_str(
-        "<label class=\"field\">find<input type=\"search\" name=\"list_text\" autocomplete=\"off\" \
-         spellcheck=\"false\" placeholder=\"id, note or section\"></label></div><div class=\"button-row\">\
-         <button type=\"button\" data-act=\"pick-shown\" data-v=\"\">Pick all shown</button>\
-         <button type=\"button\" data-act=\"clear-picks\" data-v=\"\">Clear picks</button></div>",
-    );
-    let mut form =
-        String::from(
-        "<details class=\"list-change\" data-testid=\"list-change\"><summary>Change the picked members</summary>\
-         <div class=\"field-grid\">",
-    );
-    let mut grades = vec![leave];
-    grades.extend(KNOWN_GRADES.iter().map(|g| (*g, *g)));
-    select_html(&mut form, "change_grade", "grade", &grades);
-    if let Some(first) = methods.first_mut() {
-        *first = leave;
-    }
-    select_html(&mut form, "change_method", "method", &methods);
-    for (name, axis) in [("change_k_major", "major"), ("change_k_minor", "minor")] {
-        for part in [
-            "<label class=\"field\">factor K, ",
-            axis,
-            " axis<input type=\"text\" name=\"",
-            name,
-            "\" inputmode=\"decimal\" autocomplete=\"off\" placeholder=\"(leave as is)\"></label>",
-        ] {
-            form.push_str(part);
-        }
-    }
-    form.push_str(
-        "</div><p class=\"hint\">A factor K replaces a buckling length typed for that axis.</p>\
-         <button type=\"button\" data-testid=\"apply-change\" data-act=\"apply\" data-v=\"\">Apply to the picked members</button></details>",
-    );
-    (bar, form)
 }
 
 #[cfg(test)]
@@ -771,12 +672,6 @@ mod tests {
         assert_eq!(t.picks, ["C2", "C10"], "no id twice");
         t.toggle("b3");
         assert_eq!(t.tally(&cs), "Showing 2 of 4 · 3 picked (1 not shown)");
-        t.message = Some("k_major: <b>".into());
-        assert_eq!(
-            t.status_html(&cs),
-            "<span data-testid=\"list-tally\">Showing 2 of 4 · 3 picked (1 not shown)</span><span \
-             class=\"field-error\" data-testid=\"field-error\" role=\"alert\">✎ k_major: &lt;b&gt;</span>"
-        );
         t.picks.clear();
         assert_eq!(t.tally(&cs), "Showing 2 of 4");
     }
@@ -860,36 +755,5 @@ mod tests {
             t.apply(&mut ms).unwrap().1,
             "Method set to Euler, capped at squash load for 1 member."
         );
-    }
-
-    #[test]
-    fn the_bar_offers_every_choice() {
-        let (bar, form) = tools_html();
-        for m in Method::ALL {
-            assert!(bar.contains(&format!("value=\"{}\"", m.key())), "{m:?}");
-            assert!(form.contains(&format!("value=\"{}\"", m.key())), "{m:?}");
-        }
-        for g in KNOWN_GRADES {
-            assert!(
-                form.contains(&format!("<option value=\"{g}\">{g}</option>")),
-                "{g}"
-            );
-        }
-        for name in ["list_order", "list_status", "list_method", "list_text"] {
-            assert!(bar.contains(&format!("name=\"{name}\"")), "{name}");
-        }
-        for name in CHANGE_KEYS {
-            assert!(form.contains(&format!("name=\"{name}\"")), "{name}");
-        }
-        let mut t = ListTools::default();
-        for (name, v) in [
-            ("change_grade", "A36"),
-            ("change_method", "euler"),
-            ("change_k_major", "2"),
-            ("change_k_minor", "3"),
-        ] {
-            t.set(name, v);
-        }
-        assert_eq!(t.change, ["A36", "euler", "2", "3"]);
     }
 }
