@@ -8,6 +8,7 @@
 import assert from "node:assert/strict";
 import { register as registerPicker } from "./picker.mjs";
 import { register as registerListTools } from "./listtools.mjs";
+import { register as registerTablet } from "./tablet.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -660,6 +661,9 @@ registerPicker(test, { withApp, open, OUT });
 
 // Order, filters, picks and the change of several members (tests/browser/listtools.mjs).
 registerListTools(test, { withApp, open, OUT });
+
+// The tablet workspace: result and chart in view while editing (tests/browser/tablet.mjs).
+registerTablet(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

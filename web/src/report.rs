@@ -11,6 +11,7 @@
 
 use strutline_core::check::Prepared;
 use strutline_core::compare::{self, Outcome};
+use strutline_core::file::SheetHeader;
 use strutline_core::solve::{self, LengthAnswer, LengthLimit};
 use strutline_core::trace::Scope;
 use strutline_core::units::UnitSystem;
@@ -63,8 +64,8 @@ pub fn verdict_html(c: &Checked, sys: UnitSystem) -> Html {
                 h,
                 "<p class=\"verdict-error\">{}</p><dl class=\"verdict-numbers\">\
                  <dt>utilisation</dt><dd><span data-testid=\"result-utilisation\">—</span></dd>\
-                 <dt>resistance</dt><dd><span data-testid=\"result-resistance\">—</span></dd>\
-                 <dt>governs</dt><dd data-testid=\"result-governing\">—</dd></dl></div>",
+                 <dt>governs</dt><dd data-testid=\"result-governing\">—</dd>\
+                 <dt class=\"v-more\">resistance</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">—</span></dd></dl></div>",
                 fields::error_text(e)
             );
         }
@@ -75,15 +76,15 @@ pub fn verdict_html(c: &Checked, sys: UnitSystem) -> Html {
                 h,
                 "<dl class=\"verdict-numbers\">\
                  <dt>utilisation N_Ed / N_Rd</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
-                 <dt>resistance N_Rd</dt><dd><span data-testid=\"result-resistance\">{}</span> {}</dd>\
-                 <dt>design load N_Ed</dt><dd>{}</dd>\
                  <dt>governs</dt><dd data-testid=\"result-governing\">{}</dd>\
-                 <dt>method</dt><dd>{}</dd></dl></div>",
+                 <dt class=\"v-more\">resistance N_Rd</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">{}</span> {}</dd>\
+                 <dt class=\"v-more\">design load N_Ed</dt><dd class=\"v-more\">{}</dd>\
+                 <dt class=\"v-more\">method</dt><dd class=\"v-more\">{}</dd></dl></div>",
                 fixed(r.utilisation, 3),
+                governing_text(r),
                 rd,
                 ru,
                 result_text(sys, "kN", c.member.axial_kn, 1),
-                governing_text(r),
                 r.method.title(),
             );
             h.push(&warnings_html(r));
@@ -315,30 +316,46 @@ fn properties_html(r: &CheckResult, sys: UnitSystem) -> Html {
     h
 }
 
-/// The calc sheet of a list: a summary page, then a page for each member
-/// with its inputs, section properties, verdict, modes and working,
-/// warnings, the envelope of the member it was opened from (`chart`: id,
-/// image URL, and the legend as the app drew it) and the caution on
-/// every page.
+/// The calc sheet of a list: a summary page with the list's title block,
+/// then a page for each member with its inputs (symbol, value, meaning, in
+/// the order of the working), section properties, verdict, modes and
+/// working, warnings, the envelope of the member it was opened from
+/// (`chart`: id, image URL, and the legend as the app drew it) and the
+/// caution on every page. Printed, every page also carries the header of
+/// [`crate::print::page_rule`] and its number.
 pub fn sheet_html(
     title: &str,
-    date: &str,
+    header: &SheetHeader,
     checks: &[std::sync::Arc<Checked>],
     chart: Option<(&str, &str, &Html)>,
     sys: UnitSystem,
 ) -> Html {
     let mut caution = Html::new();
     html!(caution, "<p class=\"caution\">⚠ {}</p>", CAUTION);
+    let dash = |s: &str| {
+        if s.trim().is_empty() {
+            "—".to_string()
+        } else {
+            s.trim().to_string()
+        }
+    };
     let mut h = Html::new();
     html!(
         h,
         "<section class=\"sheet-page\" data-testid=\"sheet-summary\"><h2>Calculation: {}</h2>\
-         <p class=\"sheet-meta\">{} · {} members · {}</p>\
+         <dl class=\"sheet-block\" data-testid=\"sheet-block\">\
+         <dt>job</dt><dd data-testid=\"sheet-job\">{}</dd><dt>prepared by</dt><dd>{}</dd>\
+         <dt>checked by</dt><dd>{}</dd><dt>date</dt><dd>{}</dd><dt>revision</dt><dd>{}</dd>\
+         <dt>members</dt><dd>{}</dd><dt>units</dt><dd>{}</dd></dl>\
          <table class=\"sheet-summary\"><thead><tr><th scope=\"col\">member</th><th scope=\"col\">section</th>\
          <th scope=\"col\">method</th><th scope=\"col\">N_Ed</th><th scope=\"col\">N_Rd</th>\
          <th scope=\"col\">utilisation</th><th scope=\"col\">status</th></tr></thead><tbody>",
-        title,
-        date,
+        dash(title),
+        dash(&header.job),
+        dash(&header.prepared_by),
+        dash(&header.checked_by),
+        dash(&header.date),
+        dash(&header.revision),
         checks.len(),
         sys_name(sys),
     );
@@ -366,16 +383,30 @@ pub fn sheet_html(
         html!(
             h,
             "<section class=\"sheet-page\" data-testid=\"sheet-page\"><h2>Member {}</h2>\
-             <p class=\"sheet-meta\">{} · {} · {}</p><h3>Inputs</h3><dl class=\"sheet-inputs\">",
+             <p class=\"sheet-meta\">{}{}</p><h3>Inputs</h3>\
+             <table class=\"sheet-inputs\" data-testid=\"sheet-inputs\"><tbody>",
             id,
-            title,
-            date,
-            c.member.section.describe()
+            c.member.section.describe(),
+            c.member
+                .note
+                .as_deref()
+                .map(|n| format!(" · {n}"))
+                .unwrap_or_default()
         );
-        for (k, v) in crate::print::inputs(sys, &c.member) {
-            html!(h, "<dt>{}</dt><dd>{}</dd>", k, v);
+        for l in crate::print::inputs(sys, &c.member) {
+            html!(
+                h,
+                "<tr><th scope=\"row\">{}</th><td class=\"num\">{}</td><td>{}</td></tr>",
+                l.symbol,
+                if l.symbol.is_empty() {
+                    l.value
+                } else {
+                    format!("= {}", l.value)
+                },
+                l.meaning
+            );
         }
-        h.lit("</dl>");
+        h.lit("</tbody></table>");
         if let Ok(r) = &c.outcome {
             h.lit("<h3>Section and material</h3>");
             h.push(&properties_html(r, sys));
@@ -462,7 +493,7 @@ mod tests {
         assert!(!h.contains("<img"));
         let sheet = sheet_html(
             "<script>",
-            "2026-12-01",
+            &SheetHeader::default(),
             &[Arc::new(c)],
             None,
             UnitSystem::Si,
@@ -525,9 +556,14 @@ mod tests {
             .iter()
             .map(|i| Arc::new(checked(i)))
             .collect();
+        let header = SheetHeader {
+            job: "J-<204>".into(),
+            revision: "B".into(),
+            ..SheetHeader::default()
+        };
         let h = sheet_html(
             "Depot",
-            "2026-12-01",
+            &header,
             &cs,
             Some((
                 "A2",
@@ -546,5 +582,15 @@ mod tests {
             "the legend beside the chart"
         );
         assert!(h.contains("Member A2"));
+        assert!(h.contains("<dd data-testid=\"sheet-job\">J-&lt;204&gt;</dd>"));
+        assert!(h.contains("<dt>revision</dt><dd>B</dd><dt>"));
+        // Inputs by symbol, never by file key.
+        assert!(
+            h.contains("<th scope=\"row\">L</th><td class=\"num\">= "),
+            "{h}"
+        );
+        for key in ["length_mm", "axial_kn", "fy_mpa", "depth_mm", "k_major"] {
+            assert!(!h.contains(key), "the sheet shows the file key {key}");
+        }
     }
 }

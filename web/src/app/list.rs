@@ -118,13 +118,146 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
             }
         }>"+ Add member"</button>
         <listbar::ListBar ctx=ctx tools=tools />
-        <ol class="member-list">
-            <For
-                each=move || tools.with(|t| ctx.checks.with(|c| t.shown(&c.0)))
-                key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
-                children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id tools=tools /> }
-            />
-        </ol>
+        <Rows ctx=ctx tools=tools selected_id=selected_id />
+    }
+}
+
+/// The rows of the list, in their own scrolling box, built only for the
+/// part in view ([`listops::window`]): the first frame of a list of any
+/// length builds a screenful of rows. The rows not built are stood in for
+/// by the list's padding (set through the style object, which the page's
+/// policy allows), so the scroll bar is the whole list's. Arrow keys move
+/// from row to row, building the next one when needed.
+#[component]
+fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>) -> impl IntoView {
+    let shown =
+        Memo::new(move |_| tools.with(|t| ctx.checks.with(|c| Checks(Arc::new(t.shown(&c.0))))));
+    let scroller = NodeRef::<leptos::html::Div>::new();
+    let list = NodeRef::<leptos::html::Ol>::new();
+    let scroll_top = RwSignal::new(0.0f64);
+    let view_px = RwSignal::new(browser::inner_height());
+    let range = Memo::new(move |_| {
+        let n = shown.with(|s| s.0.len());
+        let (a, b) = listops::window(scroll_top.get(), view_px.get(), n);
+        (a, b, n)
+    });
+    // The box's height, when laid out and whenever the window changes.
+    Effect::new(move |_| {
+        ctx.resize.track();
+        if let Some(el) = scroller.get() {
+            let h = f64::from(el.client_height());
+            if h > 0.0 {
+                view_px.set(h);
+            }
+        }
+    });
+    Effect::new(move |_| {
+        let (a, b, n) = range.get();
+        if let Some(el) = list.get() {
+            let style = web_sys::HtmlElement::style(&el);
+            let px = |rows: usize| format!("{}px", rows as f64 * listops::ROW_PITCH_PX);
+            let _ = style.set_property("padding-top", &px(a));
+            let _ = style.set_property("padding-bottom", &px(n - b));
+        }
+    });
+    // The selected member is brought into view when it is chosen
+    // elsewhere (added, copied, moved, picked in another way).
+    Effect::new(move |_| {
+        let Some(id) = selected_id.get() else { return };
+        let Some(at) = shown.with_untracked(|s| s.0.iter().position(|c| c.member.id == id)) else {
+            return;
+        };
+        reveal(scroller, scroll_top, view_px.get_untracked(), at);
+    });
+    let rows = move || {
+        let (a, b, _) = range.get();
+        shown.with(|s| s.0.get(a..b).map(<[_]>::to_vec).unwrap_or_default())
+    };
+    view! {
+        <div class="member-scroll" data-testid="member-scroll" node_ref=scroller
+            on:scroll=move |_| {
+                if let Some(el) = scroller.get_untracked() {
+                    scroll_top.set(f64::from(el.scroll_top()));
+                }
+            }
+            on:keydown=move |e: ev::KeyboardEvent| {
+                let step: isize = match e.key().as_str() {
+                    "ArrowDown" => 1,
+                    "ArrowUp" => -1,
+                    _ => return,
+                };
+                let Some(id) = row_id_of(&e) else { return };
+                let next = shown.with_untracked(|s| {
+                    let at = s.0.iter().position(|c| c.member.id == id)?;
+                    let j = at.checked_add_signed(step)?;
+                    s.0.get(j).map(|c| (j, c.member.id.clone()))
+                });
+                let Some((j, next_id)) = next else { return };
+                e.prevent_default();
+                reveal(scroller, scroll_top, view_px.get_untracked(), j);
+                // Focus the row once it is built (the next frame at most).
+                request_animation_frame(move || focus_row(list, &next_id));
+            }
+        >
+            <ol class="member-list" node_ref=list aria-label="Members">
+                <For
+                    each=rows
+                    key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
+                    children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id tools=tools /> }
+                />
+            </ol>
+        </div>
+    }
+}
+
+/// Scrolls the list's box so that row `at` is in view (no scroll when it
+/// already is), and notes the new position at once.
+fn reveal(
+    scroller: NodeRef<leptos::html::Div>,
+    scroll_top: RwSignal<f64>,
+    view_px: f64,
+    at: usize,
+) {
+    let Some(el) = scroller.get_untracked() else {
+        return;
+    };
+    let top = at as f64 * listops::ROW_PITCH_PX;
+    let now = f64::from(el.scroll_top());
+    let to = if top < now {
+        top
+    } else if top + listops::ROW_PITCH_PX > now + view_px {
+        top + listops::ROW_PITCH_PX - view_px
+    } else {
+        return;
+    };
+    el.set_scroll_top(to.max(0.0).round() as i32);
+    scroll_top.set(f64::from(el.scroll_top()));
+}
+
+/// The id of the row an event came from.
+fn row_id_of(e: &ev::KeyboardEvent) -> Option<String> {
+    let t: web_sys::Element = wasm_bindgen::JsCast::dyn_into(e.target()?).ok()?;
+    t.closest("[data-testid=member-row]")
+        .ok()??
+        .get_attribute("data-id")
+}
+
+/// Focuses the main button of the row with `id`, if it is built.
+fn focus_row(list: NodeRef<leptos::html::Ol>, id: &str) {
+    let Some(ol) = list.get_untracked() else {
+        return;
+    };
+    let rows = ol.children();
+    for i in 0..rows.length() {
+        let Some(li) = rows.item(i) else { continue };
+        if li.get_attribute("data-id").as_deref() == Some(id) {
+            if let Ok(Some(b)) = li.query_selector(".row-main") {
+                if let Ok(b) = wasm_bindgen::JsCast::dyn_into::<web_sys::HtmlElement>(b) {
+                    let _ = b.focus();
+                }
+            }
+            return;
+        }
     }
 }
 

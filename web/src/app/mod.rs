@@ -88,6 +88,8 @@ struct Ctx {
     sheet: RwSignal<Option<Option<(String, String, crate::html::Html)>>>,
     /// The chart's legend as last drawn (the calc sheet prints it too).
     legend: RwSignal<crate::html::Html>,
+    /// Whether the docked chart is open (narrow and upright screens).
+    chart_open: RwSignal<bool>,
 }
 
 impl Ctx {
@@ -217,6 +219,7 @@ pub fn App() -> impl IntoView {
         units: RwSignal::new(crate::units_view::load()),
         sheet: RwSignal::new(None),
         legend: RwSignal::new(crate::html::Html::new()),
+        chart_open: RwSignal::new(false),
     };
     provide_context(ctx.units);
     if let Some((raw, reason)) = problem {
@@ -244,8 +247,18 @@ pub fn App() -> impl IntoView {
             }
         }
     });
-    let resize_listener =
-        window_event_listener(ev::resize, move |_| ctx.resize.update(|n| *n += 1));
+    let resize_listener = window_event_listener(ev::resize, move |_| {
+        ctx.resize.update(|n| *n += 1);
+        // The on-screen keyboard came or went: the field stays in view.
+        browser::reveal_focused_field();
+    });
+    let focus_listener = window_event_listener(ev::focusin, move |_| {
+        // After the on-screen keyboard has had time to come up.
+        set_timeout(
+            browser::reveal_focused_field,
+            std::time::Duration::from_millis(350),
+        );
+    });
     let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
     let visibility_listener =
         window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
@@ -254,6 +267,7 @@ pub fn App() -> impl IntoView {
     on_cleanup(move || {
         storage_listener.remove();
         resize_listener.remove();
+        focus_listener.remove();
         orient_listener.remove();
         hide_listener.remove();
         visibility_listener.remove();
@@ -266,28 +280,28 @@ pub fn App() -> impl IntoView {
             <header class="topbar">
                 <h1 class="brand">"Strutline"</h1>
                 <p class="tagline">"compression members, checked as you type"</p>
-                <button
-                    type="button"
-                    class="theme-toggle"
-                    data-testid="contrast-toggle"
-                    aria-pressed=move || if high_contrast.get() { "true" } else { "false" }
-                    on:click=move |_| high_contrast.update(|v| *v = !*v)
-                >
-                    {move || if high_contrast.get() { "◐ Standard theme" } else { "◑ High contrast (outdoors)" }}
-                </button>
+                <div class="tools screen-only">
+                    <button type="button" data-testid="units-toggle" on:click=move |_| {
+                        let next = if ctx.units.get_untracked() == UnitSystem::Si { UnitSystem::Us } else { UnitSystem::Si };
+                        ctx.units.set(next);
+                        let _ = browser::set(crate::units_view::KEY, crate::units_view::stored_text(next));
+                        ctx.generation.update(|g| *g += 1);
+                    }>{move || if ctx.units.get() == UnitSystem::Si { "Units: SI (kN, mm, MPa) · show US" } else { "Units: US (kip, in, ft, ksi) · show SI" }}</button>
+                    <button type="button" data-testid="open-sheet" on:click=move |_| ctx.sheet.set(Some(chart_image(ctx)))>"Calc sheet of this list"</button>
+                    <button
+                        type="button"
+                        class="theme-toggle"
+                        data-testid="contrast-toggle"
+                        aria-pressed=move || if high_contrast.get() { "true" } else { "false" }
+                        on:click=move |_| high_contrast.update(|v| *v = !*v)
+                    >
+                        {move || if high_contrast.get() { "◐ Standard theme" } else { "◑ High contrast (outdoors)" }}
+                    </button>
+                </div>
             </header>
             <Banners ctx=ctx />
-            <div class="tools screen-only">
-                <button type="button" data-testid="units-toggle" on:click=move |_| {
-                    let next = if ctx.units.get_untracked() == UnitSystem::Si { UnitSystem::Us } else { UnitSystem::Si };
-                    ctx.units.set(next);
-                    let _ = browser::set(crate::units_view::KEY, crate::units_view::stored_text(next));
-                    ctx.generation.update(|g| *g += 1);
-                }>{move || if ctx.units.get() == UnitSystem::Si { "Units: SI (kN, mm, MPa) · show US" } else { "Units: US (kip, in, ft, ksi) · show SI" }}</button>
-                <button type="button" data-testid="open-sheet" on:click=move |_| ctx.sheet.set(Some(chart_image(ctx)))>"Calc sheet of this list"</button>
-            </div>
             {move || ctx.sheet.get().map(|img| view! { <CalcSheet ctx=ctx chart=img /> })}
-            <main class="panes" class:screen-only=move || ctx.sheet.with(Option::is_some)>
+            <main class="panes" class:chart-open=move || ctx.chart_open.get() class:screen-only=move || ctx.sheet.with(Option::is_some)>
                 <section class="pane pane-list" aria-labelledby="h-list">
                     <ListPanel ctx=ctx />
                     <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />

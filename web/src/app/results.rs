@@ -5,6 +5,11 @@ use super::*;
 use crate::html;
 use crate::html::Html;
 
+/// The result pane. Its head (the caution, the verdict and the chart's
+/// canvas) is what the person watches while typing: beside the editor on
+/// a wide screen (held at the top of its pane), docked at the foot of the
+/// screen on a narrow or upright one, the chart one tap away. The rest
+/// (legend, options, section, working, What if) follows below.
 #[component]
 pub(super) fn Results(ctx: Ctx) -> impl IntoView {
     let current = Memo::new(move |_| {
@@ -14,16 +19,16 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
     let units = ctx.units;
     view! {
         <h2 id="h-results" class="pane-title">"Result"</h2>
-        <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
-        <div class="verdict-block" inner_html=move || match current.get() {
-            None => "<p class=\"empty\">No member selected.</p>".to_string(),
-            Some(c) => report::verdict_html(&c, units.get()).into_string(),
-        }></div>
         <Chart ctx=ctx current=current />
         <div class="working-block" inner_html=move || {
             let sys = units.get();
             current.get().map(|c| {
-                let mut h = crate::sectionview::of_checked(&c);
+                let mut h = Html::new();
+                if let Ok(r) = &c.outcome {
+                    // The docked verdict leaves its warnings here.
+                    html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
+                }
+                h.push(&crate::sectionview::of_checked(&c));
                 if let Ok(r) = &c.outcome {
                     h.push(&report::working_html(r, sys));
                 }
@@ -46,23 +51,61 @@ pub(super) fn chart_image(ctx: Ctx) -> Option<(String, String, Html)> {
 }
 
 /// The calc sheet of the open list, built as text by
-/// [`report::sheet_html`], with buttons to print it and to close it.
+/// [`report::sheet_html`], with the list's header lines (entered once,
+/// stored with the list, printed on every page), and buttons to print it
+/// and to close it.
 #[component]
 pub(super) fn CalcSheet(ctx: Ctx, chart: Option<(String, String, Html)>) -> impl IntoView {
-    let title = ctx
+    let today = crate::print::today();
+    // The list's title and header, the date of today where none is given.
+    let header = Memo::new(move |_| {
+        ctx.ws.with(|w| {
+            w.active_list()
+                .map(|l| {
+                    let mut h = l.sheet.clone();
+                    if h.date.trim().is_empty() {
+                        h.date = today.clone();
+                    }
+                    (l.title.clone(), h)
+                })
+                .unwrap_or_default()
+        })
+    });
+    let stored = ctx
         .ws
-        .with_untracked(|w| w.active_list().map(|l| l.title.clone()).unwrap_or_default());
-    let checks = ctx.checks.get_untracked();
-    let html = report::sheet_html(
-        &title,
-        &crate::print::today(),
-        &checks.0,
-        chart
-            .as_ref()
-            .map(|(id, url, legend)| (id.as_str(), url.as_str(), legend)),
-        ctx.units.get_untracked(),
-    )
-    .into_string();
+        .with_untracked(|w| w.active_list().map(|l| l.sheet.clone()))
+        .unwrap_or_default();
+    // The printed pages' header and footer, while the sheet is open.
+    Effect::new(move |_| {
+        let (title, h) = header.get();
+        browser::set_page_rule(Some(&crate::print::page_rule(&title, &h)));
+    });
+    on_cleanup(|| browser::set_page_rule(None));
+    let html = move || {
+        let (title, h) = header.get();
+        let checks = ctx.checks.get();
+        report::sheet_html(
+            &title,
+            &h,
+            &checks.0,
+            chart
+                .as_ref()
+                .map(|(id, url, legend)| (id.as_str(), url.as_str(), legend)),
+            ctx.units.get_untracked(),
+        )
+        .into_string()
+    };
+    let field = move |name: &'static str,
+                      label: &'static str,
+                      value: String,
+                      hint: &'static str| {
+        view! {
+            <div class="field">
+                <label for=format!("sheet-{name}")>{label}</label>
+                <input type="text" id=format!("sheet-{name}") name=name autocomplete="off" value=value placeholder=hint />
+            </div>
+        }
+    };
     view! {
         <div class="calc-sheet" data-testid="calc-sheet">
             <div class="button-row screen-only">
@@ -71,6 +114,33 @@ pub(super) fn CalcSheet(ctx: Ctx, chart: Option<(String, String, Html)>) -> impl
                 }>"Print or save as PDF"</button>
                 <button type="button" data-testid="close-sheet" on:click=move |_| ctx.sheet.set(None)>"Close the sheet"</button>
             </div>
+            <fieldset class="sheet-header-form screen-only" data-testid="sheet-header-form"
+                on:input=move |e| {
+                    let name = event_target::<web_sys::Element>(&e).get_attribute("name");
+                    let v = event_target_value(&e);
+                    ctx.ws.update(|w| {
+                        if let Some(l) = w.active_list_mut() {
+                            let h = &mut l.sheet;
+                            match name.as_deref() {
+                                Some("sheet_job") => h.job = v,
+                                Some("sheet_prepared_by") => h.prepared_by = v,
+                                Some("sheet_checked_by") => h.checked_by = v,
+                                Some("sheet_date") => h.date = v,
+                                Some("sheet_revision") => h.revision = v,
+                                _ => {}
+                            }
+                        }
+                    });
+                }>
+                <legend>"Header of every page (kept with this list)"</legend>
+                <div class="field-grid">
+                    {field("sheet_job", "job reference", stored.job, "e.g. 24-117")}
+                    {field("sheet_prepared_by", "prepared by", stored.prepared_by, "name or initials")}
+                    {field("sheet_checked_by", "checked by", stored.checked_by, "name or initials")}
+                    {field("sheet_date", "date", stored.date, "today when empty")}
+                    {field("sheet_revision", "revision", stored.revision, "e.g. A")}
+                </div>
+            </fieldset>
             <div inner_html=html></div>
         </div>
     }
@@ -120,6 +190,9 @@ pub(super) fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Cu
     h
 }
 
+/// The result's head (caution, verdict, the chart's canvas) and the
+/// chart's legend and options; the canvas is drawn afresh on every change
+/// of the member, the options, the theme, the units or its size.
 #[component]
 pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
     let canvas = NodeRef::<leptos::html::Canvas>::new();
@@ -133,7 +206,8 @@ pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoV
         let hc = ctx.high_contrast.get();
         let sys = ctx.units.get();
         let us = sys == UnitSystem::Us;
-        let _ = ctx.resize.get();
+        ctx.resize.track();
+        ctx.chart_open.track();
         let Some(el) = canvas.get() else {
             return;
         };
@@ -192,7 +266,41 @@ pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoV
             }
         }
     });
+    // The head's height, for the page to keep a focused field clear of
+    // it when it is docked (style.css reads --dock).
+    let head = NodeRef::<leptos::html::Div>::new();
+    Effect::new(move |_| {
+        current.track();
+        ctx.chart_open.track();
+        ctx.resize.track();
+        request_animation_frame(move || {
+            if let Some(el) = head.get_untracked() {
+                browser::set_root_px("--dock", f64::from(el.offset_height()));
+            }
+        });
+    });
+    let units = ctx.units;
     view! {
+        <div class="result-head" class:chart-open=move || ctx.chart_open.get() node_ref=head data-testid="result-head">
+            <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
+            <div class="verdict-block" data-testid="verdict" inner_html=move || match current.get() {
+                None => "<p class=\"empty\">No member selected.</p>".to_string(),
+                Some(c) => report::verdict_html(&c, units.get()).into_string(),
+            }></div>
+            <button type="button" class="chart-toggle" data-testid="chart-toggle" aria-controls="envelope-frame"
+                aria-expanded=move || if ctx.chart_open.get() { "true" } else { "false" }
+                on:click=move |_| {
+                    ctx.chart_open.update(|o| *o = !*o);
+                    // Redraw at the size the canvas now has.
+                    request_animation_frame(move || ctx.resize.update(|n| *n += 1));
+                }>
+                {move || if ctx.chart_open.get() { "▾ Hide the chart" } else { "▴ Show the chart" }}
+            </button>
+            <div class="canvas-frame" id="envelope-frame">
+                <canvas id="envelope" class="envelope" node_ref=canvas role="img"
+                    aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+            </div>
+        </div>
         <div class="chart-block">
             // One handler for both options, told apart by the box's name;
             // the boxes are the only writers of their signals, so they need
@@ -215,10 +323,6 @@ pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoV
                     <input type="checkbox" name="compare_methods" data-testid="toggle-compare" />
                     " compare every method that applies"
                 </label>
-            </div>
-            <div class="canvas-frame">
-                <canvas id="envelope" class="envelope" node_ref=canvas role="img"
-                    aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
             </div>
             <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend.get().into_string()></ul>
             <p class="chart-description">{move || described.get()}</p>
