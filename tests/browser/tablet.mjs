@@ -15,7 +15,7 @@ import { STORAGE_KEY } from "./lib.mjs";
 
 // A member-file key as the file writes it: words joined by "_", most
 // ending in their unit (length_mm, fc0k_mpa, k_major, gamma_m1).
-const FILE_KEY = /\b(?:[a-z0-9]+_)+(?:mm|mm2|mm4|mm6|kn|knm|mpa|major|minor|torsion|m1|class|duration|connection|n)\b/;
+const FILE_KEY = /\b(?:[a-z0-9]+_)+(?:mm|mm2|mm3|mm4|mm6|kn|knm|mpa|major|minor|torsion|m1|class|duration|connection|restrained|level|lt|n)\b/;
 
 const LANDSCAPE = { viewport: { width: 1180, height: 820 }, hasTouch: true, deviceScaleFactor: 1 };
 const PORTRAIT = { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
@@ -42,7 +42,7 @@ async function shown(page) {
   return page.evaluate(() => ({
     util: document.querySelector("[data-testid=result-utilisation]")?.textContent?.trim() ?? null,
     governs: document.querySelector("[data-testid=result-governing]")?.textContent?.trim() ?? null,
-    marker: document.querySelector("canvas#envelope")?.dataset.markerStressMpa ?? null,
+    marker: document.querySelector("canvas#envelope")?.dataset.markerPx ?? null,
   }));
 }
 
@@ -59,7 +59,7 @@ async function typeAndWatch(page, name, value) {
   await page.waitForFunction(
     (b) => {
       const u = document.querySelector("[data-testid=result-utilisation]")?.textContent?.trim();
-      const m = document.querySelector("canvas#envelope")?.dataset.markerStressMpa;
+      const m = document.querySelector("canvas#envelope")?.dataset.markerPx;
       return u !== b.util && m !== b.marker;
     },
     before,

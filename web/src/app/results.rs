@@ -19,7 +19,7 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
     let units = ctx.units;
     view! {
         <h2 id="h-results" class="pane-title">"Result"</h2>
-        <Chart ctx=ctx current=current />
+        <Chart ctx=ctx current=current>
         <div class="working-block" inner_html=move || {
             let sys = units.get();
             current.get().map(|c| {
@@ -38,6 +38,7 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
                 h.into_string()
             }).unwrap_or_default()
         }></div>
+        </Chart>
     }
 }
 
@@ -190,11 +191,16 @@ pub(super) fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Cu
     h
 }
 
-/// The result's head (caution, verdict, the chart's canvas) and the
-/// chart's legend and options; the canvas is drawn afresh on every change
+/// The result's head (caution, verdict, the chart's canvas), then the
+/// rest (`children` after the chart's legend and options) in a part that
+/// scrolls on its own on a wide screen; the canvas is drawn afresh on every change
 /// of the member, the options, the theme, the units or its size.
 #[component]
-pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoView {
+pub(super) fn Chart(
+    ctx: Ctx,
+    current: Memo<Option<Arc<Checked>>>,
+    children: Children,
+) -> impl IntoView {
     let canvas = NodeRef::<leptos::html::Canvas>::new();
     let note = RwSignal::new(None::<String>);
     let described = RwSignal::new(String::new());
@@ -301,6 +307,7 @@ pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoV
                     aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
             </div>
         </div>
+        <div class="result-more">
         <div class="chart-block">
             // One handler for both options, told apart by the box's name;
             // the boxes are the only writers of their signals, so they need
@@ -327,6 +334,8 @@ pub(super) fn Chart(ctx: Ctx, current: Memo<Option<Arc<Checked>>>) -> impl IntoV
             <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend.get().into_string()></ul>
             <p class="chart-description">{move || described.get()}</p>
             {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
+        </div>
+        {children()}
         </div>
     }
 }
