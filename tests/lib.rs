@@ -15,3 +15,12 @@ pub fn assert_close(actual: f64, expected: f64, tol: f64, what: &str) {
         "{what}: got {actual}, expected {expected} (relative difference {rel:.4e} > tolerance {tol:.1e})"
     );
 }
+
+/// A member from its member-file JSON (version-3 keys allowed), for the
+/// bending references. A member that does not read is the test's own bug,
+/// so it panics with the reason.
+#[allow(clippy::panic)]
+pub fn member_from_json(value: serde_json::Value) -> strutline_core::Member {
+    strutline_core::file::member_from_value(&value, 0)
+        .unwrap_or_else(|e| panic!("a reference member must read: {e}"))
+}

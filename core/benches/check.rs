@@ -140,6 +140,10 @@ fn member(i: usize) -> Member {
                 i_minor_mm4: 1.5e7,
                 torsion_mm4: None,
                 warping_mm6: None,
+                w_el_major_mm3: None,
+                w_el_minor_mm3: None,
+                w_pl_major_mm3: None,
+                w_pl_minor_mm3: None,
             }),
             MaterialSpec::Timber {
                 fc0k_mpa: 24.0,
@@ -151,32 +155,50 @@ fn member(i: usize) -> Member {
         ),
     };
     Member {
-        id: format!("B{i}"),
-        note: None,
-        section,
-        material,
-        length_mm: 2500.0 + 50.0 * f,
-        k_major: 1.0,
         k_minor: if i.is_multiple_of(3) { 0.7 } else { 1.0 },
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 150.0 + 10.0 * f,
-        method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
+        ..Member::new(
+            format!("B{i}"),
+            section,
+            material,
+            2500.0 + 50.0 * f,
+            150.0 + 10.0 * f,
+            method,
+        )
     }
 }
 
+/// A member with moments (member file version 3): the shapes and methods
+/// of [`member`] that have a bending rule (I, RHS, CHS, timber rectangle
+/// under EN 1993-1-1, AISC LRFD and ASD, CSA S16, EN 1995-1-1), with end
+/// and span moments about both axes; every other one also carries axial
+/// load (the path that warns that the interaction is not checked).
+fn with_moments(i: usize) -> Member {
+    let mut m = member((i / 6) * 10 + i % 6);
+    let f = (i % 7) as f64;
+    m.m_major_a_knm = 20.0 + f;
+    m.m_major_b_knm = -10.0;
+    m.m_major_span_knm = 30.0;
+    m.m_minor_a_knm = 2.0;
+    if i.is_multiple_of(2) {
+        m.axial_kn = 0.0;
+    }
+    if matches!(m.section, SectionSpec::Rect(_)) {
+        m.m_major_a_knm = 2.0 + 0.1 * f;
+        m.m_major_b_knm = -1.0;
+        m.m_major_span_knm = 3.0;
+        m.m_minor_a_knm = 0.2;
+    }
+    m
+}
+
 fn bench(c: &mut Criterion) {
+    let beams: Vec<Member> = (0..MEMBERS).map(with_moments).collect();
+    for m in &beams {
+        if let Err(e) = strutline_core::check_member(m) {
+            eprintln!("benchmark member with moments does not check: {e}");
+            std::process::exit(1);
+        }
+    }
     let members: Vec<Member> = (0..MEMBERS).map(member).collect();
     // Every member must check: a benchmark of errors would measure nothing.
     for m in &members {
@@ -191,6 +213,17 @@ fn bench(c: &mut Criterion) {
         b.iter(|| {
             let mut passing = 0usize;
             for m in &members {
+                if let Ok(r) = strutline_core::check_member(black_box(m)) {
+                    passing += usize::from(r.passes);
+                }
+            }
+            black_box(passing)
+        })
+    });
+    group.bench_function("10k_members_with_moments", |b| {
+        b.iter(|| {
+            let mut passing = 0usize;
+            for m in &beams {
                 if let Ok(r) = strutline_core::check_member(black_box(m)) {
                     passing += usize::from(r.passes);
                 }

@@ -21,10 +21,7 @@
 //! Adding a series is adding a data file and one line in [`FILES`].
 
 use std::collections::HashMap;
-use std::hash::BuildHasherDefault;
 use std::sync::OnceLock;
-
-use crate::fnv::Fnv;
 
 use crate::error::{Error, Result};
 use crate::section::{Chs, Family, HollowMake, IMake, IShape, Rhs, Section, SectionSpec};
@@ -121,7 +118,7 @@ impl Series {
     }
 }
 
-type Index = HashMap<Box<str>, usize, BuildHasherDefault<Fnv>>;
+type Index = HashMap<Box<str>, usize, rustc_hash::FxBuildHasher>;
 
 struct Catalogue {
     entries: Vec<Entry>,
@@ -136,7 +133,7 @@ struct Catalogue {
 
 fn catalogue() -> &'static Catalogue {
     static CATALOGUE: OnceLock<Catalogue> = OnceLock::new();
-    CATALOGUE.get_or_init(build)
+    CATALOGUE.get_or_init(load)
 }
 
 /// Longest normalised key, bytes.
@@ -347,7 +344,7 @@ struct Spellings {
     patterns: Vec<&'static str>,
 }
 
-fn build() -> Catalogue {
+fn load() -> Catalogue {
     let mut cat = Catalogue {
         entries: Vec::new(),
         series: Vec::new(),
@@ -676,25 +673,23 @@ pub fn section(designation: &str) -> Result<Section> {
     }
 }
 
-/// Levenshtein distance between two byte strings.
-fn edit_distance(a: &[u8], b: &[u8]) -> usize {
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur = vec![0; b.len() + 1];
-    for (i, ca) in a.iter().enumerate() {
-        if let Some(c0) = cur.first_mut() {
-            *c0 = i + 1;
-        }
-        for (j, cb) in b.iter().enumerate() {
-            let sub = prev.get(j).copied().unwrap_or(0) + usize::from(ca != cb);
-            let del = prev.get(j + 1).copied().unwrap_or(0) + 1;
-            let ins = cur.get(j).copied().unwrap_or(0) + 1;
-            if let Some(slot) = cur.get_mut(j + 1) {
-                *slot = sub.min(del).min(ins);
-            }
-        }
-        std::mem::swap(&mut prev, &mut cur);
+/// Builds any section spec: a catalogue reference through [`section`] (an
+/// unknown designation is [`Error::UnknownDesignation`]), any other spec
+/// from its dimensions.
+pub fn build(spec: &SectionSpec) -> Result<Section> {
+    match spec {
+        SectionSpec::Catalogue(c) => section(&c.designation),
+        other => other.build(),
     }
-    prev.get(b.len()).copied().unwrap_or(0)
+}
+
+/// The family of any section spec, resolving a catalogue reference (an
+/// unknown designation is [`Error::UnknownDesignation`]).
+pub fn family(spec: &SectionSpec) -> Result<Family> {
+    match spec {
+        SectionSpec::Catalogue(c) => family(&resolve(&c.designation)?.spec),
+        other => other.family().ok_or_else(|| unknown("")),
+    }
 }
 
 /// Up to `n` designations nearest to `designation`, nearest first: the
@@ -709,7 +704,7 @@ pub fn nearest(designation: &str, n: usize) -> Vec<String> {
     let query_numbers = numbers(&query);
     let mut best: Vec<(usize, usize)> = vec![(usize::MAX, usize::MAX); cat.entries.len()];
     for (key, &i) in &cat.index {
-        let dist = edit_distance(query.as_bytes(), key.as_bytes());
+        let dist = crate::names::edit_distance(query.as_bytes(), key.as_bytes());
         if let Some(slot) = best.get_mut(i) {
             if dist < slot.0 {
                 *slot = (dist, i);
@@ -786,7 +781,7 @@ pub fn find_series(name: &str) -> Option<&'static Series> {
 pub fn family_entries(family: Family) -> Vec<&'static Entry> {
     entries()
         .iter()
-        .filter(|e| e.spec.family() == family)
+        .filter(|e| e.spec.family() == Some(family))
         .collect()
 }
 
@@ -1006,12 +1001,5 @@ mod tests {
             text = if upper { text.to_uppercase() } else { text.to_lowercase() };
             proptest::prop_assert_eq!(resolve(&text).map(|r| r.designation), Ok(e.designation));
         }
-    }
-
-    #[test]
-    fn edit_distance_is_levenshtein() {
-        assert_eq!(edit_distance(b"kitten", b"sitting"), 3);
-        assert_eq!(edit_distance(b"", b"abc"), 3);
-        assert_eq!(edit_distance(b"HE200B", b"HE200B"), 0);
     }
 }

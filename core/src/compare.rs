@@ -124,33 +124,17 @@ mod tests {
     use crate::section::{Rect, SectionSpec};
 
     fn member(material: MaterialSpec, method: Method) -> Member {
-        Member {
-            id: "K7".into(),
-            note: None,
-            section: SectionSpec::Rect(Rect {
+        Member::new(
+            "K7",
+            SectionSpec::Rect(Rect {
                 depth_mm: 140.0,
                 width_mm: 90.0,
             }),
             material,
-            length_mm: 2700.0,
-            k_major: 1.0,
-            k_minor: 1.0,
-            k_torsion: 1.0,
-            lcr_major_mm: None,
-            lcr_minor_mm: None,
-            lcr_torsion_mm: None,
-            axial_kn: 40.0,
+            2700.0,
+            40.0,
             method,
-            gamma_m1: None,
-            curve_major: None,
-            curve_minor: None,
-            bow_mm: None,
-            eccentricity_mm: None,
-            service_class: None,
-            load_duration: None,
-            csa_n: None,
-            angle_connection: None,
-        }
+        )
     }
 
     fn steel() -> MaterialSpec {

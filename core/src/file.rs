@@ -18,8 +18,12 @@ pub const FORMAT: &str = "strutline.members";
 /// The version this build writes; it reads every version from 1 to this.
 ///
 /// Version 2 added the optional member key `angle_connection` (AISC 360-16
-/// E5); a version-1 file reads as it was written.
-pub const VERSION: u64 = 2;
+/// E5); a version-1 file reads as it was written. Version 3 added the
+/// optional bending keys (`m_major_a_knm`, ..., `span_load_major`, `k_lt`,
+/// `lcr_lt_mm`, `lt_restrained`, `load_level`, and the given section's
+/// `w_el_*_mm3`, `w_pl_*_mm3`) and the optional top-level `sheet` (the calc
+/// sheet's header); a version-2 file carries no moments and no header.
+pub const VERSION: u64 = 3;
 
 /// The largest member-file text accepted, bytes (5 MiB).
 pub const MAX_BYTES: usize = 5 * 1024 * 1024;
@@ -122,6 +126,13 @@ fn migrate(mut value: Value, version: u64) -> Result<Value> {
     if version == 1 {
         if let Some(o) = value.as_object_mut() {
             o.insert("version".into(), Value::from(2u64));
+        }
+    }
+    // 2 -> 3: version 3 only adds optional keys (moments default to 0), so
+    // a version-2 file is version 3 as it stands.
+    if version == 2 {
+        if let Some(o) = value.as_object_mut() {
+            o.insert("version".into(), Value::from(3u64));
         }
     }
     Ok(value)
@@ -356,13 +367,13 @@ mod tests {
                 newest: VERSION
             }
         );
-        assert!(e.to_string().contains("versions 1 to 2"));
+        assert!(e.to_string().contains("versions 1 to 3"));
     }
 
     #[test]
     fn version_1_lifts_and_version_2_keeps_the_angle_connection() {
         let f = parse(ONE).unwrap();
-        assert_eq!((f.version, f.members[0].angle_connection), (2, None));
+        assert_eq!((f.version, f.members[0].angle_connection), (3, None));
         assert_eq!(migrate(parse_value(ONE), 1).unwrap()["version"], 2);
         let two = ONE.replace("\"version\": 1", "\"version\": 2").replace(
             "\"method\": \"euler\"",
@@ -378,6 +389,33 @@ mod tests {
         let bad = two.replace("\"short\"", "\"middle\"");
         let e = parse(&bad).unwrap_err().to_string();
         assert!(e.contains("angle_connection"), "{e}");
+    }
+
+    #[test]
+    fn version_2_lifts_and_version_3_keeps_the_bending_keys() {
+        let two = ONE.replace("\"version\": 1", "\"version\": 2");
+        assert_eq!(migrate(parse_value(&two), 2).unwrap()["version"], 3);
+        let f = parse(&two).unwrap();
+        assert!(!f.members[0].has_moments());
+        let three = ONE.replace("\"version\": 1", "\"version\": 3").replace(
+            "\"method\": \"euler\"",
+            "\"method\": \"euler\", \"m_major_a_knm\": 12.5, \"m_major_b_knm\": -4, \
+             \"m_minor_span_knm\": 2, \"span_load_minor\": \"point\", \"k_lt\": 0.7, \
+             \"lt_restrained\": true, \"load_level\": \"compression-flange\"",
+        );
+        let f = parse(&three).unwrap();
+        let m = &f.members[0];
+        assert_eq!(
+            (m.m_major_a_knm, m.m_major_b_knm, m.m_minor_span_knm),
+            (12.5, -4.0, 2.0)
+        );
+        assert_eq!(m.span_load_minor, crate::member::SpanLoad::Point);
+        assert_eq!(m.load_level, crate::member::LoadLevel::CompressionFlange);
+        assert!(m.lt_restrained && m.k_lt == 0.7);
+        assert_eq!(parse(&f.to_json()).unwrap(), f);
+        let bad = three.replace("\"point\"", "\"triangle\"");
+        let e = parse(&bad).unwrap_err().to_string();
+        assert!(e.contains("P1") && e.contains("span_load_minor"), "{e}");
     }
 
     #[test]

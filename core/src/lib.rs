@@ -11,6 +11,7 @@
 //! against the governing code, its national annex and the judgement of a
 //! licensed engineer.
 
+pub mod bending;
 pub mod catalogue;
 pub mod check;
 pub mod compare;
@@ -19,10 +20,11 @@ pub mod decimal;
 pub mod envelope;
 pub mod error;
 pub mod file;
-mod fnv;
 pub mod material;
 pub mod member;
 pub mod method;
+pub mod names;
+pub mod outcome;
 pub mod section;
 pub mod sizing;
 pub mod solve;
@@ -30,11 +32,11 @@ pub mod stability;
 pub mod trace;
 pub mod trig;
 pub mod units;
-pub mod wire;
 
-pub use check::{check_member, CheckResult, Mode, ModeResult};
+pub use check::{check_member, CheckResult};
 pub use error::Error;
 pub use member::Member;
+pub use outcome::{Mode, ModeResult, Warning};
 
 /// The caution shown beside every result, in every front end.
 pub const CAUTION: &str =

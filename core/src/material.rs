@@ -17,6 +17,7 @@
 use serde::{Deserialize, Serialize};
 
 use crate::error::{positive, Error, Result};
+use crate::names;
 use crate::section::{Family, HollowMake, Section, SectionSpec};
 
 /// Solid (sawn) timber or glued laminated timber: sets beta_c and gamma_M.
@@ -29,10 +30,8 @@ pub enum TimberKind {
     Glulam,
 }
 
-/// A material as written in the member file. The browser build reads it
-/// through [`crate::wire::material`] (smaller code, same rules).
-#[derive(Debug, Clone, PartialEq, Serialize)]
-#[cfg_attr(not(target_arch = "wasm32"), derive(Deserialize))]
+/// A material as written in the member file.
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(untagged)]
 pub enum MaterialSpec {
     /// A named grade or strength class ("S355", "A992", "C24", "GL28h").
@@ -61,13 +60,6 @@ pub enum MaterialSpec {
         #[serde(default, skip_serializing_if = "Option::is_none")]
         g_mpa: Option<f64>,
     },
-}
-
-#[cfg(target_arch = "wasm32")]
-impl<'de> Deserialize<'de> for MaterialSpec {
-    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> std::result::Result<Self, D::Error> {
-        crate::wire::material(serde_json::Value::deserialize(d)?).map_err(serde::de::Error::custom)
-    }
 }
 
 /// A resolved steel (or custom elastic-plastic) material.
@@ -132,9 +124,10 @@ impl Material {
     }
 }
 
-/// 1 ksi in MPa (exact to the digits given: 1 ksi = 1000 lbf/in2 =
-/// 6.894757 MPa, NIST SP 811 Appendix B).
-pub const KSI: f64 = 6.894757;
+/// 1 ksi in MPa: [`crate::units::MPA_PER_KSI`], worked from the exact
+/// definitions of the inch and the pound-force (NIST SP 811 Appendix B
+/// gives 6.894757 MPa to seven digits).
+pub const KSI: f64 = crate::units::MPA_PER_KSI;
 
 /// E for EN grades, MPa (EN 1993-1-1:2005 3.2.6(1)).
 pub const E_EN: f64 = 210_000.0;
@@ -161,342 +154,6 @@ struct SteelGrade {
     covers: &'static str,
 }
 
-// EN 10025-2:2019 Table 7, minimum upper yield strength R_eH for nominal
-// thickness <= 16, 16-40, 40-63, 63-80, 80-100, 100-150, 150-200, 200-250 mm
-// (recalled from memory; the steps above 150 mm apply to long products and
-// most flat products).
-const S235: SteelGrade = SteelGrade {
-    name: "S235",
-    standard: "EN 10025-2:2019 Table 7",
-    bands: &[
-        (16.0, 235.0),
-        (40.0, 225.0),
-        (63.0, 215.0),
-        (80.0, 215.0),
-        (100.0, 215.0),
-        (150.0, 195.0),
-        (200.0, 185.0),
-        (250.0, 175.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 250 mm (EN 10025-2:2019 Table 7)",
-};
-const S275: SteelGrade = SteelGrade {
-    name: "S275",
-    standard: "EN 10025-2:2019 Table 7",
-    bands: &[
-        (16.0, 275.0),
-        (40.0, 265.0),
-        (63.0, 255.0),
-        (80.0, 245.0),
-        (100.0, 235.0),
-        (150.0, 225.0),
-        (200.0, 215.0),
-        (250.0, 205.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 250 mm (EN 10025-2:2019 Table 7)",
-};
-const S355: SteelGrade = SteelGrade {
-    name: "S355",
-    standard: "EN 10025-2:2019 Table 7",
-    bands: &[
-        (16.0, 355.0),
-        (40.0, 345.0),
-        (63.0, 335.0),
-        (80.0, 325.0),
-        (100.0, 315.0),
-        (150.0, 295.0),
-        (200.0, 285.0),
-        (250.0, 275.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 250 mm (EN 10025-2:2019 Table 7)",
-};
-// EN 10025-3:2019 (normalized fine-grain steels, S420N/NL, S460N/NL),
-// table of mechanical properties at room temperature, R_eH min (recalled
-// from memory).
-const S420N: SteelGrade = SteelGrade {
-    name: "S420",
-    standard: "EN 10025-3:2019 (S420N/NL)",
-    bands: &[
-        (16.0, 420.0),
-        (40.0, 400.0),
-        (63.0, 390.0),
-        (80.0, 370.0),
-        (100.0, 360.0),
-        (150.0, 340.0),
-        (200.0, 330.0),
-        (250.0, 320.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 250 mm (EN 10025-3:2019)",
-};
-const S460N: SteelGrade = SteelGrade {
-    name: "S460",
-    standard: "EN 10025-3:2019 (S460N/NL)",
-    bands: &[
-        (16.0, 460.0),
-        (40.0, 440.0),
-        (63.0, 430.0),
-        (80.0, 410.0),
-        (100.0, 400.0),
-        (150.0, 380.0),
-        (200.0, 370.0),
-        (250.0, 370.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 250 mm (EN 10025-3:2019)",
-};
-// EN 10025-4:2019 (thermomechanically rolled, S420M/ML, S460M/ML), R_eH min
-// (recalled from memory; the range is taken as ending at 120 mm).
-const S420M: SteelGrade = SteelGrade {
-    name: "S420M",
-    standard: "EN 10025-4:2019 (S420M/ML)",
-    bands: &[
-        (16.0, 420.0),
-        (40.0, 400.0),
-        (63.0, 390.0),
-        (80.0, 380.0),
-        (100.0, 370.0),
-        (120.0, 365.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 120 mm (EN 10025-4:2019)",
-};
-const S460M: SteelGrade = SteelGrade {
-    name: "S460M",
-    standard: "EN 10025-4:2019 (S460M/ML)",
-    bands: &[
-        (16.0, 460.0),
-        (40.0, 440.0),
-        (63.0, 430.0),
-        (80.0, 410.0),
-        (100.0, 400.0),
-        (120.0, 385.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a governing thickness up to 120 mm (EN 10025-4:2019)",
-};
-// EN 10210-1:2006 (hot-finished hollow sections), Annex A (non-alloy
-// S235JRH ... S355K2H) and Annex B (fine grain S420NH, S460NH), R_eH min
-// for t <= 16, 16-40, 40-63, 63-80, 80-100, 100-120 mm (recalled from memory).
-const S235H_HOT: SteelGrade = SteelGrade {
-    name: "S235H",
-    standard: "EN 10210-1:2006 (hot-finished hollow)",
-    bands: &[
-        (16.0, 235.0),
-        (40.0, 225.0),
-        (63.0, 215.0),
-        (80.0, 215.0),
-        (100.0, 215.0),
-        (120.0, 195.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 120 mm (EN 10210-1:2006)",
-};
-const S275H_HOT: SteelGrade = SteelGrade {
-    name: "S275H",
-    standard: "EN 10210-1:2006 (hot-finished hollow)",
-    bands: &[
-        (16.0, 275.0),
-        (40.0, 265.0),
-        (63.0, 255.0),
-        (80.0, 245.0),
-        (100.0, 235.0),
-        (120.0, 225.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 120 mm (EN 10210-1:2006)",
-};
-const S355H_HOT: SteelGrade = SteelGrade {
-    name: "S355H",
-    standard: "EN 10210-1:2006 (hot-finished hollow)",
-    bands: &[
-        (16.0, 355.0),
-        (40.0, 345.0),
-        (63.0, 335.0),
-        (80.0, 325.0),
-        (100.0, 315.0),
-        (120.0, 295.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 120 mm (EN 10210-1:2006)",
-};
-const S420H_HOT: SteelGrade = SteelGrade {
-    name: "S420H",
-    standard: "EN 10210-1:2006 (hot-finished hollow, S420NH/NLH)",
-    bands: &[
-        (16.0, 420.0),
-        (40.0, 400.0),
-        (63.0, 390.0),
-        (80.0, 370.0),
-        (100.0, 360.0),
-        (120.0, 340.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 120 mm (EN 10210-1:2006)",
-};
-const S460H_HOT: SteelGrade = SteelGrade {
-    name: "S460H",
-    standard: "EN 10210-1:2006 (hot-finished hollow, S460NH/NLH)",
-    bands: &[
-        (16.0, 460.0),
-        (40.0, 440.0),
-        (63.0, 430.0),
-        (80.0, 410.0),
-        (100.0, 400.0),
-        (120.0, 380.0),
-    ],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 120 mm (EN 10210-1:2006)",
-};
-// EN 10219-1:2006 (cold-formed welded hollow sections), Annex A (non-alloy)
-// and Annex B (S420MH, S460MH), R_eH min for t <= 16 and 16-40 mm; the
-// standard covers walls up to 40 mm (recalled from memory).
-const S235H_COLD: SteelGrade = SteelGrade {
-    name: "S235H",
-    standard: "EN 10219-1:2006 (cold-formed hollow)",
-    bands: &[(16.0, 235.0), (40.0, 225.0)],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 40 mm (EN 10219-1:2006)",
-};
-const S275H_COLD: SteelGrade = SteelGrade {
-    name: "S275H",
-    standard: "EN 10219-1:2006 (cold-formed hollow)",
-    bands: &[(16.0, 275.0), (40.0, 265.0)],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 40 mm (EN 10219-1:2006)",
-};
-const S355H_COLD: SteelGrade = SteelGrade {
-    name: "S355H",
-    standard: "EN 10219-1:2006 (cold-formed hollow)",
-    bands: &[(16.0, 355.0), (40.0, 345.0)],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 40 mm (EN 10219-1:2006)",
-};
-const S420H_COLD: SteelGrade = SteelGrade {
-    name: "S420H",
-    standard: "EN 10219-1:2006 (cold-formed hollow, S420MH/MLH)",
-    bands: &[(16.0, 420.0), (40.0, 400.0)],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 40 mm (EN 10219-1:2006)",
-};
-const S460H_COLD: SteelGrade = SteelGrade {
-    name: "S460H",
-    standard: "EN 10219-1:2006 (cold-formed hollow, S460MH/MLH)",
-    bands: &[(16.0, 460.0), (40.0, 440.0)],
-    e: E_EN,
-    g: G_EN,
-    covers: "a wall up to 40 mm (EN 10219-1:2006)",
-};
-// ASTM A992/A992M: F_y = 50 ksi minimum (AISC Steel Construction Manual
-// Table 2-4 lists it as the preferred grade for W shapes; common practice).
-const A992: SteelGrade = SteelGrade {
-    name: "A992",
-    standard: "ASTM A992/A992M (Fy = 50 ksi)",
-    bands: &[(f64::INFINITY, 50.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-// ASTM A36/A36M: F_y = 36 ksi for shapes, 32 ksi for plates over 8 in
-// (203.2 mm) thick (recalled from memory).
-const A36: SteelGrade = SteelGrade {
-    name: "A36",
-    standard: "ASTM A36/A36M (Fy = 36 ksi; 32 ksi over 8 in)",
-    bands: &[(203.2, 36.0 * KSI), (f64::INFINITY, 32.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-// ASTM A500 (cold-formed HSS): Grade C F_y = 46 ksi round, 50 ksi shaped;
-// Grade B 42 ksi round, 46 ksi shaped (A500/A500M-18 Table 2; AISC Manual
-// Table 2-4; recalled from memory).
-const A500C_ROUND: SteelGrade = SteelGrade {
-    name: "A500 Grade C",
-    standard: "ASTM A500 Grade C, round HSS (Fy = 46 ksi)",
-    bands: &[(f64::INFINITY, 46.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-const A500C_SHAPED: SteelGrade = SteelGrade {
-    name: "A500 Grade C",
-    standard: "ASTM A500 Grade C, shaped HSS (Fy = 50 ksi)",
-    bands: &[(f64::INFINITY, 50.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-const A500C_UNKNOWN: SteelGrade = SteelGrade {
-    name: "A500 Grade C",
-    standard: "ASTM A500 Grade C, shape not known: the round value Fy = 46 ksi (the lower) is used",
-    bands: &[(f64::INFINITY, 46.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-const A500B_ROUND: SteelGrade = SteelGrade {
-    name: "A500 Grade B",
-    standard: "ASTM A500 Grade B, round HSS (Fy = 42 ksi)",
-    bands: &[(f64::INFINITY, 42.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-const A500B_SHAPED: SteelGrade = SteelGrade {
-    name: "A500 Grade B",
-    standard: "ASTM A500 Grade B, shaped HSS (Fy = 46 ksi)",
-    bands: &[(f64::INFINITY, 46.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-const A500B_UNKNOWN: SteelGrade = SteelGrade {
-    name: "A500 Grade B",
-    standard: "ASTM A500 Grade B, shape not known: the round value Fy = 42 ksi (the lower) is used",
-    bands: &[(f64::INFINITY, 42.0 * KSI)],
-    e: E_ASTM,
-    g: G_ASTM,
-    covers: "any thickness",
-};
-// CSA G40.21 350W: F_y = 350 MPa; plates over 65 mm thick 320 MPa
-// (recalled from memory). 300W: 300 MPa; plates over 65 mm 280 MPa
-// (recalled from memory).
-const G40_350W: SteelGrade = SteelGrade {
-    name: "350W",
-    standard: "CSA G40.21 350W",
-    bands: &[(65.0, 350.0), (f64::INFINITY, 320.0)],
-    e: E_CSA,
-    g: G_CSA,
-    covers: "any thickness",
-};
-const G40_300W: SteelGrade = SteelGrade {
-    name: "300W",
-    standard: "CSA G40.21 300W",
-    bands: &[(65.0, 300.0), (f64::INFINITY, 280.0)],
-    e: E_CSA,
-    g: G_CSA,
-    covers: "any thickness",
-};
-
 /// A timber class.
 struct TimberClass {
     name: &'static str,
@@ -508,95 +165,9 @@ struct TimberClass {
     gmean: f64,
 }
 
-// EN 338:2016 Table 1 (softwood, edgewise bending classes): f_c,0,k,
-// E_0,mean, E_0,05, G_mean in MPa (the same values as EN 338:2009 Table 1
-// for these classes; recalled from memory).
-const TIMBER: [TimberClass; 9] = [
-    TimberClass {
-        name: "C16",
-        standard: "EN 338:2016 Table 1",
-        kind: TimberKind::Solid,
-        fc0k: 17.0,
-        e0mean: 8_000.0,
-        e005: 5_400.0,
-        gmean: 500.0,
-    },
-    TimberClass {
-        name: "C24",
-        standard: "EN 338:2016 Table 1",
-        kind: TimberKind::Solid,
-        fc0k: 21.0,
-        e0mean: 11_000.0,
-        e005: 7_400.0,
-        gmean: 690.0,
-    },
-    TimberClass {
-        name: "C30",
-        standard: "EN 338:2016 Table 1",
-        kind: TimberKind::Solid,
-        fc0k: 24.0,
-        e0mean: 12_000.0,
-        e005: 8_000.0,
-        gmean: 750.0,
-    },
-    // EN 14080:2013 Table 5 (homogeneous glulam): f_c,0,g,k, E_0,g,mean,
-    // E_0,g,05, G_g,mean in MPa (recalled from memory).
-    TimberClass {
-        name: "GL24h",
-        standard: "EN 14080:2013 Table 5",
-        kind: TimberKind::Glulam,
-        fc0k: 24.0,
-        e0mean: 11_500.0,
-        e005: 9_600.0,
-        gmean: 650.0,
-    },
-    TimberClass {
-        name: "GL28h",
-        standard: "EN 14080:2013 Table 5",
-        kind: TimberKind::Glulam,
-        fc0k: 28.0,
-        e0mean: 12_600.0,
-        e005: 10_500.0,
-        gmean: 650.0,
-    },
-    TimberClass {
-        name: "GL32h",
-        standard: "EN 14080:2013 Table 5",
-        kind: TimberKind::Glulam,
-        fc0k: 32.0,
-        e0mean: 14_200.0,
-        e005: 11_800.0,
-        gmean: 650.0,
-    },
-    // EN 14080:2013 Table 4 (combined glulam): as above (recalled from memory).
-    TimberClass {
-        name: "GL24c",
-        standard: "EN 14080:2013 Table 4",
-        kind: TimberKind::Glulam,
-        fc0k: 21.5,
-        e0mean: 11_000.0,
-        e005: 9_100.0,
-        gmean: 650.0,
-    },
-    TimberClass {
-        name: "GL28c",
-        standard: "EN 14080:2013 Table 4",
-        kind: TimberKind::Glulam,
-        fc0k: 24.0,
-        e0mean: 12_500.0,
-        e005: 10_400.0,
-        gmean: 650.0,
-    },
-    TimberClass {
-        name: "GL32c",
-        standard: "EN 14080:2013 Table 4",
-        kind: TimberKind::Glulam,
-        fc0k: 24.5,
-        e0mean: 13_500.0,
-        e005: 11_200.0,
-        gmean: 650.0,
-    },
-];
+// The grade and class tables: `data/materials/steel.csv` and `timber.csv`
+// (each value with its source there), turned into constants by build.rs.
+include!(concat!(env!("OUT_DIR"), "/materials.rs"));
 
 /// The grade names this build knows, as offered in suggestions and lists.
 pub const KNOWN_GRADES: [&str; 27] = [
@@ -641,14 +212,6 @@ enum Found {
         &'static SteelGrade,
     ),
     Timber(&'static TimberClass),
-}
-
-/// Upper case, letters and digits only.
-fn normalise(name: &str) -> String {
-    name.chars()
-        .filter(|c| c.is_ascii_alphanumeric())
-        .map(|c| c.to_ascii_uppercase())
-        .collect()
 }
 
 /// A grade name normalised on the stack (upper case, letters and digits
@@ -754,42 +317,20 @@ fn find(name: &str) -> Option<Found> {
     Some(found)
 }
 
-/// Edit distance between two short strings (Levenshtein), for suggestions.
-fn edit_distance(a: &str, b: &str) -> usize {
-    let b: Vec<char> = b.chars().collect();
-    let mut prev: Vec<usize> = (0..=b.len()).collect();
-    let mut cur: Vec<usize> = vec![0; b.len() + 1];
-    for (i, ca) in a.chars().enumerate() {
-        if let Some(first) = cur.first_mut() {
-            *first = i + 1;
-        }
-        for (j, cb) in b.iter().enumerate() {
-            let sub = prev.get(j).copied().unwrap_or(usize::MAX - 1) + usize::from(ca != *cb);
-            let del = prev.get(j + 1).copied().unwrap_or(usize::MAX - 1) + 1;
-            let ins = cur.get(j).copied().unwrap_or(usize::MAX - 1) + 1;
-            if let Some(slot) = cur.get_mut(j + 1) {
-                *slot = sub.min(del).min(ins);
-            }
-        }
-        std::mem::swap(&mut prev, &mut cur);
-    }
-    prev.last().copied().unwrap_or(0)
-}
-
 /// Known grade names nearest to `grade`, nearest first (at most four).
 pub fn suggestions(grade: &str) -> Vec<String> {
-    let n = normalise(grade);
+    let n = names::alnum_upper(grade);
     let mut scored: Vec<(usize, &str)> = KNOWN_GRADES
         .iter()
         .map(|k| {
-            let kn = normalise(k);
-            let d = edit_distance(&n, &kn);
+            let kn = names::alnum_upper(k);
+            let d = names::edit_distance(n.as_bytes(), kn.as_bytes());
             // A shared prefix of two or more characters counts as close.
             let prefix =
                 !n.is_empty() && n.len() >= 2 && (kn.starts_with(&n) || n.starts_with(&kn));
             (if prefix { d.min(1) } else { d }, *k)
         })
-        .filter(|(d, k)| *d <= 2.max(normalise(k).len() / 2))
+        .filter(|(d, k)| *d <= 2.max(names::alnum_upper(k).len() / 2))
         .collect();
     scored.sort_by_key(|(d, _)| *d);
     scored
@@ -840,16 +381,19 @@ fn hollow_make(section: &Section) -> Option<HollowMake> {
 pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
     match spec {
         MaterialSpec::Grade { grade } => {
-            let t = section.spec.governing_thickness_mm();
+            let t = section.governing_thickness_mm();
             match find(grade) {
                 Some(Found::Steel(g)) => Ok(Material::Steel(steel_at(g, t)?)),
-                Some(Found::Hollow(hot, cold)) => {
-                    let g = match hollow_make(section) {
-                        Some(HollowMake::ColdFormed) => cold,
-                        _ => hot,
-                    };
-                    Ok(Material::Steel(steel_at(g, t)?))
-                }
+                Some(Found::Hollow(hot, cold)) => match hollow_make(section) {
+                    Some(HollowMake::ColdFormed) => Ok(Material::Steel(steel_at(cold, t)?)),
+                    // Make not given: cold-formed (the lower resistance, see
+                    // `section::HollowMake`), whose EN 10219-1 table stops at a
+                    // 40 mm wall; a thicker wall can only be hot-finished.
+                    Some(HollowMake::Unstated) => Ok(Material::Steel(
+                        steel_at(cold, t).or_else(|_| steel_at(hot, t))?,
+                    )),
+                    _ => Ok(Material::Steel(steel_at(hot, t)?)),
+                },
                 Some(Found::A500(round, shaped, unknown)) => {
                     let g = match section.family {
                         Family::Chs => round,
@@ -888,7 +432,7 @@ pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
                     Some(g) => positive("g_mpa", *g)?,
                     None => e / 2.6,
                 },
-                thickness_mm: section.spec.governing_thickness_mm().max(0.0),
+                thickness_mm: section.governing_thickness_mm().max(0.0),
                 band_up_to_mm: f64::INFINITY,
             }))
         }
@@ -1074,6 +618,10 @@ mod tests {
             i_minor_mm4: 1e5,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         })
         .build()
         .unwrap();

@@ -5,8 +5,7 @@ use serde::{Deserialize, Serialize};
 
 use crate::error::{non_negative, positive, Error, Result};
 use crate::material::MaterialSpec;
-use crate::method::Method;
-use crate::section::SectionSpec;
+use crate::section::{Section, SectionSpec};
 
 /// EN 1993-1-1 buckling curves (Table 6.1).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
@@ -102,6 +101,107 @@ pub struct AngleConnection {
     pub truss: Truss,
 }
 
+/// The shape of the moment caused by transverse load between the ends
+/// (member file version 3, keys `span_load_major`, `span_load_minor`).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize, Default)]
+#[serde(rename_all = "lowercase")]
+pub enum SpanLoad {
+    /// A uniformly distributed load: shape 4 s (1 - s), s = x / L.
+    #[default]
+    Uniform,
+    /// A point load at mid-length: shape 1 - |2 s - 1|.
+    Point,
+}
+
+impl SpanLoad {
+    /// The member-file name.
+    pub fn key(self) -> &'static str {
+        match self {
+            SpanLoad::Uniform => "uniform",
+            SpanLoad::Point => "point",
+        }
+    }
+
+    /// The span moment's shape at s = x / L, 1 at mid-length, 0 at the ends.
+    pub fn shape(self, s: f64) -> f64 {
+        match self {
+            SpanLoad::Uniform => 4.0 * s * (1.0 - s),
+            SpanLoad::Point => 1.0 - (2.0 * s - 1.0).abs(),
+        }
+    }
+}
+
+/// Where transverse load acts on the section's depth (member file version
+/// 3, key `load_level`): it raises or lowers the elastic critical moment.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize, Default)]
+#[serde(rename_all = "kebab-case")]
+pub enum LoadLevel {
+    /// At the shear centre (neutral).
+    #[default]
+    ShearCentre,
+    /// On the compression flange (destabilising).
+    CompressionFlange,
+    /// On the tension flange (stabilising).
+    TensionFlange,
+}
+
+impl LoadLevel {
+    /// The member-file name.
+    pub fn key(self) -> &'static str {
+        match self {
+            LoadLevel::ShearCentre => "shear-centre",
+            LoadLevel::CompressionFlange => "compression-flange",
+            LoadLevel::TensionFlange => "tension-flange",
+        }
+    }
+}
+
+/// The design moments about one axis (member file version 3): the values of
+/// the bending-moment diagram at end A (x = 0) and end B (x = L), and the
+/// moment at mid-length from transverse load measured from the straight line
+/// joining them. M(x) = M_a + (M_b - M_a) s + M_span shape(s), s = x / L.
+#[derive(Debug, Clone, Copy, PartialEq, Default)]
+pub struct Moments {
+    /// M_a, kNm.
+    pub a_knm: f64,
+    /// M_b, kNm.
+    pub b_knm: f64,
+    /// M_span, kNm.
+    pub span_knm: f64,
+    /// The span moment's shape.
+    pub span_load: SpanLoad,
+}
+
+impl Moments {
+    /// Whether every moment is zero.
+    pub fn is_zero(&self) -> bool {
+        self.a_knm == 0.0 && self.b_knm == 0.0 && self.span_knm == 0.0
+    }
+
+    /// M(s) at s = x / L, kNm.
+    pub fn at(&self, s: f64) -> f64 {
+        self.a_knm + (self.b_knm - self.a_knm) * s + self.span_knm * self.span_load.shape(s)
+    }
+
+    /// The largest |M(x)| along the member, kNm: at an end, at mid-length,
+    /// or (uniform load) at the stationary point of the parabola.
+    pub fn max_abs_knm(&self) -> f64 {
+        let mut m = self
+            .a_knm
+            .abs()
+            .max(self.b_knm.abs())
+            .max(self.at(0.5).abs());
+        if self.span_load == SpanLoad::Uniform && self.span_knm != 0.0 {
+            // dM/ds = (M_b - M_a) + 4 M_span (1 - 2 s) = 0.
+            let s = 0.5 + (self.b_knm - self.a_knm) / (8.0 * self.span_knm);
+            if s > 0.0 && s < 1.0 {
+                m = m.max(self.at(s).abs());
+            }
+        }
+        m
+    }
+}
+
 /// CSA S16-19 13.3.1 exponent n: 1.34 for most members, 2.24 for
 /// hot-finished hollow sections and stress-relieved welded sections.
 pub const CSA_N_DEFAULT: f64 = 1.34;
@@ -112,6 +212,18 @@ fn one() -> f64 {
 
 fn is_one(v: &f64) -> bool {
     *v == 1.0
+}
+
+fn is_zero(v: &f64) -> bool {
+    *v == 0.0
+}
+
+fn is_false(v: &bool) -> bool {
+    !*v
+}
+
+fn is_default<T: Default + PartialEq>(v: &T) -> bool {
+    *v == T::default()
 }
 
 /// One compression member.
@@ -178,6 +290,44 @@ pub struct Member {
     /// A single angle connected through one leg (AISC 360-16 E5; version 2).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub angle_connection: Option<AngleConnection>,
+    /// Design moment about the major axis at end A (x = 0), kNm (version 3).
+    #[serde(default, skip_serializing_if = "is_zero")]
+    pub m_major_a_knm: f64,
+    /// Design moment about the major axis at end B (x = L), kNm.
+    #[serde(default, skip_serializing_if = "is_zero")]
+    pub m_major_b_knm: f64,
+    /// Major-axis moment at mid-length from transverse load, measured from
+    /// the line joining the end moments, kNm.
+    #[serde(default, skip_serializing_if = "is_zero")]
+    pub m_major_span_knm: f64,
+    /// The shape of the major-axis span moment.
+    #[serde(default, skip_serializing_if = "is_default")]
+    pub span_load_major: SpanLoad,
+    /// Design moment about the minor axis at end A, kNm.
+    #[serde(default, skip_serializing_if = "is_zero")]
+    pub m_minor_a_knm: f64,
+    /// Design moment about the minor axis at end B, kNm.
+    #[serde(default, skip_serializing_if = "is_zero")]
+    pub m_minor_b_knm: f64,
+    /// Minor-axis moment at mid-length from transverse load, kNm.
+    #[serde(default, skip_serializing_if = "is_zero")]
+    pub m_minor_span_knm: f64,
+    /// The shape of the minor-axis span moment.
+    #[serde(default, skip_serializing_if = "is_default")]
+    pub span_load_minor: SpanLoad,
+    /// Effective-length factor for lateral-torsional buckling (default 1).
+    #[serde(default = "one", skip_serializing_if = "is_one")]
+    pub k_lt: f64,
+    /// Length between lateral-torsional restraints given directly, mm (wins over k_lt).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub lcr_lt_mm: Option<f64>,
+    /// The compression flange is held continuously against lateral movement
+    /// and twist: no lateral-torsional buckling.
+    #[serde(default, skip_serializing_if = "is_false")]
+    pub lt_restrained: bool,
+    /// Where transverse load acts on the depth.
+    #[serde(default, skip_serializing_if = "is_default")]
+    pub load_level: LoadLevel,
 }
 
 /// The longest length or buckling length accepted, mm (10 km): beyond it
@@ -202,6 +352,20 @@ fn bounded(field: &'static str, value: f64) -> Result<f64> {
     Ok(v)
 }
 
+/// The largest design moment accepted, kNm.
+pub const MAX_MOMENT_KNM: f64 = 1.0e7;
+
+fn moment(field: &'static str, value: f64) -> Result<f64> {
+    if !(value.is_finite() && value.abs() <= MAX_MOMENT_KNM) {
+        return Err(Error::OutOfRange {
+            field,
+            value,
+            expected: "a finite design moment from -10,000,000 to 10,000,000 kNm",
+        });
+    }
+    Ok(value)
+}
+
 /// Buckling lengths of a member, mm.
 #[derive(Debug, Clone, Copy, PartialEq)]
 pub struct BucklingLengths {
@@ -214,6 +378,62 @@ pub struct BucklingLengths {
 }
 
 impl Member {
+    /// A member with the keys every member needs and every option at its
+    /// member-file default (effective-length factors 1, no buckling
+    /// lengths, factors, curves, moments or other options given), as a
+    /// member file that gives only those keys reads (checked by a test). Set options on the result.
+    pub fn new(
+        id: impl Into<String>,
+        section: SectionSpec,
+        material: MaterialSpec,
+        length_mm: f64,
+        axial_kn: f64,
+        method: Method,
+    ) -> Member {
+        Member {
+            id: id.into(),
+            note: None,
+            section,
+            material,
+            length_mm,
+            k_major: 1.0,
+            k_minor: 1.0,
+            k_torsion: 1.0,
+            lcr_major_mm: None,
+            lcr_minor_mm: None,
+            lcr_torsion_mm: None,
+            axial_kn,
+            method,
+            gamma_m1: None,
+            curve_major: None,
+            curve_minor: None,
+            bow_mm: None,
+            eccentricity_mm: None,
+            service_class: None,
+            load_duration: None,
+            csa_n: None,
+            angle_connection: None,
+            m_major_a_knm: 0.0,
+            m_major_b_knm: 0.0,
+            m_major_span_knm: 0.0,
+            span_load_major: SpanLoad::default(),
+            m_minor_a_knm: 0.0,
+            m_minor_b_knm: 0.0,
+            m_minor_span_knm: 0.0,
+            span_load_minor: SpanLoad::default(),
+            k_lt: 1.0,
+            lcr_lt_mm: None,
+            lt_restrained: false,
+            load_level: LoadLevel::default(),
+        }
+    }
+
+    /// The member's section, built: a catalogue designation is resolved
+    /// here, once, and an unknown one is [`Error::UnknownDesignation`].
+    pub fn build_section(&self) -> Result<Section> {
+        crate::catalogue::build(&self.section)
+    }
+
     /// Checks every scalar field of the member (not the section or material,
     /// which check themselves) and returns its buckling lengths.
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
@@ -237,8 +457,75 @@ impl Member {
         })
     }
 
+    /// The moments about the major axis (version 3 keys).
+    pub fn moments_major(&self) -> Moments {
+        Moments {
+            a_knm: self.m_major_a_knm,
+            b_knm: self.m_major_b_knm,
+            span_knm: self.m_major_span_knm,
+            span_load: self.span_load_major,
+        }
+    }
+
+    /// The moments about the minor axis.
+    pub fn moments_minor(&self) -> Moments {
+        Moments {
+            a_knm: self.m_minor_a_knm,
+            b_knm: self.m_minor_b_knm,
+            span_knm: self.m_minor_span_knm,
+            span_load: self.span_load_minor,
+        }
+    }
+
+    /// Whether the member carries any design moment.
+    pub fn has_moments(&self) -> bool {
+        !(self.moments_major().is_zero() && self.moments_minor().is_zero())
+    }
+
+    /// The first moment key that is not zero, for messages.
+    pub fn first_moment_key(&self) -> Option<&'static str> {
+        [
+            ("m_major_a_knm", self.m_major_a_knm),
+            ("m_major_b_knm", self.m_major_b_knm),
+            ("m_major_span_knm", self.m_major_span_knm),
+            ("m_minor_a_knm", self.m_minor_a_knm),
+            ("m_minor_b_knm", self.m_minor_b_knm),
+            ("m_minor_span_knm", self.m_minor_span_knm),
+        ]
+        .into_iter()
+        .find(|(_, v)| *v != 0.0)
+        .map(|(k, _)| k)
+    }
+
+    /// The length between lateral-torsional restraints, mm: `lcr_lt_mm`, or
+    /// `k_lt` times the length.
+    pub fn lt_length_mm(&self) -> Result<f64> {
+        let k = positive("k_lt", self.k_lt)?;
+        match self.lcr_lt_mm {
+            Some(v) => bounded("lcr_lt_mm", v),
+            None => bounded("k_lt", k * self.length_mm),
+        }
+    }
+
+    /// Checks the bending keys (finite moments, a positive k_lt, a length
+    /// between restraints in range).
+    pub fn validate_bending(&self) -> Result<()> {
+        moment("m_major_a_knm", self.m_major_a_knm)?;
+        moment("m_major_b_knm", self.m_major_b_knm)?;
+        moment("m_major_span_knm", self.m_major_span_knm)?;
+        moment("m_minor_a_knm", self.m_minor_a_knm)?;
+        moment("m_minor_b_knm", self.m_minor_b_knm)?;
+        moment("m_minor_span_knm", self.m_minor_span_knm)?;
+        positive("k_lt", self.k_lt)?;
+        if let Some(v) = self.lcr_lt_mm {
+            bounded("lcr_lt_mm", v)?;
+        }
+        Ok(())
+    }
+
     /// Checks the method options that do not depend on the method.
     pub fn validate_options(&self) -> Result<()> {
+        self.validate_bending()?;
         non_negative("axial_kn", self.axial_kn)?;
         if self.axial_kn > MAX_AXIAL_KN {
             return Err(Error::OutOfRange {
@@ -248,11 +535,15 @@ impl Member {
             });
         }
         if let Some(g) = self.gamma_m1 {
-            if !(g.is_finite() && (0.5..=3.0).contains(&g)) {
+            // No code here has a material (partial) factor below 1.0
+            // (EN 1993-1-1 6.1(1) Note 2B recommends 1.00); below it the
+            // resistance would exceed the squash load.
+            if !(g.is_finite() && (1.0..=3.0).contains(&g)) {
                 return Err(Error::OutOfRange {
                     field: "gamma_m1",
                     value: g,
-                    expected: "a partial factor between 0.5 and 3.0",
+                    expected:
+                        "a partial factor from 1.0 to 3.0 (none of the codes has one below 1.0)",
                 });
             }
         }
@@ -287,5 +578,171 @@ impl Member {
             });
         }
         Ok(())
+    }
+}
+
+/// The design method of a member, as named in the member file.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
+pub enum Method {
+    /// EN 1993-1-1 6.3.1 flexural buckling.
+    #[serde(rename = "en1993-1-1")]
+    En1993,
+    /// AISC 360-16 chapter E, LRFD (phi_c = 0.90).
+    #[serde(rename = "aisc360-lrfd")]
+    AiscLrfd,
+    /// AISC 360-16 chapter E, ASD (Omega_c = 1.67).
+    #[serde(rename = "aisc360-asd")]
+    AiscAsd,
+    /// CSA S16-19 13.3.
+    #[serde(rename = "csa-s16")]
+    CsaS16,
+    /// EN 1995-1-1 6.3.2 timber columns.
+    #[serde(rename = "en1995-1-1")]
+    En1995,
+    /// Perry-Robertson with an explicit initial bow.
+    #[serde(rename = "perry-robertson")]
+    PerryRobertson,
+    /// Secant formula for an eccentric load, first yield.
+    #[serde(rename = "secant")]
+    Secant,
+    /// Euler's elastic critical load capped by the squash load.
+    #[serde(rename = "euler")]
+    Euler,
+}
+
+impl Method {
+    /// Every method, in the order the app lists them.
+    pub const ALL: [Method; 8] = [
+        Method::En1993,
+        Method::AiscLrfd,
+        Method::AiscAsd,
+        Method::CsaS16,
+        Method::En1995,
+        Method::PerryRobertson,
+        Method::Secant,
+        Method::Euler,
+    ];
+
+    /// The name used in the member file.
+    pub fn key(self) -> &'static str {
+        match self {
+            Method::En1993 => "en1993-1-1",
+            Method::AiscLrfd => "aisc360-lrfd",
+            Method::AiscAsd => "aisc360-asd",
+            Method::CsaS16 => "csa-s16",
+            Method::En1995 => "en1995-1-1",
+            Method::PerryRobertson => "perry-robertson",
+            Method::Secant => "secant",
+            Method::Euler => "euler",
+        }
+    }
+
+    /// A readable title.
+    pub fn title(self) -> &'static str {
+        match self {
+            Method::En1993 => "EN 1993-1-1 flexural buckling",
+            Method::AiscLrfd => "AISC 360-16 E3, LRFD",
+            Method::AiscAsd => "AISC 360-16 E3, ASD",
+            Method::CsaS16 => "CSA S16-19 13.3",
+            Method::En1995 => "EN 1995-1-1 timber column",
+            Method::PerryRobertson => "Perry-Robertson, initial bow",
+            Method::Secant => "Secant formula, eccentric load",
+            Method::Euler => "Euler, capped at squash load",
+        }
+    }
+
+    /// Parses the member-file name.
+    pub fn from_key(key: &str) -> Option<Method> {
+        Method::ALL.into_iter().find(|m| m.key() == key)
+    }
+
+    /// Whether the method is for timber (true) or for steel and custom elastic materials (false).
+    pub fn is_timber(self) -> bool {
+        matches!(self, Method::En1995)
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
+    use super::*;
+
+    #[test]
+    fn the_moment_diagram_is_the_documented_sum() {
+        let m = Moments {
+            a_knm: 10.0,
+            b_knm: -20.0,
+            span_knm: 8.0,
+            span_load: SpanLoad::Uniform,
+        };
+        assert_eq!((m.at(0.0), m.at(1.0), m.at(0.5)), (10.0, -20.0, 3.0));
+        // Point load: linear to mid-length.
+        let p = Moments {
+            span_load: SpanLoad::Point,
+            ..m
+        };
+        assert_eq!(p.at(0.25), 10.0 - 7.5 + 4.0);
+        // A simply supported beam under uniform load: the peak is the span moment.
+        let w = Moments {
+            a_knm: 0.0,
+            b_knm: 0.0,
+            span_knm: 50.0,
+            span_load: SpanLoad::Uniform,
+        };
+        assert_eq!(w.max_abs_knm(), 50.0);
+        // End moment plus a uniform load: the parabola's peak lies off mid-length.
+        // M(s) = 40 s + 40 s(1 - s)... with M_a = 0, M_b = 40, M_span = 20:
+        // M = 40 s + 80 s (1 - s), dM/ds = 40 + 80 - 160 s = 0 at s = 0.75, M = 45.
+        let e = Moments {
+            a_knm: 0.0,
+            b_knm: 40.0,
+            span_knm: 20.0,
+            span_load: SpanLoad::Uniform,
+        };
+        assert!((e.max_abs_knm() - 45.0).abs() < 1e-12);
+        assert!(Moments::default().is_zero());
+    }
+
+    #[test]
+    fn new_is_what_a_file_with_only_the_needed_keys_reads() {
+        let text = r#"{"id": "N1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
+            "material": {"grade": "S355"}, "length_mm": 2000, "axial_kn": 10, "method": "euler"}"#;
+        let read: Member = serde_json::from_str(text).unwrap();
+        let made = Member::new(
+            "N1",
+            SectionSpec::Rect(crate::section::Rect {
+                depth_mm: 100.0,
+                width_mm: 50.0,
+            }),
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
+            2000.0,
+            10.0,
+            Method::Euler,
+        );
+        assert_eq!(read, made);
+    }
+
+    #[test]
+    fn bending_keys_are_validated_by_name() {
+        let text = r#"{"id": "B1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
+            "material": {"fy_mpa": 235, "e_mpa": 210000}, "length_mm": 2000, "axial_kn": 0,
+            "method": "en1993-1-1", "m_minor_b_knm": 3}"#;
+        let mut m: Member = serde_json::from_str(text).unwrap();
+        assert_eq!(m.first_moment_key(), Some("m_minor_b_knm"));
+        assert!(m.validate_options().is_ok());
+        assert_eq!(m.lt_length_mm().unwrap(), 2000.0);
+        m.m_major_span_knm = f64::INFINITY;
+        assert_eq!(
+            m.validate_options().unwrap_err().field(),
+            Some("m_major_span_knm")
+        );
+        m.m_major_span_knm = 0.0;
+        m.k_lt = 0.0;
+        assert_eq!(m.validate_options().unwrap_err().field(), Some("k_lt"));
+        m.k_lt = 1.0;
+        m.lcr_lt_mm = Some(1e9);
+        assert_eq!(m.validate_options().unwrap_err().field(), Some("lcr_lt_mm"));
     }
 }

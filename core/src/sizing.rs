@@ -235,7 +235,7 @@ impl<'a> Sizer<'a> {
                 },
             };
             match outcome {
-                Ok(r) if r.utilisation <= limit => {
+                Ok(r) if r.utilisation <= limit && r.within_limits() => {
                     chosen = Some(Passing {
                         entry,
                         utilisation: r.utilisation,
@@ -247,10 +247,7 @@ impl<'a> Sizer<'a> {
                     last_screened = None;
                     last = Some(Rejected {
                         entry,
-                        why: Refusal::Exceeds {
-                            utilisation: r.utilisation,
-                            governing: r.governing,
-                        },
+                        why: refusal(&r),
                     });
                 }
                 Err(e) => {
@@ -268,13 +265,10 @@ impl<'a> Sizer<'a> {
             let mat = material_of(materials, i, &copy.material, section).ok()?;
             result.checked += 1;
             last = Some(match evaluate(copy, entry, section, &mat) {
-                Ok(r) if r.utilisation <= limit => return None,
+                Ok(r) if r.utilisation <= limit && r.within_limits() => return None,
                 Ok(r) => Rejected {
                     entry,
-                    why: Refusal::Exceeds {
-                        utilisation: r.utilisation,
-                        governing: r.governing,
-                    },
+                    why: refusal(&r),
                 },
                 Err(e) => Rejected {
                     entry,
@@ -308,6 +302,22 @@ impl<'a> Sizer<'a> {
                 }
             })
             .collect()
+    }
+}
+
+/// Why a checked candidate is not taken: its utilisation, or a limit of
+/// its code that fails it whatever the load (CSA S16-19 10.4.2.1), told
+/// as the result's own warning.
+fn refusal(r: &CheckResult) -> Refusal {
+    match r.limit_exceeded() {
+        Some(reason) => Refusal::Error(Error::NotApplicable {
+            method: r.method.key(),
+            reason: reason.to_string(),
+        }),
+        None => Refusal::Exceeds {
+            utilisation: r.utilisation,
+            governing: r.governing,
+        },
     }
 }
 
@@ -740,7 +750,7 @@ mod tests {
             axial in 0.0f64..2500.0,
             method in 0usize..5,
             k_minor in 0.5f64..2.0,
-            gamma in proptest::option::of(0.8f64..1.3),
+            gamma in proptest::option::of(1.0f64..1.3),
             limit in 0.5f64..1.2,
             connection in proptest::option::of((0usize..2, 0usize..2)),
         ) {
@@ -768,7 +778,7 @@ mod tests {
                 .filter_map(|e| {
                     check_member(&build(&m, e))
                         .ok()
-                        .filter(|r| r.utilisation <= limit)
+                        .filter(|r| r.utilisation <= limit && r.within_limits())
                         .map(|_| e.mass_kg_per_m)
                 })
                 .min_by(f64::total_cmp);

@@ -31,6 +31,10 @@ pub enum Scope {
     FlexuralTorsional,
     /// Cross-section resistance (classification, effective area).
     Section,
+    /// Bending about the major axis, with lateral-torsional buckling.
+    BendingMajor,
+    /// Bending about the minor axis.
+    BendingMinor,
 }
 
 /// A static text of the working; reads as a `str`.

@@ -36,6 +36,11 @@ pub const KN_PER_KIP: f64 = 4.448_221_615_260_5;
 /// kN·m in one kip·ft (exact: 4.4482216152605 kN x 0.3048 m).
 pub const KNM_PER_KIPFT: f64 = 1.355_817_948_331_400_4;
 
+/// MPa in one ksi, from the definitions above: 1 ksi = 1 kip/in2 =
+/// 4448.2216152605 N / 645.16 mm2 = 6.894757293168... MPa (to the
+/// rounding of one division).
+pub const MPA_PER_KSI: f64 = KN_PER_KIP * 1000.0 / MM2_PER_IN2;
+
 /// Converts ksi to MPa: 1 ksi = 4448.2216152605 N / 645.16 mm2.
 pub fn ksi_to_mpa(ksi: f64) -> f64 {
     ksi * (KN_PER_KIP * 1000.0) / MM2_PER_IN2

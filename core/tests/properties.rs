@@ -24,30 +24,7 @@ use strutline_core::section::{
 use strutline_core::Error;
 
 fn base(section: SectionSpec, material: MaterialSpec, method: Method) -> Member {
-    Member {
-        id: "P".into(),
-        note: None,
-        section,
-        material,
-        length_mm: 3000.0,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 100.0,
-        method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-    }
+    Member::new("P", section, material, 3000.0, 100.0, method)
 }
 
 /// Any f64 at all, including NaN, infinities, zero and negatives.
@@ -171,6 +148,10 @@ fn steel_section() -> impl Strategy<Value = SectionSpec> {
                 i_minor_mm4: i * ratio,
                 torsion_mm4: None,
                 warping_mm6: None,
+                w_el_major_mm3: None,
+                w_el_minor_mm3: None,
+                w_pl_major_mm3: None,
+                w_pl_minor_mm3: None,
             })
         }),
     ]

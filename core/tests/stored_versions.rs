@@ -74,6 +74,12 @@ fn version_2_fixture_loads_and_checks() {
     let text = include_str!("../../tests/fixtures/stored/member-file-v2.json");
     let f = file::parse(text).unwrap();
     assert_eq!(f.members.len(), 3);
+    // Lifted to the current version (3 added the bending keys): no moments.
+    assert_eq!(f.version, file::VERSION);
+    assert!(f
+        .members
+        .iter()
+        .all(|m| !m.has_moments() && !m.lt_restrained));
     let c = f.member("F-E5B").unwrap().angle_connection.unwrap();
     assert_eq!((c.leg, c.truss), (Leg::Short, Truss::Space));
     // "truss" defaults to planar.

@@ -85,7 +85,7 @@ function cliCheckUncached(memberFile) {
   const cargo = process.env.STRUTLINE_CARGO || "cargo";
   const run = spawnSync(
     cargo,
-    ["run", "--release", "-q", "-p", "strutline-core", "--bin", "strutline", "--", "check", file, "--json"],
+    ["run", "--release", "-q", "-p", "strutline-cli", "--bin", "strutline", "--", "check", file, "--json"],
     { cwd: ROOT, encoding: "utf8", maxBuffer: 64 * 1024 * 1024 },
   );
   rmSync(dir, { recursive: true, force: true });

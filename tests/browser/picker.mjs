@@ -46,7 +46,7 @@ function cliSize(members, series) {
   const cargo = process.env.STRUTLINE_CARGO || "cargo";
   const run = spawnSync(
     cargo,
-    ["run", "--release", "-q", "-p", "strutline-core", "--bin", "strutline", "--", "size", file, "--series", series, "--json"],
+    ["run", "--release", "-q", "-p", "strutline-cli", "--bin", "strutline", "--", "size", file, "--series", series, "--json"],
     { cwd: ROOT, encoding: "utf8" },
   );
   rmSync(dir, { recursive: true, force: true });

@@ -170,3 +170,48 @@ fn design_example_e1a_w14x132() {
         "P_n / Omega_c = {got} kips, example 593"
     );
 }
+
+// Findings of the clause-by-clause reading (issue 15). The user note to E2
+// recommends L_c/r <= 200: a recommendation, so a member beyond it still
+// gets its E3 strength (with the caution). B4.2: the design wall thickness
+// of an electric-resistance-welded HSS is 0.93 t_nom; a hollow section typed
+// by its dimensions uses the wall as typed, and the result says so.
+
+#[test]
+fn slenderness_over_200_is_a_recommendation_only() {
+    let res = check_member(&column(250.0, "aisc360-lrfd")).unwrap();
+    // F_e = pi^2 x 29 000 / 250^2 = 4.5796 ksi; F_cr = 0.877 F_e = 4.0163 ksi
+    // (Eq. E3-3); phi_c F_cr = 3.6147 ksi x 1000 mm2, far above the 10 kN load.
+    assert!(res.passes);
+    assert!(res.resistance_kn > 0.0);
+}
+
+#[test]
+fn typed_hss_wall_is_said_to_be_the_design_wall() {
+    let typed: Member = serde_json::from_value(json!({
+        "id": "H1",
+        "section": {"kind": "rhs", "depth_mm": 152.4, "width_mm": 152.4, "wall_mm": 9.525,
+                    "make": "cold-formed"},
+        "material": {"grade": "A500 Grade C"},
+        "length_mm": 3000.0,
+        "axial_kn": 10.0,
+        "method": "aisc360-lrfd"
+    }))
+    .unwrap();
+    let r = check_member(&typed).unwrap();
+    let w = r
+        .warnings
+        .iter()
+        .find(|w| w.code == "wall-as-design-thickness")
+        .unwrap();
+    assert!(w.message.contains("0.93"), "{}", w.message);
+    // The catalogue applies 0.93 t_nom itself: no warning.
+    let mut cat = typed.clone();
+    cat.section =
+        serde_json::from_value(json!({"kind": "catalogue", "designation": "HSS6x6x3/8"})).unwrap();
+    let r = check_member(&cat).unwrap();
+    assert!(r
+        .warnings
+        .iter()
+        .all(|w| w.code != "wall-as-design-thickness"));
+}

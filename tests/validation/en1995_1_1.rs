@@ -101,3 +101,30 @@ fn refuses_steel() {
     let e = check_member(&column(150.0, 100.0, "S355", 3000.0)).unwrap_err();
     assert_eq!(e.field(), Some("method"));
 }
+
+#[test]
+fn defaults_of_table_3_1_are_said() {
+    // Table 3.1 (solid timber): service classes 1 and 2, medium-term: k_mod = 0.80;
+    // permanent, service class 3: 0.50. The member file's defaults (service
+    // class 1, medium-term) are not the lowest, so the result names them.
+    let r = check_member(&column(150.0, 100.0, "C24", 3000.0)).unwrap();
+    let w = r
+        .warnings
+        .iter()
+        .find(|w| w.code == "timber-defaults-assumed")
+        .unwrap();
+    assert!(
+        w.message.contains("0.80") && w.message.contains("medium-term"),
+        "{}",
+        w.message
+    );
+    // Both given: nothing assumed.
+    let mut m = column(150.0, 100.0, "C24", 3000.0);
+    m.service_class = Some(1);
+    m.load_duration = serde_json::from_value(json!("medium")).unwrap();
+    let r = check_member(&m).unwrap();
+    assert!(r
+        .warnings
+        .iter()
+        .all(|w| w.code != "timber-defaults-assumed"));
+}

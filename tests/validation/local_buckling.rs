@@ -402,34 +402,18 @@ fn class_1_to_3_sections_keep_their_gross_area_and_class_4_never_gains() {
 }
 
 fn member(section: SectionSpec, method: Method, length: f64) -> Member {
-    Member {
-        id: "T1".into(),
-        note: None,
+    Member::new(
+        "T1",
         section,
-        material: MaterialSpec::Custom {
+        MaterialSpec::Custom {
             fy_mpa: 355.0,
             e_mpa: 210_000.0,
             g_mpa: Some(81_000.0),
         },
-        length_mm: length,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 10.0,
+        length,
+        10.0,
         method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-    }
+    )
 }
 
 #[test]
@@ -577,6 +561,10 @@ fn limit_states_a_method_does_not_cover_are_warned() {
         i_minor_mm4: 2e7,
         torsion_mm4: None,
         warping_mm6: None,
+        w_el_major_mm3: None,
+        w_el_minor_mm3: None,
+        w_pl_major_mm3: None,
+        w_pl_minor_mm3: None,
     });
     let r = check_member(&member(given, Method::En1993, 3000.0)).unwrap();
     assert!(r

@@ -115,40 +115,28 @@ fn cruciform_as_typed_properties_governs_torsionally_in_the_check() {
     // Short member, L = 1000 mm: sigma_cr,T = G t^2/b^2 = 202.5 MPa, N_cr,T =
     // 202.5 x 2000 mm2 = 405 kN, below N_pl = A f_y = 710 kN and far below
     // N_cr,z = pi^2 E I / L^2 = 6,909 kN (I = 5 x 200^3 / 12).
-    let member = Member {
-        id: "X1".into(),
-        note: None,
-        section: SectionSpec::Given(Given {
+    let member = Member::new(
+        "X1",
+        SectionSpec::Given(Given {
             area_mm2: a,
             i_major_mm4: i,
             i_minor_mm4: i,
             torsion_mm4: Some(it),
             warping_mm6: Some(0.0),
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         }),
-        material: MaterialSpec::Custom {
+        MaterialSpec::Custom {
             fy_mpa: 355.0,
             e_mpa: E,
             g_mpa: Some(G),
         },
-        length_mm: 1000.0,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 100.0,
-        method: Method::Euler,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-    };
+        1000.0,
+        100.0,
+        Method::Euler,
+    );
     let r = check_member(&member).unwrap();
     let tor = r
         .modes
@@ -380,30 +368,7 @@ fn steel(fy: f64, e: f64, g: f64) -> MaterialSpec {
 }
 
 fn strut(section: SectionSpec, material: MaterialSpec, method: Method, length: f64) -> Member {
-    Member {
-        id: "F1".into(),
-        note: None,
-        section,
-        material,
-        length_mm: length,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn: 50.0,
-        method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-    }
+    Member::new("F1", section, material, length, 50.0, method)
 }
 
 /// EN 1993-1-1 Eq. 6.49 with the imperfection factor of Table 6.1.

@@ -30,30 +30,7 @@ pub fn member(
     axial_kn: f64,
     method: Method,
 ) -> Member {
-    Member {
-        id: id.to_string(),
-        note: None,
-        section,
-        material,
-        length_mm,
-        k_major: 1.0,
-        k_minor: 1.0,
-        k_torsion: 1.0,
-        lcr_major_mm: None,
-        lcr_minor_mm: None,
-        lcr_torsion_mm: None,
-        axial_kn,
-        method,
-        gamma_m1: None,
-        curve_major: None,
-        curve_minor: None,
-        bow_mm: None,
-        eccentricity_mm: None,
-        service_class: None,
-        load_duration: None,
-        csa_n: None,
-        angle_connection: None,
-    }
+    Member::new(id, section, material, length_mm, axial_kn, method)
 }
 
 /// A small steel strut that every build can check (a solid rectangle, a
@@ -165,6 +142,10 @@ pub fn demo_lists() -> Vec<MemberFile> {
             i_minor_mm4: 3.1e6,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         }),
         steel(355.0),
         2700.0,

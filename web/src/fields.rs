@@ -146,7 +146,7 @@ const RECT_FIELDS: [Field; 2] = [
     f("width_mm", "width b", "mm", Sec, Positive),
 ];
 const ROUND_FIELDS: [Field; 1] = [f("diameter_mm", "diameter d", "mm", Sec, Positive)];
-const GIVEN_FIELDS: [Field; 5] = [
+const GIVEN_FIELDS: [Field; 9] = [
     f("area_mm2", "area A", "mm²", Sec, Positive),
     f(
         "i_major_mm4",
@@ -173,6 +173,34 @@ const GIVEN_FIELDS: [Field; 5] = [
         "warping_mm6",
         "warping constant I_w (optional)",
         "mm⁶",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_el_major_mm3",
+        "elastic modulus W_el, major axis (optional)",
+        "mm³",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_el_minor_mm3",
+        "elastic modulus W_el, minor axis (optional)",
+        "mm³",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_pl_major_mm3",
+        "plastic modulus W_pl, major axis (optional)",
+        "mm³",
+        Sec,
+        OptPositive,
+    ),
+    f(
+        "w_pl_minor_mm3",
+        "plastic modulus W_pl, minor axis (optional)",
+        "mm³",
         Sec,
         OptPositive,
     ),
@@ -420,20 +448,26 @@ pub struct Choice {
     pub options: Vec<(&'static str, &'static str)>,
 }
 
-/// The choices of a section kind (how it was made).
+/// The choices of a section kind (how it was made). "" leaves the make
+/// out: the engine takes the make of lower resistance and says so.
 pub fn section_choices(kind: &str) -> Vec<Choice> {
     match kind {
         "i" => vec![Choice {
             key: "make",
             label: "made",
             place: Sec,
-            options: vec![("rolled", "hot-rolled"), ("welded", "welded from plates")],
+            options: vec![
+                ("", "not known: the lower-resistance make is taken"),
+                ("rolled", "hot-rolled"),
+                ("welded", "welded from plates"),
+            ],
         }],
         "rhs" | "chs" => vec![Choice {
             key: "make",
             label: "made",
             place: Sec,
             options: vec![
+                ("", "not known: taken as cold-formed (lower resistance)"),
                 ("hot-finished", "hot-finished"),
                 ("cold-formed", "cold-formed"),
             ],
@@ -518,20 +552,10 @@ pub fn method_choices(method: Method) -> Vec<Choice> {
     }
 }
 
-/// The member-file key of a section's kind ("i", "rhs", ...).
+/// The member-file key of a section's kind ("i", "rhs", ...), from core's
+/// one description of the kinds (`section::schema`).
 pub fn kind_of(spec: &SectionSpec) -> &'static str {
-    match spec {
-        SectionSpec::I(_) => "i",
-        SectionSpec::Rhs(_) => "rhs",
-        SectionSpec::Chs(_) => "chs",
-        SectionSpec::Angle(_) => "angle",
-        SectionSpec::Channel(_) => "channel",
-        SectionSpec::Tee(_) => "tee",
-        SectionSpec::Rect(_) => "rect",
-        SectionSpec::Round(_) => "round",
-        SectionSpec::Given(_) => "given",
-        SectionSpec::Catalogue(_) => "catalogue",
-    }
+    spec.kind()
 }
 
 fn default_json(kind: &str) -> Value {
@@ -763,6 +787,66 @@ mod tests {
             .unwrap()
     }
 
+    /// The editor edits exactly the keys of core's one description of the
+    /// section kinds (`strutline_core::section::schema`), with the rule its
+    /// default implies, and offers every kind in the same order.
+    #[test]
+    fn editor_fields_match_the_section_schema() {
+        use strutline_core::section::schema::{self, Default as Absent, Value as Holds};
+        let listed: Vec<&str> = KINDS.iter().map(|(k, _)| *k).collect();
+        let described: Vec<&str> = schema::kind_names().collect();
+        assert_eq!(
+            listed, described,
+            "fields::KINDS against section::schema::KINDS"
+        );
+        for kind in &schema::KINDS {
+            let fields = section_fields(kind.name);
+            let choices = section_choices(kind.name);
+            for key in kind.keys {
+                match key.value {
+                    Holds::Choice(options) => {
+                        let choice =
+                            choices
+                                .iter()
+                                .find(|c| c.key == key.key)
+                                .unwrap_or_else(|| {
+                                    panic!(
+                                        "kind \"{}\": no editor choice for \"{}\"",
+                                        kind.name, key.key
+                                    )
+                                });
+                        let offered: Vec<&str> = choice.options.iter().map(|(v, _)| *v).collect();
+                        assert_eq!(offered, options, "{} {}", kind.name, key.key);
+                    }
+                    Holds::Number | Holds::Text => {
+                        let field = fields.iter().find(|f| f.key == key.key).unwrap_or_else(|| {
+                            panic!(
+                                "kind \"{}\": no editor field for \"{}\"",
+                                kind.name, key.key
+                            )
+                        });
+                        let optional = matches!(
+                            field.rule,
+                            Rule::OptNonNegative | Rule::OptPositive | Rule::OptText
+                        );
+                        assert_eq!(optional, key.default != Absent::Required, "{}", key.key);
+                    }
+                }
+            }
+            for key in fields
+                .iter()
+                .map(|f| f.key)
+                .chain(choices.iter().map(|c| c.key))
+            {
+                assert!(
+                    kind.key(key).is_some(),
+                    "the editor shows \"{key}\" for kind \"{}\", which section::schema does not describe",
+                    kind.name
+                );
+            }
+        }
+    }
+
     #[test]
     fn every_kind_has_fields_that_read_back() {
         let base = sample_member("A");
@@ -858,6 +942,11 @@ mod tests {
         assert!(
             matches!(welded.section, SectionSpec::I(ref s) if s.make == strutline_core::section::IMake::Welded)
         );
+        // The first option leaves the make out: not known, shown as such.
+        assert_eq!(make.options[0].0, "");
+        let unknown = apply_choice(&welded, make, "").unwrap();
+        assert!(matches!(unknown.section, SectionSpec::I(ref s) if s.make.is_unstated()));
+        assert_eq!(read(&unknown, Sec, "make"), "");
     }
 
     #[test]

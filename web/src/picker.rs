@@ -88,7 +88,7 @@ pub fn search(query: &str, series: &str, shape: &str) -> Vec<&'static Entry> {
         if out.len() >= MAX_ROWS {
             break;
         }
-        if fam.is_some_and(|f| e.spec.family() != f) {
+        if fam.is_some_and(|f| e.spec.family() != Some(f)) {
             continue;
         }
         if q.is_empty() || matches(e, q) {
@@ -112,8 +112,10 @@ pub fn sizing_pool(member: &Member, series: &str, shape: &str) -> Vec<&'static E
     if let Some(s) = catalogue::find_series(series) {
         return s.entries().iter().collect();
     }
-    let fam = family_of(shape).unwrap_or_else(|| member.section.family());
-    catalogue::family_entries(fam)
+    let fam = family_of(shape).or_else(|| catalogue::family(&member.section).ok());
+    // An unknown designation has no family: no candidates (the check
+    // reports the designation).
+    fam.map(catalogue::family_entries).unwrap_or_default()
 }
 
 /// One member's proposal in words.
@@ -403,10 +405,10 @@ mod tests {
         assert_eq!(all.len(), s.entries().len().min(MAX_ROWS));
         assert!(search("200", "", "chs")
             .iter()
-            .all(|e| e.spec.family() == Family::Chs));
+            .all(|e| e.spec.family() == Some(Family::Chs)));
         assert!(search("200", "", "i")
             .iter()
-            .all(|e| e.spec.family() == Family::I));
+            .all(|e| e.spec.family() == Some(Family::I)));
         assert!(search("shs 100", "", "i").is_empty());
     }
 

@@ -37,19 +37,59 @@ pub const INPUTS: &[(&str, &str, &str)] = &[
     ("k_torsion", "K_T", "effective-length factor, torsional"),
     ("lcr_torsion_mm", "L_cr,T", "buckling length, torsional"),
     ("angle_connection", "", "angle connected through"),
-    ("k_lt", "K_LT", "effective-length factor, lateral-torsional buckling"),
-    ("lcr_lt_mm", "L_cr,LT", "length between lateral-torsional restraints"),
-    ("lt_restrained", "", "compression flange held against lateral-torsional buckling"),
+    (
+        "k_lt",
+        "K_LT",
+        "effective-length factor, lateral-torsional buckling",
+    ),
+    (
+        "lcr_lt_mm",
+        "L_cr,LT",
+        "length between lateral-torsional restraints",
+    ),
+    (
+        "lt_restrained",
+        "",
+        "compression flange held against lateral-torsional buckling",
+    ),
     ("axial_kn", "N_Ed", "design compression"),
-    ("m_major_a_knm", "M_y,Ed,A", "design moment, major axis, at end A"),
-    ("m_major_b_knm", "M_y,Ed,B", "design moment, major axis, at end B"),
-    ("m_major_span_knm", "M_y,Ed,span", "major-axis moment at mid-length from transverse load"),
+    (
+        "m_major_a_knm",
+        "M_y,Ed,A",
+        "design moment, major axis, at end A",
+    ),
+    (
+        "m_major_b_knm",
+        "M_y,Ed,B",
+        "design moment, major axis, at end B",
+    ),
+    (
+        "m_major_span_knm",
+        "M_y,Ed,span",
+        "major-axis moment at mid-length from transverse load",
+    ),
     ("span_load_major", "", "shape of the major-axis span moment"),
-    ("m_minor_a_knm", "M_z,Ed,A", "design moment, minor axis, at end A"),
-    ("m_minor_b_knm", "M_z,Ed,B", "design moment, minor axis, at end B"),
-    ("m_minor_span_knm", "M_z,Ed,span", "minor-axis moment at mid-length from transverse load"),
+    (
+        "m_minor_a_knm",
+        "M_z,Ed,A",
+        "design moment, minor axis, at end A",
+    ),
+    (
+        "m_minor_b_knm",
+        "M_z,Ed,B",
+        "design moment, minor axis, at end B",
+    ),
+    (
+        "m_minor_span_knm",
+        "M_z,Ed,span",
+        "minor-axis moment at mid-length from transverse load",
+    ),
     ("span_load_minor", "", "shape of the minor-axis span moment"),
-    ("load_level", "", "level of the transverse load on the depth"),
+    (
+        "load_level",
+        "",
+        "level of the transverse load on the depth",
+    ),
     ("kind", "", "section shape"),
     ("designation", "", "catalogue designation"),
     ("make", "", "made"),
@@ -69,10 +109,26 @@ pub const INPUTS: &[(&str, &str, &str)] = &[
     ("i_minor_mm4", "I_z", "second moment of area, minor axis"),
     ("torsion_mm4", "I_t", "torsion constant"),
     ("warping_mm6", "I_w", "warping constant"),
-    ("w_el_major_mm3", "W_el,y", "elastic section modulus, major axis"),
-    ("w_el_minor_mm3", "W_el,z", "elastic section modulus, minor axis"),
-    ("w_pl_major_mm3", "W_pl,y", "plastic section modulus, major axis"),
-    ("w_pl_minor_mm3", "W_pl,z", "plastic section modulus, minor axis"),
+    (
+        "w_el_major_mm3",
+        "W_el,y",
+        "elastic section modulus, major axis",
+    ),
+    (
+        "w_el_minor_mm3",
+        "W_el,z",
+        "elastic section modulus, minor axis",
+    ),
+    (
+        "w_pl_major_mm3",
+        "W_pl,y",
+        "plastic section modulus, major axis",
+    ),
+    (
+        "w_pl_minor_mm3",
+        "W_pl,z",
+        "plastic section modulus, minor axis",
+    ),
     ("grade", "", "grade or strength class"),
     ("fy_mpa", "f_y", "yield strength"),
     ("e_mpa", "E", "modulus of elasticity"),
@@ -152,7 +208,12 @@ fn unknown_meaning(key: &str) -> String {
     }
     let words: Vec<&str> = key
         .split('_')
-        .filter(|w| !matches!(*w, "mm" | "mm2" | "mm3" | "mm4" | "mm6" | "kn" | "knm" | "mpa"))
+        .filter(|w| {
+            !matches!(
+                *w,
+                "mm" | "mm2" | "mm3" | "mm4" | "mm6" | "kn" | "knm" | "mpa"
+            )
+        })
         .collect();
     words.join(" ")
 }

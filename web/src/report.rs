@@ -34,17 +34,21 @@ pub fn scope_title(s: Scope) -> &'static str {
         Scope::Minor => "Minor axis",
         Scope::Torsional => "Torsional",
         Scope::FlexuralTorsional => "Flexural-torsional",
+        Scope::BendingMajor => "Bending, major axis",
+        Scope::BendingMinor => "Bending, minor axis",
     }
 }
 
 /// The parts of the working in the order they are shown.
-const SCOPES: [Scope; 6] = [
+const SCOPES: [Scope; 8] = [
     Scope::Member,
     Scope::Section,
     Scope::Major,
     Scope::Minor,
     Scope::Torsional,
     Scope::FlexuralTorsional,
+    Scope::BendingMajor,
+    Scope::BendingMinor,
 ];
 
 /// The verdict of one member: status, utilisation, resistance, load,

@@ -11,8 +11,8 @@
 
 use strutline_core::check::Prepared;
 use strutline_core::method::Method;
-use strutline_core::section::outline::{ineffective, outline};
-use strutline_core::stability::effective::of_check;
+use strutline_core::section::outline::outline;
+use strutline_core::stability::ineffective::ineffective;
 use strutline_core::CheckResult;
 
 use crate::checks::Checked;
@@ -80,7 +80,7 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
         );
     }
     let zones = result
-        .and_then(|r| of_check(&p.input(), r))
+        .and_then(|r| r.effective(&p.input()))
         .map(|(c, e)| ineffective(spec, &c, &e))
         .unwrap_or_default();
     let props = &p.section.props;
@@ -389,6 +389,10 @@ mod tests {
             i_minor_mm4: 5e5,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         });
         let (_, s) = view(given, 235.0);
         assert!(s.starts_with("<p") && s.contains("given by its properties"));

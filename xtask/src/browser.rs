@@ -34,7 +34,7 @@ pub fn run(args: &[String]) -> Result<()> {
         "--release",
         "-q",
         "-p",
-        "strutline-core",
+        "strutline-cli",
         "--bin",
         "strutline",
     ])) {

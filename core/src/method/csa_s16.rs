@@ -4,16 +4,27 @@
 //! C_r = phi A F_y (1 + lambda^(2n))^(-1/n), lambda = sqrt(F_y / F_e),
 //! F_e = pi^2 E / (K L / r)^2, phi = 0.90 (13.1). n = 1.34 for most
 //! members, 2.24 for hot-formed or stress-relieved hollow sections (class
-//! H); `csa_n` overrides. A caution is raised when K L / r exceeds 200,
-//! the limit of 10.4.2.1 for compression members.
+//! H); `csa_n` overrides. A hollow section whose make the member file does
+//! not give is read as cold-formed (n = 1.34, the lower resistance), and
+//! the result says so. 10.4.2.1: "the slenderness ratio of a compression
+//! member shall not exceed 200": a member beyond it does not satisfy the
+//! standard ([`over_slenderness_limit`], [`crate::check::CheckResult::passes`]
+//! is false), whatever its load; C_r is still worked and shown.
+//!
+//! A single angle is checked as loaded through its centroid; the effective
+//! slenderness S16 gives for angles connected by one leg (13.3.3 in
+//! S16-19, numbering recalled from memory) is not applied, and the result
+//! says so.
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::member::CSA_N_DEFAULT;
 use crate::method::euler::{
-    basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
+    basics, hollow_make_unstated, is_hot_finished_hollow, push_geometry, push_material,
+    require_steel, warn_once,
 };
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
+use crate::section::SectionSpec;
 use crate::trace::{step, sym, Scope, Sym, Trace};
 
 const KEY: &str = "csa-s16";
@@ -22,6 +33,16 @@ const KEY: &str = "csa-s16";
 pub const PHI: f64 = 0.90;
 /// n for hot-formed or stress-relieved hollow sections, class H (13.3.1).
 pub const N_CLASS_H: f64 = 2.24;
+
+/// The largest slenderness ratio of a compression member, CSA S16-19 10.4.2.1.
+pub const MAX_SLENDERNESS: f64 = 200.0;
+
+/// Whether a flexural mode's KL/r exceeds 10.4.2.1's 200.
+pub fn over_slenderness_limit(modes: &[ModeResult]) -> bool {
+    modes
+        .iter()
+        .any(|m| matches!(m.mode, Mode::Major | Mode::Minor) && m.slenderness > MAX_SLENDERNESS)
+}
 
 /// The reduction (1 + lambda^(2n))^(-1/n), computed as
 /// lambda^-2 (1 + lambda^(-2n))^(-1/n) above lambda = 1 so that it never
@@ -46,6 +67,10 @@ fn exponent(input: &Input<'_>) -> (f64, Sym) {
         None if is_hot_finished_hollow(input) => (
             N_CLASS_H,
             sym!("exponent n, 2.24 for a class H hollow section (default)"),
+        ),
+        None if hollow_make_unstated(input) => (
+            CSA_N_DEFAULT,
+            sym!("exponent n, 1.34: the hollow section's make is not given, so not class H"),
         ),
         None => (
             CSA_N_DEFAULT,
@@ -80,6 +105,22 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     if input.member.gamma_m1.is_some() {
         warn_once(warnings, "factor-ignored", || {
             "gamma_m1 is not used by CSA S16; phi = 0.90 of 13.1 applies".to_string()
+        });
+    }
+    if input.member.csa_n.is_none() && hollow_make_unstated(input) {
+        warn_once(warnings, "make-assumed", || {
+            "make not given: the hollow section is taken as cold-formed, n = 1.34 of CSA S16-19 \
+             13.3.1 (2.24 is for class H, hot-formed or stress-relieved), the lower resistance; \
+             give make (hot-finished or cold-formed) if it is known"
+                .to_string()
+        });
+    }
+    if matches!(input.section.spec, SectionSpec::Angle(_)) {
+        warn_once(warnings, "angle-centroid-loading", || {
+            "the angle is checked as loaded through its centroid (CSA S16-19 13.3.1, 13.3.2); the \
+             effective slenderness S16 gives for a single angle connected by one leg is not \
+             applied: check the end connections by hand"
+                .to_string()
         });
     }
     Ok(())
@@ -137,10 +178,21 @@ pub fn axis(
         "kN",
         "CSA S16-19 13.3.1",
     );
-    if b.slenderness > 200.0 {
+    if b.slenderness > MAX_SLENDERNESS {
+        step!(
+            trace,
+            b.scope,
+            "KL/r,max",
+            "largest slenderness ratio of a compression member: exceeded, the member does not satisfy the standard",
+            MAX_SLENDERNESS,
+            "-",
+            "CSA S16-19 10.4.2.1",
+        );
         warn_once(warnings, "slenderness-over-200", || {
             format!(
-                "KL/r = {:.0} exceeds 200, the limit of CSA S16-19 10.4.2.1 for compression members",
+                "KL/r = {:.0} exceeds 200: CSA S16-19 10.4.2.1 does not allow a compression member \
+                 this slender, so the member does not satisfy the standard whatever its load \
+                 (C_r of 13.3.1 is shown for information)",
                 b.slenderness
             )
         });

@@ -17,7 +17,6 @@
 //! (it is conservative: where the ratio applies, N_b,Rd from the curve is
 //! well above N_Ed anyway).
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::material::Steel;
 use crate::member::Curve;
@@ -25,13 +24,15 @@ use crate::method::euler::{
     basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
 };
 use crate::method::Input;
-use crate::section::{Family, IMake, SectionSpec};
+use crate::outcome::{Mode, ModeResult, Warning};
+use crate::section::{Family, IMake, IShape, Section, SectionSpec};
 use crate::trace::{step, sym, Scope, Sym, Trace};
 
 const KEY: &str = "en1993-1-1";
 
 /// The Table 6.2 row a section falls in, with the curves about y-y and
 /// z-z for S235-S420 and for S460.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
 struct Row {
     reason: Sym,
     y: Curve,
@@ -40,76 +41,129 @@ struct Row {
     z460: Curve,
 }
 
-fn row(input: &Input<'_>) -> Row {
-    use Curve::{A, A0, B, C, D};
-    let r = |reason, y, z, y460, z460| Row {
+impl Row {
+    /// The curves (y-y, z-z) for the grade.
+    fn curves(&self, s460: bool) -> (Curve, Curve) {
+        if s460 {
+            (self.y460, self.z460)
+        } else {
+            (self.y, self.z)
+        }
+    }
+}
+
+const fn r(reason: Sym, y: Curve, z: Curve, y460: Curve, z460: Curve) -> Row {
+    Row {
         reason,
         y,
         z,
         y460,
         z460,
-    };
-    match &input.section.spec {
-        SectionSpec::I(s) => {
-            let hb = s.depth_mm / s.width_mm;
-            let tf = s.flange_mm;
-            match s.make {
-                IMake::Rolled => {
-                    if hb > 1.2 && tf <= 40.0 {
-                        r(
-                            sym!("EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, t_f <= 40 mm"),
-                            A,
-                            B,
-                            A0,
-                            A0,
-                        )
-                    } else if hb > 1.2 && tf <= 100.0 {
-                        r(
-                            sym!("EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, 40 < t_f <= 100 mm"),
-                            B,
-                            C,
-                            A,
-                            A,
-                        )
-                    } else if tf <= 100.0 {
-                        r(
-                            sym!("EN 1993-1-1 Table 6.2: rolled I, h/b <= 1.2, t_f <= 100 mm"),
-                            B,
-                            C,
-                            A,
-                            A,
-                        )
-                    } else {
-                        r(
-                            sym!("EN 1993-1-1 Table 6.2: rolled I, t_f > 100 mm"),
-                            D,
-                            D,
-                            C,
-                            C,
-                        )
-                    }
-                }
-                IMake::Welded => {
-                    if tf <= 40.0 {
-                        r(
-                            sym!("EN 1993-1-1 Table 6.2: welded I, t_f <= 40 mm"),
-                            B,
-                            C,
-                            B,
-                            C,
-                        )
-                    } else {
-                        r(
-                            sym!("EN 1993-1-1 Table 6.2: welded I, t_f > 40 mm"),
-                            C,
-                            D,
-                            C,
-                            D,
-                        )
-                    }
-                }
+    }
+}
+
+/// The Table 6.2 row of an I section of a stated make (`Unstated` reads as
+/// welded here; [`i_make`] decides what an unstated make is read as).
+fn i_row(s: &IShape, make: IMake) -> Row {
+    use Curve::{A, A0, B, C, D};
+    let hb = s.depth_mm / s.width_mm;
+    let tf = s.flange_mm;
+    match make {
+        IMake::Rolled => {
+            if hb > 1.2 && tf <= 40.0 {
+                r(
+                    sym!("EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, t_f <= 40 mm"),
+                    A,
+                    B,
+                    A0,
+                    A0,
+                )
+            } else if hb > 1.2 && tf <= 100.0 {
+                r(
+                    sym!("EN 1993-1-1 Table 6.2: rolled I, h/b > 1.2, 40 < t_f <= 100 mm"),
+                    B,
+                    C,
+                    A,
+                    A,
+                )
+            } else if hb > 1.2 {
+                // Table 6.2 has no row for h/b > 1.2 with t_f > 100 mm: the
+                // lowest curve, d, about both axes and for every grade.
+                r(
+                    sym!("EN 1993-1-1 Table 6.2 has no row for a rolled I with h/b > 1.2 and t_f > 100 mm: curve d assumed"),
+                    D,
+                    D,
+                    D,
+                    D,
+                )
+            } else if tf <= 100.0 {
+                r(
+                    sym!("EN 1993-1-1 Table 6.2: rolled I, h/b <= 1.2, t_f <= 100 mm"),
+                    B,
+                    C,
+                    A,
+                    A,
+                )
+            } else {
+                r(
+                    sym!("EN 1993-1-1 Table 6.2: rolled I, h/b <= 1.2, t_f > 100 mm"),
+                    D,
+                    D,
+                    C,
+                    C,
+                )
             }
         }
+        IMake::Welded | IMake::Unstated => {
+            if tf <= 40.0 {
+                r(
+                    sym!("EN 1993-1-1 Table 6.2: welded I, t_f <= 40 mm"),
+                    B,
+                    C,
+                    B,
+                    C,
+                )
+            } else {
+                r(
+                    sym!("EN 1993-1-1 Table 6.2: welded I, t_f > 40 mm"),
+                    C,
+                    D,
+                    C,
+                    D,
+                )
+            }
+        }
+    }
+}
+
+/// Whether a rolled I falls outside the rows of Table 6.2 (h/b > 1.2 with
+/// t_f > 100 mm).
+fn beyond_table(s: &IShape) -> bool {
+    s.depth_mm / s.width_mm > 1.2 && s.flange_mm > 100.0
+}
+
+/// The make an I section is read as: its own, or when the member file does
+/// not say, the one whose Table 6.2 curves are the lower about both axes
+/// for this section and grade (welded, except where the rolled row is
+/// lower: t_f > 100 mm below S460). One of the two always is: the rows are
+/// ordered so (checked over the whole table by a test).
+pub fn i_make(s: &IShape, s460: bool) -> IMake {
+    if s.make != IMake::Unstated {
+        return s.make;
+    }
+    let (ry, rz) = i_row(s, IMake::Rolled).curves(s460);
+    let (wy, wz) = i_row(s, IMake::Welded).curves(s460);
+    if wy.alpha() >= ry.alpha() && wz.alpha() >= rz.alpha() {
+        IMake::Welded
+    } else {
+        IMake::Rolled
+    }
+}
+
+fn row(input: &Input<'_>, s460: bool) -> Row {
+    use Curve::{A, A0, C};
+    match &input.section.spec {
+        SectionSpec::I(s) => i_row(s, i_make(s, s460)),
         SectionSpec::Rhs(_) | SectionSpec::Chs(_) => {
             if is_hot_finished_hollow(input) {
                 r(
@@ -129,7 +183,13 @@ fn row(input: &Input<'_>) -> Row {
                 )
             }
         }
-        SectionSpec::Angle(_) => r(sym!("EN 1993-1-1 Table 6.2: L-section"), B, B, B, B),
+        SectionSpec::Angle(_) => r(
+            sym!("EN 1993-1-1 Table 6.2: L-section"),
+            Curve::B,
+            Curve::B,
+            Curve::B,
+            Curve::B,
+        ),
         SectionSpec::Channel(_) | SectionSpec::Tee(_) => r(
             sym!("EN 1993-1-1 Table 6.2: U-, T- and solid sections"),
             C,
@@ -158,41 +218,96 @@ fn is_s460(steel: &Steel) -> bool {
     steel.name.starts_with("S460")
 }
 
+/// The axis of Table 6.2 (and of the working) a buckling mode is about.
+/// Table 6.2 names its axes by the shape: for an I or H section y-y is
+/// parallel to the flanges and z-z to the web, whichever is stiffer.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum TableAxis {
+    /// y-y: parallel to the flanges (the section's width).
+    Y,
+    /// z-z: parallel to the web (the section's depth).
+    Z,
+}
+
+/// The Table 6.2 axis of `mode`: the principal major axis is y-y unless
+/// the section is stiffer about z-z (principal angle 90°, an I wider than
+/// deep); torsional and flexural-torsional buckling take the z-z curve
+/// (EN 1993-1-1 6.3.1.4(1)).
+pub fn table_axis(section: &Section, mode: Mode) -> TableAxis {
+    match (mode, section.major_is_z()) {
+        (Mode::Major, false) | (Mode::Minor, true) => TableAxis::Y,
+        (Mode::Major, true) | (Mode::Minor, false) => TableAxis::Z,
+        _ => TableAxis::Z,
+    }
+}
+
+/// The curve given in the member for `mode`: `curve_major` and
+/// `curve_minor` are about the principal axes; a twisting mode takes the
+/// one given for the principal axis that is z-z.
+fn given_curve(input: &Input<'_>, mode: Mode) -> Option<Curve> {
+    let m = input.member;
+    match mode {
+        Mode::Major => m.curve_major,
+        Mode::Minor => m.curve_minor,
+        _ => {
+            if table_axis(input.section, Mode::Major) == TableAxis::Z {
+                m.curve_major
+            } else {
+                m.curve_minor
+            }
+        }
+    }
+}
+
 /// The curve for an axis, whether it was given, and the clause to cite.
 fn curve_for(input: &Input<'_>, steel: &Steel, mode: Mode) -> (Curve, bool, Sym) {
-    let given = match mode {
-        Mode::Major => input.member.curve_major,
-        _ => input.member.curve_minor,
-    };
-    if let Some(c) = given {
+    if let Some(c) = given_curve(input, mode) {
         return (
             c,
             true,
             sym!("given in the member (curve_major / curve_minor)"),
         );
     }
-    let row = row(input);
-    let c = match (mode, is_s460(steel)) {
-        (Mode::Major, false) => row.y,
-        (Mode::Major, true) => row.y460,
-        (_, false) => row.z,
-        (_, true) => row.z460,
+    let row = row(input, is_s460(steel));
+    let (y, z) = row.curves(is_s460(steel));
+    let c = match table_axis(input.section, mode) {
+        TableAxis::Y => y,
+        TableAxis::Z => z,
     };
     (c, false, row.reason)
 }
 
-fn alpha_label(curve: Curve, given: bool) -> Sym {
-    match (curve, given) {
-        (Curve::A0, false) => sym!("imperfection factor, curve a0 (Table 6.2)"),
-        (Curve::A, false) => sym!("imperfection factor, curve a (Table 6.2)"),
-        (Curve::B, false) => sym!("imperfection factor, curve b (Table 6.2)"),
-        (Curve::C, false) => sym!("imperfection factor, curve c (Table 6.2)"),
-        (Curve::D, false) => sym!("imperfection factor, curve d (Table 6.2)"),
-        (Curve::A0, true) => sym!("imperfection factor, curve a0 (given)"),
-        (Curve::A, true) => sym!("imperfection factor, curve a (given)"),
-        (Curve::B, true) => sym!("imperfection factor, curve b (given)"),
-        (Curve::C, true) => sym!("imperfection factor, curve c (given)"),
-        (Curve::D, true) => sym!("imperfection factor, curve d (given)"),
+/// The label of alpha: the curve, the Table 6.2 axis for an I section
+/// (the only family whose rows differ by axis), or "given".
+fn alpha_label(curve: Curve, given: bool, axis: Option<TableAxis>) -> Sym {
+    macro_rules! by {
+        ($c:literal) => {
+            match (given, axis) {
+                (true, _) => sym!(concat!("imperfection factor, curve ", $c, " (given)")),
+                (false, Some(TableAxis::Y)) => sym!(concat!(
+                    "imperfection factor, curve ",
+                    $c,
+                    " about y-y, parallel to the flanges (Table 6.2)"
+                )),
+                (false, Some(TableAxis::Z)) => sym!(concat!(
+                    "imperfection factor, curve ",
+                    $c,
+                    " about z-z, parallel to the web (Table 6.2)"
+                )),
+                (false, None) => sym!(concat!(
+                    "imperfection factor, curve ",
+                    $c,
+                    " (Table 6.2, any axis)"
+                )),
+            }
+        };
+    }
+    match curve {
+        Curve::A0 => by!("a0"),
+        Curve::A => by!("a"),
+        Curve::B => by!("b"),
+        Curve::C => by!("c"),
+        Curve::D => by!("d"),
     }
 }
 
@@ -222,7 +337,7 @@ fn gamma_m1(input: &Input<'_>) -> (f64, bool) {
 
 /// Member-level working.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
-    require_steel(input, KEY)?;
+    let steel = require_steel(input, KEY)?;
     push_material(input, trace, warnings);
     let (g, given) = gamma_m1(input);
     step!(
@@ -246,6 +361,57 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
              section's shape and make); give curve_major and curve_minor to set them"
                 .to_string()
         });
+    }
+    let both_given = input.member.curve_major.is_some() && input.member.curve_minor.is_some();
+    match &input.section.spec {
+        SectionSpec::I(s) => {
+            let make = i_make(s, is_s460(steel));
+            if s.make == IMake::Unstated && !both_given {
+                let row = i_row(s, make).reason;
+                warn_once(warnings, "make-assumed", || match make {
+                    IMake::Rolled => format!(
+                        "make not given: the I section is taken as rolled, whose EN 1993-1-1 \
+                         Table 6.2 curves are the lower for it ({row}); give make (rolled or \
+                         welded) if it is known"
+                    ),
+                    _ => format!(
+                        "make not given: the I section is taken as welded, whose EN 1993-1-1 \
+                         Table 6.2 curves are the lower for it ({row}); give make (rolled or \
+                         welded) if it is known"
+                    ),
+                });
+            }
+            if make == IMake::Rolled && beyond_table(s) && !both_given {
+                warn_once(warnings, "no-table-row", || {
+                    "EN 1993-1-1 Table 6.2 has no row for a rolled I with h/b > 1.2 and t_f > 100 mm; \
+                     curve d, the lowest, is taken about both axes; give curve_major and \
+                     curve_minor to set them"
+                        .to_string()
+                });
+            }
+        }
+        SectionSpec::Rhs(_) | SectionSpec::Chs(_)
+            if !both_given && crate::method::euler::hollow_make_unstated(input) =>
+        {
+            warn_once(warnings, "make-assumed", || {
+                format!(
+                    "make not given: the hollow section is taken as cold-formed, the lower \
+                     resistance (EN 1993-1-1 Table 6.2 curve c rather than a; f_y from {}); give \
+                     make (hot-finished or cold-formed) if it is known",
+                    steel.standard
+                )
+            });
+        }
+        SectionSpec::Angle(_) => {
+            warn_once(warnings, "angle-centroid-loading", || {
+                "the angle is checked as loaded through its centroid (EN 1993-1-1 6.3.1); an angle \
+                 connected by one leg is loaded eccentrically, and the effective slenderness of \
+                 Annex BB.1.2 for angles in lattice members is not applied: check the end \
+                 connections by hand"
+                    .to_string()
+            });
+        }
+        _ => {}
     }
     Ok(())
 }
@@ -290,7 +456,12 @@ pub fn axis(
         trace,
         b.scope,
         "alpha",
-        alpha_label(curve, given),
+        alpha_label(
+            curve,
+            given,
+            matches!(input.section.spec, SectionSpec::I(_))
+                .then(|| table_axis(input.section, mode)),
+        ),
         alpha,
         "-",
         clause,
@@ -418,6 +589,39 @@ mod tests {
                 ..
             })
         ));
+    }
+
+    #[test]
+    fn an_unstated_i_make_is_the_lower_of_both_rows_everywhere() {
+        // Over every row of Table 6.2 (h/b either side of 1.2, t_f in each
+        // band, both grade groups): one make's curves are at or below the
+        // other's about both axes, and that is the make taken.
+        for (h, b) in [(300.0, 300.0), (600.0, 300.0)] {
+            for tf in [20.0, 60.0, 120.0] {
+                for s460 in [false, true] {
+                    let s = IShape {
+                        depth_mm: h,
+                        width_mm: b,
+                        flange_mm: tf,
+                        web_mm: 10.0,
+                        root_radius_mm: 0.0,
+                        make: IMake::Unstated,
+                    };
+                    let chosen = i_make(&s, s460);
+                    let other = if chosen == IMake::Welded {
+                        IMake::Rolled
+                    } else {
+                        IMake::Welded
+                    };
+                    let (cy, cz) = i_row(&s, chosen).curves(s460);
+                    let (oy, oz) = i_row(&s, other).curves(s460);
+                    assert!(
+                        cy.alpha() >= oy.alpha() && cz.alpha() >= oz.alpha(),
+                        "{h} {b} {tf} {s460}: {chosen:?}"
+                    );
+                }
+            }
+        }
     }
 
     #[test]

@@ -12,12 +12,12 @@
 
 use std::f64::consts::PI;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::{Error, Result};
 use crate::material::TimberKind;
 use crate::member::LoadDuration;
-use crate::method::euler::{basics, push_geometry, push_material, require_timber};
+use crate::method::euler::{basics, push_geometry, push_material, require_timber, warn_once};
 use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::Family;
 use crate::trace::{step, sym, Scope, Sym, Trace};
 
@@ -118,6 +118,32 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     let sc = input.member.service_class.unwrap_or(1);
     let d = input.member.load_duration.unwrap_or(LoadDuration::Medium);
     let (fc0d, km, g, given) = design_strength(input, t.kind, t.fc0k_mpa);
+    // The defaults are not the lowest k_mod of Table 3.1 (permanent load,
+    // service class 3: 0.50): say what was taken.
+    if input.member.service_class.is_none() || input.member.load_duration.is_none() {
+        warn_once(warnings, "timber-defaults-assumed", || {
+            format!(
+                "service class {sc} and {} loading are taken (k_mod = {km:.2}, EN 1995-1-1 Table \
+                 3.1) because the member does not give {}; a longer load duration or service \
+                 class 3 gives less (down to 0.50): give service_class and load_duration",
+                match d {
+                    LoadDuration::Permanent => "permanent",
+                    LoadDuration::Long => "long-term",
+                    LoadDuration::Medium => "medium-term",
+                    LoadDuration::Short => "short-term",
+                    LoadDuration::Instantaneous => "instantaneous",
+                },
+                match (
+                    input.member.service_class.is_none(),
+                    input.member.load_duration.is_none()
+                ) {
+                    (true, true) => "service_class or load_duration",
+                    (true, false) => "service_class",
+                    _ => "load_duration",
+                }
+            )
+        });
+    }
     step!(
         trace,
         Scope::Member,

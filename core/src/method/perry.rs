@@ -9,10 +9,10 @@
 //! structures). The bow defaults to L_cr / 1000 (the trace says so); the
 //! resistance is sigma A / gamma with the optional factor gamma_m1.
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::trace::{step, sym, Trace};
 
 /// The smaller root of (f - s)(s_e - s) = eta s s_e, MPa, computed without

@@ -11,10 +11,10 @@
 
 use std::f64::consts::FRAC_PI_2;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::trace::{step, sym, Trace};
 
 /// The mean stress at first yield, MPa, for strength `f`, modulus `e`,
@@ -181,6 +181,8 @@ pub fn axis(
 #[cfg(test)]
 mod tests {
     #![allow(
+        // The standard cosine is the reference here.
+        clippy::disallowed_methods,
         clippy::unwrap_used,
         clippy::expect_used,
         clippy::indexing_slicing,

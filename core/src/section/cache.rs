@@ -9,11 +9,13 @@
 
 use std::cell::RefCell;
 use std::collections::HashMap;
-use std::hash::{BuildHasherDefault, Hash, Hasher};
+use std::hash::{Hash, Hasher};
 
-use super::{HollowMake, IMake, Properties, SectionSpec};
+use super::{
+    Angle, CatalogueRef, Chs, Flanged, Given, HollowMake, IMake, IShape, Properties, Rect, Rhs,
+    Round, SectionSpec,
+};
 use crate::error::Result;
-use crate::fnv::Fnv;
 
 /// Entries kept before the memo starts again.
 const CAP: usize = 4096;
@@ -27,7 +29,7 @@ struct Key([u64; 8]);
 
 impl Hash for Key {
     // Word by word: the derived hash of `[u64; 8]` hands the hasher one
-    // 64-byte slice, which `Fnv::write` would mix a byte at a time.
+    // 64-byte slice (and its length) instead.
     fn hash<H: Hasher>(&self, state: &mut H) {
         for w in self.0 {
             state.write_u64(w);
@@ -36,8 +38,8 @@ impl Hash for Key {
 }
 
 thread_local! {
-    static MEMO: RefCell<HashMap<Key, Properties, BuildHasherDefault<Fnv>>> =
-        RefCell::new(HashMap::with_capacity_and_hasher(64, BuildHasherDefault::default()));
+    static MEMO: RefCell<HashMap<Key, Properties, rustc_hash::FxBuildHasher>> =
+        RefCell::new(HashMap::with_capacity_and_hasher(64, rustc_hash::FxBuildHasher));
 }
 
 fn opt(v: Option<f64>) -> u64 {
@@ -45,75 +47,140 @@ fn opt(v: Option<f64>) -> u64 {
 }
 
 /// The memo key of a dimensional spec; `None` for catalogue references.
+/// Every spec is destructured whole (no `..`), so a field added to a shape
+/// fails to compile here until it is part of the key.
 fn key(spec: &SectionSpec) -> Option<Key> {
     let k = match spec {
-        SectionSpec::I(s) => [
+        SectionSpec::I(IShape {
+            depth_mm,
+            width_mm,
+            flange_mm,
+            web_mm,
+            root_radius_mm,
+            make,
+        }) => [
             1,
-            s.depth_mm.to_bits(),
-            s.width_mm.to_bits(),
-            s.flange_mm.to_bits(),
-            s.web_mm.to_bits(),
-            s.root_radius_mm.to_bits(),
-            u64::from(s.make == IMake::Welded),
+            depth_mm.to_bits(),
+            width_mm.to_bits(),
+            flange_mm.to_bits(),
+            web_mm.to_bits(),
+            root_radius_mm.to_bits(),
+            u64::from(*make == IMake::Welded),
             0,
         ],
-        SectionSpec::Rhs(s) => [
+        SectionSpec::Rhs(Rhs {
+            depth_mm,
+            width_mm,
+            wall_mm,
+            outer_radius_mm,
+            inner_radius_mm,
+            make,
+        }) => [
             2,
-            s.depth_mm.to_bits(),
-            s.width_mm.to_bits(),
-            s.wall_mm.to_bits(),
-            s.outer_radius_mm.to_bits(),
-            opt(s.inner_radius_mm),
-            u64::from(s.make == HollowMake::ColdFormed),
+            depth_mm.to_bits(),
+            width_mm.to_bits(),
+            wall_mm.to_bits(),
+            outer_radius_mm.to_bits(),
+            opt(*inner_radius_mm),
+            u64::from(*make == HollowMake::ColdFormed),
             0,
         ],
-        SectionSpec::Chs(s) => [
+        SectionSpec::Chs(Chs {
+            diameter_mm,
+            wall_mm,
+            make,
+        }) => [
             3,
-            s.diameter_mm.to_bits(),
-            s.wall_mm.to_bits(),
-            u64::from(s.make == HollowMake::ColdFormed),
+            diameter_mm.to_bits(),
+            wall_mm.to_bits(),
+            u64::from(*make == HollowMake::ColdFormed),
             0,
             0,
             0,
             0,
         ],
-        SectionSpec::Angle(s) => [
+        SectionSpec::Angle(Angle {
+            depth_mm,
+            width_mm,
+            thickness_mm,
+            root_radius_mm,
+            toe_radius_mm,
+        }) => [
             4,
-            s.depth_mm.to_bits(),
-            s.width_mm.to_bits(),
-            s.thickness_mm.to_bits(),
-            s.root_radius_mm.to_bits(),
-            s.toe_radius_mm.to_bits(),
+            depth_mm.to_bits(),
+            width_mm.to_bits(),
+            thickness_mm.to_bits(),
+            root_radius_mm.to_bits(),
+            toe_radius_mm.to_bits(),
             0,
             0,
         ],
-        SectionSpec::Channel(s) | SectionSpec::Tee(s) => [
+        SectionSpec::Channel(Flanged {
+            depth_mm,
+            width_mm,
+            flange_mm,
+            web_mm,
+            root_radius_mm,
+        })
+        | SectionSpec::Tee(Flanged {
+            depth_mm,
+            width_mm,
+            flange_mm,
+            web_mm,
+            root_radius_mm,
+        }) => [
             if matches!(spec, SectionSpec::Channel(_)) {
                 5
             } else {
                 6
             },
-            s.depth_mm.to_bits(),
-            s.width_mm.to_bits(),
-            s.flange_mm.to_bits(),
-            s.web_mm.to_bits(),
-            s.root_radius_mm.to_bits(),
+            depth_mm.to_bits(),
+            width_mm.to_bits(),
+            flange_mm.to_bits(),
+            web_mm.to_bits(),
+            root_radius_mm.to_bits(),
             0,
             0,
         ],
-        SectionSpec::Rect(s) => [7, s.depth_mm.to_bits(), s.width_mm.to_bits(), 0, 0, 0, 0, 0],
-        SectionSpec::Round(s) => [8, s.diameter_mm.to_bits(), 0, 0, 0, 0, 0, 0],
-        SectionSpec::Given(s) => [
+        SectionSpec::Rect(Rect { depth_mm, width_mm }) => {
+            [7, depth_mm.to_bits(), width_mm.to_bits(), 0, 0, 0, 0, 0]
+        }
+        SectionSpec::Round(Round { diameter_mm }) => [8, diameter_mm.to_bits(), 0, 0, 0, 0, 0, 0],
+        // Typed moduli do not fit the key; a given section is cheap to build.
+        SectionSpec::Given(Given {
+            w_el_major_mm3,
+            w_el_minor_mm3,
+            w_pl_major_mm3,
+            w_pl_minor_mm3,
+            ..
+        }) if w_el_major_mm3.is_some()
+            || w_el_minor_mm3.is_some()
+            || w_pl_major_mm3.is_some()
+            || w_pl_minor_mm3.is_some() =>
+        {
+            return None
+        }
+        SectionSpec::Given(Given {
+            area_mm2,
+            i_major_mm4,
+            i_minor_mm4,
+            torsion_mm4,
+            warping_mm6,
+            w_el_major_mm3: _,
+            w_el_minor_mm3: _,
+            w_pl_major_mm3: _,
+            w_pl_minor_mm3: _,
+        }) => [
             9,
-            s.area_mm2.to_bits(),
-            s.i_major_mm4.to_bits(),
-            s.i_minor_mm4.to_bits(),
-            opt(s.torsion_mm4),
-            opt(s.warping_mm6),
+            area_mm2.to_bits(),
+            i_major_mm4.to_bits(),
+            i_minor_mm4.to_bits(),
+            opt(*torsion_mm4),
+            opt(*warping_mm6),
             0,
             0,
         ],
-        SectionSpec::Catalogue(_) => return None,
+        SectionSpec::Catalogue(CatalogueRef { designation: _ }) => return None,
     };
     Some(Key(k))
 }

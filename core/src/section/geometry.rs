@@ -766,7 +766,13 @@ fn split_rotated(st: &[(f64, f64)], c: f64) -> (f64, f64, f64, f64, f64) {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::disallowed_methods
+    )]
+    // The standard library's functions are the reference here.
     use super::*;
 
     fn close(a: f64, b: f64, tol: f64) {

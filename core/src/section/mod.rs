@@ -1,11 +1,12 @@
 //! Cross-sections: the parametric shapes of the member file and their
 //! properties.
 //!
-//! Axes: `y` is the major (strong) axis and `z` the minor axis for the
-//! doubly and singly symmetric shapes, with depth running along the web
-//! (bending about `y` loads the web in its plane). For angles the
-//! properties are also given about the principal axes `u` (major) and `v`
-//! (minor). Every property is computed from the dimensions, with root and
+//! Axes: `y` and `z` are the geometric axes, with depth running along the
+//! web (bending about `y` loads the web in its plane; for an I, y-y is
+//! parallel to the flanges, as EN 1993-1-1 Table 6.2 names it). `major`
+//! and `minor` are the principal axes, major the stiffer: y for the usual
+//! shapes, z for one wider than deep ([`Section::major_is_z`]). For angles
+//! the principal axes are `u` (major) and `v` (minor). Every property is computed from the dimensions, with root and
 //! corner radii as true circular arcs.
 
 use serde::{Deserialize, Serialize};
@@ -16,28 +17,58 @@ mod cache;
 pub mod geometry;
 pub mod outline;
 pub mod plates;
+pub mod schema;
 pub mod shapes;
 
-/// How an I/H section was made: it selects the EN 1993-1-1 buckling curve.
+/// How an I/H section was made: it selects the EN 1993-1-1 buckling curve
+/// (and the AISC 360-16 Table B4.1a case of the flanges).
+///
+/// A member file that does not say (`make` absent) gets [`IMake::Unstated`]:
+/// each method then takes the make that gives the lower resistance and says
+/// so on the result (see [`crate::method::make`]). `Unstated` is never
+/// written to a file (the key is left out), nor read from one.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "kebab-case")]
 pub enum IMake {
     /// Hot-rolled, with root radii.
-    #[default]
     Rolled,
     /// Welded from plates, no radii.
     Welded,
+    /// Not given: the lower-resistance make is taken.
+    #[default]
+    #[serde(skip)]
+    Unstated,
+}
+
+impl IMake {
+    /// Whether the member file left the make out.
+    pub fn is_unstated(&self) -> bool {
+        *self == IMake::Unstated
+    }
 }
 
 /// How a hollow section was made.
+///
+/// Absent in the member file: [`HollowMake::Unstated`], read as cold-formed
+/// (the lower resistance, see [`crate::method::make`]).
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize, Default)]
 #[serde(rename_all = "kebab-case")]
 pub enum HollowMake {
     /// Hot-finished (EN 10210, or seamless).
-    #[default]
     HotFinished,
     /// Cold-formed (EN 10219, ASTM A500 electric-resistance-welded).
     ColdFormed,
+    /// Not given: the lower-resistance make is taken.
+    #[default]
+    #[serde(skip)]
+    Unstated,
+}
+
+impl HollowMake {
+    /// Whether the member file left the make out.
+    pub fn is_unstated(&self) -> bool {
+        *self == HollowMake::Unstated
+    }
 }
 
 /// A doubly symmetric I or H section.
@@ -55,8 +86,8 @@ pub struct IShape {
     /// Root radius r between web and flange (0 for welded).
     #[serde(default)]
     pub root_radius_mm: f64,
-    /// Rolled or welded.
-    #[serde(default)]
+    /// Rolled or welded; absent: not stated.
+    #[serde(default, skip_serializing_if = "IMake::is_unstated")]
     pub make: IMake,
 }
 
@@ -76,8 +107,8 @@ pub struct Rhs {
     /// Inner corner radius r_i; when absent, max(r_o - t, 0).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub inner_radius_mm: Option<f64>,
-    /// Hot-finished or cold-formed.
-    #[serde(default)]
+    /// Hot-finished or cold-formed; absent: not stated.
+    #[serde(default, skip_serializing_if = "HollowMake::is_unstated")]
     pub make: HollowMake,
 }
 
@@ -89,8 +120,8 @@ pub struct Chs {
     pub diameter_mm: f64,
     /// Wall thickness t.
     pub wall_mm: f64,
-    /// Hot-finished or cold-formed.
-    #[serde(default)]
+    /// Hot-finished or cold-formed; absent: not stated.
+    #[serde(default, skip_serializing_if = "HollowMake::is_unstated")]
     pub make: HollowMake,
 }
 
@@ -164,13 +195,23 @@ pub struct Given {
     /// Warping constant (optional).
     #[serde(default, skip_serializing_if = "Option::is_none")]
     pub warping_mm6: Option<f64>,
+    /// Elastic modulus about the major axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_el_major_mm3: Option<f64>,
+    /// Elastic modulus about the minor axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_el_minor_mm3: Option<f64>,
+    /// Plastic modulus about the major axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_pl_major_mm3: Option<f64>,
+    /// Plastic modulus about the minor axis (optional; version 3).
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub w_pl_minor_mm3: Option<f64>,
 }
 
-/// A section as written in the member file, selected by `"kind"`. The
-/// browser build reads it through [`crate::wire::section`] (smaller code,
-/// same rules).
-#[derive(Debug, Clone, PartialEq, Serialize)]
-#[cfg_attr(not(target_arch = "wasm32"), derive(Deserialize))]
+/// A section as written in the member file, selected by `"kind"`; its keys,
+/// units and defaults are described once in [`schema`].
+#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 #[serde(tag = "kind", rename_all = "kebab-case")]
 pub enum SectionSpec {
     /// Doubly symmetric I/H.
@@ -193,13 +234,6 @@ pub enum SectionSpec {
     Given(Given),
     /// An entry of the built-in catalogue of standard sections, by designation.
     Catalogue(CatalogueRef),
-}
-
-#[cfg(target_arch = "wasm32")]
-impl<'de> Deserialize<'de> for SectionSpec {
-    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> std::result::Result<Self, D::Error> {
-        crate::wire::section(serde_json::Value::deserialize(d)?).map_err(serde::de::Error::custom)
-    }
 }
 
 /// A reference to a catalogue entry; the member file keeps the designation.
@@ -299,10 +333,46 @@ pub struct Section {
     pub designation: Option<&'static str>,
 }
 
+impl Section {
+    /// The thickest plate, mm (see [`SectionSpec::governing_thickness_mm`]);
+    /// a built section always has dimensions, or 0 for given properties.
+    pub fn governing_thickness_mm(&self) -> f64 {
+        self.spec.governing_thickness_mm().unwrap_or(0.0)
+    }
+
+    /// Whether the section is a channel.
+    pub fn spec_is_channel(&self) -> bool {
+        matches!(self.spec, SectionSpec::Channel(_))
+    }
+
+    /// Whether the principal major axis is the geometric z-z axis (parallel
+    /// to the depth, the web of an I): a section stiffer about it than about
+    /// y-y, such as an I wider than deep (principal angle 90°).
+    pub fn major_is_z(&self) -> bool {
+        (self.props.principal_angle_rad - std::f64::consts::FRAC_PI_2).abs() < 1e-9
+    }
+
+    /// The geometric axis the principal major (`major` true) or minor axis
+    /// is, as the codes' tables name it: "y-y" (parallel to the width, the
+    /// flanges of an I) or "z-z" (parallel to the depth, the web). `None`
+    /// for angles (principal axes u-u, v-v) and typed properties.
+    pub fn axis_name(&self, major: bool) -> Option<&'static str> {
+        if matches!(self.family, Family::Angle | Family::Given) {
+            return None;
+        }
+        Some(if major != self.major_is_z() {
+            "y-y"
+        } else {
+            "z-z"
+        })
+    }
+}
+
 impl SectionSpec {
-    /// The section's family.
-    pub fn family(&self) -> Family {
-        match self {
+    /// The section's family; `None` for a catalogue reference, whose
+    /// family the catalogue knows (`catalogue::family`).
+    pub fn family(&self) -> Option<Family> {
+        Some(match self {
             SectionSpec::I(_) => Family::I,
             SectionSpec::Rhs(_) => Family::Rhs,
             SectionSpec::Chs(_) => Family::Chs,
@@ -312,16 +382,16 @@ impl SectionSpec {
             SectionSpec::Rect(_) => Family::Rect,
             SectionSpec::Round(_) => Family::Round,
             SectionSpec::Given(_) => Family::Given,
-            SectionSpec::Catalogue(c) => crate::catalogue::resolve(&c.designation)
-                .map(|e| e.spec.family())
-                .unwrap_or(Family::Given),
-        }
+            SectionSpec::Catalogue(_) => return None,
+        })
     }
 
     /// The thickest plate of the section, mm: the thickness that sets the
-    /// yield strength in the material standards (0 for given sections).
-    pub fn governing_thickness_mm(&self) -> f64 {
-        match self {
+    /// yield strength in the material standards (0 for given sections,
+    /// which do not tell it); `None` for a catalogue reference, which is
+    /// resolved first (a built [`Section`]'s spec never is one).
+    pub fn governing_thickness_mm(&self) -> Option<f64> {
+        Some(match self {
             SectionSpec::I(s) => s.flange_mm.max(s.web_mm),
             SectionSpec::Rhs(s) => s.wall_mm,
             SectionSpec::Chs(s) => s.wall_mm,
@@ -330,21 +400,25 @@ impl SectionSpec {
             SectionSpec::Rect(s) => s.depth_mm.min(s.width_mm),
             SectionSpec::Round(s) => s.diameter_mm,
             SectionSpec::Given(_) => 0.0,
-            SectionSpec::Catalogue(c) => crate::catalogue::resolve(&c.designation)
-                .map(|e| e.spec.governing_thickness_mm())
-                .unwrap_or(0.0),
-        }
+            SectionSpec::Catalogue(_) => return None,
+        })
     }
 
-    /// Validates the dimensions and computes the properties.
+    /// Validates the dimensions and computes the properties. A catalogue
+    /// reference is an error here: the catalogue builds it
+    /// (`catalogue::build`), which the check does when it prepares a member.
     pub fn build(&self) -> Result<Section> {
-        if let SectionSpec::Catalogue(c) = self {
-            // Built once per entry and kept by the catalogue.
-            return crate::catalogue::section(&c.designation);
-        }
+        let Some(family) = self.family() else {
+            return Err(crate::error::Error::Geometry {
+                field: "designation",
+                reason: "a catalogue reference has no dimensions of its own; it is resolved \
+                         through the catalogue"
+                    .into(),
+            });
+        };
         let mut section = Section {
             spec: self.clone(),
-            family: self.family(),
+            family,
             props: Properties::default(),
             designation: None,
         };

@@ -7,21 +7,18 @@
 //! repeated. Arcs are approximated by [`super::shapes::SEGMENTS_PER_QUARTER`]
 //! chords per quarter circle. Sections without dimensions (typed
 //! properties) and invalid dimensions give no polygons.
+//! A catalogue reference gives none: the caller passes the resolved
+//! section's spec (`Section::spec`).
 //!
-//! [`ineffective`] returns, in the same coordinates, the strips of a
-//! slender section that its effective widths leave out (see its docs).
+//! `crate::stability::ineffective` draws, in the same coordinates, the
+//! strips of a slender section that its effective widths leave out.
 
 use super::{shapes, SectionSpec};
-use crate::stability::classify::{Classified, Kind, Part};
-use crate::stability::effective::Effective;
 
-/// The dimensions behind a catalogue reference (the spec itself otherwise).
+/// The spec when it has dimensions (not a catalogue reference).
 pub(crate) fn resolved(spec: &SectionSpec) -> Option<&SectionSpec> {
     match spec {
-        SectionSpec::Catalogue(c) => match crate::catalogue::resolve(&c.designation) {
-            Ok(entry) if !matches!(entry.spec, SectionSpec::Catalogue(_)) => Some(&entry.spec),
-            _ => None,
-        },
+        SectionSpec::Catalogue(_) => None,
         s => Some(s),
     }
 }
@@ -41,98 +38,6 @@ pub fn outline(spec: &SectionSpec) -> Vec<Vec<(f64, f64)>> {
         .collect()
 }
 
-/// The ineffective strips of a slender section under uniform compression,
-/// as rectangles (counter-clockwise, origin at the centroid like
-/// [`outline`]), one per reduced element, from the effective widths `eff`
-/// the check computed for the classification `c`
-/// ([`crate::stability::effective::of_check`]). Each strip is the element's
-/// width less its effective width, `c - b_eff`, across the plate thickness:
-/// in the middle of an internal element (EN 1993-1-5 Table 4.1, psi = 1:
-/// `b_e1 = b_e2 = b_eff/2` at the supported edges) and at the free tip of an
-/// outstand (Table 4.2: effective from the supported edge). AISC 360-16 E7
-/// gives widths only; they are placed the same way (common practice for
-/// drawing). Tubes (AISC E7-7 scales the whole area) and sections without
-/// dimensions give none.
-pub fn ineffective(spec: &SectionSpec, c: &Classified, eff: &Effective) -> Vec<Vec<(f64, f64)>> {
-    let mut out = Vec::new();
-    let Some(spec) = resolved(spec) else {
-        return out;
-    };
-    let Ok(props) = shapes::properties(spec) else {
-        return out;
-    };
-    let (yc, zc) = (props.centroid_y_mm, props.centroid_z_mm);
-    let mut rect = |y0: f64, y1: f64, z0: f64, z1: f64| {
-        let (y0, y1, z0, z1) = (y0 - yc, y1 - yc, z0 - zc, z1 - zc);
-        out.push(vec![(y0, z0), (y1, z0), (y1, z1), (y0, z1)]);
-    };
-    for (e, r) in c.elements().iter().zip(eff.reduced.iter()) {
-        let Some(r) = r else { continue };
-        let s = (e.width_mm - r.effective_mm).max(0.0);
-        if s <= 0.0 || matches!(e.kind, Kind::Tube | Kind::Rule) {
-            continue;
-        }
-        let t = e.thickness_mm;
-        // Reference position of each shape: see [`super::shapes`].
-        match (spec, e.part) {
-            (SectionSpec::I(d), Part::IFlange) => {
-                let (b, h, tf) = (d.width_mm, d.depth_mm, d.flange_mm);
-                for z0 in [0.0, h - tf] {
-                    rect(0.0, s, z0, z0 + tf);
-                    rect(b - s, b, z0, z0 + tf);
-                }
-            }
-            (SectionSpec::I(d), Part::IWeb) => {
-                let (b, h) = (d.width_mm, d.depth_mm);
-                rect((b - t) / 2.0, (b + t) / 2.0, (h - s) / 2.0, (h + s) / 2.0);
-            }
-            (SectionSpec::Rhs(d), Part::RhsDepthWall) => {
-                let (b, h) = (d.width_mm, d.depth_mm);
-                for y0 in [0.0, b - t] {
-                    rect(y0, y0 + t, (h - s) / 2.0, (h + s) / 2.0);
-                }
-            }
-            (SectionSpec::Rhs(d), Part::RhsWidthWall) => {
-                let (b, h) = (d.width_mm, d.depth_mm);
-                for z0 in [0.0, h - t] {
-                    rect((b - s) / 2.0, (b + s) / 2.0, z0, z0 + t);
-                }
-            }
-            (SectionSpec::Channel(d), Part::ChannelWeb) => {
-                let h = d.depth_mm;
-                rect(0.0, t, (h - s) / 2.0, (h + s) / 2.0);
-            }
-            (SectionSpec::Channel(d), Part::ChannelFlange) => {
-                let (b, h) = (d.width_mm, d.depth_mm);
-                for z0 in [0.0, h - t] {
-                    rect(b - s, b, z0, z0 + t);
-                }
-            }
-            (SectionSpec::Tee(d), Part::TeeFlange) => {
-                let (b, h) = (d.width_mm, d.depth_mm);
-                rect(0.0, s, h - t, h);
-                rect(b - s, b, h - t, h);
-            }
-            (SectionSpec::Tee(d), Part::TeeStem) => {
-                let b = d.width_mm;
-                rect((b - t) / 2.0, (b + t) / 2.0, 0.0, s);
-            }
-            (SectionSpec::Angle(d), Part::AngleLongLeg | Part::AngleShortLeg) => {
-                // The long leg is the one of length max(depth, width); the
-                // leg of length `depth_mm` runs up +z from the heel.
-                let (h, b) = (d.depth_mm, d.width_mm);
-                if (e.part == Part::AngleLongLeg) == (h >= b) {
-                    rect(0.0, t, h - s, h);
-                } else {
-                    rect(b - s, b, 0.0, t);
-                }
-            }
-            _ => {}
-        }
-    }
-    out
-}
-
 #[cfg(test)]
 mod tests {
     #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
@@ -142,7 +47,7 @@ mod tests {
     use crate::member::Member;
     use crate::method::Method;
     use crate::section::{Angle, Given, IMake, IShape, Rhs};
-    use crate::stability::effective::of_check;
+    use crate::stability::ineffective::ineffective;
 
     fn area(p: &[(f64, f64)]) -> f64 {
         let n = p.len();
@@ -233,6 +138,10 @@ mod tests {
             i_minor_mm4: 1.0,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         });
         assert!(outline(&given).is_empty());
     }
@@ -268,7 +177,7 @@ mod tests {
     /// A_e: the governing one's).
     fn zones_and_removed(m: &Member) -> (Vec<Vec<(f64, f64)>>, f64) {
         checked(m, |input, r| {
-            let (c, eff) = of_check(input, r).unwrap();
+            let (c, eff) = r.effective(input).unwrap();
             assert!(
                 r.trace
                     .iter()
@@ -304,7 +213,7 @@ mod tests {
             make: IMake::Rolled,
         });
         let m = member(spec.clone(), 235.0, Method::En1993);
-        assert!(checked(&m, |input, r| of_check(input, r).is_none()));
+        assert!(checked(&m, |input, r| r.effective(input).is_none()));
         let section = spec.build().unwrap();
         let c = crate::stability::classify::classify(
             crate::stability::classify::Code::En1993,

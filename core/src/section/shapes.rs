@@ -405,6 +405,10 @@ mod tests {
             i_minor_mm4: 3_100_000.0,
             torsion_mm4: None,
             warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         });
         assert_eq!(describe(&g), "given A=2850 I=9200000/3100000");
     }
@@ -705,6 +709,10 @@ mod tests {
             i_minor_mm4: 2e7,
             torsion_mm4: None,
             warping_mm6: Some(1e10),
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
         }))
         .unwrap();
         close(p.r_major_mm, 100.0, 1e-15, "r");
@@ -776,6 +784,10 @@ mod tests {
                     i_minor_mm4: 2.0,
                     torsion_mm4: None,
                     warping_mm6: None,
+                    w_el_major_mm3: None,
+                    w_el_minor_mm3: None,
+                    w_pl_major_mm3: None,
+                    w_pl_minor_mm3: None,
                 }),
                 "i_minor_mm4",
             ),
@@ -786,6 +798,10 @@ mod tests {
                     i_minor_mm4: 1.0,
                     torsion_mm4: Some(-1.0),
                     warping_mm6: None,
+                    w_el_major_mm3: None,
+                    w_el_minor_mm3: None,
+                    w_pl_major_mm3: None,
+                    w_pl_minor_mm3: None,
                 }),
                 "torsion_mm4",
             ),

@@ -357,7 +357,9 @@ pub(crate) fn fill(spec: &SectionSpec, fy_mpa: f64, e_mpa: f64, out: &mut Classi
                 s.web_mm,
                 s.root_radius_mm,
             );
-            let welded = s.make == IMake::Welded;
+            // A make not given is read as welded (the smaller AISC limits:
+            // Table B4.1a case 2, web h = d - 2t_f; the lower resistance).
+            let welded = s.make != IMake::Rolled;
             if en {
                 add(raw(
                     Part::IFlange,

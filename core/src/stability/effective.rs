@@ -16,12 +16,12 @@
 //! `A_e = (0.038 E / (F_y D/t) + 2/3) A_g` (E7-7), capped at A_g.
 //!
 //! [`of_check`] gives back the effective widths a finished check used, for
-//! drawing them ([`crate::section::outline::ineffective`]).
+//! drawing them ([`super::ineffective::ineffective`]).
 
 use super::classify::{self, Classified, Element, Kind, Part};
-use crate::check::CheckResult;
 use crate::material::Material;
 use crate::method::{Input, Method};
+use crate::outcome::{Mode, ModeResult};
 
 /// EN 1993-1-5 4.4 plate slenderness for uniform compression.
 pub fn en_lambda_p(b_bar_mm: f64, t_mm: f64, epsilon: f64, k_sigma: f64) -> f64 {
@@ -222,25 +222,31 @@ pub fn aisc_area(
     out
 }
 
-/// The classification and effective widths behind `result` (checked from
-/// `input`), worked by the same functions as the check: EN 1993-1-1
-/// [`en_area`], AISC 360-16 [`aisc_area`] at the governing mode's
-/// F_cr = reduction x F_y. `None` when the section is not slender, is not
-/// steel, or the method takes no effective area.
-pub fn of_check(input: &Input<'_>, result: &CheckResult) -> Option<(Classified, Effective)> {
+/// The classification and effective widths behind a check by `method`
+/// (from `input`) whose modes were `modes`, `governing` governing, worked by
+/// the same functions as the check: EN 1993-1-1 [`en_area`], AISC 360-16
+/// [`aisc_area`] at the governing mode's F_cr = reduction x F_y. `None` when
+/// the section is not slender, is not steel, or the method takes no
+/// effective area. `crate::check::CheckResult::effective` passes a result's.
+pub fn of_check(
+    input: &Input<'_>,
+    method: Method,
+    modes: &[ModeResult],
+    governing: Mode,
+) -> Option<(Classified, Effective)> {
     let Material::Steel(s) = input.material else {
         return None;
     };
-    let code = super::table_of(result.method)?;
+    let code = super::table_of(method)?;
     let c = classify::classify(code, &input.section.spec, s.fy_mpa, s.e_mpa)?;
     if !c.is_slender() {
         return None;
     }
     let a = input.section.props.area_mm2;
-    let eff = match result.method {
+    let eff = match method {
         Method::En1993 => en_area(&c, a),
         Method::AiscLrfd | Method::AiscAsd => {
-            let g = result.modes.iter().find(|m| m.mode == result.governing)?;
+            let g = modes.iter().find(|m| m.mode == governing)?;
             aisc_area(&c, a, s.fy_mpa, s.e_mpa, g.reduction * s.fy_mpa)
         }
         _ => return None,

@@ -15,16 +15,17 @@
 
 use std::f64::consts::PI;
 
-use crate::check::{Mode, ModeResult, Warning};
 use crate::error::Result;
 use crate::material::Material;
 use crate::member::BucklingLengths;
 use crate::method::{self, Input, Method};
+use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{put, step, sym, symbol, Scope, Sym, Trace};
 
 pub mod classify;
 pub mod effective;
+pub mod ineffective;
 pub mod torsional;
 
 use classify::{Classified, Code, Kind};
@@ -257,7 +258,9 @@ pub fn assess(
         Method::CsaS16 => {
             out.refused = true;
             warn(warnings, "outside-code-scope", || {
-                "Class 4 section in compression: CSA S16-19 13.3.5 (effective area) is not implemented; \
+                // 13.3.4 in S16-19 (13.3.5 was the S16-14 numbering);
+                // recalled from memory, not checked against a copy at hand.
+                "Class 4 section in compression: CSA S16-19 13.3.4 (effective area) is not implemented; \
                  no resistance is given"
                     .to_string()
             });
@@ -619,7 +622,11 @@ pub fn twist_mode(
     }
     let start = trace.len();
     let mut scratch: Vec<Warning> = Vec::new();
-    let r = method::axis(method, axes, Mode::Minor, l_eq, trace, &mut scratch)?;
+    // Entered as the twisting mode itself, so a method whose curve depends
+    // on the axis takes the one its code names for it (EN 1993-1-1
+    // 6.3.1.4(1): the z-z curve of Table 6.2); the others read it as the
+    // minor axis, whose I_z the equivalent length is built on.
+    let r = method::axis(method, axes, mode, l_eq, trace, &mut scratch)?;
     for s in trace.iter_mut().skip(start) {
         s.scope = scope;
         // The method's geometry lines describe the equivalent flexural

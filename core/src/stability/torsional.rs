@@ -9,7 +9,8 @@
 //!
 //! - flexural: `N_a = pi^2 E I_a / L_a^2`, `N_b = pi^2 E I_b / L_b^2`;
 //! - torsional: `N_T = (G I_t + pi^2 E I_w / L_T^2) / i0^2`
-//!   (EN 1993-1-3 6.2.3(5), AISC 360-16 Eq. E4-9 in load form);
+//!   (EN 1993-1-3 6.2.3(5), AISC 360-16 Eq. E4-7 for F_ez in load form;
+//!   E4-9 was its number in the 2010 edition; recalled from memory);
 //! - flexural-torsional, the smallest root of
 //!   `f(N) = (N - N_a)(N - N_b)(N - N_T) - N^2 (N - N_b) a0^2/i0^2 - N^2 (N - N_a) b0^2/i0^2`
 //!   (AISC 360-16 Eq. E4-4 multiplied by A^3). An offset along an axis

@@ -147,7 +147,7 @@ fn made_afresh(key: Signal<u64>, make: Arc<dyn Fn() -> AnyView + Send + Sync>) -
 /// A key for [`made_afresh`] from any hashable value.
 fn key_of<T: std::hash::Hash>(t: &T) -> u64 {
     use std::hash::Hasher;
-    let mut h = std::collections::hash_map::DefaultHasher::new();
+    let mut h = rustc_hash::FxHasher::default();
     t.hash(&mut h);
     h.finish()
 }

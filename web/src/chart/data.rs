@@ -37,6 +37,9 @@ pub struct Marker {
     pub resistance_mpa: f64,
     /// Whether this axis governs.
     pub governing: bool,
+    /// The geometric axis of a flexural mode ("y-y", "z-z"), when the
+    /// section's shape names one (not for angles or typed properties).
+    pub axis: Option<&'static str>,
 }
 
 /// Everything the chart draws.
@@ -149,6 +152,11 @@ pub fn build(
             applied_mpa: applied,
             resistance_mpa: m.resistance_kn * 1000.0 / area,
             governing: m.mode == result.governing,
+            axis: match m.mode {
+                Mode::Major => prepared.section.axis_name(true),
+                Mode::Minor => prepared.section.axis_name(false),
+                _ => None,
+            },
         })
         .collect();
 

@@ -320,10 +320,14 @@ where
             Mode::FlexuralTorsional => "flexural-torsional",
             Mode::Section => "cross-section",
         };
+        let name = match m.axis {
+            Some(axis) => format!("{name} {axis}"),
+            None => name.to_string(),
+        };
         let tag = if m.governing {
             format!("{name} · governs")
         } else {
-            name.to_string()
+            name
         };
         // Estimated, not measured: plotters measures text with a styled
         // element, which the page's style-src policy refuses.

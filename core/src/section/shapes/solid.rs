@@ -12,7 +12,8 @@
 //!
 //! Given: the typed area and second moments; r = √(I/A); the torsion and
 //! warping constants when typed (else 0); the elastic and plastic moduli
-//! are unknown and left at 0; centroid and shear centre coincide.
+//! when typed (member file version 3), else 0 (unknown: a moment that needs
+//! one is refused naming the key); centroid and shear centre coincide.
 
 use std::f64::consts::PI;
 
@@ -90,6 +91,10 @@ pub(super) fn given(s: &Given) -> Result<Properties> {
         r_minor_mm: (i_minor / a).sqrt(),
         torsion_mm4: optional("torsion_mm4", s.torsion_mm4)?,
         warping_mm6: optional("warping_mm6", s.warping_mm6)?,
+        w_el_major_mm3: optional("w_el_major_mm3", s.w_el_major_mm3)?,
+        w_el_minor_mm3: optional("w_el_minor_mm3", s.w_el_minor_mm3)?,
+        w_pl_major_mm3: optional("w_pl_major_mm3", s.w_pl_major_mm3)?,
+        w_pl_minor_mm3: optional("w_pl_minor_mm3", s.w_pl_minor_mm3)?,
         mass_kg_per_m: a * 1e-6 * super::STEEL_DENSITY,
         ..Properties::default()
     })

@@ -102,3 +102,63 @@ fn a_closed_pipe_ends_every_subcommand_quietly() {
     }
     std::fs::remove_file(big).unwrap();
 }
+
+fn root_file(rel: &str) -> String {
+    PathBuf::from(env!("CARGO_MANIFEST_DIR"))
+        .join("..")
+        .join(rel)
+        .to_str()
+        .unwrap()
+        .to_string()
+}
+
+/// Runs `strutline args` to the end: (status, stdout, stderr).
+fn run(args: &[&str]) -> (Option<i32>, String, String) {
+    let out = Command::new(BIN).args(args).output().unwrap();
+    (
+        out.status.code(),
+        String::from_utf8_lossy(&out.stdout).into_owned(),
+        String::from_utf8_lossy(&out.stderr).into_owned(),
+    )
+}
+
+#[test]
+fn help_is_generated_for_every_command_and_exits_0() {
+    let (code, text, _) = run(&["help"]);
+    assert_eq!(code, Some(0));
+    for c in ["check", "envelope", "sections", "size", "convert"] {
+        assert!(text.contains(&format!("  {c} ")), "{c} missing:\n{text}");
+        let (code, text, err) = run(&[c, "--help"]);
+        assert_eq!(code, Some(0), "{c} --help: {err}");
+        assert!(text.contains("Usage: strutline"), "{c}: {text}");
+    }
+    let (code, text, _) = run(&["help", "size"]);
+    assert_eq!(code, Some(0));
+    assert!(
+        text.contains("--limit") && text.contains("known series"),
+        "{text}"
+    );
+    // No command: the help, on stderr, status 2 (a script called it wrongly).
+    let (code, _, err) = run(&[]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("check"), "{err}");
+}
+
+#[test]
+fn exit_status_says_within_over_or_invalid() {
+    let (code, text, _) = run(&["check", &example()]);
+    assert_eq!(code, Some(0), "{text}");
+    assert!(text.contains("checking aid"), "{text}");
+    let (code, text, _) = run(&["check", &root_file("examples/yard-canopy-over.json")]);
+    assert_eq!(code, Some(1), "{text}");
+    assert!(text.contains("OVER"), "{text}");
+    let (code, _, err) = run(&["check", "/nonexistent/members.json"]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("cannot read"), "{err}");
+    let (code, _, err) = run(&["check", &example(), "--colour"]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("--colour"), "{err}");
+    let (code, _, err) = run(&["envelope", &example(), "--member", "M1", "--to", "-1"]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("--to"), "{err}");
+}

@@ -11,8 +11,21 @@ use serde_json::{json, Value};
 use crate::sections::put;
 use strutline_core::sizing::{Refusal, Rejected, Sizer, SizingResult};
 
-const USAGE: &str =
-    "usage: strutline size FILE --series NAME [--family i|rhs|chs] [--limit U] [--json]";
+/// `strutline size`'s options.
+#[derive(Debug, clap::Args)]
+pub struct Args {
+    /// The member file (.json or .csv)
+    #[arg(value_name = "FILE")]
+    pub path: String,
+    #[command(flatten)]
+    pub candidates: crate::sections::Candidates,
+    /// The largest utilisation a proposal may have
+    #[arg(long, value_name = "U", default_value_t = 1.0, value_parser = crate::positive, allow_negative_numbers = true)]
+    pub limit: f64,
+    /// Write the proposals as JSON instead of a table
+    #[arg(long)]
+    pub json: bool,
+}
 
 fn rejected_json(r: &Rejected<'_>) -> Value {
     match &r.why {
@@ -108,37 +121,13 @@ fn table(results: &[SizingResult<'_>]) -> String {
     out
 }
 
-/// Runs the subcommand with the arguments after `size`.
-pub fn run(args: &[String]) -> Result<i32, String> {
-    let mut path: Option<&str> = None;
-    let (series, family) = crate::sections::candidate_flags(args, USAGE)?;
-    let limit = match crate::flag_value(args, "--limit").map_err(|e| format!("{e}; {USAGE}"))? {
-        None => 1.0,
-        Some(v) => v
-            .parse::<f64>()
-            .ok()
-            .filter(|u| u.is_finite() && *u > 0.0)
-            .ok_or_else(|| {
-                format!("--limit: \"{v}\" is not a utilisation limit greater than 0, such as 0.9")
-            })?,
-    };
-    let mut json_out = false;
-    for a in crate::others(args, &["--series", "--family", "--limit"]) {
-        match a {
-            "--json" => json_out = true,
-            "--help" | "-h" => return crate::sections::help(USAGE),
-            other if other.starts_with("--") => {
-                return Err(format!("size: unknown option \"{other}\"; {USAGE}"))
-            }
-            other => {
-                if path.is_some() {
-                    return Err(format!("size: one member file only; {USAGE}"));
-                }
-                path = Some(other);
-            }
-        }
-    }
-    let path = path.ok_or_else(|| format!("size: no member file; {USAGE}"))?;
+/// Runs the subcommand.
+pub fn run(args: &Args) -> Result<i32, String> {
+    let (path, limit, json_out) = (&args.path, args.limit, args.json);
+    let (series, family) = (
+        args.candidates.series.as_deref(),
+        args.candidates.family.as_deref(),
+    );
     if series.is_none() && family.is_none() {
         return Err(format!(
             "size: name the candidates with --series NAME (or --family i|rhs|chs); known series: {}",
@@ -199,10 +188,6 @@ mod tests {
          "method": "en1993-1-1"}
       ]}"#;
 
-    fn args(a: &[&str]) -> Vec<String> {
-        a.iter().map(|s| s.to_string()).collect()
-    }
-
     #[test]
     fn proposals_in_json_and_table() {
         let file = strutline_core::file::parse(FILE).unwrap();
@@ -230,12 +215,20 @@ mod tests {
         let path = std::env::temp_dir().join(format!("strutline-size-{}.json", std::process::id()));
         std::fs::write(&path, FILE).unwrap();
         let p = path.to_str().unwrap();
-        assert_eq!(run(&args(&[p, "--series", "heb", "--limit", "0.9"])), Ok(0));
-        assert_eq!(run(&args(&[p, "--family", "i", "--json"])), Ok(0));
-        assert_eq!(run(&args(&[p, "--series", "no such"])), Ok(2));
-        assert!(run(&args(&[p])).is_err());
-        assert!(run(&args(&[p, "--series", "heb", "--limit", "-1"])).is_err());
-        assert!(run(&args(&["/nonexistent/members.json", "--series", "heb"])).is_err());
+        let args = |path: &str, series: Option<&str>, family: Option<&str>, json| Args {
+            path: path.into(),
+            candidates: crate::sections::Candidates {
+                series: series.map(Into::into),
+                family: family.map(Into::into),
+            },
+            limit: 0.9,
+            json,
+        };
+        assert_eq!(run(&args(p, Some("heb"), None, false)), Ok(0));
+        assert_eq!(run(&args(p, None, Some("i"), true)), Ok(0));
+        assert_eq!(run(&args(p, Some("no such"), None, false)), Ok(2));
+        assert!(run(&args(p, None, None, false)).is_err());
+        assert!(run(&args("/nonexistent/members.json", Some("heb"), None, false)).is_err());
         std::fs::remove_file(&path).unwrap();
     }
 }

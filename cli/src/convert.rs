@@ -15,17 +15,34 @@
 use std::path::Path;
 
 use strutline_core::csv::{self, Format};
-use strutline_core::file::{self, MemberFile, MAX_BYTES};
+use strutline_core::file::{self, MAX_BYTES};
 use strutline_core::units::UnitSystem;
 
-/// Reads a member file in either format; see [`strutline_core::csv::read_any`].
-pub fn read_any(path: &str, text: &str) -> Result<MemberFile, String> {
-    csv::read_any(path, text)
+/// The units of a CSV output's columns.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, clap::ValueEnum)]
+pub enum Units {
+    /// The member file's SI keys (length_mm, axial_kn, ...), which round-trip exactly
+    Si,
+    /// US customary columns (length_ft, depth_in, axial_kip, fy_ksi, ...)
+    Us,
 }
 
-const USAGE: &str = "usage: strutline convert IN OUT [--take-valid] [--units si|us]\n  \
-    IN and OUT end in .json or .csv; --take-valid writes the valid members even when some rows have problems;\n  \
-    --units us writes CSV columns in US customary units (length_ft, depth_in, axial_kip, fy_ksi, ...)";
+/// `strutline convert`'s options.
+#[derive(Debug, clap::Args)]
+pub struct Args {
+    /// The member file to read (.json or .csv; another extension is recognised by its content)
+    #[arg(value_name = "IN")]
+    pub input: String,
+    /// The file to write; .json or .csv sets its format
+    #[arg(value_name = "OUT")]
+    pub output: String,
+    /// Write the valid members even when some rows have problems (the exit status is still 2)
+    #[arg(long)]
+    pub take_valid: bool,
+    /// The units of a CSV output's columns
+    #[arg(long, value_enum, default_value_t = Units::Si)]
+    pub units: Units,
+}
 
 fn output_format(path: &str) -> Result<Format, String> {
     let ext = Path::new(path)
@@ -36,7 +53,7 @@ fn output_format(path: &str) -> Result<Format, String> {
         Some("json") => Ok(Format::Json),
         Some("csv") => Ok(Format::Csv),
         _ => Err(format!(
-            "{path}: the output must end in .json or .csv, which sets its format\n{USAGE}"
+            "{path}: the output must end in .json or .csv, which sets its format"
         )),
     }
 }
@@ -55,41 +72,12 @@ fn write_atomically(path: &str, text: &str) -> Result<(), String> {
     })
 }
 
-/// Runs the subcommand with the arguments after `convert`.
-pub fn run(args: &[String]) -> Result<i32, String> {
-    let mut take_valid = false;
-    let mut system = UnitSystem::Si;
-    let mut paths: Vec<&str> = Vec::new();
-    let mut items = args.iter();
-    while let Some(a) = items.next() {
-        match a.as_str() {
-            "--take-valid" => take_valid = true,
-            "--units" => {
-                system = match items.next().map(String::as_str) {
-                    Some("si") => UnitSystem::Si,
-                    Some("us") => UnitSystem::Us,
-                    other => {
-                        return Err(format!(
-                            "convert: --units takes si or us, not {}\n{USAGE}",
-                            other.unwrap_or("nothing")
-                        ))
-                    }
-                }
-            }
-            "-h" | "--help" => {
-                crate::emit(&format!("{USAGE}\n"))?;
-                return Ok(0);
-            }
-            flag if flag.starts_with("--") => {
-                return Err(format!("convert: unknown option {flag}\n{USAGE}"))
-            }
-            path => paths.push(path),
-        }
-    }
-    let [input, output] = paths.as_slice() else {
-        return Err(format!(
-            "convert needs an input and an output file\n{USAGE}"
-        ));
+/// Runs the subcommand.
+pub fn run(args: &Args) -> Result<i32, String> {
+    let (input, output, take_valid) = (args.input.as_str(), args.output.as_str(), args.take_valid);
+    let system = match args.units {
+        Units::Si => UnitSystem::Si,
+        Units::Us => UnitSystem::Us,
     };
     let out_format = output_format(output)?;
     if let Ok(meta) = std::fs::metadata(input) {
@@ -165,6 +153,17 @@ mod tests {
 
     fn s(p: &std::path::Path) -> String {
         p.to_str().unwrap().to_string()
+    }
+
+    /// Runs `strutline convert ARGS` as parsed from a command line.
+    fn run(args: &[String]) -> Result<i32, String> {
+        let argv = std::iter::once("convert").chain(args.iter().map(String::as_str));
+        let words: Vec<&str> = argv.collect();
+        match crate::tests::parse(&words) {
+            Ok(crate::Command::Convert(a)) => super::run(&a),
+            Ok(other) => Err(format!("not convert: {other:?}")),
+            Err(e) => Err(e.to_string()),
+        }
     }
 
     #[test]

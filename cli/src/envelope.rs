@@ -5,34 +5,27 @@
 use strutline_core::check::{Mode, Prepared};
 use strutline_core::envelope;
 
+/// `strutline envelope`'s options.
+#[derive(Debug, clap::Args)]
+pub struct Args {
+    /// The member file (.json or .csv)
+    #[arg(value_name = "FILE")]
+    pub path: String,
+    /// The id of the member whose envelope is printed
+    #[arg(long, value_name = "ID")]
+    pub member: String,
+    /// The largest slenderness sampled
+    #[arg(long, value_name = "L", default_value_t = 250.0, value_parser = crate::positive, allow_negative_numbers = true)]
+    pub to: f64,
+    /// The number of intervals sampled (steps + 1 points)
+    #[arg(long, value_name = "N", default_value_t = 125,
+          value_parser = clap::value_parser!(u32).range(1..=100_000))]
+    pub steps: u32,
+}
+
 /// Runs the subcommand.
-pub fn run(args: &[String]) -> Result<i32, String> {
-    let id = crate::flag_value(args, "--member")?
-        .ok_or("envelope needs --member ID; e.g. `strutline envelope members.json --member C1`")?;
-    let to = match crate::flag_value(args, "--to")? {
-        Some(v) => v
-            .parse::<f64>()
-            .ok()
-            .filter(|v| v.is_finite() && *v > 0.0)
-            .ok_or("--to: expected a slenderness greater than zero, e.g. 250")?,
-        None => 250.0,
-    };
-    let steps = match crate::flag_value(args, "--steps")? {
-        Some(v) => v
-            .parse::<usize>()
-            .ok()
-            .filter(|v| (1..=100_000).contains(v))
-            .ok_or("--steps: expected a whole number from 1 to 100000")?,
-        None => 125,
-    };
-    let mut path = None;
-    for a in crate::others(args, &["--member", "--to", "--steps"]) {
-        if a.starts_with("--") {
-            return Err(format!("envelope: unknown option {a}"));
-        }
-        path = Some(a);
-    }
-    let path = path.ok_or("envelope needs a FILE")?;
+pub fn run(args: &Args) -> Result<i32, String> {
+    let (path, id, to, steps) = (&args.path, &args.member, args.to, args.steps as usize);
     let file = crate::read_members(path)?;
     let member = file
         .member(id)

@@ -4,16 +4,21 @@
 use strutline_core::check::{CheckResult, Prepared};
 use strutline_core::CAUTION;
 
+/// `strutline check`'s options.
+#[derive(Debug, clap::Args)]
+pub struct Args {
+    /// The member file (.json, or .csv one member a row)
+    #[arg(value_name = "FILE")]
+    pub path: String,
+    /// Write the results as JSON instead of a table
+    #[arg(long)]
+    pub json: bool,
+}
+
 /// Runs the subcommand.
-pub fn run(args: &[String]) -> Result<i32, String> {
-    let json = args.iter().any(|a| a == "--json");
-    let files: Vec<&String> = args.iter().filter(|a| !a.starts_with("--")).collect();
-    let [path] = files.as_slice() else {
-        return Err("check needs exactly one FILE; e.g. `strutline check members.json`".into());
-    };
-    if let Some(unknown) = args.iter().find(|a| a.starts_with("--") && *a != "--json") {
-        return Err(format!("check: unknown option {unknown}"));
-    }
+pub fn run(args: &Args) -> Result<i32, String> {
+    let json = args.json;
+    let path = &args.path;
     let file = crate::read_members(path)?;
     let mut results = Vec::with_capacity(file.members.len());
     for member in &file.members {
@@ -53,7 +58,7 @@ fn table(title: &str, members: &[strutline_core::Member], results: &[CheckResult
             format!("{:.1}", m.axial_kn),
             format!("{:.1}", r.resistance_kn),
             format!("{:.3}", r.utilisation),
-            r.governing.key().to_string(),
+            r.governing_check.to_string(),
             if r.passes { "ok".into() } else { "OVER".into() },
         ]);
     }

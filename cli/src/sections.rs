@@ -9,8 +9,6 @@ use serde_json::{json, Value};
 use strutline_core::catalogue::{self, Entry};
 use strutline_core::section::Family;
 
-const USAGE: &str = "usage: strutline sections [--series NAME] [--family i|rhs|chs] [--json]";
-
 /// The known series, for messages.
 pub fn known_series() -> String {
     catalogue::series()
@@ -30,22 +28,25 @@ pub fn family(name: &str) -> Option<Family> {
     }
 }
 
-/// The flags that name candidate sections, each taking a value.
-pub const CANDIDATE_FLAGS: [&str; 2] = ["--series", "--family"];
-
-/// The values of `--series NAME` and `--family F`, if given.
-pub fn candidate_flags<'a>(
-    args: &'a [String],
-    usage: &str,
-) -> Result<(Option<&'a str>, Option<&'a str>), String> {
-    let value = |flag| crate::flag_value(args, flag).map_err(|e| format!("{e}; {usage}"));
-    Ok((value("--series")?, value("--family")?))
+/// The options that name candidate sections (`sections` and `size`).
+#[derive(Debug, Clone, Default, clap::Args)]
+pub struct Candidates {
+    /// A catalogue series, matched forgivingly ("HE B", "heb", "shs-en10210")
+    #[arg(long, value_name = "NAME")]
+    pub series: Option<String>,
+    /// A family of shapes: i, rhs or chs
+    #[arg(long, value_name = "F")]
+    pub family: Option<String>,
 }
 
-/// Prints `usage` and the known series; status 0.
-pub fn help(usage: &str) -> Result<i32, String> {
-    crate::emit(&format!("{usage}\nknown series: {}\n", known_series()))?;
-    Ok(0)
+/// `strutline sections`'s options.
+#[derive(Debug, clap::Args)]
+pub struct Args {
+    #[command(flatten)]
+    pub candidates: Candidates,
+    /// Write the sections as JSON instead of a table
+    #[arg(long)]
+    pub json: bool,
 }
 
 /// A selection of entries: a label and the entries.
@@ -83,7 +84,7 @@ pub fn select(series: Option<&str>, family_name: Option<&str>) -> Result<Selecti
     let entries: Vec<&'static Entry> = match fam {
         Some(f) => entries
             .into_iter()
-            .filter(|e| e.spec.family() == f)
+            .filter(|e| e.spec.family() == Some(f))
             .collect(),
         None => entries,
     };
@@ -120,7 +121,7 @@ fn entry_json(e: &Entry) -> Value {
     let mut v = json!({
         "designation": e.designation,
         "series": e.series,
-        "family": family_key(e.spec.family()),
+        "family": e.spec.family().map(family_key),
         "tabulated": {
             "area_mm2": e.area_mm2,
             "i_major_mm4": e.i_major_mm4,
@@ -193,17 +194,13 @@ fn table(entries: &[&Entry]) -> String {
     out
 }
 
-/// Runs the subcommand with the arguments after `sections`.
-pub fn run(args: &[String]) -> Result<i32, String> {
-    let (series, family_name) = candidate_flags(args, USAGE)?;
-    let mut json_out = false;
-    for a in crate::others(args, &CANDIDATE_FLAGS) {
-        match a {
-            "--json" => json_out = true,
-            "--help" | "-h" => return help(USAGE),
-            other => return Err(format!("sections: unknown argument \"{other}\"; {USAGE}")),
-        }
-    }
+/// Runs the subcommand.
+pub fn run(args: &Args) -> Result<i32, String> {
+    let json_out = args.json;
+    let (series, family_name) = (
+        args.candidates.series.as_deref(),
+        args.candidates.family.as_deref(),
+    );
     let selection = match select(series, family_name) {
         Ok(s) => s,
         Err(message) => {
@@ -254,7 +251,10 @@ mod tests {
         assert_eq!(select(Some("heb"), None).unwrap().entries.len(), 24);
         assert_eq!(select(Some("HE B"), None).unwrap().label, "HE B");
         let chs = select(None, Some("CHS")).unwrap();
-        assert!(chs.entries.iter().all(|e| e.spec.family() == Family::Chs));
+        assert!(chs
+            .entries
+            .iter()
+            .all(|e| e.spec.family() == Some(Family::Chs)));
         assert_eq!(chs.entries.len(), 11 + 68 + 68);
         let all = select(None, None).unwrap();
         assert_eq!(all.entries.len(), catalogue::entries().len());
@@ -285,10 +285,14 @@ mod tests {
     }
 
     #[test]
-    fn run_refuses_unknown_series_and_arguments() {
-        let args = |a: &[&str]| a.iter().map(|s| s.to_string()).collect::<Vec<_>>();
-        assert_eq!(run(&args(&["--series", "nothing"])), Ok(2));
-        assert!(run(&args(&["--colour"])).is_err());
-        assert!(run(&args(&["--series"])).is_err());
+    fn run_refuses_unknown_series() {
+        let args = |series: &str| Args {
+            candidates: Candidates {
+                series: Some(series.into()),
+                family: None,
+            },
+            json: false,
+        };
+        assert_eq!(run(&args("nothing")), Ok(2));
     }
 }

@@ -1,0 +1,143 @@
+//! Writing members as CSV.
+
+use serde_json::{Map, Value};
+
+use super::keys::*;
+use crate::file::{self, MemberFile};
+use crate::units::{self, Quantity, UnitSystem, UsUnit};
+
+pub(super) fn cell_text(v: &Value) -> String {
+    match v {
+        Value::Null => String::new(),
+        Value::Bool(b) => b.to_string(),
+        Value::Number(n) => match n.as_f64() {
+            Some(f) if n.is_f64() => format!("{f}"),
+            _ => n.to_string(),
+        },
+        Value::String(s) => s.clone(),
+        other => other.to_string(),
+    }
+}
+
+pub(super) fn quote(cell: &str, is_text: bool) -> String {
+    let needs = cell.contains([',', '"', '\r', '\n', ';', '\t'])
+        || cell.starts_with(char::is_whitespace)
+        || cell.ends_with(char::is_whitespace)
+        || (is_text && cell.is_empty());
+    if needs {
+        format!("\"{}\"", cell.replace('"', "\"\""))
+    } else {
+        cell.to_string()
+    }
+}
+
+/// The members as CSV with SI keys, `,` separators and CRLF line ends.
+/// The title is not kept (a CSV file has none).
+pub fn to_csv(file: &MemberFile) -> String {
+    to_csv_in(file, UnitSystem::Si)
+}
+
+/// The US customary column for an SI key: member lengths in feet, other
+/// lengths in inches, then in2, in4, in6, kip, ksi, kip-ft.
+pub(super) fn us_column(key: &str) -> Option<(String, UsUnit)> {
+    let unit = match Quantity::of_key(key)? {
+        Quantity::Span => UsUnit::Ft,
+        Quantity::Length => UsUnit::In,
+        Quantity::Area => UsUnit::In2,
+        Quantity::Modulus => UsUnit::In3,
+        Quantity::SecondMoment => UsUnit::In4,
+        Quantity::Warping => UsUnit::In6,
+        Quantity::Force => UsUnit::Kip,
+        Quantity::Stress => UsUnit::Ksi,
+        Quantity::Moment => UsUnit::KipFt,
+        Quantity::Dimensionless => return None,
+    };
+    Some((units::si_key_to_us(key, unit)?, unit))
+}
+
+/// The members as CSV in a unit system: [`UnitSystem::Si`] writes the
+/// member file's own keys and values (exact round trip);
+/// [`UnitSystem::Us`] writes each unit key in its US form (`length_ft`,
+/// `depth_in`, `axial_kip`, `fy_ksi`, ...) with the value converted, which
+/// reads back to within a few parts in 10^16 of the stored value (for
+/// values of ordinary magnitude, not subnormal ones).
+pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
+    let rows: Vec<Map<String, Value>> = file
+        .members
+        .iter()
+        .map(|m| {
+            let mut flat = Map::new();
+            if let Some(Value::Object(obj)) = file::json_value(m) {
+                for (key, value) in obj {
+                    match (key.as_str(), value) {
+                        ("section" | "material", Value::Object(inner)) => {
+                            for (k2, v2) in inner {
+                                flat.insert(k2, v2);
+                            }
+                        }
+                        ("angle_connection", Value::Object(inner)) => {
+                            for (k2, v2) in inner {
+                                flat.insert(format!("angle_{k2}"), v2);
+                            }
+                        }
+                        (_, value) => {
+                            flat.insert(key, value);
+                        }
+                    }
+                }
+            }
+            flat
+        })
+        .collect();
+    // The keys used, in the order first met (a sort would add its code to
+    // the wasm).
+    let mut used: Vec<&str> = Vec::new();
+    for key in rows.iter().flat_map(|r| r.keys()) {
+        if !used.contains(&key.as_str()) {
+            used.push(key);
+        }
+    }
+    let mut columns: Vec<&str> = KEYS
+        .iter()
+        .map(|i| i.key)
+        .filter(|k| REQUIRED.contains(k) || used.contains(k))
+        .collect();
+    // Keys this build does not list (a newer member file), kept at the end.
+    for key in &used {
+        if key_info(key).is_none() {
+            columns.push(key);
+        }
+    }
+    let us: Vec<Option<(String, UsUnit)>> = columns
+        .iter()
+        .map(|key| match system {
+            UnitSystem::Us => us_column(key),
+            UnitSystem::Si => None,
+        })
+        .collect();
+    let mut out = String::with_capacity(64 * (rows.len() + 1));
+    for (i, (key, u)) in columns.iter().zip(&us).enumerate() {
+        if i > 0 {
+            out.push(',');
+        }
+        out.push_str(u.as_ref().map(|(h, _)| h.as_str()).unwrap_or(key));
+    }
+    out.push_str("\r\n");
+    for row in &rows {
+        for (i, (key, u)) in columns.iter().zip(&us).enumerate() {
+            if i > 0 {
+                out.push(',');
+            }
+            match (row.get(*key), u) {
+                (None, _) => {}
+                (Some(Value::Number(n)), Some((_, unit))) => match n.as_f64() {
+                    Some(f) => out.push_str(&format!("{}", unit.from_si(f))),
+                    None => out.push_str(&n.to_string()),
+                },
+                (Some(v), _) => out.push_str(&quote(&cell_text(v), matches!(v, Value::String(_)))),
+            }
+        }
+        out.push_str("\r\n");
+    }
+    out
+}

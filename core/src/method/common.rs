@@ -1,0 +1,440 @@
+//! The helpers every method shares: the per-axis basics (area, I, r,
+//! strength, modulus, N_pl, N_cr), the trace lines every method starts
+//! with, the extreme-fibre distance, the material checks and the
+//! once-only warnings.
+
+use std::f64::consts::PI;
+
+use crate::error::{positive, Error, Result};
+use crate::material::{Material, Steel, Timber};
+use crate::method::Input;
+use crate::outcome::{Mode, ModeResult, Warning};
+use crate::section::{Family, SectionSpec};
+use crate::trace::{held, step, sym, Scope, Sym, Trace};
+
+/// Scope of the trace for an axis mode.
+pub fn scope_of(mode: Mode) -> Scope {
+    match mode {
+        Mode::Major => Scope::Major,
+        Mode::Minor => Scope::Minor,
+        Mode::Torsional => Scope::Torsional,
+        Mode::FlexuralTorsional => Scope::FlexuralTorsional,
+        Mode::Section => Scope::Section,
+    }
+}
+
+/// Second moment and radius of gyration of the section about a mode's axis.
+pub fn axis_props(input: &Input<'_>, mode: Mode) -> (f64, f64) {
+    let p = &input.section.props;
+    match mode {
+        Mode::Major => (p.i_major_mm4, p.r_major_mm),
+        _ => (p.i_minor_mm4, p.r_minor_mm),
+    }
+}
+
+/// The quantities every method starts an axis from.
+#[derive(Debug, Clone, Copy)]
+pub struct Basics {
+    /// Trace scope of the axis.
+    pub scope: Scope,
+    /// Buckling length, mm.
+    pub lcr_mm: f64,
+    /// Area, mm2.
+    pub a_mm2: f64,
+    /// Second moment about the axis, mm4.
+    pub i_mm4: f64,
+    /// Radius of gyration about the axis, mm.
+    pub r_mm: f64,
+    /// Strength (f_y or f_c,0,k), MPa.
+    pub f_mpa: f64,
+    /// Modulus for buckling (E or E_0,05), MPa.
+    pub e_mpa: f64,
+    /// Slenderness L_cr / r.
+    pub slenderness: f64,
+    /// Squash load A f, kN.
+    pub n_pl_kn: f64,
+    /// Elastic critical load pi^2 E I / L_cr^2, kN (gross section).
+    pub n_cr_kn: f64,
+    /// Euler stress pi^2 E / (L_cr / r)^2, MPa.
+    pub sigma_e_mpa: f64,
+}
+
+impl Basics {
+    /// The mode result of a first-principles method whose failure stress
+    /// is `stress_mpa` (mean stress N/A) and design resistance
+    /// `resistance_kn`: the reduction is the stress over the strength and
+    /// the relative slenderness sqrt(f / sigma_E).
+    pub fn stress_mode(&self, mode: Mode, stress_mpa: f64, resistance_kn: f64) -> ModeResult {
+        ModeResult {
+            mode,
+            buckling_length_mm: self.lcr_mm,
+            slenderness: self.slenderness,
+            critical_kn: self.n_cr_kn,
+            relative_slenderness: (self.f_mpa / self.sigma_e_mpa).sqrt(),
+            reduction: (stress_mpa / self.f_mpa).clamp(f64::MIN_POSITIVE, 1.0),
+            resistance_kn,
+        }
+    }
+}
+
+/// Checks the inputs of an axis and works its basics (no trace, no allocation).
+pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
+    let lcr = positive("lcr_mm", lcr_mm)?;
+    let (f, e) = input.material.strength_and_modulus();
+    let f = positive("strength", f)?;
+    let e = positive("modulus", e)?;
+    let a = positive("area_mm2", input.section.props.area_mm2)?;
+    let (i, r) = axis_props(input, mode);
+    let i = positive(
+        match mode {
+            Mode::Major => "i_major_mm4",
+            _ => "i_minor_mm4",
+        },
+        i,
+    )?;
+    let r = positive(
+        match mode {
+            Mode::Major => "r_major_mm",
+            _ => "r_minor_mm",
+        },
+        r,
+    )?;
+    let slenderness = lcr / r;
+    let sigma_e = PI * PI * e / (slenderness * slenderness);
+    Ok(Basics {
+        scope: scope_of(mode),
+        lcr_mm: lcr,
+        a_mm2: a,
+        i_mm4: i,
+        r_mm: r,
+        f_mpa: f,
+        e_mpa: e,
+        slenderness,
+        n_pl_kn: a * f / 1000.0,
+        // From I, not sigma_E A: when the check substitutes an effective
+        // area (EN 1993-1-1 6.3.1.1(3), Class 4), N_cr stays that of the
+        // gross section, as Eq. 6.51 wants.
+        n_cr_kn: PI * PI * e * i / (lcr * lcr) / 1000.0,
+        sigma_e_mpa: sigma_e,
+    })
+}
+
+/// Pushes the geometry lines every method starts an axis with.
+pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: Sym) {
+    step!(
+        trace,
+        b.scope,
+        "L_cr",
+        "buckling length",
+        b.lcr_mm,
+        "mm",
+        "input",
+    );
+    step!(
+        trace,
+        b.scope,
+        "i",
+        "radius of gyration",
+        b.r_mm,
+        "mm",
+        "section",
+    );
+    step!(
+        trace,
+        b.scope,
+        "L_cr/i",
+        "slenderness",
+        b.slenderness,
+        "-",
+        clause,
+    );
+}
+
+/// Whether a warning with `code` is already in the list.
+pub fn has_warning(warnings: &[Warning], code: &str) -> bool {
+    warnings.iter().any(|w| w.code == code)
+}
+
+/// Adds a warning unless one with the same code is there already; the
+/// message is only built when it is added.
+pub fn warn_once(
+    warnings: &mut Vec<Warning>,
+    code: &'static str,
+    message: impl FnOnce() -> String,
+) {
+    if !has_warning(warnings, code) {
+        warnings.push(Warning::new(code, message()));
+    }
+}
+
+/// The steel of the input, or `NotApplicable` for timber.
+pub fn require_steel<'a>(input: &Input<'a>, method: &'static str) -> Result<&'a Steel> {
+    match input.material {
+        Material::Steel(s) => Ok(s),
+        Material::Timber(t) => Err(Error::NotApplicable {
+            method,
+            reason: format!(
+                "it is a steel design method and the material is timber ({}); use \"en1995-1-1\" \
+                 for timber, or give a steel grade",
+                t.name
+            ),
+        }),
+    }
+}
+
+/// The timber of the input, or `NotApplicable` for steel.
+pub fn require_timber<'a>(input: &Input<'a>, method: &'static str) -> Result<&'a Timber> {
+    match input.material {
+        Material::Timber(t) => Ok(t),
+        Material::Steel(s) => Err(Error::NotApplicable {
+            method,
+            reason: format!(
+                "it is a timber design method and the material is steel ({}); use a steel method \
+                 such as \"en1993-1-1\", or give a timber class such as \"C24\"",
+                s.name
+            ),
+        }),
+    }
+}
+
+/// Distance from the centroidal axis to the extreme fibre, mm: I / W_el
+/// when the section gives W_el, otherwise from the dimensions, and for
+/// typed properties sqrt(3) r (the ratio of a solid rectangle), with a
+/// warning.
+pub fn extreme_fibre_mm(input: &Input<'_>, mode: Mode, warnings: &mut Vec<Warning>) -> f64 {
+    let p = &input.section.props;
+    let (i, r) = axis_props(input, mode);
+    let w = match mode {
+        Mode::Major => p.w_el_major_mm3,
+        _ => p.w_el_minor_mm3,
+    };
+    if w.is_finite() && w > 0.0 && i.is_finite() && i > 0.0 {
+        return i / w;
+    }
+    let major = matches!(mode, Mode::Major);
+    let half = |a: f64, b: f64| {
+        if major {
+            a.max(b) / 2.0
+        } else {
+            a.min(b) / 2.0
+        }
+    };
+    let from_dims = match &input.section.spec {
+        SectionSpec::Rect(s) => Some(half(s.depth_mm, s.width_mm)),
+        SectionSpec::Rhs(s) => Some(half(s.depth_mm, s.width_mm)),
+        SectionSpec::Round(s) => Some(s.diameter_mm / 2.0),
+        SectionSpec::Chs(s) => Some(s.diameter_mm / 2.0),
+        SectionSpec::I(s) => Some(if major {
+            s.depth_mm / 2.0
+        } else {
+            s.width_mm / 2.0
+        }),
+        _ => None,
+    };
+    match from_dims {
+        Some(c) if c.is_finite() && c > 0.0 => c,
+        _ => {
+            warn_once(warnings, "extreme-fibre-assumed", || {
+                "the section does not give its elastic modulus, so the extreme-fibre distance is \
+                 taken as sqrt(3) i (a solid rectangle); the bow or eccentricity effect may be \
+                 under- or over-stated"
+                    .to_string()
+            });
+            3f64.sqrt() * r
+        }
+    }
+}
+
+/// The strength symbol and label for the material.
+pub fn strength_label(material: &Material) -> (&'static str, &'static str) {
+    match material {
+        Material::Steel(_) => ("f_y", "yield strength"),
+        Material::Timber(_) => (
+            "f_c,0,k",
+            "characteristic compressive strength parallel to grain",
+        ),
+    }
+}
+
+/// Where a steel's modulus comes from.
+fn modulus_source(s: &Steel) -> Sym {
+    if s.standard.starts_with("EN") {
+        sym!("EN 1993-1-1 3.2.6(1)")
+    } else if s.standard.starts_with("ASTM") {
+        sym!("AISC 360-16 (E = 29 000 ksi)")
+    } else if s.standard.starts_with("CSA") {
+        sym!("CSA S16-19 clause 2")
+    } else {
+        sym!("custom material")
+    }
+}
+
+/// Pushes the material and section lines of a prelude: thickness (steel
+/// grades), strength, modulus, area and squash load; and warns when a
+/// graded steel's thickness is unknown.
+pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) {
+    let (f, e) = input.material.strength_and_modulus();
+    let a = input.section.props.area_mm2;
+    match input.material {
+        Material::Steel(s) => {
+            if s.name != "custom" {
+                let standard = held(s.standard);
+                step!(
+                    trace,
+                    Scope::Member,
+                    "t",
+                    "governing thickness for f_y",
+                    s.thickness_mm,
+                    "mm",
+                    standard,
+                );
+                step!(
+                    trace,
+                    Scope::Member,
+                    "f_y",
+                    "yield strength for that thickness",
+                    f,
+                    "MPa",
+                    standard,
+                );
+                if s.thickness_mm <= 0.0 && s.band_up_to_mm.is_finite() {
+                    warn_once(warnings, "thickness-unknown", || {
+                        format!(
+                            "the section does not tell its plate thickness, so f_y = {f} MPa of {} \
+                             for t <= {} mm is used; give a custom fy_mpa if the section is thicker",
+                            s.name, s.band_up_to_mm
+                        )
+                    });
+                }
+            } else {
+                step!(
+                    trace,
+                    Scope::Member,
+                    "f_y",
+                    "yield strength",
+                    f,
+                    "MPa",
+                    "custom material",
+                );
+            }
+            step!(
+                trace,
+                Scope::Member,
+                "E",
+                "modulus of elasticity",
+                e,
+                "MPa",
+                modulus_source(s),
+            );
+            if s.name.starts_with("A500")
+                && !matches!(input.section.family, Family::Chs | Family::Rhs)
+            {
+                warn_once(warnings, "a500-shape-unknown", || {
+                    format!(
+                        "ASTM A500 sets F_y by the hollow section's shape (round or shaped); this \
+                         section is neither, so the lower, round value F_y = {f:.0} MPa is used"
+                    )
+                });
+            }
+        }
+        Material::Timber(t) => {
+            let standard = held(t.standard);
+            step!(
+                trace,
+                Scope::Member,
+                "f_c,0,k",
+                "characteristic compressive strength parallel to grain",
+                f,
+                "MPa",
+                standard,
+            );
+            step!(
+                trace,
+                Scope::Member,
+                "E_0,05",
+                "fifth-percentile modulus",
+                e,
+                "MPa",
+                standard,
+            );
+        }
+    }
+    step!(trace, Scope::Member, "A", "gross area", a, "mm2", "section");
+    step!(
+        trace,
+        Scope::Member,
+        "N_pl",
+        "squash load A f",
+        a * f / 1000.0,
+        "kN",
+        "N_pl = A f",
+    );
+}
+
+/// The optional factor of the first-principles methods and its trace line.
+pub fn push_optional_factor(input: &Input<'_>, trace: &mut Trace) -> f64 {
+    match input.member.gamma_m1 {
+        Some(g) => {
+            step!(
+                trace,
+                Scope::Member,
+                "gamma",
+                "factor on the resistance (given)",
+                g,
+                "-",
+                "input gamma_m1",
+            );
+            g
+        }
+        None => {
+            step!(
+                trace,
+                Scope::Member,
+                "gamma",
+                "factor on the resistance (none given: 1)",
+                1.0,
+                "-",
+                "input gamma_m1",
+            );
+            1.0
+        }
+    }
+}
+
+/// Warns once that a first-principles method runs on timber without the
+/// timber code's modification and partial factors.
+pub fn warn_timber_first_principles(input: &Input<'_>, warnings: &mut Vec<Warning>) {
+    if let Material::Timber(_) = input.material {
+        warn_once(warnings, "timber-first-principles", || {
+            "a first-principles method on timber uses f_c,0,k and E_0,05 as they are, without k_mod \
+             or gamma_M; use \"en1995-1-1\" for a design check"
+                .to_string()
+        });
+    }
+}
+
+/// Whether the section is a hot-finished hollow section (Table 6.2, S16 class H).
+pub fn is_hot_finished_hollow(input: &Input<'_>) -> bool {
+    use crate::section::HollowMake;
+    match &input.section.spec {
+        SectionSpec::Rhs(s) => s.make == HollowMake::HotFinished,
+        SectionSpec::Chs(s) => s.make == HollowMake::HotFinished,
+        _ => false,
+    }
+}
+
+/// Whether the section is a hollow section whose make the member file does
+/// not give (read as cold-formed: the lower resistance).
+pub fn hollow_make_unstated(input: &Input<'_>) -> bool {
+    use crate::section::HollowMake;
+    match &input.section.spec {
+        SectionSpec::Rhs(s) => s.make == HollowMake::Unstated,
+        SectionSpec::Chs(s) => s.make == HollowMake::Unstated,
+        _ => false,
+    }
+}
+
+/// Whether the section family is a hollow one.
+pub fn is_hollow(input: &Input<'_>) -> bool {
+    matches!(input.section.family, Family::Rhs | Family::Chs)
+}
