@@ -200,6 +200,35 @@ fn flatten(v: &Value, out: &mut Vec<(String, Value)>) {
     }
 }
 
+/// A message of the engine with every member-file key it names given as
+/// the sheet gives that input: its symbol, or its meaning where it has
+/// none ("gamma_m1 is not used" becomes "γ_M1 is not used").
+pub fn speak(message: &str) -> String {
+    let mut out = String::with_capacity(message.len());
+    let mut word = String::new();
+    let flush = |word: &mut String, out: &mut String| {
+        // Keys of one word ("method", "timber") are words too: left alone.
+        match INPUTS
+            .iter()
+            .find(|(k, ..)| k.contains('_') && *k == word.as_str())
+        {
+            Some((_, sym, meaning)) => out.push_str(if sym.is_empty() { meaning } else { sym }),
+            None => out.push_str(word),
+        }
+        word.clear();
+    };
+    for c in message.chars() {
+        if c.is_ascii_alphanumeric() || c == '_' {
+            word.push(c);
+        } else {
+            flush(&mut word, &mut out);
+            out.push(c);
+        }
+    }
+    flush(&mut word, &mut out);
+    out
+}
+
 /// The words for a key the table does not know: the editor's label, else
 /// the key's words without its unit.
 fn unknown_meaning(key: &str) -> String {
@@ -410,6 +439,16 @@ mod tests {
             }
         }
         assert_eq!(unknown_meaning("moment_top_knm"), "moment top");
+    }
+
+    #[test]
+    fn engine_messages_speak_in_symbols() {
+        assert_eq!(
+            speak("gamma_m1 is not used by AISC 360; phi_c applies"),
+            "γ_M1 is not used by AISC 360; phi_c applies"
+        );
+        assert_eq!(speak("lcr_major_mm: must be > 0"), "L_cr,y: must be > 0");
+        assert_eq!(speak("method (timber)"), "method (timber)");
     }
 
     #[test]

@@ -54,6 +54,20 @@ const SCOPES: [Scope; 8] = [
 /// The verdict of one member: status, utilisation, resistance, load,
 /// governing mode and method, then its warnings; or what stops the check.
 pub fn verdict_html(c: &Checked, sys: UnitSystem) -> Html {
+    verdict_in(c, sys, false)
+}
+
+/// The verdict, its messages in the app's words (`sheet`: member-file keys
+/// the engine names are given as the standard's symbols, as the calc sheet
+/// writes its inputs) or as the engine wrote them.
+fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
+    let said = |m: &str| {
+        if sheet {
+            crate::print::speak(m)
+        } else {
+            m.to_string()
+        }
+    };
     let standing = Standing::of(&c.outcome);
     let mut h = Html::new();
     html!(
@@ -70,7 +84,7 @@ pub fn verdict_html(c: &Checked, sys: UnitSystem) -> Html {
                  <dt>utilisation</dt><dd><span data-testid=\"result-utilisation\">—</span></dd>\
                  <dt>governs</dt><dd data-testid=\"result-governing\">—</dd>\
                  <dt class=\"v-more\">resistance</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">—</span></dd></dl></div>",
-                fields::error_text(e)
+                said(&fields::error_text(e))
             );
         }
         Ok(r) => {
@@ -91,7 +105,7 @@ pub fn verdict_html(c: &Checked, sys: UnitSystem) -> Html {
                 result_text(sys, "kN", c.member.axial_kn, 1),
                 r.method.title(),
             );
-            h.push(&warnings_html(r));
+            h.push(&warnings_in(r, &said));
         }
     }
     h
@@ -104,13 +118,17 @@ fn split_unit(s: &str) -> (&str, &str) {
 
 /// The warnings of a result as a list (empty when there are none).
 pub fn warnings_html(r: &CheckResult) -> Html {
+    warnings_in(r, &|m| m.to_string())
+}
+
+fn warnings_in(r: &CheckResult, said: &dyn Fn(&str) -> String) -> Html {
     let mut h = Html::new();
     if r.warnings.is_empty() {
         return h;
     }
     h.lit("<ul class=\"warnings\" data-testid=\"warnings\">");
     for w in &r.warnings {
-        html!(h, "<li>⚠ {} <code>{}</code></li>", w.message, w.code);
+        html!(h, "<li>⚠ {} <code>{}</code></li>", said(&w.message), w.code);
     }
     h.lit("</ul>");
     h
@@ -417,7 +435,7 @@ pub fn sheet_html(
         }
         h.push(&crate::sectionview::of_checked(c));
         h.lit("<h3>Result</h3>");
-        h.push(&verdict_html(c, sys));
+        h.push(&verdict_in(c, sys, true));
         if let Ok(r) = &c.outcome {
             h.push(&working_html(r, sys));
         }
