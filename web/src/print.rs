@@ -343,7 +343,7 @@ pub fn page_rule(title: &str, h: &SheetHeader) -> String {
          @top-left {{ content: {}; white-space: pre; font: 8pt sans-serif; vertical-align: bottom; }} \
          @top-right {{ content: {}; white-space: pre; text-align: right; font: 8pt sans-serif; vertical-align: bottom; }} \
          @bottom-left {{ content: {}; font: 7pt sans-serif; vertical-align: top; }} \
-         @bottom-right {{ content: \"page \" counter(page) \" of \" counter(pages); font: 8pt sans-serif; vertical-align: top; }} }}",
+         @bottom-right {{ content: \"page \" counter(page) \" of \" counter(pages); width: 30mm; white-space: nowrap; font: 8pt sans-serif; vertical-align: top; }} }}",
         css_string(&left),
         css_string(&right),
         css_string(&format!("⚠ {CAUTION}")),
