@@ -148,6 +148,11 @@ fn head_unit(sys: UnitSystem, unit: &'static str) -> &'static str {
 /// Every mode checked, the governing one marked, then each part of the
 /// working with its symbol, meaning, value and unit, and clause.
 pub fn working_html(r: &CheckResult, sys: UnitSystem) -> Html {
+    working_in(r, sys, &|m| m.to_string())
+}
+
+/// The working, its symbols and words passed through `said`.
+fn working_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) -> Html {
     let mut h = Html::new();
     html!(
         h,
@@ -192,8 +197,8 @@ pub fn working_html(r: &CheckResult, sys: UnitSystem) -> Html {
             html!(
                 rows,
                 "<tr><th scope=\"row\"><code>{}</code></th><td>{}</td><td class=\"num\">{}</td><td class=\"clause\">{}</td></tr>",
-                st.symbol.as_str(),
-                st.label.as_str(),
+                said(st.symbol.as_str()),
+                said(st.label.as_str()),
                 step_text(sys, st.unit(), st.value),
                 st.clause.as_str(),
             );
@@ -437,7 +442,7 @@ pub fn sheet_html(
         h.lit("<h3>Result</h3>");
         h.push(&verdict_in(c, sys, true));
         if let Ok(r) = &c.outcome {
-            h.push(&working_html(r, sys));
+            h.push(&working_in(r, sys, &crate::print::speak));
         }
         if let Some((_, url, legend)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
             html!(
