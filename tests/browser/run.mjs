@@ -265,6 +265,25 @@ test("typed-member-matches-cli", async () => {
   });
 });
 
+// The windowed list redraws a row when its member changes without the
+// list's length or scroll changing (a rename, a new load).
+test("edited-row-redrawn", async () => {
+  await withApp("edited-row-redrawn", async (page, log) => {
+    await open(page);
+    await page.locator("[data-testid=add-member]").first().click();
+    const last = page.locator("[data-testid=member-row]").last();
+    const before = await last.getAttribute("data-id");
+    await setField(page, page, "id", "BH-7");
+    const row = page.locator('[data-testid=member-row][data-id="BH-7"]');
+    await row.waitFor({ state: "visible", timeout: 10_000 });
+    assert.equal((await row.locator(".row-id").textContent()).trim(), "BH-7", "the row's id text");
+    assert.equal(await page.locator(`[data-testid=member-row][data-id="${before}"]`).count(), 0, `a row still shows the old id ${before}`);
+    await setField(page, page, "axial_kn", "4321");
+    await waitForText(row.locator(".row-detail"), (t) => t.includes("N 4321 kN"));
+    assertNoErrors(log.errors);
+  });
+});
+
 /** Opens the app, types and selects TYPED and waits for its chart. */
 async function typedChart(page) {
   await open(page);

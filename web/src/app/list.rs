@@ -169,9 +169,17 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
         };
         reveal(scroller, scroll_top, view_px.get_untracked(), at);
     });
+    // The rows read the list and the scroll position themselves, not
+    // through `range`: an effect that reads a memo (`range`) and also that
+    // memo's own source (`shown`) is not rerun when the memo's value stays
+    // the same (an edit that keeps the list's length), so a renamed or
+    // re-checked row kept its old text until the next scroll.
     let rows = move || {
-        let (a, b, _) = range.get();
-        shown.with(|s| s.0.get(a..b).map(<[_]>::to_vec).unwrap_or_default())
+        let (top, px) = (scroll_top.get(), view_px.get());
+        shown.with(|s| {
+            let (a, b) = listops::window(top, px, s.0.len());
+            s.0.get(a..b).map(<[_]>::to_vec).unwrap_or_default()
+        })
     };
     view! {
         <div class="member-scroll" data-testid="member-scroll" node_ref=scroller
