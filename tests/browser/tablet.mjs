@@ -115,6 +115,10 @@ export function register(test, { withApp, open, OUT }) {
     test(`${label}-edit-in-view`, async () => {
       await withApp(`${label}-edit-in-view`, async (page) => {
         await open(page);
+        // Nothing widens the page past the screen (a wider page is zoomed
+        // out and its fixed dock no longer lies where it is drawn).
+        const wide = await page.evaluate(() => document.documentElement.scrollWidth);
+        assert.ok(wide <= width, `${width} x ${height}: the page is ${wide} px wide`);
         await page.locator("[data-testid=member-row] .row-main").first().tap();
         await page.locator("[data-testid=result-utilisation]").first().waitFor();
         // The compact verdict is docked in view before anything is opened.
