@@ -1,8 +1,25 @@
-//! `strutline check FILE [--json]`: checks every member and prints a table
-//! or JSON.
+//! `strutline check FILE [--json | --jsonl] [--working]`: checks every
+//! member and prints a table, one JSON document, or JSON Lines.
+//!
+//! Members are read, checked and written a block at a time
+//! ([`crate::input`]), each block checked on every core (`rayon`) and
+//! written in input order, so memory does not grow with the length of the
+//! list. Without `--working` a check skips its working (the numbers are the
+//! same; see `strutline_core::check::Working`).
+//!
+//! A bad member stops the check with status 2 and a message naming it and
+//! the field; what was written before it is left visibly unfinished: the
+//! JSON document is not closed, JSON Lines get no closing `done` line, and
+//! the table no closing caution.
 
-use strutline_core::check::{CheckResult, Prepared};
-use strutline_core::CAUTION;
+use std::io::Write;
+
+use rayon::prelude::*;
+use serde::Serialize;
+use strutline_core::bending::Bending;
+use strutline_core::check::{check_member_as, CheckResult, ModeResult, Warning, Working};
+use strutline_core::method::Method;
+use strutline_core::{Member, Mode, CAUTION};
 
 /// `strutline check`'s options.
 #[derive(Debug, clap::Args)]
@@ -10,72 +27,259 @@ pub struct Args {
     /// The member file (.json, or .csv one member a row)
     #[arg(value_name = "FILE")]
     pub path: String,
-    /// Write the results as JSON instead of a table
-    #[arg(long)]
+    /// Write the results as one JSON document, {"results": [...], "caution": ...}
+    #[arg(long, conflicts_with = "jsonl")]
     pub json: bool,
+    /// Write JSON Lines: one result a line as each is checked, then a closing {"done": ...} line
+    #[arg(long)]
+    pub jsonl: bool,
+    /// With --json or --jsonl, add each member's working step by step (and its section properties)
+    #[arg(long)]
+    pub working: bool,
+}
+
+/// The summary of one member's check, as `--json` writes it.
+#[derive(Debug, Serialize)]
+pub struct Summary<'a> {
+    /// The member's id.
+    pub id: &'a str,
+    /// The method used.
+    pub method: Method,
+    /// Whether the design load is within the resistance.
+    pub passes: bool,
+    /// Design load over design resistance.
+    pub utilisation: f64,
+    /// Design resistance of the governing mode, kN.
+    pub resistance_kn: f64,
+    /// What governs: the governing mode's key, a bending check, or
+    /// "combined-not-checked" (see `CheckResult::governing_check`).
+    pub governing_check: &'static str,
+    /// The governing mode.
+    pub governing: Mode,
+    /// Every mode checked.
+    pub modes: &'a [ModeResult],
+    /// The bending side, `null` without moments.
+    pub bending: &'a Option<Bending>,
+    /// The result's warnings.
+    pub warnings: &'a [Warning],
+}
+
+impl<'a> From<&'a CheckResult> for Summary<'a> {
+    fn from(r: &'a CheckResult) -> Self {
+        Summary {
+            id: &r.id,
+            method: r.method,
+            passes: r.passes,
+            utilisation: r.utilisation,
+            resistance_kn: r.resistance_kn,
+            governing_check: r.governing_check,
+            governing: r.governing,
+            modes: &r.modes,
+            bending: &r.bending,
+            warnings: &r.warnings,
+        }
+    }
+}
+
+#[derive(Clone, Copy, PartialEq, Eq)]
+enum Form {
+    Table,
+    Json,
+    Lines,
+}
+
+/// The output, written as it comes; a closed pipe stops the writing but
+/// not the check, so the exit status is still the whole list's.
+struct Out {
+    w: std::io::BufWriter<std::io::StdoutLock<'static>>,
+    closed: bool,
+}
+
+impl Out {
+    fn put(&mut self, text: &str) -> Result<(), String> {
+        if self.closed {
+            return Ok(());
+        }
+        match self.w.write_all(text.as_bytes()) {
+            Ok(()) => Ok(()),
+            Err(e) if e.kind() == std::io::ErrorKind::BrokenPipe => {
+                self.closed = true;
+                Ok(())
+            }
+            Err(e) => Err(format!("cannot write the output: {e}")),
+        }
+    }
+
+    fn finish(&mut self) -> Result<(), String> {
+        if self.closed {
+            return Ok(());
+        }
+        match self.w.flush() {
+            Ok(()) => Ok(()),
+            Err(e) if e.kind() == std::io::ErrorKind::BrokenPipe => Ok(()),
+            Err(e) => Err(format!("cannot write the output: {e}")),
+        }
+    }
+}
+
+/// One member's text in the chosen form, or the message that stops the check.
+fn render(m: &Member, form: Form, working: bool) -> Result<(bool, String), String> {
+    let kept = if working && form != Form::Table {
+        Working::Kept
+    } else {
+        Working::Skipped
+    };
+    let r = check_member_as(m, kept).map_err(|e| e.to_string())?;
+    // Written into room for a typical summary, so the text is not regrown.
+    let mut text = Vec::with_capacity(if working { 8192 } else { 1024 });
+    match form {
+        Form::Table => Ok(()),
+        _ if working => serde_json::to_writer(&mut text, &r),
+        _ => serde_json::to_writer(&mut text, &Summary::from(&r)),
+    }
+    .map_err(|e| e.to_string())?;
+    let text = String::from_utf8(text).map_err(|e| e.to_string())?;
+    Ok((r.passes, text))
 }
 
 /// Runs the subcommand.
 pub fn run(args: &Args) -> Result<i32, String> {
-    let json = args.json;
+    let form = match (args.json, args.jsonl) {
+        (true, _) => Form::Json,
+        (_, true) => Form::Lines,
+        _ => Form::Table,
+    };
+    if args.working && form == Form::Table {
+        return Err("check: --working goes with --json or --jsonl".into());
+    }
     let path = &args.path;
-    let file = crate::read_members(path)?;
-    let mut results = Vec::with_capacity(file.members.len());
-    for member in &file.members {
-        let result = Prepared::new(member)
-            .and_then(|p| p.check())
-            .map_err(|e| format!("{path}: {e}"))?;
-        results.push(result);
+    let mut out = Out {
+        w: std::io::BufWriter::with_capacity(1 << 16, std::io::stdout().lock()),
+        closed: false,
+    };
+    let mut over = 0usize;
+    let mut count = 0usize;
+    let mut table = Table::default();
+    let read = crate::input::members(path, |title, block| {
+        let texts: Vec<Result<(bool, String), String>> = match form {
+            Form::Table => Vec::new(),
+            _ => block
+                .par_iter()
+                .map(|m| render(m, form, args.working))
+                .collect(),
+        };
+        match form {
+            Form::Table => {
+                let results: Vec<Result<CheckResult, String>> = block
+                    .par_iter()
+                    .map(|m| check_member_as(m, Working::Skipped).map_err(|e| e.to_string()))
+                    .collect();
+                let mut ok = Vec::with_capacity(results.len());
+                for r in results {
+                    let r = r.map_err(|e| format!("{path}: {e}"))?;
+                    over += usize::from(!r.passes);
+                    ok.push(r);
+                }
+                if count == 0 {
+                    table.widths(&block, &ok);
+                    if !title.is_empty() {
+                        out.put(&format!("{title}\n"))?;
+                    }
+                    out.put(&table.header())?;
+                }
+                out.put(&table.rows(&block, &ok))?;
+            }
+            Form::Json | Form::Lines => {
+                for (i, t) in texts.into_iter().enumerate() {
+                    let (passes, text) = t.map_err(|e| format!("{path}: {e}"))?;
+                    over += usize::from(!passes);
+                    let lead = match (form, count + i) {
+                        (Form::Json, 0) => "{\"results\": [\n",
+                        (Form::Json, _) => ",\n",
+                        _ => "",
+                    };
+                    out.put(lead)?;
+                    out.put(&text)?;
+                    if form == Form::Lines {
+                        out.put("\n")?;
+                    }
+                }
+            }
+        }
+        count += block.len();
+        Ok(())
+    });
+    if let Err(message) = read {
+        // Whatever was written stays visibly unfinished (see the module docs).
+        let _ = out.finish();
+        return Err(message);
     }
-    let all_pass = results.iter().all(|r| r.passes);
-    if json {
-        let out = serde_json::json!({ "results": results, "caution": CAUTION });
-        let mut text = serde_json::to_string_pretty(&out).map_err(|e| e.to_string())?;
-        text.push('\n');
-        crate::emit(&text)?;
-    } else {
-        crate::emit(&table(&file.title, &file.members, &results))?;
-    }
-    Ok(if all_pass { 0 } else { 1 })
-}
-
-fn table(title: &str, members: &[strutline_core::Member], results: &[CheckResult]) -> String {
-    let mut rows: Vec<[String; 8]> = vec![[
-        "id".into(),
-        "section".into(),
-        "method".into(),
-        "N_Ed kN".into(),
-        "N_Rd kN".into(),
-        "util".into(),
-        "governs".into(),
-        "status".into(),
-    ]];
-    for (m, r) in members.iter().zip(results) {
-        rows.push([
-            r.id.clone(),
-            m.section.describe(),
-            r.method.key().to_string(),
-            format!("{:.1}", m.axial_kn),
-            format!("{:.1}", r.resistance_kn),
-            format!("{:.3}", r.utilisation),
-            r.governing_check.to_string(),
-            if r.passes { "ok".into() } else { "OVER".into() },
-        ]);
-    }
-    let mut widths = [0usize; 8];
-    for row in &rows {
-        for (w, cell) in widths.iter_mut().zip(row.iter()) {
-            *w = (*w).max(cell.chars().count());
+    match form {
+        Form::Table => {
+            if count == 0 {
+                out.put(&table.header())?;
+            }
+            out.put(&format!("\n{CAUTION}\n"))?;
+        }
+        Form::Json => {
+            if count == 0 {
+                out.put("{\"results\": [")?;
+            }
+            let caution = serde_json::to_string(CAUTION).map_err(|e| e.to_string())?;
+            out.put(&format!("\n],\n\"caution\": {caution}\n}}\n"))?;
+        }
+        Form::Lines => {
+            let done = serde_json::json!({
+                "done": { "members": count, "over": over, "caution": CAUTION }
+            });
+            out.put(&format!("{done}\n"))?;
         }
     }
-    let mut out = String::new();
-    if !title.is_empty() {
-        out.push_str(title);
-        out.push('\n');
+    out.finish()?;
+    Ok(if over == 0 { 0 } else { 1 })
+}
+
+/// The readable table. Its column widths are set by the first block of
+/// members (all of them for a list of up to [`crate::input::BLOCK`]); a
+/// longer cell further down pushes its line out rather than holding the
+/// whole list. Each block's warnings follow its rows.
+#[derive(Default)]
+struct Table {
+    widths: [usize; 8],
+}
+
+const HEADS: [&str; 8] = [
+    "id", "section", "method", "N_Ed kN", "N_Rd kN", "util", "governs", "status",
+];
+
+fn cells(m: &Member, r: &CheckResult) -> [String; 8] {
+    [
+        r.id.clone(),
+        m.section.describe(),
+        r.method.key().to_string(),
+        format!("{:.1}", m.axial_kn),
+        format!("{:.1}", r.resistance_kn),
+        format!("{:.3}", r.utilisation),
+        r.governing_check.to_string(),
+        if r.passes { "ok".into() } else { "OVER".into() },
+    ]
+}
+
+impl Table {
+    fn widths(&mut self, members: &[Member], results: &[CheckResult]) {
+        for (w, h) in self.widths.iter_mut().zip(HEADS) {
+            *w = h.chars().count();
+        }
+        for (m, r) in members.iter().zip(results) {
+            for (w, cell) in self.widths.iter_mut().zip(cells(m, r).iter()) {
+                *w = (*w).max(cell.chars().count());
+            }
+        }
     }
-    for row in &rows {
+
+    fn line(&self, row: &[String; 8], out: &mut String) {
         let mut line = String::new();
-        for (i, (cell, w)) in row.iter().zip(widths.iter()).enumerate() {
+        for (i, (cell, w)) in row.iter().zip(self.widths.iter()).enumerate() {
             let pad = w.saturating_sub(cell.chars().count());
             // Numbers right-aligned, text left-aligned.
             if (3..=5).contains(&i) {
@@ -90,11 +294,23 @@ fn table(title: &str, members: &[strutline_core::Member], results: &[CheckResult
         out.push_str(line.trim_end());
         out.push('\n');
     }
-    for r in results {
-        for w in &r.warnings {
-            out.push_str(&format!("warning {}: {}\n", r.id, w.message));
-        }
+
+    fn header(&self) -> String {
+        let mut out = String::new();
+        self.line(&HEADS.map(String::from), &mut out);
+        out
     }
-    out.push_str(&format!("\n{CAUTION}\n"));
-    out
+
+    fn rows(&self, members: &[Member], results: &[CheckResult]) -> String {
+        let mut out = String::new();
+        for (m, r) in members.iter().zip(results) {
+            self.line(&cells(m, r), &mut out);
+        }
+        for r in results {
+            for w in &r.warnings {
+                out.push_str(&format!("warning {}: {}\n", r.id, w.message));
+            }
+        }
+        out
+    }
 }

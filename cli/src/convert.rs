@@ -15,7 +15,7 @@
 use std::path::Path;
 
 use strutline_core::csv::{self, Format};
-use strutline_core::file::{self, MAX_BYTES};
+use strutline_core::file;
 use strutline_core::units::UnitSystem;
 
 /// The units of a CSV output's columns.
@@ -80,15 +80,6 @@ pub fn run(args: &Args) -> Result<i32, String> {
         Units::Us => UnitSystem::Us,
     };
     let out_format = output_format(output)?;
-    if let Ok(meta) = std::fs::metadata(input) {
-        if meta.len() > MAX_BYTES as u64 {
-            crate::note(&format!(
-                "{input}: the file is {} bytes; the largest accepted is {MAX_BYTES} bytes",
-                meta.len()
-            ));
-            return Ok(2);
-        }
-    }
     let text = std::fs::read_to_string(input).map_err(|e| format!("{input}: cannot read: {e}"))?;
     let (members, problems) = match csv::detect_format(input, &text) {
         Format::Json => match file::parse(&text) {

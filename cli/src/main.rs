@@ -21,6 +21,7 @@ use clap::{CommandFactory, FromArgMatches, Parser, Subcommand};
 mod check;
 mod convert;
 mod envelope;
+mod input;
 mod sections;
 mod size;
 

@@ -162,3 +162,188 @@ fn exit_status_says_within_over_or_invalid() {
     assert_eq!(code, Some(2));
     assert!(err.contains("--to"), "{err}");
 }
+
+/// A member file of `n` members made from the example's members in turn,
+/// with ids C0, C1, ...; `edit` may change the text of member `i`.
+fn list_file(name: &str, n: usize, edit: impl Fn(usize, String) -> String) -> PathBuf {
+    let text = std::fs::read_to_string(example()).unwrap();
+    let v: serde_json::Value = serde_json::from_str(&text).unwrap();
+    let base = v["members"].as_array().unwrap().clone();
+    let members: Vec<String> = (0..n)
+        .map(|i| {
+            let mut m = base[i % base.len()].clone();
+            m["id"] = format!("C{i}").into();
+            edit(i, m.to_string())
+        })
+        .collect();
+    let body = format!(
+        "{{\"format\": \"strutline.members\", \"version\": 2, \"title\": \"long\", \"members\": [\n{}\n]}}",
+        members.join(",\n")
+    );
+    let path = std::env::temp_dir().join(format!("strutline-{name}-{}.json", std::process::id()));
+    std::fs::write(&path, body).unwrap();
+    path
+}
+
+#[test]
+fn json_and_json_lines_carry_each_members_summary_in_order() {
+    let path = list_file("order", 9000, |_, m| m);
+    let p = path.to_str().unwrap();
+    let (code, text, err) = run(&["check", p, "--json"]);
+    assert_eq!(code, Some(0), "{err}");
+    let doc: serde_json::Value = serde_json::from_str(&text).unwrap();
+    let results = doc["results"].as_array().unwrap();
+    assert_eq!(results.len(), 9000);
+    for (i, r) in results.iter().enumerate() {
+        assert_eq!(r["id"], format!("C{i}"));
+    }
+    let first = &results[0];
+    for key in [
+        "method",
+        "passes",
+        "utilisation",
+        "resistance_kn",
+        "governing",
+        "modes",
+        "warnings",
+    ] {
+        assert!(first.get(key).is_some(), "{key} missing: {first}");
+    }
+    assert!(first.get("trace").is_none());
+    assert!(doc["caution"].as_str().unwrap().contains("checking aid"));
+    let (code, lines, _) = run(&["check", p, "--jsonl"]);
+    assert_eq!(code, Some(0));
+    let lines: Vec<serde_json::Value> = lines
+        .lines()
+        .map(|l| serde_json::from_str(l).unwrap())
+        .collect();
+    assert_eq!(lines.len(), 9001);
+    assert_eq!(&lines[..9000], results.as_slice());
+    assert_eq!(lines[9000]["done"]["members"], 9000);
+    // --working adds the working (and everything else of the result).
+    let (code, text, _) = run(&["check", &example(), "--json", "--working"]);
+    assert_eq!(code, Some(0));
+    let doc: serde_json::Value = serde_json::from_str(&text).unwrap();
+    assert!(doc["results"][0]["trace"].as_array().unwrap().len() > 5);
+    let (code, _, err) = run(&["check", &example(), "--working"]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("--working"), "{err}");
+    std::fs::remove_file(&path).unwrap();
+}
+
+/// Each malformed file: status 2, the message naming what is wrong, and
+/// no output that looks complete (no closing caution, `done` line or
+/// closed JSON document).
+#[test]
+fn malformed_lists_are_named_and_never_look_complete() {
+    let truncated = list_file("truncated", 6000, |_, m| m);
+    let text = std::fs::read_to_string(&truncated).unwrap();
+    std::fs::write(&truncated, &text[..text.len() * 3 / 4]).unwrap();
+    let wrong_type = list_file("wrongtype", 6000, |i, m| {
+        if i == 5000 {
+            m.replace("\"axial_kn\":", "\"axial_kn\":\"lots\",\"was\":")
+        } else {
+            m
+        }
+    });
+    let duplicate = list_file("duplicate", 6000, |i, m| {
+        if i == 5800 {
+            m.replace("\"C5800\"", "\"C12\"")
+        } else {
+            m
+        }
+    });
+    let too_big = list_file("range", 6000, |i, m| {
+        if i == 4500 {
+            m.replace("\"length_mm\":", "\"length_mm\":1e400,\"was\":")
+        } else {
+            m
+        }
+    });
+    let cases = [
+        (&truncated, vec!["line"]),
+        (&wrong_type, vec!["\"C5000\"", "axial_kn"]),
+        (&duplicate, vec!["#5801", "\"C12\""]),
+        (
+            &too_big,
+            vec!["\"C4500\"", "length_mm: number out of range"],
+        ),
+    ];
+    for (path, words) in cases {
+        let p = path.to_str().unwrap();
+        for form in [vec![], vec!["--json"], vec!["--jsonl"]] {
+            let mut args = vec!["check", p];
+            args.extend(form.iter().copied());
+            let (code, out, err) = run(&args);
+            assert_eq!(code, Some(2), "{args:?}: {err}");
+            for w in &words {
+                assert!(err.contains(w), "{args:?}: {w} not in {err}");
+            }
+            assert!(!out.contains("checking aid"), "{args:?} looks complete");
+            if form == ["--json"] {
+                assert!(serde_json::from_str::<serde_json::Value>(&out).is_err());
+            }
+            assert!(!out.contains("\"done\""), "{args:?}");
+        }
+        std::fs::remove_file(path).unwrap();
+    }
+}
+
+/// A CSV list of `n` round struts, one a row; `row` may change row `i`.
+fn csv_file(name: &str, n: usize, row: impl Fn(usize) -> String) -> PathBuf {
+    let mut text =
+        String::from("sep=;\nid;note;kind;diameter_mm;fy_mpa;e_mpa;length_mm;axial_kn;method\n");
+    for i in 0..n {
+        text.push_str(&row(i));
+    }
+    let path = std::env::temp_dir().join(format!("strutline-{name}-{}.csv", std::process::id()));
+    std::fs::write(&path, text).unwrap();
+    path
+}
+
+fn strut(i: usize) -> String {
+    format!("R{i};\"strut\nof the lattice\";round;60;355;210000;1800;120,5;perry-robertson\n")
+}
+
+#[test]
+fn long_csv_lists_are_read_in_blocks_with_the_files_line_numbers() {
+    // Each row spans two lines (a quoted line break in the note).
+    let good = csv_file("csvgood", 10_000, strut);
+    let (code, text, err) = run(&["check", good.to_str().unwrap(), "--jsonl"]);
+    assert_eq!(code, Some(0), "{err}");
+    let lines: Vec<&str> = text.lines().collect();
+    assert_eq!(lines.len(), 10_001);
+    assert!(lines[9_999].contains("\"id\":\"R9999\""));
+    // The same member as the JSON member file gives.
+    let one: serde_json::Value = serde_json::from_str(lines[0]).unwrap();
+    assert!(
+        (one["resistance_kn"].as_f64().unwrap() - 353.8).abs() < 0.1,
+        "{one}"
+    );
+    // A bad cell and a repeated id far down: named by the file's line.
+    let bad = csv_file("csvbad", 10_000, |i| {
+        if i == 9_000 {
+            strut(i).replace(";60;", ";sixty;")
+        } else {
+            strut(i)
+        }
+    });
+    let (code, out, err) = run(&["check", bad.to_str().unwrap()]);
+    assert_eq!(code, Some(2));
+    // Row 9,000 starts on line 3 + 2 * 9,000.
+    assert!(err.contains("line 18003, column diameter_mm"), "{err}");
+    assert!(!out.contains("checking aid"));
+    let dup = csv_file("csvdup", 10_000, |i| {
+        if i == 9_500 {
+            strut(3)
+        } else {
+            strut(i)
+        }
+    });
+    let (code, _, err) = run(&["check", dup.to_str().unwrap(), "--json"]);
+    assert_eq!(code, Some(2));
+    assert!(err.contains("line 19003, column id: id \"R3\""), "{err}");
+    for p in [good, bad, dup] {
+        std::fs::remove_file(p).unwrap();
+    }
+}

@@ -1,9 +1,12 @@
 //! Throughput of the member check: 10,000 members of mixed shapes and
 //! methods, checked from their member-file form (section built, material
-//! resolved, both axes worked, trace kept) as the command line and the app
-//! do. Run with `cargo xtask bench` (or `cargo bench -p strutline-core --bench check`).
+//! resolved, both axes worked), with the working kept (as a result shown to
+//! a person) and without it (as a batch's summaries, sizing candidates and
+//! envelope samples). Run with `cargo xtask bench` (or `cargo bench -p
+//! strutline-core --bench check`).
 
 use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
+use strutline_core::check::{check_member_as, Working};
 use strutline_core::material::{MaterialSpec, TimberKind};
 use strutline_core::member::Member;
 use strutline_core::method::Method;
@@ -209,10 +212,28 @@ fn bench(c: &mut Criterion) {
     }
     let mut group = c.benchmark_group("check");
     group.throughput(Throughput::Elements(MEMBERS as u64));
-    group.bench_function("10k_mixed_members", |b| {
+    for (name, working) in [
+        ("10k_mixed_members", Working::Kept),
+        ("10k_mixed_members_without_working", Working::Skipped),
+    ] {
+        group.bench_function(name, |b| {
+            b.iter(|| {
+                let mut passing = 0usize;
+                for m in &members {
+                    if let Ok(r) = check_member_as(black_box(m), working) {
+                        passing += usize::from(r.passes);
+                    }
+                }
+                black_box(passing)
+            })
+        });
+    }
+    // The same members without their moments: the cost of the bending side.
+    let plain: Vec<Member> = (0..MEMBERS).map(|i| member((i / 6) * 10 + i % 6)).collect();
+    group.bench_function("10k_same_members_without_moments", |b| {
         b.iter(|| {
             let mut passing = 0usize;
-            for m in &members {
+            for m in &plain {
                 if let Ok(r) = strutline_core::check_member(black_box(m)) {
                     passing += usize::from(r.passes);
                 }

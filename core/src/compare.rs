@@ -79,7 +79,7 @@ pub fn compare(prepared: &Prepared) -> Vec<Comparison> {
     Method::ALL
         .into_iter()
         .map(|method| {
-            let outcome = match prepared.check_with(method) {
+            let outcome = match prepared.check_as(method, crate::check::Working::Skipped) {
                 Ok(r) => Outcome::Checked {
                     resistance_kn: r.resistance_kn,
                     utilisation: r.utilisation,

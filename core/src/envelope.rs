@@ -28,7 +28,7 @@ pub struct Point {
 /// Samples the envelope of `prepared` for `method` about `mode`'s axis
 /// from slenderness `from` to `to` in `steps` intervals (`steps + 1` points).
 ///
-/// Each sample runs the whole check ([`check::run`]) with that axis's
+/// Each sample runs the whole check ([`check::evaluate`], without working) with that axis's
 /// buckling length set to `lambda * i`, so a Class 4 effective area, the
 /// AISC E7 reduction and every other part of the check shape the curve
 /// exactly as they shape the member's own result. Buckling lengths are
@@ -67,7 +67,7 @@ pub fn sample(
             section,
             material: &prepared.material,
         };
-        let result = check::run(&input, method)?;
+        let result = check::evaluate(&input, method, check::Working::Skipped)?;
         let axis = result
             .modes
             .iter()

@@ -25,9 +25,6 @@ pub const FORMAT: &str = "strutline.members";
 /// sheet's header); a version-2 file carries no moments and no header.
 pub const VERSION: u64 = 3;
 
-/// The largest member-file text accepted, bytes (5 MiB).
-pub const MAX_BYTES: usize = 5 * 1024 * 1024;
-
 /// A list of members with a title.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
 pub struct MemberFile {
@@ -119,6 +116,51 @@ fn syntax(e: &serde_json::Error) -> Error {
     }
 }
 
+/// A number too large for a double (`"length_mm": 1e400`) stops the JSON
+/// reader before any member is known; this finds the number at the error's
+/// position, reads the file again with it as text, and reports it with the
+/// member and the field as every other bad value is reported. `None` when
+/// the error is another one.
+fn out_of_range(text: &str, e: &serde_json::Error) -> Option<Error> {
+    if !e.to_string().starts_with("number out of range") {
+        return None;
+    }
+    let line_start: usize = text
+        .split_inclusive('\n')
+        .take(e.line().saturating_sub(1))
+        .map(str::len)
+        .sum();
+    let at = (line_start + e.column()).min(text.len());
+    let number = |c: char| c.is_ascii_digit() || matches!(c, '.' | 'e' | 'E' | '+' | '-');
+    let head = text.get(..at)?;
+    let start = head.trim_end_matches(number).len();
+    let end = at + text.get(at..)?.len() - text.get(at..)?.trim_start_matches(number).len();
+    let token = text.get(start..end)?;
+    if token.is_empty() {
+        return None;
+    }
+    let quoted = format!("{}\"{token}\"{}", text.get(..start)?, text.get(end..)?);
+    let found = parse_once(&quoted, false).err()?;
+    // The member's error now says the field holds text; say what it holds.
+    let said = format!("invalid type: string \"{token}\", expected f64");
+    let message = found.to_string();
+    message.contains(&said).then(|| {
+        let rewrite = |inner: &str| inner.replace(&said, &format!("number out of range: {token}"));
+        match found {
+            Error::InMember { id, source } => match *source {
+                Error::Syntax { message, .. } => Error::Syntax {
+                    line: e.line(),
+                    column: e.column(),
+                    message: rewrite(&message),
+                }
+                .in_member(&id),
+                other => other.in_member(&id),
+            },
+            other => other,
+        }
+    })
+}
+
 /// Lifts a file of `version` to the next version; each version adds one arm.
 fn migrate(mut value: Value, version: u64) -> Result<Value> {
     // 1 -> 2: version 2 only adds an optional key, so a version-1 file is
@@ -140,17 +182,20 @@ fn migrate(mut value: Value, version: u64) -> Result<Value> {
 
 /// Reads a member file from JSON text.
 pub fn parse(text: &str) -> Result<MemberFile> {
-    if text.len() > MAX_BYTES {
-        return Err(Error::NotMemberFile {
-            reason: format!(
-                "it is {} bytes; the largest file accepted is {} bytes",
-                text.len(),
-                MAX_BYTES
-            ),
-        });
-    }
+    parse_once(text, true)
+}
+
+/// [`parse`]; `name_range` lets a number out of range be looked for once
+/// (see [`out_of_range`]), not again in the text read a second time.
+fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
     let text = text.trim_start_matches('\u{feff}');
-    let mut value: Value = serde_json::from_str(text).map_err(|e| syntax(&e))?;
+    let mut value: Value = match serde_json::from_str(text) {
+        Ok(v) => v,
+        Err(e) => {
+            let named = name_range.then(|| out_of_range(text, &e)).flatten();
+            return Err(named.unwrap_or_else(|| syntax(&e)));
+        }
+    };
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -435,6 +480,22 @@ mod tests {
         let text = ONE.replace("\"length_mm\": 2000", "\"length_mm\": \"long\"");
         let e = parse(&text).unwrap_err().to_string();
         assert!(e.contains("P1") && e.contains("length_mm"), "{e}");
+    }
+
+    #[test]
+    fn a_number_out_of_range_names_member_and_field() {
+        let text = ONE.replace("\"length_mm\": 2000", "\"length_mm\": 1e400");
+        let e = parse(&text).unwrap_err().to_string();
+        assert!(
+            e.contains("\"P1\"") && e.contains("length_mm: number out of range: 1e400"),
+            "{e}"
+        );
+        let text = ONE.replace("\"width_mm\": 50", "\"width_mm\": -2.5E+999");
+        let e = parse(&text).unwrap_err().to_string();
+        assert!(e.contains("\"P1\"") && e.contains("-2.5E+999"), "{e}");
+        // Outside any member: the reader's own words.
+        let e = parse("{\"format\": \"strutline.members\", \"version\": 1e999}").unwrap_err();
+        assert!(e.to_string().contains("out of range"), "{e}");
     }
 
     #[test]

@@ -29,6 +29,8 @@ pub mod section;
 pub mod sizing;
 pub mod solve;
 pub mod stability;
+#[cfg(not(target_arch = "wasm32"))]
+pub mod stream;
 pub mod trace;
 pub mod trig;
 pub mod units;

@@ -3,7 +3,7 @@
 //! Candidates are sorted by tabulated mass per metre once, and their
 //! sections built once ([`Sizer::new`]). For each member they are then
 //! checked lightest first with the member's own method (the same
-//! [`check::run`] as [`crate::check_member`] and [`crate::check::Prepared`]
+//! [`check::evaluate`] (without working) as [`crate::check_member`] and [`crate::check::Prepared`]
 //! use, on a copy of the member with its section replaced by the
 //! candidate) until one has a utilisation within the limit. The next
 //! lighter candidate is reported with why it fails (its utilisation and
@@ -341,7 +341,7 @@ fn material_of(
 }
 
 /// Checks `copy` (a copy of the member) with `section`, the built section
-/// of `entry`: the same [`check::run`] that [`crate::check::Prepared::check`] and
+/// of `entry`: the same check ([`check::evaluate`], without working) that [`crate::check::Prepared::check`] and
 /// [`crate::check_member`] use, on the member with its section replaced by
 /// the catalogue reference of `entry`. The copy's designation text is
 /// reused, so a candidate costs no allocation beyond the check's result.
@@ -367,7 +367,7 @@ fn evaluate(
         section,
         material,
     };
-    check::run(&input, copy.method)
+    check::evaluate(&input, copy.method, check::Working::Skipped)
 }
 
 /// An upper bound on the design resistance, kN, of every mode of every

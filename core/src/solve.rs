@@ -31,7 +31,7 @@
 
 use serde::Serialize;
 
-use crate::check::{CheckResult, Mode, Prepared};
+use crate::check::{CheckResult, Mode, Prepared, Working};
 use crate::error::{Error, Result};
 use crate::member::Member;
 use crate::method::Method;
@@ -160,7 +160,7 @@ pub fn scaled(member: &Member, s: f64) -> Member {
 impl Trials<'_> {
     fn at(&mut self, s: f64) -> Trial {
         self.work.member = scaled(&self.base.member, s);
-        match self.work.check_with(self.method) {
+        match self.work.check_as(self.method, Working::Skipped) {
             Ok(r) => Trial::Ran(Box::new(r)),
             Err(e) => Trial::Refused(inner(e)),
         }
@@ -181,7 +181,7 @@ fn carries(t: &Trial) -> bool {
 /// method that does not apply, such as a timber method for steel, is
 /// refused with its reason).
 pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswer> {
-    let own = prepared.check_with(method)?;
+    let own = prepared.check_as(method, Working::Skipped)?;
     let lengths = prepared.member.buckling_lengths()?;
     let all = [
         lengths.major_mm,
@@ -301,7 +301,7 @@ pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswe
 /// The largest design load `prepared` carries at its own length under
 /// `method`: its design resistance, with the governing mode.
 pub fn largest_load(prepared: &Prepared, method: Method) -> Result<LargestLoad> {
-    let r = prepared.check_with(method)?;
+    let r = prepared.check_as(method, Working::Skipped)?;
     // A member beyond a code's slenderness limit (CSA S16-19 10.4.2.1)
     // carries no load under that code, whatever its resistance.
     let load_kn = if r.within_limits() {

@@ -284,8 +284,94 @@ impl fmt::Debug for Step {
     }
 }
 
-/// The working, in order.
-pub type Trace = Vec<Step>;
+/// The working, in order: the steps a check wrote, or none when the check
+/// was run without its working ([`Trace::off`]).
+///
+/// Checks whose working nobody reads (a batch's summaries, sizing
+/// candidates, envelope samples, the app's list recheck) run with a trace
+/// that is off: every step the methods write is dropped at once, nothing is
+/// allocated, and the numbers are the same (a property test compares every
+/// result with and without working, bit for bit). It reads as a slice of
+/// its steps; steps are added only through [`step!`], [`put`] and [`push`].
+#[derive(Debug, Clone, PartialEq, Default)]
+pub struct Trace {
+    steps: Vec<Step>,
+    off: bool,
+}
+
+impl Trace {
+    /// An empty trace that keeps every step.
+    pub fn new() -> Trace {
+        Trace::default()
+    }
+
+    /// An empty trace that keeps every step, with room for `n`.
+    pub fn with_capacity(n: usize) -> Trace {
+        Trace {
+            steps: Vec::with_capacity(n),
+            off: false,
+        }
+    }
+
+    /// A trace that keeps nothing: the check runs without its working.
+    pub fn off() -> Trace {
+        Trace {
+            steps: Vec::new(),
+            off: true,
+        }
+    }
+
+    /// Whether steps are kept. Code that only writes working (and would
+    /// compute something for it alone) may skip that when this is false.
+    #[inline]
+    pub fn is_on(&self) -> bool {
+        !self.off
+    }
+
+    /// Makes room for `n` more steps when steps are kept.
+    pub fn reserve(&mut self, n: usize) {
+        if !self.off {
+            self.steps.reserve(n);
+        }
+    }
+
+    /// Removes every step (whether it keeps steps stays as it was).
+    pub fn clear(&mut self) {
+        self.steps.clear();
+    }
+
+    /// The steps as a vector.
+    pub fn into_steps(self) -> Vec<Step> {
+        self.steps
+    }
+}
+
+impl Deref for Trace {
+    type Target = [Step];
+    fn deref(&self) -> &[Step] {
+        &self.steps
+    }
+}
+
+impl std::ops::DerefMut for Trace {
+    fn deref_mut(&mut self) -> &mut [Step] {
+        &mut self.steps
+    }
+}
+
+impl<'a> IntoIterator for &'a Trace {
+    type Item = &'a Step;
+    type IntoIter = std::slice::Iter<'a, Step>;
+    fn into_iter(self) -> Self::IntoIter {
+        self.steps.iter()
+    }
+}
+
+impl Serialize for Trace {
+    fn serialize<S: Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        self.steps.serialize(s)
+    }
+}
 
 /// Appends a step: `step!(trace, scope, symbol, label, value, unit, clause)`,
 /// the symbol and unit string literals, label and clause each a string
@@ -306,10 +392,14 @@ macro_rules! step {
 pub(crate) use step;
 
 /// Appends a step (what [`step!`] calls: one call per line of working keeps
-/// the browser build small; native builds inline it).
+/// the browser build small; native builds inline it). Nothing when the
+/// trace is [off](Trace::off).
 #[inline]
 pub fn put(trace: &mut Trace, scope: Scope, symbol: Symbol, label: Sym, value: f64, clause: Sym) {
-    trace.push(Step {
+    if trace.off {
+        return;
+    }
+    trace.steps.push(Step {
         scope,
         symbol,
         label,
@@ -345,6 +435,9 @@ pub fn push(
     unit: &'static str,
     clause: &'static str,
 ) {
+    if trace.off {
+        return;
+    }
     put(
         trace,
         scope,
@@ -409,5 +502,37 @@ mod tests {
         let (p, q) = (held_symbol("t", "mm"), held_symbol("t", "mm"));
         assert!(std::ptr::eq(p.0, q.0));
         assert_eq!((p.as_str(), p.unit()), ("t", "mm"));
+    }
+
+    #[test]
+    fn a_trace_that_is_off_keeps_nothing() {
+        let mut t = Trace::off();
+        step!(
+            &mut t,
+            Scope::Major,
+            "chi",
+            "reduction factor",
+            0.5,
+            "-",
+            "x"
+        );
+        push(&mut t, Scope::Minor, "a", "b", 1.0, "-", "c");
+        assert!(t.is_empty() && !t.is_on());
+        assert_eq!(serde_json::to_string(&t).unwrap(), "[]");
+        let mut on = Trace::new();
+        step!(
+            &mut on,
+            Scope::Major,
+            "chi",
+            "reduction factor",
+            0.5,
+            "-",
+            "x"
+        );
+        assert_eq!(on.len(), 1);
+        assert_eq!(
+            serde_json::to_string(&on).unwrap().matches("chi").count(),
+            1
+        );
     }
 }

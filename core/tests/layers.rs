@@ -31,6 +31,7 @@ const LAYERS: &[(&str, &[&str])] = &[
     ("orchestration", &["envelope", "compare", "solve", "sizing"]),
     ("the member file", &["file"]),
     ("other formats", &["csv"]),
+    ("reading a member file as a stream", &["stream"]),
 ];
 
 fn layer_of(module: &str) -> Option<usize> {

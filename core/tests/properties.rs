@@ -14,7 +14,7 @@
 )]
 
 use proptest::prelude::*;
-use strutline_core::check::{check_member, CheckResult, Mode};
+use strutline_core::check::{check_member, check_member_as, CheckResult, Mode, Working};
 use strutline_core::material::MaterialSpec;
 use strutline_core::member::{Curve, LoadDuration, Member};
 use strutline_core::method::Method;
@@ -283,8 +283,90 @@ fn finite_result(m: &Member) {
     }
 }
 
+/// Every number of a result as its bits, and every other field, except the
+/// working: what must not change when the working is skipped.
+fn bits(r: &CheckResult) -> Vec<String> {
+    let mut out = vec![
+        format!(
+            "{} {:?} {} {:?} {}",
+            r.id, r.method, r.passes, r.governing, r.governing_check
+        ),
+        format!("{:?}", r.warnings),
+        // Debug writes each number in its shortest form that reads back
+        // to the same bits.
+        format!("{:?}", r.bending),
+    ];
+    let s = &r.section;
+    let mut nums = vec![
+        r.utilisation,
+        r.resistance_kn,
+        r.squash_kn,
+        r.strength_mpa,
+        r.modulus_mpa,
+        s.area_mm2,
+        s.i_major_mm4,
+        s.i_minor_mm4,
+        s.r_major_mm,
+        s.r_minor_mm,
+        s.torsion_mm4,
+        s.warping_mm6,
+    ];
+    for m in &r.modes {
+        out.push(format!("{:?}", m.mode));
+        nums.extend([
+            m.buckling_length_mm,
+            m.slenderness,
+            m.critical_kn,
+            m.relative_slenderness,
+            m.reduction,
+            m.resistance_kn,
+        ]);
+    }
+    out.extend(nums.iter().map(|v| format!("{:016x}", v.to_bits())));
+    out
+}
+
+/// The member checked with and without its working, under its own method
+/// and every other: the same outcome, bit for bit, and no working when it
+/// is skipped.
+fn same_without_working(m: &Member) {
+    for method in Method::ALL {
+        let mut m = m.clone();
+        m.method = method;
+        let with = check_member_as(&m, Working::Kept);
+        let without = check_member_as(&m, Working::Skipped);
+        match (&with, &without) {
+            (Ok(a), Ok(b)) => {
+                assert_eq!(bits(a), bits(b), "{m:?}");
+                assert!(!a.trace.is_empty() && b.trace.is_empty(), "{m:?}");
+            }
+            (Err(a), Err(b)) => assert_eq!(a.to_string(), b.to_string(), "{m:?}"),
+            _ => panic!("with working {with:?}\nwithout {without:?}\n{m:?}"),
+        }
+    }
+}
+
 proptest! {
     #![proptest_config(ProptestConfig { cases: 400, .. ProptestConfig::default() })]
+
+    #[test]
+    fn results_are_the_same_without_working(m in any_member()) {
+        same_without_working(&m);
+    }
+
+    #[test]
+    fn outcomes_of_any_numbers_are_the_same_without_working(
+        s in steel_section(), mat in steel_material(), meth in steel_method(),
+        l in wild(), n in wild(), dim in wild(), pick in 0usize..3
+    ) {
+        let mut m = base(s, mat, meth);
+        match pick {
+            0 => m.length_mm = l,
+            1 => m.axial_kn = n,
+            _ => if let SectionSpec::I(i) = &mut m.section { i.flange_mm = dim },
+        }
+        same_without_working(&m);
+    }
 
     #[test]
     fn plausible_members_give_finite_results(m in any_member()) {

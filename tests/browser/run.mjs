@@ -39,6 +39,9 @@ const ONLY = arg("--only");
 // The served build directory (this run's own, from cargo xtask
 // browser-test); the update test rewrites its sw.js and restores it.
 const DIST = arg("--dist");
+// The size budget in bytes (xtask's dist::BUDGET_BYTES, passed by cargo
+// xtask browser-test), which the first visit must stay within.
+const BUDGET = Number(arg("--budget", "NaN"));
 const OUT = ensureOut();
 
 // An invented member for the typing tests: a rolled I column of a
@@ -142,8 +145,10 @@ test("loads-clean", async () => {
     assert.deepEqual(foreign, [], "requests to another origin");
     assert.ok(log.requests.length > 0, "no request was seen at all");
     // What the first visit took over the wire, measured by the browser:
-    // the module arrives gzip-encoded and the app's files fit the size
-    // budget (350 KB, as xtask/src/dist.rs checks on dist/).
+    // the module arrives gzip-encoded, and the bytes of everything loaded
+    // (the xtask server sends each file's zopfli .gz) stay within the size
+    // budget, which `cargo xtask dist` counts as a standard host would
+    // send the same files (gzip at zlib's best level).
     const sizes = await page.evaluate(() =>
       [...performance.getEntriesByType("navigation"), ...performance.getEntriesByType("resource")].map((e) => ({
         name: e.name,
@@ -155,8 +160,9 @@ test("loads-clean", async () => {
     assert.ok(wasm, `the module is not among the loaded resources: ${JSON.stringify(sizes)}`);
     assert.ok(wasm.encoded > 0 && wasm.encoded < wasm.decoded / 2, `the module was not sent compressed: ${JSON.stringify(wasm)}`);
     const total = sizes.reduce((n, e) => n + e.encoded, 0);
-    assert.ok(total <= 350 * 1024, `the first visit took ${total} B, over the 358400 B budget`);
-    console.log(`     first visit: ${total} B over the wire (module ${wasm.encoded} B of ${wasm.decoded} B)`);
+    assert.ok(Number.isFinite(BUDGET) && BUDGET > 0, "no --budget given (cargo xtask browser-test passes it)");
+    assert.ok(total <= BUDGET, `the first visit took ${total} B, over the ${BUDGET} B budget`);
+    console.log(`     first visit: ${total} B over the wire of a ${BUDGET} B budget (module ${wasm.encoded} B of ${wasm.decoded} B)`);
   });
 });
 

@@ -123,7 +123,7 @@ fn class_h_hollow_defaults_to_2_24() {
         section: &section,
         material: &material,
     };
-    let mut trace = Vec::new();
+    let mut trace = strutline_core::trace::Trace::new();
     let mut warnings = Vec::new();
     csa_s16::prelude(&input, &mut trace, &mut warnings).unwrap();
     let n = trace.iter().find(|s| s.symbol == "n").unwrap();

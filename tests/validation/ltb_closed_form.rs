@@ -63,7 +63,7 @@ fn beam(
 fn uniform_moment_m_cr_is_the_closed_form() {
     let pi = std::f64::consts::PI;
     let sections = [
-        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15}),
+        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15, "make": "rolled"}),
         json!({"kind": "i", "depth_mm": 600, "width_mm": 200, "flange_mm": 14, "web_mm": 9, "make": "welded"}),
         json!({"kind": "i", "depth_mm": 200, "width_mm": 200, "flange_mm": 15, "web_mm": 9, "root_radius_mm": 18}),
     ];
@@ -109,7 +109,7 @@ fn ipe_300_s355_en_6_3_2_3_by_hand() {
     // k_c = 1: f = 1 - 0.5 (1 - 1)(...) = 1, chi_mod = chi.
     let mb = chi * wpl * fy / 1e6; // gamma_M1 = 1.0
     let m = beam(
-        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15}),
+        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15, "make": "rolled"}),
         l,
         json!({}),
     );
@@ -143,7 +143,7 @@ fn ipe_300_s355_en_6_3_2_3_by_hand() {
     assert_eq!(b.minor.critical_knm, None);
     // Continuously restrained: the plastic moment, Eq. 6.13.
     let held = beam(
-        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15}),
+        json!({"kind": "i", "depth_mm": 300, "width_mm": 150, "flange_mm": 10.7, "web_mm": 7.1, "root_radius_mm": 15, "make": "rolled"}),
         l,
         json!({"lt_restrained": true}),
     );

@@ -8,7 +8,15 @@
 
 use leptos::prelude::*;
 use strutline_core::csv::{self, Format, RowProblem};
-use strutline_core::file::{self, MemberFile, MAX_BYTES};
+use strutline_core::file::{self, MemberFile};
+
+/// The largest file the app reads, bytes (5 MiB): the app's policy (a list
+/// held in the page and in browser storage), not the engine's, which reads
+/// lists of any length.
+pub const MAX_BYTES: usize = 5 * 1024 * 1024;
+
+/// The most CSV member rows the app reads, for the same reason.
+pub const MAX_ROWS: usize = 10_000;
 use strutline_core::units::UnitSystem;
 use strutline_core::Member;
 use wasm_bindgen::closure::Closure;
@@ -48,7 +56,12 @@ pub fn read(name: &str, text: &str) -> Result<Incoming, String> {
             file::parse(text).map_err(|e| format!("{name}: {e}"))?,
             Vec::new(),
         ),
-        Format::Csv => csv::read_csv_lenient(name, text),
+        Format::Csv => {
+            let import = csv::parse_csv_within(text, MAX_ROWS);
+            let mut list = MemberFile::new(csv::title_from_path(name));
+            list.members = import.members;
+            (list, import.problems)
+        }
     };
     if list.members.is_empty() && problems.is_empty() {
         return Err(format!("{name}: the file holds no members"));

@@ -37,6 +37,8 @@ pub enum Rule {
     OptPositive,
     /// Empty (the default) or a number of zero or more.
     OptNonNegative,
+    /// Empty (0, the default) or any number, negative too (a design moment).
+    OptNumber,
     /// Text, required.
     Text,
     /// Text, optional (empty removes the key).
@@ -75,7 +77,7 @@ const fn f(
 }
 
 use Place::{Material as Mat, Member as Mem, Section as Sec};
-use Rule::{NonNegative, OptNonNegative, OptPositive, OptText, Positive, Text};
+use Rule::{NonNegative, OptNonNegative, OptNumber, OptPositive, OptText, Positive, Text};
 
 /// The section kinds, member-file key and words.
 pub const KINDS: [(&str, &str); 10] = [
@@ -255,6 +257,110 @@ pub const MEMBER_FIELDS: [Field; 2] = [
         NonNegative,
     ),
 ];
+
+/// The bending keys of member file version 3: end and span moments per
+/// axis (as values of the bending-moment diagram: the same sign at both
+/// ends is single curvature), and the length between lateral-torsional
+/// restraints.
+pub const BENDING_FIELDS: [Field; 8] = [
+    f(
+        "m_major_a_knm",
+        "moment at end A, major axis M_a",
+        "kNm",
+        Mem,
+        OptNumber,
+    ),
+    f(
+        "m_major_b_knm",
+        "moment at end B, major axis M_b",
+        "kNm",
+        Mem,
+        OptNumber,
+    ),
+    f(
+        "m_major_span_knm",
+        "mid-length moment from span load, major axis",
+        "kNm",
+        Mem,
+        OptNumber,
+    ),
+    f(
+        "m_minor_a_knm",
+        "moment at end A, minor axis M_a",
+        "kNm",
+        Mem,
+        OptNumber,
+    ),
+    f(
+        "m_minor_b_knm",
+        "moment at end B, minor axis M_b",
+        "kNm",
+        Mem,
+        OptNumber,
+    ),
+    f(
+        "m_minor_span_knm",
+        "mid-length moment from span load, minor axis",
+        "kNm",
+        Mem,
+        OptNumber,
+    ),
+    f(
+        "k_lt",
+        "factor on L between lateral-torsional restraints",
+        "",
+        Mem,
+        OptPositive,
+    ),
+    f(
+        "lcr_lt_mm",
+        "length between lateral-torsional restraints",
+        "mm",
+        Mem,
+        OptPositive,
+    ),
+];
+
+/// The bending choices: span load shapes, lateral restraint, load level.
+pub fn bending_choices() -> Vec<Choice> {
+    let span = vec![("", "uniform load"), ("point", "point load at mid-length")];
+    vec![
+        Choice {
+            key: "span_load_major",
+            label: "span load, major axis",
+            place: Mem,
+            options: span.clone(),
+        },
+        Choice {
+            key: "span_load_minor",
+            label: "span load, minor axis",
+            place: Mem,
+            options: span,
+        },
+        Choice {
+            key: "lt_restrained",
+            label: "compression flange",
+            place: Mem,
+            options: vec![
+                ("", "free between the restraints"),
+                ("true", "held continuously (no lateral-torsional buckling)"),
+            ],
+        },
+        Choice {
+            key: "load_level",
+            label: "span load acts at",
+            place: Mem,
+            options: vec![
+                ("", "the shear centre"),
+                (
+                    "compression-flange",
+                    "the compression flange (destabilising)",
+                ),
+                ("tension-flange", "the tension flange"),
+            ],
+        },
+    ]
+}
 
 /// The member's free-text note.
 pub const NOTE: Field = f("note", "note (optional)", "", Mem, OptText);
@@ -696,7 +802,7 @@ pub fn apply(member: &Member, field: &Field, text: &str) -> Result<Member, Strin
             check_sign(key, x, field.rule)?;
             Some(number(x))
         }
-        Rule::OptPositive | Rule::OptNonNegative => {
+        Rule::OptPositive | Rule::OptNonNegative | Rule::OptNumber => {
             if text.trim().is_empty() {
                 None
             } else {
@@ -725,6 +831,8 @@ fn check_sign(key: &str, x: f64, rule: Rule) -> Result<(), String> {
 pub fn apply_choice(member: &Member, choice: &Choice, value: &str) -> Result<Member, String> {
     let v = if value.is_empty() {
         None
+    } else if choice.key == "lt_restrained" {
+        Some(Value::Bool(value == "true"))
     } else if choice.key == "service_class" {
         let n: u64 = value
             .trim()
@@ -816,7 +924,13 @@ mod tests {
                                     )
                                 });
                         let offered: Vec<&str> = choice.options.iter().map(|(v, _)| *v).collect();
-                        assert_eq!(offered, options, "{} {}", kind.name, key.key);
+                        // A key that may be absent is offered as "" first.
+                        let mut expected: Vec<&str> = Vec::new();
+                        if key.default == Absent::Absent {
+                            expected.push("");
+                        }
+                        expected.extend_from_slice(options);
+                        assert_eq!(offered, expected, "{} {}", kind.name, key.key);
                     }
                     Holds::Number | Holds::Text => {
                         let field = fields.iter().find(|f| f.key == key.key).unwrap_or_else(|| {

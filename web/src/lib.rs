@@ -12,6 +12,7 @@ pub mod browser;
 pub mod chart;
 pub mod checks;
 pub mod demo;
+pub mod diagram;
 pub mod exchange;
 pub mod fields;
 pub mod html;

@@ -93,11 +93,16 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
             html!(
                 h,
                 "<dl class=\"verdict-numbers\">\
-                 <dt>utilisation N_Ed / N_Rd</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
+                 <dt>utilisation {}</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
                  <dt>governs</dt><dd data-testid=\"result-governing\">{}</dd>\
                  <dt class=\"v-more\">resistance N_Rd</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">{}</span> {}</dd>\
                  <dt class=\"v-more\">design load N_Ed</dt><dd class=\"v-more\">{}</dd>\
                  <dt class=\"v-more\">method</dt><dd class=\"v-more\">{}</dd></dl></div>",
+                if r.bending.is_some() {
+                    "(largest)"
+                } else {
+                    "N_Ed / N_Rd"
+                },
                 fixed(r.utilisation, 3),
                 governing_text(r),
                 rd,
@@ -105,9 +110,51 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                 result_text(sys, "kN", c.member.axial_kn, 1),
                 r.method.title(),
             );
+            if let Some(b) = &r.bending {
+                h.push(&bending_html(b, sys));
+            }
             h.push(&warnings_in(r, &said));
         }
     }
+    h
+}
+
+/// The bending side of a result: per axis the largest design moment, the
+/// design resistance, the elastic critical moment, the reduction and the
+/// moment factor (a dash where none applies).
+pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> Html {
+    let u = head_unit(sys, "kNm");
+    let mut h = Html::new();
+    html!(
+        h,
+        "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Bending\">\
+         <table class=\"modes\" data-testid=\"bending\"><caption>Bending</caption><thead><tr>\
+         <th scope=\"col\">axis</th><th scope=\"col\">M_Ed ({})</th><th scope=\"col\">M_Rd ({})</th>\
+         <th scope=\"col\">M_cr ({})</th><th scope=\"col\">reduction</th>\
+         <th scope=\"col\">moment factor</th><th scope=\"col\">utilisation</th></tr></thead><tbody>",
+        u,
+        u,
+        u
+    );
+    for (name, a) in [("major", &b.major), ("minor", &b.minor)] {
+        html!(h, "<tr><th scope=\"row\">{}</th>", name);
+        cell(&mut h, sys, "kNm", a.demand_knm);
+        cell(&mut h, sys, "kNm", a.resistance_knm);
+        match a.critical_knm {
+            Some(v) => cell(&mut h, sys, "kNm", v),
+            None => {
+                h.lit("<td class=\"num\">—</td>");
+            }
+        }
+        html!(
+            h,
+            "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>",
+            working(a.reduction),
+            a.moment_factor.map(working).unwrap_or_else(|| "—".into()),
+            fixed(a.utilisation(), 3)
+        );
+    }
+    h.lit("</tbody></table></div>");
     h
 }
 
@@ -508,6 +555,29 @@ mod tests {
         // Shown to four significant figures.
         assert!((shown - kip).abs() <= kip.abs() * 5e-4, "{shown} vs {kip}");
         assert!(us.contains("</span> kip"));
+    }
+
+    #[test]
+    fn verdict_shows_the_bending_side() {
+        let mut m = demo::sample_member("B1");
+        m.axial_kn = 0.0;
+        m.method = strutline_core::method::Method::En1993;
+        m.m_major_span_knm = 1.5;
+        let c = Checked::new(&m);
+        let r = c.outcome.as_ref().unwrap();
+        let b = r.bending.unwrap();
+        let h = verdict_html(&c, UnitSystem::Si).into_string();
+        assert!(h.contains("data-testid=\"bending\""), "{h}");
+        assert!(h.contains("bending, major axis"), "{h}");
+        assert!(h.contains(&format!(
+            "<td class=\"num\">{}</td>",
+            fixed(b.major.utilisation(), 3)
+        )));
+        let w = working_html(r, UnitSystem::Si).into_string();
+        assert!(
+            w.contains("Bending, major axis") && w.contains("M_b,Rd"),
+            "{w}"
+        );
     }
 
     #[test]

@@ -71,6 +71,14 @@ pub fn status_text(outcome: &Result<CheckResult, Error>) -> String {
 /// The governing mode in words, with the axis.
 pub fn governing_text(r: &CheckResult) -> String {
     use strutline_core::Mode;
+    match r.governing_check {
+        "bending-major" => return "bending, major axis".into(),
+        "bending-minor" => return "bending, minor axis".into(),
+        "combined-not-checked" => {
+            return "axial load with moments: interaction not checked, not passed".into()
+        }
+        _ => {}
+    }
     match r.governing {
         Mode::Major => "flexural buckling, major axis".into(),
         Mode::Minor => "flexural buckling, minor axis".into(),

@@ -21,12 +21,12 @@ pub fn run(args: &[String]) -> Result<()> {
     std::fs::create_dir_all(&out_dir)?;
     let mut cmd = browser::node_script("bench.mjs", &url);
     cmd.args([
-        "--dist-gz",
-        &built.gz_total.to_string(),
-        "--dist-budget",
-        &dist::BUDGET_GZ_BYTES.to_string(),
         "--dist-zlib",
-        &built.flate_total.to_string(),
+        &built.zlib_total.to_string(),
+        "--dist-budget",
+        &dist::BUDGET_BYTES.to_string(),
+        "--dist-sent",
+        &built.sent_total.to_string(),
         "--cache-name",
         &built.cache_name,
         "--out",

@@ -29,23 +29,20 @@ pub fn run(args: &[String]) -> Result<()> {
     // The tests compare the page with the command line; build it first so
     // each comparison is a quick `cargo run`. A failed build is left for
     // those tests to report, so the others still run.
-    if let Err(e) = util::run(util::cargo().args([
-        "build",
-        "--release",
-        "-q",
-        "-p",
-        "strutline-cli",
-        "--bin",
-        "strutline",
-    ])) {
+    if let Err(e) =
+        util::run(util::cargo().args(["build", "--release", "-q", "--bin", "strutline"]))
+    {
         eprintln!("xtask: WARNING: the command line did not build ({e:#}); the tests that compare with it will fail");
     }
     let server = serve::Server::start(&built.dir, 0)?;
     let url = format!("http://127.0.0.1:{}/", server.port());
     println!("xtask: serving dist/ at {url} for the browser tests");
     let mut cmd = node_script("run.mjs", &url);
-    // The update test rewrites sw.js in this run's own build directory.
-    cmd.arg("--dist").arg(&built.dir);
+    // The update test rewrites sw.js in this run's own build directory;
+    // the first-visit test holds what the browser loaded to the budget.
+    cmd.arg("--dist")
+        .arg(&built.dir)
+        .args(["--budget", &dist::BUDGET_BYTES.to_string()]);
     if let Some(name) = &only {
         cmd.args(["--only", name]);
     }
@@ -64,15 +61,13 @@ pub fn run(args: &[String]) -> Result<()> {
 }
 
 /// Installs what the browser scripts need and builds the app into a
-/// directory of this run's own (`target/xtask-browser-dist-<pid>/`,
+/// directory of this run's own (`<target>/xtask-browser-dist-<pid>/`,
 /// removed when the returned value drops), so that a `cargo xtask dist`
 /// run at the same time cannot pull files from under the tests.
 pub fn prepare(use_wasm_opt: bool) -> Result<Prepared> {
     ensure_chromium()?;
     ensure_node_modules()?;
-    let dir = util::root()
-        .join("target")
-        .join(format!("xtask-browser-dist-{}", std::process::id()));
+    let dir = util::target_dir()?.join(format!("xtask-browser-dist-{}", std::process::id()));
     let built = match dist::build_into(&dir, use_wasm_opt) {
         Ok(b) => b,
         Err(e) => {
@@ -148,11 +143,12 @@ fn ensure_chromium() -> Result<()> {
 }
 
 /// Runs `npm ci` (or `npm install` when that fails) in tests/browser when
-/// playwright-core, axe-core or binaryen is not installed there.
+/// playwright-core or axe-core is not installed there (the build's own
+/// tools are installed by `dist`, from `xtask/tools`).
 fn ensure_node_modules() -> Result<()> {
     let dir = tests_dir();
     let modules = dir.join("node_modules");
-    if ["playwright-core", "axe-core", "binaryen"]
+    if ["playwright-core", "axe-core"]
         .iter()
         .all(|m| modules.join(m).is_dir())
     {

@@ -13,7 +13,7 @@ use anyhow::Result;
 use crate::util;
 
 /// The fuzz targets, with the seed folder of each.
-const TARGETS: [&str; 2] = ["member_file", "member_csv"];
+const TARGETS: [&str; 3] = ["member_file", "member_csv", "member_stream"];
 
 /// Runs each target for the given time.
 pub fn run(args: &[String]) -> Result<()> {

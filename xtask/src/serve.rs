@@ -440,7 +440,7 @@ mod tests {
     #[test]
     fn sends_the_precompressed_file_to_clients_that_take_gzip() {
         let root = temp_root();
-        let packed = crate::util::zopfli_gzip(b"\0asm").unwrap();
+        let packed = crate::dist::size::zopfli_gzip(b"\0asm").unwrap();
         std::fs::write(root.join("app.wasm.gz"), &packed).unwrap();
         let server = Server::start(&root, 0).unwrap();
         let port = server.port();

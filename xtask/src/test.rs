@@ -25,7 +25,7 @@ const PROPTEST_SEED: &str = "20261201";
 pub fn run(args: &[String]) -> Result<()> {
     util::check_args(args, &[], &["--no-browser"])?;
     let browser = !args.iter().any(|a| a == "--no-browser");
-    ensure_wasm_target()?;
+    crate::dist::ensure_target()?;
     step("formatting")?;
     util::run(util::cargo().args(["fmt", "--all", "--", "--check"]))?;
     step("lints, host")?;
@@ -87,7 +87,7 @@ fn step(name: &str) -> Result<()> {
 /// status its name promises (`*-over.json` has a member over capacity).
 fn examples() -> Result<()> {
     util::run(util::cargo().args(["build", "--release", "-q", "--bin", "strutline"]))?;
-    let bin = util::root().join("target/release/strutline");
+    let bin = util::target_dir()?.join("release").join("strutline");
     let dir = util::root().join("examples");
     for name in util::files_under(&dir)? {
         if !name.ends_with(".json") && !name.ends_with(".csv") {
@@ -105,23 +105,6 @@ fn examples() -> Result<()> {
                 status.code()
             );
         }
-    }
-    Ok(())
-}
-
-/// Installs the wasm32 target through rustup when it is missing.
-fn ensure_wasm_target() -> Result<()> {
-    let installed =
-        util::output(std::process::Command::new("rustup").args(["target", "list", "--installed"]))?;
-    if !installed
-        .lines()
-        .any(|l| l.trim() == "wasm32-unknown-unknown")
-    {
-        util::run(std::process::Command::new("rustup").args([
-            "target",
-            "add",
-            "wasm32-unknown-unknown",
-        ]))?;
     }
     Ok(())
 }

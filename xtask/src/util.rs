@@ -1,9 +1,9 @@
-//! Small helpers shared by the xtask subcommands: the workspace root,
-//! running child processes, gzip sizes and a tiny argument reader.
+//! Small helpers shared by the xtask subcommands: the workspace root and
+//! target directory, running child processes and a tiny argument reader.
 
-use std::io::Write;
 use std::path::{Path, PathBuf};
 use std::process::Command;
+use std::sync::OnceLock;
 
 use anyhow::{bail, Context, Result};
 
@@ -11,6 +11,25 @@ use anyhow::{bail, Context, Result};
 pub fn root() -> PathBuf {
     let manifest = PathBuf::from(env!("CARGO_MANIFEST_DIR"));
     manifest.parent().map(Path::to_path_buf).unwrap_or(manifest)
+}
+
+/// Cargo's target directory for this workspace, as `cargo metadata`
+/// reports it (so `CARGO_TARGET_DIR`, `build.target-dir` in a cargo
+/// config and the default `target/` are all honoured); asked once per run.
+pub fn target_dir() -> Result<PathBuf> {
+    static DIR: OnceLock<PathBuf> = OnceLock::new();
+    if let Some(dir) = DIR.get() {
+        return Ok(dir.clone());
+    }
+    let text = output(cargo().args(["metadata", "--format-version", "1", "--no-deps"]))?;
+    let meta: serde_json::Value =
+        serde_json::from_str(&text).context("reading the output of `cargo metadata`")?;
+    let dir = meta
+        .get("target_directory")
+        .and_then(|v| v.as_str())
+        .map(PathBuf::from)
+        .ok_or_else(|| anyhow::anyhow!("`cargo metadata` names no target_directory"))?;
+    Ok(DIR.get_or_init(|| dir).clone())
 }
 
 /// The `cargo` that runs us (falls back to `cargo` on PATH).
@@ -77,26 +96,6 @@ fn describe(cmd: &Command) -> String {
         s.push_str(&a.to_string_lossy());
     }
     s
-}
-
-/// The size of `bytes` after gzip at the best compression level.
-pub fn gzip_len(bytes: &[u8]) -> Result<usize> {
-    let mut enc = flate2::write::GzEncoder::new(Vec::new(), flate2::Compression::best());
-    enc.write_all(bytes)?;
-    Ok(enc.finish()?.len())
-}
-
-/// `bytes` in the gzip format, compressed by zopfli (slow, and some 5%
-/// smaller than the best level of zlib; any gzip reader reads it).
-pub fn zopfli_gzip(bytes: &[u8]) -> Result<Vec<u8>> {
-    let mut out = Vec::new();
-    zopfli::compress(
-        zopfli::Options::default(),
-        zopfli::Format::Gzip,
-        bytes,
-        &mut out,
-    )?;
-    Ok(out)
 }
 
 /// Every file under `dir`, as paths relative to `dir` with `/`

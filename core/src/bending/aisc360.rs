@@ -148,7 +148,7 @@ fn axis(
                     i.web_mm,
                     i.root_radius_mm,
                     false,
-                    i.make == IMake::Welded,
+                    i.make != IMake::Rolled, // unstated: welded, the larger h (conservative)
                 ),
                 SectionSpec::Channel(c) => (
                     c.depth_mm,

@@ -136,7 +136,7 @@ pub(super) fn tokenize(
             if !record.is_blank() {
                 non_blank += 1;
                 if non_blank > limit {
-                    problems.push(too_many_rows());
+                    problems.push(too_many_rows(limit - 1));
                     return (records, problems);
                 }
                 records.push(record);
@@ -172,7 +172,7 @@ pub(super) fn tokenize(
     if !record.is_blank() {
         non_blank += 1;
         if non_blank > limit {
-            problems.push(too_many_rows());
+            problems.push(too_many_rows(limit - 1));
             return (records, problems);
         }
         records.push(record);
@@ -180,12 +180,12 @@ pub(super) fn tokenize(
     (records, problems)
 }
 
-pub(super) fn too_many_rows() -> RowProblem {
+pub(super) fn too_many_rows(max_rows: usize) -> RowProblem {
     problem(
         0,
         "",
-        format!("at most {MAX_ROWS} member rows"),
-        format!("the file has more than {MAX_ROWS} rows; split it into smaller files"),
+        format!("at most {max_rows} member rows"),
+        format!("the file has more than {max_rows} rows; split it into smaller files"),
     )
 }
 

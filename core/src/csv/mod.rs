@@ -53,8 +53,10 @@
 //! line (a first line `sep=;` as some spreadsheets write also sets it). A
 //! UTF-8 byte-order mark, CRLF or LF line ends, quoted fields with doubled
 //! quotes and embedded separators or line breaks, and blank rows (also
-//! rows of empty cells) are accepted. Files over [`crate::file::MAX_BYTES`]
-//! bytes or with more than [`MAX_ROWS`] rows are refused.
+//! rows of empty cells) are accepted. The engine sets no limit on a file's
+//! size or rows; an edge that needs one (the app's import) applies its own
+//! ([`parse_csv_within`]), and the command line reads long files a block of
+//! rows at a time ([`separator`] tells how to cut them).
 //!
 //! Reading never stops at the first problem: every row and every field is
 //! checked, and each problem names the line, the column and what was
@@ -85,11 +87,8 @@ use crate::file::{self, MemberFile};
 use crate::member::Member;
 
 pub use number::parse_typed;
-pub use read::parse_csv;
+pub use read::{parse_csv, parse_csv_within};
 pub use write::{to_csv, to_csv_in};
-
-/// The largest number of member rows accepted.
-pub const MAX_ROWS: usize = 10_000;
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]
@@ -185,6 +184,13 @@ pub fn detect_format(path_text: &str, contents: &str) -> Format {
             }
         }
     }
+}
+
+/// The separator a CSV text uses (`,`, `;` or tab), by the rules of the
+/// module documentation; with `,` or `;` the decimal mark follows from it,
+/// so blocks of rows can be read apart under the same header.
+pub fn separator(text: &str) -> char {
+    lex::detect_separator(text.strip_prefix('\u{feff}').unwrap_or(text)).0
 }
 
 /// The file name without folders and extension, for the title of a CSV file.

@@ -6,7 +6,7 @@ use super::keys::*;
 use super::lex::*;
 use super::number::*;
 use super::*;
-use crate::file::{self, MAX_BYTES};
+use crate::file;
 use crate::member::Member;
 use crate::method::Method;
 use crate::section::schema;
@@ -539,22 +539,16 @@ pub(super) fn missing_field(message: &str) -> Option<String> {
 
 /// Reads a CSV member file. See the module documentation for the rules.
 pub fn parse_csv(text: &str) -> CsvImport {
+    parse_csv_within(text, usize::MAX)
+}
+
+/// [`parse_csv`], refusing a file of more than `max_rows` member rows with
+/// one problem that says so (a limit an edge may set as its policy).
+pub fn parse_csv_within(text: &str, max_rows: usize) -> CsvImport {
     let mut out = CsvImport::default();
-    if text.len() > MAX_BYTES {
-        out.problems.push(problem(
-            0,
-            "",
-            format!("a file of at most {MAX_BYTES} bytes"),
-            format!(
-                "the file is {} bytes; the largest accepted is {MAX_BYTES} bytes (5 MiB); split it",
-                text.len()
-            ),
-        ));
-        return out;
-    }
     let text = text.strip_prefix('\u{feff}').unwrap_or(text);
     let (sep, body, skipped) = detect_separator(text);
-    let (records, problems) = tokenize(body, sep, 1 + skipped, MAX_ROWS + 1);
+    let (records, problems) = tokenize(body, sep, 1 + skipped, max_rows.saturating_add(1));
     if problems.iter().any(|p| p.line == 0) {
         out.problems = problems;
         return out;

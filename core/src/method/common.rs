@@ -278,7 +278,12 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
     match input.material {
         Material::Steel(s) => {
             if s.name != "custom" {
-                let standard = held(s.standard);
+                // Only for the working (a thread-local look-up).
+                let standard = if trace.is_on() {
+                    held(s.standard)
+                } else {
+                    sym!("")
+                };
                 step!(
                     trace,
                     Scope::Member,
@@ -338,7 +343,11 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
             }
         }
         Material::Timber(t) => {
-            let standard = held(t.standard);
+            let standard = if trace.is_on() {
+                held(t.standard)
+            } else {
+                sym!("")
+            };
             step!(
                 trace,
                 Scope::Member,

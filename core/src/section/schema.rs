@@ -99,13 +99,12 @@ const I_MAKES: &[&str] = &["rolled", "welded"];
 const HOLLOW_MAKES: &[&str] = &["hot-finished", "cold-formed"];
 
 const fn make(options: &'static [&'static str]) -> Key {
+    // Absent: not stated; each method takes the make that gives the lower
+    // resistance and says so (crate::method::make).
     Key {
         key: "make",
         value: Value::Choice(options),
-        default: Default::Choice(match options {
-            [first, ..] => first,
-            [] => "",
-        }),
+        default: Default::Absent,
     }
 }
 

@@ -718,6 +718,29 @@ mod tests {
         close(p.r_major_mm, 100.0, 1e-15, "r");
         close(p.r_minor_mm, 4000f64.sqrt(), 1e-15, "r");
         assert_eq!(p.warping_mm6, 1e10);
+        // An area of 1e-300 mm2 is a slip, refused naming the key (it once
+        // gave a zero resistance and an infinite utilisation).
+        let tiny = properties(&SectionSpec::Given(Given {
+            area_mm2: 1e-300,
+            i_major_mm4: 5e7,
+            i_minor_mm4: 2e7,
+            torsion_mm4: None,
+            warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
+        }));
+        assert!(
+            matches!(
+                tiny,
+                Err(Error::OutOfRange {
+                    field: "area_mm2",
+                    ..
+                })
+            ),
+            "{tiny:?}"
+        );
     }
 
     #[test]

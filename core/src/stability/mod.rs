@@ -75,6 +75,9 @@ fn clause_ratio(code: Code) -> Sym {
 
 /// Pushes every element's width, ratio, limit and class.
 pub fn trace_classification(c: &Classified, trace: &mut Trace) {
+    if !trace.is_on() {
+        return;
+    }
     let clause = clause_ratio(c.code);
     if c.code == Code::En1993 {
         step!(
@@ -129,6 +132,9 @@ pub fn trace_classification(c: &Classified, trace: &mut Trace) {
 }
 
 fn trace_effective(c: &Classified, eff: &Effective, scope: Scope, trace: &mut Trace, clause: Sym) {
+    if !trace.is_on() {
+        return;
+    }
     for (e, r) in c.elements().iter().zip(eff.reduced.iter()) {
         if let Some(r) = r {
             let l = e.part.labels();

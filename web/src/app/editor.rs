@@ -315,6 +315,18 @@ pub(super) fn Editor(ctx: Ctx) -> impl IntoView {
             <fieldset>
                 <legend>"Design load"</legend>
                 <NumField ctx=ctx field=fields::MEMBER_FIELDS[1] />
+                <details class="bending-input" open=ctx.current().is_some_and(|m| m.has_moments())>
+                    <summary>"Moments and lateral restraint"</summary>
+                    <div class="field-grid">
+                        {fields::BENDING_FIELDS.iter().map(|f| view! { <NumField ctx=ctx field=*f /> }.into_any()).collect::<Vec<_>>()}
+                        {fields::bending_choices().into_iter().map(|c| view! { <ChoiceField ctx=ctx choice=c /> }.into_any()).collect::<Vec<_>>()}
+                    </div>
+                    <div inner_html=move || {
+                        let sel = ctx.selected.get();
+                        let sys = ctx.units.get();
+                        ctx.checks.with(|c| c.0.get(sel).map(|c| crate::diagram::svg(&c.member, sys).into_string())).unwrap_or_default()
+                    }></div>
+                </details>
             </fieldset>
             <fieldset>
                 <legend>"Method"</legend>

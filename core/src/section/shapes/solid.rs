@@ -68,10 +68,35 @@ fn optional(field: &'static str, v: Option<f64>) -> Result<f64> {
     }
 }
 
+/// A typed property at least `least`: below it the number is a typing slip
+/// (the smallest structural sections have areas of tens of mm2), and the
+/// arithmetic that follows would lose every digit.
+fn at_least(field: &'static str, value: f64, least: f64, expected: &'static str) -> Result<f64> {
+    let v = crate::error::positive(field, value)?;
+    if v < least {
+        return Err(Error::OutOfRange {
+            field,
+            value: v,
+            expected,
+        });
+    }
+    Ok(v)
+}
+
 pub(super) fn given(s: &Given) -> Result<Properties> {
-    let a = crate::error::positive("area_mm2", s.area_mm2)?;
-    let i_major = crate::error::positive("i_major_mm4", s.i_major_mm4)?;
-    let i_minor = crate::error::positive("i_minor_mm4", s.i_minor_mm4)?;
+    let a = at_least("area_mm2", s.area_mm2, 1.0, "an area of at least 1 mm2")?;
+    let i_major = at_least(
+        "i_major_mm4",
+        s.i_major_mm4,
+        1.0,
+        "a second moment of at least 1 mm4",
+    )?;
+    let i_minor = at_least(
+        "i_minor_mm4",
+        s.i_minor_mm4,
+        1.0,
+        "a second moment of at least 1 mm4",
+    )?;
     if i_minor > i_major {
         return Err(Error::Geometry {
             field: "i_minor_mm4",

@@ -1,0 +1,155 @@
+//! The app's shell: the page, the boot script, the style sheet, the
+//! manifest and the service worker, whose cache name is stamped from the
+//! files it precaches.
+
+use std::path::Path;
+
+use anyhow::{bail, Context, Result};
+use sha2::{Digest, Sha256};
+
+use crate::util;
+
+/// Lines of `web/static/sw.js` that the build replaces.
+const SW_CACHE_LINE: &str = "const CACHE_NAME = \"strutline-dev\";";
+const SW_FILES_LINE: &str = "const PRECACHE = [];";
+
+/// Copies `from` to `to`, naming both on failure.
+pub fn copy(from: &Path, to: &Path) -> Result<()> {
+    std::fs::copy(from, to)
+        .with_context(|| format!("copying {} to {}", from.display(), to.display()))?;
+    Ok(())
+}
+
+/// Writes index.html, the manifest and the tidied style sheet of the
+/// workspace at `root` into `dist` (boot.js is copied earlier, to be
+/// minified with the glue).
+pub fn write(root: &Path, dist: &Path) -> Result<()> {
+    copy(&root.join("index.html"), &dist.join("index.html"))?;
+    copy(
+        &root.join("web/static/manifest.webmanifest"),
+        &dist.join("manifest.webmanifest"),
+    )?;
+    let style = root.join("web/style.css");
+    let css =
+        std::fs::read_to_string(&style).with_context(|| format!("reading {}", style.display()))?;
+    std::fs::write(dist.join("style.css"), tidy_css(&css))?;
+    Ok(())
+}
+
+/// Writes `dist/sw.js` from `web/static/sw.js`: every other file of `dist`
+/// is precached and hashed into the cache name, which is returned.
+pub fn write_worker(root: &Path, dist: &Path) -> Result<String> {
+    let shipped = util::files_under(dist)?;
+    let mut hasher = Sha256::new();
+    for rel in &shipped {
+        let bytes = std::fs::read(dist.join(rel))?;
+        hasher.update(rel.as_bytes());
+        hasher.update([0u8]);
+        hasher.update((bytes.len() as u64).to_le_bytes());
+        hasher.update(&bytes);
+    }
+    let digest = hasher.finalize();
+    let hex: String = digest.iter().take(6).map(|b| format!("{b:02x}")).collect();
+    let cache_name = format!("strutline-{hex}");
+    let sw = service_worker(&root.join("web/static/sw.js"), &cache_name, &shipped)?;
+    // sw.js stays as written: it is small, and its stamped cache name is
+    // read back by the update test and by people looking at a deployment.
+    std::fs::write(dist.join("sw.js"), sw)?;
+    Ok(cache_name)
+}
+
+/// The style sheet without its comments and the white space CSS does not
+/// need (the rules themselves are left as written).
+pub fn tidy_css(css: &str) -> String {
+    let mut out = String::with_capacity(css.len());
+    let mut rest = css;
+    while let Some(i) = rest.find("/*") {
+        out.push_str(rest.get(..i).unwrap_or_default());
+        rest = match rest.get(i + 2..).and_then(|r| r.find("*/").map(|j| (r, j))) {
+            Some((r, j)) => r.get(j + 2..).unwrap_or_default(),
+            None => "",
+        };
+    }
+    out.push_str(rest);
+    // Runs of white space become one space, and none is kept next to
+    // `{`, `}`, `;` or `,` (where CSS never needs it; `:` is left alone, as
+    // a space before it can be a descendant combinator).
+    let mut tidy = String::with_capacity(out.len());
+    for word in out.split_whitespace() {
+        let glued = tidy.ends_with(['{', '}', ';', ',']) || word.starts_with(['{', '}', ';', ',']);
+        if !tidy.is_empty() && !glued {
+            tidy.push(' ');
+        }
+        tidy.push_str(word);
+    }
+    tidy
+}
+
+/// Fills the worker template with the cache name and the precache list.
+fn service_worker(template: &Path, cache_name: &str, shipped: &[String]) -> Result<String> {
+    let text = std::fs::read_to_string(template)
+        .with_context(|| format!("reading {}", template.display()))?;
+    if !text.contains(SW_CACHE_LINE) || !text.contains(SW_FILES_LINE) {
+        bail!(
+            "{} must contain the lines `{SW_CACHE_LINE}` and `{SW_FILES_LINE}`",
+            template.display()
+        );
+    }
+    let mut list = String::from("const PRECACHE = [\n  \"./\",\n");
+    for rel in shipped {
+        list.push_str(&format!("  \"./{}\",\n", js_escape(rel)));
+    }
+    list.push_str("];");
+    // Whole-line comments are for the source, not the browser.
+    let text: String = text
+        .lines()
+        .filter(|l| !l.trim_start().starts_with("//"))
+        .flat_map(|l| [l, "\n"])
+        .collect();
+    Ok(text
+        .replace(
+            SW_CACHE_LINE,
+            &format!("const CACHE_NAME = \"{cache_name}\";"),
+        )
+        .replace(SW_FILES_LINE, &list))
+}
+
+fn js_escape(s: &str) -> String {
+    s.replace('\\', "\\\\").replace('"', "\\\"")
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::expect_used)]
+    use super::*;
+
+    #[test]
+    fn css_loses_comments_and_needless_space_only() {
+        let css =
+            "/* a */\n.x {\n  color: red; /* b\n c */\n}\n\n@media print {\n  .y { a: b; }\n}\n";
+        assert_eq!(tidy_css(css), ".x{color: red;}@media print{.y{a: b;}}");
+        assert_eq!(tidy_css("a { b: c; } /* open"), "a{b: c;}");
+        assert_eq!(
+            tidy_css("a :hover, b > c { d: rgba(0, 0, 0) }"),
+            "a :hover,b > c{d: rgba(0,0,0)}"
+        );
+    }
+
+    #[test]
+    fn worker_template_gets_name_and_files() {
+        let dir = std::env::temp_dir().join(format!("xtask-sw-{}", std::process::id()));
+        std::fs::create_dir_all(&dir).unwrap();
+        let t = dir.join("sw.js");
+        std::fs::write(&t, format!("{SW_CACHE_LINE}\n{SW_FILES_LINE}\n")).unwrap();
+        let out = service_worker(&t, "strutline-abc", &["a.js".into(), "b/c.wasm".into()]).unwrap();
+        assert!(out.contains("const CACHE_NAME = \"strutline-abc\";"));
+        assert!(
+            out.contains("\"./\",")
+                && out.contains("\"./a.js\",")
+                && out.contains("\"./b/c.wasm\",")
+        );
+        std::fs::write(&t, "nothing").unwrap();
+        assert!(service_worker(&t, "x", &[]).is_err());
+        std::fs::remove_dir_all(&dir).unwrap();
+    }
+}
