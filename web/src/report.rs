@@ -247,7 +247,7 @@ fn working_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) -
                 said(st.symbol.as_str()),
                 said(st.label.as_str()),
                 step_text(sys, st.unit(), st.value),
-                st.clause.as_str(),
+                said(st.clause.as_str()),
             );
         }
         if rows.is_empty() {
