@@ -21,8 +21,9 @@ pub const FORMAT: &str = "strutline.members";
 /// E5); a version-1 file reads as it was written. Version 3 added the
 /// optional bending keys (`m_major_a_knm`, ..., `span_load_major`, `k_lt`,
 /// `lcr_lt_mm`, `lt_restrained`, `load_level`, and the given section's
-/// `w_el_*_mm3`, `w_pl_*_mm3`; a version-2 file carries no moments) and the
-/// buckling keys `frame_major`, `frame_minor` and `buckling_model`.
+/// `w_el_*_mm3`, `w_pl_*_mm3`), the buckling keys `frame_major`,
+/// `frame_minor` and `buckling_model`, and the optional top-level `sheet`
+/// (the calc sheet's header); a version-2 file carries none of them.
 pub const VERSION: u64 = 3;
 
 /// A list of members with a title.
@@ -35,8 +36,51 @@ pub struct MemberFile {
     /// The list's title (e.g. the job name).
     #[serde(default)]
     pub title: String,
+    /// The lines of the calc sheet's header, entered once for the list
+    /// (optional; written only when one is filled in).
+    #[serde(default, skip_serializing_if = "SheetHeader::is_empty")]
+    pub sheet: SheetHeader,
     /// The members, in order.
     pub members: Vec<Member>,
+}
+
+/// The header every printed page of a list's calc sheet carries, beside
+/// the list's title: the member file's optional top-level `"sheet"`
+/// object. Every key is optional text; unknown keys are refused, so a
+/// misspelt one is not silently lost.
+#[derive(Debug, Clone, Default, PartialEq, Eq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
+pub struct SheetHeader {
+    /// The job or project reference.
+    #[serde(default, skip_serializing_if = "String::is_empty")]
+    pub job: String,
+    /// Who prepared the calculation.
+    #[serde(default, skip_serializing_if = "String::is_empty")]
+    pub prepared_by: String,
+    /// Who checked it.
+    #[serde(default, skip_serializing_if = "String::is_empty")]
+    pub checked_by: String,
+    /// Its date, as the person writes it (e.g. 2026-12-04).
+    #[serde(default, skip_serializing_if = "String::is_empty")]
+    pub date: String,
+    /// Its revision (e.g. "A", "P2").
+    #[serde(default, skip_serializing_if = "String::is_empty")]
+    pub revision: String,
+}
+
+impl SheetHeader {
+    /// Whether nothing is filled in.
+    pub fn is_empty(&self) -> bool {
+        [
+            &self.job,
+            &self.prepared_by,
+            &self.checked_by,
+            &self.date,
+            &self.revision,
+        ]
+        .iter()
+        .all(|s| s.trim().is_empty())
+    }
 }
 
 impl MemberFile {
@@ -46,6 +90,7 @@ impl MemberFile {
             format: FORMAT.to_string(),
             version: VERSION,
             title: title.into(),
+            sheet: SheetHeader::default(),
             members: Vec::new(),
         }
     }
@@ -199,6 +244,14 @@ fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
             })
         }
     };
+    let sheet = match obj.get("sheet") {
+        None | Some(Value::Null) => SheetHeader::default(),
+        Some(v) => serde_json::from_value(v.clone()).map_err(|e| Error::Syntax {
+            line: 0,
+            column: 0,
+            message: format!("sheet: {e}"),
+        })?,
+    };
     let raw_members = match obj.get("members") {
         Some(Value::Array(a)) => a,
         _ => {
@@ -216,6 +269,7 @@ fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
         format: FORMAT.to_string(),
         version: VERSION,
         title,
+        sheet,
         members,
     })
 }
@@ -309,6 +363,43 @@ mod tests {
         assert_eq!(f.members[0].k_minor, 1.0);
         let again = parse(&f.to_json()).unwrap();
         assert_eq!(f, again);
+    }
+
+    #[test]
+    fn the_sheet_header_is_optional_kept_and_checked() {
+        // Files without it (every earlier one) read with an empty header
+        // and are written without the key.
+        let f = parse(ONE).unwrap();
+        assert!(f.sheet.is_empty());
+        assert!(!f.to_json().contains("\"sheet\""));
+        let with = ONE.replace(
+            "\"title\": \"t\",",
+            "\"title\": \"t\", \"sheet\": {\"job\": \"J-204\", \"prepared_by\": \"R. Amsel\", \
+             \"checked_by\": \"T. Okafor\", \"date\": \"2026-12-04\", \"revision\": \"B\"},",
+        );
+        let f = parse(&with).unwrap();
+        assert_eq!(
+            f.sheet,
+            SheetHeader {
+                job: "J-204".into(),
+                prepared_by: "R. Amsel".into(),
+                checked_by: "T. Okafor".into(),
+                date: "2026-12-04".into(),
+                revision: "B".into(),
+            }
+        );
+        assert_eq!(parse(&f.to_json()).unwrap(), f, "written and read back");
+        let partial = ONE.replace(
+            "\"title\": \"t\",",
+            "\"title\": \"t\", \"sheet\": {\"revision\": \"C\"},",
+        );
+        assert_eq!(parse(&partial).unwrap().sheet.revision, "C");
+        let misspelt = ONE.replace(
+            "\"title\": \"t\",",
+            "\"title\": \"t\", \"sheet\": {\"checkd_by\": \"X\"},",
+        );
+        let e = parse(&misspelt).unwrap_err().to_string();
+        assert!(e.contains("sheet") && e.contains("checkd_by"), "{e}");
     }
 
     #[test]

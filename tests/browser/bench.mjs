@@ -85,7 +85,14 @@ function watchRows(want) {
     if (!window.__strutlineFirstRow && rows.length > 0 && rows[0].getBoundingClientRect().height > 0) {
       mark("__strutlineFirstRow");
     }
-    if (!window.__strutlineAllRows && rows.length >= want) {
+    // The list builds only the rows in view: it is ready when its rows
+    // fill its scrolling box (or all `want` are there).
+    const box = document.querySelector("[data-testid=member-scroll]");
+    const last = rows[rows.length - 1];
+    const filled =
+      box && last && last.getBoundingClientRect().height > 0 &&
+      last.getBoundingClientRect().bottom >= box.getBoundingClientRect().bottom;
+    if (!window.__strutlineAllRows && (rows.length >= want || filled)) {
       mark("__strutlineAllRows");
     }
     if (window.__strutlineFirstRow && window.__strutlineAllRows) observer.disconnect();
@@ -537,7 +544,7 @@ const lines = [
   `| edit: recheck and redraw to next frame (median of ${ed.edits ?? 0}) | ${fmt(ed.frame_median_ms, 2)} ms (p90 ${fmt(ed.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.frame_median_ms, TARGETS.edit_ms)} |`,
   `| edit: recheck until the result text changes (median) | ${fmt(ed.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.dom_median_ms, TARGETS.edit_ms)} |`,
   `| 1,000-member list: re-check of every member (engine, in the page; median of ${th.runs?.length ?? 0}) | ${fmt(th.recheck_median_ms, 2)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.recheck_median_ms, TARGETS.thousand_ms)} |`,
-  `| 1,000-member list: module ready to first frame, rows built (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
+  `| 1,000-member list: module ready to first frame, rows in view built (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
   `| lightest that works: 1,000 members against the 265 I/H sections (median of ${sz.runs?.length ?? 0}) | ${fmt(sz.median_ms)} ms | ≤ ${TARGETS.sizing_ms} ms | ${verdict(sz.median_ms, TARGETS.sizing_ms)} |`,
   `| 1,000-member list: inside start() (module ready to mounted, median) | ${fmt(th.ready_to_mounted_median_ms)} ms | (part of the above) | |`,
   `| dist/ as a standard host sends it (gzip, zlib -9) | ${Number.isFinite(DIST_ZLIB) ? `${DIST_ZLIB} B (${fmt(DIST_ZLIB / 1024)} KB)` : "n/a"} | ≤ ${DIST_BUDGET} B (${fmt(DIST_BUDGET / 1024, 0)} KB) | ${verdict(DIST_ZLIB, DIST_BUDGET)} |`,
@@ -553,7 +560,8 @@ const lines = [
   "  60 Hz, so the frame figure includes up to one frame of waiting for the clock.",
   "- 1,000 members: a stored workspace of 1,000 invented members of five shapes and all steel and timber",
   "  methods; from the mark `strutline-wasm-ready` (the module is compiled, `start()` is about to run)",
-  "  to the first animation frame after all 1,000 rows are in the page (a MutationObserver notes the moment;",
+  "  to the first animation frame after the rows in view are in the page, the list's scrolling box filled (the list",
+  "  builds only the rows in view and a few beyond, listops::window; a MutationObserver notes the moment;",
   "  the time is read with performance.now() inside the next requestAnimationFrame callback). The second",
   "  row is the part spent inside the app's synchronous `start()` (load, parse, check and build the view).",
   "  The re-check row is the app's own `performance.now()` around its list re-check when all 1,000 members",

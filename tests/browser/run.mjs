@@ -8,6 +8,7 @@
 import assert from "node:assert/strict";
 import { register as registerPicker } from "./picker.mjs";
 import { register as registerListTools } from "./listtools.mjs";
+import { register as registerTablet } from "./tablet.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -266,6 +267,25 @@ test("typed-member-matches-cli", async () => {
       expected.utilisation.toFixed(3),
       `page shows ${text}, the command line ${expected.utilisation}`,
     );
+    assertNoErrors(log.errors);
+  });
+});
+
+// The windowed list redraws a row when its member changes without the
+// list's length or scroll changing (a rename, a new load).
+test("edited-row-redrawn", async () => {
+  await withApp("edited-row-redrawn", async (page, log) => {
+    await open(page);
+    await page.locator("[data-testid=add-member]").first().click();
+    const last = page.locator("[data-testid=member-row]").last();
+    const before = await last.getAttribute("data-id");
+    await setField(page, page, "id", "BH-7");
+    const row = page.locator('[data-testid=member-row][data-id="BH-7"]');
+    await row.waitFor({ state: "visible", timeout: 10_000 });
+    assert.equal((await row.locator(".row-id").textContent()).trim(), "BH-7", "the row's id text");
+    assert.equal(await page.locator(`[data-testid=member-row][data-id="${before}"]`).count(), 0, `a row still shows the old id ${before}`);
+    await setField(page, page, "axial_kn", "4321");
+    await waitForText(row.locator(".row-detail"), (t) => t.includes("N 4321 kN"));
     assertNoErrors(log.errors);
   });
 });
@@ -666,6 +686,9 @@ registerPicker(test, { withApp, open, OUT });
 
 // Order, filters, picks and the change of several members (tests/browser/listtools.mjs).
 registerListTools(test, { withApp, open, OUT });
+
+// The tablet workspace: result and chart in view while editing (tests/browser/tablet.mjs).
+registerTablet(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

@@ -119,6 +119,85 @@ pub fn body_class(class: &str, on: bool) {
     }
 }
 
+/// Sets a length custom property (`name`, in px) on the root element,
+/// through its style object.
+pub fn set_root_px(name: &str, px: f64) {
+    let root = web_sys::window()
+        .and_then(|w| w.document())
+        .and_then(|d| d.document_element())
+        .and_then(|e| wasm_bindgen::JsCast::dyn_into::<web_sys::HtmlElement>(e).ok());
+    if let Some(r) = root {
+        let _ = r
+            .style()
+            .set_property(name, &format!("{}px", px.max(0.0).round()));
+    }
+}
+
+/// Scrolls the focused text field or select, if any, just into view (the
+/// page's scroll padding keeps it clear of the docked result).
+pub fn reveal_focused_field() {
+    let el = web_sys::window()
+        .and_then(|w| w.document())
+        .and_then(|d| d.active_element());
+    if let Some(el) = el {
+        if matches!(el.tag_name().as_str(), "INPUT" | "SELECT" | "TEXTAREA") {
+            let o = web_sys::ScrollIntoViewOptions::new();
+            o.set_block(web_sys::ScrollLogicalPosition::Nearest);
+            el.scroll_into_view_with_scroll_into_view_options(&o);
+        }
+    }
+}
+
+/// Puts `rule` (an `@page` rule) at the end of the app's style sheet in
+/// place of the one put there before, or takes that one away (`None`).
+/// Through the style sheet's object model: the page's policy refuses
+/// inline style, not this.
+pub fn set_page_rule(rule: Option<&str>) {
+    let Some(doc) = web_sys::window().and_then(|w| w.document()) else {
+        return;
+    };
+    let sheets = doc.style_sheets();
+    for i in 0..sheets.length() {
+        let Some(sheet) = sheets
+            .item(i)
+            .and_then(|s| wasm_bindgen::JsCast::dyn_into::<web_sys::CssStyleSheet>(s).ok())
+        else {
+            continue;
+        };
+        if !sheet
+            .href()
+            .ok()
+            .flatten()
+            .is_some_and(|h| h.ends_with("style.css"))
+        {
+            continue;
+        }
+        let Ok(rules) = sheet.css_rules() else { return };
+        let n = rules.length();
+        // The app's rule is marked by being last and an @page rule with
+        // margin boxes; style.css's own @page rule has none.
+        if let Some(last) = n.checked_sub(1).and_then(|j| rules.item(j)) {
+            if last.css_text().contains("@top-left") {
+                let _ = sheet.delete_rule(n - 1);
+            }
+        }
+        if let Some(r) = rule {
+            let n = sheet.css_rules().map(|r| r.length()).unwrap_or(0);
+            let _ = sheet.insert_rule_with_index(r, n);
+        }
+        return;
+    }
+}
+
+/// The window's height in CSS pixels (800 when unknown).
+pub fn inner_height() -> f64 {
+    web_sys::window()
+        .and_then(|w| w.inner_height().ok())
+        .and_then(|v| v.as_f64())
+        .filter(|h| h.is_finite() && *h > 0.0)
+        .unwrap_or(800.0)
+}
+
 /// The device pixel ratio (1 when unknown).
 pub fn device_pixel_ratio() -> f64 {
     web_sys::window()

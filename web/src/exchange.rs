@@ -22,7 +22,7 @@ use strutline_core::Member;
 use wasm_bindgen::closure::Closure;
 use wasm_bindgen::JsCast;
 
-use crate::app::{act, banner};
+use crate::banner::{act, banner};
 use crate::browser;
 use crate::listops;
 use crate::workspace::Workspace;

@@ -225,6 +225,27 @@ pub fn section_fields(kind: &str) -> &'static [Field] {
     }
 }
 
+/// The editor's field of a member-file key, wherever it sits.
+pub fn any_field(key: &str) -> Option<Field> {
+    let fixed = [NOTE, K_MAJOR, K_MINOR, LCR_MAJOR, LCR_MINOR];
+    KINDS
+        .iter()
+        .flat_map(|(k, _)| section_fields(k).iter().copied())
+        .chain(MEMBER_FIELDS)
+        .chain(fixed)
+        .chain(
+            [
+                MaterialMode::Grade,
+                MaterialMode::Steel,
+                MaterialMode::Timber,
+            ]
+            .into_iter()
+            .flat_map(|m| material_fields(m).iter().copied()),
+        )
+        .chain(Method::ALL.iter().flat_map(|m| option_fields(*m)))
+        .find(|f| f.key == key)
+}
+
 /// The member's own numeric fields.
 pub const MEMBER_FIELDS: [Field; 2] = [
     f("length_mm", "system length L", "mm", Mem, Positive),

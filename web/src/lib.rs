@@ -7,6 +7,7 @@
 //! the browser glue (storage, service worker, downloads, canvas) are thin.
 
 pub mod app;
+pub mod banner;
 pub mod browser;
 pub mod chart;
 pub mod checks;
@@ -14,6 +15,7 @@ pub mod demo;
 pub mod diagram;
 pub mod exchange;
 pub mod fields;
+pub mod html;
 pub mod listops;
 pub mod numtext;
 pub mod picker;
@@ -22,6 +24,7 @@ pub mod report;
 pub mod restraint;
 pub mod sectionview;
 pub mod status;
+pub mod toolbar;
 pub mod units_view;
 pub mod workspace;
 

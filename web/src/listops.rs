@@ -1,7 +1,8 @@
 //! Operations on a member list and on the lists of a workspace: add,
 //! duplicate, rename, delete with undo, reorder; and the list tools: the
 //! order and filters of what is shown, the members picked, and one change
-//! applied to all of them. Pure, so they are tested on the host.
+//! applied to all of them. Pure, so they are tested on the host; their
+//! controls' markup is [`crate::toolbar`]'s.
 
 use std::cmp::Ordering;
 use std::sync::Arc;
@@ -13,7 +14,6 @@ use strutline_core::Member;
 
 use crate::checks::Checked;
 use crate::numtext::{for_input, parse_optional};
-use crate::report::esc;
 use crate::status::Standing;
 
 /// An id not used in `members`: `base` itself when free, else `base` with
@@ -365,19 +365,6 @@ impl ListTools {
         t
     }
 
-    /// The tally and, after a refused change, why, as HTML.
-    pub fn status_html(&self, checks: &[Arc<Checked>]) -> String {
-        let mut h = String::from("<span data-testid=\"list-tally\">");
-        h.push_str(&self.tally(checks));
-        h.push_str("</span>");
-        if let Some(m) = &self.message {
-            h.push_str("<span class=\"field-error\" data-testid=\"field-error\" role=\"alert\">✎ ");
-            h.push_str(&esc(m));
-            h.push_str("</span>");
-        }
-        h
-    }
-
     /// Applies the change form to the picked members of `members`. Nothing
     /// changes when a value is wrong or nothing is picked; otherwise the
     /// members as they were and the sentence for the undo bar.
@@ -457,6 +444,31 @@ impl ListTools {
     }
 }
 
+/// Height of a member row and the gap after it, in CSS pixels: the rows
+/// have a fixed height in `style.css` (`.member-row`, 104 px, and the
+/// list's gap, 6 px), so the list can build only the rows in view.
+pub const ROW_PITCH_PX: f64 = 110.0;
+
+/// Rows built beyond each edge of the part in view, so a fling or a Tab
+/// finds rows already there.
+pub const OVERSCAN: usize = 8;
+
+/// The rows to build, `first..end` of `n` shown, for a list scrolled by
+/// `scroll_top` px with `view_px` of it in view: what is in view and
+/// [`OVERSCAN`] rows beyond each edge. The rest are stood in for by
+/// padding of `first` and `n - end` pitches.
+pub fn window(scroll_top: f64, view_px: f64, n: usize) -> (usize, usize) {
+    let top = (scroll_top.max(0.0) / ROW_PITCH_PX).floor();
+    let seen = (view_px.max(ROW_PITCH_PX) / ROW_PITCH_PX).ceil() + 1.0;
+    // Saturating float-to-int casts: NaN and huge values stay in range.
+    let first = (top as usize).saturating_sub(OVERSCAN).min(n);
+    let end = (top as usize)
+        .saturating_add(seen as usize)
+        .saturating_add(OVERSCAN)
+        .min(n);
+    (first, end.max(first))
+}
+
 /// The names of the change form's controls, in the order of
 /// [`ListTools::change`].
 pub const CHANGE_KEYS: [&str; 4] = [
@@ -493,92 +505,6 @@ pub fn natural(a: &str, b: &str) -> Ordering {
             return o;
         }
     }
-}
-
-/// Adds a labelled select of `opts` (value, text) to `out`.
-fn select_html(out: &mut String, name: &str, label: &str, opts: &[(&str, &str)]) {
-    for part in [
-        "<label class=\"field\">",
-        label,
-        "<select name=\"",
-        name,
-        "\">",
-    ] {
-        out.push_str(part);
-    }
-    for (v, l) in opts {
-        for part in ["<option value=\"", v, "\">", l, "</option>"] {
-            out.push_str(part);
-        }
-    }
-    out.push_str("</select></label>");
-}
-
-/// The bar above the list (order, filters, picking) and the change form
-/// for the picked members, as HTML; their controls are told apart by name
-/// and their buttons by `data-act`. Every text in them is the app's own.
-pub fn tools_html() -> (String, String) {
-    let leave = ("", "(leave as is)");
-    let mut methods = vec![("", "all")];
-    methods.extend(Method::ALL.iter().map(|m| (m.key(), m.title())));
-    let mut bar = String::from("<div class=\"field-grid\">");
-    select_html(
-        &mut bar,
-        "list_order",
-        "order",
-        &[
-            ("", "as entered"),
-            ("util-down", "utilisation, high to low"),
-            ("util-up", "utilisation, low to high"),
-            ("id", "id"),
-        ],
-    );
-    select_html(
-        &mut bar,
-        "list_status",
-        "status",
-        &[
-            ("", "all"),
-            ("holds", "✓ holds"),
-            ("exceeds", "✗ exceeds"),
-            ("input", "✎ needs input"),
-        ],
-    );
-    select_html(&mut bar, "list_method", "method", &methods);
-    bar.push_str(
-        "<label class=\"field\">find<input type=\"search\" name=\"list_text\" autocomplete=\"off\" \
-         spellcheck=\"false\" placeholder=\"id, note or section\"></label></div><div class=\"button-row\">\
-         <button type=\"button\" data-act=\"pick-shown\" data-v=\"\">Pick all shown</button>\
-         <button type=\"button\" data-act=\"clear-picks\" data-v=\"\">Clear picks</button></div>",
-    );
-    let mut form =
-        String::from(
-        "<details class=\"list-change\" data-testid=\"list-change\"><summary>Change the picked members</summary>\
-         <div class=\"field-grid\">",
-    );
-    let mut grades = vec![leave];
-    grades.extend(KNOWN_GRADES.iter().map(|g| (*g, *g)));
-    select_html(&mut form, "change_grade", "grade", &grades);
-    if let Some(first) = methods.first_mut() {
-        *first = leave;
-    }
-    select_html(&mut form, "change_method", "method", &methods);
-    for (name, axis) in [("change_k_major", "major"), ("change_k_minor", "minor")] {
-        for part in [
-            "<label class=\"field\">factor K, ",
-            axis,
-            " axis<input type=\"text\" name=\"",
-            name,
-            "\" inputmode=\"decimal\" autocomplete=\"off\" placeholder=\"(leave as is)\"></label>",
-        ] {
-            form.push_str(part);
-        }
-    }
-    form.push_str(
-        "</div><p class=\"hint\">A factor K replaces a buckling length typed for that axis.</p>\
-         <button type=\"button\" data-testid=\"apply-change\" data-act=\"apply\" data-v=\"\">Apply to the picked members</button></details>",
-    );
-    (bar, form)
 }
 
 #[cfg(test)]
@@ -771,12 +697,6 @@ mod tests {
         assert_eq!(t.picks, ["C2", "C10"], "no id twice");
         t.toggle("b3");
         assert_eq!(t.tally(&cs), "Showing 2 of 4 · 3 picked (1 not shown)");
-        t.message = Some("k_major: <b>".into());
-        assert_eq!(
-            t.status_html(&cs),
-            "<span data-testid=\"list-tally\">Showing 2 of 4 · 3 picked (1 not shown)</span><span \
-             class=\"field-error\" data-testid=\"field-error\" role=\"alert\">✎ k_major: &lt;b&gt;</span>"
-        );
         t.picks.clear();
         assert_eq!(t.tally(&cs), "Showing 2 of 4");
     }
@@ -863,33 +783,18 @@ mod tests {
     }
 
     #[test]
-    fn the_bar_offers_every_choice() {
-        let (bar, form) = tools_html();
-        for m in Method::ALL {
-            assert!(bar.contains(&format!("value=\"{}\"", m.key())), "{m:?}");
-            assert!(form.contains(&format!("value=\"{}\"", m.key())), "{m:?}");
-        }
-        for g in KNOWN_GRADES {
-            assert!(
-                form.contains(&format!("<option value=\"{g}\">{g}</option>")),
-                "{g}"
-            );
-        }
-        for name in ["list_order", "list_status", "list_method", "list_text"] {
-            assert!(bar.contains(&format!("name=\"{name}\"")), "{name}");
-        }
-        for name in CHANGE_KEYS {
-            assert!(form.contains(&format!("name=\"{name}\"")), "{name}");
-        }
-        let mut t = ListTools::default();
-        for (name, v) in [
-            ("change_grade", "A36"),
-            ("change_method", "euler"),
-            ("change_k_major", "2"),
-            ("change_k_minor", "3"),
-        ] {
-            t.set(name, v);
-        }
-        assert_eq!(t.change, ["A36", "euler", "2", "3"]);
+    fn the_window_holds_what_is_in_view_and_no_more() {
+        // 800 px of a 1,000-row list at the top: 8 rows in view (+1
+        // partly), 8 more below; the rest stood in for.
+        assert_eq!(window(0.0, 800.0, 1000), (0, 17));
+        // Scrolled to row 500: 8 rows above it and below the view.
+        let (a, b) = window(500.0 * ROW_PITCH_PX, 800.0, 1000);
+        assert_eq!((a, b), (492, 517));
+        assert!(b - a < 30, "the window does not grow with the list");
+        // The end of the list, short lists, nonsense input.
+        assert_eq!(window(1e9, 800.0, 1000), (1000, 1000));
+        assert_eq!(window(0.0, 800.0, 3), (0, 3));
+        assert_eq!(window(f64::NAN, f64::NAN, 5), (0, 5));
+        assert_eq!(window(-50.0, 0.0, 0), (0, 0));
     }
 }

@@ -9,6 +9,8 @@ use strutline_core::section::Family;
 use strutline_core::sizing;
 use strutline_core::{check_member, Member};
 
+use crate::html;
+use crate::html::Html;
 use crate::numtext::fixed;
 
 /// Most candidates listed at once.
@@ -229,99 +231,117 @@ pub fn apply(members: &mut [Member], picks: &[(String, String)]) -> Option<Vec<M
     changed.then_some(before)
 }
 
-pub use crate::report::esc;
-
 /// The candidate table: one row per entry with its mass, the member's
 /// utilisation with it (engine, on a copy) and a button whose `data-act`
 /// is "pick" and `data-v` the designation. Built as text so that the
 /// app carries one small view, not one per row.
-pub fn rows_html(member: &Member, found: &[&Entry]) -> String {
-    let mut h = String::from(
+pub fn rows_html(member: &Member, found: &[&Entry]) -> Html {
+    let mut h = Html::from_lit(
         "<table class=\"picker\"><thead><tr><th scope=\"col\">section</th><th scope=\"col\">kg/m</th>\
          <th scope=\"col\">utilisation</th><th></th></tr></thead><tbody>",
     );
     for e in found {
-        let d = esc(e.designation);
+        let d = e.designation;
         let u = utilisation_with(member, e);
         let (class, shown) = match u {
             Some(u) if u <= 1.0 => ("passes", format!("{} ✓", fixed(u, 3))),
             Some(u) => ("", format!("{} ✗", fixed(u, 3))),
             None => ("", "—".into()),
         };
-        h.push_str(&format!(
-            "<tr data-testid=\"section-candidate\" data-designation=\"{d}\" class=\"{class}\"><th scope=\"row\">{d}</th>\
-             <td class=\"num\">{}</td><td class=\"num\">{shown}</td>\
-             <td><button type=\"button\" data-act=\"pick\" data-v=\"{d}\">Use</button></td></tr>",
-            fixed(e.mass_kg_per_m, 1)
-        ));
+        html!(
+            h,
+            "<tr data-testid=\"section-candidate\" data-designation=\"{}\" class=\"{}\"><th scope=\"row\">{}</th>\
+             <td class=\"num\">{}</td><td class=\"num\">{}</td>\
+             <td><button type=\"button\" data-act=\"pick\" data-v=\"{}\">Use</button></td></tr>",
+            d,
+            class,
+            d,
+            fixed(e.mass_kg_per_m, 1),
+            shown,
+            d
+        );
     }
-    h.push_str("</tbody></table>");
+    h.lit("</tbody></table>");
     h
 }
 
 /// The proposal table, with an "Accept" button per member that has a
 /// proposal (`data-act` "accept", `data-v` the id) and "Accept all"
 /// (`data-act` "all") when more than one has.
-pub fn proposals_html(ps: &[Proposal]) -> String {
+pub fn proposals_html(ps: &[Proposal]) -> Html {
+    let mut h = Html::new();
     if ps.is_empty() {
-        return String::new();
+        return h;
     }
-    let mut h = String::from(
+    h.lit(
         "<table class=\"proposals\"><thead><tr><th scope=\"col\">member</th>\
          <th scope=\"col\">lightest within the limit</th><th scope=\"col\">next lighter fails</th><th></th></tr></thead><tbody>",
     );
     for p in ps {
-        let id = esc(&p.id);
-        let button = if p.designation.is_some() {
-            format!("<button type=\"button\" data-testid=\"accept-proposal\" data-act=\"accept\" data-v=\"{id}\">Accept</button>")
-        } else {
-            String::new()
-        };
-        h.push_str(&format!(
-            "<tr data-testid=\"proposal\" data-id=\"{id}\"><th scope=\"row\">{id}</th>\
-             <td data-testid=\"proposal-chosen\">{}</td><td>{}</td><td>{button}</td></tr>",
-            esc(&p.chosen_text),
-            esc(&p.lighter_text)
-        ));
+        let id = &p.id;
+        html!(
+            h,
+            "<tr data-testid=\"proposal\" data-id=\"{}\"><th scope=\"row\">{}</th>\
+             <td data-testid=\"proposal-chosen\">{}</td><td>{}</td><td>",
+            id,
+            id,
+            p.chosen_text,
+            p.lighter_text
+        );
+        if p.designation.is_some() {
+            html!(
+                h,
+                "<button type=\"button\" data-testid=\"accept-proposal\" data-act=\"accept\" data-v=\"{}\">Accept</button>",
+                id
+            );
+        }
+        h.lit("</td></tr>");
     }
-    h.push_str("</tbody></table>");
+    h.lit("</tbody></table>");
     let n = ps.iter().filter(|p| p.designation.is_some()).count();
     if n > 1 {
-        h.push_str(&format!(
-            "<button type=\"button\" data-testid=\"accept-all\" data-act=\"all\" data-v=\"\">Accept all {n}</button>"
-        ));
+        html!(
+            h,
+            "<button type=\"button\" data-testid=\"accept-all\" data-act=\"all\" data-v=\"\">Accept all {}</button>",
+            n
+        );
     }
     h
 }
 
 /// The picker's inputs and buttons, as text (their events are answered
 /// by the panel's delegated handlers, by `name` and `data-act`).
-pub fn form_html() -> String {
-    let opts = |v: &mut String, items: &mut dyn Iterator<Item = (&str, &str)>| {
+pub fn form_html() -> Html {
+    let opts = |v: &mut Html, items: &mut dyn Iterator<Item = (&str, &str)>| {
         for (k, l) in items {
-            v.push_str(&format!("<option value=\"{}\">{}</option>", esc(k), esc(l)));
+            html!(v, "<option value=\"{}\">{}</option>", k, l);
         }
     };
-    let mut series = String::new();
+    let mut series = Html::new();
     opts(
         &mut series,
         &mut catalogue::series().iter().map(|s| (s.file, s.name)),
     );
-    let mut shapes = String::new();
+    let mut shapes = Html::new();
     opts(&mut shapes, &mut SHAPES.iter().copied());
-    format!(
+    let mut h = Html::new();
+    html!(
+        h,
         "<div class=\"field-grid\">\
          <div class=\"field\"><label for=\"f-section_search\">search</label><input type=\"search\" id=\"f-section_search\" \
          name=\"section_search\" autocomplete=\"off\" spellcheck=\"false\" placeholder=\"heb200, 203x203, shs 100\"></div>\
          <div class=\"field\"><label for=\"f-section_series\">series</label><select id=\"f-section_series\" name=\"section_series\">\
-         <option value=\"\">all</option>{series}</select></div>\
+         <option value=\"\">all</option>{}</select></div>\
          <div class=\"field\"><label for=\"f-section_shape\">shape</label><select id=\"f-section_shape\" name=\"section_shape\">\
-         <option value=\"\">all</option>{shapes}</select></div>\
+         <option value=\"\">all</option>{}</select></div>\
          <div class=\"field\"><label for=\"f-util_limit\">utilisation limit</label><input type=\"text\" id=\"f-util_limit\" \
          name=\"util_limit\" inputmode=\"decimal\" value=\"1.0\" autocomplete=\"off\"></div></div>\
          <div class=\"button-row\"><button type=\"button\" data-testid=\"lightest\" data-act=\"one\" data-v=\"\">Lightest that works</button>\
-         <button type=\"button\" data-testid=\"lightest-all\" data-act=\"every\" data-v=\"\">… for every member</button></div>"
-    )
+         <button type=\"button\" data-testid=\"lightest-all\" data-act=\"every\" data-v=\"\">… for every member</button></div>",
+        series,
+        shapes
+    );
+    h
 }
 
 /// A utilisation limit typed by the person: a positive finite number.
@@ -479,7 +499,7 @@ mod tests {
     fn tables_as_text() {
         let m = sample_member("<A&\"");
         let found = search("heb22", "", "");
-        let h = rows_html(&m, &found);
+        let h = rows_html(&m, &found).into_string();
         assert_eq!(
             h.matches("data-testid=\"section-candidate\"").count(),
             found.len()
@@ -488,7 +508,7 @@ mod tests {
         assert!(h.contains(&fixed(u, 3)));
         assert!(h.contains("data-act=\"pick\" data-v=\"HE 220 B\""));
         let ps = propose(&[m.clone(), sample_member("B")], "heb", "", 1.0);
-        let t = proposals_html(&ps);
+        let t = proposals_html(&ps).into_string();
         assert!(
             t.contains("data-id=\"&lt;A&amp;&quot;\""),
             "the id is escaped: {t}"
@@ -497,8 +517,8 @@ mod tests {
         assert!(t.contains("Accept all 2"));
         assert_eq!(picks(&ps, Some("B")).len(), 1);
         assert_eq!(picks(&ps, None).len(), 2);
-        assert_eq!(proposals_html(&[]), "");
-        let f = form_html();
+        assert!(proposals_html(&[]).is_empty());
+        let f = form_html().into_string();
         for name in [
             "section_search",
             "section_series",

@@ -1,62 +1,353 @@
-//! What the calc sheet needs besides the result: the member's inputs in
-//! the chosen units and today's date. The sheet itself is built as text by
+//! What the calc sheet needs besides the result: the member's inputs as an
+//! engineer writes them (symbol, value with its unit, meaning, in the
+//! order of the working), the running header and footer of every printed
+//! page, and today's date. The sheet itself is built as text by
 //! [`crate::report::sheet_html`], shown on screen as a preview and printed
 //! by the browser (`@media print` in `style.css` hides everything else and
 //! breaks the page between members).
 
 use serde_json::Value;
+use strutline_core::file::{json_value, SheetHeader};
+use strutline_core::method::Method;
 use strutline_core::units::{self, UnitSystem};
-use strutline_core::Member;
+use strutline_core::{Member, CAUTION};
 use web_sys::js_sys;
 
-use crate::numtext::for_input;
+use crate::fields;
 
-/// The member's inputs as (member-file key, value with unit), in the
-/// member file's order, shown in `system`'s units.
-pub fn inputs(system: UnitSystem, m: &Member) -> Vec<(String, String)> {
-    let mut out = Vec::new();
-    // Written once by the member file's pretty writer (`"key": value`)
-    // and read back as a value.
-    let text = serde_json::to_string_pretty(m).unwrap_or_default();
-    if let Ok(v) = serde_json::from_str::<Value>(&text) {
-        flatten(system, &v, &mut out);
+/// Every input key the sheet knows, in the order of the working: the
+/// method and its factors, the member's lengths and load, the section,
+/// the material. (key, symbol, meaning); the symbol is empty where the
+/// trade has none.
+pub const INPUTS: &[(&str, &str, &str)] = &[
+    ("method", "", "design method"),
+    ("gamma_m1", "γ_M1", "partial factor on member resistance"),
+    ("bow_mm", "e_0", "initial bow"),
+    ("eccentricity_mm", "e", "load eccentricity"),
+    ("curve_major", "", "buckling curve, major axis"),
+    ("curve_minor", "", "buckling curve, minor axis"),
+    ("csa_n", "n", "exponent of the column curve"),
+    ("service_class", "", "service class"),
+    ("load_duration", "", "load-duration class"),
+    ("length_mm", "L", "system length"),
+    ("k_major", "K_y", "effective-length factor, major axis"),
+    ("lcr_major_mm", "L_cr,y", "buckling length, major axis"),
+    ("k_minor", "K_z", "effective-length factor, minor axis"),
+    ("lcr_minor_mm", "L_cr,z", "buckling length, minor axis"),
+    ("k_torsion", "K_T", "effective-length factor, torsional"),
+    ("lcr_torsion_mm", "L_cr,T", "buckling length, torsional"),
+    ("angle_connection", "", "angle connected through"),
+    (
+        "k_lt",
+        "K_LT",
+        "effective-length factor, lateral-torsional buckling",
+    ),
+    (
+        "lcr_lt_mm",
+        "L_cr,LT",
+        "length between lateral-torsional restraints",
+    ),
+    (
+        "lt_restrained",
+        "",
+        "compression flange held against lateral-torsional buckling",
+    ),
+    ("axial_kn", "N_Ed", "design compression"),
+    (
+        "m_major_a_knm",
+        "M_y,Ed,A",
+        "design moment, major axis, at end A",
+    ),
+    (
+        "m_major_b_knm",
+        "M_y,Ed,B",
+        "design moment, major axis, at end B",
+    ),
+    (
+        "m_major_span_knm",
+        "M_y,Ed,span",
+        "major-axis moment at mid-length from transverse load",
+    ),
+    ("span_load_major", "", "shape of the major-axis span moment"),
+    (
+        "m_minor_a_knm",
+        "M_z,Ed,A",
+        "design moment, minor axis, at end A",
+    ),
+    (
+        "m_minor_b_knm",
+        "M_z,Ed,B",
+        "design moment, minor axis, at end B",
+    ),
+    (
+        "m_minor_span_knm",
+        "M_z,Ed,span",
+        "minor-axis moment at mid-length from transverse load",
+    ),
+    ("span_load_minor", "", "shape of the minor-axis span moment"),
+    (
+        "load_level",
+        "",
+        "level of the transverse load on the depth",
+    ),
+    ("kind", "", "section shape"),
+    ("designation", "", "catalogue designation"),
+    ("make", "", "made"),
+    ("depth_mm", "h", "depth"),
+    ("width_mm", "b", "width"),
+    ("diameter_mm", "D", "outside diameter"),
+    ("flange_mm", "t_f", "flange thickness"),
+    ("web_mm", "t_w", "web thickness"),
+    ("wall_mm", "t", "wall thickness"),
+    ("thickness_mm", "t", "leg thickness"),
+    ("root_radius_mm", "r", "root radius"),
+    ("toe_radius_mm", "r_2", "toe radius"),
+    ("outer_radius_mm", "r_o", "outer corner radius"),
+    ("inner_radius_mm", "r_i", "inner corner radius"),
+    ("area_mm2", "A", "cross-section area"),
+    ("i_major_mm4", "I_y", "second moment of area, major axis"),
+    ("i_minor_mm4", "I_z", "second moment of area, minor axis"),
+    ("torsion_mm4", "I_t", "torsion constant"),
+    ("warping_mm6", "I_w", "warping constant"),
+    (
+        "w_el_major_mm3",
+        "W_el,y",
+        "elastic section modulus, major axis",
+    ),
+    (
+        "w_el_minor_mm3",
+        "W_el,z",
+        "elastic section modulus, minor axis",
+    ),
+    (
+        "w_pl_major_mm3",
+        "W_pl,y",
+        "plastic section modulus, major axis",
+    ),
+    (
+        "w_pl_minor_mm3",
+        "W_pl,z",
+        "plastic section modulus, minor axis",
+    ),
+    ("grade", "", "grade or strength class"),
+    ("fy_mpa", "f_y", "yield strength"),
+    ("e_mpa", "E", "modulus of elasticity"),
+    ("g_mpa", "G", "shear modulus"),
+    (
+        "fc0k_mpa",
+        "f_c,0,k",
+        "compressive strength parallel to grain",
+    ),
+    (
+        "e005_mpa",
+        "E_0,05",
+        "modulus of elasticity parallel to grain, 5 % fractile",
+    ),
+    (
+        "e0mean_mpa",
+        "E_0,mean",
+        "mean modulus of elasticity parallel to grain",
+    ),
+    ("timber", "", "timber product"),
+];
+
+/// One input line of the sheet: `f_c,0,k = 21 MPa  compressive strength
+/// parallel to grain`.
+#[derive(Debug, Clone, PartialEq)]
+pub struct InputLine {
+    /// The standard's symbol ("" where there is none).
+    pub symbol: &'static str,
+    /// The value with its unit, in the sheet's units.
+    pub value: String,
+    /// What it is, in words.
+    pub meaning: String,
+}
+
+/// The member's inputs as sheet lines in the order of [`INPUTS`], values
+/// in `system`'s units. The id and note head the page instead. A key the
+/// table does not know yet (added to the member file later) still prints,
+/// by the editor's label for it, never by its key.
+pub fn inputs(system: UnitSystem, m: &Member) -> Vec<InputLine> {
+    let mut found: Vec<(String, Value)> = Vec::new();
+    if let Some(v) = json_value(m) {
+        flatten(&v, &mut found);
     }
-    // A JSON object's keys come back sorted; put them back in the member
-    // file's own order (the order the text has them in).
-    out.sort_by_key(|(k, _)| text.find(&format!("\"{k}\":")).unwrap_or(usize::MAX));
+    let mut out = Vec::new();
+    for (key, symbol, meaning) in INPUTS {
+        if let Some((_, v)) = found.iter().find(|(k, _)| k == key) {
+            out.push(line(system, key, symbol, meaning.to_string(), v));
+        }
+    }
+    for (key, v) in &found {
+        if !INPUTS.iter().any(|(k, ..)| k == key) && !matches!(key.as_str(), "id" | "note") {
+            out.push(line(system, key, "", unknown_meaning(key), v));
+        }
+    }
     out
 }
 
-fn flatten(system: UnitSystem, v: &Value, out: &mut Vec<(String, String)>) {
+/// The keys and values of a member's JSON form, nested objects opened.
+fn flatten(v: &Value, out: &mut Vec<(String, Value)>) {
     let Some(obj) = v.as_object() else {
         return;
     };
     for (k, v) in obj {
-        let text = match v {
-            Value::Object(_) => {
-                flatten(system, v, out);
-                continue;
-            }
-            Value::Null => continue,
-            Value::Number(n) => {
-                let x = n.as_f64().unwrap_or(f64::NAN);
-                let (d, u) = if system == UnitSystem::Si {
-                    (x, "")
-                } else {
-                    units::key_to_display(system, k, x)
-                };
-                let t = if u.is_empty() {
-                    for_input(d)
-                } else {
-                    format!("{} {u}", units::format_display(d, 5))
-                };
-                t.trim().to_string()
-            }
-            Value::String(s) => s.clone(),
-            other => other.to_string(),
-        };
-        out.push((k.clone(), text));
+        match v {
+            Value::Object(_) => flatten(v, out),
+            Value::Null => {}
+            _ => out.push((k.clone(), v.clone())),
+        }
     }
+}
+
+/// A message of the engine with every member-file key it names given as
+/// the sheet gives that input: its symbol, or its meaning where it has
+/// none ("gamma_m1 is not used" becomes "γ_M1 is not used").
+pub fn speak(message: &str) -> String {
+    let mut out = String::with_capacity(message.len());
+    let mut word = String::new();
+    let flush = |word: &mut String, out: &mut String| {
+        // Keys of one word ("method", "timber") are words too: left alone.
+        match INPUTS
+            .iter()
+            .find(|(k, ..)| k.contains('_') && *k == word.as_str())
+        {
+            Some((_, sym, meaning)) => out.push_str(if sym.is_empty() { meaning } else { sym }),
+            None => out.push_str(word),
+        }
+        word.clear();
+    };
+    for c in message.chars() {
+        if c.is_ascii_alphanumeric() || c == '_' {
+            word.push(c);
+        } else {
+            flush(&mut word, &mut out);
+            out.push(c);
+        }
+    }
+    flush(&mut word, &mut out);
+    out
+}
+
+/// The words for a key the table does not know: the editor's label, else
+/// the key's words without its unit.
+fn unknown_meaning(key: &str) -> String {
+    if let Some(f) = fields::any_field(key) {
+        return f.label.to_string();
+    }
+    let words: Vec<&str> = key
+        .split('_')
+        .filter(|w| {
+            !matches!(
+                *w,
+                "mm" | "mm2" | "mm3" | "mm4" | "mm6" | "kn" | "knm" | "mpa"
+            )
+        })
+        .collect();
+    words.join(" ")
+}
+
+fn line(
+    system: UnitSystem,
+    key: &str,
+    symbol: &'static str,
+    meaning: String,
+    v: &Value,
+) -> InputLine {
+    let value = match v {
+        Value::Number(n) => {
+            let x = n.as_f64().unwrap_or(f64::NAN);
+            let (d, u) = match system {
+                UnitSystem::Si => (x, si_unit(key)),
+                UnitSystem::Us => units::key_to_display(system, key, x),
+            };
+            let shown = units::format_display(d, 5);
+            if u.is_empty() {
+                shown
+            } else {
+                format!("{shown} {u}")
+            }
+        }
+        Value::String(s) if key == "method" => {
+            Method::from_key(s).map_or_else(|| s.clone(), |m| m.title().to_string())
+        }
+        Value::String(s) if key == "kind" => fields::KINDS
+            .iter()
+            .find(|(k, _)| k == s)
+            .map_or_else(|| s.clone(), |(_, words)| (*words).to_string()),
+        Value::String(s) => s.clone(),
+        other => other.to_string(),
+    };
+    InputLine {
+        symbol,
+        value,
+        meaning,
+    }
+}
+
+/// The stored (SI) unit of a member-file key, from its suffix.
+fn si_unit(key: &str) -> &'static str {
+    let suffix = key.rsplit('_').next().unwrap_or("");
+    match suffix {
+        "mm" => "mm",
+        "mm2" => "mm²",
+        "mm3" => "mm³",
+        "mm4" => "mm⁴",
+        "mm6" => "mm⁶",
+        "kn" => "kN",
+        "knm" => "kN·m",
+        "mpa" => "MPa",
+        _ => "",
+    }
+}
+
+/// Text as a CSS string literal (quoted; `"`, `\` and line breaks escaped).
+fn css_string(s: &str) -> String {
+    let mut out = String::from("\"");
+    for c in s.chars() {
+        match c {
+            '"' => out.push_str("\\\""),
+            '\\' => out.push_str("\\\\"),
+            '\n' | '\r' => out.push_str("\\A "),
+            c if c.is_control() => {}
+            c => out.push(c),
+        }
+    }
+    out.push('"');
+    out
+}
+
+/// The `@page` rule that gives every printed page of the sheet its header
+/// (title and job reference at the left; prepared, checked, date and
+/// revision at the right), the caution at the foot and "page 3 of 12".
+/// Put in the page's style sheet through its object model while the sheet
+/// is open (the page's policy allows no inline style).
+pub fn page_rule(title: &str, h: &SheetHeader) -> String {
+    let or_dash = |s: &str| {
+        if s.trim().is_empty() {
+            "—".to_string()
+        } else {
+            s.trim().to_string()
+        }
+    };
+    let left = format!("{}\njob {}", or_dash(title), or_dash(&h.job));
+    let right = format!(
+        "prepared {} · checked {}\ndate {} · revision {}",
+        or_dash(&h.prepared_by),
+        or_dash(&h.checked_by),
+        or_dash(&h.date),
+        or_dash(&h.revision)
+    );
+    format!(
+        "@page {{ \
+         @top-left {{ content: {}; white-space: pre; font: 8pt sans-serif; vertical-align: bottom; }} \
+         @top-right {{ content: {}; white-space: pre; text-align: right; font: 8pt sans-serif; vertical-align: bottom; }} \
+         @bottom-left {{ content: {}; font: 7pt sans-serif; vertical-align: top; }} \
+         @bottom-right {{ content: \"page \" counter(page) \" of \" counter(pages); width: 30mm; white-space: nowrap; font: 8pt sans-serif; vertical-align: top; }} }}",
+        css_string(&left),
+        css_string(&right),
+        css_string(&format!("⚠ {CAUTION}")),
+    )
 }
 
 /// Today's date, ISO 8601.
@@ -75,23 +366,107 @@ mod tests {
     )]
     use super::*;
     use crate::demo::demo_lists;
+    use strutline_core::material::MaterialSpec;
 
-    fn get<'a>(v: &'a [(String, String)], k: &str) -> &'a str {
-        &v.iter().find(|(key, _)| key == k).unwrap().1
+    fn get<'a>(v: &'a [InputLine], symbol: &str) -> &'a str {
+        &v.iter().find(|l| l.symbol == symbol).unwrap().value
     }
 
     #[test]
-    fn inputs_in_both_systems() {
+    fn inputs_by_symbol_and_meaning_in_both_systems() {
         let m = demo_lists()[0].members[0].clone();
         let si = inputs(UnitSystem::Si, &m);
-        assert_eq!(get(&si, "id"), m.id);
-        assert_eq!(get(&si, "length_mm"), for_input(m.length_mm));
-        assert_eq!(get(&si, "depth_mm"), for_input(140.0));
-        assert!(!si.iter().any(|(k, _)| k == "section" || k == "material"));
+        assert_eq!(
+            get(&si, "L"),
+            format!("{} mm", units::format_display(m.length_mm, 5))
+        );
+        assert_eq!(get(&si, "h"), "140 mm");
         let us = inputs(UnitSystem::Us, &m);
         // 2800 mm / 304.8 mm per ft (exact) = 9.1864 ft; 140 mm / 25.4 = 5.5118 in.
-        assert_eq!(get(&us, "length_mm"), "9.1864 ft");
-        assert_eq!(get(&us, "depth_mm"), "5.5118 in");
-        assert_eq!(get(&us, "id"), m.id);
+        assert_eq!(get(&us, "L"), "9.1864 ft");
+        assert_eq!(get(&us, "h"), "5.5118 in");
+        // Never a file key, in either system.
+        for l in si.iter().chain(&us) {
+            assert!(
+                !l.meaning.contains('_') && !l.value.contains("_mm"),
+                "{l:?}"
+            );
+        }
+    }
+
+    #[test]
+    fn timber_reads_as_an_engineer_writes_it() {
+        let mut m = demo_lists()[0].members[0].clone();
+        m.material = MaterialSpec::Timber {
+            fc0k_mpa: 21.0,
+            e005_mpa: 7400.0,
+            e0mean_mpa: 11000.0,
+            timber: strutline_core::material::TimberKind::Solid,
+        };
+        let si = inputs(UnitSystem::Si, &m);
+        let f = si.iter().find(|l| l.symbol == "f_c,0,k").unwrap();
+        assert_eq!(f.value, "21 MPa");
+        assert_eq!(f.meaning, "compressive strength parallel to grain");
+        // In the order of the working: load before section before material.
+        let at = |s: &str| si.iter().position(|l| l.symbol == s).unwrap();
+        assert!(at("L") < at("N_Ed") && at("N_Ed") < at("h") && at("h") < at("f_c,0,k"));
+    }
+
+    #[test]
+    fn every_key_of_every_editor_field_has_a_symbol_or_words() {
+        // A key added to the editor (or the member file) without a line
+        // here fails, naming it.
+        for (k, _) in fields::KINDS {
+            for f in fields::section_fields(k) {
+                assert!(
+                    INPUTS.iter().any(|(key, ..)| *key == f.key),
+                    "{} has no sheet line",
+                    f.key
+                );
+            }
+        }
+        for list in demo_lists() {
+            for m in &list.members {
+                let mut found = Vec::new();
+                flatten(&json_value(m).unwrap(), &mut found);
+                for (k, _) in found {
+                    assert!(
+                        matches!(k.as_str(), "id" | "note")
+                            || INPUTS.iter().any(|(key, ..)| *key == k),
+                        "{k} has no sheet line"
+                    );
+                }
+            }
+        }
+        assert_eq!(unknown_meaning("moment_top_knm"), "moment top");
+    }
+
+    #[test]
+    fn engine_messages_speak_in_symbols() {
+        assert_eq!(
+            speak("gamma_m1 is not used by AISC 360; phi_c applies"),
+            "γ_M1 is not used by AISC 360; phi_c applies"
+        );
+        assert_eq!(speak("lcr_major_mm: must be > 0"), "L_cr,y: must be > 0");
+        assert_eq!(speak("method (timber)"), "method (timber)");
+    }
+
+    #[test]
+    fn the_page_rule_carries_the_header_page_numbers_and_caution() {
+        let h = SheetHeader {
+            job: "J-204".into(),
+            prepared_by: "R. \"Ray\" Amsel".into(),
+            checked_by: String::new(),
+            date: "2026-12-04".into(),
+            revision: "B".into(),
+        };
+        let r = page_rule("Depot \\ hall", &h);
+        assert!(r.contains("\"Depot \\\\ hall\\A job J-204\""), "{r}");
+        assert!(
+            r.contains("prepared R. \\\"Ray\\\" Amsel · checked —\\A date 2026-12-04 · revision B"),
+            "{r}"
+        );
+        assert!(r.contains("counter(page) \" of \" counter(pages)"));
+        assert!(r.contains(CAUTION));
     }
 }

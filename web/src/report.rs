@@ -3,15 +3,15 @@
 //! These parts only show values, so they are built as text and set as one
 //! element's content: the app then carries one small view for each of
 //! them rather than compiled code for every row and cell. Everything that
-//! comes from the person or a file (ids, notes, designations) goes through
-//! [`esc`], so imported text is shown as text, never read as markup.
+//! comes from the person or a file (ids, notes, designations) is escaped by
+//! [`Html`]'s construction, so imported text is shown as text, never read
+//! as markup.
 //! Values are shown in the chosen unit system ([`crate::units_view`]); the
 //! engine's values stay as computed.
 
-use std::fmt::Write;
-
 use strutline_core::check::Prepared;
 use strutline_core::compare::{self, Outcome};
+use strutline_core::file::SheetHeader;
 use strutline_core::solve::{self, LengthAnswer, LengthLimit};
 use strutline_core::trace::Scope;
 use strutline_core::units::UnitSystem;
@@ -19,25 +19,11 @@ use strutline_core::{CheckResult, CAUTION};
 
 use crate::checks::Checked;
 use crate::fields;
+use crate::html;
+use crate::html::Html;
 use crate::numtext::{fixed, working};
 use crate::status::{governing_text, status_text, utilisation_text, Standing};
 use crate::units_view::{result_text, step_text};
-
-/// Text made safe for HTML content and quoted attributes.
-pub fn esc(s: &str) -> String {
-    let mut out = String::with_capacity(s.len());
-    for c in s.chars() {
-        match c {
-            '&' => out.push_str("&amp;"),
-            '<' => out.push_str("&lt;"),
-            '>' => out.push_str("&gt;"),
-            '"' => out.push_str("&quot;"),
-            '\'' => out.push_str("&#39;"),
-            c => out.push(c),
-        }
-    }
-    out
-}
 
 /// The heading of a part of the working.
 pub fn scope_title(s: Scope) -> &'static str {
@@ -67,50 +53,67 @@ const SCOPES: [Scope; 8] = [
 
 /// The verdict of one member: status, utilisation, resistance, load,
 /// governing mode and method, then its warnings; or what stops the check.
-pub fn verdict_html(c: &Checked, sys: UnitSystem) -> String {
+pub fn verdict_html(c: &Checked, sys: UnitSystem) -> Html {
+    verdict_in(c, sys, false)
+}
+
+/// The verdict, its messages in the app's words (`sheet`: member-file keys
+/// the engine names are given as the standard's symbols, as the calc sheet
+/// writes its inputs) or as the engine wrote them.
+fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
+    let said = |m: &str| {
+        if sheet {
+            crate::print::speak(m)
+        } else {
+            m.to_string()
+        }
+    };
     let standing = Standing::of(&c.outcome);
-    let mut h = format!(
+    let mut h = Html::new();
+    html!(
+        h,
         "<div class=\"verdict {}\" role=\"status\"><p class=\"verdict-status\">{}</p>",
         standing.class(),
         status_text(&c.outcome)
     );
-    let dash = "<span data-testid=\"result-utilisation\">—</span>";
     match &c.outcome {
         Err(e) => {
-            let _ = write!(
+            html!(
                 h,
                 "<p class=\"verdict-error\">{}</p><dl class=\"verdict-numbers\">\
-                 <dt>utilisation</dt><dd>{dash}</dd>\
-                 <dt>resistance</dt><dd><span data-testid=\"result-resistance\">—</span></dd>\
-                 <dt>governs</dt><dd data-testid=\"result-governing\">—</dd></dl></div>",
-                esc(&fields::error_text(e))
+                 <dt>utilisation</dt><dd><span data-testid=\"result-utilisation\">—</span></dd>\
+                 <dt>governs</dt><dd data-testid=\"result-governing\">—</dd>\
+                 <dt class=\"v-more\">resistance</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">—</span></dd></dl></div>",
+                said(&fields::error_text(e))
             );
         }
         Ok(r) => {
             let rd_text = result_text(sys, "kN", r.resistance_kn, 1);
             let (rd, ru) = split_unit(&rd_text);
-            let _ = write!(
+            html!(
                 h,
                 "<dl class=\"verdict-numbers\">\
                  <dt>utilisation {}</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
-                 <dt>resistance N_Rd</dt><dd><span data-testid=\"result-resistance\">{rd}</span> {ru}</dd>\
-                 <dt>design load N_Ed</dt><dd>{}</dd>\
                  <dt>governs</dt><dd data-testid=\"result-governing\">{}</dd>\
-                 <dt>method</dt><dd>{}</dd></dl></div>",
+                 <dt class=\"v-more\">resistance N_Rd</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">{}</span> {}</dd>\
+                 <dt class=\"v-more\">design load N_Ed</dt><dd class=\"v-more\">{}</dd>\
+                 <dt class=\"v-more\">method</dt><dd class=\"v-more\">{}</dd></dl></div>",
                 if r.bending.is_some() {
                     "(largest)"
                 } else {
                     "N_Ed / N_Rd"
                 },
                 fixed(r.utilisation, 3),
-                result_text(sys, "kN", c.member.axial_kn, 1),
                 governing_text(r),
+                rd,
+                ru,
+                result_text(sys, "kN", c.member.axial_kn, 1),
                 r.method.title(),
             );
             if let Some(b) = &r.bending {
-                h.push_str(&bending_html(b, sys));
+                h.push(&bending_html(b, sys));
             }
-            h.push_str(&warnings_html(r));
+            h.push(&warnings_in(r, &said));
         }
     }
     h
@@ -119,30 +122,39 @@ pub fn verdict_html(c: &Checked, sys: UnitSystem) -> String {
 /// The bending side of a result: per axis the largest design moment, the
 /// design resistance, the elastic critical moment, the reduction and the
 /// moment factor (a dash where none applies).
-pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> String {
-    let mut h = format!(
+pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> Html {
+    let u = head_unit(sys, "kNm");
+    let mut h = Html::new();
+    html!(
+        h,
         "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Bending\">\
          <table class=\"modes\" data-testid=\"bending\"><caption>Bending</caption><thead><tr>\
-         <th scope=\"col\">axis</th><th scope=\"col\">M_Ed ({u})</th><th scope=\"col\">M_Rd ({u})</th>\
-         <th scope=\"col\">M_cr ({u})</th><th scope=\"col\">reduction</th>\
+         <th scope=\"col\">axis</th><th scope=\"col\">M_Ed ({})</th><th scope=\"col\">M_Rd ({})</th>\
+         <th scope=\"col\">M_cr ({})</th><th scope=\"col\">reduction</th>\
          <th scope=\"col\">moment factor</th><th scope=\"col\">utilisation</th></tr></thead><tbody>",
-        u = head_unit(sys, "kNm"),
+        u,
+        u,
+        u
     );
     for (name, a) in [("major", &b.major), ("minor", &b.minor)] {
-        let _ = write!(
+        html!(h, "<tr><th scope=\"row\">{}</th>", name);
+        cell(&mut h, sys, "kNm", a.demand_knm);
+        cell(&mut h, sys, "kNm", a.resistance_knm);
+        match a.critical_knm {
+            Some(v) => cell(&mut h, sys, "kNm", v),
+            None => {
+                h.lit("<td class=\"num\">—</td>");
+            }
+        }
+        html!(
             h,
-            "<tr><th scope=\"row\">{name}</th>{}{}{}<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>",
-            cell(sys, "kNm", a.demand_knm),
-            cell(sys, "kNm", a.resistance_knm),
-            a.critical_knm
-                .map(|v| cell(sys, "kNm", v))
-                .unwrap_or_else(|| "<td class=\"num\">—</td>".into()),
+            "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>",
             working(a.reduction),
             a.moment_factor.map(working).unwrap_or_else(|| "—".into()),
-            fixed(a.utilisation(), 3),
+            fixed(a.utilisation(), 3)
         );
     }
-    h.push_str("</tbody></table></div>");
+    h.lit("</tbody></table></div>");
     h
 }
 
@@ -151,23 +163,28 @@ fn split_unit(s: &str) -> (&str, &str) {
     s.split_once(' ').unwrap_or((s, ""))
 }
 
-/// The warnings of a result as a list (empty text when there are none).
-pub fn warnings_html(r: &CheckResult) -> String {
+/// The warnings of a result as a list (empty when there are none).
+pub fn warnings_html(r: &CheckResult) -> Html {
+    warnings_in(r, &|m| m.to_string())
+}
+
+fn warnings_in(r: &CheckResult, said: &dyn Fn(&str) -> String) -> Html {
+    let mut h = Html::new();
     if r.warnings.is_empty() {
-        return String::new();
+        return h;
     }
-    let mut h = String::from("<ul class=\"warnings\" data-testid=\"warnings\">");
+    h.lit("<ul class=\"warnings\" data-testid=\"warnings\">");
     for w in &r.warnings {
-        let _ = write!(h, "<li>⚠ {} <code>{}</code></li>", esc(&w.message), w.code);
+        html!(h, "<li>⚠ {} <code>{}</code></li>", said(&w.message), w.code);
     }
-    h.push_str("</ul>");
+    h.lit("</ul>");
     h
 }
 
 /// A table cell with a value converted for display, unit in the header.
-fn cell(sys: UnitSystem, unit: &'static str, v: f64) -> String {
+fn cell(h: &mut Html, sys: UnitSystem, unit: &'static str, v: f64) {
     let t = step_text(sys, unit, v);
-    format!("<td class=\"num\">{}</td>", split_unit(&t).0)
+    html!(h, "<td class=\"num\">{}</td>", split_unit(&t).0);
 }
 
 /// The unit a column of the modes table is headed with.
@@ -177,8 +194,15 @@ fn head_unit(sys: UnitSystem, unit: &'static str) -> &'static str {
 
 /// Every mode checked, the governing one marked, then each part of the
 /// working with its symbol, meaning, value and unit, and clause.
-pub fn working_html(r: &CheckResult, sys: UnitSystem) -> String {
-    let mut h = format!(
+pub fn working_html(r: &CheckResult, sys: UnitSystem) -> Html {
+    working_in(r, sys, &|m| m.to_string())
+}
+
+/// The working, its symbols and words passed through `said`.
+fn working_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) -> Html {
+    let mut h = Html::new();
+    html!(
+        h,
         "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Modes checked\">\
          <table class=\"modes\"><caption>Modes checked</caption><thead><tr>\
          <th scope=\"col\">mode</th><th scope=\"col\">L_cr ({})</th><th scope=\"col\">L_cr/i</th>\
@@ -190,43 +214,55 @@ pub fn working_html(r: &CheckResult, sys: UnitSystem) -> String {
     );
     for m in &r.modes {
         let gov = m.mode == r.governing;
-        let _ = write!(
+        h.lit(if gov {
+            "<tr class=\"governs\">"
+        } else {
+            "<tr>"
+        });
+        html!(
             h,
-            "<tr{}><th scope=\"row\">{}{}</th>{}<td class=\"num\">{}</td>{}<td class=\"num\">{}</td><td class=\"num\">{}</td>{}</tr>",
-            if gov { " class=\"governs\"" } else { "" },
+            "<th scope=\"row\">{}{}</th>",
             m.mode.key(),
-            if gov { " ◀ governs" } else { "" },
-            cell(sys, "mm", m.buckling_length_mm),
-            working(m.slenderness),
-            cell(sys, "kN", m.critical_kn),
-            working(m.relative_slenderness),
-            working(m.reduction),
-            cell(sys, "kN", m.resistance_kn),
+            if gov { " ◀ governs" } else { "" }
         );
+        cell(&mut h, sys, "mm", m.buckling_length_mm);
+        html!(h, "<td class=\"num\">{}</td>", working(m.slenderness));
+        cell(&mut h, sys, "kN", m.critical_kn);
+        html!(
+            h,
+            "<td class=\"num\">{}</td><td class=\"num\">{}</td>",
+            working(m.relative_slenderness),
+            working(m.reduction)
+        );
+        cell(&mut h, sys, "kN", m.resistance_kn);
+        h.lit("</tr>");
     }
-    h.push_str("</tbody></table></div><h3 class=\"sub-title\">Working</h3>");
+    h.lit("</tbody></table></div><h3 class=\"sub-title\">Working</h3>");
     for s in SCOPES {
-        let mut rows = String::new();
+        let mut rows = Html::new();
         for st in r.trace.iter().filter(|t| t.scope == s) {
-            let _ = write!(
+            html!(
                 rows,
                 "<tr><th scope=\"row\"><code>{}</code></th><td>{}</td><td class=\"num\">{}</td><td class=\"clause\">{}</td></tr>",
-                esc(st.symbol.as_str()),
-                esc(st.label.as_str()),
+                said(st.symbol.as_str()),
+                said(st.label.as_str()),
                 step_text(sys, st.unit(), st.value),
-                esc(st.clause.as_str()),
+                said(st.clause.as_str()),
             );
         }
         if rows.is_empty() {
             continue;
         }
         let title = scope_title(s);
-        let _ = write!(
+        html!(
             h,
-            "<details class=\"working\" open><summary>{title}</summary>\
-             <div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Working: {title}\"><table>\
+            "<details class=\"working\" open><summary>{}</summary>\
+             <div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Working: {}\"><table>\
              <thead><tr><th scope=\"col\">symbol</th><th scope=\"col\">meaning</th><th scope=\"col\">value</th>\
-             <th scope=\"col\">from</th></tr></thead><tbody>{rows}</tbody></table></div></details>"
+             <th scope=\"col\">from</th></tr></thead><tbody>{}</tbody></table></div></details>",
+            title,
+            title,
+            rows
         );
     }
     h
@@ -237,8 +273,8 @@ pub fn working_html(r: &CheckResult, sys: UnitSystem) -> String {
 /// buckling length that still carries the design load and the largest
 /// load at the member's own length, all worked by the engine
 /// ([`strutline_core::compare`], [`strutline_core::solve`]).
-pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> String {
-    let mut h = String::from(
+pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
+    let mut h = Html::from_lit(
         "<details class=\"whatif\" data-testid=\"whatif\" open><summary>What if</summary>\
          <div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Every method\">\
          <table class=\"compare\"><caption>Every method</caption><thead><tr>\
@@ -246,65 +282,72 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> String {
          <th scope=\"col\">governs</th></tr></thead><tbody>",
     );
     for c in compare::compare(p) {
-        let mark = if c.own { " class=\"governs\"" } else { "" };
-        let _ = match &c.outcome {
+        h.lit(if c.own {
+            "<tr class=\"governs\">"
+        } else {
+            "<tr>"
+        });
+        match &c.outcome {
             Outcome::Checked {
                 resistance_kn,
                 utilisation,
                 governing,
                 ..
-            } => write!(
+            } => html!(
                 h,
-                "<tr{mark}><th scope=\"row\">{}{}</th><td class=\"num\">{}</td><td class=\"num\">{}</td><td>{}</td></tr>",
+                "<th scope=\"row\">{}{}</th><td class=\"num\">{}</td><td class=\"num\">{}</td><td>{}</td></tr>",
                 c.title,
                 if c.own { " (this member's)" } else { "" },
                 result_text(sys, "kN", *resistance_kn, 1),
                 fixed(*utilisation, 3),
                 governing.key(),
             ),
-            Outcome::NotApplicable { reason } | Outcome::Refused { message: reason } => write!(
+            Outcome::NotApplicable { reason } | Outcome::Refused { message: reason } => html!(
                 h,
-                "<tr{mark}><th scope=\"row\">{}</th><td colspan=\"3\">does not apply: {}</td></tr>",
+                "<th scope=\"row\">{}</th><td colspan=\"3\">does not apply: {}</td></tr>",
                 c.title,
-                esc(reason)
+                reason
             ),
         };
     }
-    h.push_str(
+    h.lit(
         "</tbody></table></div><p class=\"hint\">Every method is given this member's N_Ed: a \
          factored load for the limit-state methods, while AISC ASD expects a service load, so \
          compare resistances rather than utilisations across the two.</p><ul class=\"reverse\">",
     );
     let method = p.member.method;
-    let _ = match solve::longest_length(p, method) {
-        Ok(LengthAnswer::Found(f)) => write!(
-            h,
-            "<li data-testid=\"longest-length\">Longest length that still carries N_Ed: <b>{}</b> \
-             (L_cr scaled alike: {} / {}; utilisation {}, governs {}{})</li>",
-            span_text(sys, f.length_mm),
-            span_text(sys, f.lcr_major_mm),
-            span_text(sys, f.lcr_minor_mm),
-            fixed(f.utilisation, 3),
-            f.governing.key(),
-            match &f.limit {
-                LengthLimit::Load => String::new(),
-                LengthLimit::MethodRange { reason } => format!("; the method's range ends there: {}", esc(reason)),
+    match solve::longest_length(p, method) {
+        Ok(LengthAnswer::Found(f)) => {
+            html!(
+                h,
+                "<li data-testid=\"longest-length\">Longest length that still carries N_Ed: <b>{}</b> \
+                 (L_cr scaled alike: {} / {}; utilisation {}, governs {}",
+                span_text(sys, f.length_mm),
+                span_text(sys, f.lcr_major_mm),
+                span_text(sys, f.lcr_minor_mm),
+                fixed(f.utilisation, 3),
+                f.governing.key(),
+            );
+            if let LengthLimit::MethodRange { reason } = &f.limit {
+                html!(h, "; the method's range ends there: {}", reason);
             }
-        ),
-        Ok(LengthAnswer::NoLength { .. }) => write!(
-            h,
-            "<li data-testid=\"longest-length\">No length carries N_Ed: the section or material \
-             is too weak at any length.</li>"
-        ),
-        Ok(LengthAnswer::AnyLength { tried_mm, .. }) => write!(
+            h.lit(")</li>");
+        }
+        Ok(LengthAnswer::NoLength { .. }) => {
+            h.lit(
+                "<li data-testid=\"longest-length\">No length carries N_Ed: the section or material \
+                 is too weak at any length.</li>",
+            );
+        }
+        Ok(LengthAnswer::AnyLength { tried_mm, .. }) => html!(
             h,
             "<li data-testid=\"longest-length\">N_Ed is carried up to the longest length tried, {}.</li>",
             span_text(sys, tried_mm)
         ),
-        Err(e) => write!(h, "<li>Longest length: {}</li>", esc(&fields::error_text(&e))),
+        Err(e) => html!(h, "<li>Longest length: {}</li>", fields::error_text(&e)),
     };
     if let Ok(l) = solve::largest_load(p, method) {
-        let _ = write!(
+        html!(
             h,
             "<li data-testid=\"largest-load\">Largest load at this length: <b>{}</b> (governs {}; reserve {})</li>",
             result_text(sys, "kN", l.load_kn, 1),
@@ -312,7 +355,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> String {
             result_text(sys, "kN", l.reserve_kn, 1),
         );
     }
-    h.push_str("</ul></details>");
+    h.lit("</ul></details>");
     h
 }
 
@@ -323,7 +366,7 @@ fn span_text(sys: UnitSystem, mm: f64) -> String {
 }
 
 /// The section properties a result reports, as a definition list.
-fn properties_html(r: &CheckResult, sys: UnitSystem) -> String {
+fn properties_html(r: &CheckResult, sys: UnitSystem) -> Html {
     let p = &r.section;
     let rows: [(&str, &'static str, f64); 7] = [
         ("A", "mm2", p.area_mm2),
@@ -334,11 +377,11 @@ fn properties_html(r: &CheckResult, sys: UnitSystem) -> String {
         ("I_t", "mm4", p.torsion_mm4),
         ("I_w", "mm6", p.warping_mm6),
     ];
-    let mut h = String::from("<dl class=\"sheet-props\">");
+    let mut h = Html::from_lit("<dl class=\"sheet-props\">");
     for (name, unit, v) in rows {
-        let _ = write!(h, "<dt>{name}</dt><dd>{}</dd>", step_text(sys, unit, v));
+        html!(h, "<dt>{}</dt><dd>{}</dd>", name, step_text(sys, unit, v));
     }
-    let _ = write!(
+    html!(
         h,
         "<dt>f</dt><dd>{}</dd><dt>E</dt><dd>{}</dd></dl>",
         step_text(sys, "MPa", r.strength_mpa),
@@ -347,26 +390,46 @@ fn properties_html(r: &CheckResult, sys: UnitSystem) -> String {
     h
 }
 
-/// The calc sheet of a list: a summary page, then a page for each member
-/// with its inputs, section properties, verdict, modes and working,
-/// warnings, the envelope of the member it was opened from (`chart`: id,
-/// image URL, and the legend's items as the app drew them, its own
-/// markup with every text escaped) and the caution on every page.
+/// The calc sheet of a list: a summary page with the list's title block,
+/// then a page for each member with its inputs (symbol, value, meaning, in
+/// the order of the working), section properties, verdict, modes and
+/// working, warnings, the envelope of the member it was opened from
+/// (`chart`: id, image URL, and the legend as the app drew it) and the
+/// caution on every page. Printed, every page also carries the header of
+/// [`crate::print::page_rule`] and its number.
 pub fn sheet_html(
     title: &str,
-    date: &str,
+    header: &SheetHeader,
     checks: &[std::sync::Arc<Checked>],
-    chart: Option<(&str, &str, &str)>,
+    chart: Option<(&str, &str, &Html)>,
     sys: UnitSystem,
-) -> String {
-    let title = esc(title);
-    let caution = format!("<p class=\"caution\">⚠ {CAUTION}</p>");
-    let mut h = format!(
-        "<section class=\"sheet-page\" data-testid=\"sheet-summary\"><h2>Calculation: {title}</h2>\
-         <p class=\"sheet-meta\">{date} · {} members · {}</p>\
+) -> Html {
+    let mut caution = Html::new();
+    html!(caution, "<p class=\"caution\">⚠ {}</p>", CAUTION);
+    let dash = |s: &str| {
+        if s.trim().is_empty() {
+            "—".to_string()
+        } else {
+            s.trim().to_string()
+        }
+    };
+    let mut h = Html::new();
+    html!(
+        h,
+        "<section class=\"sheet-page\" data-testid=\"sheet-summary\"><h2>Calculation: {}</h2>\
+         <dl class=\"sheet-block\" data-testid=\"sheet-block\">\
+         <dt>job</dt><dd data-testid=\"sheet-job\">{}</dd><dt>prepared by</dt><dd>{}</dd>\
+         <dt>checked by</dt><dd>{}</dd><dt>date</dt><dd>{}</dd><dt>revision</dt><dd>{}</dd>\
+         <dt>members</dt><dd>{}</dd><dt>units</dt><dd>{}</dd></dl>\
          <table class=\"sheet-summary\"><thead><tr><th scope=\"col\">member</th><th scope=\"col\">section</th>\
          <th scope=\"col\">method</th><th scope=\"col\">N_Ed</th><th scope=\"col\">N_Rd</th>\
          <th scope=\"col\">utilisation</th><th scope=\"col\">status</th></tr></thead><tbody>",
+        dash(title),
+        dash(&header.job),
+        dash(&header.prepared_by),
+        dash(&header.checked_by),
+        dash(&header.date),
+        dash(&header.revision),
         checks.len(),
         sys_name(sys),
     );
@@ -375,50 +438,70 @@ pub fn sheet_html(
             .outcome
             .as_ref()
             .map_or("—".into(), |r| result_text(sys, "kN", r.resistance_kn, 1));
-        let _ = write!(
+        html!(
             h,
-            "<tr><th scope=\"row\">{}</th><td>{}</td><td>{}</td><td class=\"num\">{}</td><td class=\"num\">{rd}</td>\
+            "<tr><th scope=\"row\">{}</th><td>{}</td><td>{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>\
              <td class=\"num\">{}</td><td>{}</td></tr>",
-            esc(&c.member.id),
-            esc(&c.member.section.describe()),
+            c.member.id,
+            c.member.section.describe(),
             c.member.method.title(),
             result_text(sys, "kN", c.member.axial_kn, 1),
+            rd,
             utilisation_text(&c.outcome),
             status_text(&c.outcome),
         );
     }
-    let _ = write!(h, "</tbody></table>{caution}</section>");
+    html!(h, "</tbody></table>{}</section>", caution);
     for c in checks {
-        let id = esc(&c.member.id);
-        let _ = write!(
+        let id = &c.member.id;
+        html!(
             h,
-            "<section class=\"sheet-page\" data-testid=\"sheet-page\"><h2>Member {id}</h2>\
-             <p class=\"sheet-meta\">{title} · {date} · {}</p><h3>Inputs</h3><dl class=\"sheet-inputs\">",
-            esc(&c.member.section.describe())
+            "<section class=\"sheet-page\" data-testid=\"sheet-page\"><h2>Member {}</h2>\
+             <p class=\"sheet-meta\">{}{}</p><h3>Inputs</h3>\
+             <table class=\"sheet-inputs\" data-testid=\"sheet-inputs\"><tbody>",
+            id,
+            c.member.section.describe(),
+            c.member
+                .note
+                .as_deref()
+                .map(|n| format!(" · {n}"))
+                .unwrap_or_default()
         );
-        for (k, v) in crate::print::inputs(sys, &c.member) {
-            let _ = write!(h, "<dt>{}</dt><dd>{}</dd>", esc(&k), esc(&v));
-        }
-        h.push_str("</dl>");
-        if let Ok(r) = &c.outcome {
-            h.push_str("<h3>Section and material</h3>");
-            h.push_str(&properties_html(r, sys));
-        }
-        h.push_str(&crate::sectionview::of_checked(c));
-        h.push_str("<h3>Result</h3>");
-        h.push_str(&verdict_html(c, sys));
-        if let Ok(r) = &c.outcome {
-            h.push_str(&working_html(r, sys));
-        }
-        if let Some((_, url, legend)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
-            let _ = write!(
+        for l in crate::print::inputs(sys, &c.member) {
+            html!(
                 h,
-                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {id}\">\
-                 <ul class=\"chart-legend sheet-legend\">{legend}</ul>",
-                esc(url)
+                "<tr><th scope=\"row\">{}</th><td class=\"num\">{}</td><td>{}</td></tr>",
+                l.symbol,
+                if l.symbol.is_empty() {
+                    l.value
+                } else {
+                    format!("= {}", l.value)
+                },
+                l.meaning
             );
         }
-        let _ = write!(h, "{caution}</section>");
+        h.lit("</tbody></table>");
+        if let Ok(r) = &c.outcome {
+            h.lit("<h3>Section and material</h3>");
+            h.push(&properties_html(r, sys));
+        }
+        h.push(&crate::sectionview::of_checked(c));
+        h.lit("<h3>Result</h3>");
+        h.push(&verdict_in(c, sys, true));
+        if let Ok(r) = &c.outcome {
+            h.push(&working_in(r, sys, &crate::print::speak));
+        }
+        if let Some((_, url, legend)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
+            html!(
+                h,
+                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {}\">\
+                 <ul class=\"chart-legend sheet-legend\">{}</ul>",
+                url,
+                id,
+                legend
+            );
+        }
+        html!(h, "{}</section>", caution);
     }
     h
 }
@@ -448,22 +531,17 @@ mod tests {
     }
 
     #[test]
-    fn escapes_markup() {
-        assert_eq!(esc("<b a=\"x\">&'"), "&lt;b a=&quot;x&quot;&gt;&amp;&#39;");
-    }
-
-    #[test]
     fn verdict_shows_the_engine_figures() {
         let c = checked("C1");
         let r = c.outcome.as_ref().unwrap();
-        let h = verdict_html(&c, UnitSystem::Si);
+        let h = verdict_html(&c, UnitSystem::Si).into_string();
         assert!(h.contains(&format!(
             "<span data-testid=\"result-utilisation\">{:.3}</span>",
             r.utilisation
         )));
         assert!(h.contains(&format!("{:.1}</span> kN", r.resistance_kn)));
         // 1 kip = 4.4482216152605 kN exactly (the pound-force by definition).
-        let us = verdict_html(&c, UnitSystem::Us);
+        let us = verdict_html(&c, UnitSystem::Us).into_string();
         let kip = r.resistance_kn / 4.448_221_615_260_5;
         let shown: f64 = us
             .split("result-resistance\">")
@@ -488,14 +566,14 @@ mod tests {
         let c = Checked::new(&m);
         let r = c.outcome.as_ref().unwrap();
         let b = r.bending.unwrap();
-        let h = verdict_html(&c, UnitSystem::Si);
+        let h = verdict_html(&c, UnitSystem::Si).into_string();
         assert!(h.contains("data-testid=\"bending\""), "{h}");
         assert!(h.contains("bending, major axis"), "{h}");
         assert!(h.contains(&format!(
             "<td class=\"num\">{}</td>",
             fixed(b.major.utilisation(), 3)
         )));
-        let w = working_html(r, UnitSystem::Si);
+        let w = working_html(r, UnitSystem::Si).into_string();
         assert!(
             w.contains("Bending, major axis") && w.contains("M_b,Rd"),
             "{w}"
@@ -507,16 +585,17 @@ mod tests {
         let mut m = demo::sample_member("<img src=x>");
         m.length_mm = -1.0;
         let c = Checked::new(&m);
-        let h = verdict_html(&c, UnitSystem::Si);
+        let h = verdict_html(&c, UnitSystem::Si).into_string();
         assert!(h.contains("fix input"));
         assert!(!h.contains("<img"));
         let sheet = sheet_html(
             "<script>",
-            "2026-12-01",
+            &SheetHeader::default(),
             &[Arc::new(c)],
             None,
             UnitSystem::Si,
-        );
+        )
+        .into_string();
         assert!(!sheet.contains("<script>") && !sheet.contains("<img src=x>"));
         assert!(sheet.contains("&lt;img src=x&gt;"));
     }
@@ -525,7 +604,7 @@ mod tests {
     fn working_marks_the_governing_mode_and_every_step() {
         let c = checked("C2");
         let r = c.outcome.as_ref().unwrap();
-        let h = working_html(r, UnitSystem::Si);
+        let h = working_html(r, UnitSystem::Si).into_string();
         assert_eq!(h.matches("◀ governs").count(), 1);
         assert_eq!(
             h.matches("<tr><th scope=\"row\"><code>").count(),
@@ -548,13 +627,13 @@ mod tests {
     fn whatif_compares_every_method_and_solves_both_ways() {
         let c = checked("W1");
         let p = c.prepared.as_ref().unwrap();
-        let h = whatif_html(p, UnitSystem::Si);
+        let h = whatif_html(p, UnitSystem::Si).into_string();
         assert_eq!(
             h.matches("<tr").count(),
             strutline_core::method::Method::ALL.len() + 1,
             "a row per method and the header"
         );
-        assert_eq!(h.matches("(this member's)").count(), 1);
+        assert_eq!(h.matches("(this member&#39;s)").count(), 1);
         let longest = match solve::longest_length(p, p.member.method).unwrap() {
             LengthAnswer::Found(f) => f.length_mm,
             other => panic!("{other:?}"),
@@ -574,13 +653,23 @@ mod tests {
             .iter()
             .map(|i| Arc::new(checked(i)))
             .collect();
+        let header = SheetHeader {
+            job: "J-<204>".into(),
+            revision: "B".into(),
+            ..SheetHeader::default()
+        };
         let h = sheet_html(
             "Depot",
-            "2026-12-01",
+            &header,
             &cs,
-            Some(("A2", "data:image/png;base64,AA", "<li>Euler</li>")),
+            Some((
+                "A2",
+                "data:image/png;base64,AA",
+                &Html::from_lit("<li>Euler</li>"),
+            )),
             UnitSystem::Si,
-        );
+        )
+        .into_string();
         assert_eq!(h.matches("data-testid=\"sheet-page\"").count(), 3);
         assert_eq!(h.matches(CAUTION).count(), 4);
         assert_eq!(h.matches("<img class=\"sheet-chart\"").count(), 1);
@@ -590,5 +679,15 @@ mod tests {
             "the legend beside the chart"
         );
         assert!(h.contains("Member A2"));
+        assert!(h.contains("<dd data-testid=\"sheet-job\">J-&lt;204&gt;</dd>"));
+        assert!(h.contains("<dt>revision</dt><dd>B</dd><dt>"));
+        // Inputs by symbol, never by file key.
+        assert!(
+            h.contains("<th scope=\"row\">L</th><td class=\"num\">= "),
+            "{h}"
+        );
+        for key in ["length_mm", "axial_kn", "fy_mpa", "depth_mm", "k_major"] {
+            assert!(!h.contains(key), "the sheet shows the file key {key}");
+        }
     }
 }

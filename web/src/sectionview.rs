@@ -9,8 +9,6 @@
 //! high-contrast variant); the zones are told apart by a pattern of
 //! diagonal lines, not by colour alone.
 
-use std::fmt::Write;
-
 use strutline_core::check::Prepared;
 use strutline_core::method::Method;
 use strutline_core::section::outline::outline;
@@ -18,27 +16,28 @@ use strutline_core::stability::ineffective::ineffective;
 use strutline_core::CheckResult;
 
 use crate::checks::Checked;
+use crate::html;
+use crate::html::Html;
 use crate::numtext::working;
-use crate::report::esc;
 
 /// Polygons in mm, origin at the centroid, `y` right and `z` up.
 type Polys = Vec<Vec<(f64, f64)>>;
 
 /// The view of a checked member (empty when the member did not resolve).
-pub fn of_checked(c: &Checked) -> String {
+pub fn of_checked(c: &Checked) -> Html {
     match &c.prepared {
         Some(p) => svg(p, c.outcome.as_ref().ok()),
-        None => String::new(),
+        None => Html::new(),
     }
 }
 
 /// Appends polygons as SVG path data, one decimal of a mm.
-fn path(out: &mut String, polys: &Polys) {
+fn path(out: &mut Html, polys: &Polys) {
     for p in polys {
         for (i, (y, z)) in p.iter().enumerate() {
-            let _ = write!(out, "{}{y:.1} {:.1}", if i == 0 { 'M' } else { 'L' }, -z);
+            html!(out, "{}{:.1} {:.1}", if i == 0 { 'M' } else { 'L' }, y, -z);
         }
-        out.push('Z');
+        out.lit("Z");
     }
 }
 
@@ -71,13 +70,14 @@ fn nice(x: f64) -> f64 {
 
 /// The drawing of a prepared member; `result` (its check) supplies the
 /// effective widths of a slender section. Typed sections give a short note.
-pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
+pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
     let spec = &p.section.spec;
     let polys = outline(spec);
     if polys.is_empty() {
-        return "<p class=\"sv-none\" data-testid=\"section-view\">The section is given by its \
-                properties and cannot be drawn.</p>"
-            .into();
+        return Html::from_lit(
+            "<p class=\"sv-none\" data-testid=\"section-view\">The section is given by its \
+             properties and cannot be drawn.</p>",
+        );
     }
     let zones = result
         .and_then(|r| r.effective(&p.input()))
@@ -106,16 +106,21 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
         Some(Method::AiscLrfd | Method::AiscAsd) => "AISC 360-16 E7",
         _ => "EN 1993-1-5 4.4",
     };
-    let mut s = String::with_capacity(2048);
-    let _ = write!(
+    let mut s = Html::new();
+    html!(
         s,
         "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"sv\" data-testid=\"section-view\" \
-         role=\"img\" viewBox=\"{left:.1} {top:.1} {width:.1} {height:.1}\" font-size=\"{fs:.1}\" \
+         role=\"img\" viewBox=\"{:.1} {:.1} {:.1} {:.1}\" font-size=\"{:.1}\" \
          stroke-width=\"{:.3}\" \
          aria-label=\"Cross-section {}, A = {} mm², drawn to scale with centroid, shear centre \
          and principal axes; {}\">",
+        left,
+        top,
+        width,
+        height,
+        fs,
         d / 250.0,
-        esc(&name),
+        name,
         working(props.area_mm2),
         if zones.is_empty() {
             "no ineffective parts shown"
@@ -127,53 +132,70 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
     // same spacing can share one pattern.
     let k = (d / 60.0).round().max(1.0);
     let hatch = format!("sv-hatch-{k}");
-    let _ = write!(
+    html!(
         s,
-        "<defs><pattern id=\"{hatch}\" patternUnits=\"userSpaceOnUse\" width=\"{k}\" \
-         height=\"{k}\" patternTransform=\"rotate(45)\"><line class=\"sv-hatch\" x1=\"0\" \
-         y1=\"0\" x2=\"0\" y2=\"{k}\" stroke-width=\"{:.2}\"/></pattern></defs>\
+        "<defs><pattern id=\"{}\" patternUnits=\"userSpaceOnUse\" width=\"{}\" \
+         height=\"{}\" patternTransform=\"rotate(45)\"><line class=\"sv-hatch\" x1=\"0\" \
+         y1=\"0\" x2=\"0\" y2=\"{}\" stroke-width=\"{:.2}\"/></pattern></defs>\
          <path class=\"sv-outline\" fill-rule=\"evenodd\" d=\"",
+        hatch,
+        k,
+        k,
+        k,
         k / 3.0
     );
     path(&mut s, &polys);
-    s.push_str("\"/>");
+    s.lit("\"/>");
     if !zones.is_empty() {
-        let _ = write!(s, "<path class=\"sv-zone\" fill=\"url(#{hatch})\" d=\"");
+        html!(s, "<path class=\"sv-zone\" fill=\"url(#{})\" d=\"", hatch);
         path(&mut s, &zones);
-        s.push_str("\"/>");
+        s.lit("\"/>");
     }
     // Principal axes through the centroid, clipped to the drawing's box.
     let (sin, cos) = strutline_core::trig::sin_cos(props.principal_angle_rad);
     let r = 0.025 * d;
-    let dash = format!(" stroke-dasharray=\"{:.1} {:.1}\"", 2.0 * r, r);
-    for (c, sn, extra) in [(cos, sin, ""), (-sin, cos, dash.as_str())] {
+    for (c, sn, dashed) in [(cos, sin, false), (-sin, cos, true)] {
         let (a, b) = (reach(c, sn, lo, hi), reach(-c, -sn, lo, hi));
-        let _ = write!(
+        s.lit("<line class=\"sv-axis\"");
+        if dashed {
+            html!(s, " stroke-dasharray=\"{:.1} {:.1}\"", 2.0 * r, r);
+        }
+        html!(
             s,
-            "<line class=\"sv-axis\"{extra} x1=\"{:.1}\" y1=\"{:.1}\" x2=\"{:.1}\" y2=\"{:.1}\"/>",
+            " x1=\"{:.1}\" y1=\"{:.1}\" x2=\"{:.1}\" y2=\"{:.1}\"/>",
             -b * c,
             b * sn,
             a * c,
             -a * sn
         );
     }
-    let centroid = |s: &mut String, x: f64, y: f64| {
-        let _ = write!(
+    let centroid = |s: &mut Html, x: f64, y: f64| {
+        html!(
             s,
-            "<g class=\"sv-centroid\"><circle cx=\"{x:.1}\" cy=\"{y:.1}\" r=\"{r:.1}\"/>\
-             <path d=\"M{:.1} {y:.1}H{:.1}M{x:.1} {:.1}V{:.1}\"/></g>",
+            "<g class=\"sv-centroid\"><circle cx=\"{:.1}\" cy=\"{:.1}\" r=\"{:.1}\"/>\
+             <path d=\"M{:.1} {:.1}H{:.1}M{:.1} {:.1}V{:.1}\"/></g>",
+            x,
+            y,
+            r,
             x - 1.5 * r,
+            y,
             x + 1.5 * r,
+            x,
             y - 1.5 * r,
             y + 1.5 * r
         );
     };
-    let diamond = |s: &mut String, x: f64, y: f64| {
-        let _ = write!(
+    let diamond = |s: &mut Html, x: f64, y: f64| {
+        html!(
             s,
-            "<path class=\"sv-shear\" d=\"M{x:.1} {y:.1}m0 {:.1}l{r:.1} {r:.1}l{:.1} {r:.1}l{:.1} {:.1}z\"/>",
+            "<path class=\"sv-shear\" d=\"M{:.1} {:.1}m0 {:.1}l{:.1} {:.1}l{:.1} {:.1}l{:.1} {:.1}z\"/>",
+            x,
+            y,
             -r,
+            r,
+            r,
             -r,
+            r,
             -r,
             -r
         );
@@ -190,23 +212,27 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
     let tx = x + 2.0 * fs;
     let mut y = bottom + 0.5 * row;
     let bar = nice(0.3 * width);
-    let _ = write!(
+    html!(
         s,
-        "<path class=\"sv-scale\" d=\"M{x:.1} {:.1}v{:.1}h{bar:.1}v{:.1}\"/>\
+        "<path class=\"sv-scale\" d=\"M{:.1} {:.1}v{:.1}h{:.1}v{:.1}\"/>\
          <text x=\"{:.1}\" y=\"{:.1}\">{} mm</text>",
+        x,
         y - 0.4 * fs,
         0.4 * fs,
+        bar,
         -0.4 * fs,
         x + bar + 0.5 * fs,
         y + 0.35 * fs,
         working(bar)
     );
-    let mut line = |s: &mut String, text: &str| {
+    let mut line = |s: &mut Html, text: &str| {
         y += row;
-        let _ = write!(
+        html!(
             s,
-            "<text x=\"{tx:.1}\" y=\"{:.1}\">{text}</text>",
-            y + 0.35 * fs
+            "<text x=\"{:.1}\" y=\"{:.1}\">{}</text>",
+            tx,
+            y + 0.35 * fs,
+            text
         );
         y
     };
@@ -219,23 +245,28 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> String {
         line(&mut s, "shear centre at the centroid");
     }
     let cy = line(&mut s, "principal axes (dashed: minor)");
-    let _ = write!(
+    html!(
         s,
-        "<line class=\"sv-axis\" x1=\"{x:.1}\" y1=\"{cy:.1}\" x2=\"{:.1}\" y2=\"{cy:.1}\"/>",
-        x + 1.4 * fs
+        "<line class=\"sv-axis\" x1=\"{:.1}\" y1=\"{:.1}\" x2=\"{:.1}\" y2=\"{:.1}\"/>",
+        x,
+        cy,
+        x + 1.4 * fs,
+        cy
     );
     if !zones.is_empty() {
         let cy = line(&mut s, &format!("ineffective parts ({code})"));
-        let _ = write!(
+        html!(
             s,
-            "<rect class=\"sv-zone\" fill=\"url(#{hatch})\" x=\"{x:.1}\" y=\"{:.1}\" \
+            "<rect class=\"sv-zone\" fill=\"url(#{})\" x=\"{:.1}\" y=\"{:.1}\" \
              width=\"{:.1}\" height=\"{:.1}\"/>",
+            hatch,
+            x,
             cy - 0.5 * fs,
             1.4 * fs,
             fs
         );
     }
-    s.push_str("</svg>");
+    s.lit("</svg>");
     s
 }
 
@@ -254,7 +285,7 @@ mod tests {
     fn view(spec: SectionSpec, fy: f64) -> (Prepared, String) {
         let m = member("S1", spec, steel(fy), 3000.0, 100.0, Method::En1993);
         let c = Checked::new(&m);
-        let out = of_checked(&c);
+        let out = of_checked(&c).into_string();
         (c.prepared.unwrap(), out)
     }
 
@@ -349,7 +380,7 @@ mod tests {
     fn hostile_designation_is_escaped_and_given_is_not_drawn() {
         let (mut p, _) = view(welded(300.0, 300.0, 20.0, 12.0), 235.0);
         p.section.designation = Some("<script>\"x\" & 'y'</script>");
-        let s = svg(&p, None);
+        let s = svg(&p, None).into_string();
         assert!(!s.contains("<script>"));
         assert!(s.contains("&lt;script&gt;&quot;x&quot; &amp; &#39;y&#39;&lt;/script&gt;"));
         let given = SectionSpec::Given(Given {

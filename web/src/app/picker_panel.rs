@@ -101,7 +101,7 @@ pub(super) fn SectionPicker(ctx: Ctx) -> impl IntoView {
                 .ws
                 .with(|w| w.active_list().and_then(|l| l.members.get(sel)).cloned());
             match m {
-                Some(m) if !found.is_empty() => picker::rows_html(&m, &found),
+                Some(m) if !found.is_empty() => picker::rows_html(&m, &found).into_string(),
                 _ => "<p class=\"hint\">Type a designation or choose a series.</p>".into(),
             }
         })
@@ -109,8 +109,8 @@ pub(super) fn SectionPicker(ctx: Ctx) -> impl IntoView {
     view! {
         <details class="picker-block" open=true on:input=move |e| typed(p, &e) on:click=move |e| clicked(p, &e)>
             <summary>"Pick a catalogue section"</summary>
-            <div inner_html=picker::form_html()></div>
-            <div class="table-wrap" inner_html=move || st.with(|s| picker::proposals_html(&s.left))></div>
+            <div inner_html=picker::form_html().into_string()></div>
+            <div class="table-wrap" inner_html=move || st.with(|s| picker::proposals_html(&s.left).into_string())></div>
             <div class="table-wrap picker-wrap" inner_html=rows></div>
         </details>
     }

@@ -1,15 +1,16 @@
 //! The list tools above the member list: order, filters, picking, and the
 //! change form for the picked members. A child of the app module so it
 //! shares its state; the controls are HTML text from
-//! [`crate::listops::tools_html`], answered by one delegated input handler
+//! [`crate::toolbar::tools_html`], answered by one delegated input handler
 //! and one delegated click handler, and all the logic is in
 //! [`crate::listops::ListTools`]. Applying a change sets `Undo::Edit`.
 
 use leptos::prelude::*;
 
-use super::panels::action;
+use super::picker_panel::action;
 use super::{Ctx, Undo};
-use crate::listops::{tools_html, ListTools};
+use crate::listops::ListTools;
+use crate::toolbar::{status_html, tools_html};
 
 type Tools = (Ctx, RwSignal<ListTools>);
 
@@ -58,7 +59,7 @@ pub(super) fn ListBar(ctx: Ctx, tools: RwSignal<ListTools>) -> impl IntoView {
     let (bar, form) = tools_html();
     view! {
         <div class="list-tools"
-            on:input=move |e| typed(p, &e) on:click=move |e| clicked(p, &e) inner_html=bar + &form></div>
-        <p class="list-summary" role="status" inner_html=move || tools.with(|t| ctx.checks.with(|c| t.status_html(&c.0)))></p>
+            on:input=move |e| typed(p, &e) on:click=move |e| clicked(p, &e) inner_html=bar.into_string() + form.as_str()></div>
+        <p class="list-summary" role="status" inner_html=move || tools.with(|t| ctx.checks.with(|c| status_html(t, &c.0).into_string()))></p>
     }
 }

@@ -1,0 +1,279 @@
+// Browser tests of the tablet workspace (issue 20), registered by run.mjs:
+// `register(test, helpers)`. On a landscape tablet (1180 x 820) the member
+// being edited, its verdict and its chart are in view together while any
+// field is typed in; upright (820 x 1180) and on a phone the compact
+// verdict stays in view and the chart is one tap away; every control is
+// finger-sized and number fields ask for the numeric keyboard. Each test
+// leaves a screenshot in tests/browser/out/ to look at.
+
+import assert from "node:assert/strict";
+import { spawnSync } from "node:child_process";
+import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
+import { tmpdir } from "node:os";
+import { join } from "node:path";
+import { STORAGE_KEY } from "./lib.mjs";
+
+// A member-file key as the file writes it: words joined by "_", most
+// ending in their unit (length_mm, fc0k_mpa, k_major, gamma_m1).
+const FILE_KEY = /\b(?:[a-z0-9]+_)+(?:mm|mm2|mm3|mm4|mm6|kn|knm|mpa|major|minor|torsion|m1|class|duration|connection|restrained|level|lt|n)\b/;
+
+const LANDSCAPE = { viewport: { width: 1180, height: 820 }, hasTouch: true, deviceScaleFactor: 1 };
+const PORTRAIT = { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
+const PHONE = { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
+
+/** Where an element is, and whether it lies wholly inside the viewport. */
+async function placed(page, selector) {
+  return page.evaluate((sel) => {
+    const el = document.querySelector(sel);
+    if (!el) return null;
+    const r = el.getBoundingClientRect();
+    const inside =
+      r.width > 0 && r.height > 0 && r.top >= -0.5 && r.left >= -0.5 &&
+      r.bottom <= window.innerHeight + 0.5 && r.right <= window.innerWidth + 0.5;
+    // The element on top at its centre is it or inside it (not covered).
+    const top = document.elementFromPoint(r.left + r.width / 2, r.top + r.height / 2);
+    const onTop = Boolean(top && (top === el || el.contains(top)));
+    return { top: r.top, bottom: r.bottom, left: r.left, right: r.right, inside, onTop };
+  }, selector);
+}
+
+/** The chart's marker and the verdict's figures, to see them change. */
+async function shown(page) {
+  return page.evaluate(() => ({
+    util: document.querySelector("[data-testid=result-utilisation]")?.textContent?.trim() ?? null,
+    governs: document.querySelector("[data-testid=result-governing]")?.textContent?.trim() ?? null,
+    marker: ((d) => (d ? `${d.markerPx} ${d.markerStressMpa} ${d.markerSlenderness}` : null))(
+      document.querySelector("canvas#envelope")?.dataset,
+    ),
+  }));
+}
+
+/** Types `value` into the field `name` as a person would (focus, select
+ * all, type), and waits until the verdict and the chart's marker both
+ * show a new result. Returns the results before and after. */
+async function typeAndWatch(page, name, value) {
+  const field = page.locator(`form.editor [name="${name}"]`).first();
+  await field.tap().catch(() => field.click());
+  await field.focus();
+  const before = await shown(page);
+  await page.keyboard.press("ControlOrMeta+A");
+  await page.keyboard.type(String(value));
+  await page.waitForFunction(
+    (b) => {
+      const u = document.querySelector("[data-testid=result-utilisation]")?.textContent?.trim();
+      const d = document.querySelector("canvas#envelope")?.dataset;
+      const m = d ? `${d.markerPx} ${d.markerStressMpa} ${d.markerSlenderness}` : null;
+      return u !== b.util && m !== b.marker;
+    },
+    before,
+    { timeout: 10_000 },
+  );
+  // The frame after the change, as the person sees it.
+  await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+  const after = await shown(page);
+  const focused = await page.evaluate(() => document.activeElement?.getAttribute("name"));
+  assert.equal(focused, name, `the field ${name} keeps the focus while typing`);
+  return { before, after };
+}
+
+/** Fails unless the verdict, the canvas and the focused field are all in
+ * the viewport and none is covered. */
+async function allInView(page, name, what) {
+  const verdict = await placed(page, "[data-testid=verdict] .verdict");
+  const canvas = await placed(page, "canvas#envelope");
+  const field = await placed(page, `form.editor [name="${name}"]`);
+  assert.ok(verdict?.inside && verdict.onTop, `${what}: the verdict is not wholly in view: ${JSON.stringify(verdict)}`);
+  assert.ok(canvas?.inside && canvas.onTop, `${what}: the chart is not wholly in view: ${JSON.stringify(canvas)}`);
+  assert.ok(field?.inside && field.onTop, `${what}: the field ${name} is not in view or is covered: ${JSON.stringify(field)}`);
+}
+
+export function register(test, { withApp, open, OUT }) {
+  test("tablet-landscape-edit-in-view", async () => {
+    await withApp("tablet-landscape-edit-in-view", async (page) => {
+      await open(page);
+      await page.locator("[data-testid=member-row]").first().click();
+      await page.locator("[data-testid=result-utilisation]").first().waitFor();
+      await page.locator("canvas#envelope[data-marker-px]").waitFor({ timeout: 10_000 });
+      // A field near the top, one near the foot of the editor, the load.
+      for (const [name, value] of [["length_mm", "3900"], ["axial_kn", "60,5"], ["length_mm", "2400"]]) {
+        const { before, after } = await typeAndWatch(page, name, value);
+        assert.notEqual(after.util, before.util);
+        await allInView(page, name, `1180 x 820, typing in ${name}`);
+      }
+      const scrolled = await page.evaluate(() => document.scrollingElement.scrollTop);
+      assert.equal(scrolled, 0, "the page itself did not scroll");
+      await page.screenshot({ path: join(OUT, "tablet-1180x820.png") });
+      // High contrast keeps the same arrangement.
+      await page.locator("[data-testid=contrast-toggle]").click();
+      await allInView(page, "length_mm", "1180 x 820, high contrast");
+      await page.screenshot({ path: join(OUT, "tablet-1180x820-contrast.png") });
+    }, LANDSCAPE);
+  });
+
+  for (const [label, options] of [["tablet-portrait", PORTRAIT], ["phone-portrait", PHONE]]) {
+    const { width, height } = options.viewport;
+    test(`${label}-edit-in-view`, async () => {
+      await withApp(`${label}-edit-in-view`, async (page) => {
+        await open(page);
+        // Nothing widens the page past the screen (a wider page is zoomed
+        // out and its fixed dock no longer lies where it is drawn).
+        const wide = await page.evaluate(() => document.documentElement.scrollWidth);
+        assert.ok(wide <= width, `${width} x ${height}: the page is ${wide} px wide`);
+        await page.locator("[data-testid=member-row] .row-main").first().tap();
+        await page.locator("[data-testid=result-utilisation]").first().waitFor();
+        // The compact verdict is docked in view before anything is opened.
+        const docked = await placed(page, "[data-testid=verdict] .verdict");
+        assert.ok(docked?.inside, `${width} x ${height}: the verdict is not in view: ${JSON.stringify(docked)}`);
+        assert.equal(await page.locator("canvas#envelope").isVisible(), false, "the chart waits for its tap");
+        // The chart, one tap away.
+        const toggle = page.locator("[data-testid=chart-toggle]");
+        await toggle.tap();
+        assert.equal(await toggle.getAttribute("aria-expanded"), "true");
+        await page.locator("canvas#envelope[data-marker-px]").waitFor({ timeout: 10_000 });
+        for (const [name, value] of [["axial_kn", "140"], ["length_mm", "3300"]]) {
+          const { before, after } = await typeAndWatch(page, name, value);
+          assert.notEqual(after.util, before.util);
+          await allInView(page, name, `${width} x ${height}, typing in ${name}`);
+        }
+        // Compact: utilisation, holds or exceeds, governing mode.
+        const verdict = await page.locator("[data-testid=verdict] .verdict").innerText();
+        assert.match(verdict, /holds|exceeds/i, verdict);
+        assert.ok((await page.locator("[data-testid=result-governing]").innerText()).trim().length > 0);
+        await page.screenshot({ path: join(OUT, `${label}-${width}x${height}.png`) });
+        await toggle.tap();
+        assert.equal(await page.locator("canvas#envelope").isVisible(), false, "the chart folds away again");
+      }, options);
+    });
+  }
+
+  test("touch-sized-controls-and-numeric-keyboard", async () => {
+    await withApp("touch-sized-controls-and-numeric-keyboard", async (page) => {
+      await open(page);
+      await page.locator("[data-testid=member-row] .row-main").first().tap();
+      await page.locator("[data-testid=result-utilisation]").first().waitFor();
+      await page.locator("[data-testid=chart-toggle]").tap();
+      const small = await page.evaluate(() => {
+        const out = [];
+        const seen = (el) => {
+          const r = el.getBoundingClientRect();
+          const s = getComputedStyle(el);
+          return r.width > 0 && r.height > 0 && s.visibility !== "hidden";
+        };
+        for (const el of document.querySelectorAll("button, select, input, summary, a[href]")) {
+          if (!seen(el) || el.type === "hidden") continue;
+          // A box inside its label: the label is what the finger hits.
+          const target = el.type === "checkbox" && el.closest("label") ? el.closest("label") : el;
+          const r = target.getBoundingClientRect();
+          const wide = el.tagName === "INPUT" && el.type !== "checkbox" ? 44 : r.width;
+          if (r.height < 43.5 || wide < 43.5) {
+            out.push(`${el.tagName.toLowerCase()}[${el.name || el.dataset.testid || el.textContent.trim().slice(0, 30)}] ${Math.round(r.width)}x${Math.round(r.height)}`);
+          }
+        }
+        return out;
+      });
+      assert.deepEqual(small, [], "controls smaller than 44 px");
+      const keyboards = await page.evaluate(() =>
+        [...document.querySelectorAll("form.editor input[type=text]")].map((i) => [i.name, i.getAttribute("inputmode")]),
+      );
+      const words = new Set(["id", "note", "grade", "designation"]);
+      for (const [name, mode] of keyboards) {
+        assert.equal(mode ?? "text", words.has(name) ? "text" : "decimal", `the field ${name} asks for the ${mode} keyboard`);
+      }
+      assert.ok(keyboards.some(([n]) => n === "axial_kn"), "the editor was found");
+      const hover = await page.evaluate(() => {
+        const rules = [];
+        for (const sheet of document.styleSheets) {
+          for (const r of sheet.cssRules) if (/:hover/.test(r.cssText)) rules.push(r.cssText.slice(0, 80));
+        }
+        return rules;
+      });
+      assert.deepEqual(hover, [], "nothing is shown on hover only");
+    }, PORTRAIT);
+  });
+
+  test("calc-sheet-speaks-symbols-not-keys", async () => {
+    await withApp("calc-sheet-speaks-symbols-not-keys", async (page) => {
+      await open(page);
+      for (const units of ["SI", "US"]) {
+        if (units === "US") await page.click("[data-testid=units-toggle]");
+        await page.click("[data-testid=open-sheet]");
+        const sheet = page.locator("[data-testid=calc-sheet] > div").last();
+        await sheet.locator("[data-testid=sheet-page]").first().waitFor();
+        const text = await sheet.innerText();
+        const key = text.match(FILE_KEY);
+        assert.equal(key, null, `${units}: the calc sheet shows the file key "${key?.[0]}" in "${key ? text.slice(Math.max(0, key.index - 80), key.index + 40) : ""}"`);
+        const inputs = await sheet.locator("[data-testid=sheet-inputs]").first().innerText();
+        assert.match(inputs, /N_Ed\s*=\s*[\d.,]+ (kN|kip)/, `${units}: ${inputs}`);
+        assert.match(inputs, /design compression/);
+        if (units === "US") {
+          assert.match(inputs, /L\s*=\s*[\d.]+ ft/, `US lengths in ft: ${inputs}`);
+          assert.doesNotMatch(inputs, / mm\b| kN\b| MPa\b/, `US sheet shows SI units: ${inputs}`);
+        } else {
+          assert.match(inputs, /L\s*=\s*[\d.]+ mm/, inputs);
+        }
+        await page.click("[data-testid=close-sheet]");
+      }
+    });
+  });
+
+  test("calc-sheet-header-on-every-printed-page", async () => {
+    const header = {
+      sheet_job: "24-117 Ferry shed",
+      sheet_prepared_by: "R. Amsel",
+      sheet_checked_by: "T. Okafor",
+      sheet_date: "2026-12-04",
+      sheet_revision: "B",
+    };
+    await withApp("calc-sheet-header-on-every-printed-page", async (page) => {
+      await open(page);
+      const members = await page.locator("[data-testid=member-row]").count();
+      await page.click("[data-testid=open-sheet]");
+      const form = page.locator("[data-testid=sheet-header-form]");
+      for (const [name, value] of Object.entries(header)) await form.locator(`[name=${name}]`).fill(value);
+      await page.waitForFunction((j) => document.querySelector("[data-testid=sheet-job]")?.textContent === j, header.sheet_job);
+      // Stored with the list, as the member file's "sheet" object.
+      await page.waitForTimeout(600);
+      const stored = JSON.parse(await page.evaluate((k) => localStorage.getItem(k), STORAGE_KEY));
+      const sheet = stored.lists[stored.active].sheet;
+      assert.deepEqual(sheet, {
+        job: header.sheet_job,
+        prepared_by: header.sheet_prepared_by,
+        checked_by: header.sheet_checked_by,
+        date: header.sheet_date,
+        revision: header.sheet_revision,
+      });
+      // Printed: every page has the header, its number and the caution.
+      await page.emulateMedia({ media: "print" });
+      const pdf = await page.pdf({ format: "A4", printBackground: false });
+      writeFileSync(join(OUT, "calc-sheet-header-A4.pdf"), pdf);
+      const dir = mkdtempSync(join(tmpdir(), "strutline-pdf-"));
+      try {
+        const file = join(dir, "sheet.pdf");
+        writeFileSync(file, pdf);
+        const t = spawnSync("pdftotext", ["-layout", file, join(dir, "sheet.txt")], { encoding: "utf8" });
+        assert.equal(t.status, 0, `pdftotext (poppler-utils) is needed: ${t.error?.message ?? t.stderr}`);
+        const pages = readFileSync(join(dir, "sheet.txt"), "utf8").split("\f").filter((p) => p.trim() !== "");
+        assert.ok(pages.length >= members + 1, `${pages.length} pages for a summary and ${members} members`);
+        pages.forEach((p, i) => {
+          for (const v of Object.values(header)) assert.ok(p.includes(v), `page ${i + 1} lacks "${v}":\n${p.slice(0, 600)}`);
+          assert.match(p, new RegExp(`page ${i + 1} of ${pages.length}`), `page ${i + 1} has no "page ${i + 1} of ${pages.length}"`);
+          assert.match(p, /checking aid/, `page ${i + 1} has no caution`);
+        });
+        // A printed page to look at.
+        spawnSync("pdftoppm", ["-png", "-r", "70", "-f", "2", "-l", "2", file, join(OUT, "calc-sheet-page")]);
+      } finally {
+        rmSync(dir, { recursive: true, force: true });
+      }
+      await page.emulateMedia({ media: "screen" });
+      await page.screenshot({ path: join(OUT, "calc-sheet-header.png") });
+      // Still there after a reload, and in the exported member file.
+      await page.reload({ waitUntil: "load" });
+      await page.locator("[data-testid=caution]").first().waitFor();
+      await page.click("[data-testid=open-sheet]");
+      assert.equal(await page.locator("[data-testid=sheet-job]").textContent(), header.sheet_job);
+      const [download] = await Promise.all([page.waitForEvent("download"), page.click("[data-testid=export-json]")]);
+      const exported = JSON.parse(readFileSync(await download.path(), "utf8"));
+      assert.equal(exported.sheet.checked_by, header.sheet_checked_by, "the exported member file carries the header");
+    });
+  });
+}

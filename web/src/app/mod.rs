@@ -1,0 +1,321 @@
+//! The components: a thin layer over the view-logic modules. State lives
+//! in a few signals held by [`Ctx`]; every list operation, parse and
+//! format is delegated to the plain modules.
+
+use std::sync::Arc;
+
+use leptos::ev;
+use leptos::prelude::*;
+use strutline_core::method::Method;
+use strutline_core::units::UnitSystem;
+use strutline_core::{Member, CAUTION};
+
+use crate::browser;
+use crate::chart;
+use crate::checks::{Checked, Checker};
+use crate::demo;
+use crate::fields::{self, Choice, Field, MaterialMode};
+use crate::listops::{self, Deleted, DeletedList, ListTools};
+use crate::numtext::{for_input, working};
+use crate::report;
+use crate::restraint::Restraint;
+use crate::status::{status_text, utilisation_text, Standing};
+use crate::units_view::step_text;
+use crate::workspace::{decode, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX};
+
+/// Storage key of the theme preference.
+const THEME_KEY: &str = "strutline.v1.theme";
+
+/// Something deleted that can be put back.
+#[derive(Debug, Clone)]
+enum Undo {
+    Member {
+        list: usize,
+        deleted: Box<Deleted>,
+    },
+    List(DeletedList),
+    /// Members changed together (sections picked for a list): the list's
+    /// members as they were.
+    Edit {
+        list: usize,
+        what: String,
+        before: Vec<Member>,
+    },
+}
+
+/// Stored data that could not be read.
+#[derive(Debug, Clone)]
+struct Problem {
+    reason: String,
+    aside: Option<String>,
+    raw: String,
+}
+
+/// The checks of the active list, compared by identity.
+#[derive(Debug, Clone)]
+struct Checks(Arc<Vec<Arc<Checked>>>);
+
+impl PartialEq for Checks {
+    fn eq(&self, other: &Self) -> bool {
+        Arc::ptr_eq(&self.0, &other.0)
+    }
+}
+
+/// The app's state.
+#[derive(Clone, Copy)]
+struct Ctx {
+    ws: RwSignal<Workspace>,
+    selected: RwSignal<usize>,
+    generation: RwSignal<u64>,
+    undo: RwSignal<Option<Undo>>,
+    checks: Memo<Checks>,
+    high_contrast: RwSignal<bool>,
+    perry: RwSignal<bool>,
+    /// Whether the chart also draws the other methods that apply.
+    compare: RwSignal<bool>,
+    problem: RwSignal<Option<Problem>>,
+    save_problem: RwSignal<Option<String>>,
+    other_tab: RwSignal<Option<String>>,
+    update_ready: RwSignal<bool>,
+    resize: RwSignal<u64>,
+    loaded_rev: StoredValue<u64>,
+    overwrite_ok: StoredValue<bool>,
+    save_pending: StoredValue<bool>,
+    /// The units shown and typed (the stored values stay SI).
+    units: RwSignal<UnitSystem>,
+    /// The calc sheet when open: the chart image of the member it was
+    /// opened from (id, PNG data URL), if there was one.
+    sheet: RwSignal<Option<Option<(String, String, crate::html::Html)>>>,
+    /// The chart's legend as last drawn (the calc sheet prints it too).
+    legend: RwSignal<crate::html::Html>,
+    /// Whether the docked chart is open (narrow and upright screens).
+    chart_open: RwSignal<bool>,
+}
+
+impl Ctx {
+    /// The selected member, without tracking.
+    fn current(&self) -> Option<Member> {
+        let sel = self.selected.get_untracked();
+        self.ws
+            .with_untracked(|w| w.active_list().and_then(|l| l.members.get(sel)).cloned())
+    }
+
+    /// Replaces the selected member.
+    fn commit(&self, m: Member) {
+        let sel = self.selected.get_untracked();
+        self.ws.update(|w| {
+            if let Some(slot) = w.active_list_mut().and_then(|l| l.members.get_mut(sel)) {
+                *slot = m;
+            }
+        });
+    }
+
+    /// Selects member `i` and rebuilds the editor.
+    fn select(&self, i: usize) {
+        self.selected.set(i);
+        self.generation.update(|g| *g += 1);
+    }
+
+    /// Index of a member id in the active list.
+    fn index_of(&self, id: &str) -> Option<usize> {
+        self.ws.with_untracked(|w| {
+            w.active_list()
+                .and_then(|l| l.members.iter().position(|m| m.id == id))
+        })
+    }
+
+    /// Applies a list operation to the active list's members.
+    fn with_members<R>(&self, f: impl FnOnce(&mut Vec<Member>) -> R) -> Option<R> {
+        let mut out = None;
+        self.ws.update(|w| {
+            if let Some(l) = w.active_list_mut() {
+                out = Some(f(&mut l.members));
+            }
+        });
+        out
+    }
+}
+
+/// A view made afresh whenever `key` changes. A plain reactive block would
+/// patch the old inputs in place, and an input the person has typed in keeps
+/// its text whatever its `value` attribute says; a new key makes new inputs.
+/// One function for every such block, so the keyed list is compiled once.
+fn made_afresh(key: Signal<u64>, make: Arc<dyn Fn() -> AnyView + Send + Sync>) -> impl IntoView {
+    view! { <For each=move || std::iter::once(key.get()) key=|k| *k children=move |_| make() /> }
+}
+
+/// A key for [`made_afresh`] from any hashable value.
+fn key_of<T: std::hash::Hash>(t: &T) -> u64 {
+    use std::hash::Hasher;
+    let mut h = rustc_hash::FxHasher::default();
+    t.hash(&mut h);
+    h.finish()
+}
+
+mod banners;
+mod editor;
+mod list;
+mod listbar;
+mod picker_panel;
+mod results;
+mod save;
+
+use banners::Banners;
+use editor::Editor;
+use list::ListPanel;
+use results::{chart_image, CalcSheet, Results};
+use save::{flush_save, schedule_save, set_problem};
+
+/// The app.
+#[component]
+pub fn App() -> impl IntoView {
+    let (initial, rev, fresh, problem) = match browser::get(KEY) {
+        None => (Workspace::new(demo::demo_lists()), 0, true, None),
+        Some(text) => match decode(&text) {
+            Ok(w) => {
+                let r = w.revision;
+                (w, r, false, None)
+            }
+            Err(reason) => (
+                Workspace::new(demo::demo_lists()),
+                0,
+                false,
+                Some((text, reason)),
+            ),
+        },
+    };
+    let ws = RwSignal::new(initial);
+    let checker = StoredValue::new(Checker::new());
+    let checks = Memo::new(move |_| {
+        let out = ws.with(|w| {
+            let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
+            let mut got = Vec::new();
+            let mut fresh = 0;
+            let t0 = browser::precise_ms();
+            checker.update_value(|c| (got, fresh) = c.refresh(members));
+            browser::note_recheck(browser::precise_ms() - t0, fresh);
+            got
+        });
+        Checks(Arc::new(out))
+    });
+    let high_contrast = RwSignal::new(browser::get(THEME_KEY).as_deref() == Some("high-contrast"));
+    let ctx = Ctx {
+        ws,
+        selected: RwSignal::new(0),
+        generation: RwSignal::new(0),
+        undo: RwSignal::new(None),
+        checks,
+        high_contrast,
+        perry: RwSignal::new(false),
+        compare: RwSignal::new(false),
+        problem: RwSignal::new(None),
+        save_problem: RwSignal::new(None),
+        other_tab: RwSignal::new(None),
+        update_ready: RwSignal::new(false),
+        resize: RwSignal::new(0),
+        loaded_rev: StoredValue::new(rev),
+        overwrite_ok: StoredValue::new(false),
+        save_pending: StoredValue::new(false),
+        units: RwSignal::new(crate::units_view::load()),
+        sheet: RwSignal::new(None),
+        legend: RwSignal::new(crate::html::Html::new()),
+        chart_open: RwSignal::new(false),
+    };
+    provide_context(ctx.units);
+    if let Some((raw, reason)) = problem {
+        set_problem(ctx, raw, reason);
+    }
+
+    Effect::new(move |prev: Option<()>| {
+        ws.track();
+        if prev.is_some() || fresh {
+            schedule_save(ctx);
+        }
+    });
+    Effect::new(move |_| {
+        let on = high_contrast.get();
+        browser::body_class("high-contrast", on);
+        let _ = browser::set(THEME_KEY, if on { "high-contrast" } else { "standard" });
+    });
+    let storage_listener = window_event_listener(ev::storage, move |e| {
+        if e.key().as_deref() != Some(KEY) {
+            return;
+        }
+        if let Some(text) = e.new_value() {
+            if peek_revision(&text) != Some(ctx.loaded_rev.get_value()) {
+                ctx.other_tab.set(Some(text));
+            }
+        }
+    });
+    let resize_listener = window_event_listener(ev::resize, move |_| {
+        ctx.resize.update(|n| *n += 1);
+        // The on-screen keyboard came or went: the field stays in view.
+        browser::reveal_focused_field();
+    });
+    let focus_listener = window_event_listener(ev::focusin, move |_| {
+        // After the on-screen keyboard has had time to come up.
+        set_timeout(
+            browser::reveal_focused_field,
+            std::time::Duration::from_millis(350),
+        );
+    });
+    let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
+    let visibility_listener =
+        window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
+    let orient_listener =
+        window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
+    on_cleanup(move || {
+        storage_listener.remove();
+        resize_listener.remove();
+        focus_listener.remove();
+        orient_listener.remove();
+        hide_listener.remove();
+        visibility_listener.remove();
+    });
+    browser::register_service_worker(move || ctx.update_ready.set(true));
+    let active_list = Memo::new(move |_| ws.with(|w| w.active));
+
+    view! {
+        <div class="app">
+            <header class="topbar">
+                <h1 class="brand">"Strutline"</h1>
+                <p class="tagline">"compression members, checked as you type"</p>
+                <div class="tools screen-only">
+                    <button type="button" data-testid="units-toggle" on:click=move |_| {
+                        let next = if ctx.units.get_untracked() == UnitSystem::Si { UnitSystem::Us } else { UnitSystem::Si };
+                        ctx.units.set(next);
+                        let _ = browser::set(crate::units_view::KEY, crate::units_view::stored_text(next));
+                        ctx.generation.update(|g| *g += 1);
+                    }>{move || if ctx.units.get() == UnitSystem::Si { "Units: SI (kN, mm, MPa) · show US" } else { "Units: US (kip, in, ft, ksi) · show SI" }}</button>
+                    <button type="button" data-testid="open-sheet" on:click=move |_| ctx.sheet.set(Some(chart_image(ctx)))>"Calc sheet of this list"</button>
+                    <button
+                        type="button"
+                        class="theme-toggle"
+                        data-testid="contrast-toggle"
+                        aria-pressed=move || if high_contrast.get() { "true" } else { "false" }
+                        on:click=move |_| high_contrast.update(|v| *v = !*v)
+                    >
+                        {move || if high_contrast.get() { "◐ Standard theme" } else { "◑ High contrast (outdoors)" }}
+                    </button>
+                </div>
+            </header>
+            <Banners ctx=ctx />
+            {move || ctx.sheet.get().map(|img| view! { <CalcSheet ctx=ctx chart=img /> })}
+            <main class="panes" class:chart-open=move || ctx.chart_open.get() class:screen-only=move || ctx.sheet.with(Option::is_some)>
+                <section class="pane pane-list" aria-labelledby="h-list">
+                    <ListPanel ctx=ctx />
+                    <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />
+                </section>
+                <section class="pane pane-editor" aria-labelledby="h-editor">
+                    {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
+                        view! { <Editor ctx=ctx /> }
+                    }.into_any()))}
+                    <picker_panel::SectionPicker ctx=ctx />
+                </section>
+                <section class="pane pane-results" aria-labelledby="h-results">
+                    <Results ctx=ctx />
+                </section>
+            </main>
+        </div>
+    }
+}

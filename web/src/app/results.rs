@@ -1,0 +1,341 @@
+//! The result pane: caution, verdict, chart, section view, working and
+//! "What if"; and the calc sheet.
+
+use super::*;
+use crate::html;
+use crate::html::Html;
+
+/// The result pane. Its head (the caution, the verdict and the chart's
+/// canvas) is what the person watches while typing: beside the editor on
+/// a wide screen (held at the top of its pane), docked at the foot of the
+/// screen on a narrow or upright one, the chart one tap away. The rest
+/// (legend, options, section, working, What if) follows below.
+#[component]
+pub(super) fn Results(ctx: Ctx) -> impl IntoView {
+    let current = Memo::new(move |_| {
+        let sel = ctx.selected.get();
+        ctx.checks.with(|c| c.0.get(sel).cloned())
+    });
+    let units = ctx.units;
+    view! {
+        <h2 id="h-results" class="pane-title">"Result"</h2>
+        <Chart ctx=ctx current=current>
+        <div class="working-block" inner_html=move || {
+            let sys = units.get();
+            current.get().map(|c| {
+                let mut h = Html::new();
+                if let Ok(r) = &c.outcome {
+                    // The docked verdict leaves its warnings here.
+                    html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
+                }
+                h.push(&crate::sectionview::of_checked(&c));
+                if let Ok(r) = &c.outcome {
+                    h.push(&report::working_html(r, sys));
+                }
+                if let Some(p) = &c.prepared {
+                    h.push(&report::whatif_html(p, sys));
+                }
+                h.into_string()
+            }).unwrap_or_default()
+        }></div>
+        </Chart>
+    }
+}
+
+/// The selected member's id, its chart as a PNG data URL and the
+/// chart's legend as drawn.
+pub(super) fn chart_image(ctx: Ctx) -> Option<(String, String, Html)> {
+    let id = ctx.current()?.id;
+    let el = document().get_element_by_id("envelope")?;
+    let c: web_sys::HtmlCanvasElement = wasm_bindgen::JsCast::dyn_into(el).ok()?;
+    Some((id, c.to_data_url().ok()?, ctx.legend.get_untracked()))
+}
+
+/// The calc sheet of the open list, built as text by
+/// [`report::sheet_html`], with the list's header lines (entered once,
+/// stored with the list, printed on every page), and buttons to print it
+/// and to close it.
+#[component]
+pub(super) fn CalcSheet(ctx: Ctx, chart: Option<(String, String, Html)>) -> impl IntoView {
+    let today = crate::print::today();
+    // The list's title and header, the date of today where none is given.
+    let header = Memo::new(move |_| {
+        ctx.ws.with(|w| {
+            w.active_list()
+                .map(|l| {
+                    let mut h = l.sheet.clone();
+                    if h.date.trim().is_empty() {
+                        h.date = today.clone();
+                    }
+                    (l.title.clone(), h)
+                })
+                .unwrap_or_default()
+        })
+    });
+    let stored = ctx
+        .ws
+        .with_untracked(|w| w.active_list().map(|l| l.sheet.clone()))
+        .unwrap_or_default();
+    // The printed pages' header and footer, while the sheet is open.
+    Effect::new(move |_| {
+        let (title, h) = header.get();
+        browser::set_page_rule(Some(&crate::print::page_rule(&title, &h)));
+    });
+    on_cleanup(|| browser::set_page_rule(None));
+    let html = move || {
+        let (title, h) = header.get();
+        let checks = ctx.checks.get();
+        report::sheet_html(
+            &title,
+            &h,
+            &checks.0,
+            chart
+                .as_ref()
+                .map(|(id, url, legend)| (id.as_str(), url.as_str(), legend)),
+            ctx.units.get_untracked(),
+        )
+        .into_string()
+    };
+    let field = move |name: &'static str,
+                      label: &'static str,
+                      value: String,
+                      hint: &'static str| {
+        view! {
+            <div class="field">
+                <label for=format!("sheet-{name}")>{label}</label>
+                <input type="text" id=format!("sheet-{name}") name=name autocomplete="off" value=value placeholder=hint />
+            </div>
+        }
+    };
+    view! {
+        <div class="calc-sheet" data-testid="calc-sheet">
+            <div class="button-row screen-only">
+                <button type="button" data-testid="print" on:click=move |_| {
+                    if let Some(w) = web_sys::window() { let _ = w.print(); }
+                }>"Print or save as PDF"</button>
+                <button type="button" data-testid="close-sheet" on:click=move |_| ctx.sheet.set(None)>"Close the sheet"</button>
+            </div>
+            <fieldset class="sheet-header-form screen-only" data-testid="sheet-header-form"
+                on:input=move |e| {
+                    let name = event_target::<web_sys::Element>(&e).get_attribute("name");
+                    let v = event_target_value(&e);
+                    ctx.ws.update(|w| {
+                        if let Some(l) = w.active_list_mut() {
+                            let h = &mut l.sheet;
+                            match name.as_deref() {
+                                Some("sheet_job") => h.job = v,
+                                Some("sheet_prepared_by") => h.prepared_by = v,
+                                Some("sheet_checked_by") => h.checked_by = v,
+                                Some("sheet_date") => h.date = v,
+                                Some("sheet_revision") => h.revision = v,
+                                _ => {}
+                            }
+                        }
+                    });
+                }>
+                <legend>"Header of every page (kept with this list)"</legend>
+                <div class="field-grid">
+                    {field("sheet_job", "job reference", stored.job, "e.g. 24-117")}
+                    {field("sheet_prepared_by", "prepared by", stored.prepared_by, "name or initials")}
+                    {field("sheet_checked_by", "checked by", stored.checked_by, "name or initials")}
+                    {field("sheet_date", "date", stored.date, "today when empty")}
+                    {field("sheet_revision", "revision", stored.revision, "e.g. A")}
+                </div>
+            </fieldset>
+            <div inner_html=html></div>
+        </div>
+    }
+}
+
+/// The chart's legend as text: one element for the app to build, not
+/// one per item. `others` is `Some` when the other methods are compared:
+/// one item each, named by the method's title.
+pub(super) fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Curve)]>) -> Html {
+    let mut h = Html::from_lit(
+        "<li><span class=\"sw sw-shade\"></span>within capacity (shaded)</li>\
+         <li><span class=\"sw sw-major\"></span>design curve, major axis (solid)</li>\
+         <li><span class=\"sw sw-minor\"></span>design curve, minor axis (dashed)</li>\
+         <li><span class=\"sw sw-plateau\"></span>strength plateau f_y or f_c,0,k (dashed)</li>\
+         <li><span class=\"sw sw-euler\"></span>Euler π²E / (L_cr/i)² (dotted)</li>\
+         <li><span class=\"sym\">●</span>applied stress N_Ed / A (larger dot: governing axis)</li>\
+         <li><span class=\"sym\">□</span>resistance N_Rd / A of that axis, on its curve</li>",
+    );
+    if perry {
+        for (i, bow) in ["250", "500", "1000"].iter().enumerate() {
+            html!(
+                h,
+                "<li><span class=\"sw sw-perry{}\"></span>Perry-Robertson, bow L_cr/{}</li>",
+                i + 1,
+                bow
+            );
+        }
+    }
+    match others {
+        Some([]) => {
+            h.lit("<li>no other method applies to this member</li>");
+        }
+        Some(list) => {
+            h.lit("<li>other methods, each the lower of its two axis curves:</li>");
+            for (m, c) in list {
+                html!(
+                    h,
+                    "<li data-method=\"{}\"><span class=\"sw sw-m sw-m{}\"></span>{}</li>",
+                    m.key(),
+                    *m as u8,
+                    c.label
+                );
+            }
+        }
+        None => {}
+    }
+    h
+}
+
+/// The result's head (caution, verdict, the chart's canvas), then the
+/// rest (`children` after the chart's legend and options) in a part that
+/// scrolls on its own on a wide screen; the canvas is drawn afresh on every change
+/// of the member, the options, the theme, the units or its size.
+#[component]
+pub(super) fn Chart(
+    ctx: Ctx,
+    current: Memo<Option<Arc<Checked>>>,
+    children: Children,
+) -> impl IntoView {
+    let canvas = NodeRef::<leptos::html::Canvas>::new();
+    let note = RwSignal::new(None::<String>);
+    let described = RwSignal::new(String::new());
+    let legend = ctx.legend;
+    Effect::new(move |_| {
+        let c = current.get();
+        let perry = ctx.perry.get();
+        let others = ctx.compare.get();
+        let hc = ctx.high_contrast.get();
+        let sys = ctx.units.get();
+        let us = sys == UnitSystem::Us;
+        ctx.resize.track();
+        ctx.chart_open.track();
+        let Some(el) = canvas.get() else {
+            return;
+        };
+        let dpr = browser::device_pixel_ratio();
+        let w = f64::from(el.client_width().max(1));
+        let h = f64::from(el.client_height().max(1));
+        // Resizing the bitmap reallocates it: only when the size changed.
+        let (bw, bh) = ((w * dpr).round() as u32, (h * dpr).round() as u32);
+        if el.width() != bw {
+            el.set_width(bw);
+        }
+        if el.height() != bh {
+            el.set_height(bh);
+        }
+        let data = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
+            (Some(p), Ok(r)) => Some(chart::data::build(p, r, perry, others)),
+            _ => None,
+        });
+        match data {
+            Some(Ok(d)) => {
+                legend.set(legend_html(perry, others.then_some(d.others.as_slice())));
+                match chart::envelope::draw(&el, &d, dpr, hc, us) {
+                    Ok(()) => note.set(None),
+                    Err(e) => note.set(Some(e)),
+                }
+                described.set(match d.governing() {
+                    Some(g) => format!(
+                        "Governing axis {}: slenderness {}, applied stress {}, design stress {}, plateau {}.",
+                        g.mode.key(),
+                        working(g.slenderness),
+                        step_text(sys, "MPa", g.applied_mpa),
+                        step_text(sys, "MPa", g.resistance_mpa),
+                        step_text(sys, "MPa", d.yield_mpa)
+                    ),
+                    None => String::new(),
+                });
+            }
+            Some(Err(e)) => {
+                legend.set(legend_html(perry, None));
+                note.set(Some(fields::error_text(&e)));
+            }
+            None => {
+                legend.set(legend_html(perry, None));
+                for a in [
+                    "data-curves",
+                    "data-marker-slenderness",
+                    "data-marker-stress-mpa",
+                    "data-marker-px",
+                ] {
+                    let _ = el.remove_attribute(a);
+                }
+                note.set(Some(
+                    "The chart appears when the member's input can be checked.".into(),
+                ));
+                described.set(String::new());
+            }
+        }
+    });
+    // The head's height, for the page to keep a focused field clear of
+    // it when it is docked (style.css reads --dock).
+    let head = NodeRef::<leptos::html::Div>::new();
+    Effect::new(move |_| {
+        current.track();
+        ctx.chart_open.track();
+        ctx.resize.track();
+        request_animation_frame(move || {
+            if let Some(el) = head.get_untracked() {
+                browser::set_root_px("--dock", f64::from(el.offset_height()));
+            }
+        });
+    });
+    let units = ctx.units;
+    view! {
+        <div class="result-head" class:chart-open=move || ctx.chart_open.get() node_ref=head data-testid="result-head">
+            <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
+            <div class="verdict-block" data-testid="verdict" inner_html=move || match current.get() {
+                None => "<p class=\"empty\">No member selected.</p>".to_string(),
+                Some(c) => report::verdict_html(&c, units.get()).into_string(),
+            }></div>
+            <button type="button" class="chart-toggle" data-testid="chart-toggle" aria-controls="envelope-frame"
+                aria-expanded=move || if ctx.chart_open.get() { "true" } else { "false" }
+                on:click=move |_| {
+                    ctx.chart_open.update(|o| *o = !*o);
+                    // Redraw at the size the canvas now has.
+                    request_animation_frame(move || ctx.resize.update(|n| *n += 1));
+                }>
+                {move || if ctx.chart_open.get() { "▾ Hide the chart" } else { "▴ Show the chart" }}
+            </button>
+            <div class="canvas-frame" id="envelope-frame">
+                <canvas id="envelope" class="envelope" node_ref=canvas role="img"
+                    aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+            </div>
+        </div>
+        <div class="result-more">
+        <div class="chart-block">
+            // One handler for both options, told apart by the box's name;
+            // the boxes are the only writers of their signals, so they need
+            // not follow them.
+            <div class="chart-head" on:change=move |e| {
+                let on = event_target_checked(&e);
+                let name = event_target::<web_sys::Element>(&e).get_attribute("name");
+                if name.as_deref() == Some("compare_methods") {
+                    ctx.compare.set(on);
+                } else {
+                    ctx.perry.set(on);
+                }
+            }>
+                <h3 class="sub-title">"Capacity envelope"</h3>
+                <label class="check">
+                    <input type="checkbox" name="show_bows" data-testid="toggle-bows" />
+                    " show Perry-Robertson bows L/250, L/500, L/1000"
+                </label>
+                <label class="check">
+                    <input type="checkbox" name="compare_methods" data-testid="toggle-compare" />
+                    " compare every method that applies"
+                </label>
+            </div>
+            <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend.get().into_string()></ul>
+            <p class="chart-description">{move || described.get()}</p>
+            {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
+        </div>
+        {children()}
+        </div>
+    }
+}
