@@ -5,7 +5,8 @@
 //! - `serve [--port N]` builds and serves `dist/` on 127.0.0.1;
 //! - `browser-test [--only NAME]` builds, serves and runs the browser tests;
 //! - `bench-web` builds, serves and measures the app in the browser;
-//! - `test` and `bench` are the lead engineer's (see their modules).
+//! - `test` runs every check of the project; `bench` runs the native
+//!   benchmarks and `bench-web`, writing `bench/`; `fuzz` runs the fuzz targets.
 
 mod bench;
 mod bench_web;
@@ -50,11 +51,9 @@ fn dispatch(args: &[String]) -> Result<()> {
         "serve" => serve::run(rest),
         "browser-test" => browser::run(rest),
         "bench-web" => bench_web::run(rest),
-        // ---- slot for the lead engineer: `test` and `bench` ----
         "test" => test::run(rest),
         "bench" => bench::run(rest),
         "fuzz" => fuzz::run(rest),
-        // ---- end of slot ----
         "help" | "--help" | "-h" => {
             println!("{USAGE}");
             Ok(())
