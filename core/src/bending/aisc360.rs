@@ -105,6 +105,21 @@ fn between(mp: f64, low: f64, lambda: f64, lp: f64, lr: f64) -> f64 {
     mp - (mp - low) * (lambda - lp) / (lr - lp)
 }
 
+/// Lateral-torsional buckling strength over the three ranges of unbraced
+/// length that F2 and F7 share: M_p up to L_p, the line from M_p to
+/// 0.7 F_y S_x (times C_b, at most M_p) up to L_r, the elastic M_cr (at most
+/// M_p) beyond.
+#[allow(clippy::too_many_arguments)]
+fn ltb_ranges(lb: f64, lp: f64, lr: f64, mp: f64, fy: f64, sx: f64, cb: f64, mcr: f64) -> f64 {
+    if lb <= lp {
+        mp
+    } else if lb <= lr {
+        (cb * between(mp, 0.7 * fy * sx, lb, lp, lr)).min(mp)
+    } else {
+        mcr.min(mp)
+    }
+}
+
 fn slender(basis: Basis, reason: String) -> Error {
     Error::NotApplicable {
         method: key(basis),
@@ -320,13 +335,7 @@ fn axis(
                         "kNm",
                         "AISC 360-16 Eq. F2-4"
                     );
-                    let ltb = if lb <= lp {
-                        mp
-                    } else if lb <= lr {
-                        (cb * between(mp, 0.7 * fy * sx, lb, lp, lr)).min(mp)
-                    } else {
-                        mcr.min(mp)
-                    };
+                    let ltb = ltb_ranges(lb, lp, lr, mp, fy, sx, cb, mcr);
                     step!(
                         trace,
                         s,
@@ -474,13 +483,7 @@ fn axis(
                     "kNm",
                     "AISC 360-16 Eq. F7-11"
                 );
-                let ltb = if lb <= lp {
-                    mp
-                } else if lb <= lr {
-                    (cb * between(mp, 0.7 * fy * sx, lb, lp, lr)).min(mp)
-                } else {
-                    mcr.min(mp)
-                };
+                let ltb = ltb_ranges(lb, lp, lr, mp, fy, sx, cb, mcr);
                 step!(
                     trace,
                     s,
