@@ -18,6 +18,7 @@ use rayon::prelude::*;
 use serde::Serialize;
 use strutline_core::bending::Bending;
 use strutline_core::check::{check_member_as, CheckResult, ModeResult, Warning, Working};
+use strutline_core::interaction;
 use strutline_core::method::Method;
 use strutline_core::{Member, Mode, CAUTION};
 
@@ -60,6 +61,9 @@ pub struct Summary<'a> {
     pub modes: &'a [ModeResult],
     /// The bending side, `null` without moments.
     pub bending: &'a Option<Bending>,
+    /// The beam-column interaction equations worked (empty without both
+    /// axial load and a moment).
+    pub interaction: &'a [interaction::Check],
     /// The result's warnings.
     pub warnings: &'a [Warning],
 }
@@ -76,6 +80,7 @@ impl<'a> From<&'a CheckResult> for Summary<'a> {
             governing: r.governing,
             modes: &r.modes,
             bending: &r.bending,
+            interaction: &r.interaction,
             warnings: &r.warnings,
         }
     }

@@ -10,6 +10,7 @@ use serde::Serialize;
 
 use crate::bending::{self, Bending};
 use crate::error::Result;
+use crate::interaction;
 use crate::material::Material;
 use crate::member::Member;
 use crate::method::{self, Input, Method};
@@ -110,6 +111,9 @@ pub struct CheckResult {
     pub modes: Vec<ModeResult>,
     /// The bending side (member file version 3), `null` without moments.
     pub bending: Option<Bending>,
+    /// The beam-column interaction equations worked, one entry each
+    /// (empty unless the member carries both axial load and a moment).
+    pub interaction: Vec<interaction::Check>,
     /// Cautions: limit states not covered, values outside a method's range.
     pub warnings: Vec<Warning>,
     /// The working.
@@ -354,6 +358,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         trace.reserve(64);
     }
     let bending = bending::check(method, input, &mut trace, &mut warnings).map_err(wrap)?;
+    let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
         None => (axial, governing.mode.key(), axial <= 1.0),
         Some(b) => {
@@ -364,15 +369,45 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
                 (un, "bending-minor")
             };
             if m.axial_kn > 0.0 {
-                // No interaction yet: never pass a beam-column silently.
-                warnings.push(Warning::new(
-                    "interaction-not-checked",
-                    "the member carries axial load and moments; the beam-column interaction is \
-                     not checked in this build, so the member is not passed: its utilisation is \
-                     the plain sum of the axial and the two bending utilisations, which is not a \
-                     code check",
-                ));
-                (axial + um + un, "combined-not-checked", false)
+                let ctx = interaction::Context {
+                    method,
+                    input,
+                    lengths: &lengths,
+                    modes: &modes,
+                    governing: &governing,
+                    bending: b,
+                    assessment: &assessment,
+                };
+                match interaction::check(&ctx, &mut trace, &mut warnings).map_err(wrap)? {
+                    Some(found) => {
+                        checks = found;
+                        // The largest of the axial, the bending and every
+                        // interaction utilisation governs.
+                        let (mut u, mut name) = if axial >= ub {
+                            (axial, governing.mode.key())
+                        } else {
+                            (ub, which)
+                        };
+                        if let Some(c) = interaction::governing(&checks) {
+                            if c.utilisation >= u {
+                                (u, name) = (c.utilisation, c.check);
+                            }
+                        }
+                        (u, name, u <= 1.0)
+                    }
+                    None => {
+                        // No interaction for this method yet: never pass a
+                        // beam-column silently.
+                        warnings.push(Warning::new(
+                            "interaction-not-checked",
+                            "the member carries axial load and moments; the beam-column \
+                             interaction of this method is not checked in this build, so the \
+                             member is not passed: its utilisation is the plain sum of the axial \
+                             and the two bending utilisations, which is not a code check",
+                        ));
+                        (axial + um + un, "combined-not-checked", false)
+                    }
+                }
             } else {
                 (ub, which, ub <= 1.0)
             }
@@ -393,6 +428,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         section: SectionSummary::from(&input.section.props),
         modes,
         bending,
+        interaction: checks,
         warnings,
         trace,
     };

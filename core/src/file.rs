@@ -20,7 +20,8 @@ pub const FORMAT: &str = "strutline.members";
 /// Version 2 added the optional member key `angle_connection` (AISC 360-16
 /// E5); a version-1 file reads as it was written. Version 3 added the
 /// optional bending keys (`m_major_a_knm`, ..., `span_load_major`, `k_lt`,
-/// `lcr_lt_mm`, `lt_restrained`, `load_level`, and the given section's
+/// `lcr_lt_mm`, `lt_restrained`, `load_level`, the interaction keys
+/// `amplify_moments` and `interaction_annex`, and the given section's
 /// `w_el_*_mm3`, `w_pl_*_mm3`), the buckling keys `frame_major`,
 /// `frame_minor` and `buckling_model`, and the optional top-level `sheet`
 /// (the calc sheet's header); a version-2 file carries none of them.

@@ -158,6 +158,27 @@ impl LoadLevel {
     }
 }
 
+/// Which annex of EN 1993-1-1 gives the interaction factors k_ij of
+/// 6.3.3(4) (member file version 3, key `interaction_annex`).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize, Default)]
+pub enum InteractionAnnex {
+    /// Annex A (Method 1).
+    A,
+    /// Annex B (Method 2), the default.
+    #[default]
+    B,
+}
+
+impl InteractionAnnex {
+    /// The member-file name.
+    pub fn key(self) -> &'static str {
+        match self {
+            InteractionAnnex::A => "A",
+            InteractionAnnex::B => "B",
+        }
+    }
+}
+
 /// The design moments about one axis (member file version 3): the values of
 /// the bending-moment diagram at end A (x = 0) and end B (x = L), and the
 /// moment at mid-length from transverse load measured from the straight line
@@ -218,6 +239,14 @@ fn is_one(v: &f64) -> bool {
 
 fn is_zero(v: &f64) -> bool {
     *v == 0.0
+}
+
+fn yes() -> bool {
+    true
+}
+
+fn is_true(v: &bool) -> bool {
+    *v
 }
 
 fn is_false(v: &bool) -> bool {
@@ -341,6 +370,16 @@ pub struct Member {
     /// Where transverse load acts on the depth.
     #[serde(default, skip_serializing_if = "is_default")]
     pub load_level: LoadLevel,
+    /// The moments given are first-order: the engine applies the member's
+    /// second-order amplification where the method leaves it to the
+    /// designer (AISC 360-16 Appendix 8.2.1, B1). `false`: the moments
+    /// already include the member's second-order effects (version 3).
+    #[serde(default = "yes", skip_serializing_if = "is_true")]
+    pub amplify_moments: bool,
+    /// EN 1993-1-1 interaction factors: Annex B (Method 2, the default) or
+    /// Annex A (Method 1) (version 3).
+    #[serde(default, skip_serializing_if = "is_default")]
+    pub interaction_annex: InteractionAnnex,
 }
 
 /// The longest length or buckling length accepted, mm (10 km): beyond it
@@ -464,6 +503,8 @@ impl Member {
             lcr_lt_mm: None,
             lt_restrained: false,
             load_level: LoadLevel::default(),
+            amplify_moments: true,
+            interaction_annex: InteractionAnnex::default(),
         }
     }
 

@@ -35,6 +35,8 @@ pub enum Scope {
     BendingMajor,
     /// Bending about the minor axis.
     BendingMinor,
+    /// Compression and bending together (the beam-column interaction).
+    Interaction,
 }
 
 /// A static text of the working; reads as a `str`.

@@ -28,6 +28,7 @@ const LAYERS: &[(&str, &[&str])] = &[
     ("outcome types", &["outcome"]),
     ("methods", &["method"]),
     ("other limit states", &["stability", "bending"]),
+    ("beam-column interaction", &["interaction"]),
     ("the check", &["check"]),
     ("orchestration", &["envelope", "compare", "solve", "sizing"]),
     ("the member file", &["file"]),

@@ -359,6 +359,24 @@ pub fn bending_choices() -> Vec<Choice> {
                 ("tension-flange", "the tension flange"),
             ],
         },
+        Choice {
+            key: "amplify_moments",
+            label: "moments given are",
+            place: Mem,
+            options: vec![
+                (
+                    "",
+                    "first-order (amplified where the code leaves it to the designer)",
+                ),
+                ("false", "already second-order"),
+            ],
+        },
+        Choice {
+            key: "interaction_annex",
+            label: "EN 1993-1-1 interaction factors",
+            place: Mem,
+            options: vec![("", "Annex B (Method 2)"), ("A", "Annex A (Method 1)")],
+        },
     ]
 }
 
@@ -831,7 +849,7 @@ fn check_sign(key: &str, x: f64, rule: Rule) -> Result<(), String> {
 pub fn apply_choice(member: &Member, choice: &Choice, value: &str) -> Result<Member, String> {
     let v = if value.is_empty() {
         None
-    } else if choice.key == "lt_restrained" {
+    } else if choice.key == "lt_restrained" || choice.key == "amplify_moments" {
         Some(Value::Bool(value == "true"))
     } else if choice.key == "service_class" {
         let n: u64 = value

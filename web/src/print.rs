@@ -90,6 +90,16 @@ pub const INPUTS: &[(&str, &str, &str)] = &[
         "",
         "level of the transverse load on the depth",
     ),
+    (
+        "amplify_moments",
+        "",
+        "moments given are first-order (amplified by the check)",
+    ),
+    (
+        "interaction_annex",
+        "",
+        "EN 1993-1-1 interaction factors from Annex",
+    ),
     ("kind", "", "section shape"),
     ("designation", "", "catalogue designation"),
     ("make", "", "made"),

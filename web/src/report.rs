@@ -36,11 +36,12 @@ pub fn scope_title(s: Scope) -> &'static str {
         Scope::FlexuralTorsional => "Flexural-torsional",
         Scope::BendingMajor => "Bending, major axis",
         Scope::BendingMinor => "Bending, minor axis",
+        Scope::Interaction => "Compression with bending",
     }
 }
 
 /// The parts of the working in the order they are shown.
-const SCOPES: [Scope; 8] = [
+const SCOPES: [Scope; 9] = [
     Scope::Member,
     Scope::Section,
     Scope::Major,
@@ -49,6 +50,7 @@ const SCOPES: [Scope; 8] = [
     Scope::FlexuralTorsional,
     Scope::BendingMajor,
     Scope::BendingMinor,
+    Scope::Interaction,
 ];
 
 /// The verdict of one member: status, utilisation, resistance, load,

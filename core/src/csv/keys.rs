@@ -101,6 +101,8 @@ pub(super) const KEYS: &[KeyInfo] = &[
     k("lcr_lt_mm", Group::Member, Kind::Number),
     k("lt_restrained", Group::Member, Kind::Bool),
     k("load_level", Group::Member, Kind::Name),
+    k("amplify_moments", Group::Member, Kind::Bool),
+    k("interaction_annex", Group::Member, Kind::Name),
 ];
 
 /// Keys every row needs (the material and section needs are per row).

@@ -104,6 +104,7 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             "angle_truss" => "planar or space".into(),
             "span_load_major" | "span_load_minor" => "uniform or point".into(),
             "load_level" => "shear-centre, compression-flange or tension-flange".into(),
+            "interaction_annex" => "A or B".into(),
             _ => "a name".into(),
         },
         Kind::Whole => "a whole number".into(),
@@ -301,6 +302,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
         "span_load_major",
         "span_load_minor",
         "load_level",
+        "interaction_annex",
         "make",
     ] {
         let Some(v) = get(key) else { continue };
@@ -311,6 +313,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             "angle_truss" => &["planar", "space"],
             "span_load_major" | "span_load_minor" => &["uniform", "point"],
             "load_level" => &["shear-centre", "compression-flange", "tension-flange"],
+            "interaction_annex" => &["A", "B"],
             // The section kind's choices (section::schema); other kinds
             // have no make, and the section check says so.
             _ => match kind_name.and_then(schema::kind).and_then(|k| k.key(key)) {

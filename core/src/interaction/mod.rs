@@ -1,0 +1,103 @@
+//! Members under compression and bending (beam-columns): the interaction
+//! equations of each design method, one module per code.
+//!
+//! A member with an axial load and a moment (member file version 3) is
+//! checked against every interaction equation its code gives; each
+//! equation worked is one [`Check`] (`"interaction"` in results), named by
+//! its clause or equation number exactly as the issue and the outside
+//! scripts expect (`"6.61"`, `"H1-1a"`, `"13.8.2(b)"`, `"6.23"`, ...). The
+//! utilisation of an equation is its left-hand side where its right-hand
+//! side is 1. Every interaction factor, amplification and moment factor is
+//! written to the working ([`Scope::Interaction`]) with its clause.
+//!
+//! A method's module returns `Ok(None)` while its equations are not
+//! implemented; the check then does not pass the member and says so
+//! (`interaction-not-checked`). A shape or case its code gives no rule for
+//! is a typed error naming the key, never a silent pass.
+//!
+//! [`Scope::Interaction`]: crate::trace::Scope::Interaction
+
+use serde::Serialize;
+
+use crate::bending::Bending;
+use crate::error::Result;
+use crate::member::BucklingLengths;
+use crate::method::{Input, Method};
+use crate::outcome::{ModeResult, Warning};
+use crate::stability::Assessment;
+use crate::trace::Trace;
+
+pub mod aisc360;
+pub mod csa_s16;
+pub mod en1993;
+pub mod en1995;
+
+/// One interaction equation worked, as results report it.
+#[derive(Debug, Clone, Copy, PartialEq, Serialize)]
+pub struct Check {
+    /// The equation's name: its clause or number in the code
+    /// (`"6.2.9"`, `"6.61"`, `"6.62"`, `"H1-1a"`, `"H1-1b"`, `"H2-1"`,
+    /// `"13.8.2(a)"`, ..., `"6.19"`, `"6.23"`, `"6.35"`, `"secant"`).
+    pub check: &'static str,
+    /// Its left-hand side (its right-hand side being 1).
+    pub utilisation: f64,
+}
+
+/// What every method's interaction needs: the member, its axial side
+/// (every mode checked and the governing one), its bending side and the
+/// cross-section assessment.
+#[derive(Debug, Clone, Copy)]
+pub struct Context<'a> {
+    /// The method.
+    pub method: Method,
+    /// The member, section and material (the gross section; a Class 4
+    /// section's effective area is in `assessment`).
+    pub input: &'a Input<'a>,
+    /// The member's buckling lengths.
+    pub lengths: &'a BucklingLengths,
+    /// Every axial mode checked (major, minor, the twisting mode, the
+    /// cross-section mode), as in the result.
+    pub modes: &'a [ModeResult],
+    /// The governing (lowest) axial mode.
+    pub governing: &'a ModeResult,
+    /// The bending side, both axes.
+    pub bending: &'a Bending,
+    /// The cross-section classification and effective area.
+    pub assessment: &'a Assessment,
+}
+
+impl Context<'_> {
+    /// The axial mode `mode` of this result, if it was checked.
+    pub fn mode(&self, mode: crate::outcome::Mode) -> Option<&ModeResult> {
+        self.modes.iter().find(|m| m.mode == mode)
+    }
+}
+
+/// The interaction equations of the member's method, `None` where the
+/// method's equations are not implemented (the check then refuses to pass
+/// the member). Called only for a member with both an axial load and a
+/// moment.
+pub fn check(
+    ctx: &Context<'_>,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Result<Option<Vec<Check>>> {
+    match ctx.method {
+        Method::En1993 => en1993::check(ctx, trace, warnings),
+        Method::AiscLrfd | Method::AiscAsd => aisc360::check(ctx, trace, warnings),
+        Method::CsaS16 => csa_s16::check(ctx, trace, warnings),
+        Method::En1995 => en1995::check(ctx, trace, warnings),
+        // The secant method takes equal end moments as the load's
+        // eccentricity before this point; euler and perry-robertson refuse
+        // any moment in `bending::check`.
+        Method::Euler | Method::PerryRobertson | Method::Secant => Ok(None),
+    }
+}
+
+/// The largest check, `None` for none.
+pub fn governing(checks: &[Check]) -> Option<Check> {
+    checks
+        .iter()
+        .copied()
+        .max_by(|a, b| a.utilisation.total_cmp(&b.utilisation))
+}
