@@ -3,6 +3,8 @@
 
 use serde::{Deserialize, Serialize};
 
+pub mod schema;
+
 use crate::buckling::chart::{self, Frame, FrameKey};
 use crate::buckling::model::BucklingModel;
 use crate::error::{non_negative, positive, Error, Result};

@@ -4,6 +4,7 @@ use serde_json::{Map, Value};
 
 use super::keys::*;
 use crate::file::{self, MemberFile};
+use crate::member::schema as member_schema;
 use crate::units::{self, Quantity, UnitSystem, UsUnit};
 
 pub(super) fn cell_text(v: &Value) -> String {
@@ -37,11 +38,15 @@ pub fn to_csv(file: &MemberFile) -> String {
     to_csv_in(file, UnitSystem::Si)
 }
 
-/// The member keys (version 3) a CSV row does not carry.
-pub const NOT_IN_CSV: [&str; 3] = [NOT_IN_CSV_0, NOT_IN_CSV_1, NOT_IN_CSV_2];
-const NOT_IN_CSV_0: &str = "buckling_model";
-const NOT_IN_CSV_1: &str = "frame_major";
-const NOT_IN_CSV_2: &str = "frame_minor";
+/// The member keys a CSV row does not carry: the structured values of
+/// [`member::schema::MEMBER`] (`frame_major`, `frame_minor`,
+/// `buckling_model`).
+pub fn not_in_csv() -> impl Iterator<Item = &'static str> {
+    member_schema::MEMBER
+        .iter()
+        .filter(|k| k.value == member_schema::Value::Structure)
+        .map(|k| k.key)
+}
 
 /// What [`to_csv`] leaves out of `file`, in words for the person
 /// exporting ("member \"K1\": buckling_model"), or `None` when the CSV
@@ -51,15 +56,8 @@ pub fn left_out(file: &MemberFile) -> Option<String> {
         .members
         .iter()
         .filter_map(|m| {
-            let keys: Vec<&str> = [
-                m.buckling_model.is_some(),
-                m.frame_major.is_some(),
-                m.frame_minor.is_some(),
-            ]
-            .iter()
-            .zip(NOT_IN_CSV)
-            .filter_map(|(given, key)| given.then_some(key))
-            .collect();
+            let written = file::json_value(m)?;
+            let keys: Vec<&str> = not_in_csv().filter(|k| written.get(k).is_some()).collect();
             (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
         })
         .collect();
@@ -109,16 +107,20 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
                                 flat.insert(k2, v2);
                             }
                         }
-                        // Not carried by CSV; see [`left_out`].
-                        (NOT_IN_CSV_0 | NOT_IN_CSV_1 | NOT_IN_CSV_2, _) => {}
-                        ("angle_connection", Value::Object(inner)) => {
-                            for (k2, v2) in inner {
-                                flat.insert(format!("angle_{k2}"), v2);
+                        (_, value) => match member_schema::member_key(&key).map(|d| d.value) {
+                            // Not carried by CSV; see [`left_out`].
+                            Some(member_schema::Value::Structure) => {}
+                            Some(member_schema::Value::Group { prefix, .. }) => {
+                                if let Value::Object(inner) = value {
+                                    for (k2, v2) in inner {
+                                        flat.insert(format!("{prefix}_{k2}"), v2);
+                                    }
+                                }
                             }
-                        }
-                        (_, value) => {
-                            flat.insert(key, value);
-                        }
+                            _ => {
+                                flat.insert(key, value);
+                            }
+                        },
                     }
                 }
             }
@@ -133,10 +135,9 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
             used.push(key);
         }
     }
-    let mut columns: Vec<&str> = KEYS
-        .iter()
+    let mut columns: Vec<&str> = keys()
+        .filter(|i| i.required || used.contains(&i.key))
         .map(|i| i.key)
-        .filter(|k| REQUIRED.contains(k) || used.contains(k))
         .collect();
     // Keys this build does not list (a newer member file), kept at the end.
     for key in &used {
