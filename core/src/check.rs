@@ -365,7 +365,23 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     };
     let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
-        None => (axial, governing.mode.key(), axial <= 1.0),
+        // The secant method's moments are the load's eccentricity: its one
+        // check `secant` (never above the axial utilisation, which it is
+        // about the moment's axis).
+        None => {
+            match interaction::secant::check(method, input, &modes, &mut trace).map_err(wrap)? {
+                Some(c) => {
+                    checks.push(c);
+                    let (u, name) = if c.utilisation >= axial {
+                        (c.utilisation, c.check)
+                    } else {
+                        (axial, governing.mode.key())
+                    };
+                    (u, name, u <= 1.0)
+                }
+                None => (axial, governing.mode.key(), axial <= 1.0),
+            }
+        }
         Some(b) => {
             let (um, un) = (b.major.utilisation(), b.minor.utilisation());
             let (ub, which) = if um >= un {
