@@ -9,8 +9,10 @@
 //! Values are shown in the chosen unit system ([`crate::units_view`]); the
 //! engine's values stay as computed.
 
+use strutline_core::bending::Axis;
 use strutline_core::check::Prepared;
 use strutline_core::compare::{self, Outcome};
+use strutline_core::envelope::interaction;
 use strutline_core::file::SheetHeader;
 use strutline_core::solve::{self, LengthAnswer, LengthLimit};
 use strutline_core::trace::Scope;
@@ -293,7 +295,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
             Outcome::Checked {
                 resistance_kn,
                 utilisation,
-                governing,
+                governing_check,
                 ..
             } => html!(
                 h,
@@ -302,7 +304,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
                 if c.own { " (this member's)" } else { "" },
                 result_text(sys, "kN", *resistance_kn, 1),
                 fixed(*utilisation, 3),
-                governing.key(),
+                governing_check,
             ),
             Outcome::NotApplicable { reason } | Outcome::Refused { message: reason } => html!(
                 h,
@@ -328,7 +330,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
                 span_text(sys, f.lcr_major_mm),
                 span_text(sys, f.lcr_minor_mm),
                 fixed(f.utilisation, 3),
-                f.governing.key(),
+                f.governing_check,
             );
             if let LengthLimit::MethodRange { reason } = &f.limit {
                 html!(h, "; the method's range ends there: {}", reason);
@@ -353,9 +355,38 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
             h,
             "<li data-testid=\"largest-load\">Largest load at this length: <b>{}</b> (governs {}; reserve {})</li>",
             result_text(sys, "kN", l.load_kn, 1),
-            l.governing.key(),
+            l.governing_check,
             result_text(sys, "kN", l.reserve_kn, 1),
         );
+    }
+    // The largest moment about each loaded axis at N_Ed, the member's
+    // diagram scaled and the other axis' moment held.
+    for (axis, name, m) in [
+        (Axis::Major, "major", p.member.moments_major()),
+        (Axis::Minor, "minor", p.member.moments_minor()),
+    ] {
+        if m.is_zero() {
+            continue;
+        }
+        match interaction::largest_moment(p, method, axis) {
+            Ok(Some(knm)) => html!(
+                h,
+                "<li data-testid=\"largest-moment-{}\">Largest {}-axis moment at N_Ed: <b>{}</b> \
+                 (this member's diagram scaled by {}; the other axis' moment held)</li>",
+                name,
+                name,
+                result_text(sys, "kNm", knm, 1),
+                fixed(knm / m.max_abs_knm(), 3),
+            ),
+            Ok(None) => html!(
+                h,
+                "<li data-testid=\"largest-moment-{}\">No {}-axis moment is carried at N_Ed: the load \
+                 and the other axis' moment alone exceed the capacity.</li>",
+                name,
+                name
+            ),
+            Err(e) => html!(h, "<li>Largest {}-axis moment: {}</li>", name, fields::error_text(&e)),
+        }
     }
     h.lit("</ul></details>");
     h
