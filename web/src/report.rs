@@ -117,6 +117,9 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
             if let Some(b) = &r.bending {
                 h.push(&bending_html(b, sys));
             }
+            if !r.interaction.is_empty() {
+                h.push(&interaction_html(r));
+            }
             h.push(&warnings_in(r, &said));
         }
     }
@@ -156,6 +159,29 @@ pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> Ht
             working(a.reduction),
             a.moment_factor.map(working).unwrap_or_else(|| "—".into()),
             fixed(a.utilisation(), 3)
+        );
+    }
+    h.lit("</tbody></table></div>");
+    h
+}
+
+/// The interaction equations worked, one row each with its utilisation,
+/// the governing one marked.
+pub fn interaction_html(r: &CheckResult) -> Html {
+    let mut h = Html::from_lit(
+        "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Interaction\">\
+         <table class=\"modes\" data-testid=\"interaction\"><caption>Interaction</caption><thead><tr>\
+         <th scope=\"col\">check</th><th scope=\"col\">utilisation</th></tr></thead><tbody>",
+    );
+    for c in &r.interaction {
+        let governs = c.check == r.governing_check;
+        html!(
+            h,
+            "<tr{}><th scope=\"row\">{}{}</th><td class=\"num\">{}</td></tr>",
+            if governs { " class=\"governs\"" } else { "" },
+            crate::status::equation_name(c.check),
+            if governs { " (governs)" } else { "" },
+            fixed(c.utilisation, 3)
         );
     }
     h.lit("</tbody></table></div>");
@@ -434,7 +460,7 @@ pub fn sheet_html(
     title: &str,
     header: &SheetHeader,
     checks: &[std::sync::Arc<Checked>],
-    chart: Option<(&str, &str, &Html)>,
+    chart: Option<(&str, &str, &Html, &str)>,
     sys: UnitSystem,
 ) -> Html {
     let mut caution = Html::new();
@@ -514,6 +540,8 @@ pub fn sheet_html(
             );
         }
         h.lit("</tbody></table>");
+        // The moment diagrams as understood, beside the inputs they draw.
+        h.push(&crate::diagram::svg(&c.member, sys));
         if let Ok(r) = &c.outcome {
             h.lit("<h3>Section and material</h3>");
             h.push(&properties_html(r, sys));
@@ -524,13 +552,14 @@ pub fn sheet_html(
         if let Ok(r) = &c.outcome {
             h.push(&working_in(r, sys, &crate::print::speak));
         }
-        if let Some((_, url, legend)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
+        if let Some((_, url, legend, what)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
             html!(
                 h,
-                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {}\">\
+                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Member {}: {}\">\
                  <ul class=\"chart-legend sheet-legend\">{}</ul>",
                 url,
                 id,
+                what,
                 legend
             );
         }
@@ -681,6 +710,55 @@ mod tests {
     }
 
     #[test]
+    fn a_beam_column_names_its_equations_its_largest_moment_and_draws_its_diagram() {
+        let mut m = demo::sample_member("BC1");
+        m.method = strutline_core::method::Method::En1993;
+        m.axial_kn = 40.0;
+        m.m_major_a_knm = 6.0;
+        m.m_major_b_knm = -3.0;
+        let c = Checked::new(&m);
+        let p = c.prepared.as_ref().unwrap();
+        // What if: the largest major-axis moment at N_Ed, as the engine's
+        // interaction curve gives it; no minor-axis line (no moment there).
+        let h = whatif_html(p, UnitSystem::Si).into_string();
+        let most = interaction::largest_moment(p, m.method, Axis::Major)
+            .unwrap()
+            .unwrap();
+        assert!(
+            h.contains(&format!("moment at N_Ed: <b>{:.1} kNm</b>", most)),
+            "{h}"
+        );
+        assert!(!h.contains("largest-moment-minor"));
+        // The verdict's interaction table names each equation, the
+        // governing one marked (entries set here as an equation would).
+        let mut r = c.outcome.clone().unwrap();
+        r.interaction = vec![
+            strutline_core::interaction::Check {
+                check: "6.61",
+                utilisation: 0.4,
+            },
+            strutline_core::interaction::Check {
+                check: "6.62",
+                utilisation: 0.7,
+            },
+        ];
+        r.governing_check = "6.62";
+        let t = interaction_html(&r).into_string();
+        assert!(t.contains("equation (6.62) (governs)"), "{t}");
+        assert!(t.contains("equation (6.61)</th>"), "{t}");
+        // The calc sheet draws the moment diagram.
+        let sheet = sheet_html(
+            "Yard",
+            &SheetHeader::default(),
+            &[Arc::new(c)],
+            None,
+            UnitSystem::Si,
+        )
+        .into_string();
+        assert!(sheet.contains("data-testid=\"moment-diagram\""), "{sheet}");
+    }
+
+    #[test]
     fn sheet_has_a_page_per_member_and_the_caution_on_each() {
         let cs: Vec<_> = ["A1", "A2", "A3"]
             .iter()
@@ -699,6 +777,7 @@ mod tests {
                 "A2",
                 "data:image/png;base64,AA",
                 &Html::from_lit("<li>Euler</li>"),
+                "Failure stress against slenderness",
             )),
             UnitSystem::Si,
         )
