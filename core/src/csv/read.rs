@@ -105,7 +105,18 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             _ => "a name".into(),
         },
         Kind::Whole => "a whole number".into(),
-        Kind::Bool => "true or false".into(),
+        Kind::Bool => match info.described.filter(|d| !d.options.is_empty()) {
+            // "true (sidesway uninhibited) or false (braced)"
+            Some(d) => {
+                let said: Vec<String> = d
+                    .options
+                    .iter()
+                    .map(|o| format!("{} ({})", o.name, o.words))
+                    .collect();
+                said.join(" or ")
+            }
+            None => "true or false".into(),
+        },
         Kind::Number => match unit {
             Some(UsUnit::Ft) => "a length in feet, e.g. 13.5 or 13'-6\"".into(),
             Some(UsUnit::In) => "a length in inches, e.g. 6.5 or 6-1/2\"".into(),
@@ -119,7 +130,27 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
                 Some("mpa") => "a number in MPa".into(),
                 Some("mm3") => "a number in mm3".into(),
                 Some("knm") => "a number in kNm".into(),
-                _ => "a number".into(),
+                _ => match info.described {
+                    // "G_A, a number of 0 or more (sum of EI/L of ...)"
+                    Some(d) => {
+                        let sign = match d.value {
+                            member_schema::Value::Number(member_schema::Sign::Positive) => {
+                                " greater than 0"
+                            }
+                            member_schema::Value::Number(member_schema::Sign::NonNegative) => {
+                                " of 0 or more"
+                            }
+                            _ => "",
+                        };
+                        let symbol = if d.symbol.is_empty() {
+                            String::new()
+                        } else {
+                            format!("{}, ", d.symbol)
+                        };
+                        format!("{symbol}a number{sign} ({})", d.meaning)
+                    }
+                    None => "a number".into(),
+                },
             },
         },
     }
@@ -266,16 +297,18 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             Group::Nested { key, .. }
                 if info.described.is_some_and(|d| d.required()) && !has(info.key) =>
             {
-                let other = given
-                    .iter()
-                    .map(|(i, _)| i)
-                    .find(|i| matches!(i.group, Group::Nested { key: k, .. } if k == key));
-                if let Some(other) = other {
+                let in_group =
+                    |i: &KeyInfo| matches!(i.group, Group::Nested { key: k, .. } if k == key);
+                if given.iter().any(|(i, _)| in_group(i)) {
+                    let needs: Vec<&str> = keys()
+                        .filter(|i| in_group(i) && i.described.is_some_and(|d| d.required()))
+                        .map(|i| i.key)
+                        .collect();
                     problems.push(problem(
                         line,
                         ctx.header_of(info.key),
                         expected_for(&info, None),
-                        format!("{} is missing; {} needs it", info.key, other.key),
+                        format!("{} is missing; {key} needs {}", info.key, in_words(&needs)),
                     ));
                 }
             }
@@ -644,11 +677,11 @@ pub fn parse_csv_within(text: &str, max_rows: usize) -> CsvImport {
         columns: &columns,
         mark,
     };
+    let mut ids = crate::ids::SeenIds::with_capacity(rows.len(), 8 * rows.len());
     for record in &rows {
         match read_row(record, &ctx) {
             Ok(member) => {
-                // A linear search: a hash set would add its code to the wasm.
-                if !out.members.iter().any(|m| m.id == member.id) {
+                if ids.insert(&member.id) {
                     out.members.push(member);
                     out.member_lines.push(record.line);
                 } else {

@@ -239,6 +239,64 @@ pub const ANGLE_CONNECTION: &[Key] = &[
     ),
 ];
 
+const SWAY: &[Opt] = &[opt("true", "sidesway uninhibited"), opt("false", "braced")];
+
+/// `frame_major`'s keys, named by their CSV columns (all three or none).
+pub const FRAME_MAJOR: &[Key] = &[
+    choice(
+        "frame_major_sway",
+        Value::Bool,
+        Required,
+        SWAY,
+        "frame, major axis",
+        "frame sway, major axis",
+    ),
+    key(
+        "frame_major_g_a",
+        Value::Number(NonNegative),
+        Required,
+        "G at end A, major axis",
+        "G_A,y",
+        "sum of EI/L of the columns over that of the beams at end A",
+    ),
+    key(
+        "frame_major_g_b",
+        Value::Number(NonNegative),
+        Required,
+        "G at end B, major axis",
+        "G_B,y",
+        "sum of EI/L of the columns over that of the beams at end B",
+    ),
+];
+
+/// `frame_minor`'s keys, named by their CSV columns (all three or none).
+pub const FRAME_MINOR: &[Key] = &[
+    choice(
+        "frame_minor_sway",
+        Value::Bool,
+        Required,
+        SWAY,
+        "frame, minor axis",
+        "frame sway, minor axis",
+    ),
+    key(
+        "frame_minor_g_a",
+        Value::Number(NonNegative),
+        Required,
+        "G at end A, minor axis",
+        "G_A,z",
+        "sum of EI/L of the columns over that of the beams at end A",
+    ),
+    key(
+        "frame_minor_g_b",
+        Value::Number(NonNegative),
+        Required,
+        "G at end B, minor axis",
+        "G_B,z",
+        "sum of EI/L of the columns over that of the beams at end B",
+    ),
+];
+
 /// The member's keys, in the order of the working (the calc sheet's
 /// order): the method and its factors, the lengths and loads, then the
 /// section and the material.
@@ -392,7 +450,10 @@ pub const MEMBER: &[Key] = &[
     ),
     key(
         "frame_major",
-        Value::Structure,
+        Value::Group {
+            prefix: "frame_major",
+            keys: FRAME_MAJOR,
+        },
         Absent(""),
         "column in a frame, major axis",
         "",
@@ -400,7 +461,10 @@ pub const MEMBER: &[Key] = &[
     ),
     key(
         "frame_minor",
-        Value::Structure,
+        Value::Group {
+            prefix: "frame_minor",
+            keys: FRAME_MINOR,
+        },
         Absent(""),
         "column in a frame, minor axis",
         "",
