@@ -5,7 +5,10 @@
 //! uses it: the equal-area line of a section (`section::geometry`), the
 //! alignment-chart equations (`buckling::chart`), the general
 //! flexural-torsional cubic (`stability::torsional`), the secant formula
-//! (`method::secant`) and the reach of a check (`check::reach`).
+//! (`method::secant`) and the reach of a check (`check::reach`). Where only
+//! a yes or no is known (the longest length that passes, `solve`; the
+//! count of eigenvalues below a load, `buckling::column`), [`edge`] bisects
+//! to the edge.
 //!
 //! Hand-written rather than taken from a crate: the general-purpose root
 //! crates (`roots`, `argmin`) offer Newton without a bracket or a bracket
@@ -84,6 +87,37 @@ pub fn newton_bisect<F: FnMut(f64) -> (f64, f64)>(
     x
 }
 
+/// The edge of a property that holds at `lo` and fails at `hi`, where
+/// only a yes or no is known (a check that passes or fails, a count of
+/// eigenvalues that is zero or not): bisection at `mid(lo, hi)` (the
+/// arithmetic or the geometric mean) until `done(lo, hi)` or the mid-point
+/// no longer lies strictly inside. Returns the last bracket: the property
+/// holds at its lower end and fails at its upper end.
+pub fn edge(
+    lo: f64,
+    hi: f64,
+    mid: impl Fn(f64, f64) -> f64,
+    done: impl Fn(f64, f64) -> bool,
+    mut holds: impl FnMut(f64) -> bool,
+) -> (f64, f64) {
+    let (mut lo, mut hi) = (lo, hi);
+    for _ in 0..200 {
+        if done(lo, hi) {
+            break;
+        }
+        let m = mid(lo, hi);
+        if !(m > lo && m < hi) {
+            break;
+        }
+        if holds(m) {
+            lo = m;
+        } else {
+            hi = m;
+        }
+    }
+    (lo, hi)
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -143,6 +177,35 @@ mod tests {
             std::f64::consts::E,
             1e-14,
         );
+    }
+
+    #[test]
+    fn edges_of_a_yes_or_no() {
+        // x^2 <= 2 holds up to sqrt 2: arithmetic means.
+        let mut calls = 0;
+        let (lo, hi) = edge(
+            0.0,
+            2.0,
+            |a, b| 0.5 * (a + b),
+            |a, b| b - a <= 1e-13,
+            |x| {
+                calls += 1;
+                x * x <= 2.0
+            },
+        );
+        assert!(lo * lo <= 2.0 && hi * hi > 2.0);
+        close(lo, std::f64::consts::SQRT_2, 1e-13);
+        assert!(calls <= 45, "{calls}");
+        // Geometric means over six orders of magnitude: 10^x <= 1234.5.
+        let (lo, hi) = edge(
+            1.0,
+            1e6,
+            |a, b| (a * b).sqrt(),
+            |a, b| b / a - 1.0 <= 1e-12,
+            |x| x <= 1234.5,
+        );
+        assert!(lo <= 1234.5 && hi > 1234.5);
+        close(lo, 1234.5, 1234.5 * 1e-12);
     }
 
     #[test]
