@@ -208,6 +208,21 @@ pub fn given_modulus(input: &Input<'_>, axis: Axis, plastic: bool) -> Result<Opt
     }
 }
 
+/// The section modulus about `axis`, plastic or elastic: a given section's
+/// typed one (refused naming the key when missing), else the computed one.
+pub fn modulus(input: &Input<'_>, axis: Axis, plastic: bool) -> Result<f64> {
+    let p = &input.section.props;
+    Ok(match given_modulus(input, axis, plastic)? {
+        Some(w) => w,
+        None => match (axis, plastic) {
+            (Axis::Major, true) => p.w_pl_major_mm3,
+            (Axis::Major, false) => p.w_el_major_mm3,
+            (Axis::Minor, true) => p.w_pl_minor_mm3,
+            (Axis::Minor, false) => p.w_el_minor_mm3,
+        },
+    })
+}
+
 /// Whether the length between lateral restraints is the member length, so
 /// the member file's moment diagram is the diagram of the unbraced segment.
 pub fn diagram_is_segment(input: &Input<'_>) -> bool {
