@@ -31,22 +31,17 @@
 use serde_json::{json, Value};
 use strutline_core::trace::Scope;
 use strutline_core::{check_member, CheckResult};
-use strutline_validation::{assert_close, member_from_json};
+use strutline_validation::{assert_close, member_with};
 
 /// Hand working carried to six significant figures.
 const HAND: f64 = 5e-6;
 
 fn beam_column(section: Value, grade: &str, length: f64, n: f64, extra: Value) -> CheckResult {
-    let mut m = json!({
+    let m = json!({
         "id": "TB1", "section": section, "material": {"grade": grade},
         "length_mm": length, "axial_kn": n, "method": "en1995-1-1"
     });
-    if let (Some(o), Some(e)) = (m.as_object_mut(), extra.as_object()) {
-        for (k, v) in e {
-            o.insert(k.clone(), v.clone());
-        }
-    }
-    check_member(&member_from_json(m)).unwrap()
+    check_member(&member_with(m, extra)).unwrap()
 }
 
 fn eq(r: &CheckResult, name: &str) -> f64 {

@@ -23,24 +23,19 @@
 
 use serde_json::{json, Value};
 use strutline_core::{check_member, Error, Member, Mode};
-use strutline_validation::{assert_close, member_from_json};
+use strutline_validation::{assert_close, member_with};
 
 /// Two root finders on the same closed form.
 const CLOSED_FORM: f64 = 1e-9;
 
 fn bar(n: f64, extra: Value) -> Member {
-    let mut m = json!({
+    let m = json!({
         "id": "S1",
         "section": {"kind": "rect", "depth_mm": 120.0, "width_mm": 60.0},
         "material": {"fy_mpa": 250.0, "e_mpa": 200000.0},
         "length_mm": 2000.0, "axial_kn": n, "method": "secant"
     });
-    if let (Some(o), Some(e)) = (m.as_object_mut(), extra.as_object()) {
-        for (k, v) in e {
-            o.insert(k.clone(), v.clone());
-        }
-    }
-    member_from_json(m)
+    member_with(m, extra)
 }
 
 #[test]
