@@ -102,14 +102,12 @@ fn scale(method: Method, section: &Value, material: &Value, length: f64) -> (f64
     let n_rd = check_member(&plain).unwrap().resistance_kn;
     let (my, mz) = match method {
         // The first-principles methods give no bending resistance: their
-        // scale is the moment that doubles the eccentricity's effect.
+        // scale is the moment whose eccentricity M / N_Rd is the minor radius
+        // of gyration (half that about the minor axis), enough to cross
+        // utilisation 1 in the sweeps.
         Method::Euler | Method::PerryRobertson | Method::Secant => {
-            let r = check_member(&plain).unwrap();
-            let w = r.section.i_minor_mm4 / r.section.r_minor_mm.max(1.0);
-            (
-                n_rd * w / r.section.area_mm2 / 1000.0,
-                n_rd * w / r.section.area_mm2 / 2000.0,
-            )
+            let r = check_member(&plain).unwrap().section.r_minor_mm;
+            (n_rd * r / 1000.0, n_rd * r / 2000.0)
         }
         _ => {
             let bent = member(method, section, material, length, 0.0, (1.0, 1.0));
