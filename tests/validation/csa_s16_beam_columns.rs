@@ -194,6 +194,8 @@ fn double_curvature_unbraced_13_8_2_c_uses_13_6() {
         PHI * mu
     } / 1e6;
     assert_close(step(&r, "M_rx (13.6)"), mr6, HAND, "M_rx of 13.6 (kNm)");
+    // The same value as the bending side's resistance (one formula, one class).
+    assert_close(b.major.resistance_knm, mr6, HAND, "bending side's M_r");
     assert_close(
         eq(&r, "13.8.2(c)"),
         0.26560030195522694 + 0.85 * 120.0 / mr6,
