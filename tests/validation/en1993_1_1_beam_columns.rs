@@ -519,6 +519,61 @@ fn class_4_web_uses_the_effective_area() {
 }
 
 #[test]
+fn chs_larger_k_zz_row_and_reduced_moment() {
+    // CHS 219.1 x 8, hot-finished (curve a), Class 1 (d/t = 27.4 <= 50
+    // eps^2 = 33.1), L = 4 m, N_Ed = 800 kN; M_y 40 kNm uniform (C_my = 1),
+    // M_z from a point load at mid-length, 20 kNm (alpha_h = 0: C_mz = 0.90).
+    // Table B.1 names no row for k_zz of a CHS: the larger of the I and RHS
+    // rows. A = pi/4 (D^2 - d^2) = 5305.52 mm2, W_pl = (D^3 - d^3)/6 = 356
+    // 676 mm3, lambda = 0.70091, chi = 0.84731, n = 0.50129: k_yy = 1.25110,
+    // k_zz = 1.26175 (the I row). 6.2.9: M_N,Rd = M_pl (1 - n^1.7) (common
+    // practice, recalled from memory), alpha = beta = 2 (6.2.9.1(6)).
+    let m = member(json!({
+        "section": {"kind": "chs", "diameter_mm": 219.1, "wall_mm": 8, "make": "hot-finished"},
+        "length_mm": 4000, "axial_kn": 800,
+        "m_major_a_knm": 40, "m_major_b_knm": 40, "m_minor_span_knm": 20, "span_load_minor": "point"
+    }));
+    let r = check_member(&m).unwrap();
+    assert_close(
+        working(&r, "C_mz"),
+        0.9,
+        TABLE,
+        "C_mz, Table B.3 point load",
+    );
+    assert_close(
+        working(&r, "k_yy"),
+        1.2510992883937073,
+        HAND,
+        "k_yy, Table B.1",
+    );
+    assert_close(
+        working(&r, "k_zz"),
+        1.2617464747524456,
+        HAND,
+        "k_zz, larger row of Table B.1",
+    );
+    assert_close(eq(&r, "6.61"), 1.0160973556741968, HAND, "Eq. 6.61");
+    assert_close(eq(&r, "6.62"), 0.9377242018389415, HAND, "Eq. 6.62");
+    assert_close(eq(&r, "6.2.9"), 0.21218777873139744, HAND, "Eq. 6.41, CHS");
+    assert!(!r.passes);
+}
+
+#[test]
+fn class_4_channel_is_refused_naming_the_key() {
+    // Channel 300x90x12x6: web c/t = 276/6 = 46 > 42 eps = 34.2, Class 4 in
+    // compression; its effective centroid shifts (e_N), which is not worked.
+    let m = member(json!({
+        "id": "CH4", "section": {"kind": "channel", "depth_mm": 300, "width_mm": 90, "flange_mm": 12, "web_mm": 6},
+        "length_mm": 3000, "axial_kn": 200, "m_major_a_knm": 20, "m_major_b_knm": 20
+    }));
+    let e = check_member(&m).unwrap_err().to_string();
+    assert!(
+        e.contains("CH4") && e.contains("axial_kn") && e.contains("Class 4"),
+        "{e}"
+    );
+}
+
+#[test]
 fn checks_are_named_and_every_one_must_pass() {
     let m = member(json!({
         "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 4000, "axial_kn": 1000,
