@@ -574,6 +574,55 @@ fn class_4_channel_is_refused_naming_the_key() {
 }
 
 #[test]
+fn typed_properties_take_the_larger_k_zy() {
+    // A given section (the plates unknown: Class 3, elastic moduli) free to
+    // twist: whether it is susceptible to torsional deformations is not
+    // known, so k_zy is the larger of Table B.1 (0.8 k_yy, Class 3) and
+    // Table B.2 (Class 3 row), both worked here from the working's values.
+    let m = member(json!({
+        "section": {"kind": "given", "area_mm2": 14282, "i_major_mm4": 241.9e6, "i_minor_mm4": 85.5e6,
+                    "torsion_mm4": 1.46e6, "warping_mm6": 1.69e12,
+                    "w_el_major_mm3": 1.61e6, "w_el_minor_mm3": 0.57e6},
+        "length_mm": 5000, "axial_kn": 900, "m_major_a_knm": 120, "m_major_b_knm": 120
+    }));
+    let r = check_member(&m).unwrap();
+    assert_close(
+        working(&r, "class"),
+        3.0,
+        TABLE,
+        "class of typed properties",
+    );
+    let (kyy, nz, lz, cmlt) = (
+        working(&r, "k_yy"),
+        working(&r, "n_z"),
+        working(&r, "lambda_bar_z"),
+        working(&r, "C_mLT"),
+    );
+    let expected = (0.8 * kyy).max(k_zy_b2(lz, nz, cmlt, false));
+    assert_close(
+        working(&r, "k_zy"),
+        expected,
+        HAND,
+        "k_zy, larger of Tables B.1 and B.2",
+    );
+}
+
+#[test]
+fn without_axial_load_the_bending_result_stands() {
+    let m = member(json!({
+        "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 5000, "axial_kn": 0,
+        "m_major_a_knm": 150, "m_major_b_knm": 40, "m_minor_span_knm": 20
+    }));
+    let r = check_member(&m).unwrap();
+    let b = r.bending.unwrap();
+    assert!(r.interaction.is_empty());
+    assert_eq!(
+        r.utilisation,
+        b.major.utilisation().max(b.minor.utilisation())
+    );
+}
+
+#[test]
 fn checks_are_named_and_every_one_must_pass() {
     let m = member(json!({
         "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 4000, "axial_kn": 1000,

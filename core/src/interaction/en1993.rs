@@ -2206,3 +2206,57 @@ fn section_check(ctx: &Context<'_>, b: &Basis, trace: &mut Trace) -> f64 {
         u
     }
 }
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    fn diagram(a: f64, b: f64, span: f64, load: SpanLoad) -> Moments {
+        Moments {
+            a_knm: a,
+            b_knm: b,
+            span_knm: span,
+            span_load: load,
+        }
+    }
+
+    #[test]
+    fn deflection_of_the_standard_diagrams() {
+        // Mid-span deflections of a simple span (common mechanics), times
+        // E I / L^2: uniform moment M L^2 / (8 E I); uniform load 5 M L^2 /
+        // (48 E I) with M = w L^2 / 8; point load M L^2 / (12 E I) with M = P L / 4.
+        let close = |a: f64, b: f64| (a - b).abs() < 1e-12;
+        let u = SpanLoad::Uniform;
+        assert!(close(deflection_eil2(&diagram(1.0, 1.0, 0.0, u)), 0.125));
+        assert!(close(
+            deflection_eil2(&diagram(0.0, 0.0, 1.0, u)),
+            5.0 / 48.0
+        ));
+        assert!(close(
+            deflection_eil2(&diagram(0.0, 0.0, 1.0, SpanLoad::Point)),
+            1.0 / 12.0
+        ));
+        // Antisymmetric end moments M, -M: delta E I / L^2 = (s - 3s^2 +
+        // 2s^3)/6, largest at s = 1/2 -/+ sqrt(3)/6, M L^2 / (36 sqrt(3) E I)
+        // (worked by differentiation); the 201 points find it to 1e-6.
+        let d = deflection_eil2(&diagram(1.0, -1.0, 0.0, u));
+        assert!((d - 1.0 / (36.0 * 3f64.sqrt())).abs() < 1e-6, "{d}");
+    }
+
+    #[test]
+    fn the_largest_c_m0_bounds_the_table() {
+        for n in [0.0, 0.2, 0.5, 0.9] {
+            let top = c_m0_largest(n);
+            for m in [
+                diagram(1.0, 0.5, 0.0, SpanLoad::Uniform),
+                diagram(1.0, -1.0, 0.0, SpanLoad::Uniform),
+                diagram(0.0, 0.0, 1.0, SpanLoad::Uniform),
+                diagram(0.0, 0.0, 1.0, SpanLoad::Point),
+                diagram(1.0, -0.4, 0.8, SpanLoad::Uniform),
+                diagram(-0.3, 0.2, 1.0, SpanLoad::Point),
+            ] {
+                assert!(c_m0(&m, n).0 <= top + 1e-12);
+            }
+        }
+    }
+}
