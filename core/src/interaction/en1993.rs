@@ -736,7 +736,9 @@ fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
                 trace,
                 S,
                 "C_my",
-                "equivalent uniform moment factor about y-y, from the member's diagram",
+                "equivalent uniform moment factor about y-y, from the member's diagram (with span \
+                 load, M_s read at mid-length and at a uniform load's turning point: the larger \
+                 C_m, the safe reading)",
                 c,
                 "-",
                 "EN 1993-1-1 Table B.3 (recalled from memory)"
@@ -745,7 +747,9 @@ fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
                 trace,
                 S,
                 "C_mz",
-                "equivalent uniform moment factor about z-z, from the member's diagram",
+                "equivalent uniform moment factor about z-z, from the member's diagram (with span \
+                 load, M_s read at mid-length and at a uniform load's turning point: the larger \
+                 C_m, the safe reading)",
                 c,
                 "-",
                 "EN 1993-1-1 Table B.3 (recalled from memory)"
