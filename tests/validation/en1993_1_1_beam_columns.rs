@@ -623,6 +623,51 @@ fn without_axial_load_the_bending_result_stands() {
 }
 
 #[test]
+fn table_b2_stocky_branch() {
+    // L = 2 m: lambda_z = 0.338 < 0.4, so Table B.2 (Class 1-2) gives k_zy =
+    // min(0.6 + lambda_z, 1 - 0.1 lambda_z n_z / (C_mLT - 0.25)).
+    let m = member(json!({
+        "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 2000, "axial_kn": 2500,
+        "m_major_a_knm": 200, "m_major_b_knm": 100
+    }));
+    let r = check_member(&m).unwrap();
+    let p = welded_i_props(300.0, 300.0, 19.0, 11.0);
+    let lz = lambda(p.a, p.iz, 2000.0);
+    assert!(lz < 0.4);
+    assert_close(working(&r, "lambda_bar_z"), lz, HAND, "lambda_z, Eq. 6.50");
+    let nz = 2500.0 / (chi(lz, 0.49) * p.a * FY / 1000.0);
+    // psi = 0.5: C_mLT = 0.8.
+    let expected = (0.6 + lz).min(1.0 - 0.1 * lz * nz / (0.8 - 0.25));
+    assert_close(
+        working(&r, "k_zy"),
+        expected,
+        HAND,
+        "k_zy, Table B.2 lambda_z < 0.4",
+    );
+}
+
+#[test]
+fn axes_follow_the_principal_axes_not_the_typed_depth() {
+    // The RHS of the second test typed wider than deep (depth 150, width
+    // 250): its major principal axis is the same physical axis, so with the
+    // same major and minor moments every check is the same (6.39/6.40 take
+    // h as the wall across the major axis).
+    let deep = json!({"kind": "rhs", "depth_mm": 250, "width_mm": 150, "wall_mm": 10, "make": "hot-finished"});
+    let wide = json!({"kind": "rhs", "depth_mm": 150, "width_mm": 250, "wall_mm": 10, "make": "hot-finished"});
+    let run = |section: serde_json::Value| {
+        check_member(&member(json!({
+            "section": section, "length_mm": 5000, "axial_kn": 900, "lt_restrained": true,
+            "m_major_a_knm": 120, "m_major_b_knm": 60, "m_minor_a_knm": 40, "m_minor_b_knm": -40
+        })))
+        .unwrap()
+    };
+    let (a, b) = (run(deep), run(wide));
+    for name in ["6.2.9", "6.61", "6.62"] {
+        assert_close(eq(&b, name), eq(&a, name), HAND, name);
+    }
+}
+
+#[test]
 fn checks_are_named_and_every_one_must_pass() {
     let m = member(json!({
         "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 4000, "axial_kn": 1000,
