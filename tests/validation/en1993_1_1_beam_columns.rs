@@ -668,6 +668,24 @@ fn axes_follow_the_principal_axes_not_the_typed_depth() {
 }
 
 #[test]
+fn annex_a_at_the_elastic_critical_load_never_passes() {
+    // N_Ed above N_cr,z (1 - N_Ed/N_cr,z < 0): Table A.1 has no finite value;
+    // both equations are infinite and the member fails, without an error.
+    let m = member(json!({
+        "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 12000, "axial_kn": 1400,
+        "interaction_annex": "A", "lt_restrained": true,
+        "m_major_a_knm": 10, "m_major_b_knm": 10
+    }));
+    let r = check_member(&m).unwrap();
+    assert!(r
+        .modes
+        .iter()
+        .any(|m| m.critical_kn > 0.0 && m.critical_kn < 1400.0));
+    assert!(eq(&r, "6.61").is_infinite() && eq(&r, "6.62").is_infinite());
+    assert!(!r.passes);
+}
+
+#[test]
 fn checks_are_named_and_every_one_must_pass() {
     let m = member(json!({
         "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 4000, "axial_kn": 1000,
