@@ -139,7 +139,7 @@ fn feet_and_inches() {
 
 #[test]
 fn typed_values_come_back_in_stored_units() {
-    let t = |text: &str, key: &str, system: UnitSystem| parse_typed(text, key, system, false);
+    let t = |text: &str, key: &str, system: UnitSystem| parse_typed(text, key, system);
     assert_eq!(t("3.6", "length_mm", UnitSystem::Si).unwrap(), 3600.0);
     assert_eq!(
         t("13'-6\"", "length_mm", UnitSystem::Us).unwrap(),
@@ -148,11 +148,12 @@ fn typed_values_come_back_in_stored_units() {
     assert_eq!(t("12", "length_mm", UnitSystem::Us).unwrap(), 12.0 * 304.8);
     assert_eq!(t("1/2\"", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
     assert_eq!(t("0.5", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
-    assert_eq!(t("1,250", "axial_kn", UnitSystem::Si).unwrap(), 1250.0);
-    assert_eq!(
-        parse_typed("1,250", "axial_kn", UnitSystem::Si, true).unwrap(),
-        1.25
-    );
+    // Rule 5: in a field a single mark is the decimal mark.
+    assert_eq!(t("1,250", "axial_kn", UnitSystem::Si).unwrap(), 1.25);
+    assert_eq!(t("1.250", "axial_kn", UnitSystem::Si).unwrap(), 1.25);
+    assert_eq!(t("1,250.5", "axial_kn", UnitSystem::Si).unwrap(), 1250.5);
+    assert_eq!(t("1.234,5", "axial_kn", UnitSystem::Si).unwrap(), 1234.5);
+    assert_eq!(t("1 250", "axial_kn", UnitSystem::Si).unwrap(), 1250.0);
     assert_eq!(
         t("50", "fy_mpa", UnitSystem::Us).unwrap(),
         units::ksi_to_mpa(50.0)
