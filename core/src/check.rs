@@ -5,6 +5,7 @@
 //! the working.
 
 pub mod buckle;
+pub mod reach;
 
 use serde::Serialize;
 
@@ -19,7 +20,19 @@ use crate::section::{Family, Properties, Section};
 use crate::stability;
 use crate::trace::Trace;
 
+/// `governing_check` of a member with axial load and moments whose
+/// method's interaction equations are not worked: never passed.
+pub const NOT_CHECKED: &str = "combined-not-checked";
+
 impl CheckResult {
+    /// Whether the result is within a utilisation `limit` as
+    /// [`CheckResult::passes`] is within 1: the utilisation at most `limit`,
+    /// the code's limits met, and not a beam-column whose interaction was
+    /// not worked ([`NOT_CHECKED`]). What the sizing search accepts.
+    pub fn within(&self, limit: f64) -> bool {
+        self.utilisation <= limit && self.within_limits() && self.governing_check != NOT_CHECKED
+    }
+
     /// Whether the member meets the limits its code sets apart from the
     /// load: CSA S16-19 10.4.2.1 (the slenderness ratio of a compression
     /// member shall not exceed 200). [`CheckResult::passes`] includes it.
@@ -365,7 +378,23 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     };
     let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
-        None => (axial, governing.mode.key(), axial <= 1.0),
+        // The secant method's moments are the load's eccentricity: its one
+        // check `secant` (never above the axial utilisation, which it is
+        // about the moment's axis).
+        None => {
+            match interaction::secant::check(method, input, &modes, &mut trace).map_err(wrap)? {
+                Some(c) => {
+                    checks.push(c);
+                    let (u, name) = if c.utilisation >= axial {
+                        (c.utilisation, c.check)
+                    } else {
+                        (axial, governing.mode.key())
+                    };
+                    (u, name, u <= 1.0)
+                }
+                None => (axial, governing.mode.key(), axial <= 1.0),
+            }
+        }
         Some(b) => {
             let (um, un) = (b.major.utilisation(), b.minor.utilisation());
             let (ub, which) = if um >= un {
@@ -410,7 +439,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
                              member is not passed: its utilisation is the plain sum of the axial \
                              and the two bending utilisations, which is not a code check",
                         ));
-                        (axial + um + un, "combined-not-checked", false)
+                        (axial + um + un, NOT_CHECKED, false)
                     }
                 }
             } else {

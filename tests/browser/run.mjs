@@ -9,6 +9,7 @@ import assert from "node:assert/strict";
 import { register as registerPicker } from "./picker.mjs";
 import { register as registerListTools } from "./listtools.mjs";
 import { register as registerTablet } from "./tablet.mjs";
+import { register as registerBeamColumn } from "./beamcolumn.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -689,6 +690,9 @@ registerListTools(test, { withApp, open, OUT });
 
 // The tablet workspace: result and chart in view while editing (tests/browser/tablet.mjs).
 registerTablet(test, { withApp, open, OUT });
+
+// A beam-column on its interaction chart (tests/browser/beamcolumn.mjs).
+registerBeamColumn(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

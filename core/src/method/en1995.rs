@@ -88,8 +88,12 @@ fn duration_label(d: LoadDuration, given_sc: bool, given_d: bool) -> Sym {
     }
 }
 
-/// The design strength f_c,0,d and its factors (k_mod, gamma_M, whether gamma_M was given).
-fn design_strength(input: &Input<'_>, kind: TimberKind, fc0k: f64) -> (f64, f64, f64, bool) {
+/// The design strength f_c,0,d and its factors (k_mod, gamma_M, whether
+/// gamma_M was given): k_mod of Table 3.1 for the member's service class
+/// and load duration (defaults 1 and medium-term), gamma_M of Table 2.3 or
+/// `gamma_m1`. The bending and the interaction of EN 1995-1-1 take k_mod
+/// and gamma_M from here.
+pub fn design_strength(input: &Input<'_>, kind: TimberKind, fc0k: f64) -> (f64, f64, f64, bool) {
     let sc = input.member.service_class.unwrap_or(1);
     let d = input.member.load_duration.unwrap_or(LoadDuration::Medium);
     let km = k_mod(sc, d);
