@@ -9,6 +9,7 @@ import assert from "node:assert/strict";
 import { register as registerPicker } from "./picker.mjs";
 import { register as registerListTools } from "./listtools.mjs";
 import { register as registerTablet } from "./tablet.mjs";
+import { register as registerBuckling } from "./buckling.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -632,6 +633,12 @@ test("accessibility-axe", async () => {
     await page.locator("[data-testid=add-member]").first().click();
     await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
     serious.push(...(await check("editing a new member")));
+    // And with the column model open, drawn and a brace added.
+    await page.locator("[data-testid=cm-toggle]").click();
+    await page.locator("[data-testid=cm-canvas][data-shapes='2']").waitFor({ timeout: 10_000 });
+    await page.locator("[data-testid=cm-add-brace]").click();
+    await page.locator("[data-testid=cm-brace-0]").waitFor();
+    serious.push(...(await check("with the column model open")));
     assert.deepEqual(serious, [], "serious or critical accessibility violations");
   }, { bypassCSP: true });
 });
@@ -689,6 +696,8 @@ registerListTools(test, { withApp, open, OUT });
 
 // The tablet workspace: result and chart in view while editing (tests/browser/tablet.mjs).
 registerTablet(test, { withApp, open, OUT });
+// Buckling lengths from the real member: the column model and frame ends.
+registerBuckling(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

@@ -1,5 +1,8 @@
-//! The capacity envelope chart: its data (pure, tested on the host) and
-//! its drawing on a canvas with plotters.
+//! The charts, each with its data worked out without drawing (tested on
+//! the host) and a `draw(...) -> Result` on a canvas with plotters: the
+//! capacity envelope (`data`, `envelope`) and the column of a buckling
+//! model with its buckled shapes (`column`).
 
+pub mod column;
 pub mod data;
 pub mod envelope;
