@@ -31,12 +31,13 @@ fn rejected_json(r: &Rejected<'_>) -> Value {
     match &r.why {
         Refusal::Exceeds {
             utilisation,
-            governing,
+            governing_check,
+            ..
         } => json!({
             "designation": r.entry.designation,
             "mass_kg_per_m": r.entry.mass_kg_per_m,
             "utilisation": utilisation,
-            "governing": governing.key(),
+            "governing": governing_check,
         }),
         Refusal::Error(e) => json!({
             "designation": r.entry.designation,
@@ -57,7 +58,7 @@ fn result_json(r: &SizingResult<'_>) -> Value {
         put(&mut v, "designation", json!(c.entry.designation));
         put(&mut v, "mass_kg_per_m", json!(c.entry.mass_kg_per_m));
         put(&mut v, "utilisation", json!(c.utilisation));
-        put(&mut v, "governing", json!(c.governing.key()));
+        put(&mut v, "governing", json!(c.governing_check));
     }
     if let Some(p) = &r.problem {
         put(&mut v, "problem", json!(p.to_string()));
@@ -69,12 +70,11 @@ fn why(r: &Rejected<'_>) -> String {
     match &r.why {
         Refusal::Exceeds {
             utilisation,
-            governing,
+            governing_check,
+            ..
         } => format!(
-            "{} ({:.1} kg/m) at {utilisation:.3}, {}",
-            r.entry.designation,
-            r.entry.mass_kg_per_m,
-            governing.key()
+            "{} ({:.1} kg/m) at {utilisation:.3}, {governing_check}",
+            r.entry.designation, r.entry.mass_kg_per_m,
         ),
         Refusal::Error(e) => format!("{} refused: {e}", r.entry.designation),
     }
@@ -110,7 +110,7 @@ fn table(results: &[SizingResult<'_>]) -> String {
                 c.entry.designation,
                 c.entry.mass_kg_per_m,
                 c.utilisation,
-                c.governing.key()
+                c.governing_check
             )),
             None => out.push_str(&format!(
                 "{:<id_w$}  {:<name_w$}  {:>7}  {:>11}  {:<18}  heaviest: {next}\n",

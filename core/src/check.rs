@@ -5,6 +5,7 @@
 //! the working.
 
 pub mod buckle;
+pub mod reach;
 
 use serde::Serialize;
 
@@ -19,7 +20,19 @@ use crate::section::{Family, Properties, Section};
 use crate::stability;
 use crate::trace::Trace;
 
+/// `governing_check` of a member with axial load and moments whose
+/// method's interaction equations are not worked: never passed.
+pub const NOT_CHECKED: &str = "combined-not-checked";
+
 impl CheckResult {
+    /// Whether the result is within a utilisation `limit` as
+    /// [`CheckResult::passes`] is within 1: the utilisation at most `limit`,
+    /// the code's limits met, and not a beam-column whose interaction was
+    /// not worked ([`NOT_CHECKED`]). What the sizing search accepts.
+    pub fn within(&self, limit: f64) -> bool {
+        self.utilisation <= limit && self.within_limits() && self.governing_check != NOT_CHECKED
+    }
+
     /// Whether the member meets the limits its code sets apart from the
     /// load: CSA S16-19 10.4.2.1 (the slenderness ratio of a compression
     /// member shall not exceed 200). [`CheckResult::passes`] includes it.
@@ -87,13 +100,16 @@ pub struct CheckResult {
     /// Whether the design load is within the resistance (utilisation <= 1).
     pub passes: bool,
     /// Design load over design resistance: the axial utilisation, or with
-    /// moments the largest of the axial and bending utilisations (with both
-    /// axial load and moments, their sum, and the member does not pass
-    /// until the beam-column interaction exists: see `governing_check`).
+    /// moments the largest of the axial, bending and interaction
+    /// utilisations (under a method whose interaction is not in this build,
+    /// the plain sum of the axial and bending ones, and the member does not
+    /// pass: see `governing_check`).
     pub utilisation: f64,
     /// What sets the utilisation: `"bending-major"`, `"bending-minor"`, the
-    /// governing axial mode's key, or `"combined-not-checked"` for a member
-    /// with both axial load and moments.
+    /// governing axial mode's key, an interaction equation's name
+    /// (`"6.62"`, `"6.24"`, `"secant"`, ...), or `"combined-not-checked"`
+    /// for a member with both axial load and moments under a method whose
+    /// interaction is not in this build.
     pub governing_check: &'static str,
     /// Design resistance of the governing mode, kN.
     pub resistance_kn: f64,
@@ -314,7 +330,8 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     }
     // A beam (no axial load, some moment) is checked in bending even where
     // the code gives no axial resistance: its axial modes then report 0 kN.
-    let beam = m.axial_kn == 0.0 && m.has_moments();
+    let moments = m.has_moments();
+    let beam = m.axial_kn == 0.0 && moments;
     if assessment.refused && beam {
         modes.push(stability::refused_mode());
     } else if assessment.refused {
@@ -353,14 +370,34 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     } else {
         f64::INFINITY
     };
-    if m.has_moments() {
+    // Without moments there is no bending side (bending::check would say
+    // so itself, after looking for a moment again).
+    let bending = if moments {
         // The bending working: some 20 to 30 lines an axis.
         trace.reserve(64);
-    }
-    let bending = bending::check(method, input, &mut trace, &mut warnings).map_err(wrap)?;
+        bending::check(method, input, &mut trace, &mut warnings).map_err(wrap)?
+    } else {
+        None
+    };
     let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
-        None => (axial, governing.mode.key(), axial <= 1.0),
+        // The secant method's moments are the load's eccentricity: its one
+        // check `secant` (never above the axial utilisation, which it is
+        // about the moment's axis).
+        None => {
+            match interaction::secant::check(method, input, &modes, &mut trace).map_err(wrap)? {
+                Some(c) => {
+                    checks.push(c);
+                    let (u, name) = if c.utilisation >= axial {
+                        (c.utilisation, c.check)
+                    } else {
+                        (axial, governing.mode.key())
+                    };
+                    (u, name, u <= 1.0)
+                }
+                None => (axial, governing.mode.key(), axial <= 1.0),
+            }
+        }
         Some(b) => {
             let (um, un) = (b.major.utilisation(), b.minor.utilisation());
             let (ub, which) = if um >= un {
@@ -405,7 +442,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
                              member is not passed: its utilisation is the plain sum of the axial \
                              and the two bending utilisations, which is not a code check",
                         ));
-                        (axial + um + un, "combined-not-checked", false)
+                        (axial + um + un, NOT_CHECKED, false)
                     }
                 }
             } else {

@@ -28,6 +28,9 @@ pub enum Outcome {
         passes: bool,
         /// The governing mode.
         governing: Mode,
+        /// What sets the utilisation: the axial mode's key, a bending
+        /// check or an interaction equation (`CheckResult::governing_check`).
+        governing_check: &'static str,
         /// The method's cautions for this member.
         warnings: Vec<Warning>,
     },
@@ -85,6 +88,7 @@ pub fn compare(prepared: &Prepared) -> Vec<Comparison> {
                     utilisation: r.utilisation,
                     passes: r.passes,
                     governing: r.governing,
+                    governing_check: r.governing_check,
                     warnings: r.warnings,
                 },
                 Err(e) => match inner(e) {

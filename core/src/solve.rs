@@ -4,7 +4,9 @@
 //! - [`longest_length`]: the longest length at which the member still
 //!   carries its design load;
 //! - [`largest_load`]: the largest design load it carries at its length
-//!   (its design resistance), with the governing mode.
+//!   (its design resistance; with moments, the largest compression carried
+//!   with the moments held, [`crate::check::reach`]), with the governing
+//!   mode and check.
 //!
 //! # How lengths are scaled
 //!
@@ -82,6 +84,9 @@ pub struct LongestLength {
     pub resistance_kn: f64,
     /// The governing mode at the answer.
     pub governing: Mode,
+    /// What governs at the answer: the axial mode's key or, with moments,
+    /// the check that reaches 1 (an interaction equation, say).
+    pub governing_check: &'static str,
     /// What sets the length.
     pub limit: LengthLimit,
 }
@@ -122,6 +127,9 @@ pub struct LargestLoad {
     pub load_kn: f64,
     /// The governing mode.
     pub governing: Mode,
+    /// What governs at that load: the axial mode's key or, with moments,
+    /// the check that reaches 1 (an interaction equation, say).
+    pub governing_check: &'static str,
     /// The utilisation under the member's own design load.
     pub utilisation: f64,
     /// Resistance minus the member's design load, kN (negative when over).
@@ -294,25 +302,47 @@ pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswe
         utilisation: r.utilisation,
         resistance_kn: r.resistance_kn,
         governing: r.governing,
+        governing_check: r.governing_check,
         limit,
     }))
 }
 
 /// The largest design load `prepared` carries at its own length under
-/// `method`: its design resistance, with the governing mode.
+/// `method`: its design resistance, with the governing mode; for a member
+/// with moments, the largest compression at which the check (every
+/// interaction equation) still gives a utilisation of at most 1, the
+/// moments held as given.
 pub fn largest_load(prepared: &Prepared, method: Method) -> Result<LargestLoad> {
     let r = prepared.check_as(method, Working::Skipped)?;
     // A member beyond a code's slenderness limit (CSA S16-19 10.4.2.1)
     // carries no load under that code, whatever its resistance.
-    let load_kn = if r.within_limits() {
-        r.resistance_kn
+    let (load_kn, governing, governing_check) = if !r.within_limits() {
+        (0.0, r.governing, r.governing.key())
+    } else if prepared.member.has_moments() {
+        let work = std::cell::RefCell::new(prepared.clone());
+        let at = |n: f64| {
+            let mut w = work.try_borrow_mut().ok()?;
+            w.member.axial_kn = n;
+            w.check_as(method, Working::Skipped).ok()
+        };
+        let reach = crate::check::reach::largest(
+            |n| at(n).map(|r| r.utilisation),
+            r.resistance_kn.max(1e-3),
+            crate::member::MAX_AXIAL_KN,
+        );
+        let n = reach.value();
+        match at(n) {
+            Some(there) => (n, there.governing, there.governing_check),
+            None => (n, r.governing, r.governing_check),
+        }
     } else {
-        0.0
+        (r.resistance_kn, r.governing, r.governing.key())
     };
     Ok(LargestLoad {
         method,
         load_kn,
-        governing: r.governing,
+        governing,
+        governing_check,
         utilisation: r.utilisation,
         reserve_kn: load_kn - prepared.member.axial_kn,
     })
@@ -506,6 +536,26 @@ mod tests {
         let mut at = p.clone();
         at.member.axial_kn = l.load_kn;
         assert!((at.check_with(Method::Euler).unwrap().utilisation - 1.0).abs() < 1e-12);
+    }
+
+    #[test]
+    fn largest_load_under_moments_holds_the_moments_and_is_at_capacity() {
+        let mut m = member(rect(), 100.0, Method::En1993);
+        m.m_major_a_knm = 4.0;
+        m.m_major_b_knm = 4.0;
+        let p = Prepared::new(&m).unwrap();
+        let l = largest_load(&p, Method::En1993).unwrap();
+        let r = p.check_with(Method::En1993).unwrap();
+        // Less than the axial resistance alone, and exactly at capacity.
+        assert!(l.load_kn < r.resistance_kn, "{l:?}");
+        let mut at = p.clone();
+        at.member.axial_kn = l.load_kn;
+        let there = at.check_with(Method::En1993).unwrap();
+        assert!(
+            (there.utilisation - 1.0).abs() <= crate::check::reach::TOL,
+            "{there:?}"
+        );
+        assert_eq!(l.governing_check, there.governing_check);
     }
 
     #[test]

@@ -10,6 +10,7 @@ import { register as registerPicker } from "./picker.mjs";
 import { register as registerListTools } from "./listtools.mjs";
 import { register as registerTablet } from "./tablet.mjs";
 import { register as registerBuckling } from "./buckling.mjs";
+import { register as registerBeamColumn } from "./beamcolumn.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -698,6 +699,9 @@ registerListTools(test, { withApp, open, OUT });
 registerTablet(test, { withApp, open, OUT });
 // Buckling lengths from the real member: the column model and frame ends.
 registerBuckling(test, { withApp, open, OUT });
+
+// A beam-column on its interaction chart (tests/browser/beamcolumn.mjs).
+registerBeamColumn(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

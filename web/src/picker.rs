@@ -153,8 +153,9 @@ pub fn propose(members: &[Member], series: &str, shape: &str, limit: f64) -> Vec
             let mut fails: Vec<&Entry> = Vec::new();
             for e in pool.iter().copied() {
                 work.section = e.spec.clone();
-                let u = check_member(&work).map_or(f64::INFINITY, |r| r.utilisation);
-                if u <= limit {
+                // Within the limit as the check passes within 1: every
+                // interaction equation worked and met (CheckResult::within).
+                if check_member(&work).is_ok_and(|r| r.within(limit)) {
                     if chosen.is_none_or(|c| lighter(e, c)) {
                         chosen = Some(e);
                     }
@@ -170,7 +171,7 @@ pub fn propose(members: &[Member], series: &str, shape: &str, limit: f64) -> Vec
                 }
             }
             let text = |e: &Entry| match check_member(&sizing::with_entry(m, e)) {
-                Ok(r) => format!("{} ({})", fixed(r.utilisation, 3), r.governing.key()),
+                Ok(r) => format!("{} ({})", fixed(r.utilisation, 3), r.governing_check),
                 Err(err) => crate::fields::error_text(&err),
             };
             let chosen = chosen.map(|e| (e, text(e)));
@@ -242,11 +243,12 @@ pub fn rows_html(member: &Member, found: &[&Entry]) -> Html {
     );
     for e in found {
         let d = e.designation;
-        let u = utilisation_with(member, e);
-        let (class, shown) = match u {
-            Some(u) if u <= 1.0 => ("passes", format!("{} ✓", fixed(u, 3))),
-            Some(u) => ("", format!("{} ✗", fixed(u, 3))),
-            None => ("", "—".into()),
+        // Marked as passing only when the check passes (a beam-column
+        // whose interaction is not worked is never passed).
+        let (class, shown) = match check_member(&sizing::with_entry(member, e)) {
+            Ok(r) if r.passes => ("passes", format!("{} ✓", fixed(r.utilisation, 3))),
+            Ok(r) => ("", format!("{} ✗", fixed(r.utilisation, 3))),
+            Err(_) => ("", "—".into()),
         };
         html!(
             h,

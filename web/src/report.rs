@@ -9,8 +9,10 @@
 //! Values are shown in the chosen unit system ([`crate::units_view`]); the
 //! engine's values stay as computed.
 
+use strutline_core::bending::Axis;
 use strutline_core::check::Prepared;
 use strutline_core::compare::{self, Outcome};
+use strutline_core::envelope::interaction;
 use strutline_core::file::SheetHeader;
 use strutline_core::solve::{self, LengthAnswer, LengthLimit};
 use strutline_core::trace::Scope;
@@ -115,6 +117,9 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
             if let Some(b) = &r.bending {
                 h.push(&bending_html(b, sys));
             }
+            if !r.interaction.is_empty() {
+                h.push(&interaction_html(r));
+            }
             h.push(&warnings_in(r, &said));
         }
     }
@@ -154,6 +159,29 @@ pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> Ht
             working(a.reduction),
             a.moment_factor.map(working).unwrap_or_else(|| "—".into()),
             fixed(a.utilisation(), 3)
+        );
+    }
+    h.lit("</tbody></table></div>");
+    h
+}
+
+/// The interaction equations worked, one row each with its utilisation,
+/// the governing one marked.
+pub fn interaction_html(r: &CheckResult) -> Html {
+    let mut h = Html::from_lit(
+        "<div class=\"table-wrap\" tabindex=\"0\" role=\"region\" aria-label=\"Interaction\">\
+         <table class=\"modes\" data-testid=\"interaction\"><caption>Interaction</caption><thead><tr>\
+         <th scope=\"col\">check</th><th scope=\"col\">utilisation</th></tr></thead><tbody>",
+    );
+    for c in &r.interaction {
+        let governs = c.check == r.governing_check;
+        html!(
+            h,
+            "<tr{}><th scope=\"row\">{}{}</th><td class=\"num\">{}</td></tr>",
+            if governs { " class=\"governs\"" } else { "" },
+            crate::status::equation_name(c.check),
+            if governs { " (governs)" } else { "" },
+            fixed(c.utilisation, 3)
         );
     }
     h.lit("</tbody></table></div>");
@@ -293,7 +321,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
             Outcome::Checked {
                 resistance_kn,
                 utilisation,
-                governing,
+                governing_check,
                 ..
             } => html!(
                 h,
@@ -302,7 +330,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
                 if c.own { " (this member's)" } else { "" },
                 result_text(sys, "kN", *resistance_kn, 1),
                 fixed(*utilisation, 3),
-                governing.key(),
+                governing_check,
             ),
             Outcome::NotApplicable { reason } | Outcome::Refused { message: reason } => html!(
                 h,
@@ -328,7 +356,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
                 span_text(sys, f.lcr_major_mm),
                 span_text(sys, f.lcr_minor_mm),
                 fixed(f.utilisation, 3),
-                f.governing.key(),
+                f.governing_check,
             );
             if let LengthLimit::MethodRange { reason } = &f.limit {
                 html!(h, "; the method's range ends there: {}", reason);
@@ -353,9 +381,38 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
             h,
             "<li data-testid=\"largest-load\">Largest load at this length: <b>{}</b> (governs {}; reserve {})</li>",
             result_text(sys, "kN", l.load_kn, 1),
-            l.governing.key(),
+            l.governing_check,
             result_text(sys, "kN", l.reserve_kn, 1),
         );
+    }
+    // The largest moment about each loaded axis at N_Ed, the member's
+    // diagram scaled and the other axis' moment held.
+    for (axis, name, m) in [
+        (Axis::Major, "major", p.member.moments_major()),
+        (Axis::Minor, "minor", p.member.moments_minor()),
+    ] {
+        if m.is_zero() {
+            continue;
+        }
+        match interaction::largest_moment(p, method, axis) {
+            Ok(Some(knm)) => html!(
+                h,
+                "<li data-testid=\"largest-moment-{}\">Largest {}-axis moment at N_Ed: <b>{}</b> \
+                 (this member's diagram scaled by {}; the other axis' moment held)</li>",
+                name,
+                name,
+                result_text(sys, "kNm", knm, 1),
+                fixed(knm / m.max_abs_knm(), 3),
+            ),
+            Ok(None) => html!(
+                h,
+                "<li data-testid=\"largest-moment-{}\">No {}-axis moment is carried at N_Ed: the load \
+                 and the other axis' moment alone exceed the capacity.</li>",
+                name,
+                name
+            ),
+            Err(e) => html!(h, "<li>Largest {}-axis moment: {}</li>", name, fields::error_text(&e)),
+        }
     }
     h.lit("</ul></details>");
     h
@@ -403,7 +460,7 @@ pub fn sheet_html(
     title: &str,
     header: &SheetHeader,
     checks: &[std::sync::Arc<Checked>],
-    chart: Option<(&str, &str, &Html)>,
+    chart: Option<(&str, &str, &Html, &str)>,
     sys: UnitSystem,
 ) -> Html {
     let mut caution = Html::new();
@@ -483,6 +540,8 @@ pub fn sheet_html(
             );
         }
         h.lit("</tbody></table>");
+        // The moment diagrams as understood, beside the inputs they draw.
+        h.push(&crate::diagram::svg(&c.member, sys));
         if let Ok(r) = &c.outcome {
             h.lit("<h3>Section and material</h3>");
             h.push(&properties_html(r, sys));
@@ -493,13 +552,14 @@ pub fn sheet_html(
         if let Ok(r) = &c.outcome {
             h.push(&working_in(r, sys, &crate::print::speak));
         }
-        if let Some((_, url, legend)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
+        if let Some((_, url, legend, what)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
             html!(
                 h,
-                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Capacity envelope of member {}\">\
+                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Member {}: {}\">\
                  <ul class=\"chart-legend sheet-legend\">{}</ul>",
                 url,
                 id,
+                what,
                 legend
             );
         }
@@ -650,6 +710,55 @@ mod tests {
     }
 
     #[test]
+    fn a_beam_column_names_its_equations_its_largest_moment_and_draws_its_diagram() {
+        let mut m = demo::sample_member("BC1");
+        m.method = strutline_core::method::Method::En1993;
+        m.axial_kn = 40.0;
+        m.m_major_a_knm = 6.0;
+        m.m_major_b_knm = -3.0;
+        let c = Checked::new(&m);
+        let p = c.prepared.as_ref().unwrap();
+        // What if: the largest major-axis moment at N_Ed, as the engine's
+        // interaction curve gives it; no minor-axis line (no moment there).
+        let h = whatif_html(p, UnitSystem::Si).into_string();
+        let most = interaction::largest_moment(p, m.method, Axis::Major)
+            .unwrap()
+            .unwrap();
+        assert!(
+            h.contains(&format!("moment at N_Ed: <b>{:.1} kNm</b>", most)),
+            "{h}"
+        );
+        assert!(!h.contains("largest-moment-minor"));
+        // The verdict's interaction table names each equation, the
+        // governing one marked (entries set here as an equation would).
+        let mut r = c.outcome.clone().unwrap();
+        r.interaction = vec![
+            strutline_core::interaction::Check {
+                check: "6.61",
+                utilisation: 0.4,
+            },
+            strutline_core::interaction::Check {
+                check: "6.62",
+                utilisation: 0.7,
+            },
+        ];
+        r.governing_check = "6.62";
+        let t = interaction_html(&r).into_string();
+        assert!(t.contains("equation (6.62) (governs)"), "{t}");
+        assert!(t.contains("equation (6.61)</th>"), "{t}");
+        // The calc sheet draws the moment diagram.
+        let sheet = sheet_html(
+            "Yard",
+            &SheetHeader::default(),
+            &[Arc::new(c)],
+            None,
+            UnitSystem::Si,
+        )
+        .into_string();
+        assert!(sheet.contains("data-testid=\"moment-diagram\""), "{sheet}");
+    }
+
+    #[test]
     fn sheet_has_a_page_per_member_and_the_caution_on_each() {
         let cs: Vec<_> = ["A1", "A2", "A3"]
             .iter()
@@ -668,6 +777,7 @@ mod tests {
                 "A2",
                 "data:image/png;base64,AA",
                 &Html::from_lit("<li>Euler</li>"),
+                "Failure stress against slenderness",
             )),
             UnitSystem::Si,
         )

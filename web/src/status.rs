@@ -77,6 +77,9 @@ pub fn governing_text(r: &CheckResult) -> String {
         "combined-not-checked" => {
             return "axial load with moments: interaction not checked, not passed".into()
         }
+        name if r.interaction.iter().any(|c| c.check == name) => {
+            return format!("interaction, {}", equation_name(name));
+        }
         _ => {}
     }
     match r.governing {
@@ -85,6 +88,20 @@ pub fn governing_text(r: &CheckResult) -> String {
         Mode::Torsional => "torsional buckling".into(),
         Mode::FlexuralTorsional => "flexural-torsional buckling".into(),
         Mode::Section => "cross-section resistance".into(),
+    }
+}
+
+/// An interaction check's name as the code cites it: a clause
+/// ("6.2.9", "13.8.2(b)") or an equation ("(6.61)", "H1-1a").
+pub fn equation_name(name: &str) -> String {
+    if name == "secant" {
+        "the secant formula".into()
+    } else if name.starts_with('H') {
+        format!("equation {name}")
+    } else if name.contains('(') || name.matches('.').count() >= 2 {
+        format!("clause {name}")
+    } else {
+        format!("equation ({name})")
     }
 }
 
@@ -115,5 +132,30 @@ mod tests {
         let bad = strutline_core::check_member(&m);
         assert_eq!(status_text(&bad), "✎ fix input");
         assert_eq!(utilisation_text(&bad), "—");
+    }
+
+    #[test]
+    fn each_codes_interaction_names_read_as_the_code_cites_them() {
+        // The names are the issue's: EN 1993-1-1 6.2.9 (clause), (6.61)
+        // and (6.62) (equations); AISC 360-16 H1-1a; CSA S16-19 13.8.2(b)
+        // (clause); EN 1995-1-1 (6.23) (equation).
+        assert_eq!(equation_name("6.2.9"), "clause 6.2.9");
+        assert_eq!(equation_name("6.61"), "equation (6.61)");
+        assert_eq!(equation_name("H1-1a"), "equation H1-1a");
+        assert_eq!(equation_name("H2-1"), "equation H2-1");
+        assert_eq!(equation_name("13.8.2(b)"), "clause 13.8.2(b)");
+        assert_eq!(equation_name("6.23"), "equation (6.23)");
+        assert_eq!(equation_name("secant"), "the secant formula");
+        // And the verdict names it when an interaction check governs.
+        let mut m = demo::sample_member("T2");
+        m.method = strutline_core::method::Method::En1993;
+        m.m_major_a_knm = 5.0;
+        let mut r = strutline_core::check_member(&m).unwrap();
+        r.interaction = vec![strutline_core::interaction::Check {
+            check: "6.62",
+            utilisation: 0.8,
+        }];
+        r.governing_check = "6.62";
+        assert_eq!(governing_text(&r), "interaction, equation (6.62)");
     }
 }

@@ -658,11 +658,11 @@ pub fn parse_csv_within(text: &str, max_rows: usize) -> CsvImport {
         columns: &columns,
         mark,
     };
+    let mut ids = crate::ids::SeenIds::with_capacity(rows.len(), 8 * rows.len());
     for record in &rows {
         match read_row(record, &ctx) {
             Ok(member) => {
-                // A linear search: a hash set would add its code to the wasm.
-                if !out.members.iter().any(|m| m.id == member.id) {
+                if ids.insert(&member.id) {
                     out.members.push(member);
                     out.member_lines.push(record.line);
                 } else {

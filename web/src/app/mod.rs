@@ -73,6 +73,9 @@ struct Ctx {
     perry: RwSignal<bool>,
     /// Whether the chart also draws the other methods that apply.
     compare: RwSignal<bool>,
+    /// For a member with moments, whether the slenderness envelope is
+    /// shown instead of the interaction chart.
+    slenderness: RwSignal<bool>,
     problem: RwSignal<Option<Problem>>,
     save_problem: RwSignal<Option<String>>,
     other_tab: RwSignal<Option<String>>,
@@ -85,7 +88,7 @@ struct Ctx {
     units: RwSignal<UnitSystem>,
     /// The calc sheet when open: the chart image of the member it was
     /// opened from (id, PNG data URL), if there was one.
-    sheet: RwSignal<Option<Option<(String, String, crate::html::Html)>>>,
+    sheet: RwSignal<Option<Option<results::SheetChart>>>,
     /// The chart's legend as last drawn (the calc sheet prints it too).
     legend: RwSignal<crate::html::Html>,
     /// Whether the docked chart is open (narrow and upright screens).
@@ -210,6 +213,7 @@ pub fn App() -> impl IntoView {
         high_contrast,
         perry: RwSignal::new(false),
         compare: RwSignal::new(false),
+        slenderness: RwSignal::new(false),
         problem: RwSignal::new(None),
         save_problem: RwSignal::new(None),
         other_tab: RwSignal::new(None),

@@ -42,21 +42,26 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
     }
 }
 
-/// The selected member's id, its chart as a PNG data URL and the
-/// chart's legend as drawn.
-pub(super) fn chart_image(ctx: Ctx) -> Option<(String, String, Html)> {
+/// The selected member's id, its chart as a PNG data URL, the chart's
+/// legend as drawn and what the chart is (its label, the image's text
+/// alternative).
+pub(super) fn chart_image(ctx: Ctx) -> Option<SheetChart> {
     let id = ctx.current()?.id;
     let el = document().get_element_by_id("envelope")?;
     let c: web_sys::HtmlCanvasElement = wasm_bindgen::JsCast::dyn_into(el).ok()?;
-    Some((id, c.to_data_url().ok()?, ctx.legend.get_untracked()))
+    let what = c.get_attribute("aria-label").unwrap_or_default();
+    Some((id, c.to_data_url().ok()?, ctx.legend.get_untracked(), what))
 }
+
+/// The chart a calc sheet prints: member id, image URL, legend, label.
+pub(super) type SheetChart = (String, String, Html, String);
 
 /// The calc sheet of the open list, built as text by
 /// [`report::sheet_html`], with the list's header lines (entered once,
 /// stored with the list, printed on every page), and buttons to print it
 /// and to close it.
 #[component]
-pub(super) fn CalcSheet(ctx: Ctx, chart: Option<(String, String, Html)>) -> impl IntoView {
+pub(super) fn CalcSheet(ctx: Ctx, chart: Option<SheetChart>) -> impl IntoView {
     let today = crate::print::today();
     // The list's title and header, the date of today where none is given.
     let header = Memo::new(move |_| {
@@ -91,7 +96,7 @@ pub(super) fn CalcSheet(ctx: Ctx, chart: Option<(String, String, Html)>) -> impl
             &checks.0,
             chart
                 .as_ref()
-                .map(|(id, url, legend)| (id.as_str(), url.as_str(), legend)),
+                .map(|(id, url, legend, what)| (id.as_str(), url.as_str(), legend, what.as_str())),
             ctx.units.get_untracked(),
         )
         .into_string()
@@ -191,6 +196,37 @@ pub(super) fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Cu
     h
 }
 
+/// The interaction chart's legend; `others` as in [`legend_html`].
+pub(super) fn interaction_legend_html(
+    others: Option<&[(Method, strutline_core::envelope::interaction::Curve)]>,
+) -> Html {
+    let mut h = Html::from_lit(
+        "<li><span class=\"sw sw-shade\"></span>within capacity (shaded): every check of the method at most 1</li>\
+         <li><span class=\"sw sw-major\"></span>interaction curve: the largest multiple of the member's moment diagram carried at each compression, the other axis' moment held (broken where the method's interaction is not worked)</li>\
+         <li><span class=\"sym\">●</span>the member (N_Ed, largest |M_Ed|); <span class=\"sym\">⊗</span> when over</li>\
+         <li><span class=\"sym\">□</span>the curve at the member's N_Ed</li>",
+    );
+    match others {
+        Some([]) => {
+            h.lit("<li>no other method applies to this member</li>");
+        }
+        Some(list) => {
+            h.lit("<li>other methods, each its own interaction curve:</li>");
+            for (m, _) in list {
+                html!(
+                    h,
+                    "<li data-method=\"{}\"><span class=\"sw sw-m sw-m{}\"></span>{}</li>",
+                    m.key(),
+                    *m as u8,
+                    m.title()
+                );
+            }
+        }
+        None => {}
+    }
+    h
+}
+
 /// The result's head (caution, verdict, the chart's canvas), then the
 /// rest (`children` after the chart's legend and options) in a part that
 /// scrolls on its own on a wide screen; the canvas is drawn afresh on every change
@@ -205,6 +241,10 @@ pub(super) fn Chart(
     let note = RwSignal::new(None::<String>);
     let described = RwSignal::new(String::new());
     let legend = ctx.legend;
+    // A member with moments is shown on its interaction chart unless the
+    // person asked for the slenderness envelope.
+    let beam_column = Memo::new(move |_| current.get().is_some_and(|c| c.member.has_moments()));
+    let interaction_shown = move || beam_column.get() && !ctx.slenderness.get();
     Effect::new(move |_| {
         let c = current.get();
         let perry = ctx.perry.get();
@@ -212,21 +252,69 @@ pub(super) fn Chart(
         let hc = ctx.high_contrast.get();
         let sys = ctx.units.get();
         let us = sys == UnitSystem::Us;
+        let interaction = interaction_shown();
         ctx.resize.track();
         ctx.chart_open.track();
         let Some(el) = canvas.get() else {
             return;
         };
         let dpr = browser::fit_canvas(&el);
-        let data = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
-            (Some(p), Ok(r)) => Some(chart::data::build(p, r, perry, others)),
+        // What one chart records for tests, cleared before the other draws.
+        for a in [
+            "data-chart",
+            "data-curves",
+            "data-marker-slenderness",
+            "data-marker-stress-mpa",
+            "data-marker-px",
+            "data-inside-major",
+            "data-inside-minor",
+            "data-curve-at-load-major",
+            "data-curve-at-load-minor",
+            "data-point-px-major",
+            "data-point-px-minor",
+        ] {
+            let _ = el.remove_attribute(a);
+        }
+        let ready = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
+            (Some(p), Ok(r)) => Some((p, r)),
             _ => None,
         });
-        match data {
-            Some(Ok(d)) => {
+        let Some((p, r)) = ready else {
+            legend.set(legend_html(perry, None));
+            note.set(Some(
+                "The chart appears when the member's input can be checked.".into(),
+            ));
+            described.set(String::new());
+            return;
+        };
+        if interaction {
+            match chart::interaction::build(p, r, others) {
+                Ok(d) => {
+                    legend.set(interaction_legend_html(
+                        others.then_some(d.panels[0].others.as_slice()),
+                    ));
+                    match chart::interaction::draw(&el, &d, dpr, hc, us) {
+                        Ok(()) => note.set(None),
+                        Err(e) => note.set(Some(e)),
+                    }
+                    described.set(chart::interaction::describe(&d, sys));
+                }
+                Err(e) => {
+                    legend.set(interaction_legend_html(None));
+                    note.set(Some(fields::error_text(&e)));
+                    described.set(String::new());
+                }
+            }
+            return;
+        }
+        match chart::data::build(p, r, perry, others) {
+            Ok(d) => {
                 legend.set(legend_html(perry, others.then_some(d.others.as_slice())));
                 match chart::envelope::draw(&el, &d, dpr, hc, us) {
-                    Ok(()) => note.set(None),
+                    Ok(()) => {
+                        let _ = el.set_attribute("data-chart", "slenderness");
+                        note.set(None)
+                    }
                     Err(e) => note.set(Some(e)),
                 }
                 described.set(match d.governing() {
@@ -241,24 +329,9 @@ pub(super) fn Chart(
                     None => String::new(),
                 });
             }
-            Some(Err(e)) => {
+            Err(e) => {
                 legend.set(legend_html(perry, None));
                 note.set(Some(fields::error_text(&e)));
-            }
-            None => {
-                legend.set(legend_html(perry, None));
-                for a in [
-                    "data-curves",
-                    "data-marker-slenderness",
-                    "data-marker-stress-mpa",
-                    "data-marker-px",
-                ] {
-                    let _ = el.remove_attribute(a);
-                }
-                note.set(Some(
-                    "The chart appears when the member's input can be checked.".into(),
-                ));
-                described.set(String::new());
             }
         }
     });
@@ -294,7 +367,12 @@ pub(super) fn Chart(
             </button>
             <div class="canvas-frame" id="envelope-frame">
                 <canvas id="envelope" class="envelope" node_ref=canvas role="img"
-                    aria-label="Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"></canvas>
+                    aria-describedby="chart-description"
+                    aria-label=move || if interaction_shown() {
+                        "Interaction chart: compression against the largest moment about each axis, the region within capacity shaded and the member's point"
+                    } else {
+                        "Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"
+                    }></canvas>
             </div>
         </div>
         <div class="result-more">
@@ -305,14 +383,19 @@ pub(super) fn Chart(
             <div class="chart-head" on:change=move |e| {
                 let on = event_target_checked(&e);
                 let name = event_target::<web_sys::Element>(&e).get_attribute("name");
-                if name.as_deref() == Some("compare_methods") {
-                    ctx.compare.set(on);
-                } else {
-                    ctx.perry.set(on);
+                match name.as_deref() {
+                    Some("compare_methods") => ctx.compare.set(on),
+                    Some("show_slenderness") => ctx.slenderness.set(on),
+                    _ => ctx.perry.set(on),
                 }
             }>
-                <h3 class="sub-title">"Capacity envelope"</h3>
-                <label class="check">
+                <h3 class="sub-title">{move || if interaction_shown() { "Interaction" } else { "Capacity envelope" }}</h3>
+                <label class="check" hidden=move || !beam_column.get()>
+                    <input type="checkbox" name="show_slenderness" data-testid="toggle-slenderness"
+                        prop:checked=move || ctx.slenderness.get() />
+                    " show the slenderness envelope instead"
+                </label>
+                <label class="check" hidden=interaction_shown>
                     <input type="checkbox" name="show_bows" data-testid="toggle-bows" />
                     " show Perry-Robertson bows L/250, L/500, L/1000"
                 </label>
@@ -322,7 +405,7 @@ pub(super) fn Chart(
                 </label>
             </div>
             <ul class="chart-legend" aria-label="Chart legend" inner_html=move || legend.get().into_string()></ul>
-            <p class="chart-description">{move || described.get()}</p>
+            <p class="chart-description" id="chart-description" data-testid="chart-description">{move || described.get()}</p>
             {move || note.get().map(|n| view! { <p class="chart-note">{n}</p> })}
         </div>
         {children()}

@@ -22,23 +22,23 @@ use super::data::{dashes, lower, text_box, tick_step, ChartData, Frame};
 use crate::numtext::working;
 
 /// Colours of one theme.
-struct Palette {
-    background: RGBColor,
-    ink: RGBColor,
-    grid: RGBColor,
-    major: RGBColor,
-    minor: RGBColor,
-    euler: RGBColor,
-    plateau: RGBColor,
-    shade: RGBAColor,
-    perry: [RGBColor; 3],
-    applied: RGBColor,
+pub(super) struct Palette {
+    pub(super) background: RGBColor,
+    pub(super) ink: RGBColor,
+    pub(super) grid: RGBColor,
+    pub(super) major: RGBColor,
+    pub(super) minor: RGBColor,
+    pub(super) euler: RGBColor,
+    pub(super) plateau: RGBColor,
+    pub(super) shade: RGBAColor,
+    pub(super) perry: [RGBColor; 3],
+    pub(super) applied: RGBColor,
 }
 
 /// Colour of each method's curve when compared, in `Method::ALL` order:
 /// one set for both themes, each at least 4.5:1 against white, so the
 /// high-contrast theme needs no set of its own.
-const METHOD_COLOUR: [RGBColor; 8] = [
+pub(super) const METHOD_COLOUR: [RGBColor; 8] = [
     RGBColor(0, 120, 120),
     RGBColor(170, 30, 130),
     RGBColor(110, 110, 0),
@@ -53,7 +53,7 @@ const METHOD_COLOUR: [RGBColor; 8] = [
 /// `Method::ALL` order; the legend's swatches (style.css `.sw-m0` to
 /// `.sw-m7`) draw the same colour and pattern, so a curve is told by its
 /// dash as well as its colour.
-const METHOD_DASH: [(f64, f64); 8] = [
+pub(super) const METHOD_DASH: [(f64, f64); 8] = [
     (14.0, 4.0),
     (6.0, 3.0),
     (2.0, 4.0),
@@ -64,7 +64,7 @@ const METHOD_DASH: [(f64, f64); 8] = [
     (24.0, 6.0),
 ];
 
-fn palette(high_contrast: bool) -> Palette {
+pub(super) fn palette(high_contrast: bool) -> Palette {
     if high_contrast {
         Palette {
             background: RGBColor(255, 255, 255),
@@ -105,7 +105,7 @@ fn palette(high_contrast: bool) -> Palette {
 /// A drawing error in words. The canvas's own error object is not
 /// formatted (that would ship a JS value formatter for a message no one
 /// can act on); the chart simply says it could not draw.
-fn err<E>(_: E) -> String {
+pub(super) fn err<E>(_: E) -> String {
     "chart: the canvas could not be drawn on (try reloading the page)".to_string()
 }
 

@@ -5,6 +5,8 @@
 //! running the whole check at the buckling length lambda * i. The chart and
 //! the check can therefore never disagree.
 
+pub mod interaction;
+
 use serde::Serialize;
 
 use crate::check::{self, Mode, Prepared};
@@ -125,7 +127,7 @@ mod tests {
 
     #[test]
     fn the_curve_passes_through_the_members_own_resistance() {
-        let text = include_str!("../../examples/depot-mezzanine.json");
+        let text = include_str!("../../../examples/depot-mezzanine.json");
         let mut f = file::parse(text).unwrap();
         // A Class 4 square hollow section (c/t = 71 > 42 eps = 34) under EN 1993-1-1 and AISC:
         // its effective area must shape the curve as it shapes the check.

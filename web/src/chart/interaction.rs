@@ -1,0 +1,503 @@
+//! The interaction chart of a beam-column: for each axis, compression
+//! against the largest moment along the member, the curve within which the
+//! member holds (worked by the engine's own check, [`interaction`]), the
+//! region within capacity shaded and the member's point marked, with a
+//! short line from the point across to the curve at its load. The two
+//! axes are two panels side by side sharing the compression scale, so a
+//! glance compares them; the other methods' curves can be drawn over them.
+//!
+//! What is drawn is worked out first ([`build`], [`describe`]: plain Rust,
+//! tested on the host), then drawn by [`draw`] in device pixels, as the
+//! envelope chart is.
+
+use plotters::coord::Shift;
+use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
+use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
+use plotters::style::text_anchor::{HPos, Pos, VPos};
+use plotters::style::{Color, FontTransform, IntoFont, RGBColor};
+use plotters_canvas::CanvasBackend;
+use strutline_core::check::Prepared;
+use strutline_core::compare::{self, Outcome};
+use strutline_core::envelope::interaction::{self, Curve, Shape};
+use strutline_core::method::Method;
+use strutline_core::units::{self, Quantity, UnitSystem};
+use strutline_core::{CheckResult, Error};
+use web_sys::HtmlCanvasElement;
+
+use super::data::{dashes, text_box, tick_step};
+use super::envelope::{err, palette, Palette, METHOD_COLOUR, METHOD_DASH};
+use crate::numtext::working;
+use crate::units_view::result_text;
+
+/// One axis' panel.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Panel {
+    /// The member's method's curve about this axis.
+    pub curve: Curve,
+    /// Every other method that applies, its curve about this axis (empty
+    /// unless asked for), in [`Method::ALL`] order.
+    pub others: Vec<(Method, Curve)>,
+    /// The largest moment shown, kNm.
+    pub m_max: f64,
+}
+
+/// Everything the chart draws.
+#[derive(Debug, Clone, PartialEq)]
+pub struct InteractionData {
+    /// The member's method.
+    pub method: Method,
+    /// Major axis, then minor.
+    pub panels: [Panel; 2],
+    /// The largest compression shown, kN (shared by both panels).
+    pub n_max: f64,
+    /// The member's utilisation and what governs it.
+    pub utilisation: f64,
+    /// The governing check's name (`CheckResult::governing_check`).
+    pub governing_check: &'static str,
+    /// Whether the check passes the member.
+    pub passes: bool,
+}
+
+/// A round ceiling of `v` for an axis: 1, 2 or 5 times a power of ten
+/// steps, at least one step.
+fn ceiling(v: f64) -> f64 {
+    let step = tick_step(v.max(1e-9), 5.0);
+    ((v / step).ceil() * step).max(step)
+}
+
+/// The largest moment of a curve's points (at no compression), kNm.
+fn widest(c: &Curve) -> f64 {
+    c.points.iter().map(|p| p.moment_knm).fold(0.0, f64::max)
+}
+
+/// Works both panels for a prepared member and its check (with every
+/// other method's curves when `with_others`).
+pub fn build(
+    prepared: &Prepared,
+    result: &CheckResult,
+    with_others: bool,
+) -> Result<InteractionData, Error> {
+    let method = result.method;
+    let [major, minor] = interaction::curves(prepared, method)?;
+    let mut others: [Vec<(Method, Curve)>; 2] = [Vec::new(), Vec::new()];
+    if with_others {
+        for row in compare::compare(prepared) {
+            if row.own || !matches!(row.outcome, Outcome::Checked { .. }) {
+                continue;
+            }
+            if let Ok([a, b]) = interaction::curves(prepared, row.method) {
+                others[0].push((row.method, a));
+                others[1].push((row.method, b));
+            }
+        }
+    }
+    let n_top = [&major, &minor]
+        .into_iter()
+        .chain(others.iter().flatten().map(|(_, c)| c))
+        .map(|c| c.top_kn)
+        .fold(prepared.member.axial_kn, f64::max);
+    let n_max = ceiling(n_top * 1.08);
+    let [o_major, o_minor] = others;
+    let panel = |curve: Curve, others: Vec<(Method, Curve)>| {
+        let m = others
+            .iter()
+            .map(|(_, c)| widest(c))
+            .fold(widest(&curve).max(curve.member_moment_knm), f64::max);
+        Panel {
+            m_max: ceiling(m * 1.08),
+            curve,
+            others,
+        }
+    };
+    Ok(InteractionData {
+        method,
+        panels: [panel(major, o_major), panel(minor, o_minor)],
+        n_max,
+        utilisation: result.utilisation,
+        governing_check: result.governing_check,
+        passes: result.passes,
+    })
+}
+
+/// The chart in words, for the canvas's accessible description and for
+/// tests: per axis, the curve's moment at the member's load against the
+/// member's moment, and where the point lies.
+pub fn describe(d: &InteractionData, sys: UnitSystem) -> String {
+    let mut out = format!(
+        "Interaction, {}: utilisation {}, governs {}.",
+        d.method.title(),
+        crate::numtext::fixed(d.utilisation, 3),
+        d.governing_check
+    );
+    for p in &d.panels {
+        let c = &p.curve;
+        let load = result_text(sys, "kN", c.member_axial_kn, 1);
+        let moment = result_text(sys, "kNm", c.member_moment_knm, 1);
+        let curve_at = match c.at_load_knm {
+            Some(m) => format!("the curve reaches {}", result_text(sys, "kNm", m, 1)),
+            None => "the load alone is beyond the curve".to_string(),
+        };
+        let place = if c.contains_member() {
+            "inside"
+        } else {
+            "outside"
+        };
+        out.push_str(&format!(
+            " {} axis: at N_Ed {load}, {curve_at}; the member's {moment} is {place} the shaded region",
+            c.axis
+        ));
+        if c.shape == Shape::UniformAssumed {
+            out.push_str(" (no moment about this axis: a uniform one is assumed for the curve)");
+        }
+        if !c.worked {
+            out.push_str(" (the method's interaction is not worked: the line is the plain sum, not a code check)");
+        }
+        out.push('.');
+    }
+    out
+}
+
+/// Draws `data` on `canvas` (already sized to CSS size x `dpr`) and
+/// records on the element for tests, per axis (`major`, `minor`): whether
+/// the member's point is inside (`data-inside-major`), the curve's moment
+/// at the member's load in kNm (`data-curve-at-load-major`) and the
+/// point's pixel ("x,y" in CSS pixels, `data-point-px-major`). Values are
+/// shown in kN and kNm, or kip and kip·ft when `us`.
+pub fn draw(
+    canvas: &HtmlCanvasElement,
+    data: &InteractionData,
+    dpr: f64,
+    high_contrast: bool,
+    us: bool,
+) -> Result<(), String> {
+    let backend = CanvasBackend::with_canvas_object(canvas.clone())
+        .ok_or("chart: the canvas has no 2D context")?;
+    let root = backend.into_drawing_area();
+    let sys = if us { UnitSystem::Us } else { UnitSystem::Si };
+    let points = draw_on(&root, data, dpr, &palette(high_contrast), sys)?;
+    root.present().map_err(err)?;
+    let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
+    set("data-chart", "interaction".into())?;
+    for (p, (x, y)) in data.panels.iter().zip(points) {
+        let a = p.curve.axis;
+        set(
+            &format!("data-inside-{a}"),
+            p.curve.contains_member().to_string(),
+        )?;
+        set(
+            &format!("data-curve-at-load-{a}"),
+            p.curve
+                .at_load_knm
+                .map_or("none".into(), |m| format!("{m:.3}")),
+        )?;
+        set(
+            &format!("data-point-px-{a}"),
+            format!("{:.1},{:.1}", f64::from(x) / dpr, f64::from(y) / dpr),
+        )?;
+    }
+    Ok(())
+}
+
+/// The plot rectangle of a panel and its map from (moment kNm,
+/// compression kN) to device pixels.
+#[derive(Debug, Clone, Copy)]
+struct Plot {
+    left: f64,
+    top: f64,
+    right: f64,
+    bottom: f64,
+    m_max: f64,
+    n_max: f64,
+}
+
+impl Plot {
+    fn px(&self, m: f64, n: f64) -> (i32, i32) {
+        let fx = (m / self.m_max).clamp(0.0, 1.0);
+        let fy = (n / self.n_max).clamp(0.0, 1.0);
+        (
+            (self.left + fx * (self.right - self.left)).round() as i32,
+            (self.bottom - fy * (self.bottom - self.top)).round() as i32,
+        )
+    }
+}
+
+fn draw_on<DB: DrawingBackend>(
+    root: &DrawingArea<DB, Shift>,
+    data: &InteractionData,
+    dpr: f64,
+    pal: &Palette,
+    sys: UnitSystem,
+) -> Result<[(i32, i32); 2], String>
+where
+    DB::ErrorType: 'static,
+{
+    let s = |v: f64| (v * dpr).round().max(1.0) as u32;
+    let si = |v: f64| (v * dpr).round() as i32;
+    let font = |size: f64| ("sans-serif", size * dpr).into_font().color(&pal.ink);
+    root.fill(&pal.background).map_err(err)?;
+    let (w, h) = root.dim_in_pixel();
+    let narrow = f64::from(w) / dpr < 560.0;
+    let label = font(if narrow { 10.0 } else { 12.0 });
+    let title = font(if narrow { 11.0 } else { 13.0 });
+    let line = |pts: Vec<(i32, i32)>, c: RGBColor, width: f64| {
+        PathElement::new(pts, c.stroke_width(s(width)))
+    };
+    let dashed =
+        |pts: Vec<(i32, i32)>, on: f64, off: f64, c: RGBColor, width: f64| -> Result<(), String> {
+            for d in dashes(&pts, on * dpr, off * dpr) {
+                root.draw(&line(d, c, width)).map_err(err)?;
+            }
+            Ok(())
+        };
+    let force = |kn: f64| units::to_display(sys, Quantity::Force, kn);
+    let moment = |knm: f64| units::to_display(sys, Quantity::Moment, knm);
+    let force_unit = units::display_unit(sys, Quantity::Force);
+    let moment_unit = units::display_unit(sys, Quantity::Moment);
+
+    // The compression title once, at the far left; each panel its own
+    // moment scale.
+    let (_, cy) = (0, (f64::from(h) / 2.0) as i32);
+    root.draw(&Text::new(
+        format!("compression N  ({force_unit})"),
+        (si(3.0), cy),
+        title
+            .clone()
+            .transform(FontTransform::Rotate270)
+            .pos(Pos::new(HPos::Center, VPos::Top)),
+    ))
+    .map_err(err)?;
+    let gap = if narrow { 40.0 } else { 52.0 } * dpr;
+    let left0 = if narrow { 56.0 } else { 70.0 } * dpr;
+    let width = (f64::from(w) - left0 - gap - 14.0 * dpr) / 2.0;
+    let mut marks = [(0, 0); 2];
+    let n_step = tick_step(force(data.n_max), if narrow { 4.0 } else { 6.0 });
+    for (i, panel) in data.panels.iter().enumerate() {
+        let c = &panel.curve;
+        let left = left0 + (i as f64) * (width + gap);
+        let plot = Plot {
+            left,
+            top: 34.0 * dpr,
+            right: left + width,
+            bottom: f64::from(h) - 44.0 * dpr,
+            m_max: panel.m_max,
+            n_max: data.n_max,
+        };
+        let px = |m: f64, n: f64| plot.px(m, n);
+        let path = |c: &Curve| {
+            c.points
+                .iter()
+                .map(|p| px(p.moment_knm, p.axial_kn))
+                .collect::<Vec<_>>()
+        };
+        // Grid and ticks, at round values of the unit shown.
+        let m_step = tick_step(moment(panel.m_max), if narrow { 3.0 } else { 5.0 });
+        let mut k = 0.0;
+        while k * m_step <= moment(panel.m_max) * (1.0 + 1e-9) {
+            let m = k * m_step / moment(1.0);
+            root.draw(&line(vec![px(m, 0.0), px(m, data.n_max)], pal.grid, 1.0))
+                .map_err(err)?;
+            let (tx, ty) = px(m, 0.0);
+            root.draw(&Text::new(
+                working(k * m_step),
+                (tx, ty + si(4.0)),
+                label.clone().pos(Pos::new(HPos::Center, VPos::Top)),
+            ))
+            .map_err(err)?;
+            k += 1.0;
+        }
+        let mut k = 0.0;
+        while k * n_step <= force(data.n_max) * (1.0 + 1e-9) {
+            let n = k * n_step / force(1.0);
+            root.draw(&line(vec![px(0.0, n), px(panel.m_max, n)], pal.grid, 1.0))
+                .map_err(err)?;
+            let (tx, ty) = px(0.0, n);
+            root.draw(&Text::new(
+                working(k * n_step),
+                (tx - si(4.0), ty),
+                label.clone().pos(Pos::new(HPos::Right, VPos::Center)),
+            ))
+            .map_err(err)?;
+            k += 1.0;
+        }
+        root.draw(&line(
+            vec![px(0.0, data.n_max), px(0.0, 0.0), px(panel.m_max, 0.0)],
+            pal.ink,
+            1.5,
+        ))
+        .map_err(err)?;
+        // Titles: the axis above, the moment below.
+        let held = if c.held_knm > 0.0 {
+            format!(
+                "{} held {}",
+                if c.axis == "major" {
+                    "M minor"
+                } else {
+                    "M major"
+                },
+                result_text(sys, "kNm", c.held_knm, 1)
+            )
+        } else {
+            "other axis: no moment".to_string()
+        };
+        let head = if c.shape == Shape::UniformAssumed {
+            format!("{} axis (uniform M assumed) · {held}", c.axis)
+        } else {
+            format!("{} axis · {held}", c.axis)
+        };
+        let (hx, _) = px(panel.m_max / 2.0, 0.0);
+        root.draw(&Text::new(
+            head,
+            (hx, si(6.0)),
+            title.clone().pos(Pos::new(HPos::Center, VPos::Top)),
+        ))
+        .map_err(err)?;
+        root.draw(&Text::new(
+            format!("largest |M|, {} axis  ({moment_unit})", c.axis),
+            (hx, h as i32 - si(4.0)),
+            title.clone().pos(Pos::new(HPos::Center, VPos::Bottom)),
+        ))
+        .map_err(err)?;
+
+        // The region within capacity, then the curves.
+        if let Some(last) = c.points.last() {
+            let mut area = vec![px(0.0, 0.0)];
+            area.extend(path(c));
+            area.push(px(0.0, last.axial_kn));
+            root.draw(&Polygon::new(area, pal.shade.filled()))
+                .map_err(err)?;
+        }
+        for (method, other) in &panel.others {
+            let j = *method as usize;
+            let colour = METHOD_COLOUR.get(j).copied().unwrap_or(pal.ink);
+            let (on, off) = METHOD_DASH.get(j).copied().unwrap_or((4.0, 4.0));
+            dashed(path(other), on, off, colour, 1.75)?;
+        }
+        if c.worked {
+            root.draw(&line(path(c), pal.major, 2.5)).map_err(err)?;
+        } else {
+            // Not a code check: drawn broken, and the description says so.
+            dashed(path(c), 10.0, 6.0, pal.major, 2.5)?;
+        }
+
+        // The member: its point, and a line across to the curve at its
+        // load ending in an open square (the most the curve allows there).
+        let (ax, ay) = px(c.member_moment_knm, c.member_axial_kn);
+        if let Some(m) = c.at_load_knm {
+            let (rx, ry) = px(m, c.member_axial_kn);
+            root.draw(&line(vec![(ax, ay), (rx, ry)], pal.ink, 1.0))
+                .map_err(err)?;
+            let half = si(4.5);
+            root.draw(&Rectangle::new(
+                [(rx - half, ry - half), (rx + half, ry + half)],
+                pal.major.stroke_width(s(2.0)),
+            ))
+            .map_err(err)?;
+        }
+        let inside = c.contains_member();
+        let r = s(6.0);
+        root.draw(&Circle::new((ax, ay), r + s(2.0), pal.background.filled()))
+            .map_err(err)?;
+        if inside {
+            root.draw(&Circle::new((ax, ay), r, pal.applied.filled()))
+                .map_err(err)?;
+        } else {
+            // Outside: a ring with a cross, told apart without colour.
+            root.draw(&Circle::new((ax, ay), r, pal.applied.stroke_width(s(2.0))))
+                .map_err(err)?;
+            let d = si(4.0);
+            for seg in [
+                vec![(ax - d, ay - d), (ax + d, ay + d)],
+                vec![(ax - d, ay + d), (ax + d, ay - d)],
+            ] {
+                root.draw(&line(seg, pal.applied, 2.0)).map_err(err)?;
+            }
+        }
+        let tag = if inside {
+            "member · within"
+        } else {
+            "member · over"
+        };
+        let (tw, th) = text_box(tag, 12.0 * dpr);
+        let right_room = f64::from(ax) + 10.0 * dpr + tw <= plot.right;
+        let (anchor, lx) = if right_room {
+            (HPos::Left, ax + si(10.0))
+        } else {
+            (HPos::Right, ax - si(10.0))
+        };
+        let ly = (ay - si(12.0)).max(plot.top as i32 + (th / 2.0) as i32);
+        let x0 = if right_room { lx } else { lx - tw as i32 };
+        root.draw(&Rectangle::new(
+            [
+                (x0, ly - (th / 2.0) as i32),
+                (x0 + tw as i32, ly + (th / 2.0) as i32),
+            ],
+            pal.background.mix(0.85).filled(),
+        ))
+        .map_err(err)?;
+        root.draw(&Text::new(
+            tag,
+            (lx, ly),
+            font(12.0).pos(Pos::new(anchor, VPos::Center)),
+        ))
+        .map_err(err)?;
+        if let Some(slot) = marks.get_mut(i) {
+            *slot = (ax, ay);
+        }
+    }
+    Ok(marks)
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(
+        clippy::unwrap_used,
+        clippy::expect_used,
+        clippy::indexing_slicing,
+        clippy::panic
+    )]
+    use super::*;
+    use crate::demo::sample_member;
+
+    fn beam_column(axial: f64, m_major: f64) -> Prepared {
+        let mut m = sample_member("A");
+        m.method = Method::En1993;
+        m.axial_kn = axial;
+        m.m_major_a_knm = m_major;
+        m.m_major_b_knm = 0.5 * m_major;
+        Prepared::new(&m).unwrap()
+    }
+
+    #[test]
+    fn the_chart_holds_the_member_and_says_where_it_is() {
+        for (axial, mx) in [(20.0, 1.0), (20.0, 500.0)] {
+            let p = beam_column(axial, mx);
+            let r = p.check().unwrap();
+            let d = build(&p, &r, false).unwrap();
+            let major = &d.panels[0].curve;
+            // The scales hold the curve and the member.
+            assert!(d.n_max >= major.top_kn && d.n_max >= axial, "{d:?}");
+            assert!(d.panels[0].m_max >= major.member_moment_knm);
+            assert!(d.panels[0].m_max >= widest(major));
+            let text = describe(&d, UnitSystem::Si);
+            let place = if r.utilisation <= 1.0 {
+                "is inside"
+            } else {
+                "is outside"
+            };
+            assert!(text.contains("major axis: at N_Ed 20.0 kN"), "{text}");
+            assert!(text.contains(place), "{text}");
+            assert!(text.contains(r.governing_check), "{text}");
+            assert_eq!(major.contains_member(), r.utilisation <= 1.0);
+            // The minor axis carries no moment here: said so.
+            assert!(text.contains("uniform one is assumed"), "{text}");
+        }
+    }
+
+    #[test]
+    fn us_units_in_the_description() {
+        let p = beam_column(20.0, 3.0);
+        let d = build(&p, &p.check().unwrap(), false).unwrap();
+        let text = describe(&d, UnitSystem::Us);
+        assert!(text.contains("kip") && text.contains("kip·ft"), "{text}");
+    }
+}
