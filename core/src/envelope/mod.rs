@@ -109,7 +109,7 @@ mod tests {
         // The worked example's W2 (frame_major) and K1 (buckling_model):
         // the envelope is the method's curve for the member's section at
         // set buckling lengths, as for the same member without them.
-        let f = file::parse(include_str!("../../examples/tarnbeck-crane-hall.json")).unwrap();
+        let f = file::parse(include_str!("../../../examples/tarnbeck-crane-hall.json")).unwrap();
         for m in &f.members {
             let mut plain = m.clone();
             plain.frame_major = None;
