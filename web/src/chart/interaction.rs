@@ -487,10 +487,7 @@ mod tests {
             };
             assert!(text.contains("major axis: at N_Ed 20.0 kN"), "{text}");
             assert!(text.contains(place), "{text}");
-            assert!(
-                text.contains(&crate::status::governing_text(&r)),
-                "{text}"
-            );
+            assert!(text.contains(&crate::status::governing_text(&r)), "{text}");
             assert_eq!(major.contains_member(), r.utilisation <= 1.0);
             // The minor axis carries no moment here: said so.
             assert!(text.contains("uniform one is assumed"), "{text}");
