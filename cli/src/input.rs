@@ -155,7 +155,7 @@ fn csv_blocks(
     }
     let head_lines = head.matches('\n').count();
     let title = csv::title_from_path(path);
-    let mut ids: std::collections::HashSet<String> = std::collections::HashSet::new();
+    let mut ids = strutline_core::ids::SeenIds::new();
     let mut next_line = head_lines + 1;
     let mut count = 0usize;
     let mut text = String::with_capacity(head.len() + BLOCK * 128);
@@ -195,7 +195,7 @@ fn csv_blocks(
             })
             .collect();
         for (m, line) in import.members.iter().zip(&import.member_lines) {
-            if !ids.insert(m.id.clone()) {
+            if !ids.insert(&m.id) {
                 problems.push(format!(
                     "line {}, column id: id \"{}\" is already used by an earlier row; give each member its own id (expected an id no other row uses)",
                     file_line(*line),

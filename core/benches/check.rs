@@ -5,194 +5,12 @@
 //! envelope samples). Run with `cargo xtask bench` (or `cargo bench -p
 //! strutline-core --bench check`).
 
+mod lists;
+
 use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
+use lists::{member, plain, with_moments, MEMBERS};
 use strutline_core::check::{check_member_as, Working};
-use strutline_core::material::{MaterialSpec, TimberKind};
 use strutline_core::member::Member;
-use strutline_core::method::Method;
-use strutline_core::section::{
-    Angle, Chs, Flanged, Given, HollowMake, IMake, IShape, Rect, Rhs, Round, SectionSpec,
-};
-
-/// The number of members in the benchmark list.
-pub const MEMBERS: usize = 10_000;
-
-fn member(i: usize) -> Member {
-    let f = (i % 7) as f64;
-    let (section, material, method) = match i % 10 {
-        0 => (
-            SectionSpec::I(IShape {
-                depth_mm: 200.0 + 10.0 * f,
-                width_mm: 200.0,
-                flange_mm: 15.0,
-                web_mm: 9.0,
-                root_radius_mm: 18.0,
-                make: IMake::Rolled,
-            }),
-            MaterialSpec::Grade {
-                grade: "S355".into(),
-            },
-            Method::En1993,
-        ),
-        1 => (
-            SectionSpec::Rhs(Rhs {
-                depth_mm: 150.0,
-                width_mm: 100.0 + 5.0 * f,
-                wall_mm: 6.0,
-                outer_radius_mm: 9.0,
-                inner_radius_mm: Some(6.0),
-                make: HollowMake::HotFinished,
-            }),
-            MaterialSpec::Grade {
-                grade: "S355".into(),
-            },
-            Method::En1993,
-        ),
-        2 => (
-            SectionSpec::Chs(Chs {
-                diameter_mm: 168.3,
-                wall_mm: 6.0 + f * 0.5,
-                make: HollowMake::ColdFormed,
-            }),
-            MaterialSpec::Grade {
-                grade: "S355".into(),
-            },
-            Method::AiscLrfd,
-        ),
-        3 => (
-            SectionSpec::I(IShape {
-                depth_mm: 310.0,
-                width_mm: 305.0,
-                flange_mm: 15.0 + f,
-                web_mm: 9.9,
-                root_radius_mm: 15.2,
-                make: IMake::Rolled,
-            }),
-            MaterialSpec::Grade {
-                grade: "A992".into(),
-            },
-            Method::AiscAsd,
-        ),
-        4 => (
-            SectionSpec::Rhs(Rhs {
-                depth_mm: 203.2,
-                width_mm: 203.2,
-                wall_mm: 8.0,
-                outer_radius_mm: 16.0,
-                inner_radius_mm: None,
-                make: HollowMake::ColdFormed,
-            }),
-            MaterialSpec::Grade {
-                grade: "350W".into(),
-            },
-            Method::CsaS16,
-        ),
-        5 => (
-            SectionSpec::Rect(Rect {
-                depth_mm: 200.0 + 10.0 * f,
-                width_mm: 140.0,
-            }),
-            MaterialSpec::Grade {
-                grade: "GL28h".into(),
-            },
-            Method::En1995,
-        ),
-        6 => (
-            SectionSpec::Angle(Angle {
-                depth_mm: 100.0,
-                width_mm: 75.0,
-                thickness_mm: 8.0 + f * 0.5,
-                root_radius_mm: 10.0,
-                toe_radius_mm: 5.0,
-            }),
-            MaterialSpec::Grade {
-                grade: "S275".into(),
-            },
-            Method::En1993,
-        ),
-        7 => (
-            SectionSpec::Channel(Flanged {
-                depth_mm: 200.0,
-                width_mm: 75.0,
-                flange_mm: 12.5,
-                web_mm: 8.5 + f * 0.2,
-                root_radius_mm: 12.0,
-            }),
-            MaterialSpec::Custom {
-                fy_mpa: 275.0,
-                e_mpa: 210_000.0,
-                g_mpa: None,
-            },
-            Method::PerryRobertson,
-        ),
-        8 => (
-            SectionSpec::Round(Round {
-                diameter_mm: 40.0 + f,
-            }),
-            MaterialSpec::Custom {
-                fy_mpa: 355.0,
-                e_mpa: 210_000.0,
-                g_mpa: None,
-            },
-            Method::Secant,
-        ),
-        _ => (
-            SectionSpec::Given(Given {
-                area_mm2: 5000.0 + 100.0 * f,
-                i_major_mm4: 4.0e7,
-                i_minor_mm4: 1.5e7,
-                torsion_mm4: None,
-                warping_mm6: None,
-                w_el_major_mm3: None,
-                w_el_minor_mm3: None,
-                w_pl_major_mm3: None,
-                w_pl_minor_mm3: None,
-            }),
-            MaterialSpec::Timber {
-                fc0k_mpa: 24.0,
-                e005_mpa: 8000.0,
-                e0mean_mpa: 12000.0,
-                timber: TimberKind::Solid,
-            },
-            Method::En1995,
-        ),
-    };
-    Member {
-        k_minor: if i.is_multiple_of(3) { 0.7 } else { 1.0 },
-        ..Member::new(
-            format!("B{i}"),
-            section,
-            material,
-            2500.0 + 50.0 * f,
-            150.0 + 10.0 * f,
-            method,
-        )
-    }
-}
-
-/// A member with moments (member file version 3): the shapes and methods
-/// of [`member`] that have a bending rule (I, RHS, CHS, timber rectangle
-/// under EN 1993-1-1, AISC LRFD and ASD, CSA S16, EN 1995-1-1), with end
-/// and span moments about both axes; every other one also carries axial
-/// load (the path that warns that the interaction is not checked).
-fn with_moments(i: usize) -> Member {
-    let mut m = member((i / 6) * 10 + i % 6);
-    let f = (i % 7) as f64;
-    m.m_major_a_knm = 20.0 + f;
-    m.m_major_b_knm = -10.0;
-    m.m_major_span_knm = 30.0;
-    m.m_minor_a_knm = 2.0;
-    if i.is_multiple_of(2) {
-        m.axial_kn = 0.0;
-    }
-    if matches!(m.section, SectionSpec::Rect(_)) {
-        m.m_major_a_knm = 2.0 + 0.1 * f;
-        m.m_major_b_knm = -1.0;
-        m.m_major_span_knm = 3.0;
-        m.m_minor_a_knm = 0.2;
-    }
-    m
-}
 
 fn bench(c: &mut Criterion) {
     let beams: Vec<Member> = (0..MEMBERS).map(with_moments).collect();
@@ -229,7 +47,7 @@ fn bench(c: &mut Criterion) {
         });
     }
     // The same members without their moments: the cost of the bending side.
-    let plain: Vec<Member> = (0..MEMBERS).map(|i| member((i / 6) * 10 + i % 6)).collect();
+    let plain: Vec<Member> = (0..MEMBERS).map(plain).collect();
     group.bench_function("10k_same_members_without_moments", |b| {
         b.iter(|| {
             let mut passing = 0usize;

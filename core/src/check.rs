@@ -327,7 +327,8 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     }
     // A beam (no axial load, some moment) is checked in bending even where
     // the code gives no axial resistance: its axial modes then report 0 kN.
-    let beam = m.axial_kn == 0.0 && m.has_moments();
+    let moments = m.has_moments();
+    let beam = m.axial_kn == 0.0 && moments;
     if assessment.refused && beam {
         modes.push(stability::refused_mode());
     } else if assessment.refused {
@@ -366,14 +367,34 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     } else {
         f64::INFINITY
     };
-    if m.has_moments() {
+    // Without moments there is no bending side (bending::check would say
+    // so itself, after looking for a moment again).
+    let bending = if moments {
         // The bending working: some 20 to 30 lines an axis.
         trace.reserve(64);
-    }
-    let bending = bending::check(method, input, &mut trace, &mut warnings).map_err(wrap)?;
+        bending::check(method, input, &mut trace, &mut warnings).map_err(wrap)?
+    } else {
+        None
+    };
     let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
-        None => (axial, governing.mode.key(), axial <= 1.0),
+        // The secant method's moments are the load's eccentricity: its one
+        // check `secant` (never above the axial utilisation, which it is
+        // about the moment's axis).
+        None => {
+            match interaction::secant::check(method, input, &modes, &mut trace).map_err(wrap)? {
+                Some(c) => {
+                    checks.push(c);
+                    let (u, name) = if c.utilisation >= axial {
+                        (c.utilisation, c.check)
+                    } else {
+                        (axial, governing.mode.key())
+                    };
+                    (u, name, u <= 1.0)
+                }
+                None => (axial, governing.mode.key(), axial <= 1.0),
+            }
+        }
         Some(b) => {
             let (um, un) = (b.major.utilisation(), b.minor.utilisation());
             let (ub, which) = if um >= un {

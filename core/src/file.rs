@@ -333,9 +333,9 @@ pub fn deserialize_member(raw: &Value) -> std::result::Result<Member, (String, S
 
 /// Refuses a list in which two members share an id.
 pub fn check_unique_ids(members: &[Member]) -> Result<()> {
-    let mut seen = std::collections::HashSet::with_capacity(members.len());
+    let mut seen = crate::ids::SeenIds::with_capacity(members.len(), 8 * members.len());
     for m in members {
-        if !seen.insert(m.id.as_str()) {
+        if !seen.insert(&m.id) {
             return Err(Error::DuplicateId { id: m.id.clone() });
         }
     }

@@ -21,6 +21,7 @@ pub mod decimal;
 pub mod envelope;
 pub mod error;
 pub mod file;
+pub mod ids;
 pub mod interaction;
 pub mod material;
 pub mod member;

@@ -4,8 +4,8 @@
 //! [`members`] reads the JSON member file from any [`std::io::Read`]
 //! (core itself opens no file: the caller hands it the reader) and gives
 //! each member to the caller as soon as it is read, so memory does not grow
-//! with the length of the list, apart from the set of ids kept to refuse a
-//! repeated one. Every error names the member (its id, or its position when
+//! with the length of the list, apart from the ids kept to refuse a
+//! repeated one ([`SeenIds`]: a 64-bit hash and the id's bytes each). Every error names the member (its id, or its position when
 //! it has none) and the field, a number out of a double's range included
 //! (`member "C3": length_mm: number out of range`); a broken file is
 //! reported with its line and column.
@@ -19,7 +19,6 @@
 //! added an optional one), so members are read as the current version; a
 //! future version that changes a member's keys migrates each member here.
 
-use std::collections::HashSet;
 use std::fmt;
 use std::io::Read;
 
@@ -28,6 +27,7 @@ use serde_json::value::RawValue;
 
 use crate::error::Error;
 use crate::file::{FORMAT, VERSION};
+use crate::ids::SeenIds;
 use crate::member::Member;
 
 /// What is known of the file when a member is handed over.
@@ -95,7 +95,7 @@ where
         head: Head::default(),
         format_seen: false,
         members_seen: false,
-        ids: HashSet::default(),
+        ids: SeenIds::new(),
         stop: None,
         each,
     };
@@ -193,7 +193,7 @@ struct State<F, X> {
     head: Head,
     format_seen: bool,
     members_seen: bool,
-    ids: HashSet<Box<str>>,
+    ids: SeenIds,
     stop: Option<Stop<X>>,
     each: F,
 }
@@ -327,7 +327,7 @@ where
                 Ok(m) => m,
                 Err(e) => return Err(state.bad(e)),
             };
-            if !state.ids.insert(member.id.as_str().into()) {
+            if !state.ids.insert(&member.id) {
                 let e = Error::DuplicateId {
                     id: member.id.clone(),
                 }

@@ -19,7 +19,7 @@ use std::path::{Path, PathBuf};
 const LAYERS: &[(&str, &[&str])] = &[
     (
         "utilities",
-        &["error", "units", "decimal", "trig", "names", "trace"],
+        &["error", "units", "decimal", "trig", "names", "trace", "ids"],
     ),
     ("geometry", &["section"]),
     ("data", &["catalogue", "material"]),

@@ -231,10 +231,16 @@ fn a_beam_column_is_never_passed_silently() {
         3000.0,
         json!({"axial_kn": 10, "m_major_a_knm": 1, "m_major_b_knm": 1, "m_major_span_knm": 0, "m_minor_a_knm": 0}),
     );
+    // EN 1993-1-1 now works its interaction (6.2.9, 6.61, 6.62): the member
+    // is judged on them, never on bending or compression alone.
     let r = strutline_core::check_member(&m).unwrap();
-    assert!(!r.passes);
-    assert_eq!(r.governing_check, "combined-not-checked");
-    assert!(r
+    assert_eq!(r.interaction.len(), 3);
+    assert!(r.interaction.iter().all(|c| r.utilisation >= c.utilisation));
+    assert_eq!(
+        r.passes,
+        r.interaction.iter().all(|c| c.utilisation <= 1.0) && r.utilisation <= 1.0
+    );
+    assert!(!r
         .warnings
         .iter()
         .any(|w| w.code == "interaction-not-checked"));

@@ -130,11 +130,14 @@ pub fn summary(inc: &Incoming) -> String {
 }
 
 /// Downloads the open list as the member file, or as CSV with the columns
-/// of `csv_units` (US columns carry `_ft`, `_kip`, ... suffixes).
-fn export(ws: RwSignal<Workspace>, csv_units: Option<UnitSystem>) {
+/// of `csv_units` (US columns carry `_ft`, `_kip`, ... suffixes); a CSV
+/// export says in `note` which members' keys it left out
+/// ([`csv::left_out`]).
+fn export(ws: RwSignal<Workspace>, csv_units: Option<UnitSystem>, note: RwSignal<Option<String>>) {
     let Some(l) = ws.with_untracked(|w| w.active_list().cloned()) else {
         return;
     };
+    note.set(csv_units.and_then(|_| csv::left_out(&l)));
     let _ = if let Some(system) = csv_units {
         browser::download(
             &file_name(&l.title, "csv"),
@@ -188,6 +191,7 @@ pub fn Exchange(
     select: Callback<usize>,
 ) -> impl IntoView {
     let pending = RwSignal::new(None::<Result<Incoming, String>>);
+    let note = RwSignal::new(None::<String>);
     let take = move |merge_in: bool| {
         let Some(Ok(inc)) = pending.get_untracked() else {
             return;
@@ -239,10 +243,21 @@ pub fn Exchange(
             }
         })
     };
+    let left_out = move || {
+        note.get().map(|n| {
+            banner(
+                "export-note",
+                "banner-info",
+                false,
+                vec![n],
+                vec![act("OK", "export-note-ok", true, move || note.set(None))],
+            )
+        })
+    };
     view! {
         <div class="button-row screen-only">
-            <button type="button" data-testid="export-json" on:click=move |_| export(ws, None)>"⤓ Member file"</button>
-            <button type="button" data-testid="export-csv" on:click=move |_| export(ws, Some(units.get_untracked()))>
+            <button type="button" data-testid="export-json" on:click=move |_| export(ws, None, note)>"⤓ Member file"</button>
+            <button type="button" data-testid="export-csv" on:click=move |_| export(ws, Some(units.get_untracked()), note)>
                 {move || if units.get() == UnitSystem::Us { "⤓ CSV (US columns)" } else { "⤓ CSV" }}
             </button>
             <label class="file-pick">"⤒ Import "
@@ -250,6 +265,7 @@ pub fn Exchange(
                     on:change=move |e| pick(e, pending) />
             </label>
         </div>
+        {left_out}
         {report}
     }
 }

@@ -15,6 +15,7 @@ pub mod demo;
 pub mod diagram;
 pub mod exchange;
 pub mod fields;
+pub mod framing;
 pub mod html;
 pub mod listops;
 pub mod numtext;

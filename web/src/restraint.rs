@@ -72,6 +72,9 @@ pub enum Restraint {
     Factor,
     /// The buckling length typed directly.
     Length,
+    /// A column in a frame: k from G at its ends (member key
+    /// `frame_major` / `frame_minor`).
+    Frame,
 }
 
 impl Restraint {
@@ -82,6 +85,7 @@ impl Restraint {
             Restraint::Theory(i) => format!("t:{}", END_CONDITIONS.get(i).map_or("", |c| c.key)),
             Restraint::Factor => "factor".into(),
             Restraint::Length => "length".into(),
+            Restraint::Frame => "frame".into(),
         }
     }
 
@@ -94,6 +98,8 @@ impl Restraint {
             find(key).map_or(Restraint::Factor, Restraint::Theory)
         } else if v == "length" {
             Restraint::Length
+        } else if v == "frame" {
+            Restraint::Frame
         } else {
             Restraint::Factor
         }
@@ -110,13 +116,14 @@ impl Restraint {
 
     /// Every choice, in the order of the select.
     pub fn all() -> Vec<Restraint> {
-        let mut out = Vec::with_capacity(14);
+        let mut out = Vec::with_capacity(15);
         for i in 0..END_CONDITIONS.len() {
             out.push(Restraint::Design(i));
             out.push(Restraint::Theory(i));
         }
         out.push(Restraint::Factor);
         out.push(Restraint::Length);
+        out.push(Restraint::Frame);
         out
     }
 
@@ -131,13 +138,17 @@ impl Restraint {
             }),
             Restraint::Factor => "typed factor K".into(),
             Restraint::Length => "typed buckling length L_cr".into(),
+            Restraint::Frame => "column in a frame: k from G at its ends".into(),
         }
     }
 
-    /// The choice that shows a member's axis: a given length, else the
-    /// first classic case whose design (then theoretical) factor equals
-    /// the factor, else a typed factor.
-    pub fn infer(k: f64, lcr_mm: Option<f64>) -> Restraint {
+    /// The choice that shows a member's axis: a frame, else a given
+    /// length, else the first classic case whose design (then theoretical)
+    /// factor equals the factor, else a typed factor.
+    pub fn infer(k: f64, lcr_mm: Option<f64>, framed: bool) -> Restraint {
+        if framed {
+            return Restraint::Frame;
+        }
         if lcr_mm.is_some() {
             return Restraint::Length;
         }
@@ -185,13 +196,18 @@ mod tests {
 
     #[test]
     fn infers_from_member() {
-        assert_eq!(Restraint::infer(1.0, None), Restraint::Design(0));
-        assert_eq!(Restraint::infer(0.65, None), Restraint::Design(1));
-        assert_eq!(Restraint::infer(0.5, None), Restraint::Theory(1));
-        assert_eq!(Restraint::infer(0.7, None), Restraint::Theory(2));
-        assert_eq!(Restraint::infer(0.83, None), Restraint::Factor);
-        assert_eq!(Restraint::infer(1.0, Some(2500.0)), Restraint::Length);
+        assert_eq!(Restraint::infer(1.0, None, false), Restraint::Design(0));
+        assert_eq!(Restraint::infer(0.65, None, false), Restraint::Design(1));
+        assert_eq!(Restraint::infer(0.5, None, false), Restraint::Theory(1));
+        assert_eq!(Restraint::infer(0.7, None, false), Restraint::Theory(2));
+        assert_eq!(Restraint::infer(0.83, None, false), Restraint::Factor);
+        assert_eq!(
+            Restraint::infer(1.0, Some(2500.0), false),
+            Restraint::Length
+        );
         assert_eq!(Restraint::Design(1).factor(), Some(0.65));
         assert_eq!(Restraint::Length.factor(), None);
+        assert_eq!(Restraint::infer(1.0, None, true), Restraint::Frame);
+        assert_eq!(Restraint::Frame.factor(), None);
     }
 }

@@ -31,8 +31,8 @@
 //! has no lateral-torsional buckling.
 
 use super::{
-    c_factors, diagram_is_segment, given_modulus, m_cr, moments, push_c_factors, push_diagram, z_g,
-    Axis, AxisBending, Bending, CSource, Shape,
+    c_factors, diagram_is_segment, m_cr, moments, push_c_factors, push_diagram, z_g, Axis,
+    AxisBending, Bending, CSource, Shape,
 };
 use crate::error::{Error, Result};
 use crate::material::Steel;
@@ -239,6 +239,13 @@ fn classify(input: &Input<'_>, steel: &Steel, axis: Axis, trace: &mut Trace) -> 
     class
 }
 
+/// The section's class in bending alone about `axis` (Table 5.2, as
+/// [`check`] works it, without the working): the beam-column interaction
+/// reads it beside the class in compression.
+pub fn class_in_bending(input: &Input<'_>, steel: &Steel, axis: Axis) -> u8 {
+    classify(input, steel, axis, &mut Trace::off())
+}
+
 fn gamma_m1(input: &Input<'_>) -> f64 {
     input.member.gamma_m1.unwrap_or(1.0)
 }
@@ -292,15 +299,7 @@ fn axis(
     }
     let p = &input.section.props;
     let plastic = class <= 2;
-    let w = match given_modulus(input, axis, plastic)? {
-        Some(w) => w,
-        None => match (axis, plastic) {
-            (Axis::Major, true) => p.w_pl_major_mm3,
-            (Axis::Major, false) => p.w_el_major_mm3,
-            (Axis::Minor, true) => p.w_pl_minor_mm3,
-            (Axis::Minor, false) => p.w_el_minor_mm3,
-        },
-    };
+    let w = super::modulus(input, axis, plastic)?;
     if plastic {
         step!(
             trace,

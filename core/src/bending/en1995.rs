@@ -23,9 +23,9 @@
 
 use super::{diagram_is_segment, moments, push_diagram, shape, Axis, AxisBending, Bending, Shape};
 use crate::error::{Error, Result};
-use crate::material::{Material, TimberKind};
-use crate::member::{LoadDuration, LoadLevel, SpanLoad};
-use crate::method::en1995::{gamma_m, k_mod};
+use crate::material::{Material, Timber, TimberKind};
+use crate::member::{LoadLevel, SpanLoad};
+use crate::method::en1995::design_strength;
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::SectionSpec;
@@ -44,12 +44,55 @@ pub fn f_mk(name: &str) -> Option<f64> {
     digits.parse::<f64>().ok().filter(|v| *v > 0.0)
 }
 
-/// Checks both axes.
-pub fn check(
-    input: &Input<'_>,
-    trace: &mut Trace,
-    _warnings: &mut Vec<Warning>,
-) -> Result<Bending> {
+/// The design bending strengths of a timber member about both axes, with
+/// their factors: what the bending check (6.1.6, 6.3.3) and the
+/// interaction (6.2.4, 6.3.2, 6.3.3) both use.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Strengths {
+    /// The timber.
+    pub timber: Timber,
+    /// f_m,k, MPa (the class number).
+    pub f_mk: f64,
+    /// k_mod (Table 3.1).
+    pub k_mod: f64,
+    /// gamma_M (Table 2.3, or `gamma_m1`).
+    pub gamma_m: f64,
+    /// The depth in the plane of bending about the major axis, mm.
+    pub h_major_mm: f64,
+    /// The width for bending about the major axis, mm.
+    pub b_major_mm: f64,
+}
+
+impl Strengths {
+    /// (h, b) for bending about `axis`, mm: the depth in the plane of
+    /// bending and the width.
+    pub fn dims(&self, axis: Axis) -> (f64, f64) {
+        match axis {
+            Axis::Major => (self.h_major_mm, self.b_major_mm),
+            Axis::Minor => (self.b_major_mm, self.h_major_mm),
+        }
+    }
+
+    /// The size factor k_h for bending about `axis` (3.2 Eq. 3.1 solid,
+    /// 3.3 Eq. 3.2 glulam).
+    pub fn k_h(&self, axis: Axis) -> f64 {
+        let (h, _) = self.dims(axis);
+        match self.timber.kind {
+            TimberKind::Solid if h < 150.0 => (150.0 / h).powf(0.2).min(1.3),
+            TimberKind::Glulam if h < 600.0 => (600.0 / h).powf(0.1).min(1.1),
+            _ => 1.0,
+        }
+    }
+
+    /// f_m,d = k_mod k_h f_m,k / gamma_M about `axis`, MPa (2.4.1 Eq. 2.14).
+    pub fn f_md(&self, axis: Axis) -> f64 {
+        self.k_mod * self.k_h(axis) * self.f_mk / self.gamma_m
+    }
+}
+
+/// The design bending strengths of the member: refuses steel, a custom
+/// timber (no f_m,k) and sections other than rectangles and rounds.
+pub fn strengths(input: &Input<'_>) -> Result<Strengths> {
     let Material::Timber(t) = input.material else {
         return Err(Error::NotApplicable {
             method: KEY,
@@ -77,14 +120,29 @@ pub fn check(
             })
         }
     };
-    let sc = input.member.service_class.unwrap_or(1);
-    let km = k_mod(
-        sc,
-        input.member.load_duration.unwrap_or(LoadDuration::Medium),
-    );
-    let g = input.member.gamma_m1.unwrap_or_else(|| gamma_m(t.kind));
-    let one = |axis: Axis, h: f64, b: f64, trace: &mut Trace| -> Result<AxisBending> {
+    let (_, km, g, _) = design_strength(input, t.kind, t.fc0k_mpa);
+    Ok(Strengths {
+        timber: *t,
+        f_mk: fmk,
+        k_mod: km,
+        gamma_m: g,
+        h_major_mm: h_major,
+        b_major_mm: b_major,
+    })
+}
+
+/// Checks both axes.
+pub fn check(
+    input: &Input<'_>,
+    trace: &mut Trace,
+    _warnings: &mut Vec<Warning>,
+) -> Result<Bending> {
+    let st = strengths(input)?;
+    let t = &st.timber;
+    let fmk = st.f_mk;
+    let one = |axis: Axis, trace: &mut Trace| -> Result<AxisBending> {
         let s = axis.scope();
+        let (h, b) = st.dims(axis);
         let m = moments(input, axis);
         let demand = push_diagram(trace, axis, &m);
         step!(
@@ -96,11 +154,7 @@ pub fn check(
             "MPa",
             "EN 338 / EN 14080 class"
         );
-        let kh = match t.kind {
-            TimberKind::Solid if h < 150.0 => (150.0 / h).powf(0.2).min(1.3),
-            TimberKind::Glulam if h < 600.0 => (600.0 / h).powf(0.1).min(1.1),
-            _ => 1.0,
-        };
+        let kh = st.k_h(axis);
         match t.kind {
             TimberKind::Solid => step!(
                 trace,
@@ -121,7 +175,7 @@ pub fn check(
                 "EN 1995-1-1 Eq. 3.2"
             ),
         }
-        let fmd = km * kh * fmk / g;
+        let fmd = st.f_md(axis);
         step!(
             trace,
             s,
@@ -282,7 +336,7 @@ pub fn check(
         })
     };
     Ok(Bending {
-        major: one(Axis::Major, h_major, b_major, trace)?,
-        minor: one(Axis::Minor, b_major, h_major, trace)?,
+        major: one(Axis::Major, trace)?,
+        minor: one(Axis::Minor, trace)?,
     })
 }

@@ -9,9 +9,11 @@
 //! M_a) x/L + M_span shape(x/L) ([`crate::member::Moments`]).
 //!
 //! Methods without a bending rule refuse a moment with a typed error naming
-//! the moment key: `euler` and `perry-robertson` (flexural buckling only),
-//! and `secant` (it will take equal end moments as the load's eccentricity
-//! with the beam-column interaction; until then it refuses). Angles are
+//! the moment key: `euler` and `perry-robertson` (flexural buckling only).
+//! `secant` takes equal end moments about one axis as the load's
+//! eccentricity ([`crate::method::secant::moment_eccentricity`]), so they
+//! are not bending there (no bending side), and refuses any other moment.
+//! Angles are
 //! refused under every method (no published rule is implemented here), and
 //! so are tees (their monosymmetric M_cr and the stem-in-compression cases
 //! are not implemented). Shear, web bearing, torsion from eccentric load and
@@ -111,6 +113,12 @@ pub fn check(
     let Some(key) = m.first_moment_key() else {
         return Ok(None);
     };
+    if method == Method::Secant {
+        // Equal end moments are the load's eccentricity in the secant
+        // formula (counted there, not again as bending); others refused.
+        crate::method::secant::moment_eccentricity(m)?;
+        return Ok(None);
+    }
     refuse_unsupported(method, input, key)?;
     let major_props_geometric = input.section.props.principal_angle_rad == 0.0;
     if matches!(input.section.family, Family::I | Family::Channel) && !major_props_geometric {
@@ -142,18 +150,11 @@ pub fn check(
 }
 
 fn no_rule(method: Method, key: &'static str) -> Error {
-    let reason = match method {
-        Method::Secant => format!(
-            "{key}: the secant method will take equal end moments as the load's eccentricity with \
-             the beam-column check, which is not in this build; use eccentricity_mm, or a design \
-             code (en1993-1-1, aisc360-lrfd, aisc360-asd, csa-s16, en1995-1-1)"
-        ),
-        _ => format!(
-            "{key}: this method has no bending rule (it checks flexural buckling under axial load \
-             only); set the moments to 0 or use a design code (en1993-1-1, aisc360-lrfd, \
-             aisc360-asd, csa-s16, en1995-1-1)"
-        ),
-    };
+    let reason = format!(
+        "{key}: this method has no bending rule (it checks flexural buckling under axial load \
+         only); set the moments to 0 or use a design code (en1993-1-1, aisc360-lrfd, \
+         aisc360-asd, csa-s16, en1995-1-1)"
+    );
     Error::NotApplicable {
         method: method.key(),
         reason,
@@ -205,6 +206,21 @@ pub fn given_modulus(input: &Input<'_>, axis: Axis, plastic: bool) -> Result<Opt
             ),
         }),
     }
+}
+
+/// The section modulus about `axis`, plastic or elastic: a given section's
+/// typed one (refused naming the key when missing), else the computed one.
+pub fn modulus(input: &Input<'_>, axis: Axis, plastic: bool) -> Result<f64> {
+    let p = &input.section.props;
+    Ok(match given_modulus(input, axis, plastic)? {
+        Some(w) => w,
+        None => match (axis, plastic) {
+            (Axis::Major, true) => p.w_pl_major_mm3,
+            (Axis::Major, false) => p.w_el_major_mm3,
+            (Axis::Minor, true) => p.w_pl_minor_mm3,
+            (Axis::Minor, false) => p.w_el_minor_mm3,
+        },
+    })
 }
 
 /// Whether the length between lateral restraints is the member length, so

@@ -217,6 +217,121 @@ pub fn work(frame: &Frame, which: FrameKey, trace: &mut Trace) -> Result<f64> {
     Ok(k)
 }
 
+/// How the far end of a beam framing into a joint is held, for the
+/// adjustment of its stiffness in G.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum FarEnd {
+    /// As the alignment chart assumes (the beam's far end turns like the
+    /// near one: single curvature when braced, double curvature in a
+    /// sway frame): factor 1.
+    AsCharted,
+    /// Pinned at its far end.
+    Pinned,
+    /// Fixed at its far end.
+    Fixed,
+}
+
+impl FarEnd {
+    /// The factor on the beam's I/L in G's denominator (AISC 360-16
+    /// Commentary, Appendix 7, Section 7.2, the adjustments for girders
+    /// whose far ends differ from the chart's assumptions; recalled from
+    /// memory, common practice): braced frame, far end pinned 1.5, fixed
+    /// 2.0; sway frame, far end pinned 0.5, fixed 2/3.
+    pub fn factor(self, sway: bool) -> f64 {
+        match (self, sway) {
+            (FarEnd::AsCharted, _) => 1.0,
+            (FarEnd::Pinned, false) => 1.5,
+            (FarEnd::Fixed, false) => 2.0,
+            (FarEnd::Pinned, true) => 0.5,
+            (FarEnd::Fixed, true) => 2.0 / 3.0,
+        }
+    }
+}
+
+/// G recommended for a column end at a base without beams (AISC 360-16
+/// Commentary, Appendix 7, Section 7.2; recalled from memory): a pinned
+/// base is taken as 10 (not infinite, since no pin is frictionless) ...
+pub const G_PINNED_BASE: f64 = 10.0;
+/// ... and a fixed base as 1.0 (not 0, since no base is perfectly rigid).
+pub const G_FIXED_BASE: f64 = 1.0;
+
+/// A member framing into a joint: its second moment about the axis of
+/// bending in the frame's plane, mm4, and its length, mm.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Stiffness {
+    /// I, mm4.
+    pub i_mm4: f64,
+    /// Length, mm.
+    pub length_mm: f64,
+}
+
+/// A beam framing into a joint, with how its far end is held.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Beam {
+    /// Its I and length.
+    pub member: Stiffness,
+    /// Its far end.
+    pub far_end: FarEnd,
+}
+
+/// G at a joint and its two sums, for the working.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct JointG {
+    /// sum(I/L) of the columns, mm3.
+    pub columns: f64,
+    /// sum(factor I/L) of the beams, mm3.
+    pub beams: f64,
+    /// G = columns / beams.
+    pub g: f64,
+}
+
+fn stiffness(m: &Stiffness, field: &'static str) -> Result<f64> {
+    for (v, what) in [(m.i_mm4, "I"), (m.length_mm, "length")] {
+        if !(v.is_finite() && v > 0.0) {
+            return Err(Error::Geometry {
+                field,
+                reason: format!("{what} must be a number greater than zero (got {v})"),
+            });
+        }
+    }
+    Ok(m.i_mm4 / m.length_mm)
+}
+
+/// G = sum(EI/L) of the columns over sum(m EI/L) of the beams at a joint,
+/// m the far-end factor of each beam ([`FarEnd::factor`]), all of one E
+/// (so E cancels). `field` names the frame key's G (`frame_major.g_a`,
+/// ...) in errors. Refused: no column, no beam (a base: use
+/// [`G_PINNED_BASE`] or [`G_FIXED_BASE`]), a member without a positive
+/// finite I or length.
+pub fn joint_g(
+    columns: &[Stiffness],
+    beams: &[Beam],
+    sway: bool,
+    field: &'static str,
+) -> Result<JointG> {
+    if columns.is_empty() || beams.is_empty() {
+        return Err(Error::Geometry {
+            field,
+            reason: "G needs at least one column and one beam at the joint; at a base without \
+                     beams take G = 10 (pinned) or 1.0 (fixed)"
+                .into(),
+        });
+    }
+    let mut c = 0.0;
+    for m in columns {
+        c += stiffness(m, field)?;
+    }
+    let mut b = 0.0;
+    for beam in beams {
+        b += beam.far_end.factor(sway) * stiffness(&beam.member, field)?;
+    }
+    Ok(JointG {
+        columns: c,
+        beams: b,
+        g: c / b,
+    })
+}
+
 #[cfg(test)]
 mod tests {
     #![allow(
@@ -277,6 +392,45 @@ mod tests {
         // Very large G approaches the pinned values smoothly.
         assert!((k(false, 1e12, 1e12) - 1.0).abs() < 1e-9);
         assert!((k(true, 0.0, 1e12) - 2.0).abs() < 1e-9);
+    }
+
+    #[test]
+    fn joint_g_sums_and_far_end_factors() {
+        let col = Stiffness {
+            i_mm4: 1.0e8,
+            length_mm: 4000.0,
+        };
+        let beam = |far_end| Beam {
+            member: Stiffness {
+                i_mm4: 2.0e8,
+                length_mm: 8000.0,
+            },
+            far_end,
+        };
+        // Two columns of I/L 25,000 mm3, two beams of 25,000 mm3: G = 1.
+        let g = joint_g(&[col, col], &[beam(FarEnd::AsCharted); 2], true, "f").unwrap();
+        assert_eq!((g.columns, g.beams, g.g), (50_000.0, 50_000.0, 1.0));
+        // Sway, one beam pinned at its far end: 25,000 x 0.5 + 25,000.
+        let g = joint_g(
+            &[col, col],
+            &[beam(FarEnd::Pinned), beam(FarEnd::AsCharted)],
+            true,
+            "f",
+        )
+        .unwrap();
+        assert!((g.g - 50_000.0 / 37_500.0).abs() < 1e-15);
+        // Braced, both fixed at the far end: 2.0 each.
+        let g = joint_g(&[col], &[beam(FarEnd::Fixed); 2], false, "f").unwrap();
+        assert!((g.g - 0.25).abs() < 1e-15);
+        assert_eq!(FarEnd::Pinned.factor(false), 1.5);
+        assert!((FarEnd::Fixed.factor(true) - 2.0 / 3.0).abs() < 1e-15);
+        let e = joint_g(&[col], &[], true, "frame_major.g_b").unwrap_err();
+        assert_eq!(e.field(), Some("frame_major.g_b"));
+        let bad = Stiffness {
+            i_mm4: 1.0e8,
+            length_mm: 0.0,
+        };
+        assert!(joint_g(&[bad], &[beam(FarEnd::Fixed)], true, "f").is_err());
     }
 
     #[test]

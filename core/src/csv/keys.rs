@@ -8,6 +8,9 @@ pub(super) enum Group {
     Material,
     /// `angle_connection`'s keys, written with the prefix `angle_`.
     Angle,
+    /// `frame_major`'s and `frame_minor`'s keys, written with the prefix
+    /// `frame_major_` or `frame_minor_` ([`FRAMES`]).
+    Frame,
 }
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -77,6 +80,12 @@ pub(super) const KEYS: &[KeyInfo] = &[
     k("lcr_major_mm", Group::Member, Kind::Number),
     k("lcr_minor_mm", Group::Member, Kind::Number),
     k("lcr_torsion_mm", Group::Member, Kind::Number),
+    k("frame_major_sway", Group::Frame, Kind::Bool),
+    k("frame_major_g_a", Group::Frame, Kind::Number),
+    k("frame_major_g_b", Group::Frame, Kind::Number),
+    k("frame_minor_sway", Group::Frame, Kind::Bool),
+    k("frame_minor_g_a", Group::Frame, Kind::Number),
+    k("frame_minor_g_b", Group::Frame, Kind::Number),
     k("axial_kn", Group::Member, Kind::Number),
     k("method", Group::Member, Kind::Name),
     k("gamma_m1", Group::Member, Kind::Number),
@@ -104,6 +113,23 @@ pub(super) const KEYS: &[KeyInfo] = &[
     k("amplify_moments", Group::Member, Kind::Bool),
     k("interaction_annex", Group::Member, Kind::Name),
 ];
+
+/// The member keys whose objects are flattened into [`Group::Frame`]
+/// columns `<key>_<inner key>`, and the inner keys, all of which a frame
+/// needs.
+pub(super) const FRAMES: [&str; 2] = ["frame_major", "frame_minor"];
+pub(super) const FRAME_KEYS: [&str; 3] = ["sway", "g_a", "g_b"];
+
+/// The frame key and inner key of a [`Group::Frame`] column
+/// (`frame_major_g_a` -> `("frame_major", "g_a")`).
+pub(super) fn frame_parts(column: &str) -> Option<(&'static str, &str)> {
+    FRAMES.iter().find_map(|f| {
+        column
+            .strip_prefix(f)
+            .and_then(|r| r.strip_prefix('_'))
+            .map(|inner| (*f, inner))
+    })
+}
 
 /// Keys every row needs (the material and section needs are per row).
 pub(super) const REQUIRED: &[&str] = &["id", "kind", "length_mm", "axial_kn", "method"];

@@ -9,7 +9,9 @@
 //! `fy_mpa` and `e_mpa`, or the timber keys `fc0k_mpa`, `e005_mpa`,
 //! `e0mean_mpa`, `timber`); `angle_connection`'s keys take the prefix
 //! `angle_` (`angle_leg`: `long` or `short`; `angle_truss`: `planar` or
-//! `space`, needing `angle_leg`). Header names are read without regard to case,
+//! `space`, needing `angle_leg`); `frame_major`'s and `frame_minor`'s keys
+//! take the prefix `frame_major_` / `frame_minor_` (`frame_major_sway`,
+//! `frame_major_g_a`, `frame_major_g_b`: all three or none). Header names are read without regard to case,
 //! surrounding spaces, or spaces and hyphens in place of underscores. An
 //! empty cell means the key is absent (its default applies); a quoted empty
 //! cell (`""`) is an empty text.
@@ -69,7 +71,8 @@
 //!
 //! Writing ([`to_csv`]) uses SI keys, `,` as the separator, CRLF line ends
 //! (RFC 4180) and the shortest text that reads back to the same number, so
-//! JSON -> CSV -> JSON keeps every member exactly.
+//! JSON -> CSV -> JSON keeps every member exactly, except `buckling_model`,
+//! which a row does not carry ([`left_out`] says which members lose it).
 
 mod keys;
 mod lex;

@@ -107,7 +107,14 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             "interaction_annex" => "A or B".into(),
             _ => "a name".into(),
         },
+        Kind::Number if info.group == Group::Frame => {
+            "G, a number of 0 or more (sum of EI/L of the columns over that of the beams at the end)"
+                .into()
+        }
         Kind::Whole => "a whole number".into(),
+        Kind::Bool if info.group == Group::Frame => {
+            "true (sidesway uninhibited) or false (braced)".into()
+        }
         Kind::Bool => "true or false".into(),
         Kind::Number => match unit {
             Some(UsUnit::Ft) => "a length in feet, e.g. 13.5 or 13'-6\"".into(),
@@ -272,6 +279,26 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                 info.map(|i| expected_for(i, None)).unwrap_or_default(),
                 format!("{key} is missing; every member needs one"),
             ));
+        }
+    }
+    for frame in FRAMES {
+        let column = |inner: &str| format!("{frame}_{inner}");
+        if FRAME_KEYS.iter().any(|inner| has(&column(inner))) {
+            for inner in FRAME_KEYS {
+                let key = column(inner);
+                if !has(&key) {
+                    problems.push(problem(
+                        line,
+                        ctx.header_of(&key),
+                        key_info(&key)
+                            .map(|i| expected_for(i, None))
+                            .unwrap_or_default(),
+                        format!(
+                            "{key} is missing; {frame} needs {frame}_sway, {frame}_g_a and {frame}_g_b"
+                        ),
+                    ));
+                }
+            }
         }
     }
     if has("angle_truss") && !has("angle_leg") {
@@ -494,7 +521,17 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
     let mut section = Map::new();
     let mut material = Map::new();
     let mut angle = Map::new();
+    let mut frames = [Map::new(), Map::new()];
     for (info, value) in given {
+        if info.group == Group::Frame {
+            if let Some((frame, inner)) = frame_parts(info.key) {
+                let i = usize::from(frame == FRAMES[1]);
+                if let Some(target) = frames.get_mut(i) {
+                    target.insert(inner.to_string(), value);
+                }
+            }
+            continue;
+        }
         let (target, key) = match info.group {
             Group::Member => (&mut member, info.key),
             Group::Section => (&mut section, info.key),
@@ -503,6 +540,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                 &mut angle,
                 info.key.strip_prefix("angle_").unwrap_or(info.key),
             ),
+            Group::Frame => continue,
         };
         target.insert(key.to_string(), value);
     }
@@ -511,11 +549,19 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
     if !angle.is_empty() {
         member.insert("angle_connection".into(), Value::Object(angle));
     }
+    for (frame, inner) in FRAMES.iter().zip(frames) {
+        if !inner.is_empty() {
+            member.insert((*frame).into(), Value::Object(inner));
+        }
+    }
     let value = Value::Object(member);
     file::deserialize_member(&value).map_err(|(path, inner)| {
         let key = missing_field(&inner).unwrap_or_else(|| {
             if let Some(k) = path.strip_prefix("angle_connection.") {
                 return format!("angle_{k}");
+            }
+            if let Some((frame, k)) = path.split_once('.').filter(|(f, _)| FRAMES.contains(f)) {
+                return format!("{frame}_{k}");
             }
             path.rsplit('.')
                 .next()
@@ -618,11 +664,11 @@ pub fn parse_csv_within(text: &str, max_rows: usize) -> CsvImport {
         columns: &columns,
         mark,
     };
+    let mut ids = crate::ids::SeenIds::with_capacity(rows.len(), 8 * rows.len());
     for record in &rows {
         match read_row(record, &ctx) {
             Ok(member) => {
-                // A linear search: a hash set would add its code to the wasm.
-                if !out.members.iter().any(|m| m.id == member.id) {
+                if ids.insert(&member.id) {
                     out.members.push(member);
                     out.member_lines.push(record.line);
                 } else {

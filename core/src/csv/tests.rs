@@ -357,6 +357,72 @@ fn angle_columns_read_and_report_bad_values() {
 }
 
 #[test]
+fn frame_columns_read_and_report_bad_values() {
+    use crate::buckling::chart::Frame;
+    let head = "id,kind,depth_mm,width_mm,flange_mm,web_mm,grade,length_mm,axial_kn,method,\
+                Frame Major Sway,frame-major-g-a,frame_major_g_b,frame_minor_sway,frame_minor_g_a,frame_minor_g_b\n";
+    let rows = "F1,i,240,240,17,10,S355,5400,380,en1993-1-1,Yes,\"1,5\",2.4,false,0,10\n\
+                F2,i,240,240,17,10,S355,5400,380,en1993-1-1,,,,,,\n\
+                F3,i,240,240,17,10,S355,5400,380,en1993-1-1,true,1,,,,\n\
+                F4,i,240,240,17,10,S355,5400,380,en1993-1-1,sideways,stiff,1,,,\n\
+                F5,i,240,240,17,10,S355,5400,380,en1993-1-1,,,,false,,3\n";
+    let got = parse_csv(&format!("{head}{rows}"));
+    let read: Vec<_> = got
+        .members
+        .iter()
+        .map(|m| (m.id.as_str(), m.frame_major, m.frame_minor))
+        .collect();
+    assert_eq!(
+        read,
+        vec![
+            (
+                "F1",
+                Some(Frame {
+                    sway: true,
+                    g_a: 1.5,
+                    g_b: 2.4
+                }),
+                Some(Frame {
+                    sway: false,
+                    g_a: 0.0,
+                    g_b: 10.0
+                })
+            ),
+            ("F2", None, None),
+        ]
+    );
+    let problems: Vec<(usize, &str, &str)> = got
+        .problems
+        .iter()
+        .map(|p| (p.line, p.column.as_str(), p.expected.as_str()))
+        .collect();
+    let g =
+        "G, a number of 0 or more (sum of EI/L of the columns over that of the beams at the end)";
+    assert_eq!(
+        problems,
+        vec![
+            (4, "frame_major_g_b", g),
+            (
+                5,
+                "Frame Major Sway",
+                "true (sidesway uninhibited) or false (braced)"
+            ),
+            (5, "frame-major-g-a", g),
+            (6, "frame_minor_g_a", g),
+        ],
+        "{:#?}",
+        got.problems
+    );
+    assert!(got.problems[0]
+        .message
+        .contains("frame_major_g_b is missing; frame_major needs frame_major_sway, frame_major_g_a and frame_major_g_b"));
+    assert!(got.problems[1].message.contains("sideways"));
+    assert!(got.problems[3]
+        .message
+        .contains("frame_minor_g_a is missing"));
+}
+
+#[test]
 fn never_panics_on_random_input() {
     let alphabet: Vec<char> =
         "id,kind;rect\tround\"\r\n '-/.0123456789eE+−,\u{feff}sep=length_ft\u{a0}\""
@@ -447,7 +513,12 @@ const EVERY: &str = r#"{"format": "strutline.members", "version": 3, "title": "e
      "m_major_b_knm": 17.25, "m_major_span_knm": 60.75, "span_load_major": "point",
      "m_minor_a_knm": 1.5, "m_minor_b_knm": 1.5, "m_minor_span_knm": -0.125,
      "span_load_minor": "uniform", "k_lt": 0.5, "lcr_lt_mm": 1800, "lt_restrained": true,
-     "load_level": "compression-flange", "amplify_moments": false, "interaction_annex": "A"}
+     "load_level": "compression-flange", "amplify_moments": false, "interaction_annex": "A"},
+    {"id": "F15", "section": {"kind": "i", "depth_mm": 240, "width_mm": 240, "flange_mm": 17,
+     "web_mm": 10, "root_radius_mm": 21}, "material": {"grade": "S355"}, "length_mm": 5400,
+     "axial_kn": 380, "method": "en1993-1-1",
+     "frame_major": {"sway": true, "g_a": 0.30000000000000004, "g_b": 2.4},
+     "frame_minor": {"sway": false, "g_a": 0, "g_b": 10}}
   ]}"#;
 
 #[test]
@@ -458,7 +529,7 @@ fn json_csv_json_keeps_every_member_exactly() {
     // some long 17-digit values by one unit in the last place, so such
     // values are kept out of the JSON -> JSON comparison.
     let original = file::parse(EVERY).unwrap();
-    assert_eq!(original.members.len(), 14);
+    assert_eq!(original.members.len(), 15);
     let csv_text = to_csv(&original);
     let back = parse_csv(&csv_text);
     assert!(back.problems.is_empty(), "{:#?}\n{csv_text}", back.problems);
@@ -500,6 +571,30 @@ fn json_csv_json_keeps_every_member_exactly() {
         .filter(|m| m.id != "B14")
         .all(|m| m.amplify_moments && m.interaction_annex == crate::member::InteractionAnnex::B));
     assert!(!csv_text.contains('{'), "{csv_text}");
+    // The frames are three flat columns each, after the buckling lengths.
+    assert!(
+        header.contains(
+            ",lcr_torsion_mm,frame_major_sway,frame_major_g_a,frame_major_g_b,\
+             frame_minor_sway,frame_minor_g_a,frame_minor_g_b,axial_kn,"
+        ),
+        "{header}"
+    );
+    let f15 = again.members.iter().find(|m| m.id == "F15").unwrap();
+    assert_eq!(
+        (f15.frame_major, f15.frame_minor),
+        (
+            Some(crate::buckling::chart::Frame {
+                sway: true,
+                g_a: 0.30000000000000004,
+                g_b: 2.4
+            }),
+            Some(crate::buckling::chart::Frame {
+                sway: false,
+                g_a: 0.0,
+                g_b: 10.0
+            })
+        )
+    );
     let l12 = again.members.iter().find(|m| m.id == "L12").unwrap();
     assert_eq!(
         l12.angle_connection,
@@ -696,14 +791,15 @@ fn version_3_keys_are_left_out_and_said_so() {
     }
     let said = left_out(&f).unwrap();
     assert!(
-        said.contains("member \"K1\": buckling_model")
-            && said.contains("member \"W2\": frame_major"),
+        said.contains("member \"K1\": buckling_model") && !said.contains("W2"),
         "{said}"
     );
-    // The rest reads back.
+    // The rest reads back, W2's frame_major included.
     let back = parse_csv(&text);
     assert!(back.problems.is_empty(), "{:?}", back.problems);
     assert_eq!(back.members.len(), 2);
+    assert_eq!(back.members[1].frame_major, f.members[1].frame_major);
+    assert!(back.members[1].frame_major.is_some());
     let mut again = crate::file::MemberFile::new("t");
     again.members = back.members;
     assert!(left_out(&again).is_none());

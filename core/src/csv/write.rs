@@ -38,10 +38,8 @@ pub fn to_csv(file: &MemberFile) -> String {
 }
 
 /// The member keys (version 3) a CSV row does not carry.
-pub const NOT_IN_CSV: [&str; 3] = [NOT_IN_CSV_0, NOT_IN_CSV_1, NOT_IN_CSV_2];
+pub const NOT_IN_CSV: [&str; 1] = [NOT_IN_CSV_0];
 const NOT_IN_CSV_0: &str = "buckling_model";
-const NOT_IN_CSV_1: &str = "frame_major";
-const NOT_IN_CSV_2: &str = "frame_minor";
 
 /// What [`to_csv`] leaves out of `file`, in words for the person
 /// exporting ("member \"K1\": buckling_model"), or `None` when the CSV
@@ -51,15 +49,11 @@ pub fn left_out(file: &MemberFile) -> Option<String> {
         .members
         .iter()
         .filter_map(|m| {
-            let keys: Vec<&str> = [
-                m.buckling_model.is_some(),
-                m.frame_major.is_some(),
-                m.frame_minor.is_some(),
-            ]
-            .iter()
-            .zip(NOT_IN_CSV)
-            .filter_map(|(given, key)| given.then_some(key))
-            .collect();
+            let keys: Vec<&str> = [m.buckling_model.is_some()]
+                .iter()
+                .zip(NOT_IN_CSV)
+                .filter_map(|(given, key)| given.then_some(key))
+                .collect();
             (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
         })
         .collect();
@@ -110,7 +104,12 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
                             }
                         }
                         // Not carried by CSV; see [`left_out`].
-                        (NOT_IN_CSV_0 | NOT_IN_CSV_1 | NOT_IN_CSV_2, _) => {}
+                        (NOT_IN_CSV_0, _) => {}
+                        (frame, Value::Object(inner)) if FRAMES.contains(&frame) => {
+                            for (k2, v2) in inner {
+                                flat.insert(format!("{frame}_{k2}"), v2);
+                            }
+                        }
                         ("angle_connection", Value::Object(inner)) => {
                             for (k2, v2) in inner {
                                 flat.insert(format!("angle_{k2}"), v2);

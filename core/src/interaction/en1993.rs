@@ -1,15 +1,1489 @@
-//! EN 1993-1-1 6.3.3 (6.61), (6.62) with the factors of Annex A or B, and 6.2.9.
+//! EN 1993-1-1:2005 (+AC:2009) beam-columns: the member check 6.3.3,
+//! equations (6.61) and (6.62), with the interaction factors k_ij of Annex B
+//! (Method 2, the default) or Annex A (Method 1), and the cross-section
+//! check 6.2.9.
+//!
+//! Axes: the equations' y-y is the member's major principal axis and z-z its
+//! minor one (for I sections and channels y-y is then the axis parallel to
+//! the flanges, as 6.3.3 means it: the bending check refuses an I or channel
+//! whose major principal axis is not that axis; for hollow and solid
+//! sections the equations are symmetric in their naming). chi_y, chi_z and
+//! lambda_y, lambda_z are the member's flexural modes about those axes
+//! (6.3.1); where a twisting mode (torsional or flexural-torsional buckling,
+//! 6.3.1.4) has a lower chi, chi_z is that lower value (beyond the letter of
+//! 6.3.3(4), which names flexural buckling: the safe reading, said in the
+//! working). chi_LT is the bending check's: chi_LT,mod (Eq. 6.58) for I
+//! sections under 6.3.2.3, chi_LT of 6.3.2.2 otherwise, 1 where lateral-
+//! torsional buckling does not apply.
+//!
+//! The class of the section under compression and bending together lies
+//! between its class in compression alone and its class in bending alone
+//! (5.5.2(6)); the worse of the two is taken (safe reading). N_Rk = A f_y
+//! and M_Rk = W f_y with W_pl for Classes 1 and 2, W_el for Class 3; for
+//! Class 4, A_eff (EN 1993-1-5, as the compression check computes it) and
+//! W_eff = W_el (the bending check refuses a section that is Class 4 in
+//! bending alone, so the moment alone leaves the section fully effective);
+//! the shift of the effective centroid e_N is zero for the doubly symmetric
+//! I and rectangular hollow sections, and a Class 4 section of another shape
+//! is refused.
+//!
+//! The equivalent uniform moment factors C_my, C_mz, C_mLT of Table B.3 are
+//! read from the member file's moment diagram about each axis. The diagram is
+//! the one between the points braced against that buckling only where the
+//! buckling length is the member's own (k = 1, or a non-sway frame); a sway
+//! frame takes C_m = 0.9 (Table B.3, note); a buckling length longer than
+//! the member without a frame may be a sway mode: the larger of 0.9 and the
+//! diagram's value; a shorter one may come from a brace within the member,
+//! whose segment's diagram the file does not hold: C_m = 1.0, the largest
+//! value of Table B.3. C_mLT likewise uses the diagram only when the length
+//! between lateral restraints is the member length.
 
 use super::{Check, Context};
-use crate::error::Result;
-use crate::outcome::Warning;
-use crate::trace::Trace;
+use crate::bending::{self, en1993::class_in_bending, Axis};
+use crate::error::{Error, Result};
+use crate::material::Steel;
+use crate::member::{InteractionAnnex, Moments, SpanLoad};
+use crate::method::common::{require_steel, warn_once};
+use crate::outcome::{Mode, Warning};
+use crate::section::{Family, SectionSpec};
+use crate::stability::GAMMA_M0;
+use crate::trace::{step, Scope, Trace};
 
-/// The interaction equations, `None` while they are not implemented.
+const KEY: &str = "en1993-1-1";
+const S: Scope = Scope::Interaction;
+
+/// The interaction equations of EN 1993-1-1: 6.2.9, (6.61) and (6.62).
 pub fn check(
+    ctx: &Context<'_>,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Result<Option<Vec<Check>>> {
+    let steel = require_steel(ctx.input, KEY)?;
+    let b = Basis::new(ctx, steel, trace)?;
+    let section = section_check(ctx, &b, trace);
+    let (u61, u62) = match ctx.input.member.interaction_annex {
+        InteractionAnnex::B => {
+            let cm = factors_b(ctx, trace, warnings);
+            annex_b(ctx, &b, &cm, trace)
+        }
+        InteractionAnnex::A => annex_a(ctx, steel, &b, trace, warnings)?,
+    };
+    Ok(Some(vec![
+        Check {
+            check: "6.2.9",
+            utilisation: section,
+        },
+        Check {
+            check: "6.61",
+            utilisation: u61,
+        },
+        Check {
+            check: "6.62",
+            utilisation: u62,
+        },
+    ]))
+}
+
+/// The member's side of the interaction, shared by both annexes and 6.2.9.
+#[derive(Debug, Clone, Copy)]
+struct Basis {
+    /// N_Ed, kN.
+    n_ed: f64,
+    /// M_y,Ed and M_z,Ed: the largest first-order moments along the member, kNm.
+    m_y: f64,
+    m_z: f64,
+    /// The class under compression and bending.
+    class: u8,
+    /// f_y, MPa.
+    fy: f64,
+    /// A (A_eff for Class 4), mm2.
+    area: f64,
+    /// W_y, W_z by class, mm3.
+    w_y: f64,
+    w_z: f64,
+    /// N_Rk = A f_y, kN; M_Rk = W f_y, kNm.
+    n_rk: f64,
+    m_y_rk: f64,
+    m_z_rk: f64,
+    chi_y: f64,
+    chi_z: f64,
+    lambda_y: f64,
+    lambda_z: f64,
+    chi_lt: f64,
+    gamma_m1: f64,
+}
+
+impl Basis {
+    fn new(ctx: &Context<'_>, steel: &Steel, trace: &mut Trace) -> Result<Basis> {
+        let input = ctx.input;
+        let m = input.member;
+        let p = &input.section.props;
+        let n_ed = m.axial_kn;
+        let (m_y, m_z) = (ctx.bending.major.demand_knm, ctx.bending.minor.demand_knm);
+        step!(
+            trace,
+            S,
+            "amplify_moments",
+            "not used: (6.61) and (6.62) include the member's second-order effects through chi \
+             and k_ij, so the moments are taken as first-order (moments that already include \
+             them are counted twice, on the safe side)",
+            if m.amplify_moments { 1.0 } else { 0.0 },
+            "-",
+            "EN 1993-1-1 6.3.3(1), (3)"
+        );
+        step!(
+            trace,
+            S,
+            "N_Ed",
+            "design axial compression",
+            n_ed,
+            "kN",
+            "member file"
+        );
+        step!(
+            trace,
+            S,
+            "M_y,Ed",
+            "largest design moment about y-y (the major principal axis) along the member",
+            m_y,
+            "kNm",
+            "member file"
+        );
+        step!(
+            trace,
+            S,
+            "M_z,Ed",
+            "largest design moment about z-z (the minor principal axis) along the member",
+            m_z,
+            "kNm",
+            "member file"
+        );
+        // The class under the combined actions (5.5.2(6)).
+        let class_n = ctx.assessment.classified.map(|c| c.class);
+        let class_y = (m_y > 0.0).then(|| class_in_bending(input, steel, Axis::Major));
+        let class_z = (m_z > 0.0).then(|| class_in_bending(input, steel, Axis::Minor));
+        if let Some(c) = class_n {
+            step!(
+                trace,
+                S,
+                "class_N",
+                "class in compression alone",
+                f64::from(c),
+                "-",
+                "EN 1993-1-1 Table 5.2"
+            );
+        }
+        if let Some(c) = class_y {
+            step!(
+                trace,
+                S,
+                "class_My",
+                "class in bending alone about y-y",
+                f64::from(c),
+                "-",
+                "EN 1993-1-1 Table 5.2"
+            );
+        }
+        if let Some(c) = class_z {
+            step!(
+                trace,
+                S,
+                "class_Mz",
+                "class in bending alone about z-z",
+                f64::from(c),
+                "-",
+                "EN 1993-1-1 Table 5.2"
+            );
+        }
+        let class = [class_n, class_y, class_z]
+            .into_iter()
+            .flatten()
+            .max()
+            .unwrap_or(3);
+        step!(
+            trace,
+            S,
+            "class",
+            "class under compression and bending: the worse of the classes above (the actual \
+             stress distribution lies between them; safe reading)",
+            f64::from(class),
+            "-",
+            "EN 1993-1-1 5.5.2(6)"
+        );
+        let fy = steel.fy_mpa;
+        let area = if class == 4 {
+            let doubly = matches!(input.section.family, Family::I | Family::Rhs);
+            match ctx.assessment.en_effective {
+                Some(e) if doubly => e.area_mm2,
+                _ => {
+                    return Err(Error::NotApplicable {
+                        method: KEY,
+                        reason: "axial_kn: the section is Class 4 under compression and bending; \
+                                 the beam-column check is worked for Class 4 only for doubly \
+                                 symmetric I and rectangular hollow sections (no shift e_N of \
+                                 the effective centroid); choose a stockier section or check \
+                                 this member by hand (EN 1993-1-1 6.2.9.3, 6.3.3)"
+                            .into(),
+                    })
+                }
+            }
+        } else {
+            p.area_mm2
+        };
+        let plastic = class <= 2;
+        let w_y = bending::modulus(input, Axis::Major, plastic)?;
+        let w_z = bending::modulus(input, Axis::Minor, plastic)?;
+        match class {
+            4 => {
+                step!(
+                    trace,
+                    S,
+                    "A_eff",
+                    "effective area (EN 1993-1-5), Class 4",
+                    area,
+                    "mm2",
+                    "EN 1993-1-1 6.2.2.5, Table B.1"
+                );
+                step!(
+                    trace,
+                    S,
+                    "W_eff,y",
+                    "effective modulus about y-y under the moment alone: the section is not \
+                     Class 4 in bending alone, so W_el,y",
+                    w_y,
+                    "mm3",
+                    "EN 1993-1-1 6.2.2.5, Table B.1"
+                );
+                step!(
+                    trace,
+                    S,
+                    "W_eff,z",
+                    "effective modulus about z-z under the moment alone: W_el,z",
+                    w_z,
+                    "mm3",
+                    "EN 1993-1-1 6.2.2.5, Table B.1"
+                );
+                step!(
+                    trace,
+                    S,
+                    "e_N",
+                    "shift of the effective centroid: zero for a doubly symmetric section, so \
+                     Delta M_y,Ed = Delta M_z,Ed = 0",
+                    0.0,
+                    "mm",
+                    "EN 1993-1-1 6.2.2.5(4), Table 6.7"
+                );
+            }
+            3 => {
+                step!(trace, S, "A", "area", area, "mm2", "EN 1993-1-1 Table 6.7");
+                step!(
+                    trace,
+                    S,
+                    "W_el,y",
+                    "elastic modulus about y-y (Class 3)",
+                    w_y,
+                    "mm3",
+                    "EN 1993-1-1 Table 6.7"
+                );
+                step!(
+                    trace,
+                    S,
+                    "W_el,z",
+                    "elastic modulus about z-z (Class 3)",
+                    w_z,
+                    "mm3",
+                    "EN 1993-1-1 Table 6.7"
+                );
+            }
+            _ => {
+                step!(trace, S, "A", "area", area, "mm2", "EN 1993-1-1 Table 6.7");
+                step!(
+                    trace,
+                    S,
+                    "W_pl,y",
+                    "plastic modulus about y-y (Class 1 or 2)",
+                    w_y,
+                    "mm3",
+                    "EN 1993-1-1 Table 6.7"
+                );
+                step!(
+                    trace,
+                    S,
+                    "W_pl,z",
+                    "plastic modulus about z-z (Class 1 or 2)",
+                    w_z,
+                    "mm3",
+                    "EN 1993-1-1 Table 6.7"
+                );
+            }
+        }
+        let n_rk = area * fy / 1000.0;
+        let (m_y_rk, m_z_rk) = (w_y * fy / 1e6, w_z * fy / 1e6);
+        step!(
+            trace,
+            S,
+            "N_Rk",
+            "characteristic resistance to compression A f_y (A_eff for Class 4)",
+            n_rk,
+            "kN",
+            "EN 1993-1-1 6.3.3(4), Table 6.7"
+        );
+        step!(
+            trace,
+            S,
+            "M_y,Rk",
+            "characteristic moment resistance about y-y, W_y f_y",
+            m_y_rk,
+            "kNm",
+            "EN 1993-1-1 6.3.3(4), Table 6.7"
+        );
+        step!(
+            trace,
+            S,
+            "M_z,Rk",
+            "characteristic moment resistance about z-z, W_z f_y",
+            m_z_rk,
+            "kNm",
+            "EN 1993-1-1 6.3.3(4), Table 6.7"
+        );
+        let gamma_m1 = m.gamma_m1.unwrap_or(1.0);
+        step!(
+            trace,
+            S,
+            "gamma_M1",
+            "partial factor for member instability (gamma_m1, or the recommended 1.0)",
+            gamma_m1,
+            "-",
+            "EN 1993-1-1 6.1(1) Note 2B"
+        );
+        let missing = |what: &str| Error::NotApplicable {
+            method: KEY,
+            reason: format!(
+                "axial_kn: the {what} buckling mode was not worked, and the beam-column check \
+                 needs it"
+            ),
+        };
+        let major = ctx.mode(Mode::Major).ok_or_else(|| missing("major-axis"))?;
+        let minor = ctx.mode(Mode::Minor).ok_or_else(|| missing("minor-axis"))?;
+        let twist = ctx
+            .modes
+            .iter()
+            .filter(|r| matches!(r.mode, Mode::Torsional | Mode::FlexuralTorsional))
+            .min_by(|a, b| a.reduction.total_cmp(&b.reduction));
+        step!(
+            trace,
+            S,
+            "chi_y",
+            "flexural buckling reduction about y-y",
+            major.reduction,
+            "-",
+            "EN 1993-1-1 6.3.1, Eq. 6.49"
+        );
+        step!(
+            trace,
+            S,
+            "lambda_bar_y",
+            "relative slenderness about y-y",
+            major.relative_slenderness,
+            "-",
+            "EN 1993-1-1 Eq. 6.50"
+        );
+        step!(
+            trace,
+            S,
+            "lambda_bar_z",
+            "relative slenderness about z-z (flexural)",
+            minor.relative_slenderness,
+            "-",
+            "EN 1993-1-1 Eq. 6.50"
+        );
+        let mut chi_z = minor.reduction;
+        match twist {
+            Some(t) if t.reduction < chi_z => {
+                step!(
+                    trace,
+                    S,
+                    "chi_z,flex",
+                    "flexural buckling reduction about z-z",
+                    chi_z,
+                    "-",
+                    "EN 1993-1-1 6.3.1, Eq. 6.49"
+                );
+                chi_z = t.reduction;
+                step!(
+                    trace,
+                    S,
+                    "chi_z",
+                    "the twisting mode's lower reduction taken for chi_z (6.3.3(4) names \
+                     flexural buckling; the lower value is the safe reading)",
+                    chi_z,
+                    "-",
+                    "EN 1993-1-1 6.3.1.4, 6.3.3(4)"
+                );
+            }
+            _ => step!(
+                trace,
+                S,
+                "chi_z",
+                "flexural buckling reduction about z-z (no twisting mode lower)",
+                chi_z,
+                "-",
+                "EN 1993-1-1 6.3.1, Eq. 6.49"
+            ),
+        }
+        let chi_lt = ctx.bending.major.reduction;
+        if ctx.bending.major.critical_knm.is_none() {
+            step!(
+                trace,
+                S,
+                "chi_LT",
+                "no lateral-torsional buckling (held continuously, or a circular section)",
+                chi_lt,
+                "-",
+                "EN 1993-1-1 6.3.2.1"
+            );
+        } else if matches!(input.section.spec, SectionSpec::I(_)) {
+            step!(
+                trace,
+                S,
+                "chi_LT",
+                "chi_LT,mod of the bending check: 6.3.2.3 applies to this I section",
+                chi_lt,
+                "-",
+                "EN 1993-1-1 6.3.2.3, Eq. 6.58; 6.3.3(4)"
+            );
+        } else {
+            step!(
+                trace,
+                S,
+                "chi_LT",
+                "chi_LT of the bending check, general case",
+                chi_lt,
+                "-",
+                "EN 1993-1-1 6.3.2.2, Eq. 6.56; 6.3.3(4)"
+            );
+        }
+        Ok(Basis {
+            n_ed,
+            m_y,
+            m_z,
+            class,
+            fy,
+            area,
+            w_y,
+            w_z,
+            n_rk,
+            m_y_rk,
+            m_z_rk,
+            chi_y: major.reduction,
+            chi_z,
+            lambda_y: major.relative_slenderness,
+            lambda_z: minor.relative_slenderness,
+            chi_lt,
+            gamma_m1,
+        })
+    }
+
+    /// The (6.61)/(6.62) terms N_Ed / (chi N_Rk / gamma_M1) for chi_y and
+    /// chi_z, and M_y,Ed / (chi_LT M_y,Rk / gamma_M1), M_z,Ed / (M_z,Rk /
+    /// gamma_M1).
+    fn ratios(&self) -> [f64; 4] {
+        let g = self.gamma_m1;
+        [
+            ratio(self.n_ed, self.chi_y * self.n_rk / g),
+            ratio(self.n_ed, self.chi_z * self.n_rk / g),
+            ratio(self.m_y, self.chi_lt * self.m_y_rk / g),
+            ratio(self.m_z, self.m_z_rk / g),
+        ]
+    }
+}
+
+/// Demand over resistance: 0 without demand, infinite without resistance.
+fn ratio(demand: f64, resistance: f64) -> f64 {
+    if demand == 0.0 {
+        0.0
+    } else if resistance > 0.0 {
+        demand / resistance
+    } else {
+        f64::INFINITY
+    }
+}
+
+// ---------------------------------------------------------------------------
+// Table B.3: equivalent uniform moment factors.
+
+/// Which row of Table B.3 gave a factor.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum Row {
+    /// No moment about the axis: C_m = 1 (it multiplies zero).
+    NoMoment,
+    /// End moments only: 0.6 + 0.4 psi >= 0.4.
+    Ends {
+        /// psi = smaller end moment over the larger (positive in single curvature).
+        psi: f64,
+    },
+    /// Transverse load, the largest moment at an end: alpha_s = M_s / M_h.
+    AlphaS {
+        /// alpha_s.
+        alpha: f64,
+        /// psi.
+        psi: f64,
+    },
+    /// Transverse load, the largest moment in the span: alpha_h = M_h / M_s.
+    AlphaH {
+        /// alpha_h.
+        alpha: f64,
+        /// psi.
+        psi: f64,
+    },
+}
+
+/// C_m of EN 1993-1-1 Table B.3 for the end moments M_h (the larger),
+/// psi M_h and the moment M_s in the span, under a uniform or point load.
+pub fn c_m_at(m_h: f64, psi: f64, m_s: f64, load: SpanLoad) -> (f64, Row) {
+    let uniform = load == SpanLoad::Uniform;
+    if m_h.abs() >= m_s.abs() {
+        let a = if m_h == 0.0 { 0.0 } else { m_s / m_h };
+        let c = if a >= 0.0 {
+            0.2 + 0.8 * a
+        } else if psi >= 0.0 {
+            if uniform {
+                0.1 - 0.8 * a
+            } else {
+                -0.8 * a
+            }
+        } else if uniform {
+            0.1 * (1.0 - psi) - 0.8 * a
+        } else {
+            0.2 * (-psi) - 0.8 * a
+        };
+        (c.max(0.4), Row::AlphaS { alpha: a, psi })
+    } else {
+        let a = m_h / m_s;
+        let shape = if a < 0.0 && psi < 0.0 {
+            a * (1.0 + 2.0 * psi)
+        } else {
+            a
+        };
+        let c = if uniform {
+            0.95 + 0.05 * shape
+        } else {
+            0.90 + 0.10 * shape
+        };
+        (c, Row::AlphaH { alpha: a, psi })
+    }
+}
+
+/// C_m of Table B.3 for a moment diagram of the member file. With load in
+/// the span, M_s is read both at mid-length and, for a uniform load with
+/// unequal end moments, at the parabola's turning point; the larger C_m of
+/// the two readings is taken (the table's figures do not say which; safe
+/// reading).
+pub fn c_m(m: &Moments) -> (f64, Row) {
+    match bending::shape(m) {
+        bending::Shape::None => (1.0, Row::NoMoment),
+        bending::Shape::Linear { psi } => ((0.6 + 0.4 * psi).max(0.4), Row::Ends { psi }),
+        bending::Shape::Span(_) | bending::Shape::Combined => {
+            let (m_h, other) = if m.a_knm.abs() >= m.b_knm.abs() {
+                (m.a_knm, m.b_knm)
+            } else {
+                (m.b_knm, m.a_knm)
+            };
+            let psi = if m_h == 0.0 {
+                1.0
+            } else {
+                (other / m_h).clamp(-1.0, 1.0)
+            };
+            let mid = c_m_at(m_h, psi, m.at(0.5), m.span_load);
+            if m.span_load == SpanLoad::Uniform {
+                let s = 0.5 + (m.b_knm - m.a_knm) / (8.0 * m.span_knm);
+                if s > 0.0 && s < 1.0 && s != 0.5 {
+                    let turn = c_m_at(m_h, psi, m.at(s), m.span_load);
+                    if turn.0 > mid.0 {
+                        return turn;
+                    }
+                }
+            }
+            mid
+        }
+    }
+}
+
+/// How the diagram between braced points is known for a C_m.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+enum Bracing {
+    /// The member's diagram is the segment's.
+    Member,
+    /// A sway frame: 0.9.
+    Sway,
+    /// A buckling length longer than the member, no frame: max(0.9, diagram).
+    MaybeSway,
+    /// A buckling length shorter than the member, no frame: the segment's
+    /// diagram is not known.
+    Unknown,
+}
+
+fn bracing(ctx: &Context<'_>, axis: Axis) -> Bracing {
+    let m = ctx.input.member;
+    let (frame, lcr) = match axis {
+        Axis::Major => (m.frame_major, ctx.lengths.major_mm),
+        Axis::Minor => (m.frame_minor, ctx.lengths.minor_mm),
+    };
+    match frame {
+        Some(f) if f.sway => Bracing::Sway,
+        Some(_) => Bracing::Member,
+        None if lcr > m.length_mm => Bracing::MaybeSway,
+        None if lcr < m.length_mm => Bracing::Unknown,
+        None => Bracing::Member,
+    }
+}
+
+/// The three moment factors, each with the bracing it was read for.
+#[derive(Debug, Clone, Copy)]
+struct Factors {
+    c_my: f64,
+    c_mz: f64,
+    c_mlt: f64,
+}
+
+fn push_row(trace: &mut Trace, row: Row) {
+    match row {
+        Row::NoMoment => {}
+        Row::Ends { psi } => step!(
+            trace,
+            S,
+            "psi",
+            "end-moment ratio, smaller over larger (+ single curvature)",
+            psi,
+            "-",
+            "EN 1993-1-1 Table B.3"
+        ),
+        Row::AlphaS { alpha, psi } => {
+            step!(
+                trace,
+                S,
+                "psi",
+                "end-moment ratio psi M_h / M_h",
+                psi,
+                "-",
+                "EN 1993-1-1 Table B.3"
+            );
+            step!(
+                trace,
+                S,
+                "alpha_s",
+                "M_s / M_h, the span moment over the larger end moment",
+                alpha,
+                "-",
+                "EN 1993-1-1 Table B.3"
+            );
+        }
+        Row::AlphaH { alpha, psi } => {
+            step!(
+                trace,
+                S,
+                "psi",
+                "end-moment ratio psi M_h / M_h",
+                psi,
+                "-",
+                "EN 1993-1-1 Table B.3"
+            );
+            step!(
+                trace,
+                S,
+                "alpha_h",
+                "M_h / M_s, the larger end moment over the span moment",
+                alpha,
+                "-",
+                "EN 1993-1-1 Table B.3"
+            );
+        }
+    }
+}
+
+/// C_my, C_mz and C_mLT of Table B.3 with their working.
+fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Factors {
+    let mut one = |axis: Axis, trace: &mut Trace| -> f64 {
+        let diagram = bending::moments(ctx.input, axis);
+        let (value, row) = c_m(&diagram);
+        if row == Row::NoMoment {
+            return 1.0;
+        }
+        push_row(trace, row);
+        let br = bracing(ctx, axis);
+        let c = match br {
+            Bracing::Member => value,
+            Bracing::Sway => 0.9,
+            Bracing::MaybeSway => value.max(0.9),
+            Bracing::Unknown => 1.0,
+        };
+        if br == Bracing::Unknown {
+            warn_once(warnings, "moment-factor-assumed", || {
+                "interaction: a buckling length shorter than the member may come from a brace \
+                 within it, whose segment's moment diagram the member file does not hold; the \
+                 equivalent uniform moment factor is taken as 1.0, the largest of EN 1993-1-1 \
+                 Table B.3 (use a frame, or k = 1 with the segment's own moments, to refine it)"
+                    .into()
+            });
+        }
+        match (axis, br) {
+            (Axis::Major, Bracing::Member) => step!(
+                trace,
+                S,
+                "C_my",
+                "equivalent uniform moment factor about y-y, from the member's diagram",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3 (recalled from memory)"
+            ),
+            (Axis::Minor, Bracing::Member) => step!(
+                trace,
+                S,
+                "C_mz",
+                "equivalent uniform moment factor about z-z, from the member's diagram",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3 (recalled from memory)"
+            ),
+            (Axis::Major, Bracing::Sway) => step!(
+                trace,
+                S,
+                "C_my",
+                "sway buckling mode (frame_major sway): 0.9",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3, note"
+            ),
+            (Axis::Minor, Bracing::Sway) => step!(
+                trace,
+                S,
+                "C_mz",
+                "sway buckling mode (frame_minor sway): 0.9",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3, note"
+            ),
+            (Axis::Major, Bracing::MaybeSway) => step!(
+                trace,
+                S,
+                "C_my",
+                "buckling length longer than the member, maybe a sway mode: the larger of 0.9 \
+                 and the diagram's value (safe reading)",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3 and its note"
+            ),
+            (Axis::Minor, Bracing::MaybeSway) => step!(
+                trace,
+                S,
+                "C_mz",
+                "buckling length longer than the member, maybe a sway mode: the larger of 0.9 \
+                 and the diagram's value (safe reading)",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3 and its note"
+            ),
+            (Axis::Major, Bracing::Unknown) => step!(
+                trace,
+                S,
+                "C_my",
+                "buckling length shorter than the member: the braced segment's diagram is not \
+                 known, 1.0 (the table's largest; safe reading)",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3"
+            ),
+            (Axis::Minor, Bracing::Unknown) => step!(
+                trace,
+                S,
+                "C_mz",
+                "buckling length shorter than the member: the braced segment's diagram is not \
+                 known, 1.0 (the table's largest; safe reading)",
+                c,
+                "-",
+                "EN 1993-1-1 Table B.3"
+            ),
+        }
+        c
+    };
+    let c_my = one(Axis::Major, trace);
+    let c_mz = one(Axis::Minor, trace);
+    // C_mLT: the diagram between lateral restraints.
+    let major = bending::moments(ctx.input, Axis::Major);
+    let c_mlt = if major.is_zero() || ctx.bending.major.critical_knm.is_none() {
+        1.0
+    } else if bending::diagram_is_segment(ctx.input) {
+        let (c, _) = c_m(&major);
+        step!(
+            trace,
+            S,
+            "C_mLT",
+            "equivalent uniform moment factor for lateral-torsional buckling, the member's \
+             diagram about y-y (the length between restraints is the member's)",
+            c,
+            "-",
+            "EN 1993-1-1 Table B.3 (recalled from memory)"
+        );
+        c
+    } else {
+        step!(
+            trace,
+            S,
+            "C_mLT",
+            "the length between lateral restraints is not the member's (k_lt or lcr_lt_mm): \
+             the segment's diagram is not known, 1.0 (the table's largest; safe reading)",
+            1.0,
+            "-",
+            "EN 1993-1-1 Table B.3"
+        );
+        1.0
+    };
+    Factors { c_my, c_mz, c_mlt }
+}
+
+// ---------------------------------------------------------------------------
+// Annex B.
+
+/// Whether the member is susceptible to torsional deformations (Table B.2)
+/// or not (Table B.1).
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+enum Torsion {
+    /// Table B.1: closed hollow and solid sections, open ones held continuously.
+    Stiff,
+    /// Table B.2: open sections free to twist.
+    Susceptible,
+    /// Not known (typed properties): the larger k_zy of the two tables.
+    Unknown,
+}
+
+fn torsion(ctx: &Context<'_>) -> Torsion {
+    match ctx.input.section.family {
+        Family::Rhs | Family::Chs | Family::Rect | Family::Round => Torsion::Stiff,
+        _ if ctx.input.member.lt_restrained => Torsion::Stiff,
+        Family::Given => Torsion::Unknown,
+        _ => Torsion::Susceptible,
+    }
+}
+
+/// The k_ij of Annex B.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct KFactors {
+    /// k_yy.
+    pub yy: f64,
+    /// k_yz.
+    pub yz: f64,
+    /// k_zy.
+    pub zy: f64,
+    /// k_zz.
+    pub zz: f64,
+}
+
+/// Which k_zz row of Table B.1 a section takes.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum ZzRow {
+    /// I sections: C_mz (1 + (2 lambda_z - 0.6) n_z) <= C_mz (1 + 1.4 n_z).
+    I,
+    /// Rectangular hollow sections: C_mz (1 + (lambda_z - 0.2) n_z) <= C_mz (1 + 0.8 n_z).
+    Rhs,
+    /// Neither row names the section: the larger of the two.
+    Larger,
+}
+
+/// Inputs of the Annex B factors.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct AnnexBInput {
+    /// Class 1 or 2 (plastic) rather than 3 or 4 (elastic).
+    pub plastic: bool,
+    /// lambda_bar_y, lambda_bar_z.
+    pub lambda_y: f64,
+    /// lambda_bar_z.
+    pub lambda_z: f64,
+    /// n_y = N_Ed / (chi_y N_Rk / gamma_M1).
+    pub n_y: f64,
+    /// n_z = N_Ed / (chi_z N_Rk / gamma_M1).
+    pub n_z: f64,
+    /// C_my, C_mz, C_mLT.
+    pub c_my: f64,
+    /// C_mz.
+    pub c_mz: f64,
+    /// C_mLT.
+    pub c_mlt: f64,
+    /// Table B.2 (true) or B.1 (false) for k_zy.
+    pub susceptible: bool,
+    /// The k_zz row.
+    pub zz: ZzRow,
+}
+
+/// k_zy of Table B.2.
+fn k_zy_b2(i: &AnnexBInput) -> f64 {
+    let d = i.c_mlt - 0.25;
+    if i.plastic {
+        if i.lambda_z >= 0.4 {
+            (1.0 - 0.1 * i.lambda_z * i.n_z / d).max(1.0 - 0.1 * i.n_z / d)
+        } else {
+            (0.6 + i.lambda_z).min(1.0 - 0.1 * i.lambda_z * i.n_z / d)
+        }
+    } else {
+        (1.0 - 0.05 * i.lambda_z * i.n_z / d).max(1.0 - 0.05 * i.n_z / d)
+    }
+}
+
+/// The interaction factors of EN 1993-1-1 Tables B.1 and B.2 (recalled from
+/// memory).
+pub fn k_factors_b(i: &AnnexBInput) -> KFactors {
+    if i.plastic {
+        let yy = i.c_my * (1.0 + (i.lambda_y - 0.2) * i.n_y).min(1.0 + 0.8 * i.n_y);
+        let zz_i = i.c_mz * (1.0 + (2.0 * i.lambda_z - 0.6) * i.n_z).min(1.0 + 1.4 * i.n_z);
+        let zz_r = i.c_mz * (1.0 + (i.lambda_z - 0.2) * i.n_z).min(1.0 + 0.8 * i.n_z);
+        let zz = match i.zz {
+            ZzRow::I => zz_i,
+            ZzRow::Rhs => zz_r,
+            ZzRow::Larger => zz_i.max(zz_r),
+        };
+        let zy = if i.susceptible { k_zy_b2(i) } else { 0.6 * yy };
+        KFactors {
+            yy,
+            yz: 0.6 * zz,
+            zy,
+            zz,
+        }
+    } else {
+        let yy = i.c_my * (1.0 + 0.6 * i.lambda_y * i.n_y).min(1.0 + 0.6 * i.n_y);
+        let zz = i.c_mz * (1.0 + 0.6 * i.lambda_z * i.n_z).min(1.0 + 0.6 * i.n_z);
+        let zy = if i.susceptible { k_zy_b2(i) } else { 0.8 * yy };
+        KFactors { yy, yz: zz, zy, zz }
+    }
+}
+
+fn annex_b(ctx: &Context<'_>, b: &Basis, cm: &Factors, trace: &mut Trace) -> (f64, f64) {
+    let [ny, nz, _, _] = b.ratios();
+    step!(
+        trace,
+        S,
+        "n_y",
+        "N_Ed / (chi_y N_Rk / gamma_M1)",
+        ny,
+        "-",
+        "EN 1993-1-1 Table B.1"
+    );
+    step!(
+        trace,
+        S,
+        "n_z",
+        "N_Ed / (chi_z N_Rk / gamma_M1)",
+        nz,
+        "-",
+        "EN 1993-1-1 Table B.1"
+    );
+    let zz = match ctx.input.section.family {
+        Family::I => ZzRow::I,
+        Family::Rhs => ZzRow::Rhs,
+        _ => ZzRow::Larger,
+    };
+    let base = AnnexBInput {
+        plastic: b.class <= 2,
+        lambda_y: b.lambda_y,
+        lambda_z: b.lambda_z,
+        n_y: ny,
+        n_z: nz,
+        c_my: cm.c_my,
+        c_mz: cm.c_mz,
+        c_mlt: cm.c_mlt,
+        susceptible: false,
+        zz,
+    };
+    let t = torsion(ctx);
+    let k = match t {
+        Torsion::Stiff => k_factors_b(&base),
+        Torsion::Susceptible => k_factors_b(&AnnexBInput {
+            susceptible: true,
+            ..base
+        }),
+        Torsion::Unknown => {
+            let b1 = k_factors_b(&base);
+            let b2 = k_factors_b(&AnnexBInput {
+                susceptible: true,
+                ..base
+            });
+            KFactors {
+                zy: b1.zy.max(b2.zy),
+                ..b1
+            }
+        }
+    };
+    match t {
+        Torsion::Stiff => step!(
+            trace,
+            S,
+            "Table",
+            "B.1: not susceptible to torsional deformations (closed hollow or solid section, or \
+             held continuously); k_zy kept though the table lets it be 0 under M_y alone for I \
+             and RHS (safe)",
+            1.0,
+            "-",
+            "EN 1993-1-1 Annex B, Table B.1"
+        ),
+        Torsion::Susceptible => step!(
+            trace,
+            S,
+            "Table",
+            "B.2: open section susceptible to torsional deformations",
+            2.0,
+            "-",
+            "EN 1993-1-1 Annex B, Table B.2"
+        ),
+        Torsion::Unknown => step!(
+            trace,
+            S,
+            "Table",
+            "typed properties, shape not known: the larger k_zy of Tables B.1 and B.2 (safe)",
+            2.0,
+            "-",
+            "EN 1993-1-1 Annex B, Tables B.1, B.2"
+        ),
+    }
+    match (b.class <= 2, zz) {
+        (true, ZzRow::I) => step!(
+            trace,
+            S,
+            "k_zz",
+            "C_mz [1 + (2 lambda_bar_z - 0.6) n_z] <= C_mz (1 + 1.4 n_z), I section, Class 1-2",
+            k.zz,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        ),
+        (true, ZzRow::Rhs) => step!(
+            trace,
+            S,
+            "k_zz",
+            "C_mz [1 + (lambda_bar_z - 0.2) n_z] <= C_mz (1 + 0.8 n_z), RHS, Class 1-2",
+            k.zz,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        ),
+        (true, ZzRow::Larger) => step!(
+            trace,
+            S,
+            "k_zz",
+            "Class 1-2, neither the I nor the RHS row names this section: the larger of the two \
+             (safe reading)",
+            k.zz,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        ),
+        (false, _) => step!(
+            trace,
+            S,
+            "k_zz",
+            "C_mz (1 + 0.6 lambda_bar_z n_z) <= C_mz (1 + 0.6 n_z), Class 3-4",
+            k.zz,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        ),
+    }
+    if b.class <= 2 {
+        step!(
+            trace,
+            S,
+            "k_yy",
+            "C_my [1 + (lambda_bar_y - 0.2) n_y] <= C_my (1 + 0.8 n_y), Class 1-2",
+            k.yy,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        );
+        step!(
+            trace,
+            S,
+            "k_yz",
+            "0.6 k_zz, Class 1-2",
+            k.yz,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        );
+    } else {
+        step!(
+            trace,
+            S,
+            "k_yy",
+            "C_my (1 + 0.6 lambda_bar_y n_y) <= C_my (1 + 0.6 n_y), Class 3-4",
+            k.yy,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        );
+        step!(
+            trace,
+            S,
+            "k_yz",
+            "k_zz, Class 3-4",
+            k.yz,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        );
+    }
+    match (t, b.class <= 2) {
+        (Torsion::Stiff, true) => step!(
+            trace,
+            S,
+            "k_zy",
+            "0.6 k_yy, Class 1-2",
+            k.zy,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        ),
+        (Torsion::Stiff, false) => step!(
+            trace,
+            S,
+            "k_zy",
+            "0.8 k_yy, Class 3-4",
+            k.zy,
+            "-",
+            "EN 1993-1-1 Table B.1"
+        ),
+        (_, true) => step!(
+            trace,
+            S,
+            "k_zy",
+            "lambda_bar_z >= 0.4: [1 - 0.1 lambda_bar_z n_z / (C_mLT - 0.25)] >= [1 - 0.1 n_z / \
+             (C_mLT - 0.25)]; below 0.4: 0.6 + lambda_bar_z <= 1 - 0.1 lambda_bar_z n_z / \
+             (C_mLT - 0.25); Class 1-2",
+            k.zy,
+            "-",
+            "EN 1993-1-1 Table B.2"
+        ),
+        (_, false) => step!(
+            trace,
+            S,
+            "k_zy",
+            "[1 - 0.05 lambda_bar_z n_z / (C_mLT - 0.25)] >= [1 - 0.05 n_z / (C_mLT - 0.25)], \
+             Class 3-4",
+            k.zy,
+            "-",
+            "EN 1993-1-1 Table B.2"
+        ),
+    }
+    equations(b, &k, trace)
+}
+
+/// (6.61) and (6.62) from the k_ij, with their terms in the working.
+fn equations(b: &Basis, k: &KFactors, trace: &mut Trace) -> (f64, f64) {
+    let [ny, nz, my, mz] = b.ratios();
+    let u61 = ny + k.yy * my + k.yz * mz;
+    let u62 = nz + k.zy * my + k.zz * mz;
+    step!(
+        trace,
+        S,
+        "M_y,Ed/M_y,Rd",
+        "M_y,Ed / (chi_LT M_y,Rk / gamma_M1)",
+        my,
+        "-",
+        "EN 1993-1-1 Eq. 6.61, 6.62"
+    );
+    step!(
+        trace,
+        S,
+        "M_z,Ed/M_z,Rd",
+        "M_z,Ed / (M_z,Rk / gamma_M1)",
+        mz,
+        "-",
+        "EN 1993-1-1 Eq. 6.61, 6.62"
+    );
+    step!(
+        trace,
+        S,
+        "6.61",
+        "N_Ed / (chi_y N_Rk / gamma_M1) + k_yy M_y term + k_yz M_z term <= 1",
+        u61,
+        "-",
+        "EN 1993-1-1 Eq. 6.61"
+    );
+    step!(
+        trace,
+        S,
+        "6.62",
+        "N_Ed / (chi_z N_Rk / gamma_M1) + k_zy M_y term + k_zz M_z term <= 1",
+        u62,
+        "-",
+        "EN 1993-1-1 Eq. 6.62"
+    );
+    (u61, u62)
+}
+
+// ---------------------------------------------------------------------------
+// Annex A.
+
+fn annex_a(
     _ctx: &Context<'_>,
+    _steel: &Steel,
+    _b: &Basis,
     _trace: &mut Trace,
     _warnings: &mut Vec<Warning>,
-) -> Result<Option<Vec<Check>>> {
-    Ok(None)
+) -> Result<(f64, f64)> {
+    Err(Error::NotApplicable {
+        method: KEY,
+        reason: "interaction_annex: Annex A (Method 1) is not worked in this build; use \
+                 \"B\" (Annex B, Method 2)"
+            .into(),
+    })
+}
+
+// ---------------------------------------------------------------------------
+// 6.2.9: the cross-section under bending and axial force.
+
+/// The utilisation of the cross-section check 6.2.9 (with both largest
+/// moments taken together wherever along the member they occur: safe).
+fn section_check(ctx: &Context<'_>, b: &Basis, trace: &mut Trace) -> f64 {
+    let g0 = GAMMA_M0;
+    let n_rd = b.area * b.fy / g0 / 1000.0;
+    let (my_rd, mz_rd) = (b.w_y * b.fy / g0 / 1e6, b.w_z * b.fy / g0 / 1e6);
+    let n = ratio(b.n_ed, n_rd);
+    if b.class >= 3 {
+        let u = n + ratio(b.m_y, my_rd) + ratio(b.m_z, mz_rd);
+        if b.class == 3 {
+            step!(
+                trace,
+                S,
+                "6.2.9",
+                "Class 3: N_Ed / (A f_y) + M_y,Ed / (W_el,y f_y) + M_z,Ed / (W_el,z f_y) \
+                 (x gamma_M0): sigma_x,Ed <= f_y / gamma_M0",
+                u,
+                "-",
+                "EN 1993-1-1 6.2.9.2, Eq. 6.42; 6.2.1(7)"
+            );
+        } else {
+            step!(
+                trace,
+                S,
+                "6.2.9",
+                "Class 4: N_Ed / (A_eff f_y) + M_y,Ed / (W_eff,y f_y) + M_z,Ed / (W_eff,z f_y) \
+                 (x gamma_M0), e_N = 0",
+                u,
+                "-",
+                "EN 1993-1-1 6.2.9.3, Eq. 6.44"
+            );
+        }
+        return u;
+    }
+    let p = &ctx.input.section.props;
+    step!(
+        trace,
+        S,
+        "N_pl,Rd",
+        "A f_y / gamma_M0",
+        n_rd,
+        "kN",
+        "EN 1993-1-1 Eq. 6.10"
+    );
+    step!(
+        trace,
+        S,
+        "n",
+        "N_Ed / N_pl,Rd",
+        n,
+        "-",
+        "EN 1993-1-1 6.2.9.1(5)"
+    );
+    step!(
+        trace,
+        S,
+        "M_pl,y,Rd",
+        "W_pl,y f_y / gamma_M0",
+        my_rd,
+        "kNm",
+        "EN 1993-1-1 Eq. 6.13"
+    );
+    step!(
+        trace,
+        S,
+        "M_pl,z,Rd",
+        "W_pl,z f_y / gamma_M0",
+        mz_rd,
+        "kNm",
+        "EN 1993-1-1 Eq. 6.13"
+    );
+    let keep = (1.0 - n).max(0.0);
+    // (M_N,y,Rd, M_N,z,Rd, alpha, beta), or None for the linear rule.
+    let reduced = match &ctx.input.section.spec {
+        SectionSpec::I(s) => {
+            let a = ((p.area_mm2 - 2.0 * s.width_mm * s.flange_mm) / p.area_mm2).clamp(0.0, 0.5);
+            step!(
+                trace,
+                S,
+                "a",
+                "(A - 2 b t_f) / A <= 0.5",
+                a,
+                "-",
+                "EN 1993-1-1 6.2.9.1(5)"
+            );
+            let my = (my_rd * keep / (1.0 - 0.5 * a)).min(my_rd);
+            let mz = if n <= a {
+                mz_rd
+            } else {
+                let r = ((n - a) / (1.0 - a)).min(1.0);
+                mz_rd * (1.0 - r * r)
+            };
+            step!(
+                trace,
+                S,
+                "M_N,y,Rd",
+                "M_pl,y,Rd (1 - n) / (1 - 0.5 a) <= M_pl,y,Rd (applied also where 6.33, 6.34 \
+                 would waive it: never higher)",
+                my,
+                "kNm",
+                "EN 1993-1-1 Eq. 6.36"
+            );
+            step!(
+                trace,
+                S,
+                "M_N,z,Rd",
+                "n <= a: M_pl,z,Rd; n > a: M_pl,z,Rd [1 - ((n - a) / (1 - a))^2]",
+                mz,
+                "kNm",
+                "EN 1993-1-1 Eq. 6.37, 6.38"
+            );
+            Some((my, mz, 2.0, (5.0 * n).max(1.0)))
+        }
+        SectionSpec::Rhs(s) => {
+            let swapped = p.principal_angle_rad != 0.0;
+            // h: the walls across the y-y axis (webs in bending about y-y).
+            let (h, w) = if swapped {
+                (s.width_mm, s.depth_mm)
+            } else {
+                (s.depth_mm, s.width_mm)
+            };
+            let t = s.wall_mm;
+            let aw = ((p.area_mm2 - 2.0 * w * t) / p.area_mm2).clamp(0.0, 0.5);
+            let af = ((p.area_mm2 - 2.0 * h * t) / p.area_mm2).clamp(0.0, 0.5);
+            step!(
+                trace,
+                S,
+                "a_w",
+                "(A - 2 b t) / A <= 0.5",
+                aw,
+                "-",
+                "EN 1993-1-1 6.2.9.1(5)"
+            );
+            step!(
+                trace,
+                S,
+                "a_f",
+                "(A - 2 h t) / A <= 0.5",
+                af,
+                "-",
+                "EN 1993-1-1 6.2.9.1(5)"
+            );
+            let my = (my_rd * keep / (1.0 - 0.5 * aw)).min(my_rd);
+            let mz = (mz_rd * keep / (1.0 - 0.5 * af)).min(mz_rd);
+            step!(
+                trace,
+                S,
+                "M_N,y,Rd",
+                "M_pl,y,Rd (1 - n) / (1 - 0.5 a_w) <= M_pl,y,Rd",
+                my,
+                "kNm",
+                "EN 1993-1-1 Eq. 6.39"
+            );
+            step!(
+                trace,
+                S,
+                "M_N,z,Rd",
+                "M_pl,z,Rd (1 - n) / (1 - 0.5 a_f) <= M_pl,z,Rd",
+                mz,
+                "kNm",
+                "EN 1993-1-1 Eq. 6.40"
+            );
+            let e = if n * n * 1.13 >= 1.0 {
+                6.0
+            } else {
+                (1.66 / (1.0 - 1.13 * n * n)).min(6.0)
+            };
+            Some((my, mz, e, e))
+        }
+        SectionSpec::Chs(_) => {
+            let f = (1.0 - n.min(1.0).powf(1.7)).max(0.0);
+            step!(
+                trace,
+                S,
+                "M_N,Rd",
+                "M_pl,Rd (1 - n^1.7), circular hollow section (common practice; recalled from \
+                 memory)",
+                my_rd * f,
+                "kNm",
+                "EN 1993-1-1 6.2.9.1(2)"
+            );
+            Some((my_rd * f, mz_rd * f, 2.0, 2.0))
+        }
+        SectionSpec::Rect(_) => {
+            let f = (1.0 - n * n).max(0.0);
+            step!(
+                trace,
+                S,
+                "M_N,Rd",
+                "M_pl,Rd (1 - n^2), the plastic interaction of a solid rectangle (exact)",
+                my_rd * f,
+                "kNm",
+                "EN 1993-1-1 6.2.9.1(2)"
+            );
+            Some((my_rd * f, mz_rd * f, 1.0, 1.0))
+        }
+        _ => None,
+    };
+    let Some((mny, mnz, alpha, beta)) = reduced else {
+        let u = n + ratio(b.m_y, my_rd) + ratio(b.m_z, mz_rd);
+        step!(
+            trace,
+            S,
+            "6.2.9",
+            "no reduced plastic moment is given for this shape: N_Ed / N_Rd + M_y,Ed / M_y,Rd + \
+             M_z,Ed / M_z,Rd (the code's conservative linear sum)",
+            u,
+            "-",
+            "EN 1993-1-1 6.2.1(7), Eq. 6.2"
+        );
+        return u;
+    };
+    let (ry, rz) = (ratio(b.m_y, mny), ratio(b.m_z, mnz));
+    if b.m_y > 0.0 && b.m_z > 0.0 {
+        step!(
+            trace,
+            S,
+            "alpha",
+            "exponent of the biaxial criterion (I: 2; RHS: 1.66 / (1 - 1.13 n^2) <= 6; CHS: 2; \
+             others: 1, the code's conservative value)",
+            alpha,
+            "-",
+            "EN 1993-1-1 6.2.9.1(6)"
+        );
+        step!(
+            trace,
+            S,
+            "beta",
+            "exponent of the biaxial criterion (I: 5 n >= 1; RHS: as alpha; CHS: 2; others: 1)",
+            beta,
+            "-",
+            "EN 1993-1-1 6.2.9.1(6)"
+        );
+        let u = ry.powf(alpha) + rz.powf(beta);
+        step!(
+            trace,
+            S,
+            "6.2.9",
+            "[M_y,Ed / M_N,y,Rd]^alpha + [M_z,Ed / M_N,z,Rd]^beta <= 1",
+            u,
+            "-",
+            "EN 1993-1-1 Eq. 6.41"
+        );
+        u
+    } else {
+        let u = ry.max(rz);
+        step!(
+            trace,
+            S,
+            "6.2.9",
+            "M_Ed / M_N,Rd <= 1 (one axis)",
+            u,
+            "-",
+            "EN 1993-1-1 Eq. 6.31"
+        );
+        u
+    }
 }

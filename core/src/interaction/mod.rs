@@ -31,6 +31,7 @@ pub mod aisc360;
 pub mod csa_s16;
 pub mod en1993;
 pub mod en1995;
+pub mod secant;
 
 /// One interaction equation worked, as results report it.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -88,8 +89,8 @@ pub fn check(
         Method::CsaS16 => csa_s16::check(ctx, trace, warnings),
         Method::En1995 => en1995::check(ctx, trace, warnings),
         // The secant method takes equal end moments as the load's
-        // eccentricity before this point; euler and perry-robertson refuse
-        // any moment in `bending::check`.
+        // eccentricity (no bending side: its check is `secant::check`);
+        // euler and perry-robertson refuse any moment in `bending::check`.
         Method::Euler | Method::PerryRobertson | Method::Secant => Ok(None),
     }
 }

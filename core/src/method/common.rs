@@ -78,6 +78,7 @@ impl Basics {
 }
 
 /// Checks the inputs of an axis and works its basics (no trace, no allocation).
+#[inline]
 pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
     let lcr = positive("lcr_mm", lcr_mm)?;
     let (f, e) = input.material.strength_and_modulus();
@@ -120,6 +121,7 @@ pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
 }
 
 /// Pushes the geometry lines every method starts an axis with.
+#[inline]
 pub fn push_geometry(trace: &mut Trace, b: &Basics, clause: Sym) {
     step!(
         trace,

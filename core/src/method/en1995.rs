@@ -88,8 +88,12 @@ fn duration_label(d: LoadDuration, given_sc: bool, given_d: bool) -> Sym {
     }
 }
 
-/// The design strength f_c,0,d and its factors (k_mod, gamma_M, whether gamma_M was given).
-fn design_strength(input: &Input<'_>, kind: TimberKind, fc0k: f64) -> (f64, f64, f64, bool) {
+/// The design strength f_c,0,d and its factors (k_mod, gamma_M, whether
+/// gamma_M was given): k_mod of Table 3.1 for the member's service class
+/// and load duration (defaults 1 and medium-term), gamma_M of Table 2.3 or
+/// `gamma_m1`. The bending and the interaction of EN 1995-1-1 take k_mod
+/// and gamma_M from here.
+pub fn design_strength(input: &Input<'_>, kind: TimberKind, fc0k: f64) -> (f64, f64, f64, bool) {
     let sc = input.member.service_class.unwrap_or(1);
     let d = input.member.load_duration.unwrap_or(LoadDuration::Medium);
     let km = k_mod(sc, d);
@@ -98,6 +102,38 @@ fn design_strength(input: &Input<'_>, kind: TimberKind, fc0k: f64) -> (f64, f64,
         None => (gamma_m(kind), false),
     };
     (km * fc0k / g, km, g, given)
+}
+
+/// The code of the warning that service class or load duration was taken.
+const DEFAULTS_CODE: &str = "timber-defaults-assumed";
+
+/// [`defaults_message`] when neither service class nor load duration is
+/// given (service class 1, medium-term loading, k_mod 0.80).
+const DEFAULTS_TAKEN: &str = "service class 1 and medium-term loading are taken (k_mod = 0.80, \
+     EN 1995-1-1 Table 3.1) because the member does not give service_class or load_duration; a \
+     longer load duration or service class 3 gives less (down to 0.50): give service_class and \
+     load_duration";
+
+/// Why the warning `timber-defaults-assumed` is given: the service class
+/// `sc` and load duration `d` taken, their k_mod and which was not given.
+fn defaults_message(sc: u8, d: LoadDuration, km: f64, no_class: bool, no_duration: bool) -> String {
+    format!(
+        "service class {sc} and {} loading are taken (k_mod = {km:.2}, EN 1995-1-1 Table \
+         3.1) because the member does not give {}; a longer load duration or service \
+         class 3 gives less (down to 0.50): give service_class and load_duration",
+        match d {
+            LoadDuration::Permanent => "permanent",
+            LoadDuration::Long => "long-term",
+            LoadDuration::Medium => "medium-term",
+            LoadDuration::Short => "short-term",
+            LoadDuration::Instantaneous => "instantaneous",
+        },
+        match (no_class, no_duration) {
+            (true, true) => "service_class or load_duration",
+            (true, false) => "service_class",
+            _ => "load_duration",
+        }
+    )
 }
 
 /// Member-level working.
@@ -120,28 +156,17 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     let (fc0d, km, g, given) = design_strength(input, t.kind, t.fc0k_mpa);
     // The defaults are not the lowest k_mod of Table 3.1 (permanent load,
     // service class 3: 0.50): say what was taken.
-    if input.member.service_class.is_none() || input.member.load_duration.is_none() {
-        warn_once(warnings, "timber-defaults-assumed", || {
-            format!(
-                "service class {sc} and {} loading are taken (k_mod = {km:.2}, EN 1995-1-1 Table \
-                 3.1) because the member does not give {}; a longer load duration or service \
-                 class 3 gives less (down to 0.50): give service_class and load_duration",
-                match d {
-                    LoadDuration::Permanent => "permanent",
-                    LoadDuration::Long => "long-term",
-                    LoadDuration::Medium => "medium-term",
-                    LoadDuration::Short => "short-term",
-                    LoadDuration::Instantaneous => "instantaneous",
-                },
-                match (
-                    input.member.service_class.is_none(),
-                    input.member.load_duration.is_none()
-                ) {
-                    (true, true) => "service_class or load_duration",
-                    (true, false) => "service_class",
-                    _ => "load_duration",
-                }
-            )
+    let (no_class, no_duration) = (
+        input.member.service_class.is_none(),
+        input.member.load_duration.is_none(),
+    );
+    if no_class && no_duration {
+        // Both taken (the usual case): the text is fixed, so it is not
+        // formatted afresh for every check (a test holds it to the format).
+        warn_once(warnings, DEFAULTS_CODE, || DEFAULTS_TAKEN.to_string());
+    } else if no_class || no_duration {
+        warn_once(warnings, DEFAULTS_CODE, || {
+            defaults_message(sc, d, km, no_class, no_duration)
         });
     }
     step!(
@@ -305,6 +330,20 @@ mod tests {
     use crate::check::Prepared;
     use crate::method::euler::tests::member;
     use crate::method::Method;
+
+    #[test]
+    fn fixed_defaults_text_is_the_formatted_one() {
+        assert_eq!(
+            DEFAULTS_TAKEN,
+            defaults_message(
+                1,
+                LoadDuration::Medium,
+                k_mod(1, LoadDuration::Medium),
+                true,
+                true
+            )
+        );
+    }
 
     #[test]
     fn refuses_steel_and_accepts_timber() {

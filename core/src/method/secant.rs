@@ -8,10 +8,21 @@
 //! root is bracketed and unique. The eccentricity defaults to L_cr / 1000
 //! (the trace says so); the resistance is sigma A / gamma with the
 //! optional factor gamma_m1.
+//!
+//! Equal end moments about one principal axis (M_a = M_b, no span moment,
+//! nothing about the other axis) are the load's eccentricity e_M = |M| / N
+//! about that axis ([`moment_eccentricity`]): the first-principles view of
+//! a load that is not on the centroid. It is added to the eccentricity of
+//! that axis (`eccentricity_mm`, or L_cr / 1000), which the formula takes
+//! about each axis in turn; the other axis keeps its own. Taking the two in
+//! the same direction is the lower resistance (the direction of
+//! `eccentricity_mm` is not given). Any other moment diagram, or a moment
+//! without axial load, is refused naming the key.
 
 use std::f64::consts::FRAC_PI_2;
 
-use crate::error::Result;
+use crate::error::{Error, Result};
+use crate::member::Member;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
 use crate::outcome::{Mode, ModeResult, Warning};
@@ -82,8 +93,68 @@ pub fn first_yield_stress(f: f64, e: f64, lambda: f64, ecc: f64) -> f64 {
     }
 }
 
-/// Member-level working.
+/// The eccentricity that the member's moments give its axial load: `None`
+/// without moments, else the axis ([`Mode::Major`] or [`Mode::Minor`]) and
+/// e_M = |M| / N, mm, for equal end moments about that axis alone. Any
+/// other diagram, moments about both axes and a moment without axial load
+/// are refused (`NotApplicable`) naming the key.
+pub fn moment_eccentricity(member: &Member) -> Result<Option<(Mode, f64)>> {
+    let Some(first) = member.first_moment_key() else {
+        return Ok(None);
+    };
+    let refuse = |key: &str, why: &str| Error::NotApplicable {
+        method: "secant",
+        reason: format!(
+            "{key}: {why}; the secant method takes only equal end moments about one axis \
+             (m_AX_a_knm = m_AX_b_knm, no span moment, the other axis 0) as the load's \
+             eccentricity e = M / N; use a design code (en1993-1-1, aisc360-lrfd, aisc360-asd, \
+             csa-s16, en1995-1-1) for other moments"
+        ),
+    };
+    if member.axial_kn == 0.0 {
+        return Err(refuse(
+            first,
+            "a moment without axial load has no eccentricity to become (axial_kn is 0)",
+        ));
+    }
+    let (major, minor) = (member.moments_major(), member.moments_minor());
+    let (mode, m, keys) = match (major.is_zero(), minor.is_zero()) {
+        (false, false) => {
+            let key = [
+                ("m_minor_a_knm", minor.a_knm),
+                ("m_minor_b_knm", minor.b_knm),
+                ("m_minor_span_knm", minor.span_knm),
+            ]
+            .into_iter()
+            .find(|(_, v)| *v != 0.0)
+            .map_or("m_minor_a_knm", |(k, _)| k);
+            return Err(refuse(key, "moments about both axes"));
+        }
+        (false, true) => (
+            Mode::Major,
+            major,
+            ["m_major_a_knm", "m_major_b_knm", "m_major_span_knm"],
+        ),
+        _ => (
+            Mode::Minor,
+            minor,
+            ["m_minor_a_knm", "m_minor_b_knm", "m_minor_span_knm"],
+        ),
+    };
+    let [key_a, key_b, key_span] = keys;
+    if m.span_knm != 0.0 {
+        return Err(refuse(key_span, "a moment from load in the span"));
+    }
+    if m.a_knm != m.b_knm {
+        let key = if m.b_knm == 0.0 { key_b } else { key_a };
+        return Err(refuse(key, "end moments that are not equal"));
+    }
+    Ok(Some((mode, m.a_knm.abs() * 1000.0 / member.axial_kn)))
+}
+
+/// Member-level working; refuses moments the method does not take.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
+    moment_eccentricity(input.member)?;
     euler::prelude(input, trace, warnings)
 }
 
@@ -124,6 +195,32 @@ pub fn axis(
             );
             e
         }
+    };
+    let ecc_mm = match moment_eccentricity(input.member)? {
+        Some((axis, e_m)) if axis == mode => {
+            step!(
+                trace,
+                b.scope,
+                "e_M",
+                "eccentricity of the load from equal end moments |M| / N",
+                e_m,
+                "mm",
+                "secant: M = N e",
+            );
+            let e = ecc_mm + e_m;
+            step!(
+                trace,
+                b.scope,
+                "e",
+                "eccentricity about this axis e + e_M (taken in the same direction, the lower \
+                 resistance)",
+                e,
+                "mm",
+                "secant: M = N e",
+            );
+            e
+        }
+        _ => ecc_mm,
     };
     let c = extreme_fibre_mm(input, mode, warnings);
     let ratio = ecc_mm * c / (b.r_mm * b.r_mm);

@@ -1,7 +1,9 @@
 //! The editor of the selected member: every field by its member-file key,
 //! made afresh when the member, its kind, material or method changes.
 
+use super::frame::FrameEnds;
 use super::*;
+use strutline_core::buckling::chart::Frame;
 
 /// A text field of the editor: label, input named by its member-file key,
 /// unit and the message of what is wrong while the person types.
@@ -133,19 +135,24 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
             "end conditions, minor axis",
         )
     };
-    let (k, lcr) = ctx
+    let (k, lcr, framed) = ctx
         .current()
         .map(|m| {
             if major {
-                (m.k_major, m.lcr_major_mm)
+                (m.k_major, m.lcr_major_mm, m.frame_major.is_some())
             } else {
-                (m.k_minor, m.lcr_minor_mm)
+                (m.k_minor, m.lcr_minor_mm, m.frame_minor.is_some())
             }
         })
-        .unwrap_or((1.0, None));
-    let restraint = RwSignal::new(Restraint::infer(k, lcr));
+        .unwrap_or((1.0, None, false));
+    let restraint = RwSignal::new(Restraint::infer(k, lcr, framed));
     let generation = RwSignal::new(0u32);
-    let is_length = Memo::new(move |_| restraint.get() == Restraint::Length);
+    // What the block under the select shows: 0 the factor, 1 the length, 2 the frame.
+    let shows = Memo::new(move |_| match restraint.get() {
+        Restraint::Length => 1u8,
+        Restraint::Frame => 2,
+        _ => 0,
+    });
     let after = Callback::new(move |m: Member| {
         let k = if major { m.k_major } else { m.k_minor };
         if let Some(f) = restraint.get_untracked().factor() {
@@ -163,11 +170,27 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                     let r = Restraint::from_value(&event_target_value(&e));
                     restraint.set(r);
                     let Some(mut m) = ctx.current() else { return; };
-                    let (kk, ll) = if major { (&mut m.k_major, &mut m.lcr_major_mm) } else { (&mut m.k_minor, &mut m.lcr_minor_mm) };
+                    let (kk, ll, ff) = if major {
+                        (&mut m.k_major, &mut m.lcr_major_mm, &mut m.frame_major)
+                    } else {
+                        (&mut m.k_minor, &mut m.lcr_minor_mm, &mut m.frame_minor)
+                    };
                     match r {
                         Restraint::Length => {
                             if ll.is_none() {
                                 *ll = Some(*kk * m.length_mm);
+                            }
+                            *ff = None;
+                        }
+                        Restraint::Frame => {
+                            // The frame gives k: the axis' own k and length go
+                            // (the engine refuses both together). A sway frame
+                            // with G = 1 at both ends to start from: the larger
+                            // k of the two kinds of frame.
+                            *kk = 1.0;
+                            *ll = None;
+                            if ff.is_none() {
+                                *ff = Some(Frame { sway: true, g_a: 1.0, g_b: 1.0 });
                             }
                         }
                         other => {
@@ -175,6 +198,7 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                                 *kk = f;
                             }
                             *ll = None;
+                            *ff = None;
                         }
                     }
                     ctx.commit(m);
@@ -185,12 +209,11 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                     }.into_any()).collect::<Vec<_>>()}
                 </select>
             </div>
-            {made_afresh(Signal::derive(move || key_of(&(generation.get(), is_length.get()))), Arc::new(move || {let length = is_length.get_untracked(); if length {
-                    view! { <NumField ctx=ctx field=lf /> }.into_any()
-                } else {
-                    view! { <NumField ctx=ctx field=kf after=after /> }.into_any()
-                }
-            }.into_any()))}
+            {made_afresh(Signal::derive(move || key_of(&(generation.get(), shows.get()))), Arc::new(move || match shows.get_untracked() {
+                1 => view! { <NumField ctx=ctx field=lf /> }.into_any(),
+                2 => view! { <FrameEnds ctx=ctx major=major /> }.into_any(),
+                _ => view! { <NumField ctx=ctx field=kf after=after /> }.into_any(),
+            }))}
         </div>
     }
 }

@@ -157,6 +157,7 @@ fn key_of<T: std::hash::Hash>(t: &T) -> u64 {
 
 mod banners;
 mod editor;
+mod frame;
 mod list;
 mod listbar;
 mod picker_panel;

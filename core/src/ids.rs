@@ -1,0 +1,154 @@
+//! The ids of a list read so far, to refuse a repeated one, in little
+//! memory for lists of any length.
+//!
+//! A set of `String`s costs some 60 bytes an id (the string's own
+//! allocation, its 24-byte handle, the table's slot): 125 MB of a
+//! 1,000,000-member CSV check went to it. [`SeenIds`] keeps a 64-bit hash
+//! of each id in a table of plain `u64`s (about 9 to 18 bytes an id, by
+//! the table's fill) and the ids' bytes back to back in one buffer (their
+//! length and 4 bytes each). The answer is exact: when a hash is already
+//! in the table, the buffer is searched for the id itself, so two ids that
+//! only share a hash are both accepted. That search runs only for a
+//! repeated id (which stops the reading) or a true 64-bit collision (about
+//! one in 10^7 for a million ids), so reading stays linear in the list.
+
+use std::hash::{BuildHasher, Hasher};
+
+use rustc_hash::{FxBuildHasher, FxHashSet};
+
+/// The ids seen so far ([module docs](self)).
+#[derive(Debug, Clone, Default)]
+pub struct SeenIds {
+    /// A 64-bit hash of every id.
+    hashes: FxHashSet<u64>,
+    /// Every id: its length (4 bytes, little-endian), then its bytes.
+    bytes: Vec<u8>,
+    /// Ids added.
+    count: usize,
+    /// The hash of an id; [`hash`] but for the tests of the exact
+    /// re-check, which use a poor one.
+    hasher: Option<fn(&str) -> u64>,
+}
+
+/// The 64-bit hash of an id: FxHash (rustc-hash, the engine's hasher),
+/// spread by a final mix (the finaliser of MurmurHash3's 64-bit variant)
+/// so that ids that differ in a late character differ in every bit.
+fn hash(id: &str) -> u64 {
+    let mut h = FxBuildHasher.build_hasher();
+    h.write(id.as_bytes());
+    let mut x = h.finish() ^ (id.len() as u64);
+    x ^= x >> 33;
+    x = x.wrapping_mul(0xff51_afd7_ed55_8ccd);
+    x ^= x >> 33;
+    x = x.wrapping_mul(0xc4ce_b9fe_1a85_ec53);
+    x ^ (x >> 33)
+}
+
+impl SeenIds {
+    /// An empty set.
+    pub fn new() -> SeenIds {
+        SeenIds::default()
+    }
+
+    /// An empty set with room for `n` ids of `bytes` bytes in all.
+    pub fn with_capacity(n: usize, bytes: usize) -> SeenIds {
+        SeenIds {
+            hashes: FxHashSet::with_capacity_and_hasher(n, FxBuildHasher),
+            bytes: Vec::with_capacity(bytes + 4 * n),
+            count: 0,
+            hasher: None,
+        }
+    }
+
+    /// Adds `id`; false when it was there already (exactly: the same text).
+    pub fn insert(&mut self, id: &str) -> bool {
+        let h = self.hasher.map_or_else(|| hash(id), |f| f(id));
+        if !self.hashes.insert(h) && self.contains_exactly(id) {
+            return false;
+        }
+        // Ids longer than 4 GB do not occur (the readers' fields are far
+        // shorter); one would be kept with a cut length and never matched.
+        let len = u32::try_from(id.len()).unwrap_or(u32::MAX);
+        self.bytes.extend_from_slice(&len.to_le_bytes());
+        self.bytes.extend_from_slice(id.as_bytes());
+        self.count += 1;
+        true
+    }
+
+    /// Ids added.
+    pub fn len(&self) -> usize {
+        self.count
+    }
+
+    /// Whether no id was added.
+    pub fn is_empty(&self) -> bool {
+        self.count == 0
+    }
+
+    /// The id stored at `at` and where the next one starts.
+    fn entry(&self, at: usize) -> Option<(&[u8], usize)> {
+        let len: [u8; 4] = self.bytes.get(at..at + 4)?.try_into().ok()?;
+        let len = u32::from_le_bytes(len) as usize;
+        let start = at + 4;
+        Some((self.bytes.get(start..start + len)?, start + len))
+    }
+
+    /// Whether `id` is among the stored ids (a search of the buffer).
+    fn contains_exactly(&self, id: &str) -> bool {
+        let mut at = 0;
+        while let Some((stored, next)) = self.entry(at) {
+            if stored == id.as_bytes() {
+                return true;
+            }
+            at = next;
+        }
+        false
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
+    use super::*;
+
+    #[test]
+    fn a_repeated_id_is_refused_and_a_new_one_kept() {
+        let mut s = SeenIds::new();
+        assert!(s.is_empty());
+        for i in 0..10_000 {
+            assert!(s.insert(&format!("C{i}")));
+        }
+        assert!(!s.insert("C9999"));
+        assert!(!s.insert("C0"));
+        assert!(s.insert("C10000"));
+        assert!(s.insert(" C0"), "ids are compared as written");
+        assert!(s.insert(""));
+        assert!(!s.insert(""));
+        assert_eq!(s.len(), 10_003);
+    }
+
+    #[test]
+    fn ids_that_share_a_hash_are_told_apart() {
+        // A hash that collides for every id of the same length: the answer
+        // must come from the exact re-check alone.
+        let mut s = SeenIds {
+            hasher: Some(|id: &str| id.len() as u64),
+            ..SeenIds::new()
+        };
+        assert!(s.insert("AB"));
+        assert!(s.insert("CD"), "same hash, other id: kept");
+        assert!(s.insert("B1-x"));
+        assert!(!s.insert("CD"));
+        assert!(!s.insert("AB"));
+        assert!(s.insert("ab"));
+        assert_eq!(s.len(), 4);
+    }
+
+    #[test]
+    fn the_hash_spreads_near_ids() {
+        let mut hashes: Vec<u64> = (0..100_000).map(|i| hash(&format!("M{i}"))).collect();
+        hashes.sort_unstable();
+        hashes.dedup();
+        assert_eq!(hashes.len(), 100_000);
+    }
+}
