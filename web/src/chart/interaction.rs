@@ -413,10 +413,12 @@ where
                 root.draw(&line(seg, pal.applied, 2.0)).map_err(err)?;
             }
         }
-        let tag = if inside {
-            "member · within"
-        } else {
-            "member · over"
+        // Within the plain sum is no pass while the method's interaction
+        // is not worked: the tag says so rather than "within".
+        let tag = match (c.worked, inside) {
+            (false, _) => "member · not checked",
+            (true, true) => "member · within",
+            (true, false) => "member · over",
         };
         let (tw, th) = text_box(tag, 12.0 * dpr);
         let right_room = f64::from(ax) + 10.0 * dpr + tw <= plot.right;
