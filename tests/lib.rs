@@ -24,3 +24,17 @@ pub fn member_from_json(value: serde_json::Value) -> strutline_core::Member {
     strutline_core::file::member_from_value(&value, 0)
         .unwrap_or_else(|e| panic!("a reference member must read: {e}"))
 }
+
+/// [`member_from_json`] of `base` with the keys of `extra` added (or
+/// replaced): one reference member varied key by key.
+pub fn member_with(
+    mut base: serde_json::Value,
+    extra: serde_json::Value,
+) -> strutline_core::Member {
+    if let (Some(o), Some(e)) = (base.as_object_mut(), extra.as_object()) {
+        for (k, v) in e {
+            o.insert(k.clone(), v.clone());
+        }
+    }
+    member_from_json(base)
+}

@@ -100,13 +100,16 @@ pub struct CheckResult {
     /// Whether the design load is within the resistance (utilisation <= 1).
     pub passes: bool,
     /// Design load over design resistance: the axial utilisation, or with
-    /// moments the largest of the axial and bending utilisations (with both
-    /// axial load and moments, their sum, and the member does not pass
-    /// until the beam-column interaction exists: see `governing_check`).
+    /// moments the largest of the axial, bending and interaction
+    /// utilisations (under a method whose interaction is not in this build,
+    /// the plain sum of the axial and bending ones, and the member does not
+    /// pass: see `governing_check`).
     pub utilisation: f64,
     /// What sets the utilisation: `"bending-major"`, `"bending-minor"`, the
-    /// governing axial mode's key, or `"combined-not-checked"` for a member
-    /// with both axial load and moments.
+    /// governing axial mode's key, an interaction equation's name
+    /// (`"6.62"`, `"6.24"`, `"secant"`, ...), or `"combined-not-checked"`
+    /// for a member with both axial load and moments under a method whose
+    /// interaction is not in this build.
     pub governing_check: &'static str,
     /// Design resistance of the governing mode, kN.
     pub resistance_kn: f64,

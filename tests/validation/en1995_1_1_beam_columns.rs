@@ -31,22 +31,17 @@
 use serde_json::{json, Value};
 use strutline_core::trace::Scope;
 use strutline_core::{check_member, CheckResult};
-use strutline_validation::{assert_close, member_from_json};
+use strutline_validation::{assert_close, member_with};
 
 /// Hand working carried to six significant figures.
 const HAND: f64 = 5e-6;
 
 fn beam_column(section: Value, grade: &str, length: f64, n: f64, extra: Value) -> CheckResult {
-    let mut m = json!({
+    let m = json!({
         "id": "TB1", "section": section, "material": {"grade": grade},
         "length_mm": length, "axial_kn": n, "method": "en1995-1-1"
     });
-    if let (Some(o), Some(e)) = (m.as_object_mut(), extra.as_object()) {
-        for (k, v) in e {
-            o.insert(k.clone(), v.clone());
-        }
-    }
-    check_member(&member_from_json(m)).unwrap()
+    check_member(&member_with(m, extra)).unwrap()
 }
 
 fn eq(r: &CheckResult, name: &str) -> f64 {
@@ -201,4 +196,55 @@ fn round_post_k_m_one() {
     assert_eq!(working(&r, "k_m"), 1.0, "k_m other sections 6.1.6(2)");
     assert_close(eq(&r, "6.23"), 0.613127, HAND, "Eq. 6.23 round");
     assert_close(eq(&r, "6.24"), 0.613127, HAND, "Eq. 6.24 round");
+}
+
+#[test]
+fn lateral_torsional_check_also_at_k_crit_one() {
+    // 220 x 70 C24, L = 3000 mm, N = 3 kN, M_y = 7 kNm uniform.
+    // sigma_m,crit = 0.78 x 70^2 x 7400 / (220 x 3000) = 42.8527 MPa (6.32);
+    // lambda_rel,m = 0.748370 <= 0.75: k_crit = 1 (6.34). (6.35) is still
+    // worked (6.3.3: M_y with N_c on a member free to buckle laterally):
+    // (12.3967 / 14.7692)^2 + 0.194805 / (0.145843 x 12.9231) = 0.807883;
+    // (6.23) = 0.857641 governs, (6.24) = 0.690911.
+    let r = beam_column(
+        json!({"kind": "rect", "depth_mm": 220, "width_mm": 70}),
+        "C24",
+        3000.0,
+        3.0,
+        json!({"m_major_a_knm": 7, "m_major_b_knm": 7}),
+    );
+    assert_eq!(names(&r), ["6.23", "6.24", "6.35"]);
+    assert_eq!(working(&r, "k_crit"), 1.0);
+    assert_close(eq(&r, "6.35"), 0.807883, HAND, "Eq. 6.35 at k_crit = 1");
+    assert_close(eq(&r, "6.23"), 0.857641, HAND, "Eq. 6.23");
+    assert_close(eq(&r, "6.24"), 0.690911, HAND, "Eq. 6.24");
+    assert_eq!(r.governing_check, "6.23");
+}
+
+#[test]
+fn lateral_torsional_check_with_a_minor_moment_takes_it_too() {
+    // 220 x 70 C24, L = 4500 mm, N = 3 kN, M_y = 5, M_z = 0.5 kNm uniform.
+    // sigma_m,y,d = 8.85478, sigma_m,z,d = 2.78293 MPa; f_m,z,d = 0.8 x
+    // (150/70)^0.2 x 24 / 1.3 = 17.2011 MPa (k_h = 1.16466, 3.2).
+    // (6.35) as written has no minor-axis term; the engine adds
+    // sigma_m,z,d / f_m,z,d (conservative, said in a warning):
+    // (8.85478 / (0.872578 x 14.7692))^2 + 0.194805 / (0.0666481 x 12.9231)
+    //   + 2.78293 / 17.2011 = 0.860061. (6.23) = 0.740513, (6.24) = 0.807644.
+    let r = beam_column(
+        json!({"kind": "rect", "depth_mm": 220, "width_mm": 70}),
+        "C24",
+        4500.0,
+        3.0,
+        json!({"m_major_a_knm": 5, "m_major_b_knm": 5, "m_minor_a_knm": 0.5, "m_minor_b_knm": 0.5}),
+    );
+    assert_close(eq(&r, "6.35"), 0.860061, HAND, "Eq. 6.35 + minor term");
+    assert_close(eq(&r, "6.23"), 0.740513, HAND, "Eq. 6.23");
+    assert_close(eq(&r, "6.24"), 0.807644, HAND, "Eq. 6.24");
+    assert_close(
+        working(&r, "f_m,z,d"),
+        17.2011,
+        HAND,
+        "f_m,z,d with k_h 3.2",
+    );
+    assert!(r.warnings.iter().any(|w| w.code == "en1995-6-35-biaxial"));
 }

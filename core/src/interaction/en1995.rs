@@ -353,3 +353,49 @@ fn ratio(stress: f64, strength: f64) -> f64 {
         stress / strength
     }
 }
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
+    use super::*;
+
+    fn terms(lambda: (f64, f64), k_crit: Option<f64>, major: f64) -> Terms {
+        Terms {
+            axial: 0.5,
+            major,
+            minor: 0.2,
+            k_m: 0.7,
+            k_c: (0.8, 0.4),
+            lambda_rel: lambda,
+            k_crit,
+        }
+    }
+
+    fn names(t: &Terms) -> Vec<&'static str> {
+        t.equations().iter().map(|c| c.check).collect()
+    }
+
+    #[test]
+    fn the_pair_follows_6_3_2_2() {
+        assert_eq!(names(&terms((0.3, 0.3), None, 0.3)), ["6.19", "6.20"]);
+        assert_eq!(names(&terms((0.3, 0.31), None, 0.3)), ["6.23", "6.24"]);
+        assert_eq!(names(&terms((0.31, 0.2), None, 0.3)), ["6.23", "6.24"]);
+        let e = terms((0.2, 0.2), None, 0.3).equations();
+        assert_eq!(e[0].utilisation, 0.25 + 0.3 + 0.7 * 0.2);
+        assert_eq!(e[1].utilisation, 0.25 + 0.7 * 0.3 + 0.2);
+        let e = terms((1.0, 2.0), None, 0.3).equations();
+        assert_eq!(e[0].utilisation, 0.5 / 0.8 + 0.3 + 0.7 * 0.2);
+        assert_eq!(e[1].utilisation, 0.5 / 0.4 + 0.7 * 0.3 + 0.2);
+    }
+
+    #[test]
+    fn lateral_torsional_equation_needs_k_crit_and_a_major_moment() {
+        assert_eq!(
+            names(&terms((1.0, 2.0), Some(0.5), 0.3)),
+            ["6.23", "6.24", "6.35"]
+        );
+        assert_eq!(names(&terms((1.0, 2.0), Some(0.5), 0.0)), ["6.23", "6.24"]);
+        let e = terms((1.0, 2.0), Some(0.5), 0.3).equations();
+        assert_eq!(e[2].utilisation, 0.6 * 0.6 + 0.5 / 0.4 + 0.2);
+    }
+}

@@ -341,6 +341,50 @@ mod tests {
         }
     }
 
+    fn moments(json: serde_json::Value) -> Result<Option<(Mode, f64)>> {
+        let mut base = serde_json::json!({
+            "id": "S1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
+            "material": {"grade": "S355"}, "length_mm": 2000, "axial_kn": 200,
+            "method": "secant"
+        });
+        for (k, v) in json.as_object().unwrap() {
+            base[k] = v.clone();
+        }
+        moment_eccentricity(&crate::file::member_from_value(&base, 0).unwrap())
+    }
+
+    fn refused_key(json: serde_json::Value) -> String {
+        match moments(json) {
+            Err(Error::NotApplicable { reason, .. }) => reason,
+            other => panic!("{other:?}"),
+        }
+    }
+
+    #[test]
+    fn equal_end_moments_are_the_eccentricity_and_others_are_refused() {
+        use serde_json::json;
+        assert_eq!(moments(json!({})).unwrap(), None);
+        assert_eq!(
+            moments(json!({"m_major_a_knm": -3, "m_major_b_knm": -3})).unwrap(),
+            Some((Mode::Major, 15.0))
+        );
+        assert_eq!(
+            moments(json!({"m_minor_a_knm": 1, "m_minor_b_knm": 1})).unwrap(),
+            Some((Mode::Minor, 5.0))
+        );
+        assert!(refused_key(json!({"m_major_a_knm": 3})).starts_with("m_major_b_knm"));
+        assert!(refused_key(json!({"m_major_b_knm": 3})).starts_with("m_major_a_knm"));
+        assert!(refused_key(json!({"m_minor_span_knm": 3})).starts_with("m_minor_span_knm"));
+        assert!(refused_key(
+            json!({"m_major_a_knm": 1, "m_major_b_knm": 1, "m_minor_span_knm": 2})
+        )
+        .starts_with("m_minor_span_knm"));
+        assert!(
+            refused_key(json!({"m_major_a_knm": 1, "m_major_b_knm": 1, "axial_kn": 0}))
+                .starts_with("m_major_a_knm")
+        );
+    }
+
     #[test]
     fn zero_eccentricity_is_the_envelope() {
         let (f, e) = (355.0, 210_000.0);
