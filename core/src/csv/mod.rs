@@ -95,7 +95,7 @@ use crate::member::Member;
 
 pub use number::{parse_field, parse_typed};
 pub use read::{parse_csv, parse_csv_within};
-pub use write::{left_out, not_in_csv, to_csv, to_csv_in};
+pub use write::{cells, left_out, not_in_csv, to_csv, to_csv_in, Layout};
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]
