@@ -230,7 +230,8 @@ impl<'de> Visitor<'de> for Strict<'_> {
 }
 
 /// serde's message at `path` of a member made plain where serde words it
-/// poorly: a key given twice, a material that matches none of its forms
+/// poorly: a key given twice, a value that is not the object its key holds
+/// (serde names the Rust type), a material that matches none of its forms
 /// (described from the member's value `raw`).
 pub fn plain(raw: &Value, path: &str, message: String) -> String {
     if let Some(key) = message
@@ -239,6 +240,22 @@ pub fn plain(raw: &Value, path: &str, message: String) -> String {
         .map(|(key, _)| key)
     {
         return twice(key);
+    }
+    // A value that is not the object a key holds: serde names the Rust type.
+    for (said, wanted) in [
+        (", expected struct ", "an object of its keys"),
+        (
+            ", expected internally tagged enum ",
+            "an object with a `kind` and that kind's keys",
+        ),
+    ] {
+        if let Some((head, _)) = message.split_once(said) {
+            let found = match head.strip_prefix("invalid type: ") {
+                Some(found) => found.to_string(),
+                None => "a list".to_string(),
+            };
+            return format!("expected {wanted}, found {found}");
+        }
     }
     if message.starts_with("data did not match any variant of untagged enum MaterialSpec") {
         // The only untagged enum of the member file; the browser build

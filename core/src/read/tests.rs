@@ -283,3 +283,34 @@ fn the_browser_build_names_the_material_without_a_path() {
     );
     assert_eq!(plain(&raw, "x", "other words".into()), "other words");
 }
+
+#[test]
+fn a_value_that_is_not_its_keys_object_is_named_without_rust_types() {
+    for (extra, said) in [
+        (
+            "\"frame_major\": 1.2",
+            "frame_major: expected an object of its keys, found floating point `1.2`",
+        ),
+        (
+            "\"angle_connection\": \"long\"",
+            "angle_connection: expected an object of its keys, found string \"long\"",
+        ),
+        (
+            "\"buckling_model\": []",
+            "buckling_model: expected an object of its keys, found a list",
+        ),
+    ] {
+        let e = refusal(&with_member(&format!(
+            "{{\"id\": \"K8\", {RECT}, \"material\": {{\"grade\": \"S355\"}}, {REST}, {extra}}}"
+        )));
+        assert_eq!(e, format!("member \"K8\": {said}"));
+    }
+    let e = refusal(&with_member(&format!(
+        "{{\"id\": \"K9\", \"section\": \"HE 200 B\", \"material\": {{\"grade\": \"S355\"}}, {REST}}}"
+    )));
+    assert_eq!(
+        e,
+        "member \"K9\": section: expected an object with a `kind` and that kind's keys, found \
+         string \"HE 200 B\""
+    );
+}
