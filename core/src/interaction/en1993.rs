@@ -1669,8 +1669,12 @@ fn annex_a(ctx: &Context<'_>, steel: &Steel, b: &Basis, trace: &mut Trace) -> Re
         } else {
             (b.w_y, b.area)
         };
+        // Without axial load (biaxial bending alone) epsilon_y is infinite
+        // and C_my takes its limit 1 (a_LT > 0): the value as N_Ed -> 0.
         let eps_y = if b.n_ed > 0.0 {
             b.m_y / b.n_ed * area / w_el_y * 1000.0
+        } else if b.m_y > 0.0 {
+            f64::INFINITY
         } else {
             0.0
         };
@@ -1683,8 +1687,9 @@ fn annex_a(ctx: &Context<'_>, steel: &Steel, b: &Basis, trace: &mut Trace) -> Re
             "-",
             "EN 1993-1-1 Table A.1"
         );
-        let r = eps_y.sqrt() * a_lt;
-        let c_my = c_my0 + (1.0 - c_my0) * r / (1.0 + r);
+        let r = if a_lt > 0.0 { eps_y.sqrt() * a_lt } else { 0.0 };
+        let share = if r.is_infinite() { 1.0 } else { r / (1.0 + r) };
+        let c_my = c_my0 + (1.0 - c_my0) * share;
         let c_mlt = (c_my * c_my * a_lt / ((1.0 - nz) * (1.0 - nt)).sqrt()).max(1.0);
         step!(
             trace,
