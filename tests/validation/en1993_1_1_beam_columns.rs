@@ -731,6 +731,14 @@ fn annex_a_at_the_elastic_critical_load_never_passes() {
         .any(|m| m.critical_kn > 0.0 && m.critical_kn < 1400.0));
     assert!(eq(&r, "6.61").is_infinite() && eq(&r, "6.62").is_infinite());
     assert!(!r.passes);
+    // The reason is given, naming the key (as AISC's b1-unbounded and CSA's
+    // u1-unbounded do): the table shows only "inf" otherwise.
+    let w = r
+        .warnings
+        .iter()
+        .find(|w| w.code == "annex-a-unbounded")
+        .expect("annex-a-unbounded warning");
+    assert!(w.message.starts_with("axial_kn:"), "{}", w.message);
 }
 
 #[test]
