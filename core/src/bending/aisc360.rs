@@ -62,6 +62,9 @@ pub fn check(
     warnings: &mut Vec<Warning>,
 ) -> Result<Bending> {
     let steel = require_steel(input, key(basis))?;
+    if let SectionSpec::Tee(_) = &input.section.spec {
+        return super::aisc360_tee::check(input, steel, basis, trace, warnings);
+    }
     let cb = moment_factor(input, trace, warnings);
     Ok(Bending {
         major: axis(input, steel, basis, Axis::Major, cb, trace, warnings)?,
@@ -101,7 +104,7 @@ fn moment_factor(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warnin
 
 /// lambda_p, lambda_r interpolation of F3-1 / F6-2 / F7-2-like rules:
 /// M_p - (M_p - M_low)(lambda - lambda_p)/(lambda_r - lambda_p).
-fn between(mp: f64, low: f64, lambda: f64, lp: f64, lr: f64) -> f64 {
+pub(super) fn between(mp: f64, low: f64, lambda: f64, lp: f64, lr: f64) -> f64 {
     mp - (mp - low) * (lambda - lp) / (lr - lp)
 }
 
@@ -638,7 +641,20 @@ fn axis(
             ));
         }
     };
-    let design = match basis {
+    let design = available(basis, mn, s, trace);
+    Ok(AxisBending {
+        resistance_knm: design,
+        critical_knm: mcr.map(|v| v / 1e6),
+        reduction: reduction.min(1.0),
+        moment_factor: if cb_used { Some(cb) } else { None },
+        demand_knm: demand,
+    })
+}
+
+/// The available flexural strength of a nominal one (N mm), kNm: phi_b M_n
+/// (LRFD, F1(a)) or M_n / Omega_b (ASD, F1(b)), with its working.
+pub(super) fn available(basis: Basis, mn: f64, s: Scope, trace: &mut Trace) -> f64 {
+    match basis {
         Basis::Lrfd => {
             let v = PHI_B * mn / 1e6;
             step!(
@@ -665,12 +681,5 @@ fn axis(
             );
             v
         }
-    };
-    Ok(AxisBending {
-        resistance_knm: design,
-        critical_knm: mcr.map(|v| v / 1e6),
-        reduction: reduction.min(1.0),
-        moment_factor: if cb_used { Some(cb) } else { None },
-        demand_knm: demand,
-    })
+    }
 }
