@@ -65,6 +65,9 @@ pub fn check(
     if let SectionSpec::Tee(_) = &input.section.spec {
         return super::aisc360_tee::check(input, steel, basis, trace, warnings);
     }
+    if let SectionSpec::Angle(_) = &input.section.spec {
+        return super::aisc360_angle::check(input, steel, basis, trace);
+    }
     let cb = moment_factor(input, trace, warnings);
     Ok(Bending {
         major: axis(input, steel, basis, Axis::Major, cb, trace, warnings)?,

@@ -13,10 +13,9 @@
 //! `secant` takes equal end moments about one axis as the load's
 //! eccentricity ([`crate::method::secant::moment_eccentricity`]), so they
 //! are not bending there (no bending side), and refuses any other moment.
-//! Angles are
-//! refused under every method (no published rule is implemented here); tees
-//! are checked under AISC 360-16 F9 ([`aisc360_tee`]) and refused under the
-//! other codes (their monosymmetric M_cr is not implemented). Shear, web bearing, torsion from eccentric load and
+//! Tees and single angles are checked under AISC 360-16 F9 and F10
+//! (`aisc360_tee`, `aisc360_angle`) and refused under the other codes
+//! (their monosymmetric M_cr and angle rules are not implemented). Shear, web bearing, torsion from eccentric load and
 //! bolt holes are not checked: a warning says so on every result with a
 //! moment.
 
@@ -30,6 +29,7 @@ use crate::section::{Family, SectionSpec};
 use crate::trace::{step, Scope, Trace};
 
 pub mod aisc360;
+mod aisc360_angle;
 mod aisc360_tee;
 pub mod csa_s16;
 pub mod en1993;
@@ -171,9 +171,9 @@ fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> R
     }
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     let what = match input.section.family {
-        Family::Angle => {
-            "an angle (no published bending rule for angles is implemented: \
-             EN 1993-1-1 gives none, AISC 360-16 F10 is not implemented here)"
+        Family::Angle if !aisc => {
+            "an angle under this method (EN 1993-1-1 and CSA S16 give no bending rule for \
+             angles that is implemented here; AISC 360-16 F10 is)"
         }
         Family::Tee if !aisc => {
             "a tee under this method (its monosymmetric elastic critical moment and the \
