@@ -381,6 +381,9 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     };
     let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
+        // Without moments: the axial check alone (asked first, as the
+        // secant check below would find no moment either).
+        None if !moments => (axial, governing.mode.key(), axial <= 1.0),
         // The secant method's moments are the load's eccentricity: its one
         // check `secant` (never above the axial utilisation, which it is
         // about the moment's axis).

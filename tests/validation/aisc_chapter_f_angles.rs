@@ -28,7 +28,7 @@
 )]
 
 use serde_json::json;
-use strutline_validation::{assert_close, member_from_json};
+use strutline_validation::{assert_close, member_with, step_value};
 
 const IN: f64 = 25.4;
 const KSI: f64 = 6.894757;
@@ -40,26 +40,13 @@ fn angle(
     length_ft: f64,
     extra: serde_json::Value,
 ) -> strutline_core::Member {
-    let mut m = json!({
+    let base = json!({
         "id": "L1", "section": {"kind": "angle", "depth_mm": h * IN, "width_mm": b * IN,
             "thickness_mm": t * IN},
         "material": {"fy_mpa": 50.0 * KSI, "e_mpa": 29000.0 * KSI, "g_mpa": 11200.0 * KSI},
         "length_mm": length_ft * 12.0 * IN, "axial_kn": 0, "method": "aisc360-lrfd"
     });
-    if let (Some(o), Some(e)) = (m.as_object_mut(), extra.as_object()) {
-        for (k, v) in e {
-            o.insert(k.clone(), v.clone());
-        }
-    }
-    member_from_json(m)
-}
-
-fn step(r: &strutline_core::CheckResult, symbol: &str) -> f64 {
-    r.trace
-        .iter()
-        .find(|s| s.symbol == symbol)
-        .map(|s| s.value)
-        .unwrap_or_else(|| panic!("no step {symbol}"))
+    member_with(base, extra)
 }
 
 const L4: (f64, f64, f64) = (4.0, 4.0, 0.5);
@@ -75,9 +62,9 @@ fn equal_angle_major_axis_inelastic_ltb() {
     // M_y = F_y S_w = 17.6325 kNm; M_cr = 9 E A r_z t C_b / (8 L_b) =
     // 75.0923 kNm (F10-4, C_b = 1); M_y/M_cr < 1: M_n = (1.92 - 1.17
     // sqrt(M_y/M_cr)) M_y = 23.8576 kNm (F10-2) < 1.5 M_y = 26.4487.
-    assert_close(step(&r, "M_y"), 17.6325, HAND, "M_y");
-    assert_close(step(&r, "M_cr"), 75.0923, HAND, "M_cr, Eq. F10-4");
-    assert_close(step(&r, "M_n,LTB"), 23.8576, HAND, "M_n, Eq. F10-2");
+    assert_close(step_value(&r, "M_y"), 17.6325, HAND, "M_y");
+    assert_close(step_value(&r, "M_cr"), 75.0923, HAND, "M_cr, Eq. F10-4");
+    assert_close(step_value(&r, "M_n,LTB"), 23.8576, HAND, "M_n, Eq. F10-2");
     let b = r.bending.unwrap();
     assert_close(b.major.resistance_knm, 21.4719, HAND, "phi_b M_n");
     assert_eq!(b.major.moment_factor, Some(1.0));
@@ -88,7 +75,7 @@ fn equal_angle_major_axis_elastic_ltb_with_c_b_capped() {
     // L_b = 20 ft, one end moment: C_b of F1-1 = 1.67, capped at 1.5 (F10.2):
     // M_cr = 33.7915 kNm, M_y/M_cr <= 1, M_n = 18.9521 kNm.
     let r = strutline_core::check_member(&angle(L4, 20.0, json!({"m_major_a_knm": 10}))).unwrap();
-    assert_close(step(&r, "C_b"), 1.5, HAND, "C_b <= 1.5");
+    assert_close(step_value(&r, "C_b"), 1.5, HAND, "C_b <= 1.5");
     let b = r.bending.unwrap();
     assert_close(
         b.major.critical_knm.unwrap(),

@@ -31,7 +31,7 @@
 )]
 
 use serde_json::json;
-use strutline_validation::{assert_close, member_from_json};
+use strutline_validation::{assert_close, member_with, step_value};
 
 const IN: f64 = 25.4;
 const KSI: f64 = 6.894757;
@@ -44,26 +44,13 @@ fn tee(
     length_ft: f64,
     extra: serde_json::Value,
 ) -> strutline_core::Member {
-    let mut m = json!({
+    let base = json!({
         "id": "T1", "section": {"kind": "tee", "depth_mm": d * IN, "width_mm": bf * IN,
             "flange_mm": tf * IN, "web_mm": tw * IN},
         "material": {"fy_mpa": 50.0 * KSI, "e_mpa": 29000.0 * KSI, "g_mpa": 11200.0 * KSI},
         "length_mm": length_ft * 12.0 * IN, "axial_kn": 0, "method": "aisc360-lrfd"
     });
-    if let (Some(o), Some(e)) = (m.as_object_mut(), extra.as_object()) {
-        for (k, v) in e {
-            o.insert(k.clone(), v.clone());
-        }
-    }
-    member_from_json(m)
-}
-
-fn step(r: &strutline_core::CheckResult, symbol: &str) -> f64 {
-    r.trace
-        .iter()
-        .find(|s| s.symbol == symbol)
-        .map(|s| s.value)
-        .unwrap_or_else(|| panic!("no step {symbol}"))
+    member_with(base, extra)
 }
 
 const DEEP: (f64, f64, f64, f64) = (9.0, 7.5, 0.57, 0.355);
@@ -77,10 +64,10 @@ fn braced_tee_stem_in_tension_is_phi_m_p() {
     ))
     .unwrap();
     // F9-3: M_y = F_y S_x (S_x to the stem tip) = 44.0326 kNm.
-    assert_close(step(&r, "M_y"), 44.0326, HAND, "M_y, Eq. F9-3");
+    assert_close(step_value(&r, "M_y"), 44.0326, HAND, "M_y, Eq. F9-3");
     // F9-2: M_p = F_y Z_x = 70.4522 kNm (below 1.6 M_y = 70.45: the cap
     // and F_y Z_x agree to 4 digits here).
-    assert_close(step(&r, "M_p"), 70.4522, HAND, "M_p, Eq. F9-2");
+    assert_close(step_value(&r, "M_p"), 70.4522, HAND, "M_p, Eq. F9-2");
     let b = r.bending.unwrap();
     // phi_b M_n = 0.9 x 70.4522 = 63.4070 kNm, F1(a).
     assert_close(
@@ -104,7 +91,12 @@ fn braced_tee_stem_in_compression_is_limited_by_stem_buckling() {
     // d/t_w = 25.35 between 0.84 and 1.52 sqrt(E/F_y) = 20.23, 36.61:
     // F_cr = (1.43 - 0.515 (d/t_w) sqrt(F_y/E)) F_y (F9-18), M_n = F_cr S_x
     // = 39.0950 kNm (F9-16) < M_y = 44.0326 (F9-4).
-    assert_close(step(&r, "M_n,SLB"), 39.0950, HAND, "M_n, Eq. F9-16, F9-18");
+    assert_close(
+        step_value(&r, "M_n,SLB"),
+        39.0950,
+        HAND,
+        "M_n, Eq. F9-16, F9-18",
+    );
     let b = r.bending.unwrap();
     assert_close(
         b.major.resistance_knm,
@@ -125,11 +117,11 @@ fn unbraced_tee_single_curvature_inelastic_ltb() {
     let r =
         strutline_core::check_member(&tee(DEEP, 10.0, json!({"m_major_span_knm": 40}))).unwrap();
     // L_p = 1.76 r_y sqrt(E/F_y) = 1789.13 mm (F9-8); L_r = 15317.3 mm (F9-9).
-    assert_close(step(&r, "L_p"), 1789.132, HAND, "L_p, Eq. F9-8");
-    assert_close(step(&r, "L_r"), 15317.31, HAND, "L_r, Eq. F9-9");
+    assert_close(step_value(&r, "L_p"), 1789.132, HAND, "L_p, Eq. F9-8");
+    assert_close(step_value(&r, "L_r"), 15317.31, HAND, "L_r, Eq. F9-9");
     // L_b = 10 ft = 3048 mm: M_n = M_p - (M_p - M_y)(L_b - L_p)/(L_r - L_p)
     // = 67.9938 kNm (F9-6); M_cr (B > 0) = 442.613 kNm (F9-10, F9-11).
-    assert_close(step(&r, "M_cr"), 442.6126, HAND, "M_cr, Eq. F9-10");
+    assert_close(step_value(&r, "M_cr"), 442.6126, HAND, "M_cr, Eq. F9-10");
     let b = r.bending.unwrap();
     assert_close(b.major.resistance_knm, 61.1944, HAND, "phi_b M_n, Eq. F9-6");
     assert_close(
@@ -168,8 +160,8 @@ fn double_curvature_puts_the_stem_in_compression() {
     // 44.0326 (F9-13), for both signs. Stem local buckling 39.0950 governs
     // the negative side: phi M_n- = 35.1855 against 30 kNm, the positive
     // side 0.9 x 44.0326 = 39.6294 against 30 kNm; the negative governs.
-    assert_close(step(&r, "M_cr"), 73.9334, HAND, "M_cr, Eq. F9-12");
-    assert_close(step(&r, "M_n+"), 44.0326, HAND, "M_n+, Eq. F9-13");
+    assert_close(step_value(&r, "M_cr"), 73.9334, HAND, "M_cr, Eq. F9-12");
+    assert_close(step_value(&r, "M_n+"), 44.0326, HAND, "M_n+, Eq. F9-13");
     let b = r.bending.unwrap();
     assert_close(
         b.major.resistance_knm,
@@ -191,7 +183,7 @@ fn wide_tee_bends_in_its_plane_about_the_minor_principal_axis() {
         json!({"m_minor_span_knm": 10, "lt_restrained": true}),
     ))
     .unwrap();
-    assert_close(step(&r, "M_n,FLB"), 33.8369, HAND, "M_n, Eq. F9-15");
+    assert_close(step_value(&r, "M_n,FLB"), 33.8369, HAND, "M_n, Eq. F9-15");
     let b = r.bending.unwrap();
     assert_close(
         b.minor.resistance_knm,
@@ -211,7 +203,7 @@ fn slender_stem_elastic_stem_buckling() {
         json!({"m_major_a_knm": -10, "m_major_b_knm": -10, "lt_restrained": true}),
     ))
     .unwrap();
-    assert_close(step(&r, "M_n,SLB"), 21.9792, HAND, "M_n, Eq. F9-19");
+    assert_close(step_value(&r, "M_n,SLB"), 21.9792, HAND, "M_n, Eq. F9-19");
     assert_close(
         r.bending.unwrap().major.resistance_knm,
         0.9 * 21.9792,

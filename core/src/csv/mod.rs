@@ -91,7 +91,7 @@ use crate::member::Member;
 
 pub use number::parse_typed;
 pub use read::{parse_csv, parse_csv_within};
-pub use write::{left_out, to_csv, to_csv_in, NOT_IN_CSV};
+pub use write::{cells, left_out, to_csv, to_csv_in, Layout, NOT_IN_CSV};
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]

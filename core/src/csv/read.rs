@@ -206,7 +206,13 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
         let value = match info.kind {
             Kind::Text => Ok(Value::String(field.text.clone())),
             Kind::Name => {
-                let t = field.text.trim().to_ascii_lowercase();
+                // Names are read whatever their case; the member file
+                // writes them in lower case, but for the annex letters.
+                let t = if info.key == "interaction_annex" {
+                    field.text.trim().to_ascii_uppercase()
+                } else {
+                    field.text.trim().to_ascii_lowercase()
+                };
                 if t.is_empty() {
                     continue;
                 }
