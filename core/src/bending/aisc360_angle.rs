@@ -182,15 +182,7 @@ fn axis(
             "-",
             "AISC 360-16 F10.2(1), Eq. F1-1"
         );
-        step!(
-            trace,
-            s,
-            "L_b",
-            "unbraced length (k_lt L or lcr_lt_mm)",
-            lb,
-            "mm",
-            "member file"
-        );
+        super::push_unbraced_length(trace, s, lb);
         let v = m_cr_equal_leg(e, p.area_mm2, p.r_minor_mm, t, cb, lb);
         step!(
             trace,

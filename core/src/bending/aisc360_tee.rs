@@ -233,15 +233,7 @@ fn in_plane(
     let (ltb_t, ltb_c, mcr, reduction) = if lt {
         let lb = input.member.lt_length_mm()?;
         let stem_compressed = neg > 0.0;
-        step!(
-            trace,
-            s,
-            "L_b",
-            "unbraced length (k_lt L or lcr_lt_mm)",
-            lb,
-            "mm",
-            "member file"
-        );
+        super::push_unbraced_length(trace, s, lb);
         let mcr = m_cr(e, iy, j, d, lb, stem_compressed);
         if stem_compressed {
             step!(trace, s, "M_cr", "elastic lateral-torsional buckling, stem in compression somewhere along the member: B = -2.3 (d/L_b) sqrt(I_y/J)", mcr / 1e6, "kNm", "AISC 360-16 Eq. F9-10, F9-12");

@@ -30,6 +30,7 @@ use crate::trace::{step, Scope, Trace};
 
 pub mod aisc360;
 mod aisc360_angle;
+mod aisc360_hss;
 mod aisc360_tee;
 pub mod csa_s16;
 pub mod en1993;
@@ -497,6 +498,19 @@ pub fn push_diagram(trace: &mut Trace, axis: Axis, m: &Moments) -> f64 {
         "M(x) = M_a + (M_b - M_a) x/L + M_span shape(x/L)"
     );
     max
+}
+
+/// Pushes the length between lateral restraints, mm.
+pub fn push_unbraced_length(trace: &mut Trace, s: Scope, lb: f64) {
+    step!(
+        trace,
+        s,
+        "L_b",
+        "unbraced length (k_lt L or lcr_lt_mm)",
+        lb,
+        "mm",
+        "member file"
+    );
 }
 
 /// Pushes C1 and C2 with their source.
