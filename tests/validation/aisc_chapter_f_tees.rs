@@ -224,3 +224,18 @@ fn tees_stay_refused_under_the_other_codes() {
         );
     }
 }
+
+#[test]
+fn a_tee_with_axial_load_is_never_passed_on_bending_alone() {
+    // The beam-column of a tee is refused by the interaction (it is not
+    // worked for tees and angles); never a pass on F9 alone.
+    let r = strutline_core::check_member(&tee(
+        DEEP,
+        10.0,
+        json!({"axial_kn": 20, "m_major_span_knm": 5}),
+    ));
+    match r {
+        Err(e) => assert!(e.to_string().contains("axial_kn"), "{e}"),
+        Ok(r) => assert!(!r.passes, "a tee beam-column passed: {}", r.governing_check),
+    }
+}

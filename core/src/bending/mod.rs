@@ -629,6 +629,29 @@ mod tests {
     }
 
     #[test]
+    fn signed_extremes_find_both_signs() {
+        // Single curvature, uniform load: all positive.
+        assert_eq!(
+            signed_extremes(&mo(0.0, 0.0, 10.0, SpanLoad::Uniform)),
+            (10.0, 0.0)
+        );
+        // Double curvature: +10 at A, -6 at B.
+        assert_eq!(
+            signed_extremes(&mo(10.0, -6.0, 0.0, SpanLoad::Uniform)),
+            (10.0, 6.0)
+        );
+        // Hogging ends with a sagging span: -8 at the ends, +2 at mid-length
+        // (10 above the end line), the parabola's top at s = 0.5.
+        assert_eq!(
+            signed_extremes(&mo(-8.0, -8.0, 10.0, SpanLoad::Uniform)),
+            (2.0, 8.0)
+        );
+        // Point load: the peak at mid-length.
+        let (hi, lo) = signed_extremes(&mo(-4.0, 0.0, 6.0, SpanLoad::Point));
+        assert!((hi - 4.0).abs() < 1e-12 && lo == 4.0);
+    }
+
+    #[test]
     fn c1_follows_its_sources() {
         let u = c_factors(&mo(5.0, 5.0, 0.0, SpanLoad::Uniform), true);
         assert_eq!((u.c1, u.source), (1.0, CSource::Uniform));
