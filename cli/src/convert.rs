@@ -359,7 +359,7 @@ mod tests {
         assert_eq!(run(&args).unwrap(), 0);
         let text = std::fs::read_to_string(&out).unwrap();
         assert!(
-            text.starts_with("id,kind,depth_in,width_in,fy_ksi,e_ksi,length_ft,axial_kip,method"),
+            text.starts_with("id,kind,depth_in,width_in,fy_ksi,e_ksi,method,length_ft,axial_kip"),
             "{text}"
         );
         let back = csv::parse_csv(&text);

@@ -483,7 +483,8 @@ pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
     let section = member.build_section().map_err(wrap)?;
-    let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+    let material =
+        crate::material::resolve(&member.material, crate::member::stock(&section)).map_err(wrap)?;
     Ok((section, material))
 }
 
@@ -499,7 +500,8 @@ pub fn check_member_as(member: &Member, working: Working) -> Result<CheckResult>
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
     let section = member.build_section().map_err(wrap)?;
-    let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+    let material =
+        crate::material::resolve(&member.material, crate::member::stock(&section)).map_err(wrap)?;
     let input = Input {
         member,
         section: &section,

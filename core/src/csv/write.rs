@@ -4,6 +4,7 @@ use serde_json::{Map, Value};
 
 use super::keys::*;
 use crate::file::{self, MemberFile};
+use crate::member::schema as member_schema;
 use crate::member::Member;
 use crate::units::{self, Quantity, UnitSystem, UsUnit};
 
@@ -38,9 +39,15 @@ pub fn to_csv(file: &MemberFile) -> String {
     to_csv_in(file, UnitSystem::Si)
 }
 
-/// The member keys (version 3) a CSV row does not carry.
-pub const NOT_IN_CSV: [&str; 1] = [NOT_IN_CSV_0];
-const NOT_IN_CSV_0: &str = "buckling_model";
+/// The member keys a CSV row does not carry: the structured values of
+/// [`member::schema::MEMBER`](crate::member::schema::MEMBER)
+/// (`buckling_model`).
+pub fn not_in_csv() -> impl Iterator<Item = &'static str> {
+    member_schema::MEMBER
+        .iter()
+        .filter(|k| k.value == member_schema::Value::Structure)
+        .map(|k| k.key)
+}
 
 /// What [`to_csv`] leaves out of `file`, in words for the person
 /// exporting ("member \"K1\": buckling_model"), or `None` when the CSV
@@ -50,11 +57,8 @@ pub fn left_out(file: &MemberFile) -> Option<String> {
         .members
         .iter()
         .filter_map(|m| {
-            let keys: Vec<&str> = [m.buckling_model.is_some()]
-                .iter()
-                .zip(NOT_IN_CSV)
-                .filter_map(|(given, key)| given.then_some(key))
-                .collect();
+            let written = file::json_value(m)?;
+            let keys: Vec<&str> = not_in_csv().filter(|k| written.get(k).is_some()).collect();
             (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
         })
         .collect();
@@ -85,9 +89,9 @@ pub(super) fn us_column(key: &str) -> Option<(String, UsUnit)> {
 }
 
 /// A member's CSV cells by column key: the member file's keys with the
-/// section's and material's flattened, the angle connection's as
-/// `angle_*`, the frame ends' as `frame_<axis>_*`, and the keys CSV does
-/// not carry ([`left_out`]) dropped.
+/// section's and material's flattened, a group's keys (`angle_connection`,
+/// `frame_major`, `frame_minor`) as `<prefix>_<key>`, and the keys CSV
+/// does not carry ([`left_out`]) dropped, all as `member::schema` says.
 pub fn cells(m: &Member) -> Map<String, Value> {
     let mut flat = Map::new();
     if let Some(Value::Object(obj)) = file::json_value(m) {
@@ -98,21 +102,20 @@ pub fn cells(m: &Member) -> Map<String, Value> {
                         flat.insert(k2, v2);
                     }
                 }
-                // Not carried by CSV; see [`left_out`].
-                (NOT_IN_CSV_0, _) => {}
-                (frame, Value::Object(inner)) if FRAMES.contains(&frame) => {
-                    for (k2, v2) in inner {
-                        flat.insert(format!("{frame}_{k2}"), v2);
+                (_, value) => match member_schema::member_key(&key).map(|d| d.value) {
+                    // Not carried by CSV; see [`left_out`].
+                    Some(member_schema::Value::Structure) => {}
+                    Some(member_schema::Value::Group { prefix, .. }) => {
+                        if let Value::Object(inner) = value {
+                            for (k2, v2) in inner {
+                                flat.insert(format!("{prefix}_{k2}"), v2);
+                            }
+                        }
                     }
-                }
-                ("angle_connection", Value::Object(inner)) => {
-                    for (k2, v2) in inner {
-                        flat.insert(format!("angle_{k2}"), v2);
+                    _ => {
+                        flat.insert(key, value);
                     }
-                }
-                (_, value) => {
-                    flat.insert(key, value);
-                }
+                },
             }
         }
     }
@@ -131,14 +134,12 @@ pub struct Layout {
 impl Layout {
     /// The columns for rows that use the keys `used` (each once, in the
     /// order first met): the required ones and the used ones in the order
-    /// of [`KEYS`], then keys this build does not list (a newer member
+    /// of the columns (`keys::keys`), then keys this build does not list (a newer member
     /// file) at the end.
     pub fn new(used: &[&str], system: UnitSystem) -> Layout {
-        let mut columns: Vec<String> = KEYS
-            .iter()
-            .map(|i| i.key)
-            .filter(|k| REQUIRED.contains(k) || used.contains(k))
-            .map(String::from)
+        let mut columns: Vec<String> = keys()
+            .filter(|i| i.required || used.contains(&i.key))
+            .map(|i| i.key.to_string())
             .collect();
         for key in used {
             if key_info(key).is_none() {
