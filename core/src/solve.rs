@@ -267,24 +267,23 @@ pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswe
             lo = lo_c / 2.0;
         }
     };
-    let (mut lo, mut lo_trial, mut hi, mut hi_trial) = (lo, lo_trial, hi, hi_trial);
-    for _ in 0..200 {
-        if hi / lo - 1.0 <= GAP {
-            break;
-        }
-        let mid = (lo * hi).sqrt();
-        if !(mid > lo && mid < hi) {
-            break;
-        }
-        let t = trials.at(mid);
-        if carries(&t) {
-            lo = mid;
-            lo_trial = t;
-        } else {
-            hi = mid;
-            hi_trial = t;
-        }
-    }
+    let (mut lo_trial, mut hi_trial) = (lo_trial, hi_trial);
+    let (lo, _) = crate::roots::edge(
+        lo,
+        hi,
+        |a, b| (a * b).sqrt(),
+        |a, b| b / a - 1.0 <= GAP,
+        |mid| {
+            let t = trials.at(mid);
+            let yes = carries(&t);
+            if yes {
+                lo_trial = t;
+            } else {
+                hi_trial = t;
+            }
+            yes
+        },
+    );
     let Trial::Ran(r) = lo_trial else {
         // `lo` always holds a trial that ran and carried the load.
         return Err(Error::Geometry {

@@ -27,6 +27,7 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
                 if let Ok(r) = &c.outcome {
                     // The docked verdict leaves its warnings here.
                     html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
+                    h.push(&report::checks_html(r, sys));
                 }
                 h.push(&crate::sectionview::of_checked(&c));
                 if let Ok(r) = &c.outcome {
