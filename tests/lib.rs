@@ -27,14 +27,27 @@ pub fn member_from_json(value: serde_json::Value) -> strutline_core::Member {
 
 /// [`member_from_json`] of `base` with the keys of `extra` added (or
 /// replaced): one reference member varied key by key.
-pub fn member_with(
-    mut base: serde_json::Value,
-    extra: serde_json::Value,
-) -> strutline_core::Member {
+pub fn member_with(base: serde_json::Value, extra: serde_json::Value) -> strutline_core::Member {
+    member_from_json(with_keys(base, extra))
+}
+
+/// A member-file object with the keys of `extra` added (or replaced).
+pub fn with_keys(mut base: serde_json::Value, extra: serde_json::Value) -> serde_json::Value {
     if let (Some(o), Some(e)) = (base.as_object_mut(), extra.as_object()) {
         for (k, v) in e {
             o.insert(k.clone(), v.clone());
         }
     }
-    member_from_json(base)
+    base
+}
+
+/// The value of the first step of the working with this symbol. A missing
+/// step is the test's own finding, so it panics naming the symbol.
+#[allow(clippy::panic)]
+pub fn step_value(r: &strutline_core::CheckResult, symbol: &str) -> f64 {
+    r.trace
+        .iter()
+        .find(|s| s.symbol == symbol)
+        .map(|s| s.value)
+        .unwrap_or_else(|| panic!("no step {symbol} in the working"))
 }

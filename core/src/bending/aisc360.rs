@@ -2,8 +2,9 @@
 //! F1(a)) and ASD (Omega_b = 1.67, F1(b)).
 //!
 //! - I sections and channels, major axis: F2 (compact web and flanges) and
-//!   F3 (noncompact or slender flanges, compact web); a noncompact or
-//!   slender web (F4, F5) is refused. Lateral-torsional buckling by
+//!   F3 (noncompact or slender flanges, compact web); for I sections a
+//!   noncompact web F4 and a slender web F5 (a_w <= 10, h/t_w <= 260;
+//!   beyond, refused), a channel's noncompact web refused. Lateral-torsional buckling by
 //!   Eqs. F2-2 to F2-8 with c = 1 for I (F2-8a) and c = h_o/2 sqrt(I_y/C_w)
 //!   for channels (F2-8b); C_b by Eq. F1-1 from the moment diagram.
 //! - I sections and channels, minor axis: F6.
@@ -120,11 +121,320 @@ fn ltb_ranges(lb: f64, lp: f64, lr: f64, mp: f64, fy: f64, sx: f64, cb: f64, mcr
     }
 }
 
+/// L_r of Eqs. F2-6 and F4-8: 1.95 r E / F_L sqrt(jc + sqrt(jc^2 + 6.76
+/// (F_L/E)^2)), r = r_ts (F2) or r_t (F4), jc = J c / (S_x h_o).
+fn l_r(r: f64, e: f64, fl: f64, jc: f64) -> f64 {
+    1.95 * r * e / fl * (jc + (jc * jc + 6.76 * (fl / e).powi(2)).sqrt()).sqrt()
+}
+
+/// F_cr of Eqs. F2-4 and F4-5: C_b pi^2 E / (L_b/r)^2 sqrt(1 + 0.078 jc
+/// (L_b/r)^2), `ratio` = L_b / r.
+fn f_cr_elastic(cb: f64, e: f64, ratio: f64, jc: f64) -> f64 {
+    cb * std::f64::consts::PI.powi(2) * e / (ratio * ratio)
+        * (1.0 + 0.078 * jc * ratio * ratio).sqrt()
+}
+
+/// Compression flange local buckling of Eqs. F3-1, F3-2 (F4-13, F4-14
+/// with `top` = R_pc M_yc): the line from `top` at lambda_pf to 0.7 F_y S_x
+/// at lambda_rf, then 0.9 E k_c S_x / lambda^2, N mm.
+fn flange_local(
+    top: f64,
+    (e, fy): (f64, f64),
+    sx: f64,
+    kc: f64,
+    (lf, lpf, lrf): (f64, f64, f64),
+) -> f64 {
+    if lf <= lrf {
+        between(top, 0.7 * fy * sx, lf, lpf, lrf)
+    } else {
+        0.9 * e * kc * sx / (lf * lf)
+    }
+}
+
 fn slender(basis: Basis, reason: String) -> Error {
     Error::NotApplicable {
         method: key(basis),
         reason,
     }
+}
+
+/// The plates of a doubly symmetric I section, mm: depth, flange width and
+/// thickness, web thickness, web height h (h_c = h_p = h).
+struct Girder {
+    d: f64,
+    bf: f64,
+    tf: f64,
+    tw: f64,
+    h: f64,
+}
+
+/// Major-axis strength of a doubly symmetric I section with a noncompact
+/// web (F4) or a slender web (F5): (M_n N mm, M_cr N mm where
+/// lateral-torsional buckling applies, M_n,LTB / M_p, whether C_b was used).
+///
+/// F4 (lambda_pw < h/t_w <= lambda_rw = 5.70 sqrt(E/F_y)): R_pc (F4-9b)
+/// with M_p = F_y Z_x <= 1.6 F_y S_x; compression flange yielding R_pc M_yc
+/// (F4-1); lateral-torsional buckling with r_t (F4-11), L_p = 1.1 r_t
+/// sqrt(E/F_y) (F4-7), L_r (F4-8), F_L = 0.7 F_y (F4-6a, S_xt = S_xc),
+/// F_cr (F4-5) and Eqs. F4-2, F4-3; flange local buckling F4-13, F4-14.
+/// F5 (h/t_w > lambda_rw, a_w <= 10, h/t_w <= 260, unstiffened): R_pg
+/// (F5-6); M_n = R_pg F_y S_xc (F5-1), R_pg F_cr S_xc for lateral-torsional
+/// buckling (F5-2 to F5-5: L_r = pi r_t sqrt(E / 0.7 F_y)) and for flange
+/// local buckling (F5-7 to F5-9). Tension flange yielding (F4.4, F5.4)
+/// does not govern a doubly symmetric section (S_xt = S_xc). Equations
+/// recalled from memory of the 2016 Specification.
+fn f4_f5(
+    input: &Input<'_>,
+    basis: Basis,
+    g: &Girder,
+    (e, fy): (f64, f64),
+    (lt, lb, cb): (bool, f64, f64),
+    trace: &mut Trace,
+) -> Result<(f64, Option<f64>, f64, bool)> {
+    let s = Scope::BendingMajor;
+    let p = &input.section.props;
+    let root = (e / fy).sqrt();
+    let (sx, zx) = (p.w_el_major_mm3, p.w_pl_major_mm3);
+    let lw = g.h / g.tw;
+    let (lpw, lrw) = (3.76 * root, 5.70 * root);
+    let lf = g.bf / (2.0 * g.tf);
+    let (lpf, lrf) = (0.38 * root, 1.0 * root);
+    let kc = (4.0 / lw.sqrt()).clamp(0.35, 0.76);
+    let myc = fy * sx;
+    let mp = (fy * zx).min(1.6 * myc);
+    let aw = g.h * g.tw / (g.bf * g.tf);
+    let rt = g.bf / (12.0 * (1.0 + aw / 6.0)).sqrt();
+    let pi2 = std::f64::consts::PI.powi(2);
+    step!(
+        trace,
+        s,
+        "a_w",
+        "web to compression flange area h_c t_w / (b_fc t_fc)",
+        aw,
+        "-",
+        "AISC 360-16 Eq. F4-12"
+    );
+    step!(trace, s, "r_t", "radius of gyration of the compression flange and a sixth of the web, b_fc / sqrt(12 (1 + a_w/6))", rt, "mm", "AISC 360-16 Eq. F4-11");
+    // F4-7 and F5.2: L_p = 1.1 r_t sqrt(E/F_y).
+    let lp = 1.1 * rt * root;
+    if lt {
+        step!(
+            trace,
+            s,
+            "L_b",
+            "unbraced length (k_lt L or lcr_lt_mm)",
+            lb,
+            "mm",
+            "member file"
+        );
+        step!(
+            trace,
+            s,
+            "L_p",
+            "1.1 r_t sqrt(E/F_y)",
+            lp,
+            "mm",
+            "AISC 360-16 Eq. F4-7"
+        );
+    }
+    if lw <= lrw {
+        let ratio = mp / myc;
+        let rpc = (ratio - (ratio - 1.0) * (lw - lpw) / (lrw - lpw)).min(ratio);
+        step!(
+            trace,
+            s,
+            "M_yc",
+            "yield moment of the compression flange F_y S_xc",
+            myc / 1e6,
+            "kNm",
+            "AISC 360-16 F4.1"
+        );
+        step!(
+            trace,
+            s,
+            "R_pc",
+            "web plastification factor, noncompact web",
+            rpc,
+            "-",
+            "AISC 360-16 Eq. F4-9b"
+        );
+        let cfy = rpc * myc;
+        step!(
+            trace,
+            s,
+            "M_n,CFY",
+            "compression flange yielding R_pc M_yc",
+            cfy / 1e6,
+            "kNm",
+            "AISC 360-16 Eq. F4-1"
+        );
+        let fl = 0.7 * fy;
+        let mut mn = cfy;
+        if lf > lpf {
+            // F4-13, F4-14: F3-1, F3-2 with R_pc M_yc for M_p (F_L = 0.7 F_y).
+            let flb = flange_local(cfy, (e, fy), sx, kc, (lf, lpf, lrf));
+            step!(
+                trace,
+                s,
+                "M_n,FLB",
+                "compression flange local buckling",
+                flb / 1e6,
+                "kNm",
+                "AISC 360-16 Eq. F4-13 / F4-14"
+            );
+            mn = mn.min(flb);
+        }
+        if !lt {
+            step!(
+                trace,
+                s,
+                "M_n",
+                "nominal flexural strength, continuously braced, noncompact web",
+                mn / 1e6,
+                "kNm",
+                "AISC 360-16 F4.1, F4.3"
+            );
+            return Ok((mn, None, 1.0, false));
+        }
+        let j = p.torsion_mm4;
+        let ho = g.d - g.tf;
+        let jr = j / (sx * ho);
+        let lr = l_r(rt, e, fl, jr);
+        step!(
+            trace,
+            s,
+            "L_r",
+            "limiting unbraced length for inelastic lateral-torsional buckling, F_L = 0.7 F_y",
+            lr,
+            "mm",
+            "AISC 360-16 Eq. F4-8, F4-6a"
+        );
+        let x = lb / rt;
+        let mcr = f_cr_elastic(cb, e, x, jr) * sx;
+        step!(
+            trace,
+            s,
+            "M_cr",
+            "elastic critical moment F_cr S_xc",
+            mcr / 1e6,
+            "kNm",
+            "AISC 360-16 Eq. F4-5"
+        );
+        // F4-2, F4-3: the ranges of F2 with R_pc M_yc for M_p (F_L = 0.7 F_y).
+        let ltb = ltb_ranges(lb, lp, lr, cfy, fy, sx, cb, mcr);
+        step!(
+            trace,
+            s,
+            "M_n,LTB",
+            "lateral-torsional buckling",
+            ltb / 1e6,
+            "kNm",
+            "AISC 360-16 Eq. F4-2, F4-3"
+        );
+        return Ok((mn.min(ltb), Some(mcr), ltb / (fy * zx), true));
+    }
+    if aw > 10.0 || lw > 260.0 {
+        return Err(slender(
+            basis,
+            format!(
+                "m_major_a_knm: the slender web (h/t_w = {lw:.1}, a_w = {aw:.2}) is beyond AISC 360-16 F5 \
+                 as implemented here (a_w <= 10, F5.2; h/t_w <= 260 for a web without stiffeners, F13.2)"
+            ),
+        ));
+    }
+    let rpg = (1.0 - aw / (1200.0 + 300.0 * aw) * (lw - 5.7 * root)).min(1.0);
+    step!(
+        trace,
+        s,
+        "R_pg",
+        "bending strength reduction factor of a slender web",
+        rpg,
+        "-",
+        "AISC 360-16 Eq. F5-6"
+    );
+    let cfy = rpg * fy * sx;
+    step!(
+        trace,
+        s,
+        "M_n,CFY",
+        "compression flange yielding R_pg F_y S_xc",
+        cfy / 1e6,
+        "kNm",
+        "AISC 360-16 Eq. F5-1"
+    );
+    let f_flb = if lf <= lpf {
+        fy
+    } else if lf <= lrf {
+        fy - 0.3 * fy * (lf - lpf) / (lrf - lpf)
+    } else {
+        0.9 * e * kc / (lf * lf)
+    };
+    let mut mn = cfy;
+    if lf > lpf {
+        let flb = rpg * f_flb * sx;
+        step!(
+            trace,
+            s,
+            "M_n,FLB",
+            "compression flange local buckling R_pg F_cr S_xc",
+            flb / 1e6,
+            "kNm",
+            "AISC 360-16 Eq. F5-7 to F5-9"
+        );
+        mn = mn.min(flb);
+    }
+    if !lt {
+        step!(
+            trace,
+            s,
+            "M_n",
+            "nominal flexural strength, continuously braced, slender web",
+            mn / 1e6,
+            "kNm",
+            "AISC 360-16 F5.1, F5.3"
+        );
+        return Ok((mn, None, 1.0, false));
+    }
+    let lr = std::f64::consts::PI * rt * (e / (0.7 * fy)).sqrt();
+    step!(
+        trace,
+        s,
+        "L_r",
+        "pi r_t sqrt(E / 0.7 F_y)",
+        lr,
+        "mm",
+        "AISC 360-16 Eq. F5-5"
+    );
+    let x = lb / rt;
+    let f_el = cb * pi2 * e / (x * x);
+    let mcr = f_el * sx;
+    step!(
+        trace,
+        s,
+        "M_cr",
+        "elastic critical moment C_b pi^2 E / (L_b/r_t)^2 S_xc",
+        mcr / 1e6,
+        "kNm",
+        "AISC 360-16 Eq. F5-4"
+    );
+    let f_ltb = if lb <= lp {
+        fy
+    } else if lb <= lr {
+        (cb * (fy - 0.3 * fy * (lb - lp) / (lr - lp))).min(fy)
+    } else {
+        f_el.min(fy)
+    };
+    let ltb = rpg * f_ltb * sx;
+    step!(
+        trace,
+        s,
+        "M_n,LTB",
+        "lateral-torsional buckling R_pg F_cr S_xc",
+        ltb / 1e6,
+        "kNm",
+        "AISC 360-16 Eq. F5-2 to F5-4"
+    );
+    Ok((mn.min(ltb), Some(mcr), ltb / (fy * zx), true))
 }
 
 #[allow(clippy::too_many_arguments)]
@@ -223,134 +533,133 @@ fn axis(
                     "AISC 360-16 Table B4.1b case 15"
                 );
                 if lw > 3.76 * root {
-                    return Err(slender(basis, format!(
-                        "m_major_a_knm: the web is noncompact or slender in flexure (h/t_w = {lw:.1} > 3.76 sqrt(E/F_y) = {:.1}); AISC 360-16 F4/F5 are not implemented here",
-                        3.76 * root
-                    )));
-                }
-                let mp = fy * zx;
-                step!(
-                    trace,
-                    s,
-                    "M_p",
-                    "plastic moment F_y Z_x",
-                    mp / 1e6,
-                    "kNm",
-                    "AISC 360-16 Eq. F2-1"
-                );
-                // Flange local buckling, F3-1 / F3-2.
-                let mut mn = mp;
-                if lf > lpf {
-                    let flb = if lf <= lrf {
-                        between(mp, 0.7 * fy * sx, lf, lpf, lrf)
-                    } else {
-                        let kc = (4.0 / (h / tw).sqrt()).clamp(0.35, 0.76);
-                        0.9 * e * kc * sx / (lf * lf)
-                    };
-                    step!(
-                        trace,
-                        s,
-                        "M_n,FLB",
-                        "compression flange local buckling",
-                        flb / 1e6,
-                        "kNm",
-                        "AISC 360-16 Eq. F3-1 / F3-2"
-                    );
-                    mn = mn.min(flb);
-                }
-                if !lt {
-                    step!(trace, s, "M_n", "nominal flexural strength, continuously braced (no lateral-torsional buckling)", mn / 1e6, "kNm", "AISC 360-16 F2.1, F3.2");
-                    (mn, None, 1.0, false)
-                } else {
-                    let (iy, cw, j) = (p.i_minor_mm4, p.warping_mm6, p.torsion_mm4);
-                    let ho = d - tf;
-                    let c = if channel {
-                        ho / 2.0 * (iy / cw).sqrt()
-                    } else {
-                        1.0
-                    };
-                    let rts = ((iy * cw).sqrt() / sx).sqrt();
-                    let ry = p.r_minor_mm;
-                    let lp = 1.76 * ry * root;
-                    let jc = j * c / (sx * ho);
-                    let lr = 1.95 * rts * e / (0.7 * fy)
-                        * (jc + (jc * jc + 6.76 * (0.7 * fy / e).powi(2)).sqrt()).sqrt();
-                    step!(
-                        trace,
-                        s,
-                        "L_b",
-                        "unbraced length (k_lt L or lcr_lt_mm)",
-                        lb,
-                        "mm",
-                        "member file"
-                    );
                     if channel {
+                        return Err(slender(basis, format!(
+                            "m_major_a_knm: the channel's web is noncompact or slender in flexure (h/t_w = {lw:.1} > 3.76 sqrt(E/F_y) = {:.1}); AISC 360-16 F4 and F5 cover I-shaped members only",
+                            3.76 * root
+                        )));
+                    }
+                    let g = Girder { d, bf, tf, tw, h };
+                    f4_f5(input, basis, &g, (e, fy), (lt, lb, cb), trace)?
+                } else {
+                    let mp = fy * zx;
+                    step!(
+                        trace,
+                        s,
+                        "M_p",
+                        "plastic moment F_y Z_x",
+                        mp / 1e6,
+                        "kNm",
+                        "AISC 360-16 Eq. F2-1"
+                    );
+                    // Flange local buckling, F3-1 / F3-2.
+                    let mut mn = mp;
+                    if lf > lpf {
+                        let kc = (4.0 / (h / tw).sqrt()).clamp(0.35, 0.76);
+                        let flb = flange_local(mp, (e, fy), sx, kc, (lf, lpf, lrf));
                         step!(
                             trace,
                             s,
-                            "c",
-                            "h_o/2 sqrt(I_y / C_w), channel",
-                            c,
-                            "-",
-                            "AISC 360-16 Eq. F2-8b"
+                            "M_n,FLB",
+                            "compression flange local buckling",
+                            flb / 1e6,
+                            "kNm",
+                            "AISC 360-16 Eq. F3-1 / F3-2"
                         );
+                        mn = mn.min(flb);
                     }
-                    step!(
-                        trace,
-                        s,
-                        "r_ts",
-                        "effective radius of gyration sqrt(sqrt(I_y C_w) / S_x)",
-                        rts,
-                        "mm",
-                        "AISC 360-16 Eq. F2-7"
-                    );
-                    step!(
-                        trace,
-                        s,
-                        "L_p",
-                        "limiting length for yielding 1.76 r_y sqrt(E/F_y)",
-                        lp,
-                        "mm",
-                        "AISC 360-16 Eq. F2-5"
-                    );
-                    step!(
-                        trace,
-                        s,
-                        "L_r",
-                        "limiting length for inelastic lateral-torsional buckling",
-                        lr,
-                        "mm",
-                        "AISC 360-16 Eq. F2-6"
-                    );
-                    let ratio = lb / rts;
-                    let fcr = cb * std::f64::consts::PI.powi(2) * e / (ratio * ratio)
-                        * (1.0 + 0.078 * jc * ratio * ratio).sqrt();
-                    let mcr = fcr * sx;
-                    step!(
-                        trace,
-                        s,
-                        "M_cr",
-                        "elastic critical moment F_cr S_x",
-                        mcr / 1e6,
-                        "kNm",
-                        "AISC 360-16 Eq. F2-4"
-                    );
-                    let ltb = ltb_ranges(lb, lp, lr, mp, fy, sx, cb, mcr);
-                    step!(
-                        trace,
-                        s,
-                        "M_n,LTB",
-                        "lateral-torsional buckling",
-                        ltb / 1e6,
-                        "kNm",
-                        "AISC 360-16 Eq. F2-1 to F2-3"
-                    );
-                    if channel {
-                        warn_once(warnings, "channel-load-through-web", || {
-                            "bending: the channel is assumed loaded through its shear centre or braced against twist; a load through the web twists it, which is not checked".into()
-                        });
+                    if !lt {
+                        step!(trace, s, "M_n", "nominal flexural strength, continuously braced (no lateral-torsional buckling)", mn / 1e6, "kNm", "AISC 360-16 F2.1, F3.2");
+                        (mn, None, 1.0, false)
+                    } else {
+                        let (iy, cw, j) = (p.i_minor_mm4, p.warping_mm6, p.torsion_mm4);
+                        let ho = d - tf;
+                        let c = if channel {
+                            ho / 2.0 * (iy / cw).sqrt()
+                        } else {
+                            1.0
+                        };
+                        let rts = ((iy * cw).sqrt() / sx).sqrt();
+                        let ry = p.r_minor_mm;
+                        let lp = 1.76 * ry * root;
+                        let jc = j * c / (sx * ho);
+                        let lr = l_r(rts, e, 0.7 * fy, jc);
+                        step!(
+                            trace,
+                            s,
+                            "L_b",
+                            "unbraced length (k_lt L or lcr_lt_mm)",
+                            lb,
+                            "mm",
+                            "member file"
+                        );
+                        if channel {
+                            step!(
+                                trace,
+                                s,
+                                "c",
+                                "h_o/2 sqrt(I_y / C_w), channel",
+                                c,
+                                "-",
+                                "AISC 360-16 Eq. F2-8b"
+                            );
+                        }
+                        step!(
+                            trace,
+                            s,
+                            "r_ts",
+                            "effective radius of gyration sqrt(sqrt(I_y C_w) / S_x)",
+                            rts,
+                            "mm",
+                            "AISC 360-16 Eq. F2-7"
+                        );
+                        step!(
+                            trace,
+                            s,
+                            "L_p",
+                            "limiting length for yielding 1.76 r_y sqrt(E/F_y)",
+                            lp,
+                            "mm",
+                            "AISC 360-16 Eq. F2-5"
+                        );
+                        step!(
+                            trace,
+                            s,
+                            "L_r",
+                            "limiting length for inelastic lateral-torsional buckling",
+                            lr,
+                            "mm",
+                            "AISC 360-16 Eq. F2-6"
+                        );
+                        let ratio = lb / rts;
+                        let fcr = f_cr_elastic(cb, e, ratio, jc);
+                        let mcr = fcr * sx;
+                        step!(
+                            trace,
+                            s,
+                            "M_cr",
+                            "elastic critical moment F_cr S_x",
+                            mcr / 1e6,
+                            "kNm",
+                            "AISC 360-16 Eq. F2-4"
+                        );
+                        let ltb = ltb_ranges(lb, lp, lr, mp, fy, sx, cb, mcr);
+                        step!(
+                            trace,
+                            s,
+                            "M_n,LTB",
+                            "lateral-torsional buckling",
+                            ltb / 1e6,
+                            "kNm",
+                            "AISC 360-16 Eq. F2-1 to F2-3"
+                        );
+                        if channel {
+                            warn_once(warnings, "channel-load-through-web", || {
+                                "bending: the channel is assumed loaded through its shear centre or braced against twist; a load through the web twists it, which is not checked".into()
+                            });
+                        }
+                        (mn.min(ltb), Some(mcr), ltb / mp, true)
                     }
-                    (mn.min(ltb), Some(mcr), ltb / mp, true)
                 }
             } else {
                 // F6: minor axis.

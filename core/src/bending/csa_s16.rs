@@ -45,7 +45,8 @@ pub fn check(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
     })
 }
 
-fn class_of(ratio: f64, limits: [f64; 3]) -> u8 {
+/// The class (1 to 4) of a ratio against the Class 1, 2 and 3 limits.
+pub fn class_of(ratio: f64, limits: [f64; 3]) -> u8 {
     if ratio <= limits[0] {
         1
     } else if ratio <= limits[1] {
@@ -57,7 +58,8 @@ fn class_of(ratio: f64, limits: [f64; 3]) -> u8 {
     }
 }
 
-fn classify(input: &Input<'_>, fy: f64, axis: Axis, trace: &mut Trace) -> u8 {
+/// The class in bending about `axis` by Table 2 (no axial load), with its working.
+pub fn classify(input: &Input<'_>, fy: f64, axis: Axis, trace: &mut Trace) -> u8 {
     let s = axis.scope();
     let rf = fy.sqrt();
     let swapped = input.section.props.principal_angle_rad != 0.0;
@@ -152,6 +154,16 @@ fn classify(input: &Input<'_>, fy: f64, axis: Axis, trace: &mut Trace) -> u8 {
         "CSA S16-19 11.2"
     );
     class
+}
+
+/// M_r of 13.6(a) (or (b) with M_y for M_p), N mm: 1.15 phi M_p (1 - 0.28
+/// M_p / M_u) <= phi M_p when M_u > 0.67 M_p, else phi M_u.
+pub fn unsupported(mp: f64, mu: f64) -> f64 {
+    if mu > 0.67 * mp {
+        (1.15 * PHI * mp * (1.0 - 0.28 * mp / mu)).min(PHI * mp)
+    } else {
+        PHI * mu
+    }
 }
 
 fn axis(
@@ -300,11 +312,7 @@ fn axis(
         "kNm",
         "CSA S16-19 13.6(a)"
     );
-    let mr = if mu > 0.67 * mp {
-        (1.15 * PHI * mp * (1.0 - 0.28 * mp / mu)).min(PHI * mp)
-    } else {
-        PHI * mu
-    };
+    let mr = unsupported(mp, mu);
     step!(
         trace,
         s,

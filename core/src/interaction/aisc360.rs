@@ -1,15 +1,460 @@
-//! AISC 360-16 H1-1a, H1-1b (and H2-1 where H1 does not apply), with B1 of Appendix 8.2.1.
+//! AISC 360-16 H1.1 (Eqs. H1-1a, H1-1b) for doubly and singly symmetric
+//! members, H2-1 for a given section (its symmetry is not known), with B1
+//! of Appendix 8.2.1; LRFD and ASD.
+//!
+//! - P_r is the member's `axial_kn`; P_c the governing available axial
+//!   strength of Chapter E (phi_c P_n or P_n / Omega_c: the lowest of every
+//!   mode checked, flexural about both axes and the twisting mode).
+//! - M_cx, M_cy are the available flexural strengths of Chapter F, the
+//!   bending result's resistances (with lateral-torsional buckling and C_b).
+//! - M_rx, M_ry: the largest first-order moment along the member about each
+//!   axis, M_nt (member file), times B1 of Appendix 8.2.1 when
+//!   `amplify_moments` is true: B1 = C_m / (1 - alpha P_r / P_e1) >= 1
+//!   (Eq. A-8-3), alpha = 1.00 (LRFD) or 1.60 (ASD), P_e1 = pi^2 EI* /
+//!   L_c1^2 (Eq. A-8-5) with EI* = EI (the effective-length method: the
+//!   member's buckling lengths are given, so the stiffness is not reduced)
+//!   and L_c1 the member's buckling length about that axis; C_m = 0.6 -
+//!   0.4 M_1/M_2 (Eq. A-8-4) without transverse load, M_1/M_2 positive in
+//!   reverse curvature (in the member file's convention M_1/M_2 = -M_small /
+//!   M_large, the signed end moments), and C_m = 1.0 with transverse load
+//!   (Appendix 8.2.1(b), the conservative value the clause permits). With
+//!   `amplify_moments` false the moments given already include the member's
+//!   second-order effects and B1 is not applied. B2 (Appendix 8.2.2, sway)
+//!   belongs to the frame analysis and is outside the member check: the
+//!   moments given must include it. Taking the largest moment about each
+//!   axis, wherever along the member it acts, is conservative.
+//! - P_e1 <= alpha P_r: the member buckles in the plane of bending under the
+//!   axial load alone; B1 has no finite value and the equation's
+//!   utilisation is infinite (the member fails, and a warning says why).
+//! - H1-1a when P_r / P_c >= 0.2: P_r/P_c + 8/9 (M_rx/M_cx + M_ry/M_cy);
+//!   H1-1b otherwise: P_r/(2 P_c) + (M_rx/M_cx + M_ry/M_cy).
+//! - H2-1 (a given section, whose symmetry the member file does not tell):
+//!   f_ra/F_ca + f_rbw/F_cbw + f_rbz/F_cbz with every term positive (the
+//!   worst point of the section); a given section's flexural strength is
+//!   F_y S (first yield), so each stress ratio equals the force ratio,
+//!   P_r/P_c + M_rw/M_cw + M_rz/M_cz, never below H1-1a or H1-1b (the
+//!   conservative choice for an unknown section).
+//! - Single angles and tees: refused (bending refuses them before this
+//!   point; kept here so the rule stands on its own).
+//!
+//! Eq. numbers and text recalled from memory of the 2016 Specification.
 
-use super::{Check, Context};
-use crate::error::Result;
+use super::{ratio, Check, Context};
+use crate::bending::{moments, shape, Axis, AxisBending, Shape};
+use crate::error::{Error, Result};
+use crate::member::Method;
+use crate::method::common::{require_steel, warn_once};
 use crate::outcome::Warning;
-use crate::trace::Trace;
+use crate::section::Family;
+use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
 
-/// The interaction equations, `None` while they are not implemented.
+/// alpha of Appendix 8.2.1: 1.00 (LRFD).
+pub const ALPHA_LRFD: f64 = 1.0;
+/// alpha of Appendix 8.2.1: 1.60 (ASD).
+pub const ALPHA_ASD: f64 = 1.6;
+
+const S: Scope = Scope::Interaction;
+
+/// The per-axis symbols of the working.
+struct Names {
+    m_nt: Symbol,
+    ratio: Symbol,
+    c_m: Symbol,
+    l_c1: Symbol,
+    p_e1: Symbol,
+    b1: Symbol,
+    m_r: Symbol,
+    m_c: Symbol,
+}
+
+fn names(axis: Axis) -> Names {
+    match axis {
+        Axis::Major => Names {
+            m_nt: symbol!("M_ntx", "kNm"),
+            ratio: symbol!("M_1/M_2 (x)", "-"),
+            c_m: symbol!("C_mx", "-"),
+            l_c1: symbol!("L_c1x", "mm"),
+            p_e1: symbol!("P_e1x", "kN"),
+            b1: symbol!("B1x", "-"),
+            m_r: symbol!("M_rx", "kNm"),
+            m_c: symbol!("M_cx", "kNm"),
+        },
+        Axis::Minor => Names {
+            m_nt: symbol!("M_nty", "kNm"),
+            ratio: symbol!("M_1/M_2 (y)", "-"),
+            c_m: symbol!("C_my", "-"),
+            l_c1: symbol!("L_c1y", "mm"),
+            p_e1: symbol!("P_e1y", "kN"),
+            b1: symbol!("B1y", "-"),
+            m_r: symbol!("M_ry", "kNm"),
+            m_c: symbol!("M_cy", "kNm"),
+        },
+    }
+}
+
+/// C_m of Appendix 8.2.1 for a moment diagram, with M_1/M_2 (positive in
+/// reverse curvature) where end moments alone act; `None` for M_1/M_2
+/// with transverse load (C_m = 1.0).
+pub fn c_m(m: &crate::member::Moments) -> (f64, Option<f64>) {
+    match shape(m) {
+        // The file's psi = M_small / M_large is positive in single
+        // curvature; M_1/M_2 of Eq. A-8-4 is positive in reverse curvature.
+        Shape::Linear { psi } => (0.6 + 0.4 * psi, Some(-psi)),
+        Shape::Span(_) | Shape::Combined => (1.0, None),
+        Shape::None => (1.0, None),
+    }
+}
+
+/// B1 of Eq. A-8-3, `None` where P_e1 <= alpha P_r (no finite amplification).
+pub fn b1(c_m: f64, alpha: f64, p_r: f64, p_e1: f64) -> Option<f64> {
+    if p_e1 <= alpha * p_r {
+        None
+    } else {
+        Some((c_m / (1.0 - alpha * p_r / p_e1)).max(1.0))
+    }
+}
+
+/// The required flexural strength about `axis`, kNm (infinite where B1 has
+/// no finite value), with its working.
+fn required(
+    ctx: &Context<'_>,
+    axis: Axis,
+    alpha: f64,
+    e_mpa: f64,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> f64 {
+    let n = names(axis);
+    let input = ctx.input;
+    let diagram = moments(input, axis);
+    let m_nt = diagram.max_abs_knm();
+    if m_nt == 0.0 {
+        return 0.0;
+    }
+    put(
+        trace,
+        S,
+        n.m_nt,
+        sym!("largest first-order moment along the member (no lateral translation)"),
+        m_nt,
+        sym!("member file; AISC 360-16 Appendix 8.2"),
+    );
+    if !input.member.amplify_moments {
+        put(
+            trace,
+            S,
+            n.b1,
+            sym!("not applied (amplify_moments false): the moments given include the member's second-order effects"),
+            1.0,
+            sym!("AISC 360-16 Appendix 8.2.1 (member file)"),
+        );
+        put(
+            trace,
+            S,
+            n.m_r,
+            sym!("required flexural strength, the moment given"),
+            m_nt,
+            sym!("AISC 360-16 H1.1"),
+        );
+        return m_nt;
+    }
+    let (cm, ratio) = c_m(&diagram);
+    match ratio {
+        Some(r) => {
+            put(
+                trace,
+                S,
+                n.ratio,
+                sym!("ratio of the smaller to the larger end moment, positive in reverse curvature"),
+                r,
+                sym!("AISC 360-16 Appendix 8.2.1(a)"),
+            );
+            put(
+                trace,
+                S,
+                n.c_m,
+                sym!("equivalent uniform moment factor 0.6 - 0.4 M_1/M_2, no transverse load"),
+                cm,
+                sym!("AISC 360-16 Eq. A-8-4"),
+            );
+        }
+        None => put(
+            trace,
+            S,
+            n.c_m,
+            sym!("equivalent uniform moment factor with transverse load between the ends (the conservative value)"),
+            cm,
+            sym!("AISC 360-16 Appendix 8.2.1(b)"),
+        ),
+    }
+    let p = &input.section.props;
+    let (i, l) = match axis {
+        Axis::Major => (p.i_major_mm4, ctx.lengths.major_mm),
+        Axis::Minor => (p.i_minor_mm4, ctx.lengths.minor_mm),
+    };
+    let pi = std::f64::consts::PI;
+    let p_e1 = pi * pi * e_mpa * i / (l * l) / 1000.0;
+    put(
+        trace,
+        S,
+        n.l_c1,
+        sym!("effective length in the plane of bending: the member's buckling length about this axis"),
+        l,
+        sym!("AISC 360-16 Appendix 8.2.1 (member file)"),
+    );
+    put(
+        trace,
+        S,
+        n.p_e1,
+        sym!("elastic critical buckling strength pi^2 EI / L_c1^2, EI unreduced (effective-length method)"),
+        p_e1,
+        sym!("AISC 360-16 Eq. A-8-5"),
+    );
+    let p_r = input.member.axial_kn;
+    let Some(b) = b1(cm, alpha, p_r, p_e1) else {
+        put(
+            trace,
+            S,
+            n.b1,
+            sym!("no finite value: P_e1 <= alpha P_r, the member buckles in the plane of bending under the axial load alone"),
+            f64::INFINITY,
+            sym!("AISC 360-16 Eq. A-8-3"),
+        );
+        warn_once(warnings, "b1-unbounded", || {
+            format!(
+                "axial_kn: alpha P_r = {:.1} kN reaches the elastic buckling load in the plane of \
+                 bending P_e1 = {p_e1:.1} kN (AISC 360-16 Appendix 8.2.1), so the moments have no \
+                 finite amplification B1 and the member fails; choose a stiffer section or a \
+                 shorter buckling length",
+                alpha * p_r
+            )
+        });
+        return f64::INFINITY;
+    };
+    put(
+        trace,
+        S,
+        n.b1,
+        sym!("member moment amplifier C_m / (1 - alpha P_r / P_e1) >= 1, applied (amplify_moments true)"),
+        b,
+        sym!("AISC 360-16 Eq. A-8-3"),
+    );
+    let m_r = b * m_nt;
+    put(
+        trace,
+        S,
+        n.m_r,
+        sym!(
+            "required flexural strength B1 M_nt (B2 M_lt of the frame is outside the member check)"
+        ),
+        m_r,
+        sym!("AISC 360-16 Eq. A-8-1"),
+    );
+    m_r
+}
+
+fn capacity(trace: &mut Trace, axis: Axis, b: &AxisBending, basis_lrfd: bool) -> f64 {
+    let label: Sym = if basis_lrfd {
+        sym!("available flexural strength phi_b M_n (Chapter F, with lateral-torsional buckling)")
+    } else {
+        sym!("available flexural strength M_n / Omega_b (Chapter F, with lateral-torsional buckling)")
+    };
+    put(
+        trace,
+        S,
+        names(axis).m_c,
+        label,
+        b.resistance_knm,
+        sym!("AISC 360-16 H1.1, Chapter F"),
+    );
+    b.resistance_knm
+}
+
+/// The interaction equations.
 pub fn check(
-    _ctx: &Context<'_>,
-    _trace: &mut Trace,
-    _warnings: &mut Vec<Warning>,
+    ctx: &Context<'_>,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
 ) -> Result<Option<Vec<Check>>> {
-    Ok(None)
+    let key = ctx.method.key();
+    let lrfd = match ctx.method {
+        Method::AiscLrfd => true,
+        Method::AiscAsd => false,
+        _ => return Ok(None),
+    };
+    let input = ctx.input;
+    let steel = require_steel(input, key)?;
+    let family = input.section.family;
+    if matches!(family, Family::Angle | Family::Tee) {
+        return Err(Error::NotApplicable {
+            method: key,
+            reason: "axial_kn with moments: a single angle or a tee is outside AISC 360-16 H1.1 \
+                     (H2 applies, which is not implemented here); check this member by hand"
+                .into(),
+        });
+    }
+    let alpha = if lrfd { ALPHA_LRFD } else { ALPHA_ASD };
+    let p_r = input.member.axial_kn;
+    let p_c = ctx.governing.resistance_kn;
+    step!(
+        trace,
+        S,
+        "P_r",
+        "required axial strength",
+        p_r,
+        "kN",
+        "member file"
+    );
+    if lrfd {
+        step!(
+            trace,
+            S,
+            "P_c",
+            "available axial strength phi_c P_n, the governing mode of Chapter E",
+            p_c,
+            "kN",
+            "AISC 360-16 H1.1"
+        );
+    } else {
+        step!(
+            trace,
+            S,
+            "P_c",
+            "available axial strength P_n / Omega_c, the governing mode of Chapter E",
+            p_c,
+            "kN",
+            "AISC 360-16 H1.1"
+        );
+    }
+    if input.member.amplify_moments {
+        step!(
+            trace,
+            S,
+            "alpha",
+            "1.00 (LRFD) or 1.60 (ASD)",
+            alpha,
+            "-",
+            "AISC 360-16 Appendix 8.2.1"
+        );
+    }
+    step!(
+        trace,
+        S,
+        "B2",
+        "sway amplifier taken as 1 here: B2 M_lt (Appendix 8.2.2) belongs to the frame analysis; the moments given must include it",
+        1.0,
+        "-",
+        "AISC 360-16 Appendix 8.2.2 (outside the member check)"
+    );
+    warn_once(warnings, "sway-not-amplified", || {
+        "beam-column: the member's own second-order effect (B1) is worked here; the frame's sway \
+         effect (P-Delta, B2 of AISC 360-16 Appendix 8.2.2) is not: the moments given must \
+         include it"
+            .into()
+    });
+    let e = steel.e_mpa;
+    let m_rx = required(ctx, Axis::Major, alpha, e, trace, warnings);
+    let m_ry = required(ctx, Axis::Minor, alpha, e, trace, warnings);
+    let m_cx = capacity(trace, Axis::Major, &ctx.bending.major, lrfd);
+    let m_cy = capacity(trace, Axis::Minor, &ctx.bending.minor, lrfd);
+    let axial = ratio(p_r, p_c);
+    let bend = ratio(m_rx, m_cx) + ratio(m_ry, m_cy);
+    step!(
+        trace,
+        S,
+        "P_r/P_c",
+        "axial ratio (0.2 divides H1-1a from H1-1b)",
+        axial,
+        "-",
+        "AISC 360-16 H1.1"
+    );
+    if family == Family::Given {
+        let u = axial + bend;
+        warn_once(warnings, "given-h2", || {
+            "beam-column: the given section's symmetry is not known, so AISC 360-16 H2-1 is used \
+             with every stress ratio taken positive (the worst point of the section); this is \
+             never below H1-1a or H1-1b"
+                .into()
+        });
+        step!(
+            trace,
+            S,
+            "H2-1",
+            "f_ra/F_ca + f_rbw/F_cbw + f_rbz/F_cbz = P_r/P_c + M_rx/M_cx + M_ry/M_cy (S-based strengths, every term positive)",
+            u,
+            "-",
+            "AISC 360-16 Eq. H2-1"
+        );
+        return Ok(Some(vec![Check {
+            check: "H2-1",
+            utilisation: u,
+        }]));
+    }
+    let (name, u) = if axial >= 0.2 {
+        let u = axial + 8.0 / 9.0 * bend;
+        step!(
+            trace,
+            S,
+            "H1-1a",
+            "P_r/P_c + 8/9 (M_rx/M_cx + M_ry/M_cy), P_r/P_c >= 0.2",
+            u,
+            "-",
+            "AISC 360-16 Eq. H1-1a"
+        );
+        ("H1-1a", u)
+    } else {
+        let u = axial / 2.0 + bend;
+        step!(
+            trace,
+            S,
+            "H1-1b",
+            "P_r/(2 P_c) + (M_rx/M_cx + M_ry/M_cy), P_r/P_c < 0.2",
+            u,
+            "-",
+            "AISC 360-16 Eq. H1-1b"
+        );
+        ("H1-1b", u)
+    };
+    Ok(Some(vec![Check {
+        check: name,
+        utilisation: u,
+    }]))
+}
+
+#[cfg(test)]
+mod tests {
+    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
+    use super::*;
+    use crate::member::{Moments, SpanLoad};
+
+    fn mo(a: f64, b: f64, span: f64) -> Moments {
+        Moments {
+            a_knm: a,
+            b_knm: b,
+            span_knm: span,
+            span_load: SpanLoad::Uniform,
+        }
+    }
+
+    #[test]
+    fn c_m_follows_eq_a_8_4() {
+        // Single curvature, equal ends: M1/M2 = -1, C_m = 1.0.
+        assert_eq!(c_m(&mo(10.0, 10.0, 0.0)), (1.0, Some(-1.0)));
+        // Reverse curvature, equal ends: M1/M2 = +1, C_m = 0.2.
+        let (cm, r) = c_m(&mo(10.0, -10.0, 0.0));
+        assert!((cm - 0.2).abs() < 1e-15 && r == Some(1.0));
+        // One end zero: C_m = 0.6.
+        assert_eq!(c_m(&mo(0.0, 8.0, 0.0)).0, 0.6);
+        // Transverse load: 1.0.
+        assert_eq!(c_m(&mo(5.0, -5.0, 3.0)), (1.0, None));
+    }
+
+    #[test]
+    fn b1_is_at_least_one_and_refuses_beyond_p_e1() {
+        assert_eq!(b1(0.2, 1.0, 10.0, 1000.0), Some(1.0));
+        let b = b1(1.0, 1.0, 500.0, 1000.0).unwrap();
+        assert!((b - 2.0).abs() < 1e-15);
+        assert_eq!(b1(1.0, 1.6, 625.0, 1000.0), None);
+        assert_eq!(b1(1.0, 1.0, 1000.0, 1000.0), None);
+    }
 }

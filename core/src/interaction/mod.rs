@@ -95,6 +95,17 @@ pub fn check(
     }
 }
 
+/// Demand over capacity: 0 without demand, infinite without capacity.
+pub fn ratio(demand: f64, capacity: f64) -> f64 {
+    if demand == 0.0 {
+        0.0
+    } else if capacity > 0.0 {
+        demand / capacity
+    } else {
+        f64::INFINITY
+    }
+}
+
 /// The largest check, `None` for none.
 pub fn governing(checks: &[Check]) -> Option<Check> {
     checks

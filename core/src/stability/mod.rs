@@ -461,6 +461,31 @@ fn twist_clauses(method: Method) -> TwistClauses {
     }
 }
 
+/// Every elastic critical load of the member (flexural, torsional and
+/// flexural-torsional) from its section, moduli and buckling lengths.
+pub fn critical_loads(
+    input: &Input<'_>,
+    e_mpa: f64,
+    g_mpa: f64,
+    lengths: &BucklingLengths,
+) -> torsional::Critical {
+    let p = &input.section.props;
+    torsional::critical(&torsional::Inputs {
+        area_mm2: p.area_mm2,
+        i_major_mm4: p.i_major_mm4,
+        i_minor_mm4: p.i_minor_mm4,
+        torsion_mm4: p.torsion_mm4,
+        warping_mm6: p.warping_mm6,
+        sc_major_mm: p.shear_centre_major_mm,
+        sc_minor_mm: p.shear_centre_minor_mm,
+        e_mpa,
+        g_mpa,
+        l_major_mm: lengths.major_mm,
+        l_minor_mm: lengths.minor_mm,
+        l_torsion_mm: lengths.torsion_mm,
+    })
+}
+
 /// Works the torsional or flexural-torsional mode of an open section with
 /// the method's own curve (see the module docs). `axes` is the input the
 /// flexural modes used (the effective section for EN Class 4). Returns
@@ -478,21 +503,7 @@ pub fn twist_mode(
     };
     let p = &input.section.props;
     let (_, e) = input.material.strength_and_modulus();
-    let x = torsional::Inputs {
-        area_mm2: p.area_mm2,
-        i_major_mm4: p.i_major_mm4,
-        i_minor_mm4: p.i_minor_mm4,
-        torsion_mm4: p.torsion_mm4,
-        warping_mm6: p.warping_mm6,
-        sc_major_mm: p.shear_centre_major_mm,
-        sc_minor_mm: p.shear_centre_minor_mm,
-        e_mpa: e,
-        g_mpa: g,
-        l_major_mm: lengths.major_mm,
-        l_minor_mm: lengths.minor_mm,
-        l_torsion_mm: lengths.torsion_mm,
-    };
-    let crit = torsional::critical(&x);
+    let crit = critical_loads(input, e, g, lengths);
     let cl = twist_clauses(method);
     let (mode, scope) = if crit.symmetry == Symmetry::Double {
         (Mode::Torsional, Scope::Torsional)

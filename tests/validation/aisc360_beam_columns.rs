@@ -1,0 +1,332 @@
+//! AISC 360-16 Chapter H (members under combined compression and flexure)
+//! with B1 of Appendix 8.2.1, LRFD and ASD.
+//!
+//! Sources:
+//! - ANSI/AISC 360-16, *Specification for Structural Steel Buildings*,
+//!   American Institute of Steel Construction, Chicago, 2016: H1.1 (Eqs.
+//!   H1-1a, H1-1b), H2 (Eq. H2-1), Appendix 8.2.1 (Eqs. A-8-3, A-8-4,
+//!   A-8-5: B1 = C_m / (1 - alpha P_r / P_e1) >= 1, alpha = 1.00 LRFD and
+//!   1.60 ASD, C_m = 0.6 - 0.4 M_1/M_2, 1.0 with transverse load), E3 and
+//!   F2, F6 for the strengths (recalled from memory).
+//! - AISC *Design Examples*, v15.0 (2017), Examples H.1A (LRFD) and H.1B
+//!   (ASD): W14x99, ASTM A992, L = 14 ft, braced frame, moments from a
+//!   second-order analysis; P_u = 400 kips, M_ux = 250 kip-ft, M_uy = 80
+//!   kip-ft gives H1-1a = 0.928; P_a = 267 kips, M_ax = 167 kip-ft, M_ay =
+//!   53.3 kip-ft gives 0.931 (values recalled from memory).
+//!
+//! The hand-worked cases use a welded I without fillets (d = b = 300 mm,
+//! t_f = 20 mm, t_w = 12 mm), whose properties are exact by hand (A =
+//! 15 120 mm2, I_x = 253.176e6 mm4, I_y = 90.03744e6 mm4, Z_x = 1.8828e6
+//! mm3, Z_y = 909 360 mm3), F_y = 345 MPa, E = 200 000 MPa, L = 4 m, k = 1,
+//! compression flange held (lt_restrained), so P_c is E3 about the minor
+//! axis and M_c = M_p (compact). Every expected value below was worked
+//! independently in Python 3 (the script is the arithmetic in the comments,
+//! to 1e-9), not by the engine: tolerance HAND.
+
+#![allow(
+    clippy::unwrap_used,
+    clippy::expect_used,
+    clippy::indexing_slicing,
+    clippy::panic
+)]
+
+use serde_json::json;
+use strutline_core::CheckResult;
+use strutline_validation::{assert_close, member_from_json, step_value, with_keys};
+
+/// Hand working in floating point against the engine: the same formulas,
+/// different order of operations.
+const HAND: f64 = 1e-6;
+/// The engine's W14x99 properties from its dimensions (fillets as arcs)
+/// against the Manual's, and the example's rounding to 3 digits.
+const MANUAL: f64 = 0.02;
+const KIPFT: f64 = 1.355_817_9;
+const KIP: f64 = 4.448_221_6;
+
+fn plate_i(method: &str, axial: f64, extra: serde_json::Value) -> strutline_core::Member {
+    let m = json!({
+        "id": "BC1",
+        "section": {"kind": "i", "depth_mm": 300, "width_mm": 300, "flange_mm": 20,
+            "web_mm": 12, "root_radius_mm": 0, "make": "welded"},
+        "material": {"fy_mpa": 345, "e_mpa": 200000, "g_mpa": 77000},
+        "length_mm": 4000, "axial_kn": axial, "method": method, "lt_restrained": true
+    });
+    member_from_json(with_keys(m, extra))
+}
+
+fn step(r: &CheckResult, symbol: &str) -> f64 {
+    step_value(r, symbol)
+}
+
+fn only(r: &CheckResult) -> (&'static str, f64) {
+    assert_eq!(r.interaction.len(), 1, "{:?}", r.interaction);
+    (r.interaction[0].check, r.interaction[0].utilisation)
+}
+
+fn check(m: &strutline_core::Member) -> CheckResult {
+    strutline_core::check_member(m).unwrap()
+}
+
+#[test]
+fn h1_1a_with_b1_about_both_axes_lrfd() {
+    // P_r = 2500 kN; major axis M_a = M_b = 150 kNm (single curvature,
+    // M_1/M_2 = -1); minor axis a uniform load, M_span = 20 kNm.
+    let r = check(&plate_i(
+        "aisc360-lrfd",
+        2500.0,
+        json!({"m_major_a_knm": 150, "m_major_b_knm": 150, "m_minor_span_knm": 20}),
+    ));
+    // E3: F_e = pi^2 E / (4000 / r_y)^2, F_cr = 0.658^(F_y/F_e) F_y, phi_c = 0.9.
+    assert_close(
+        step(&r, "P_c"),
+        3857.006130893933,
+        HAND,
+        "phi_c P_n, E3-2 (kN)",
+    );
+    // F2-1 and F6-1: phi_b F_y Z.
+    assert_close(step(&r, "M_cx"), 584.6094, HAND, "phi_b M_px, F2-1 (kNm)");
+    assert_close(step(&r, "M_cy"), 282.35628, HAND, "phi_b M_py, F6-1 (kNm)");
+    // A-8-4: C_mx = 0.6 - 0.4 (-1) = 1.0; A-8-5: P_e1x = pi^2 E I_x / L^2.
+    assert_close(
+        step(&r, "M_1/M_2 (x)"),
+        -1.0,
+        HAND,
+        "M_1/M_2, reverse curvature +",
+    );
+    assert_close(step(&r, "C_mx"), 1.0, HAND, "C_mx, A-8-4");
+    assert_close(
+        step(&r, "P_e1x"),
+        31234.33704812749,
+        HAND,
+        "P_e1x, A-8-5 (kN)",
+    );
+    assert_close(step(&r, "B1x"), 1.0870039213298264, HAND, "B1x, A-8-3");
+    // Transverse load: C_my = 1.0, P_e1y = pi^2 E I_y / L^2.
+    assert_close(step(&r, "C_my"), 1.0, HAND, "C_my, A-8.2.1(b)");
+    assert_close(
+        step(&r, "P_e1y"),
+        11107.923926085237,
+        HAND,
+        "P_e1y, A-8-5 (kN)",
+    );
+    assert_close(step(&r, "B1y"), 1.2904300759935925, HAND, "B1y, A-8-3");
+    assert_close(
+        step(&r, "M_rx"),
+        163.05058819947396,
+        HAND,
+        "M_rx = B1 M_nt (kNm)",
+    );
+    assert_close(
+        step(&r, "M_ry"),
+        25.80860151987185,
+        HAND,
+        "M_ry = B1 M_nt (kNm)",
+    );
+    // P_r/P_c = 0.648 >= 0.2: H1-1a.
+    let (name, u) = only(&r);
+    assert_eq!(name, "H1-1a");
+    assert_close(u, 0.9773351774574993, HAND, "H1-1a");
+    assert!(r.passes);
+    assert_eq!(r.governing_check, "H1-1a");
+    assert_close(
+        r.utilisation,
+        0.9773351774574993,
+        HAND,
+        "utilisation = H1-1a",
+    );
+}
+
+#[test]
+fn h1_1b_in_reverse_curvature_lrfd() {
+    // P_r = 200 kN (P_r/P_c = 0.0519 < 0.2), M_a = 100, M_b = -100 kNm:
+    // M_1/M_2 = +1, C_m = 0.2, B1 = max(0.2 / (1 - 200/31234), 1) = 1.
+    let r = check(&plate_i(
+        "aisc360-lrfd",
+        200.0,
+        json!({"m_major_a_knm": 100, "m_major_b_knm": -100}),
+    ));
+    assert_close(step(&r, "M_1/M_2 (x)"), 1.0, HAND, "M_1/M_2");
+    assert_close(step(&r, "C_mx"), 0.2, HAND, "C_mx, A-8-4");
+    assert_eq!(step(&r, "B1x"), 1.0, "B1 >= 1, A-8-3");
+    let (name, u) = only(&r);
+    assert_eq!(name, "H1-1b");
+    // 200 / (2 x 3857.006) + 100 / 584.6094
+    assert_close(u, 0.19698122760460987, HAND, "H1-1b");
+}
+
+#[test]
+fn asd_uses_alpha_1_6() {
+    // P_r = 900 kN (ASD), M_x 100 and 50 kNm single curvature (C_m = 0.8),
+    // M_y 10 kNm uniform (C_m = 1): B1y = 1 / (1 - 1.6 x 900 / 11107.92).
+    let r = check(&plate_i(
+        "aisc360-asd",
+        900.0,
+        json!({"m_major_a_knm": 100, "m_major_b_knm": 50, "m_minor_a_knm": 10, "m_minor_b_knm": 10}),
+    ));
+    assert_close(step(&r, "alpha"), 1.6, HAND, "alpha, ASD");
+    assert_close(
+        step(&r, "P_c"),
+        2566.205010574806,
+        HAND,
+        "P_n / Omega_c (kN)",
+    );
+    assert_close(
+        step(&r, "M_cx"),
+        388.9616766467066,
+        HAND,
+        "M_px / Omega_b (kNm)",
+    );
+    assert_close(step(&r, "C_mx"), 0.8, HAND, "C_mx");
+    assert_eq!(step(&r, "B1x"), 1.0, "B1x floored at 1");
+    assert_close(
+        step(&r, "B1y"),
+        1.1489461451092622,
+        HAND,
+        "B1y with alpha = 1.6",
+    );
+    let (name, u) = only(&r);
+    assert_eq!(name, "H1-1a");
+    assert_close(u, 0.6336047460121219, HAND, "H1-1a, ASD");
+}
+
+#[test]
+fn moments_already_second_order_are_not_amplified() {
+    let m = |amp: bool| {
+        plate_i(
+            "aisc360-lrfd",
+            2500.0,
+            json!({"m_major_a_knm": 150, "m_major_b_knm": 150, "m_minor_span_knm": 20,
+                   "amplify_moments": amp}),
+        )
+    };
+    let r = check(&m(false));
+    assert_eq!(step(&r, "B1x"), 1.0);
+    assert_eq!(step(&r, "B1y"), 1.0);
+    assert!(r.trace.iter().any(|s| s.symbol == "B2"));
+    assert_close(only(&r).1, 0.9392058528395029, HAND, "H1-1a without B1");
+    assert!(only(&r).1 < only(&check(&m(true))).1);
+}
+
+#[test]
+fn p_e1_reached_is_a_failure_not_a_negative_b1() {
+    // P_r = 12 000 kN > P_e1y = 11 108 kN: B1y has no finite value.
+    let r = check(&plate_i(
+        "aisc360-lrfd",
+        12_000.0,
+        json!({"m_minor_a_knm": 1, "m_minor_b_knm": 1}),
+    ));
+    assert!(!r.passes);
+    assert_eq!(only(&r).1, f64::INFINITY);
+    assert!(r.warnings.iter().any(|w| w.code == "b1-unbounded"));
+    assert!(r
+        .warnings
+        .iter()
+        .any(|w| w.code == "b1-unbounded" && w.message.contains("axial_kn")));
+}
+
+#[test]
+fn given_section_takes_h2_1() {
+    // A given section (symmetry unknown) with the plate I's properties and
+    // elastic moduli: H2-1 = P/P_c + B1x M_x/(phi F_y S_x) + B1y M_y/(phi F_y S_y).
+    let m = member_from_json(json!({
+        "id": "G1",
+        "section": {"kind": "given", "area_mm2": 15120, "i_major_mm4": 253176000.0,
+            "i_minor_mm4": 90037440.0, "w_el_major_mm3": 1687840.0, "w_el_minor_mm3": 600249.6},
+        "material": {"fy_mpa": 345, "e_mpa": 200000, "g_mpa": 77000},
+        "length_mm": 4000, "axial_kn": 1000, "method": "aisc360-lrfd", "lt_restrained": true,
+        "m_major_a_knm": 80, "m_major_b_knm": 80, "m_minor_span_knm": 10
+    }));
+    let r = check(&m);
+    assert_close(step(&r, "B1x"), 1.0330749769180712, HAND, "B1x");
+    assert_close(step(&r, "B1y"), 1.0989322839499542, HAND, "B1y");
+    let (name, u) = only(&r);
+    assert_eq!(name, "H2-1");
+    assert_close(u, 0.47593016509623204, HAND, "H2-1");
+    assert!(r.warnings.iter().any(|w| w.code == "given-h2"));
+}
+
+#[test]
+fn design_examples_h_1a_and_h_1b_w14x99() {
+    let w = |method: &str, p_kip: f64, mx: f64, my: f64| {
+        member_from_json(json!({
+            "id": "H1", "section": {"kind": "catalogue", "designation": "W14x99"},
+            "material": {"grade": "A992"}, "length_mm": 14.0 * 12.0 * 25.4,
+            "axial_kn": p_kip * KIP, "method": method, "amplify_moments": false,
+            "m_major_a_knm": mx * KIPFT, "m_major_b_knm": mx * KIPFT,
+            "m_minor_a_knm": my * KIPFT, "m_minor_b_knm": my * KIPFT
+        }))
+    };
+    let lrfd = check(&w("aisc360-lrfd", 400.0, 250.0, 80.0));
+    // The example's strengths: phi_c P_n = 1130 kips, phi_b M_nx = 642 kip-ft,
+    // phi_b M_ny = 311 kip-ft (recalled).
+    assert_close(step(&lrfd, "P_c"), 1130.0 * KIP, MANUAL, "phi_c P_n, H.1A");
+    assert_close(
+        step(&lrfd, "M_cx"),
+        642.0 * KIPFT,
+        MANUAL,
+        "phi_b M_nx, H.1A",
+    );
+    assert_close(
+        step(&lrfd, "M_cy"),
+        311.0 * KIPFT,
+        MANUAL,
+        "phi_b M_ny, H.1A",
+    );
+    let (name, u) = only(&lrfd);
+    assert_eq!(name, "H1-1a");
+    assert_close(u, 0.928, MANUAL, "H1-1a, Design Examples H.1A");
+    let asd = check(&w("aisc360-asd", 267.0, 167.0, 53.3));
+    let (name, u) = only(&asd);
+    assert_eq!(name, "H1-1a");
+    assert_close(u, 0.931, MANUAL, "H1-1a, Design Examples H.1B");
+}
+
+#[test]
+fn properties_utilisation_rises_with_each_action_and_b1_is_at_least_one() {
+    for method in ["aisc360-lrfd", "aisc360-asd"] {
+        let mut last_by_p = 0.0;
+        for p in [50.0, 300.0, 700.0, 1500.0, 2500.0] {
+            let mut last_by_m = 0.0;
+            for mx in [0.0, 20.0, 60.0, 120.0] {
+                let mut last_by_my = 0.0;
+                for my in [0.0, 5.0, 30.0, 60.0] {
+                    if mx == 0.0 && my == 0.0 {
+                        continue;
+                    }
+                    for (a, b, span) in [(1.0, 1.0, 0.0), (1.0, -0.5, 0.0), (0.0, 0.0, 1.0)] {
+                        let m = |amp: bool| {
+                            plate_i(
+                                method,
+                                p,
+                                json!({"m_major_a_knm": mx * a, "m_major_b_knm": mx * b,
+                                       "m_major_span_knm": mx * span,
+                                       "m_minor_a_knm": my * a, "m_minor_b_knm": my * b,
+                                       "m_minor_span_knm": my * span,
+                                       "amplify_moments": amp}),
+                            )
+                        };
+                        let r = check(&m(true));
+                        for s in r.trace.iter().filter(|s| s.symbol.starts_with("B1")) {
+                            assert!(s.value >= 1.0, "{} = {}", &*s.symbol, s.value);
+                        }
+                        let u = only(&r).1;
+                        assert!(
+                            only(&check(&m(false))).1 <= u,
+                            "amplify_moments false must not raise the utilisation"
+                        );
+                        if (a, b, span) == (1.0, 1.0, 0.0) {
+                            assert!(u >= last_by_my, "rises with M_y: {u} < {last_by_my}");
+                            last_by_my = u;
+                            if my == 60.0 {
+                                assert!(u >= last_by_m, "rises with M_x");
+                                last_by_m = u;
+                            }
+                        }
+                    }
+                }
+            }
+            assert!(last_by_m >= last_by_p, "rises with P");
+            last_by_p = last_by_m;
+        }
+    }
+}
