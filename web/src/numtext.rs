@@ -9,6 +9,9 @@ pub enum NumError {
     Empty,
     /// Not a number by the rules of core's reader.
     NotNumber,
+    /// A number that reads two ways (`1,234`); core's message says how to
+    /// type either.
+    Ambiguous(String),
 }
 
 impl NumError {
@@ -21,6 +24,7 @@ impl NumError {
                     "{field}: must be a number (digits, with a point or a comma as decimal mark)"
                 )
             }
+            NumError::Ambiguous(why) => format!("{field}: {why}"),
         }
     }
 }
@@ -32,7 +36,13 @@ pub fn parse_number(text: &str) -> Result<f64, NumError> {
     if text.trim().is_empty() {
         return Err(NumError::Empty);
     }
-    strutline_core::csv::parse_field(text).map_err(|_| NumError::NotNumber)
+    strutline_core::csv::parse_field(text).map_err(|e| {
+        if e.contains("could be") {
+            NumError::Ambiguous(e)
+        } else {
+            NumError::NotNumber
+        }
+    })
 }
 
 /// Reads an optional number: empty text is `None`.
@@ -117,7 +127,14 @@ mod tests {
         assert_eq!(parse_number("1e3"), Ok(1000.0));
         assert_eq!(parse_number(",5"), Ok(0.5));
         // A single mark is the decimal mark, followed by three digits too.
-        assert_eq!(parse_number("1,234"), Ok(1.234));
+        // Ambiguous (1234 or 1.234?): refused, naming both ways to type it.
+        match parse_number("1,234") {
+            Err(NumError::Ambiguous(why)) => {
+                assert!(why.contains("1234") && why.contains("1.234"), "{why}")
+            }
+            other => panic!("1,234 must be refused as ambiguous, got {other:?}"),
+        }
+        assert_eq!(parse_number("12,5"), Ok(12.5));
         assert_eq!(parse_number("1.234"), Ok(1.234));
         assert_eq!(parse_number("120,5"), Ok(120.5));
         assert_eq!(parse_number("0,65"), Ok(0.65));

@@ -44,7 +44,10 @@
 //!    rule 1 or 3 decides sets the convention (decimal point when none).
 //! 5. What a person types into one field ([`parse_field`], [`parse_typed`],
 //!    every number field of the app) has no file to set a convention: a
-//!    single mark is the decimal mark (`1,234` and `1.234` are both 1.234);
+//!    single point is the decimal mark (`1.234` is 1.234), a single comma
+//!    too unless exactly three digits follow it (`12,5` is 12.5), and
+//!    `1,234` is refused as ambiguous (1234 or 1.234? under-reading a load
+//!    a thousand times is the unsafe side), naming both ways to type it;
 //!    rules 1 to 3 hold as for a file (`1,234.5` is 1234.5).
 //!
 //! Thousands groups must be three digits each after the first group of one

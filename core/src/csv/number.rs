@@ -9,8 +9,11 @@ pub(super) enum Mark {
     Point,
     Comma,
     /// What a person types into one field, with no file to set a
-    /// convention: a single mark is the decimal mark (`1,234` is 1.234,
-    /// `1.234` too), as the app has always read it.
+    /// convention: a single point is the decimal mark (`1.234` is 1.234);
+    /// a single comma followed by exactly three digits (`1,234`) is
+    /// refused as ambiguous (1234 with a thousands comma, or 1.234 with a
+    /// decimal comma: reading a load 1,000 times too small is the unsafe
+    /// side); any other single comma is the decimal mark (`12,5`).
     Single,
 }
 
@@ -110,6 +113,15 @@ pub(super) fn parse_number(raw: &str, file_mark: Mark) -> Result<f64, String> {
                     let file_decimal = match file_mark {
                         Mark::Point => '.',
                         Mark::Comma => ',',
+                        Mark::Single if m == ',' => {
+                            return Err(format!(
+                                "\"{t}\" could be a number with a thousands comma or with a \
+                                 decimal comma; type it without the comma ({}) or with a \
+                                 decimal point ({})",
+                                mantissa.replace(',', ""),
+                                mantissa.replace(',', ".")
+                            ));
+                        }
                         Mark::Single => m,
                     };
                     if m == file_decimal {

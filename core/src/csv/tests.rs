@@ -148,8 +148,12 @@ fn typed_values_come_back_in_stored_units() {
     assert_eq!(t("12", "length_mm", UnitSystem::Us).unwrap(), 12.0 * 304.8);
     assert_eq!(t("1/2\"", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
     assert_eq!(t("0.5", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
-    // Rule 5: in a field a single mark is the decimal mark.
-    assert_eq!(t("1,250", "axial_kn", UnitSystem::Si).unwrap(), 1.25);
+    // Rule 5: in a field a single point is the decimal mark; a single
+    // comma too, except before exactly three digits, which is refused as
+    // ambiguous (1250 or 1.25?), naming both ways to type it.
+    let why = t("1,250", "axial_kn", UnitSystem::Si).unwrap_err();
+    assert!(why.contains("1250") && why.contains("1.250"), "{why}");
+    assert_eq!(t("12,50", "axial_kn", UnitSystem::Si).unwrap(), 12.5);
     assert_eq!(t("1.250", "axial_kn", UnitSystem::Si).unwrap(), 1.25);
     assert_eq!(t("1,250.5", "axial_kn", UnitSystem::Si).unwrap(), 1250.5);
     assert_eq!(t("1.234,5", "axial_kn", UnitSystem::Si).unwrap(), 1234.5);
