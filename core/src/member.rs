@@ -259,8 +259,11 @@ fn is_default<T: Default + PartialEq>(v: &T) -> bool {
     *v == T::default()
 }
 
-/// One compression member.
+/// One compression member. A key that is not one of the member's is
+/// refused (a misspelt `k_minro` silently dropped would leave its default:
+/// the unsafe side), with the nearest key named ([`crate::read::plain`]).
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
+#[serde(deny_unknown_fields)]
 pub struct Member {
     /// Unique id within the list (e.g. "C12").
     pub id: String,

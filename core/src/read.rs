@@ -241,6 +241,13 @@ pub fn plain(raw: &Value, path: &str, message: String) -> String {
     {
         return twice(key);
     }
+    if let Some(key) = message
+        .strip_prefix("unknown field `")
+        .and_then(|m| m.split_once('`'))
+        .map(|(key, _)| key)
+    {
+        return unknown(key, path);
+    }
     // A value that is not the object a key holds: serde names the Rust type.
     for (said, wanted) in [
         (", expected struct ", "an object of its keys"),
@@ -267,6 +274,28 @@ pub fn plain(raw: &Value, path: &str, message: String) -> String {
         };
     }
     message
+}
+
+/// A key that is not one of the member's (or, inside a member key, of that
+/// key's): named, with the nearest member key when one is close.
+fn unknown(key: &str, _path: &str) -> String {
+    let nearest = schema::MEMBER
+        .iter()
+        .map(|k| k.key)
+        .map(|name| {
+            (
+                crate::names::edit_distance(key.as_bytes(), name.as_bytes()),
+                name,
+            )
+        })
+        .min();
+    let hint = match nearest {
+        Some((d, name)) if d <= 2 => {
+            format!("; did you mean `{name}`?")
+        }
+        _ => String::new(),
+    };
+    format!("`{key}` is not a key of this member file{hint} (a key that is not read would leave its default in force)")
 }
 
 /// Why `material` (the member's `"material"`, `None` when absent) matches

@@ -33,6 +33,7 @@ const LAYERS: &[(&str, &[&str])] = &[
     ("beam-column interaction", &["interaction"]),
     ("the check", &["check"]),
     ("orchestration", &["envelope", "compare", "solve", "sizing"]),
+    ("reading JSON with its repeated keys", &["read"]),
     ("the member file", &["file"]),
     ("other formats", &["csv"]),
     ("reading a member file as a stream", &["stream"]),
