@@ -191,13 +191,20 @@ pub fn parse(text: &str) -> Result<MemberFile> {
 /// (see [`out_of_range`]), not again in the text read a second time.
 fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
     let text = text.trim_start_matches('\u{feff}');
-    let mut value: Value = match serde_json::from_str(text) {
+    let value: Value = match serde_json::from_str(text) {
         Ok(v) => v,
         Err(e) => {
             let named = name_range.then(|| out_of_range(text, &e)).flatten();
             return Err(named.unwrap_or_else(|| syntax(&e)));
         }
     };
+    from_value(value)
+}
+
+/// A member file from JSON already parsed (a list inside the browser's
+/// stored workspace): [`parse`] without reading text again; older
+/// versions migrate the same way.
+pub fn from_value(mut value: Value) -> Result<MemberFile> {
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -364,6 +371,17 @@ mod tests {
         assert_eq!(f.members[0].k_minor, 1.0);
         let again = parse(&f.to_json()).unwrap();
         assert_eq!(f, again);
+    }
+
+    #[test]
+    fn a_parsed_value_reads_as_its_text_does() {
+        let v: Value = serde_json::from_str(ONE).unwrap();
+        assert_eq!(from_value(v).unwrap(), parse(ONE).unwrap());
+        // The same refusals: a duplicate id names the member.
+        let two = ONE.replace("}]}", "}, {\"id\": \"P1\", \"section\": {\"kind\": \"round\", \"diameter_mm\": 20}, \"material\": {\"fy_mpa\": 235, \"e_mpa\": 210000}, \"length_mm\": 900, \"axial_kn\": 1, \"method\": \"euler\"}]}");
+        let v: Value = serde_json::from_str(&two).unwrap();
+        assert_eq!(from_value(v).unwrap_err(), parse(&two).unwrap_err());
+        assert!(matches!(parse(&two), Err(Error::DuplicateId { .. })));
     }
 
     #[test]

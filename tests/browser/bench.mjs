@@ -20,7 +20,7 @@ import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import os from "node:os";
 import { join } from "node:path";
-import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, STORAGE_KEY, workspaceText } from "./lib.mjs";
+import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, MOMENTS_POST, editLoop, openForEditing, seedStorage, thousandMembers, workspaceText } from "./lib.mjs";
 
 const URL_ARG = arg("--url");
 const OUT_DIR = arg("--out");
@@ -33,6 +33,10 @@ const DIST_ZLIB = Number(arg("--dist-zlib", "NaN"));
 const DIST_SENT = Number(arg("--dist-sent", "NaN"));
 const DIST_BUDGET = Number(arg("--dist-budget", "NaN"));
 const CACHE_NAME = arg("--cache-name", "");
+// `--only first,slow,edit,thousand,sizing`: measure only these (for a
+// quick look while working; bench/web.md is written from a full run).
+const ONLY = arg("--only");
+const wanted = (what) => !ONLY || ONLY.split(",").includes(what);
 
 const TARGETS = {
   first_render_ms: 1000,
@@ -201,99 +205,18 @@ async function measureSlow() {
   return { cold, cached, wire };
 }
 
-async function measureEdits(count = 100) {
+// Typing a new design load `count` times into the first member of the
+// demo, or of `seed` (a stored workspace text) when given.
+async function measureEdits(count, seed = null) {
   const { context, close } = await launch();
   try {
+    if (seed) await seedStorage(context, seed);
     const page = await firstPage(context);
-    await page.goto(BASE.href, { waitUntil: "load" });
-    await page.locator("[data-testid=member-row]").first().click({ timeout: 20_000 });
-    await page.locator("input[name=axial_kn]").first().waitFor({ state: "visible", timeout: 10_000 });
-    await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
-    return await page.evaluate(async (n) => {
-      const input = document.querySelector("input[name=axial_kn]");
-      const base = Number(String(input.value).replace(",", ".")) || 100;
-      const result = () => document.querySelector("[data-testid=result-utilisation]");
-      const dom = [];
-      const frame = [];
-      let timeouts = 0;
-      const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value").set;
-      for (let i = 0; i < n; i += 1) {
-        const before = result()?.textContent ?? "";
-        // Alternate above and below the starting load so the text changes.
-        const value = (base * (i % 2 === 0 ? 1.1 : 0.9) + i * 0.01).toFixed(2);
-        let t0 = 0;
-        const t = await new Promise((resolve) => {
-          let done = false;
-          const finish = (changedAt) => {
-            if (done) return;
-            done = true;
-            observer.disconnect();
-            clearTimeout(timer);
-            requestAnimationFrame(() => resolve({ changedAt, frameAt: performance.now() }));
-          };
-          const observer = new MutationObserver(() => {
-            if ((result()?.textContent ?? "") !== before) finish(performance.now());
-          });
-          observer.observe(document.body, { childList: true, subtree: true, characterData: true });
-          const timer = setTimeout(() => {
-            done = true;
-            observer.disconnect();
-            resolve(null);
-          }, 2000);
-          t0 = performance.now();
-          input.focus();
-          setter.call(input, value);
-          input.dispatchEvent(new Event("input", { bubbles: true }));
-          input.dispatchEvent(new Event("change", { bubbles: true }));
-          if ((result()?.textContent ?? "") !== before) finish(performance.now());
-        });
-        if (t === null) {
-          timeouts += 1;
-        } else {
-          dom.push(t.changedAt - t0);
-          frame.push(t.frameAt - t0);
-        }
-        // Let the page settle between edits.
-        await new Promise((r) => setTimeout(r, 5));
-      }
-      return { dom, frame, timeouts };
-    }, count);
+    await openForEditing(page, BASE.href);
+    return await page.evaluate(editLoop, count);
   } finally {
     await close();
   }
-}
-
-// 1,000 invented members of a made-up grain store: a mix of shapes,
-// materials and methods, lengths and loads varying member by member.
-function thousandMembers() {
-  const methods = ["en1993-1-1", "aisc360-lrfd", "aisc360-asd", "csa-s16", "perry-robertson", "secant", "euler"];
-  const members = [];
-  for (let i = 0; i < 1000; i += 1) {
-    const id = `G${String(i + 1).padStart(4, "0")}`;
-    const length_mm = 1500 + ((i * 37) % 4000);
-    const axial_kn = 20 + ((i * 53) % 700);
-    const steel = { fy_mpa: [235, 275, 355][i % 3], e_mpa: 210000 };
-    const pick = i % 5;
-    if (pick === 4) {
-      members.push({
-        id,
-        section: { kind: "rect", depth_mm: 120 + (i % 6) * 20, width_mm: 100 + (i % 4) * 20 },
-        material: { fc0k_mpa: 21, e005_mpa: 7400, e0mean_mpa: 11000, timber: "solid" },
-        length_mm,
-        axial_kn: 10 + (i % 90),
-        method: "en1995-1-1",
-      });
-      continue;
-    }
-    const section = [
-      { kind: "i", depth_mm: 200 + (i % 5) * 20, width_mm: 150 + (i % 3) * 25, flange_mm: 10 + (i % 4), web_mm: 6.5 + (i % 3), root_radius_mm: 12 },
-      { kind: "rhs", depth_mm: 100 + (i % 4) * 20, width_mm: 100, wall_mm: 5 + (i % 3), outer_radius_mm: 10 },
-      { kind: "chs", diameter_mm: 114.3 + (i % 4) * 25, wall_mm: 4 + (i % 3) },
-      { kind: "round", diameter_mm: 50 + (i % 6) * 10 },
-    ][pick];
-    members.push({ id, section, material: steel, length_mm, axial_kn, method: methods[i % methods.length] });
-  }
-  return members;
 }
 
 const THOUSAND = memberFile("Grain store (invented, 1,000 members)", thousandMembers());
@@ -320,15 +243,7 @@ async function measureThousand() {
   for (let run = 0; run < 3; run += 1) {
     const { context, close } = await launch();
     try {
-      await context.addInitScript(
-        ([key, value]) => {
-          if (!sessionStorage.getItem("strutline-bench-seeded")) {
-            sessionStorage.setItem("strutline-bench-seeded", "1");
-            localStorage.setItem(key, value);
-          }
-        },
-        [STORAGE_KEY, text],
-      );
+      await seedStorage(context, text);
       await context.addInitScript(watchRows, 1000);
       const page = await firstPage(context);
       await page.goto(BASE.href, { waitUntil: "load" });
@@ -367,15 +282,7 @@ async function measureSizing() {
   const runs = [];
   const { context, close } = await launch();
   try {
-    await context.addInitScript(
-      ([key, value]) => {
-        if (!sessionStorage.getItem("strutline-bench-seeded")) {
-          sessionStorage.setItem("strutline-bench-seeded", "1");
-          localStorage.setItem(key, value);
-        }
-      },
-      [STORAGE_KEY, text],
-    );
+    await seedStorage(context, text);
     const page = await firstPage(context);
     await page.goto(BASE.href, { waitUntil: "load" });
     await page.locator("[data-testid=member-row]").first().waitFor({ timeout: 30_000 });
@@ -422,7 +329,7 @@ console.log(`bench-web against ${BASE.href} on ${host.cpu} (${host.logical_cpus}
 
 const report = { started_at: startedAt, url: BASE.href, cache_name: CACHE_NAME, machine: host, targets: TARGETS, errors: {} };
 
-try {
+if (wanted("first")) try {
   const fr = await measureFirstRender();
   report.first_render = {
     cold_runs: fr.cold,
@@ -436,7 +343,7 @@ try {
   console.log(`first render: not measured: ${report.errors.first_render}`);
 }
 
-try {
+if (wanted("slow")) try {
   const sl = await measureSlow();
   const wasm = (sl.wire || []).find((e) => e.name.endsWith(".wasm"));
   const wireBytes = (sl.wire || []).reduce((n, e) => n + e.encoded, 0);
@@ -469,24 +376,36 @@ try {
   console.log(`slow connection: not measured: ${report.errors.slow}`);
 }
 
-try {
-  const ed = await measureEdits(100);
-  report.edit = {
-    edits: ed.dom.length,
-    timeouts: ed.timeouts,
-    dom_median_ms: median(ed.dom),
-    frame_median_ms: median(ed.frame),
-    frame_p90_ms: quantile(ed.frame, 0.9),
-    dom_samples_ms: ed.dom.map((x) => Math.round(x * 100) / 100),
-  };
-  console.log(`edit: DOM ${fmt(report.edit.dom_median_ms, 2)} ms, next frame ${fmt(report.edit.frame_median_ms, 2)} ms (median of ${ed.dom.length}, ${ed.timeouts} timeouts)`);
-} catch (e) {
-  report.errors.edit = String(e.message || e).split("\n")[0];
-  console.log(`edit: not measured: ${report.errors.edit}`);
+const editSummary = (ed) => ({
+  edits: ed.dom.length,
+  timeouts: ed.timeouts,
+  dom_median_ms: median(ed.dom),
+  frame_median_ms: median(ed.frame),
+  frame_p90_ms: quantile(ed.frame, 0.9),
+  dom_samples_ms: ed.dom.map((x) => Math.round(x * 100) / 100),
+  frame_samples_ms: ed.frame.map((x) => Math.round(x * 100) / 100),
+});
+
+// Two members: the demo's first (a timber post, compression only: the
+// slenderness envelope is drawn) and a member with moments (the
+// interaction chart is drawn, with its curve worked afresh per edit).
+for (const [slot, label, seed] of [
+  ["edit", "edit", null],
+  ["edit_moments", "edit, member with moments", workspaceText([memberFile("Cider-press house (invented)", [MOMENTS_POST])])],
+]) {
+  if (!wanted("edit")) break;
+  try {
+    report[slot] = editSummary(await measureEdits(100, seed));
+    const r = report[slot];
+    console.log(`${label}: DOM ${fmt(r.dom_median_ms, 2)} ms, next frame ${fmt(r.frame_median_ms, 2)} ms (median of ${r.edits}, ${r.timeouts} timeouts)`);
+  } catch (e) {
+    report.errors[slot] = String(e.message || e).split("\n")[0];
+    console.log(`${label}: not measured: ${report.errors[slot]}`);
+  }
 }
 
-const thousandCli = cliThousand();
-try {
+const thousandCli = wanted("thousand") ? cliThousand() : {};
+if (wanted("thousand")) try {
   const th = await measureThousand();
   const toFrame = th.runs.map((r) => (r.ready === null ? NaN : r.frame - r.ready));
   const toMount = th.runs.map((r) => (r.ready === null || r.mounted === null ? NaN : r.mounted - r.ready));
@@ -504,7 +423,7 @@ try {
   console.log(`1,000 members: not measured: ${report.errors.thousand}`);
 }
 
-try {
+if (wanted("sizing")) try {
   const runs = await measureSizing();
   report.sizing = { runs, median_ms: median(runs.map((r) => r.ms)) };
   console.log(`sizing: ${fmt(report.sizing.median_ms)} ms for 1,000 members (median of ${runs.length})`);
@@ -518,6 +437,7 @@ report.dist = { zlib_bytes: DIST_ZLIB, sent_bytes: DIST_SENT, budget_bytes: DIST
 const fr = report.first_render || {};
 const sl = report.slow || {};
 const ed = report.edit || {};
+const em = report.edit_moments || {};
 const th = report.thousand || { cli: thousandCli };
 const sz = report.sizing || {};
 const lines = [
@@ -543,6 +463,8 @@ const lines = [
   `| slow mobile connection, later visit from the cache: first render (median of ${sl.cached_runs?.length ?? 0}) | ${fmt(sl.cached_median_ms)} ms | ≤ ${TARGETS.slow_cached_ms} ms | ${verdict(sl.cached_median_ms, TARGETS.slow_cached_ms)} |`,
   `| edit: recheck and redraw to next frame (median of ${ed.edits ?? 0}) | ${fmt(ed.frame_median_ms, 2)} ms (p90 ${fmt(ed.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.frame_median_ms, TARGETS.edit_ms)} |`,
   `| edit: recheck until the result text changes (median) | ${fmt(ed.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.dom_median_ms, TARGETS.edit_ms)} |`,
+  `| edit, member with moments (interaction chart): recheck and redraw to next frame (median of ${em.edits ?? 0}) | ${fmt(em.frame_median_ms, 2)} ms (p90 ${fmt(em.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(em.frame_median_ms, TARGETS.edit_ms)} |`,
+  `| edit, member with moments: recheck until the result text changes (median) | ${fmt(em.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(em.dom_median_ms, TARGETS.edit_ms)} |`,
   `| 1,000-member list: re-check of every member (engine, in the page; median of ${th.runs?.length ?? 0}) | ${fmt(th.recheck_median_ms, 2)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.recheck_median_ms, TARGETS.thousand_ms)} |`,
   `| 1,000-member list: module ready to first frame, rows in view built (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
   `| lightest that works: 1,000 members against the 265 I/H sections (median of ${sz.runs?.length ?? 0}) | ${fmt(sz.median_ms)} ms | ≤ ${TARGETS.sizing_ms} ms | ${verdict(sz.median_ms, TARGETS.sizing_ms)} |`,
@@ -558,6 +480,9 @@ const lines = [
   "  the time until `[data-testid=result-utilisation]` shows a different text, and until the next",
   "  animation frame after that (the canvas redraw is in that frame). A headless frame clock ticks at",
   "  60 Hz, so the frame figure includes up to one frame of waiting for the clock.",
+  "  Two members: the demo's first (P1, a timber post in compression only; the slenderness envelope is",
+  "  drawn) and, in a stored workspace of its own, an invented EN 1993-1-1 I-section post with end moments",
+  "  about both axes (`MOMENTS_POST` of `tests/browser/lib.mjs`; the interaction chart is worked and drawn).",
   "- 1,000 members: a stored workspace of 1,000 invented members of five shapes and all steel and timber",
   "  methods; from the mark `strutline-wasm-ready` (the module is compiled, `start()` is about to run)",
   "  to the first animation frame after the rows in view are in the page, the list's scrolling box filled (the list",

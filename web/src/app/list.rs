@@ -12,12 +12,13 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
     let active = Memo::new(move |_| ctx.ws.with(|w| w.active));
     let summary = Memo::new(move |_| {
         ctx.checks.with(|c| {
-            let mut n = [0usize; 3];
+            let mut n = [0usize; 4];
             for k in c.0.iter() {
                 match Standing::of(&k.outcome) {
                     Standing::Holds => n[0] += 1,
                     Standing::Exceeds => n[1] += 1,
                     Standing::NeedsInput => n[2] += 1,
+                    Standing::Waiting => n[3] += 1,
                 }
             }
             (c.0.len(), n)
@@ -109,7 +110,11 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
         <p class="list-summary" role="status">
             {move || {
                 let (total, n) = summary.get();
-                format!("{total} members · {} ✓ hold · {} ✗ exceed · {} ✎ need input", n[0], n[1], n[2])
+                let mut s = format!("{total} members · {} ✓ hold · {} ✗ exceed · {} ✎ need input", n[0], n[1], n[2]);
+                if n[3] > 0 {
+                    s.push_str(&format!(" · {} … being checked", n[3]));
+                }
+                s
             }}
         </p>
         <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {

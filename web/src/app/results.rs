@@ -24,12 +24,12 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
             let sys = units.get();
             current.get().map(|c| {
                 let mut h = Html::new();
-                if let Ok(r) = &c.outcome {
+                if let Some(r) = c.result() {
                     // The docked verdict leaves its warnings here.
                     html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
                 }
                 h.push(&crate::sectionview::of_checked(&c));
-                if let Ok(r) = &c.outcome {
+                if let Some(r) = c.result() {
                     h.push(&report::working_html(r, sys));
                 }
                 if let Some(p) = &c.prepared {
@@ -285,10 +285,7 @@ pub(super) fn Chart(
         ] {
             let _ = el.remove_attribute(a);
         }
-        let ready = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
-            (Some(p), Ok(r)) => Some((p, r)),
-            _ => None,
-        });
+        let ready = c.as_ref().and_then(|c| c.prepared.as_ref().zip(c.result()));
         let Some((p, r)) = ready else {
             legend.set(legend_html(perry, None));
             note.set(Some(
