@@ -90,7 +90,9 @@ strutline is **${ratio}x** as fast as the Python script by wall time and ${cpura
 | \`strutline convert long.csv back.json\` | $bw | $bc | $((bm / 1024)) MB | $bs |
 
 The CSV check wrote $rows results; its first 100 MB are byte for byte those of the JSON check: $same.
-\`convert\` reads the whole list before writing (its CSV columns are those the list uses), so its
-memory grows with the list; \`check\` reads a block of 4,096 members at a time.
+\`check\` and \`convert\` read a block of 4,096 members at a time (\`convert\` reads its input twice:
+first for its problems, title and the CSV columns its members use, then to write); what grows
+with the list is the set of ids kept to refuse a repeated one (\`core::ids::SeenIds\`: a 64-bit
+hash and the id's bytes, some 25-35 MB at a million ids, more while its table grows).
 MD
 cat bench/cli.md

@@ -1,9 +1,11 @@
 //! `strutline envelope FILE --member ID`: the member's capacity envelope
 //! as CSV: slenderness, Euler stress, yield stress and the design stress
-//! of the member's method about each axis.
+//! of the member's method about each axis; with `--interaction`, its
+//! interaction curves (compression against the largest moment about each
+//! axis, the other axis' moment held: core's `envelope::interaction`).
 
 use strutline_core::check::{Mode, Prepared};
-use strutline_core::envelope;
+use strutline_core::envelope::{self, interaction};
 
 /// `strutline envelope`'s options.
 #[derive(Debug, clap::Args)]
@@ -21,6 +23,10 @@ pub struct Args {
     #[arg(long, value_name = "N", default_value_t = 125,
           value_parser = clap::value_parser!(u32).range(1..=100_000))]
     pub steps: u32,
+    /// Print the interaction curves instead (axis, axial_kn, moment_knm,
+    /// utilisation; the other axis' moment held at its design value)
+    #[arg(long)]
+    pub interaction: bool,
 }
 
 /// Runs the subcommand.
@@ -32,6 +38,20 @@ pub fn run(args: &Args) -> Result<i32, String> {
         .ok_or_else(|| format!("{path}: no member with id \"{id}\""))?;
     let prepared = Prepared::new(member).map_err(|e| format!("{path}: {e}"))?;
     let method = member.method;
+    if args.interaction {
+        let curves = interaction::curves(&prepared, method).map_err(|e| format!("{path}: {e}"))?;
+        let mut text = String::from("axis,axial_kn,moment_knm,utilisation\n");
+        for c in &curves {
+            for p in &c.points {
+                text.push_str(&format!(
+                    "{},{:.3},{:.3},{:.6}\n",
+                    c.axis, p.axial_kn, p.moment_knm, p.utilisation
+                ));
+            }
+        }
+        crate::emit(&text)?;
+        return Ok(0);
+    }
     let major = envelope::sample(&prepared, method, Mode::Major, 0.0, to, steps)
         .map_err(|e| format!("{path}: {e}"))?;
     let minor = envelope::sample(&prepared, method, Mode::Minor, 0.0, to, steps)

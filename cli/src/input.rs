@@ -6,6 +6,7 @@
 use std::fs::File;
 
 use strutline_core::csv::{self, Format};
+use strutline_core::file;
 use strutline_core::stream::{self, Stop};
 use strutline_core::Member;
 
@@ -26,6 +27,15 @@ pub fn format_of(path: &str) -> Result<Format, String> {
     Ok(csv::detect_format(path, &head))
 }
 
+/// What a reader does with CSV rows that have problems (a bad JSON member
+/// always stops it).
+pub enum OnProblems<'a> {
+    /// Stop with an error listing them (with the rest of their block's).
+    Stop,
+    /// Leave the rows out and add their problems here, each naming its line.
+    Skip(&'a mut Vec<String>),
+}
+
 /// Reads the member file at `path`, handing its members to `block` a block
 /// at a time, in order, with the file's title. Returns the title and the
 /// number of members once the whole file was read and found valid; an
@@ -36,12 +46,21 @@ pub fn format_of(path: &str) -> Result<Format, String> {
 /// `block`, so reading and checking overlap.
 pub fn members(
     path: &str,
+    block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
+) -> Result<(String, usize), String> {
+    members_with(path, OnProblems::Stop, block)
+}
+
+/// [`members`], with a choice of what to do with CSV rows that have problems.
+pub fn members_with(
+    path: &str,
+    on_problems: OnProblems<'_>,
     mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {
     let (tx, rx) = std::sync::mpsc::sync_channel::<(String, Vec<Member>)>(2);
     std::thread::scope(|s| {
         let reader = s.spawn(move || {
-            read_blocks(path, |title, b| {
+            read_blocks(path, on_problems, |title, b| {
                 tx.send((title.to_string(), b))
                     .map_err(|_| String::from("stopped"))
             })
@@ -67,6 +86,7 @@ pub fn members(
 /// [`members`] on the calling thread.
 fn read_blocks(
     path: &str,
+    on_problems: OnProblems<'_>,
     mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {
     let open = || File::open(path).map_err(|e| format!("{path}: cannot read: {e}"));
@@ -92,10 +112,10 @@ fn read_blocks(
                 }
                 Err(Stop::Caller(message)) => Err(message),
                 Err(Stop::Bad(e)) => Err(format!("{path}: {e}")),
-                Err(Stop::MembersFirst) => whole(path, block),
+                Err(Stop::MembersFirst) => whole(path, on_problems, block),
             }
         }
-        Format::Csv => csv_blocks(path, block),
+        Format::Csv => csv_blocks(path, on_problems, block),
     }
 }
 
@@ -106,6 +126,7 @@ fn read_blocks(
 /// number far down the file, is read whole.
 fn csv_blocks(
     path: &str,
+    mut on_problems: OnProblems<'_>,
     mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {
     use std::io::BufRead;
@@ -151,7 +172,7 @@ fn csv_blocks(
         head.push('\n');
     }
     if csv::separator(&head) == '\t' {
-        return whole(path, block);
+        return whole(path, on_problems, block);
     }
     let head_lines = head.matches('\n').count();
     let title = csv::title_from_path(path);
@@ -194,14 +215,21 @@ fn csv_blocks(
                 p.to_string()
             })
             .collect();
-        for (m, line) in import.members.iter().zip(&import.member_lines) {
-            if !ids.insert(&m.id) {
+        // A row whose id an earlier block used is a problem, left out.
+        let mut members = Vec::with_capacity(import.members.len());
+        for (m, line) in import.members.into_iter().zip(&import.member_lines) {
+            if ids.insert(&m.id) {
+                members.push(m);
+            } else {
                 problems.push(format!(
                     "line {}, column id: id \"{}\" is already used by an earlier row; give each member its own id (expected an id no other row uses)",
                     file_line(*line),
                     m.id
                 ));
             }
+        }
+        if let (false, OnProblems::Skip(all)) = (problems.is_empty(), &mut on_problems) {
+            all.append(&mut problems);
         }
         if !problems.is_empty() {
             let mut message = format!(
@@ -216,9 +244,9 @@ fn csv_blocks(
             }
             return Err(message);
         }
-        count += import.members.len();
-        if !import.members.is_empty() {
-            block(&title, import.members)?;
+        count += members.len();
+        if !members.is_empty() {
+            block(&title, members)?;
         }
         if rows < BLOCK {
             break;
@@ -231,9 +259,24 @@ fn csv_blocks(
 /// format and version) and hands its members over in blocks.
 fn whole(
     path: &str,
+    on_problems: OnProblems<'_>,
     mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {
-    let file = crate::read_members(path)?;
+    let file = match on_problems {
+        OnProblems::Stop => crate::read_members(path)?,
+        OnProblems::Skip(all) => {
+            let text =
+                std::fs::read_to_string(path).map_err(|e| format!("{path}: cannot read: {e}"))?;
+            match csv::detect_format(path, &text) {
+                Format::Json => file::parse(&text).map_err(|e| format!("{path}: {e}"))?,
+                Format::Csv => {
+                    let (f, problems) = csv::read_csv_lenient(path, &text);
+                    all.extend(problems.iter().map(ToString::to_string));
+                    f
+                }
+            }
+        }
+    };
     let count = file.members.len();
     let mut members = file.members.into_iter();
     loop {

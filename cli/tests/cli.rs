@@ -164,6 +164,47 @@ fn exit_status_says_within_over_or_invalid() {
 }
 
 #[test]
+fn envelope_prints_the_interaction_curves_of_a_beam_column() {
+    let dir = std::env::temp_dir().join(format!("strutline-cli-ix-{}", std::process::id()));
+    std::fs::create_dir_all(&dir).unwrap();
+    let file = dir.join("post.json");
+    std::fs::write(
+        &file,
+        r#"{"format": "strutline.members", "version": 3, "title": "ferry shed (invented)",
+            "members": [{"id": "FS-3", "section": {"kind": "i", "depth_mm": 300, "width_mm": 300,
+            "flange_mm": 19, "web_mm": 11, "root_radius_mm": 27}, "material": {"grade": "S355"},
+            "length_mm": 4200, "axial_kn": 900, "method": "en1993-1-1",
+            "m_major_a_knm": 60, "m_major_b_knm": -30}]}"#,
+    )
+    .unwrap();
+    let path = file.to_str().unwrap();
+    let (code, out, err) = run(&["envelope", path, "--member", "FS-3", "--interaction"]);
+    assert_eq!(code, Some(0), "{err}");
+    let rows: Vec<Vec<&str>> = out
+        .lines()
+        .skip(1)
+        .map(|l| l.split(',').collect())
+        .collect();
+    assert_eq!(
+        out.lines().next(),
+        Some("axis,axial_kn,moment_knm,utilisation")
+    );
+    // 25 points an axis, each at a utilisation of 1, compression rising
+    // from 0 and the moment falling to 0.
+    for axis in ["major", "minor"] {
+        let pts: Vec<_> = rows.iter().filter(|r| r[0] == axis).collect();
+        assert_eq!(pts.len(), 25, "{out}");
+        assert_eq!(pts[0][1], "0.000");
+        assert_eq!(pts[24][2], "0.000");
+        for p in &pts {
+            let u: f64 = p[3].parse().unwrap();
+            assert!((u - 1.0).abs() < 1e-6, "{p:?}");
+        }
+    }
+    std::fs::remove_dir_all(&dir).unwrap();
+}
+
+#[test]
 fn buckle_prints_both_axes_of_each_model_as_json() {
     let path =
         PathBuf::from(env!("CARGO_MANIFEST_DIR")).join("../examples/tarnbeck-crane-hall.json");

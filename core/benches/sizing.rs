@@ -2,7 +2,10 @@
 //! 300 catalogue sections (every I/H entry, 248, and the first 52 square
 //! hollow entries), lightest first until one passes, with the members' own
 //! methods. Each iteration sorts and builds the candidates and sizes the
-//! whole list; and the designation lookup. Run with `cargo bench -p strutline-core --bench sizing`.
+//! whole list; the same for 1,000 beam-columns (the members with end
+//! moments about both axes, sized against every interaction equation:
+//! group `sizing-beam-columns`); and the designation lookup. Run with
+//! `cargo bench -p strutline-core --bench sizing`.
 
 #![allow(clippy::panic, clippy::indexing_slicing)]
 
@@ -42,6 +45,30 @@ fn members() -> Vec<Member> {
         .collect()
 }
 
+/// The members with moments: major-axis end moments M and -M/2 (M from 20
+/// to 140 kNm) and a uniform minor-axis moment of M/10; the steel methods
+/// whose interaction the issue asks for.
+fn beam_columns() -> Vec<Member> {
+    let methods = [
+        strutline_core::method::Method::En1993,
+        strutline_core::method::Method::AiscLrfd,
+        strutline_core::method::Method::CsaS16,
+    ];
+    members()
+        .into_iter()
+        .enumerate()
+        .map(|(i, mut m)| {
+            let mx = 20.0 + 10.0 * (i % 13) as f64;
+            m.method = methods[i % methods.len()];
+            m.m_major_a_knm = mx;
+            m.m_major_b_knm = -0.5 * mx;
+            m.m_minor_a_knm = mx / 10.0;
+            m.m_minor_b_knm = mx / 10.0;
+            m
+        })
+        .collect()
+}
+
 fn bench(c: &mut Criterion) {
     let cands = candidates();
     assert_eq!(cands.len(), CANDIDATES);
@@ -62,6 +89,26 @@ fn bench(c: &mut Criterion) {
         b.iter(|| {
             let sizer = Sizer::new(black_box(&cands));
             black_box(sizer.size_all(black_box(&list), 0.9))
+        })
+    });
+    group.finish();
+
+    let beams = beam_columns();
+    let sized = Sizer::new(&cands).size_all(&beams, 0.9);
+    let checked: usize = sized.iter().map(|r| r.checked).sum();
+    let chosen = sized.iter().filter(|r| r.chosen.is_some()).count();
+    println!(
+        "sizing bench, beam-columns: {MEMBERS} members x {CANDIDATES} candidates, {checked} checks in all \
+         ({:.1} per member), a section found for {chosen}",
+        checked as f64 / MEMBERS as f64
+    );
+    let mut group = c.benchmark_group("sizing-beam-columns");
+    group.throughput(Throughput::Elements(MEMBERS as u64));
+    group.sample_size(10);
+    group.bench_function("1000 beam-columns x 300 sections", |b| {
+        b.iter(|| {
+            let sizer = Sizer::new(black_box(&cands));
+            black_box(sizer.size_all(black_box(&beams), 0.9))
         })
     });
     group.finish();

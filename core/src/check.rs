@@ -381,6 +381,9 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     };
     let mut checks = Vec::new();
     let (utilisation, governing_check, passes) = match &bending {
+        // Without moments: the axial check alone (asked first, as the
+        // secant check below would find no moment either).
+        None if !moments => (axial, governing.mode.key(), axial <= 1.0),
         // The secant method's moments are the load's eccentricity: its one
         // check `secant` (never above the axial utilisation, which it is
         // about the moment's axis).
@@ -480,7 +483,8 @@ pub fn resolve(member: &Member) -> Result<(Section, Material)> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
     let section = member.build_section().map_err(wrap)?;
-    let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+    let material =
+        crate::material::resolve(&member.material, crate::member::stock(&section)).map_err(wrap)?;
     Ok((section, material))
 }
 
@@ -496,7 +500,8 @@ pub fn check_member_as(member: &Member, working: Working) -> Result<CheckResult>
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
     let section = member.build_section().map_err(wrap)?;
-    let material = crate::material::resolve(&member.material, &section).map_err(wrap)?;
+    let material =
+        crate::material::resolve(&member.material, crate::member::stock(&section)).map_err(wrap)?;
     let input = Input {
         member,
         section: &section,

@@ -6,7 +6,7 @@
 //! 1,000,000-member CSV check went to it. [`SeenIds`] keeps a 64-bit hash
 //! of each id in a table of plain `u64`s (about 9 to 18 bytes an id, by
 //! the table's fill) and the ids' bytes back to back in one buffer (their
-//! length and 4 bytes each). The answer is exact: when a hash is already
+//! length and a byte each). The answer is exact: when a hash is already
 //! in the table, the buffer is searched for the id itself, so two ids that
 //! only share a hash are both accepted. That search runs only for a
 //! repeated id (which stops the reading) or a true 64-bit collision (about
@@ -16,12 +16,16 @@ use std::hash::{BuildHasher, Hasher};
 
 use rustc_hash::{FxBuildHasher, FxHashSet};
 
+/// The length byte that says 4 bytes of length follow.
+const LONG: u8 = 255;
+
 /// The ids seen so far ([module docs](self)).
 #[derive(Debug, Clone, Default)]
 pub struct SeenIds {
     /// A 64-bit hash of every id.
     hashes: FxHashSet<u64>,
-    /// Every id: its length (4 bytes, little-endian), then its bytes.
+    /// Every id: its length (one byte below [`LONG`], else [`LONG`] and 4
+    /// bytes, little-endian), then its bytes.
     bytes: Vec<u8>,
     /// Ids added.
     count: usize,
@@ -54,7 +58,7 @@ impl SeenIds {
     pub fn with_capacity(n: usize, bytes: usize) -> SeenIds {
         SeenIds {
             hashes: FxHashSet::with_capacity_and_hasher(n, FxBuildHasher),
-            bytes: Vec::with_capacity(bytes + 4 * n),
+            bytes: Vec::with_capacity(bytes + n),
             count: 0,
             hasher: None,
         }
@@ -66,10 +70,17 @@ impl SeenIds {
         if !self.hashes.insert(h) && self.contains_exactly(id) {
             return false;
         }
-        // Ids longer than 4 GB do not occur (the readers' fields are far
+        // The length in one byte up to 254; else 255 and 4 bytes. Ids
+        // longer than 4 GB do not occur (the readers' fields are far
         // shorter); one would be kept with a cut length and never matched.
-        let len = u32::try_from(id.len()).unwrap_or(u32::MAX);
-        self.bytes.extend_from_slice(&len.to_le_bytes());
+        match u8::try_from(id.len()) {
+            Ok(n) if n < LONG => self.bytes.push(n),
+            _ => {
+                self.bytes.push(LONG);
+                let len = u32::try_from(id.len()).unwrap_or(u32::MAX);
+                self.bytes.extend_from_slice(&len.to_le_bytes());
+            }
+        }
         self.bytes.extend_from_slice(id.as_bytes());
         self.count += 1;
         true
@@ -87,9 +98,13 @@ impl SeenIds {
 
     /// The id stored at `at` and where the next one starts.
     fn entry(&self, at: usize) -> Option<(&[u8], usize)> {
-        let len: [u8; 4] = self.bytes.get(at..at + 4)?.try_into().ok()?;
-        let len = u32::from_le_bytes(len) as usize;
-        let start = at + 4;
+        let (len, start) = match *self.bytes.get(at)? {
+            LONG => {
+                let len: [u8; 4] = self.bytes.get(at + 1..at + 5)?.try_into().ok()?;
+                (u32::from_le_bytes(len) as usize, at + 5)
+            }
+            n => (usize::from(n), at + 1),
+        };
         Some((self.bytes.get(start..start + len)?, start + len))
     }
 
@@ -124,7 +139,13 @@ mod tests {
         assert!(s.insert(" C0"), "ids are compared as written");
         assert!(s.insert(""));
         assert!(!s.insert(""));
-        assert_eq!(s.len(), 10_003);
+        let long = "L".repeat(300);
+        assert!(s.insert(&long));
+        assert!(s.insert(&"L".repeat(254)));
+        assert!(s.insert(&"L".repeat(255)));
+        assert!(!s.insert(&long));
+        assert!(!s.insert(&"L".repeat(255)));
+        assert_eq!(s.len(), 10_006);
     }
 
     #[test]
@@ -141,7 +162,15 @@ mod tests {
         assert!(!s.insert("CD"));
         assert!(!s.insert("AB"));
         assert!(s.insert("ab"));
-        assert_eq!(s.len(), 4);
+        let (a, b) = ("X".repeat(400), format!("{}Y", "X".repeat(399)));
+        assert!(s.insert(&a));
+        assert!(
+            s.insert(&b),
+            "same length, so same hash: told apart past the long length"
+        );
+        assert!(!s.insert(&a));
+        assert!(!s.insert(&b));
+        assert_eq!(s.len(), 6);
     }
 
     #[test]

@@ -18,7 +18,7 @@ use serde::{Deserialize, Serialize};
 
 use crate::error::{positive, Error, Result};
 use crate::names;
-use crate::section::{Family, HollowMake, Section, SectionSpec};
+use crate::section::HollowMake;
 
 /// Solid (sawn) timber or glued laminated timber: sets beta_c and gamma_M.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
@@ -368,23 +368,48 @@ fn steel_at(grade: &SteelGrade, thickness_mm: f64) -> Result<Steel> {
     })
 }
 
-fn hollow_make(section: &Section) -> Option<HollowMake> {
-    match &section.spec {
-        SectionSpec::Rhs(s) => Some(s.make),
-        SectionSpec::Chs(s) => Some(s.make),
-        _ => None,
+/// What a material needs to know of its section: the governing thickness
+/// (a grade's yield strength falls with it) and the product (the hollow
+/// grades have a table per make, ASTM A500 one for round and one for
+/// shaped sections). [`crate::member::stock`] reads it off a built section.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Stock {
+    /// The governing thickness, mm; 0 where the section does not tell it
+    /// (given properties: the thinnest band is used and the methods warn).
+    pub thickness_mm: f64,
+    /// What the section is.
+    pub product: Product,
+}
+
+/// The kind of product a grade's tables tell apart.
+#[derive(Debug, Clone, Copy, PartialEq, Eq)]
+pub enum Product {
+    /// A circular hollow section, of its make.
+    RoundHollow(HollowMake),
+    /// A square or rectangular hollow section, of its make.
+    ShapedHollow(HollowMake),
+    /// Any other section.
+    Other,
+}
+
+impl Product {
+    fn hollow_make(self) -> Option<HollowMake> {
+        match self {
+            Product::RoundHollow(m) | Product::ShapedHollow(m) => Some(m),
+            Product::Other => None,
+        }
     }
 }
 
-/// Resolves a material for a section (the yield strength falls with the
-/// section's governing thickness where the standard says so).
-pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
+/// Resolves a material for a section's stock (the yield strength falls
+/// with the governing thickness where the standard says so).
+pub fn resolve(spec: &MaterialSpec, stock: Stock) -> Result<Material> {
     match spec {
         MaterialSpec::Grade { grade } => {
-            let t = section.governing_thickness_mm();
+            let t = stock.thickness_mm;
             match find(grade) {
                 Some(Found::Steel(g)) => Ok(Material::Steel(steel_at(g, t)?)),
-                Some(Found::Hollow(hot, cold)) => match hollow_make(section) {
+                Some(Found::Hollow(hot, cold)) => match stock.product.hollow_make() {
                     Some(HollowMake::ColdFormed) => Ok(Material::Steel(steel_at(cold, t)?)),
                     // Make not given: cold-formed (the lower resistance, see
                     // `section::HollowMake`), whose EN 10219-1 table stops at a
@@ -395,10 +420,10 @@ pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
                     _ => Ok(Material::Steel(steel_at(hot, t)?)),
                 },
                 Some(Found::A500(round, shaped, unknown)) => {
-                    let g = match section.family {
-                        Family::Chs => round,
-                        Family::Rhs => shaped,
-                        _ => unknown,
+                    let g = match stock.product {
+                        Product::RoundHollow(_) => round,
+                        Product::ShapedHollow(_) => shaped,
+                        Product::Other => unknown,
                     };
                     Ok(Material::Steel(steel_at(g, t)?))
                 }
@@ -432,7 +457,7 @@ pub fn resolve(spec: &MaterialSpec, section: &Section) -> Result<Material> {
                     Some(g) => positive("g_mpa", *g)?,
                     None => e / 2.6,
                 },
-                thickness_mm: section.governing_thickness_mm().max(0.0),
+                thickness_mm: stock.thickness_mm.max(0.0),
                 band_up_to_mm: f64::INFINITY,
             }))
         }
@@ -476,7 +501,7 @@ mod tests {
     )]
 
     use super::*;
-    use crate::section::{Given, Rect, Round};
+    use crate::section::{Given, Rect, Round, Section, SectionSpec};
 
     fn rect(t: f64) -> Section {
         SectionSpec::Rect(Rect {
@@ -492,7 +517,7 @@ mod tests {
             &MaterialSpec::Grade {
                 grade: g.to_string(),
             },
-            section,
+            crate::member::stock(section),
         )
     }
 
@@ -689,7 +714,7 @@ mod tests {
                 e0mean_mpa: 10_000.0,
                 timber: TimberKind::Solid,
             },
-            &rect(100.0),
+            crate::member::stock(&rect(100.0)),
         );
         assert!(matches!(
             r,

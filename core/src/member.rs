@@ -3,10 +3,12 @@
 
 use serde::{Deserialize, Serialize};
 
+pub mod schema;
+
 use crate::buckling::chart::{self, Frame, FrameKey};
 use crate::buckling::model::BucklingModel;
 use crate::error::{non_negative, positive, Error, Result};
-use crate::material::MaterialSpec;
+use crate::material::{MaterialSpec, Product, Stock};
 use crate::section::{Section, SectionSpec};
 
 /// EN 1993-1-1 buckling curves (Table 6.1).
@@ -380,6 +382,19 @@ pub struct Member {
     /// Annex A (Method 1) (version 3).
     #[serde(default, skip_serializing_if = "is_default")]
     pub interaction_annex: InteractionAnnex,
+}
+
+/// What the material needs to know of a built section (its governing
+/// thickness and product), for [`crate::material::resolve`].
+pub fn stock(section: &Section) -> Stock {
+    Stock {
+        thickness_mm: section.governing_thickness_mm(),
+        product: match &section.spec {
+            SectionSpec::Chs(s) => Product::RoundHollow(s.make),
+            SectionSpec::Rhs(s) => Product::ShapedHollow(s.make),
+            _ => Product::Other,
+        },
+    }
 }
 
 /// The longest length or buckling length accepted, mm (10 km): beyond it

@@ -341,7 +341,8 @@ fn refusal(r: &CheckResult) -> Refusal {
 
 /// The member's material resolved for each candidate, filled as needed.
 /// `material::resolve` is a pure function of the material spec and the
-/// section, so a value once resolved serves every member of that material.
+/// section's stock (thickness and product), so a value once resolved
+/// serves every member of that material.
 type Materials = Vec<Option<Result<Material>>>;
 
 fn material_of(
@@ -352,9 +353,9 @@ fn material_of(
 ) -> Result<Material> {
     match cache.get_mut(i) {
         Some(slot) => slot
-            .get_or_insert_with(|| material::resolve(spec, section))
+            .get_or_insert_with(|| material::resolve(spec, crate::member::stock(section)))
             .clone(),
-        None => material::resolve(spec, section),
+        None => material::resolve(spec, crate::member::stock(section)),
     }
 }
 
@@ -601,7 +602,11 @@ mod tests {
                                 let with = with_spec(&m, e);
                                 let Ok(r) = check_member(&with) else { continue };
                                 let section = e.spec.build().unwrap();
-                                let mat = material::resolve(&with.material, &section).unwrap();
+                                let mat = material::resolve(
+                                    &with.material,
+                                    crate::member::stock(&section),
+                                )
+                                .unwrap();
                                 let lengths = with.buckling_lengths().unwrap();
                                 let bound = bound_for(&with, &section, &mat, &lengths, 1.0);
                                 assert!(r.resistance_kn <= bound, "{}: {r:?}", e.designation);
@@ -672,7 +677,8 @@ mod tests {
                         continue;
                     };
                     let section = member.build_section().unwrap();
-                    let mat = material::resolve(&member.material, &section).unwrap();
+                    let mat = material::resolve(&member.material, crate::member::stock(&section))
+                        .unwrap();
                     let bound = bound_for(&member, &section, &mat, &lengths, 1.0);
                     assert!(
                         axial / bound <= r.utilisation * (1.0 + 1e-12),

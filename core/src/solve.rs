@@ -15,7 +15,9 @@
 //! each buckling length scales with `s` too; buckling lengths given
 //! directly (`lcr_major_mm`, ...) are scaled by the same `s`, so the
 //! member keeps its proportions (a brace restrained at mid-length stays
-//! restrained at mid-length). An explicit `bow_mm` or `eccentricity_mm` is
+//! restrained at mid-length). A `buckling_model` is scaled with it: its
+//! segments' lengths and the positions of its braces and loads (its
+//! springs, supports and loads are kept). An explicit `bow_mm` or `eccentricity_mm` is
 //! kept as given; when absent, the methods' defaults (length / 1000)
 //! follow the trial length.
 //!
@@ -155,13 +157,25 @@ struct Trials<'a> {
     method: Method,
 }
 
-/// The member with its length and given buckling lengths times `s`.
+/// The member with its length, given buckling lengths and buckling
+/// model's lengths and positions times `s`.
 pub fn scaled(member: &Member, s: f64) -> Member {
     let mut m = member.clone();
     m.length_mm = member.length_mm * s;
     m.lcr_major_mm = member.lcr_major_mm.map(|l| l * s);
     m.lcr_minor_mm = member.lcr_minor_mm.map(|l| l * s);
     m.lcr_torsion_mm = member.lcr_torsion_mm.map(|l| l * s);
+    if let Some(model) = m.buckling_model.as_mut() {
+        for seg in &mut model.segments {
+            seg.length_mm *= s;
+        }
+        for r in &mut model.restraints {
+            r.at_mm *= s;
+        }
+        for p in &mut model.axial_loads {
+            p.at_mm *= s;
+        }
+    }
     m
 }
 
@@ -253,24 +267,23 @@ pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswe
             lo = lo_c / 2.0;
         }
     };
-    let (mut lo, mut lo_trial, mut hi, mut hi_trial) = (lo, lo_trial, hi, hi_trial);
-    for _ in 0..200 {
-        if hi / lo - 1.0 <= GAP {
-            break;
-        }
-        let mid = (lo * hi).sqrt();
-        if !(mid > lo && mid < hi) {
-            break;
-        }
-        let t = trials.at(mid);
-        if carries(&t) {
-            lo = mid;
-            lo_trial = t;
-        } else {
-            hi = mid;
-            hi_trial = t;
-        }
-    }
+    let (mut lo_trial, mut hi_trial) = (lo_trial, hi_trial);
+    let (lo, _) = crate::roots::edge(
+        lo,
+        hi,
+        |a, b| (a * b).sqrt(),
+        |a, b| b / a - 1.0 <= GAP,
+        |mid| {
+            let t = trials.at(mid);
+            let yes = carries(&t);
+            if yes {
+                lo_trial = t;
+            } else {
+                hi_trial = t;
+            }
+            yes
+        },
+    );
     let Trial::Ran(r) = lo_trial else {
         // `lo` always holds a trial that ran and carried the load.
         return Err(Error::Geometry {
@@ -413,6 +426,43 @@ mod tests {
         let again = at.check_with(method).unwrap();
         assert!((again.utilisation - f.utilisation).abs() <= 1e-12);
         assert_eq!(again.governing, f.governing);
+    }
+
+    #[test]
+    fn a_buckling_model_scales_with_the_member() {
+        // The worked example's K1: two segments, a brace at 3000 mm and
+        // loads at 6000 and 9000 mm of a 9000 mm column.
+        let f =
+            crate::file::parse(include_str!("../../examples/tarnbeck-crane-hall.json")).unwrap();
+        let k1 = &f.members[0];
+        let half = scaled(k1, 0.5);
+        let model = half.buckling_model.as_ref().unwrap();
+        assert_eq!(half.length_mm, 4500.0);
+        assert_eq!(
+            model
+                .segments
+                .iter()
+                .map(|s| s.length_mm)
+                .collect::<Vec<_>>(),
+            vec![3000.0, 1500.0]
+        );
+        assert_eq!(model.restraints[0].at_mm, 1500.0);
+        assert_eq!(
+            model
+                .axial_loads
+                .iter()
+                .map(|p| p.at_mm)
+                .collect::<Vec<_>>(),
+            vec![3000.0, 4500.0]
+        );
+        // It still analyses (unscaled, the segments would not add up and
+        // the loads would lie beyond the member), and a shorter column
+        // buckles at a higher load.
+        let a = crate::check::buckle::buckle(k1).unwrap().unwrap();
+        let b = crate::check::buckle::buckle(&half).unwrap().unwrap();
+        assert!(b.minor.load_factor > a.minor.load_factor);
+        let p = Prepared::new(k1).unwrap();
+        assert!(longest_length(&p, k1.method).is_ok());
     }
 
     #[test]

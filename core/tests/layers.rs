@@ -19,7 +19,9 @@ use std::path::{Path, PathBuf};
 const LAYERS: &[(&str, &[&str])] = &[
     (
         "utilities",
-        &["error", "units", "decimal", "trig", "names", "trace", "ids"],
+        &[
+            "error", "units", "decimal", "trig", "names", "trace", "ids", "roots",
+        ],
     ),
     ("geometry", &["section"]),
     ("data", &["catalogue", "material"]),

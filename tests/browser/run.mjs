@@ -9,6 +9,7 @@ import assert from "node:assert/strict";
 import { register as registerPicker } from "./picker.mjs";
 import { register as registerListTools } from "./listtools.mjs";
 import { register as registerTablet } from "./tablet.mjs";
+import { register as registerBuckling } from "./buckling.mjs";
 import { register as registerBeamColumn } from "./beamcolumn.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
@@ -633,6 +634,12 @@ test("accessibility-axe", async () => {
     await page.locator("[data-testid=add-member]").first().click();
     await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
     serious.push(...(await check("editing a new member")));
+    // And with the column model open, drawn and a brace added.
+    await page.locator("[data-testid=cm-toggle]").click();
+    await page.locator("[data-testid=cm-canvas][data-shapes='2']").waitFor({ timeout: 10_000 });
+    await page.locator("[data-testid=cm-add-brace]").click();
+    await page.locator("[data-testid=cm-brace-0]").waitFor();
+    serious.push(...(await check("with the column model open")));
     assert.deepEqual(serious, [], "serious or critical accessibility violations");
   }, { bypassCSP: true });
 });
@@ -690,6 +697,8 @@ registerListTools(test, { withApp, open, OUT });
 
 // The tablet workspace: result and chart in view while editing (tests/browser/tablet.mjs).
 registerTablet(test, { withApp, open, OUT });
+// Buckling lengths from the real member: the column model and frame ends.
+registerBuckling(test, { withApp, open, OUT });
 
 // A beam-column on its interaction chart (tests/browser/beamcolumn.mjs).
 registerBeamColumn(test, { withApp, open, OUT });

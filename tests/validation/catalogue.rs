@@ -330,7 +330,11 @@ fn resistance_bound_holds_for_every_method_and_entry() {
                 Err(e) => panic!("{}: {e}", e),
             };
             let section = m.build_section().unwrap();
-            let material = strutline_core::material::resolve(&m.material, &section).unwrap();
+            let material = strutline_core::material::resolve(
+                &m.material,
+                strutline_core::member::stock(&section),
+            )
+            .unwrap();
             let lengths = m.buckling_lengths().unwrap();
             let factor = 1.0 / gamma.unwrap_or(1.0).min(1.0);
             let bound = sizing::resistance_bound(&section, &material, &lengths, factor);

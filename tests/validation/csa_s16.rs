@@ -115,7 +115,7 @@ fn class_h_hollow_defaults_to_2_24() {
         &MaterialSpec::Grade {
             grade: "350W".into(),
         },
-        &section,
+        strutline_core::member::stock(&section),
     )
     .unwrap();
     let input = Input {

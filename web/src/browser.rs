@@ -206,6 +206,23 @@ pub fn device_pixel_ratio() -> f64 {
         .unwrap_or(1.0)
 }
 
+/// Sizes a canvas's bitmap to its CSS size times the device pixel ratio
+/// (only when that changed: resizing reallocates the bitmap) and returns
+/// the ratio, for a chart drawn in device pixels.
+pub fn fit_canvas(el: &web_sys::HtmlCanvasElement) -> f64 {
+    let dpr = device_pixel_ratio();
+    let w = f64::from(el.client_width().max(1));
+    let h = f64::from(el.client_height().max(1));
+    let (bw, bh) = ((w * dpr).round() as u32, (h * dpr).round() as u32);
+    if el.width() != bw {
+        el.set_width(bw);
+    }
+    if el.height() != bh {
+        el.set_height(bh);
+    }
+    dpr
+}
+
 /// Registers `./sw.js` when the browser has service workers, and calls
 /// `update_ready` when a new worker is installed and waiting while an old
 /// one controls the page (or when the worker posts `{"type":

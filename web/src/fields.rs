@@ -9,6 +9,7 @@
 use serde_json::{Map, Value};
 use strutline_core::check::Prepared;
 use strutline_core::material::MaterialSpec;
+use strutline_core::member::schema::{self, Default as Absent, Key, Sign, Value as Holds};
 use strutline_core::method::Method;
 use strutline_core::section::SectionSpec;
 use strutline_core::{Error, Member};
@@ -227,182 +228,212 @@ pub fn section_fields(kind: &str) -> &'static [Field] {
 
 /// The editor's field of a member-file key, wherever it sits.
 pub fn any_field(key: &str) -> Option<Field> {
-    let fixed = [NOTE, K_MAJOR, K_MINOR, LCR_MAJOR, LCR_MINOR];
     KINDS
         .iter()
         .flat_map(|(k, _)| section_fields(k).iter().copied())
-        .chain(MEMBER_FIELDS)
-        .chain(fixed)
-        .chain(
-            [
-                MaterialMode::Grade,
-                MaterialMode::Steel,
-                MaterialMode::Timber,
-            ]
-            .into_iter()
-            .flat_map(|m| material_fields(m).iter().copied()),
-        )
-        .chain(Method::ALL.iter().flat_map(|m| option_fields(*m)))
         .find(|f| f.key == key)
+        .or_else(|| {
+            let d = schema::member_key(key)
+                .map(|d| (d, Mem))
+                .or_else(|| schema::material_key(key).map(|d| (d, Mat)))?;
+            (d.0.options.is_empty()).then(|| field_of(d.0, d.1))
+        })
+}
+
+// The member's and material's fields are made from core's one description
+// of their keys (`strutline_core::member::schema`): label, unit (by the
+// key's suffix) and what the field accepts. The constants below are
+// evaluated by the compiler, so a key that is not described stops the
+// build ("evaluation of constant value failed").
+
+/// Whether two texts are the same (usable in constants).
+const fn same(a: &[u8], b: &[u8]) -> bool {
+    a.len() == b.len() && ends_with(a, b)
+}
+
+/// Whether `s` ends with `suffix` (usable in constants).
+const fn ends_with(s: &[u8], suffix: &[u8]) -> bool {
+    let (mut s, mut suffix) = (s, suffix);
+    loop {
+        match (s.split_last(), suffix.split_last()) {
+            (_, None) => return true,
+            (Some((x, rs)), Some((y, rf))) if *x == *y => {
+                s = rs;
+                suffix = rf;
+            }
+            _ => return false,
+        }
+    }
+}
+
+/// The stored (member-file, SI) unit of a key, from its suffix.
+pub const fn stored_unit(key: &str) -> &'static str {
+    let k = key.as_bytes();
+    if ends_with(k, b"_mm") {
+        "mm"
+    } else if ends_with(k, b"_mm2") {
+        "mm²"
+    } else if ends_with(k, b"_mm3") {
+        "mm³"
+    } else if ends_with(k, b"_mm4") {
+        "mm⁴"
+    } else if ends_with(k, b"_mm6") {
+        "mm⁶"
+    } else if ends_with(k, b"_kn") {
+        "kN"
+    } else if ends_with(k, b"_knm") {
+        "kN·m"
+    } else if ends_with(k, b"_mpa") {
+        "MPa"
+    } else {
+        ""
+    }
+}
+
+/// What a field of a described key accepts.
+const fn rule_of(d: &Key) -> Rule {
+    let required = matches!(d.default, Absent::Required | Absent::One);
+    match (d.value, required) {
+        (Holds::Number(Sign::Positive), true) => Positive,
+        (Holds::Number(_), true) => NonNegative,
+        (Holds::Number(Sign::Positive), false) => OptPositive,
+        (Holds::Number(Sign::NonNegative), false) => OptNonNegative,
+        (Holds::Number(Sign::Any), false) => OptNumber,
+        (_, true) => Text,
+        (_, false) => OptText,
+    }
+}
+
+/// The field of a described key.
+const fn field_of(d: &'static Key, place: Place) -> Field {
+    f(d.key, d.label, stored_unit(d.key), place, rule_of(d))
+}
+
+/// The described member key named `key`; a key that is not described
+/// stops the build where this is evaluated in a constant.
+const fn described(key: &str) -> &'static Key {
+    let mut rest = schema::MEMBER;
+    while let Some((d, tail)) = rest.split_first() {
+        if same(d.key.as_bytes(), key.as_bytes()) {
+            return d;
+        }
+        rest = tail;
+    }
+    // Only ever evaluated in constants: an undescribed key is a build error.
+    #[allow(clippy::panic)]
+    {
+        panic!("a member key the editor shows is not described in member::schema")
+    }
+}
+
+/// The editor's field of a described member key.
+const fn member_field(key: &str) -> Field {
+    field_of(described(key), Mem)
 }
 
 /// The member's own numeric fields.
-pub const MEMBER_FIELDS: [Field; 2] = [
-    f("length_mm", "system length L", "mm", Mem, Positive),
-    f(
-        "axial_kn",
-        "design compression N_Ed",
-        "kN",
-        Mem,
-        NonNegative,
-    ),
-];
+pub const MEMBER_FIELDS: [Field; 2] = [member_field("length_mm"), member_field("axial_kn")];
 
 /// The bending keys of member file version 3: end and span moments per
 /// axis (as values of the bending-moment diagram: the same sign at both
 /// ends is single curvature), and the length between lateral-torsional
 /// restraints.
 pub const BENDING_FIELDS: [Field; 8] = [
-    f(
-        "m_major_a_knm",
-        "moment at end A, major axis M_a",
-        "kNm",
-        Mem,
-        OptNumber,
-    ),
-    f(
-        "m_major_b_knm",
-        "moment at end B, major axis M_b",
-        "kNm",
-        Mem,
-        OptNumber,
-    ),
-    f(
-        "m_major_span_knm",
-        "mid-length moment from span load, major axis",
-        "kNm",
-        Mem,
-        OptNumber,
-    ),
-    f(
-        "m_minor_a_knm",
-        "moment at end A, minor axis M_a",
-        "kNm",
-        Mem,
-        OptNumber,
-    ),
-    f(
-        "m_minor_b_knm",
-        "moment at end B, minor axis M_b",
-        "kNm",
-        Mem,
-        OptNumber,
-    ),
-    f(
-        "m_minor_span_knm",
-        "mid-length moment from span load, minor axis",
-        "kNm",
-        Mem,
-        OptNumber,
-    ),
-    f(
-        "k_lt",
-        "factor on L between lateral-torsional restraints",
-        "",
-        Mem,
-        OptPositive,
-    ),
-    f(
-        "lcr_lt_mm",
-        "length between lateral-torsional restraints",
-        "mm",
-        Mem,
-        OptPositive,
-    ),
+    member_field("m_major_a_knm"),
+    member_field("m_major_b_knm"),
+    member_field("m_major_span_knm"),
+    member_field("m_minor_a_knm"),
+    member_field("m_minor_b_knm"),
+    member_field("m_minor_span_knm"),
+    member_field("k_lt"),
+    member_field("lcr_lt_mm"),
 ];
 
-/// The bending choices: span load shapes, lateral restraint, load level.
+/// The bending choices' keys: span load shapes, lateral restraint, load
+/// level, the moments' order and the interaction annex.
+pub const BENDING_CHOICES: [&str; 6] = [
+    "span_load_major",
+    "span_load_minor",
+    "lt_restrained",
+    "load_level",
+    "amplify_moments",
+    "interaction_annex",
+];
+
+/// The bending choices.
 pub fn bending_choices() -> Vec<Choice> {
-    let span = vec![("", "uniform load"), ("point", "point load at mid-length")];
-    vec![
-        Choice {
-            key: "span_load_major",
-            label: "span load, major axis",
-            place: Mem,
-            options: span.clone(),
-        },
-        Choice {
-            key: "span_load_minor",
-            label: "span load, minor axis",
-            place: Mem,
-            options: span,
-        },
-        Choice {
-            key: "lt_restrained",
-            label: "compression flange",
-            place: Mem,
-            options: vec![
-                ("", "free between the restraints"),
-                ("true", "held continuously (no lateral-torsional buckling)"),
-            ],
-        },
-        Choice {
-            key: "load_level",
-            label: "span load acts at",
-            place: Mem,
-            options: vec![
-                ("", "the shear centre"),
-                (
-                    "compression-flange",
-                    "the compression flange (destabilising)",
-                ),
-                ("tension-flange", "the tension flange"),
-            ],
-        },
-        Choice {
-            key: "amplify_moments",
-            label: "moments given are",
-            place: Mem,
-            options: vec![
-                (
-                    "",
-                    "first-order (amplified where the code leaves it to the designer)",
-                ),
-                ("false", "already second-order"),
-            ],
-        },
-        Choice {
-            key: "interaction_annex",
-            label: "EN 1993-1-1 interaction factors",
-            place: Mem,
-            options: vec![("", "Annex B (Method 2)"), ("A", "Annex A (Method 1)")],
-        },
-    ]
+    BENDING_CHOICES
+        .iter()
+        .filter_map(|k| member_choice(k))
+        .collect()
 }
 
 /// The member's free-text note.
-pub const NOTE: Field = f("note", "note (optional)", "", Mem, OptText);
+pub const NOTE: Field = member_field("note");
 
 /// Effective-length factor and buckling length of each axis.
-pub const K_MAJOR: Field = f("k_major", "factor K, major axis", "", Mem, Positive);
+pub const K_MAJOR: Field = member_field("k_major");
 /// Minor-axis factor.
-pub const K_MINOR: Field = f("k_minor", "factor K, minor axis", "", Mem, Positive);
+pub const K_MINOR: Field = member_field("k_minor");
 /// Major-axis buckling length.
-pub const LCR_MAJOR: Field = f(
-    "lcr_major_mm",
-    "buckling length L_cr, major axis",
-    "mm",
-    Mem,
-    OptPositive,
-);
+pub const LCR_MAJOR: Field = member_field("lcr_major_mm");
 /// Minor-axis buckling length.
-pub const LCR_MINOR: Field = f(
-    "lcr_minor_mm",
-    "buckling length L_cr, minor axis",
-    "mm",
-    Mem,
-    OptPositive,
-);
+pub const LCR_MINOR: Field = member_field("lcr_minor_mm");
+
+/// The described member keys the editor shows in a control of its own
+/// (id, method, section kind, material mode) or does not edit (the
+/// editor keeps them as they are in the file).
+pub const NOT_EDITED: [&str; 10] = [
+    "id",
+    "method",
+    "section",
+    "material",
+    "k_torsion",
+    "lcr_torsion_mm",
+    "angle_connection",
+    "frame_major",
+    "frame_minor",
+    "buckling_model",
+];
+
+/// The select of a described key with options: "" first (the key left
+/// out, in the words of what that means) unless the key is required, then
+/// the other options in the description's order.
+pub fn choice_of(d: &'static Key, place: Place) -> Choice {
+    let mut options: Vec<(&'static str, &'static str)> = Vec::new();
+    let default = match d.default {
+        Absent::Absent(words) => {
+            options.push(("", words));
+            None
+        }
+        Absent::Name(name) => Some(name),
+        Absent::Bool(true) => Some("true"),
+        Absent::Bool(false) => Some("false"),
+        Absent::Required | Absent::Zero | Absent::One => None,
+    };
+    if let Some(name) = default {
+        options.push(("", d.option(name).map_or(name, |o| o.words)));
+    }
+    options.extend(
+        d.options
+            .iter()
+            .filter(|o| Some(o.name) != default)
+            .map(|o| (o.name, o.words)),
+    );
+    Choice {
+        key: d.key,
+        label: d.label,
+        place,
+        options,
+    }
+}
+
+/// The select of a described member key.
+pub fn member_choice(key: &str) -> Option<Choice> {
+    schema::member_key(key)
+        .filter(|d| !d.options.is_empty())
+        .map(|d| choice_of(d, Mem))
+}
 
 /// How the material is given.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Hash)]
@@ -464,37 +495,19 @@ impl MaterialMode {
     }
 }
 
-const GRADE_FIELDS: [Field; 1] = [f("grade", "grade or strength class", "", Mat, Text)];
-const STEEL_FIELDS: [Field; 3] = [
-    f("fy_mpa", "yield strength f_y", "MPa", Mat, Positive),
-    f("e_mpa", "Young's modulus E", "MPa", Mat, Positive),
-    f(
-        "g_mpa",
-        "shear modulus G (empty: E/2.6)",
-        "MPa",
-        Mat,
-        OptPositive,
-    ),
-];
-const TIMBER_FIELDS: [Field; 3] = [
-    f(
-        "fc0k_mpa",
-        "compressive strength f_c,0,k",
-        "MPa",
-        Mat,
-        Positive,
-    ),
-    f("e005_mpa", "modulus E_0,05", "MPa", Mat, Positive),
-    f("e0mean_mpa", "modulus E_0,mean", "MPa", Mat, Positive),
-];
+/// The material form of a mode in core's description.
+fn form(mode: MaterialMode) -> Option<&'static schema::Form> {
+    schema::material_form(mode.value())
+}
 
-/// The material fields of a mode.
-pub fn material_fields(mode: MaterialMode) -> &'static [Field] {
-    match mode {
-        MaterialMode::Grade => &GRADE_FIELDS,
-        MaterialMode::Steel => &STEEL_FIELDS,
-        MaterialMode::Timber => &TIMBER_FIELDS,
-    }
+/// The material fields of a mode (its described keys without options).
+pub fn material_fields(mode: MaterialMode) -> Vec<Field> {
+    form(mode)
+        .map_or(&[][..], |f| f.keys)
+        .iter()
+        .filter(|d| d.options.is_empty())
+        .map(|d| field_of(d, Mat))
+        .collect()
 }
 
 /// Grade names offered in the grade field's list (the engine decides
@@ -516,46 +529,34 @@ pub const GRADE_SUGGESTIONS: [&str; 14] = [
     "GL32h",
 ];
 
+/// The keys of a method's options, in the order the editor shows them.
+pub fn method_keys(method: Method) -> &'static [&'static str] {
+    match method {
+        Method::En1993 => &["gamma_m1", "curve_major", "curve_minor"],
+        Method::PerryRobertson => &["gamma_m1", "bow_mm"],
+        Method::Secant => &["gamma_m1", "eccentricity_mm"],
+        Method::Euler => &["gamma_m1"],
+        Method::En1995 => &["service_class", "load_duration"],
+        Method::CsaS16 => &["csa_n"],
+        Method::AiscLrfd | Method::AiscAsd => &[],
+    }
+}
+
 /// A method's typed options.
 pub fn option_fields(method: Method) -> Vec<Field> {
-    let gamma = f(
-        "gamma_m1",
-        "partial factor γ_M1 (empty: 1.0)",
-        "",
-        Mem,
-        OptPositive,
-    );
-    match method {
-        Method::En1993 => vec![gamma],
-        Method::PerryRobertson => vec![
-            gamma,
-            f(
-                "bow_mm",
-                "initial bow e_0 (empty: L_cr/1000)",
-                "mm",
-                Mem,
-                OptNonNegative,
-            ),
-        ],
-        Method::Secant => vec![
-            gamma,
-            f(
-                "eccentricity_mm",
-                "load eccentricity e (empty: L/1000)",
-                "mm",
-                Mem,
-                OptNonNegative,
-            ),
-        ],
-        Method::Euler => vec![f(
-            "gamma_m1",
-            "factor on resistance (empty: 1.0)",
-            "",
-            Mem,
-            OptPositive,
-        )],
-        Method::AiscLrfd | Method::AiscAsd | Method::CsaS16 | Method::En1995 => Vec::new(),
-    }
+    method_keys(method)
+        .iter()
+        .filter_map(|k| schema::member_key(k))
+        .filter(|d| d.options.is_empty())
+        .map(|d| match (method, d.key) {
+            // The first-principles methods take γ as a factor on the resistance.
+            (Method::Euler, "gamma_m1") => Field {
+                label: "factor on resistance (empty: 1.0)",
+                ..field_of(d, Mem)
+            },
+            _ => field_of(d, Mem),
+        })
+        .collect()
 }
 
 /// A select of the editor: its key, words and options (value, words);
@@ -602,78 +603,20 @@ pub fn section_choices(kind: &str) -> Vec<Choice> {
 
 /// The choices of a material mode.
 pub fn material_choices(mode: MaterialMode) -> Vec<Choice> {
-    match mode {
-        MaterialMode::Timber => vec![Choice {
-            key: "timber",
-            label: "timber product",
-            place: Mat,
-            options: vec![
-                ("solid", "solid (sawn) timber"),
-                ("glulam", "glued laminated timber"),
-            ],
-        }],
-        _ => Vec::new(),
-    }
+    form(mode)
+        .map_or(&[][..], |f| f.keys)
+        .iter()
+        .filter(|d| !d.options.is_empty())
+        .map(|d| choice_of(d, Mat))
+        .collect()
 }
 
 /// The choices of a method.
 pub fn method_choices(method: Method) -> Vec<Choice> {
-    let curves = vec![
-        ("", "by EN 1993-1-1 Table 6.2"),
-        ("a0", "a0"),
-        ("a", "a"),
-        ("b", "b"),
-        ("c", "c"),
-        ("d", "d"),
-    ];
-    match method {
-        Method::En1993 => vec![
-            Choice {
-                key: "curve_major",
-                label: "buckling curve, major axis",
-                place: Mem,
-                options: curves.clone(),
-            },
-            Choice {
-                key: "curve_minor",
-                label: "buckling curve, minor axis",
-                place: Mem,
-                options: curves,
-            },
-        ],
-        Method::En1995 => vec![
-            Choice {
-                key: "service_class",
-                label: "service class",
-                place: Mem,
-                options: vec![("", "default (1)"), ("1", "1"), ("2", "2"), ("3", "3")],
-            },
-            Choice {
-                key: "load_duration",
-                label: "load-duration class",
-                place: Mem,
-                options: vec![
-                    ("", "default (medium-term)"),
-                    ("permanent", "permanent"),
-                    ("long", "long-term"),
-                    ("medium", "medium-term"),
-                    ("short", "short-term"),
-                    ("instantaneous", "instantaneous"),
-                ],
-            },
-        ],
-        Method::CsaS16 => vec![Choice {
-            key: "csa_n",
-            label: "exponent n",
-            place: Mem,
-            options: vec![
-                ("", "by section make"),
-                ("1.34", "1.34 (most members)"),
-                ("2.24", "2.24 (hot-finished HSS, stress-relieved)"),
-            ],
-        }],
-        _ => Vec::new(),
-    }
+    method_keys(method)
+        .iter()
+        .filter_map(|k| member_choice(k))
+        .collect()
 }
 
 /// The member-file key of a section's kind ("i", "rhs", ...), from core's
@@ -773,11 +716,11 @@ pub fn read(member: &Member, place: Place, key: &str) -> String {
         Some(Value::Number(n)) => n.as_f64().map(for_input).unwrap_or_default(),
         Some(Value::String(s)) => s.clone(),
         Some(Value::Bool(b)) => b.to_string(),
-        _ => match key {
-            // Defaults that serde leaves out of the file.
-            "k_major" | "k_minor" | "k_torsion" => "1".into(),
-            _ => String::new(),
-        },
+        // Defaults that serde leaves out of the file (k = 1).
+        _ => schema::member_key(key)
+            .and_then(Key::default_text)
+            .unwrap_or_default()
+            .into(),
     }
 }
 
@@ -849,20 +792,23 @@ fn check_sign(key: &str, x: f64, rule: Rule) -> Result<(), String> {
 pub fn apply_choice(member: &Member, choice: &Choice, value: &str) -> Result<Member, String> {
     let v = if value.is_empty() {
         None
-    } else if choice.key == "lt_restrained" || choice.key == "amplify_moments" {
-        Some(Value::Bool(value == "true"))
-    } else if choice.key == "service_class" {
-        let n: u64 = value
-            .trim()
-            .parse()
-            .map_err(|_| format!("{}: expected 1, 2 or 3", choice.key))?;
-        Some(Value::from(n))
-    } else if choice.key == "csa_n" {
-        Some(number(
-            parse_number(value).map_err(|e| e.message(choice.key))?,
-        ))
     } else {
-        Some(Value::String(value.to_string()))
+        let holds = schema::member_key(choice.key)
+            .or_else(|| schema::material_key(choice.key))
+            .map(|d| d.value);
+        match holds {
+            Some(Holds::Bool) => Some(Value::Bool(value == "true")),
+            Some(Holds::Whole) => {
+                let n: u64 = value.trim().parse().map_err(|_| {
+                    format!("{}: expected a whole number such as 1, 2 or 3", choice.key)
+                })?;
+                Some(Value::from(n))
+            }
+            Some(Holds::Number(_)) => Some(number(
+                parse_number(value).map_err(|e| e.message(choice.key))?,
+            )),
+            _ => Some(Value::String(value.to_string())),
+        }
     };
     set(member, choice.place, choice.key, v)
 }
@@ -977,6 +923,96 @@ mod tests {
                 );
             }
         }
+    }
+
+    /// Every member and material key of core's one description
+    /// (`strutline_core::member::schema`) is a field or a choice of the
+    /// editor, or is listed in `NOT_EDITED`; every key the editor shows is
+    /// described.
+    #[test]
+    fn editor_fields_match_the_member_schema() {
+        let mut shown: Vec<(&str, bool)> = [NOTE, K_MAJOR, K_MINOR, LCR_MAJOR, LCR_MINOR]
+            .iter()
+            .chain(MEMBER_FIELDS.iter())
+            .chain(BENDING_FIELDS.iter())
+            .map(|f| (f.key, false))
+            .collect();
+        shown.extend(bending_choices().iter().map(|c| (c.key, true)));
+        for m in Method::ALL {
+            shown.extend(option_fields(m).iter().map(|f| (f.key, false)));
+            shown.extend(method_choices(m).iter().map(|c| (c.key, true)));
+            for k in method_keys(m) {
+                assert!(
+                    shown.iter().any(|(s, _)| s == k),
+                    "fields::method_keys names \"{k}\", which member::schema does not describe"
+                );
+            }
+        }
+        for k in BENDING_CHOICES {
+            assert!(
+                shown.iter().any(|(s, _)| *s == k),
+                "fields::BENDING_CHOICES names \"{k}\", which member::schema does not describe"
+            );
+        }
+        for d in schema::MEMBER {
+            let here = shown.iter().find(|(k, _)| *k == d.key);
+            match here {
+                Some((_, is_choice)) => assert_eq!(
+                    *is_choice,
+                    !d.options.is_empty(),
+                    "\"{}\": a choice exactly when described with options",
+                    d.key
+                ),
+                None => assert!(
+                    NOT_EDITED.contains(&d.key),
+                    "member key \"{}\" is described in member::schema, but the editor \
+                     (web/src/fields.rs) neither shows it nor lists it in NOT_EDITED",
+                    d.key
+                ),
+            }
+        }
+        for k in NOT_EDITED {
+            assert!(
+                schema::member_key(k).is_some(),
+                "NOT_EDITED: {k} is not described"
+            );
+        }
+        for mode in [
+            MaterialMode::Grade,
+            MaterialMode::Steel,
+            MaterialMode::Timber,
+        ] {
+            let form = schema::material_form(mode.value()).unwrap();
+            let keys: Vec<&str> = material_fields(mode)
+                .iter()
+                .map(|f| f.key)
+                .chain(material_choices(mode).iter().map(|c| c.key))
+                .collect();
+            let described: Vec<&str> = form.keys.iter().map(|k| k.key).collect();
+            let mut sorted = keys.clone();
+            sorted.sort_unstable();
+            let mut want = described.clone();
+            want.sort_unstable();
+            assert_eq!(sorted, want, "material mode {}", mode.value());
+            // A material the mode starts with writes exactly the form's keys.
+            let start = serde_json::to_value(mode.default_spec()).unwrap();
+            for key in start.as_object().unwrap().keys() {
+                assert!(
+                    form.key(key).is_some(),
+                    "{} starts with {key}",
+                    mode.value()
+                );
+            }
+        }
+        // The choices offer "" first (the default) and every described option.
+        let annex = member_choice("interaction_annex").unwrap();
+        assert_eq!(
+            annex.options,
+            vec![("", "Annex B (Method 2)"), ("A", "Annex A (Method 1)")]
+        );
+        let curve = member_choice("curve_major").unwrap();
+        assert_eq!(curve.options.len(), 6);
+        assert_eq!(curve.options[0], ("", "by EN 1993-1-1 Table 6.2"));
     }
 
     #[test]
@@ -1105,7 +1141,7 @@ mod tests {
             for fld in material_fields(mode) {
                 let t = read(&m, fld.place, fld.key);
                 if !t.is_empty() {
-                    assert_eq!(apply(&m, fld, &t).unwrap(), m);
+                    assert_eq!(apply(&m, &fld, &t).unwrap(), m);
                 }
             }
         }

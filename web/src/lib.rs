@@ -18,6 +18,7 @@ pub mod fields;
 pub mod framing;
 pub mod html;
 pub mod listops;
+pub mod modelform;
 pub mod numtext;
 pub mod picker;
 pub mod print;

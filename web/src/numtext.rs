@@ -7,10 +7,11 @@
 pub enum NumError {
     /// Nothing typed where a value is required.
     Empty,
-    /// Not a number at all.
+    /// Not a number by the rules of core's reader.
     NotNumber,
-    /// Both a comma and a point: which is the decimal mark is unclear.
-    MixedMarks,
+    /// A number that reads two ways (`1,234`); core's message says how to
+    /// type either.
+    Ambiguous(String),
 }
 
 impl NumError {
@@ -23,44 +24,25 @@ impl NumError {
                     "{field}: must be a number (digits, with a point or a comma as decimal mark)"
                 )
             }
-            NumError::MixedMarks => {
-                format!("{field}: use either a comma or a point as decimal mark, not both")
-            }
+            NumError::Ambiguous(why) => format!("{field}: {why}"),
         }
     }
 }
 
-/// Reads a number typed with a decimal comma or point.
+/// Reads a number typed into a field: core's one reader of typed numbers
+/// ([`strutline_core::csv::parse_field`]: a single `,` or `.` is the
+/// decimal mark; with both, the last is; spaces group thousands).
 pub fn parse_number(text: &str) -> Result<f64, NumError> {
-    let cleaned: String = text
-        .chars()
-        .filter(|c| !matches!(c, ' ' | '\u{a0}' | '\u{202f}' | '_'))
-        .collect();
-    if cleaned.is_empty() {
+    if text.trim().is_empty() {
         return Err(NumError::Empty);
     }
-    let has_comma = cleaned.contains(',');
-    let has_point = cleaned.contains('.');
-    if has_comma && has_point {
-        return Err(NumError::MixedMarks);
-    }
-    let normal = if has_comma {
-        if cleaned.matches(',').count() > 1 {
-            return Err(NumError::NotNumber);
+    strutline_core::csv::parse_field(text).map_err(|e| {
+        if e.contains("could be") {
+            NumError::Ambiguous(e)
+        } else {
+            NumError::NotNumber
         }
-        cleaned.replace(',', ".")
-    } else {
-        cleaned
-    };
-    // Rust also reads "inf" and "NaN"; only digits are numbers here.
-    if !normal
-        .chars()
-        .all(|c| c.is_ascii_digit() || matches!(c, '.' | '-' | '+' | 'e' | 'E'))
-        || !normal.chars().any(|c| c.is_ascii_digit())
-    {
-        return Err(NumError::NotNumber);
-    }
-    strutline_core::decimal::parse(&normal).ok_or(NumError::NotNumber)
+    })
 }
 
 /// Reads an optional number: empty text is `None`.
@@ -144,6 +126,18 @@ mod tests {
         assert_eq!(parse_number("-0,25"), Ok(-0.25));
         assert_eq!(parse_number("1e3"), Ok(1000.0));
         assert_eq!(parse_number(",5"), Ok(0.5));
+        // A single mark is the decimal mark, followed by three digits too.
+        // Ambiguous (1234 or 1.234?): refused, naming both ways to type it.
+        match parse_number("1,234") {
+            Err(NumError::Ambiguous(why)) => {
+                assert!(why.contains("1234") && why.contains("1.234"), "{why}")
+            }
+            other => panic!("1,234 must be refused as ambiguous, got {other:?}"),
+        }
+        assert_eq!(parse_number("12,5"), Ok(12.5));
+        assert_eq!(parse_number("1.234"), Ok(1.234));
+        assert_eq!(parse_number("120,5"), Ok(120.5));
+        assert_eq!(parse_number("0,65"), Ok(0.65));
     }
 
     #[test]
@@ -154,7 +148,9 @@ mod tests {
         assert_eq!(parse_number("inf"), Err(NumError::NotNumber));
         assert_eq!(parse_number("NaN"), Err(NumError::NotNumber));
         assert_eq!(parse_number("1,2,3"), Err(NumError::NotNumber));
-        assert_eq!(parse_number("1.234,5"), Err(NumError::MixedMarks));
+        // Both marks: the last is the decimal mark (core's rule 1).
+        assert_eq!(parse_number("1.234,5"), Ok(1234.5));
+        assert_eq!(parse_number("1,234.5"), Ok(1234.5));
         assert_eq!(parse_number("12mm"), Err(NumError::NotNumber));
         assert_eq!(parse_number("."), Err(NumError::NotNumber));
         assert_eq!(parse_number("1e999"), Err(NumError::NotNumber));

@@ -348,7 +348,7 @@ pub fn form_html() -> Html {
 
 /// A utilisation limit typed by the person: a positive finite number.
 pub fn parse_limit(text: &str) -> Option<f64> {
-    strutline_core::decimal::parse(&text.trim().replace(',', ".")).filter(|v| *v > 0.0)
+    crate::numtext::parse_number(text).ok().filter(|v| *v > 0.0)
 }
 
 /// The (id, designation) pairs to apply for an accept of member `id`, or

@@ -8,6 +8,7 @@
 
 use serde_json::Value;
 use strutline_core::file::{json_value, SheetHeader};
+use strutline_core::member::schema::{self, Value as Holds};
 use strutline_core::method::Method;
 use strutline_core::units::{self, UnitSystem};
 use strutline_core::{Member, CAUTION};
@@ -15,91 +16,10 @@ use web_sys::js_sys;
 
 use crate::fields;
 
-/// Every input key the sheet knows, in the order of the working: the
-/// method and its factors, the member's lengths and load, the section,
-/// the material. (key, symbol, meaning); the symbol is empty where the
-/// trade has none.
-pub const INPUTS: &[(&str, &str, &str)] = &[
-    ("method", "", "design method"),
-    ("gamma_m1", "γ_M1", "partial factor on member resistance"),
-    ("bow_mm", "e_0", "initial bow"),
-    ("eccentricity_mm", "e", "load eccentricity"),
-    ("curve_major", "", "buckling curve, major axis"),
-    ("curve_minor", "", "buckling curve, minor axis"),
-    ("csa_n", "n", "exponent of the column curve"),
-    ("service_class", "", "service class"),
-    ("load_duration", "", "load-duration class"),
-    ("length_mm", "L", "system length"),
-    ("k_major", "K_y", "effective-length factor, major axis"),
-    ("lcr_major_mm", "L_cr,y", "buckling length, major axis"),
-    ("k_minor", "K_z", "effective-length factor, minor axis"),
-    ("lcr_minor_mm", "L_cr,z", "buckling length, minor axis"),
-    ("k_torsion", "K_T", "effective-length factor, torsional"),
-    ("lcr_torsion_mm", "L_cr,T", "buckling length, torsional"),
-    ("angle_connection", "", "angle connected through"),
-    (
-        "k_lt",
-        "K_LT",
-        "effective-length factor, lateral-torsional buckling",
-    ),
-    (
-        "lcr_lt_mm",
-        "L_cr,LT",
-        "length between lateral-torsional restraints",
-    ),
-    (
-        "lt_restrained",
-        "",
-        "compression flange held against lateral-torsional buckling",
-    ),
-    ("axial_kn", "N_Ed", "design compression"),
-    (
-        "m_major_a_knm",
-        "M_y,Ed,A",
-        "design moment, major axis, at end A",
-    ),
-    (
-        "m_major_b_knm",
-        "M_y,Ed,B",
-        "design moment, major axis, at end B",
-    ),
-    (
-        "m_major_span_knm",
-        "M_y,Ed,span",
-        "major-axis moment at mid-length from transverse load",
-    ),
-    ("span_load_major", "", "shape of the major-axis span moment"),
-    (
-        "m_minor_a_knm",
-        "M_z,Ed,A",
-        "design moment, minor axis, at end A",
-    ),
-    (
-        "m_minor_b_knm",
-        "M_z,Ed,B",
-        "design moment, minor axis, at end B",
-    ),
-    (
-        "m_minor_span_knm",
-        "M_z,Ed,span",
-        "minor-axis moment at mid-length from transverse load",
-    ),
-    ("span_load_minor", "", "shape of the minor-axis span moment"),
-    (
-        "load_level",
-        "",
-        "level of the transverse load on the depth",
-    ),
-    (
-        "amplify_moments",
-        "",
-        "moments given are first-order (amplified by the check)",
-    ),
-    (
-        "interaction_annex",
-        "",
-        "EN 1993-1-1 interaction factors from Annex",
-    ),
+/// The section's keys as the sheet gives them: (key, symbol, meaning).
+/// The member's and the material's come from core's one description of
+/// their keys (`strutline_core::member::schema`).
+const SECTION_INPUTS: &[(&str, &str, &str)] = &[
     ("kind", "", "section shape"),
     ("designation", "", "catalogue designation"),
     ("make", "", "made"),
@@ -139,27 +59,32 @@ pub const INPUTS: &[(&str, &str, &str)] = &[
         "W_pl,z",
         "plastic section modulus, minor axis",
     ),
-    ("grade", "", "grade or strength class"),
-    ("fy_mpa", "f_y", "yield strength"),
-    ("e_mpa", "E", "modulus of elasticity"),
-    ("g_mpa", "G", "shear modulus"),
-    (
-        "fc0k_mpa",
-        "f_c,0,k",
-        "compressive strength parallel to grain",
-    ),
-    (
-        "e005_mpa",
-        "E_0,05",
-        "modulus of elasticity parallel to grain, 5 % fractile",
-    ),
-    (
-        "e0mean_mpa",
-        "E_0,mean",
-        "mean modulus of elasticity parallel to grain",
-    ),
-    ("timber", "", "timber product"),
 ];
+
+/// Every input key the sheet knows, in the order of the working (the order
+/// of `member::schema::MEMBER`): the method and its factors, the member's
+/// lengths and loads, the section, the material. (key, symbol, meaning);
+/// the symbol is empty where the trade has none. A group's keys are named
+/// by their CSV column (`angle_leg`).
+pub fn input_table() -> Vec<(&'static str, &'static str, &'static str)> {
+    let mut out = Vec::with_capacity(96);
+    for d in schema::MEMBER {
+        match d.value {
+            Holds::Section => out.extend_from_slice(SECTION_INPUTS),
+            Holds::Material => out.extend(
+                schema::MATERIAL
+                    .iter()
+                    .flat_map(|f| f.keys)
+                    .map(|k| (k.key, k.symbol, k.meaning)),
+            ),
+            Holds::Group { keys, .. } => {
+                out.extend(keys.iter().map(|k| (k.key, k.symbol, k.meaning)));
+            }
+            _ => out.push((d.key, d.symbol, d.meaning)),
+        }
+    }
+    out
+}
 
 /// One input line of the sheet: `f_c,0,k = 21 MPa  compressive strength
 /// parallel to grain`.
@@ -173,7 +98,7 @@ pub struct InputLine {
     pub meaning: String,
 }
 
-/// The member's inputs as sheet lines in the order of [`INPUTS`], values
+/// The member's inputs as sheet lines in the order of [`input_table`], values
 /// in `system`'s units. The id and note head the page instead. A key the
 /// table does not know yet (added to the member file later) still prints,
 /// by the editor's label for it, never by its key.
@@ -182,29 +107,43 @@ pub fn inputs(system: UnitSystem, m: &Member) -> Vec<InputLine> {
     if let Some(v) = json_value(m) {
         flatten(&v, &mut found);
     }
+    let table = input_table();
     let mut out = Vec::new();
-    for (key, symbol, meaning) in INPUTS {
+    for (key, symbol, meaning) in &table {
+        if matches!(*key, "id" | "note") {
+            continue;
+        }
         if let Some((_, v)) = found.iter().find(|(k, _)| k == key) {
             out.push(line(system, key, symbol, meaning.to_string(), v));
         }
     }
     for (key, v) in &found {
-        if !INPUTS.iter().any(|(k, ..)| k == key) && !matches!(key.as_str(), "id" | "note") {
+        if !table.iter().any(|(k, ..)| k == key) && !matches!(key.as_str(), "id" | "note") {
             out.push(line(system, key, "", unknown_meaning(key), v));
         }
     }
     out
 }
 
-/// The keys and values of a member's JSON form, nested objects opened.
+/// The keys and values of a member's JSON form, nested objects opened (a
+/// group's keys named by their CSV column, `angle_leg`).
 fn flatten(v: &Value, out: &mut Vec<(String, Value)>) {
     let Some(obj) = v.as_object() else {
         return;
     };
     for (k, v) in obj {
-        match v {
-            Value::Object(_) => flatten(v, out),
-            Value::Null => {}
+        let prefix = match schema::member_key(k).map(|d| d.value) {
+            Some(Holds::Group { prefix, .. }) => Some(prefix),
+            _ => None,
+        };
+        match (v, prefix) {
+            (Value::Object(inner), Some(prefix)) => {
+                for (k2, v2) in inner {
+                    out.push((format!("{prefix}_{k2}"), v2.clone()));
+                }
+            }
+            (Value::Object(_), None) => flatten(v, out),
+            (Value::Null, _) => {}
             _ => out.push((k.clone(), v.clone())),
         }
     }
@@ -218,8 +157,8 @@ pub fn speak(message: &str) -> String {
     let mut word = String::new();
     let flush = |word: &mut String, out: &mut String| {
         // Keys of one word ("method", "timber") are words too: left alone.
-        match INPUTS
-            .iter()
+        match input_table()
+            .into_iter()
             .find(|(k, ..)| k.contains('_') && *k == word.as_str())
         {
             Some((_, sym, meaning)) => out.push_str(if sym.is_empty() { meaning } else { sym }),
@@ -268,7 +207,7 @@ fn line(
         Value::Number(n) => {
             let x = n.as_f64().unwrap_or(f64::NAN);
             let (d, u) = match system {
-                UnitSystem::Si => (x, si_unit(key)),
+                UnitSystem::Si => (x, fields::stored_unit(key)),
                 UnitSystem::Us => units::key_to_display(system, key, x),
             };
             let shown = units::format_display(d, 5);
@@ -292,22 +231,6 @@ fn line(
         symbol,
         value,
         meaning,
-    }
-}
-
-/// The stored (SI) unit of a member-file key, from its suffix.
-fn si_unit(key: &str) -> &'static str {
-    let suffix = key.rsplit('_').next().unwrap_or("");
-    match suffix {
-        "mm" => "mm",
-        "mm2" => "mm²",
-        "mm3" => "mm³",
-        "mm4" => "mm⁴",
-        "mm6" => "mm⁶",
-        "kn" => "kN",
-        "knm" => "kN·m",
-        "mpa" => "MPa",
-        _ => "",
     }
 }
 
@@ -429,7 +352,7 @@ mod tests {
         for (k, _) in fields::KINDS {
             for f in fields::section_fields(k) {
                 assert!(
-                    INPUTS.iter().any(|(key, ..)| *key == f.key),
+                    input_table().iter().any(|(key, ..)| *key == f.key),
                     "{} has no sheet line",
                     f.key
                 );
@@ -442,7 +365,7 @@ mod tests {
                 for (k, _) in found {
                     assert!(
                         matches!(k.as_str(), "id" | "note")
-                            || INPUTS.iter().any(|(key, ..)| *key == k),
+                            || input_table().iter().any(|(key, ..)| *key == k),
                         "{k} has no sheet line"
                     );
                 }

@@ -121,14 +121,27 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                 result_text(sys, "kN", c.member.axial_kn, 1),
                 r.method.title(),
             );
-            if let Some(b) = &r.bending {
-                h.push(&bending_html(b, sys));
-            }
-            if !r.interaction.is_empty() {
-                h.push(&interaction_html(r));
+            // On the sheet the tables follow the verdict; in the app they
+            // open the part under the chart (checks_html), so the verdict
+            // and the chart stay in view together.
+            if sheet {
+                h.push(&checks_html(r, sys));
             }
             h.push(&warnings_in(r, &said));
         }
+    }
+    h
+}
+
+/// The tables of the checks beyond compression: bending per axis and the
+/// interaction equations (empty for a member without moments).
+pub fn checks_html(r: &CheckResult, sys: UnitSystem) -> Html {
+    let mut h = Html::new();
+    if let Some(b) = &r.bending {
+        h.push(&bending_html(b, sys));
+    }
+    if !r.interaction.is_empty() {
+        h.push(&interaction_html(r));
     }
     h
 }
@@ -637,8 +650,11 @@ mod tests {
         let r = c.result().unwrap();
         let b = r.bending.unwrap();
         let h = verdict_html(&c, UnitSystem::Si).into_string();
-        assert!(h.contains("data-testid=\"bending\""), "{h}");
         assert!(h.contains("bending, major axis"), "{h}");
+        // The table under the chart in the app, after the verdict on the sheet.
+        assert!(!h.contains("data-testid=\"bending\""), "{h}");
+        let h = checks_html(r, UnitSystem::Si).into_string();
+        assert!(h.contains("data-testid=\"bending\""), "{h}");
         assert!(h.contains(&format!(
             "<td class=\"num\">{}</td>",
             fixed(b.major.utilisation(), 3)

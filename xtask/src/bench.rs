@@ -69,6 +69,17 @@ pub fn run(args: &[String]) -> Result<()> {
                 target: 100.0,
             });
         }
+        if let Some(dir) = first_estimate_dir(&root.join("target/criterion"), "sizing-beam-columns")
+        {
+            let ns = criterion_mean_ns(&dir)?;
+            figures.push(Figure {
+                name: "sizing 1,000 beam-columns against a 300-section series (native)",
+                value: ns * 1e-6,
+                unit: "ms",
+                higher_is_better: false,
+                target: 100.0,
+            });
+        }
     }
 
     if root.join("core/benches/buckling.rs").exists() {

@@ -4,7 +4,8 @@
 //!
 //! cargo-fuzz drives libFuzzer, which needs unstable compiler flags; on the
 //! project's stable toolchain they are enabled with `RUSTC_BOOTSTRAP=1`
-//! for this command only. cargo-fuzz is installed when missing. Anything
+//! for this command only; LeakSanitizer reads `fuzz/lsan.supp` (the
+//! engine's interned texts, kept on purpose). cargo-fuzz is installed when missing. Anything
 //! found is written by libFuzzer under `fuzz/artifacts/<target>/`; turn it
 //! into a regression test in `core/tests/` before fixing it.
 
@@ -39,6 +40,12 @@ pub fn run(args: &[String]) -> Result<()> {
             util::cargo()
                 .current_dir(&fuzz_dir)
                 .env("RUSTC_BOOTSTRAP", "1")
+                // The engine's interned texts (trace::held) are kept for the
+                // life of the program by design: suppressed, nothing else.
+                .env(
+                    "LSAN_OPTIONS",
+                    format!("suppressions={}", fuzz_dir.join("lsan.supp").display()),
+                )
                 .args(["fuzz", "run", target])
                 .arg(&corpus)
                 .arg(fuzz_dir.join("seeds").join(target))

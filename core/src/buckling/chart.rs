@@ -28,7 +28,7 @@
 use serde::{Deserialize, Serialize};
 
 use crate::error::{Error, Result};
-use crate::section::geometry::solve_increasing;
+use crate::roots::{newton_bisect, Stop};
 use crate::trace::{step, Scope, Trace};
 use crate::trig::sin_cos;
 
@@ -138,7 +138,7 @@ pub fn k_factor(frame: &Frame, which: FrameKey) -> Result<f64> {
         };
         let lo = 1e-12;
         let scale = 36.0 * q + 6.0 * s;
-        solve_increasing(g, lo, pi, 0.5 * pi, 1e-15 * scale)
+        newton_bisect(g, lo, pi, 0.5 * pi, Stop::on_value(1e-15 * scale))
     } else {
         if s == 0.0 && q == 0.0 {
             // Both ends pinned: the braced equation reads x^3 sin x = 0.
@@ -157,7 +157,7 @@ pub fn k_factor(frame: &Frame, which: FrameKey) -> Result<f64> {
                 (-value, -slope)
             };
             let scale = 2.0 * pi * pi * s + 16.0 * q;
-            solve_increasing(f, pi, 2.0 * pi, 1.5 * pi, 1e-15 * scale)
+            newton_bisect(f, pi, 2.0 * pi, 1.5 * pi, Stop::on_value(1e-15 * scale))
         }
     };
     let k = pi / x;

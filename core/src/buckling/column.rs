@@ -609,17 +609,13 @@ pub fn solve(c: &Column, elements: usize) -> Result<Solution> {
             ));
         }
     }
-    for _ in 0..200 {
-        if hi - lo <= 1e-13 * hi {
-            break;
-        }
-        let mid = 0.5 * (lo + hi);
-        if below(k, kg, mid) == 0 {
-            lo = mid;
-        } else {
-            hi = mid;
-        }
-    }
+    let (lo, hi) = crate::roots::edge(
+        lo,
+        hi,
+        |a, b| 0.5 * (a + b),
+        |a, b| b - a <= 1e-13 * b,
+        |mid| below(k, kg, mid) == 0,
+    );
     // The mode by inverse iteration at lo (K - lo K_g positive definite).
     let shifted = k.shifted(lo, kg).factor();
     for _ in 0..6 {

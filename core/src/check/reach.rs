@@ -7,13 +7,13 @@
 //! The utilisation rises with each action (a property the check keeps), so
 //! the answer is the root of `u(x) - 1` on a bracket `[0, hi]` with
 //! `u(0) <= 1 < u(hi)`, found by the project's root finder
-//! ([`solve_increasing`]: Newton steps, each kept inside the shrinking
+//! ([`newton_bisect`]: Newton steps, each kept inside the shrinking
 //! bracket or replaced by a bisection). The check gives no derivative; a
 //! forward difference of relative step [`STEP`] stands in for it. Most
 //! interaction equations are linear in the moment at a given load, so the
 //! first Newton step lands on the root.
 
-use crate::section::geometry::solve_increasing;
+use crate::roots::{newton_bisect, Stop};
 
 /// The utilisation the answer is worked to: `|u(x) - 1| <= TOL` wherever
 /// the utilisation is continuous in the action (at a jump, such as a
@@ -94,7 +94,7 @@ pub fn largest<U: Fn(f64) -> Option<f64>>(u: U, guess: f64, x_max: f64) -> Reach
         let slope = (at(x + h) - ux) / h;
         (ux - 1.0, if slope.is_finite() { slope } else { 0.0 })
     };
-    let x = solve_increasing(f, lo, hi, hi, TOL);
+    let x = newton_bisect(f, lo, hi, hi, Stop::on_value(TOL));
     let ux = at(x);
     // The root finder may end on the far side of the root by at most TOL
     // in utilisation; where it ends beyond that (on the high side of a

@@ -1,16 +1,27 @@
 //! The member file's keys as CSV columns: their group, their kind of
 //! cell, the keys each row needs and the keys of each section kind.
+//!
+//! The member's and the material's columns, and the names each accepts,
+//! come from [`member::schema`](crate::member::schema); the section's are
+//! listed here and checked against
+//! [`section::schema`](crate::section::schema) by
+//! `every_described_section_key_is_a_column`.
+
+use crate::member::schema::{self, Value};
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub(super) enum Group {
     Member,
     Section,
     Material,
-    /// `angle_connection`'s keys, written with the prefix `angle_`.
-    Angle,
-    /// `frame_major`'s and `frame_minor`'s keys, written with the prefix
-    /// `frame_major_` or `frame_minor_` ([`FRAMES`]).
-    Frame,
+    /// The keys of a member key's object (`angle_connection`), written
+    /// `<prefix>_<key>` (`angle_leg`).
+    Nested {
+        /// The member key that holds the object.
+        key: &'static str,
+        /// The columns' prefix.
+        prefix: &'static str,
+    },
 }
 
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -27,22 +38,33 @@ pub(super) enum Kind {
     Bool,
 }
 
-#[derive(Debug)]
+#[derive(Debug, Clone, Copy)]
 pub(super) struct KeyInfo {
     pub(super) key: &'static str,
     pub(super) group: Group,
     pub(super) kind: Kind,
+    /// Whether every row needs it.
+    pub(super) required: bool,
+    /// Its description, for a member or material key.
+    pub(super) described: Option<&'static schema::Key>,
 }
 
 pub(super) const fn k(key: &'static str, group: Group, kind: Kind) -> KeyInfo {
-    KeyInfo { key, group, kind }
+    KeyInfo {
+        key,
+        group,
+        kind,
+        required: false,
+        described: None,
+    }
 }
 
-/// Every key, in the order [`super::to_csv`] writes them.
-pub(super) const KEYS: &[KeyInfo] = &[
-    k("id", Group::Member, Kind::Text),
-    k("note", Group::Member, Kind::Text),
-    k("kind", Group::Section, Kind::Name),
+/// The section's columns, `kind` first.
+pub(super) const SECTION_KEYS: &[KeyInfo] = &[
+    KeyInfo {
+        required: true,
+        ..k("kind", Group::Section, Kind::Name)
+    },
     k("designation", Group::Section, Kind::Text),
     k("depth_mm", Group::Section, Kind::Number),
     k("width_mm", Group::Section, Kind::Number),
@@ -65,78 +87,78 @@ pub(super) const KEYS: &[KeyInfo] = &[
     k("w_el_minor_mm3", Group::Section, Kind::Number),
     k("w_pl_major_mm3", Group::Section, Kind::Number),
     k("w_pl_minor_mm3", Group::Section, Kind::Number),
-    k("grade", Group::Material, Kind::Text),
-    k("fy_mpa", Group::Material, Kind::Number),
-    k("e_mpa", Group::Material, Kind::Number),
-    k("g_mpa", Group::Material, Kind::Number),
-    k("fc0k_mpa", Group::Material, Kind::Number),
-    k("e005_mpa", Group::Material, Kind::Number),
-    k("e0mean_mpa", Group::Material, Kind::Number),
-    k("timber", Group::Material, Kind::Name),
-    k("length_mm", Group::Member, Kind::Number),
-    k("k_major", Group::Member, Kind::Number),
-    k("k_minor", Group::Member, Kind::Number),
-    k("k_torsion", Group::Member, Kind::Number),
-    k("lcr_major_mm", Group::Member, Kind::Number),
-    k("lcr_minor_mm", Group::Member, Kind::Number),
-    k("lcr_torsion_mm", Group::Member, Kind::Number),
-    k("frame_major_sway", Group::Frame, Kind::Bool),
-    k("frame_major_g_a", Group::Frame, Kind::Number),
-    k("frame_major_g_b", Group::Frame, Kind::Number),
-    k("frame_minor_sway", Group::Frame, Kind::Bool),
-    k("frame_minor_g_a", Group::Frame, Kind::Number),
-    k("frame_minor_g_b", Group::Frame, Kind::Number),
-    k("axial_kn", Group::Member, Kind::Number),
-    k("method", Group::Member, Kind::Name),
-    k("gamma_m1", Group::Member, Kind::Number),
-    k("curve_major", Group::Member, Kind::Name),
-    k("curve_minor", Group::Member, Kind::Name),
-    k("bow_mm", Group::Member, Kind::Number),
-    k("eccentricity_mm", Group::Member, Kind::Number),
-    k("service_class", Group::Member, Kind::Whole),
-    k("load_duration", Group::Member, Kind::Name),
-    k("csa_n", Group::Member, Kind::Number),
-    k("angle_leg", Group::Angle, Kind::Name),
-    k("angle_truss", Group::Angle, Kind::Name),
-    k("m_major_a_knm", Group::Member, Kind::Number),
-    k("m_major_b_knm", Group::Member, Kind::Number),
-    k("m_major_span_knm", Group::Member, Kind::Number),
-    k("span_load_major", Group::Member, Kind::Name),
-    k("m_minor_a_knm", Group::Member, Kind::Number),
-    k("m_minor_b_knm", Group::Member, Kind::Number),
-    k("m_minor_span_knm", Group::Member, Kind::Number),
-    k("span_load_minor", Group::Member, Kind::Name),
-    k("k_lt", Group::Member, Kind::Number),
-    k("lcr_lt_mm", Group::Member, Kind::Number),
-    k("lt_restrained", Group::Member, Kind::Bool),
-    k("load_level", Group::Member, Kind::Name),
-    k("amplify_moments", Group::Member, Kind::Bool),
-    k("interaction_annex", Group::Member, Kind::Name),
 ];
 
-/// The member keys whose objects are flattened into [`Group::Frame`]
-/// columns `<key>_<inner key>`, and the inner keys, all of which a frame
-/// needs.
-pub(super) const FRAMES: [&str; 2] = ["frame_major", "frame_minor"];
-pub(super) const FRAME_KEYS: [&str; 3] = ["sway", "g_a", "g_b"];
-
-/// The frame key and inner key of a [`Group::Frame`] column
-/// (`frame_major_g_a` -> `("frame_major", "g_a")`).
-pub(super) fn frame_parts(column: &str) -> Option<(&'static str, &str)> {
-    FRAMES.iter().find_map(|f| {
-        column
-            .strip_prefix(f)
-            .and_then(|r| r.strip_prefix('_'))
-            .map(|inner| (*f, inner))
+/// The kind of cell of a described key; `None` for a key that is not one
+/// column (the section, the material, a group, a structure).
+fn kind_of(value: Value) -> Option<Kind> {
+    Some(match value {
+        Value::Number(_) => Kind::Number,
+        Value::Whole => Kind::Whole,
+        Value::Bool => Kind::Bool,
+        Value::Text => Kind::Text,
+        Value::Name | Value::Method => Kind::Name,
+        Value::Section | Value::Material | Value::Group { .. } | Value::Structure => return None,
     })
 }
 
-/// Keys every row needs (the material and section needs are per row).
-pub(super) const REQUIRED: &[&str] = &["id", "kind", "length_mm", "axial_kn", "method"];
-
-pub(super) fn key_info(key: &str) -> Option<&'static KeyInfo> {
-    KEYS.iter().find(|i| i.key == key)
+fn described(key: &'static schema::Key, group: Group) -> Option<KeyInfo> {
+    Some(KeyInfo {
+        key: key.key,
+        group,
+        kind: kind_of(key.value)?,
+        required: group == Group::Member && key.required(),
+        described: Some(key),
+    })
 }
 
-pub(super) const TIMBER_KEYS: [&str; 4] = ["fc0k_mpa", "e005_mpa", "e0mean_mpa", "timber"];
-pub(super) const CUSTOM_KEYS: [&str; 3] = ["fy_mpa", "e_mpa", "g_mpa"];
+/// A member key's columns: itself, or the keys of its group.
+fn member_columns(key: &'static schema::Key) -> impl Iterator<Item = KeyInfo> {
+    let (inner, group): (&'static [schema::Key], Group) = match key.value {
+        Value::Group { prefix, keys } => (
+            keys,
+            Group::Nested {
+                key: key.key,
+                prefix,
+            },
+        ),
+        _ => (std::slice::from_ref(key), Group::Member),
+    };
+    inner.iter().filter_map(move |k| described(k, group))
+}
+
+/// Every column, in the order [`super::to_csv`] writes them: the
+/// member's text keys (id, note), the section, the material, then the
+/// member's other keys in the order of their description.
+pub(super) fn keys() -> impl Iterator<Item = KeyInfo> {
+    let text = |k: &&schema::Key| k.value == Value::Text;
+    schema::MEMBER
+        .iter()
+        .filter(text)
+        .flat_map(member_columns)
+        .chain(SECTION_KEYS.iter().copied())
+        .chain(
+            schema::MATERIAL
+                .iter()
+                .flat_map(|f| f.keys.iter())
+                .filter_map(|k| described(k, Group::Material)),
+        )
+        .chain(
+            schema::MEMBER
+                .iter()
+                .filter(move |k| !text(k))
+                .flat_map(member_columns),
+        )
+}
+
+pub(super) fn key_info(key: &str) -> Option<KeyInfo> {
+    keys().find(|i| i.key == key)
+}
+
+/// The keys of a material form ("timber", "steel").
+pub(super) fn form_keys(form: &str) -> impl Iterator<Item = &'static schema::Key> {
+    schema::material_form(form)
+        .map(|f| f.keys)
+        .unwrap_or_default()
+        .iter()
+}

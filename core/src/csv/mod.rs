@@ -42,6 +42,13 @@
 //!    separator a point is the decimal mark and a comma groups thousands
 //!    (1234); in a tab-separated file the first number of the file that
 //!    rule 1 or 3 decides sets the convention (decimal point when none).
+//! 5. What a person types into one field ([`parse_field`], [`parse_typed`],
+//!    every number field of the app) has no file to set a convention: a
+//!    single point is the decimal mark (`1.234` is 1.234), a single comma
+//!    too unless exactly three digits follow it (`12,5` is 12.5), and
+//!    `1,234` is refused as ambiguous (1234 or 1.234? under-reading a load
+//!    a thousand times is the unsafe side), naming both ways to type it;
+//!    rules 1 to 3 hold as for a file (`1,234.5` is 1234.5).
 //!
 //! Thousands groups must be three digits each after the first group of one
 //! to three (not starting with 0); when spaces group the thousands, a single
@@ -89,9 +96,9 @@ use serde::Serialize;
 use crate::file::{self, MemberFile};
 use crate::member::Member;
 
-pub use number::parse_typed;
+pub use number::{parse_field, parse_typed};
 pub use read::{parse_csv, parse_csv_within};
-pub use write::{left_out, to_csv, to_csv_in, NOT_IN_CSV};
+pub use write::{cells, left_out, not_in_csv, to_csv, to_csv_in, Layout};
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]

@@ -8,6 +8,13 @@ use crate::units::{self, Quantity, UnitSystem};
 pub(super) enum Mark {
     Point,
     Comma,
+    /// What a person types into one field, with no file to set a
+    /// convention: a single point is the decimal mark (`1.234` is 1.234);
+    /// a single comma followed by exactly three digits (`1,234`) is
+    /// refused as ambiguous (1234 with a thousands comma, or 1.234 with a
+    /// decimal comma: reading a load 1,000 times too small is the unsafe
+    /// side); any other single comma is the decimal mark (`12,5`).
+    Single,
 }
 
 pub(super) fn is_group_space(c: char) -> bool {
@@ -106,6 +113,16 @@ pub(super) fn parse_number(raw: &str, file_mark: Mark) -> Result<f64, String> {
                     let file_decimal = match file_mark {
                         Mark::Point => '.',
                         Mark::Comma => ',',
+                        Mark::Single if m == ',' => {
+                            return Err(format!(
+                                "\"{t}\" could be a number with a thousands comma or with a \
+                                 decimal comma; type it without the comma ({}) or with a \
+                                 decimal point ({})",
+                                mantissa.replace(',', ""),
+                                mantissa.replace(',', ".")
+                            ));
+                        }
+                        Mark::Single => m,
                     };
                     if m == file_decimal {
                         Some(m)
@@ -254,23 +271,21 @@ pub(super) fn parse_inches(body: &str, mark: Mark) -> Option<f64> {
     Some(whole + num as f64 / den as f64)
 }
 
+/// Reads a number a person typed into one field (rule 5 of [`super`]: a
+/// single mark is the decimal mark; both marks, repeated marks and spaces
+/// group thousands as in a file). The app reads every number field with it.
+pub fn parse_field(text: &str) -> Result<f64, String> {
+    parse_number(text, Mark::Single)
+}
+
 /// Reads a number a person typed for member-file key `key` in the display
 /// unit of `system` (see [`units::display_unit`]; SI member lengths are
 /// shown in metres) and returns the value to store, in the key's own unit.
-/// The forgiving number forms of this module are accepted; `decimal_comma`
-/// settles the ambiguous `1,234` (rule 4). In US units, lengths may also be
-/// typed in feet and inches (`13'-6"`, `6 1/2"`), whatever the unit shown.
-pub fn parse_typed(
-    text: &str,
-    key: &str,
-    system: UnitSystem,
-    decimal_comma: bool,
-) -> Result<f64, String> {
-    let mark = if decimal_comma {
-        Mark::Comma
-    } else {
-        Mark::Point
-    };
+/// The number forms of [`parse_field`] are accepted. In US units, lengths
+/// may also be typed in feet and inches (`13'-6"`, `6 1/2"`), whatever the
+/// unit shown.
+pub fn parse_typed(text: &str, key: &str, system: UnitSystem) -> Result<f64, String> {
+    let mark = Mark::Single;
     let q = Quantity::of_key(key).unwrap_or(Quantity::Dimensionless);
     if system == UnitSystem::Us && matches!(q, Quantity::Span | Quantity::Length) {
         if let Some(mm) = parse_feet_inches(text, mark) {

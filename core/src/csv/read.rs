@@ -7,6 +7,7 @@ use super::lex::*;
 use super::number::*;
 use super::*;
 use crate::file;
+use crate::member::schema as member_schema;
 use crate::member::Member;
 use crate::method::Method;
 use crate::section::schema;
@@ -17,7 +18,7 @@ pub(super) struct Column {
     /// The header as written.
     pub(super) header: String,
     /// The member-file key it stands for (`None`: ignored column).
-    pub(super) info: Option<&'static KeyInfo>,
+    pub(super) info: Option<KeyInfo>,
     /// The US unit it is written in.
     pub(super) unit: Option<UsUnit>,
 }
@@ -86,6 +87,10 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
     match info.kind {
         Kind::Text => "text".into(),
         Kind::Name => match info.key {
+            _ if info.described.is_some_and(|d| !d.options.is_empty()) => info
+                .described
+                .map(|d| d.names_in_words())
+                .unwrap_or_default(),
             "kind" => {
                 let names: Vec<&str> = schema::kind_names().collect();
                 match names.split_last() {
@@ -97,25 +102,21 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
             }
             "method" => format!("a method: {}", Method::ALL.map(Method::key).join(", ")),
             "make" => "rolled or welded (i); hot-finished or cold-formed (rhs, chs)".into(),
-            "timber" => "solid or glulam".into(),
-            "curve_major" | "curve_minor" => "a buckling curve: a0, a, b, c or d".into(),
-            "load_duration" => "permanent, long, medium, short or instantaneous".into(),
-            "angle_leg" => "long or short".into(),
-            "angle_truss" => "planar or space".into(),
-            "span_load_major" | "span_load_minor" => "uniform or point".into(),
-            "load_level" => "shear-centre, compression-flange or tension-flange".into(),
-            "interaction_annex" => "A or B".into(),
             _ => "a name".into(),
         },
-        Kind::Number if info.group == Group::Frame => {
-            "G, a number of 0 or more (sum of EI/L of the columns over that of the beams at the end)"
-                .into()
-        }
         Kind::Whole => "a whole number".into(),
-        Kind::Bool if info.group == Group::Frame => {
-            "true (sidesway uninhibited) or false (braced)".into()
-        }
-        Kind::Bool => "true or false".into(),
+        Kind::Bool => match info.described.filter(|d| !d.options.is_empty()) {
+            // "true (sidesway uninhibited) or false (braced)"
+            Some(d) => {
+                let said: Vec<String> = d
+                    .options
+                    .iter()
+                    .map(|o| format!("{} ({})", o.name, o.words))
+                    .collect();
+                said.join(" or ")
+            }
+            None => "true or false".into(),
+        },
         Kind::Number => match unit {
             Some(UsUnit::Ft) => "a length in feet, e.g. 13.5 or 13'-6\"".into(),
             Some(UsUnit::In) => "a length in inches, e.g. 6.5 or 6-1/2\"".into(),
@@ -129,7 +130,27 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
                 Some("mpa") => "a number in MPa".into(),
                 Some("mm3") => "a number in mm3".into(),
                 Some("knm") => "a number in kNm".into(),
-                _ => "a number".into(),
+                _ => match info.described {
+                    // "G_A, a number of 0 or more (sum of EI/L of ...)"
+                    Some(d) => {
+                        let sign = match d.value {
+                            member_schema::Value::Number(member_schema::Sign::Positive) => {
+                                " greater than 0"
+                            }
+                            member_schema::Value::Number(member_schema::Sign::NonNegative) => {
+                                " of 0 or more"
+                            }
+                            _ => "",
+                        };
+                        let symbol = if d.symbol.is_empty() {
+                            String::new()
+                        } else {
+                            format!("{}, ", d.symbol)
+                        };
+                        format!("{symbol}a number{sign} ({})", d.meaning)
+                    }
+                    None => "a number".into(),
+                },
             },
         },
     }
@@ -170,7 +191,7 @@ impl RowContext<'_> {
 pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, Vec<RowProblem>> {
     let line = record.line;
     let mut problems = Vec::new();
-    let mut given: Vec<(&'static KeyInfo, Value)> = Vec::new();
+    let mut given: Vec<(KeyInfo, Value)> = Vec::new();
     let mut failed: Vec<&'static str> = Vec::new();
     for (index, field) in record.fields.iter().enumerate() {
         let column = ctx.columns.get(index);
@@ -206,7 +227,13 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
         let value = match info.kind {
             Kind::Text => Ok(Value::String(field.text.clone())),
             Kind::Name => {
-                let t = field.text.trim().to_ascii_lowercase();
+                // Names are read whatever their case; the member file
+                // writes them in lower case, but for the annex letters.
+                let t = if info.key == "interaction_annex" {
+                    field.text.trim().to_ascii_uppercase()
+                } else {
+                    field.text.trim().to_ascii_lowercase()
+                };
                 if t.is_empty() {
                     continue;
                 }
@@ -249,7 +276,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                 problems.push(problem(
                     line,
                     column.header.clone(),
-                    expected_for(info, column.unit),
+                    expected_for(&info, column.unit),
                     message,
                 ));
             }
@@ -263,45 +290,36 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             .and_then(|(_, v)| v.as_str())
     };
 
-    // The member's own required keys.
-    for key in ["id", "length_mm", "axial_kn", "method"] {
-        if !has(key) {
-            let info = key_info(key);
-            problems.push(problem(
+    // The member's own required keys (member::schema), and the required
+    // keys of a group one of whose keys is given (angle_leg).
+    for info in keys() {
+        match info.group {
+            Group::Member if info.required && !has(info.key) => problems.push(problem(
                 line,
-                ctx.header_of(key),
-                info.map(|i| expected_for(i, None)).unwrap_or_default(),
-                format!("{key} is missing; every member needs one"),
-            ));
-        }
-    }
-    for frame in FRAMES {
-        let column = |inner: &str| format!("{frame}_{inner}");
-        if FRAME_KEYS.iter().any(|inner| has(&column(inner))) {
-            for inner in FRAME_KEYS {
-                let key = column(inner);
-                if !has(&key) {
+                ctx.header_of(info.key),
+                expected_for(&info, None),
+                format!("{} is missing; every member needs one", info.key),
+            )),
+            Group::Nested { key, .. }
+                if info.described.is_some_and(|d| d.required()) && !has(info.key) =>
+            {
+                let in_group =
+                    |i: &KeyInfo| matches!(i.group, Group::Nested { key: k, .. } if k == key);
+                if given.iter().any(|(i, _)| in_group(i)) {
+                    let needs: Vec<&str> = keys()
+                        .filter(|i| in_group(i) && i.described.is_some_and(|d| d.required()))
+                        .map(|i| i.key)
+                        .collect();
                     problems.push(problem(
                         line,
-                        ctx.header_of(&key),
-                        key_info(&key)
-                            .map(|i| expected_for(i, None))
-                            .unwrap_or_default(),
-                        format!(
-                            "{key} is missing; {frame} needs {frame}_sway, {frame}_g_a and {frame}_g_b"
-                        ),
+                        ctx.header_of(info.key),
+                        expected_for(&info, None),
+                        format!("{} is missing; {key} needs {}", info.key, in_words(&needs)),
                     ));
                 }
             }
+            _ => {}
         }
-    }
-    if has("angle_truss") && !has("angle_leg") {
-        problems.push(problem(
-            line,
-            ctx.header_of("angle_leg"),
-            "long or short",
-            "angle_leg is missing; angle_truss needs the connected leg",
-        ));
     }
 
     if let Some(m) = get("method") {
@@ -311,68 +329,69 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                 line,
                 ctx.header_of("method"),
                 key_info("method")
-                    .map(|i| expected_for(i, None))
+                    .map(|i| expected_for(&i, None))
                     .unwrap_or_default(),
                 format!("unknown method \"{m}\""),
             ));
         }
     }
 
-    // Names from the member file's fixed lists.
-    let kind_name = get("kind");
-    for key in [
-        "curve_major",
-        "curve_minor",
-        "load_duration",
-        "angle_leg",
-        "angle_truss",
-        "span_load_major",
-        "span_load_minor",
-        "load_level",
-        "interaction_annex",
-        "make",
-    ] {
-        let Some(v) = get(key) else { continue };
-        let allowed: &[&str] = match key {
-            "curve_major" | "curve_minor" => &["a0", "a", "b", "c", "d"],
-            "load_duration" => &["permanent", "long", "medium", "short", "instantaneous"],
-            "angle_leg" => &["long", "short"],
-            "angle_truss" => &["planar", "space"],
-            "span_load_major" | "span_load_minor" => &["uniform", "point"],
-            "load_level" => &["shear-centre", "compression-flange", "tension-flange"],
-            "interaction_annex" => &["A", "B"],
+    // Names from the member file's fixed lists (member::schema, and the
+    // section kind's choices in section::schema), read without regard to
+    // case and kept as described.
+    let kind_name = get("kind").map(str::to_string);
+    let mut unknown: Vec<(&'static str, String, Vec<&'static str>)> = Vec::new();
+    for (info, value) in given.iter_mut().filter(|(i, _)| i.kind == Kind::Name) {
+        let Some(v) = value.as_str() else { continue };
+        let allowed: Vec<&'static str> = match (info.described, info.key) {
+            (Some(d), _) if !d.options.is_empty() => d.names().collect(),
             // The section kind's choices (section::schema); other kinds
             // have no make, and the section check says so.
-            _ => match kind_name.and_then(schema::kind).and_then(|k| k.key(key)) {
+            (None, "make") => match kind_name
+                .as_deref()
+                .and_then(schema::kind)
+                .and_then(|k| k.key("make"))
+            {
                 Some(schema::Key {
                     value: schema::Value::Choice(options),
                     ..
-                }) => options,
+                }) => options.to_vec(),
                 _ => continue,
             },
+            _ => continue,
         };
-        if !allowed.contains(&v) {
-            failed.push(key);
-            problems.push(problem(
-                line,
-                ctx.header_of(key),
-                allowed.join(", "),
-                format!("unknown {key} \"{v}\""),
-            ));
+        match allowed.iter().find(|a| a.eq_ignore_ascii_case(v)) {
+            Some(name) => *value = Value::String((*name).to_string()),
+            None => unknown.push((info.key, v.to_string(), allowed)),
         }
     }
+    for (key, v, allowed) in unknown {
+        failed.push(key);
+        problems.push(problem(
+            line,
+            ctx.header_of(key),
+            allowed.join(", "),
+            format!("unknown {key} \"{v}\""),
+        ));
+    }
+    let get = |key: &str| {
+        given
+            .iter()
+            .find(|(i, _)| i.key == key)
+            .and_then(|(_, v)| v.as_str())
+    };
 
     // The section.
-    let present: Vec<&'static str> = given
+    let present: Vec<KeyInfo> = given
         .iter()
-        .map(|(i, _)| i.key)
-        .chain(failed.iter().copied())
+        .map(|(i, _)| *i)
+        .chain(failed.iter().filter_map(|k| key_info(k)))
         .collect();
     let in_group = |group: Group| -> Vec<&'static str> {
         present
             .iter()
-            .copied()
-            .filter(|k| *k != "kind" && key_info(k).map(|i| i.group) == Some(group))
+            .filter(|i| i.key != "kind" && i.group == group)
+            .map(|i| i.key)
             .collect()
     };
     let section_given = in_group(Group::Section);
@@ -381,7 +400,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             line,
             ctx.header_of("kind"),
             key_info("kind")
-                .map(|i| expected_for(i, None))
+                .map(|i| expected_for(&i, None))
                 .unwrap_or_default(),
             "kind is missing; every member needs a section kind",
         )),
@@ -393,7 +412,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                     line,
                     ctx.header_of("kind"),
                     key_info("kind")
-                        .map(|i| expected_for(i, None))
+                        .map(|i| expected_for(&i, None))
                         .unwrap_or_default(),
                     format!("unknown section kind \"{kind}\""),
                 ));
@@ -411,7 +430,7 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
                             line,
                             ctx.header_of(key),
                             key_info(key)
-                                .map(|i| expected_for(i, None))
+                                .map(|i| expected_for(&i, None))
                                 .unwrap_or_default(),
                             format!("{key} is missing; a {name} section needs it"),
                         ));
@@ -435,10 +454,16 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
         },
     }
 
-    // The material: a grade, a custom steel, or a custom timber.
+    // The material: a grade, a custom steel, or a custom timber (the
+    // forms of member::schema::MATERIAL).
     let mat_given = in_group(Group::Material);
-    let any_timber = TIMBER_KEYS.iter().any(|k| mat_given.contains(k));
-    let any_custom = CUSTOM_KEYS.iter().any(|k| mat_given.contains(k));
+    let timber_keys: Vec<&'static str> = form_keys("timber").map(|k| k.key).collect();
+    let steel_needs: Vec<&'static str> = form_keys("steel")
+        .filter(|k| k.required())
+        .map(|k| k.key)
+        .collect();
+    let any_timber = timber_keys.iter().any(|k| mat_given.contains(k));
+    let any_custom = form_keys("steel").any(|k| mat_given.contains(&k.key));
     let has_grade = mat_given.contains(&"grade");
     let conflict = |problems: &mut Vec<RowProblem>, key: &str, why: &str| {
         problems.push(problem(
@@ -457,42 +482,33 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             );
         }
     } else if any_timber {
-        for key in TIMBER_KEYS {
+        let needs = in_words(&timber_keys);
+        for &key in &timber_keys {
             if !mat_given.contains(&key) {
                 problems.push(problem(
                     line,
                     ctx.header_of(key),
                     key_info(key)
-                        .map(|i| expected_for(i, None))
+                        .map(|i| expected_for(&i, None))
                         .unwrap_or_default(),
-                    format!("{key} is missing; a custom timber needs fc0k_mpa, e005_mpa, e0mean_mpa and timber"),
+                    format!("{key} is missing; a custom timber needs {needs}"),
                 ));
             }
         }
-        for key in CUSTOM_KEYS.iter().filter(|k| mat_given.contains(k)) {
-            conflict(&mut problems, key, "the timber values");
-        }
-        if let Some(t) = get("timber") {
-            if t != "solid" && t != "glulam" {
-                failed.push("timber");
-                problems.push(problem(
-                    line,
-                    ctx.header_of("timber"),
-                    "solid or glulam",
-                    format!("unknown timber \"{t}\""),
-                ));
-            }
+        for key in form_keys("steel").filter(|k| mat_given.contains(&k.key)) {
+            conflict(&mut problems, key.key, "the timber values");
         }
     } else if any_custom {
-        for key in ["fy_mpa", "e_mpa"] {
+        let needs = in_words(&steel_needs);
+        for &key in &steel_needs {
             if !mat_given.contains(&key) {
                 problems.push(problem(
                     line,
                     ctx.header_of(key),
                     key_info(key)
-                        .map(|i| expected_for(i, None))
+                        .map(|i| expected_for(&i, None))
                         .unwrap_or_default(),
-                    format!("{key} is missing; a custom material needs fy_mpa and e_mpa"),
+                    format!("{key} is missing; a custom material needs {needs}"),
                 ));
             }
         }
@@ -514,48 +530,44 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
     let mut member = Map::new();
     let mut section = Map::new();
     let mut material = Map::new();
-    let mut angle = Map::new();
-    let mut frames = [Map::new(), Map::new()];
+    let mut nested: Vec<(&'static str, Map<String, Value>)> = Vec::new();
     for (info, value) in given {
-        if info.group == Group::Frame {
-            if let Some((frame, inner)) = frame_parts(info.key) {
-                let i = usize::from(frame == FRAMES[1]);
-                if let Some(target) = frames.get_mut(i) {
-                    target.insert(inner.to_string(), value);
-                }
-            }
-            continue;
-        }
         let (target, key) = match info.group {
             Group::Member => (&mut member, info.key),
             Group::Section => (&mut section, info.key),
             Group::Material => (&mut material, info.key),
-            Group::Angle => (
-                &mut angle,
-                info.key.strip_prefix("angle_").unwrap_or(info.key),
-            ),
-            Group::Frame => continue,
+            Group::Nested { key, prefix } => {
+                let at = match nested.iter().position(|(k, _)| *k == key) {
+                    Some(at) => at,
+                    None => {
+                        nested.push((key, Map::new()));
+                        nested.len() - 1
+                    }
+                };
+                match nested.get_mut(at) {
+                    Some((_, map)) => {
+                        (map, info.described.map_or(info.key, |d| d.in_group(prefix)))
+                    }
+                    None => continue,
+                }
+            }
         };
         target.insert(key.to_string(), value);
     }
     member.insert("section".into(), Value::Object(section));
     member.insert("material".into(), Value::Object(material));
-    if !angle.is_empty() {
-        member.insert("angle_connection".into(), Value::Object(angle));
-    }
-    for (frame, inner) in FRAMES.iter().zip(frames) {
-        if !inner.is_empty() {
-            member.insert((*frame).into(), Value::Object(inner));
-        }
+    for (key, map) in nested {
+        member.insert(key.into(), Value::Object(map));
     }
     let value = Value::Object(member);
     file::deserialize_member(&value).map_err(|(path, inner)| {
         let key = missing_field(&inner).unwrap_or_else(|| {
-            if let Some(k) = path.strip_prefix("angle_connection.") {
-                return format!("angle_{k}");
-            }
-            if let Some((frame, k)) = path.split_once('.').filter(|(f, _)| FRAMES.contains(f)) {
-                return format!("{frame}_{k}");
+            if let Some((outer, k)) = path.split_once('.') {
+                if let Some(member_schema::Value::Group { prefix, .. }) =
+                    member_schema::member_key(outer).map(|d| d.value)
+                {
+                    return format!("{prefix}_{k}");
+                }
             }
             path.rsplit('.')
                 .next()
@@ -575,10 +587,19 @@ pub(super) fn read_row(record: &Record, ctx: &RowContext<'_>) -> Result<Member, 
             } else {
                 ctx.header_of(&key)
             },
-            info.map(|i| expected_for(i, None)).unwrap_or_default(),
+            info.map(|i| expected_for(&i, None)).unwrap_or_default(),
             inner,
         )]
     })
+}
+
+/// Keys as a reader lists them: "a, b and c".
+fn in_words(keys: &[&str]) -> String {
+    match keys.split_last() {
+        Some((last, rest)) if !rest.is_empty() => format!("{} and {last}", rest.join(", ")),
+        Some((last, _)) => (*last).to_string(),
+        None => String::new(),
+    }
 }
 
 pub(super) fn missing_field(message: &str) -> Option<String> {
@@ -619,15 +640,19 @@ pub fn parse_csv_within(text: &str, max_rows: usize) -> CsvImport {
     let rows: Vec<Record> = records.collect();
     let mut header_problems = Vec::new();
     let columns = read_header(&header, &mut header_problems);
-    let missing: Vec<&str> = REQUIRED
-        .iter()
-        .copied()
+    let missing: Vec<&str> = keys()
+        .filter(|i| i.required)
+        .map(|i| i.key)
         .filter(|key| !columns.iter().any(|c| c.info.map(|i| i.key) == Some(*key)))
         .collect();
+    // A column that starts a material: the first key of each form (grade,
+    // fc0k_mpa, fy_mpa).
     let has_material = columns.iter().any(|c| {
-        c.info
-            .map(|i| i.key == "grade" || i.key == "fy_mpa" || i.key == "fc0k_mpa")
-            .unwrap_or(false)
+        c.info.is_some_and(|i| {
+            member_schema::MATERIAL
+                .iter()
+                .any(|f| f.keys.first().map(|k| k.key) == Some(i.key))
+        })
     });
     let mut all = header_problems;
     all.append(&mut out.problems);

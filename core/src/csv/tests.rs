@@ -139,7 +139,7 @@ fn feet_and_inches() {
 
 #[test]
 fn typed_values_come_back_in_stored_units() {
-    let t = |text: &str, key: &str, system: UnitSystem| parse_typed(text, key, system, false);
+    let t = |text: &str, key: &str, system: UnitSystem| parse_typed(text, key, system);
     assert_eq!(t("3.6", "length_mm", UnitSystem::Si).unwrap(), 3600.0);
     assert_eq!(
         t("13'-6\"", "length_mm", UnitSystem::Us).unwrap(),
@@ -148,11 +148,16 @@ fn typed_values_come_back_in_stored_units() {
     assert_eq!(t("12", "length_mm", UnitSystem::Us).unwrap(), 12.0 * 304.8);
     assert_eq!(t("1/2\"", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
     assert_eq!(t("0.5", "depth_mm", UnitSystem::Us).unwrap(), 12.7);
-    assert_eq!(t("1,250", "axial_kn", UnitSystem::Si).unwrap(), 1250.0);
-    assert_eq!(
-        parse_typed("1,250", "axial_kn", UnitSystem::Si, true).unwrap(),
-        1.25
-    );
+    // Rule 5: in a field a single point is the decimal mark; a single
+    // comma too, except before exactly three digits, which is refused as
+    // ambiguous (1250 or 1.25?), naming both ways to type it.
+    let why = t("1,250", "axial_kn", UnitSystem::Si).unwrap_err();
+    assert!(why.contains("1250") && why.contains("1.250"), "{why}");
+    assert_eq!(t("12,50", "axial_kn", UnitSystem::Si).unwrap(), 12.5);
+    assert_eq!(t("1.250", "axial_kn", UnitSystem::Si).unwrap(), 1.25);
+    assert_eq!(t("1,250.5", "axial_kn", UnitSystem::Si).unwrap(), 1250.5);
+    assert_eq!(t("1.234,5", "axial_kn", UnitSystem::Si).unwrap(), 1234.5);
+    assert_eq!(t("1 250", "axial_kn", UnitSystem::Si).unwrap(), 1250.0);
     assert_eq!(
         t("50", "fy_mpa", UnitSystem::Us).unwrap(),
         units::ksi_to_mpa(50.0)
@@ -283,7 +288,9 @@ fn refuses_rows_over_a_given_limit_and_headless_files() {
     assert!(parse_csv("").problems[0].message.contains("empty"));
     let got = parse_csv("id,kind\nA,rect\n");
     assert!(
-        got.problems[0].message.contains("no column for length_mm"),
+        got.problems[0]
+            .message
+            .contains("no column for method, length_mm"),
         "{:?}",
         got.problems
     );
@@ -396,19 +403,24 @@ fn frame_columns_read_and_report_bad_values() {
         .iter()
         .map(|p| (p.line, p.column.as_str(), p.expected.as_str()))
         .collect();
-    let g =
-        "G, a number of 0 or more (sum of EI/L of the columns over that of the beams at the end)";
+    let g = |end: &str, axis: &str| {
+        format!(
+            "G_{end},{axis}, a number of 0 or more (sum of EI/L of the columns over that of the \
+             beams at end {end})"
+        )
+    };
+    let (gby, gay, gaz) = (g("B", "y"), g("A", "y"), g("A", "z"));
     assert_eq!(
         problems,
         vec![
-            (4, "frame_major_g_b", g),
+            (4, "frame_major_g_b", gby.as_str()),
             (
                 5,
                 "Frame Major Sway",
                 "true (sidesway uninhibited) or false (braced)"
             ),
-            (5, "frame-major-g-a", g),
-            (6, "frame_minor_g_a", g),
+            (5, "frame-major-g-a", gay.as_str()),
+            (6, "frame_minor_g_a", gaz.as_str()),
         ],
         "{:#?}",
         got.problems
@@ -513,7 +525,7 @@ const EVERY: &str = r#"{"format": "strutline.members", "version": 3, "title": "e
      "m_major_b_knm": 17.25, "m_major_span_knm": 60.75, "span_load_major": "point",
      "m_minor_a_knm": 1.5, "m_minor_b_knm": 1.5, "m_minor_span_knm": -0.125,
      "span_load_minor": "uniform", "k_lt": 0.5, "lcr_lt_mm": 1800, "lt_restrained": true,
-     "load_level": "compression-flange"},
+     "load_level": "compression-flange", "amplify_moments": false, "interaction_annex": "A"},
     {"id": "F15", "section": {"kind": "i", "depth_mm": 240, "width_mm": 240, "flange_mm": 17,
      "web_mm": 10, "root_radius_mm": 21}, "material": {"grade": "S355"}, "length_mm": 5400,
      "axial_kn": 380, "method": "en1993-1-1",
@@ -548,17 +560,34 @@ fn json_csv_json_keeps_every_member_exactly() {
     // angle_connection is two flat columns, not a JSON cell.
     let header = csv_text.lines().next().unwrap();
     assert!(
-        header.contains(",csa_n,angle_leg,angle_truss,m_major_a_knm,"),
+        header.contains(",frame_minor_g_b,angle_leg,angle_truss,k_lt,"),
         "{header}"
     );
     let b14 = again.members.iter().find(|m| m.id == "B14").unwrap();
     assert!(b14.lt_restrained && b14.m_minor_span_knm == -0.125);
+    // The beam-column keys, at their non-default values, both ways; absent
+    // (their defaults) on every other member.
+    assert!(!b14.amplify_moments);
+    assert_eq!(
+        b14.interaction_annex,
+        crate::member::InteractionAnnex::A,
+        "{csv_text}"
+    );
+    assert!(
+        header.contains(",amplify_moments,interaction_annex"),
+        "{header}"
+    );
+    assert!(again
+        .members
+        .iter()
+        .filter(|m| m.id != "B14")
+        .all(|m| m.amplify_moments && m.interaction_annex == crate::member::InteractionAnnex::B));
     assert!(!csv_text.contains('{'), "{csv_text}");
     // The frames are three flat columns each, after the buckling lengths.
     assert!(
         header.contains(
             ",lcr_torsion_mm,frame_major_sway,frame_major_g_a,frame_major_g_b,\
-             frame_minor_sway,frame_minor_g_a,frame_minor_g_b,axial_kn,"
+             frame_minor_sway,frame_minor_g_a,frame_minor_g_b,angle_leg,"
         ),
         "{header}"
     );
@@ -769,7 +798,7 @@ mod fuzz {
 fn version_3_keys_are_left_out_and_said_so() {
     let f = crate::file::parse(include_str!("../../../examples/tarnbeck-crane-hall.json")).unwrap();
     let text = to_csv(&f);
-    for key in NOT_IN_CSV {
+    for key in not_in_csv() {
         assert!(!text.contains(key), "{key} in {text}");
     }
     let said = left_out(&f).unwrap();
@@ -798,7 +827,7 @@ fn every_described_section_key_is_a_column() {
         for key in described.keys {
             let info = key_info(key.key).unwrap_or_else(|| {
                 panic!(
-                    "section kind \"{}\" has key \"{}\", which csv::keys::KEYS does not list",
+                    "section kind \"{}\" has key \"{}\", which csv::keys::SECTION_KEYS does not list",
                     described.name, key.key
                 )
             });
@@ -812,10 +841,13 @@ fn every_described_section_key_is_a_column() {
         }
     }
     // And no section column that no kind has.
-    for info in keys::KEYS.iter().filter(|i| i.group == Group::Section) {
+    for info in keys::SECTION_KEYS
+        .iter()
+        .filter(|i| i.group == Group::Section)
+    {
         assert!(
             info.key == "kind" || schema::KINDS.iter().any(|k| k.key(info.key).is_some()),
-            "csv::keys::KEYS lists section column \"{}\", which no kind describes",
+            "csv::keys::SECTION_KEYS lists section column \"{}\", which no kind describes",
             info.key
         );
     }

@@ -4,6 +4,8 @@ use serde_json::{Map, Value};
 
 use super::keys::*;
 use crate::file::{self, MemberFile};
+use crate::member::schema as member_schema;
+use crate::member::Member;
 use crate::units::{self, Quantity, UnitSystem, UsUnit};
 
 pub(super) fn cell_text(v: &Value) -> String {
@@ -37,9 +39,15 @@ pub fn to_csv(file: &MemberFile) -> String {
     to_csv_in(file, UnitSystem::Si)
 }
 
-/// The member keys (version 3) a CSV row does not carry.
-pub const NOT_IN_CSV: [&str; 1] = [NOT_IN_CSV_0];
-const NOT_IN_CSV_0: &str = "buckling_model";
+/// The member keys a CSV row does not carry: the structured values of
+/// [`member::schema::MEMBER`](crate::member::schema::MEMBER)
+/// (`buckling_model`).
+pub fn not_in_csv() -> impl Iterator<Item = &'static str> {
+    member_schema::MEMBER
+        .iter()
+        .filter(|k| k.value == member_schema::Value::Structure)
+        .map(|k| k.key)
+}
 
 /// What [`to_csv`] leaves out of `file`, in words for the person
 /// exporting ("member \"K1\": buckling_model"), or `None` when the CSV
@@ -49,11 +57,8 @@ pub fn left_out(file: &MemberFile) -> Option<String> {
         .members
         .iter()
         .filter_map(|m| {
-            let keys: Vec<&str> = [m.buckling_model.is_some()]
-                .iter()
-                .zip(NOT_IN_CSV)
-                .filter_map(|(given, key)| given.then_some(key))
-                .collect();
+            let written = file::json_value(m)?;
+            let keys: Vec<&str> = not_in_csv().filter(|k| written.get(k).is_some()).collect();
             (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
         })
         .collect();
@@ -83,87 +88,92 @@ pub(super) fn us_column(key: &str) -> Option<(String, UsUnit)> {
     Some((units::si_key_to_us(key, unit)?, unit))
 }
 
-/// The members as CSV in a unit system: [`UnitSystem::Si`] writes the
-/// member file's own keys and values (exact round trip);
-/// [`UnitSystem::Us`] writes each unit key in its US form (`length_ft`,
-/// `depth_in`, `axial_kip`, `fy_ksi`, ...) with the value converted, which
-/// reads back to within a few parts in 10^16 of the stored value (for
-/// values of ordinary magnitude, not subnormal ones).
-pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
-    let rows: Vec<Map<String, Value>> = file
-        .members
-        .iter()
-        .map(|m| {
-            let mut flat = Map::new();
-            if let Some(Value::Object(obj)) = file::json_value(m) {
-                for (key, value) in obj {
-                    match (key.as_str(), value) {
-                        ("section" | "material", Value::Object(inner)) => {
-                            for (k2, v2) in inner {
-                                flat.insert(k2, v2);
-                            }
-                        }
-                        // Not carried by CSV; see [`left_out`].
-                        (NOT_IN_CSV_0, _) => {}
-                        (frame, Value::Object(inner)) if FRAMES.contains(&frame) => {
-                            for (k2, v2) in inner {
-                                flat.insert(format!("{frame}_{k2}"), v2);
-                            }
-                        }
-                        ("angle_connection", Value::Object(inner)) => {
-                            for (k2, v2) in inner {
-                                flat.insert(format!("angle_{k2}"), v2);
-                            }
-                        }
-                        (_, value) => {
-                            flat.insert(key, value);
-                        }
+/// A member's CSV cells by column key: the member file's keys with the
+/// section's and material's flattened, a group's keys (`angle_connection`,
+/// `frame_major`, `frame_minor`) as `<prefix>_<key>`, and the keys CSV
+/// does not carry ([`left_out`]) dropped, all as `member::schema` says.
+pub fn cells(m: &Member) -> Map<String, Value> {
+    let mut flat = Map::new();
+    if let Some(Value::Object(obj)) = file::json_value(m) {
+        for (key, value) in obj {
+            match (key.as_str(), value) {
+                ("section" | "material", Value::Object(inner)) => {
+                    for (k2, v2) in inner {
+                        flat.insert(k2, v2);
                     }
                 }
+                (_, value) => match member_schema::member_key(&key).map(|d| d.value) {
+                    // Not carried by CSV; see [`left_out`].
+                    Some(member_schema::Value::Structure) => {}
+                    Some(member_schema::Value::Group { prefix, .. }) => {
+                        if let Value::Object(inner) = value {
+                            for (k2, v2) in inner {
+                                flat.insert(format!("{prefix}_{k2}"), v2);
+                            }
+                        }
+                    }
+                    _ => {
+                        flat.insert(key, value);
+                    }
+                },
             }
-            flat
-        })
-        .collect();
-    // The keys used, in the order first met (a sort would add its code to
-    // the wasm).
-    let mut used: Vec<&str> = Vec::new();
-    for key in rows.iter().flat_map(|r| r.keys()) {
-        if !used.contains(&key.as_str()) {
-            used.push(key);
         }
     }
-    let mut columns: Vec<&str> = KEYS
-        .iter()
-        .map(|i| i.key)
-        .filter(|k| REQUIRED.contains(k) || used.contains(k))
-        .collect();
-    // Keys this build does not list (a newer member file), kept at the end.
-    for key in &used {
-        if key_info(key).is_none() {
-            columns.push(key);
+    flat
+}
+
+/// The columns of a CSV file and their headings in a unit system, from
+/// the keys its rows use; writes the header and each row, so a long list
+/// can be written a member at a time once its keys are known.
+#[derive(Debug, Clone)]
+pub struct Layout {
+    columns: Vec<String>,
+    us: Vec<Option<(String, UsUnit)>>,
+}
+
+impl Layout {
+    /// The columns for rows that use the keys `used` (each once, in the
+    /// order first met): the required ones and the used ones in the order
+    /// of the columns (`keys::keys`), then keys this build does not list (a newer member
+    /// file) at the end.
+    pub fn new(used: &[&str], system: UnitSystem) -> Layout {
+        let mut columns: Vec<String> = keys()
+            .filter(|i| i.required || used.contains(&i.key))
+            .map(|i| i.key.to_string())
+            .collect();
+        for key in used {
+            if key_info(key).is_none() {
+                columns.push((*key).to_string());
+            }
         }
+        let us = columns
+            .iter()
+            .map(|key| match system {
+                UnitSystem::Us => us_column(key),
+                UnitSystem::Si => None,
+            })
+            .collect();
+        Layout { columns, us }
     }
-    let us: Vec<Option<(String, UsUnit)>> = columns
-        .iter()
-        .map(|key| match system {
-            UnitSystem::Us => us_column(key),
-            UnitSystem::Si => None,
-        })
-        .collect();
-    let mut out = String::with_capacity(64 * (rows.len() + 1));
-    for (i, (key, u)) in columns.iter().zip(&us).enumerate() {
-        if i > 0 {
-            out.push(',');
-        }
-        out.push_str(u.as_ref().map(|(h, _)| h.as_str()).unwrap_or(key));
-    }
-    out.push_str("\r\n");
-    for row in &rows {
-        for (i, (key, u)) in columns.iter().zip(&us).enumerate() {
+
+    /// The header line (with its CRLF).
+    pub fn push_header(&self, out: &mut String) {
+        for (i, (key, u)) in self.columns.iter().zip(&self.us).enumerate() {
             if i > 0 {
                 out.push(',');
             }
-            match (row.get(*key), u) {
+            out.push_str(u.as_ref().map_or(key.as_str(), |(h, _)| h.as_str()));
+        }
+        out.push_str("\r\n");
+    }
+
+    /// One row of [`cells`] (with its CRLF).
+    pub fn push_row(&self, row: &Map<String, Value>, out: &mut String) {
+        for (i, (key, u)) in self.columns.iter().zip(&self.us).enumerate() {
+            if i > 0 {
+                out.push(',');
+            }
+            match (row.get(key), u) {
                 (None, _) => {}
                 (Some(Value::Number(n)), Some((_, unit))) => match n.as_f64() {
                     Some(f) => out.push_str(&format!("{}", unit.from_si(f))),
@@ -173,6 +183,30 @@ pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
             }
         }
         out.push_str("\r\n");
+    }
+}
+
+/// The members as CSV in a unit system: [`UnitSystem::Si`] writes the
+/// member file's own keys and values (exact round trip);
+/// [`UnitSystem::Us`] writes each unit key in its US form (`length_ft`,
+/// `depth_in`, `axial_kip`, `fy_ksi`, ...) with the value converted, which
+/// reads back to within a few parts in 10^16 of the stored value (for
+/// values of ordinary magnitude, not subnormal ones).
+pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
+    let rows: Vec<Map<String, Value>> = file.members.iter().map(cells).collect();
+    // The keys used, in the order first met (a sort would add its code to
+    // the wasm).
+    let mut used: Vec<&str> = Vec::new();
+    for key in rows.iter().flat_map(|r| r.keys()) {
+        if !used.contains(&key.as_str()) {
+            used.push(key);
+        }
+    }
+    let layout = Layout::new(&used, system);
+    let mut out = String::with_capacity(64 * (rows.len() + 1));
+    layout.push_header(&mut out);
+    for row in &rows {
+        layout.push_row(row, &mut out);
     }
     out
 }

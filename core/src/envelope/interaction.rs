@@ -467,6 +467,80 @@ mod tests {
     }
 
     #[test]
+    fn en1993_square_hollow_section_follows_annex_b_in_closed_form() {
+        // EN 1993-1-1:2005 6.3.3 equation (6.61) with the interaction
+        // factor of Annex B, Table B.1 (members not susceptible to
+        // torsional deformations, Class 1 and 2): k_yy = C_my (1 +
+        // (lambda_y - 0.2) n_y) <= C_my (1 + 0.8 n_y), n_y = N_Ed /
+        // (chi_y N_Rk / gamma_M1); Table B.3 with psi = 1 (uniform moment):
+        // C_my = 0.6 + 0.4 psi = 1.0; chi_LT = 1 for a closed section
+        // (recalled from the standard). So at a compression N the largest
+        // moment is M_pl,Rd (1 - n_y) / k_yy, with chi_y and lambda_y of the
+        // check's own major-axis mode and M_pl,Rd its bending resistance
+        // with no compression. For a square section (6.62) has k_zy = 0.6
+        // k_yy and the same chi, and 6.2.9 uses N / N_pl: neither governs.
+        let section: SectionSpec = serde_json::from_str(
+            r#"{"kind": "rhs", "depth_mm": 200, "width_mm": 200, "wall_mm": 10,
+                "outer_radius_mm": 20, "make": "hot-finished"}"#,
+        )
+        .unwrap();
+        let mut m = Member::new(
+            "R1",
+            section,
+            MaterialSpec::Custom {
+                fy_mpa: 355.0,
+                e_mpa: 210_000.0,
+                g_mpa: None,
+            },
+            5000.0,
+            600.0,
+            Method::En1993,
+        );
+        m.m_major_a_knm = 50.0;
+        m.m_major_b_knm = 50.0;
+        let p = Prepared::new(&m).unwrap();
+        let c = curve(&p, Method::En1993, Axis::Major).unwrap();
+        assert!(c.worked, "EN 1993-1-1's equations shape the curve");
+        let own = p.check().unwrap();
+        let major = own
+            .modes
+            .iter()
+            .find(|x| x.mode == check::Mode::Major)
+            .unwrap();
+        let (chi, lambda) = (major.reduction, major.relative_slenderness);
+        let mut beam = p.clone();
+        beam.member.axial_kn = 0.0;
+        let m_rd = beam.check().unwrap().bending.unwrap().major.resistance_knm;
+        // M_pl,Rd = W_pl f_y: the section's plastic modulus of a hollow
+        // square with round corners is near (b^3 - (b - 2t)^3) / 4.
+        assert!(
+            (m_rd / (355.0 * (200.0f64.powi(3) - 180.0f64.powi(3)) / 4.0 / 1e6) - 1.0).abs() < 0.05,
+            "{m_rd}"
+        );
+        let n_b = chi * own.squash_kn;
+        let mut compared = 0;
+        for pt in &c.points {
+            let n = pt.axial_kn / n_b;
+            let k_yy = (1.0 + (lambda - 0.2) * n).min(1.0 + 0.8 * n);
+            let want = m_rd * (1.0 - n) / k_yy;
+            assert!(
+                (pt.moment_knm - want).abs() <= 1e-6 * m_rd,
+                "N {} kN: curve {} kNm, (6.61) {want} kNm",
+                pt.axial_kn,
+                pt.moment_knm
+            );
+            compared += 1;
+        }
+        assert_eq!(compared, POINTS + 1);
+        // The top is chi_y N_pl: the flexural buckling resistance.
+        assert!(
+            (c.top_kn - n_b).abs() <= 1e-6 * n_b,
+            "{} vs {n_b}",
+            c.top_kn
+        );
+    }
+
+    #[test]
     fn an_axis_without_moment_assumes_a_uniform_one_and_the_largest_moment_agrees() {
         let p = post(Method::En1993, 800.0, 120.0, 0.0);
         let c = curve(&p, Method::En1993, Axis::Minor).unwrap();

@@ -56,6 +56,13 @@ pub fn sample(
     // An AISC E5 angle's mode is E3 at its effective slenderness, which
     // ignores lcr: the curve is E3 itself, and the mode lies on it.
     probe.angle_connection = None;
+    // The curve is the method's resistance at a buckling length set
+    // directly: a frame or a buckling model of the member (which give the
+    // member's own length, and which the check refuses together with a
+    // set length) play no part in it.
+    probe.frame_major = None;
+    probe.frame_minor = None;
+    probe.buckling_model = None;
     let mut out = Vec::with_capacity(steps + 1);
     for k in 0..=steps {
         let lambda = from + (to - from) * (k as f64) / (steps as f64);
@@ -96,6 +103,27 @@ mod tests {
     )]
     use super::*;
     use crate::file;
+
+    #[test]
+    fn frames_and_buckling_models_sample_the_sections_curve() {
+        // The worked example's W2 (frame_major) and K1 (buckling_model):
+        // the envelope is the method's curve for the member's section at
+        // set buckling lengths, as for the same member without them.
+        let f = file::parse(include_str!("../../../examples/tarnbeck-crane-hall.json")).unwrap();
+        for m in &f.members {
+            let mut plain = m.clone();
+            plain.frame_major = None;
+            plain.frame_minor = None;
+            plain.buckling_model = None;
+            for mode in [Mode::Major, Mode::Minor] {
+                let p = Prepared::new(m).unwrap();
+                let got = sample(&p, p.member.method, mode, 0.0, 200.0, 20).unwrap();
+                let q = Prepared::new(&plain).unwrap();
+                let want = sample(&q, q.member.method, mode, 0.0, 200.0, 20).unwrap();
+                assert_eq!(got, want, "{} {mode:?}", m.id);
+            }
+        }
+    }
 
     #[test]
     fn the_curve_passes_through_the_members_own_resistance() {

@@ -650,7 +650,8 @@ mod tests {
             },
             designation: None,
         };
-        let material = crate::material::resolve(&m.material, &section).unwrap();
+        let material =
+            crate::material::resolve(&m.material, crate::member::stock(&section)).unwrap();
         let steel = match material {
             crate::material::Material::Steel(s) => s,
             crate::material::Material::Timber(_) => panic!(),

@@ -3,7 +3,7 @@
 //! sigma (1 + (e c / i^2) sec((L_cr / (2 i)) sqrt(sigma / E))) = f_y
 //! (Young 1807; closed form in any text on the strength of materials).
 //!
-//! sigma is found by bisection on (0, min(f_y, sigma_E)): the left side
+//! sigma is found by the root finder ([`crate::roots`]) on (0, min(f_y, sigma_E)): the left side
 //! rises monotonically from 0 and is unbounded as sigma -> sigma_E, so the
 //! root is bracketed and unique. The eccentricity defaults to L_cr / 1000
 //! (the trace says so); the resistance is sigma A / gamma with the
@@ -26,6 +26,7 @@ use crate::member::Member;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
 use crate::outcome::{Mode, ModeResult, Warning};
+use crate::roots::{newton_bisect, Stop};
 use crate::trace::{step, sym, Trace};
 
 /// The mean stress at first yield, MPa, for strength `f`, modulus `e`,
@@ -36,61 +37,42 @@ pub fn first_yield_stress(f: f64, e: f64, lambda: f64, ecc: f64) -> f64 {
     // cos theta, h(s) = s (cos theta + ecc) - f cos theta, has the same root
     // on (0, sigma_E) and stays finite up to sigma_E (theta = pi/2), so a
     // bracketing solver can use it: h(0) = -f < 0, and h > 0 above the root.
-    let h = |s: f64| -> f64 {
-        let theta = (0.5 * lambda * (s.max(0.0) / e).sqrt()).min(FRAC_PI_2);
-        let c = crate::trig::cos(theta);
-        s * (c + ecc) - f * c
+    // dh/ds = c + ecc + (f - s) sin(theta) dtheta/ds, dtheta/ds = theta / (2 s)
+    // below pi/2 (0 where theta is held at pi/2); as s -> 0 the last term's
+    // sin(theta) theta / (2 s) tends to lambda^2 / (8 E).
+    let h = |s: f64| -> (f64, f64) {
+        let s = s.max(0.0);
+        let raw = 0.5 * lambda * (s / e).sqrt();
+        let theta = raw.min(FRAC_PI_2);
+        let (sin, c) = crate::trig::sin_cos(theta);
+        let turn = if raw >= FRAC_PI_2 {
+            0.0
+        } else if s > 0.0 {
+            sin * theta / (2.0 * s)
+        } else {
+            lambda * lambda / (8.0 * e)
+        };
+        (s * (c + ecc) - f * c, c + ecc + (f - s) * turn)
     };
     let hi0 = f.min(sigma_e);
     if !(hi0.is_finite() && hi0 > 0.0) {
         return 0.0;
     }
-    let (mut lo, mut hi) = (0.0_f64, hi0);
-    let (mut h_lo, mut h_hi) = (-f, h(hi0));
-    if h_hi <= 0.0 {
+    if h(hi0).0 <= 0.0 {
         return hi0;
     }
-    // Illinois variant of regula falsi: superlinear, and never leaves the
-    // bracket, so it converges as surely as bisection in a few steps.
-    let mut side = 0i8;
-    for _ in 0..200 {
-        let denom = h_hi - h_lo;
-        let mut mid = if denom > 0.0 {
-            hi - h_hi * (hi - lo) / denom
-        } else {
-            0.5 * (lo + hi)
-        };
-        if !(mid > lo && mid < hi) {
-            mid = 0.5 * (lo + hi);
-        }
-        let h_mid = h(mid);
-        if h_mid.abs() <= 1e-14 * f {
-            return mid;
-        }
-        if h_mid <= 0.0 {
-            lo = mid;
-            h_lo = h_mid;
-            if side == -1 {
-                h_hi *= 0.5;
-            }
-            side = -1;
-        } else {
-            hi = mid;
-            h_hi = h_mid;
-            if side == 1 {
-                h_lo *= 0.5;
-            }
-            side = 1;
-        }
-        if hi - lo <= 1e-13 * hi {
-            break;
-        }
-    }
-    if h_lo.abs() <= h_hi.abs() {
-        lo
-    } else {
-        hi
-    }
+    // h(0) = -f < 0 < h(hi0), and h rises on the bracket (s <= f there).
+    newton_bisect(
+        h,
+        0.0,
+        hi0,
+        0.5 * hi0,
+        Stop {
+            f: 1e-14 * f,
+            step: 1e-15 * hi0,
+            bracket: 1e-13,
+        },
+    )
 }
 
 /// The eccentricity that the member's moments give its axial load: `None`

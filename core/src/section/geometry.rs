@@ -27,6 +27,8 @@
 
 use std::f64::consts::PI;
 
+use crate::roots::{newton_bisect, Stop};
+
 /// Integrals of a plane region about the origin: A, ∫y, ∫z, ∫y², ∫z², ∫yz.
 #[derive(Debug, Clone, Copy, Default, PartialEq)]
 pub struct Moments {
@@ -398,7 +400,7 @@ impl Parts {
                     Axis::Y => m.sz / m.a,
                     Axis::Z => m.sy / m.a,
                 };
-                solve_increasing(
+                newton_bisect(
                     |c| {
                         let (a, w) = self.area_below_and_width(axis, c);
                         (a - half, w)
@@ -406,51 +408,12 @@ impl Parts {
                     lo,
                     hi,
                     start,
-                    1e-12 * half,
+                    Stop::on_value(1e-12 * half),
                 )
             }
         };
         self.abs_moment(axis, c)
     }
-}
-
-/// Root of an increasing function f on [lo, hi] (f(lo) <= 0 <= f(hi)),
-/// given f and its derivative: Newton steps from `start`, replaced by
-/// bisection whenever a step would leave the shrinking bracket. Returns
-/// when |f| <= `ftol` or the bracket has collapsed.
-pub fn solve_increasing<F: Fn(f64) -> (f64, f64)>(
-    f: F,
-    mut lo: f64,
-    mut hi: f64,
-    start: f64,
-    ftol: f64,
-) -> f64 {
-    let mut x = if start.is_finite() {
-        start.clamp(lo, hi)
-    } else {
-        0.5 * (lo + hi)
-    };
-    for _ in 0..200 {
-        let (fx, dfx) = f(x);
-        if fx.abs() <= ftol {
-            return x;
-        }
-        if fx < 0.0 {
-            lo = x;
-        } else {
-            hi = x;
-        }
-        if hi - lo <= 1e-14 * (hi.abs() + lo.abs()) {
-            return x;
-        }
-        let newton = x - fx / dfx;
-        x = if dfx > 0.0 && newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-    }
-    x
 }
 
 const POLY: usize = 64;
@@ -664,7 +627,7 @@ impl Poly {
     /// Bending about an axis through the origin at angle θ: (plastic
     /// modulus, largest distance of the outline from the axis, arcs exact). The
     /// equal-area line parallel to the axis is found by
-    /// [`solve_increasing`] starting at the origin (put the centroid
+    /// [`crate::roots::newton_bisect`] starting at the origin (put the centroid
     /// there); `area` is the polygon's own area.
     pub fn bending(&self, theta: f64, area: f64) -> (f64, f64) {
         let (sin, cos) = crate::trig::sin_cos(theta);
@@ -678,7 +641,7 @@ impl Poly {
             });
         // The modulus is stationary at the equal-area line, so a line
         // 1e-10 A off changes it by far less than that.
-        let c = solve_increasing(
+        let c = newton_bisect(
             |c| {
                 let (a_hi, chord) = area_above_and_chord(st, c);
                 (half - a_hi, chord)
@@ -686,7 +649,7 @@ impl Poly {
             lo,
             hi,
             0.0,
-            1e-10 * half.abs(),
+            Stop::on_value(1e-10 * half.abs()),
         );
         let (_, m_hi, _, m_lo, _) = split_rotated(st, c);
         (m_hi - m_lo, self.extreme_t(sin, cos))
@@ -891,26 +854,6 @@ mod tests {
         close(mh, 9.0, 1e-14);
         close(al, 2.0, 1e-14);
         close(ml, -1.0, 1e-14);
-    }
-
-    #[test]
-    fn safeguarded_newton_on_a_line_a_curve_and_a_bad_start() {
-        close(
-            solve_increasing(|x| (x - 3.0, 1.0), 0.0, 10.0, 9.0, 1e-14),
-            3.0,
-            1e-12,
-        );
-        close(
-            solve_increasing(|x| (x * x * x - 2.0, 3.0 * x * x), 0.0, 2.0, 0.0, 1e-14),
-            2f64.cbrt(),
-            1e-10,
-        );
-        // A zero derivative at the start falls back to bisection.
-        close(
-            solve_increasing(|x| (x.powi(3), 3.0 * x * x), -1.0, 3.0, 1e-300, 1e-14),
-            0.0,
-            1e-4,
-        );
     }
 
     #[test]

@@ -163,7 +163,8 @@ mod tests {
     fn checked<R>(m: &Member, f: impl FnOnce(&crate::method::Input<'_>, &CheckResult) -> R) -> R {
         let r = check_member(m).unwrap();
         let section = m.section.build().unwrap();
-        let material = crate::material::resolve(&m.material, &section).unwrap();
+        let material =
+            crate::material::resolve(&m.material, crate::member::stock(&section)).unwrap();
         let input = crate::method::Input {
             member: m,
             section: &section,

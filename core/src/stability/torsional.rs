@@ -34,6 +34,7 @@
 //! `f(N_min) >= 0` (e.g. `f(N_a) = N_a^2 (N_b - N_a) a0^2 / i0^2`), so
 //! exactly one sign change lies in `(0, N_min]`, at the smallest root.
 
+use crate::roots::{newton_bisect, Stop};
 use std::f64::consts::PI;
 
 /// Euler load `pi^2 E I / L^2`, N (E in MPa, I in mm4, L in mm).
@@ -96,7 +97,6 @@ pub fn flexural_torsional_general(n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64
     if !(n_min > 0.0 && n_min.is_finite()) {
         return 0.0;
     }
-    let (mut lo, mut hi) = (0.0_f64, n_min);
     let (f_hi, _) = cubic(n_min, n_a, n_b, n_t, pa, pb);
     if f_hi <= 0.0 {
         // f(N_min) = 0 up to rounding: N_min is the root.
@@ -107,40 +107,22 @@ pub fn flexural_torsional_general(n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64
     // finish (the bracket keeps every step safe whatever the start).
     let start =
         flexural_torsional_single(n_a, n_t, pa).min(flexural_torsional_single(n_b, n_t, pb));
-    let mut x = if start > 0.0 && start < n_min {
+    let start = if start > 0.0 && start < n_min {
         start
     } else {
         0.5 * n_min
     };
-    for _ in 0..100 {
-        let (f, df) = cubic(x, n_a, n_b, n_t, pa, pb);
-        if f == 0.0 {
-            return x;
-        }
-        if f < 0.0 {
-            lo = x;
-        } else {
-            hi = x;
-        }
-        let step = f / df;
-        // Newton converges quadratically: once its step is below 1e-12 N_min
-        // the error is far below that, whether or not the step lands
-        // strictly inside the bracket (at the root it lands on its edge).
-        if step.abs() <= 1e-12 * n_min {
-            return (x - step).clamp(lo, hi);
-        }
-        let newton = x - step;
-        let next = if newton.is_finite() && newton > lo && newton < hi {
-            newton
-        } else {
-            0.5 * (lo + hi)
-        };
-        if hi - lo <= 1e-13 * n_min {
-            return next;
-        }
-        x = next;
-    }
-    x
+    newton_bisect(
+        |x| cubic(x, n_a, n_b, n_t, pa, pb),
+        0.0,
+        n_min,
+        start,
+        Stop {
+            f: 0.0,
+            step: 1e-12 * n_min,
+            bracket: 1e-13,
+        },
+    )
 }
 
 /// How the shear centre sits relative to the centroid.

@@ -2,6 +2,7 @@
 //! made afresh when the member, its kind, material or method changes.
 
 use super::frame::FrameEnds;
+use super::model::ColumnModel;
 use super::*;
 use strutline_core::buckling::chart::Frame;
 
@@ -263,6 +264,7 @@ pub(super) fn Editor(ctx: Ctx) -> impl IntoView {
     let initial_kind = fields::kind_of(&member.section);
     let initial_mode = MaterialMode::of(&member.material);
     let initial_method = member.method;
+    let modelled = member.buckling_model.is_some();
     view! {
         <h2 id="h-editor" class="pane-title">"Member " <span class="editing-id">{move || title.get()}</span></h2>
         <form class="editor" on:submit=|e| e.prevent_default() autocomplete="off">
@@ -332,9 +334,16 @@ pub(super) fn Editor(ctx: Ctx) -> impl IntoView {
             <fieldset>
                 <legend>"Length and restraint"</legend>
                 <NumField ctx=ctx field=fields::MEMBER_FIELDS[0] />
-                <AxisRestraint ctx=ctx major=true />
-                <AxisRestraint ctx=ctx major=false />
+                {if modelled {
+                    view! { <p class="hint" data-testid="restraint-by-model">"The flexural buckling lengths come from the column model below."</p> }.into_any()
+                } else {
+                    view! {
+                        <AxisRestraint ctx=ctx major=true />
+                        <AxisRestraint ctx=ctx major=false />
+                    }.into_any()
+                }}
             </fieldset>
+            <ColumnModel ctx=ctx />
             <fieldset>
                 <legend>"Design load"</legend>
                 <NumField ctx=ctx field=fields::MEMBER_FIELDS[1] />

@@ -168,6 +168,7 @@ mod editor;
 mod frame;
 mod list;
 mod listbar;
+mod model;
 mod picker_panel;
 mod results;
 mod save;

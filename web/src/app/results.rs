@@ -27,6 +27,7 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
                 if let Some(r) = c.result() {
                     // The docked verdict leaves its warnings here.
                     html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
+                    h.push(&report::checks_html(r, sys));
                 }
                 h.push(&crate::sectionview::of_checked(&c));
                 if let Some(r) = c.result() {
@@ -258,17 +259,7 @@ pub(super) fn Chart(
         let Some(el) = canvas.get() else {
             return;
         };
-        let dpr = browser::device_pixel_ratio();
-        let w = f64::from(el.client_width().max(1));
-        let h = f64::from(el.client_height().max(1));
-        // Resizing the bitmap reallocates it: only when the size changed.
-        let (bw, bh) = ((w * dpr).round() as u32, (h * dpr).round() as u32);
-        if el.width() != bw {
-            el.set_width(bw);
-        }
-        if el.height() != bh {
-            el.set_height(bh);
-        }
+        let dpr = browser::fit_canvas(&el);
         // What one chart records for tests, cleared before the other draws.
         for a in [
             "data-chart",

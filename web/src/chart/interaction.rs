@@ -52,8 +52,9 @@ pub struct InteractionData {
     pub n_max: f64,
     /// The member's utilisation and what governs it.
     pub utilisation: f64,
-    /// The governing check's name (`CheckResult::governing_check`).
-    pub governing_check: &'static str,
+    /// What governs, in the verdict's words (an interaction equation by
+    /// its number where one governs).
+    pub governs: String,
     /// Whether the check passes the member.
     pub passes: bool,
 }
@@ -114,7 +115,7 @@ pub fn build(
         panels: [panel(major, o_major), panel(minor, o_minor)],
         n_max,
         utilisation: result.utilisation,
-        governing_check: result.governing_check,
+        governs: crate::status::governing_text(result),
         passes: result.passes,
     })
 }
@@ -127,7 +128,7 @@ pub fn describe(d: &InteractionData, sys: UnitSystem) -> String {
         "Interaction, {}: utilisation {}, governs {}.",
         d.method.title(),
         crate::numtext::fixed(d.utilisation, 3),
-        d.governing_check
+        d.governs
     );
     for p in &d.panels {
         let c = &p.curve;
@@ -412,10 +413,12 @@ where
                 root.draw(&line(seg, pal.applied, 2.0)).map_err(err)?;
             }
         }
-        let tag = if inside {
-            "member · within"
-        } else {
-            "member · over"
+        // Within the plain sum is no pass while the method's interaction
+        // is not worked: the tag says so rather than "within".
+        let tag = match (c.worked, inside) {
+            (false, _) => "member · not checked",
+            (true, true) => "member · within",
+            (true, false) => "member · over",
         };
         let (tw, th) = text_box(tag, 12.0 * dpr);
         let right_room = f64::from(ax) + 10.0 * dpr + tw <= plot.right;
@@ -486,7 +489,7 @@ mod tests {
             };
             assert!(text.contains("major axis: at N_Ed 20.0 kN"), "{text}");
             assert!(text.contains(place), "{text}");
-            assert!(text.contains(r.governing_check), "{text}");
+            assert!(text.contains(&crate::status::governing_text(&r)), "{text}");
             assert_eq!(major.contains_member(), r.utilisation <= 1.0);
             // The minor axis carries no moment here: said so.
             assert!(text.contains("uniform one is assumed"), "{text}");
