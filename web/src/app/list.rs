@@ -149,6 +149,9 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     // The box's height, when laid out and whenever the window changes.
     Effect::new(move |_| {
         ctx.resize.track();
+        if !ctx.painted.get() {
+            return;
+        }
         if let Some(el) = scroller.get() {
             let h = f64::from(el.client_height());
             if h > 0.0 {
@@ -169,6 +172,10 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     // elsewhere (added, copied, moved, picked in another way).
     Effect::new(move |_| {
         let Some(id) = selected_id.get() else { return };
+        // Its scroll position needs the layout: not before the first frame.
+        if !ctx.painted.get() {
+            return;
+        }
         let Some(at) = shown.with_untracked(|s| s.0.iter().position(|c| c.member.id == id)) else {
             return;
         };

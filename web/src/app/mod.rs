@@ -101,6 +101,10 @@ struct Ctx {
     legend: RwSignal<crate::html::Html>,
     /// Whether the docked chart is open (narrow and upright screens).
     chart_open: RwSignal<bool>,
+    /// Whether the first frame has been drawn. What reads the layout
+    /// (the list box's height, the canvas's size) waits for it, so that
+    /// `start()` forces no layout and the rows are on screen first.
+    painted: RwSignal<bool>,
 }
 
 impl Ctx {
@@ -200,6 +204,7 @@ pub fn App() -> impl IntoView {
     let ws = RwSignal::new(initial);
     let checker = StoredValue::new(Checker::new());
     let selected = RwSignal::new(0usize);
+    let painted = RwSignal::new(false);
     // Bumped to check the next slice of a list not checked in full.
     let next_slice = RwSignal::new(0u64);
     // The engine's time and members over the slices since the list was
@@ -228,6 +233,10 @@ pub fn App() -> impl IntoView {
             r.checks
         });
         Checks(Arc::new(out))
+    });
+    // After the first frame (a task after its animation frame callbacks).
+    request_animation_frame(move || {
+        set_timeout(move || painted.set(true), std::time::Duration::ZERO)
     });
     // While members wait for their check, one more slice after this frame.
     Effect::new(move |_| {
@@ -263,6 +272,7 @@ pub fn App() -> impl IntoView {
         sheet: RwSignal::new(None),
         legend: RwSignal::new(crate::html::Html::new()),
         chart_open: RwSignal::new(false),
+        painted,
     };
     provide_context(ctx.units);
     if let Some((raw, reason)) = problem {

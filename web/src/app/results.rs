@@ -256,6 +256,10 @@ pub(super) fn Chart(
         let interaction = interaction_shown();
         ctx.resize.track();
         ctx.chart_open.track();
+        // Drawn after the first frame: its size needs the layout.
+        if !ctx.painted.get() {
+            return;
+        }
         let Some(el) = canvas.get() else {
             return;
         };
@@ -340,6 +344,9 @@ pub(super) fn Chart(
         current.track();
         ctx.chart_open.track();
         ctx.resize.track();
+        if !ctx.painted.get() {
+            return;
+        }
         request_animation_frame(move || {
             if let Some(el) = head.get_untracked() {
                 browser::set_root_px("--dock", f64::from(el.offset_height()));
