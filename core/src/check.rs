@@ -408,7 +408,14 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
             } else {
                 (un, "bending-minor")
             };
-            if m.axial_kn > 0.0 {
+            // Biaxial bending without axial load is still a combination
+            // of two actions: every code combines it (EN 1993-1-1 6.2.9
+            // Eq. 6.41 with n = 0 and 6.3.3; AISC 360-16 H1-1b with P_r =
+            // 0; CSA S16-19 13.8 with C_f = 0; EN 1995-1-1 Eqs. 6.11, 6.12,
+            // which (6.19), (6.20) become with sigma_c = 0), so its
+            // interaction equations are worked; one moment alone is the
+            // bending result.
+            if m.axial_kn > 0.0 || (um > 0.0 && un > 0.0) {
                 let ctx = interaction::Context {
                     method,
                     input,

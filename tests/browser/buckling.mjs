@@ -204,7 +204,7 @@ export function register(test, { withApp, open, OUT }) {
       assert.ok(gb > 0 && Number.isFinite(gb), `G_B ${gb}`);
       const stored = await page.evaluate((key) => localStorage.getItem(key), STORAGE_KEY);
       await page.waitForFunction(
-        (key) => /"frame_major":\{"sway":false,"g_a":10(\.0)?,/.test(localStorage.getItem(key) || ""),
+        (key) => /"frame_major":\s*\{\s*"sway":\s*false,\s*"g_a":\s*10(\.0)?,/.test(localStorage.getItem(key) || ""),
         STORAGE_KEY,
         { timeout: 10_000 },
       ).catch(() => assert.fail(`frame_major not stored: ${stored?.slice(0, 400)}`));

@@ -168,11 +168,11 @@ export async function seedStorage(context, text) {
   );
 }
 
-/** Opens the app and selects its first member, waiting for its editor and
- * its verdict. */
-export async function openForEditing(page, url) {
+/** Opens the app and selects its first member (or the first row that
+ * `row` selects), waiting for its editor and its verdict. */
+export async function openForEditing(page, url, row = "[data-testid=member-row]") {
   await page.goto(url, { waitUntil: "load" });
-  await page.locator("[data-testid=member-row]").first().click({ timeout: 20_000 });
+  await page.locator(row).first().click({ timeout: 20_000 });
   await page.locator("input[name=axial_kn]").first().waitFor({ state: "visible", timeout: 10_000 });
   await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
 }

@@ -608,18 +608,66 @@ fn typed_properties_take_the_larger_k_zy() {
 }
 
 #[test]
-fn without_axial_load_the_bending_result_stands() {
+fn without_axial_load_one_moment_is_the_bending_result() {
     let m = member(json!({
         "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 5000, "axial_kn": 0,
-        "m_major_a_knm": 150, "m_major_b_knm": 40, "m_minor_span_knm": 20
+        "m_major_a_knm": 150, "m_major_b_knm": 40, "m_major_span_knm": 20
     }));
     let r = check_member(&m).unwrap();
     let b = r.bending.unwrap();
     assert!(r.interaction.is_empty());
-    assert_eq!(
-        r.utilisation,
-        b.major.utilisation().max(b.minor.utilisation())
+    assert_eq!(r.utilisation, b.major.utilisation());
+}
+
+#[test]
+fn without_axial_load_biaxial_bending_is_still_combined() {
+    // Welded I 300 x 300 x 19 x 11 (Class 2: c/t = 144.5/19 = 7.61 <= 10 eps
+    // = 8.14), held laterally (chi_LT = 1), uniform M_y,Ed = 450 kNm and
+    // M_z,Ed = 170 kNm, N_Ed = 0. W_pl,y = b t_f (h - t_f) + t_w (h - 2
+    // t_f)^2 / 4 = 1 790 471 mm3, W_pl,z = t_f b^2 / 2 + (h - 2 t_f) t_w^2 / 4
+    // = 862 925.5 mm3; M_pl,y,Rd = 635.617 kNm, M_pl,z,Rd = 306.339 kNm.
+    // Each moment alone passes (0.708, 0.555), but 6.2.9.1(6) Eq. 6.41 with
+    // n = 0 (alpha = 2, beta = max(5 n, 1) = 1) gives (450/635.617)^2 +
+    // 170/306.339 = 1.05617, and Eq. 6.61 with Table B.1 (n_y = 0: k_yy =
+    // C_my = 1, k_yz = 0.6 k_zz = 0.6) 450/635.617 + 0.6 x 170/306.339 =
+    // 1.04093: the member fails. (Before the fix the interaction was skipped
+    // at N_Ed = 0 and the member passed at 0.708.)
+    let m = member(json!({
+        "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 5000, "axial_kn": 0,
+        "lt_restrained": true,
+        "m_major_a_knm": 450, "m_major_b_knm": 450, "m_minor_a_knm": 170, "m_minor_b_knm": 170
+    }));
+    let r = check_member(&m).unwrap();
+    let (wy, wz) = (
+        300.0 * 19.0 * 281.0 + 11.0 * 262.0_f64.powi(2) / 4.0,
+        19.0 * 300.0_f64.powi(2) / 2.0 + 262.0 * 121.0 / 4.0,
     );
+    let (my, mz) = (450.0 / (wy * FY * 1e-6), 170.0 / (wz * FY * 1e-6));
+    assert_close(eq(&r, "6.2.9"), my * my + mz, HAND, "Eq. 6.41, n = 0");
+    assert_close(eq(&r, "6.61"), my + 0.6 * mz, HAND, "Eq. 6.61, N_Ed = 0");
+    assert_close(eq(&r, "6.62"), 0.6 * my + mz, HAND, "Eq. 6.62, N_Ed = 0");
+    assert_close(r.utilisation, 1.056_17, 1e-5, "governing, 6.2.9");
+    assert_eq!(r.governing_check, "6.2.9");
+    assert!(!r.passes);
+}
+
+#[test]
+fn annex_a_without_axial_load_takes_the_limit_of_c_my() {
+    // Annex A at N_Ed = 0 with moments about both axes: epsilon_y = M_y,Ed
+    // A / (N_Ed W_el,y) is infinite, so C_my = C_my,0 + (1 - C_my,0) (its
+    // limit, a_LT > 0), the value as N_Ed -> 0, never the lower C_my,0.
+    let at = |n: f64| {
+        check_member(&member(json!({
+            "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 5000, "axial_kn": n,
+            "interaction_annex": "A",
+            "m_major_a_knm": 300, "m_major_b_knm": -150, "m_minor_a_knm": 60, "m_minor_b_knm": 60
+        })))
+        .unwrap()
+    };
+    let (zero, near) = (at(0.0), at(1e-12));
+    for name in ["6.61", "6.62"] {
+        assert_close(eq(&zero, name), eq(&near, name), 1e-6, name);
+    }
 }
 
 #[test]
@@ -683,6 +731,14 @@ fn annex_a_at_the_elastic_critical_load_never_passes() {
         .any(|m| m.critical_kn > 0.0 && m.critical_kn < 1400.0));
     assert!(eq(&r, "6.61").is_infinite() && eq(&r, "6.62").is_infinite());
     assert!(!r.passes);
+    // The reason is given, naming the key (as AISC's b1-unbounded and CSA's
+    // u1-unbounded do): the table shows only "inf" otherwise.
+    let w = r
+        .warnings
+        .iter()
+        .find(|w| w.code == "annex-a-unbounded")
+        .expect("annex-a-unbounded warning");
+    assert!(w.message.starts_with("axial_kn:"), "{}", w.message);
 }
 
 #[test]

@@ -7,9 +7,11 @@
 //! 2. With zero moments the result is the compression result, bit for bit:
 //!    the same as the member written without any moment key, utilisation
 //!    N / N_Rd of the governing axial mode, no interaction, no bending.
-//! 3. With zero axial load the result is the bending result: the bending
-//!    side is the same bit for bit as with the axial load, the utilisation
-//!    is the larger bending utilisation, no interaction.
+//! 3. With zero axial load the bending side is the same bit for bit as with
+//!    the axial load; with one moment the utilisation is the bending
+//!    utilisation and there is no interaction; with moments about both axes
+//!    the interaction is worked (biaxial bending is a combination in every
+//!    code) and equals its limit as the axial load goes to 0.
 //! 4. A member with both passes only when every interaction equation, the
 //!    axial and both bending utilisations are at most 1, and its
 //!    utilisation is the largest of them; a method whose equations are not
@@ -329,51 +331,83 @@ fn zero_moments_give_the_compression_result_bit_for_bit() {
 
 #[test]
 fn zero_axial_load_gives_the_bending_result() {
+    // One moment without axial load: the bending result, bit for bit. Two
+    // moments without axial load are still a combination (EN 1993-1-1 Eq.
+    // 6.41 with n = 0, AISC 360-16 H1-1b with P_r = 0, CSA S16-19 13.8 with
+    // C_f = 0, EN 1995-1-1 Eqs. 6.11/6.12): the interaction is worked, never
+    // below either bending utilisation, and it is the limit of the loaded
+    // member's result as the axial load goes to 0 (no jump at N = 0).
     for method in Method::ALL {
         for (section, material, length) in members(method) {
             let (n_rd, my, mz) = scale(method, &section, &material, length);
             for s in [0.3, 0.9, 1.4] {
-                let beam = member(
-                    method,
-                    &section,
-                    &material,
-                    length,
-                    0.0,
-                    (s * my, 0.4 * s * mz),
-                );
-                if !takes_moments(method) {
-                    // No bending rule (euler, perry-robertson), or no load to
-                    // carry the eccentricity (secant): refused by key.
-                    assert!(
-                        outcome(&beam).is_none(),
-                        "{method:?}: a beam must be refused"
-                    );
-                    continue;
-                }
-                let r = check_member(&beam).unwrap();
-                let loaded = check_member(&member(
-                    method,
-                    &section,
-                    &material,
-                    length,
-                    0.5 * n_rd,
-                    (s * my, 0.4 * s * mz),
-                ))
-                .unwrap();
-                let b = r.bending.unwrap();
-                assert_eq!(Some(b), loaded.bending, "{method:?}: bending depends on N");
-                assert!(r.interaction.is_empty());
-                let (um, un) = (b.major.utilisation(), b.minor.utilisation());
-                assert_eq!(r.utilisation.to_bits(), um.max(un).to_bits());
-                assert_eq!(
-                    r.governing_check,
-                    if um >= un {
-                        "bending-major"
-                    } else {
-                        "bending-minor"
+                for moments in [(s * my, 0.0), (0.0, 0.4 * s * mz), (s * my, 0.4 * s * mz)] {
+                    let beam = member(method, &section, &material, length, 0.0, moments);
+                    if !takes_moments(method) {
+                        // No bending rule (euler, perry-robertson), or no load
+                        // to carry the eccentricity (secant): refused by key.
+                        assert!(
+                            outcome(&beam).is_none(),
+                            "{method:?}: a beam must be refused"
+                        );
+                        continue;
                     }
-                );
-                assert_eq!(r.passes, um.max(un) <= 1.0 && r.within_limits());
+                    let r = check_member(&beam).unwrap();
+                    let loaded = check_member(&member(
+                        method,
+                        &section,
+                        &material,
+                        length,
+                        0.5 * n_rd,
+                        moments,
+                    ))
+                    .unwrap();
+                    let b = r.bending.unwrap();
+                    assert_eq!(Some(b), loaded.bending, "{method:?}: bending depends on N");
+                    let (um, un) = (b.major.utilisation(), b.minor.utilisation());
+                    if moments.0 == 0.0 || moments.1 == 0.0 {
+                        assert!(r.interaction.is_empty());
+                        assert_eq!(r.utilisation.to_bits(), um.max(un).to_bits());
+                        assert_eq!(
+                            r.governing_check,
+                            if um >= un {
+                                "bending-major"
+                            } else {
+                                "bending-minor"
+                            }
+                        );
+                        assert_eq!(r.passes, um.max(un) <= 1.0 && r.within_limits());
+                    } else {
+                        assert!(
+                            !r.interaction.is_empty(),
+                            "{method:?}: biaxial, no interaction"
+                        );
+                        assert!(r.utilisation >= um.max(un));
+                        let top = r
+                            .interaction
+                            .iter()
+                            .map(|c| c.utilisation)
+                            .fold(um.max(un), f64::max);
+                        assert_eq!(r.utilisation.to_bits(), top.to_bits());
+                        assert_eq!(r.passes, r.utilisation <= 1.0 && r.within_limits());
+                        let near = check_member(&member(
+                            method,
+                            &section,
+                            &material,
+                            length,
+                            1e-9 * n_rd,
+                            moments,
+                        ))
+                        .unwrap();
+                        assert!(
+                            (near.utilisation - r.utilisation).abs()
+                                <= 1e-6 * r.utilisation.max(1.0),
+                            "{method:?}: {} at N = 0 but {} as N -> 0",
+                            r.utilisation,
+                            near.utilisation
+                        );
+                    }
+                }
             }
         }
     }

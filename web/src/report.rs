@@ -223,7 +223,11 @@ fn warnings_in(r: &CheckResult, said: &dyn Fn(&str) -> String) -> Html {
     if r.warnings.is_empty() {
         return h;
     }
-    h.lit("<ul class=\"warnings\" data-testid=\"warnings\">");
+    // Focusable: on a docked or landscape result head the list scrolls
+    // within a few lines, and a keyboard must reach what it hides.
+    h.lit(
+        "<ul class=\"warnings\" data-testid=\"warnings\" tabindex=\"0\" aria-label=\"warnings\">",
+    );
     for w in &r.warnings {
         html!(h, "<li>⚠ {} <code>{}</code></li>", said(&w.message), w.code);
     }

@@ -8,9 +8,9 @@
 //!   Eqs. F2-2 to F2-8 with c = 1 for I (F2-8a) and c = h_o/2 sqrt(I_y/C_w)
 //!   for channels (F2-8b); C_b by Eq. F1-1 from the moment diagram.
 //! - I sections and channels, minor axis: F6.
-//! - Rectangular HSS: F7 (flange and web local buckling; lateral-torsional
-//!   buckling F7.4); a slender flange or web is refused (the effective
-//!   width of F7-3 is not implemented).
+//! - Rectangular HSS: F7 (flange and web local buckling, a slender flange
+//!   by the effective width of F7-3/F7-4 and a slender web by F7.3(c), in
+//!   `aisc360_hss`; lateral-torsional buckling F7.4).
 //! - Round HSS: F8 (D/t up to 0.45 E/F_y).
 //! - Rectangular bars and rounds: F11.
 //! - Given sections: yielding, F_y S (the class is not known: the elastic
@@ -63,6 +63,12 @@ pub fn check(
     warnings: &mut Vec<Warning>,
 ) -> Result<Bending> {
     let steel = require_steel(input, key(basis))?;
+    if let SectionSpec::Tee(_) = &input.section.spec {
+        return super::aisc360_tee::check(input, steel, basis, trace, warnings);
+    }
+    if let SectionSpec::Angle(_) = &input.section.spec {
+        return super::aisc360_angle::check(input, steel, basis, trace);
+    }
     let cb = moment_factor(input, trace, warnings);
     Ok(Bending {
         major: axis(input, steel, basis, Axis::Major, cb, trace, warnings)?,
@@ -102,7 +108,7 @@ fn moment_factor(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warnin
 
 /// lambda_p, lambda_r interpolation of F3-1 / F6-2 / F7-2-like rules:
 /// M_p - (M_p - M_low)(lambda - lambda_p)/(lambda_r - lambda_p).
-fn between(mp: f64, low: f64, lambda: f64, lp: f64, lr: f64) -> f64 {
+pub(super) fn between(mp: f64, low: f64, lambda: f64, lp: f64, lr: f64) -> f64 {
     mp - (mp - low) * (lambda - lp) / (lr - lp)
 }
 
@@ -218,15 +224,7 @@ fn f4_f5(
     // F4-7 and F5.2: L_p = 1.1 r_t sqrt(E/F_y).
     let lp = 1.1 * rt * root;
     if lt {
-        step!(
-            trace,
-            s,
-            "L_b",
-            "unbraced length (k_lt L or lcr_lt_mm)",
-            lb,
-            "mm",
-            "member file"
-        );
+        super::push_unbraced_length(trace, s, lb);
         step!(
             trace,
             s,
@@ -584,15 +582,7 @@ fn axis(
                         let lp = 1.76 * ry * root;
                         let jc = j * c / (sx * ho);
                         let lr = l_r(rts, e, 0.7 * fy, jc);
-                        step!(
-                            trace,
-                            s,
-                            "L_b",
-                            "unbraced length (k_lt L or lcr_lt_mm)",
-                            lb,
-                            "mm",
-                            "member file"
-                        );
+                        super::push_unbraced_length(trace, s, lb);
                         if channel {
                             step!(
                                 trace,
@@ -714,12 +704,6 @@ fn axis(
             warn_once(warnings, "hss-design-wall", || {
                 "bending: the wall of a typed hollow section is used as its design wall thickness (the catalogue applies 0.93 t_nom to ERW HSS, AISC 360-16 B4.2)".into()
             });
-            if lf > 1.40 * root || lw > 5.70 * root {
-                return Err(slender(basis, format!(
-                    "m_{}_a_knm: a wall of the HSS is slender in flexure (b/t = {lf:.1}, h/t = {lw:.1}); the effective width of AISC 360-16 F7-3 is not implemented",
-                    if major { "major" } else { "minor" }
-                )));
-            }
             let mp = fy * zx;
             step!(
                 trace,
@@ -731,7 +715,16 @@ fn axis(
                 "AISC 360-16 Eq. F7-1"
             );
             let mut mn = mp;
-            if lf > 1.12 * root {
+            let i_axis = if major { p.i_major_mm4 } else { p.i_minor_mm4 };
+            if lf > 1.40 * root {
+                let flb = super::aisc360_hss::slender_flange(
+                    (e, fy),
+                    (i_axis, p.area_mm2, hh, t, bb - 3.0 * t),
+                    s,
+                    trace,
+                );
+                mn = mn.min(flb);
+            } else if lf > 1.12 * root {
                 let flb = (mp - (mp - fy * sx) * (3.57 * lf / root - 4.0)).min(mp);
                 step!(
                     trace,
@@ -744,7 +737,15 @@ fn axis(
                 );
                 mn = mn.min(flb);
             }
-            if lw > 2.42 * root {
+            if lw > 5.70 * root {
+                let wlb = super::aisc360_hss::slender_web(
+                    (e, fy),
+                    (sx, hh - 3.0 * t, bb - 3.0 * t, t),
+                    s,
+                    trace,
+                );
+                mn = mn.min(wlb);
+            } else if lw > 2.42 * root {
                 let wlb = (mp - (mp - fy * sx) * (0.305 * lw / root - 0.738)).min(mp);
                 step!(
                     trace,
@@ -947,7 +948,20 @@ fn axis(
             ));
         }
     };
-    let design = match basis {
+    let design = available(basis, mn, s, trace);
+    Ok(AxisBending {
+        resistance_knm: design,
+        critical_knm: mcr.map(|v| v / 1e6),
+        reduction: reduction.min(1.0),
+        moment_factor: if cb_used { Some(cb) } else { None },
+        demand_knm: demand,
+    })
+}
+
+/// The available flexural strength of a nominal one (N mm), kNm: phi_b M_n
+/// (LRFD, F1(a)) or M_n / Omega_b (ASD, F1(b)), with its working.
+pub(super) fn available(basis: Basis, mn: f64, s: Scope, trace: &mut Trace) -> f64 {
+    match basis {
         Basis::Lrfd => {
             let v = PHI_B * mn / 1e6;
             step!(
@@ -974,12 +988,5 @@ fn axis(
             );
             v
         }
-    };
-    Ok(AxisBending {
-        resistance_knm: design,
-        critical_knm: mcr.map(|v| v / 1e6),
-        reduction: reduction.min(1.0),
-        moment_factor: if cb_used { Some(cb) } else { None },
-        demand_knm: demand,
-    })
+    }
 }

@@ -13,10 +13,9 @@
 //! `secant` takes equal end moments about one axis as the load's
 //! eccentricity ([`crate::method::secant::moment_eccentricity`]), so they
 //! are not bending there (no bending side), and refuses any other moment.
-//! Angles are
-//! refused under every method (no published rule is implemented here), and
-//! so are tees (their monosymmetric M_cr and the stem-in-compression cases
-//! are not implemented). Shear, web bearing, torsion from eccentric load and
+//! Tees and single angles are checked under AISC 360-16 F9 and F10
+//! (`aisc360_tee`, `aisc360_angle`) and refused under the other codes
+//! (their monosymmetric M_cr and angle rules are not implemented). Shear, web bearing, torsion from eccentric load and
 //! bolt holes are not checked: a warning says so on every result with a
 //! moment.
 
@@ -30,6 +29,9 @@ use crate::section::{Family, SectionSpec};
 use crate::trace::{step, Scope, Trace};
 
 pub mod aisc360;
+mod aisc360_angle;
+mod aisc360_hss;
+mod aisc360_tee;
 pub mod csa_s16;
 pub mod en1993;
 pub mod en1995;
@@ -168,14 +170,15 @@ fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> R
     ) {
         return Err(no_rule(method, key));
     }
+    let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     let what = match input.section.family {
-        Family::Angle => {
-            "an angle (no published bending rule for angles is implemented: \
-             EN 1993-1-1 gives none, AISC 360-16 F10 is not implemented here)"
+        Family::Angle if !aisc => {
+            "an angle under this method (EN 1993-1-1 and CSA S16 give no bending rule for \
+             angles that is implemented here; AISC 360-16 F10 is)"
         }
-        Family::Tee => {
-            "a tee (its monosymmetric elastic critical moment and the stem-in-compression \
-             cases are not implemented)"
+        Family::Tee if !aisc => {
+            "a tee under this method (its monosymmetric elastic critical moment and the \
+             stem-in-compression cases are not implemented here; AISC 360-16 F9 is)"
         }
         _ => return Ok(()),
     };
@@ -263,6 +266,30 @@ pub fn shape(m: &Moments) -> Shape {
         (false, true) => Shape::Span(m.span_load),
         (true, true) => Shape::Combined,
     }
+}
+
+/// The largest positive and the largest negative moment along the member
+/// (both >= 0, kNm): at an end, at mid-length, or (uniform load) at the
+/// stationary point of the parabola.
+pub fn signed_extremes(m: &Moments) -> (f64, f64) {
+    let mid = m.at(0.5);
+    let vertex = if m.span_load == SpanLoad::Uniform && m.span_knm != 0.0 {
+        // dM/ds = (M_b - M_a) + 4 M_span (1 - 2 s) = 0.
+        let s = 0.5 + (m.b_knm - m.a_knm) / (8.0 * m.span_knm);
+        if s > 0.0 && s < 1.0 {
+            m.at(s)
+        } else {
+            mid
+        }
+    } else {
+        mid
+    };
+    let (mut hi, mut lo) = (0.0f64, 0.0f64);
+    for v in [m.a_knm, m.b_knm, mid, vertex] {
+        hi = hi.max(v);
+        lo = lo.min(v);
+    }
+    (hi, -lo)
 }
 
 /// AISC 360-16 Eq. F1-1: C_b = 12.5 M_max / (2.5 M_max + 3 M_A + 4 M_B +
@@ -473,6 +500,19 @@ pub fn push_diagram(trace: &mut Trace, axis: Axis, m: &Moments) -> f64 {
     max
 }
 
+/// Pushes the length between lateral restraints, mm.
+pub fn push_unbraced_length(trace: &mut Trace, s: Scope, lb: f64) {
+    step!(
+        trace,
+        s,
+        "L_b",
+        "unbraced length (k_lt L or lcr_lt_mm)",
+        lb,
+        "mm",
+        "member file"
+    );
+}
+
 /// Pushes C1 and C2 with their source.
 pub fn push_c_factors(trace: &mut Trace, c: &CFactors, z_g_mm: f64) {
     let s = Scope::BendingMajor;
@@ -586,6 +626,29 @@ mod tests {
         ));
         // Double curvature: capped at 2.5.
         assert!(omega_2(&mo(10.0, -10.0, 0.0, SpanLoad::Uniform)) <= 2.5);
+    }
+
+    #[test]
+    fn signed_extremes_find_both_signs() {
+        // Single curvature, uniform load: all positive.
+        assert_eq!(
+            signed_extremes(&mo(0.0, 0.0, 10.0, SpanLoad::Uniform)),
+            (10.0, 0.0)
+        );
+        // Double curvature: +10 at A, -6 at B.
+        assert_eq!(
+            signed_extremes(&mo(10.0, -6.0, 0.0, SpanLoad::Uniform)),
+            (10.0, 6.0)
+        );
+        // Hogging ends with a sagging span: -8 at the ends, +2 at mid-length
+        // (10 above the end line), the parabola's top at s = 0.5.
+        assert_eq!(
+            signed_extremes(&mo(-8.0, -8.0, 10.0, SpanLoad::Uniform)),
+            (2.0, 8.0)
+        );
+        // Point load: the peak at mid-length.
+        let (hi, lo) = signed_extremes(&mo(-4.0, 0.0, 6.0, SpanLoad::Point));
+        assert!((hi - 4.0).abs() < 1e-12 && lo == 4.0);
     }
 
     #[test]

@@ -66,7 +66,7 @@ pub fn check(
             let cm = factors_b(ctx, trace, warnings);
             annex_b(ctx, &b, &cm, trace)
         }
-        InteractionAnnex::A => annex_a(ctx, steel, &b, trace)?,
+        InteractionAnnex::A => annex_a(ctx, steel, &b, trace, warnings)?,
     };
     Ok(Some(vec![
         Check {
@@ -1562,7 +1562,13 @@ fn torsional_loads(ctx: &Context<'_>, steel: &Steel) -> Result<(f64, f64)> {
     Ok((crit.n_torsional / 1000.0, crit.n_twist / 1000.0))
 }
 
-fn annex_a(ctx: &Context<'_>, steel: &Steel, b: &Basis, trace: &mut Trace) -> Result<(f64, f64)> {
+fn annex_a(
+    ctx: &Context<'_>,
+    steel: &Steel,
+    b: &Basis,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Result<(f64, f64)> {
     let p = &ctx.input.section.props;
     let (n_cr_t, n_cr_tf) = torsional_loads(ctx, steel)?;
     let (ny, nz) = (b.n_ed / b.n_cr_y, b.n_ed / b.n_cr_z);
@@ -1616,6 +1622,15 @@ fn annex_a(ctx: &Context<'_>, steel: &Steel, b: &Basis, trace: &mut Trace) -> Re
             "-",
             "EN 1993-1-1 Table A.1"
         );
+        warn_once(warnings, "annex-a-unbounded", || {
+            format!(
+                "axial_kn: N_Ed = {:.1} kN reaches an elastic critical load (N_Ed/N_cr,y = \
+                 {ny:.3}, N_Ed/N_cr,z = {nz:.3}, N_Ed/N_cr,T = {nt:.3}, N_Ed/N_cr,TF = {ntf:.3}), \
+                 so the interaction factors of EN 1993-1-1 Annex A have no finite value and the \
+                 member fails; choose a stiffer section or a shorter buckling length",
+                b.n_ed
+            )
+        });
         return Ok((f64::INFINITY, f64::INFINITY));
     }
     let c_my0 = c_m0_axis(ctx, Axis::Major, ny, trace);
@@ -1669,8 +1684,12 @@ fn annex_a(ctx: &Context<'_>, steel: &Steel, b: &Basis, trace: &mut Trace) -> Re
         } else {
             (b.w_y, b.area)
         };
+        // Without axial load (biaxial bending alone) epsilon_y is infinite
+        // and C_my takes its limit 1 (a_LT > 0): the value as N_Ed -> 0.
         let eps_y = if b.n_ed > 0.0 {
             b.m_y / b.n_ed * area / w_el_y * 1000.0
+        } else if b.m_y > 0.0 {
+            f64::INFINITY
         } else {
             0.0
         };
@@ -1683,8 +1702,9 @@ fn annex_a(ctx: &Context<'_>, steel: &Steel, b: &Basis, trace: &mut Trace) -> Re
             "-",
             "EN 1993-1-1 Table A.1"
         );
-        let r = eps_y.sqrt() * a_lt;
-        let c_my = c_my0 + (1.0 - c_my0) * r / (1.0 + r);
+        let r = if a_lt > 0.0 { eps_y.sqrt() * a_lt } else { 0.0 };
+        let share = if r.is_infinite() { 1.0 } else { r / (1.0 + r) };
+        let c_my = c_my0 + (1.0 - c_my0) * share;
         let c_mlt = (c_my * c_my * a_lt / ((1.0 - nz) * (1.0 - nt)).sqrt()).max(1.0);
         step!(
             trace,
