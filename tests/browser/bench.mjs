@@ -265,6 +265,11 @@ async function measureThousand() {
       await page.waitForFunction(() => window.__strutlineAllRows && window.__strutlineAllRows.frame, null, {
         timeout: 30_000,
       });
+      // The members after the rows in view are checked in slices after
+      // the first frame: the engine's total is noted when the last is done.
+      await page
+        .waitForFunction(() => window.strutlineRecheck && window.strutlineRecheck.fresh >= 1000, null, { timeout: 30_000 })
+        .catch(() => {});
       const r = await page.evaluate(() => {
         const statuses = [...document.querySelectorAll("[data-testid=member-status]")];
         return {
