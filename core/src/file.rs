@@ -163,6 +163,32 @@ fn out_of_range(text: &str, e: &serde_json::Error) -> Option<Error> {
     })
 }
 
+/// The refusal of a key given twice, naming the member it is in (by its id,
+/// or its position when it has none).
+fn repeated(file: &Value, repeat: &crate::read::Repeat) -> Error {
+    let error = Error::Syntax {
+        line: 0,
+        column: 0,
+        message: repeat.message(),
+    };
+    match repeat.member() {
+        Some(index) => error.in_member(&member_name(
+            file.get("members").and_then(|m| m.get(index)),
+            index,
+        )),
+        None => error,
+    }
+}
+
+/// A member's name in errors: its id, or its position (`#3`) when it has
+/// none.
+pub fn member_name(raw: Option<&Value>, index: usize) -> String {
+    raw.and_then(|m| m.get("id"))
+        .and_then(Value::as_str)
+        .map(str::to_string)
+        .unwrap_or_else(|| format!("#{}", index + 1))
+}
+
 /// Lifts a file of `version` to the next version; each version adds one arm.
 fn migrate(mut value: Value, version: u64) -> Result<Value> {
     // 1 -> 2: version 2 only adds an optional key, so a version-1 file is
@@ -191,20 +217,22 @@ pub fn parse(text: &str) -> Result<MemberFile> {
 /// (see [`out_of_range`]), not again in the text read a second time.
 fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
     let text = text.trim_start_matches('\u{feff}');
-    let value: Value = match serde_json::from_str(text) {
-        Ok(v) => v,
+    let (value, repeat) = match crate::read::value(text) {
+        Ok(read) => read,
         Err(e) => {
             let named = name_range.then(|| out_of_range(text, &e)).flatten();
             return Err(named.unwrap_or_else(|| syntax(&e)));
         }
     };
+    if let Some(repeat) = repeat {
+        header(&value)?;
+        return Err(repeated(&value, &repeat));
+    }
     from_value(value)
 }
 
-/// A member file from JSON already parsed (a list inside the browser's
-/// stored workspace): [`parse`] without reading text again; older
-/// versions migrate the same way.
-pub fn from_value(mut value: Value) -> Result<MemberFile> {
+/// The format and version of a member file's JSON (its version).
+fn header(value: &Value) -> Result<u64> {
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -233,6 +261,15 @@ pub fn from_value(mut value: Value) -> Result<MemberFile> {
             newest: VERSION,
         });
     }
+    Ok(version)
+}
+
+/// A member file from JSON already parsed (a list inside the browser's
+/// stored workspace, which the app wrote itself): [`parse`] without
+/// reading text again; older versions migrate the same way. A key
+/// repeated in the text is not seen here (the parsed value kept one).
+pub fn from_value(mut value: Value) -> Result<MemberFile> {
+    let version = header(&value)?;
     let mut v = version;
     while v < VERSION {
         value = migrate(value, v)?;
@@ -289,11 +326,7 @@ pub fn from_value(mut value: Value) -> Result<MemberFile> {
 /// its download budget; the message still names the member and what was
 /// wrong, and serde's own words name a missing or unknown field.
 pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
-    let name = raw
-        .get("id")
-        .and_then(Value::as_str)
-        .map(str::to_string)
-        .unwrap_or_else(|| format!("#{}", index + 1));
+    let name = member_name(Some(raw), index);
     let outcome = deserialize_member(raw).map_err(|(path, inner)| {
         if path.is_empty() || path == "." {
             inner
@@ -323,19 +356,23 @@ pub fn json_value<T: Serialize>(x: &T) -> Option<Value> {
 }
 
 /// Deserialises a member, giving on failure the path of the field at fault
-/// (natively; empty in the browser build) and serde's message.
+/// (natively; empty in the browser build) and serde's message, made plain
+/// where serde words it poorly ([`crate::read::plain`]: a material of no
+/// accepted form says which forms there are and what it lacks or has too
+/// many).
 pub fn deserialize_member(raw: &Value) -> std::result::Result<Member, (String, String)> {
     #[cfg(not(target_arch = "wasm32"))]
-    {
-        serde_path_to_error::deserialize::<_, Member>(raw).map_err(|e| {
-            let path = e.path().to_string();
-            (path, e.into_inner().to_string())
-        })
-    }
+    let outcome = serde_path_to_error::deserialize::<_, Member>(raw).map_err(|e| {
+        let path = e.path().to_string();
+        (path, e.into_inner().to_string())
+    });
     #[cfg(target_arch = "wasm32")]
-    {
-        <Member as serde::Deserialize>::deserialize(raw).map_err(|e| (String::new(), e.to_string()))
-    }
+    let outcome = <Member as serde::Deserialize>::deserialize(raw)
+        .map_err(|e| (String::new(), e.to_string()));
+    outcome.map_err(|(path, message)| {
+        let message = crate::read::plain(raw, &path, message);
+        (path, message)
+    })
 }
 
 /// Refuses a list in which two members share an id.

@@ -28,6 +28,7 @@ pub mod member;
 pub mod method;
 pub mod names;
 pub mod outcome;
+pub mod read;
 pub mod roots;
 pub mod section;
 pub mod sizing;

@@ -32,7 +32,7 @@ pub enum TimberKind {
 
 /// A material as written in the member file.
 #[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-#[serde(untagged)]
+#[serde(untagged, deny_unknown_fields)]
 pub enum MaterialSpec {
     /// A named grade or strength class ("S355", "A992", "C24", "GL28h").
     Grade {

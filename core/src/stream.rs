@@ -22,11 +22,11 @@
 use std::fmt;
 use std::io::Read;
 
-use serde::de::{self, DeserializeSeed, IgnoredAny, MapAccess, SeqAccess, Visitor};
+use serde::de::{self, DeserializeSeed, MapAccess, SeqAccess, Visitor};
 use serde_json::value::RawValue;
 
 use crate::error::Error;
-use crate::file::{FORMAT, VERSION};
+use crate::file::{SheetHeader, FORMAT, VERSION};
 use crate::ids::SeenIds;
 use crate::member::Member;
 
@@ -135,7 +135,22 @@ pub fn member_from_str(raw: &str, index: usize) -> Result<Member, Error> {
     if let Ok(m) = serde_json::from_str::<Member>(raw) {
         return Ok(m);
     }
-    // The slow road, only for a bad member: where, and which member.
+    // The slow road, only for a bad member: read it as the whole-file
+    // reader does, so both name the same member, field and fault.
+    if let Ok((value, repeat)) = crate::read::value(raw) {
+        if let Some(repeat) = repeat {
+            let name = crate::file::member_name(Some(&value), index);
+            return Err(Error::Syntax {
+                line: 0,
+                column: 0,
+                message: repeat.message(),
+            }
+            .in_member(&name));
+        }
+        crate::file::member_from_value(&value, index)?;
+    }
+    // A number out of a double's range stops the value reader: where, and
+    // which member.
     let mut track = serde_path_to_error::Track::new();
     let mut de = serde_json::Deserializer::from_str(raw);
     let outcome = <Member as serde::Deserialize>::deserialize(
@@ -232,7 +247,18 @@ where
 
     fn visit_map<A: MapAccess<'de>>(self, mut map: A) -> Result<(), A::Error> {
         let state = self.0;
+        // The top-level keys read so far (a handful), to refuse one given
+        // twice as the whole-file reader does.
+        let mut keys: Vec<String> = Vec::new();
         while let Some(key) = map.next_key::<String>()? {
+            if keys.contains(&key) {
+                return Err(state.bad(Error::Syntax {
+                    line: 0,
+                    column: 0,
+                    message: crate::read::Repeat::top(&key).message(),
+                }));
+            }
+            keys.push(key.clone());
             match key.as_str() {
                 "format" => {
                     let value: serde_json::Value = map.next_value()?;
@@ -281,15 +307,31 @@ where
                         state.stop = Some(Stop::MembersFirst);
                         return Err(de::Error::custom("stopped"));
                     }
-                    if state.members_seen {
-                        let reason = "it has two \"members\" lists".to_string();
-                        return Err(state.bad(Error::NotMemberFile { reason }));
-                    }
                     state.members_seen = true;
                     map.next_value_seed(MembersSeed(&mut *state))?;
                 }
-                _ => {
-                    map.next_value::<IgnoredAny>()?;
+                other => {
+                    // The sheet's header and keys this reader does not use:
+                    // checked as the whole-file reader checks them.
+                    let raw: Box<RawValue> = map.next_value()?;
+                    let (value, repeat) =
+                        crate::read::value(raw.get()).map_err(de::Error::custom)?;
+                    if let Some(repeat) = repeat {
+                        return Err(state.bad(Error::Syntax {
+                            line: 0,
+                            column: 0,
+                            message: repeat.under(other).message(),
+                        }));
+                    }
+                    if other == "sheet" && !value.is_null() {
+                        if let Err(e) = serde_json::from_value::<SheetHeader>(value) {
+                            return Err(state.bad(Error::Syntax {
+                                line: 0,
+                                column: 0,
+                                message: format!("sheet: {e}"),
+                            }));
+                        }
+                    }
                 }
             }
         }
