@@ -217,13 +217,22 @@ pub fn parse(text: &str) -> Result<MemberFile> {
 /// (see [`out_of_range`]), not again in the text read a second time.
 fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
     let text = text.trim_start_matches('\u{feff}');
-    let (mut value, repeat) = match crate::read::value(text) {
+    let (value, repeat) = match crate::read::value(text) {
         Ok(read) => read,
         Err(e) => {
             let named = name_range.then(|| out_of_range(text, &e)).flatten();
             return Err(named.unwrap_or_else(|| syntax(&e)));
         }
     };
+    if let Some(repeat) = repeat {
+        header(&value)?;
+        return Err(repeated(&value, &repeat));
+    }
+    from_value(value)
+}
+
+/// The format and version of a member file's JSON (its version).
+fn header(value: &Value) -> Result<u64> {
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -252,9 +261,15 @@ fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
             newest: VERSION,
         });
     }
-    if let Some(repeat) = repeat {
-        return Err(repeated(&value, &repeat));
-    }
+    Ok(version)
+}
+
+/// A member file from JSON already parsed (a list inside the browser's
+/// stored workspace, which the app wrote itself): [`parse`] without
+/// reading text again; older versions migrate the same way. A key
+/// repeated in the text is not seen here (the parsed value kept one).
+pub fn from_value(mut value: Value) -> Result<MemberFile> {
+    let version = header(&value)?;
     let mut v = version;
     while v < VERSION {
         value = migrate(value, v)?;
@@ -393,6 +408,17 @@ mod tests {
         assert_eq!(f.members[0].k_minor, 1.0);
         let again = parse(&f.to_json()).unwrap();
         assert_eq!(f, again);
+    }
+
+    #[test]
+    fn a_parsed_value_reads_as_its_text_does() {
+        let v: Value = serde_json::from_str(ONE).unwrap();
+        assert_eq!(from_value(v).unwrap(), parse(ONE).unwrap());
+        // The same refusals: a duplicate id names the member.
+        let two = ONE.replace("}]}", "}, {\"id\": \"P1\", \"section\": {\"kind\": \"round\", \"diameter_mm\": 20}, \"material\": {\"fy_mpa\": 235, \"e_mpa\": 210000}, \"length_mm\": 900, \"axial_kn\": 1, \"method\": \"euler\"}]}");
+        let v: Value = serde_json::from_str(&two).unwrap();
+        assert_eq!(from_value(v).unwrap_err(), parse(&two).unwrap_err());
+        assert!(matches!(parse(&two), Err(Error::DuplicateId { .. })));
     }
 
     #[test]

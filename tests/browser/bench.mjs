@@ -22,7 +22,7 @@ import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import os from "node:os";
 import { join } from "node:path";
-import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, STORAGE_KEY, workspaceText } from "./lib.mjs";
+import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, workspaceText, thousandMembers, seedStorage, openForEditing, editLoop } from "./lib.mjs";
 
 const URL_ARG = arg("--url");
 const OUT_DIR = arg("--out");
@@ -35,6 +35,10 @@ const DIST_ZLIB = Number(arg("--dist-zlib", "NaN"));
 const DIST_SENT = Number(arg("--dist-sent", "NaN"));
 const DIST_BUDGET = Number(arg("--dist-budget", "NaN"));
 const CACHE_NAME = arg("--cache-name", "");
+// `--only first,slow,edit,thousand,sizing`: measure only these (for a
+// quick look while working; bench/web.md is written from a full run).
+const ONLY = arg("--only");
+const wanted = (what) => !ONLY || ONLY.split(",").includes(what);
 
 const TARGETS = {
   first_render_ms: 1000,
@@ -207,14 +211,11 @@ async function measureEdits(count = 100, moments = false) {
   const { context, close } = await launch();
   try {
     const page = await firstPage(context);
-    await page.goto(BASE.href, { waitUntil: "load" });
     // The beam-column: the demo's steel column C1 (EN 1993-1-1), whose
     // method and material check bending (the first demo member's custom
     // timber has no bending strength).
     const row = moments ? '[data-testid=member-row][data-id="C1"]' : "[data-testid=member-row]";
-    await page.locator(row).first().click({ timeout: 20_000 });
-    await page.locator("input[name=axial_kn]").first().waitFor({ state: "visible", timeout: 10_000 });
-    await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
+    await openForEditing(page, BASE.href, row);
     if (moments) {
       // End moments about both axes: the member becomes a beam-column and
       // its chart the interaction chart, redrawn on every edit.
@@ -227,91 +228,10 @@ async function measureEdits(count = 100, moments = false) {
       }
       await page.locator("canvas#envelope[data-chart=interaction]").waitFor({ timeout: 10_000 });
     }
-    return await page.evaluate(async (n) => {
-      const input = document.querySelector("input[name=axial_kn]");
-      const base = Number(String(input.value).replace(",", ".")) || 100;
-      const result = () => document.querySelector("[data-testid=result-utilisation]");
-      const dom = [];
-      const frame = [];
-      let timeouts = 0;
-      const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value").set;
-      for (let i = 0; i < n; i += 1) {
-        const before = result()?.textContent ?? "";
-        // Alternate above and below the starting load so the text changes.
-        const value = (base * (i % 2 === 0 ? 1.1 : 0.9) + i * 0.01).toFixed(2);
-        let t0 = 0;
-        const t = await new Promise((resolve) => {
-          let done = false;
-          const finish = (changedAt) => {
-            if (done) return;
-            done = true;
-            observer.disconnect();
-            clearTimeout(timer);
-            requestAnimationFrame(() => resolve({ changedAt, frameAt: performance.now() }));
-          };
-          const observer = new MutationObserver(() => {
-            if ((result()?.textContent ?? "") !== before) finish(performance.now());
-          });
-          observer.observe(document.body, { childList: true, subtree: true, characterData: true });
-          const timer = setTimeout(() => {
-            done = true;
-            observer.disconnect();
-            resolve(null);
-          }, 2000);
-          t0 = performance.now();
-          input.focus();
-          setter.call(input, value);
-          input.dispatchEvent(new Event("input", { bubbles: true }));
-          input.dispatchEvent(new Event("change", { bubbles: true }));
-          if ((result()?.textContent ?? "") !== before) finish(performance.now());
-        });
-        if (t === null) {
-          timeouts += 1;
-        } else {
-          dom.push(t.changedAt - t0);
-          frame.push(t.frameAt - t0);
-        }
-        // Let the page settle between edits.
-        await new Promise((r) => setTimeout(r, 5));
-      }
-      return { dom, frame, timeouts };
-    }, count);
+    return await page.evaluate(editLoop, count);
   } finally {
     await close();
   }
-}
-
-// 1,000 invented members of a made-up grain store: a mix of shapes,
-// materials and methods, lengths and loads varying member by member.
-function thousandMembers() {
-  const methods = ["en1993-1-1", "aisc360-lrfd", "aisc360-asd", "csa-s16", "perry-robertson", "secant", "euler"];
-  const members = [];
-  for (let i = 0; i < 1000; i += 1) {
-    const id = `G${String(i + 1).padStart(4, "0")}`;
-    const length_mm = 1500 + ((i * 37) % 4000);
-    const axial_kn = 20 + ((i * 53) % 700);
-    const steel = { fy_mpa: [235, 275, 355][i % 3], e_mpa: 210000 };
-    const pick = i % 5;
-    if (pick === 4) {
-      members.push({
-        id,
-        section: { kind: "rect", depth_mm: 120 + (i % 6) * 20, width_mm: 100 + (i % 4) * 20 },
-        material: { fc0k_mpa: 21, e005_mpa: 7400, e0mean_mpa: 11000, timber: "solid" },
-        length_mm,
-        axial_kn: 10 + (i % 90),
-        method: "en1995-1-1",
-      });
-      continue;
-    }
-    const section = [
-      { kind: "i", depth_mm: 200 + (i % 5) * 20, width_mm: 150 + (i % 3) * 25, flange_mm: 10 + (i % 4), web_mm: 6.5 + (i % 3), root_radius_mm: 12 },
-      { kind: "rhs", depth_mm: 100 + (i % 4) * 20, width_mm: 100, wall_mm: 5 + (i % 3), outer_radius_mm: 10 },
-      { kind: "chs", diameter_mm: 114.3 + (i % 4) * 25, wall_mm: 4 + (i % 3) },
-      { kind: "round", diameter_mm: 50 + (i % 6) * 10 },
-    ][pick];
-    members.push({ id, section, material: steel, length_mm, axial_kn, method: methods[i % methods.length] });
-  }
-  return members;
 }
 
 const THOUSAND = memberFile("Grain store (invented, 1,000 members)", thousandMembers());
@@ -338,21 +258,18 @@ async function measureThousand() {
   for (let run = 0; run < 3; run += 1) {
     const { context, close } = await launch();
     try {
-      await context.addInitScript(
-        ([key, value]) => {
-          if (!sessionStorage.getItem("strutline-bench-seeded")) {
-            sessionStorage.setItem("strutline-bench-seeded", "1");
-            localStorage.setItem(key, value);
-          }
-        },
-        [STORAGE_KEY, text],
-      );
+      await seedStorage(context, text);
       await context.addInitScript(watchRows, 1000);
       const page = await firstPage(context);
       await page.goto(BASE.href, { waitUntil: "load" });
       await page.waitForFunction(() => window.__strutlineAllRows && window.__strutlineAllRows.frame, null, {
         timeout: 30_000,
       });
+      // The members after the rows in view are checked in slices after
+      // the first frame: the engine's total is noted when the last is done.
+      await page
+        .waitForFunction(() => window.strutlineRecheck && window.strutlineRecheck.fresh >= 1000, null, { timeout: 30_000 })
+        .catch(() => {});
       const r = await page.evaluate(() => {
         const statuses = [...document.querySelectorAll("[data-testid=member-status]")];
         return {
@@ -385,15 +302,7 @@ async function measureSizing() {
   const runs = [];
   const { context, close } = await launch();
   try {
-    await context.addInitScript(
-      ([key, value]) => {
-        if (!sessionStorage.getItem("strutline-bench-seeded")) {
-          sessionStorage.setItem("strutline-bench-seeded", "1");
-          localStorage.setItem(key, value);
-        }
-      },
-      [STORAGE_KEY, text],
-    );
+    await seedStorage(context, text);
     const page = await firstPage(context);
     await page.goto(BASE.href, { waitUntil: "load" });
     await page.locator("[data-testid=member-row]").first().waitFor({ timeout: 30_000 });
@@ -440,7 +349,7 @@ console.log(`bench-web against ${BASE.href} on ${host.cpu} (${host.logical_cpus}
 
 const report = { started_at: startedAt, url: BASE.href, cache_name: CACHE_NAME, machine: host, targets: TARGETS, errors: {} };
 
-try {
+if (wanted("first")) try {
   const fr = await measureFirstRender();
   report.first_render = {
     cold_runs: fr.cold,
@@ -454,7 +363,7 @@ try {
   console.log(`first render: not measured: ${report.errors.first_render}`);
 }
 
-try {
+if (wanted("slow")) try {
   const sl = await measureSlow();
   const wasm = (sl.wire || []).find((e) => e.name.endsWith(".wasm"));
   const wireBytes = (sl.wire || []).reduce((n, e) => n + e.encoded, 0);
@@ -487,7 +396,7 @@ try {
   console.log(`slow connection: not measured: ${report.errors.slow}`);
 }
 
-try {
+if (wanted("edit")) try {
   const ed = await measureEdits(100);
   report.edit = {
     edits: ed.dom.length,
@@ -503,7 +412,7 @@ try {
   console.log(`edit: not measured: ${report.errors.edit}`);
 }
 
-try {
+if (wanted("edit")) try {
   const ed = await measureEdits(100, true);
   report.edit_beam_column = {
     edits: ed.dom.length,
@@ -520,8 +429,8 @@ try {
   console.log(`edit, beam-column: not measured: ${report.errors.edit_beam_column}`);
 }
 
-const thousandCli = cliThousand();
-try {
+const thousandCli = wanted("thousand") ? cliThousand() : {};
+if (wanted("thousand")) try {
   const th = await measureThousand();
   const toFrame = th.runs.map((r) => (r.ready === null ? NaN : r.frame - r.ready));
   const toMount = th.runs.map((r) => (r.ready === null || r.mounted === null ? NaN : r.mounted - r.ready));
@@ -539,7 +448,7 @@ try {
   console.log(`1,000 members: not measured: ${report.errors.thousand}`);
 }
 
-try {
+if (wanted("sizing")) try {
   const runs = await measureSizing();
   report.sizing = { runs, median_ms: median(runs.map((r) => r.ms)) };
   console.log(`sizing: ${fmt(report.sizing.median_ms)} ms for 1,000 members (median of ${runs.length})`);

@@ -104,6 +104,135 @@ export function memberFile(title, members) {
   return { format: "strutline.members", version: 1, title, members };
 }
 
+/** An invented beam-column for the edit measurement of a member with
+ * moments: a gallery post of a made-up cider-press house, a rolled I of
+ * custom steel to EN 1993-1-1, end moments about the major axis and a
+ * small uniform moment about the minor axis (the interaction chart). */
+export const MOMENTS_POST = {
+  id: "CP-2",
+  section: { kind: "i", depth_mm: 260, width_mm: 260, flange_mm: 17.5, web_mm: 10, root_radius_mm: 24 },
+  material: { fy_mpa: 355, e_mpa: 210000 },
+  length_mm: 3800,
+  axial_kn: 700,
+  method: "en1993-1-1",
+  m_major_a_knm: 45,
+  m_major_b_knm: -20,
+  m_minor_a_knm: 3,
+  m_minor_b_knm: 3,
+};
+
+// 1,000 invented members of a made-up grain store: a mix of shapes,
+// materials and methods, lengths and loads varying member by member.
+export function thousandMembers() {
+  const methods = ["en1993-1-1", "aisc360-lrfd", "aisc360-asd", "csa-s16", "perry-robertson", "secant", "euler"];
+  const members = [];
+  for (let i = 0; i < 1000; i += 1) {
+    const id = `G${String(i + 1).padStart(4, "0")}`;
+    const length_mm = 1500 + ((i * 37) % 4000);
+    const axial_kn = 20 + ((i * 53) % 700);
+    const steel = { fy_mpa: [235, 275, 355][i % 3], e_mpa: 210000 };
+    const pick = i % 5;
+    if (pick === 4) {
+      members.push({
+        id,
+        section: { kind: "rect", depth_mm: 120 + (i % 6) * 20, width_mm: 100 + (i % 4) * 20 },
+        material: { fc0k_mpa: 21, e005_mpa: 7400, e0mean_mpa: 11000, timber: "solid" },
+        length_mm,
+        axial_kn: 10 + (i % 90),
+        method: "en1995-1-1",
+      });
+      continue;
+    }
+    const section = [
+      { kind: "i", depth_mm: 200 + (i % 5) * 20, width_mm: 150 + (i % 3) * 25, flange_mm: 10 + (i % 4), web_mm: 6.5 + (i % 3), root_radius_mm: 12 },
+      { kind: "rhs", depth_mm: 100 + (i % 4) * 20, width_mm: 100, wall_mm: 5 + (i % 3), outer_radius_mm: 10 },
+      { kind: "chs", diameter_mm: 114.3 + (i % 4) * 25, wall_mm: 4 + (i % 3) },
+      { kind: "round", diameter_mm: 50 + (i % 6) * 10 },
+    ][pick];
+    members.push({ id, section, material: steel, length_mm, axial_kn, method: methods[i % methods.length] });
+  }
+  return members;
+}
+
+/** Stores `text` as the workspace once per browser session of `context`
+ * (a reload keeps what the app saved since). */
+export async function seedStorage(context, text) {
+  await context.addInitScript(
+    ([key, value]) => {
+      if (!sessionStorage.getItem("strutline-bench-seeded")) {
+        sessionStorage.setItem("strutline-bench-seeded", "1");
+        localStorage.setItem(key, value);
+      }
+    },
+    [STORAGE_KEY, text],
+  );
+}
+
+/** Opens the app and selects its first member (or the first row that
+ * `row` selects), waiting for its editor and its verdict. */
+export async function openForEditing(page, url, row = "[data-testid=member-row]") {
+  await page.goto(url, { waitUntil: "load" });
+  await page.locator(row).first().click({ timeout: 20_000 });
+  await page.locator("input[name=axial_kn]").first().waitFor({ state: "visible", timeout: 10_000 });
+  await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
+}
+
+/** Runs in the page (`page.evaluate(editLoop, n)`): sets a new design load
+ * in input[name=axial_kn] `n` times (input and change events, as typing
+ * gives) and returns, per edit, the milliseconds until
+ * [data-testid=result-utilisation] shows a new text (`dom`) and until the
+ * next animation frame after that (`frame`), and the count of edits that
+ * changed nothing within 2 s (`timeouts`). */
+export const editLoop = async (n) => {
+  const input = document.querySelector("input[name=axial_kn]");
+  const base = Number(String(input.value).replace(",", ".")) || 100;
+  const result = () => document.querySelector("[data-testid=result-utilisation]");
+  const dom = [];
+  const frame = [];
+  let timeouts = 0;
+  const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value").set;
+  for (let i = 0; i < n; i += 1) {
+    const before = result()?.textContent ?? "";
+    // Alternate above and below the starting load so the text changes.
+    const value = (base * (i % 2 === 0 ? 1.1 : 0.9) + i * 0.01).toFixed(2);
+    let t0 = 0;
+    const t = await new Promise((resolve) => {
+      let done = false;
+      const finish = (changedAt) => {
+        if (done) return;
+        done = true;
+        observer.disconnect();
+        clearTimeout(timer);
+        requestAnimationFrame(() => resolve({ changedAt, frameAt: performance.now() }));
+      };
+      const observer = new MutationObserver(() => {
+        if ((result()?.textContent ?? "") !== before) finish(performance.now());
+      });
+      observer.observe(document.body, { childList: true, subtree: true, characterData: true });
+      const timer = setTimeout(() => {
+        done = true;
+        observer.disconnect();
+        resolve(null);
+      }, 2000);
+      t0 = performance.now();
+      input.focus();
+      setter.call(input, value);
+      input.dispatchEvent(new Event("input", { bubbles: true }));
+      input.dispatchEvent(new Event("change", { bubbles: true }));
+      if ((result()?.textContent ?? "") !== before) finish(performance.now());
+    });
+    if (t === null) {
+      timeouts += 1;
+    } else {
+      dom.push(t.changedAt - t0);
+      frame.push(t.frameAt - t0);
+    }
+    // Let the page settle between edits.
+    await new Promise((r) => setTimeout(r, 5));
+  }
+  return { dom, frame, timeouts };
+};
+
 /** A workspace text as the app stores it. */
 export function workspaceText(lists) {
   return JSON.stringify({ revision: 1, format: "strutline.workspace", version: 1, active: 0, lists });

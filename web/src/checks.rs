@@ -1,5 +1,8 @@
 //! Memoised checks: each member is prepared and checked once per change;
-//! a list re-check reuses every result whose member is unchanged.
+//! a list re-check reuses every result whose member is unchanged. A long
+//! list is checked in slices ([`Checker::refresh`] with a limit): the
+//! first frame shows the rows in view checked, the others waiting (shown
+//! as such, never with a value), and the rest follow between frames.
 
 use std::collections::HashMap;
 use std::sync::Arc;
@@ -14,8 +17,8 @@ pub struct Checked {
     pub member: Member,
     /// Section and material resolved, when they are valid.
     pub prepared: Option<Prepared>,
-    /// The outcome.
-    pub outcome: Result<CheckResult, Error>,
+    /// The outcome; `None` while the member waits for its check.
+    pub outcome: Option<Result<CheckResult, Error>>,
 }
 
 impl Checked {
@@ -27,16 +30,41 @@ impl Checked {
                 Checked {
                     member: member.clone(),
                     prepared: Some(p),
-                    outcome,
+                    outcome: Some(outcome),
                 }
             }
             Err(e) => Checked {
                 member: member.clone(),
                 prepared: None,
-                outcome: Err(e),
+                outcome: Some(Err(e)),
             },
         }
     }
+
+    /// A member not checked yet.
+    pub fn waiting(member: &Member) -> Checked {
+        Checked {
+            member: member.clone(),
+            prepared: None,
+            outcome: None,
+        }
+    }
+
+    /// The check's result, once worked and valid.
+    pub fn result(&self) -> Option<&CheckResult> {
+        self.outcome.as_ref().and_then(|o| o.as_ref().ok())
+    }
+}
+
+/// What a [`Checker::refresh`] gave.
+#[derive(Debug, Default)]
+pub struct Refreshed {
+    /// One entry per member, in order.
+    pub checks: Vec<Arc<Checked>>,
+    /// How many were worked in this call.
+    pub fresh: usize,
+    /// How many still wait for their check.
+    pub waiting: usize,
 }
 
 /// Results remembered by member id.
@@ -51,23 +79,54 @@ impl Checker {
         Checker::default()
     }
 
-    /// The checks of `members`, in order, and how many were worked afresh.
-    pub fn refresh(&mut self, members: &[Member]) -> (Vec<Arc<Checked>>, usize) {
+    /// The checks of `members`, in order. Members unchanged since their
+    /// last check keep it; of the others, the one at `urgent` (the member
+    /// being edited) and then the first in order are worked, at most
+    /// `limit` in all (`usize::MAX`: every one); the rest are
+    /// [`Checked::waiting`] until a later call.
+    pub fn refresh(
+        &mut self,
+        members: &[Member],
+        urgent: Option<usize>,
+        limit: usize,
+    ) -> Refreshed {
         let mut old = std::mem::take(&mut self.cache);
-        let mut fresh = 0usize;
-        let mut out = Vec::with_capacity(members.len());
-        for m in members {
-            let c = match old.remove(&m.id) {
-                Some(c) if c.member == *m => c,
+        let mut out = Refreshed {
+            checks: Vec::with_capacity(members.len()),
+            ..Refreshed::default()
+        };
+        let mut budget = limit;
+        let work = |m: &Member, out: &mut Refreshed, budget: &mut usize| {
+            if *budget == 0 {
+                out.waiting += 1;
+                return Arc::new(Checked::waiting(m));
+            }
+            *budget -= 1;
+            out.fresh += 1;
+            Arc::new(Checked::new(m))
+        };
+        let first = urgent
+            .and_then(|i| members.get(i))
+            .map(|m| match old.remove(&m.id) {
+                Some(c) if c.member == *m && c.outcome.is_some() => c,
                 _ => {
-                    fresh += 1;
-                    Arc::new(Checked::new(m))
+                    let mut any = usize::MAX;
+                    work(m, &mut out, &mut any)
                 }
+            });
+        let mut first = first.map(|c| (urgent.unwrap_or(usize::MAX), c));
+        for (i, m) in members.iter().enumerate() {
+            let c = match first.take_if(|(at, _)| *at == i) {
+                Some((_, c)) => c,
+                None => match old.remove(&m.id) {
+                    Some(c) if c.member == *m && c.outcome.is_some() => c,
+                    _ => work(m, &mut out, &mut budget),
+                },
             };
             self.cache.insert(m.id.clone(), Arc::clone(&c));
-            out.push(c);
+            out.checks.push(c);
         }
-        (out, fresh)
+        out
     }
 }
 
@@ -86,18 +145,47 @@ mod tests {
     fn rechecks_only_changed_members() {
         let mut ms: Vec<Member> = (0..50).map(|i| sample_member(&format!("M{i}"))).collect();
         let mut c = Checker::new();
-        let (first, n) = c.refresh(&ms);
-        assert_eq!(n, 50);
-        assert_eq!(first.len(), 50);
+        let first = c.refresh(&ms, None, usize::MAX);
+        assert_eq!((first.fresh, first.waiting), (50, 0));
+        assert_eq!(first.checks.len(), 50);
         ms[7].axial_kn = 999.0;
         ms.swap(1, 2);
-        let (second, n) = c.refresh(&ms);
-        assert_eq!(n, 1, "only the edited member is worked again");
-        assert_eq!(second[7].outcome.as_ref().unwrap().id, "M7");
-        assert!(Arc::ptr_eq(&second[1], &first[2]));
-        let u7 = second[7].outcome.as_ref().unwrap().utilisation;
+        let second = c.refresh(&ms, None, usize::MAX);
+        assert_eq!(second.fresh, 1, "only the edited member is worked again");
+        assert_eq!(second.checks[7].result().unwrap().id, "M7");
+        assert!(Arc::ptr_eq(&second.checks[1], &first.checks[2]));
+        let u7 = second.checks[7].result().unwrap().utilisation;
         let fresh = strutline_core::check_member(&ms[7]).unwrap().utilisation;
         assert_eq!(u7, fresh);
+    }
+
+    #[test]
+    fn a_long_list_is_checked_in_slices_the_urgent_member_first() {
+        let ms: Vec<Member> = (0..30).map(|i| sample_member(&format!("M{i}"))).collect();
+        let mut c = Checker::new();
+        let a = c.refresh(&ms, Some(20), 10);
+        assert_eq!((a.fresh, a.waiting), (11, 19));
+        // The first ten in order and the urgent one are worked; the rest
+        // wait, with no outcome to show.
+        for (i, k) in a.checks.iter().enumerate() {
+            assert_eq!(k.member.id, format!("M{i}"));
+            assert_eq!(k.outcome.is_some(), i < 10 || i == 20, "member {i}");
+            if k.outcome.is_none() {
+                assert!(k.prepared.is_none() && k.result().is_none());
+            }
+        }
+        let b = c.refresh(&ms, Some(20), 10);
+        assert_eq!((b.fresh, b.waiting), (10, 9));
+        assert!(
+            Arc::ptr_eq(&a.checks[20], &b.checks[20]),
+            "kept, not worked again"
+        );
+        let done = c.refresh(&ms, None, usize::MAX);
+        assert_eq!((done.fresh, done.waiting), (9, 0));
+        for (k, m) in done.checks.iter().zip(&ms) {
+            let u = strutline_core::check_member(m).unwrap().utilisation;
+            assert_eq!(k.result().unwrap().utilisation, u);
+        }
     }
 
     #[test]
@@ -106,6 +194,6 @@ mod tests {
         m.length_mm = 0.0;
         let c = Checked::new(&m);
         assert!(c.prepared.is_none());
-        assert_eq!(c.outcome.unwrap_err().field(), Some("length_mm"));
+        assert_eq!(c.outcome.unwrap().unwrap_err().field(), Some("length_mm"));
     }
 }

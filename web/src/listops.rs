@@ -303,7 +303,8 @@ impl ListTools {
 
     /// How two members compare in the chosen order.
     fn compare(&self, a: &Checked, b: &Checked) -> Ordering {
-        let util = |c: &Checked| c.outcome.as_ref().ok().map(|r| r.utilisation);
+        // Not worked yet: no utilisation, so last (and shown as waiting).
+        let util = |c: &Checked| c.result().map(|r| r.utilisation);
         match (self.order, util(a), util(b)) {
             (Order::Entered, ..) => Ordering::Equal,
             (Order::Id, ..) => natural(&a.member.id, &b.member.id),

@@ -81,7 +81,14 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
         status_text(&c.outcome)
     );
     match &c.outcome {
-        Err(e) => {
+        None => {
+            h.lit(
+                "<dl class=\"verdict-numbers\">\
+                 <dt>utilisation</dt><dd><span data-testid=\"result-utilisation\">…</span></dd>\
+                 <dt>governs</dt><dd data-testid=\"result-governing\">…</dd></dl></div>",
+            );
+        }
+        Some(Err(e)) => {
             html!(
                 h,
                 "<p class=\"verdict-error\">{}</p><dl class=\"verdict-numbers\">\
@@ -91,7 +98,7 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                 said(&fields::error_text(e))
             );
         }
-        Ok(r) => {
+        Some(Ok(r)) => {
             let rd_text = result_text(sys, "kN", r.resistance_kn, 1);
             let (rd, ru) = split_unit(&rd_text);
             html!(
@@ -510,10 +517,11 @@ pub fn sheet_html(
         sys_name(sys),
     );
     for c in checks {
-        let rd = c
-            .outcome
-            .as_ref()
-            .map_or("—".into(), |r| result_text(sys, "kN", r.resistance_kn, 1));
+        let rd = match &c.outcome {
+            Some(Ok(r)) => result_text(sys, "kN", r.resistance_kn, 1),
+            Some(Err(_)) => "—".into(),
+            None => "…".into(),
+        };
         html!(
             h,
             "<tr><th scope=\"row\">{}</th><td>{}</td><td>{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>\
@@ -559,14 +567,14 @@ pub fn sheet_html(
         h.lit("</tbody></table>");
         // The moment diagrams as understood, beside the inputs they draw.
         h.push(&crate::diagram::svg(&c.member, sys));
-        if let Ok(r) = &c.outcome {
+        if let Some(r) = c.result() {
             h.lit("<h3>Section and material</h3>");
             h.push(&properties_html(r, sys));
         }
         h.push(&crate::sectionview::of_checked(c));
         h.lit("<h3>Result</h3>");
         h.push(&verdict_in(c, sys, true));
-        if let Ok(r) = &c.outcome {
+        if let Some(r) = c.result() {
             h.push(&working_in(r, sys, &crate::print::speak));
         }
         if let Some((_, url, legend, what)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
@@ -612,7 +620,7 @@ mod tests {
     #[test]
     fn verdict_shows_the_engine_figures() {
         let c = checked("C1");
-        let r = c.outcome.as_ref().unwrap();
+        let r = c.result().unwrap();
         let h = verdict_html(&c, UnitSystem::Si).into_string();
         assert!(h.contains(&format!(
             "<span data-testid=\"result-utilisation\">{:.3}</span>",
@@ -643,7 +651,7 @@ mod tests {
         m.method = strutline_core::method::Method::En1993;
         m.m_major_span_knm = 1.5;
         let c = Checked::new(&m);
-        let r = c.outcome.as_ref().unwrap();
+        let r = c.result().unwrap();
         let b = r.bending.unwrap();
         let h = verdict_html(&c, UnitSystem::Si).into_string();
         assert!(h.contains("bending, major axis"), "{h}");
@@ -685,7 +693,7 @@ mod tests {
     #[test]
     fn working_marks_the_governing_mode_and_every_step() {
         let c = checked("C2");
-        let r = c.outcome.as_ref().unwrap();
+        let r = c.result().unwrap();
         let h = working_html(r, UnitSystem::Si).into_string();
         assert_eq!(h.matches("◀ governs").count(), 1);
         assert_eq!(
@@ -726,7 +734,7 @@ mod tests {
         );
         let largest = solve::largest_load(p, p.member.method).unwrap();
         assert!(h.contains(&format!("<b>{:.1} kN</b>", largest.load_kn)));
-        assert!((largest.load_kn - c.outcome.as_ref().unwrap().resistance_kn).abs() < 1e-9);
+        assert!((largest.load_kn - c.result().unwrap().resistance_kn).abs() < 1e-9);
     }
 
     #[test]
@@ -751,7 +759,7 @@ mod tests {
         assert!(!h.contains("largest-moment-minor"));
         // The verdict's interaction table names each equation, the
         // governing one marked (entries set here as an equation would).
-        let mut r = c.outcome.clone().unwrap();
+        let mut r = c.result().cloned().unwrap();
         r.interaction = vec![
             strutline_core::interaction::Check {
                 check: "6.61",

@@ -26,7 +26,7 @@ type Polys = Vec<Vec<(f64, f64)>>;
 /// The view of a checked member (empty when the member did not resolve).
 pub fn of_checked(c: &Checked) -> Html {
     match &c.prepared {
-        Some(p) => svg(p, c.outcome.as_ref().ok()),
+        Some(p) => svg(p, c.result()),
         None => Html::new(),
     }
 }

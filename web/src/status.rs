@@ -14,15 +14,19 @@ pub enum Standing {
     Exceeds,
     /// The input cannot be checked.
     NeedsInput,
+    /// Not checked yet (a long list is checked in slices after its first
+    /// frame).
+    Waiting,
 }
 
 impl Standing {
-    /// Of a check outcome.
-    pub fn of(outcome: &Result<CheckResult, Error>) -> Standing {
+    /// Of a check outcome (`None`: not worked yet).
+    pub fn of(outcome: &Option<Result<CheckResult, Error>>) -> Standing {
         match outcome {
-            Ok(r) if r.passes => Standing::Holds,
-            Ok(_) => Standing::Exceeds,
-            Err(_) => Standing::NeedsInput,
+            Some(Ok(r)) if r.passes => Standing::Holds,
+            Some(Ok(_)) => Standing::Exceeds,
+            Some(Err(_)) => Standing::NeedsInput,
+            None => Standing::Waiting,
         }
     }
 
@@ -32,6 +36,7 @@ impl Standing {
             Standing::Holds => "✓",
             Standing::Exceeds => "✗",
             Standing::NeedsInput => "✎",
+            Standing::Waiting => "…",
         }
     }
 
@@ -41,6 +46,7 @@ impl Standing {
             Standing::Holds => "holds",
             Standing::Exceeds => "exceeds",
             Standing::NeedsInput => "fix input",
+            Standing::Waiting => "being checked",
         }
     }
 
@@ -50,20 +56,23 @@ impl Standing {
             Standing::Holds => "st-holds",
             Standing::Exceeds => "st-exceeds",
             Standing::NeedsInput => "st-input",
+            Standing::Waiting => "st-waiting",
         }
     }
 }
 
-/// The utilisation to three decimals, or "—" when there is none.
-pub fn utilisation_text(outcome: &Result<CheckResult, Error>) -> String {
+/// The utilisation to three decimals, "—" when there is none, "…" while
+/// it is not worked yet.
+pub fn utilisation_text(outcome: &Option<Result<CheckResult, Error>>) -> String {
     match outcome {
-        Ok(r) => fixed(r.utilisation, 3),
-        Err(_) => "—".into(),
+        Some(Ok(r)) => fixed(r.utilisation, 3),
+        Some(Err(_)) => "—".into(),
+        None => "…".into(),
     }
 }
 
 /// The status line of a member: "✓ holds", "✗ exceeds", "✎ fix input".
-pub fn status_text(outcome: &Result<CheckResult, Error>) -> String {
+pub fn status_text(outcome: &Option<Result<CheckResult, Error>>) -> String {
     let s = Standing::of(outcome);
     format!("{} {}", s.symbol(), s.word())
 }
@@ -120,18 +129,22 @@ mod tests {
     fn words_and_symbols() {
         let mut m = demo::sample_member("T1");
         m.axial_kn = 1.0;
-        let ok = strutline_core::check_member(&m);
+        let ok = Some(strutline_core::check_member(&m));
         assert_eq!(Standing::of(&ok), Standing::Holds);
         assert_eq!(status_text(&ok), "✓ holds");
-        let u = ok.as_ref().unwrap().utilisation;
+        let u = ok.as_ref().unwrap().as_ref().unwrap().utilisation;
         assert_eq!(utilisation_text(&ok), format!("{u:.3}"));
         m.axial_kn = 1e6;
-        let over = strutline_core::check_member(&m);
+        let over = Some(strutline_core::check_member(&m));
         assert_eq!(status_text(&over), "✗ exceeds");
         m.length_mm = -1.0;
-        let bad = strutline_core::check_member(&m);
+        let bad = Some(strutline_core::check_member(&m));
         assert_eq!(status_text(&bad), "✎ fix input");
         assert_eq!(utilisation_text(&bad), "—");
+        // Not worked yet: said so, with no value.
+        assert_eq!(Standing::of(&None), Standing::Waiting);
+        assert_eq!(status_text(&None), "… being checked");
+        assert_eq!(utilisation_text(&None), "…");
     }
 
     #[test]

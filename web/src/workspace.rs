@@ -4,7 +4,7 @@
 //!
 //! `{"format": "strutline.workspace", "version": 1, "revision": n,
 //! "active": i, "lists": [MEMBER FILE, ...]}`; each list is read with
-//! [`strutline_core::file::parse`], so lists of older member-file versions
+//! [`strutline_core::file::from_value`], so lists of older member-file versions
 //! migrate.
 
 use serde_json::{Map, Value};
@@ -89,7 +89,7 @@ pub fn peek_revision(text: &str) -> Option<u64> {
 
 /// Reads stored text. The error says, in words, why it cannot be used.
 pub fn decode(text: &str) -> Result<Workspace, String> {
-    let value: Value = serde_json::from_str(text)
+    let mut value: Value = serde_json::from_str(text)
         .map_err(|e| format!("the saved workspace is not valid JSON ({e})"))?;
     let obj: &Map<String, Value> = value
         .as_object()
@@ -119,19 +119,6 @@ pub fn decode(text: &str) -> Result<Workspace, String> {
             .as_u64()
             .ok_or("the saved workspace's \"revision\" is not a whole number")?,
     };
-    let raw_lists = obj
-        .get("lists")
-        .and_then(Value::as_array)
-        .ok_or("the saved workspace has no \"lists\" array")?;
-    let mut lists = Vec::with_capacity(raw_lists.len());
-    for (i, raw) in raw_lists.iter().enumerate() {
-        let title = raw.get("title").and_then(Value::as_str).unwrap_or("");
-        // The pretty writer: the one the app already carries.
-        let text = serde_json::to_string_pretty(raw).unwrap_or_default();
-        let list = file::parse(&text)
-            .map_err(|e| format!("list {} (\"{title}\") cannot be read: {e}", i + 1))?;
-        lists.push(list);
-    }
     let active = match obj.get("active") {
         None => 0,
         Some(v) => v
@@ -139,6 +126,22 @@ pub fn decode(text: &str) -> Result<Workspace, String> {
             .ok_or("the saved workspace's \"active\" is not a whole number")?
             as usize,
     };
+    let raw_lists = match value.get_mut("lists") {
+        Some(Value::Array(a)) => std::mem::take(a),
+        _ => return Err("the saved workspace has no \"lists\" array".into()),
+    };
+    let mut lists = Vec::with_capacity(raw_lists.len());
+    for (i, raw) in raw_lists.into_iter().enumerate() {
+        let title = raw
+            .get("title")
+            .and_then(Value::as_str)
+            .unwrap_or("")
+            .to_string();
+        // Read from the parsed value: the text is not written and read again.
+        let list = file::from_value(raw)
+            .map_err(|e| format!("list {} (\"{title}\") cannot be read: {e}", i + 1))?;
+        lists.push(list);
+    }
     let mut ws = Workspace::new(lists);
     ws.revision = revision;
     ws.active = active.min(ws.lists.len().saturating_sub(1));

@@ -12,12 +12,13 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
     let active = Memo::new(move |_| ctx.ws.with(|w| w.active));
     let summary = Memo::new(move |_| {
         ctx.checks.with(|c| {
-            let mut n = [0usize; 3];
+            let mut n = [0usize; 4];
             for k in c.0.iter() {
                 match Standing::of(&k.outcome) {
                     Standing::Holds => n[0] += 1,
                     Standing::Exceeds => n[1] += 1,
                     Standing::NeedsInput => n[2] += 1,
+                    Standing::Waiting => n[3] += 1,
                 }
             }
             (c.0.len(), n)
@@ -109,7 +110,11 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
         <p class="list-summary" role="status">
             {move || {
                 let (total, n) = summary.get();
-                format!("{total} members · {} ✓ hold · {} ✗ exceed · {} ✎ need input", n[0], n[1], n[2])
+                let mut s = format!("{total} members · {} ✓ hold · {} ✗ exceed · {} ✎ need input", n[0], n[1], n[2]);
+                if n[3] > 0 {
+                    s.push_str(&format!(" · {} … being checked", n[3]));
+                }
+                s
             }}
         </p>
         <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {
@@ -144,6 +149,9 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     // The box's height, when laid out and whenever the window changes.
     Effect::new(move |_| {
         ctx.resize.track();
+        if !ctx.painted.get() {
+            return;
+        }
         if let Some(el) = scroller.get() {
             let h = f64::from(el.client_height());
             if h > 0.0 {
@@ -164,6 +172,10 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     // elsewhere (added, copied, moved, picked in another way).
     Effect::new(move |_| {
         let Some(id) = selected_id.get() else { return };
+        // Its scroll position needs the layout: not before the first frame.
+        if !ctx.painted.get() {
+            return;
+        }
         let Some(at) = shown.with_untracked(|s| s.0.iter().position(|c| c.member.id == id)) else {
             return;
         };

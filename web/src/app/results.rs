@@ -24,13 +24,13 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
             let sys = units.get();
             current.get().map(|c| {
                 let mut h = Html::new();
-                if let Ok(r) = &c.outcome {
+                if let Some(r) = c.result() {
                     // The docked verdict leaves its warnings here.
                     html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
                     h.push(&report::checks_html(r, sys));
                 }
                 h.push(&crate::sectionview::of_checked(&c));
-                if let Ok(r) = &c.outcome {
+                if let Some(r) = c.result() {
                     h.push(&report::working_html(r, sys));
                 }
                 if let Some(p) = &c.prepared {
@@ -256,6 +256,10 @@ pub(super) fn Chart(
         let interaction = interaction_shown();
         ctx.resize.track();
         ctx.chart_open.track();
+        // Drawn after the first frame: its size needs the layout.
+        if !ctx.painted.get() {
+            return;
+        }
         let Some(el) = canvas.get() else {
             return;
         };
@@ -276,10 +280,7 @@ pub(super) fn Chart(
         ] {
             let _ = el.remove_attribute(a);
         }
-        let ready = c.as_ref().and_then(|c| match (&c.prepared, &c.outcome) {
-            (Some(p), Ok(r)) => Some((p, r)),
-            _ => None,
-        });
+        let ready = c.as_ref().and_then(|c| c.prepared.as_ref().zip(c.result()));
         let Some((p, r)) = ready else {
             legend.set(legend_html(perry, None));
             note.set(Some(
@@ -343,6 +344,9 @@ pub(super) fn Chart(
         current.track();
         ctx.chart_open.track();
         ctx.resize.track();
+        if !ctx.painted.get() {
+            return;
+        }
         request_animation_frame(move || {
             if let Some(el) = head.get_untracked() {
                 browser::set_root_px("--dock", f64::from(el.offset_height()));

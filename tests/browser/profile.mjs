@@ -1,0 +1,117 @@
+// Where the time goes: `node tests/browser/profile.mjs --url URL --case
+// thousand|edit|edit-moments [--runs N] [--top N] [--save FILE]`. Records
+// Chromium's own sampling profiler (the DevTools protocol's Profiler
+// domain, through a playwright-core CDP session) around
+//   thousand:      loading a stored workspace of 1,000 members, from the
+//                  navigation until the rows in view are in the page and
+//                  the next frame has started;
+//   edit:          `--runs` edits of the design load of the demo's first
+//                  member (a compression member), as bench.mjs times them;
+//   edit-moments:  the same on a member with moments (the interaction
+//                  chart is drawn on each edit).
+// Prints the functions with the most time of their own and the most time
+// under them (self + callees). Function names are there only in a build
+// that keeps them: `cargo xtask dist --keep-names` (dist-names/), served
+// by any static server. A tool for looking, not a measurement: the
+// figures are in bench/web.md, from bench.mjs.
+
+import { writeFileSync } from "node:fs";
+import {
+  arg,
+  editLoop,
+  firstPage,
+  launch,
+  memberFile,
+  MOMENTS_POST,
+  openForEditing,
+  seedStorage,
+  thousandMembers,
+  workspaceText,
+} from "./lib.mjs";
+
+const URL_ARG = arg("--url");
+const CASE = arg("--case", "edit");
+const RUNS = Number(arg("--runs", "30"));
+const TOP = Number(arg("--top", "40"));
+const SAVE = arg("--save");
+if (!URL_ARG || !["thousand", "edit", "edit-moments"].includes(CASE)) {
+  console.error("usage: node profile.mjs --url URL --case thousand|edit|edit-moments [--runs N] [--top N] [--save FILE]");
+  process.exit(2);
+}
+
+/** Self and total (self + callees, each function once per sample) time
+ * per function, from a CDP profile. */
+function summarise(profile) {
+  const byId = new Map(profile.nodes.map((n) => [n.id, n]));
+  const parent = new Map();
+  for (const n of profile.nodes) for (const c of n.children || []) parent.set(c, n.id);
+  const name = (n) => {
+    const f = n.callFrame;
+    const file = (f.url || "").split("/").pop();
+    return `${f.functionName || "(anonymous)"} ${file}${file ? `:${f.lineNumber + 1}` : ""}`;
+  };
+  const self = new Map();
+  const total = new Map();
+  const dt = profile.timeDeltas || [];
+  profile.samples.forEach((id, i) => {
+    const ms = (dt[i + 1] ?? dt[i] ?? 0) / 1000;
+    let n = byId.get(id);
+    const k = name(n);
+    self.set(k, (self.get(k) || 0) + ms);
+    const seen = new Set();
+    for (let at = id; at !== undefined; at = parent.get(at)) {
+      const key = name(byId.get(at));
+      if (seen.has(key)) continue;
+      seen.add(key);
+      total.set(key, (total.get(key) || 0) + ms);
+    }
+  });
+  const span = (profile.endTime - profile.startTime) / 1000;
+  return { self, total, span };
+}
+
+function print(title, map, top) {
+  console.log(`\n${title}`);
+  for (const [k, ms] of [...map].sort((a, b) => b[1] - a[1]).slice(0, top)) {
+    console.log(`${ms.toFixed(1).padStart(9)} ms  ${k}`);
+  }
+}
+
+const { context, close } = await launch();
+try {
+  if (CASE === "thousand") {
+    await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers())]));
+  } else if (CASE === "edit-moments") {
+    await seedStorage(context, workspaceText([memberFile("Cider-press house (invented)", [MOMENTS_POST])]));
+  }
+  const page = await firstPage(context);
+  const cdp = await context.newCDPSession(page);
+  await cdp.send("Profiler.enable");
+  await cdp.send("Profiler.setSamplingInterval", { interval: 100 });
+  let note = "";
+  if (CASE === "thousand") {
+    await cdp.send("Profiler.start");
+    await page.goto(URL_ARG, { waitUntil: "load" });
+    await page.locator("[data-testid=member-row]").first().waitFor({ timeout: 30_000 });
+    await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => r())));
+    const marks = await page.evaluate(() => ({
+      ready: performance.getEntriesByName("strutline-wasm-ready")[0]?.startTime ?? null,
+      mounted: performance.getEntriesByName("strutline-mounted")[0]?.startTime ?? null,
+    }));
+    note = `module ready at ${marks.ready?.toFixed(1)} ms, start() returned at ${marks.mounted?.toFixed(1)} ms`;
+  } else {
+    await openForEditing(page, URL_ARG);
+    await cdp.send("Profiler.start");
+    const r = await page.evaluate(editLoop, RUNS);
+    const med = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+    note = `${r.dom.length} edits under the profiler: DOM median ${med(r.dom).toFixed(2)} ms, next frame median ${med(r.frame).toFixed(2)} ms`;
+  }
+  const { profile } = await cdp.send("Profiler.stop");
+  if (SAVE) writeFileSync(SAVE, JSON.stringify(profile));
+  const s = summarise(profile);
+  console.log(`${CASE}: ${note}; ${s.span.toFixed(1)} ms profiled`);
+  print("self time", s.self, TOP);
+  print("total time (self + callees)", s.total, TOP);
+} finally {
+  await close();
+}
