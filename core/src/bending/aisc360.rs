@@ -113,7 +113,7 @@ pub(super) fn between(mp: f64, low: f64, lambda: f64, lp: f64, lr: f64) -> f64 {
 }
 
 /// Lateral-torsional buckling strength over the three ranges of unbraced
-/// length that F2 and F7 share: M_p up to L_p, the line from M_p to
+/// length that F2, F7 and (in stress, S_x = 1) F5 share: M_p up to L_p, the line from M_p to
 /// 0.7 F_y S_x (times C_b, at most M_p) up to L_r, the elastic M_cr (at most
 /// M_p) beyond.
 #[allow(clippy::too_many_arguments)]
@@ -363,7 +363,7 @@ fn f4_f5(
     let f_flb = if lf <= lpf {
         fy
     } else if lf <= lrf {
-        fy - 0.3 * fy * (lf - lpf) / (lrf - lpf)
+        between(fy, 0.7 * fy, lf, lpf, lrf)
     } else {
         0.9 * e * kc / (lf * lf)
     };
@@ -415,13 +415,8 @@ fn f4_f5(
         "kNm",
         "AISC 360-16 Eq. F5-4"
     );
-    let f_ltb = if lb <= lp {
-        fy
-    } else if lb <= lr {
-        (cb * (fy - 0.3 * fy * (lb - lp) / (lr - lp))).min(fy)
-    } else {
-        f_el.min(fy)
-    };
+    // F5-2 and F5-3: the three ranges of F2 in stress (S_x = 1).
+    let f_ltb = ltb_ranges(lb, lp, lr, fy, fy, 1.0, cb, f_el);
     let ltb = rpg * f_ltb * sx;
     step!(
         trace,
