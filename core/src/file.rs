@@ -24,7 +24,11 @@ pub const FORMAT: &str = "strutline.members";
 /// `amplify_moments` and `interaction_annex`, and the given section's
 /// `w_el_*_mm3`, `w_pl_*_mm3`), the buckling keys `frame_major`,
 /// `frame_minor` and `buckling_model`, and the optional top-level `sheet`
-/// (the calc sheet's header); a version-2 file carries none of them.
+/// (the calc sheet's header); a version-2 file carries none of them. A
+/// version-3 file without `interaction_annex` reads unchanged but is now
+/// checked against both EN 1993-1-1 annexes (the larger utilisation of each
+/// equation) where earlier builds took Annex B: the format is the same, so
+/// there is no new version and no migration (docs/member-file.md).
 pub const VERSION: u64 = 3;
 
 /// A list of members with a title.

@@ -161,13 +161,15 @@ impl LoadLevel {
 }
 
 /// Which annex of EN 1993-1-1 gives the interaction factors k_ij of
-/// 6.3.3(4) (member file version 3, key `interaction_annex`).
-#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize, Default)]
+/// 6.3.3(4) (member file version 3, key `interaction_annex`). The key
+/// absent (`Member::interaction_annex` is `None`) leaves the choice open:
+/// both annexes are worked and the larger utilisation of each equation is
+/// taken, said on the result (`interaction-annex-open`).
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Hash, Serialize, Deserialize)]
 pub enum InteractionAnnex {
     /// Annex A (Method 1).
     A,
-    /// Annex B (Method 2), the default.
-    #[default]
+    /// Annex B (Method 2).
     B,
 }
 
@@ -381,10 +383,12 @@ pub struct Member {
     /// already include the member's second-order effects (version 3).
     #[serde(default = "yes", skip_serializing_if = "is_true")]
     pub amplify_moments: bool,
-    /// EN 1993-1-1 interaction factors: Annex B (Method 2, the default) or
-    /// Annex A (Method 1) (version 3).
-    #[serde(default, skip_serializing_if = "is_default")]
-    pub interaction_annex: InteractionAnnex,
+    /// EN 1993-1-1 interaction factors: Annex A (Method 1) or Annex B
+    /// (Method 2) (version 3). `None` (the key absent) leaves the choice
+    /// open: both are worked and the larger utilisation of each equation is
+    /// taken (the lower resistance), said on the result.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub interaction_annex: Option<InteractionAnnex>,
 }
 
 /// What the material needs to know of a built section (its governing
@@ -522,7 +526,7 @@ impl Member {
             lt_restrained: false,
             load_level: LoadLevel::default(),
             amplify_moments: true,
-            interaction_annex: InteractionAnnex::default(),
+            interaction_annex: None,
         }
     }
 

@@ -342,6 +342,12 @@ impl Trace {
         self.steps.clear();
     }
 
+    /// Drops every step after the first `n` (the working of a step that was
+    /// abandoned, such as an annex that could not be evaluated).
+    pub fn truncate(&mut self, n: usize) {
+        self.steps.truncate(n);
+    }
+
     /// The steps as a vector.
     pub fn into_steps(self) -> Vec<Step> {
         self.steps

@@ -50,11 +50,15 @@ const SAMPLED: f64 = 1e-5;
 const FY: f64 = 355.0;
 const E: f64 = 210_000.0;
 
+/// A member with the keys of `extra`, Annex B's factors where `extra` does
+/// not name the annex (these tests work one annex at a time; the annex left
+/// open is [`member_open`]).
 fn member(extra: serde_json::Value) -> strutline_core::Member {
     let mut m = json!({
         "id": "BC1",
         "material": {"fy_mpa": 355, "e_mpa": 210000, "g_mpa": 81000},
         "method": "en1993-1-1",
+        "interaction_annex": "B",
     });
     if let (Some(o), Some(e)) = (m.as_object_mut(), extra.as_object()) {
         for (k, v) in e {
@@ -62,6 +66,13 @@ fn member(extra: serde_json::Value) -> strutline_core::Member {
         }
     }
     member_from_json(m)
+}
+
+/// A member with the keys of `extra` and no `interaction_annex`.
+fn member_open(extra: serde_json::Value) -> strutline_core::Member {
+    let mut m = member(extra);
+    m.interaction_annex = None;
+    m
 }
 
 fn welded_i(h: f64, b: f64, tf: f64, tw: f64) -> serde_json::Value {
@@ -1064,4 +1075,146 @@ fn passes_only_when_every_equation_is_within_one() {
             }
         }
     }
+}
+
+// ---------------------------------------------------------------------------
+// The annex left open (no `interaction_annex`): both annexes are worked and
+// the larger utilisation of each equation is taken (the project's rule for
+// a choice the input leaves open: the lower resistance), named in the
+// warning `interaction-annex-open` and in the working.
+
+/// The warning that names the governing annex.
+fn open_warning(r: &CheckResult) -> &str {
+    &r.warnings
+        .iter()
+        .find(|w| w.code == "interaction-annex-open")
+        .unwrap_or_else(|| panic!("{}: no interaction-annex-open: {:?}", r.id, r.warnings))
+        .message
+}
+
+/// The last working line of an equation: the one that names the annex.
+fn last_step<'a>(r: &'a CheckResult, symbol: &str) -> &'a strutline_core::trace::Step {
+    r.trace
+        .iter()
+        .rev()
+        .find(|s| s.scope == Scope::Interaction && s.symbol.as_str() == symbol)
+        .unwrap_or_else(|| panic!("{}: no {symbol} in the interaction working", r.id))
+}
+
+#[test]
+fn annex_open_annex_b_governs_both_equations() {
+    // The member of the first test, held laterally: Annex B gives (6.61)
+    // 0.63692 and (6.62) 0.75417 (first test), Annex A 0.63282 and 0.69707
+    // (annex_a_held_laterally_class_2), each worked by hand there. Left
+    // open, both equations take Annex B's, the larger.
+    let m = member_open(json!({
+        "section": welded_i(300.0, 300.0, 19.0, 11.0), "length_mm": 6000, "axial_kn": 1200,
+        "lt_restrained": true, "m_major_a_knm": 150, "m_major_b_knm": 150, "m_minor_span_knm": 30
+    }));
+    assert_eq!(m.interaction_annex, None);
+    let r = check_member(&m).unwrap();
+    assert_close(
+        eq(&r, "6.61"),
+        0.6369224770695354,
+        HAND,
+        "Eq. 6.61, Annex B",
+    );
+    assert_close(
+        eq(&r, "6.62"),
+        0.7541709637731417,
+        HAND,
+        "Eq. 6.62, Annex B",
+    );
+    assert_close(r.utilisation, 0.7541709637731417, HAND, "the largest check");
+    assert_eq!(r.governing_check, "6.62");
+    let w = open_warning(&r);
+    assert!(
+        w.contains("(6.61) Annex B (Method 2) governs")
+            && w.contains("(6.62) Annex B (Method 2) governs")
+            && w.contains("Annex A 0.697, Annex B 0.754"),
+        "{w}"
+    );
+    // Both annexes' factors are in the working (Table B.3's C_mz, Table
+    // A.2's C_mz,0), and the equations' last lines name the annex.
+    assert_close(working(&r, "C_mz"), 0.95, TABLE, "C_mz, Table B.3");
+    assert_close(
+        working(&r, "C_mz,0"),
+        0.9561344567750799,
+        HAND,
+        "C_mz,0, Table A.2",
+    );
+    for name in ["6.61", "6.62"] {
+        let s = last_step(&r, name);
+        assert!(s.label.contains("Annex B (Method 2) governs"), "{s:?}");
+    }
+}
+
+#[test]
+fn annex_open_annex_a_governs_the_member() {
+    // The Class 3 member of annex_a_class_3_general_row_of_table_a2: Annex
+    // A gives (6.61) 0.47981 and (6.62) 0.56323 (worked by hand there).
+    // Annex B gives (6.61) 0.48499 and (6.62) 0.53150 (the engine with
+    // interaction_annex "B", whose factors the Annex B tests above check by
+    // hand). Left open: (6.61) from Annex B, (6.62) from Annex A, which
+    // governs the member.
+    let extra = json!({
+        "section": welded_i(300.0, 300.0, 14.0, 11.0), "length_mm": 5000, "axial_kn": 800,
+        "lt_restrained": true,
+        "m_major_a_knm": 100, "m_major_b_knm": -40, "m_major_span_knm": 60
+    });
+    let b = check_member(&member(extra.clone())).unwrap();
+    let r = check_member(&member_open(extra)).unwrap();
+    assert!(eq(&b, "6.61") > 0.47981176217136856 && eq(&b, "6.62") < 0.5632280704920798);
+    assert_close(eq(&r, "6.61"), eq(&b, "6.61"), HAND, "Eq. 6.61, Annex B");
+    assert_close(
+        eq(&r, "6.62"),
+        0.5632280704920798,
+        SAMPLED,
+        "Eq. 6.62, Annex A",
+    );
+    assert_eq!(r.governing_check, "6.62");
+    assert_close(r.utilisation, eq(&r, "6.62"), HAND, "the largest check");
+    let w = open_warning(&r);
+    assert!(
+        w.contains("(6.61) Annex B (Method 2) governs")
+            && w.contains("(6.62) Annex A (Method 1) governs"),
+        "{w}"
+    );
+    assert!(last_step(&r, "6.62")
+        .label
+        .contains("Annex A (Method 1) governs"));
+    assert!(last_step(&r, "6.61")
+        .label
+        .contains("Annex B (Method 2) governs"));
+    // Neither explicit annex carries the warning.
+    assert!(b
+        .warnings
+        .iter()
+        .all(|w| w.code != "interaction-annex-open"));
+}
+
+#[test]
+fn annex_open_without_a_torsion_constant_takes_annex_b_and_says_so() {
+    // Typed properties of an open section without torsion_mm4: Annex A
+    // needs N_cr,T and cannot be evaluated, so Annex B's values are taken
+    // and the warning says why.
+    let extra = json!({
+        "section": {"kind": "given", "area_mm2": 14282, "i_major_mm4": 241.9e6, "i_minor_mm4": 85.5e6,
+                    "w_el_major_mm3": 1.61e6, "w_el_minor_mm3": 0.57e6},
+        "length_mm": 5000, "axial_kn": 900, "lt_restrained": true,
+        "m_major_a_knm": 120, "m_major_b_knm": 120
+    });
+    let b = check_member(&member(extra.clone())).unwrap();
+    let r = check_member(&member_open(extra)).unwrap();
+    assert_eq!(r.interaction, b.interaction);
+    let w = open_warning(&r);
+    assert!(
+        w.contains("Annex A could not be evaluated") && w.contains("torsion_mm4"),
+        "{w}"
+    );
+    // No line of Annex A's working is left behind.
+    assert!(r.trace.iter().all(|s| s.symbol.as_str() != "C_my,0"));
+    assert!(last_step(&r, "annex")
+        .label
+        .contains("Annex B's values are taken"));
 }

@@ -1008,7 +1008,11 @@ mod tests {
         let annex = member_choice("interaction_annex").unwrap();
         assert_eq!(
             annex.options,
-            vec![("", "Annex B (Method 2)"), ("A", "Annex A (Method 1)")]
+            vec![
+                ("", "the larger of Annex A and Annex B"),
+                ("A", "Annex A (Method 1)"),
+                ("B", "Annex B (Method 2)")
+            ]
         );
         let curve = member_choice("curve_major").unwrap();
         assert_eq!(curve.options.len(), 6);

@@ -383,9 +383,26 @@ mod tests {
                             c.axis
                         );
                     }
-                    // The compression never falls as the moment falls.
-                    for w in c.points.windows(2) {
-                        assert!(w[1].moment_knm <= w[0].moment_knm * (1.0 + 1e-9));
+                    // The compression never falls as the moment falls,
+                    // but for the first step off the moment axis under EN
+                    // 1993-1-1 with the annex left open: there Annex A's
+                    // C_my tends to 1 as N_Ed -> 0 (epsilon_y infinite) and
+                    // is a little below 1 at a small compression, so (6.61)
+                    // lets the moment rise by a fraction of a percent above
+                    // the bending resistance at N = 0 (the code's own
+                    // equations, which the curve follows).
+                    for (i, w) in c.points.windows(2).enumerate() {
+                        let slack = if i == 0 && method == Method::En1993 {
+                            1e-3
+                        } else {
+                            1e-9
+                        };
+                        assert!(
+                            w[1].moment_knm <= w[0].moment_knm * (1.0 + slack),
+                            "{method:?} {} ({n}, {mx}, {my}) {:?}",
+                            c.axis,
+                            c.points
+                        );
                     }
                     let within = own.utilisation <= 1.0;
                     assert_eq!(c.contains_member(), within, "{method:?} {} {c:?}", c.axis);
@@ -498,6 +515,7 @@ mod tests {
         );
         m.m_major_a_knm = 50.0;
         m.m_major_b_knm = 50.0;
+        m.interaction_annex = Some(crate::member::InteractionAnnex::B);
         let p = Prepared::new(&m).unwrap();
         let c = curve(&p, Method::En1993, Axis::Major).unwrap();
         assert!(c.worked, "EN 1993-1-1's equations shape the curve");

@@ -1,7 +1,10 @@
 //! EN 1993-1-1:2005 (+AC:2009) beam-columns: the member check 6.3.3,
-//! equations (6.61) and (6.62), with the interaction factors k_ij of Annex B
-//! (Method 2, the default) or Annex A (Method 1), and the cross-section
-//! check 6.2.9.
+//! equations (6.61) and (6.62), with the interaction factors k_ij of Annex A
+//! (Method 1) or Annex B (Method 2) as `interaction_annex` says, and the
+//! cross-section check 6.2.9. Without `interaction_annex` the choice is
+//! open: both annexes are worked and the larger utilisation of each equation
+//! is taken, named in the working and the warning `interaction-annex-open`
+//! (Annex B alone, with the reason, where Annex A cannot be evaluated).
 //!
 //! Axes: the equations' y-y is the member's major principal axis and z-z its
 //! minor one (for I sections and channels y-y is then the axis parallel to
@@ -62,11 +65,12 @@ pub fn check(
     let b = Basis::new(ctx, steel, trace)?;
     let section = section_check(ctx, &b, trace);
     let (u61, u62) = match ctx.input.member.interaction_annex {
-        InteractionAnnex::B => {
+        Some(InteractionAnnex::B) => {
             let cm = factors_b(ctx, trace, warnings);
             annex_b(ctx, &b, &cm, trace)
         }
-        InteractionAnnex::A => annex_a(ctx, steel, &b, trace, warnings)?,
+        Some(InteractionAnnex::A) => annex_a(ctx, steel, &b, trace, warnings)?,
+        None => open_annex(ctx, steel, &b, trace, warnings),
     };
     Ok(Some(vec![
         Check {
@@ -82,6 +86,128 @@ pub fn check(
             utilisation: u62,
         },
     ]))
+}
+
+/// `interaction_annex` absent: the file leaves the choice of annex open, so
+/// both are worked and the larger utilisation of each equation is taken
+/// (the lower resistance; the project's rule for an open choice), named in
+/// the working and in the warning `interaction-annex-open`. Where Annex A
+/// cannot be evaluated (an open section without a torsion constant, say),
+/// Annex B is used and the warning gives the reason.
+fn open_annex(
+    ctx: &Context<'_>,
+    steel: &Steel,
+    b: &Basis,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> (f64, f64) {
+    step!(
+        trace,
+        S,
+        "annex",
+        "interaction_annex not given: the interaction factors of Annex B (Method 2) and of Annex \
+         A (Method 1) are both worked and the larger utilisation of each equation is taken (the \
+         lower resistance)",
+        0.0,
+        "-",
+        "EN 1993-1-1 6.3.3(5), note 1 (recalled from memory)"
+    );
+    let cm = factors_b(ctx, trace, warnings);
+    let (b61, b62) = annex_b(ctx, b, &cm, trace);
+    let (steps, noted) = (trace.len(), warnings.len());
+    let (a61, a62) = match annex_a(ctx, steel, b, trace, warnings) {
+        Ok(a) => a,
+        Err(e) => {
+            trace.truncate(steps);
+            warnings.truncate(noted);
+            step!(
+                trace,
+                S,
+                "annex",
+                "Annex A could not be evaluated (see the warning): Annex B's values are taken",
+                2.0,
+                "-",
+                "EN 1993-1-1 6.3.3(5), note 1 (recalled from memory)"
+            );
+            warnings.push(Warning::new(
+                "interaction-annex-open",
+                format!(
+                    "interaction_annex: not given, so the larger of EN 1993-1-1 Annex A (Method \
+                     1) and Annex B (Method 2) was to be taken, but Annex A could not be \
+                     evaluated ({e}); Annex B (Method 2) is used: (6.61) {b61:.3}, (6.62) \
+                     {b62:.3}. Give interaction_annex \"B\" to say so, or the missing value \
+                     to compare both"
+                ),
+            ));
+            return (b61, b62);
+        }
+    };
+    let a_governs_61 = a61 > b61;
+    let a_governs_62 = a62 > b62;
+    let u61 = if a_governs_61 { a61 } else { b61 };
+    let u62 = if a_governs_62 { a62 } else { b62 };
+    if a_governs_61 {
+        step!(
+            trace,
+            S,
+            "6.61",
+            "the larger of the two annexes: Annex A (Method 1) governs",
+            u61,
+            "-",
+            "EN 1993-1-1 Eq. 6.61, Annex A"
+        );
+    } else {
+        step!(
+            trace,
+            S,
+            "6.61",
+            "the larger of the two annexes: Annex B (Method 2) governs",
+            u61,
+            "-",
+            "EN 1993-1-1 Eq. 6.61, Annex B"
+        );
+    }
+    if a_governs_62 {
+        step!(
+            trace,
+            S,
+            "6.62",
+            "the larger of the two annexes: Annex A (Method 1) governs",
+            u62,
+            "-",
+            "EN 1993-1-1 Eq. 6.62, Annex A"
+        );
+    } else {
+        step!(
+            trace,
+            S,
+            "6.62",
+            "the larger of the two annexes: Annex B (Method 2) governs",
+            u62,
+            "-",
+            "EN 1993-1-1 Eq. 6.62, Annex B"
+        );
+    }
+    let name = |a: bool| {
+        if a {
+            "Annex A (Method 1)"
+        } else {
+            "Annex B (Method 2)"
+        }
+    };
+    warnings.push(Warning::new(
+        "interaction-annex-open",
+        format!(
+            "interaction_annex: not given, so both EN 1993-1-1 Annex A (Method 1) and Annex B \
+             (Method 2) were worked and the larger utilisation of each equation taken (the lower \
+             resistance): (6.61) {} governs, {u61:.3} (Annex A {a61:.3}, Annex B {b61:.3}); \
+             (6.62) {} governs, {u62:.3} (Annex A {a62:.3}, Annex B {b62:.3}). Give \
+             interaction_annex \"A\" or \"B\" to use one",
+            name(a_governs_61),
+            name(a_governs_62)
+        ),
+    ));
+    (u61, u62)
 }
 
 /// The member's side of the interaction, shared by both annexes and 6.2.9.

@@ -620,7 +620,7 @@ pub const MEMBER: &[Key] = &[
     choice(
         "interaction_annex",
         Value::Name,
-        Default::Name("B"),
+        Absent("the larger of Annex A and Annex B"),
         &[
             opt("A", "Annex A (Method 1)"),
             opt("B", "Annex B (Method 2)"),

@@ -81,7 +81,7 @@ fn specimen() -> Member {
         lt_restrained: true,
         load_level: LoadLevel::TensionFlange,
         amplify_moments: false,
-        interaction_annex: InteractionAnnex::A,
+        interaction_annex: Some(InteractionAnnex::A),
     }
 }
 
