@@ -8,7 +8,7 @@
 mod lists;
 
 use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
-use lists::{member, plain, with_moments, MEMBERS};
+use lists::{beam_column, bending_only, member, plain, with_moments, MEMBERS};
 use strutline_core::check::{check_member_as, Working};
 use strutline_core::member::Member;
 
@@ -71,6 +71,54 @@ fn bench(c: &mut Criterion) {
         })
     });
     group.finish();
+
+    // Issue 17's and 16's targets: beam-columns (every interaction
+    // equation, both axes, lateral-torsional buckling) and members under
+    // bending alone, a million checks a second on one core.
+    type Make = fn(usize) -> Member;
+    let kinds: [(&str, Make, bool); 2] = [
+        ("beam_columns", beam_column, true),
+        ("bending_only", bending_only, false),
+    ];
+    for (kind, make, axial) in kinds {
+        let list: Vec<Member> = (0..MEMBERS).map(make).collect();
+        for m in &list {
+            match strutline_core::check_member(m) {
+                Ok(r) if axial && r.interaction.is_empty() => {
+                    eprintln!("benchmark beam-column {} works no interaction", m.id);
+                    std::process::exit(1);
+                }
+                Ok(r) if !axial && r.bending.is_none() => {
+                    eprintln!("benchmark member {} works no bending", m.id);
+                    std::process::exit(1);
+                }
+                Ok(_) => {}
+                Err(e) => {
+                    eprintln!("benchmark member {} does not check: {e}", m.id);
+                    std::process::exit(1);
+                }
+            }
+        }
+        let mut group = c.benchmark_group(kind);
+        group.throughput(Throughput::Elements(MEMBERS as u64));
+        for (name, working) in [
+            ("10k_working_kept", Working::Kept),
+            ("10k_without_working", Working::Skipped),
+        ] {
+            group.bench_function(name, |b| {
+                b.iter(|| {
+                    let mut passing = 0usize;
+                    for m in &list {
+                        if let Ok(r) = check_member_as(black_box(m), working) {
+                            passing += usize::from(r.passes);
+                        }
+                    }
+                    black_box(passing)
+                })
+            });
+        }
+        group.finish();
+    }
 }
 
 criterion_group!(benches, bench);

@@ -4,8 +4,10 @@
 //!
 //! `check_loop LIST ROUNDS`: LIST is `mixed` (the benchmark's 10,000 mixed
 //! members, working kept), `skipped` (the same without working) or
-//! `moments` (the members with moments) or `plain` (the same members
-//! without their moments); ROUNDS (default 1) times over.
+//! `moments` (the members with moments), `plain` (the same members
+//! without their moments), `beam-columns` (every one with axial load and
+//! moments) or `bending` (the same without axial load), working kept;
+//! ROUNDS (default 1) times over.
 //! The cost of one round is the difference between two ROUNDS counts
 //! divided by their difference, which leaves out building the list.
 
@@ -24,8 +26,12 @@ fn main() {
         "skipped" => (lists::member, Working::Skipped),
         "moments" => (lists::with_moments, Working::Kept),
         "plain" => (lists::plain, Working::Kept),
+        "beam-columns" => (lists::beam_column, Working::Kept),
+        "bending" => (lists::bending_only, Working::Kept),
         other => {
-            eprintln!("unknown list {other}: mixed, skipped, moments or plain");
+            eprintln!(
+                "unknown list {other}: mixed, skipped, moments, plain, beam-columns or bending"
+            );
             std::process::exit(2);
         }
     };

@@ -49,6 +49,37 @@ pub fn run(args: &[String]) -> Result<()> {
         target: 2_000_000.0,
     });
 
+    // Issue 17 (a beam-column check: every equation, both axes, LTB) and
+    // issue 16 (a member check with moments): a million a second, one core.
+    // Same run of the check bench as above.
+    for (path, name) in [
+        (
+            "beam_columns/10k_working_kept",
+            "beam-column checks per second (10,000: every interaction equation, both axes, LTB; one core)",
+        ),
+        (
+            "beam_columns/10k_without_working",
+            "beam-column checks per second, without working (one core)",
+        ),
+        (
+            "bending_only/10k_working_kept",
+            "bending-only checks per second (10,000 members with moments, no axial load; one core)",
+        ),
+        (
+            "bending_only/10k_without_working",
+            "bending-only checks per second, without working (one core)",
+        ),
+    ] {
+        let ns = criterion_mean_ns(&root.join("target/criterion").join(path))?;
+        figures.push(Figure {
+            name,
+            value: 10_000.0 / (ns * 1e-9),
+            unit: "checks/s",
+            higher_is_better: true,
+            target: 1_000_000.0,
+        });
+    }
+
     if root.join("core/benches/sizing.rs").exists() {
         util::run(util::cargo().args([
             "bench",

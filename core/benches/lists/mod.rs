@@ -170,17 +170,27 @@ pub fn member(i: usize) -> Member {
 /// of [`member`] that have a bending rule (I, RHS, CHS, timber rectangle
 /// under EN 1993-1-1, AISC LRFD and ASD, CSA S16, EN 1995-1-1), with end
 /// and span moments about both axes; every other one also carries axial
-/// load (the path that warns that the interaction is not checked).
+/// load (a beam-column, [`beam_column`]), the rest none ([`bending_only`]).
 pub fn with_moments(i: usize) -> Member {
+    if i.is_multiple_of(2) {
+        bending_only(i)
+    } else {
+        beam_column(i)
+    }
+}
+
+/// Member `i` of [`with_moments`]'s shapes and methods with its axial load
+/// and moments about both axes: every interaction equation of its method,
+/// both axes, and lateral-torsional buckling for the open I sections (not
+/// held laterally); EN 1993-1-1 members leave `interaction_annex` open, so
+/// both annexes are worked.
+pub fn beam_column(i: usize) -> Member {
     let mut m = member((i / 6) * 10 + i % 6);
     let f = (i % 7) as f64;
     m.m_major_a_knm = 20.0 + f;
     m.m_major_b_knm = -10.0;
     m.m_major_span_knm = 30.0;
     m.m_minor_a_knm = 2.0;
-    if i.is_multiple_of(2) {
-        m.axial_kn = 0.0;
-    }
     if matches!(m.section, SectionSpec::Rect(_)) {
         m.m_major_a_knm = 2.0 + 0.1 * f;
         m.m_major_b_knm = -1.0;
@@ -188,6 +198,15 @@ pub fn with_moments(i: usize) -> Member {
         m.m_minor_a_knm = 0.2;
     }
     m
+}
+
+/// [`beam_column`] without axial load: bending about both axes (and
+/// lateral-torsional buckling) alone.
+pub fn bending_only(i: usize) -> Member {
+    Member {
+        axial_kn: 0.0,
+        ..beam_column(i)
+    }
 }
 
 /// The same members as [`with_moments`] without their moments.

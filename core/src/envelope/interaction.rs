@@ -220,35 +220,92 @@ fn guess_moment(own: &CheckResult, axis: Axis, peak: f64) -> f64 {
     }
 }
 
-/// The interaction curve of `prepared` under `method` about `axis`
-/// (`POINTS + 1` points), with the member's own point and the curve's
-/// moment at its load.
-///
-/// Errors: those of checking the member itself with `method`.
-pub fn curve(prepared: &Prepared, method: Method, axis: Axis) -> Result<Curve> {
-    let own = prepared.check_as(method, Working::Skipped)?;
-    let member = &prepared.member;
-    let (unit, shape, peak) = unit_diagram(member, axis);
-    let held = match axis {
-        Axis::Major => member.moments_minor(),
-        Axis::Minor => member.moments_major(),
-    };
+/// What a curve's line depends on: the member with no compression and its
+/// diagram about the curve's axis scaled to a largest |M| of 1 kNm (the
+/// other axis' moments held as they are), the method and the axis. The
+/// member's own compression and the size of its moment about the axis move
+/// only its point, not the line.
+#[derive(Debug, Clone, PartialEq)]
+struct Key {
+    member: Member,
+    method: Method,
+    axis: Axis,
+}
+
+/// The line of a curve, worked from its [`Key`] alone.
+#[derive(Debug, Clone, PartialEq)]
+struct Line {
+    points: Vec<Point>,
+    top_kn: f64,
+    worked: bool,
+}
+
+/// Lines kept per thread (both axes of the member's method and of every
+/// other method compared, with room to spare).
+const KEPT: usize = 16;
+
+thread_local! {
+    /// The lines worked last, the newest first: an edit of the design load
+    /// (or of the size of the moment diagram about the other axis' curve)
+    /// redraws the same lines, so only the member's point is worked again.
+    static LINES: RefCell<Vec<(Key, Line)>> = const { RefCell::new(Vec::new()) };
+}
+
+/// Forgets every kept line (tests: a line worked afresh).
+#[cfg(test)]
+fn forget() {
+    LINES.with(|l| {
+        if let Ok(mut l) = l.try_borrow_mut() {
+            l.clear();
+        }
+    });
+}
+
+/// The line of `key`, from the memo or worked (and kept).
+fn line(prepared: &Prepared, key: &Key) -> Line {
+    let kept = LINES.with(|l| {
+        let mut l = l.try_borrow_mut().ok()?;
+        let i = l.iter().position(|(k, _)| k == key)?;
+        let entry = l.remove(i);
+        let found = entry.1.clone();
+        l.insert(0, entry);
+        Some(found)
+    });
+    if let Some(found) = kept {
+        return found;
+    }
+    let worked = work_line(prepared, key);
+    LINES.with(|l| {
+        if let Ok(mut l) = l.try_borrow_mut() {
+            l.insert(0, (key.clone(), worked.clone()));
+            l.truncate(KEPT);
+        }
+    });
+    worked
+}
+
+/// Works the line of `key` (nothing of the member's own compression or
+/// moment size enters, so the memo returns what this would).
+fn work_line(prepared: &Prepared, key: &Key) -> Line {
+    let (unit, _, _) = unit_diagram(&key.member, key.axis);
     let trial = Trial {
         prepared,
-        method,
-        axis,
+        method: key.method,
+        axis: key.axis,
         unit,
-        work: RefCell::new(member.clone()),
+        work: RefCell::new(key.member.clone()),
     };
-    let top = reach::largest(
-        |n| trial.u(n, 0.0),
-        own.resistance_kn.max(1e-3),
-        MAX_AXIAL_KN,
-    );
+    // First guesses from the key member's own check (no compression, a
+    // unit moment): its axial and bending resistances.
+    let base = trial.result(0.0, 1.0);
+    let n_guess = base.as_ref().map_or(1e-3, |r| r.resistance_kn).max(1e-3);
+    let top = reach::largest(|n| trial.u(n, 0.0), n_guess, MAX_AXIAL_KN);
     let top_kn = top.value();
     let mut points = Vec::with_capacity(POINTS + 1);
     if top != Reach::Nothing {
-        let mut guess = guess_moment(&own, axis, peak);
+        let mut guess = base
+            .as_ref()
+            .map_or(1.0, |r| guess_moment(r, key.axis, 1.0));
         for i in 0..=POINTS {
             let n = top_kn * (i as f64) / (POINTS as f64);
             if i == POINTS {
@@ -280,10 +337,6 @@ pub fn curve(prepared: &Prepared, method: Method, axis: Axis) -> Result<Curve> {
             }
         }
     }
-    let at_load_knm = match trial.moment_at(member.axial_kn, guess_moment(&own, axis, peak)) {
-        Reach::Nothing => None,
-        r => Some(r.value()),
-    };
     // The method's equations are worked when the check gives interaction
     // entries for a point with both actions (mid-curve).
     let worked = points
@@ -291,6 +344,57 @@ pub fn curve(prepared: &Prepared, method: Method, axis: Axis) -> Result<Curve> {
         .filter(|p| p.axial_kn > 0.0 && p.moment_knm > 0.0)
         .and_then(|p| trial.result(p.axial_kn, p.moment_knm))
         .is_some_and(|r| !r.interaction.is_empty());
+    Line {
+        points,
+        top_kn,
+        worked,
+    }
+}
+
+/// The interaction curve of `prepared` under `method` about `axis`
+/// (`POINTS + 1` points), with the member's own point and the curve's
+/// moment at its load. The line is kept per thread by what it depends on
+/// (the member's own compression and the size of its moment about the
+/// axis move only the point), so a redraw after such an edit works the
+/// point alone.
+///
+/// Errors: those of checking the member itself with `method`.
+pub fn curve(prepared: &Prepared, method: Method, axis: Axis) -> Result<Curve> {
+    let own = prepared.check_as(method, Working::Skipped)?;
+    let member = &prepared.member;
+    let (unit, shape, peak) = unit_diagram(member, axis);
+    let held = match axis {
+        Axis::Major => member.moments_minor(),
+        Axis::Minor => member.moments_major(),
+    };
+    let mut normal = member.clone();
+    normal.axial_kn = 0.0;
+    set_moments(&mut normal, axis, &unit);
+    let key = Key {
+        member: normal,
+        method,
+        axis,
+    };
+    let Line {
+        points,
+        top_kn,
+        worked,
+    } = line(prepared, &key);
+    let trial = Trial {
+        prepared,
+        method,
+        axis,
+        unit,
+        work: RefCell::new(key.member),
+    };
+    // The curve's moment at the member's load, worked as the "largest
+    // moment at the given load" is (the same start, so the same value).
+    let n = member.axial_kn;
+    let guess = guess_moment(&own, axis, peak);
+    let at_load_knm = match trial.moment_at(n, guess) {
+        Reach::Nothing => None,
+        r => Some(r.value()),
+    };
     Ok(Curve {
         method,
         axis: match axis {
@@ -556,6 +660,52 @@ mod tests {
             "{} vs {n_b}",
             c.top_kn
         );
+    }
+
+    #[test]
+    fn the_kept_line_is_the_line_worked_afresh() {
+        // The line does not depend on the member's own compression nor on
+        // the size of its moment about the axis: worked afresh for each,
+        // bit for bit the same, so the memo shows what a fresh working
+        // would; the member's point and the curve at its load do move.
+        for method in STEEL {
+            for axis in [Axis::Major, Axis::Minor] {
+                let mut lines = Vec::new();
+                for (n, mx) in [(800.0, 120.0), (1500.0, 120.0), (800.0, 240.0)] {
+                    forget();
+                    let p = post(method, n, mx, 10.0);
+                    let c = curve(&p, method, axis).unwrap();
+                    let kept = curve(&p, method, axis).unwrap();
+                    assert_eq!(c, kept, "{method:?} {axis:?}");
+                    lines.push(c);
+                }
+                // The held moment about the other axis does move the line.
+                let (first, rest) = lines.split_first().unwrap();
+                for c in rest {
+                    if axis == Axis::Major {
+                        assert_eq!(c.points, first.points, "{method:?} {axis:?}");
+                        assert_eq!(c.top_kn, first.top_kn);
+                    }
+                }
+                assert_eq!(lines[1].points, lines[0].points, "{method:?} {axis:?}");
+                assert_ne!(lines[1].at_load_knm, lines[0].at_load_knm);
+            }
+        }
+        // A line kept for one member is not given to another.
+        forget();
+        let a = curve(
+            &post(Method::En1993, 800.0, 120.0, 10.0),
+            Method::En1993,
+            Axis::Major,
+        )
+        .unwrap();
+        let b = curve(
+            &post(Method::En1993, 800.0, 120.0, 20.0),
+            Method::En1993,
+            Axis::Major,
+        )
+        .unwrap();
+        assert_ne!(a.points, b.points);
     }
 
     #[test]
