@@ -206,6 +206,31 @@ pub fn largest_moment(prepared: &Prepared, method: Method, axis: Axis) -> Result
     })
 }
 
+/// Why `method` has no curve of `prepared` about `axis`, `None` when it has
+/// one: the method's refusal of the member's diagram about that axis (a
+/// uniform one where it has none) at the member's own load, the other
+/// axis' moment held. The secant method, for one, takes equal end moments
+/// about one axis only, so a member it checks with a moment about one axis
+/// has no secant curve about the other. A refused curve is not drawn.
+pub fn refusal(prepared: &Prepared, method: Method, axis: Axis) -> Option<crate::error::Error> {
+    let (unit, _, peak) = unit_diagram(&prepared.member, axis);
+    let scale = if peak > 0.0 { peak } else { 1.0 };
+    let mut m = prepared.member.clone();
+    let d = Moments {
+        a_knm: unit.a_knm * scale,
+        b_knm: unit.b_knm * scale,
+        span_knm: unit.span_knm * scale,
+        span_load: unit.span_load,
+    };
+    set_moments(&mut m, axis, &d);
+    let input = Input {
+        member: &m,
+        section: &prepared.section,
+        material: &prepared.material,
+    };
+    check::evaluate(&input, method, Working::Skipped).err()
+}
+
 /// A first guess at the largest moment: the bending resistance about the
 /// axis, else the member's own moment, else 1 kNm.
 fn guess_moment(own: &CheckResult, axis: Axis, peak: f64) -> f64 {
@@ -660,6 +685,24 @@ mod tests {
             "{} vs {n_b}",
             c.top_kn
         );
+    }
+
+    #[test]
+    fn the_secant_method_has_no_curve_about_the_other_axis() {
+        // Equal end moments about the major axis: the secant method takes
+        // them as the load's eccentricity (a curve about that axis); about
+        // the minor axis a uniform moment is assumed with the major one
+        // held, moments about both axes, which it refuses naming the key.
+        let mut p = post(Method::Secant, 400.0, 60.0, 0.0);
+        p.member.m_major_b_knm = 60.0;
+        assert!(p.check_with(Method::Secant).is_ok());
+        assert!(refusal(&p, Method::Secant, Axis::Major).is_none());
+        let e = refusal(&p, Method::Secant, Axis::Minor).unwrap();
+        assert!(e.to_string().contains("m_minor"), "{e}");
+        // Every steel method has both curves.
+        for method in STEEL {
+            assert!(refusal(&p, method, Axis::Minor).is_none(), "{method:?}");
+        }
     }
 
     #[test]

@@ -197,9 +197,12 @@ pub(super) fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Cu
     h
 }
 
-/// The interaction chart's legend; `others` as in [`legend_html`].
+/// The interaction chart's legend; `others` as in [`legend_html`], each
+/// method with its refusals by axis ([`chart::interaction::compared`]): a
+/// refused curve is named "refused" with the reason and has no swatch of a
+/// line.
 pub(super) fn interaction_legend_html(
-    others: Option<&[(Method, strutline_core::envelope::interaction::Curve)]>,
+    others: Option<&[chart::interaction::Refusals<'_>]>,
 ) -> Html {
     let mut h = Html::from_lit(
         "<li><span class=\"sw sw-shade\"></span>within capacity (shaded): every check of the method at most 1</li>\
@@ -213,14 +216,39 @@ pub(super) fn interaction_legend_html(
         }
         Some(list) => {
             h.lit("<li>other methods, each its own interaction curve:</li>");
-            for (m, _) in list {
-                html!(
-                    h,
-                    "<li data-method=\"{}\"><span class=\"sw sw-m sw-m{}\"></span>{}</li>",
-                    m.key(),
-                    *m as u8,
-                    m.title()
-                );
+            for (m, refused) in list {
+                match refused.as_slice() {
+                    [] => html!(
+                        h,
+                        "<li data-method=\"{}\"><span class=\"sw sw-m sw-m{}\"></span>{}</li>",
+                        m.key(),
+                        *m as u8,
+                        m.title()
+                    ),
+                    [(_, why), (_, other)] if why == other => html!(
+                        h,
+                        "<li data-method=\"{}\" data-refused=\"major minor\">{}: refused, no curve ({})</li>",
+                        m.key(),
+                        m.title(),
+                        why
+                    ),
+                    some => {
+                        html!(
+                            h,
+                            "<li data-method=\"{}\" data-refused=\"{}\">",
+                            m.key(),
+                            some.iter().map(|(a, _)| *a).collect::<Vec<_>>().join(" ")
+                        );
+                        if some.len() < 2 {
+                            html!(h, "<span class=\"sw sw-m sw-m{}\"></span>", *m as u8);
+                        }
+                        html!(h, "{}", m.title());
+                        for (axis, why) in some {
+                            html!(h, "; {} axis refused, no curve ({})", axis, why);
+                        }
+                        h.lit("</li>");
+                    }
+                }
             }
         }
         None => {}
@@ -292,8 +320,9 @@ pub(super) fn Chart(
         if interaction {
             match chart::interaction::build(p, r, others) {
                 Ok(d) => {
+                    let compared = chart::interaction::compared(&d);
                     legend.set(interaction_legend_html(
-                        others.then_some(d.panels[0].others.as_slice()),
+                        others.then_some(compared.as_slice()),
                     ));
                     match chart::interaction::draw(&el, &d, dpr, hc, us) {
                         Ok(()) => note.set(None),

@@ -16,7 +16,8 @@ use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, FontTransform, IntoFont, RGBColor};
 use plotters_canvas::CanvasBackend;
-use strutline_core::check::Prepared;
+use strutline_core::bending::Axis;
+use strutline_core::check::{Prepared, Working};
 use strutline_core::compare::{self, Outcome};
 use strutline_core::envelope::interaction::{self, Curve, Shape};
 use strutline_core::method::Method;
@@ -29,14 +30,36 @@ use super::envelope::{err, palette, Palette, METHOD_COLOUR, METHOD_DASH};
 use crate::numtext::working;
 use crate::units_view::result_text;
 
+/// Another method compared on a panel: its curve, or why it has none (a
+/// refused method is named with its reason and never drawn as a line).
+#[derive(Debug, Clone, PartialEq)]
+pub enum Compared {
+    /// Its interaction curve about the panel's axis.
+    Curve(Curve),
+    /// The method refuses the member (or the diagram about this axis): the
+    /// reason in the app's words.
+    Refused(String),
+}
+
+impl Compared {
+    /// The curve, `None` when refused.
+    pub fn curve(&self) -> Option<&Curve> {
+        match self {
+            Compared::Curve(c) => Some(c),
+            Compared::Refused(_) => None,
+        }
+    }
+}
+
 /// One axis' panel.
 #[derive(Debug, Clone, PartialEq)]
 pub struct Panel {
     /// The member's method's curve about this axis.
     pub curve: Curve,
-    /// Every other method that applies, its curve about this axis (empty
-    /// unless asked for), in [`Method::ALL`] order.
-    pub others: Vec<(Method, Curve)>,
+    /// Every other method that applies (or refuses the member), its curve
+    /// about this axis or its refusal (empty unless asked for), in
+    /// [`Method::ALL`] order; the same methods in both panels.
+    pub others: Vec<(Method, Compared)>,
     /// The largest moment shown, kNm.
     pub m_max: f64,
 }
@@ -80,29 +103,60 @@ pub fn build(
 ) -> Result<InteractionData, Error> {
     let method = result.method;
     let [major, minor] = interaction::curves(prepared, method)?;
-    let mut others: [Vec<(Method, Curve)>; 2] = [Vec::new(), Vec::new()];
+    let mut others: [Vec<(Method, Compared)>; 2] = [Vec::new(), Vec::new()];
     if with_others {
         for row in compare::compare(prepared) {
-            if row.own || !matches!(row.outcome, Outcome::Checked { .. }) {
+            if row.own {
                 continue;
             }
-            if let Ok([a, b]) = interaction::curves(prepared, row.method) {
-                others[0].push((row.method, a));
-                others[1].push((row.method, b));
+            match row.outcome {
+                Outcome::Checked { .. } => {
+                    for (list, axis) in others.iter_mut().zip([Axis::Major, Axis::Minor]) {
+                        let one = match interaction::refusal(prepared, row.method, axis) {
+                            Some(e) => Compared::Refused(crate::fields::error_text(&e)),
+                            None => match interaction::curve(prepared, row.method, axis) {
+                                Ok(c) => Compared::Curve(c),
+                                Err(e) => Compared::Refused(crate::fields::error_text(&e)),
+                            },
+                        };
+                        list.push((row.method, one));
+                    }
+                }
+                Outcome::Refused { message } => {
+                    for list in &mut others {
+                        list.push((row.method, Compared::Refused(message.clone())));
+                    }
+                }
+                // Not applicable because of the moments (a method with no
+                // bending rule, a diagram the secant method does not take):
+                // refused, named with the reason; not applicable to the
+                // member at all (a timber method on steel): left out.
+                Outcome::NotApplicable { reason } => {
+                    let mut plain = prepared.clone();
+                    let m = &mut plain.member;
+                    (m.m_major_a_knm, m.m_major_b_knm, m.m_major_span_knm) = (0.0, 0.0, 0.0);
+                    (m.m_minor_a_knm, m.m_minor_b_knm, m.m_minor_span_knm) = (0.0, 0.0, 0.0);
+                    if plain.check_as(row.method, Working::Skipped).is_ok() {
+                        for list in &mut others {
+                            list.push((row.method, Compared::Refused(reason.clone())));
+                        }
+                    }
+                }
             }
         }
     }
     let n_top = [&major, &minor]
         .into_iter()
-        .chain(others.iter().flatten().map(|(_, c)| c))
+        .chain(others.iter().flatten().filter_map(|(_, c)| c.curve()))
         .map(|c| c.top_kn)
         .fold(prepared.member.axial_kn, f64::max);
     let n_max = ceiling(n_top * 1.08);
     let [o_major, o_minor] = others;
-    let panel = |curve: Curve, others: Vec<(Method, Curve)>| {
+    let panel = |curve: Curve, others: Vec<(Method, Compared)>| {
         let m = others
             .iter()
-            .map(|(_, c)| widest(c))
+            .filter_map(|(_, c)| c.curve())
+            .map(widest)
             .fold(widest(&curve).max(curve.member_moment_knm), f64::max);
         Panel {
             m_max: ceiling(m * 1.08),
@@ -153,9 +207,39 @@ pub fn describe(d: &InteractionData, sys: UnitSystem) -> String {
         if !c.worked {
             out.push_str(" (the method's interaction is not worked: the line is the plain sum, not a code check)");
         }
+        for (m, other) in &p.others {
+            if let Compared::Refused(why) = other {
+                out.push_str(&format!("; {} refused, no curve: {why}", m.title()));
+            }
+        }
         out.push('.');
     }
     out
+}
+
+/// A compared method with its refusals by axis (the axis' name and the
+/// reason; empty where both curves are drawn).
+pub type Refusals<'a> = (Method, Vec<(&'static str, &'a str)>);
+
+/// The compared methods of `d`, each with its refusals by axis, for the
+/// legend.
+pub fn compared(d: &InteractionData) -> Vec<Refusals<'_>> {
+    let [major, minor] = &d.panels;
+    major
+        .others
+        .iter()
+        .zip(&minor.others)
+        .map(|((m, a), (_, b))| {
+            let refused = [(major.curve.axis, a), (minor.curve.axis, b)]
+                .into_iter()
+                .filter_map(|(axis, c)| match c {
+                    Compared::Refused(why) => Some((axis, why.as_str())),
+                    Compared::Curve(_) => None,
+                })
+                .collect();
+            (*m, refused)
+        })
+        .collect()
 }
 
 /// Draws `data` on `canvas` (already sized to CSS size x `dpr`) and
@@ -367,7 +451,12 @@ where
             root.draw(&Polygon::new(area, pal.shade.filled()))
                 .map_err(err)?;
         }
-        for (method, other) in &panel.others {
+        // A refused method is in the legend and the description, never a line.
+        for (method, other) in panel
+            .others
+            .iter()
+            .filter_map(|(m, o)| Some((m, o.curve()?)))
+        {
             let j = *method as usize;
             let colour = METHOD_COLOUR.get(j).copied().unwrap_or(pal.ink);
             let (on, off) = METHOD_DASH.get(j).copied().unwrap_or((4.0, 4.0));
@@ -494,6 +583,53 @@ mod tests {
             // The minor axis carries no moment here: said so.
             assert!(text.contains("uniform one is assumed"), "{text}");
         }
+    }
+
+    #[test]
+    fn a_refused_compared_method_is_named_never_drawn() {
+        // Equal end moments about the major axis: the secant method takes
+        // them (its major curve is drawn) but has no minor curve (moments
+        // about both axes); with unequal ones it refuses the member.
+        let mut p = beam_column(20.0, 3.0);
+        p.member.m_major_b_knm = 3.0;
+        let d = build(&p, &p.check().unwrap(), true).unwrap();
+        let secant = |panel: &Panel| {
+            panel
+                .others
+                .iter()
+                .find(|(m, _)| *m == Method::Secant)
+                .map(|(_, c)| c.clone())
+                .unwrap()
+        };
+        assert!(matches!(secant(&d.panels[0]), Compared::Curve(_)));
+        let Compared::Refused(why) = secant(&d.panels[1]) else {
+            panic!("secant's minor curve drawn: {d:?}");
+        };
+        assert!(why.contains("m_minor"), "{why}");
+        let text = describe(&d, UnitSystem::Si);
+        assert!(
+            text.contains("minor axis")
+                && text.contains("Secant formula, eccentric load refused, no curve"),
+            "{text}"
+        );
+        let c = compared(&d);
+        let (_, refused) = c.iter().find(|(m, _)| *m == Method::Secant).unwrap();
+        assert_eq!(refused.len(), 1);
+        assert_eq!(refused[0].0, "minor");
+
+        // Unequal end moments: refused about both axes, with the reason.
+        let p = beam_column(20.0, 3.0);
+        let d = build(&p, &p.check().unwrap(), true).unwrap();
+        for panel in &d.panels {
+            assert!(
+                matches!(secant(panel), Compared::Refused(ref w) if !w.is_empty()),
+                "{d:?}"
+            );
+        }
+        // No refused method reaches the scales or the lines drawn.
+        let c = compared(&d);
+        let (_, refused) = c.iter().find(|(m, _)| *m == Method::Secant).unwrap();
+        assert_eq!(refused.len(), 2);
     }
 
     #[test]
