@@ -182,9 +182,12 @@ export async function openForEditing(page, url, row = "[data-testid=member-row]"
  * gives) and returns, per edit, the milliseconds until
  * [data-testid=result-utilisation] shows a new text (`dom`) and until the
  * next animation frame after that (`frame`), and the count of edits that
- * changed nothing within 2 s (`timeouts`). */
-export const editLoop = async (n) => {
-  const input = document.querySelector("input[name=axial_kn]");
+ * changed nothing within 2 s (`timeouts`). `page.evaluate(editLoop, {n,
+ * field})` edits another number field the same way (an end moment). */
+export const editLoop = async (arg) => {
+  const n = typeof arg === "number" ? arg : arg.n;
+  const field = (typeof arg === "object" && arg.field) || "axial_kn";
+  const input = document.querySelector(`form.editor input[name=${field}]`) || document.querySelector(`input[name=${field}]`);
   const base = Number(String(input.value).replace(",", ".")) || 100;
   const result = () => document.querySelector("[data-testid=result-utilisation]");
   const dom = [];
