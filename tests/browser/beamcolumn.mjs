@@ -4,7 +4,8 @@
 // the interaction chart and says where the member's point lies against the
 // shaded region (the canvas's description and data attributes); a larger
 // moment moves the point outside; the edit survives a reload; the
-// slenderness envelope stays one tick away. Screenshots at 1180 x 820 and
+// slenderness envelope stays one tick away; with every method compared, a
+// method that refuses the moments is named as refused, never drawn. Screenshots at 1180 x 820 and
 // 820 x 1180 are left in tests/browser/out/ to look at.
 
 import assert from "node:assert/strict";
@@ -123,6 +124,20 @@ export function register(test, { withApp, open, OUT }) {
       agrees(again, "after a reload");
       assert.equal(again.insideMajor, over.insideMajor);
       assert.equal(again.atLoadMajor, over.atLoadMajor);
+
+      // Every method compared: the secant method does not take these
+      // unequal end moments, so it is named as refused with its reason in
+      // the legend and the description, and no line of it is drawn.
+      await page.locator("[data-testid=toggle-compare]").check();
+      const secant = page.locator('ul.chart-legend li[data-method="secant"]').first();
+      await secant.waitFor({ timeout: 15_000 });
+      assert.equal(await secant.getAttribute("data-refused"), "major minor");
+      assert.match(await secant.textContent(), /refused, no curve \(.+\)/);
+      assert.equal(await secant.locator(".sw").count(), 0, "a refused method has no line's swatch");
+      assert.match((await reading(page)).description, /Secant formula, eccentric load refused, no curve: /);
+      // A method that takes the member has its line's swatch.
+      assert.equal(await page.locator('ul.chart-legend li[data-method="aisc360-lrfd"]:not([data-refused]) .sw').count(), 1);
+      await page.locator("[data-testid=toggle-compare]").uncheck();
 
       // The slenderness envelope stays reachable, and back.
       await page.locator("[data-testid=toggle-slenderness]").check();
