@@ -48,6 +48,7 @@ use crate::material::Steel;
 use crate::member::{InteractionAnnex, Moments, SpanLoad};
 use crate::method::common::{require_steel, warn_once};
 use crate::outcome::{Mode, Warning};
+use crate::roots::{newton_bisect, Stop};
 use crate::section::{Family, SectionSpec};
 use crate::stability::GAMMA_M0;
 use crate::trace::{step, Scope, Trace};
@@ -1369,27 +1370,118 @@ pub enum RowA {
 }
 
 /// The largest first-order deflection of the simply supported member under
-/// the diagram, times E I / L^2 (kNm): the largest of 201 points along it.
+/// the diagram, times E I / L^2 (kNm).
 /// delta E I / L^2 = M_a (2s - 3s^2 + s^3)/6 + M_b (s - s^3)/6 + M_span g(s),
 /// g = (s - 2s^3 + s^4)/3 (uniform load), (3s - 4s^3)/12 for s <= 1/2 and
 /// symmetric (point load): double integration of M(x) (common mechanics).
+/// The largest |delta| is at an end of a polynomial piece of the diagram
+/// ([0, 1] for a uniform load, the halves for a point load) or where the
+/// slope delta' is zero: each piece is cut where delta'' is zero (in closed
+/// form: delta'' is the quadratic or linear M(x) itself), so delta' is
+/// monotone between the cuts and has at most one zero there, found by the
+/// root finder with the exact derivative. (It was the largest of 201
+/// points, a fifth of a beam-column check's instructions; this is exact to
+/// rounding and some 20 times cheaper.)
 pub fn deflection_eil2(m: &Moments) -> f64 {
-    let mut most = 0.0f64;
-    for k in 0..=200u32 {
-        let s = f64::from(k) / 200.0;
-        let g = match m.span_load {
-            SpanLoad::Uniform => (s - 2.0 * s.powi(3) + s.powi(4)) / 3.0,
-            SpanLoad::Point => {
-                let t = s.min(1.0 - s);
-                (3.0 * t - 4.0 * t.powi(3)) / 12.0
-            }
+    let (a, b, w) = (m.a_knm, m.b_knm, m.span_knm);
+    let point = m.span_load == SpanLoad::Point;
+    let delta = |s: f64| {
+        let g = if point {
+            let t = s.min(1.0 - s);
+            (3.0 * t - 4.0 * t * t * t) / 12.0
+        } else {
+            (s - 2.0 * s * s * s + s * s * s * s) / 3.0
         };
-        let d = m.a_knm * (2.0 * s - 3.0 * s * s + s.powi(3)) / 6.0
-            + m.b_knm * (s - s.powi(3)) / 6.0
-            + m.span_knm * g;
-        most = most.max(d.abs());
+        a * (2.0 * s - 3.0 * s * s + s * s * s) / 6.0 + b * (s - s * s * s) / 6.0 + w * g
+    };
+    // delta' and delta'' (= the diagram's moment over M, up to its sign).
+    let slope = |s: f64| {
+        let g1 = if !point {
+            (1.0 - 6.0 * s * s + 4.0 * s * s * s) / 3.0
+        } else if s <= 0.5 {
+            0.25 - s * s
+        } else {
+            (1.0 - s) * (1.0 - s) - 0.25
+        };
+        a * (2.0 - 6.0 * s + 3.0 * s * s) / 6.0 + b * (1.0 - 3.0 * s * s) / 6.0 + w * g1
+    };
+    let curvature = |s: f64| {
+        let g2 = if !point {
+            4.0 * s * (s - 1.0)
+        } else if s <= 0.5 {
+            -2.0 * s
+        } else {
+            -2.0 * (1.0 - s)
+        };
+        a * (s - 1.0) - b * s + w * g2
+    };
+    // delta'' on a piece as c2 s^2 + c1 s + c0.
+    let pieces: &[(f64, f64, [f64; 3])] = if point {
+        &[
+            (0.0, 0.5, [0.0, a - b - 2.0 * w, -a]),
+            (0.5, 1.0, [0.0, a - b + 2.0 * w, -a - 2.0 * w]),
+        ]
+    } else {
+        &[(0.0, 1.0, [4.0 * w, a - b - 4.0 * w, -a])]
+    };
+    let mut most = delta(0.5).abs();
+    let stop = Stop {
+        f: 0.0,
+        step: 1e-15,
+        bracket: 1e-15,
+    };
+    for &(p, q, [c2, c1, c0]) in pieces {
+        let mut cuts = vec![p];
+        cuts.extend(
+            quadratic_roots(c2, c1, c0)
+                .into_iter()
+                .filter(|r| *r > p && *r < q),
+        );
+        cuts.push(q);
+        cuts.sort_by(f64::total_cmp);
+        for w2 in cuts.windows(2) {
+            let (lo, hi) = match *w2 {
+                [lo, hi] => (lo, hi),
+                _ => continue,
+            };
+            let (f_lo, f_hi) = (slope(lo), slope(hi));
+            most = most.max(delta(lo).abs()).max(delta(hi).abs());
+            if f_lo * f_hi < 0.0 {
+                let sign = if f_lo < 0.0 { 1.0 } else { -1.0 };
+                let s = newton_bisect(
+                    |s| (sign * slope(s), sign * curvature(s)),
+                    lo,
+                    hi,
+                    0.5 * (lo + hi),
+                    stop,
+                );
+                most = most.max(delta(s).abs());
+            }
+        }
     }
     most
+}
+
+/// The real roots of c2 x^2 + c1 x + c0 (none, one or two; a linear or
+/// constant one where c2 or c1 is zero).
+fn quadratic_roots(c2: f64, c1: f64, c0: f64) -> Vec<f64> {
+    if c2 == 0.0 {
+        return if c1 == 0.0 {
+            Vec::new()
+        } else {
+            vec![-c0 / c1]
+        };
+    }
+    let disc = c1 * c1 - 4.0 * c2 * c0;
+    if disc < 0.0 {
+        return Vec::new();
+    }
+    // The form without cancellation.
+    let q = -0.5 * (c1 + c1.signum() * disc.sqrt());
+    if q == 0.0 {
+        return vec![0.0];
+    }
+    vec![q / c2, c0 / q]
 }
 
 /// C_mi,0 of EN 1993-1-1 Table A.2 (recalled from memory) for a diagram,
@@ -2391,6 +2483,52 @@ mod tests {
         // (worked by differentiation); the 201 points find it to 1e-6.
         let d = deflection_eil2(&diagram(1.0, -1.0, 0.0, u));
         assert!((d - 1.0 / (36.0 * 3f64.sqrt())).abs() < 1e-6, "{d}");
+    }
+
+    #[test]
+    fn the_largest_deflection_matches_a_dense_sampling() {
+        // The exact largest |delta| against 20,001 points of the same
+        // closed form: never below any sample, and within the sampling's
+        // own error above the largest.
+        let dense = |m: &Moments| {
+            let (a, b, w) = (m.a_knm, m.b_knm, m.span_knm);
+            (0..=20_000u32)
+                .map(|k| {
+                    let s = f64::from(k) / 20_000.0;
+                    let g = match m.span_load {
+                        SpanLoad::Uniform => (s - 2.0 * s.powi(3) + s.powi(4)) / 3.0,
+                        SpanLoad::Point => {
+                            let t = s.min(1.0 - s);
+                            (3.0 * t - 4.0 * t.powi(3)) / 12.0
+                        }
+                    };
+                    (a * (2.0 * s - 3.0 * s * s + s.powi(3)) / 6.0
+                        + b * (s - s.powi(3)) / 6.0
+                        + w * g)
+                        .abs()
+                })
+                .fold(0.0f64, f64::max)
+        };
+        for load in [SpanLoad::Uniform, SpanLoad::Point] {
+            for (a, b, w) in [
+                (1.0, 0.5, 0.0),
+                (1.0, -1.0, 0.0),
+                (0.0, 0.0, 1.0),
+                (1.0, -0.4, 0.8),
+                (-0.3, 0.2, 1.0),
+                (100.0, -40.0, 60.0),
+                (2.0, -1.0, -3.0),
+                (0.0, 1.0, -0.7),
+                (5.0, 5.0, -20.0),
+            ] {
+                let m = diagram(a, b, w, load);
+                let (exact, sampled) = (deflection_eil2(&m), dense(&m));
+                assert!(
+                    exact >= sampled * (1.0 - 1e-12) && exact <= sampled * (1.0 + 1e-7),
+                    "{a} {b} {w} {load:?}: {exact} vs {sampled}"
+                );
+            }
+        }
     }
 
     #[test]

@@ -201,9 +201,7 @@ pub(super) fn legend_html(perry: bool, others: Option<&[(Method, chart::data::Cu
 /// method with its refusals by axis ([`chart::interaction::compared`]): a
 /// refused curve is named "refused" with the reason and has no swatch of a
 /// line.
-pub(super) fn interaction_legend_html(
-    others: Option<&[chart::interaction::Refusals<'_>]>,
-) -> Html {
+pub(super) fn interaction_legend_html(others: Option<&[chart::interaction::Refusals<'_>]>) -> Html {
     let mut h = Html::from_lit(
         "<li><span class=\"sw sw-shade\"></span>within capacity (shaded): every check of the method at most 1</li>\
          <li><span class=\"sw sw-major\"></span>interaction curve: the largest multiple of the member's moment diagram carried at each compression, the other axis' moment held (broken where the method's interaction is not worked)</li>\
