@@ -221,11 +221,24 @@ fn bad_bending_input_is_refused_naming_member_and_field() {
         json!({}),
     ));
     assert_eq!(e.field(), Some("w_el_major_mm3"), "{e}");
-    // Angles are refused with a message: under EN 1993-1-1 and CSA S16
-    // always, under AISC 360-16 here because `member` bends them about both
-    // principal axes (H2-1 not worked; aisc_chapter_f_angles has the rest).
+    // Angles are refused with a message under EN 1993-1-1 and CSA S16;
+    // under AISC 360-16 the moments about both principal axes combine by
+    // H2-1 (aisc_chapter_f_angles and aisc_h2 have the values).
     let angle = json!({"kind": "angle", "depth_mm": 100, "width_mm": 100, "thickness_mm": 10});
-    for method in ["en1993-1-1", "aisc360-lrfd", "csa-s16"] {
+    let r = strutline_core::check_member(&member(
+        angle.clone(),
+        json!({"grade": "S355"}),
+        "aisc360-lrfd",
+        2000.0,
+        json!({}),
+    ))
+    .unwrap();
+    assert!(
+        r.interaction.iter().any(|c| c.check == "H2-1"),
+        "{:?}",
+        r.interaction
+    );
+    for method in ["en1993-1-1", "csa-s16"] {
         let e = refusal(&member(
             angle.clone(),
             json!({"grade": "S355"}),

@@ -340,6 +340,10 @@ fn in_plane(
         reduction: reduction.min(1.0),
         moment_factor: None,
         demand_knm: demand,
+        by_sign: Some(super::BySign {
+            positive_knm: r_t,
+            negative_knm: r_c,
+        }),
     })
 }
 
@@ -406,5 +410,6 @@ fn symmetry_axis(
         reduction: 1.0,
         moment_factor: None,
         demand_knm: demand,
+        by_sign: None,
     })
 }

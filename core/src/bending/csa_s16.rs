@@ -244,6 +244,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            by_sign: None,
         });
     }
     if let SectionSpec::Given(_) = input.section.spec {
@@ -328,5 +329,6 @@ fn axis(
         reduction: mr / (PHI * mp),
         moment_factor: Some(w2),
         demand_knm: demand,
+        by_sign: None,
     })
 }

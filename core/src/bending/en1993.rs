@@ -360,6 +360,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            by_sign: None,
         });
     }
     // Lateral-torsional buckling about the major axis.
@@ -637,5 +638,6 @@ fn axis(
         reduction: chi,
         moment_factor: Some(c.c1),
         demand_knm: demand,
+        by_sign: None,
     })
 }

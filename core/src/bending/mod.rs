@@ -29,7 +29,7 @@ use crate::section::{Family, SectionSpec};
 use crate::trace::{step, Scope, Trace};
 
 pub mod aisc360;
-mod aisc360_angle;
+pub mod aisc360_angle;
 mod aisc360_hss;
 mod aisc360_tee;
 pub mod csa_s16;
@@ -52,6 +52,32 @@ pub struct AxisBending {
     /// The largest design moment along the member about this axis, kNm.
     #[serde(skip)]
     pub demand_knm: f64,
+    /// The design resistance to a positive and to a negative moment, where
+    /// they differ (tees in their plane of symmetry, single angles: AISC
+    /// 360-16 F9, F10); `None` where the sign does not matter.
+    #[serde(skip)]
+    pub by_sign: Option<BySign>,
+}
+
+/// A design resistance that depends on the sign of the moment (the member
+/// file's sign convention of the shape), kNm.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct BySign {
+    /// Against a positive moment.
+    pub positive_knm: f64,
+    /// Against a negative moment.
+    pub negative_knm: f64,
+}
+
+impl AxisBending {
+    /// The design resistance to a moment of the sign given (`positive`).
+    pub fn resistance_for(&self, positive: bool) -> f64 {
+        match (self.by_sign, positive) {
+            (Some(b), true) => b.positive_knm,
+            (Some(b), false) => b.negative_knm,
+            (None, _) => self.resistance_knm,
+        }
+    }
 }
 
 impl AxisBending {

@@ -34,19 +34,27 @@
 //!   F_y S (first yield), so each stress ratio equals the force ratio,
 //!   P_r/P_c + M_rw/M_cw + M_rz/M_cz, never below H1-1a or H1-1b (the
 //!   conservative choice for an unknown section).
-//! - Single angles and tees: refused (bending refuses them before this
-//!   point; kept here so the rule stands on its own).
+//! - Single angles and tees: H2-1 at the critical points about the
+//!   principal axes (an angle's toes and heel, a tee's flange tips and stem
+//!   tip), each flexural term +-M_r/M_c with the strength of the sign of
+//!   moment that acts (the section modulus to the point in f_rb and F_cb
+//!   alike, as the Specification words it), + where it compresses the
+//!   point; each axis' largest moment of either sign, the worse at each
+//!   point; the largest point governs. F10 sends an angle with axial load
+//!   or biaxial moments to H2; for a tee I_yc/I_y lies outside H1.1's 0.1
+//!   to 0.9, and H2 may be used for any shape.
 //!
 //! Eq. numbers and text recalled from memory of the 2016 Specification.
 
 use super::{ratio, Check, Context};
-use crate::bending::{moments, shape, Axis, AxisBending, Shape};
-use crate::error::{Error, Result};
+use crate::bending::aisc360_angle as angle;
+use crate::bending::{moments, shape, signed_extremes, Axis, AxisBending, Shape};
+use crate::error::Result;
 use crate::member::Method;
 use crate::method::common::{require_steel, warn_once};
 use crate::outcome::Warning;
-use crate::section::Family;
-use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
+use crate::section::{Family, SectionSpec};
+use crate::trace::{push, put, step, sym, symbol, Scope, Sym, Symbol, Trace};
 
 /// alpha of Appendix 8.2.1: 1.00 (LRFD).
 pub const ALPHA_LRFD: f64 = 1.0;
@@ -270,6 +278,155 @@ fn capacity(trace: &mut Trace, axis: Axis, b: &AxisBending, basis_lrfd: bool) ->
     b.resistance_knm
 }
 
+/// A critical point of a single angle or a tee for H2-1: its name in the
+/// working and its principal coordinates (u, v) from the centroid, mm (u
+/// along the major principal axis, v along the minor principal direction).
+type Point = (&'static str, (f64, f64));
+
+/// The critical points of the section where H2-1 is worked: a single
+/// angle's two toes and heel, a tee's two flange tips and stem tip; `None`
+/// for the shapes H1.1 covers.
+fn critical_points(input: &crate::method::Input<'_>) -> Option<[Point; 3]> {
+    let p = &input.section.props;
+    match &input.section.spec {
+        SectionSpec::Angle(a) => {
+            let pts = angle::points(a, p);
+            Some([
+                ("H2-1 at the toe of the leg depth_mm", pts.toe_h[0]),
+                ("H2-1 at the heel", pts.heel),
+                ("H2-1 at the toe of the leg width_mm", pts.toe_b[0]),
+            ])
+        }
+        SectionSpec::Tee(t) => {
+            let (sin, cos) = crate::trig::sin_cos(p.principal_angle_rad);
+            let uv = |y: f64, z: f64| {
+                let (dy, dz) = (y - p.centroid_y_mm, z - p.centroid_z_mm);
+                (dy * cos + dz * sin, -dy * sin + dz * cos)
+            };
+            Some([
+                ("H2-1 at one flange tip", uv(0.0, t.depth_mm)),
+                ("H2-1 at the other flange tip", uv(t.width_mm, t.depth_mm)),
+                ("H2-1 at the stem tip", uv(0.5 * t.width_mm, 0.0)),
+            ])
+        }
+        _ => None,
+    }
+}
+
+/// The side of the axis of bending a point is on: +1 where a positive
+/// moment compresses it, -1 where it puts it in tension, 0 on the axis
+/// (within 1e-9 of the section's size).
+fn side_of(d: f64, size: f64) -> f64 {
+    if d.abs() <= 1e-9 * size {
+        0.0
+    } else {
+        d.signum()
+    }
+}
+
+/// The required over the available flexural strength of each sign of
+/// moment along the member about `axis` (amplified by `amp`, the B1 of the
+/// largest moment): (+1, M_r+/M_c+) and (-1, M_r-/M_c-) for the signs the
+/// diagram has.
+fn signed_ratios(ctx: &Context<'_>, axis: Axis, amp: f64) -> [(f64, f64); 2] {
+    let (pos, neg) = signed_extremes(&moments(ctx.input, axis));
+    let b = match axis {
+        Axis::Major => &ctx.bending.major,
+        Axis::Minor => &ctx.bending.minor,
+    };
+    let r = |m: f64, positive: bool| {
+        if m == 0.0 {
+            0.0
+        } else {
+            ratio(amp * m, b.resistance_for(positive))
+        }
+    };
+    [(1.0, r(pos, true)), (-1.0, r(neg, false))]
+}
+
+/// H2-1 at each critical point, the largest returned. At a point the
+/// flexural term about an axis is f_rb/F_cb with the section modulus S to
+/// that point in both (the Specification's wording), so it is +-M_r/M_c of
+/// the sign of moment that acts, positive where that moment compresses the
+/// point and 0 on the axis; each axis' worst sign along the member is
+/// taken (its largest moment of either sign, wherever it acts:
+/// conservative).
+fn h2_at_points(
+    ctx: &Context<'_>,
+    points: &[Point; 3],
+    axial: f64,
+    (m_rx, m_ry): (f64, f64),
+    trace: &mut Trace,
+) -> f64 {
+    let input = ctx.input;
+    let amp = |axis: Axis, m_r: f64| {
+        let m_nt = moments(input, axis).max_abs_knm();
+        if m_nt == 0.0 {
+            0.0
+        } else {
+            m_r / m_nt
+        }
+    };
+    let w = signed_ratios(ctx, Axis::Major, amp(Axis::Major, m_rx));
+    let z = signed_ratios(ctx, Axis::Minor, amp(Axis::Minor, m_ry));
+    let size = input.section.props.r_major_mm.max(1.0);
+    step!(
+        trace,
+        S,
+        "f_ra/F_ca",
+        "required over available axial stress, P_r/A over P_c/A, the same at every point (compression positive)",
+        axial,
+        "-",
+        "AISC 360-16 Eq. H2-1"
+    );
+    // The worst sign of moment about one axis at a point on `side`.
+    let term = |ratios: &[(f64, f64); 2], side: f64| {
+        if side == 0.0 {
+            return 0.0;
+        }
+        let mut best: Option<f64> = None;
+        for &(sign, r) in ratios {
+            if r != 0.0 {
+                let t = sign * side * r;
+                best = Some(best.map_or(t, |b| b.max(t)));
+            }
+        }
+        best.unwrap_or(0.0)
+    };
+    let mut worst = f64::NEG_INFINITY;
+    for &(name, pt) in points {
+        let tw = term(
+            &w,
+            side_of(angle::towards_compression(Axis::Major, pt), size),
+        );
+        let tz = term(
+            &z,
+            side_of(angle::towards_compression(Axis::Minor, pt), size),
+        );
+        let u = axial + tw + tz;
+        push(
+            trace,
+            S,
+            name,
+            "f_ra/F_ca + f_rbw/F_cbw + f_rbz/F_cbz at this point, each flexural term +-M_r/M_c (S to the point in both stresses), + where the moment compresses the point, the worse sign of each axis",
+            u,
+            "-",
+            "AISC 360-16 Eq. H2-1",
+        );
+        worst = worst.max(u);
+    }
+    step!(
+        trace,
+        S,
+        "H2-1",
+        "the largest over the critical points (the toes and the heel of an angle, the flange tips and the stem tip of a tee), principal axes",
+        worst,
+        "-",
+        "AISC 360-16 Eq. H2-1"
+    );
+    worst
+}
+
 /// The interaction equations.
 pub fn check(
     ctx: &Context<'_>,
@@ -285,14 +442,6 @@ pub fn check(
     let input = ctx.input;
     let steel = require_steel(input, key)?;
     let family = input.section.family;
-    if matches!(family, Family::Angle | Family::Tee) {
-        return Err(Error::NotApplicable {
-            method: key,
-            reason: "axial_kn with moments: a single angle or a tee is outside AISC 360-16 H1.1 \
-                     (H2 applies, which is not implemented here); check this member by hand"
-                .into(),
-        });
-    }
     let alpha = if lrfd { ALPHA_LRFD } else { ALPHA_ASD };
     let p_r = input.member.axial_kn;
     let p_c = ctx.governing.resistance_kn;
@@ -368,6 +517,13 @@ pub fn check(
         "-",
         "AISC 360-16 H1.1"
     );
+    if let Some(points) = critical_points(input) {
+        let u = h2_at_points(ctx, &points, axial, (m_rx, m_ry), trace);
+        return Ok(Some(vec![Check {
+            check: "H2-1",
+            utilisation: u,
+        }]));
+    }
     if family == Family::Given {
         let u = axial + bend;
         warn_once(warnings, "given-h2", || {
