@@ -97,6 +97,20 @@ fn angle_axial_and_both_moments_compressing_one_toe() {
         "H2-1 at the heel",
     );
     assert_eq!(r.governing_check, "H2-1");
+    // ASD: the same point with M_n / Omega_b (M_n+ = 29.6402 kNm, M_nz =
+    // 14.1057 kNm, hand; Omega_b = 1.67) and P_c = P_n / Omega_c.
+    let r = l6x4(
+        50.0,
+        json!({"m_major_a_knm": 10, "m_major_b_knm": 10, "m_minor_a_knm": 2, "m_minor_b_knm": 2,
+               "amplify_moments": false, "method": "aisc360-asd"}),
+    );
+    let pc = step_value(&r, "P_c");
+    assert_close(
+        h2(&r),
+        50.0 / pc + 10.0 / (29.6402 / 1.67) + 2.0 / (14.1057 / 1.67),
+        HAND,
+        "H2-1, ASD",
+    );
 }
 
 #[test]
