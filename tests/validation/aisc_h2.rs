@@ -169,6 +169,19 @@ fn amplified_by_b1_about_each_principal_axis() {
 }
 
 #[test]
+fn p_e1_reached_fails_whatever_the_signs() {
+    // 1800 kN > P_e1w = 1774.680 kN and P_e1z: neither B1 has a finite
+    // value; with moments of a sense that would put +inf and -inf at the same
+    // point (w positive, z negative), H2-1 is still infinite.
+    let r = l6x4(
+        1800.0,
+        json!({"m_major_a_knm": 10, "m_major_b_knm": 10, "m_minor_a_knm": -2, "m_minor_b_knm": -2}),
+    );
+    assert!(h2(&r).is_infinite() && h2(&r) > 0.0, "{}", h2(&r));
+    assert!(!r.passes);
+}
+
+#[test]
 fn a_beam_angle_bent_about_both_principal_axes() {
     // No axial load (F10: moments about both principal axes go to H2):
     // 10/26.6761 + 2/12.6952 at the toe of the leg depth_mm.

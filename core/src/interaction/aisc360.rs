@@ -358,6 +358,20 @@ fn h2_at_points(
     (m_rx, m_ry): (f64, f64),
     trace: &mut Trace,
 ) -> f64 {
+    if !(m_rx.is_finite() && m_ry.is_finite()) {
+        // B1 without a finite value: the member fails (a warning says why);
+        // no point may offset an infinite term by another.
+        step!(
+            trace,
+            S,
+            "H2-1",
+            "no finite value: the moments have no finite amplification B1",
+            f64::INFINITY,
+            "-",
+            "AISC 360-16 Eq. H2-1, Eq. A-8-3"
+        );
+        return f64::INFINITY;
+    }
     let input = ctx.input;
     let amp = |axis: Axis, m_r: f64| {
         let m_nt = moments(input, axis).max_abs_knm();
