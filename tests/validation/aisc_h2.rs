@@ -149,6 +149,36 @@ fn signs_respected_a_minor_moment_that_relieves_the_toe() {
 }
 
 #[test]
+fn a_relieving_moment_counts_where_it_acts_along_the_member() {
+    // M_w from a uniform span load alone (10 kNm at mid-length, zero at the
+    // ends), M_z = -2 kNm at end A falling to 0 at end B: the relief at the
+    // toe of the leg depth_mm is full only where M_w is nil. The largest
+    // along the member, by a fine sampling here (100 001 sections) against
+    // the engine's exact search over the pieces of the diagrams: toe (+, +)
+    // P/P_c + M_w(s)/M_cw - |M_z(s)|/M_cz, heel (-, -) P/P_c - M_w(s)/M_cw
+    // + |M_z(s)|/M_cz, toe of the leg width_mm (-, +) both relieving.
+    let r = l6x4(
+        50.0,
+        json!({"m_major_span_knm": 10, "m_minor_a_knm": -2, "amplify_moments": false}),
+    );
+    let b = r.bending.unwrap();
+    let (mcw, mcz) = (b.major.resistance_knm, b.minor.resistance_knm);
+    let axial = 50.0 / step_value(&r, "P_c");
+    let mut worst = f64::NEG_INFINITY;
+    for i in 0..=100_000 {
+        let s = f64::from(i) / 100_000.0;
+        let (w, z) = (10.0 * 4.0 * s * (1.0 - s), 2.0 * (1.0 - s));
+        let toe = axial + w / mcw - z / mcz;
+        let heel = axial - w / mcw + z / mcz;
+        worst = worst.max(toe).max(heel);
+    }
+    assert_close(h2(&r), worst, 1e-6, "H2-1 along the member");
+    // Taking each axis' extreme at one section would give the toe 10/M_cw -
+    // 2/M_cz: less, and wrong (the relief is not there at mid-length).
+    assert!(h2(&r) > axial + 10.0 / mcw - 2.0 / mcz + 1e-3);
+}
+
+#[test]
 fn amplified_by_b1_about_each_principal_axis() {
     // amplify_moments (default): C_m = 1.0 (uniform moment, M_1/M_2 = -1),
     // B1w = 1/(1 - 50/1774.680), B1z = 1/(1 - 50/317.643).

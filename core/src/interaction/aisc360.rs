@@ -39,8 +39,9 @@
 //!   tip), each flexural term +-M_r/M_c with the strength of the sign of
 //!   moment that acts (the section modulus to the point in f_rb and F_cb
 //!   alike, as the Specification words it), + where it compresses the
-//!   point; each axis' largest moment of either sign, the worse at each
-//!   point; the largest point governs. F10 sends an angle with axial load
+//!   point; both axes' moments at the same section, the largest along the
+//!   member found exactly, B1 on the compressing terms only; the largest
+//!   point governs. F10 sends an angle with axial load
 //!   or biaxial moments to H2; for a tee I_yc/I_y lies outside H1.1's 0.1
 //!   to 0.9, and H2 may be used for any shape.
 //!
@@ -48,9 +49,9 @@
 
 use super::{ratio, Check, Context};
 use crate::bending::aisc360_angle as angle;
-use crate::bending::{moments, shape, signed_extremes, Axis, AxisBending, Shape};
+use crate::bending::{moments, shape, Axis, AxisBending, Shape};
 use crate::error::Result;
-use crate::member::Method;
+use crate::member::{Method, Moments, SpanLoad};
 use crate::method::common::{require_steel, warn_once};
 use crate::outcome::Warning;
 use crate::section::{Family, SectionSpec};
@@ -324,33 +325,67 @@ fn side_of(d: f64, size: f64) -> f64 {
     }
 }
 
-/// The required over the available flexural strength of each sign of
-/// moment along the member about `axis` (amplified by `amp`, the B1 of the
-/// largest moment): (+1, M_r+/M_c+) and (-1, M_r-/M_c-) for the signs the
-/// diagram has.
-fn signed_ratios(ctx: &Context<'_>, axis: Axis, amp: f64) -> [(f64, f64); 2] {
-    let (pos, neg) = signed_extremes(&moments(ctx.input, axis));
-    let b = match axis {
-        Axis::Major => &ctx.bending.major,
-        Axis::Minor => &ctx.bending.minor,
-    };
-    let r = |m: f64, positive: bool| {
-        if m == 0.0 {
-            0.0
-        } else {
-            ratio(amp * m, b.resistance_for(positive))
-        }
-    };
-    [(1.0, r(pos, true)), (-1.0, r(neg, false))]
+/// A moment diagram on one half of the member (s in [0, 0.5] or [0.5, 1])
+/// as the polynomial p0 + p1 s + p2 s^2, kNm (the member file's M(x) with a
+/// uniform span load is one parabola, with a point load two lines).
+fn half_poly(m: &Moments, second: bool) -> [f64; 3] {
+    let (a, b, c) = (m.a_knm, m.b_knm, m.span_knm);
+    match (m.span_load, second) {
+        (SpanLoad::Uniform, _) => [a, b - a + 4.0 * c, -4.0 * c],
+        (SpanLoad::Point, false) => [a, b - a + 2.0 * c, 0.0],
+        (SpanLoad::Point, true) => [a + 2.0 * c, b - a - 2.0 * c, 0.0],
+    }
 }
 
-/// H2-1 at each critical point, the largest returned. At a point the
-/// flexural term about an axis is f_rb/F_cb with the section modulus S to
-/// that point in both (the Specification's wording), so it is +-M_r/M_c of
-/// the sign of moment that acts, positive where that moment compresses the
-/// point and 0 on the axis; each axis' worst sign along the member is
-/// taken (its largest moment of either sign, wherever it acts:
-/// conservative).
+/// Pushes the roots of p0 + p1 s + p2 s^2 that lie within [lo, hi].
+fn roots_within(p: [f64; 3], lo: f64, hi: f64, out: &mut Vec<f64>) {
+    let [p0, p1, p2] = p;
+    let mut keep = |s: f64| {
+        if s.is_finite() && s > lo && s < hi {
+            out.push(s);
+        }
+    };
+    if p2 == 0.0 {
+        if p1 != 0.0 {
+            keep(-p0 / p1);
+        }
+        return;
+    }
+    let disc = p1 * p1 - 4.0 * p2 * p0;
+    if disc >= 0.0 {
+        let r = disc.sqrt();
+        keep((-p1 + r) / (2.0 * p2));
+        keep((-p1 - r) / (2.0 * p2));
+    }
+}
+
+/// One axis' flexural term of H2-1 at a point on `side` (+1 where a
+/// positive moment compresses it, -1 where it stretches it, 0 on the axis)
+/// for the moment `m` there, kNm: side M / M_c of that sign of moment,
+/// times B1 (`amp`) where it compresses the point; a relieving term is not
+/// amplified (the smaller relief, conservative).
+fn flexural_term(b: &AxisBending, side: f64, amp: f64, m: f64) -> f64 {
+    if side == 0.0 || m == 0.0 {
+        return 0.0;
+    }
+    let t = side * ratio(m.abs(), b.resistance_for(m > 0.0)) * m.signum();
+    if t > 0.0 {
+        t * amp
+    } else {
+        t
+    }
+}
+
+/// H2-1 at each critical point, along the member, the largest returned.
+/// At a point the flexural term about an axis is f_rb/F_cb with the
+/// section modulus S to that point in both (the Specification's wording),
+/// so it is +-M_r/M_c of the sign of moment acting at that section, + where
+/// it compresses the point, 0 on the axis. The two axes' moments are taken
+/// together at each section x of the member, so a relieving moment counts
+/// only as large as it is where the other acts; the largest is found
+/// exactly: on each piece between the ends, mid-length and the zeros of
+/// either diagram the sum is one quadratic in x, so its largest value is at
+/// a piece's end or its stationary point.
 fn h2_at_points(
     ctx: &Context<'_>,
     points: &[Point; 3],
@@ -373,16 +408,24 @@ fn h2_at_points(
         return f64::INFINITY;
     }
     let input = ctx.input;
-    let amp = |axis: Axis, m_r: f64| {
-        let m_nt = moments(input, axis).max_abs_knm();
+    let (mw, mz) = (moments(input, Axis::Major), moments(input, Axis::Minor));
+    let amp = |m: &Moments, m_r: f64| {
+        let m_nt = m.max_abs_knm();
         if m_nt == 0.0 {
-            0.0
+            1.0
         } else {
             m_r / m_nt
         }
     };
-    let w = signed_ratios(ctx, Axis::Major, amp(Axis::Major, m_rx));
-    let z = signed_ratios(ctx, Axis::Minor, amp(Axis::Minor, m_ry));
+    let (amp_w, amp_z) = (amp(&mw, m_rx), amp(&mz, m_ry));
+    let (bw, bz) = (&ctx.bending.major, &ctx.bending.minor);
+    // Where the pieces meet: the ends, mid-length, the zeros of each diagram.
+    let mut cuts = vec![0.0, 0.5, 1.0];
+    for m in [&mw, &mz] {
+        roots_within(half_poly(m, false), 0.0, 0.5, &mut cuts);
+        roots_within(half_poly(m, true), 0.5, 1.0, &mut cuts);
+    }
+    cuts.sort_by(f64::total_cmp);
     let size = input.section.props.r_major_mm.max(1.0);
     step!(
         trace,
@@ -393,47 +436,60 @@ fn h2_at_points(
         "-",
         "AISC 360-16 Eq. H2-1"
     );
-    // The worst sign of moment about one axis at a point on `side`.
-    let term = |ratios: &[(f64, f64); 2], side: f64| {
-        if side == 0.0 {
-            return 0.0;
-        }
-        let mut best: Option<f64> = None;
-        for &(sign, r) in ratios {
-            if r != 0.0 {
-                let t = sign * side * r;
-                best = Some(best.map_or(t, |b| b.max(t)));
-            }
-        }
-        best.unwrap_or(0.0)
-    };
     let mut worst = f64::NEG_INFINITY;
     for &(name, pt) in points {
-        let tw = term(
-            &w,
-            side_of(angle::towards_compression(Axis::Major, pt), size),
-        );
-        let tz = term(
-            &z,
-            side_of(angle::towards_compression(Axis::Minor, pt), size),
-        );
-        let u = axial + tw + tz;
+        let side_w = side_of(angle::towards_compression(Axis::Major, pt), size);
+        let side_z = side_of(angle::towards_compression(Axis::Minor, pt), size);
+        let at = |s: f64| {
+            axial
+                + flexural_term(bw, side_w, amp_w, mw.at(s))
+                + flexural_term(bz, side_z, amp_z, mz.at(s))
+        };
+        let mut best = f64::NEG_INFINITY;
+        for pair in cuts.windows(2) {
+            let &[lo, hi] = pair else { continue };
+            best = best.max(at(lo)).max(at(hi));
+            // Within the piece each term is k M(s), k fixed: the slope of
+            // the sum is zero where k_w M_w'(s) + k_z M_z'(s) = 0.
+            let mid = 0.5 * (lo + hi);
+            let second = mid > 0.5;
+            let k = |b: &AxisBending, side: f64, amp: f64, m: &Moments| {
+                let v = m.at(mid);
+                if v == 0.0 {
+                    0.0
+                } else {
+                    flexural_term(b, side, amp, v) / v
+                }
+            };
+            let (kw, kz) = (k(bw, side_w, amp_w, &mw), k(bz, side_z, amp_z, &mz));
+            let (pw, pz) = (half_poly(&mw, second), half_poly(&mz, second));
+            let slope = [
+                kw * pw[1] + kz * pz[1],
+                2.0 * (kw * pw[2] + kz * pz[2]),
+                0.0,
+            ];
+            let mut flat = Vec::new();
+            roots_within(slope, lo, hi, &mut flat);
+            for s in flat {
+                best = best.max(at(s));
+            }
+        }
         push(
             trace,
             S,
             name,
-            "f_ra/F_ca + f_rbw/F_cbw + f_rbz/F_cbz at this point, each flexural term +-M_r/M_c (S to the point in both stresses), + where the moment compresses the point, the worse sign of each axis",
-            u,
+            "f_ra/F_ca + f_rbw/F_cbw + f_rbz/F_cbz at this point, the largest along the member: each flexural term +-M_r/M_c (S to the point in both stresses) of the moment at that section, + where it compresses the point (times B1), - where it relieves it",
+            best,
             "-",
             "AISC 360-16 Eq. H2-1",
         );
-        worst = worst.max(u);
+        worst = worst.max(best);
     }
     step!(
         trace,
         S,
         "H2-1",
-        "the largest over the critical points (the toes and the heel of an angle, the flange tips and the stem tip of a tee), principal axes",
+        "the largest over the critical points (the toes and the heel of an angle, the flange tips and the stem tip of a tee) and along the member, principal axes",
         worst,
         "-",
         "AISC 360-16 Eq. H2-1"
