@@ -337,8 +337,30 @@ fn half_poly(m: &Moments, second: bool) -> [f64; 3] {
     }
 }
 
-/// Pushes the roots of p0 + p1 s + p2 s^2 that lie within [lo, hi].
-fn roots_within(p: [f64; 3], lo: f64, hi: f64, out: &mut Vec<f64>) {
+/// Up to 12 places along the member (no allocation in the check).
+#[derive(Default)]
+struct Places {
+    s: [f64; 12],
+    n: usize,
+}
+
+impl Places {
+    fn push(&mut self, v: f64) {
+        if let Some(slot) = self.s.get_mut(self.n) {
+            *slot = v;
+            self.n += 1;
+        }
+    }
+
+    fn sorted(&mut self) -> &[f64] {
+        let v = self.s.get_mut(..self.n).unwrap_or(&mut []);
+        v.sort_by(f64::total_cmp);
+        v
+    }
+}
+
+/// Pushes the roots of p0 + p1 s + p2 s^2 that lie strictly within (lo, hi).
+fn roots_within(p: [f64; 3], lo: f64, hi: f64, out: &mut Places) {
     let [p0, p1, p2] = p;
     let mut keep = |s: f64| {
         if s.is_finite() && s > lo && s < hi {
@@ -420,12 +442,15 @@ fn h2_at_points(
     let (amp_w, amp_z) = (amp(&mw, m_rx), amp(&mz, m_ry));
     let (bw, bz) = (&ctx.bending.major, &ctx.bending.minor);
     // Where the pieces meet: the ends, mid-length, the zeros of each diagram.
-    let mut cuts = vec![0.0, 0.5, 1.0];
-    for m in [&mw, &mz] {
-        roots_within(half_poly(m, false), 0.0, 0.5, &mut cuts);
-        roots_within(half_poly(m, true), 0.5, 1.0, &mut cuts);
+    let mut places = Places::default();
+    for s in [0.0, 0.5, 1.0] {
+        places.push(s);
     }
-    cuts.sort_by(f64::total_cmp);
+    for m in [&mw, &mz] {
+        roots_within(half_poly(m, false), 0.0, 0.5, &mut places);
+        roots_within(half_poly(m, true), 0.5, 1.0, &mut places);
+    }
+    let cuts = places.sorted();
     let size = input.section.props.r_major_mm.max(1.0);
     step!(
         trace,
@@ -468,9 +493,9 @@ fn h2_at_points(
                 2.0 * (kw * pw[2] + kz * pz[2]),
                 0.0,
             ];
-            let mut flat = Vec::new();
+            let mut flat = Places::default();
             roots_within(slope, lo, hi, &mut flat);
-            for s in flat {
+            for &s in flat.sorted() {
                 best = best.max(at(s));
             }
         }
