@@ -166,3 +166,22 @@ fn class_4_sections_not_covered_are_refused_by_key() {
         .to_string();
     assert!(e.contains("m_major_a_knm") && e.contains("Class 4"), "{e}");
 }
+
+#[test]
+fn the_beam_column_check_takes_the_same_w_eff() {
+    // EN 1993-1-1 Table 6.7 / 6.2.2.5: W_eff of the section under the moment
+    // alone; with axial load the interaction reads the bending check's.
+    let r = strutline_core::check_member(&member(
+        girder(),
+        json!({"axial_kn": 50, "m_major_a_knm": 100, "m_major_b_knm": 100,
+            "lt_restrained": true}),
+    ))
+    .unwrap();
+    let w = r
+        .trace
+        .iter()
+        .find(|s| s.symbol == "W_eff,y")
+        .map(|s| s.value)
+        .expect("W_eff,y in the interaction's working");
+    assert_close(w, 1_038_809.8, SCRIPT, "W_eff,y, Table 6.7");
+}
