@@ -6,7 +6,16 @@
 //! 145, 170, 200 / sqrt(F_y) for Classes 1, 2, 3; webs h/w (h = d - 2 t_f)
 //! 1100, 1700, 1900 / sqrt(F_y) (no axial load); rectangular HSS flanges
 //! (b - 4t)/t 420, 525, 670 / sqrt(F_y), webs as I webs; circular HSS D/t
-//! 13 000, 18 000, 66 000 / F_y; solid sections Class 1. Class 4 is refused.
+//! 13 000, 18 000, 66 000 / F_y; tee flanges b_f/2t_f as I flanges, the
+//! stem (flange compressed, plastic neutral axis in the stem) held to Table
+//! 1's 340 / sqrt(F_y) and the section to Class 3 (Table 2 has no tee stem
+//! in flexure); solid sections Class 1. Class 4 is refused.
+//!
+//! Tees bent in their plane of symmetry (sign: [`super::tee`]): the flange
+//! compressed by 13.6(e), M_u = omega_2 pi^2 E I_y / (2 L^2) [beta_x +
+//! sqrt(beta_x^2 + 4 (G J L^2 / (pi^2 E I_y) + C_w / I_y))], beta_x = 2 z_j
+//! from its definition (recalled from memory); a negative moment (stem
+//! compressed) is refused naming its key.
 //! M_r = phi Z F_y (Classes 1, 2) or phi S F_y (Class 3), 13.5.
 //!
 //! 13.6(a), doubly symmetric Class 1 and 2 (13.6(b) Class 3 with M_y for

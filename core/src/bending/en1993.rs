@@ -9,9 +9,11 @@
 //! conservative choice), a circular tube 50/70/90 eps^2; solid sections are
 //! Class 1. Widths as the compression check measures them (flat widths; RHS
 //! walls h - 3t, b - 3t). M_c,Rd = W f_y / gamma_M0 (6.13-6.15) with W_pl
-//! for Classes 1 and 2, W_el for Class 3; Class 4 is refused (the effective
-//! section of EN 1993-1-5 in bending is not implemented). gamma_M0 = 1.0
-//! (recommended, 6.1(1) Note 2B).
+//! for Classes 1 and 2, W_el for Class 3, W_eff,min for Class 4 (the
+//! effective section of EN 1993-1-5 4.4 for doubly symmetric I and
+//! rectangular hollow sections, [`super::en1993_effective`]; other Class 4
+//! sections refused). gamma_M0 = 1.0 (recommended, 6.1(1) Note 2B). A tee
+//! bent in its plane of symmetry is [`super::en1993_tee`]'s.
 //!
 //! Lateral-torsional buckling about the major axis (the axis parallel to
 //! the flanges, picked by the geometry: the section's major principal axis
