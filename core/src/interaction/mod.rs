@@ -90,13 +90,29 @@ pub fn check(
         // The bending of a tee is worked under these codes, but their
         // beam-column rules (6.3.3; 13.8) are not set up for a monosymmetric
         // section whose resistance depends on the sign of the moment.
+        let m = ctx.input.member;
+        let (key, what) = if m.axial_kn > 0.0 {
+            ("axial_kn", "axial load with moments")
+        } else {
+            (
+                [
+                    ("m_minor_a_knm", m.m_minor_a_knm),
+                    ("m_minor_b_knm", m.m_minor_b_knm),
+                    ("m_minor_span_knm", m.m_minor_span_knm),
+                ]
+                .iter()
+                .find(|(_, v)| *v != 0.0)
+                .map_or("m_minor_a_knm", |(k, _)| *k),
+                "moments about both axes",
+            )
+        };
         return Err(Error::NotApplicable {
             method: ctx.method.key(),
-            reason: "axial_kn with moments: the beam-column check of a tee or an angle is not \
-                     worked under this code (its interaction rules are for doubly symmetric \
-                     members; the tee's bending resistance depends on the moment's sign); check \
-                     this member by hand"
-                .into(),
+            reason: format!(
+                "{key}: {what}: the combined check of a tee or an angle is not worked under this \
+                 code (its interaction rules are for doubly symmetric members; the tee's bending \
+                 resistance depends on the moment's sign); check this member by hand"
+            ),
         });
     }
     match ctx.method {
