@@ -256,3 +256,29 @@ fn tees_with_axial_load_and_moments_are_refused() {
         .to_string();
     assert!(e.contains("axial_kn") && e.contains("tee"), "{e}");
 }
+
+#[test]
+fn a_wide_tee_about_its_axis_of_symmetry_buckles_laterally_without_monosymmetry() {
+    // 100 x 200 x 10 x 8: I_z = 6 670 506.7 > I_y = 1 826 196.1 mm4, so the
+    // axis of symmetry (z-z) is the major principal axis. Flange c/t = 9.6:
+    // Class 2, W_pl,z = 101 440 mm3, M_c,Rd = 23.8384 kNm; L = 3000, uniform
+    // moment, z_j = 0 by symmetry: M_cr = 52.619815 kNm, chi_LT = 0.660861
+    // (curve d), M_b,Rd = 15.753863 kNm (rederive.py, wide_tee).
+    let wide = json!({"kind": "tee", "depth_mm": 100, "width_mm": 200, "flange_mm": 10,
+        "web_mm": 8});
+    let r = strutline_core::check_member(&tee(json!({"section": wide, "length_mm": 3000,
+        "m_major_a_knm": 10, "m_major_b_knm": 10})))
+    .unwrap();
+    assert_close(step_value(&r, "M_cr"), 52.619815, SCRIPT, "M_cr, z_j = 0");
+    let b = r.bending.unwrap();
+    assert_close(
+        b.major.resistance_knm,
+        15.753863,
+        SCRIPT,
+        "M_b,Rd, Eq. 6.55",
+    );
+    assert!(r.warnings.iter().any(|w| w.code == "tee-symmetry-axis-ltb"));
+    // Its in-plane axis (y-y) is the minor one: no lateral-torsional
+    // buckling, each sign its own class.
+    assert!(b.minor.critical_knm.is_none());
+}

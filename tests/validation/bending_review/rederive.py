@@ -469,6 +469,26 @@ def tee_en_case(h, b, tf, tw, fy, L, Ma, Mb, Ms, load="uniform", level="shear-ce
           f"utilisation {max(u_pos, u_neg):.8g}")
 
 
+def wide_tee(h, b, tf, tw, fy, L):
+    """A tee wider than deep bent about its axis of symmetry, its major principal axis: the
+    doubly symmetric formula (z_j = 0 by symmetry), uniform moment, curve d."""
+    print(f"\n== EN 1993-1-1 wide tee {h}x{b}x{tf}x{tw}, f_y {fy}, L {L}, about the axis of symmetry ==")
+    R = rects_tee(h, b, tf, tw)
+    A, _, zc, Iy, Iz = props(R)
+    It, Iw = tee_torsion(h, b, tf, tw), tf ** 3 * b ** 3 / 144 + tw ** 3 * (h - tf / 2) ** 3 / 36
+    eps = math.sqrt(235 / fy)
+    c = (b - tw) / 2
+    cls = 1 if c / tf <= 9 * eps else 2 if c / tf <= 10 * eps else 3 if c / tf <= 14 * eps else 4
+    wpl = tf * b * b / 4 + (h - tf) * tw * tw / 4
+    W = wpl if cls <= 2 else Iz / (b / 2)
+    mc = W * fy / 1e6
+    mcr = three_factor(L, E * Iy, E * Iw, G * It, 1, 0, 0, 0, 0) / 1e6
+    lam = math.sqrt(mc / mcr)
+    chi = chi_general(lam, 0.76)
+    print(f"I_y {Iy:.8g} I_z {Iz:.8g} (z-z major: {Iz > Iy}) class {cls} W {W:.8g} M_c,Rd {mc:.8g} M_cr {mcr:.8g} "
+          f"lambda_LT {lam:.6g} chi_LT {chi:.6g} M_b,Rd {chi*mc:.8g} kNm")
+
+
 def table_4_2_checks():
     print("\n== EN 1993-1-5 Table 4.2 (recalled) against a Ritz plate solution ==")
     for psi in (1.0, 0.5, 0.0, -1.0, -2.0, -3.0):
@@ -481,6 +501,7 @@ def table_4_2_checks():
 
 if __name__ == "__main__":
     table_4_2_checks()
+    wide_tee(100.0, 200.0, 10.0, 8.0, 235.0, 3000.0)
     print("\n== EN 1993-1-1 tee cases (200x200x15x12, f_y 235) ==")
     tee_en_case(200.0, 200.0, 15.0, 12.0, 235.0, 4000.0, 20.0, -10.0, 0.0)
     tee_en_case(200.0, 200.0, 15.0, 12.0, 235.0, 4000.0, 30.0, 0.0, 0.0)
