@@ -1447,13 +1447,18 @@ pub fn deflection_eil2(m: &Moments) -> f64 {
         bracket: 1e-15,
     };
     for &(p, q, [c2, c1, c0]) in pieces {
-        let mut cuts = vec![p];
-        cuts.extend(
-            quadratic_roots(c2, c1, c0)
-                .into_iter()
-                .filter(|r| *r > p && *r < q),
-        );
-        cuts.push(q);
+        // The piece's ends and the zeros of delta'' inside it, in order
+        // (a zero outside the piece, or none, stands at its end: an empty
+        // interval; no allocation, this runs in every check of the row).
+        let (roots, found) = quadratic_roots(c2, c1, c0);
+        let inside = |i: usize| {
+            roots
+                .get(i)
+                .filter(|r| i < found && **r > p && **r < q)
+                .copied()
+                .unwrap_or(q)
+        };
+        let mut cuts = [p, inside(0), inside(1), q];
         cuts.sort_by(f64::total_cmp);
         for w2 in cuts.windows(2) {
             let (lo, hi) = match *w2 {
@@ -1478,26 +1483,26 @@ pub fn deflection_eil2(m: &Moments) -> f64 {
     most
 }
 
-/// The real roots of c2 x^2 + c1 x + c0 (none, one or two; a linear or
-/// constant one where c2 or c1 is zero).
-fn quadratic_roots(c2: f64, c1: f64, c0: f64) -> Vec<f64> {
+/// The real roots of c2 x^2 + c1 x + c0 and how many there are (none, one
+/// or two; a linear or constant one where c2 or c1 is zero).
+fn quadratic_roots(c2: f64, c1: f64, c0: f64) -> ([f64; 2], usize) {
     if c2 == 0.0 {
         return if c1 == 0.0 {
-            Vec::new()
+            ([0.0; 2], 0)
         } else {
-            vec![-c0 / c1]
+            ([-c0 / c1, 0.0], 1)
         };
     }
     let disc = c1 * c1 - 4.0 * c2 * c0;
     if disc < 0.0 {
-        return Vec::new();
+        return ([0.0; 2], 0);
     }
     // The form without cancellation.
     let q = -0.5 * (c1 + c1.signum() * disc.sqrt());
     if q == 0.0 {
-        return vec![0.0];
+        return ([0.0; 2], 1);
     }
-    vec![q / c2, c0 / q]
+    ([q / c2, c0 / q], 2)
 }
 
 /// C_mi,0 of EN 1993-1-1 Table A.2 (recalled from memory) for a diagram,
