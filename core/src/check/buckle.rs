@@ -290,6 +290,15 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         "-",
         "highest utilisation"
     );
+    step!(
+        &mut trace,
+        Scope::Member,
+        "N_Ed",
+        "design compression of the governing segment (its largest), from the model's loads",
+        result.axial_kn,
+        "kN",
+        "load pattern of the buckling_model"
+    );
     for s in std::mem::take(&mut result.trace).into_steps() {
         put(&mut trace, s.scope, s.symbol, s.label, s.value, s.clause);
     }
@@ -325,6 +334,10 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     }
     result.warnings = warnings;
     result.id = member.id.clone();
+    result.segment = Some(crate::check::SegmentOf {
+        index: governing + 1,
+        count: r.lengths.len(),
+    });
     Ok(result)
 }
 
@@ -510,6 +523,16 @@ mod tests {
             major.critical_kn
         );
         assert!((minor.critical_kn - want_z).abs() < 1e-6 * want_z);
+        // The result names the governing segment and its force, the N_Ed
+        // it was checked at.
+        assert_eq!(
+            r.segment,
+            Some(crate::check::SegmentOf {
+                index: seg + 1,
+                count: 2
+            })
+        );
+        assert_eq!(r.axial_kn, b.major.segments[seg].axial_kn);
         assert!(r.warnings.iter().any(|w| w.code == "buckling-model"));
         assert!(!r.warnings.iter().any(|w| w.code == "axial-kn-from-model"));
         // Each segment checked on its own: the governing one has the
