@@ -17,7 +17,10 @@
 //! member keeps its proportions (a brace restrained at mid-length stays
 //! restrained at mid-length). A `buckling_model` is scaled with it: its
 //! segments' lengths and the positions of its braces and loads (its
-//! springs, supports and loads are kept). An explicit `bow_mm` or `eccentricity_mm` is
+//! springs, supports and loads are kept); where its alpha_cr then falls
+//! exactly as a power of the length (no springs, and loads at points only
+//! or along the length only: `buckling::column::Column::length_power`),
+//! the trials scale the member's own analysis instead of analysing again. An explicit `bow_mm` or `eccentricity_mm` is
 //! kept as given; when absent, the methods' defaults (length / 1000)
 //! follow the trial length.
 //!
@@ -155,6 +158,9 @@ struct Trials<'a> {
     base: &'a Prepared,
     work: Prepared,
     method: Method,
+    /// A buckling model's analyses at the member's own length, scaled to
+    /// each trial where that is exact instead of analysed again.
+    lengthwise: Option<crate::check::buckle::Lengthwise>,
 }
 
 /// The member with its length, given buckling lengths and buckling
@@ -182,7 +188,13 @@ pub fn scaled(member: &Member, s: f64) -> Member {
 impl Trials<'_> {
     fn at(&mut self, s: f64) -> Trial {
         self.work.member = scaled(&self.base.member, s);
-        match self.work.check_as(self.method, Working::Skipped) {
+        let checked = match &self.lengthwise {
+            Some(base) => {
+                crate::check::buckle::check_lengthened(&self.work.input(), self.method, base, s)
+            }
+            None => self.work.check_as(self.method, Working::Skipped),
+        };
+        match checked {
             Ok(r) => Trial::Ran(Box::new(r)),
             Err(e) => Trial::Refused(inner(e)),
         }
@@ -217,6 +229,7 @@ pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswe
         base: prepared,
         work: prepared.clone(),
         method,
+        lengthwise: crate::check::buckle::lengthwise(&prepared.input()),
     };
     // Keep every trial length inside the member file's range, with a
     // margin of rounding so the end trials are accepted.
@@ -426,6 +439,42 @@ mod tests {
         let again = at.check_with(method).unwrap();
         assert!((again.utilisation - f.utilisation).abs() <= 1e-12);
         assert_eq!(again.governing, f.governing);
+    }
+
+    #[test]
+    fn a_model_that_scales_exactly_is_not_analysed_per_trial_and_gives_the_same_length() {
+        // K1 of the worked example without its springs and its load along
+        // the length: point loads only, so every trial scales the member's
+        // own analysis (alpha_cr / s^2). The member rechecked at the length
+        // found, with its analysis run afresh, is at the same utilisation.
+        let f =
+            crate::file::parse(include_str!("../../examples/tarnbeck-crane-hall.json")).unwrap();
+        let mut k1 = f.members[0].clone();
+        if let Some(model) = k1.buckling_model.as_mut() {
+            model.ends.b.major.translation = crate::buckling::Fixity::Fixed;
+            model.restraints[0].translation = crate::buckling::Fixity::Fixed;
+            model.distributed_kn_per_m = 0.0;
+        }
+        let p = Prepared::new(&k1).unwrap();
+        assert!(crate::check::buckle::lengthwise(&p.input()).is_some());
+        let found = match longest_length(&p, k1.method).unwrap() {
+            LengthAnswer::Found(f) => f,
+            other => panic!("{other:?}"),
+        };
+        let again = Prepared::new(&scaled(&k1, found.scale))
+            .unwrap()
+            .check_with(k1.method)
+            .unwrap();
+        assert!(
+            (again.utilisation - found.utilisation).abs() <= 1e-9,
+            "{} {}",
+            again.utilisation,
+            found.utilisation
+        );
+        assert!((found.utilisation - 1.0).abs() <= 1e-3, "{found:?}");
+        // With its springs back, neither axis scales exactly.
+        let p = Prepared::new(&f.members[0]).unwrap();
+        assert!(crate::check::buckle::lengthwise(&p.input()).is_none());
     }
 
     #[test]
