@@ -137,7 +137,8 @@ pub struct LargestLoad {
     pub governing_check: &'static str,
     /// The utilisation under the member's own design load.
     pub utilisation: f64,
-    /// Resistance minus the member's design load, kN (negative when over).
+    /// Resistance minus the design load the check took (with a buckling
+    /// model, the governing segment's force), kN (negative when over).
     pub reserve_kn: f64,
 }
 
@@ -370,7 +371,9 @@ pub fn largest_load(prepared: &Prepared, method: Method) -> Result<LargestLoad> 
         governing,
         governing_check,
         utilisation: r.utilisation,
-        reserve_kn: load_kn - prepared.member.axial_kn,
+        // The N_Ed the check took: with a buckling model, the governing
+        // segment's force, whose resistance `load_kn` is.
+        reserve_kn: load_kn - r.axial_kn,
     })
 }
 
@@ -472,6 +475,12 @@ mod tests {
             found.utilisation
         );
         assert!((found.utilisation - 1.0).abs() <= 1e-3, "{found:?}");
+        // The largest load's reserve is against the governing segment's
+        // force, the N_Ed its resistance is for.
+        let own = p.check_with(k1.method).unwrap();
+        let l = largest_load(&p, k1.method).unwrap();
+        assert!(own.segment.is_some());
+        assert_eq!(l.reserve_kn, l.load_kn - own.axial_kn);
         // With its springs back, neither axis scales exactly.
         let p = Prepared::new(&f.members[0]).unwrap();
         assert!(crate::check::buckle::lengthwise(&p.input()).is_none());
