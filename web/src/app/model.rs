@@ -361,11 +361,11 @@ pub(super) fn ColumnModel(ctx: Ctx) -> impl IntoView {
     Effect::new(move |_| {
         let a = analysed.get();
         let hc = ctx.high_contrast.get();
-        ctx.resize.track();
+        let resized = ctx.resize.get();
         let (Some(el), Some(a)) = (canvas.get(), a) else {
             return;
         };
-        let dpr = browser::fit_canvas(&el);
+        let dpr = browser::fit_canvas(&el, resized);
         match chart::column::draw(&el, &a.sketch, dpr, hc) {
             Ok(()) => note.set(None),
             Err(e) => note.set(Some(e)),

@@ -290,8 +290,9 @@ pub(super) fn Chart(
         let sys = ctx.units.get();
         let us = sys == UnitSystem::Us;
         let interaction = interaction_shown();
-        ctx.resize.track();
-        ctx.chart_open.track();
+        // The canvas's size is read again after a resize or when the
+        // docked chart opens or closes.
+        let resized = ctx.resize.get() * 2 + u64::from(ctx.chart_open.get());
         // Drawn after the first frame: its size needs the layout.
         if !ctx.painted.get() {
             return;
@@ -299,7 +300,7 @@ pub(super) fn Chart(
         let Some(el) = canvas.get() else {
             return;
         };
-        let dpr = browser::fit_canvas(&el);
+        let dpr = browser::fit_canvas(&el, resized);
         // What one chart records for tests, cleared before the other draws.
         for a in [
             "data-chart",
