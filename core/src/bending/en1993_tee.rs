@@ -448,6 +448,12 @@ pub(super) fn axis(
         reduction: side.chi,
         moment_factor: side.mcr.and(c1_used),
         demand_knm: if demand == 0.0 { 0.0 } else { demand_sign },
+        // A sign that is Class 4 has no resistance here (a moment of that
+        // sign was refused above): 0, so nothing can read it as a capacity.
+        by_sign: Some(super::BySign {
+            positive_knm: plus.as_ref().map_or(0.0, |a| a.resistance),
+            negative_knm: minus.as_ref().map_or(0.0, |b| b.resistance),
+        }),
     })
 }
 
