@@ -7,6 +7,7 @@
 //! [`strutline_core::file::from_value`], so lists of older member-file versions
 //! migrate.
 
+use serde::Deserialize;
 use serde_json::{Map, Value};
 use strutline_core::file::{self, MemberFile};
 
@@ -87,8 +88,54 @@ pub fn peek_revision(text: &str) -> Option<u64> {
     v.get("revision").and_then(Value::as_u64)
 }
 
+/// The stored workspace read straight into its types, for text as this
+/// build writes it: no JSON value tree is built (and freed) on the way,
+/// which for a 1,000-member list was most of the start's time.
+#[derive(Deserialize)]
+struct Current {
+    format: String,
+    version: u64,
+    #[serde(default)]
+    revision: u64,
+    #[serde(default)]
+    active: u64,
+    lists: Vec<MemberFile>,
+}
+
+/// [`decode`]'s quick way: `Some` only for a workspace of this version
+/// whose every list is a member file of the current version with unique
+/// ids, which the general way would read to the same lists. Anything else
+/// (an older list to migrate, a refusal to word) is `None`, and the
+/// general way reads it.
+fn decode_current(text: &str) -> Option<Workspace> {
+    let c: Current = serde_json::from_str(text).ok()?;
+    if c.format != FORMAT || c.version == 0 || c.version > VERSION {
+        return None;
+    }
+    for l in &c.lists {
+        if l.format != file::FORMAT || l.version != file::VERSION {
+            return None;
+        }
+        file::check_unique_ids(&l.members).ok()?;
+    }
+    let mut ws = Workspace::new(c.lists);
+    ws.revision = c.revision;
+    // As the general way reads it.
+    ws.active = (c.active as usize).min(ws.lists.len().saturating_sub(1));
+    Some(ws)
+}
+
 /// Reads stored text. The error says, in words, why it cannot be used.
 pub fn decode(text: &str) -> Result<Workspace, String> {
+    if let Some(ws) = decode_current(text) {
+        return Ok(ws);
+    }
+    decode_value(text)
+}
+
+/// [`decode`] through the parsed JSON value: every version of every list
+/// (migrated by [`file::from_value`]), and the words of each refusal.
+fn decode_value(text: &str) -> Result<Workspace, String> {
     let mut value: Value = serde_json::from_str(text)
         .map_err(|e| format!("the saved workspace is not valid JSON ({e})"))?;
     let obj: &Map<String, Value> = value
@@ -173,6 +220,55 @@ mod tests {
         assert_eq!(v["format"], "strutline.workspace");
         assert_eq!(v["version"], 1);
         assert_eq!(v["lists"][0]["format"], "strutline.members");
+    }
+
+    #[test]
+    fn the_quick_way_reads_what_the_general_way_reads() {
+        let mut lists = demo_lists();
+        let mut long = MemberFile::new("Long");
+        for i in 0..300 {
+            let mut m = crate::demo::sample_member(&format!("L{i}"));
+            m.length_mm = 1000.0 + f64::from(i) * 7.3;
+            m.axial_kn = 0.1 + f64::from(i) / 3.0;
+            long.members.push(m);
+        }
+        lists.push(long);
+        let mut ws = Workspace::new(lists);
+        ws.active = 1;
+        ws.revision = 12;
+        let text = encode(&ws);
+        let quick = decode_current(&text).expect("this build's own text is read the quick way");
+        assert_eq!(quick, ws);
+        assert_eq!(decode_value(&text).unwrap(), quick);
+        // Out of range: clamped alike.
+        let far = text.replace("\"active\":1", "\"active\":9");
+        assert_ne!(far, text);
+        let last = ws.lists.len() - 1;
+        assert_eq!(decode_current(&far).unwrap().active, last);
+        assert_eq!(decode_value(&far).unwrap().active, last);
+    }
+
+    #[test]
+    fn what_the_quick_way_leaves_is_read_or_refused_the_general_way() {
+        let good = encode(&Workspace::new(demo_lists()));
+        // An older list (migrated), a title of null, a repeated id, a bad
+        // member: not the quick way, and read or refused as before.
+        let older = good.replacen("\"version\": 3", "\"version\": 2", 1);
+        assert_ne!(older, good);
+        assert!(decode_current(&older).is_none());
+        assert!(decode(&older).is_ok());
+        let null_title = good.replacen("\"title\": \"", "\"title\": null, \"t\": \"", 1);
+        assert!(decode_current(&null_title).is_none());
+        assert_eq!(decode(&null_title).unwrap().lists[0].title, "");
+        let first = &Workspace::new(demo_lists()).lists[0].members;
+        let twice = good.replacen(
+            &format!("\"id\": \"{}\"", first[1].id),
+            &format!("\"id\": \"{}\"", first[0].id),
+            1,
+        );
+        assert_ne!(twice, good);
+        assert!(decode_current(&twice).is_none());
+        assert!(decode(&twice).unwrap_err().contains(&first[0].id));
     }
 
     #[test]
