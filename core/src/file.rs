@@ -189,6 +189,18 @@ pub fn member_name(raw: Option<&Value>, index: usize) -> String {
         .unwrap_or_else(|| format!("#{}", index + 1))
 }
 
+/// Whether a member file of `version` reads into the current types as it
+/// stands: every migration from it ([`migrate`]) changes nothing but the
+/// `"version"` number (each later version only added optional keys). A
+/// reader may then take such a file's members straight from its text,
+/// without the JSON value [`from_value`] migrates (the browser's stored
+/// workspace does, `web/src/workspace.rs`). A migration that changes more
+/// must take its versions out of this; the test
+/// `versions_read_as_current_migrate_by_the_number_alone` fails until it does.
+pub fn reads_as_current(version: u64) -> bool {
+    (1..=VERSION).contains(&version)
+}
+
 /// Lifts a file of `version` to the next version; each version adds one arm.
 fn migrate(mut value: Value, version: u64) -> Result<Value> {
     // 1 -> 2: version 2 only adds an optional key, so a version-1 file is
@@ -400,6 +412,35 @@ mod tests {
       "members": [{"id": "P1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
       "material": {"fy_mpa": 235, "e_mpa": 210000}, "length_mm": 2000, "axial_kn": 10,
       "method": "euler"}]}"#;
+
+    #[test]
+    fn versions_read_as_current_migrate_by_the_number_alone() {
+        for text in [
+            include_str!("../../tests/fixtures/stored/member-file-v1.json"),
+            include_str!("../../tests/fixtures/stored/member-file-v2.json"),
+            ONE,
+        ] {
+            let base: Value = serde_json::from_str(text).unwrap();
+            for v in (1..VERSION).filter(|v| reads_as_current(*v)) {
+                let mut at = base.clone();
+                at["version"] = Value::from(v);
+                let mut next = at.clone();
+                next["version"] = Value::from(v + 1);
+                assert_eq!(
+                    migrate(at, v).unwrap(),
+                    next,
+                    "the migration from version {v} changes more than the number: \
+                     take {v} out of reads_as_current"
+                );
+            }
+            // Read straight into the types, the same file as migrated.
+            let mut direct: MemberFile = serde_json::from_str(text).unwrap();
+            assert!(reads_as_current(direct.version));
+            direct.version = VERSION;
+            assert_eq!(direct, parse(text).unwrap());
+        }
+        assert!(!reads_as_current(0) && !reads_as_current(VERSION + 1));
+    }
 
     #[test]
     fn reads_and_writes_round_trip() {

@@ -3,9 +3,12 @@
 //! another has saved.
 //!
 //! `{"format": "strutline.workspace", "version": 1, "revision": n,
-//! "active": i, "lists": [MEMBER FILE, ...]}`; each list is read with
-//! [`strutline_core::file::from_value`], so lists of older member-file versions
-//! migrate.
+//! "active": i, "lists": [MEMBER FILE, ...]}`. Lists of a member-file
+//! version that reads as the current one ([`file::reads_as_current`]) are
+//! read straight from the text into their types; any other text goes
+//! through the parsed JSON value, each list read with
+//! [`strutline_core::file::from_value`], so lists of older member-file
+//! versions migrate and every refusal has its words.
 
 use serde::Deserialize;
 use serde_json::{Map, Value};
@@ -103,20 +106,22 @@ struct Current {
 }
 
 /// [`decode`]'s quick way: `Some` only for a workspace of this version
-/// whose every list is a member file of the current version with unique
-/// ids, which the general way would read to the same lists. Anything else
-/// (an older list to migrate, a refusal to word) is `None`, and the
-/// general way reads it.
+/// whose every list is a member file of a version that reads as the
+/// current one ([`file::reads_as_current`]) with unique ids, which the
+/// general way would read to the same lists. Anything else (a list whose
+/// migration changes it, a refusal to word) is `None`, and the general
+/// way reads it.
 fn decode_current(text: &str) -> Option<Workspace> {
-    let c: Current = serde_json::from_str(text).ok()?;
+    let mut c: Current = serde_json::from_str(text).ok()?;
     if c.format != FORMAT || c.version == 0 || c.version > VERSION {
         return None;
     }
-    for l in &c.lists {
-        if l.format != file::FORMAT || l.version != file::VERSION {
+    for l in &mut c.lists {
+        if l.format != file::FORMAT || !file::reads_as_current(l.version) {
             return None;
         }
         file::check_unique_ids(&l.members).ok()?;
+        l.version = file::VERSION;
     }
     let mut ws = Workspace::new(c.lists);
     ws.revision = c.revision;
@@ -251,12 +256,24 @@ mod tests {
     #[test]
     fn what_the_quick_way_leaves_is_read_or_refused_the_general_way() {
         let good = encode(&Workspace::new(demo_lists()));
-        // An older list (migrated), a title of null, a repeated id, a bad
-        // member: not the quick way, and read or refused as before.
-        let older = good.replacen("\"version\": 3", "\"version\": 2", 1);
+        // An older list that reads as the current one: the quick way, as
+        // the general way reads it; the stored fixture of version 1 too.
+        let older = good.replacen("\"version\": 3", "\"version\": 1", 1);
         assert_ne!(older, good);
-        assert!(decode_current(&older).is_none());
-        assert!(decode(&older).is_ok());
+        assert_eq!(
+            decode_current(&older).unwrap(),
+            decode_value(&older).unwrap()
+        );
+        let fixture = include_str!("../../tests/fixtures/stored/workspace-v1.json");
+        assert_eq!(
+            decode_current(fixture).unwrap(),
+            decode_value(fixture).unwrap()
+        );
+        // A list of no version that reads as this one, a title of null, a
+        // repeated id: not the quick way, and read or refused as before.
+        let unknown = good.replacen("\"version\": 3", "\"version\": 0", 1);
+        assert!(decode_current(&unknown).is_none());
+        assert!(decode(&unknown).is_err());
         let null_title = good.replacen("\"title\": \"", "\"title\": null, \"t\": \"", 1);
         assert!(decode_current(&null_title).is_none());
         assert_eq!(decode(&null_title).unwrap().lists[0].title, "");

@@ -359,14 +359,24 @@ pub fn App() -> impl IntoView {
                     <ListPanel ctx=ctx />
                     <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />
                 </section>
+                // The editor and the result come after the first frame,
+                // which holds the list's rows (with the caution); until
+                // then each pane has its heading.
                 <section class="pane pane-editor" aria-labelledby="h-editor">
-                    {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
-                        view! { <Editor ctx=ctx /> }
-                    }.into_any()))}
-                    <picker_panel::SectionPicker ctx=ctx />
+                    <Show when=move || ctx.painted.get() fallback=|| view! { <h2 id="h-editor" class="pane-title">"Member"</h2> }>
+                        {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
+                            view! { <Editor ctx=ctx /> }
+                        }.into_any()))}
+                        <picker_panel::SectionPicker ctx=ctx />
+                    </Show>
                 </section>
                 <section class="pane pane-results" aria-labelledby="h-results">
-                    <Results ctx=ctx />
+                    <Show when=move || ctx.painted.get() fallback=|| view! {
+                        <h2 id="h-results" class="pane-title">"Result"</h2>
+                        <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
+                    }>
+                        <Results ctx=ctx />
+                    </Show>
                 </section>
             </main>
         </div>
