@@ -191,10 +191,9 @@ pub fn member_name(raw: Option<&Value>, index: usize) -> String {
 
 /// Whether a member file of `version` reads into the current types as it
 /// stands: every migration from it ([`migrate`]) changes nothing but the
-/// `"version"` number (each later version only added optional keys). A
-/// reader may then take such a file's members straight from its text,
-/// without the JSON value [`from_value`] migrates (the browser's stored
-/// workspace does, `web/src/workspace.rs`). A migration that changes more
+/// `"version"` number (each later version only added optional keys), so
+/// such a file is read as it stands ([`from_parsed`]), without copying its
+/// value to migrate. A migration that changes more
 /// must take its versions out of this; the test
 /// `versions_read_as_current_migrate_by_the_number_alone` fails until it does.
 pub fn reads_as_current(version: u64) -> bool {
@@ -280,13 +279,31 @@ fn header(value: &Value) -> Result<u64> {
 /// stored workspace, which the app wrote itself): [`parse`] without
 /// reading text again; older versions migrate the same way. A key
 /// repeated in the text is not seen here (the parsed value kept one).
-pub fn from_value(mut value: Value) -> Result<MemberFile> {
-    let version = header(&value)?;
+pub fn from_value(value: Value) -> Result<MemberFile> {
+    from_parsed(&value)
+}
+
+/// [`from_value`] of a value the caller keeps, to free when it suits it
+/// (the app frees its stored workspace's after the first frame). A version
+/// that reads as the current one ([`reads_as_current`]) is read as it
+/// stands; an older one is migrated on a copy.
+pub fn from_parsed(value: &Value) -> Result<MemberFile> {
+    let version = header(value)?;
+    if reads_as_current(version) {
+        return read_current(value);
+    }
+    let mut owned = value.clone();
     let mut v = version;
     while v < VERSION {
-        value = migrate(value, v)?;
+        owned = migrate(owned, v)?;
         v += 1;
     }
+    read_current(&owned)
+}
+
+/// The members, title and sheet of a member file's value in the current
+/// version.
+fn read_current(value: &Value) -> Result<MemberFile> {
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -433,11 +450,17 @@ mod tests {
                      take {v} out of reads_as_current"
                 );
             }
-            // Read straight into the types, the same file as migrated.
-            let mut direct: MemberFile = serde_json::from_str(text).unwrap();
-            assert!(reads_as_current(direct.version));
-            direct.version = VERSION;
-            assert_eq!(direct, parse(text).unwrap());
+            // Read as it stands, the same file as migrated step by step.
+            let v = header(&base).unwrap();
+            assert!(reads_as_current(v));
+            let mut migrated = base.clone();
+            for at in v..VERSION {
+                migrated = migrate(migrated, at).unwrap();
+            }
+            assert_eq!(
+                read_current(&migrated).unwrap(),
+                from_parsed(&base).unwrap()
+            );
         }
         assert!(!reads_as_current(0) && !reads_as_current(VERSION + 1));
     }

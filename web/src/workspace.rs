@@ -3,14 +3,10 @@
 //! another has saved.
 //!
 //! `{"format": "strutline.workspace", "version": 1, "revision": n,
-//! "active": i, "lists": [MEMBER FILE, ...]}`. Lists of a member-file
-//! version that reads as the current one ([`file::reads_as_current`]) are
-//! read straight from the text into their types; any other text goes
-//! through the parsed JSON value, each list read with
-//! [`strutline_core::file::from_value`], so lists of older member-file
-//! versions migrate and every refusal has its words.
+//! "active": i, "lists": [MEMBER FILE, ...]}`; each list is read with
+//! [`strutline_core::file::from_parsed`] from the parsed text, so lists of
+//! older member-file versions migrate.
 
-use serde::Deserialize;
 use serde_json::{Map, Value};
 use strutline_core::file::{self, MemberFile};
 
@@ -91,57 +87,22 @@ pub fn peek_revision(text: &str) -> Option<u64> {
     v.get("revision").and_then(Value::as_u64)
 }
 
-/// The stored workspace read straight into its types, for text as this
-/// build writes it: no JSON value tree is built (and freed) on the way,
-/// which for a 1,000-member list was most of the start's time.
-#[derive(Deserialize)]
-struct Current {
-    format: String,
-    version: u64,
-    #[serde(default)]
-    revision: u64,
-    #[serde(default)]
-    active: u64,
-    lists: Vec<MemberFile>,
-}
-
-/// [`decode`]'s quick way: `Some` only for a workspace of this version
-/// whose every list is a member file of a version that reads as the
-/// current one ([`file::reads_as_current`]) with unique ids, which the
-/// general way would read to the same lists. Anything else (a list whose
-/// migration changes it, a refusal to word) is `None`, and the general
-/// way reads it.
-fn decode_current(text: &str) -> Option<Workspace> {
-    let mut c: Current = serde_json::from_str(text).ok()?;
-    if c.format != FORMAT || c.version == 0 || c.version > VERSION {
-        return None;
-    }
-    for l in &mut c.lists {
-        if l.format != file::FORMAT || !file::reads_as_current(l.version) {
-            return None;
-        }
-        file::check_unique_ids(&l.members).ok()?;
-        l.version = file::VERSION;
-    }
-    let mut ws = Workspace::new(c.lists);
-    ws.revision = c.revision;
-    // As the general way reads it.
-    ws.active = (c.active as usize).min(ws.lists.len().saturating_sub(1));
-    Some(ws)
+/// The parsed JSON of stored text, kept by [`decode_keeping`] so that the
+/// caller frees it when it suits (the app: after its first frame; freeing
+/// a 1,000-member list's tree is a good part of reading it).
+#[derive(Debug)]
+pub struct Parsed {
+    _tree: Value,
 }
 
 /// Reads stored text. The error says, in words, why it cannot be used.
 pub fn decode(text: &str) -> Result<Workspace, String> {
-    if let Some(ws) = decode_current(text) {
-        return Ok(ws);
-    }
-    decode_value(text)
+    decode_keeping(text).map(|(ws, _)| ws)
 }
 
-/// [`decode`] through the parsed JSON value: every version of every list
-/// (migrated by [`file::from_value`]), and the words of each refusal.
-fn decode_value(text: &str) -> Result<Workspace, String> {
-    let mut value: Value = serde_json::from_str(text)
+/// [`decode`], handing back the parsed text with the workspace.
+pub fn decode_keeping(text: &str) -> Result<(Workspace, Parsed), String> {
+    let value: Value = serde_json::from_str(text)
         .map_err(|e| format!("the saved workspace is not valid JSON ({e})"))?;
     let obj: &Map<String, Value> = value
         .as_object()
@@ -178,26 +139,26 @@ fn decode_value(text: &str) -> Result<Workspace, String> {
             .ok_or("the saved workspace's \"active\" is not a whole number")?
             as usize,
     };
-    let raw_lists = match value.get_mut("lists") {
-        Some(Value::Array(a)) => std::mem::take(a),
+    let raw_lists = match value.get("lists") {
+        Some(Value::Array(a)) => a,
         _ => return Err("the saved workspace has no \"lists\" array".into()),
     };
     let mut lists = Vec::with_capacity(raw_lists.len());
-    for (i, raw) in raw_lists.into_iter().enumerate() {
+    for (i, raw) in raw_lists.iter().enumerate() {
         let title = raw
             .get("title")
             .and_then(Value::as_str)
             .unwrap_or("")
             .to_string();
         // Read from the parsed value: the text is not written and read again.
-        let list = file::from_value(raw)
+        let list = file::from_parsed(raw)
             .map_err(|e| format!("list {} (\"{title}\") cannot be read: {e}", i + 1))?;
         lists.push(list);
     }
     let mut ws = Workspace::new(lists);
     ws.revision = revision;
     ws.active = active.min(ws.lists.len().saturating_sub(1));
-    Ok(ws)
+    Ok((ws, Parsed { _tree: value }))
 }
 
 #[cfg(test)]
@@ -225,67 +186,6 @@ mod tests {
         assert_eq!(v["format"], "strutline.workspace");
         assert_eq!(v["version"], 1);
         assert_eq!(v["lists"][0]["format"], "strutline.members");
-    }
-
-    #[test]
-    fn the_quick_way_reads_what_the_general_way_reads() {
-        let mut lists = demo_lists();
-        let mut long = MemberFile::new("Long");
-        for i in 0..300 {
-            let mut m = crate::demo::sample_member(&format!("L{i}"));
-            m.length_mm = 1000.0 + f64::from(i) * 7.3;
-            m.axial_kn = 0.1 + f64::from(i) / 3.0;
-            long.members.push(m);
-        }
-        lists.push(long);
-        let mut ws = Workspace::new(lists);
-        ws.active = 1;
-        ws.revision = 12;
-        let text = encode(&ws);
-        let quick = decode_current(&text).expect("this build's own text is read the quick way");
-        assert_eq!(quick, ws);
-        assert_eq!(decode_value(&text).unwrap(), quick);
-        // Out of range: clamped alike.
-        let far = text.replace("\"active\":1", "\"active\":9");
-        assert_ne!(far, text);
-        let last = ws.lists.len() - 1;
-        assert_eq!(decode_current(&far).unwrap().active, last);
-        assert_eq!(decode_value(&far).unwrap().active, last);
-    }
-
-    #[test]
-    fn what_the_quick_way_leaves_is_read_or_refused_the_general_way() {
-        let good = encode(&Workspace::new(demo_lists()));
-        // An older list that reads as the current one: the quick way, as
-        // the general way reads it; the stored fixture of version 1 too.
-        let older = good.replacen("\"version\": 3", "\"version\": 1", 1);
-        assert_ne!(older, good);
-        assert_eq!(
-            decode_current(&older).unwrap(),
-            decode_value(&older).unwrap()
-        );
-        let fixture = include_str!("../../tests/fixtures/stored/workspace-v1.json");
-        assert_eq!(
-            decode_current(fixture).unwrap(),
-            decode_value(fixture).unwrap()
-        );
-        // A list of no version that reads as this one, a title of null, a
-        // repeated id: not the quick way, and read or refused as before.
-        let unknown = good.replacen("\"version\": 3", "\"version\": 0", 1);
-        assert!(decode_current(&unknown).is_none());
-        assert!(decode(&unknown).is_err());
-        let null_title = good.replacen("\"title\": \"", "\"title\": null, \"t\": \"", 1);
-        assert!(decode_current(&null_title).is_none());
-        assert_eq!(decode(&null_title).unwrap().lists[0].title, "");
-        let first = &Workspace::new(demo_lists()).lists[0].members;
-        let twice = good.replacen(
-            &format!("\"id\": \"{}\"", first[1].id),
-            &format!("\"id\": \"{}\"", first[0].id),
-            1,
-        );
-        assert_ne!(twice, good);
-        assert!(decode_current(&twice).is_none());
-        assert!(decode(&twice).unwrap_err().contains(&first[0].id));
     }
 
     #[test]
