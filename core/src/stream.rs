@@ -572,42 +572,49 @@ impl<R: Read> Scan<R> {
         }
         i += 1;
         loop {
-            // The bytes at hand, without a call a byte.
+            // The bytes at hand, without a call a byte: in a string, on to
+            // its next quote or backslash; outside, on to the next quote or
+            // bracket (tight loops over the bytes between).
             let bytes = self.buf.get(i..).unwrap_or_default();
             let mut j = 0;
-            while let Some(&b) = bytes.get(j) {
-                j += 1;
-                if in_string {
-                    match b {
-                        b'"' => {
-                            in_string = false;
-                            if depth == 0 {
-                                return Ok(i + j);
-                            }
-                        }
-                        b'\\' => {
-                            // The escaped byte, which may be a quote.
-                            if bytes.get(j).is_some() {
-                                j += 1;
-                            } else {
-                                // The buffer ends after the backslash.
-                                j -= 1;
-                                break;
-                            }
-                        }
-                        _ => {}
-                    }
+            loop {
+                let rest = bytes.get(j..).unwrap_or_default();
+                let found = if in_string {
+                    rest.iter().position(|&b| b == b'"' || b == b'\\')
                 } else {
-                    match b {
-                        b'"' => in_string = true,
-                        b'{' | b'[' => depth += 1,
-                        b'}' | b']' => {
-                            depth -= 1;
-                            if depth == 0 {
-                                return Ok(i + j);
-                            }
+                    rest.iter()
+                        .position(|&b| matches!(b, b'"' | b'{' | b'[' | b'}' | b']'))
+                };
+                let Some(k) = found else {
+                    j = bytes.len();
+                    break;
+                };
+                j += k;
+                let b = bytes.get(j).copied().unwrap_or_default();
+                j += 1;
+                match b {
+                    b'\\' => {
+                        // The escaped byte, which may be a quote.
+                        if j < bytes.len() {
+                            j += 1;
+                        } else {
+                            // The buffer ends after the backslash.
+                            j -= 1;
+                            break;
                         }
-                        _ => {}
+                    }
+                    b'"' => {
+                        in_string = !in_string;
+                        if !in_string && depth == 0 {
+                            return Ok(i + j);
+                        }
+                    }
+                    b'{' | b'[' => depth += 1,
+                    _ => {
+                        depth -= 1;
+                        if depth == 0 {
+                            return Ok(i + j);
+                        }
                     }
                 }
             }
