@@ -169,10 +169,14 @@ struct Out {
 
 impl Out {
     fn put(&mut self, text: &str) -> Result<(), String> {
+        self.put_bytes(text.as_bytes())
+    }
+
+    fn put_bytes(&mut self, bytes: &[u8]) -> Result<(), String> {
         if self.closed {
             return Ok(());
         }
-        match self.w.write_all(text.as_bytes()) {
+        match self.w.write_all(bytes) {
             Ok(()) => Ok(()),
             Err(e) if e.kind() == std::io::ErrorKind::BrokenPipe => {
                 self.closed = true;
@@ -195,7 +199,9 @@ impl Out {
 }
 
 /// One member's text in the chosen form, or the message that stops the check.
-fn render(m: &Member, form: Form, working: bool) -> Result<(bool, String), String> {
+/// The text is serde_json's (or [`write_summary`]'s) UTF-8, written out as
+/// it is.
+fn render(m: &Member, form: Form, working: bool) -> Result<(bool, Vec<u8>), String> {
     let kept = if working && form != Form::Table {
         Working::Kept
     } else {
@@ -210,7 +216,6 @@ fn render(m: &Member, form: Form, working: bool) -> Result<(bool, String), Strin
         _ => write_summary(&mut text, &r),
     }
     .map_err(|e| e.to_string())?;
-    let text = String::from_utf8(text).map_err(|e| e.to_string())?;
     Ok((r.passes, text))
 }
 
@@ -233,7 +238,7 @@ pub fn run(args: &Args) -> Result<i32, String> {
     let mut count = 0usize;
     let mut table = Table::default();
     let read = crate::input::members(path, |title, block| {
-        let texts: Vec<Result<(bool, String), String>> = match form {
+        let texts: Vec<Result<(bool, Vec<u8>), String>> = match form {
             Form::Table => Vec::new(),
             _ => block
                 .par_iter()
@@ -271,7 +276,7 @@ pub fn run(args: &Args) -> Result<i32, String> {
                         _ => "",
                     };
                     out.put(lead)?;
-                    out.put(&text)?;
+                    out.put_bytes(&text)?;
                     if form == Form::Lines {
                         out.put("\n")?;
                     }
