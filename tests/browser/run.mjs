@@ -11,6 +11,7 @@ import { register as registerListTools } from "./listtools.mjs";
 import { register as registerTablet } from "./tablet.mjs";
 import { register as registerBuckling } from "./buckling.mjs";
 import { register as registerBeamColumn } from "./beamcolumn.mjs";
+import { register as registerDiagram } from "./diagram.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -702,6 +703,9 @@ registerBuckling(test, { withApp, open, OUT });
 
 // A beam-column on its interaction chart (tests/browser/beamcolumn.mjs).
 registerBeamColumn(test, { withApp, open, OUT });
+
+// The moment diagram's sign as drawn, and a sign slip (tests/browser/diagram.mjs).
+registerDiagram(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

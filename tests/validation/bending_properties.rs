@@ -52,7 +52,15 @@ fn member(
     member_from_json(m)
 }
 
-fn cases() -> Vec<(serde_json::Value, serde_json::Value, &'static str)> {
+/// (section, material, method, keys added to the member).
+type Case = (
+    serde_json::Value,
+    serde_json::Value,
+    &'static str,
+    serde_json::Value,
+);
+
+fn cases() -> Vec<Case> {
     let steel = json!({"grade": "S355"});
     let ipe = json!({"kind": "catalogue", "designation": "IPE 300"});
     let heb = json!({"kind": "catalogue", "designation": "HE 200 B"});
@@ -66,35 +74,54 @@ fn cases() -> Vec<(serde_json::Value, serde_json::Value, &'static str)> {
     let mut v = Vec::new();
     for method in ["en1993-1-1", "aisc360-lrfd", "aisc360-asd", "csa-s16"] {
         for s in [&ipe, &heb, &welded, &rhs, &channel, &rect] {
-            v.push((s.clone(), steel.clone(), method));
+            v.push((s.clone(), steel.clone(), method, json!({})));
         }
     }
     // Tees under AISC 360-16 F9 (the diagram of `member` changes sign, so
     // the stem is in compression somewhere: F9.2(b)).
     let tee = json!({"kind": "tee", "depth_mm": 230, "width_mm": 190, "flange_mm": 14.5, "web_mm": 9, "root_radius_mm": 10});
+    // A tee takes its major-axis moment alone: moments about both axes
+    // combine by AISC 360-16 H2, which is refused for tees.
+    let major_only = json!({"m_minor_a_knm": 0});
     for method in ["aisc360-lrfd", "aisc360-asd"] {
-        v.push((tee.clone(), steel.clone(), method));
+        v.push((tee.clone(), steel.clone(), method, major_only.clone()));
     }
-    v.push((timber.clone(), glulam, "en1995-1-1"));
-    v.push((timber, c24, "en1995-1-1"));
+    // EN 1993-1-1 refuses that tee's stem in compression (Class 4): a
+    // stockier tee takes the reversing diagram.
+    let stocky =
+        json!({"kind": "tee", "depth_mm": 150, "width_mm": 200, "flange_mm": 15, "web_mm": 14});
+    v.push((stocky, steel.clone(), "en1993-1-1", major_only.clone()));
+    // Tees under EN 1993-1-1 and CSA S16-19 with the flange compressed all
+    // along (CSA refuses a compressed stem), about either axis.
+    let flange_compressed = json!({"m_major_b_knm": 5, "m_minor_a_knm": 0});
+    for method in ["en1993-1-1", "csa-s16"] {
+        v.push((
+            tee.clone(),
+            steel.clone(),
+            method,
+            flange_compressed.clone(),
+        ));
+    }
+    // Class 4 in bending under EN 1993-1-1 (the effective section of EN
+    // 1993-1-5): a slender welded girder and a slender sharp RHS.
+    let girder = json!({"kind": "i", "depth_mm": 600, "width_mm": 200, "flange_mm": 8, "web_mm": 4, "make": "welded"});
+    let thin_rhs = json!({"kind": "rhs", "depth_mm": 300, "width_mm": 200, "wall_mm": 4, "outer_radius_mm": 0, "inner_radius_mm": 0});
+    for s in [girder, thin_rhs] {
+        v.push((s, steel.clone(), "en1993-1-1", json!({})));
+    }
+    v.push((timber.clone(), glulam, "en1995-1-1", json!({})));
+    v.push((timber, c24, "en1995-1-1", json!({})));
     v
 }
 
 #[test]
 fn resistance_never_rises_with_the_unbraced_length_nor_exceeds_the_plastic_moment() {
-    for (section, material, method) in cases() {
+    for (section, material, method, extra) in cases() {
         let mut previous = f64::INFINITY;
         for l in [
             500.0, 1000.0, 2000.0, 3000.0, 4500.0, 6000.0, 8000.0, 12000.0, 20000.0,
         ] {
-            // A tee takes its major-axis moment alone: moments about both
-            // axes combine by AISC 360-16 H2, which is refused for tees.
-            let extra = if section["kind"] == "tee" {
-                json!({"m_minor_a_knm": 0})
-            } else {
-                json!({})
-            };
-            let m = member(section.clone(), material.clone(), method, l, extra);
+            let m = member(section.clone(), material.clone(), method, l, extra.clone());
             let p = strutline_core::check::Prepared::new(&m).unwrap();
             let r = p
                 .check()
@@ -221,11 +248,24 @@ fn bad_bending_input_is_refused_naming_member_and_field() {
         json!({}),
     ));
     assert_eq!(e.field(), Some("w_el_major_mm3"), "{e}");
-    // Angles are refused with a message: under EN 1993-1-1 and CSA S16
-    // always, under AISC 360-16 here because `member` bends them about both
-    // principal axes (H2-1 not worked; aisc_chapter_f_angles has the rest).
+    // Angles are refused with a message under EN 1993-1-1 and CSA S16;
+    // under AISC 360-16 the moments about both principal axes combine by
+    // H2-1 (aisc_chapter_f_angles and aisc_h2 have the values).
     let angle = json!({"kind": "angle", "depth_mm": 100, "width_mm": 100, "thickness_mm": 10});
-    for method in ["en1993-1-1", "aisc360-lrfd", "csa-s16"] {
+    let r = strutline_core::check_member(&member(
+        angle.clone(),
+        json!({"grade": "S355"}),
+        "aisc360-lrfd",
+        2000.0,
+        json!({}),
+    ))
+    .unwrap();
+    assert!(
+        r.interaction.iter().any(|c| c.check == "H2-1"),
+        "{:?}",
+        r.interaction
+    );
+    for method in ["en1993-1-1", "csa-s16"] {
         let e = refusal(&member(
             angle.clone(),
             json!({"grade": "S355"}),

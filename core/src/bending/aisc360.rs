@@ -67,7 +67,7 @@ pub fn check(
         return super::aisc360_tee::check(input, steel, basis, trace, warnings);
     }
     if let SectionSpec::Angle(_) = &input.section.spec {
-        return super::aisc360_angle::check(input, steel, basis, trace);
+        return super::aisc360_angle::check(input, steel, basis, trace, warnings);
     }
     let cb = moment_factor(input, trace, warnings);
     Ok(Bending {
@@ -950,6 +950,7 @@ fn axis(
         reduction: reduction.min(1.0),
         moment_factor: if cb_used { Some(cb) } else { None },
         demand_knm: demand,
+        by_sign: None,
     })
 }
 

@@ -141,12 +141,7 @@ fn in_plane(
     let (iy, j) = (p.i_z_mm4, p.torsion_mm4);
     let ry = (iy / p.area_mm2).sqrt();
     if pos != 0.0 || neg != 0.0 {
-        warn_once(warnings, "tee-moment-sign", || {
-            "bending: a positive moment about the tee's axis parallel to its flange is read as \
-             compressing the flange (stem in tension), a negative one as compressing the stem \
-             (AISC 360-16 F9); check the sign of the moments"
-                .into()
-        });
+        super::tee::warn_sign(warnings);
     }
     let my = fy * sx;
     step!(
@@ -340,6 +335,10 @@ fn in_plane(
         reduction: reduction.min(1.0),
         moment_factor: None,
         demand_knm: demand,
+        by_sign: Some(super::BySign {
+            positive_knm: r_t,
+            negative_knm: r_c,
+        }),
     })
 }
 
@@ -406,5 +405,6 @@ fn symmetry_axis(
         reduction: 1.0,
         moment_factor: None,
         demand_knm: demand,
+        by_sign: None,
     })
 }

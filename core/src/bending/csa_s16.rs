@@ -6,7 +6,16 @@
 //! 145, 170, 200 / sqrt(F_y) for Classes 1, 2, 3; webs h/w (h = d - 2 t_f)
 //! 1100, 1700, 1900 / sqrt(F_y) (no axial load); rectangular HSS flanges
 //! (b - 4t)/t 420, 525, 670 / sqrt(F_y), webs as I webs; circular HSS D/t
-//! 13 000, 18 000, 66 000 / F_y; solid sections Class 1. Class 4 is refused.
+//! 13 000, 18 000, 66 000 / F_y; tee flanges b_f/2t_f as I flanges, the
+//! stem (flange compressed, plastic neutral axis in the stem) held to Table
+//! 1's 340 / sqrt(F_y) and the section to Class 3 (Table 2 has no tee stem
+//! in flexure); solid sections Class 1. Class 4 is refused.
+//!
+//! Tees bent in their plane of symmetry (sign: [`super::tee`]): the flange
+//! compressed by 13.6(e), M_u = omega_2 pi^2 E I_y / (2 L^2) [beta_x +
+//! sqrt(beta_x^2 + 4 (G J L^2 / (pi^2 E I_y) + C_w / I_y))], beta_x = 2 z_j
+//! from its definition (recalled from memory); a negative moment (stem
+//! compressed) is refused naming its key.
 //! M_r = phi Z F_y (Classes 1, 2) or phi S F_y (Class 3), 13.5.
 //!
 //! 13.6(a), doubly symmetric Class 1 and 2 (13.6(b) Class 3 with M_y for
@@ -22,7 +31,9 @@
 //! A given section: F_y S with its class unknown, refused for
 //! lateral-torsional buckling unless `lt_restrained`.
 
-use super::{diagram_is_segment, moments, omega_2, push_diagram, Axis, AxisBending, Bending};
+use super::{
+    diagram_is_segment, moments, omega_2, push_diagram, signed_extremes, Axis, AxisBending, Bending,
+};
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::LoadLevel;
@@ -141,6 +152,39 @@ pub fn classify(input: &Input<'_>, fy: f64, axis: Axis, trace: &mut Trace) -> u8
             );
             class_of(dt, [13_000.0 / fy, 18_000.0 / fy, 66_000.0 / fy])
         }
+        SectionSpec::Tee(t) => {
+            let f = t.width_mm / (2.0 * t.flange_mm);
+            step!(
+                trace,
+                s,
+                "b/t",
+                "tee flange ratio b_f/2t_f (Class 1/2/3: 145/170/200 / sqrt(F_y))",
+                f,
+                "-",
+                "CSA S16-19 Table 2 (recalled from memory)"
+            );
+            let mut c = class_of(f, flange);
+            let g = super::tee::Tee::new(t, &input.section.props);
+            if super::tee::in_plane(input, major) && g.pna_in_stem() {
+                // Flange compressed (a compressed stem is refused): part of
+                // the stem is compressed at the plastic moment; Table 2 has
+                // no tee stem in flexure, so the stem is held to Table 1's
+                // 340 / sqrt(F_y) on d/t_w and the section to Class 3.
+                let w = t.depth_mm / t.web_mm;
+                step!(
+                    trace,
+                    s,
+                    "d/t_w",
+                    "tee stem partly compressed (plastic neutral axis in the stem): Table 1 limit \
+                     340 / sqrt(F_y), Class 3 at best",
+                    w,
+                    "-",
+                    "CSA S16-19 Table 1 (recalled from memory); conservative reading"
+                );
+                c = c.max(if w <= 340.0 / rf { 3 } else { 4 });
+            }
+            c
+        }
         SectionSpec::Given(_) => 3,
         _ => 1,
     };
@@ -178,6 +222,30 @@ fn axis(
     let demand = push_diagram(trace, axis, &m);
     let (e, fy, g) = (steel.e_mpa, steel.fy_mpa, steel.g_mpa);
     let major = axis == Axis::Major;
+    let tee = match &input.section.spec {
+        SectionSpec::Tee(t) if super::tee::in_plane(input, major) => {
+            Some(super::tee::Tee::new(t, &input.section.props))
+        }
+        _ => None,
+    };
+    if tee.is_some() {
+        let (pos, neg) = signed_extremes(&m);
+        if neg > 0.0 {
+            return Err(Error::NotApplicable {
+                method: KEY,
+                reason: format!(
+                    "{}: a negative moment compresses the tee's stem; CSA S16-19 gives no rule \
+                     here for a tee stem compressed in flexure (Table 2 has no stem limit in \
+                     flexure; 13.6(e) is worked with the flange compressed only): check this \
+                     member by hand",
+                    super::tee::key_of(input, axis, true)
+                ),
+            });
+        }
+        if pos > 0.0 {
+            super::tee::warn_sign(warnings);
+        }
+    }
     let class = classify(input, fy, axis, trace);
     if class == 4 {
         return Err(Error::NotApplicable {
@@ -244,6 +312,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            by_sign: None,
         });
     }
     if let SectionSpec::Given(_) = input.section.spec {
@@ -302,16 +371,52 @@ fn axis(
     step!(trace, s, "L", "unbraced length", l, "mm", "member file");
     let pi = std::f64::consts::PI;
     let (iy, j, cw) = (p.i_minor_mm4, p.torsion_mm4, p.warping_mm6);
-    let mu = w2 * pi / l * (e * iy * g * j + (pi * e / l).powi(2) * iy * cw).sqrt();
-    step!(
-        trace,
-        s,
-        "M_u",
-        "critical elastic moment omega_2 pi/L sqrt(E I_y G J + (pi E/L)^2 I_y C_w)",
-        mu / 1e6,
-        "kNm",
-        "CSA S16-19 13.6(a)"
-    );
+    let mu = if let Some(t) = tee {
+        // 13.6(e), monosymmetric: beta_x from its definition, 2 z_j with
+        // the flange compressed; omega_3 = omega_2 in single curvature (a
+        // compressed stem was refused above).
+        let beta = 2.0 * t.z_j;
+        step!(
+            trace,
+            s,
+            "beta_x",
+            "monosymmetry 2 z_j, flange compressed (the integral, plates)",
+            beta,
+            "mm",
+            "CSA S16-19 13.6(e) (recalled from memory)"
+        );
+        let mu = w2 * pi * pi * e * iy / (2.0 * l * l)
+            * (beta + (beta * beta + 4.0 * (g * j * l * l / (pi * pi * e * iy) + cw / iy)).sqrt());
+        step!(
+            trace,
+            s,
+            "M_u",
+            "critical elastic moment omega_2 pi^2 E I_y / (2 L^2) [beta_x + sqrt(beta_x^2 + \
+             4 (G J L^2 / (pi^2 E I_y) + C_w / I_y))]",
+            mu / 1e6,
+            "kNm",
+            "CSA S16-19 13.6(e) (recalled from memory)"
+        );
+        warn_once(warnings, "tee-ltb-assumed", || {
+            "bending: the tee's critical moment is worked by CSA S16-19 13.6(e) for monosymmetric \
+             sections with beta_x from its definition (2 z_j of the flange and stem plates) and \
+             the flange compressed; a compressed stem is refused"
+                .into()
+        });
+        mu
+    } else {
+        let mu = w2 * pi / l * (e * iy * g * j + (pi * e / l).powi(2) * iy * cw).sqrt();
+        step!(
+            trace,
+            s,
+            "M_u",
+            "critical elastic moment omega_2 pi/L sqrt(E I_y G J + (pi E/L)^2 I_y C_w)",
+            mu / 1e6,
+            "kNm",
+            "CSA S16-19 13.6(a)"
+        );
+        mu
+    };
     let mr = unsupported(mp, mu);
     step!(
         trace,
@@ -328,5 +433,6 @@ fn axis(
         reduction: mr / (PHI * mp),
         moment_factor: Some(w2),
         demand_knm: demand,
+        by_sign: None,
     })
 }

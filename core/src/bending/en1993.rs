@@ -9,9 +9,11 @@
 //! conservative choice), a circular tube 50/70/90 eps^2; solid sections are
 //! Class 1. Widths as the compression check measures them (flat widths; RHS
 //! walls h - 3t, b - 3t). M_c,Rd = W f_y / gamma_M0 (6.13-6.15) with W_pl
-//! for Classes 1 and 2, W_el for Class 3; Class 4 is refused (the effective
-//! section of EN 1993-1-5 in bending is not implemented). gamma_M0 = 1.0
-//! (recommended, 6.1(1) Note 2B).
+//! for Classes 1 and 2, W_el for Class 3, W_eff,min for Class 4 (the
+//! effective section of EN 1993-1-5 4.4 for doubly symmetric I and
+//! rectangular hollow sections, [`super::en1993_effective`]; other Class 4
+//! sections refused). gamma_M0 = 1.0 (recommended, 6.1(1) Note 2B). A tee
+//! bent in its plane of symmetry is [`super::en1993_tee`]'s.
 //!
 //! Lateral-torsional buckling about the major axis (the axis parallel to
 //! the flanges, picked by the geometry: the section's major principal axis
@@ -63,14 +65,15 @@ struct Parts {
 }
 
 #[derive(Clone, Copy, PartialEq)]
-enum Part {
+pub(super) enum Part {
     WebBending,
     InternalCompression,
     Outstand,
     Tube,
 }
 
-fn limits(part: Part, eps: f64) -> [f64; 3] {
+/// Table 5.2 limits of Classes 1, 2, 3 for a part.
+pub(super) fn limits(part: Part, eps: f64) -> [f64; 3] {
     match part {
         Part::WebBending => [72.0 * eps, 83.0 * eps, 124.0 * eps],
         Part::InternalCompression => [33.0 * eps, 38.0 * eps, 42.0 * eps],
@@ -151,6 +154,19 @@ fn parts(spec: &SectionSpec, axis: Axis, swapped: bool) -> Parts {
             )
         }
         (SectionSpec::Chs(s), _) => p([(s.diameter_mm, s.wall_mm, Part::Tube), none], 1),
+        // A tee bent about its axis of symmetry (in its plane it is
+        // `en1993_tee`'s): the flange outstands, uniform compression.
+        (SectionSpec::Tee(s), _) => p(
+            [
+                (
+                    (s.width_mm - s.web_mm - 2.0 * s.root_radius_mm) / 2.0,
+                    s.flange_mm,
+                    Part::Outstand,
+                ),
+                none,
+            ],
+            1,
+        ),
         _ => p([none, none], 0),
     }
 }
@@ -246,7 +262,15 @@ pub fn class_in_bending(input: &Input<'_>, steel: &Steel, axis: Axis) -> u8 {
     classify(input, steel, axis, &mut Trace::off())
 }
 
-fn gamma_m1(input: &Input<'_>) -> f64 {
+/// W_eff,min about `axis` of a section that is Class 4 in bending alone
+/// (EN 1993-1-5 4.4, as [`check`] works it, without the working): the
+/// beam-column interaction reads it.
+pub fn effective_modulus(input: &Input<'_>, steel: &Steel, axis: Axis) -> Result<f64> {
+    super::en1993_effective::w_eff(input, steel, axis, &mut Trace::off())
+}
+
+/// gamma_M1: the member's, or the recommended 1.0.
+pub(super) fn gamma_m1(input: &Input<'_>) -> f64 {
     input.member.gamma_m1.unwrap_or(1.0)
 }
 
@@ -269,6 +293,43 @@ pub(super) fn depth_width(spec: &SectionSpec, swapped: bool) -> (f64, f64) {
     }
 }
 
+/// C1 and C2 for the member's diagram over its unbraced length
+/// ([`c_factors`]), with C1 held to the lowest tabulated value when the ends
+/// are restrained against lateral rotation (k_lt < 1) under span load.
+pub(super) fn moment_factors(
+    input: &Input<'_>,
+    m: &crate::member::Moments,
+    warnings: &mut Vec<Warning>,
+) -> super::CFactors {
+    let c = c_factors(m, diagram_is_segment(input));
+    if input.member.lcr_lt_mm.is_none() && input.member.k_lt < 1.0 && m.span_knm != 0.0 {
+        // With ends restrained against lateral rotation (k < 1) and load in
+        // the span, C1 falls below 1 (ENV 1993-1-1:1992 Table F.1.2, k = 0.5:
+        // 0.972 for a uniform load, 0.712 for a uniform load between fixed
+        // ends, recalled from memory): the lowest value is taken.
+        if input.member.k_lt < 0.5 {
+            warn_once(warnings, "c1-below-table", || {
+                "bending: k_lt is below 0.5, beyond the moment-factor tables (k = 1 and 0.5); \
+                 C1 is taken as their lowest value, 0.712, which may still overstate M_cr: \
+                 check the elastic critical moment by analysis"
+                    .into()
+            });
+        }
+        return super::CFactors {
+            c1: c.c1.min(super::C1_RESTRAINED_SPAN),
+            c2: c.c2,
+            source: super::CSource::RestrainedSpan,
+        };
+    }
+    c
+}
+
+/// chi_LT of 6.3.2.2 (general case) with curve d, alpha_LT = 0.76.
+pub(super) fn curve_d_chi(lambda: f64) -> f64 {
+    let phi = 0.5 * (1.0 + 0.76 * (lambda - 0.2) + lambda * lambda);
+    (1.0 / (phi + (phi * phi - lambda * lambda).max(0.0).sqrt())).min(1.0)
+}
+
 fn axis(
     input: &Input<'_>,
     steel: &Steel,
@@ -276,31 +337,33 @@ fn axis(
     trace: &mut Trace,
     warnings: &mut Vec<Warning>,
 ) -> Result<AxisBending> {
+    if let SectionSpec::Tee(t) = &input.section.spec {
+        if super::tee::in_plane(input, axis == Axis::Major) {
+            return super::en1993_tee::axis(input, steel, t, axis, trace, warnings);
+        }
+    }
     let s = axis.scope();
     let m = moments(input, axis);
     let demand = push_diagram(trace, axis, &m);
     let class = classify(input, steel, axis, trace);
-    if class == 4 {
-        return Err(Error::NotApplicable {
-            method: KEY,
-            reason: format!(
-                "{}: the section is Class 4 in bending about the {} axis; its effective section \
-                 (EN 1993-1-5) in bending is not implemented: choose a stockier section",
-                match axis {
-                    Axis::Major => "m_major_a_knm",
-                    Axis::Minor => "m_minor_a_knm",
-                },
-                match axis {
-                    Axis::Major => "major",
-                    Axis::Minor => "minor",
-                }
-            ),
-        });
-    }
     let p = &input.section.props;
     let plastic = class <= 2;
-    let w = super::modulus(input, axis, plastic)?;
-    if plastic {
+    let w = if class == 4 {
+        super::en1993_effective::w_eff(input, steel, axis, trace)?
+    } else {
+        super::modulus(input, axis, plastic)?
+    };
+    if class == 4 {
+        step!(
+            trace,
+            s,
+            "W_eff",
+            "effective section modulus W_eff,min (Class 4, EN 1993-1-5 4.4)",
+            w,
+            "mm3",
+            "EN 1993-1-1 6.2.5(2), Eq. 6.15"
+        );
+    } else if plastic {
         step!(
             trace,
             s,
@@ -330,7 +393,7 @@ fn axis(
         "cross-section bending resistance W f_y / gamma_M0, gamma_M0 = 1.0",
         m_rk,
         "kNm",
-        "EN 1993-1-1 6.2.5, Eq. 6.13/6.14"
+        "EN 1993-1-1 6.2.5, Eq. 6.13-6.15"
     );
     let lt_applies = axis == Axis::Major
         && !input.member.lt_restrained
@@ -360,29 +423,13 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            by_sign: None,
         });
     }
     // Lateral-torsional buckling about the major axis.
     let l_lt = input.member.lt_length_mm()?;
     let segment = diagram_is_segment(input);
-    let mut c = c_factors(&m, segment);
-    if input.member.lcr_lt_mm.is_none() && input.member.k_lt < 1.0 && m.span_knm != 0.0 {
-        // With ends restrained against lateral rotation (k < 1) and load in
-        // the span, C1 falls below 1 (ENV 1993-1-1:1992 Table F.1.2, k = 0.5:
-        // 0.972 for a uniform load, 0.712 for a uniform load between fixed
-        // ends, recalled from memory): the lowest value is taken.
-        c = super::CFactors {
-            c1: c.c1.min(super::C1_RESTRAINED_SPAN),
-            c2: c.c2,
-            source: super::CSource::RestrainedSpan,
-        };
-        if input.member.k_lt < 0.5 {
-            warn_once(warnings, "c1-below-table", || {
-                "bending: k_lt is below 0.5, beyond the moment-factor tables (k = 1 and 0.5);                  C1 is taken as their lowest value, 0.712, which may still overstate M_cr:                  check the elastic critical moment by analysis"
-                    .into()
-            });
-        }
-    }
+    let c = moment_factors(input, &m, warnings);
     let swapped = p.principal_angle_rad != 0.0;
     let (h, b) = depth_width(&input.section.spec, swapped);
     let zg = if m.span_knm != 0.0 {
@@ -415,6 +462,14 @@ fn axis(
         "member file"
     );
     push_c_factors(trace, &c, zg);
+    if let SectionSpec::Tee(_) = input.section.spec {
+        warn_once(warnings, "tee-symmetry-axis-ltb", || {
+            "bending: the tee is bent about its axis of symmetry, its major principal axis; its \
+             elastic critical moment is worked with the doubly symmetric formula (z_j = 0 by \
+             symmetry), its own I_t and I_w, and curve d: common practice, to verify"
+                .into()
+        });
+    }
     if input.section.spec_is_channel() {
         warn_once(warnings, "channel-ltb-assumed", || {
             "bending: the channel's elastic critical moment is worked with the doubly symmetric \
@@ -588,8 +643,9 @@ fn axis(
         );
         (chi_mod, f)
     } else {
+        // Not an I section: curve d (curve_alpha is 0.76 here).
         let phi = 0.5 * (1.0 + curve_alpha * (lambda - 0.2) + lambda * lambda);
-        let chi = (1.0 / (phi + (phi * phi - lambda * lambda).max(0.0).sqrt())).min(1.0);
+        let chi = curve_d_chi(lambda);
         step!(
             trace,
             s,
@@ -637,5 +693,6 @@ fn axis(
         reduction: chi,
         moment_factor: Some(c.c1),
         demand_knm: demand,
+        by_sign: None,
     })
 }

@@ -211,6 +211,7 @@ pub fn check(
                 reduction: 1.0,
                 moment_factor: None,
                 demand_knm: demand,
+                by_sign: None,
             });
         }
         let l = input.member.lt_length_mm()?;
@@ -333,6 +334,7 @@ pub fn check(
             reduction: kcrit,
             moment_factor: None,
             demand_knm: demand,
+            by_sign: None,
         })
     };
     Ok(Bending {

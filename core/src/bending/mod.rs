@@ -13,9 +13,10 @@
 //! `secant` takes equal end moments about one axis as the load's
 //! eccentricity ([`crate::method::secant::moment_eccentricity`]), so they
 //! are not bending there (no bending side), and refuses any other moment.
-//! Tees and single angles are checked under AISC 360-16 F9 and F10
-//! (`aisc360_tee`, `aisc360_angle`) and refused under the other codes
-//! (their monosymmetric M_cr and angle rules are not implemented). Shear, web bearing, torsion from eccentric load and
+//! Tees are checked under AISC 360-16 F9 (`aisc360_tee`), EN 1993-1-1
+//! (`en1993_tee`, the monosymmetric three-factor M_cr) and CSA S16-19 (13.5,
+//! 13.6(e) with beta_x; a compressed stem refused); single angles under
+//! AISC 360-16 F10 (`aisc360_angle`) and refused under the other codes. Shear, web bearing, torsion from eccentric load and
 //! bolt holes are not checked: a warning says so on every result with a
 //! moment.
 
@@ -29,12 +30,15 @@ use crate::section::{Family, SectionSpec};
 use crate::trace::{step, Scope, Trace};
 
 pub mod aisc360;
-mod aisc360_angle;
+pub mod aisc360_angle;
 mod aisc360_hss;
 mod aisc360_tee;
 pub mod csa_s16;
 pub mod en1993;
+mod en1993_effective;
+mod en1993_tee;
 pub mod en1995;
+mod tee;
 
 /// The bending side of one axis, as `strutline check --json` reports it.
 #[derive(Debug, Clone, Copy, PartialEq, Serialize)]
@@ -52,6 +56,32 @@ pub struct AxisBending {
     /// The largest design moment along the member about this axis, kNm.
     #[serde(skip)]
     pub demand_knm: f64,
+    /// The design resistance to a positive and to a negative moment, where
+    /// they differ (tees in their plane of symmetry, single angles: AISC
+    /// 360-16 F9, F10); `None` where the sign does not matter.
+    #[serde(skip)]
+    pub by_sign: Option<BySign>,
+}
+
+/// A design resistance that depends on the sign of the moment (the member
+/// file's sign convention of the shape), kNm.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct BySign {
+    /// Against a positive moment.
+    pub positive_knm: f64,
+    /// Against a negative moment.
+    pub negative_knm: f64,
+}
+
+impl AxisBending {
+    /// The design resistance to a moment of the sign given (`positive`).
+    pub fn resistance_for(&self, positive: bool) -> f64 {
+        match (self.by_sign, positive) {
+            (Some(b), true) => b.positive_knm,
+            (Some(b), false) => b.negative_knm,
+            (None, _) => self.resistance_knm,
+        }
+    }
 }
 
 impl AxisBending {
@@ -175,10 +205,6 @@ fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> R
         Family::Angle if !aisc => {
             "an angle under this method (EN 1993-1-1 and CSA S16 give no bending rule for \
              angles that is implemented here; AISC 360-16 F10 is)"
-        }
-        Family::Tee if !aisc => {
-            "a tee under this method (its monosymmetric elastic critical moment and the \
-             stem-in-compression cases are not implemented here; AISC 360-16 F9 is)"
         }
         _ => return Ok(()),
     };
@@ -436,11 +462,47 @@ pub fn m_cr(
     c: CFactors,
     z_g_mm: f64,
 ) -> f64 {
+    m_cr_mono(
+        e,
+        g,
+        i_z,
+        i_t,
+        i_w,
+        kl_mm,
+        k,
+        [c.c1, c.c2, 0.0],
+        z_g_mm,
+        0.0,
+    )
+}
+
+/// The elastic critical moment of a monosymmetric section, N mm, by the
+/// three-factor formula of ENV 1993-1-1:1992 Annex F (Eq. F.2), k_w = 1:
+/// M_cr = C1 pi^2 E I_z / (k L)^2 { sqrt[ k^2 I_w / I_z + (k L)^2 G I_t /
+/// (pi^2 E I_z) + (C2 z_g - C3 z_j)^2 ] - (C2 z_g - C3 z_j) }, `c` = [C1,
+/// C2, C3], z_g and z_j positive towards the compressed side (z_j > 0: the
+/// larger flange compressed). With C3 = 1, C2 = 0 it is exact for uniform
+/// moment (the Wagner term of Trahair, Flexural-Torsional Buckling of
+/// Structures, 1993, ch. 6, with beta_x = 2 z_j).
+#[allow(clippy::too_many_arguments)]
+pub fn m_cr_mono(
+    e: f64,
+    g: f64,
+    i_z: f64,
+    i_t: f64,
+    i_w: f64,
+    kl_mm: f64,
+    k: f64,
+    c: [f64; 3],
+    z_g_mm: f64,
+    z_j_mm: f64,
+) -> f64 {
+    let [c1, c2, c3] = c;
     let pi2 = std::f64::consts::PI * std::f64::consts::PI;
     let euler = pi2 * e * i_z / (kl_mm * kl_mm);
-    let c2z = c.c2 * z_g_mm;
-    let root = (k * k * i_w / i_z + kl_mm * kl_mm * g * i_t / (pi2 * e * i_z) + c2z * c2z).sqrt();
-    c.c1 * euler * (root - c2z)
+    let a = c2 * z_g_mm - c3 * z_j_mm;
+    let root = (k * k * i_w / i_z + kl_mm * kl_mm * g * i_t / (pi2 * e * i_z) + a * a).sqrt();
+    c1 * euler * (root - a)
 }
 
 /// Pushes the moment diagram's working for an axis: the end moments, the

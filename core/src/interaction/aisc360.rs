@@ -34,19 +34,28 @@
 //!   F_y S (first yield), so each stress ratio equals the force ratio,
 //!   P_r/P_c + M_rw/M_cw + M_rz/M_cz, never below H1-1a or H1-1b (the
 //!   conservative choice for an unknown section).
-//! - Single angles and tees: refused (bending refuses them before this
-//!   point; kept here so the rule stands on its own).
+//! - Single angles and tees: H2-1 at the critical points about the
+//!   principal axes (an angle's toes and heel, a tee's flange tips and stem
+//!   tip), each flexural term +-M_r/M_c with the strength of the sign of
+//!   moment that acts (the section modulus to the point in f_rb and F_cb
+//!   alike, as the Specification words it), + where it compresses the
+//!   point; both axes' moments at the same section, the largest along the
+//!   member found exactly, B1 on the compressing terms only; the largest
+//!   point governs. F10 sends an angle with axial load
+//!   or biaxial moments to H2; for a tee I_yc/I_y lies outside H1.1's 0.1
+//!   to 0.9, and H2 may be used for any shape.
 //!
 //! Eq. numbers and text recalled from memory of the 2016 Specification.
 
 use super::{ratio, Check, Context};
+use crate::bending::aisc360_angle as angle;
 use crate::bending::{moments, shape, Axis, AxisBending, Shape};
-use crate::error::{Error, Result};
-use crate::member::Method;
+use crate::error::Result;
+use crate::member::{Method, Moments, SpanLoad};
 use crate::method::common::{require_steel, warn_once};
 use crate::outcome::Warning;
-use crate::section::Family;
-use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
+use crate::section::{Family, SectionSpec};
+use crate::trace::{push, put, step, sym, symbol, Scope, Sym, Symbol, Trace};
 
 /// alpha of Appendix 8.2.1: 1.00 (LRFD).
 pub const ALPHA_LRFD: f64 = 1.0;
@@ -270,6 +279,249 @@ fn capacity(trace: &mut Trace, axis: Axis, b: &AxisBending, basis_lrfd: bool) ->
     b.resistance_knm
 }
 
+/// A critical point of a single angle or a tee for H2-1: its name in the
+/// working and its principal coordinates (u, v) from the centroid, mm (u
+/// along the major principal axis, v along the minor principal direction).
+type Point = (&'static str, (f64, f64));
+
+/// The critical points of the section where H2-1 is worked: a single
+/// angle's two toes and heel, a tee's two flange tips and stem tip; `None`
+/// for the shapes H1.1 covers.
+fn critical_points(input: &crate::method::Input<'_>) -> Option<[Point; 3]> {
+    let p = &input.section.props;
+    match &input.section.spec {
+        SectionSpec::Angle(a) => {
+            let pts = angle::points(a, p);
+            Some([
+                ("H2-1 at the toe of the leg depth_mm", pts.toe_h[0]),
+                ("H2-1 at the heel", pts.heel),
+                ("H2-1 at the toe of the leg width_mm", pts.toe_b[0]),
+            ])
+        }
+        SectionSpec::Tee(t) => {
+            let (sin, cos) = crate::trig::sin_cos(p.principal_angle_rad);
+            let uv = |y: f64, z: f64| {
+                let (dy, dz) = (y - p.centroid_y_mm, z - p.centroid_z_mm);
+                (dy * cos + dz * sin, -dy * sin + dz * cos)
+            };
+            Some([
+                ("H2-1 at one flange tip", uv(0.0, t.depth_mm)),
+                ("H2-1 at the other flange tip", uv(t.width_mm, t.depth_mm)),
+                ("H2-1 at the stem tip", uv(0.5 * t.width_mm, 0.0)),
+            ])
+        }
+        _ => None,
+    }
+}
+
+/// The side of the axis of bending a point is on: +1 where a positive
+/// moment compresses it, -1 where it puts it in tension, 0 on the axis
+/// (within 1e-9 of the section's size).
+fn side_of(d: f64, size: f64) -> f64 {
+    if d.abs() <= 1e-9 * size {
+        0.0
+    } else {
+        d.signum()
+    }
+}
+
+/// A moment diagram on one half of the member (s in [0, 0.5] or [0.5, 1])
+/// as the polynomial p0 + p1 s + p2 s^2, kNm (the member file's M(x) with a
+/// uniform span load is one parabola, with a point load two lines).
+fn half_poly(m: &Moments, second: bool) -> [f64; 3] {
+    let (a, b, c) = (m.a_knm, m.b_knm, m.span_knm);
+    match (m.span_load, second) {
+        (SpanLoad::Uniform, _) => [a, b - a + 4.0 * c, -4.0 * c],
+        (SpanLoad::Point, false) => [a, b - a + 2.0 * c, 0.0],
+        (SpanLoad::Point, true) => [a + 2.0 * c, b - a - 2.0 * c, 0.0],
+    }
+}
+
+/// Up to 12 places along the member (no allocation in the check).
+#[derive(Default)]
+struct Places {
+    s: [f64; 12],
+    n: usize,
+}
+
+impl Places {
+    fn push(&mut self, v: f64) {
+        if let Some(slot) = self.s.get_mut(self.n) {
+            *slot = v;
+            self.n += 1;
+        }
+    }
+
+    fn sorted(&mut self) -> &[f64] {
+        let v = self.s.get_mut(..self.n).unwrap_or(&mut []);
+        v.sort_by(f64::total_cmp);
+        v
+    }
+}
+
+/// Pushes the roots of p0 + p1 s + p2 s^2 that lie strictly within (lo, hi).
+fn roots_within(p: [f64; 3], lo: f64, hi: f64, out: &mut Places) {
+    let [p0, p1, p2] = p;
+    let mut keep = |s: f64| {
+        if s.is_finite() && s > lo && s < hi {
+            out.push(s);
+        }
+    };
+    if p2 == 0.0 {
+        if p1 != 0.0 {
+            keep(-p0 / p1);
+        }
+        return;
+    }
+    let disc = p1 * p1 - 4.0 * p2 * p0;
+    if disc >= 0.0 {
+        let r = disc.sqrt();
+        keep((-p1 + r) / (2.0 * p2));
+        keep((-p1 - r) / (2.0 * p2));
+    }
+}
+
+/// One axis' flexural term of H2-1 at a point on `side` (+1 where a
+/// positive moment compresses it, -1 where it stretches it, 0 on the axis)
+/// for the moment `m` there, kNm: side M / M_c of that sign of moment,
+/// times B1 (`amp`) where it compresses the point; a relieving term is not
+/// amplified (the smaller relief, conservative).
+fn flexural_term(b: &AxisBending, side: f64, amp: f64, m: f64) -> f64 {
+    if side == 0.0 || m == 0.0 {
+        return 0.0;
+    }
+    let t = side * ratio(m.abs(), b.resistance_for(m > 0.0)) * m.signum();
+    if t > 0.0 {
+        t * amp
+    } else {
+        t
+    }
+}
+
+/// H2-1 at each critical point, along the member, the largest returned.
+/// At a point the flexural term about an axis is f_rb/F_cb with the
+/// section modulus S to that point in both (the Specification's wording),
+/// so it is +-M_r/M_c of the sign of moment acting at that section, + where
+/// it compresses the point, 0 on the axis. The two axes' moments are taken
+/// together at each section x of the member, so a relieving moment counts
+/// only as large as it is where the other acts; the largest is found
+/// exactly: on each piece between the ends, mid-length and the zeros of
+/// either diagram the sum is one quadratic in x, so its largest value is at
+/// a piece's end or its stationary point.
+fn h2_at_points(
+    ctx: &Context<'_>,
+    points: &[Point; 3],
+    axial: f64,
+    (m_rx, m_ry): (f64, f64),
+    trace: &mut Trace,
+) -> f64 {
+    if !(m_rx.is_finite() && m_ry.is_finite()) {
+        // B1 without a finite value: the member fails (a warning says why);
+        // no point may offset an infinite term by another.
+        step!(
+            trace,
+            S,
+            "H2-1",
+            "no finite value: the moments have no finite amplification B1",
+            f64::INFINITY,
+            "-",
+            "AISC 360-16 Eq. H2-1, Eq. A-8-3"
+        );
+        return f64::INFINITY;
+    }
+    let input = ctx.input;
+    let (mw, mz) = (moments(input, Axis::Major), moments(input, Axis::Minor));
+    let amp = |m: &Moments, m_r: f64| {
+        let m_nt = m.max_abs_knm();
+        if m_nt == 0.0 {
+            1.0
+        } else {
+            m_r / m_nt
+        }
+    };
+    let (amp_w, amp_z) = (amp(&mw, m_rx), amp(&mz, m_ry));
+    let (bw, bz) = (&ctx.bending.major, &ctx.bending.minor);
+    // Where the pieces meet: the ends, mid-length, the zeros of each diagram.
+    let mut places = Places::default();
+    for s in [0.0, 0.5, 1.0] {
+        places.push(s);
+    }
+    for m in [&mw, &mz] {
+        roots_within(half_poly(m, false), 0.0, 0.5, &mut places);
+        roots_within(half_poly(m, true), 0.5, 1.0, &mut places);
+    }
+    let cuts = places.sorted();
+    let size = input.section.props.r_major_mm.max(1.0);
+    step!(
+        trace,
+        S,
+        "f_ra/F_ca",
+        "required over available axial stress, P_r/A over P_c/A, the same at every point (compression positive)",
+        axial,
+        "-",
+        "AISC 360-16 Eq. H2-1"
+    );
+    let mut worst = f64::NEG_INFINITY;
+    for &(name, pt) in points {
+        let side_w = side_of(angle::towards_compression(Axis::Major, pt), size);
+        let side_z = side_of(angle::towards_compression(Axis::Minor, pt), size);
+        let at = |s: f64| {
+            axial
+                + flexural_term(bw, side_w, amp_w, mw.at(s))
+                + flexural_term(bz, side_z, amp_z, mz.at(s))
+        };
+        let mut best = f64::NEG_INFINITY;
+        for pair in cuts.windows(2) {
+            let &[lo, hi] = pair else { continue };
+            best = best.max(at(lo)).max(at(hi));
+            // Within the piece each term is k M(s), k fixed: the slope of
+            // the sum is zero where k_w M_w'(s) + k_z M_z'(s) = 0.
+            let mid = 0.5 * (lo + hi);
+            let second = mid > 0.5;
+            let k = |b: &AxisBending, side: f64, amp: f64, m: &Moments| {
+                let v = m.at(mid);
+                if v == 0.0 {
+                    0.0
+                } else {
+                    flexural_term(b, side, amp, v) / v
+                }
+            };
+            let (kw, kz) = (k(bw, side_w, amp_w, &mw), k(bz, side_z, amp_z, &mz));
+            let (pw, pz) = (half_poly(&mw, second), half_poly(&mz, second));
+            let slope = [
+                kw * pw[1] + kz * pz[1],
+                2.0 * (kw * pw[2] + kz * pz[2]),
+                0.0,
+            ];
+            let mut flat = Places::default();
+            roots_within(slope, lo, hi, &mut flat);
+            for &s in flat.sorted() {
+                best = best.max(at(s));
+            }
+        }
+        push(
+            trace,
+            S,
+            name,
+            "f_ra/F_ca + f_rbw/F_cbw + f_rbz/F_cbz at this point, the largest along the member: each flexural term +-M_r/M_c (S to the point in both stresses) of the moment at that section, + where it compresses the point (times B1), - where it relieves it",
+            best,
+            "-",
+            "AISC 360-16 Eq. H2-1",
+        );
+        worst = worst.max(best);
+    }
+    step!(
+        trace,
+        S,
+        "H2-1",
+        "the largest over the critical points (the toes and the heel of an angle, the flange tips and the stem tip of a tee) and along the member, principal axes",
+        worst,
+        "-",
+        "AISC 360-16 Eq. H2-1"
+    );
+    worst
+}
+
 /// The interaction equations.
 pub fn check(
     ctx: &Context<'_>,
@@ -285,14 +537,6 @@ pub fn check(
     let input = ctx.input;
     let steel = require_steel(input, key)?;
     let family = input.section.family;
-    if matches!(family, Family::Angle | Family::Tee) {
-        return Err(Error::NotApplicable {
-            method: key,
-            reason: "axial_kn with moments: a single angle or a tee is outside AISC 360-16 H1.1 \
-                     (H2 applies, which is not implemented here); check this member by hand"
-                .into(),
-        });
-    }
     let alpha = if lrfd { ALPHA_LRFD } else { ALPHA_ASD };
     let p_r = input.member.axial_kn;
     let p_c = ctx.governing.resistance_kn;
@@ -368,6 +612,13 @@ pub fn check(
         "-",
         "AISC 360-16 H1.1"
     );
+    if let Some(points) = critical_points(input) {
+        let u = h2_at_points(ctx, &points, axial, (m_rx, m_ry), trace);
+        return Ok(Some(vec![Check {
+            check: "H2-1",
+            utilisation: u,
+        }]));
+    }
     if family == Family::Given {
         let u = axial + bend;
         warn_once(warnings, "given-h2", || {

@@ -21,8 +21,8 @@
 //! (5.5.2(6)); the worse of the two is taken (safe reading). N_Rk = A f_y
 //! and M_Rk = W f_y with W_pl for Classes 1 and 2, W_el for Class 3; for
 //! Class 4, A_eff (EN 1993-1-5, as the compression check computes it) and
-//! W_eff = W_el (the bending check refuses a section that is Class 4 in
-//! bending alone, so the moment alone leaves the section fully effective);
+//! W_eff of the section under the moment alone (the bending check's
+//! effective section where it is Class 4 in bending alone, else W_el);
 //! the shift of the effective centroid e_N is zero for the doubly symmetric
 //! I and rectangular hollow sections, and a Class 4 section of another shape
 //! is refused.
@@ -234,8 +234,18 @@ impl Basis {
             p.area_mm2
         };
         let plastic = class <= 2;
-        let w_y = bending::modulus(input, Axis::Major, plastic)?;
-        let w_z = bending::modulus(input, Axis::Minor, plastic)?;
+        // W_eff of the section under the moment alone (Table 6.7 note,
+        // 6.2.2.5): the effective section where it is Class 4 in bending
+        // alone, else W_el.
+        let w_of = |axis: Axis, class_m: Option<u8>| -> Result<f64> {
+            if class == 4 && class_m == Some(4) {
+                bending::en1993::effective_modulus(input, steel, axis)
+            } else {
+                bending::modulus(input, axis, plastic)
+            }
+        };
+        let w_y = w_of(Axis::Major, class_y)?;
+        let w_z = w_of(Axis::Minor, class_z)?;
         match class {
             4 => {
                 step!(
@@ -251,8 +261,8 @@ impl Basis {
                     trace,
                     S,
                     "W_eff,y",
-                    "effective modulus about y-y under the moment alone: the section is not \
-                     Class 4 in bending alone, so W_el,y",
+                    "effective modulus about y-y under the moment alone (EN 1993-1-5; W_el,y \
+                     where the section is not Class 4 in bending alone)",
                     w_y,
                     "mm3",
                     "EN 1993-1-1 6.2.2.5, Table B.1"
@@ -261,7 +271,8 @@ impl Basis {
                     trace,
                     S,
                     "W_eff,z",
-                    "effective modulus about z-z under the moment alone: W_el,z",
+                    "effective modulus about z-z under the moment alone (EN 1993-1-5; W_el,z \
+                     where the section is not Class 4 in bending alone)",
                     w_z,
                     "mm3",
                     "EN 1993-1-1 6.2.2.5, Table B.1"

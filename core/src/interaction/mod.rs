@@ -20,10 +20,11 @@
 use serde::Serialize;
 
 use crate::bending::Bending;
-use crate::error::Result;
+use crate::error::{Error, Result};
 use crate::member::BucklingLengths;
 use crate::method::{Input, Method};
 use crate::outcome::{ModeResult, Warning};
+use crate::section::Family;
 use crate::stability::Assessment;
 use crate::trace::Trace;
 
@@ -83,6 +84,37 @@ pub fn check(
     trace: &mut Trace,
     warnings: &mut Vec<Warning>,
 ) -> Result<Option<Vec<Check>>> {
+    if matches!(ctx.method, Method::En1993 | Method::CsaS16)
+        && matches!(ctx.input.section.family, Family::Tee | Family::Angle)
+    {
+        // The bending of a tee is worked under these codes, but their
+        // beam-column rules (6.3.3; 13.8) are not set up for a monosymmetric
+        // section whose resistance depends on the sign of the moment.
+        let m = ctx.input.member;
+        let (key, what) = if m.axial_kn > 0.0 {
+            ("axial_kn", "axial load with moments")
+        } else {
+            (
+                [
+                    ("m_minor_a_knm", m.m_minor_a_knm),
+                    ("m_minor_b_knm", m.m_minor_b_knm),
+                    ("m_minor_span_knm", m.m_minor_span_knm),
+                ]
+                .iter()
+                .find(|(_, v)| *v != 0.0)
+                .map_or("m_minor_a_knm", |(k, _)| *k),
+                "moments about both axes",
+            )
+        };
+        return Err(Error::NotApplicable {
+            method: ctx.method.key(),
+            reason: format!(
+                "{key}: {what}: the combined check of a tee or an angle is not worked under this \
+                 code (its interaction rules are for doubly symmetric members; the tee's bending \
+                 resistance depends on the moment's sign); check this member by hand"
+            ),
+        });
+    }
     match ctx.method {
         Method::En1993 => en1993::check(ctx, trace, warnings),
         Method::AiscLrfd | Method::AiscAsd => aisc360::check(ctx, trace, warnings),

@@ -221,6 +221,22 @@ fn finish(raw: Raw) -> Result<Properties> {
     Ok(p)
 }
 
+/// The monosymmetry property of a single angle about its major principal
+/// axis w, mm: β_w = (1/I_w) ∫ z (w² + z²) dA - 2 z_0, z the distance from
+/// the w axis, z_0 the shear centre's (AISC 360-16 Commentary to F10, the
+/// formula recalled from memory), over the angle's own outline (root and
+/// toe radii in chords, [`SEGMENTS_PER_QUARTER`] per quarter). Signed with
+/// z measured towards the toe of the leg `depth_mm` (the minor principal
+/// direction, as [`Properties::shear_centre_minor_mm`]); the Specification
+/// gives it the sign of which leg is compressed, so the caller takes its
+/// magnitude.
+pub fn angle_beta_w(s: &super::Angle, p: &Properties) -> Result<f64> {
+    let mut poly = angle::outline(s)?;
+    poly.shift(-p.centroid_y_mm, -p.centroid_z_mm);
+    let (sin, cos) = crate::trig::sin_cos(p.principal_angle_rad);
+    Ok(poly.wagner(sin, cos) / p.i_major_mm4 - 2.0 * p.shear_centre_minor_mm)
+}
+
 fn check_finite(p: &Properties) -> Result<()> {
     let all = [
         p.area_mm2,
