@@ -90,6 +90,16 @@ impl From<&Properties> for SectionSummary {
     }
 }
 
+/// Which segment of a buckling model governs: `index` of `count`, counted
+/// from 1 at end A.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
+pub struct SegmentOf {
+    /// The governing segment, 1 at end A.
+    pub index: usize,
+    /// The model's segments (1 for a model without segments).
+    pub count: usize,
+}
+
 /// The outcome of checking one member.
 #[derive(Debug, Clone, PartialEq, Serialize)]
 pub struct CheckResult {
@@ -113,6 +123,14 @@ pub struct CheckResult {
     pub governing_check: &'static str,
     /// Design resistance of the governing mode, kN.
     pub resistance_kn: f64,
+    /// The design compression N_Ed the member was checked at, kN: its
+    /// `axial_kn`, or with a `buckling_model` the governing segment's
+    /// largest compression under the model's loads ([`Self::segment`]).
+    pub axial_kn: f64,
+    /// With a `buckling_model`: the segment that governs, counted from 1
+    /// at end A, of how many (`null` without a model).
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub segment: Option<SegmentOf>,
     /// The governing mode.
     pub governing: Mode,
     /// Characteristic squash load A f_y (or A f_c,0,k), kN.
@@ -468,6 +486,8 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         utilisation,
         governing_check,
         resistance_kn,
+        axial_kn: m.axial_kn,
+        segment: None,
         governing: governing.mode,
         squash_kn: input.section.props.area_mm2 * strength_mpa / 1000.0,
         strength_mpa,

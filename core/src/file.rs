@@ -189,6 +189,17 @@ pub fn member_name(raw: Option<&Value>, index: usize) -> String {
         .unwrap_or_else(|| format!("#{}", index + 1))
 }
 
+/// Whether a member file of `version` reads into the current types as it
+/// stands: every migration from it ([`migrate`]) changes nothing but the
+/// `"version"` number (each later version only added optional keys), so
+/// such a file is read as it stands ([`from_parsed`]), without copying its
+/// value to migrate. A migration that changes more
+/// must take its versions out of this; the test
+/// `versions_read_as_current_migrate_by_the_number_alone` fails until it does.
+pub fn reads_as_current(version: u64) -> bool {
+    (1..=VERSION).contains(&version)
+}
+
 /// Lifts a file of `version` to the next version; each version adds one arm.
 fn migrate(mut value: Value, version: u64) -> Result<Value> {
     // 1 -> 2: version 2 only adds an optional key, so a version-1 file is
@@ -268,13 +279,31 @@ fn header(value: &Value) -> Result<u64> {
 /// stored workspace, which the app wrote itself): [`parse`] without
 /// reading text again; older versions migrate the same way. A key
 /// repeated in the text is not seen here (the parsed value kept one).
-pub fn from_value(mut value: Value) -> Result<MemberFile> {
-    let version = header(&value)?;
+pub fn from_value(value: Value) -> Result<MemberFile> {
+    from_parsed(&value)
+}
+
+/// [`from_value`] of a value the caller keeps, to free when it suits it
+/// (the app frees its stored workspace's after the first frame). A version
+/// that reads as the current one ([`reads_as_current`]) is read as it
+/// stands; an older one is migrated on a copy.
+pub fn from_parsed(value: &Value) -> Result<MemberFile> {
+    let version = header(value)?;
+    if reads_as_current(version) {
+        return read_current(value);
+    }
+    let mut owned = value.clone();
     let mut v = version;
     while v < VERSION {
-        value = migrate(value, v)?;
+        owned = migrate(owned, v)?;
         v += 1;
     }
+    read_current(&owned)
+}
+
+/// The members, title and sheet of a member file's value in the current
+/// version.
+fn read_current(value: &Value) -> Result<MemberFile> {
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -400,6 +429,41 @@ mod tests {
       "members": [{"id": "P1", "section": {"kind": "rect", "depth_mm": 100, "width_mm": 50},
       "material": {"fy_mpa": 235, "e_mpa": 210000}, "length_mm": 2000, "axial_kn": 10,
       "method": "euler"}]}"#;
+
+    #[test]
+    fn versions_read_as_current_migrate_by_the_number_alone() {
+        for text in [
+            include_str!("../../tests/fixtures/stored/member-file-v1.json"),
+            include_str!("../../tests/fixtures/stored/member-file-v2.json"),
+            ONE,
+        ] {
+            let base: Value = serde_json::from_str(text).unwrap();
+            for v in (1..VERSION).filter(|v| reads_as_current(*v)) {
+                let mut at = base.clone();
+                at["version"] = Value::from(v);
+                let mut next = at.clone();
+                next["version"] = Value::from(v + 1);
+                assert_eq!(
+                    migrate(at, v).unwrap(),
+                    next,
+                    "the migration from version {v} changes more than the number: \
+                     take {v} out of reads_as_current"
+                );
+            }
+            // Read as it stands, the same file as migrated step by step.
+            let v = header(&base).unwrap();
+            assert!(reads_as_current(v));
+            let mut migrated = base.clone();
+            for at in v..VERSION {
+                migrated = migrate(migrated, at).unwrap();
+            }
+            assert_eq!(
+                read_current(&migrated).unwrap(),
+                from_parsed(&base).unwrap()
+            );
+        }
+        assert!(!reads_as_current(0) && !reads_as_current(VERSION + 1));
+    }
 
     #[test]
     fn reads_and_writes_round_trip() {

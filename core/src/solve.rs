@@ -17,7 +17,10 @@
 //! member keeps its proportions (a brace restrained at mid-length stays
 //! restrained at mid-length). A `buckling_model` is scaled with it: its
 //! segments' lengths and the positions of its braces and loads (its
-//! springs, supports and loads are kept). An explicit `bow_mm` or `eccentricity_mm` is
+//! springs, supports and loads are kept); where its alpha_cr then falls
+//! exactly as a power of the length (no springs, and loads at points only
+//! or along the length only: `buckling::column::Column::length_power`),
+//! the trials scale the member's own analysis instead of analysing again. An explicit `bow_mm` or `eccentricity_mm` is
 //! kept as given; when absent, the methods' defaults (length / 1000)
 //! follow the trial length.
 //!
@@ -134,7 +137,8 @@ pub struct LargestLoad {
     pub governing_check: &'static str,
     /// The utilisation under the member's own design load.
     pub utilisation: f64,
-    /// Resistance minus the member's design load, kN (negative when over).
+    /// Resistance minus the design load the check took (with a buckling
+    /// model, the governing segment's force), kN (negative when over).
     pub reserve_kn: f64,
 }
 
@@ -155,6 +159,9 @@ struct Trials<'a> {
     base: &'a Prepared,
     work: Prepared,
     method: Method,
+    /// A buckling model's analyses at the member's own length, scaled to
+    /// each trial where that is exact instead of analysed again.
+    lengthwise: Option<crate::check::buckle::Lengthwise>,
 }
 
 /// The member with its length, given buckling lengths and buckling
@@ -182,7 +189,13 @@ pub fn scaled(member: &Member, s: f64) -> Member {
 impl Trials<'_> {
     fn at(&mut self, s: f64) -> Trial {
         self.work.member = scaled(&self.base.member, s);
-        match self.work.check_as(self.method, Working::Skipped) {
+        let checked = match &self.lengthwise {
+            Some(base) => {
+                crate::check::buckle::check_lengthened(&self.work.input(), self.method, base, s)
+            }
+            None => self.work.check_as(self.method, Working::Skipped),
+        };
+        match checked {
             Ok(r) => Trial::Ran(Box::new(r)),
             Err(e) => Trial::Refused(inner(e)),
         }
@@ -217,6 +230,7 @@ pub fn longest_length(prepared: &Prepared, method: Method) -> Result<LengthAnswe
         base: prepared,
         work: prepared.clone(),
         method,
+        lengthwise: crate::check::buckle::lengthwise(&prepared.input()),
     };
     // Keep every trial length inside the member file's range, with a
     // margin of rounding so the end trials are accepted.
@@ -357,7 +371,9 @@ pub fn largest_load(prepared: &Prepared, method: Method) -> Result<LargestLoad> 
         governing,
         governing_check,
         utilisation: r.utilisation,
-        reserve_kn: load_kn - prepared.member.axial_kn,
+        // The N_Ed the check took: with a buckling model, the governing
+        // segment's force, whose resistance `load_kn` is.
+        reserve_kn: load_kn - r.axial_kn,
     })
 }
 
@@ -426,6 +442,48 @@ mod tests {
         let again = at.check_with(method).unwrap();
         assert!((again.utilisation - f.utilisation).abs() <= 1e-12);
         assert_eq!(again.governing, f.governing);
+    }
+
+    #[test]
+    fn a_model_that_scales_exactly_is_not_analysed_per_trial_and_gives_the_same_length() {
+        // K1 of the worked example without its springs and its load along
+        // the length: point loads only, so every trial scales the member's
+        // own analysis (alpha_cr / s^2). The member rechecked at the length
+        // found, with its analysis run afresh, is at the same utilisation.
+        let f =
+            crate::file::parse(include_str!("../../examples/tarnbeck-crane-hall.json")).unwrap();
+        let mut k1 = f.members[0].clone();
+        if let Some(model) = k1.buckling_model.as_mut() {
+            model.ends.b.major.translation = crate::buckling::Fixity::Fixed;
+            model.restraints[0].translation = crate::buckling::Fixity::Fixed;
+            model.distributed_kn_per_m = 0.0;
+        }
+        let p = Prepared::new(&k1).unwrap();
+        assert!(crate::check::buckle::lengthwise(&p.input()).is_some());
+        let found = match longest_length(&p, k1.method).unwrap() {
+            LengthAnswer::Found(f) => f,
+            other => panic!("{other:?}"),
+        };
+        let again = Prepared::new(&scaled(&k1, found.scale))
+            .unwrap()
+            .check_with(k1.method)
+            .unwrap();
+        assert!(
+            (again.utilisation - found.utilisation).abs() <= 1e-9,
+            "{} {}",
+            again.utilisation,
+            found.utilisation
+        );
+        assert!((found.utilisation - 1.0).abs() <= 1e-3, "{found:?}");
+        // The largest load's reserve is against the governing segment's
+        // force, the N_Ed its resistance is for.
+        let own = p.check_with(k1.method).unwrap();
+        let l = largest_load(&p, k1.method).unwrap();
+        assert!(own.segment.is_some());
+        assert_eq!(l.reserve_kn, l.load_kn - own.axial_kn);
+        // With its springs back, neither axis scales exactly.
+        let p = Prepared::new(&f.members[0]).unwrap();
+        assert!(crate::check::buckle::lengthwise(&p.input()).is_none());
     }
 
     #[test]

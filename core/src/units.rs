@@ -35,6 +35,10 @@ pub const N_PER_LBF: f64 = 4.448_221_615_260_5;
 pub const KN_PER_KIP: f64 = 4.448_221_615_260_5;
 /// kN·m in one kip·ft (exact: 4.4482216152605 kN x 0.3048 m).
 pub const KNM_PER_KIPFT: f64 = 1.355_817_948_331_400_4;
+/// kN/mm in one kip/in (from the definitions: 4.4482216152605 kN / 25.4 mm).
+pub const KN_PER_MM_PER_KIP_PER_IN: f64 = KN_PER_KIP / MM_PER_IN;
+/// kN/m in one kip/ft (from the definitions: 4.4482216152605 kN / 0.3048 m).
+pub const KN_PER_M_PER_KIP_PER_FT: f64 = KN_PER_KIP / (MM_PER_FT / 1000.0);
 
 /// MPa in one ksi, from the definitions above: 1 ksi = 1 kip/in2 =
 /// 4448.2216152605 N / 645.16 mm2 = 6.894757293168... MPa (to the
@@ -149,6 +153,15 @@ pub enum Quantity {
     Stress,
     /// Moment: kN·m / kip·ft.
     Moment,
+    /// Stiffness of a translational spring: kN/mm / kip/in (key suffix
+    /// `_kn_per_mm`).
+    Stiffness,
+    /// Stiffness of a rotational spring: kN·m/rad / kip·ft/rad (key suffix
+    /// `_knm_per_rad`).
+    RotationalStiffness,
+    /// Force per length along a member: kN/m / kip/ft (key suffix
+    /// `_kn_per_m`).
+    LineLoad,
     /// No unit (factors, slenderness, utilisation).
     Dimensionless,
 }
@@ -169,6 +182,9 @@ impl Quantity {
             SiSuffix::Kn => Quantity::Force,
             SiSuffix::Mpa => Quantity::Stress,
             SiSuffix::Knm => Quantity::Moment,
+            SiSuffix::KnPerMm => Quantity::Stiffness,
+            SiSuffix::KnmPerRad => Quantity::RotationalStiffness,
+            SiSuffix::KnPerM => Quantity::LineLoad,
         })
     }
 
@@ -184,6 +200,9 @@ impl Quantity {
             "kN" => Quantity::Force,
             "MPa" => Quantity::Stress,
             "kNm" | "kN·m" | "kN m" => Quantity::Moment,
+            "kN/mm" => Quantity::Stiffness,
+            "kNm/rad" | "kN·m/rad" => Quantity::RotationalStiffness,
+            "kN/m" => Quantity::LineLoad,
             "-" | "" => Quantity::Dimensionless,
             _ => return None,
         })
@@ -201,9 +220,24 @@ enum SiSuffix {
     Kn,
     Mpa,
     Knm,
+    KnPerMm,
+    KnmPerRad,
+    KnPerM,
 }
 
+/// The compound suffixes (a rate: one unit per another), looked for first.
+const COMPOUND: [(&str, SiSuffix); 3] = [
+    ("_kn_per_mm", SiSuffix::KnPerMm),
+    ("_knm_per_rad", SiSuffix::KnmPerRad),
+    ("_kn_per_m", SiSuffix::KnPerM),
+];
+
 fn split_suffix(key: &str) -> Option<(&str, SiSuffix)> {
+    for (tail, s) in COMPOUND {
+        if let Some(stem) = key.strip_suffix(tail) {
+            return (!stem.is_empty()).then_some((stem, s));
+        }
+    }
     let (stem, suffix) = key.rsplit_once('_')?;
     let s = match suffix {
         "mm" => SiSuffix::Mm,
@@ -244,6 +278,12 @@ pub enum UsUnit {
     Ksi,
     /// kip·ft, for `_knm` keys.
     KipFt,
+    /// kip/in, for `_kn_per_mm` keys.
+    KipPerIn,
+    /// kip·ft/rad, for `_knm_per_rad` keys.
+    KipFtPerRad,
+    /// kip/ft, for `_kn_per_m` keys.
+    KipPerFt,
 }
 
 impl UsUnit {
@@ -259,6 +299,9 @@ impl UsUnit {
             UsUnit::Kip => "kip",
             UsUnit::Ksi => "ksi",
             UsUnit::KipFt => "kipft",
+            UsUnit::KipPerIn => "kip_per_in",
+            UsUnit::KipFtPerRad => "kipft_per_rad",
+            UsUnit::KipPerFt => "kip_per_ft",
         }
     }
 
@@ -274,6 +317,9 @@ impl UsUnit {
             UsUnit::Kip => kip_to_kn(v),
             UsUnit::Ksi => ksi_to_mpa(v),
             UsUnit::KipFt => kipft_to_knm(v),
+            UsUnit::KipPerIn => v * KN_PER_MM_PER_KIP_PER_IN,
+            UsUnit::KipFtPerRad => kipft_to_knm(v),
+            UsUnit::KipPerFt => v * KN_PER_M_PER_KIP_PER_FT,
         }
     }
 
@@ -289,6 +335,9 @@ impl UsUnit {
             UsUnit::Kip => kn_to_kip(v),
             UsUnit::Ksi => mpa_to_ksi(v),
             UsUnit::KipFt => knm_to_kipft(v),
+            UsUnit::KipPerIn => v / KN_PER_MM_PER_KIP_PER_IN,
+            UsUnit::KipFtPerRad => knm_to_kipft(v),
+            UsUnit::KipPerFt => v / KN_PER_M_PER_KIP_PER_FT,
         }
     }
 }
@@ -297,6 +346,15 @@ impl UsUnit {
 /// "area_in2", "axial_kip", "fy_ksi") as its member-file key and unit
 /// ("length_mm", [`UsUnit::Ft`]). `None` when the key has no US suffix.
 pub fn us_key_to_si(key: &str) -> Option<(String, UsUnit)> {
+    for (tail, si, unit) in [
+        ("_kip_per_in", "kn_per_mm", UsUnit::KipPerIn),
+        ("_kipft_per_rad", "knm_per_rad", UsUnit::KipFtPerRad),
+        ("_kip_per_ft", "kn_per_m", UsUnit::KipPerFt),
+    ] {
+        if let Some(stem) = key.strip_suffix(tail) {
+            return (!stem.is_empty()).then(|| (format!("{stem}_{si}"), unit));
+        }
+    }
     let (stem, suffix) = key.rsplit_once('_')?;
     if stem.is_empty() {
         return None;
@@ -330,6 +388,9 @@ pub fn si_key_to_us(key: &str, unit: UsUnit) -> Option<String> {
             | (SiSuffix::Kn, UsUnit::Kip)
             | (SiSuffix::Mpa, UsUnit::Ksi)
             | (SiSuffix::Knm, UsUnit::KipFt)
+            | (SiSuffix::KnPerMm, UsUnit::KipPerIn)
+            | (SiSuffix::KnmPerRad, UsUnit::KipFtPerRad)
+            | (SiSuffix::KnPerM, UsUnit::KipPerFt)
     );
     if fits {
         Some(format!("{stem}_{}", unit.suffix()))
@@ -350,6 +411,9 @@ pub fn display_unit(system: UnitSystem, q: Quantity) -> &'static str {
         (UnitSystem::Si, Quantity::Force) => "kN",
         (UnitSystem::Si, Quantity::Stress) => "MPa",
         (UnitSystem::Si, Quantity::Moment) => "kN·m",
+        (UnitSystem::Si, Quantity::Stiffness) => "kN/mm",
+        (UnitSystem::Si, Quantity::RotationalStiffness) => "kN·m/rad",
+        (UnitSystem::Si, Quantity::LineLoad) => "kN/m",
         (UnitSystem::Us, Quantity::Length) => "in",
         (UnitSystem::Us, Quantity::Span) => "ft",
         (UnitSystem::Us, Quantity::Area) => "in²",
@@ -359,12 +423,16 @@ pub fn display_unit(system: UnitSystem, q: Quantity) -> &'static str {
         (UnitSystem::Us, Quantity::Force) => "kip",
         (UnitSystem::Us, Quantity::Stress) => "ksi",
         (UnitSystem::Us, Quantity::Moment) => "kip·ft",
+        (UnitSystem::Us, Quantity::Stiffness) => "kip/in",
+        (UnitSystem::Us, Quantity::RotationalStiffness) => "kip·ft/rad",
+        (UnitSystem::Us, Quantity::LineLoad) => "kip/ft",
         (_, Quantity::Dimensionless) => "",
     }
 }
 
-/// The US unit a quantity is shown in (`None` when dimensionless).
-fn us_unit(q: Quantity) -> Option<UsUnit> {
+/// The US unit a quantity is shown in (`None` when dimensionless): member
+/// lengths in feet, other lengths in inches.
+pub fn us_unit(q: Quantity) -> Option<UsUnit> {
     Some(match q {
         Quantity::Length => UsUnit::In,
         Quantity::Span => UsUnit::Ft,
@@ -375,6 +443,9 @@ fn us_unit(q: Quantity) -> Option<UsUnit> {
         Quantity::Force => UsUnit::Kip,
         Quantity::Stress => UsUnit::Ksi,
         Quantity::Moment => UsUnit::KipFt,
+        Quantity::Stiffness => UsUnit::KipPerIn,
+        Quantity::RotationalStiffness => UsUnit::KipFtPerRad,
+        Quantity::LineLoad => UsUnit::KipPerFt,
         Quantity::Dimensionless => return None,
     })
 }
@@ -472,7 +543,7 @@ mod tests {
         }
     }
 
-    const ALL_Q: [Quantity; 10] = [
+    const ALL_Q: [Quantity; 13] = [
         Quantity::Length,
         Quantity::Span,
         Quantity::Area,
@@ -482,6 +553,9 @@ mod tests {
         Quantity::Force,
         Quantity::Stress,
         Quantity::Moment,
+        Quantity::Stiffness,
+        Quantity::RotationalStiffness,
+        Quantity::LineLoad,
         Quantity::Dimensionless,
     ];
 
@@ -575,6 +649,54 @@ mod tests {
         assert!(rel(key_from_display(UnitSystem::Us, "depth_mm", 10.0), 254.0) < 1e-15);
         assert_eq!(key_from_display(UnitSystem::Us, "k_major", 0.7), 0.7);
         assert_eq!(display_unit(UnitSystem::Us, Quantity::Moment), "kip·ft");
+    }
+
+    #[test]
+    fn spring_stiffnesses_and_line_loads() {
+        // 1 kip/in = 4.4482216152605 kN / 25.4 mm = 0.175126835246... kN/mm;
+        // 1 kip/ft = 4.4482216152605 kN / 0.3048 m = 14.5939029372... kN/m;
+        // 1 kip·ft/rad = 1.3558179483314 kN·m/rad (NIST SP 811, 2008, App. B
+        // factors for lbf, in and ft, multiplied out).
+        assert_eq!(
+            Quantity::of_key("spring_kn_per_mm"),
+            Some(Quantity::Stiffness)
+        );
+        assert_eq!(
+            Quantity::of_key("spring_knm_per_rad"),
+            Some(Quantity::RotationalStiffness)
+        );
+        assert_eq!(
+            Quantity::of_key("distributed_kn_per_m"),
+            Some(Quantity::LineLoad)
+        );
+        assert_eq!(Quantity::of_key("_kn_per_m"), None);
+        let (v, u) = key_to_display(UnitSystem::Us, "spring_kn_per_mm", 0.175_126_835_246_476_4);
+        assert!(rel(v, 1.0) < 1e-15 && u == "kip/in", "{v} {u}");
+        let (v, u) = key_to_display(
+            UnitSystem::Us,
+            "distributed_kn_per_m",
+            14.593_902_937_206_36,
+        );
+        assert!(rel(v, 1.0) < 1e-14 && u == "kip/ft", "{v} {u}");
+        let (v, u) = key_to_display(
+            UnitSystem::Us,
+            "spring_knm_per_rad",
+            1.355_817_948_331_400_4,
+        );
+        assert!(rel(v, 1.0) < 1e-15 && u == "kip·ft/rad", "{v} {u}");
+        assert_eq!(
+            key_to_display(UnitSystem::Si, "spring_kn_per_mm", 3.0),
+            (3.0, "kN/mm")
+        );
+        assert_eq!(
+            us_key_to_si("distributed_kip_per_ft"),
+            Some(("distributed_kn_per_m".into(), UsUnit::KipPerFt))
+        );
+        assert_eq!(
+            si_key_to_us("spring_knm_per_rad", UsUnit::KipFtPerRad).as_deref(),
+            Some("spring_kipft_per_rad")
+        );
+        assert_eq!(si_key_to_us("spring_kn_per_mm", UsUnit::Kip), None);
     }
 
     #[test]

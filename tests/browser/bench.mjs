@@ -14,6 +14,10 @@
 //    next animation frame after that (frame), over 100 edits; and the same
 //    for the member given end moments first, so each edit re-checks it and
 //    redraws its interaction chart (both axes' curves);
+//    and an edit of a column model's load along the length until its
+//    buckled shapes are redrawn (the panel's canvas drawn again, then the
+//    next frame), for a model whose alpha_cr scales exactly with the length
+//    and one with springs (lib.mjs modelColumns, modelEditLoop);
 // 3. 1,000 members: a stored workspace of 1,000 members, from the moment
 //    the module is ready (mark "strutline-wasm-ready" in boot.js) until
 //    the rows are in the page and the next frame has started.
@@ -22,7 +26,7 @@ import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
 import os from "node:os";
 import { join } from "node:path";
-import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, workspaceText, thousandMembers, seedStorage, openForEditing, editLoop } from "./lib.mjs";
+import { arg, CHROMIUM, cliCheck, firstPage, launch, memberFile, workspaceText, thousandMembers, seedStorage, openForEditing, editLoop, modelColumns, modelEditLoop } from "./lib.mjs";
 
 const URL_ARG = arg("--url");
 const OUT_DIR = arg("--out");
@@ -35,7 +39,7 @@ const DIST_ZLIB = Number(arg("--dist-zlib", "NaN"));
 const DIST_SENT = Number(arg("--dist-sent", "NaN"));
 const DIST_BUDGET = Number(arg("--dist-budget", "NaN"));
 const CACHE_NAME = arg("--cache-name", "");
-// `--only first,slow,edit,thousand,sizing`: measure only these (for a
+// `--only first,slow,edit,model,thousand,sizing`: measure only these (for a
 // quick look while working; bench/web.md is written from a full run).
 const ONLY = arg("--only");
 const wanted = (what) => !ONLY || ONLY.split(",").includes(what);
@@ -45,6 +49,7 @@ const TARGETS = {
   slow_cold_ms: 3500,
   slow_cached_ms: 500,
   edit_ms: 16,
+  model_ms: 50,
   thousand_ms: 50,
   sizing_ms: 300,
   dist_zlib_bytes: DIST_BUDGET,
@@ -229,6 +234,22 @@ async function measureEdits(count = 100, moments = false) {
       await page.locator("canvas#envelope[data-chart=interaction]").waitFor({ timeout: 10_000 });
     }
     return await page.evaluate(editLoop, count);
+  } finally {
+    await close();
+  }
+}
+
+// Edits of a column model's load along the length, `count` of them, on
+// the invented columns of lib.mjs modelColumns (the member `id`).
+async function measureModelEdits(id, count = 30) {
+  const { context, close } = await launch();
+  try {
+    await seedStorage(context, workspaceText([memberFile("Tram depot (invented)", modelColumns())]));
+    const page = await firstPage(context);
+    await openForEditing(page, BASE.href, `[data-testid=member-row][data-id="${id}"]`);
+    await page.locator("[data-testid=cm-canvas][data-shapes='2']").waitFor({ timeout: 10_000 });
+    const values = Array.from({ length: count }, (_, i) => (1 + (i % 10) * 0.25 + i * 0.001).toFixed(3));
+    return await page.evaluate(modelEditLoop, values);
   } finally {
     await close();
   }
@@ -429,6 +450,32 @@ if (wanted("edit")) try {
   console.log(`edit, beam-column: not measured: ${report.errors.edit_beam_column}`);
 }
 
+for (const [key, id, what] of [
+  ["model_edit", "TD-1", "column model whose alpha_cr scales with the length"],
+  ["model_edit_springs", "TD-2", "column model with springs and loads at levels"],
+]) {
+  if (!wanted("model")) break;
+  try {
+    const m = await measureModelEdits(id);
+    report[key] = {
+      member: id,
+      edits: m.times.length,
+      median_ms: median(m.times),
+      p90_ms: quantile(m.times, 0.9),
+      max_ms: Math.max(...m.times),
+      samples_ms: m.times.map((x) => Math.round(x * 100) / 100),
+      recheck_ms: m.recheck.map((x) => Math.round(x * 100) / 100),
+      whatif_median_ms: median(m.whatif),
+      whatif_samples_ms: m.whatif.map((x) => Math.round(x * 100) / 100),
+    };
+    const r = report[key];
+    console.log(`edit, ${what}: to redrawn shape ${fmt(r.median_ms, 2)} ms (median of ${r.edits}, p90 ${fmt(r.p90_ms, 2)}, max ${fmt(r.max_ms, 2)}); What if in after ${fmt(r.whatif_median_ms, 1)} ms`);
+  } catch (e) {
+    report.errors[key] = String(e.message || e).split("\n")[0];
+    console.log(`edit, ${what}: not measured: ${report.errors[key]}`);
+  }
+}
+
 const thousandCli = wanted("thousand") ? cliThousand() : {};
 if (wanted("thousand")) try {
   const th = await measureThousand();
@@ -463,6 +510,8 @@ const fr = report.first_render || {};
 const sl = report.slow || {};
 const ed = report.edit || {};
 const eb = report.edit_beam_column || {};
+const me = report.model_edit || {};
+const ms = report.model_edit_springs || {};
 const th = report.thousand || { cli: thousandCli };
 const sz = report.sizing || {};
 const lines = [
@@ -490,6 +539,9 @@ const lines = [
   `| edit: recheck until the result text changes (median) | ${fmt(ed.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(ed.dom_median_ms, TARGETS.edit_ms)} |`,
   `| edit of a beam-column: recheck and redraw of the interaction chart to next frame (median of ${eb.edits ?? 0}) | ${fmt(eb.frame_median_ms, 2)} ms (p90 ${fmt(eb.frame_p90_ms, 2)}) | ≤ ${TARGETS.edit_ms} ms | ${verdict(eb.frame_median_ms, TARGETS.edit_ms)} |`,
   `| edit of a beam-column: recheck until the result text changes (median) | ${fmt(eb.dom_median_ms, 2)} ms | ≤ ${TARGETS.edit_ms} ms | ${verdict(eb.dom_median_ms, TARGETS.edit_ms)} |`,
+  `| edit of a column model (stepped, braced, load along the length: alpha_cr scales with length): to the redrawn buckled shapes' next frame (median of ${me.edits ?? 0}) | ${fmt(me.median_ms, 2)} ms (p90 ${fmt(me.p90_ms, 2)}) | ≤ ${TARGETS.model_ms} ms | ${verdict(me.median_ms, TARGETS.model_ms)} |`,
+  `| edit of a column model with springs and loads at levels: to the redrawn buckled shapes' next frame (median of ${ms.edits ?? 0}) | ${fmt(ms.median_ms, 2)} ms (p90 ${fmt(ms.p90_ms, 2)}) | ≤ ${TARGETS.model_ms} ms | ${verdict(ms.median_ms, TARGETS.model_ms)} |`,
+  `| the same two: edit until What if (worked after the frame) is in (median) | ${fmt(me.whatif_median_ms, 1)} ms; with springs ${fmt(ms.whatif_median_ms, 1)} ms | (no target) | |`,
   `| 1,000-member list: re-check of every member (engine, in the page; median of ${th.runs?.length ?? 0}) | ${fmt(th.recheck_median_ms, 2)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.recheck_median_ms, TARGETS.thousand_ms)} |`,
   `| 1,000-member list: module ready to first frame, rows in view built (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
   `| lightest that works: 1,000 members against the 265 I/H sections (median of ${sz.runs?.length ?? 0}) | ${fmt(sz.median_ms)} ms | ≤ ${TARGETS.sizing_ms} ms | ${verdict(sz.median_ms, TARGETS.sizing_ms)} |`,
@@ -507,6 +559,11 @@ const lines = [
   "  60 Hz, so the frame figure includes up to one frame of waiting for the clock. The beam-column rows: the",
   "  same on the demo's steel column C1 (EN 1993-1-1) given end moments about both axes (2 and -1 kNm major,",
   "  0.5 kNm minor), so each edit re-checks it and redraws its interaction chart (both axes' curves, some 300 checks).",
+  "- Column model: a stored list of two invented stepped columns (tests/browser/lib.mjs `modelColumns`), one",
+  "  selected; its load along the length (#cm-distributed) set 30 times (an input event, as typing gives); the",
+  "  time until the panel's canvas has been drawn again (its `data-drawn` counter) and the next animation frame",
+  "  has started (lib.mjs `modelEditLoop`). What if is worked after that frame, so it is not in that figure;",
+  "  the next row is the time until it is in (`[data-testid=whatif-block]` no longer aria-busy).",
   "- 1,000 members: a stored workspace of 1,000 invented members of five shapes and all steel and timber",
   "  methods; from the mark `strutline-wasm-ready` (the module is compiled, `start()` is about to run)",
   "  to the first animation frame after the rows in view are in the page, the list's scrolling box filled (the list",

@@ -12,7 +12,7 @@
 import assert from "node:assert/strict";
 import { writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { setField, STORAGE_KEY } from "./lib.mjs";
+import { modelEditLoop, setField, STORAGE_KEY } from "./lib.mjs";
 
 const LANDSCAPE = { viewport: { width: 1180, height: 820 }, hasTouch: true, deviceScaleFactor: 1 };
 const PORTRAIT = { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
@@ -96,31 +96,9 @@ export function register(test, { withApp, open, OUT }) {
       assert.ok(majorPx > 10 && minorPx > 10, `both buckled shapes drawn: ${shapes}`);
       assert.match(braced.text, /buckling length/);
 
-      // Edit to redrawn shape: type a distributed load, time from the key
-      // press to the frame after the canvas was drawn.
-      const times = [];
-      const recheck = [];
-      for (const v of ["1", "1.5", "2", "2.5", "3", "3.5", "4", "4.5", "5", "1.2"]) {
-        const field = page.locator("#cm-distributed");
-        await field.click();
-        await page.keyboard.press("ControlOrMeta+A");
-        await page.keyboard.press("Backspace");
-        const b = await drawCount(page);
-        const ms = await page.evaluate(async ({ value, b }) => {
-          const el = document.getElementById("cm-distributed");
-          const t0 = performance.now();
-          el.value = value;
-          el.dispatchEvent(new Event("input", { bubbles: true }));
-          const canvas = document.querySelector("[data-testid=cm-canvas]");
-          while (Number(canvas.dataset.drawn || 0) <= b) {
-            await new Promise((r) => setTimeout(r, 0));
-          }
-          await new Promise((r) => requestAnimationFrame(r));
-          return performance.now() - t0;
-        }, { value: v, b });
-        times.push(ms);
-        recheck.push(await page.evaluate(() => window.strutlineRecheck?.ms ?? NaN));
-      }
+      // Edit to redrawn shape: set a distributed load, time from the edit
+      // to the frame after the canvas was drawn (lib.mjs modelEditLoop).
+      const { times, recheck } = await page.evaluate(modelEditLoop, ["1", "1.5", "2", "2.5", "3", "3.5", "4", "4.5", "5", "1.2"]);
       times.sort((a, b) => a - b);
       const median = (times[4] + times[5]) / 2;
       console.log(`    column model: edit to redrawn shape, 10 edits: median ${median.toFixed(1)} ms, max ${times[9].toFixed(1)} ms`);
@@ -147,6 +125,53 @@ export function register(test, { withApp, open, OUT }) {
       assert.equal(await page.locator("[data-testid=cm-brace-0]").count(), 1);
       const again = await alphas(page);
       assert.equal(again.text, loaded.text, "the same analysis after the reload");
+
+      // US units: springs in kip/in and kip·ft/rad, the line load in
+      // kip/ft, positions in ft; what is typed is stored in kN/mm.
+      await page.click("[data-testid=units-toggle]");
+      await page.locator("[data-testid=cm-canvas][data-shapes='2']").waitFor({ timeout: 10_000 });
+      const unitOf = (id) => page.locator(`#${id} + span.unit`).innerText();
+      assert.equal(await unitOf("cm-distributed"), "kip/ft");
+      assert.equal(await unitOf("cm-brace-0-at"), "ft");
+      before = await drawCount(page);
+      await page.locator("#cm-end-b-major-move").selectOption("spring");
+      await drawnAfter(page, before);
+      await page.locator("#cm-end-b-major-move-k").waitFor();
+      assert.equal(await unitOf("cm-end-b-major-move-k"), "kip/in");
+      before = await drawCount(page);
+      await page.locator("#cm-end-a-minor-turn").selectOption("spring");
+      await drawnAfter(page, before);
+      await page.locator("#cm-end-a-minor-turn-k").waitFor();
+      assert.equal(await unitOf("cm-end-a-minor-turn-k"), "kip·ft/rad");
+      // 10 kip/in = 10 x 4.4482216152605 kN / 25.4 mm = 1.75126835... kN/mm.
+      await typeInto(page, "cm-end-b-major-move-k", "10");
+      await page.waitForFunction(
+        (k) => /"translation":\s*1\.75126835/.test(localStorage.getItem(k) || ""),
+        STORAGE_KEY,
+        { timeout: 10_000 },
+      );
+      assert.match(await resultText(page), /kip/);
+
+      // The calc sheet prints the model: its tables, the column drawn with
+      // both buckled shapes (the panel's drawing, as SVG), alpha_cr per axis.
+      await page.click("[data-testid=open-sheet]");
+      await page.locator("[data-testid=calc-sheet]").waitFor();
+      const sheetPage = page.locator("[data-testid=sheet-page]", { hasText: "Member GANTRY-4" });
+      const drawing = sheetPage.locator("[data-testid=sheet-column] svg");
+      assert.equal(await drawing.count(), 1, "the column drawn on the member's page");
+      assert.ok((await drawing.locator("polyline").count()) >= 2, "both buckled shapes");
+      const analysisRows = await sheetPage.locator("[data-testid=sheet-model-analysis] tbody tr").count();
+      assert.equal(analysisRows, 2, "alpha_cr about each axis");
+      const sheetText = await sheetPage.innerText();
+      assert.match(sheetText, /spring 10 kip\/in/);
+      assert.match(sheetText, /Segment \d of 2 governs, at N_Ed = /);
+      assert.match(sheetText, /in segment \d of 2 \(from end A\), which governs/);
+      await sheetPage.locator("[data-testid=sheet-column]").scrollIntoViewIfNeeded();
+      await sheetPage.screenshot({ path: join(OUT, "calc-sheet-column-model.png") });
+      await page.emulateMedia({ media: "print" });
+      writeFileSync(join(OUT, "calc-sheet-column-model-A4.pdf"), await page.pdf({ format: "A4", printBackground: false }));
+      await page.emulateMedia({ media: "screen" });
+      await page.click("[data-testid=close-sheet]");
       assert.deepEqual(log.errors, []);
     }, LANDSCAPE);
   });

@@ -233,6 +233,78 @@ export const editLoop = async (n) => {
   return { dom, frame, timeouts };
 };
 
+/** Runs in the page (`page.evaluate(modelEditLoop, values)`): for each of
+ * `values`, sets the column-model panel's load along the length
+ * (#cm-distributed) and dispatches `input` (what typing gives), waits
+ * until the panel's canvas has been drawn again (its `data-drawn` counter,
+ * moved by the draw effect), then one animation frame; returns the
+ * milliseconds from the edit to that frame, one an edit (`times`), the
+ * app's list re-check time after each (`window.strutlineRecheck`), and the
+ * milliseconds from the edit until What if, worked after the frame, is in
+ * (`whatif`: [data-testid=whatif-block] no longer aria-busy). */
+export const modelEditLoop = async (values) => {
+  const times = [];
+  const recheck = [];
+  const whatif = [];
+  const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value").set;
+  for (const value of values) {
+    const el = document.getElementById("cm-distributed");
+    const canvas = document.querySelector("[data-testid=cm-canvas]");
+    const before = Number(canvas.dataset.drawn || 0);
+    const t0 = performance.now();
+    setter.call(el, value);
+    el.dispatchEvent(new Event("input", { bubbles: true }));
+    while (Number(canvas.dataset.drawn || 0) <= before) {
+      await new Promise((r) => setTimeout(r, 0));
+    }
+    await new Promise((r) => requestAnimationFrame(r));
+    times.push(performance.now() - t0);
+    recheck.push(window.strutlineRecheck?.ms ?? NaN);
+    // What if is worked after the frame: the time until it is in, before
+    // the next edit.
+    const block = document.querySelector("[data-testid=whatif-block]");
+    while (block && block.getAttribute("aria-busy") !== "false") {
+      await new Promise((r) => setTimeout(r, 0));
+    }
+    whatif.push(performance.now() - t0);
+    await new Promise((r) => setTimeout(r, 5));
+  }
+  return { times, recheck, whatif };
+};
+
+/** Invented columns with a buckling model for the edit measurement, of a
+ * made-up tram depot: a stepped column (HE 300 B to 6 m, HE 200 B above),
+ * foot fixed about the major axis, a rigid minor-axis brace at mid-height,
+ * a load along the length only (its alpha_cr scales exactly with the
+ * length); and the same with springs (a sway spring at the top about the
+ * major axis, the brace a spring) and loads at two levels as well. */
+export function modelColumns() {
+  const base = (id, extra) => ({
+    id,
+    section: { kind: "catalogue", designation: "HE 300 B" },
+    material: { grade: "S355" },
+    length_mm: 9000,
+    axial_kn: 500,
+    method: "en1993-1-1",
+    buckling_model: {
+      segments: [{ length_mm: 6000 }, { length_mm: 3000, section: { kind: "catalogue", designation: "HE 200 B" } }],
+      ends: {
+        a: { major: { translation: "fixed", rotation: "fixed" }, minor: { translation: "fixed", rotation: "free" } },
+        b: { major: { translation: "fixed", rotation: "free" }, minor: { translation: "fixed", rotation: "free" } },
+      },
+      restraints: [{ at_mm: 4500, axis: "minor", translation: "fixed" }],
+      distributed_kn_per_m: 1.2,
+      ...extra,
+    },
+  });
+  const sprung = base("TD-2", {
+    restraints: [{ at_mm: 4500, axis: "minor", translation: 15 }],
+    axial_loads: [{ at_mm: 6000, axial_kn: 380 }, { at_mm: 9000, axial_kn: 120 }],
+  });
+  sprung.buckling_model.ends.b.major.translation = 4;
+  return [base("TD-1", {}), sprung];
+}
+
 /** A workspace text as the app stores it. */
 export function workspaceText(lists) {
   return JSON.stringify({ revision: 1, format: "strutline.workspace", version: 1, active: 0, lists });

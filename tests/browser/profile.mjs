@@ -8,7 +8,10 @@
 //   edit:          `--runs` edits of the design load of the demo's first
 //                  member (a compression member), as bench.mjs times them;
 //   edit-moments:  the same on a member with moments (the interaction
-//                  chart is drawn on each edit).
+//                  chart is drawn on each edit);
+//   model-edit:    `--runs` edits of the load along the length of a column
+//                  model (lib.mjs modelColumns, `--member TD-1` or TD-2),
+//                  as bench.mjs times them (modelEditLoop), What if included.
 // Prints the functions with the most time of their own and the most time
 // under them (self + callees). Function names are there only in a build
 // that keeps them: `cargo xtask dist --keep-names` (dist-names/), served
@@ -20,6 +23,8 @@ import {
   arg,
   editLoop,
   firstPage,
+  modelColumns,
+  modelEditLoop,
   launch,
   memberFile,
   MOMENTS_POST,
@@ -34,8 +39,9 @@ const CASE = arg("--case", "edit");
 const RUNS = Number(arg("--runs", "30"));
 const TOP = Number(arg("--top", "40"));
 const SAVE = arg("--save");
-if (!URL_ARG || !["thousand", "edit", "edit-moments"].includes(CASE)) {
-  console.error("usage: node profile.mjs --url URL --case thousand|edit|edit-moments [--runs N] [--top N] [--save FILE]");
+const MEMBER = arg("--member", "TD-1");
+if (!URL_ARG || !["thousand", "edit", "edit-moments", "model-edit"].includes(CASE)) {
+  console.error("usage: node profile.mjs --url URL --case thousand|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID]");
   process.exit(2);
 }
 
@@ -83,6 +89,8 @@ try {
     await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers())]));
   } else if (CASE === "edit-moments") {
     await seedStorage(context, workspaceText([memberFile("Cider-press house (invented)", [MOMENTS_POST])]));
+  } else if (CASE === "model-edit") {
+    await seedStorage(context, workspaceText([memberFile("Tram depot (invented)", modelColumns())]));
   }
   const page = await firstPage(context);
   const cdp = await context.newCDPSession(page);
@@ -99,6 +107,14 @@ try {
       mounted: performance.getEntriesByName("strutline-mounted")[0]?.startTime ?? null,
     }));
     note = `module ready at ${marks.ready?.toFixed(1)} ms, start() returned at ${marks.mounted?.toFixed(1)} ms`;
+  } else if (CASE === "model-edit") {
+    await openForEditing(page, URL_ARG, `[data-testid=member-row][data-id="${MEMBER}"]`);
+    await page.locator("[data-testid=cm-canvas][data-shapes='2']").waitFor({ timeout: 10_000 });
+    await cdp.send("Profiler.start");
+    const values = Array.from({ length: RUNS }, (_, i) => (1 + (i % 10) * 0.25 + i * 0.001).toFixed(3));
+    const r = await page.evaluate(modelEditLoop, values);
+    const med = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
+    note = `${r.times.length} edits of ${MEMBER}'s model under the profiler: to the redrawn shape's frame median ${med(r.times).toFixed(2)} ms, What if in median ${med(r.whatif).toFixed(2)} ms`;
   } else {
     await openForEditing(page, URL_ARG);
     await cdp.send("Profiler.start");

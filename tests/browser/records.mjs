@@ -176,6 +176,10 @@ test("whatif-every-method-and-longest-length", () =>
     );
     assert.ok(at >= 0, "the demo has a member without typed buckling lengths");
     await page.locator("[data-testid=member-row]").nth(at).click();
+    // What if is worked after the frame that shows the member: wait until
+    // it is this member's.
+    const settled = page.locator("[data-testid=whatif-block][aria-busy=false]");
+    await settled.waitFor();
     const whatif = page.locator("[data-testid=whatif]");
     await whatif.waitFor();
     const rows = await whatif.locator("table.compare tbody tr").count();
@@ -195,6 +199,7 @@ test("whatif-every-method-and-longest-length", () =>
     );
     const u = Number(await page.locator("[data-testid=result-utilisation]").textContent());
     assert.ok(u <= 1.001 && u >= 0.998, `utilisation ${u} at the longest length ${mm} mm`);
+    await settled.waitFor();
     const largest = await page.locator("[data-testid=largest-load] b").textContent();
     const rd = await resistance(page);
     assert.equal(number(largest), rd.value, "the largest load is the resistance at this length");

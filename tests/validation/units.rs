@@ -147,6 +147,9 @@ fn every_quantity_round_trips_in_both_systems() {
         Quantity::Force,
         Quantity::Stress,
         Quantity::Moment,
+        Quantity::Stiffness,
+        Quantity::RotationalStiffness,
+        Quantity::LineLoad,
         Quantity::Dimensionless,
     ];
     let mut seed: u64 = 0x2545_f491_4f6c_dd1d;
@@ -173,4 +176,45 @@ fn every_quantity_round_trips_in_both_systems() {
     assert_close(back, 4114.8, FLOAT, "13 ft 6 in in mm");
     let back = units::from_display(UnitSystem::Us, Quantity::Length, 0.5);
     assert_close(back, 12.7, FLOAT, "1/2 in in mm");
+}
+
+#[test]
+fn spring_stiffnesses_and_line_loads_follow_from_the_definitions() {
+    // 1 kip/in = 4448.2216152605 N / 25.4 mm = 175.126835246... N/mm
+    // = 0.175126835246 kN/mm (1959 pound and inch, standard gravity).
+    assert_close(
+        units::key_from_display(UnitSystem::Us, "spring_kn_per_mm", 1.0),
+        4.448_221_615_260_5 / 25.4,
+        FLOAT,
+        "1 kip/in in kN/mm",
+    );
+    // NIST SP 811 B.8, pound-force per inch -> newton per meter
+    // 1.751 268 E+02: 1 kip/in = 1.751268e5 N/m = 175.1268 kN/m = 0.1751268 kN/mm.
+    assert_close(
+        units::key_from_display(UnitSystem::Us, "spring_kn_per_mm", 1.0),
+        0.175_126_8,
+        NIST_7_FIGURES,
+        "NIST lbf/in",
+    );
+    // NIST SP 811 B.8, pound-force per foot -> newton per meter 1.459 390
+    // E+01: 1 kip/ft = 14.59390 kN/m.
+    assert_close(
+        units::key_from_display(UnitSystem::Us, "distributed_kn_per_m", 1.0),
+        14.593_90,
+        NIST_7_FIGURES,
+        "NIST lbf/ft",
+    );
+    // A rotational stiffness is a moment per radian: 1 kip-ft/rad is
+    // 1 kip-ft (1.355 818 kN·m, NIST SP 811 B.8 pound-force foot -> newton
+    // meter 1.355 818 E+00) per radian.
+    assert_close(
+        units::key_from_display(UnitSystem::Us, "spring_knm_per_rad", 1.0),
+        1.355_818,
+        NIST_7_FIGURES,
+        "NIST lbf-ft",
+    );
+    assert_eq!(
+        units::display_unit(UnitSystem::Us, Quantity::RotationalStiffness),
+        "kip·ft/rad"
+    );
 }

@@ -208,11 +208,28 @@ pub fn device_pixel_ratio() -> f64 {
 
 /// Sizes a canvas's bitmap to its CSS size times the device pixel ratio
 /// (only when that changed: resizing reallocates the bitmap) and returns
-/// the ratio, for a chart drawn in device pixels.
-pub fn fit_canvas(el: &web_sys::HtmlCanvasElement) -> f64 {
+/// the ratio, for a chart drawn in device pixels. The CSS size is read
+/// (`clientWidth`, which forces a layout of the page mid-script) only when
+/// `resized`, the app's count of window resizes and layout changes, moved
+/// since it was last read for this canvas, and kept on the element
+/// (`data-css-size`) in between: a redraw after an edit then costs no
+/// layout of its own (a profile of 20 column-model edits had 25 ms an edit
+/// in these reads, `bench/column-model.md`).
+pub fn fit_canvas(el: &web_sys::HtmlCanvasElement, resized: u64) -> f64 {
     let dpr = device_pixel_ratio();
-    let w = f64::from(el.client_width().max(1));
-    let h = f64::from(el.client_height().max(1));
+    let kept = el.get_attribute("data-css-size").and_then(|t| {
+        let mut it = t.split(',').map(str::parse::<f64>);
+        match (it.next(), it.next(), it.next()) {
+            (Some(Ok(g)), Some(Ok(w)), Some(Ok(h))) if g == resized as f64 => Some((w, h)),
+            _ => None,
+        }
+    });
+    let (w, h) = kept.unwrap_or_else(|| {
+        let w = f64::from(el.client_width().max(1));
+        let h = f64::from(el.client_height().max(1));
+        let _ = el.set_attribute("data-css-size", &format!("{resized},{w},{h}"));
+        (w, h)
+    });
     let (bw, bh) = ((w * dpr).round() as u32, (h * dpr).round() as u32);
     if el.width() != bw {
         el.set_width(bw);

@@ -96,34 +96,48 @@ impl Checker {
             ..Refreshed::default()
         };
         let mut budget = limit;
-        let work = |m: &Member, out: &mut Refreshed, budget: &mut usize| {
-            if *budget == 0 {
-                out.waiting += 1;
-                return Arc::new(Checked::waiting(m));
-            }
-            *budget -= 1;
-            out.fresh += 1;
-            Arc::new(Checked::new(m))
-        };
-        let first = urgent
-            .and_then(|i| members.get(i))
-            .map(|m| match old.remove(&m.id) {
-                Some(c) if c.member == *m && c.outcome.is_some() => c,
-                _ => {
-                    let mut any = usize::MAX;
-                    work(m, &mut out, &mut any)
+        // A member's earlier entry: kept when its check is still good;
+        // a waiting one is kept while the member waits (not copied again
+        // on every slice).
+        let work =
+            |m: &Member, before: Option<Arc<Checked>>, out: &mut Refreshed, budget: &mut usize| {
+                match before {
+                    Some(c) if c.member == *m && c.outcome.is_some() => return c,
+                    Some(c) if c.member == *m && *budget == 0 => {
+                        out.waiting += 1;
+                        return c;
+                    }
+                    _ => {}
                 }
-            });
-        let mut first = first.map(|c| (urgent.unwrap_or(usize::MAX), c));
-        for (i, m) in members.iter().enumerate() {
-            let c = match first.take_if(|(at, _)| *at == i) {
-                Some((_, c)) => c,
-                None => match old.remove(&m.id) {
-                    Some(c) if c.member == *m && c.outcome.is_some() => c,
-                    _ => work(m, &mut out, &mut budget),
-                },
+                if *budget == 0 {
+                    out.waiting += 1;
+                    return Arc::new(Checked::waiting(m));
+                }
+                *budget -= 1;
+                out.fresh += 1;
+                Arc::new(Checked::new(m))
             };
-            self.cache.insert(m.id.clone(), Arc::clone(&c));
+        // The earlier entry of an id, with its key (reused, not copied).
+        let mut take = |id: &str| {
+            old.remove_entry(id)
+                .map_or((None, None), |(k, c)| (Some(k), Some(c)))
+        };
+        let mut first = urgent.and_then(|i| {
+            let m = members.get(i)?;
+            let mut any = usize::MAX;
+            let (key, before) = take(&m.id);
+            Some((i, key, work(m, before, &mut out, &mut any)))
+        });
+        for (i, m) in members.iter().enumerate() {
+            let (key, c) = match first.take_if(|(at, _, _)| *at == i) {
+                Some((_, key, c)) => (key, c),
+                None => {
+                    let (key, before) = take(&m.id);
+                    (key, work(m, before, &mut out, &mut budget))
+                }
+            };
+            let key = key.unwrap_or_else(|| m.id.clone());
+            self.cache.insert(key, Arc::clone(&c));
             out.checks.push(c);
         }
         out
@@ -179,6 +193,10 @@ mod tests {
         assert!(
             Arc::ptr_eq(&a.checks[20], &b.checks[20]),
             "kept, not worked again"
+        );
+        assert!(
+            Arc::ptr_eq(&a.checks[25], &b.checks[25]) && b.checks[25].outcome.is_none(),
+            "still waiting: the same entry, not a new copy"
         );
         let done = c.refresh(&ms, None, usize::MAX);
         assert_eq!((done.fresh, done.waiting), (9, 0));

@@ -19,6 +19,7 @@ pub mod framing;
 pub mod html;
 pub mod listops;
 pub mod modelform;
+pub mod modelsheet;
 pub mod numtext;
 pub mod picker;
 pub mod print;

@@ -134,6 +134,9 @@ fn flatten(v: &Value, out: &mut Vec<(String, Value)>) {
     for (k, v) in obj {
         let prefix = match schema::member_key(k).map(|d| d.value) {
             Some(Holds::Group { prefix, .. }) => Some(prefix),
+            // A structure (the buckling model) has its own part of the
+            // sheet (`modelsheet`), not input lines.
+            Some(Holds::Structure) => continue,
             _ => None,
         };
         match (v, prefix) {

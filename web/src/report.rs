@@ -25,7 +25,7 @@ use crate::html;
 use crate::html::Html;
 use crate::numtext::{fixed, working};
 use crate::status::{governing_text, status_text, utilisation_text, Standing};
-use crate::units_view::{result_text, step_text};
+use crate::units_view::{result_text, span_text, step_text};
 
 /// The heading of a part of the working.
 pub fn scope_title(s: Scope) -> &'static str {
@@ -107,7 +107,7 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                  <dt>utilisation {}</dt><dd><span data-testid=\"result-utilisation\">{}</span></dd>\
                  <dt>governs</dt><dd data-testid=\"result-governing\">{}</dd>\
                  <dt class=\"v-more\">resistance N_Rd</dt><dd class=\"v-more\"><span data-testid=\"result-resistance\">{}</span> {}</dd>\
-                 <dt class=\"v-more\">design load N_Ed</dt><dd class=\"v-more\">{}</dd>\
+                 <dt class=\"v-more\">design load N_Ed</dt><dd class=\"v-more\" data-testid=\"result-load\">{}</dd>\
                  <dt class=\"v-more\">method</dt><dd class=\"v-more\">{}</dd></dl></div>",
                 if r.bending.is_some() {
                     "(largest)"
@@ -118,7 +118,7 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                 governing_text(r),
                 rd,
                 ru,
-                result_text(sys, "kN", c.member.axial_kn, 1),
+                load_text(r, sys),
                 r.method.title(),
             );
             // On the sheet the tables follow the verdict; in the app they
@@ -131,6 +131,21 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
         }
     }
     h
+}
+
+/// The design load a result was checked at, and for a buckling model the
+/// segment whose force it is ("604.3 kN in segment 1 of 2, which
+/// governs").
+pub fn load_text(r: &CheckResult, sys: UnitSystem) -> String {
+    let n = result_text(sys, "kN", r.axial_kn, 1);
+    match r.segment {
+        Some(s) if s.count > 1 => format!(
+            "{n} in segment {} of {} (from end A), which governs; each segment is checked at its own force",
+            s.index, s.count
+        ),
+        Some(_) => format!("{n}, the largest compression of the column model's loads"),
+        None => n,
+    }
 }
 
 /// The tables of the checks beyond compression: bending per axis and the
@@ -442,12 +457,6 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
     h
 }
 
-/// A member length in the display units (mm in SI, ft in US).
-fn span_text(sys: UnitSystem, mm: f64) -> String {
-    let (v, u) = crate::units_view::shown(sys, "mm", mm, true);
-    format!("{} {u}", working(v))
-}
-
 /// The section properties a result reports, as a definition list.
 fn properties_html(r: &CheckResult, sys: UnitSystem) -> Html {
     let p = &r.section;
@@ -517,10 +526,13 @@ pub fn sheet_html(
         sys_name(sys),
     );
     for c in checks {
-        let rd = match &c.outcome {
-            Some(Ok(r)) => result_text(sys, "kN", r.resistance_kn, 1),
-            Some(Err(_)) => "—".into(),
-            None => "…".into(),
+        let (ed, rd) = match &c.outcome {
+            Some(Ok(r)) => (
+                result_text(sys, "kN", r.axial_kn, 1),
+                result_text(sys, "kN", r.resistance_kn, 1),
+            ),
+            Some(Err(_)) => (result_text(sys, "kN", c.member.axial_kn, 1), "—".into()),
+            None => (result_text(sys, "kN", c.member.axial_kn, 1), "…".into()),
         };
         html!(
             h,
@@ -529,7 +541,7 @@ pub fn sheet_html(
             c.member.id,
             c.member.section.describe(),
             c.member.method.title(),
-            result_text(sys, "kN", c.member.axial_kn, 1),
+            ed,
             rd,
             utilisation_text(&c.outcome),
             status_text(&c.outcome),
@@ -565,8 +577,11 @@ pub fn sheet_html(
             );
         }
         h.lit("</tbody></table>");
-        // The moment diagrams as understood, beside the inputs they draw.
+        // The moment diagrams as understood, beside the inputs they draw;
+        // a column in a frame and a buckling model, drawn with its
+        // buckled shapes.
         h.push(&crate::diagram::svg(&c.member, sys));
+        h.push(&crate::modelsheet::html(&c.member, c.result(), sys));
         if let Some(r) = c.result() {
             h.lit("<h3>Section and material</h3>");
             h.push(&properties_html(r, sys));
@@ -784,6 +799,48 @@ mod tests {
         )
         .into_string();
         assert!(sheet.contains("data-testid=\"moment-diagram\""), "{sheet}");
+    }
+
+    #[test]
+    fn a_modelled_member_shows_the_governing_segment_and_its_force() {
+        let m = &crate::chart::column::tests::stepped_column();
+        let c = Checked::new(m);
+        let r = c.result().unwrap();
+        let s = r.segment.unwrap();
+        // The verdict's N_Ed is the force the governing segment was
+        // checked at (the model's loads), not the member's axial_kn.
+        let h = verdict_html(&c, UnitSystem::Si).into_string();
+        let want = format!(
+            "data-testid=\"result-load\">{} in segment {} of {}",
+            result_text(UnitSystem::Si, "kN", r.axial_kn, 1),
+            s.index,
+            s.count
+        );
+        assert!(h.contains(&want), "{want}: {h}");
+        // The working's N_Ed is the same force.
+        let n_ed = r.trace.iter().find(|t| t.symbol == "N_Ed").unwrap();
+        assert_eq!(n_ed.value, r.axial_kn);
+        // The sheet: its summary's N_Ed alike, the model printed with its
+        // drawing, and no input line made of the model's inner keys.
+        let sheet = sheet_html(
+            "Hall",
+            &SheetHeader::default(),
+            &[Arc::new(c.clone())],
+            None,
+            UnitSystem::Si,
+        )
+        .into_string();
+        assert!(
+            sheet.contains(&format!(
+                "<td class=\"num\">{}</td>",
+                result_text(UnitSystem::Si, "kN", r.axial_kn, 1)
+            )),
+            "{sheet}"
+        );
+        assert!(sheet.contains("data-testid=\"sheet-column\""));
+        for junk in [">translation<", ">segments<", "\"length_mm\""] {
+            assert!(!sheet.contains(junk), "{junk}");
+        }
     }
 
     #[test]

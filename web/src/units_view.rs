@@ -82,6 +82,13 @@ pub fn result_text(system: UnitSystem, unit: &'static str, v: f64, decimals: usi
     format!("{n} {u}")
 }
 
+/// A member length or position in the display units (mm in SI, ft in US),
+/// to the working's figures.
+pub fn span_text(system: UnitSystem, mm: f64) -> String {
+    let (v, u) = shown(system, "mm", mm, true);
+    format!("{} {u}", working(v))
+}
+
 /// The unit of an editor field with member-file key `key`.
 pub fn field_unit(system: UnitSystem, key: &str, si_unit: &'static str) -> &'static str {
     match (system, Quantity::of_key(key)) {

@@ -4,8 +4,8 @@
 //!
 //! `{"format": "strutline.workspace", "version": 1, "revision": n,
 //! "active": i, "lists": [MEMBER FILE, ...]}`; each list is read with
-//! [`strutline_core::file::from_value`], so lists of older member-file versions
-//! migrate.
+//! [`strutline_core::file::from_parsed`] from the parsed text, so lists of
+//! older member-file versions migrate.
 
 use serde_json::{Map, Value};
 use strutline_core::file::{self, MemberFile};
@@ -87,9 +87,22 @@ pub fn peek_revision(text: &str) -> Option<u64> {
     v.get("revision").and_then(Value::as_u64)
 }
 
+/// The parsed JSON of stored text, kept by [`decode_keeping`] so that the
+/// caller frees it when it suits (the app: after its first frame; freeing
+/// a 1,000-member list's tree is a good part of reading it).
+#[derive(Debug)]
+pub struct Parsed {
+    _tree: Value,
+}
+
 /// Reads stored text. The error says, in words, why it cannot be used.
 pub fn decode(text: &str) -> Result<Workspace, String> {
-    let mut value: Value = serde_json::from_str(text)
+    decode_keeping(text).map(|(ws, _)| ws)
+}
+
+/// [`decode`], handing back the parsed text with the workspace.
+pub fn decode_keeping(text: &str) -> Result<(Workspace, Parsed), String> {
+    let value: Value = serde_json::from_str(text)
         .map_err(|e| format!("the saved workspace is not valid JSON ({e})"))?;
     let obj: &Map<String, Value> = value
         .as_object()
@@ -126,26 +139,26 @@ pub fn decode(text: &str) -> Result<Workspace, String> {
             .ok_or("the saved workspace's \"active\" is not a whole number")?
             as usize,
     };
-    let raw_lists = match value.get_mut("lists") {
-        Some(Value::Array(a)) => std::mem::take(a),
+    let raw_lists = match value.get("lists") {
+        Some(Value::Array(a)) => a,
         _ => return Err("the saved workspace has no \"lists\" array".into()),
     };
     let mut lists = Vec::with_capacity(raw_lists.len());
-    for (i, raw) in raw_lists.into_iter().enumerate() {
+    for (i, raw) in raw_lists.iter().enumerate() {
         let title = raw
             .get("title")
             .and_then(Value::as_str)
             .unwrap_or("")
             .to_string();
         // Read from the parsed value: the text is not written and read again.
-        let list = file::from_value(raw)
+        let list = file::from_parsed(raw)
             .map_err(|e| format!("list {} (\"{title}\") cannot be read: {e}", i + 1))?;
         lists.push(list);
     }
     let mut ws = Workspace::new(lists);
     ws.revision = revision;
     ws.active = active.min(ws.lists.len().saturating_sub(1));
-    Ok(ws)
+    Ok((ws, Parsed { _tree: value }))
 }
 
 #[cfg(test)]

@@ -121,6 +121,39 @@ pub struct Buckle {
     pub segments: Vec<SegmentBuckle>,
 }
 
+impl Buckle {
+    /// This result for the same column with every length and position
+    /// times `s` (stiffnesses, supports and loads kept), whose
+    /// [`Column::length_power`] is `Some(power)`: alpha_cr / s^power, the
+    /// critical forces / s^2, the buckling lengths and the shape's
+    /// positions times s, a distributed load's forces times s (power 3).
+    /// The discrete problem scales the same way (the mesh is by fractions
+    /// of the length), so this is the analysis of the longer column to the
+    /// bisection's tolerance.
+    pub fn lengthened(&self, s: f64, power: i32) -> Buckle {
+        let fall = s.powi(power);
+        let force = if power == 3 { s } else { 1.0 };
+        let critical = s * s;
+        Buckle {
+            load_factor: self.load_factor / fall,
+            critical_kn: self.critical_kn / critical,
+            buckling_length_mm: self.buckling_length_mm * s,
+            mode: self.mode.iter().map(|[x, d]| [x * s, *d]).collect(),
+            elements: self.elements,
+            load_factor_half: self.load_factor_half / fall,
+            segments: self
+                .segments
+                .iter()
+                .map(|g| SegmentBuckle {
+                    axial_kn: g.axial_kn * force,
+                    critical_kn: g.critical_kn / critical,
+                    buckling_length_mm: g.buckling_length_mm.map(|l| l * s),
+                })
+                .collect(),
+        }
+    }
+}
+
 /// The relative change of alpha_cr between meshes at which [`analyse`] stops.
 pub const CONVERGED: f64 = 1e-6;
 /// The first mesh of [`analyse`].
@@ -185,6 +218,31 @@ impl Column {
                 axial_kn: top_kn,
             }],
             distributed_kn_per_m: 0.0,
+        }
+    }
+
+    /// The power of the length scale by which alpha_cr falls when every
+    /// length and position of the column is multiplied by `s`, its bending
+    /// stiffnesses, supports and loads kept, where that is exact: with
+    /// point loads only, alpha_cr / s^2 (the elastic stiffness goes as
+    /// EI / L^3, the geometric as N / L); with a load along the length
+    /// only, alpha_cr / s^3 (its forces grow with s). `None` with a spring
+    /// (its stiffness does not scale with the length) or with both kinds of
+    /// load (their ratio changes with the length).
+    pub fn length_power(&self) -> Option<i32> {
+        let sprung = |f: Fixity| matches!(f, Fixity::Spring(k) if k != 0.0);
+        let ends = [self.a, self.b]
+            .iter()
+            .any(|s| sprung(s.translation) || sprung(s.rotation));
+        if ends || self.braces.iter().any(|b| sprung(b.translation)) {
+            return None;
+        }
+        let points = self.loads.iter().any(|l| l.axial_kn != 0.0);
+        let along = self.distributed_kn_per_m != 0.0;
+        match (points, along) {
+            (true, false) => Some(2),
+            (false, true) => Some(3),
+            _ => None,
         }
     }
 
@@ -743,6 +801,93 @@ mod tests {
     /// EI/L^2 in kN.
     fn unit() -> f64 {
         EI / (L * L) / 1000.0
+    }
+
+    #[test]
+    fn a_longer_column_is_the_shorter_scaled_where_that_is_exact() {
+        // A stepped column, fixed foot and pinned top, a rigid brace at a
+        // third: with point loads (power 2) and with a load along the
+        // length only (power 3), the analysis of the column 1.37 times as
+        // long equals the shorter's result scaled.
+        let base = |loads: Vec<Load>, q: f64, s: f64| Column {
+            axis: Axis::Minor,
+            length_mm: 6000.0 * s,
+            parts: vec![
+                Part {
+                    length_mm: 4000.0 * s,
+                    ei_nmm2: 3.0 * EI,
+                },
+                Part {
+                    length_mm: 2000.0 * s,
+                    ei_nmm2: EI,
+                },
+            ],
+            a: Support::FIXED,
+            b: Support::PINNED,
+            braces: vec![Brace {
+                index: 0,
+                at_mm: 2000.0 * s,
+                translation: Fixity::Fixed,
+            }],
+            loads: loads
+                .iter()
+                .map(|l| Load {
+                    at_mm: l.at_mm * s,
+                    ..*l
+                })
+                .collect(),
+            distributed_kn_per_m: q,
+        };
+        let points = vec![
+            Load {
+                index: 0,
+                at_mm: 4000.0,
+                axial_kn: 300.0,
+            },
+            Load {
+                index: 1,
+                at_mm: 6000.0,
+                axial_kn: 100.0,
+            },
+        ];
+        let s = 1.37;
+        for (loads, q, power) in [(points.clone(), 0.0, 2), (vec![], 2.5, 3)] {
+            let short = base(loads.clone(), q, 1.0);
+            assert_eq!(short.length_power(), Some(power));
+            let want = analyse(&base(loads, q, s)).unwrap();
+            let got = analyse(&short).unwrap().lengthened(s, power);
+            let close = |a: f64, b: f64| (a - b).abs() <= 1e-9 * b.abs();
+            assert!(
+                close(got.load_factor, want.load_factor),
+                "{} {}",
+                got.load_factor,
+                want.load_factor
+            );
+            assert!(close(got.critical_kn, want.critical_kn));
+            assert!(close(got.buckling_length_mm, want.buckling_length_mm));
+            assert_eq!(got.elements, want.elements);
+            for (g, w) in got.segments.iter().zip(&want.segments) {
+                assert!(close(g.axial_kn, w.axial_kn) && close(g.critical_kn, w.critical_kn));
+                assert!(close(
+                    g.buckling_length_mm.unwrap(),
+                    w.buckling_length_mm.unwrap()
+                ));
+            }
+            for (g, w) in got.mode.iter().zip(&want.mode) {
+                assert!(
+                    close(g[0], w[0]) && (g[1].abs() - w[1].abs()).abs() < 1e-6,
+                    "{g:?} {w:?}"
+                );
+            }
+        }
+        // Not exact, so not offered: a spring, or both kinds of load.
+        let mut sprung = base(points.clone(), 0.0, 1.0);
+        sprung.b.rotation = Fixity::Spring(50.0);
+        assert_eq!(sprung.length_power(), None);
+        let mut braced = base(points.clone(), 0.0, 1.0);
+        braced.braces[0].translation = Fixity::Spring(5.0);
+        assert_eq!(braced.length_power(), None);
+        assert_eq!(base(points, 1.0, 1.0).length_power(), None);
     }
 
     #[test]

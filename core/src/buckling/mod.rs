@@ -2,7 +2,8 @@
 //! a column in a frame from the alignment-chart equations ([`chart`]), and
 //! a finite-element elastic critical load analysis of a column with steps,
 //! end springs, intermediate braces and axial loads along it
-//! ([`column`]), on a banded solver of its own ([`band`]).
+//! ([`column`]), on a banded solver of its own ([`band`]), remembered per
+//! thread ([`memo`]).
 //!
 //! Nothing here knows about screens or files beyond the member-file types
 //! it reads; every refusal is a typed [`crate::Error`] naming the key.
@@ -10,6 +11,7 @@
 pub mod band;
 pub mod chart;
 pub mod column;
+pub mod memo;
 pub mod model;
 
 use serde::de::{self, Deserializer, Visitor};

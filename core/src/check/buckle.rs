@@ -6,7 +6,8 @@
 
 use serde::Serialize;
 
-use crate::buckling::column::{self, Brace, Buckle, Column, Load, Part};
+use crate::buckling::column::{Brace, Buckle, Column, Load, Part};
+use crate::buckling::memo;
 use crate::buckling::model::{BucklingModel, End};
 use crate::buckling::Axis;
 use crate::check::CheckResult;
@@ -145,8 +146,8 @@ pub fn buckle(member: &Member) -> Result<Option<MemberBuckle>> {
     let wrap = |e: Error| e.in_member(&member.id);
     let (section, material) = crate::check::resolve(member)?;
     let r = resolve(member, model, &section, material.strength_and_modulus().1).map_err(wrap)?;
-    let major = column::analyse(&column(member, model, &r, Axis::Major)).map_err(wrap)?;
-    let minor = column::analyse(&column(member, model, &r, Axis::Minor)).map_err(wrap)?;
+    let major = memo::analyse(&column(member, model, &r, Axis::Major)).map_err(wrap)?;
+    let minor = memo::analyse(&column(member, model, &r, Axis::Minor)).map_err(wrap)?;
     Ok(Some(MemberBuckle {
         id: member.id.clone(),
         major,
@@ -179,6 +180,56 @@ pub fn buckle_all(members: &[Member]) -> Result<BuckleReport> {
 /// it (pi sqrt(E I / (alpha_cr N))); the segment with the highest
 /// utilisation governs. The working opens with the analysis.
 pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
+    checked(input, method, None)
+}
+
+/// A member's analyses about both axes at its own length, kept for the
+/// trials of the same member at other lengths (`solve::longest_length`):
+/// each axis' result with the power by which its alpha_cr falls with the
+/// length where that is exact ([`Column::length_power`]).
+#[derive(Debug, Clone, PartialEq)]
+pub struct Lengthwise {
+    major: (Buckle, Option<i32>),
+    minor: (Buckle, Option<i32>),
+}
+
+/// The analyses of a member with a model, for [`check_lengthened`];
+/// `None` without a model, when neither axis scales exactly, or when the
+/// member cannot be analysed (the trials then report it as they would).
+pub fn lengthwise(input: &Input<'_>) -> Option<Lengthwise> {
+    let member = input.member;
+    let model = member.buckling_model.as_ref()?;
+    let (_, modulus) = input.material.strength_and_modulus();
+    let r = resolve(member, model, input.section, modulus).ok()?;
+    let axis = |a: Axis| {
+        let c = column(member, model, &r, a);
+        memo::analyse(&c).ok().map(|b| (b, c.length_power()))
+    };
+    let (major, minor) = (axis(Axis::Major)?, axis(Axis::Minor)?);
+    (major.1.is_some() || minor.1.is_some()).then_some(Lengthwise { major, minor })
+}
+
+/// [`check`] of `input`, whose member is the member of `base` with every
+/// length times `s` (`solve::scaled`): an axis whose alpha_cr scales
+/// exactly takes `base`'s result scaled ([`Buckle::lengthened`]), the
+/// other is analysed. The same result as [`check`] to the analysis'
+/// tolerance.
+pub fn check_lengthened(
+    input: &Input<'_>,
+    method: Method,
+    base: &Lengthwise,
+    s: f64,
+) -> Result<CheckResult> {
+    checked(input, method, Some((base, s)))
+}
+
+/// [`check`], each axis' analysis scaled from `scaled`'s where it scales
+/// exactly, else analysed (through the memo).
+fn checked(
+    input: &Input<'_>,
+    method: Method,
+    scaled: Option<(&Lengthwise, f64)>,
+) -> Result<CheckResult> {
     let member = input.member;
     let wrap = |e: Error| e.in_member(&member.id);
     let Some(model) = &member.buckling_model else {
@@ -186,8 +237,35 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     };
     let (_, modulus) = input.material.strength_and_modulus();
     let r = resolve(member, model, input.section, modulus).map_err(wrap)?;
-    let major = column::analyse(&column(member, model, &r, Axis::Major)).map_err(wrap)?;
-    let minor = column::analyse(&column(member, model, &r, Axis::Minor)).map_err(wrap)?;
+    let axis = |a: Axis| {
+        let from_base = scaled.and_then(|(base, s)| {
+            let (b, power) = match a {
+                Axis::Major => &base.major,
+                Axis::Minor => &base.minor,
+            };
+            power.map(|p| b.lengthened(s, p))
+        });
+        match from_base {
+            Some(b) => Ok(b),
+            None => memo::analyse(&column(member, model, &r, a)).map_err(wrap),
+        }
+    };
+    let major = axis(Axis::Major)?;
+    let minor = axis(Axis::Minor)?;
+    check_analysed(input, method, model, &r, &major, &minor)
+}
+
+/// The check of a member with a model given both axes' analyses.
+fn check_analysed(
+    input: &Input<'_>,
+    method: Method,
+    model: &BucklingModel,
+    r: &Resolved,
+    major: &Buckle,
+    minor: &Buckle,
+) -> Result<CheckResult> {
+    let member = input.member;
+    let wrap = |e: Error| e.in_member(&member.id);
     let mut best: Option<(usize, CheckResult)> = None;
     let mut warnings: Vec<Warning> = Vec::new();
     for (i, (y, z)) in major.segments.iter().zip(&minor.segments).enumerate() {
@@ -240,8 +318,8 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         Trace::off()
     };
     for (scope, b, sym_alpha) in [
-        (Scope::Major, &major, symbol!("alpha_cr,y", "-")),
-        (Scope::Minor, &minor, symbol!("alpha_cr,z", "-")),
+        (Scope::Major, major, symbol!("alpha_cr,y", "-")),
+        (Scope::Minor, minor, symbol!("alpha_cr,z", "-")),
     ] {
         put(
             &mut trace,
@@ -290,6 +368,15 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
         "-",
         "highest utilisation"
     );
+    step!(
+        &mut trace,
+        Scope::Member,
+        "N_Ed",
+        "design compression of the governing segment (its largest), from the model's loads",
+        result.axial_kn,
+        "kN",
+        "load pattern of the buckling_model"
+    );
     for s in std::mem::take(&mut result.trace).into_steps() {
         put(&mut trace, s.scope, s.symbol, s.label, s.value, s.clause);
     }
@@ -325,6 +412,10 @@ pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
     }
     result.warnings = warnings;
     result.id = member.id.clone();
+    result.segment = Some(crate::check::SegmentOf {
+        index: governing + 1,
+        count: r.lengths.len(),
+    });
     Ok(result)
 }
 
@@ -510,6 +601,16 @@ mod tests {
             major.critical_kn
         );
         assert!((minor.critical_kn - want_z).abs() < 1e-6 * want_z);
+        // The result names the governing segment and its force, the N_Ed
+        // it was checked at.
+        assert_eq!(
+            r.segment,
+            Some(crate::check::SegmentOf {
+                index: seg + 1,
+                count: 2
+            })
+        );
+        assert_eq!(r.axial_kn, b.major.segments[seg].axial_kn);
         assert!(r.warnings.iter().any(|w| w.code == "buckling-model"));
         assert!(!r.warnings.iter().any(|w| w.code == "axial-kn-from-model"));
         // Each segment checked on its own: the governing one has the

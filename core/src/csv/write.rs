@@ -73,18 +73,7 @@ pub fn left_out(file: &MemberFile) -> Option<String> {
 /// The US customary column for an SI key: member lengths in feet, other
 /// lengths in inches, then in2, in4, in6, kip, ksi, kip-ft.
 pub(super) fn us_column(key: &str) -> Option<(String, UsUnit)> {
-    let unit = match Quantity::of_key(key)? {
-        Quantity::Span => UsUnit::Ft,
-        Quantity::Length => UsUnit::In,
-        Quantity::Area => UsUnit::In2,
-        Quantity::Modulus => UsUnit::In3,
-        Quantity::SecondMoment => UsUnit::In4,
-        Quantity::Warping => UsUnit::In6,
-        Quantity::Force => UsUnit::Kip,
-        Quantity::Stress => UsUnit::Ksi,
-        Quantity::Moment => UsUnit::KipFt,
-        Quantity::Dimensionless => return None,
-    };
+    let unit = units::us_unit(Quantity::of_key(key)?)?;
     Some((units::si_key_to_us(key, unit)?, unit))
 }
 

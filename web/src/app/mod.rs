@@ -21,7 +21,9 @@ use crate::report;
 use crate::restraint::Restraint;
 use crate::status::{status_text, utilisation_text, Standing};
 use crate::units_view::step_text;
-use crate::workspace::{decode, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX};
+use crate::workspace::{
+    decode, decode_keeping, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX,
+};
 
 /// Members checked before a list's first frame: more than a screenful of
 /// rows (see [`listops::window`]) and the member selected.
@@ -186,18 +188,20 @@ use save::{flush_save, schedule_save, set_problem};
 /// The app.
 #[component]
 pub fn App() -> impl IntoView {
-    let (initial, rev, fresh, problem) = match browser::get(KEY) {
-        None => (Workspace::new(demo::demo_lists()), 0, true, None),
-        Some(text) => match decode(&text) {
-            Ok(w) => {
+    // The parsed text is freed after the first frame, not before it.
+    let (initial, rev, fresh, problem, parsed) = match browser::get(KEY) {
+        None => (Workspace::new(demo::demo_lists()), 0, true, None, None),
+        Some(text) => match decode_keeping(&text) {
+            Ok((w, parsed)) => {
                 let r = w.revision;
-                (w, r, false, None)
+                (w, r, false, None, Some(parsed))
             }
             Err(reason) => (
                 Workspace::new(demo::demo_lists()),
                 0,
                 false,
                 Some((text, reason)),
+                None,
             ),
         },
     };
@@ -234,9 +238,11 @@ pub fn App() -> impl IntoView {
         });
         Checks(Arc::new(out))
     });
-    // After the first frame (a task after its animation frame callbacks).
+    // After the first frame (a task after its animation frame callbacks);
+    // the parsed text in a task of its own after that.
     request_animation_frame(move || {
-        set_timeout(move || painted.set(true), std::time::Duration::ZERO)
+        set_timeout(move || painted.set(true), std::time::Duration::ZERO);
+        set_timeout(move || drop(parsed), std::time::Duration::ZERO);
     });
     // While members wait for their check, one more slice after this frame.
     Effect::new(move |_| {
@@ -359,14 +365,24 @@ pub fn App() -> impl IntoView {
                     <ListPanel ctx=ctx />
                     <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />
                 </section>
+                // The editor and the result come after the first frame,
+                // which holds the list's rows (with the caution); until
+                // then each pane has its heading.
                 <section class="pane pane-editor" aria-labelledby="h-editor">
-                    {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
-                        view! { <Editor ctx=ctx /> }
-                    }.into_any()))}
-                    <picker_panel::SectionPicker ctx=ctx />
+                    <Show when=move || ctx.painted.get() fallback=|| view! { <h2 id="h-editor" class="pane-title">"Member"</h2> }>
+                        {made_afresh(Signal::derive(move || key_of(&(ctx.generation.get(), active_list.get()))), Arc::new(move || {
+                            view! { <Editor ctx=ctx /> }
+                        }.into_any()))}
+                        <picker_panel::SectionPicker ctx=ctx />
+                    </Show>
                 </section>
                 <section class="pane pane-results" aria-labelledby="h-results">
-                    <Results ctx=ctx />
+                    <Show when=move || ctx.painted.get() fallback=|| view! {
+                        <h2 id="h-results" class="pane-title">"Result"</h2>
+                        <p class="caution" data-testid="caution">"⚠ " {CAUTION}</p>
+                    }>
+                        <Results ctx=ctx />
+                    </Show>
                 </section>
             </main>
         </div>

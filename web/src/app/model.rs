@@ -6,14 +6,19 @@
 //! ([`crate::chart::column`]). The edits are [`crate::modelform`]'s.
 
 use super::*;
-use crate::chart::column::{sketch, Sketch};
+use crate::chart::column::{of_member, Sketch};
 use crate::modelform::{self, hold_of, hold_value};
 use crate::numtext::{fixed, parse_number};
-use crate::units_view::{field_unit, from_field, result_text, to_field};
+use crate::units_view::{field_unit, from_field, result_text, span_text, to_field};
 use strutline_core::buckling::model::{AxialLoad, BucklingModel, Restraint, RestraintAxis};
 use strutline_core::buckling::{Axis, Fixity, Support};
 use strutline_core::catalogue;
-use strutline_core::check::buckle::buckle;
+
+/// The unit of a translational spring, named as the member file's
+/// description of `buckling_model` names it.
+const TRANSLATION: &str = "spring_kn_per_mm";
+/// The unit of a rotational spring.
+const ROTATION: &str = "spring_knm_per_rad";
 
 /// Changes the selected member's model.
 fn edit(ctx: Ctx, f: impl FnOnce(&mut BucklingModel, f64)) {
@@ -32,8 +37,11 @@ enum Accepts {
     NonNegative,
 }
 
-/// A number field of the panel: `key` gives the unit conversion (a
-/// member-file key such as `length_mm` or `axial_kn`; "" for none).
+/// A number field of the panel: `key` gives the unit conversion through
+/// the app's one unit system by its suffix (a member-file key such as
+/// `length_mm`, `axial_kn` or `distributed_kn_per_m`, or the names
+/// of a spring, `spring_kn_per_mm` and `spring_knm_per_rad`), `unit` the
+/// SI unit shown.
 #[component]
 fn ModelNum(
     id: String,
@@ -70,11 +78,13 @@ fn ModelNum(
     }
 }
 
-/// Held, free or a spring, with the stiffness when a spring.
+/// Held, free or a spring, with the stiffness when a spring (`key` and
+/// `unit` as [`ModelNum`]'s).
 #[component]
 fn HoldField(
     id: String,
     label: String,
+    key: &'static str,
     unit: &'static str,
     initial: Fixity,
     free_allowed: bool,
@@ -101,14 +111,15 @@ fn HoldField(
                 </select>
             </div>
             {spring.map(|k| view! {
-                <ModelNum id=sid label=format!("{label}, stiffness") key="" unit=unit initial=k
+                <ModelNum id=sid label=format!("{label}, stiffness") key=key unit=unit initial=k
                     accepts=Accepts::Positive set=Callback::new(move |v| set.run(Fixity::Spring(v))) />
             })}
         </div>
     }
 }
 
-/// The analysis of the selected member's model and what is drawn.
+/// The analysis of the selected member's model, what is drawn and the
+/// panel's lines.
 #[derive(Clone, PartialEq)]
 struct Analysed {
     sketch: Sketch,
@@ -118,30 +129,8 @@ struct Analysed {
 }
 
 fn analyse(m: &Member, sys: UnitSystem) -> Option<Analysed> {
-    let model = m.buckling_model.as_ref()?;
-    let result = match buckle(m) {
-        Ok(Some(b)) => Ok(b),
-        Ok(None) => Err("no model".to_string()),
-        Err(e) => Err(fields::error_text(&e)),
-    };
-    let own = catalogue::build(&m.section).ok();
-    let segs = modelform::segments(model, m.length_mm);
-    let built: Vec<Option<strutline_core::section::Section>> = segs
-        .iter()
-        .map(|s| match &s.section {
-            None => own.clone(),
-            Some(spec) => catalogue::build(spec).ok(),
-        })
-        .collect();
-    let pairs: Vec<(f64, Option<&strutline_core::section::Section>)> = segs
-        .iter()
-        .zip(&built)
-        .map(|(s, b)| (s.length_mm, b.as_ref()))
-        .collect();
-    let sk = sketch(model, m.length_mm, m.axial_kn, &pairs, &result, &|mm| {
-        result_text(sys, "mm", mm, 0)
-    });
-    let lines = match &result {
+    let a = of_member(m, sys)?;
+    let lines = match &a.result {
         Ok(b) => [("major", &b.major), ("minor", &b.minor)]
             .into_iter()
             .map(|(name, x)| {
@@ -149,7 +138,7 @@ fn analyse(m: &Member, sys: UnitSystem) -> Option<Analysed> {
                     "{name} axis: α_cr = {}, N_cr = {}, buckling length {} ({} elements; {} with half as many)",
                     fixed(x.load_factor, 3),
                     result_text(sys, "kN", x.critical_kn, 0),
-                    result_text(sys, "mm", x.buckling_length_mm, 0),
+                    span_text(sys, x.buckling_length_mm),
                     x.elements,
                     fixed(x.load_factor_half, 4)
                 )
@@ -158,9 +147,9 @@ fn analyse(m: &Member, sys: UnitSystem) -> Option<Analysed> {
         Err(_) => Vec::new(),
     };
     Some(Analysed {
-        sketch: sk,
+        sketch: a.sketch,
         lines,
-        refused: result.err(),
+        refused: a.result.err(),
     })
 }
 
@@ -192,10 +181,10 @@ fn EndRows(ctx: Ctx, end_b: bool, rebuild: RwSignal<u32>) -> impl IntoView {
             view! {
                 <div class="cm-row" data-testid=id.clone()>
                     <span class="cm-row-name">{format!("end {name}, {} axis", axis.key())}</span>
-                    <HoldField id=format!("{id}-move") label="sideways".into() unit="kN/mm" initial=sup.translation
+                    <HoldField id=format!("{id}-move") label="sideways".into() key=TRANSLATION unit="kN/mm" initial=sup.translation
                         free_allowed=true rebuild=rebuild
                         set=Callback::new(move |f| set_sup(&|s: &mut Support| s.translation = f)) />
-                    <HoldField id=format!("{id}-turn") label="turning".into() unit="kN·m/rad" initial=sup.rotation
+                    <HoldField id=format!("{id}-turn") label="turning".into() key=ROTATION unit="kN·m/rad" initial=sup.rotation
                         free_allowed=true rebuild=rebuild
                         set=Callback::new(move |f| set_sup(&|s: &mut Support| s.rotation = f)) />
                 </div>
@@ -282,7 +271,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
                             <option value="both" selected=current == RestraintAxis::Both>"both axes"</option>
                         </select>
                     </div>
-                    <HoldField id=format!("cm-brace-{i}-hold") label="sideways".into() unit="kN/mm" initial=r.translation
+                    <HoldField id=format!("cm-brace-{i}-hold") label="sideways".into() key=TRANSLATION unit="kN/mm" initial=r.translation
                         free_allowed=false rebuild=rebuild
                         set=Callback::new(move |f| edit(ctx, |md, _| if let Some(b) = md.restraints.get_mut(i) { b.translation = f; })) />
                     <button type="button" class="quiet" aria-label=format!("remove brace {}", i + 1)
@@ -338,7 +327,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
             });
             bump();
         }>"+ Load at a level"</button>
-        <ModelNum id="cm-distributed".into() label="along the length (self-weight, say)".into() key="" unit="kN/m"
+        <ModelNum id="cm-distributed".into() label="along the length (self-weight, say)".into() key="distributed_kn_per_m" unit="kN/m"
             initial=model.distributed_kn_per_m accepts=Accepts::NonNegative
             set=Callback::new(move |v| edit(ctx, |md, _| md.distributed_kn_per_m = v)) />
     }
@@ -372,11 +361,11 @@ pub(super) fn ColumnModel(ctx: Ctx) -> impl IntoView {
     Effect::new(move |_| {
         let a = analysed.get();
         let hc = ctx.high_contrast.get();
-        ctx.resize.track();
+        let resized = ctx.resize.get();
         let (Some(el), Some(a)) = (canvas.get(), a) else {
             return;
         };
-        let dpr = browser::fit_canvas(&el);
+        let dpr = browser::fit_canvas(&el, resized);
         match chart::column::draw(&el, &a.sketch, dpr, hc) {
             Ok(()) => note.set(None),
             Err(e) => note.set(Some(e)),

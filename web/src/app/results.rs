@@ -17,6 +17,43 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
         ctx.checks.with(|c| c.0.get(sel).cloned())
     });
     let units = ctx.units;
+    // What if is worked after the frame that shows an edit: its reverse
+    // solves check the member many times (a length solve some fifty times,
+    // each with a buckling model's analysis where it does not scale
+    // exactly), which must not hold up the redraw of the verdict, the
+    // chart and the column model. The last answer stays, marked busy,
+    // until the new one is in.
+    let whatif = RwSignal::new(String::new());
+    let whatif_busy = RwSignal::new(false);
+    Effect::new(move |_| {
+        let c = current.get();
+        let sys = units.get();
+        whatif_busy.set(true);
+        request_animation_frame(move || {
+            set_timeout(
+                move || {
+                    // A later edit or member has its own turn.
+                    let now = current.try_get_untracked().flatten();
+                    let same = match (&now, &c) {
+                        (Some(a), Some(b)) => Arc::ptr_eq(a, b),
+                        (None, None) => true,
+                        _ => false,
+                    };
+                    if !same || units.try_get_untracked() != Some(sys) {
+                        return;
+                    }
+                    let h = c
+                        .as_ref()
+                        .and_then(|c| c.prepared.as_ref())
+                        .map(|p| report::whatif_html(p, sys).into_string())
+                        .unwrap_or_default();
+                    whatif.try_set(h);
+                    whatif_busy.try_set(false);
+                },
+                std::time::Duration::ZERO,
+            )
+        });
+    });
     view! {
         <h2 id="h-results" class="pane-title">"Result"</h2>
         <Chart ctx=ctx current=current>
@@ -33,12 +70,11 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
                 if let Some(r) = c.result() {
                     h.push(&report::working_html(r, sys));
                 }
-                if let Some(p) = &c.prepared {
-                    h.push(&report::whatif_html(p, sys));
-                }
                 h.into_string()
             }).unwrap_or_default()
         }></div>
+        <div class="whatif-block" data-testid="whatif-block" aria-busy=move || if whatif_busy.get() { "true" } else { "false" }
+            inner_html=move || whatif.get()></div>
         </Chart>
     }
 }
@@ -254,8 +290,9 @@ pub(super) fn Chart(
         let sys = ctx.units.get();
         let us = sys == UnitSystem::Us;
         let interaction = interaction_shown();
-        ctx.resize.track();
-        ctx.chart_open.track();
+        // The canvas's size is read again after a resize or when the
+        // docked chart opens or closes.
+        let resized = ctx.resize.get() * 2 + u64::from(ctx.chart_open.get());
         // Drawn after the first frame: its size needs the layout.
         if !ctx.painted.get() {
             return;
@@ -263,7 +300,7 @@ pub(super) fn Chart(
         let Some(el) = canvas.get() else {
             return;
         };
-        let dpr = browser::fit_canvas(&el);
+        let dpr = browser::fit_canvas(&el, resized);
         // What one chart records for tests, cleared before the other draws.
         for a in [
             "data-chart",

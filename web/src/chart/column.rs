@@ -3,25 +3,31 @@
 //! the buckled shape the engine's analysis returns
 //! (`check::buckle::buckle`), with alpha_cr and the buckling length.
 //!
-//! [`sketch`] works out what is drawn without any drawing (tested on the
-//! host); [`draw`] puts it on a canvas with plotters, in device pixels like
-//! the envelope chart.
+//! [`of_member`] analyses a member's model and works out what is drawn
+//! without any drawing ([`sketch`], tested on the host); [`draw_on`] draws
+//! it on any plotters backend: the panel's canvas ([`draw`], in device
+//! pixels like the envelope chart) and the calc sheet's SVG ([`svg`]), so
+//! the sheet prints the drawing the panel shows.
 
 use plotters::coord::Shift;
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
-use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
+use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea, SVGBackend};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, IntoFont, RGBColor};
 use plotters_canvas::CanvasBackend;
 use strutline_core::buckling::column::Buckle;
 use strutline_core::buckling::model::BucklingModel;
 use strutline_core::buckling::{Axis, Fixity, Support};
-use strutline_core::check::buckle::MemberBuckle;
+use strutline_core::catalogue;
+use strutline_core::check::buckle::{buckle, MemberBuckle};
 use strutline_core::section::Section;
+use strutline_core::units::UnitSystem;
+use strutline_core::Member;
 use web_sys::HtmlCanvasElement;
 
 use super::data::dashes;
 use crate::numtext::fixed;
+use crate::units_view::{result_text, span_text};
 
 /// A segment as drawn: from, to (mm from end A) and its width as a
 /// fraction of the widest (the fourth root of I about the axis, so a
@@ -68,27 +74,75 @@ pub struct AxisSketch {
 pub struct Sketch {
     /// The member length, mm.
     pub length_mm: f64,
-    /// The point loads: mm from end A, kN.
-    pub loads: Vec<(f64, f64)>,
+    /// The point loads: mm from end A, and the load in words ("420 kN").
+    pub loads: Vec<(f64, String)>,
     /// The distributed load, kN/m.
     pub distributed_kn_per_m: f64,
     /// Major axis, then minor.
     pub axes: [AxisSketch; 2],
 }
 
+/// A member's model analysed and what is drawn of it.
+#[derive(Debug, Clone, PartialEq)]
+pub struct Analysed {
+    /// What is drawn.
+    pub sketch: Sketch,
+    /// The engine's analysis of both axes, or its refusal in words.
+    pub result: Result<MemberBuckle, String>,
+}
+
+/// The analysis of `m`'s buckling model (`None` without one) by core's
+/// [`buckle`] and its sketch, lengths and loads worded in `sys`'s units:
+/// what the column-model panel draws and the calc sheet prints.
+pub fn of_member(m: &Member, sys: UnitSystem) -> Option<Analysed> {
+    let model = m.buckling_model.as_ref()?;
+    let result = match buckle(m) {
+        Ok(Some(b)) => Ok(b),
+        Ok(None) => Err("no model".to_string()),
+        Err(e) => Err(crate::fields::error_text(&e)),
+    };
+    let own = catalogue::build(&m.section).ok();
+    let segs = crate::modelform::segments(model, m.length_mm);
+    let built: Vec<Option<Section>> = segs
+        .iter()
+        .map(|s| match &s.section {
+            None => own.clone(),
+            Some(spec) => catalogue::build(spec).ok(),
+        })
+        .collect();
+    let pairs: Vec<(f64, Option<&Section>)> = segs
+        .iter()
+        .zip(&built)
+        .map(|(s, b)| (s.length_mm, b.as_ref()))
+        .collect();
+    let sketch = sketch(
+        model,
+        m.length_mm,
+        m.axial_kn,
+        &pairs,
+        &result,
+        &|unit, v| match unit {
+            "mm" => span_text(sys, v),
+            _ => result_text(sys, unit, v, 0),
+        },
+    );
+    Some(Analysed { sketch, result })
+}
+
 /// What to draw for a model of a member `length_mm` long carrying
 /// `axial_kn`. `sections` are the segments' lengths and sections (one for
 /// a model without segments: the member's), `result` the analysis or its
-/// refusal in words, `length_text` words a length in mm in the units
-/// shown. Without loads in the model the pattern drawn is the engine's:
-/// `axial_kn` at end B (1 kN when it is not positive).
+/// refusal in words, `text` words a value in an engine unit (a length in
+/// "mm", a force in "kN") in the units shown. Without loads in the model
+/// the pattern drawn is the engine's: `axial_kn` at end B (1 kN when it is
+/// not positive).
 pub fn sketch(
     model: &BucklingModel,
     length_mm: f64,
     axial_kn: f64,
     sections: &[(f64, Option<&Section>)],
     result: &Result<MemberBuckle, String>,
-    length_text: &dyn Fn(f64) -> String,
+    text: &dyn Fn(&'static str, f64) -> String,
 ) -> Sketch {
     let axis_sketch = |axis: Axis| {
         let i = |s: Option<&Section>| {
@@ -142,7 +196,7 @@ pub fn sketch(
                     b.mode.clone(),
                     vec![
                         format!("α_cr = {}", fixed(b.load_factor, 3)),
-                        format!("L_cr = {}", length_text(b.buckling_length_mm)),
+                        format!("L_cr = {}", text("mm", b.buckling_length_mm)),
                     ],
                 )
             }
@@ -160,12 +214,13 @@ pub fn sketch(
     Sketch {
         length_mm,
         loads: if model.axial_loads.is_empty() && model.distributed_kn_per_m == 0.0 {
-            vec![(length_mm, if axial_kn > 0.0 { axial_kn } else { 1.0 })]
+            let kn = if axial_kn > 0.0 { axial_kn } else { 1.0 };
+            vec![(length_mm, text("kN", kn))]
         } else {
             model
                 .axial_loads
                 .iter()
-                .map(|p| (p.at_mm, p.axial_kn))
+                .map(|p| (p.at_mm, text("kN", p.axial_kn)))
                 .collect()
         },
         distributed_kn_per_m: model.distributed_kn_per_m,
@@ -241,6 +296,23 @@ pub fn draw(
     Ok(())
 }
 
+/// The sketch as SVG text, `width` x `height` CSS px, for the calc sheet:
+/// the panel's drawing ([`draw_on`]) in the high-contrast colours, which
+/// print well. Every text and attribute is escaped by plotters' SVG
+/// backend.
+pub fn svg(sketch: &Sketch, width: u32, height: u32) -> Result<String, String> {
+    let mut out = String::new();
+    {
+        let root = SVGBackend::with_string(&mut out, (width, height)).into_drawing_area();
+        draw_on(&root, sketch, 1.0, &palette(true))?;
+        root.present().map_err(err)?;
+    }
+    Ok(out)
+}
+
+/// Draws the sketch on `root`: both axes side by side, each with its
+/// segments, supports, braces, loads, buckled shape and caption; returns
+/// each shape's largest sideways offset in device px.
 fn draw_on<DB: DrawingBackend>(
     root: &DrawingArea<DB, Shift>,
     sk: &Sketch,
@@ -393,11 +465,11 @@ where
     for (n, _) in sk.axes.iter().enumerate() {
         let cx = half * n as f64 + half * 0.42;
         let x = cx + half * 0.3;
-        for &(at, kn) in &sk.loads {
-            let y = y_of(at);
+        for (at, words) in &sk.loads {
+            let y = y_of(*at);
             arrow(root, pal, dpr, x, y)?;
             root.draw(&Text::new(
-                format!("{} kN", fixed(kn, 0)),
+                words.clone(),
                 ((x + 6.0 * dpr) as i32, (y - 14.0 * dpr) as i32),
                 font(12.0).pos(Pos::new(HPos::Left, VPos::Center)),
             ))
@@ -572,7 +644,7 @@ where
 }
 
 #[cfg(test)]
-mod tests {
+pub(crate) mod tests {
     #![allow(
         clippy::unwrap_used,
         clippy::expect_used,
@@ -582,12 +654,20 @@ mod tests {
     use super::*;
     use strutline_core::check::buckle::buckle;
 
-    #[test]
-    fn sketch_of_the_stepped_column_follows_the_model_and_the_analysis() {
+    /// The stepped crane column of the invented example
+    /// `examples/tarnbeck-crane-hall.json` (its first member): two
+    /// segments, a spring at the top, a minor-axis spring brace, two loads
+    /// and a line load. Shared by the sheet's tests.
+    pub(crate) fn stepped_column() -> Member {
         let file =
             strutline_core::file::parse(include_str!("../../../examples/tarnbeck-crane-hall.json"))
                 .unwrap();
-        let m = &file.members[0];
+        file.members[0].clone()
+    }
+
+    #[test]
+    fn sketch_of_the_stepped_column_follows_the_model_and_the_analysis() {
+        let m = &stepped_column();
         let model = m.buckling_model.as_ref().unwrap();
         let lower = m.section.build().unwrap();
         let upper = model.segments[1].section.as_ref().unwrap().build().unwrap();
@@ -599,7 +679,7 @@ mod tests {
             m.axial_kn,
             &[(6000.0, Some(&lower)), (3000.0, Some(&upper))],
             &result,
-            &|mm| format!("{mm:.0} mm"),
+            &|unit, v| format!("{v:.0} {unit}"),
         );
         let major = &sk.axes[0];
         assert_eq!(major.pieces.len(), 2);
@@ -629,7 +709,13 @@ mod tests {
             format!("α_cr = {}", fixed(b.major.load_factor, 3))
         );
         assert!(sk.axes[1].caption[1].starts_with("L_cr = "));
-        assert_eq!(sk.loads, vec![(6000.0, 420.0), (9000.0, 130.0)]);
+        assert_eq!(
+            sk.loads,
+            vec![
+                (6000.0, "420 kN".to_string()),
+                (9000.0, "130 kN".to_string())
+            ]
+        );
         // A refusal is the caption, with no shape.
         let refused = sketch(
             &strutline_core::buckling::model::BucklingModel {
@@ -641,11 +727,45 @@ mod tests {
             0.0,
             &[],
             &Err("no".into()),
-            &|mm| format!("{mm}"),
+            &|unit, v| format!("{v} {unit}"),
         );
         assert!(refused.axes[0].mode.is_empty());
         // Without loads the engine's pattern: 1 kN at end B for no axial_kn.
-        assert_eq!(refused.loads, vec![(9000.0, 1.0)]);
+        assert_eq!(refused.loads, vec![(9000.0, "1 kN".to_string())]);
         assert_eq!(refused.axes[0].caption, vec!["no".to_string()]);
+    }
+
+    #[test]
+    fn the_sheet_draws_what_the_panel_draws_in_the_units_shown() {
+        let m = &stepped_column();
+        let a = of_member(m, UnitSystem::Si).unwrap();
+        let b = a.result.clone().unwrap();
+        assert_eq!(a.sketch.axes[0].mode, b.major.mode);
+        let svg = svg(&a.sketch, 520, 420).unwrap();
+        assert!(
+            svg.starts_with("<svg") && svg.trim_end().ends_with("</svg>"),
+            "{svg}"
+        );
+        // Both shapes as polylines, the captions and the loads as text.
+        assert!(
+            svg.contains(&format!("α_cr = {}", fixed(b.major.load_factor, 3))),
+            "{svg}"
+        );
+        assert!(svg.contains(&format!("α_cr = {}", fixed(b.minor.load_factor, 3))));
+        assert!(svg.contains("420 kN") && svg.contains("130 kN"), "{svg}");
+        assert!(svg.matches("<polyline").count() >= 2, "{svg}");
+        // In US units the loads in kip and the lengths in feet: 420 kN /
+        // 4.4482216152605 kN per kip = 94.42 kip.
+        let us = of_member(m, UnitSystem::Us).unwrap();
+        assert_eq!(us.sketch.loads[0].1, "94.42 kip");
+        assert!(
+            us.sketch.axes[1].caption[1].ends_with(" ft"),
+            "{:?}",
+            us.sketch.axes[1]
+        );
+        // No model, nothing to draw.
+        let mut plain = m.clone();
+        plain.buckling_model = None;
+        assert!(of_member(&plain, UnitSystem::Si).is_none());
     }
 }
