@@ -92,7 +92,7 @@ strutline is **${ratio}x** as fast as the Python script by wall time and ${cpura
 The CSV check wrote $rows results; its first 100 MB are byte for byte those of the JSON check: $same.
 \`check\` and \`convert\` read a block of 4,096 members at a time (\`convert\` reads its input twice:
 first for its problems, title and the CSV columns its members use, then to write); what grows
-with the list is the set of ids kept to refuse a repeated one (\`core::ids::SeenIds\`: a 64-bit
-hash and the id's bytes, some 25-35 MB at a million ids, more while its table grows).
+with the list is the set of ids kept to refuse a repeated one (\`core::ids::SeenIds\`: 40 bits
+of a hash in 256 tables that grow one at a time, and the id's bytes: some 20 MB at a million ids).
 MD
 cat bench/cli.md

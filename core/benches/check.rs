@@ -9,7 +9,7 @@ mod lists;
 
 use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
 use lists::{beam_column, bending_only, member, plain, with_moments, MEMBERS};
-use strutline_core::check::{check_member_as, Working};
+use strutline_core::check::{check_member_as, Prepared, Working};
 use strutline_core::member::Member;
 
 fn bench(c: &mut Criterion) {
@@ -46,6 +46,29 @@ fn bench(c: &mut Criterion) {
             })
         });
     }
+    // The same members prepared once (section built, material resolved,
+    // options validated), as a list re-check or a repeated check of the
+    // same members does: the check itself without its working.
+    let prepared: Vec<Prepared> = members
+        .iter()
+        .filter_map(|m| Prepared::new(m).ok())
+        .collect();
+    if prepared.len() != members.len() {
+        eprintln!("a benchmark member does not prepare");
+        std::process::exit(1);
+    }
+    group.bench_function("10k_mixed_members_prepared_without_working", |b| {
+        b.iter(|| {
+            let mut passing = 0usize;
+            for p in &prepared {
+                let p = black_box(p);
+                if let Ok(r) = p.check_as(p.member.method, Working::Skipped) {
+                    passing += usize::from(r.passes);
+                }
+            }
+            black_box(passing)
+        })
+    });
     // The same members without their moments: the cost of the bending side.
     let plain: Vec<Member> = (0..MEMBERS).map(plain).collect();
     group.bench_function("10k_same_members_without_moments", |b| {

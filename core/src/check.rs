@@ -51,7 +51,7 @@ impl CheckResult {
                 .iter()
                 .find(|w| w.code == "slenderness-over-200")
                 .map_or("a slenderness limit of the code is exceeded", |w| {
-                    w.message.as_str()
+                    &w.message
                 }),
         )
     }
@@ -358,7 +358,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         let reason = warnings
             .iter()
             .find(|w| w.code == "outside-code-scope")
-            .map(|w| w.message.clone())
+            .map(|w| w.message.to_string())
             .unwrap_or_else(|| "the section is outside the scope of this code".into());
         return Err(crate::error::Error::NotApplicable {
             method: method.key(),

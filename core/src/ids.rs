@@ -3,14 +3,22 @@
 //!
 //! A set of `String`s costs some 60 bytes an id (the string's own
 //! allocation, its 24-byte handle, the table's slot): 125 MB of a
-//! 1,000,000-member CSV check went to it. [`SeenIds`] keeps a 64-bit hash
-//! of each id in a table of plain `u64`s (about 9 to 18 bytes an id, by
-//! the table's fill) and the ids' bytes back to back in one buffer (their
-//! length and a byte each). The answer is exact: when a hash is already
-//! in the table, the buffer is searched for the id itself, so two ids that
-//! only share a hash are both accepted. That search runs only for a
-//! repeated id (which stops the reading) or a true 64-bit collision (about
-//! one in 10^7 for a million ids), so reading stays linear in the list.
+//! 1,000,000-member CSV check went to it. [`SeenIds`] keeps 40 bits of a
+//! 64-bit hash of each id, in 256 tables of 32-bit fingerprints chosen by
+//! the hash's top 8 bits (5 bytes a slot with its control byte, the tables
+//! 44% to 88% full: 6 to 12 bytes an id),
+//! and the ids' bytes back to back in one buffer (their length and a byte
+//! each). The answer is exact: when a fingerprint is already in its table,
+//! the buffer is searched for the id itself, so two ids that only share a
+//! fingerprint are both accepted. That search runs only for a repeated id
+//! (which stops the reading) or a collision of the 40 bits (about one in a
+//! list of a million ids, one scan of its 8 MB of ids), so reading stays
+//! linear in the list.
+//!
+//! The 256 tables grow one at a time: one table of a single 64-bit set
+//! (before, `FxHashSet<u64>`) held its old 9 MB and its new 19 MB at once
+//! while growing past a million ids, which took the 1,000,000-member
+//! `convert` over 64 MB; a table here is 1/256th of that.
 
 use std::hash::{BuildHasher, Hasher};
 
@@ -19,11 +27,15 @@ use rustc_hash::{FxBuildHasher, FxHashSet};
 /// The length byte that says 4 bytes of length follow.
 const LONG: u8 = 255;
 
+/// Tables of fingerprints, chosen by the top bits of an id's hash.
+const TABLES: usize = 256;
+
 /// The ids seen so far ([module docs](self)).
-#[derive(Debug, Clone, Default)]
+#[derive(Debug, Clone)]
 pub struct SeenIds {
-    /// A 64-bit hash of every id.
-    hashes: FxHashSet<u64>,
+    /// Of every id's 64-bit hash, the low 32 bits, in the table its top 8
+    /// bits choose ([`TABLES`] tables, empty until used).
+    hashes: Vec<FxHashSet<u32>>,
     /// Every id: its length (one byte below [`LONG`], else [`LONG`] and 4
     /// bytes, little-endian), then its bytes.
     bytes: Vec<u8>,
@@ -48,16 +60,31 @@ fn hash(id: &str) -> u64 {
     x ^ (x >> 33)
 }
 
+impl Default for SeenIds {
+    fn default() -> SeenIds {
+        SeenIds::new()
+    }
+}
+
 impl SeenIds {
     /// An empty set.
     pub fn new() -> SeenIds {
-        SeenIds::default()
+        SeenIds::with_capacity(0, 0)
     }
 
     /// An empty set with room for `n` ids of `bytes` bytes in all.
     pub fn with_capacity(n: usize, bytes: usize) -> SeenIds {
+        // Small lists leave the tables empty until used (a table's least
+        // allocation is for a few entries).
+        let each = if n >= TABLES * 16 {
+            n.div_ceil(TABLES)
+        } else {
+            0
+        };
         SeenIds {
-            hashes: FxHashSet::with_capacity_and_hasher(n, FxBuildHasher),
+            hashes: (0..TABLES)
+                .map(|_| FxHashSet::with_capacity_and_hasher(each, FxBuildHasher))
+                .collect(),
             bytes: Vec::with_capacity(bytes + n),
             count: 0,
             hasher: None,
@@ -67,7 +94,13 @@ impl SeenIds {
     /// Adds `id`; false when it was there already (exactly: the same text).
     pub fn insert(&mut self, id: &str) -> bool {
         let h = self.hasher.map_or_else(|| hash(id), |f| f(id));
-        if !self.hashes.insert(h) && self.contains_exactly(id) {
+        // The top 8 bits choose the table, the low 32 are kept.
+        let table = (h >> 56) as usize;
+        let fresh = match self.hashes.get_mut(table) {
+            Some(t) => t.insert(h as u32),
+            None => false,
+        };
+        if !fresh && self.contains_exactly(id) {
             return false;
         }
         // The length in one byte up to 254; else 255 and 4 bytes. Ids
@@ -179,5 +212,28 @@ mod tests {
         hashes.sort_unstable();
         hashes.dedup();
         assert_eq!(hashes.len(), 100_000);
+        // The 40 bits kept (table and fingerprint) tell these apart too.
+        let mut kept: Vec<u64> = hashes.iter().map(|h| h & 0xff00_0000_ffff_ffff).collect();
+        kept.sort_unstable();
+        kept.dedup();
+        assert_eq!(kept.len(), 100_000);
+    }
+
+    #[test]
+    fn a_million_ids_take_under_13_mb_of_tables() {
+        let mut s = SeenIds::new();
+        for i in 0..1_000_000 {
+            assert!(s.insert(&format!("D{i}")));
+        }
+        assert!(!s.insert("D999999"));
+        assert!(!s.insert("D0"));
+        // 5 bytes a slot (fingerprint and control byte); a table's slots
+        // are a power of two, its capacity 7/8 of them.
+        let table_bytes: usize = s
+            .hashes
+            .iter()
+            .map(|t| (t.capacity() * 8 / 7).next_power_of_two() * 5)
+            .sum();
+        assert!(table_bytes < 13_000_000, "{table_bytes}");
     }
 }

@@ -31,8 +31,15 @@ pub enum TimberKind {
 }
 
 /// A material as written in the member file.
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-#[serde(untagged, deny_unknown_fields)]
+///
+/// Read as serde's `untagged, deny_unknown_fields` derive reads it (the
+/// first form whose keys and values all fit, in the order below; else
+/// serde's untagged message, which `read` turns into the refusal naming the
+/// forms), by [`untagged`] without buffering the value as serde `Content`
+/// first (some 3,800 instructions a member on the command line's reading
+/// thread); a unit test holds the two readers to the same answer.
+#[derive(Debug, Clone, PartialEq, Serialize)]
+#[serde(untagged)]
 pub enum MaterialSpec {
     /// A named grade or strength class ("S355", "A992", "C24", "GL28h").
     Grade {
@@ -60,6 +67,216 @@ pub enum MaterialSpec {
         #[serde(default, skip_serializing_if = "Option::is_none")]
         g_mpa: Option<f64>,
     },
+}
+
+impl<'de> Deserialize<'de> for MaterialSpec {
+    fn deserialize<D: serde::Deserializer<'de>>(d: D) -> std::result::Result<Self, D::Error> {
+        d.deserialize_any(untagged::Reader)
+    }
+}
+
+/// [`MaterialSpec`]'s reader: each value read as a [`untagged::Given`]
+/// (a number, a text, null or anything else, which no form takes), then the
+/// forms tried in their order as the derive tries them, on a map (each
+/// key once, no other key); a list or a plain value fits no form.
+mod untagged {
+    use std::fmt;
+
+    use serde::de::{self, IgnoredAny, MapAccess, SeqAccess, Visitor};
+    use serde::Deserialize;
+
+    use super::{MaterialSpec, TimberKind};
+
+    /// serde's message when no form of an untagged enum fits.
+    const NONE_FITS: &str = "data did not match any variant of untagged enum MaterialSpec";
+
+    /// A value as a form's field can take it.
+    #[derive(Debug, Clone, PartialEq)]
+    pub enum Given {
+        Number(f64),
+        Text(String),
+        Null,
+        Other,
+    }
+
+    impl<'de> Deserialize<'de> for Given {
+        fn deserialize<D: serde::Deserializer<'de>>(d: D) -> Result<Given, D::Error> {
+            d.deserialize_any(GivenReader)
+        }
+    }
+
+    struct GivenReader;
+
+    impl<'de> Visitor<'de> for GivenReader {
+        type Value = Given;
+        fn expecting(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+            f.write_str("any value")
+        }
+        fn visit_bool<E>(self, _: bool) -> Result<Given, E> {
+            Ok(Given::Other)
+        }
+        fn visit_i64<E>(self, v: i64) -> Result<Given, E> {
+            Ok(Given::Number(v as f64))
+        }
+        fn visit_u64<E>(self, v: u64) -> Result<Given, E> {
+            Ok(Given::Number(v as f64))
+        }
+        fn visit_f64<E>(self, v: f64) -> Result<Given, E> {
+            Ok(Given::Number(v))
+        }
+        fn visit_str<E>(self, v: &str) -> Result<Given, E> {
+            Ok(Given::Text(v.to_string()))
+        }
+        fn visit_string<E>(self, v: String) -> Result<Given, E> {
+            Ok(Given::Text(v))
+        }
+        fn visit_unit<E>(self) -> Result<Given, E> {
+            Ok(Given::Null)
+        }
+        fn visit_none<E>(self) -> Result<Given, E> {
+            Ok(Given::Null)
+        }
+        fn visit_some<D: serde::Deserializer<'de>>(self, d: D) -> Result<Given, D::Error> {
+            Given::deserialize(d)
+        }
+        fn visit_seq<A: SeqAccess<'de>>(self, mut seq: A) -> Result<Given, A::Error> {
+            while seq.next_element::<IgnoredAny>()?.is_some() {}
+            Ok(Given::Other)
+        }
+        fn visit_map<A: MapAccess<'de>>(self, mut map: A) -> Result<Given, A::Error> {
+            while map.next_entry::<IgnoredAny, IgnoredAny>()?.is_some() {}
+            Ok(Given::Other)
+        }
+    }
+
+    /// The keys of the three forms.
+    const GRADE: [&str; 1] = ["grade"];
+    const TIMBER: [&str; 4] = ["fc0k_mpa", "e005_mpa", "e0mean_mpa", "timber"];
+    const CUSTOM: [&str; 3] = ["fy_mpa", "e_mpa", "g_mpa"];
+
+    fn number(v: Option<&Given>) -> Option<f64> {
+        match v? {
+            Given::Number(x) => Some(*x),
+            _ => None,
+        }
+    }
+
+    fn timber(v: Option<&Given>) -> Option<TimberKind> {
+        match v? {
+            Given::Text(t) if t == "solid" => Some(TimberKind::Solid),
+            Given::Text(t) if t == "glulam" => Some(TimberKind::Glulam),
+            _ => None,
+        }
+    }
+
+    /// The first form that takes the `given` keys (each once) and values;
+    /// `None` when none does.
+    fn fit(given: &[(&str, Given)]) -> Option<MaterialSpec> {
+        let only = |keys: &[&str]| given.iter().all(|(k, _)| keys.contains(k));
+        let get = |key: &str| given.iter().find(|(k, _)| *k == key).map(|(_, v)| v);
+        if only(&GRADE) {
+            if let Some(Given::Text(grade)) = get("grade") {
+                return Some(MaterialSpec::Grade {
+                    grade: grade.clone(),
+                });
+            }
+        }
+        if only(&TIMBER) {
+            if let (Some(fc0k_mpa), Some(e005_mpa), Some(e0mean_mpa), Some(timber)) = (
+                number(get("fc0k_mpa")),
+                number(get("e005_mpa")),
+                number(get("e0mean_mpa")),
+                timber(get("timber")),
+            ) {
+                return Some(MaterialSpec::Timber {
+                    fc0k_mpa,
+                    e005_mpa,
+                    e0mean_mpa,
+                    timber,
+                });
+            }
+        }
+        if only(&CUSTOM) {
+            let g_mpa = match get("g_mpa") {
+                None | Some(Given::Null) => Some(None),
+                Some(Given::Number(g)) => Some(Some(*g)),
+                Some(_) => None,
+            };
+            if let (Some(fy_mpa), Some(e_mpa), Some(g_mpa)) =
+                (number(get("fy_mpa")), number(get("e_mpa")), g_mpa)
+            {
+                return Some(MaterialSpec::Custom {
+                    fy_mpa,
+                    e_mpa,
+                    g_mpa,
+                });
+            }
+        }
+        None
+    }
+
+    pub struct Reader;
+
+    impl<'de> Visitor<'de> for Reader {
+        type Value = MaterialSpec;
+
+        fn expecting(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
+            f.write_str("a material")
+        }
+
+        fn visit_map<A: MapAccess<'de>>(self, mut map: A) -> Result<MaterialSpec, A::Error> {
+            // A key given twice or a key of no form fits no form (the
+            // rest of the map is still read, as the derive reads it whole
+            // before trying a form).
+            let mut given: Vec<(&str, Given)> = Vec::with_capacity(4);
+            let mut fits = true;
+            while let Some(key) = map.next_key::<std::borrow::Cow<'_, str>>()? {
+                let value = map.next_value::<Given>()?;
+                let known = GRADE
+                    .iter()
+                    .chain(&TIMBER)
+                    .chain(&CUSTOM)
+                    .find(|k| **k == key.as_ref());
+                match known {
+                    Some(k) if !given.iter().any(|(g, _)| g == k) => given.push((k, value)),
+                    _ => fits = false,
+                }
+            }
+            match fit(&given).filter(|_| fits) {
+                Some(m) => Ok(m),
+                None => Err(de::Error::custom(NONE_FITS)),
+            }
+        }
+
+        fn visit_seq<A: SeqAccess<'de>>(self, mut seq: A) -> Result<MaterialSpec, A::Error> {
+            // The derive takes no form from a list (its items are read, as
+            // it reads them before trying the forms).
+            while seq.next_element::<Given>()?.is_some() {}
+            Err(de::Error::custom(NONE_FITS))
+        }
+
+        fn visit_bool<E: de::Error>(self, _: bool) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+        fn visit_i64<E: de::Error>(self, _: i64) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+        fn visit_u64<E: de::Error>(self, _: u64) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+        fn visit_f64<E: de::Error>(self, _: f64) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+        fn visit_str<E: de::Error>(self, _: &str) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+        fn visit_unit<E: de::Error>(self) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+        fn visit_none<E: de::Error>(self) -> Result<MaterialSpec, E> {
+            Err(E::custom(NONE_FITS))
+        }
+    }
 }
 
 /// A resolved steel (or custom elastic-plastic) material.
@@ -501,6 +718,174 @@ mod tests {
     )]
 
     use super::*;
+
+    /// The derive the hand-written reader replaces, as it was.
+    #[derive(Debug, Deserialize)]
+    #[serde(untagged, deny_unknown_fields)]
+    enum Derived {
+        Grade {
+            grade: String,
+        },
+        Timber {
+            fc0k_mpa: f64,
+            e005_mpa: f64,
+            e0mean_mpa: f64,
+            timber: TimberKind,
+        },
+        Custom {
+            fy_mpa: f64,
+            e_mpa: f64,
+            #[serde(default)]
+            g_mpa: Option<f64>,
+        },
+    }
+
+    impl From<Derived> for MaterialSpec {
+        fn from(d: Derived) -> MaterialSpec {
+            match d {
+                Derived::Grade { grade } => MaterialSpec::Grade { grade },
+                Derived::Timber {
+                    fc0k_mpa,
+                    e005_mpa,
+                    e0mean_mpa,
+                    timber,
+                } => MaterialSpec::Timber {
+                    fc0k_mpa,
+                    e005_mpa,
+                    e0mean_mpa,
+                    timber,
+                },
+                Derived::Custom {
+                    fy_mpa,
+                    e_mpa,
+                    g_mpa,
+                } => MaterialSpec::Custom {
+                    fy_mpa,
+                    e_mpa,
+                    g_mpa,
+                },
+            }
+        }
+    }
+
+    /// Both readers on `text`, from text and from a `serde_json::Value`
+    /// (the whole-file reader's road): the same material or the same
+    /// message.
+    fn same_as_the_derive(text: &str) -> bool {
+        // serde_json places an error raised inside its reading at a line
+        // and column (the derive raises its own after reading): the
+        // readers of the member file drop the place of a member's fault.
+        let unplaced = |e: serde_json::Error| {
+            let text = e.to_string();
+            match text.rsplit_once(" at line ") {
+                Some((head, _)) if e.line() > 0 => head.to_string(),
+                _ => text,
+            }
+        };
+        let ours = serde_json::from_str::<MaterialSpec>(text).map_err(unplaced);
+        let derived = serde_json::from_str::<Derived>(text)
+            .map(MaterialSpec::from)
+            .map_err(|e| unplaced(e).replace("enum Derived", "enum MaterialSpec"));
+        assert_eq!(ours, derived, "{text}");
+        if let Ok(value) = serde_json::from_str::<serde_json::Value>(text) {
+            let ours =
+                serde_json::from_value::<MaterialSpec>(value.clone()).map_err(|e| e.to_string());
+            let derived = serde_json::from_value::<Derived>(value)
+                .map(MaterialSpec::from)
+                .map_err(|e| e.to_string().replace("enum Derived", "enum MaterialSpec"));
+            assert_eq!(ours, derived, "{text} as a value");
+        }
+        ours.is_ok()
+    }
+
+    #[test]
+    fn the_material_reader_answers_as_the_untagged_derive() {
+        let keys = [
+            "grade",
+            "fc0k_mpa",
+            "e005_mpa",
+            "e0mean_mpa",
+            "timber",
+            "fy_mpa",
+            "e_mpa",
+            "g_mpa",
+            "colour",
+        ];
+        let values = [
+            "355",
+            "-2",
+            "210000.5",
+            "\"S355\"",
+            "\"solid\"",
+            "\"glulam\"",
+            "null",
+            "true",
+            "[1]",
+            "{}",
+            "1e400",
+        ];
+        // Every form with every value in each place, every key added to or
+        // taken from each form, lists in a form's order and not.
+        let forms: [&[&str]; 4] = [
+            &["grade"],
+            &["fc0k_mpa", "e005_mpa", "e0mean_mpa", "timber"],
+            &["fy_mpa", "e_mpa"],
+            &["fy_mpa", "e_mpa", "g_mpa"],
+        ];
+        let good = |k: &str| match k {
+            "grade" => "\"S355\"",
+            "timber" => "\"glulam\"",
+            _ => "24",
+        };
+        let (mut read, mut refused) = (0, 0);
+        let mut count = |ok: bool| if ok { read += 1 } else { refused += 1 };
+        for form in forms {
+            let entries: Vec<String> = form
+                .iter()
+                .map(|k| format!("\"{k}\": {}", good(k)))
+                .collect();
+            count(same_as_the_derive(&format!("{{{}}}", entries.join(", "))));
+            let items: Vec<&str> = form.iter().map(|k| good(k)).collect();
+            count(same_as_the_derive(&format!("[{}]", items.join(", "))));
+            for (i, key) in form.iter().enumerate() {
+                for v in values {
+                    let mut e = entries.clone();
+                    e[i] = format!("\"{key}\": {v}");
+                    count(same_as_the_derive(&format!("{{{}}}", e.join(", "))));
+                    let mut it = items.clone();
+                    it[i] = v;
+                    count(same_as_the_derive(&format!("[{}]", it.join(", "))));
+                }
+                let mut e = entries.clone();
+                e.remove(i);
+                count(same_as_the_derive(&format!("{{{}}}", e.join(", "))));
+                let mut e = entries.clone();
+                e.push(format!("\"{key}\": {}", good(key)));
+                count(same_as_the_derive(&format!("{{{}}}", e.join(", "))));
+            }
+            for key in keys {
+                let mut e = entries.clone();
+                e.push(format!("\"{key}\": {}", good(key)));
+                count(same_as_the_derive(&format!("{{{}}}", e.join(", "))));
+                let mut it = items.clone();
+                it.push(good(key));
+                count(same_as_the_derive(&format!("[{}]", it.join(", "))));
+            }
+        }
+        for other in [
+            "{}",
+            "[]",
+            "\"S355\"",
+            "355",
+            "null",
+            "true",
+            "[[1]]",
+            "{\"grade\": \"S355\", \"grade\": \"S275\"}",
+        ] {
+            count(same_as_the_derive(other));
+        }
+        assert!(read > 20 && refused > 100, "{read} read, {refused} refused");
+    }
     use crate::section::{Given, Rect, Round, Section, SectionSpec};
 
     fn rect(t: f64) -> Section {

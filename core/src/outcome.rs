@@ -1,6 +1,8 @@
 //! The outcome types every method and limit state returns: the mode
 //! checked, its result and the cautions attached to a result.
 
+use std::borrow::Cow;
+
 use serde::Serialize;
 
 /// A buckling mode or limit state.
@@ -57,13 +59,14 @@ pub struct ModeResult {
 pub struct Warning {
     /// Stable short code, for scripts ("torsional-not-checked").
     pub code: &'static str,
-    /// The message in words.
-    pub message: String,
+    /// The message in words: most are fixed texts, kept without
+    /// allocating; those with the member's numbers are formatted.
+    pub message: Cow<'static, str>,
 }
 
 impl Warning {
     /// A warning with a code and a message.
-    pub fn new(code: &'static str, message: impl Into<String>) -> Warning {
+    pub fn new(code: &'static str, message: impl Into<Cow<'static, str>>) -> Warning {
         Warning {
             code,
             message: message.into(),

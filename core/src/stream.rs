@@ -22,9 +22,6 @@
 use std::fmt;
 use std::io::Read;
 
-use serde::de::{self, DeserializeSeed, MapAccess, SeqAccess, Visitor};
-use serde_json::value::RawValue;
-
 use crate::error::Error;
 use crate::file::{SheetHeader, FORMAT, VERSION};
 use crate::ids::SeenIds;
@@ -75,57 +72,89 @@ impl<X: fmt::Display> fmt::Display for Stop<X> {
 /// with [`Error::DuplicateId`] naming it, after the members before it were
 /// handed over, so a caller that writes as it goes must mark its output
 /// incomplete when reading stops.
-pub fn members<R, F, X>(mut reader: R, each: F) -> Result<Head, Stop<X>>
+///
+/// The file is read a buffer at a time by [`Scan`], which finds where each
+/// value of the top-level object and each member of `members` ends (a pass
+/// over the bytes, minding strings and nesting); each member's text is then
+/// read from the buffer by serde_json as a slice ([`member_from_str`]).
+/// serde_json reading the whole file from an `io::Read` instead took some
+/// 16,000 instructions a member only to capture each member's raw text.
+pub fn members<R, F, X>(reader: R, mut each: F) -> Result<Head, Stop<X>>
 where
     R: Read,
     F: FnMut(&Head, Member) -> Result<(), X>,
 {
-    // A UTF-8 byte-order mark at the start is dropped.
-    let mut start = Vec::with_capacity(3);
-    if let Err(e) = (&mut reader).take(3).read_to_end(&mut start) {
-        return Err(Stop::Bad(Error::NotMemberFile {
-            reason: format!("it cannot be read: {e}"),
-        }));
+    let mut scan = Scan::new(reader);
+    let mut head = Head::default();
+    let mut format_seen = false;
+    let mut members_seen = false;
+    let mut ids = SeenIds::new();
+    scan.bom().map_err(Stop::Bad)?;
+    scan.expect_start(b'{', "a member file (a JSON object)")
+        .map_err(Stop::Bad)?;
+    // The top-level keys read so far (a handful), to refuse one given
+    // twice as the whole-file reader does.
+    let mut keys: Vec<String> = Vec::new();
+    let mut first = true;
+    loop {
+        let Some(key) = scan.key(first, b'}').map_err(Stop::Bad)? else {
+            break;
+        };
+        first = false;
+        if keys.contains(&key) {
+            return Err(Stop::Bad(Error::Syntax {
+                line: 0,
+                column: 0,
+                message: crate::read::Repeat::top(&key).message(),
+            }));
+        }
+        keys.push(key.clone());
+        if key == "members" {
+            if !format_seen || head.version == 0 {
+                return Err(Stop::MembersFirst);
+            }
+            members_seen = true;
+            scan.expect_start(b'[', "the \"members\" list")
+                .map_err(Stop::Bad)?;
+            let mut first_member = true;
+            while let Some(text) = scan.element(first_member).map_err(Stop::Bad)? {
+                first_member = false;
+                let index = head.count;
+                let member = member_from_str(text, index).map_err(Stop::Bad)?;
+                if !ids.insert(&member.id) {
+                    let e = Error::DuplicateId {
+                        id: member.id.clone(),
+                    }
+                    .in_member(&format!("#{}", index + 1));
+                    return Err(Stop::Bad(e));
+                }
+                head.count += 1;
+                each(&head, member).map_err(Stop::Caller)?;
+            }
+        } else {
+            let (start, end) = scan.value().map_err(Stop::Bad)?;
+            let text = scan.text(start, end).map_err(Stop::Bad)?;
+            head_value(&key, text, scan.place(start), &mut head, &mut format_seen)
+                .map_err(Stop::Bad)?;
+        }
     }
-    if start == [0xEF, 0xBB, 0xBF] {
-        start.clear();
-    }
-    let reader = std::io::Cursor::new(start).chain(reader);
-    let mut state = State {
-        head: Head::default(),
-        format_seen: false,
-        members_seen: false,
-        ids: SeenIds::new(),
-        stop: None,
-        each,
-    };
-    let mut de =
-        serde_json::Deserializer::from_reader(std::io::BufReader::with_capacity(1 << 16, reader));
-    let read = FileSeed(&mut state)
-        .deserialize(&mut de)
-        .and_then(|()| de.end());
-    if let Some(stop) = state.stop.take() {
-        return Err(stop);
-    }
-    if let Err(e) = read {
-        return Err(Stop::Bad(syntax(&e)));
-    }
-    if !state.format_seen {
+    scan.end().map_err(Stop::Bad)?;
+    if !format_seen {
         return Err(Stop::Bad(Error::NotMemberFile {
             reason: "it has no \"format\" key".into(),
         }));
     }
-    if state.head.version == 0 {
+    if head.version == 0 {
         return Err(Stop::Bad(Error::NotMemberFile {
             reason: "it has no whole-number \"version\" key".into(),
         }));
     }
-    if !state.members_seen {
+    if !members_seen {
         return Err(Stop::Bad(Error::NotMemberFile {
             reason: "it has no \"members\" list".into(),
         }));
     }
-    Ok(state.head)
+    Ok(head)
 }
 
 /// A member from its JSON text; `index` (0-based) names it when it has no id.
@@ -196,193 +225,425 @@ fn without_position(e: &serde_json::Error) -> String {
     }
 }
 
-fn syntax(e: &serde_json::Error) -> Error {
+/// One top-level value other than `members`, as its JSON `text` (which
+/// starts at line and column `at` of the file).
+fn head_value(
+    key: &str,
+    text: &str,
+    at: (usize, usize),
+    head: &mut Head,
+    format_seen: &mut bool,
+) -> Result<(), Error> {
+    let value = || serde_json::from_str::<serde_json::Value>(text).map_err(|e| syntax_at(&e, at));
+    match key {
+        "format" => match value()?.as_str() {
+            Some(FORMAT) => *format_seen = true,
+            Some(other) => {
+                let reason = format!("its \"format\" is \"{other}\"");
+                return Err(Error::NotMemberFile { reason });
+            }
+            None => {
+                let reason = "its \"format\" is not text".to_string();
+                return Err(Error::NotMemberFile { reason });
+            }
+        },
+        "version" => {
+            let Some(version) = value()?.as_u64() else {
+                let reason = "it has no whole-number \"version\" key".to_string();
+                return Err(Error::NotMemberFile { reason });
+            };
+            if version == 0 || version > VERSION {
+                return Err(Error::UnsupportedVersion {
+                    found: version,
+                    newest: VERSION,
+                });
+            }
+            head.version = version;
+        }
+        "title" => {
+            head.title = match value()? {
+                serde_json::Value::Null => String::new(),
+                serde_json::Value::String(s) => s,
+                _ => {
+                    return Err(Error::Syntax {
+                        line: 0,
+                        column: 0,
+                        message: "title: expected text".into(),
+                    })
+                }
+            };
+        }
+        other => {
+            // The sheet's header and keys this reader does not use:
+            // checked as the whole-file reader checks them.
+            let (value, repeat) = crate::read::value(text).map_err(|e| syntax_at(&e, at))?;
+            if let Some(repeat) = repeat {
+                return Err(Error::Syntax {
+                    line: 0,
+                    column: 0,
+                    message: repeat.under(other).message(),
+                });
+            }
+            if other == "sheet" && !value.is_null() {
+                if let Err(e) = serde_json::from_value::<SheetHeader>(value) {
+                    return Err(Error::Syntax {
+                        line: 0,
+                        column: 0,
+                        message: format!("sheet: {e}"),
+                    });
+                }
+            }
+        }
+    }
+    Ok(())
+}
+
+/// serde_json's error in a value that starts at `at` (line, column) of the
+/// file, placed in the file.
+fn syntax_at(e: &serde_json::Error, at: (usize, usize)) -> Error {
+    let (line, column) = if e.line() <= 1 {
+        (at.0, at.1 + e.column().saturating_sub(1))
+    } else {
+        (at.0 + e.line() - 1, e.column())
+    };
     Error::Syntax {
-        line: e.line(),
-        column: e.column(),
+        line,
+        column,
         message: without_position(e),
     }
 }
 
-struct State<F, X> {
-    head: Head,
-    format_seen: bool,
-    members_seen: bool,
-    ids: SeenIds,
-    stop: Option<Stop<X>>,
-    each: F,
+/// Bytes read from the file at a time.
+const CHUNK: usize = 1 << 16;
+
+/// The JSON text of a member file read a buffer at a time: finds where each
+/// value ends without reading it (the values themselves are read by
+/// serde_json from the buffer), and knows the line and column of every byte
+/// for the messages.
+struct Scan<R> {
+    reader: R,
+    /// Bytes read and not yet dropped; `pos` is the next one to look at.
+    buf: Vec<u8>,
+    pos: usize,
+    /// The reader has no more bytes.
+    eof: bool,
+    /// Lines ended in the bytes dropped from the front of `buf`.
+    lines_dropped: usize,
+    /// Bytes dropped, and where the line of `buf[0]` starts among them
+    /// (byte offsets in the file).
+    dropped: usize,
+    line_start: usize,
 }
 
-impl<F, X> State<F, X>
-where
-    F: FnMut(&Head, Member) -> Result<(), X>,
-{
-    fn bad<E: de::Error>(&mut self, e: Error) -> E {
-        self.stop = Some(Stop::Bad(e));
-        E::custom("stopped")
-    }
-}
-
-struct FileSeed<'s, F, X>(&'s mut State<F, X>);
-
-impl<'de, F, X> DeserializeSeed<'de> for FileSeed<'_, F, X>
-where
-    F: FnMut(&Head, Member) -> Result<(), X>,
-{
-    type Value = ();
-    fn deserialize<D: de::Deserializer<'de>>(self, d: D) -> Result<(), D::Error> {
-        d.deserialize_any(self)
-    }
-}
-
-impl<'de, F, X> Visitor<'de> for FileSeed<'_, F, X>
-where
-    F: FnMut(&Head, Member) -> Result<(), X>,
-{
-    type Value = ();
-
-    fn expecting(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        f.write_str("a member file (a JSON object)")
+impl<R: Read> Scan<R> {
+    fn new(reader: R) -> Scan<R> {
+        Scan {
+            reader,
+            buf: Vec::with_capacity(CHUNK * 2),
+            pos: 0,
+            eof: false,
+            lines_dropped: 0,
+            dropped: 0,
+            line_start: 0,
+        }
     }
 
-    fn visit_map<A: MapAccess<'de>>(self, mut map: A) -> Result<(), A::Error> {
-        let state = self.0;
-        // The top-level keys read so far (a handful), to refuse one given
-        // twice as the whole-file reader does.
-        let mut keys: Vec<String> = Vec::new();
-        while let Some(key) = map.next_key::<String>()? {
-            if keys.contains(&key) {
-                return Err(state.bad(Error::Syntax {
-                    line: 0,
-                    column: 0,
-                    message: crate::read::Repeat::top(&key).message(),
-                }));
+    /// Reads more bytes onto the end of the buffer (indices into it keep
+    /// their meaning); false at the end of the file.
+    fn more(&mut self) -> Result<bool, Error> {
+        if self.eof {
+            return Ok(false);
+        }
+        // Up to a chunk, into the buffer's spare room (not zeroed first).
+        let got = (&mut self.reader)
+            .take(CHUNK as u64)
+            .read_to_end(&mut self.buf)
+            .map_err(|e| Error::NotMemberFile {
+                reason: format!("it cannot be read: {e}"),
+            })?;
+        if got == 0 {
+            self.eof = true;
+        }
+        Ok(got > 0)
+    }
+
+    /// Drops the bytes before `pos` when they are more than a chunk,
+    /// keeping count of their lines.
+    fn drop_read(&mut self) {
+        if self.pos < CHUNK {
+            return;
+        }
+        let gone = self.buf.get(..self.pos).unwrap_or_default();
+        if let Some(last) = gone.iter().rposition(|&b| b == b'\n') {
+            self.lines_dropped += gone.iter().filter(|&&b| b == b'\n').count();
+            self.line_start = self.dropped + last + 1;
+        }
+        self.dropped += self.pos;
+        self.buf.drain(..self.pos);
+        self.pos = 0;
+    }
+
+    /// The byte at `i`, reading more when the buffer ends there; `None` at
+    /// the end of the file.
+    fn byte_at(&mut self, i: usize) -> Result<Option<u8>, Error> {
+        while i >= self.buf.len() {
+            if !self.more()? {
+                return Ok(None);
             }
-            keys.push(key.clone());
-            match key.as_str() {
-                "format" => {
-                    let value: serde_json::Value = map.next_value()?;
-                    match value.as_str() {
-                        Some(FORMAT) => state.format_seen = true,
-                        Some(other) => {
-                            let reason = format!("its \"format\" is \"{other}\"");
-                            return Err(state.bad(Error::NotMemberFile { reason }));
-                        }
-                        None => {
-                            let reason = "its \"format\" is not text".to_string();
-                            return Err(state.bad(Error::NotMemberFile { reason }));
-                        }
-                    }
-                }
-                "version" => {
-                    let value: serde_json::Value = map.next_value()?;
-                    let Some(version) = value.as_u64() else {
-                        let reason = "it has no whole-number \"version\" key".to_string();
-                        return Err(state.bad(Error::NotMemberFile { reason }));
-                    };
-                    if version == 0 || version > VERSION {
-                        return Err(state.bad(Error::UnsupportedVersion {
-                            found: version,
-                            newest: VERSION,
-                        }));
-                    }
-                    state.head.version = version;
-                }
-                "title" => {
-                    let value: serde_json::Value = map.next_value()?;
-                    state.head.title = match value {
-                        serde_json::Value::Null => String::new(),
-                        serde_json::Value::String(s) => s,
-                        _ => {
-                            return Err(state.bad(Error::Syntax {
-                                line: 0,
-                                column: 0,
-                                message: "title: expected text".into(),
-                            }))
-                        }
-                    };
-                }
-                "members" => {
-                    if !state.format_seen || state.head.version == 0 {
-                        state.stop = Some(Stop::MembersFirst);
-                        return Err(de::Error::custom("stopped"));
-                    }
-                    state.members_seen = true;
-                    map.next_value_seed(MembersSeed(&mut *state))?;
-                }
-                other => {
-                    // The sheet's header and keys this reader does not use:
-                    // checked as the whole-file reader checks them.
-                    let raw: Box<RawValue> = map.next_value()?;
-                    let (value, repeat) =
-                        crate::read::value(raw.get()).map_err(de::Error::custom)?;
-                    if let Some(repeat) = repeat {
-                        return Err(state.bad(Error::Syntax {
-                            line: 0,
-                            column: 0,
-                            message: repeat.under(other).message(),
-                        }));
-                    }
-                    if other == "sheet" && !value.is_null() {
-                        if let Err(e) = serde_json::from_value::<SheetHeader>(value) {
-                            return Err(state.bad(Error::Syntax {
-                                line: 0,
-                                column: 0,
-                                message: format!("sheet: {e}"),
-                            }));
-                        }
-                    }
-                }
+        }
+        Ok(self.buf.get(i).copied())
+    }
+
+    /// Line and column (1-based) of the byte at `i` of the buffer.
+    fn place(&self, i: usize) -> (usize, usize) {
+        let before = self.buf.get(..i).unwrap_or_default();
+        let lines = before.iter().filter(|&&b| b == b'\n').count();
+        let column = match before.iter().rposition(|&b| b == b'\n') {
+            Some(nl) => i - nl,
+            None => self.dropped + i - self.line_start + 1,
+        };
+        (self.lines_dropped + lines + 1, column)
+    }
+
+    /// A syntax error at byte `i` of the buffer.
+    fn error(&self, i: usize, message: &str) -> Error {
+        let (line, column) = self.place(i);
+        Error::Syntax {
+            line,
+            column,
+            message: message.to_string(),
+        }
+    }
+
+    /// The next byte that is not white space, `pos` moved onto it.
+    fn next_token(&mut self) -> Result<Option<u8>, Error> {
+        loop {
+            match self.byte_at(self.pos)? {
+                Some(b' ' | b'\t' | b'\n' | b'\r') => self.pos += 1,
+                other => return Ok(other),
             }
+        }
+    }
+
+    /// Drops a UTF-8 byte-order mark at the start.
+    fn bom(&mut self) -> Result<(), Error> {
+        for i in 0..3 {
+            if self.byte_at(i)?.is_none() {
+                break;
+            }
+        }
+        if self.buf.starts_with(&[0xEF, 0xBB, 0xBF]) {
+            self.pos = 3;
         }
         Ok(())
     }
-}
 
-struct MembersSeed<'s, F, X>(&'s mut State<F, X>);
-
-impl<'de, F, X> DeserializeSeed<'de> for MembersSeed<'_, F, X>
-where
-    F: FnMut(&Head, Member) -> Result<(), X>,
-{
-    type Value = ();
-    fn deserialize<D: de::Deserializer<'de>>(self, d: D) -> Result<(), D::Error> {
-        d.deserialize_seq(self)
-    }
-}
-
-impl<'de, F, X> Visitor<'de> for MembersSeed<'_, F, X>
-where
-    F: FnMut(&Head, Member) -> Result<(), X>,
-{
-    type Value = ();
-
-    fn expecting(&self, f: &mut fmt::Formatter<'_>) -> fmt::Result {
-        f.write_str("the \"members\" list")
+    /// Steps over `open` (`{` or `[`), which must come next; `what` names
+    /// the value expected otherwise.
+    fn expect_start(&mut self, open: u8, what: &str) -> Result<(), Error> {
+        match self.next_token()? {
+            Some(b) if b == open => {
+                self.pos += 1;
+                Ok(())
+            }
+            Some(_) => Err(self.error(self.pos, &format!("expected {what}"))),
+            None => Err(self.error(self.pos, "EOF while parsing a value")),
+        }
     }
 
-    fn visit_seq<A: SeqAccess<'de>>(self, mut seq: A) -> Result<(), A::Error> {
-        let state = self.0;
-        while let Some(raw) = seq.next_element::<Box<RawValue>>()? {
-            let index = state.head.count;
-            let member = match member_from_str(raw.get(), index) {
-                Ok(m) => m,
-                Err(e) => return Err(state.bad(e)),
+    /// After the opening of an object or list or one of its entries: the
+    /// comma before the next entry (true), or the `close` that ends it
+    /// (false); `first` when no entry was read yet.
+    fn next_entry(&mut self, first: bool, close: u8) -> Result<bool, Error> {
+        match self.next_token()? {
+            Some(b) if b == close && first => {
+                self.pos += 1;
+                Ok(false)
+            }
+            Some(b) if b == close => {
+                self.pos += 1;
+                Ok(false)
+            }
+            Some(b',') if !first => {
+                self.pos += 1;
+                // No entry after the comma is a trailing comma.
+                match self.next_token()? {
+                    Some(b) if b == close => Err(self.error(self.pos, "trailing comma")),
+                    _ => Ok(true),
+                }
+            }
+            Some(b',') => Err(self.error(self.pos, "expected value")),
+            Some(_) if first => Ok(true),
+            Some(_) => Err(self.error(
+                self.pos,
+                if close == b'}' {
+                    "expected `,` or `}`"
+                } else {
+                    "expected `,` or `]`"
+                },
+            )),
+            None => Err(self.error(
+                self.pos,
+                if close == b'}' {
+                    "EOF while parsing an object"
+                } else {
+                    "EOF while parsing a list"
+                },
+            )),
+        }
+    }
+
+    /// The next key of the top-level object and the colon after it, or
+    /// `None` at its end.
+    fn key(&mut self, first: bool, close: u8) -> Result<Option<String>, Error> {
+        if !self.next_entry(first, close)? {
+            return Ok(None);
+        }
+        if self.next_token()? != Some(b'"') {
+            return Err(self.error(self.pos, "key must be a string"));
+        }
+        let start = self.pos;
+        let end = self.value_end()?;
+        let key = serde_json::from_slice::<String>(self.buf.get(start..end).unwrap_or_default())
+            .map_err(|e| self.error(start, &without_position(&e)))?;
+        self.pos = end;
+        match self.next_token()? {
+            Some(b':') => {
+                self.pos += 1;
+                Ok(Some(key))
+            }
+            Some(_) => Err(self.error(self.pos, "expected `:`")),
+            None => Err(self.error(self.pos, "EOF while parsing an object")),
+        }
+    }
+
+    /// Where the next value starts and ends in the buffer (valid until the
+    /// next call that reads).
+    fn value(&mut self) -> Result<(usize, usize), Error> {
+        self.drop_read();
+        if self.next_token()?.is_none() {
+            return Err(self.error(self.pos, "EOF while parsing a value"));
+        }
+        let start = self.pos;
+        let end = self.value_end()?;
+        if end == start {
+            return Err(self.error(start, "expected value"));
+        }
+        self.pos = end;
+        Ok((start, end))
+    }
+
+    /// The text of the buffer from `start` to `end`.
+    fn text(&self, start: usize, end: usize) -> Result<&str, Error> {
+        let bytes = self.buf.get(start..end).unwrap_or_default();
+        std::str::from_utf8(bytes).map_err(|_| self.error(start, "invalid unicode code point"))
+    }
+
+    /// The text of the next entry of a list, or `None` at its end.
+    fn element(&mut self, first: bool) -> Result<Option<&str>, Error> {
+        if !self.next_entry(first, b']')? {
+            return Ok(None);
+        }
+        let (start, end) = self.value()?;
+        self.text(start, end).map(Some)
+    }
+
+    /// Where the value starting at `pos` ends (one past its last byte):
+    /// a string at its closing quote, an object or list where its nesting
+    /// closes, a number or word before the next comma, bracket, brace or
+    /// white space. Only the extent is found here; the value's own syntax
+    /// is serde_json's to check when it reads the text.
+    fn value_end(&mut self) -> Result<usize, Error> {
+        let mut i = self.pos;
+        let Some(first) = self.byte_at(i)? else {
+            return Err(self.error(i, "EOF while parsing a value"));
+        };
+        let mut depth = 0usize;
+        let mut in_string = false;
+        match first {
+            b'"' => in_string = true,
+            b'{' | b'[' => depth = 1,
+            _ => loop {
+                match self.byte_at(i)? {
+                    None | Some(b',' | b']' | b'}' | b' ' | b'\t' | b'\n' | b'\r') => return Ok(i),
+                    Some(_) => i += 1,
+                }
+            },
+        }
+        i += 1;
+        loop {
+            // The bytes at hand, without a call a byte: in a string, on to
+            // its next quote or backslash; outside, on to the next quote or
+            // bracket (tight loops over the bytes between).
+            let bytes = self.buf.get(i..).unwrap_or_default();
+            let mut j = 0;
+            loop {
+                let rest = bytes.get(j..).unwrap_or_default();
+                let found = if in_string {
+                    rest.iter().position(|&b| b == b'"' || b == b'\\')
+                } else {
+                    rest.iter()
+                        .position(|&b| matches!(b, b'"' | b'{' | b'[' | b'}' | b']'))
+                };
+                let Some(k) = found else {
+                    j = bytes.len();
+                    break;
+                };
+                j += k;
+                let b = bytes.get(j).copied().unwrap_or_default();
+                j += 1;
+                match b {
+                    b'\\' => {
+                        // The escaped byte, which may be a quote.
+                        if j < bytes.len() {
+                            j += 1;
+                        } else {
+                            // The buffer ends after the backslash.
+                            j -= 1;
+                            break;
+                        }
+                    }
+                    b'"' => {
+                        in_string = !in_string;
+                        if !in_string && depth == 0 {
+                            return Ok(i + j);
+                        }
+                    }
+                    b'{' | b'[' => depth += 1,
+                    _ => {
+                        depth -= 1;
+                        if depth == 0 {
+                            return Ok(i + j);
+                        }
+                    }
+                }
+            }
+            i += j;
+            // Read on: the value goes past the buffer (or a backslash ends it).
+            let need = if self.buf.get(i) == Some(&b'\\') {
+                i + 1
+            } else {
+                i
             };
-            if !state.ids.insert(&member.id) {
-                let e = Error::DuplicateId {
-                    id: member.id.clone(),
-                }
-                .in_member(&format!("#{}", index + 1));
-                return Err(state.bad(e));
-            }
-            state.head.count += 1;
-            if let Err(x) = (state.each)(&state.head, member) {
-                state.stop = Some(Stop::Caller(x));
-                return Err(de::Error::custom("stopped"));
+            if self.byte_at(need)?.is_none() {
+                let what = if in_string {
+                    "EOF while parsing a string"
+                } else if first == b'[' {
+                    "EOF while parsing a list"
+                } else {
+                    "EOF while parsing an object"
+                };
+                return Err(self.error(self.buf.len(), what));
             }
         }
-        Ok(())
+    }
+
+    /// After the top-level object: nothing but white space.
+    fn end(&mut self) -> Result<(), Error> {
+        match self.next_token()? {
+            None => Ok(()),
+            Some(_) => Err(self.error(self.pos, "trailing characters")),
+        }
     }
 }
 
@@ -538,6 +799,90 @@ mod tests {
         let (seen, out) = ids(&first);
         assert!(seen.is_empty() && matches!(out, Err(Stop::MembersFirst)));
         assert!(crate::file::parse(&first).is_ok());
+    }
+
+    /// A reader that gives at most `n` bytes a call, so values straddle
+    /// every possible buffer boundary.
+    struct Trickle<'a>(&'a [u8], usize);
+
+    impl Read for Trickle<'_> {
+        fn read(&mut self, out: &mut [u8]) -> std::io::Result<usize> {
+            let n = self.1.min(out.len()).min(self.0.len());
+            out[..n].copy_from_slice(&self.0[..n]);
+            self.0 = &self.0[n..];
+            Ok(n)
+        }
+    }
+
+    #[test]
+    fn values_across_buffers_and_tricky_strings_read_as_the_whole_file_reader_does() {
+        // Notes with quotes, backslashes, brackets and braces inside
+        // strings, escaped keys, and enough members that the text spans
+        // several buffers.
+        let tricky = [
+            r#"a \"quoted\" [note] {with} braces"#,
+            r#"back\\slash at the end\\"#,
+            r#"unicode \u00e9 and \/ and tab\t"#,
+            "]}],{[",
+        ];
+        let list: Vec<String> = (0..1000)
+            .map(|i| {
+                let note = tricky[i % tricky.len()];
+                member(&format!("C{i}")).replacen(
+                    "\"id\"",
+                    &format!("\"note\": \"{note}\", \"i\\u0064\""),
+                    1,
+                )
+            })
+            .collect();
+        let text = format!("  \n{}\n  ", file(&list));
+        let whole = crate::file::parse(&text).unwrap();
+        for step in [1, 7, 4096, 1 << 20] {
+            let mut streamed = Vec::new();
+            let head = members(Trickle(text.as_bytes(), step), |_, m| {
+                streamed.push(m);
+                Ok::<(), ()>(())
+            })
+            .unwrap();
+            assert_eq!(head.count, 1000);
+            assert_eq!(streamed, whole.members, "read {step} bytes at a time");
+        }
+    }
+
+    #[test]
+    fn broken_structure_is_refused_with_its_line_as_the_whole_file_reader_refuses_it() {
+        let good = file(&many(3));
+        let broken = [
+            good.replacen("},\n{", "}\n{", 1),
+            good.replacen("},\n{", "},,\n{", 1),
+            good.replacen("}]}", "},]}", 1),
+            format!("{good} x"),
+            good.replacen("\"members\": [", "\"members\": [,", 1),
+            good.replacen("\"title\": \"t\",", "\"title\": \"t\" ", 1),
+            good.replacen("\"version\": 2", "\"version\": 2x", 1),
+            good.replacen("\"members\": [", "\"members\": {", 1),
+            good.replacen("\"title\"", "title", 1),
+            good[..good.len() - 2].to_string(),
+        ];
+        for text in &broken {
+            assert!(crate::file::parse(text).is_err(), "{text}");
+            let (_, out) = ids(text);
+            let Err(Stop::Bad(e)) = out else {
+                panic!("took {text}: {out:?}")
+            };
+            assert!(!e.to_string().is_empty());
+        }
+        // Where the file breaks is told by line and column.
+        let cut = good.replacen("},\n{", "}\n{", 1);
+        let at = cut.find("}\n{").unwrap() + 2;
+        let line = cut[..at].matches('\n').count() + 1;
+        let Err(Stop::Bad(Error::Syntax {
+            line: l, column, ..
+        })) = ids(&cut).1
+        else {
+            panic!()
+        };
+        assert_eq!((l, column), (line, 1), "{cut}");
     }
 
     #[test]

@@ -30,6 +30,7 @@ pub fn run(args: &[String]) -> Result<()> {
     let browser = !args.iter().any(|a| a == "--no-browser");
     let root = util::root();
     let mut figures = Vec::new();
+    let load_at_start = load_average();
 
     util::run(util::cargo().args([
         "bench",
@@ -48,6 +49,29 @@ pub fn run(args: &[String]) -> Result<()> {
         higher_is_better: true,
         target: 2_000_000.0,
     });
+    // Issue 19: a check without its working (batch summaries, sizing
+    // candidates, envelope samples) at 10 M a second on one core; from the
+    // member as written (section built, material resolved each time), and
+    // from members prepared once (a list re-check, repeated checks).
+    for (dir, name) in [
+        (
+            "10k_mixed_members_without_working",
+            "the same without working (from the member as written)",
+        ),
+        (
+            "10k_mixed_members_prepared_without_working",
+            "the same without working, members prepared once (section, material)",
+        ),
+    ] {
+        let ns = criterion_mean_ns(&root.join("target/criterion/check").join(dir))?;
+        figures.push(Figure {
+            name,
+            value: 10_000.0 / (ns * 1e-9),
+            unit: "checks/s",
+            higher_is_better: true,
+            target: 10_000_000.0,
+        });
+    }
 
     // Issue 17 (a beam-column check: every equation, both axes, LTB) and
     // issue 16 (a member check with moments): a million a second, one core.
@@ -144,11 +168,13 @@ pub fn run(args: &[String]) -> Result<()> {
         });
     }
 
-    let mut web = String::new();
+    let load_at_end = load_average();
     if browser {
         crate::bench_web::run(&[])?;
-        web = std::fs::read_to_string(root.join("bench/web.md")).unwrap_or_default();
     }
+    // With --no-browser, the browser figures of the last `bench-web` run
+    // (bench/web.md says when and at which load they were measured).
+    let web = std::fs::read_to_string(root.join("bench/web.md")).unwrap_or_default();
 
     let baseline: Value = std::fs::read_to_string(root.join("bench/baseline.json"))
         .ok()
@@ -161,7 +187,13 @@ pub fn run(args: &[String]) -> Result<()> {
         out,
         "Written by `cargo xtask bench` (reproduce with that command from the repository root).\n"
     )?;
-    writeln!(out, "## Machine\n\n{}\n", machine())?;
+    writeln!(
+        out,
+        "## Machine\n\n{}\n- load average (1, 5, 15 min) at the start of the engine benchmarks: \
+         {load_at_start}; at their end: {load_at_end} (the machine is shared: Criterion's times \
+         move with the load)\n",
+        machine()
+    )?;
     writeln!(out, "## Engine\n")?;
     writeln!(out, "| figure | value | target | recorded | verdict |")?;
     writeln!(out, "|---|---|---|---|---|")?;
@@ -207,7 +239,12 @@ pub fn run(args: &[String]) -> Result<()> {
         )?;
     }
     if !web.is_empty() {
-        writeln!(out, "\n## Browser\n\n{web}")?;
+        let source = if browser {
+            ""
+        } else {
+            "(not measured by this run, `--no-browser`: the last `cargo xtask bench-web`'s figures)\n\n"
+        };
+        writeln!(out, "\n## Browser\n\n{source}{web}")?;
     }
     std::fs::create_dir_all(root.join("bench"))?;
     std::fs::write(root.join("bench/RESULTS.md"), &out)?;
@@ -240,6 +277,14 @@ fn first_estimate_dir(criterion: &Path, group: &str) -> Option<std::path::PathBu
 }
 
 /// A description of this machine: CPU model, cores, memory, toolchain.
+/// The load average of the last 1, 5 and 15 minutes, as /proc/loadavg gives it.
+fn load_average() -> String {
+    std::fs::read_to_string("/proc/loadavg")
+        .ok()
+        .map(|t| t.split_whitespace().take(3).collect::<Vec<_>>().join(", "))
+        .unwrap_or_else(|| "unknown".into())
+}
+
 pub fn machine() -> String {
     let cpu = std::fs::read_to_string("/proc/cpuinfo")
         .ok()

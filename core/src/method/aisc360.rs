@@ -31,7 +31,9 @@
 
 use crate::error::{Error, Result};
 use crate::member::{AngleConnection, Leg, Truss};
-use crate::method::euler::{basics, push_geometry, push_material, require_steel, warn_once};
+use crate::method::euler::{
+    basics, push_geometry, push_material, require_steel, warn_once, warn_once_text,
+};
 use crate::method::{Input, Method};
 use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::SectionSpec;
@@ -111,27 +113,31 @@ pub fn prelude(
         ),
     }
     if input.member.gamma_m1.is_some() {
-        warn_once(warnings, "factor-ignored", || {
-            "gamma_m1 is not used by AISC 360; phi_c or Omega_c of E1 applies".to_string()
-        });
+        warn_once_text(
+            warnings,
+            "factor-ignored",
+            "gamma_m1 is not used by AISC 360; phi_c or Omega_c of E1 applies",
+        );
     }
     match &input.section.spec {
         SectionSpec::I(s) if s.make.is_unstated() => {
-            warn_once(warnings, "make-assumed", || {
+            warn_once_text(
+                warnings,
+                "make-assumed",
                 "make not given: the I section is taken as welded, the more slender reading of \
                  AISC 360-16 Table B4.1a (flanges by case 2 with k_c, web h = d - 2t_f), the lower \
-                 resistance; give make (rolled or welded) if it is known"
-                    .to_string()
-            });
+                 resistance; give make (rolled or welded) if it is known",
+            );
         }
         // B4.2: the design wall of an ERW HSS is 0.93 t_nom. The catalogue
         // applies it; a typed wall is used as it is, and the result says so.
         SectionSpec::Rhs(_) | SectionSpec::Chs(_) if input.section.designation.is_none() => {
-            warn_once(warnings, "wall-as-design-thickness", || {
+            warn_once_text(
+                warnings,
+                "wall-as-design-thickness",
                 "wall_mm is taken as the design wall thickness; for electric-resistance-welded \
-                 HSS, AISC 360-16 B4.2 takes 0.93 t_nom: type 0.93 x the nominal wall if so"
-                    .to_string()
-            });
+                 HSS, AISC 360-16 B4.2 takes 0.93 t_nom: type 0.93 x the nominal wall if so",
+            );
         }
         _ => {}
     }

@@ -169,6 +169,13 @@ pub fn warn_once(
     }
 }
 
+/// [`warn_once`] with a fixed text, kept without allocating.
+pub fn warn_once_text(warnings: &mut Vec<Warning>, code: &'static str, message: &'static str) {
+    if !has_warning(warnings, code) {
+        warnings.push(Warning::new(code, message));
+    }
+}
+
 /// The steel of the input, or `NotApplicable` for timber.
 pub fn require_steel<'a>(input: &Input<'a>, method: &'static str) -> Result<&'a Steel> {
     match input.material {
@@ -236,12 +243,13 @@ pub fn extreme_fibre_mm(input: &Input<'_>, mode: Mode, warnings: &mut Vec<Warnin
     match from_dims {
         Some(c) if c.is_finite() && c > 0.0 => c,
         _ => {
-            warn_once(warnings, "extreme-fibre-assumed", || {
+            warn_once_text(
+                warnings,
+                "extreme-fibre-assumed",
                 "the section does not give its elastic modulus, so the extreme-fibre distance is \
                  taken as sqrt(3) i (a solid rectangle); the bow or eccentricity effect may be \
-                 under- or over-stated"
-                    .to_string()
-            });
+                 under- or over-stated",
+            );
             3f64.sqrt() * r
         }
     }
@@ -416,11 +424,8 @@ pub fn push_optional_factor(input: &Input<'_>, trace: &mut Trace) -> f64 {
 /// timber code's modification and partial factors.
 pub fn warn_timber_first_principles(input: &Input<'_>, warnings: &mut Vec<Warning>) {
     if let Material::Timber(_) = input.material {
-        warn_once(warnings, "timber-first-principles", || {
-            "a first-principles method on timber uses f_c,0,k and E_0,05 as they are, without k_mod \
-             or gamma_M; use \"en1995-1-1\" for a design check"
-                .to_string()
-        });
+        warn_once_text(warnings, "timber-first-principles", "a first-principles method on timber uses f_c,0,k and E_0,05 as they are, without k_mod \
+             or gamma_M; use \"en1995-1-1\" for a design check");
     }
 }
 

@@ -20,7 +20,7 @@ use crate::error::Result;
 use crate::member::CSA_N_DEFAULT;
 use crate::method::euler::{
     basics, hollow_make_unstated, is_hot_finished_hollow, push_geometry, push_material,
-    require_steel, warn_once,
+    require_steel, warn_once, warn_once_text,
 };
 use crate::method::Input;
 use crate::outcome::{Mode, ModeResult, Warning};
@@ -103,25 +103,29 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
         "CSA S16-19 13.3.1",
     );
     if input.member.gamma_m1.is_some() {
-        warn_once(warnings, "factor-ignored", || {
-            "gamma_m1 is not used by CSA S16; phi = 0.90 of 13.1 applies".to_string()
-        });
+        warn_once_text(
+            warnings,
+            "factor-ignored",
+            "gamma_m1 is not used by CSA S16; phi = 0.90 of 13.1 applies",
+        );
     }
     if input.member.csa_n.is_none() && hollow_make_unstated(input) {
-        warn_once(warnings, "make-assumed", || {
+        warn_once_text(
+            warnings,
+            "make-assumed",
             "make not given: the hollow section is taken as cold-formed, n = 1.34 of CSA S16-19 \
              13.3.1 (2.24 is for class H, hot-formed or stress-relieved), the lower resistance; \
-             give make (hot-finished or cold-formed) if it is known"
-                .to_string()
-        });
+             give make (hot-finished or cold-formed) if it is known",
+        );
     }
     if matches!(input.section.spec, SectionSpec::Angle(_)) {
-        warn_once(warnings, "angle-centroid-loading", || {
+        warn_once_text(
+            warnings,
+            "angle-centroid-loading",
             "the angle is checked as loaded through its centroid (CSA S16-19 13.3.1, 13.3.2); the \
              effective slenderness S16 gives for a single angle connected by one leg is not \
-             applied: check the end connections by hand"
-                .to_string()
-        });
+             applied: check the end connections by hand",
+        );
     }
     Ok(())
 }

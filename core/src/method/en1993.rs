@@ -22,6 +22,7 @@ use crate::material::Steel;
 use crate::member::Curve;
 use crate::method::euler::{
     basics, is_hot_finished_hollow, push_geometry, push_material, require_steel, warn_once,
+    warn_once_text,
 };
 use crate::method::Input;
 use crate::outcome::{Mode, ModeResult, Warning};
@@ -356,11 +357,12 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     if input.section.family == Family::Given
         && (input.member.curve_major.is_none() || input.member.curve_minor.is_none())
     {
-        warn_once(warnings, "curve-assumed", || {
+        warn_once_text(
+            warnings,
+            "curve-assumed",
             "buckling curve c is assumed for the typed section properties (Table 6.2 needs the \
-             section's shape and make); give curve_major and curve_minor to set them"
-                .to_string()
-        });
+             section's shape and make); give curve_major and curve_minor to set them",
+        );
     }
     let both_given = input.member.curve_major.is_some() && input.member.curve_minor.is_some();
     match &input.section.spec {
@@ -382,12 +384,9 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
                 });
             }
             if make == IMake::Rolled && beyond_table(s) && !both_given {
-                warn_once(warnings, "no-table-row", || {
-                    "EN 1993-1-1 Table 6.2 has no row for a rolled I with h/b > 1.2 and t_f > 100 mm; \
+                warn_once_text(warnings, "no-table-row", "EN 1993-1-1 Table 6.2 has no row for a rolled I with h/b > 1.2 and t_f > 100 mm; \
                      curve d, the lowest, is taken about both axes; give curve_major and \
-                     curve_minor to set them"
-                        .to_string()
-                });
+                     curve_minor to set them");
             }
         }
         SectionSpec::Rhs(_) | SectionSpec::Chs(_)
@@ -403,13 +402,10 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
             });
         }
         SectionSpec::Angle(_) => {
-            warn_once(warnings, "angle-centroid-loading", || {
-                "the angle is checked as loaded through its centroid (EN 1993-1-1 6.3.1); an angle \
+            warn_once_text(warnings, "angle-centroid-loading", "the angle is checked as loaded through its centroid (EN 1993-1-1 6.3.1); an angle \
                  connected by one leg is loaded eccentrically, and the effective slenderness of \
                  Annex BB.1.2 for angles in lattice members is not applied: check the end \
-                 connections by hand"
-                    .to_string()
-            });
+                 connections by hand");
         }
         _ => {}
     }

@@ -15,7 +15,9 @@ use std::f64::consts::PI;
 use crate::error::{Error, Result};
 use crate::material::TimberKind;
 use crate::member::LoadDuration;
-use crate::method::euler::{basics, push_geometry, push_material, require_timber, warn_once};
+use crate::method::euler::{
+    basics, push_geometry, push_material, require_timber, warn_once, warn_once_text,
+};
 use crate::method::Input;
 use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::Family;
@@ -163,7 +165,7 @@ pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>
     if no_class && no_duration {
         // Both taken (the usual case): the text is fixed, so it is not
         // formatted afresh for every check (a test holds it to the format).
-        warn_once(warnings, DEFAULTS_CODE, || DEFAULTS_TAKEN.to_string());
+        warn_once_text(warnings, DEFAULTS_CODE, DEFAULTS_TAKEN);
     } else if no_class || no_duration {
         warn_once(warnings, DEFAULTS_CODE, || {
             defaults_message(sc, d, km, no_class, no_duration)

@@ -48,7 +48,11 @@ pub fn table_of(method: Method) -> Option<Code> {
     }
 }
 
-fn warn(warnings: &mut Vec<Warning>, code: &'static str, message: impl FnOnce() -> String) {
+fn warn<M: Into<std::borrow::Cow<'static, str>>>(
+    warnings: &mut Vec<Warning>,
+    code: &'static str,
+    message: impl FnOnce() -> M,
+) {
     if !warnings.iter().any(|w| w.code == code) {
         warnings.push(Warning::new(code, message()));
     }
@@ -200,7 +204,6 @@ pub fn assess(
         warn(warnings, "local-buckling-not-checked", || {
             "local buckling is not checked for typed section properties: the plates are unknown; \
              classify the section by hand (it must not be slender / Class 4)"
-                .to_string()
         });
         return out;
     }
@@ -242,7 +245,6 @@ pub fn assess(
                 warn(warnings, "class4-shift-not-checked", || {
                     "Class 4 section that is not doubly symmetric: the moment N_Ed e_N from the shift of the \
                      effective centroid (EN 1993-1-1 6.2.2.5(4), 6.3.3) is not included; check it by hand"
-                        .to_string()
                 });
             }
         }
@@ -268,14 +270,12 @@ pub fn assess(
                 // recalled from memory, not checked against a copy at hand.
                 "Class 4 section in compression: CSA S16-19 13.3.4 (effective area) is not implemented; \
                  no resistance is given"
-                    .to_string()
             });
         }
         Method::PerryRobertson | Method::Secant | Method::Euler => {
             warn(warnings, "local-buckling-not-checked", || {
                 "the section is Class 4 by EN 1993-1-1 Table 5.2: local buckling would lower the \
                  resistance and this first-principles method does not include it"
-                    .to_string()
             });
         }
         Method::En1995 => {}
@@ -390,7 +390,7 @@ fn twist_applies(method: Method, input: &Input<'_>, warnings: &mut Vec<Warning>)
         Material::Timber(_) => {
             if open {
                 warn(warnings, "torsional-not-checked", || {
-                    "torsional and flexural-torsional buckling of a timber open section are not covered".to_string()
+                    "torsional and flexural-torsional buckling of a timber open section are not covered"
                 });
             }
             return None;
@@ -400,11 +400,7 @@ fn twist_applies(method: Method, input: &Input<'_>, warnings: &mut Vec<Warning>)
         Method::PerryRobertson | Method::Secant => {
             if open && input.section.family != Family::I || given {
                 warn(warnings, "torsional-not-checked", || {
-                    format!(
-                        "torsional and flexural-torsional buckling are not part of the {} method; \
-                         they can govern for angles, tees and channels: use a code method to check them",
-                        method.key()
-                    )
+                    first_principles_untwisted(method)
                 });
             }
             return None;
@@ -417,17 +413,41 @@ fn twist_applies(method: Method, input: &Input<'_>, warnings: &mut Vec<Warning>)
             warn(warnings, "torsional-not-checked", || {
                 "torsional buckling is not checked for typed properties without torsion_mm4; \
                  give torsion_mm4 (and warping_mm6) to check it"
-                    .to_string()
             });
             return None;
         }
         warn(warnings, "shear-centre-assumed", || {
             "typed properties carry no shear centre: it is taken at the centroid (torsional buckling only); \
              for a singly symmetric or asymmetric section flexural-torsional buckling is lower and is not checked"
-                .to_string()
         });
     }
     Some(g)
+}
+
+/// The warning that a first-principles method leaves the twisting modes
+/// out, as a fixed text for each (a unit test holds it to the formatted
+/// one), so the usual case allocates nothing.
+fn first_principles_untwisted(method: Method) -> std::borrow::Cow<'static, str> {
+    macro_rules! text {
+        ($key:literal) => {
+            concat!(
+                "torsional and flexural-torsional buckling are not part of the ",
+                $key,
+                " method; they can govern for angles, tees and channels: use a code method to \
+                 check them"
+            )
+        };
+    }
+    match method {
+        Method::PerryRobertson => text!("perry-robertson").into(),
+        Method::Secant => text!("secant").into(),
+        other => format!(
+            "torsional and flexural-torsional buckling are not part of the {} method; they can \
+             govern for angles, tees and channels: use a code method to check them",
+            other.key()
+        )
+        .into(),
+    }
 }
 
 struct TwistClauses {
@@ -745,5 +765,24 @@ fn csa_twist(
         relative_slenderness: lambda,
         reduction: red,
         resistance_kn: c_r,
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+
+    #[test]
+    fn fixed_untwisted_texts_are_the_formatted_ones() {
+        for method in [Method::PerryRobertson, Method::Secant] {
+            let formatted = format!(
+                "torsional and flexural-torsional buckling are not part of the {} method; they can \
+                 govern for angles, tees and channels: use a code method to check them",
+                method.key()
+            );
+            let fixed = first_principles_untwisted(method);
+            assert!(matches!(fixed, std::borrow::Cow::Borrowed(_)));
+            assert_eq!(fixed, formatted);
+        }
     }
 }
