@@ -213,6 +213,9 @@ pub fn largest_moment(prepared: &Prepared, method: Method, axis: Axis) -> Result
 /// about one axis only, so a member it checks with a moment about one axis
 /// has no secant curve about the other. A refused curve is not drawn.
 pub fn refusal(prepared: &Prepared, method: Method, axis: Axis) -> Option<crate::error::Error> {
+    if let Err(e) = own_load_pattern(&prepared.member, method) {
+        return Some(e);
+    }
     let (unit, _, peak) = unit_diagram(&prepared.member, axis);
     let scale = if peak > 0.0 { peak } else { 1.0 };
     let mut m = prepared.member.clone();
@@ -229,6 +232,26 @@ pub fn refusal(prepared: &Prepared, method: Method, axis: Axis) -> Option<crate:
         material: &prepared.material,
     };
     check::evaluate(&input, method, Working::Skipped).err()
+}
+
+/// Refuses a curve of a member whose compression comes from its buckling
+/// model's own loads (points at levels, a load along the length): a curve
+/// is the largest moment at each `axial_kn`, and such a member's check
+/// takes each segment's force from the model, not from `axial_kn`, so the
+/// curve would not be the member's. Refused, never drawn wrong.
+fn own_load_pattern(member: &Member, method: Method) -> Result<()> {
+    match &member.buckling_model {
+        Some(b) if !b.axial_loads.is_empty() || b.distributed_kn_per_m != 0.0 => {
+            Err(crate::error::Error::NotApplicable {
+                method: method.key(),
+                reason: "no interaction curve for a member whose compression comes from its \
+                         buckling_model's axial_loads or distributed_kn_per_m (the curve varies \
+                         axial_kn); the check of each segment stands"
+                    .into(),
+            })
+        }
+        _ => Ok(()),
+    }
 }
 
 /// A first guess at the largest moment: the bending resistance about the
@@ -385,6 +408,7 @@ fn work_line(prepared: &Prepared, key: &Key) -> Line {
 ///
 /// Errors: those of checking the member itself with `method`.
 pub fn curve(prepared: &Prepared, method: Method, axis: Axis) -> Result<Curve> {
+    own_load_pattern(&prepared.member, method)?;
     let own = prepared.check_as(method, Working::Skipped)?;
     let member = &prepared.member;
     let (unit, shape, peak) = unit_diagram(member, axis);
@@ -490,6 +514,31 @@ mod tests {
         Method::AiscAsd,
         Method::CsaS16,
     ];
+
+    #[test]
+    fn a_member_loaded_through_its_buckling_model_has_no_curve() {
+        // The worked example's K1: its compression comes from the model's
+        // loads at levels and along the length, not from axial_kn, so a
+        // curve over axial_kn would not be the member's: refused by name.
+        let f =
+            crate::file::parse(include_str!("../../../examples/tarnbeck-crane-hall.json")).unwrap();
+        let mut k1 = f.members.iter().find(|m| m.id == "K1").unwrap().clone();
+        k1.m_major_a_knm = 40.0;
+        k1.m_major_b_knm = 40.0;
+        let p = Prepared::new(&k1).unwrap();
+        for axis in [Axis::Major, Axis::Minor] {
+            let e = curve(&p, Method::En1993, axis).unwrap_err();
+            assert!(e.to_string().contains("buckling_model"), "{e}");
+            assert!(refusal(&p, Method::AiscLrfd, axis).is_some());
+        }
+        // Without its own loads (axial_kn at end B) the curve stands.
+        let b = k1.buckling_model.as_mut().unwrap();
+        b.axial_loads.clear();
+        b.distributed_kn_per_m = 0.0;
+        let p = Prepared::new(&k1).unwrap();
+        assert!(curve(&p, Method::En1993, Axis::Major).is_ok());
+        assert!(refusal(&p, Method::En1993, Axis::Major).is_none());
+    }
 
     #[test]
     fn every_point_is_on_the_boundary_and_the_member_inside_iff_within() {
