@@ -26,9 +26,42 @@ type Polys = Vec<Vec<(f64, f64)>>;
 /// The view of a checked member (empty when the member did not resolve).
 pub fn of_checked(c: &Checked) -> Html {
     match &c.prepared {
-        Some(p) => svg(p, c.result()),
+        Some(p) => match governing_segment(p, c.result()) {
+            // A buckling model whose governing segment has its own
+            // section: the result's properties and check are that
+            // segment's, so the drawing is too, and says so.
+            Some((seg, count, q)) => {
+                let mut h = svg(&q, c.result());
+                html!(
+                    h,
+                    "<p class=\"sv-note\" data-testid=\"section-view-segment\">Drawn: the \
+                     section of segment {} of {} of the buckling model, which governs.</p>",
+                    seg,
+                    count
+                );
+                h
+            }
+            None => svg(p, c.result()),
+        },
         None => Html::new(),
     }
+}
+
+/// The governing segment of a buckling model (1 at end A), the model's
+/// segment count and the member prepared with that segment's own section,
+/// where it has one; `None` otherwise (the member's section governs).
+fn governing_segment(p: &Prepared, r: Option<&CheckResult>) -> Option<(usize, usize, Prepared)> {
+    let seg = r?.segment?;
+    let model = p.member.buckling_model.as_ref()?;
+    let spec = model
+        .segments
+        .get(seg.index.checked_sub(1)?)?
+        .section
+        .clone()?;
+    let mut m = p.member.clone();
+    m.section = spec;
+    let q = Prepared::new(&m).ok()?;
+    Some((seg.index, seg.count, q))
 }
 
 /// Appends polygons as SVG path data, one decimal of a mm.
@@ -281,6 +314,46 @@ mod tests {
     use super::*;
     use crate::demo::{member, steel};
     use strutline_core::section::{Angle, Given, IMake, IShape, SectionSpec};
+
+    #[test]
+    fn a_governing_segment_with_its_own_section_is_the_one_drawn() {
+        // The worked example's K1: its lower segment (the member's section)
+        // governs, so the member's section is drawn without a note; with a
+        // much lighter upper segment, that segment governs and its section
+        // is drawn, said under the drawing.
+        let f =
+            strutline_core::file::parse(include_str!("../../examples/tarnbeck-crane-hall.json"))
+                .unwrap();
+        let k1 = f.members.iter().find(|m| m.id == "K1").unwrap().clone();
+        let c = Checked::new(&k1);
+        assert_eq!(c.result().unwrap().segment.unwrap().index, 1);
+        let own = of_checked(&c).into_string();
+        assert!(!own.contains("section-view-segment"), "{own}");
+
+        let mut light = k1.clone();
+        let model = light.buckling_model.as_mut().unwrap();
+        model.segments[1].section = Some(
+            serde_json::from_str(
+                r#"{"kind": "i", "depth_mm": 100, "width_mm": 100, "flange_mm": 8,
+                    "web_mm": 6, "root_radius_mm": 12, "make": "rolled"}"#,
+            )
+            .unwrap(),
+        );
+        let c = Checked::new(&light);
+        let seg = c.result().unwrap().segment.unwrap();
+        assert_eq!((seg.index, seg.count), (2, 2));
+        let drawn = of_checked(&c).into_string();
+        assert!(drawn.contains("segment 2 of 2"), "{drawn}");
+        // Not the member's own section's drawing.
+        let first_path = |s: &str| {
+            s[s.find(" d=\"").unwrap()..]
+                .split('"')
+                .nth(1)
+                .unwrap()
+                .to_owned()
+        };
+        assert_ne!(first_path(&drawn), first_path(&own));
+    }
 
     fn view(spec: SectionSpec, fy: f64) -> (Prepared, String) {
         let m = member("S1", spec, steel(fy), 3000.0, 100.0, Method::En1993);
