@@ -185,7 +185,7 @@ fn model_html(
         "Axial loads (compression, carried to end A)",
         &["load", "from end A", "compression"],
     );
-    if model.axial_loads.is_empty() && model.distributed_kn_per_m == 0.0 {
+    if !model.carries_own_loads() {
         html!(
             h,
             "<tr><th scope=\"row\">N_Ed</th><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>",

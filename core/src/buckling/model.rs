@@ -108,3 +108,12 @@ pub struct BucklingModel {
     #[serde(default, skip_serializing_if = "is_zero")]
     pub distributed_kn_per_m: f64,
 }
+
+impl BucklingModel {
+    /// Whether the model gives its own load pattern (point loads or a
+    /// distributed load); without one, the pattern is the member's
+    /// `axial_kn` at end B.
+    pub fn carries_own_loads(&self) -> bool {
+        !self.axial_loads.is_empty() || self.distributed_kn_per_m != 0.0
+    }
+}

@@ -114,7 +114,7 @@ pub fn column(member: &Member, model: &BucklingModel, r: &Resolved, axis: Axis) 
             axial_kn: p.axial_kn,
         })
         .collect();
-    if loads.is_empty() && model.distributed_kn_per_m == 0.0 {
+    if !model.carries_own_loads() {
         loads.push(Load {
             index: 0,
             at_mm: member.length_mm,
@@ -399,8 +399,7 @@ fn check_analysed(
         .segments
         .iter()
         .fold(0.0_f64, |a, s| a.max(s.axial_kn));
-    let from_loads = !model.axial_loads.is_empty() || model.distributed_kn_per_m > 0.0;
-    if from_loads && (largest - member.axial_kn).abs() > 1e-9 * largest.max(1.0) {
+    if model.carries_own_loads() && (largest - member.axial_kn).abs() > 1e-9 * largest.max(1.0) {
         warnings.push(Warning::new(
             "axial-kn-from-model",
             format!(

@@ -241,15 +241,13 @@ pub fn refusal(prepared: &Prepared, method: Method, axis: Axis) -> Option<crate:
 /// curve would not be the member's. Refused, never drawn wrong.
 fn own_load_pattern(member: &Member, method: Method) -> Result<()> {
     match &member.buckling_model {
-        Some(b) if !b.axial_loads.is_empty() || b.distributed_kn_per_m != 0.0 => {
-            Err(crate::error::Error::NotApplicable {
-                method: method.key(),
-                reason: "no interaction curve for a member whose compression comes from its \
+        Some(b) if b.carries_own_loads() => Err(crate::error::Error::NotApplicable {
+            method: method.key(),
+            reason: "no interaction curve for a member whose compression comes from its \
                          buckling_model's axial_loads or distributed_kn_per_m (the curve varies \
                          axial_kn); the check of each segment stands"
-                    .into(),
-            })
-        }
+                .into(),
+        }),
         _ => Ok(()),
     }
 }

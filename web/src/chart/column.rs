@@ -213,7 +213,7 @@ pub fn sketch(
     };
     Sketch {
         length_mm,
-        loads: if model.axial_loads.is_empty() && model.distributed_kn_per_m == 0.0 {
+        loads: if !model.carries_own_loads() {
             let kn = if axial_kn > 0.0 { axial_kn } else { 1.0 };
             vec![(length_mm, text("kN", kn))]
         } else {
