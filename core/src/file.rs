@@ -359,7 +359,6 @@ fn read_current(value: &Value) -> Result<MemberFile> {
 /// its download budget; the message still names the member and what was
 /// wrong, and serde's own words name a missing or unknown field.
 pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
-    let name = member_name(Some(raw), index);
     let outcome = deserialize_member(raw).map_err(|(path, inner)| {
         if path.is_empty() || path == "." {
             inner
@@ -373,7 +372,9 @@ pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
             column: 0,
             message,
         }
-        .in_member(&name)
+        // Named only on failure: a long list is read without a copy of
+        // every id.
+        .in_member(&member_name(Some(raw), index))
     })
 }
 

@@ -4,8 +4,9 @@
 //! first frame shows the rows in view checked, the others waiting (shown
 //! as such, never with a value), and the rest follow between frames.
 
-use std::collections::HashMap;
 use std::sync::Arc;
+
+use rustc_hash::FxHashMap;
 
 use strutline_core::check::Prepared;
 use strutline_core::{CheckResult, Error, Member};
@@ -67,10 +68,12 @@ pub struct Refreshed {
     pub waiting: usize,
 }
 
-/// Results remembered by member id.
+/// Results remembered by member id (hashed by rustc-hash's Fx, not the
+/// standard SipHash: every slice of a long list looks up each member, and
+/// the ids are the app's own, not an attacker's).
 #[derive(Debug, Default)]
 pub struct Checker {
-    cache: HashMap<String, Arc<Checked>>,
+    cache: FxHashMap<String, Arc<Checked>>,
 }
 
 impl Checker {

@@ -451,21 +451,23 @@ impl ListTools {
 pub const ROW_PITCH_PX: f64 = 110.0;
 
 /// Rows built beyond each edge of the part in view, so a fling or a Tab
-/// finds rows already there.
+/// finds rows already there (from the second frame on: the first frame
+/// builds only what is in view, see [`window`]).
 pub const OVERSCAN: usize = 8;
 
 /// The rows to build, `first..end` of `n` shown, for a list scrolled by
 /// `scroll_top` px with `view_px` of it in view: what is in view and
-/// [`OVERSCAN`] rows beyond each edge. The rest are stood in for by
+/// `overscan` rows beyond each edge ([`OVERSCAN`] once the list is on
+/// screen, none for its first frame). The rest are stood in for by
 /// padding of `first` and `n - end` pitches.
-pub fn window(scroll_top: f64, view_px: f64, n: usize) -> (usize, usize) {
+pub fn window(scroll_top: f64, view_px: f64, n: usize, overscan: usize) -> (usize, usize) {
     let top = (scroll_top.max(0.0) / ROW_PITCH_PX).floor();
     let seen = (view_px.max(ROW_PITCH_PX) / ROW_PITCH_PX).ceil() + 1.0;
     // Saturating float-to-int casts: NaN and huge values stay in range.
-    let first = (top as usize).saturating_sub(OVERSCAN).min(n);
+    let first = (top as usize).saturating_sub(overscan).min(n);
     let end = (top as usize)
         .saturating_add(seen as usize)
-        .saturating_add(OVERSCAN)
+        .saturating_add(overscan)
         .min(n);
     (first, end.max(first))
 }
@@ -787,15 +789,18 @@ mod tests {
     fn the_window_holds_what_is_in_view_and_no_more() {
         // 800 px of a 1,000-row list at the top: 8 rows in view (+1
         // partly), 8 more below; the rest stood in for.
-        assert_eq!(window(0.0, 800.0, 1000), (0, 17));
+        assert_eq!(window(0.0, 800.0, 1000, OVERSCAN), (0, 17));
+        // The first frame: what is in view, nothing beyond it.
+        assert_eq!(window(0.0, 800.0, 1000, 0), (0, 9));
         // Scrolled to row 500: 8 rows above it and below the view.
-        let (a, b) = window(500.0 * ROW_PITCH_PX, 800.0, 1000);
+        let (a, b) = window(500.0 * ROW_PITCH_PX, 800.0, 1000, OVERSCAN);
         assert_eq!((a, b), (492, 517));
         assert!(b - a < 30, "the window does not grow with the list");
+        assert_eq!(window(500.0 * ROW_PITCH_PX, 800.0, 1000, 0), (500, 509));
         // The end of the list, short lists, nonsense input.
-        assert_eq!(window(1e9, 800.0, 1000), (1000, 1000));
-        assert_eq!(window(0.0, 800.0, 3), (0, 3));
-        assert_eq!(window(f64::NAN, f64::NAN, 5), (0, 5));
-        assert_eq!(window(-50.0, 0.0, 0), (0, 0));
+        assert_eq!(window(1e9, 800.0, 1000, OVERSCAN), (1000, 1000));
+        assert_eq!(window(0.0, 800.0, 3, OVERSCAN), (0, 3));
+        assert_eq!(window(f64::NAN, f64::NAN, 5, OVERSCAN), (0, 5));
+        assert_eq!(window(-50.0, 0.0, 0, 0), (0, 0));
     }
 }

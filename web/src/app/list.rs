@@ -129,7 +129,8 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
 
 /// The rows of the list, in their own scrolling box, built only for the
 /// part in view ([`listops::window`]): the first frame of a list of any
-/// length builds a screenful of rows. The rows not built are stood in for
+/// length builds a screenful of rows, and the rows beyond each edge of the
+/// view ([`listops::OVERSCAN`]) follow once it is on screen. The rows not built are stood in for
 /// by the list's padding (set through the style object, which the page's
 /// policy allows), so the scroll bar is the whole list's. Arrow keys move
 /// from row to row, building the next one when needed.
@@ -141,9 +142,17 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     let list = NodeRef::<leptos::html::Ol>::new();
     let scroll_top = RwSignal::new(0.0f64);
     let view_px = RwSignal::new(browser::inner_height());
+    // No rows beyond the view before the first frame.
+    let overscan = move || {
+        if ctx.painted.get() {
+            listops::OVERSCAN
+        } else {
+            0
+        }
+    };
     let range = Memo::new(move |_| {
         let n = shown.with(|s| s.0.len());
-        let (a, b) = listops::window(scroll_top.get(), view_px.get(), n);
+        let (a, b) = listops::window(scroll_top.get(), view_px.get(), n, overscan());
         (a, b, n)
     });
     // The box's height, when laid out and whenever the window changes.
@@ -187,9 +196,9 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     // the same (an edit that keeps the list's length), so a renamed or
     // re-checked row kept its old text until the next scroll.
     let rows = move || {
-        let (top, px) = (scroll_top.get(), view_px.get());
+        let (top, px, over) = (scroll_top.get(), view_px.get(), overscan());
         shown.with(|s| {
-            let (a, b) = listops::window(top, px, s.0.len());
+            let (a, b) = listops::window(top, px, s.0.len(), over);
             s.0.get(a..b).map(<[_]>::to_vec).unwrap_or_default()
         })
     };

@@ -25,10 +25,6 @@ use crate::workspace::{
     decode, decode_keeping, encode, peek_revision, Workspace, KEY, UNREADABLE_PREFIX,
 };
 
-/// Members checked before a list's first frame: more than a screenful of
-/// rows (see [`listops::window`]) and the member selected.
-const FIRST_SLICE: usize = 40;
-
 /// Members checked in each later slice, between frames: about 5 ms of the
 /// engine's time at the 1,000-member benchmark's 33 µs a member.
 const SLICE: usize = 150;
@@ -216,12 +212,19 @@ pub fn App() -> impl IntoView {
     let pass = StoredValue::new((0.0f64, 0usize));
     let checks = Memo::new(move |prev: Option<&Checks>| {
         next_slice.track();
-        // The first frame checks a screenful (the rows in view and the
-        // member selected); the rest follow, a slice between frames.
-        let limit = if prev.is_none() { FIRST_SLICE } else { SLICE };
         let sel = selected.get_untracked();
         let out = ws.with(|w| {
             let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
+            // The first frame checks the rows it shows (the list opens
+            // unfiltered, in its own order, at the top: the first
+            // screenful, listops::window without the rows beyond the view)
+            // and the member selected; the rest follow, a slice between
+            // frames.
+            let limit = if prev.is_none() {
+                listops::window(0.0, browser::inner_height(), members.len(), 0).1
+            } else {
+                SLICE
+            };
             let t0 = browser::precise_ms();
             let r = checker
                 .try_update_value(|c| c.refresh(members, Some(sel), limit))
@@ -363,7 +366,10 @@ pub fn App() -> impl IntoView {
             <main class="panes" class:chart-open=move || ctx.chart_open.get() class:screen-only=move || ctx.sheet.with(Option::is_some)>
                 <section class="pane pane-list" aria-labelledby="h-list">
                     <ListPanel ctx=ctx />
-                    <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />
+                    // Below the rows: after the first frame, as the editor.
+                    <Show when=move || ctx.painted.get()>
+                        <crate::exchange::Exchange ws=ws units=ctx.units select=Callback::new(move |i| ctx.select(i)) />
+                    </Show>
                 </section>
                 // The editor and the result come after the first frame,
                 // which holds the list's rows (with the caution); until
