@@ -11,12 +11,17 @@
 //! `Scratch`: count inside `check::Scratch::check`), `moments` (the members with moments),
 //! `plain` (the same members without their moments), `beam-columns`
 //! (every one with axial load and moments) or `bending` (the same without
-//! axial load), working kept; ROUNDS (default 1) times over.
+//! axial load), working kept; or `sizing` (the sizing benchmark's 1,000
+//! members sized against its 300 sections: count inside
+//! `strutline_core::sizing::Sizer::size_all`), `sizing-beam-columns` (its
+//! beam-columns, the same way); ROUNDS (default 1) times over.
 //! The cost of one round is the difference between two ROUNDS counts
 //! divided by their difference, which leaves out building the list.
 
 #[path = "../benches/lists/mod.rs"]
 mod lists;
+#[path = "../benches/lists/sizing.rs"]
+mod sizing_lists;
 
 use strutline_core::check::{check_member_as, check_member_in, Prepared, Scratch, Working};
 use strutline_core::member::Member;
@@ -25,6 +30,22 @@ fn main() {
     let mut args = std::env::args().skip(1);
     let list = args.next().unwrap_or_else(|| "mixed".into());
     let rounds: usize = args.next().and_then(|s| s.parse().ok()).unwrap_or(1);
+    if list == "sizing" || list == "sizing-beam-columns" {
+        let cands = sizing_lists::candidates();
+        let sizer = strutline_core::sizing::Sizer::new(&cands);
+        let members = if list == "sizing" {
+            sizing_lists::members()
+        } else {
+            sizing_lists::beam_columns()
+        };
+        let mut found = 0usize;
+        for _ in 0..rounds {
+            let sized = sizer.size_all(std::hint::black_box(&members), 0.9);
+            found += sized.iter().filter(|r| r.chosen.is_some()).count();
+        }
+        println!("{list}: {found} sized of {}", rounds * members.len());
+        return;
+    }
     let (make, working): (fn(usize) -> Member, Working) = match list.as_str() {
         "mixed" => (lists::member, Working::Kept),
         "skipped" | "prepared" | "brief" | "prepared-brief" => (lists::member, Working::Skipped),
@@ -35,7 +56,7 @@ fn main() {
         other => {
             eprintln!(
                 "unknown list {other}: mixed, skipped, prepared, brief, prepared-brief, moments, plain, \
-                 beam-columns or bending"
+                 beam-columns, bending, sizing or sizing-beam-columns"
             );
             std::process::exit(2);
         }
