@@ -329,12 +329,13 @@ pub struct Verdict {
     pub section: SectionSummary,
 }
 
-/// The lists a check fills, kept between checks: a batch (sizing
-/// candidates, a list re-check, the command line's summaries) checks
-/// member after member through one [`Scratch`] with [`Scratch::check`], so
-/// once its lists have grown a check allocates nothing. The numbers and
-/// lists are those of [`evaluate`] (the same code fills them; a property
-/// test compares the two bit for bit).
+/// The lists a check fills, kept between checks: a batch checks member
+/// after member through one [`Scratch`] with [`Scratch::check`], so once
+/// its lists have grown a check allocates nothing (sizing's candidates and
+/// the envelope's samples are checked so). The numbers and lists are those
+/// of [`evaluate`] (the same code fills them; a property test compares the
+/// two bit for bit). `Scratch::default()` keeps the working, as
+/// [`Working::default`] does; a batch takes `Scratch::new(Working::Skipped)`.
 #[derive(Debug, Clone, Default)]
 pub struct Scratch {
     modes: Vec<ModeResult>,
