@@ -8,7 +8,9 @@
 //! inside `check::evaluate`), `moments` (the members with moments),
 //! `plain` (the same members without their moments), `beam-columns`
 //! (every one with axial load and moments) or `bending` (the same without
-//! axial load), working kept; ROUNDS (default 1) times over.
+//! axial load), working kept, or `beam-columns-skipped` and
+//! `bending-skipped` (the same two without working); ROUNDS (default 1)
+//! times over.
 //! The cost of one round is the difference between two ROUNDS counts
 //! divided by their difference, which leaves out building the list.
 
@@ -28,10 +30,12 @@ fn main() {
         "moments" => (lists::with_moments, Working::Kept),
         "plain" => (lists::plain, Working::Kept),
         "beam-columns" => (lists::beam_column, Working::Kept),
+        "beam-columns-skipped" => (lists::beam_column, Working::Skipped),
         "bending" => (lists::bending_only, Working::Kept),
+        "bending-skipped" => (lists::bending_only, Working::Skipped),
         other => {
             eprintln!(
-                "unknown list {other}: mixed, skipped, prepared, moments, plain, beam-columns or bending"
+                "unknown list {other}: mixed, skipped, prepared, moments, plain, beam-columns, beam-columns-skipped, bending or bending-skipped"
             );
             std::process::exit(2);
         }

@@ -46,7 +46,7 @@ use crate::bending::{self, en1993::class_in_bending, Axis};
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::{InteractionAnnex, Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once, warn_once_text};
 use crate::outcome::{Mode, Warning};
 use crate::roots::{newton_bisect, Stop};
 use crate::section::{Family, SectionSpec};
@@ -851,9 +851,15 @@ fn push_row(trace: &mut Trace, row: Row) {
 
 /// C_my, C_mz and C_mLT of Table B.3 with their working.
 fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Factors {
+    // Table B.3 read once per diagram: the major axis's value serves C_my
+    // and C_mLT.
+    let major = bending::moments(ctx.input, Axis::Major);
+    let major_cm = c_m(&major);
     let mut one = |axis: Axis, trace: &mut Trace| -> f64 {
-        let diagram = bending::moments(ctx.input, axis);
-        let (value, row) = c_m(&diagram);
+        let (value, row) = match axis {
+            Axis::Major => major_cm,
+            Axis::Minor => c_m(&bending::moments(ctx.input, axis)),
+        };
         if row == Row::NoMoment {
             return 1.0;
         }
@@ -866,13 +872,14 @@ fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
             Bracing::Unknown => 1.0,
         };
         if br == Bracing::Unknown {
-            warn_once(warnings, "moment-factor-assumed", || {
+            warn_once_text(
+                warnings,
+                "moment-factor-assumed",
                 "interaction: a buckling length shorter than the member may come from a brace \
                  within it, whose segment's moment diagram the member file does not hold; the \
                  equivalent uniform moment factor is taken as 1.0, the largest of EN 1993-1-1 \
-                 Table B.3 (use a frame, or k = 1 with the segment's own moments, to refine it)"
-                    .into()
-            });
+                 Table B.3 (use a frame, or k = 1 with the segment's own moments, to refine it)",
+            );
         }
         match (axis, br) {
             (Axis::Major, Bracing::Member) => step!(
@@ -961,11 +968,10 @@ fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
     let c_my = one(Axis::Major, trace);
     let c_mz = one(Axis::Minor, trace);
     // C_mLT: the diagram between lateral restraints.
-    let major = bending::moments(ctx.input, Axis::Major);
     let c_mlt = if major.is_zero() || ctx.bending.major.critical_knm.is_none() {
         1.0
     } else if bending::diagram_is_segment(ctx.input) {
-        let (c, _) = c_m(&major);
+        let (c, _) = major_cm;
         step!(
             trace,
             S,
@@ -1460,13 +1466,21 @@ pub fn deflection_eil2(m: &Moments) -> f64 {
         };
         let mut cuts = [p, inside(0), inside(1), q];
         cuts.sort_by(f64::total_cmp);
-        for w2 in cuts.windows(2) {
-            let (lo, hi) = match *w2 {
-                [lo, hi] => (lo, hi),
-                _ => continue,
+        // delta and delta' at each cut once (a cut inside ends one interval
+        // and starts the next).
+        let slopes = cuts.map(slope);
+        for d in cuts.map(delta) {
+            most = most.max(d.abs());
+        }
+        for i in 0..3 {
+            let (Some(&lo), Some(&hi), Some(&f_lo), Some(&f_hi)) = (
+                cuts.get(i),
+                cuts.get(i + 1),
+                slopes.get(i),
+                slopes.get(i + 1),
+            ) else {
+                continue;
             };
-            let (f_lo, f_hi) = (slope(lo), slope(hi));
-            most = most.max(delta(lo).abs()).max(delta(hi).abs());
             if f_lo * f_hi < 0.0 {
                 let sign = if f_lo < 0.0 { 1.0 } else { -1.0 };
                 let s = newton_bisect(

@@ -41,7 +41,7 @@ use super::{Check, Context};
 use crate::bending::en1995::strengths;
 use crate::bending::Axis;
 use crate::error::Result;
-use crate::method::common::{require_timber, warn_once};
+use crate::method::common::{require_timber, warn_once_text};
 use crate::method::en1995::design_strength;
 use crate::outcome::{Mode, Warning};
 use crate::section::SectionSpec;
@@ -336,11 +336,12 @@ pub fn check(
         crate::trace::push(trace, s, c.check, label, c.utilisation, "-", clause);
     }
     if terms.k_crit.is_some() && terms.major > 0.0 && terms.minor > 0.0 {
-        warn_once(warnings, "en1995-6-35-biaxial", || {
+        warn_once_text(
+            warnings,
+            "en1995-6-35-biaxial",
             "EN 1995-1-1 (6.35) has no minor-axis term; with a minor-axis moment the term \
-             sigma_m,z,d / f_m,z,d is added to it (conservative, no rule of the code)"
-                .to_string()
-        });
+             sigma_m,z,d / f_m,z,d is added to it (conservative, no rule of the code)",
+        );
     }
     Ok(Some(checks))
 }
