@@ -424,6 +424,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            class: Some(class),
             by_sign: None,
         });
     }
@@ -696,6 +697,7 @@ fn axis(
         reduction: chi,
         moment_factor: Some(c.c1),
         demand_knm: demand,
+        class: Some(class),
         by_sign: None,
     })
 }

@@ -56,6 +56,12 @@ pub struct AxisBending {
     /// The largest design moment along the member about this axis, kNm.
     #[serde(skip)]
     pub demand_knm: f64,
+    /// The section's class in bending alone about this axis, where the
+    /// method classifies it for bending (EN 1993-1-1 Table 5.2, CSA S16-19
+    /// Table 2): the beam-column interaction reads it beside the class in
+    /// compression instead of classifying again.
+    #[serde(skip)]
+    pub class: Option<u8>,
     /// The design resistance to a positive and to a negative moment, where
     /// they differ (tees in their plane of symmetry, single angles: AISC
     /// 360-16 F9, F10); `None` where the sign does not matter.

@@ -477,9 +477,13 @@ pub fn check(
     );
     // The class under the combined load: the worse of both axes in
     // bending (Table 2) and of the web under the axial load.
-    let mut off = Trace::off();
-    let bending_class =
-        classify(input, fy, Axis::Major, &mut off).max(classify(input, fy, Axis::Minor, &mut off));
+    // The bending check's classes (the same Table 2 reading).
+    let in_bending = |axis: Axis, b: &crate::bending::AxisBending| {
+        b.class
+            .unwrap_or_else(|| classify(input, fy, axis, &mut Trace::off()))
+    };
+    let bending_class = in_bending(Axis::Major, &ctx.bending.major)
+        .max(in_bending(Axis::Minor, &ctx.bending.minor));
     let class = web_class(ctx, fy, c_ratio, trace).map_or(bending_class, |w| w.max(bending_class));
     step!(
         trace,

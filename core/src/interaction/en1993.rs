@@ -295,8 +295,13 @@ impl Basis {
         );
         // The class under the combined actions (5.5.2(6)).
         let class_n = ctx.assessment.classified.map(|c| c.class);
-        let class_y = (m_y > 0.0).then(|| class_in_bending(input, steel, Axis::Major));
-        let class_z = (m_z > 0.0).then(|| class_in_bending(input, steel, Axis::Minor));
+        // The bending check's classes (the same Table 5.2 reading).
+        let in_bending = |axis: Axis, b: &bending::AxisBending| {
+            b.class
+                .unwrap_or_else(|| class_in_bending(input, steel, axis))
+        };
+        let class_y = (m_y > 0.0).then(|| in_bending(Axis::Major, &ctx.bending.major));
+        let class_z = (m_z > 0.0).then(|| in_bending(Axis::Minor, &ctx.bending.minor));
         if let Some(c) = class_n {
             step!(
                 trace,
@@ -1464,8 +1469,14 @@ pub fn deflection_eil2(m: &Moments) -> f64 {
                 .copied()
                 .unwrap_or(q)
         };
-        let mut cuts = [p, inside(0), inside(1), q];
-        cuts.sort_by(f64::total_cmp);
+        // In order: both zeros lie in (p, q) or stand at q, so only their
+        // own order is open (neither is NaN or a signed zero).
+        let (r0, r1) = (inside(0), inside(1));
+        let cuts = if r1 < r0 {
+            [p, r1, r0, q]
+        } else {
+            [p, r0, r1, q]
+        };
         // delta and delta' at each cut once (a cut inside ends one interval
         // and starts the next).
         let slopes = cuts.map(slope);
