@@ -945,7 +945,7 @@ fn axis(
         reduction: reduction.min(1.0),
         moment_factor: if cb_used { Some(cb) } else { None },
         demand_knm: demand,
-        class: None,
+        kept: super::Kept::None,
         by_sign: None,
     })
 }

@@ -442,7 +442,7 @@ fn axis(
         reduction: reduction.min(1.0),
         moment_factor: cb_used,
         demand_knm: demand,
-        class: None,
+        kept: super::Kept::None,
         by_sign: Some(BySign {
             positive_knm: r_plus,
             negative_knm: r_minus,

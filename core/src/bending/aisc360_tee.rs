@@ -335,7 +335,7 @@ fn in_plane(
         reduction: reduction.min(1.0),
         moment_factor: None,
         demand_knm: demand,
-        class: None,
+        kept: super::Kept::None,
         by_sign: Some(super::BySign {
             positive_knm: r_t,
             negative_knm: r_c,
@@ -407,7 +407,7 @@ fn symmetry_axis(
         reduction: 1.0,
         moment_factor: None,
         demand_knm: demand,
-        class: None,
+        kept: super::Kept::None,
         by_sign: None,
     })
 }

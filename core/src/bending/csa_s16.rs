@@ -312,7 +312,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
-            class: Some(class),
+            kept: super::Kept::Class(class),
             by_sign: None,
         });
     }
@@ -431,7 +431,7 @@ fn axis(
         reduction: mr / (PHI * mp),
         moment_factor: Some(w2),
         demand_knm: demand,
-        class: Some(class),
+        kept: super::Kept::Class(class),
         by_sign: None,
     })
 }

@@ -424,7 +424,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
-            class: Some(class),
+            kept: super::Kept::Class(class),
             by_sign: None,
         });
     }
@@ -697,7 +697,7 @@ fn axis(
         reduction: chi,
         moment_factor: Some(c.c1),
         demand_knm: demand,
-        class: Some(class),
+        kept: super::Kept::Class(class),
         by_sign: None,
     })
 }

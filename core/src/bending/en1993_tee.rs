@@ -450,7 +450,7 @@ pub(super) fn axis(
         demand_knm: if demand == 0.0 { 0.0 } else { demand_sign },
         // A sign that is Class 4 has no resistance here (a moment of that
         // sign was refused above): 0, so nothing can read it as a capacity.
-        class: None,
+        kept: super::Kept::None,
         by_sign: Some(super::BySign {
             positive_knm: plus.as_ref().map_or(0.0, |a| a.resistance),
             negative_knm: minus.as_ref().map_or(0.0, |b| b.resistance),

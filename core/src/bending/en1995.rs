@@ -239,7 +239,7 @@ pub fn check(
                 reduction: 1.0,
                 moment_factor: None,
                 demand_knm: demand,
-                class: None,
+                kept: super::Kept::Strength(fmd),
                 by_sign: None,
             });
         }
@@ -363,7 +363,7 @@ pub fn check(
             reduction: kcrit,
             moment_factor: None,
             demand_knm: demand,
-            class: None,
+            kept: super::Kept::Strength(fmd),
             by_sign: None,
         })
     };

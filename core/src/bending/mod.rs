@@ -56,17 +56,49 @@ pub struct AxisBending {
     /// The largest design moment along the member about this axis, kNm.
     #[serde(skip)]
     pub demand_knm: f64,
-    /// The section's class in bending alone about this axis, where the
-    /// method classifies it for bending (EN 1993-1-1 Table 5.2, CSA S16-19
-    /// Table 2): the beam-column interaction reads it beside the class in
-    /// compression instead of classifying again.
+    /// What the bending check worked that the beam-column interaction
+    /// reads again instead of working it afresh ([`Kept`]).
     #[serde(skip)]
-    pub class: Option<u8>,
+    pub kept: Kept,
     /// The design resistance to a positive and to a negative moment, where
     /// they differ (tees in their plane of symmetry, single angles: AISC
     /// 360-16 F9, F10); `None` where the sign does not matter.
     #[serde(skip)]
     pub by_sign: Option<BySign>,
+}
+
+/// What the bending check of an axis worked that the beam-column
+/// interaction reads again (one value, kept small: a bending result is
+/// copied a few times a check).
+#[derive(Debug, Clone, Copy, PartialEq, Default)]
+pub enum Kept {
+    /// Nothing.
+    #[default]
+    None,
+    /// The section's class in bending alone about this axis (EN 1993-1-1
+    /// Table 5.2, CSA S16-19 Table 2), read beside the class in compression.
+    Class(u8),
+    /// The design bending strength the resistance is worked from, MPa
+    /// (EN 1995-1-1 f_m,d = k_mod k_h f_m,k / gamma_M).
+    Strength(f64),
+}
+
+impl Kept {
+    /// The class, where one was kept.
+    pub fn class(self) -> Option<u8> {
+        match self {
+            Kept::Class(c) => Some(c),
+            _ => None,
+        }
+    }
+
+    /// The design bending strength, MPa, where one was kept.
+    pub fn strength_mpa(self) -> Option<f64> {
+        match self {
+            Kept::Strength(f) => Some(f),
+            _ => None,
+        }
+    }
 }
 
 /// A design resistance that depends on the sign of the moment (the member

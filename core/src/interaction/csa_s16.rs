@@ -479,7 +479,8 @@ pub fn check(
     // bending (Table 2) and of the web under the axial load.
     // The bending check's classes (the same Table 2 reading).
     let in_bending = |axis: Axis, b: &crate::bending::AxisBending| {
-        b.class
+        b.kept
+            .class()
             .unwrap_or_else(|| classify(input, fy, axis, &mut Trace::off()))
     };
     let bending_class = in_bending(Axis::Major, &ctx.bending.major)

@@ -297,7 +297,8 @@ impl Basis {
         let class_n = ctx.assessment.classified.map(|c| c.class);
         // The bending check's classes (the same Table 5.2 reading).
         let in_bending = |axis: Axis, b: &bending::AxisBending| {
-            b.class
+            b.kept
+                .class()
                 .unwrap_or_else(|| class_in_bending(input, steel, axis))
         };
         let class_y = (m_y > 0.0).then(|| in_bending(Axis::Major, &ctx.bending.major));

@@ -118,12 +118,22 @@ pub fn check(
 ) -> Result<Option<Vec<Check>>> {
     let input = ctx.input;
     let t = require_timber(input, KEY)?;
-    let st = strengths(input)?;
     let (fc0d, _, _, _) = design_strength(input, t.kind, t.fc0k_mpa);
     let p = &input.section.props;
     let s = Scope::Interaction;
     let sigma_c = input.member.axial_kn * 1000.0 / p.area_mm2;
-    let (fmyd, fmzd) = (st.f_md(Axis::Major), st.f_md(Axis::Minor));
+    // The bending check's f_m,d about each axis (worked there from the
+    // same strengths; worked here only if it was not kept).
+    let (fmyd, fmzd) = match (
+        ctx.bending.major.kept.strength_mpa(),
+        ctx.bending.minor.kept.strength_mpa(),
+    ) {
+        (Some(y), Some(z)) => (y, z),
+        _ => {
+            let st = strengths(input)?;
+            (st.f_md(Axis::Major), st.f_md(Axis::Minor))
+        }
+    };
     let sigma_my = ctx.bending.major.demand_knm * 1e6 / p.w_el_major_mm3;
     let sigma_mz = ctx.bending.minor.demand_knm * 1e6 / p.w_el_minor_mm3;
     let rect = matches!(input.section.spec, SectionSpec::Rect(_));
