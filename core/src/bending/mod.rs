@@ -180,9 +180,11 @@ pub fn check(
     warnings: &mut Vec<Warning>,
 ) -> Result<Option<Bending>> {
     let m = input.member;
-    let Some(key) = m.first_moment_key() else {
+    if !m.has_moments() {
         return Ok(None);
-    };
+    }
+    // The key named by a refusal (only looked for when one is given).
+    let key = || m.first_moment_key().unwrap_or("m_major_a_knm");
     if method == Method::Secant {
         // Equal end moments are the load's eccentricity in the secant
         // formula (counted there, not again as bending); others refused.
@@ -192,6 +194,7 @@ pub fn check(
     refuse_unsupported(method, input, key)?;
     let major_props_geometric = input.section.props.principal_angle_rad == 0.0;
     if matches!(input.section.family, Family::I | Family::Channel) && !major_props_geometric {
+        let key = key();
         return Err(Error::NotApplicable {
             method: method.key(),
             reason: format!(
@@ -213,7 +216,7 @@ pub fn check(
         Method::CsaS16 => csa_s16::check(input, trace, warnings)?,
         Method::En1995 => en1995::check(input, trace, warnings)?,
         Method::Euler | Method::PerryRobertson | Method::Secant => {
-            return Err(no_rule(method, key));
+            return Err(no_rule(method, key()));
         }
     };
     Ok(Some(bending))
@@ -231,12 +234,16 @@ fn no_rule(method: Method, key: &'static str) -> Error {
     }
 }
 
-fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> Result<()> {
+fn refuse_unsupported(
+    method: Method,
+    input: &Input<'_>,
+    key: impl Fn() -> &'static str,
+) -> Result<()> {
     if matches!(
         method,
         Method::Euler | Method::PerryRobertson | Method::Secant
     ) {
-        return Err(no_rule(method, key));
+        return Err(no_rule(method, key()));
     }
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     let what = match input.section.family {
@@ -248,7 +255,7 @@ fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> R
     };
     Err(Error::NotApplicable {
         method: method.key(),
-        reason: format!("{key}: bending of {what}; check this member by hand"),
+        reason: format!("{}: bending of {what}; check this member by hand", key()),
     })
 }
 

@@ -246,6 +246,8 @@ struct Basis {
     n_cr_z: f64,
     chi_lt: f64,
     gamma_m1: f64,
+    /// [`Basis::ratios`], worked once.
+    terms: [f64; 4],
 }
 
 impl Basis {
@@ -615,7 +617,7 @@ impl Basis {
                 "EN 1993-1-1 6.3.2.2, Eq. 6.56; 6.3.3(4)"
             );
         }
-        Ok(Basis {
+        let mut basis = Basis {
             n_ed,
             m_y,
             m_z,
@@ -635,7 +637,10 @@ impl Basis {
             n_cr_z: minor.critical_kn,
             chi_lt,
             gamma_m1,
-        })
+            terms: [0.0; 4],
+        };
+        basis.terms = basis.ratios();
+        Ok(basis)
     }
 
     /// The (6.61)/(6.62) terms N_Ed / (chi N_Rk / gamma_M1) for chi_y and
@@ -1120,7 +1125,7 @@ pub fn k_factors_b(i: &AnnexBInput) -> KFactors {
 }
 
 fn annex_b(ctx: &Context<'_>, b: &Basis, cm: &Factors, trace: &mut Trace) -> (f64, f64) {
-    let [ny, nz, _, _] = b.ratios();
+    let [ny, nz, _, _] = b.terms;
     step!(
         trace,
         S,
@@ -1330,7 +1335,7 @@ fn annex_b(ctx: &Context<'_>, b: &Basis, cm: &Factors, trace: &mut Trace) -> (f6
 
 /// (6.61) and (6.62) from the k_ij, with their terms in the working.
 fn equations(b: &Basis, k: &KFactors, trace: &mut Trace) -> (f64, f64) {
-    let [ny, nz, my, mz] = b.ratios();
+    let [ny, nz, my, mz] = b.terms;
     let u61 = ny + k.yy * my + k.yz * mz;
     let u62 = nz + k.zy * my + k.zz * mz;
     step!(
