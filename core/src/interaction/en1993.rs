@@ -1721,7 +1721,15 @@ fn push_row_a(trace: &mut Trace, row: RowA) {
 /// C_mi,0 for an axis with its bracing rule and working.
 fn c_m0_axis(ctx: &Context<'_>, axis: Axis, n_ncr: f64, trace: &mut Trace) -> f64 {
     let diagram = bending::moments(ctx.input, axis);
-    let (value, row) = c_m0(&diagram, n_ncr);
+    let general = bending::shape(&diagram) == bending::Shape::Combined;
+    let (value, row) = if general && n_ncr == 0.0 && !trace.is_on() {
+        // Without axial load the general row is 1 + (ratio - 1) 0 = 1
+        // exactly whatever the (finite) deflection ratio: that ratio, the
+        // dearest term of the annex, is worked only for the working.
+        (1.0, RowA::General { ratio: 1.0 })
+    } else {
+        c_m0(&diagram, n_ncr)
+    };
     if row == RowA::NoMoment {
         return 1.0;
     }
@@ -2511,6 +2519,24 @@ mod tests {
             b_knm: b,
             span_knm: span,
             span_load: load,
+        }
+    }
+
+    #[test]
+    fn general_row_is_one_without_axial_load() {
+        // What c_m0_axis relies on when it skips the deflection without
+        // working: 1 + (ratio - 1) N_Ed/N_cr is exactly 1 at N_Ed = 0.
+        for (a, b, w, load) in [
+            (20.0, -10.0, 30.0, SpanLoad::Uniform),
+            (-3.0, 7.5, -12.0, SpanLoad::Point),
+            (1e-9, 0.0, 500.0, SpanLoad::Uniform),
+            (-400.0, -400.0, 1e-6, SpanLoad::Point),
+        ] {
+            let m = diagram(a, b, w, load);
+            assert_eq!(bending::shape(&m), bending::Shape::Combined);
+            let (c, row) = c_m0(&m, 0.0);
+            assert_eq!(c, 1.0, "{m:?}");
+            assert!(matches!(row, RowA::General { ratio } if ratio.is_finite()));
         }
     }
 
