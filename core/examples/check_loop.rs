@@ -11,10 +11,11 @@
 //! `Scratch`: count inside `check::Scratch::check`), `moments` (the members with moments),
 //! `plain` (the same members without their moments), `beam-columns`
 //! (every one with axial load and moments) or `bending` (the same without
-//! axial load), working kept; or `sizing` (the sizing benchmark's 1,000
-//! members sized against its 300 sections: count inside
-//! `strutline_core::sizing::Sizer::size_all`), `sizing-beam-columns` (its
-//! beam-columns, the same way); ROUNDS (default 1) times over.
+//! axial load), working kept, or `beam-columns-skipped` and
+//! `bending-skipped` (the same two without working); or `sizing` (the
+//! sizing benchmark's 1,000 members sized against its 300 sections: count
+//! inside `strutline_core::sizing::Sizer::size_all`), `sizing-beam-columns`
+//! (its beam-columns, the same way); ROUNDS (default 1) times over.
 //! The cost of one round is the difference between two ROUNDS counts
 //! divided by their difference, which leaves out building the list.
 
@@ -52,11 +53,14 @@ fn main() {
         "moments" => (lists::with_moments, Working::Kept),
         "plain" => (lists::plain, Working::Kept),
         "beam-columns" => (lists::beam_column, Working::Kept),
+        "beam-columns-skipped" => (lists::beam_column, Working::Skipped),
         "bending" => (lists::bending_only, Working::Kept),
+        "bending-skipped" => (lists::bending_only, Working::Skipped),
         other => {
             eprintln!(
                 "unknown list {other}: mixed, skipped, prepared, brief, prepared-brief, moments, plain, \
-                 beam-columns, bending, sizing or sizing-beam-columns"
+                 beam-columns, beam-columns-skipped, bending, bending-skipped, sizing or \
+                 sizing-beam-columns"
             );
             std::process::exit(2);
         }
