@@ -11,7 +11,8 @@
 //    later visit from the cache;
 // 2. per edit: typing a new design load into input[name=axial_kn] until
 //    [data-testid=result-utilisation] shows a new text (DOM) and until the
-//    next animation frame after that (frame), over 100 edits; and the same
+//    next animation frame after that (frame), over 100 edits (and until the
+//    working and What if, built after that frame, are in); and the same
 //    for the member given end moments first, so each edit re-checks it and
 //    redraws its interaction chart (both axes' curves);
 //    and an edit of a column model's load along the length until its

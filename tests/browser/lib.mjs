@@ -177,6 +177,18 @@ export async function openForEditing(page, url, row = "[data-testid=member-row]"
   await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
 }
 
+/** Waits until the result's blocks built after the frame that shows an
+ * edit (the working and What if) are in: neither is aria-busy. A test that
+ * reads them after an edit waits for this, or it may read the last
+ * member's. */
+export async function settled(page) {
+  await page.waitForFunction(
+    () => ["working-block", "whatif-block"].every((t) => document.querySelector(`[data-testid=${t}]`)?.getAttribute("aria-busy") === "false"),
+    null,
+    { timeout: 10_000 },
+  );
+}
+
 /** Runs in the page (`page.evaluate(editLoop, n)`): sets a new design load
  * in input[name=axial_kn] `n` times (input and change events, as typing
  * gives) and returns, per edit, the milliseconds until
