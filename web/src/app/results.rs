@@ -64,7 +64,8 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
 /// its HTML (`make` of the member and the units; empty when no member is
 /// selected) and whether it is busy (its last content stands, out of date,
 /// until the new one is in). A later change before the task runs has its
-/// own turn; the task of the earlier one does nothing.
+/// own turn; the task of the earlier one does nothing. The page is laid
+/// out in a task after the block is in ([`browser::lay_out_now`]).
 fn after_frame(
     current: Memo<Option<Arc<Checked>>>,
     units: RwSignal<UnitSystem>,
@@ -90,6 +91,10 @@ fn after_frame(
                     }
                     html.try_set(c.as_deref().map(|c| make(c, sys)).unwrap_or_default());
                     busy.try_set(false);
+                    // Laid out in a task of its own once it is in, not
+                    // in the frame of an edit that comes before the next
+                    // frame.
+                    set_timeout(browser::lay_out_now, std::time::Duration::ZERO);
                 },
                 std::time::Duration::ZERO,
             )
