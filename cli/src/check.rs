@@ -17,7 +17,9 @@ use std::io::Write;
 use rayon::prelude::*;
 use serde::Serialize;
 use strutline_core::bending::Bending;
-use strutline_core::check::{check_member_as, CheckResult, ModeResult, Warning, Working};
+use strutline_core::check::{
+    check_member_as, CheckResult, ModeResult, SegmentOf, Warning, Working,
+};
 use strutline_core::interaction;
 use strutline_core::method::Method;
 use strutline_core::{Member, Mode, CAUTION};
@@ -55,6 +57,13 @@ pub struct Summary<'a> {
     pub utilisation: f64,
     /// Design resistance of the governing mode, kN.
     pub resistance_kn: f64,
+    /// The design compression the member was checked at, kN: its
+    /// `axial_kn`, or with a `buckling_model` the governing segment's
+    /// (see `CheckResult::axial_kn`).
+    pub axial_kn: f64,
+    /// With a `buckling_model`: the governing segment, of how many.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub segment: Option<SegmentOf>,
     /// What governs: the governing mode's key, a bending check, or
     /// "combined-not-checked" (see `CheckResult::governing_check`).
     pub governing_check: &'static str,
@@ -79,6 +88,8 @@ impl<'a> From<&'a CheckResult> for Summary<'a> {
             passes: r.passes,
             utilisation: r.utilisation,
             resistance_kn: r.resistance_kn,
+            axial_kn: r.axial_kn,
+            segment: r.segment,
             governing_check: r.governing_check,
             governing: r.governing,
             modes: &r.modes,
@@ -109,6 +120,12 @@ pub fn write_summary(out: &mut Vec<u8>, r: &CheckResult) -> serde_json::Result<(
     number(out, r.utilisation)?;
     out.extend_from_slice(b",\"resistance_kn\":");
     number(out, r.resistance_kn)?;
+    out.extend_from_slice(b",\"axial_kn\":");
+    number(out, r.axial_kn)?;
+    if let Some(segment) = &r.segment {
+        out.extend_from_slice(b",\"segment\":");
+        serde_json::to_writer(&mut *out, segment)?;
+    }
     out.extend_from_slice(b",\"governing_check\":");
     text(out, r.governing_check)?;
     out.extend_from_slice(b",\"governing\":\"");

@@ -64,7 +64,9 @@ pub fn members_with(
     mut block: impl FnMut(&str, &mut Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {
     let (tx, rx) = std::sync::mpsc::sync_channel::<(String, Vec<Member>)>(2);
-    let (back, spare) = std::sync::mpsc::channel::<Vec<Member>>();
+    // At most a few vectors wait to be used again (a CSV file whose rows
+    // come in blocks of another length, say, takes none): the rest are dropped.
+    let (back, spare) = std::sync::mpsc::sync_channel::<Vec<Member>>(4);
     std::thread::scope(|s| {
         let reader = s.spawn(move || {
             let fresh = || {
@@ -84,8 +86,8 @@ pub fn members_with(
                 break;
             }
             b.clear();
-            // The reader may have finished: then the vector is dropped.
-            let _ = back.send(b);
+            // When the reader has finished or has enough, the vector is dropped.
+            let _ = back.try_send(b);
         }
         drop(rx);
         let read = reader
@@ -131,7 +133,7 @@ fn read_blocks(
                 Err(Stop::MembersFirst) => whole(path, on_problems, block),
             }
         }
-        Format::Csv => csv_blocks(path, on_problems, block),
+        Format::Csv => csv_blocks(path, on_problems, fresh, block),
     }
 }
 
@@ -143,6 +145,7 @@ fn read_blocks(
 fn csv_blocks(
     path: &str,
     mut on_problems: OnProblems<'_>,
+    mut fresh: impl FnMut() -> Vec<Member>,
     mut block: impl FnMut(&str, Vec<Member>) -> Result<(), String>,
 ) -> Result<(String, usize), String> {
     use std::io::BufRead;
@@ -232,7 +235,8 @@ fn csv_blocks(
             })
             .collect();
         // A row whose id an earlier block used is a problem, left out.
-        let mut members = Vec::with_capacity(import.members.len());
+        let mut members = fresh();
+        members.reserve(import.members.len());
         for (m, line) in import.members.into_iter().zip(&import.member_lines) {
             if ids.insert(&m.id) {
                 members.push(m);
