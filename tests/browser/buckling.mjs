@@ -153,13 +153,35 @@ export function register(test, { withApp, open, OUT }) {
       assert.match(await resultText(page), /kip/);
 
       // The calc sheet prints the model: its tables, the column drawn with
-      // both buckled shapes (the panel's drawing, as SVG), alpha_cr per axis.
+      // both buckled shapes (the panel's drawing, as a PNG), alpha_cr per axis.
       await page.click("[data-testid=open-sheet]");
       await page.locator("[data-testid=calc-sheet]").waitFor();
       const sheetPage = page.locator("[data-testid=sheet-page]", { hasText: "Member GANTRY-4" });
-      const drawing = sheetPage.locator("[data-testid=sheet-column] svg");
+      const drawing = sheetPage.locator("[data-testid=sheet-column] img");
       assert.equal(await drawing.count(), 1, "the column drawn on the member's page");
-      assert.ok((await drawing.locator("polyline").count()) >= 2, "both buckled shapes");
+      assert.equal(await drawing.getAttribute("data-shapes"), "2", "both buckled shapes drawn");
+      // The picture itself: decoded at twice its 560 x 420 CSS px, and
+      // holding both shapes' inks (high-contrast palette of
+      // web/src/chart/column.rs: major rgb(0,0,160), minor rgb(120,0,0)).
+      const inks = await drawing.evaluate(async (img) => {
+        await img.decode();
+        const c = document.createElement("canvas");
+        c.width = img.naturalWidth;
+        c.height = img.naturalHeight;
+        const g = c.getContext("2d");
+        g.drawImage(img, 0, 0);
+        const d = g.getImageData(0, 0, c.width, c.height).data;
+        const near = (i, r, gr, b) => Math.abs(d[i] - r) < 24 && Math.abs(d[i + 1] - gr) < 24 && Math.abs(d[i + 2] - b) < 24;
+        let major = 0, minor = 0;
+        for (let i = 0; i < d.length; i += 4) {
+          if (near(i, 0, 0, 160)) major++;
+          if (near(i, 120, 0, 0)) minor++;
+        }
+        return { w: img.naturalWidth, h: img.naturalHeight, major, minor };
+      });
+      assert.equal(inks.w, 1120, JSON.stringify(inks));
+      assert.equal(inks.h, 840, JSON.stringify(inks));
+      assert.ok(inks.major > 200 && inks.minor > 200, `both buckled shapes in the picture: ${JSON.stringify(inks)}`);
       const analysisRows = await sheetPage.locator("[data-testid=sheet-model-analysis] tbody tr").count();
       assert.equal(analysisRows, 2, "alpha_cr about each axis");
       const sheetText = await sheetPage.innerText();

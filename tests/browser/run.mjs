@@ -131,6 +131,10 @@ async function waitForWorker(page) {
 
 test("loads-clean", async () => {
   await withApp("loads-clean", async (page, log) => {
+    const warnings = [];
+    page.on("console", (m) => {
+      if (m.type() === "warning") warnings.push(m.text());
+    });
     await open(page);
     // Give late module loads, the worker and its precache time to run.
     await page.waitForLoadState("networkidle");
@@ -162,6 +166,15 @@ test("loads-clean", async () => {
     const wasm = sizes.find((e) => e.name.endsWith("strutline_web_bg.wasm"));
     assert.ok(wasm, `the module is not among the loaded resources: ${JSON.stringify(sizes)}`);
     assert.ok(wasm.encoded > 0 && wasm.encoded < wasm.decoded / 2, `the module was not sent compressed: ${JSON.stringify(wasm)}`);
+    // index.html preloads the module (and the glue) so that its download
+    // starts while the page is parsed; the glue's fetch() must be handed
+    // that response, not download the module a second time, and Chromium
+    // warns about a preload it could not use.
+    for (const file of ["strutline_web_bg.wasm", "strutline_web.js"]) {
+      const loads = sizes.filter((e) => e.name.endsWith(`/${file}`)).length;
+      assert.equal(loads, 1, `the page loaded ${file} ${loads} times: ${JSON.stringify(sizes)}`);
+    }
+    assert.deepEqual(warnings.filter((w) => /preload/i.test(w)), [], "a preload was not used");
     const total = sizes.reduce((n, e) => n + e.encoded, 0);
     assert.ok(Number.isFinite(BUDGET) && BUDGET > 0, "no --budget given (cargo xtask browser-test passes it)");
     assert.ok(total <= BUDGET, `the first visit took ${total} B, over the ${BUDGET} B budget`);

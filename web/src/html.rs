@@ -26,14 +26,6 @@ impl Html {
         Html(s.to_string())
     }
 
-    /// A drawing made by plotters' SVG backend (`chart::column::svg`),
-    /// which escapes every text and attribute value it writes (its
-    /// `escape_and_push`), so text from a file in it stays text. Nothing
-    /// else may be passed here.
-    pub fn from_plotters_svg(svg: String) -> Html {
-        Html(svg)
-    }
-
     /// Escaped text.
     pub fn from_text(s: &str) -> Html {
         let mut h = Html::new();

@@ -4,7 +4,7 @@
 //! segments with their sections, end supports about each axis, braces,
 //! axial loads and the line load, the column drawn to scale with its
 //! buckled shape about each axis by the column-model panel's own drawing
-//! ([`crate::chart::column`], as SVG), alpha_cr, the element count and the
+//! ([`crate::chart::column`], as a PNG), alpha_cr, the element count and the
 //! convergence of each axis, and the buckling lengths it implies). The
 //! engineering is core's; this module only words it.
 
@@ -14,7 +14,7 @@ use strutline_core::check::buckle::MemberBuckle;
 use strutline_core::units::{self, UnitSystem};
 use strutline_core::{CheckResult, Member};
 
-use crate::chart::column::{of_member, svg};
+use crate::chart::column::{of_member, png};
 use crate::html;
 use crate::html::Html;
 use crate::numtext::fixed;
@@ -214,17 +214,20 @@ fn model_html(
     h.lit("</tbody></table></div>");
     // The drawing and the analysis.
     let Some(a) = of_member(m, sys) else { return };
-    match svg(&a.sketch, DRAWING.0, DRAWING.1) {
-        Ok(s) => {
-            h.lit(
-                "<figure class=\"sheet-column\" data-testid=\"sheet-column\" role=\"img\" \
-                 aria-label=\"The column to scale about each axis with its supports, braces, loads and buckled shape\">",
-            );
-            h.push(&Html::from_plotters_svg(s));
-            h.lit("<figcaption>The column to scale along its length (widths by the fourth root of I), its buckled shape about each axis, largest deflection drawn alike.</figcaption></figure>");
-        }
+    h.lit("<figure class=\"sheet-column\" data-testid=\"sheet-column\">");
+    match png(&a.sketch, DRAWING.0, DRAWING.1, 2.0) {
+        Ok((url, shapes)) => html!(
+            h,
+            "<img src=\"{}\" width=\"{}\" height=\"{}\" data-shapes=\"{}\" \
+             alt=\"The column to scale about each axis with its supports, braces, loads and buckled shape\">",
+            url,
+            DRAWING.0,
+            DRAWING.1,
+            shapes
+        ),
         Err(e) => html!(h, "<p class=\"verdict-error\">{}</p>", e),
     }
+    h.lit("<figcaption>The column to scale along its length (widths by the fourth root of I), its buckled shape about each axis, largest deflection drawn alike.</figcaption></figure>");
     match &a.result {
         Ok(b) => analysis(h, b, result, sys),
         Err(e) => html!(
@@ -335,7 +338,8 @@ mod tests {
             assert!(h.contains(&format!("<td class=\"num\">{}</td>", x.elements)));
         }
         // The drawing inline, the governing segment named.
-        assert!(h.contains("<svg") && h.contains("</svg>"));
+        // The drawing's place (the PNG is drawn only in a browser).
+        assert!(h.contains("drawn only in a browser"), "{h}");
         let s = r.segment.unwrap();
         assert!(
             h.contains(&format!("Segment {} of {} governs", s.index, s.count)),

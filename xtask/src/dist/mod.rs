@@ -15,8 +15,8 @@
 //!    names shortened;
 //! 4. [`glue`]: the JS glue tidied, renamed to match, and minified by
 //!    terser (boot.js too);
-//! 5. [`shell`]: index.html, boot.js, the style sheet and the manifest
-//!    copied, and `sw.js` written with a cache name stamped from a SHA-256
+//! 5. [`shell`]: index.html (given links that preload the glue and the
+//!    module), boot.js, the style sheet and the manifest copied, and `sw.js` written with a cache name stamped from a SHA-256
 //!    over every other shipped file and the list of files to precache;
 //! 6. [`icons`]: the icons drawn and written as PNG by the `png` crate;
 //! 7. [`size`]: each file gzipped beside itself by zopfli (`F.gz`, where
@@ -134,7 +134,12 @@ fn build_with(dist: &Path, use_wasm_opt: bool, keep_names: bool) -> Result<Built
         glue::minify(&tools.terser, &dist.join("boot.js"))?;
     }
 
-    shell::write(&root, dist)?;
+    shell::write(
+        &root,
+        dist,
+        &format!("{OUT_NAME}.js"),
+        &format!("{OUT_NAME}_bg.wasm"),
+    )?;
     icons::write(dist)?;
     let cache_name = shell::write_worker(&root, dist)?;
     let (files, zlib_total, sent_total) = size::compress(dist)?;

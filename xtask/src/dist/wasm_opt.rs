@@ -11,13 +11,22 @@ use wasmparser::{ExternalKind, Parser, Payload, RefType, TypeRef};
 use super::{glue, size};
 use crate::util;
 
-/// The wasm-opt levels tried, in order. The levels from -O2 up reorder
-/// functions by use and inline, which makes the module smaller raw but
-/// larger gzipped (measured: -Oz 358 KB against -O1 334 KB gzipped), so the
-/// third choice is -O1 with the passes that shrink without reordering:
-/// dead-argument elimination and code folding.
+/// The wasm-opt levels tried, in order. Binaryen's `-Os` and `-Oz` make
+/// the module smaller raw but larger gzipped, chiefly through their
+/// inlining (`inlining-optimizing` copies small functions into their
+/// callers) and, less, `local-cse`. Measured on this app's module as
+/// wasm-bindgen wrote it (566,474 B gzipped at zlib -9, binaryen 132): `-Oz`
+/// 597,827 B, `-Os` 596,636 B; `-Os` without the inlining 553,860 B and
+/// without local-cse too 552,061 B (the first choice); skipping
+/// reorder-functions, precompute-propagate, the locals' merging and
+/// ordering or global simplification did no better. The lighter `-O1`
+/// choices came to 559,331 B and 554,893 B.
 const LEVELS: [&[&str]; 3] = [
-    &["-Oz"],
+    &[
+        "-Os",
+        "--skip-pass=inlining-optimizing",
+        "--skip-pass=local-cse",
+    ],
     &["-O1", "--converge"],
     &[
         "-O1",
@@ -40,12 +49,12 @@ const FEATURES: [&str; 6] = [
 
 /// Runs `wasm_opt` at each of [`LEVELS`] and keeps whichever module is
 /// smallest gzipped (as the budget counts, [`size::gzip_len`]), the one
-/// wasm-bindgen wrote included: binaryen's `-Oz` can make rustc's already
-/// size-optimised module compress worse (its function reordering breaks up
-/// similar code), where the lighter `-O1` still shrinks it. A wasm-opt run
-/// that fails, or whose output changed the element type of an exported
-/// table (as Debian's binaryen 108 does to wasm-bindgen's externref table,
-/// after which the page fails to start), is an error.
+/// wasm-bindgen wrote included: binaryen's full levels can make rustc's
+/// already size-optimised module compress worse (their inlining copies
+/// similar code apart), where a level without those passes still shrinks
+/// it. A wasm-opt run that fails, or whose output changed the element type
+/// of an exported table (as Debian's binaryen 108 does to wasm-bindgen's
+/// externref table, after which the page fails to start), is an error.
 pub fn optimise(wasm_opt: &Path, wasm: &Path, keep_names: bool) -> Result<()> {
     let original_bytes = std::fs::read(wasm)?;
     let original = size::gzip_len(&original_bytes)?;
