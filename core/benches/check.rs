@@ -9,7 +9,7 @@ mod lists;
 
 use criterion::{black_box, criterion_group, criterion_main, Criterion, Throughput};
 use lists::{beam_column, bending_only, member, plain, with_moments, MEMBERS};
-use strutline_core::check::{check_member_as, Prepared, Working};
+use strutline_core::check::{check_member_as, check_member_in, Prepared, Scratch, Working};
 use strutline_core::member::Member;
 
 fn bench(c: &mut Criterion) {
@@ -63,6 +63,34 @@ fn bench(c: &mut Criterion) {
             for p in &prepared {
                 let p = black_box(p);
                 if let Ok(r) = p.check_as(p.member.method, Working::Skipped) {
+                    passing += usize::from(r.passes);
+                }
+            }
+            black_box(passing)
+        })
+    });
+    // The batch form: the same checks without working through one reused
+    // Scratch (no result allocated), from the member as written and
+    // prepared once.
+    group.bench_function("10k_mixed_members_brief", |b| {
+        let mut scratch = Scratch::new(Working::Skipped);
+        b.iter(|| {
+            let mut passing = 0usize;
+            for m in &members {
+                if let Ok(r) = check_member_in(black_box(m), &mut scratch) {
+                    passing += usize::from(r.passes);
+                }
+            }
+            black_box(passing)
+        })
+    });
+    group.bench_function("10k_mixed_members_prepared_brief", |b| {
+        let mut scratch = Scratch::new(Working::Skipped);
+        b.iter(|| {
+            let mut passing = 0usize;
+            for p in &prepared {
+                let p = black_box(p);
+                if let Ok(r) = p.check_in(&mut scratch, p.member.method) {
                     passing += usize::from(r.passes);
                 }
             }

@@ -37,24 +37,38 @@ impl CheckResult {
     /// load: CSA S16-19 10.4.2.1 (the slenderness ratio of a compression
     /// member shall not exceed 200). [`CheckResult::passes`] includes it.
     pub fn within_limits(&self) -> bool {
-        !(self.method == Method::CsaS16 && method::csa_s16::over_slenderness_limit(&self.modes))
+        within_limits(self.method, &self.modes)
     }
 
     /// Why the member fails a limit of its code whatever its load (the
     /// result's own warning), when it does.
     pub fn limit_exceeded(&self) -> Option<&str> {
-        if self.within_limits() {
-            return None;
-        }
-        Some(
-            self.warnings
-                .iter()
-                .find(|w| w.code == "slenderness-over-200")
-                .map_or("a slenderness limit of the code is exceeded", |w| {
-                    &w.message
-                }),
-        )
+        limit_exceeded(self.method, &self.modes, &self.warnings)
     }
+}
+
+/// [`CheckResult::within_limits`] of a result's method and modes.
+fn within_limits(method: Method, modes: &[ModeResult]) -> bool {
+    !(method == Method::CsaS16 && method::csa_s16::over_slenderness_limit(modes))
+}
+
+/// [`CheckResult::limit_exceeded`] of a result's method, modes and warnings.
+fn limit_exceeded<'w>(
+    method: Method,
+    modes: &[ModeResult],
+    warnings: &'w [Warning],
+) -> Option<&'w str> {
+    if within_limits(method, modes) {
+        return None;
+    }
+    Some(
+        warnings
+            .iter()
+            .find(|w| w.code == "slenderness-over-200")
+            .map_or("a slenderness limit of the code is exceeded", |w| {
+                &w.message
+            }),
+    )
 }
 
 /// The properties a result reports.
@@ -242,6 +256,13 @@ impl Prepared {
     pub fn check_as(&self, method: Method, working: Working) -> Result<CheckResult> {
         evaluate(&self.input(), method, working)
     }
+
+    /// Checks the member with `method` into `scratch` ([`Scratch::check`]):
+    /// the batch form, which allocates nothing once the scratch's lists
+    /// have grown.
+    pub fn check_in<'s>(&self, scratch: &'s mut Scratch, method: Method) -> Result<Brief<'s>> {
+        scratch.check(&self.input(), method)
+    }
 }
 
 /// Runs `method` on a resolved member: classification (with the EN
@@ -256,24 +277,254 @@ pub fn run(input: &Input<'_>, method: Method) -> Result<CheckResult> {
 /// [`run`], with or without the working ([`Working`]); the numbers are the
 /// same either way.
 pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<CheckResult> {
-    let m = input.member;
-    if m.buckling_model.is_some() {
-        return buckle::check(input, method);
+    if input.member.buckling_model.is_some() {
+        return buckle::check_as(input, method, working);
     }
+    let mut parts = Scratch::new(working);
+    let verdict = work(input, method, &mut parts)?;
+    let Scratch {
+        modes,
+        warnings,
+        interaction,
+        bending,
+        trace,
+    } = parts;
+    Ok(verdict.with_lists(
+        input.member.id.clone(),
+        modes,
+        bending,
+        interaction,
+        warnings,
+        trace,
+    ))
+}
+
+/// The numbers of a check without its lists: what [`CheckResult`] holds
+/// besides its id, modes, bending, interaction, warnings and working.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Verdict {
+    /// [`CheckResult::method`].
+    pub method: Method,
+    /// [`CheckResult::passes`].
+    pub passes: bool,
+    /// [`CheckResult::utilisation`].
+    pub utilisation: f64,
+    /// [`CheckResult::governing_check`].
+    pub governing_check: &'static str,
+    /// [`CheckResult::resistance_kn`].
+    pub resistance_kn: f64,
+    /// [`CheckResult::axial_kn`].
+    pub axial_kn: f64,
+    /// [`CheckResult::segment`].
+    pub segment: Option<SegmentOf>,
+    /// [`CheckResult::governing`].
+    pub governing: Mode,
+    /// [`CheckResult::squash_kn`].
+    pub squash_kn: f64,
+    /// [`CheckResult::strength_mpa`].
+    pub strength_mpa: f64,
+    /// [`CheckResult::modulus_mpa`].
+    pub modulus_mpa: f64,
+    /// [`CheckResult::section`].
+    pub section: SectionSummary,
+}
+
+/// The lists a check fills, kept between checks: a batch checks member
+/// after member through one [`Scratch`] with [`Scratch::check`], so once
+/// its lists have grown a check allocates nothing (sizing's candidates and
+/// the envelope's samples are checked so). The numbers and lists are those
+/// of [`evaluate`] (the same code fills them; a property test compares the
+/// two bit for bit). `Scratch::default()` keeps the working, as
+/// [`Working::default`] does; a batch takes `Scratch::new(Working::Skipped)`.
+#[derive(Debug, Clone, Default)]
+pub struct Scratch {
+    modes: Vec<ModeResult>,
+    warnings: Vec<Warning>,
+    interaction: Vec<interaction::Check>,
+    bending: Option<Bending>,
+    trace: Trace,
+}
+
+/// A check's outcome borrowed from the [`Scratch`] that worked it: the
+/// [`Verdict`] (read through it: `brief.utilisation`) and the lists of a
+/// [`CheckResult`], valid until the scratch's next check.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Brief<'a> {
+    /// The numbers.
+    pub verdict: Verdict,
+    /// [`CheckResult::modes`].
+    pub modes: &'a [ModeResult],
+    /// [`CheckResult::bending`].
+    pub bending: Option<&'a Bending>,
+    /// [`CheckResult::interaction`].
+    pub interaction: &'a [interaction::Check],
+    /// [`CheckResult::warnings`].
+    pub warnings: &'a [Warning],
+    /// [`CheckResult::trace`] (empty unless the scratch keeps the working).
+    pub trace: &'a Trace,
+}
+
+impl std::ops::Deref for Brief<'_> {
+    type Target = Verdict;
+    fn deref(&self) -> &Verdict {
+        &self.verdict
+    }
+}
+
+impl Brief<'_> {
+    /// [`CheckResult::within`].
+    pub fn within(&self, limit: f64) -> bool {
+        self.utilisation <= limit && self.within_limits() && self.governing_check != NOT_CHECKED
+    }
+
+    /// [`CheckResult::within_limits`].
+    pub fn within_limits(&self) -> bool {
+        within_limits(self.method, self.modes)
+    }
+
+    /// [`CheckResult::limit_exceeded`].
+    pub fn limit_exceeded(&self) -> Option<&str> {
+        limit_exceeded(self.method, self.modes, self.warnings)
+    }
+
+    /// The owned result of the member `id`, as [`evaluate`] gives it.
+    pub fn to_result(&self, id: &str) -> CheckResult {
+        self.verdict.with_lists(
+            id.to_string(),
+            self.modes.to_vec(),
+            self.bending.copied(),
+            self.interaction.to_vec(),
+            self.warnings.to_vec(),
+            self.trace.clone(),
+        )
+    }
+}
+
+impl Verdict {
+    /// The owned result of these numbers with its id and lists.
+    fn with_lists(
+        self,
+        id: String,
+        modes: Vec<ModeResult>,
+        bending: Option<Bending>,
+        interaction: Vec<interaction::Check>,
+        warnings: Vec<Warning>,
+        trace: Trace,
+    ) -> CheckResult {
+        let v = self;
+        CheckResult {
+            id,
+            method: v.method,
+            passes: v.passes,
+            utilisation: v.utilisation,
+            governing_check: v.governing_check,
+            resistance_kn: v.resistance_kn,
+            axial_kn: v.axial_kn,
+            segment: v.segment,
+            governing: v.governing,
+            squash_kn: v.squash_kn,
+            strength_mpa: v.strength_mpa,
+            modulus_mpa: v.modulus_mpa,
+            section: v.section,
+            modes,
+            bending,
+            interaction,
+            warnings,
+            trace,
+        }
+    }
+}
+
+impl Scratch {
+    /// Empty lists, with the working kept or not.
+    #[inline]
+    pub fn new(working: Working) -> Scratch {
+        Scratch {
+            modes: Vec::with_capacity(4),
+            warnings: Vec::new(),
+            interaction: Vec::new(),
+            bending: None,
+            trace: working.trace(),
+        }
+    }
+
+    /// Checks a resolved member with `method` (as [`evaluate`] does, with
+    /// this scratch's working), writing the lists into this scratch.
+    pub fn check(&mut self, input: &Input<'_>, method: Method) -> Result<Brief<'_>> {
+        let verdict = if input.member.buckling_model.is_some() {
+            // A member with a buckling model is checked segment by segment
+            // (check::buckle), which gives a whole result; its lists are
+            // moved in here.
+            let on = self.trace.is_on();
+            let working = if on { Working::Kept } else { Working::Skipped };
+            let r = buckle::check_as(input, method, working)?;
+            self.modes = r.modes;
+            self.warnings = r.warnings;
+            self.interaction = r.interaction;
+            self.bending = r.bending;
+            if on {
+                self.trace = r.trace;
+            } else {
+                self.trace.clear();
+            }
+            Verdict {
+                method: r.method,
+                passes: r.passes,
+                utilisation: r.utilisation,
+                governing_check: r.governing_check,
+                resistance_kn: r.resistance_kn,
+                axial_kn: r.axial_kn,
+                segment: r.segment,
+                governing: r.governing,
+                squash_kn: r.squash_kn,
+                strength_mpa: r.strength_mpa,
+                modulus_mpa: r.modulus_mpa,
+                section: r.section,
+            }
+        } else {
+            self.modes.clear();
+            self.warnings.clear();
+            self.interaction.clear();
+            self.bending = None;
+            self.trace.clear();
+            work(input, method, self)?
+        };
+        Ok(Brief {
+            verdict,
+            modes: &self.modes,
+            bending: self.bending.as_ref(),
+            interaction: &self.interaction,
+            warnings: &self.warnings,
+            trace: &self.trace,
+        })
+    }
+}
+
+/// The check of a resolved member without a buckling model, its lists
+/// written into `parts` (empty on entry). Inlined into both callers, so
+/// [`evaluate`]'s result is written in place as before.
+#[inline(always)]
+fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdict> {
+    let Scratch {
+        modes,
+        warnings,
+        interaction: checks,
+        bending: bending_slot,
+        trace,
+    } = parts;
+    let m = input.member;
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
     let lengths = m.buckling_lengths().map_err(wrap)?;
-    let mut trace = working.trace();
-    let mut warnings = Vec::new();
     for (frame, which) in [
         (m.frame_major, crate::buckling::chart::FrameKey::Major),
         (m.frame_minor, crate::buckling::chart::FrameKey::Minor),
     ] {
         if let Some(f) = frame {
-            crate::buckling::chart::work(&f, which, &mut trace).map_err(wrap)?;
+            crate::buckling::chart::work(&f, which, trace).map_err(wrap)?;
         }
     }
-    method::prelude(method, input, &mut trace, &mut warnings).map_err(wrap)?;
-    let assessment = stability::assess(method, input, &mut trace, &mut warnings);
+    method::prelude(method, input, trace, warnings).map_err(wrap)?;
+    let assessment = stability::assess(method, input, trace, warnings);
     // EN 1993-1-1 6.3.1.3 / 6.3.1.4 for Class 4: the method's formulas with
     // A_eff in place of A (N_cr from the gross section).
     let effective_section = assessment.en_effective.map(|eff| Section {
@@ -298,38 +549,37 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         &axes,
         Mode::Major,
         lengths.major_mm,
-        &mut trace,
-        &mut warnings,
+        trace,
+        warnings,
     )
     .map_err(wrap)?;
     // Angle branch: AISC 360-16 E5 for an angle connected through one leg
     // replaces the minor-axis mode and may waive the E4 mode.
-    let e5 = method::aisc360::e5_connection(method, input, &mut warnings);
+    let e5 = method::aisc360::e5_connection(method, input, warnings);
     let mut minor = match e5 {
-        Some((c, basis)) => method::aisc360::e5(&axes, c, basis, &mut trace, &mut warnings),
+        Some((c, basis)) => method::aisc360::e5(&axes, c, basis, trace, warnings),
         None => method::axis(
             method,
             &axes,
             Mode::Minor,
             lengths.minor_mm,
-            &mut trace,
-            &mut warnings,
+            trace,
+            warnings,
         ),
     }
     .map_err(wrap)?;
-    let mut twist = if e5.is_some() && !method::aisc360::e5_twist(input, &mut trace) {
+    let mut twist = if e5.is_some() && !method::aisc360::e5_twist(input, trace) {
         None
     } else {
-        stability::twist_mode(method, input, &axes, &lengths, &mut trace, &mut warnings)
-            .map_err(wrap)?
+        stability::twist_mode(method, input, &axes, &lengths, trace, warnings).map_err(wrap)?
     };
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     if aisc {
         if let Some(c) = assessment.classified.filter(|c| c.is_slender()) {
-            stability::aisc_slender(&mut major, &c, input, &mut trace);
-            stability::aisc_slender(&mut minor, &c, input, &mut trace);
+            stability::aisc_slender(&mut major, &c, input, trace);
+            stability::aisc_slender(&mut minor, &c, input, trace);
             if let Some(t) = twist.as_mut() {
-                stability::aisc_slender(t, &c, input, &mut trace);
+                stability::aisc_slender(t, &c, input, trace);
             }
         }
         if input.section.family == Family::Angle && e5.is_none() {
@@ -340,7 +590,6 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
             ));
         }
     }
-    let mut modes = Vec::with_capacity(4);
     modes.push(major);
     modes.push(minor);
     if let Some(t) = twist {
@@ -366,7 +615,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         }
         .in_member(&m.id));
     } else if method == Method::En1993 {
-        modes.push(stability::en_section_mode(input, &assessment, &mut trace));
+        modes.push(stability::en_section_mode(input, &assessment, trace));
     }
     let governing = modes
         .iter()
@@ -390,35 +639,32 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     };
     // Without moments there is no bending side (bending::check would say
     // so itself, after looking for a moment again).
-    let bending = if moments {
+    *bending_slot = if moments {
         // The bending working: some 20 to 30 lines an axis.
         trace.reserve(64);
-        bending::check(method, input, &mut trace, &mut warnings).map_err(wrap)?
+        bending::check(method, input, trace, warnings).map_err(wrap)?
     } else {
         None
     };
-    let mut checks = Vec::new();
-    let (utilisation, governing_check, passes) = match &bending {
+    let (utilisation, governing_check, passes) = match &*bending_slot {
         // Without moments: the axial check alone (asked first, as the
         // secant check below would find no moment either).
         None if !moments => (axial, governing.mode.key(), axial <= 1.0),
         // The secant method's moments are the load's eccentricity: its one
         // check `secant` (never above the axial utilisation, which it is
         // about the moment's axis).
-        None => {
-            match interaction::secant::check(method, input, &modes, &mut trace).map_err(wrap)? {
-                Some(c) => {
-                    checks.push(c);
-                    let (u, name) = if c.utilisation >= axial {
-                        (c.utilisation, c.check)
-                    } else {
-                        (axial, governing.mode.key())
-                    };
-                    (u, name, u <= 1.0)
-                }
-                None => (axial, governing.mode.key(), axial <= 1.0),
+        None => match interaction::secant::check(method, input, modes, trace).map_err(wrap)? {
+            Some(c) => {
+                checks.push(c);
+                let (u, name) = if c.utilisation >= axial {
+                    (c.utilisation, c.check)
+                } else {
+                    (axial, governing.mode.key())
+                };
+                (u, name, u <= 1.0)
             }
-        }
+            None => (axial, governing.mode.key(), axial <= 1.0),
+        },
         Some(b) => {
             let (um, un) = (b.major.utilisation(), b.minor.utilisation());
             let (ub, which) = if um >= un {
@@ -438,14 +684,14 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
                     method,
                     input,
                     lengths: &lengths,
-                    modes: &modes,
+                    modes,
                     governing: &governing,
                     bending: b,
                     assessment: &assessment,
                 };
-                match interaction::check(&ctx, &mut trace, &mut warnings).map_err(wrap)? {
+                match interaction::check(&ctx, trace, warnings).map_err(wrap)? {
                     Some(found) => {
-                        checks = found;
+                        *checks = found;
                         // The largest of the axial, the bending and every
                         // interaction utilisation governs.
                         let (mut u, mut name) = if axial >= ub {
@@ -453,7 +699,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
                         } else {
                             (ub, which)
                         };
-                        if let Some(c) = interaction::governing(&checks) {
+                        if let Some(c) = interaction::governing(checks) {
                             if c.utilisation >= u {
                                 (u, name) = (c.utilisation, c.check);
                             }
@@ -479,10 +725,10 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         }
     };
     let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
-    let mut r = CheckResult {
-        id: m.id.clone(),
+    let passes = passes && within_limits(method, modes);
+    Ok(Verdict {
         method,
-        passes: false,
+        passes,
         utilisation,
         governing_check,
         resistance_kn,
@@ -493,14 +739,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         strength_mpa,
         modulus_mpa,
         section: SectionSummary::from(&input.section.props),
-        modes,
-        bending,
-        interaction: checks,
-        warnings,
-        trace,
-    };
-    r.passes = passes && r.within_limits();
-    Ok(r)
+    })
 }
 
 /// Validates a member's options and resolves its section and material (its
@@ -518,6 +757,23 @@ pub fn resolve(member: &Member) -> Result<(Section, Material)> {
 /// Checks one member with its own method.
 pub fn check_member(member: &Member) -> Result<CheckResult> {
     check_member_as(member, Working::Kept)
+}
+
+/// Checks one member with its own method into `scratch` ([`Scratch::check`]):
+/// [`check_member_as`] for a batch, which allocates nothing for the result
+/// once the scratch's lists have grown.
+pub fn check_member_in<'s>(member: &Member, scratch: &'s mut Scratch) -> Result<Brief<'s>> {
+    let wrap = |e: crate::error::Error| e.in_member(&member.id);
+    member.validate_options().map_err(wrap)?;
+    let section = member.build_section().map_err(wrap)?;
+    let material =
+        crate::material::resolve(&member.material, crate::member::stock(&section)).map_err(wrap)?;
+    let input = Input {
+        member,
+        section: &section,
+        material: &material,
+    };
+    scratch.check(&input, member.method)
 }
 
 /// Checks one member with its own method, with or without its working.

@@ -539,6 +539,35 @@ impl Member {
     /// Checks every scalar field of the member (not the section or material,
     /// which check themselves) and returns its buckling lengths.
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
+        // The usual case first, with one test of every value (no frames,
+        // every k finite and above zero, every length within the bounds,
+        // which are finite and above zero): the same lengths as the steps
+        // below, which give the error naming the field otherwise.
+        if self.frame_major.is_none() && self.frame_minor.is_none() {
+            let length = self.length_mm;
+            let lengths = BucklingLengths {
+                major_mm: self.lcr_major_mm.unwrap_or(self.k_major * length),
+                minor_mm: self.lcr_minor_mm.unwrap_or(self.k_minor * length),
+                torsion_mm: self.lcr_torsion_mm.unwrap_or(self.k_torsion * length),
+            };
+            let k = |v: f64| v.is_finite() && v > 0.0;
+            let l = |v: f64| (MIN_LENGTH_MM..=MAX_LENGTH_MM).contains(&v);
+            if k(self.k_major)
+                && k(self.k_minor)
+                && k(self.k_torsion)
+                && l(length)
+                && l(lengths.major_mm)
+                && l(lengths.minor_mm)
+                && l(lengths.torsion_mm)
+            {
+                return Ok(lengths);
+            }
+        }
+        self.buckling_lengths_stepwise()
+    }
+
+    /// [`Member::buckling_lengths`] field by field, each refusal naming its field.
+    fn buckling_lengths_stepwise(&self) -> Result<BucklingLengths> {
         let length = bounded("length_mm", self.length_mm)?;
         let k_major = framed(
             self.frame_major,
@@ -591,7 +620,13 @@ impl Member {
 
     /// Whether the member carries any design moment.
     pub fn has_moments(&self) -> bool {
-        !(self.moments_major().is_zero() && self.moments_minor().is_zero())
+        // Moments::is_zero of both axes, on the fields themselves.
+        !(self.m_major_a_knm == 0.0
+            && self.m_major_b_knm == 0.0
+            && self.m_major_span_knm == 0.0
+            && self.m_minor_a_knm == 0.0
+            && self.m_minor_b_knm == 0.0
+            && self.m_minor_span_knm == 0.0)
     }
 
     /// The first moment key that is not zero, for messages.
@@ -797,6 +832,57 @@ impl Method {
 mod tests {
     #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
+
+    /// The one-test path of `buckling_lengths` gives what the field-by-field
+    /// steps give, value and error, over the edges of every bound (NaN,
+    /// infinities, zero, negatives, just inside and outside 1 mm and 10 km).
+    #[test]
+    fn buckling_lengths_are_those_of_the_steps() {
+        let values = [
+            f64::NAN,
+            f64::INFINITY,
+            f64::NEG_INFINITY,
+            -1.0,
+            0.0,
+            1e-9,
+            0.5,
+            0.999_999,
+            1.0,
+            2.1,
+            3000.0,
+            9.999e6,
+            1.0e7,
+            1.000_001e7,
+        ];
+        let mut compared = 0;
+        for &length in &values {
+            for &k in &values {
+                for &lcr in &[None, Some(f64::NAN), Some(0.5), Some(2500.0), Some(2.0e7)] {
+                    for which in 0..3 {
+                        let mut m = Member::new(
+                            "L",
+                            SectionSpec::Round(crate::section::Round { diameter_mm: 50.0 }),
+                            MaterialSpec::Grade {
+                                grade: "S355".into(),
+                            },
+                            length,
+                            10.0,
+                            Method::En1993,
+                        );
+                        match which {
+                            0 => (m.k_major, m.lcr_major_mm) = (k, lcr),
+                            1 => (m.k_minor, m.lcr_minor_mm) = (k, lcr),
+                            _ => (m.k_torsion, m.lcr_torsion_mm) = (k, lcr),
+                        }
+                        let (a, b) = (m.buckling_lengths(), m.buckling_lengths_stepwise());
+                        assert_eq!(format!("{a:?}"), format!("{b:?}"), "{m:?}");
+                        compared += 1;
+                    }
+                }
+            }
+        }
+        assert_eq!(compared, values.len() * values.len() * 5 * 3);
+    }
 
     #[test]
     fn the_moment_diagram_is_the_documented_sum() {

@@ -3,7 +3,7 @@
 //! Candidates are sorted by tabulated mass per metre once, and their
 //! sections built once ([`Sizer::new`]). For each member they are then
 //! checked lightest first with the member's own method (the same
-//! [`check::evaluate`] (without working) as [`crate::check_member`] and [`crate::check::Prepared`]
+//! [`crate::check::Scratch::check`] (without working) as [`crate::check_member`] and [`crate::check::Prepared`]
 //! use, on a copy of the member with its section replaced by the
 //! candidate) until one has a utilisation within the limit. The next
 //! lighter candidate is reported with why it fails (its utilisation and
@@ -31,7 +31,7 @@
 //! under moments (`screening_never_hides_a_beam_column_that_passes`).
 
 use crate::catalogue::Entry;
-use crate::check::{self, CheckResult, Mode};
+use crate::check::{Brief, Mode, Scratch, Working};
 use crate::error::{Error, Result};
 use crate::method::{Input, Method};
 use std::f64::consts::PI;
@@ -233,6 +233,9 @@ impl<'a> Sizer<'a> {
         let mut last: Option<Rejected<'a>> = None;
         let mut last_screened: Option<usize> = None;
         let mut chosen: Option<Passing<'a>> = None;
+        // One scratch for every candidate: a check allocates nothing once
+        // its lists have grown.
+        let mut scratch = Scratch::new(Working::Skipped);
         for (i, (entry, section)) in self.candidates.iter().enumerate() {
             let outcome = match section {
                 Err(e) => Err(wrap(e.clone())),
@@ -246,7 +249,7 @@ impl<'a> Sizer<'a> {
                             continue;
                         }
                         result.checked += 1;
-                        evaluate(copy, entry, section, &mat)
+                        evaluate(copy, entry, section, &mat, &mut scratch)
                     }
                 },
             };
@@ -281,7 +284,7 @@ impl<'a> Sizer<'a> {
             let section = section.as_ref().ok()?;
             let mat = material_of(materials, i, &copy.material, section).ok()?;
             result.checked += 1;
-            last = Some(match evaluate(copy, entry, section, &mat) {
+            last = Some(match evaluate(copy, entry, section, &mat, &mut scratch) {
                 Ok(r) if r.within(limit) => return None,
                 Ok(r) => Rejected {
                     entry,
@@ -325,7 +328,7 @@ impl<'a> Sizer<'a> {
 /// Why a checked candidate is not taken: its utilisation, or a limit of
 /// its code that fails it whatever the load (CSA S16-19 10.4.2.1), told
 /// as the result's own warning.
-fn refusal(r: &CheckResult) -> Refusal {
+fn refusal(r: &Brief<'_>) -> Refusal {
     match r.limit_exceeded() {
         Some(reason) => Refusal::Error(Error::NotApplicable {
             method: r.method.key(),
@@ -360,16 +363,19 @@ fn material_of(
 }
 
 /// Checks `copy` (a copy of the member) with `section`, the built section
-/// of `entry`: the same check ([`check::evaluate`], without working) that [`crate::check::Prepared::check`] and
-/// [`crate::check_member`] use, on the member with its section replaced by
-/// the catalogue reference of `entry`. The copy's designation text is
-/// reused, so a candidate costs no allocation beyond the check's result.
-fn evaluate(
+/// of `entry`: the same check ([`Scratch::check`], without working) that
+/// [`crate::check::Prepared::check`] and [`crate::check_member`] give, on
+/// the member with its section replaced by the catalogue reference of
+/// `entry`. The copy's designation text is reused and the result's lists
+/// are kept in `scratch`, so a candidate allocates nothing once they have
+/// grown.
+fn evaluate<'s>(
     copy: &mut Member,
     entry: &Entry,
     section: &Section,
     material: &Material,
-) -> Result<CheckResult> {
+    scratch: &'s mut Scratch,
+) -> Result<Brief<'s>> {
     match &mut copy.section {
         SectionSpec::Catalogue(c) => {
             c.designation.clear();
@@ -386,7 +392,7 @@ fn evaluate(
         section,
         material,
     };
-    check::evaluate(&input, copy.method, check::Working::Skipped)
+    scratch.check(&input, copy.method)
 }
 
 /// An upper bound on the design resistance, kN, of every mode of every

@@ -14,9 +14,11 @@
 )]
 
 use proptest::prelude::*;
-use strutline_core::check::{check_member, check_member_as, CheckResult, Mode, Working};
+use strutline_core::check::{
+    check_member, check_member_as, check_member_in, CheckResult, Mode, Scratch, Working,
+};
 use strutline_core::material::MaterialSpec;
-use strutline_core::member::{Curve, LoadDuration, Member};
+use strutline_core::member::{Curve, InteractionAnnex, LoadDuration, LoadLevel, Member, SpanLoad};
 use strutline_core::method::Method;
 use strutline_core::section::{
     Angle, Chs, Flanged, Given, HollowMake, IMake, IShape, Rect, Rhs, Round, SectionSpec,
@@ -243,6 +245,60 @@ fn any_member() -> impl Strategy<Value = Member> {
     prop_oneof![4 => steel_member(), 1 => timber_member()]
 }
 
+/// A moment diagram about one axis: end moments and a span moment (each
+/// zero a third of the time), the span load's shape.
+fn diagram() -> impl Strategy<Value = ([f64; 3], SpanLoad)> {
+    let moment = prop_oneof![1 => Just(0.0), 2 => -200.0..200.0f64];
+    (
+        [moment.clone(), moment.clone(), moment],
+        prop::sample::select(vec![SpanLoad::Uniform, SpanLoad::Point]),
+    )
+}
+
+/// [`any_member`] with moments about both axes (beam-columns, and beams
+/// where the axial load is zero), the lateral-torsional buckling keys and
+/// the EN 1993-1-1 interaction annex.
+fn member_with_moments() -> impl Strategy<Value = Member> {
+    (
+        any_member(),
+        diagram(),
+        diagram(),
+        prop::sample::select(vec![0.0, 0.4, 0.7, 1.0, 1.5]),
+        prop::option::of(1000.0..9000.0f64),
+        prop::sample::select(vec![
+            LoadLevel::ShearCentre,
+            LoadLevel::CompressionFlange,
+            LoadLevel::TensionFlange,
+        ]),
+        prop::option::of(prop::sample::select(vec![
+            InteractionAnnex::A,
+            InteractionAnnex::B,
+        ])),
+        (any::<bool>(), any::<bool>(), any::<bool>()),
+    )
+        .prop_map(
+            |(mut m, (major, load_y), (minor, load_z), k_lt, lcr_lt, level, annex, flags)| {
+                let (restrained, amplify, beam) = flags;
+                [m.m_major_a_knm, m.m_major_b_knm, m.m_major_span_knm] = major;
+                [m.m_minor_a_knm, m.m_minor_b_knm, m.m_minor_span_knm] = minor;
+                m.span_load_major = load_y;
+                m.span_load_minor = load_z;
+                if k_lt > 0.0 {
+                    m.k_lt = k_lt;
+                }
+                m.lcr_lt_mm = lcr_lt;
+                m.load_level = level;
+                m.interaction_annex = annex;
+                m.lt_restrained = restrained;
+                m.amplify_moments = amplify;
+                if beam {
+                    m.axial_kn = 0.0;
+                }
+                m
+            },
+        )
+}
+
 /// The check of a plausible member: a result, or `None` when the method
 /// refuses the section as outside its scope (a typed `NotApplicable`, e.g.
 /// a slender CHS under EN 1993-1-1). Any other error fails the test.
@@ -295,9 +351,12 @@ fn bits(r: &CheckResult) -> Vec<String> {
         // Debug writes each number in its shortest form that reads back
         // to the same bits.
         format!("{:?}", r.bending),
+        format!("{:?}", r.interaction),
+        format!("{:?}", r.segment),
     ];
     let s = &r.section;
     let mut nums = vec![
+        r.axial_kn,
         r.utilisation,
         r.resistance_kn,
         r.squash_kn,
@@ -326,24 +385,60 @@ fn bits(r: &CheckResult) -> Vec<String> {
     out
 }
 
-/// The member checked with and without its working, under its own method
-/// and every other: the same outcome, bit for bit, and no working when it
-/// is skipped.
+/// The member checked with and without its working, and in the batch form
+/// (through a [`Scratch`] reused from check to check, as a batch does),
+/// under its own method and every other: the same outcome, bit for bit, and
+/// no working when it is skipped.
 fn same_without_working(m: &Member) {
+    let mut scratch = Scratch::new(Working::Skipped);
     for method in Method::ALL {
         let mut m = m.clone();
         m.method = method;
         let with = check_member_as(&m, Working::Kept);
         let without = check_member_as(&m, Working::Skipped);
-        match (&with, &without) {
-            (Ok(a), Ok(b)) => {
+        let batch = check_member_in(&m, &mut scratch).map(|b| b.to_result(&m.id));
+        match (&with, &without, &batch) {
+            (Ok(a), Ok(b), Ok(c)) => {
                 assert_eq!(bits(a), bits(b), "{m:?}");
+                assert_eq!(bits(a), bits(c), "{m:?}");
                 assert!(!a.trace.is_empty() && b.trace.is_empty(), "{m:?}");
+                assert!(c.trace.is_empty(), "{m:?}");
             }
-            (Err(a), Err(b)) => assert_eq!(a.to_string(), b.to_string(), "{m:?}"),
-            _ => panic!("with working {with:?}\nwithout {without:?}\n{m:?}"),
+            (Err(a), Err(b), Err(c)) => {
+                assert_eq!(a.to_string(), b.to_string(), "{m:?}");
+                assert_eq!(a.to_string(), c.to_string(), "{m:?}");
+            }
+            _ => panic!("with working {with:?}\nwithout {without:?}\nbatch {batch:?}\n{m:?}"),
         }
     }
+}
+
+/// A member of any kind with design moments (none, either end, the span,
+/// either axis), so the bending side, the interaction equations and the
+/// secant method's eccentricity are compared too.
+fn member_with_end_moments() -> impl Strategy<Value = Member> {
+    let moment = prop_oneof![2 => Just(0.0), 3 => -40.0..40.0f64];
+    (
+        any_member(),
+        [
+            moment.clone(),
+            moment.clone(),
+            moment.clone(),
+            moment.clone(),
+            moment.clone(),
+            moment,
+        ],
+        prop::bool::ANY,
+    )
+        .prop_map(|(mut m, [ya, yb, ys, za, zb, zs], equal)| {
+            m.m_major_a_knm = ya;
+            // Equal end moments about one axis: what the secant method takes.
+            m.m_major_b_knm = if equal { ya } else { yb };
+            m.m_major_span_knm = if equal { 0.0 } else { ys };
+            (m.m_minor_a_knm, m.m_minor_b_knm, m.m_minor_span_knm) =
+                if equal { (0.0, 0.0, 0.0) } else { (za, zb, zs) };
+            m
+        })
 }
 
 proptest! {
@@ -351,6 +446,16 @@ proptest! {
 
     #[test]
     fn results_are_the_same_without_working(m in any_member()) {
+        same_without_working(&m);
+    }
+
+    #[test]
+    fn results_with_moments_are_the_same_without_working(m in member_with_moments()) {
+        same_without_working(&m);
+    }
+
+    #[test]
+    fn results_with_equal_end_moments_are_the_same_without_working(m in member_with_end_moments()) {
         same_without_working(&m);
     }
 
@@ -588,4 +693,22 @@ proptest! {
             }
         }
     }
+}
+
+/// Every member of the examples (frames, buckling models, moments,
+/// warnings) under every method, with and without working and in the batch
+/// form: the same outcome, bit for bit.
+#[test]
+fn example_members_are_the_same_without_working() {
+    let mut compared = 0;
+    for example in ["depot-mezzanine", "tarnbeck-crane-hall", "yard-canopy-over"] {
+        let path = format!("{}/../examples/{example}.json", env!("CARGO_MANIFEST_DIR"));
+        let text = std::fs::read_to_string(&path).unwrap();
+        let file = strutline_core::file::parse(&text).unwrap();
+        for m in &file.members {
+            same_without_working(m);
+            compared += 1;
+        }
+    }
+    assert!(compared >= 9, "{compared}");
 }

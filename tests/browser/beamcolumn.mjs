@@ -10,7 +10,7 @@
 
 import assert from "node:assert/strict";
 import { join } from "node:path";
-import { memberFields, setField } from "./lib.mjs";
+import { memberFields, setField, settled } from "./lib.mjs";
 
 // An invented member: a post of a made-up ferry-shed gallery, a welded
 // I section of custom S355-like steel, EN 1993-1-1, end moments about the
@@ -33,6 +33,8 @@ const PORTRAIT = { viewport: { width: 820, height: 1180 }, isMobile: true, hasTo
 
 /** What the page says about the selected beam-column. */
 async function reading(page) {
+  // The table of equations is in the working, built after the frame.
+  await settled(page);
   return page.evaluate(() => {
     const canvas = document.querySelector("canvas#envelope");
     const d = canvas?.dataset ?? {};

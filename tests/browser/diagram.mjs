@@ -15,7 +15,7 @@
 
 import assert from "node:assert/strict";
 import { join } from "node:path";
-import { memberFields, setField } from "./lib.mjs";
+import { memberFields, setField, settled } from "./lib.mjs";
 
 // An invented member: a wind post of a made-up rowing-club boat store, a
 // rolled I of custom steel, EN 1993-1-1, 6 m between lateral restraints so
@@ -111,6 +111,8 @@ function agrees(d, m, what) {
 /** The bending table of the result: per axis the largest moment, the
  * resistance and the elastic critical moment (null for a dash). */
 async function bendingSide(page) {
+  // The table is in the working, built after the frame.
+  await settled(page);
   return page.evaluate(() => {
     const table = document.querySelector("[data-testid=bending]");
     if (!table) return null;

@@ -177,13 +177,27 @@ export async function openForEditing(page, url, row = "[data-testid=member-row]"
   await page.locator("[data-testid=result-utilisation]").first().waitFor({ state: "visible", timeout: 10_000 });
 }
 
+/** Waits until the result's blocks built after the frame that shows an
+ * edit (the working and What if) are in: neither is aria-busy. A test that
+ * reads them after an edit waits for this, or it may read the last
+ * member's. */
+export async function settled(page) {
+  await page.waitForFunction(
+    () => ["working-block", "whatif-block"].every((t) => document.querySelector(`[data-testid=${t}]`)?.getAttribute("aria-busy") === "false"),
+    null,
+    { timeout: 10_000 },
+  );
+}
+
 /** Runs in the page (`page.evaluate(editLoop, n)`): sets a new design load
  * in input[name=axial_kn] `n` times (input and change events, as typing
  * gives) and returns, per edit, the milliseconds until
  * [data-testid=result-utilisation] shows a new text (`dom`) and until the
  * next animation frame after that (`frame`), and the count of edits that
- * changed nothing within 2 s (`timeouts`). `page.evaluate(editLoop, {n,
- * field})` edits another number field the same way (an end moment). */
+ * changed nothing within 2 s (`timeouts`), and until the blocks built
+ * after that frame (the working and What if, aria-busy until they are in)
+ * are in (`settled`). `page.evaluate(editLoop, {n, field})` edits another
+ * number field the same way (an end moment). */
 export const editLoop = async (arg) => {
   const n = typeof arg === "number" ? arg : arg.n;
   const field = (typeof arg === "object" && arg.field) || "axial_kn";
@@ -192,8 +206,10 @@ export const editLoop = async (arg) => {
   const result = () => document.querySelector("[data-testid=result-utilisation]");
   const dom = [];
   const frame = [];
+  const settled = [];
   let timeouts = 0;
   const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, "value").set;
+  const busy = () => document.querySelector("[data-testid=working-block][aria-busy=true], [data-testid=whatif-block][aria-busy=true]");
   for (let i = 0; i < n; i += 1) {
     const before = result()?.textContent ?? "";
     // Alternate above and below the starting load so the text changes.
@@ -229,11 +245,16 @@ export const editLoop = async (arg) => {
     } else {
       dom.push(t.changedAt - t0);
       frame.push(t.frameAt - t0);
+      // The working and What if are built after the frame: the time
+      // until both are in, before the next edit.
+      const until = performance.now() + 2000;
+      while (busy() && performance.now() < until) await new Promise((r) => setTimeout(r, 0));
+      settled.push(performance.now() - t0);
     }
     // Let the page settle between edits.
     await new Promise((r) => setTimeout(r, 5));
   }
-  return { dom, frame, timeouts };
+  return { dom, frame, settled, timeouts };
 };
 
 /** Runs in the page (`page.evaluate(modelEditLoop, values)`): for each of

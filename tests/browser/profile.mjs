@@ -8,7 +8,8 @@
 //   edit:          `--runs` edits of the design load of the demo's first
 //                  member (a compression member), as bench.mjs times them;
 //   edit-moments:  the same on a member with moments (the interaction
-//                  chart is drawn on each edit);
+//                  chart is drawn on each edit); `--field m_major_a_knm`
+//                  edits its end moment instead (both curves worked afresh);
 //   model-edit:    `--runs` edits of the load along the length of a column
 //                  model (lib.mjs modelColumns, `--member TD-1` or TD-2),
 //                  as bench.mjs times them (modelEditLoop), What if included.
@@ -40,8 +41,9 @@ const RUNS = Number(arg("--runs", "30"));
 const TOP = Number(arg("--top", "40"));
 const SAVE = arg("--save");
 const MEMBER = arg("--member", "TD-1");
+const FIELD = arg("--field", "axial_kn");
 if (!URL_ARG || !["thousand", "edit", "edit-moments", "model-edit"].includes(CASE)) {
-  console.error("usage: node profile.mjs --url URL --case thousand|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID]");
+  console.error("usage: node profile.mjs --url URL --case thousand|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID] [--field NAME]");
   process.exit(2);
 }
 
@@ -118,7 +120,7 @@ try {
   } else {
     await openForEditing(page, URL_ARG);
     await cdp.send("Profiler.start");
-    const r = await page.evaluate(editLoop, RUNS);
+    const r = await page.evaluate(editLoop, { n: RUNS, field: FIELD });
     const med = (xs) => [...xs].sort((a, b) => a - b)[Math.floor(xs.length / 2)];
     note = `${r.dom.length} edits under the profiler: DOM median ${med(r.dom).toFixed(2)} ms, next frame median ${med(r.frame).toFixed(2)} ms`;
   }

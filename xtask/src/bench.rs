@@ -62,6 +62,16 @@ pub fn run(args: &[String]) -> Result<()> {
             "10k_mixed_members_prepared_without_working",
             "the same without working, members prepared once (section, material)",
         ),
+        // The batch form: one check::Scratch reused from member to member,
+        // no result allocated (sizing and the envelope check this way).
+        (
+            "10k_mixed_members_brief",
+            "the same without working, through one reused Scratch (from the member as written)",
+        ),
+        (
+            "10k_mixed_members_prepared_brief",
+            "the same without working, through one reused Scratch, members prepared once",
+        ),
     ] {
         let ns = criterion_mean_ns(&root.join("target/criterion/check").join(dir))?;
         figures.push(Figure {

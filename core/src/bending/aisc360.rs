@@ -35,7 +35,7 @@ use super::{c_b, diagram_is_segment, moments, push_diagram, Axis, AxisBending, B
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::LoadLevel;
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once_text};
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::{IMake, SectionSpec};
@@ -85,11 +85,12 @@ fn moment_factor(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warnin
         return 1.0;
     }
     if input.member.load_level == LoadLevel::CompressionFlange && m.span_knm != 0.0 {
-        warn_once(warnings, "cb-top-flange", || {
+        warn_once_text(
+            warnings,
+            "cb-top-flange",
             "bending: the load acts on the compression flange; C_b is taken as 1.0 (AISC 360-16 \
-             Commentary F1 notes the lower strength of top-flange loading)"
-                .into()
-        });
+             Commentary F1 notes the lower strength of top-flange loading)",
+        );
         step!(
             trace,
             s,
@@ -639,9 +640,7 @@ fn axis(
                             "AISC 360-16 Eq. F2-1 to F2-3"
                         );
                         if channel {
-                            warn_once(warnings, "channel-load-through-web", || {
-                                "bending: the channel is assumed loaded through its shear centre or braced against twist; a load through the web twists it, which is not checked".into()
-                            });
+                            warn_once_text(warnings, "channel-load-through-web", "bending: the channel is assumed loaded through its shear centre or braced against twist; a load through the web twists it, which is not checked");
                         }
                         (mn.min(ltb), Some(mcr), ltb / mp, true)
                     }
@@ -696,9 +695,7 @@ fn axis(
                 "-",
                 "AISC 360-16 Table B4.1b case 19"
             );
-            warn_once(warnings, "hss-design-wall", || {
-                "bending: the wall of a typed hollow section is used as its design wall thickness (the catalogue applies 0.93 t_nom to ERW HSS, AISC 360-16 B4.2)".into()
-            });
+            warn_once_text(warnings, "hss-design-wall", "bending: the wall of a typed hollow section is used as its design wall thickness (the catalogue applies 0.93 t_nom to ERW HSS, AISC 360-16 B4.2)");
             let mp = fy * zx;
             step!(
                 trace,
@@ -921,9 +918,7 @@ fn axis(
                     reason: "lateral-torsional buckling under AISC 360-16 Chapter F needs the section's shape; describe the section by its dimensions, or set lt_restrained if the compression flange is held continuously".into(),
                 });
             }
-            warn_once(warnings, "given-local-buckling", || {
-                "bending: the given section's local buckling is not checked; its strength is taken as F_y S (first yield)".into()
-            });
+            warn_once_text(warnings, "given-local-buckling", "bending: the given section's local buckling is not checked; its strength is taken as F_y S (first yield)");
             let mn = fy * w;
             step!(
                 trace,
@@ -950,6 +945,7 @@ fn axis(
         reduction: reduction.min(1.0),
         moment_factor: if cb_used { Some(cb) } else { None },
         demand_knm: demand,
+        kept: super::Kept::None,
         by_sign: None,
     })
 }

@@ -51,7 +51,7 @@ use super::{
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::LoadLevel;
-use crate::method::common::warn_once;
+use crate::method::common::warn_once_text;
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::{Angle, Properties, SectionSpec};
@@ -118,15 +118,12 @@ pub(super) fn check(
     };
     let m = input.member;
     if !m.moments_major().is_zero() || !m.moments_minor().is_zero() {
-        warn_once(warnings, "angle-moment-sign", || {
-            "bending: for a single angle (heel at the lower left, leg depth_mm upright) a positive \
+        warn_once_text(warnings, "angle-moment-sign", "bending: for a single angle (heel at the lower left, leg depth_mm upright) a positive \
              moment about the major principal axis is read as compressing the toe of the leg \
              depth_mm, a negative one the toe of the leg width_mm; a positive moment about the \
              minor principal axis compresses both toes (heel in tension), a negative one the heel \
              (AISC 360-16 F10); check the sign of the moments. Moments are about the principal \
-             axes: the geometric-axis rules of F10 are not applied"
-                .into()
-        });
+             axes: the geometric-axis rules of F10 are not applied");
     }
     Ok(Bending {
         major: axis(input, a, steel, basis, Axis::Major, trace)?,
@@ -445,6 +442,7 @@ fn axis(
         reduction: reduction.min(1.0),
         moment_factor: cb_used,
         demand_knm: demand,
+        kept: super::Kept::None,
         by_sign: Some(BySign {
             positive_knm: r_plus,
             negative_knm: r_minus,

@@ -33,7 +33,7 @@ use super::aisc360::{available, between, Basis};
 use super::{moments, push_diagram, signed_extremes, Axis, AxisBending, Bending};
 use crate::error::Result;
 use crate::material::Steel;
-use crate::method::common::warn_once;
+use crate::method::common::warn_once_text;
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::{Flanged, SectionSpec};
@@ -335,6 +335,7 @@ fn in_plane(
         reduction: reduction.min(1.0),
         moment_factor: None,
         demand_knm: demand,
+        kept: super::Kept::None,
         by_sign: Some(super::BySign {
             positive_knm: r_t,
             negative_knm: r_c,
@@ -357,12 +358,13 @@ fn symmetry_axis(
     let m = moments(input, axis);
     let demand = push_diagram(trace, axis, &m);
     if demand != 0.0 {
-        warn_once(warnings, "tee-symmetry-axis-f6", || {
+        warn_once_text(
+            warnings,
+            "tee-symmetry-axis-f6",
             "bending: AISC 360-16 F9 covers a tee bent in its plane of symmetry only; about its \
              axis of symmetry the rules of F6 (an I bent about its minor axis) are applied to its \
-             flange, an assumption to verify"
-                .into()
-        });
+             flange, an assumption to verify",
+        );
     }
     let (e, fy) = (steel.e_mpa, steel.fy_mpa);
     let root = (e / fy).sqrt();
@@ -405,6 +407,7 @@ fn symmetry_axis(
         reduction: 1.0,
         moment_factor: None,
         demand_knm: demand,
+        kept: super::Kept::None,
         by_sign: None,
     })
 }

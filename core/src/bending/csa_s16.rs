@@ -37,7 +37,7 @@ use super::{
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::LoadLevel;
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once_text};
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::SectionSpec;
@@ -312,6 +312,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            kept: super::Kept::Class(class),
             by_sign: None,
         });
     }
@@ -322,18 +323,14 @@ fn axis(
         });
     }
     if input.section.spec_is_channel() {
-        warn_once(warnings, "channel-ltb-assumed", || {
-            "bending: the channel's critical moment is worked with the doubly symmetric formula and its own J and C_w, ignoring the offset of its shear centre (common practice for channels loaded through the shear centre); a load through the web twists it, which is not checked".into()
-        });
+        warn_once_text(warnings, "channel-ltb-assumed", "bending: the channel's critical moment is worked with the doubly symmetric formula and its own J and C_w, ignoring the offset of its shear centre (common practice for channels loaded through the shear centre); a load through the web twists it, which is not checked");
     }
     let mut l = input.member.lt_length_mm()?;
     let destabilising =
         input.member.load_level == LoadLevel::CompressionFlange && m.span_knm != 0.0;
     let w2 = if destabilising {
         l *= 1.2;
-        warn_once(warnings, "csa-top-flange", || {
-            "bending: the load acts on the compression flange; omega_2 = 1.0 and the unbraced length is taken 1.2 L (CSA S16-19 13.6, recalled from memory)".into()
-        });
+        warn_once_text(warnings, "csa-top-flange", "bending: the load acts on the compression flange; omega_2 = 1.0 and the unbraced length is taken 1.2 L (CSA S16-19 13.6, recalled from memory)");
         step!(
             trace,
             s,
@@ -397,12 +394,13 @@ fn axis(
             "kNm",
             "CSA S16-19 13.6(e) (recalled from memory)"
         );
-        warn_once(warnings, "tee-ltb-assumed", || {
+        warn_once_text(
+            warnings,
+            "tee-ltb-assumed",
             "bending: the tee's critical moment is worked by CSA S16-19 13.6(e) for monosymmetric \
              sections with beta_x from its definition (2 z_j of the flange and stem plates) and \
-             the flange compressed; a compressed stem is refused"
-                .into()
-        });
+             the flange compressed; a compressed stem is refused",
+        );
         mu
     } else {
         let mu = w2 * pi / l * (e * iy * g * j + (pi * e / l).powi(2) * iy * cw).sqrt();
@@ -433,6 +431,7 @@ fn axis(
         reduction: mr / (PHI * mp),
         moment_factor: Some(w2),
         demand_knm: demand,
+        kept: super::Kept::Class(class),
         by_sign: None,
     })
 }

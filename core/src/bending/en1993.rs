@@ -39,7 +39,7 @@ use super::{
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::SpanLoad;
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once_text};
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::{IMake, SectionSpec};
@@ -308,12 +308,13 @@ pub(super) fn moment_factors(
         // 0.972 for a uniform load, 0.712 for a uniform load between fixed
         // ends, recalled from memory): the lowest value is taken.
         if input.member.k_lt < 0.5 {
-            warn_once(warnings, "c1-below-table", || {
+            warn_once_text(
+                warnings,
+                "c1-below-table",
                 "bending: k_lt is below 0.5, beyond the moment-factor tables (k = 1 and 0.5); \
                  C1 is taken as their lowest value, 0.712, which may still overstate M_cr: \
-                 check the elastic critical moment by analysis"
-                    .into()
-            });
+                 check the elastic critical moment by analysis",
+            );
         }
         return super::CFactors {
             c1: c.c1.min(super::C1_RESTRAINED_SPAN),
@@ -423,6 +424,7 @@ fn axis(
             reduction: 1.0,
             moment_factor: None,
             demand_knm: demand,
+            kept: super::Kept::Class(class),
             by_sign: None,
         });
     }
@@ -463,21 +465,23 @@ fn axis(
     );
     push_c_factors(trace, &c, zg);
     if let SectionSpec::Tee(_) = input.section.spec {
-        warn_once(warnings, "tee-symmetry-axis-ltb", || {
+        warn_once_text(
+            warnings,
+            "tee-symmetry-axis-ltb",
             "bending: the tee is bent about its axis of symmetry, its major principal axis; its \
              elastic critical moment is worked with the doubly symmetric formula (z_j = 0 by \
-             symmetry), its own I_t and I_w, and curve d: common practice, to verify"
-                .into()
-        });
+             symmetry), its own I_t and I_w, and curve d: common practice, to verify",
+        );
     }
     if input.section.spec_is_channel() {
-        warn_once(warnings, "channel-ltb-assumed", || {
+        warn_once_text(
+            warnings,
+            "channel-ltb-assumed",
             "bending: the channel's elastic critical moment is worked with the doubly symmetric \
              formula and its own I_t and I_w, ignoring the offset of its shear centre (common \
              practice for channels loaded through the shear centre); a load applied through the \
-             web twists the channel, which is not checked"
-                .into()
-        });
+             web twists the channel, which is not checked",
+        );
     }
     // k_lt is the factor on the length already in L_LT; the formula's k on
     // I_w stays k_lt (k_w = 1).
@@ -693,6 +697,7 @@ fn axis(
         reduction: chi,
         moment_factor: Some(c.c1),
         demand_knm: demand,
+        kept: super::Kept::Class(class),
         by_sign: None,
     })
 }

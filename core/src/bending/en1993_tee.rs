@@ -62,7 +62,7 @@ use super::{moments, push_diagram, signed_extremes, Axis, AxisBending, CSource, 
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::LoadLevel;
-use crate::method::common::warn_once;
+use crate::method::common::warn_once_text;
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::Flanged;
@@ -450,6 +450,7 @@ pub(super) fn axis(
         demand_knm: if demand == 0.0 { 0.0 } else { demand_sign },
         // A sign that is Class 4 has no resistance here (a moment of that
         // sign was refused above): 0, so nothing can read it as a capacity.
+        kept: super::Kept::None,
         by_sign: Some(super::BySign {
             positive_knm: plus.as_ref().map_or(0.0, |a| a.resistance),
             negative_knm: minus.as_ref().map_or(0.0, |b| b.resistance),
@@ -479,15 +480,16 @@ fn critical_moments(
         input.member.k_lt
     };
     let c = super::en1993::moment_factors(input, m, warnings);
-    warn_once(warnings, "tee-ltb-assumed", || {
+    warn_once_text(
+        warnings,
+        "tee-ltb-assumed",
         "bending: EN 1993-1-1 gives no elastic critical moment for a tee; M_cr is worked by the \
          three-factor formula for monosymmetric sections (ENV 1993-1-1 Annex F) with z_j of the \
          plates: where the stem is compressed anywhere, uniform moment with the stem compressed \
          (C1 = C3 = 1) for both signs; with the flange compressed, the Wagner term is credited \
          under uniform moment and end moments only, not under transverse load, and a load below \
-         the shear centre is not credited; curve d of 6.3.2.2"
-            .into()
-    });
+         the shear centre is not credited; curve d of 6.3.2.2",
+    );
     step!(
         trace,
         s,

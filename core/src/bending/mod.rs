@@ -56,11 +56,49 @@ pub struct AxisBending {
     /// The largest design moment along the member about this axis, kNm.
     #[serde(skip)]
     pub demand_knm: f64,
+    /// What the bending check worked that the beam-column interaction
+    /// reads again instead of working it afresh ([`Kept`]).
+    #[serde(skip)]
+    pub kept: Kept,
     /// The design resistance to a positive and to a negative moment, where
     /// they differ (tees in their plane of symmetry, single angles: AISC
     /// 360-16 F9, F10); `None` where the sign does not matter.
     #[serde(skip)]
     pub by_sign: Option<BySign>,
+}
+
+/// What the bending check of an axis worked that the beam-column
+/// interaction reads again (one value, kept small: a bending result is
+/// copied a few times a check).
+#[derive(Debug, Clone, Copy, PartialEq, Default)]
+pub enum Kept {
+    /// Nothing.
+    #[default]
+    None,
+    /// The section's class in bending alone about this axis (EN 1993-1-1
+    /// Table 5.2, CSA S16-19 Table 2), read beside the class in compression.
+    Class(u8),
+    /// The design bending strength the resistance is worked from, MPa
+    /// (EN 1995-1-1 f_m,d = k_mod k_h f_m,k / gamma_M).
+    Strength(f64),
+}
+
+impl Kept {
+    /// The class, where one was kept.
+    pub fn class(self) -> Option<u8> {
+        match self {
+            Kept::Class(c) => Some(c),
+            _ => None,
+        }
+    }
+
+    /// The design bending strength, MPa, where one was kept.
+    pub fn strength_mpa(self) -> Option<f64> {
+        match self {
+            Kept::Strength(f) => Some(f),
+            _ => None,
+        }
+    }
 }
 
 /// A design resistance that depends on the sign of the moment (the member
@@ -142,9 +180,11 @@ pub fn check(
     warnings: &mut Vec<Warning>,
 ) -> Result<Option<Bending>> {
     let m = input.member;
-    let Some(key) = m.first_moment_key() else {
+    if !m.has_moments() {
         return Ok(None);
-    };
+    }
+    // The key named by a refusal (only looked for when one is given).
+    let key = || m.first_moment_key().unwrap_or("m_major_a_knm");
     if method == Method::Secant {
         // Equal end moments are the load's eccentricity in the secant
         // formula (counted there, not again as bending); others refused.
@@ -154,6 +194,7 @@ pub fn check(
     refuse_unsupported(method, input, key)?;
     let major_props_geometric = input.section.props.principal_angle_rad == 0.0;
     if matches!(input.section.family, Family::I | Family::Channel) && !major_props_geometric {
+        let key = key();
         return Err(Error::NotApplicable {
             method: method.key(),
             reason: format!(
@@ -175,7 +216,7 @@ pub fn check(
         Method::CsaS16 => csa_s16::check(input, trace, warnings)?,
         Method::En1995 => en1995::check(input, trace, warnings)?,
         Method::Euler | Method::PerryRobertson | Method::Secant => {
-            return Err(no_rule(method, key));
+            return Err(no_rule(method, key()));
         }
     };
     Ok(Some(bending))
@@ -193,12 +234,16 @@ fn no_rule(method: Method, key: &'static str) -> Error {
     }
 }
 
-fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> Result<()> {
+fn refuse_unsupported(
+    method: Method,
+    input: &Input<'_>,
+    key: impl Fn() -> &'static str,
+) -> Result<()> {
     if matches!(
         method,
         Method::Euler | Method::PerryRobertson | Method::Secant
     ) {
-        return Err(no_rule(method, key));
+        return Err(no_rule(method, key()));
     }
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     let what = match input.section.family {
@@ -210,7 +255,7 @@ fn refuse_unsupported(method: Method, input: &Input<'_>, key: &'static str) -> R
     };
     Err(Error::NotApplicable {
         method: method.key(),
-        reason: format!("{key}: bending of {what}; check this member by hand"),
+        reason: format!("{}: bending of {what}; check this member by hand", key()),
     })
 }
 

@@ -15,7 +15,7 @@
 //! 2 z_j with the flange compressed.
 
 use super::Axis;
-use crate::method::common::warn_once;
+use crate::method::common::warn_once_text;
 use crate::method::Input;
 use crate::outcome::Warning;
 use crate::section::{Flanged, Properties};
@@ -113,12 +113,13 @@ pub(super) fn in_plane(input: &Input<'_>, major: bool) -> bool {
 
 /// Warns how the sign of a tee's moment is read.
 pub(super) fn warn_sign(warnings: &mut Vec<Warning>) {
-    warn_once(warnings, "tee-moment-sign", || {
+    warn_once_text(
+        warnings,
+        "tee-moment-sign",
         "bending: a positive moment about the tee's axis parallel to its flange is read as \
          compressing the flange (stem in tension), a negative one as compressing the stem; \
-         check the sign of the moments"
-            .into()
-    });
+         check the sign of the moments",
+    );
 }
 
 /// The moment key to name for a sign of this axis: the first key whose

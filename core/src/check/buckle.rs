@@ -10,7 +10,7 @@ use crate::buckling::column::{Brace, Buckle, Column, Load, Part};
 use crate::buckling::memo;
 use crate::buckling::model::{BucklingModel, End};
 use crate::buckling::Axis;
-use crate::check::CheckResult;
+use crate::check::{CheckResult, Working};
 use crate::error::{Error, Result};
 use crate::member::Member;
 use crate::method::{Input, Method};
@@ -180,7 +180,13 @@ pub fn buckle_all(members: &[Member]) -> Result<BuckleReport> {
 /// it (pi sqrt(E I / (alpha_cr N))); the segment with the highest
 /// utilisation governs. The working opens with the analysis.
 pub fn check(input: &Input<'_>, method: Method) -> Result<CheckResult> {
-    checked(input, method, None)
+    check_as(input, method, Working::Kept)
+}
+
+/// [`check`] with or without the working (the segments' checks and the
+/// analysis' lines); the numbers are the same either way.
+pub fn check_as(input: &Input<'_>, method: Method, working: Working) -> Result<CheckResult> {
+    checked(input, method, None, working)
 }
 
 /// A member's analyses about both axes at its own length, kept for the
@@ -220,7 +226,7 @@ pub fn check_lengthened(
     base: &Lengthwise,
     s: f64,
 ) -> Result<CheckResult> {
-    checked(input, method, Some((base, s)))
+    checked(input, method, Some((base, s)), Working::Kept)
 }
 
 /// [`check`], each axis' analysis scaled from `scaled`'s where it scales
@@ -229,11 +235,12 @@ fn checked(
     input: &Input<'_>,
     method: Method,
     scaled: Option<(&Lengthwise, f64)>,
+    working: Working,
 ) -> Result<CheckResult> {
     let member = input.member;
     let wrap = |e: Error| e.in_member(&member.id);
     let Some(model) = &member.buckling_model else {
-        return crate::check::run(input, method);
+        return crate::check::evaluate(input, method, working);
     };
     let (_, modulus) = input.material.strength_and_modulus();
     let r = resolve(member, model, input.section, modulus).map_err(wrap)?;
@@ -252,7 +259,7 @@ fn checked(
     };
     let major = axis(Axis::Major)?;
     let minor = axis(Axis::Minor)?;
-    check_analysed(input, method, model, &r, &major, &minor)
+    check_analysed(input, method, model, &r, (&major, &minor), working)
 }
 
 /// The check of a member with a model given both axes' analyses.
@@ -261,8 +268,8 @@ fn check_analysed(
     method: Method,
     model: &BucklingModel,
     r: &Resolved,
-    major: &Buckle,
-    minor: &Buckle,
+    (major, minor): (&Buckle, &Buckle),
+    working: Working,
 ) -> Result<CheckResult> {
     let member = input.member;
     let wrap = |e: Error| e.in_member(&member.id);
@@ -293,7 +300,7 @@ fn check_analysed(
             section: &section,
             material: &material,
         };
-        let result = crate::check::run(&seg, method).map_err(key)?;
+        let result = crate::check::evaluate(&seg, method, working).map_err(key)?;
         for w in &result.warnings {
             if !warnings.iter().any(|x| x.code == w.code) {
                 warnings.push(w.clone());

@@ -30,10 +30,11 @@ pub struct Point {
 /// Samples the envelope of `prepared` for `method` about `mode`'s axis
 /// from slenderness `from` to `to` in `steps` intervals (`steps + 1` points).
 ///
-/// Each sample runs the whole check ([`check::evaluate`], without working) with that axis's
-/// buckling length set to `lambda * i`, so a Class 4 effective area, the
-/// AISC E7 reduction and every other part of the check shape the curve
-/// exactly as they shape the member's own result. Buckling lengths are
+/// Each sample runs the whole check ([`check::Scratch::check`], without
+/// working, one scratch for them all) with that axis's buckling length set
+/// to `lambda * i`, so a Class 4 effective area, the AISC E7 reduction and
+/// every other part of the check shape the curve exactly as they shape the
+/// member's own result. Buckling lengths are
 /// kept within the member file's range (1 mm to 10 km).
 pub fn sample(
     prepared: &Prepared,
@@ -64,6 +65,8 @@ pub fn sample(
     probe.frame_minor = None;
     probe.buckling_model = None;
     let mut out = Vec::with_capacity(steps + 1);
+    // One scratch for every sample: no result allocated for each.
+    let mut scratch = check::Scratch::new(check::Working::Skipped);
     for k in 0..=steps {
         let lambda = from + (to - from) * (k as f64) / (steps as f64);
         let lcr = (lambda * r).clamp(MIN_LENGTH_MM, MAX_LENGTH_MM);
@@ -76,7 +79,7 @@ pub fn sample(
             section,
             material: &prepared.material,
         };
-        let result = check::evaluate(&input, method, check::Working::Skipped)?;
+        let result = scratch.check(&input, method)?;
         let axis = result
             .modes
             .iter()

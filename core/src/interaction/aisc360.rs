@@ -52,7 +52,7 @@ use crate::bending::aisc360_angle as angle;
 use crate::bending::{moments, shape, Axis, AxisBending, Shape};
 use crate::error::Result;
 use crate::member::{Method, Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once, warn_once_text};
 use crate::outcome::Warning;
 use crate::section::{Family, SectionSpec};
 use crate::trace::{push, put, step, sym, symbol, Scope, Sym, Symbol, Trace};
@@ -590,12 +590,13 @@ pub fn check(
         "-",
         "AISC 360-16 Appendix 8.2.2 (outside the member check)"
     );
-    warn_once(warnings, "sway-not-amplified", || {
+    warn_once_text(
+        warnings,
+        "sway-not-amplified",
         "beam-column: the member's own second-order effect (B1) is worked here; the frame's sway \
          effect (P-Delta, B2 of AISC 360-16 Appendix 8.2.2) is not: the moments given must \
-         include it"
-            .into()
-    });
+         include it",
+    );
     let e = steel.e_mpa;
     let m_rx = required(ctx, Axis::Major, alpha, e, trace, warnings);
     let m_ry = required(ctx, Axis::Minor, alpha, e, trace, warnings);
@@ -621,12 +622,13 @@ pub fn check(
     }
     if family == Family::Given {
         let u = axial + bend;
-        warn_once(warnings, "given-h2", || {
+        warn_once_text(
+            warnings,
+            "given-h2",
             "beam-column: the given section's symmetry is not known, so AISC 360-16 H2-1 is used \
              with every stress ratio taken positive (the worst point of the section); this is \
-             never below H1-1a or H1-1b"
-                .into()
-        });
+             never below H1-1a or H1-1b",
+        );
         step!(
             trace,
             S,

@@ -55,7 +55,7 @@ use crate::bending::csa_s16::{class_of, classify, unsupported, PHI};
 use crate::bending::{given_modulus, moments, shape, Axis, Shape};
 use crate::error::{Error, Result};
 use crate::member::{Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once, warn_once_text};
 use crate::outcome::{Mode, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
@@ -477,9 +477,14 @@ pub fn check(
     );
     // The class under the combined load: the worse of both axes in
     // bending (Table 2) and of the web under the axial load.
-    let mut off = Trace::off();
-    let bending_class =
-        classify(input, fy, Axis::Major, &mut off).max(classify(input, fy, Axis::Minor, &mut off));
+    // The bending check's classes (the same Table 2 reading).
+    let in_bending = |axis: Axis, b: &crate::bending::AxisBending| {
+        b.kept
+            .class()
+            .unwrap_or_else(|| classify(input, fy, axis, &mut Trace::off()))
+    };
+    let bending_class = in_bending(Axis::Major, &ctx.bending.major)
+        .max(in_bending(Axis::Minor, &ctx.bending.minor));
     let class = web_class(ctx, fy, c_ratio, trace).map_or(bending_class, |w| w.max(bending_class));
     step!(
         trace,
@@ -500,12 +505,13 @@ pub fn check(
         });
     }
     let i_shaped = input.section.family == Family::I && class <= 2;
-    warn_once(warnings, "sway-not-amplified", || {
+    warn_once_text(
+        warnings,
+        "sway-not-amplified",
         "beam-column: the member's own second-order effect (U_1 of CSA S16-19 13.8.4) is worked \
          here; the frame's sway effect (P-Delta, U_2 of 8.4) is not: the moments given must \
-         include it"
-            .into()
-    });
+         include it",
+    );
     let x = axis_terms(ctx, Axis::Major, class, fy, e, trace, warnings)?;
     let y = axis_terms(ctx, Axis::Minor, class, fy, e, trace, warnings)?;
     // C_r: (a) lambda = 0; (b) C_rx for uniaxial strong-axis bending, else

@@ -46,7 +46,7 @@ use crate::bending::{self, en1993::class_in_bending, Axis};
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::{InteractionAnnex, Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once};
+use crate::method::common::{require_steel, warn_once, warn_once_text};
 use crate::outcome::{Mode, Warning};
 use crate::roots::{newton_bisect, Stop};
 use crate::section::{Family, SectionSpec};
@@ -246,6 +246,8 @@ struct Basis {
     n_cr_z: f64,
     chi_lt: f64,
     gamma_m1: f64,
+    /// [`Basis::ratios`], worked once.
+    terms: [f64; 4],
 }
 
 impl Basis {
@@ -295,8 +297,14 @@ impl Basis {
         );
         // The class under the combined actions (5.5.2(6)).
         let class_n = ctx.assessment.classified.map(|c| c.class);
-        let class_y = (m_y > 0.0).then(|| class_in_bending(input, steel, Axis::Major));
-        let class_z = (m_z > 0.0).then(|| class_in_bending(input, steel, Axis::Minor));
+        // The bending check's classes (the same Table 5.2 reading).
+        let in_bending = |axis: Axis, b: &bending::AxisBending| {
+            b.kept
+                .class()
+                .unwrap_or_else(|| class_in_bending(input, steel, axis))
+        };
+        let class_y = (m_y > 0.0).then(|| in_bending(Axis::Major, &ctx.bending.major));
+        let class_z = (m_z > 0.0).then(|| in_bending(Axis::Minor, &ctx.bending.minor));
         if let Some(c) = class_n {
             step!(
                 trace,
@@ -609,7 +617,7 @@ impl Basis {
                 "EN 1993-1-1 6.3.2.2, Eq. 6.56; 6.3.3(4)"
             );
         }
-        Ok(Basis {
+        let mut basis = Basis {
             n_ed,
             m_y,
             m_z,
@@ -629,7 +637,10 @@ impl Basis {
             n_cr_z: minor.critical_kn,
             chi_lt,
             gamma_m1,
-        })
+            terms: [0.0; 4],
+        };
+        basis.terms = basis.ratios();
+        Ok(basis)
     }
 
     /// The (6.61)/(6.62) terms N_Ed / (chi N_Rk / gamma_M1) for chi_y and
@@ -851,9 +862,15 @@ fn push_row(trace: &mut Trace, row: Row) {
 
 /// C_my, C_mz and C_mLT of Table B.3 with their working.
 fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Factors {
+    // Table B.3 read once per diagram: the major axis's value serves C_my
+    // and C_mLT.
+    let major = bending::moments(ctx.input, Axis::Major);
+    let major_cm = c_m(&major);
     let mut one = |axis: Axis, trace: &mut Trace| -> f64 {
-        let diagram = bending::moments(ctx.input, axis);
-        let (value, row) = c_m(&diagram);
+        let (value, row) = match axis {
+            Axis::Major => major_cm,
+            Axis::Minor => c_m(&bending::moments(ctx.input, axis)),
+        };
         if row == Row::NoMoment {
             return 1.0;
         }
@@ -866,13 +883,14 @@ fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
             Bracing::Unknown => 1.0,
         };
         if br == Bracing::Unknown {
-            warn_once(warnings, "moment-factor-assumed", || {
+            warn_once_text(
+                warnings,
+                "moment-factor-assumed",
                 "interaction: a buckling length shorter than the member may come from a brace \
                  within it, whose segment's moment diagram the member file does not hold; the \
                  equivalent uniform moment factor is taken as 1.0, the largest of EN 1993-1-1 \
-                 Table B.3 (use a frame, or k = 1 with the segment's own moments, to refine it)"
-                    .into()
-            });
+                 Table B.3 (use a frame, or k = 1 with the segment's own moments, to refine it)",
+            );
         }
         match (axis, br) {
             (Axis::Major, Bracing::Member) => step!(
@@ -961,11 +979,10 @@ fn factors_b(ctx: &Context<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) 
     let c_my = one(Axis::Major, trace);
     let c_mz = one(Axis::Minor, trace);
     // C_mLT: the diagram between lateral restraints.
-    let major = bending::moments(ctx.input, Axis::Major);
     let c_mlt = if major.is_zero() || ctx.bending.major.critical_knm.is_none() {
         1.0
     } else if bending::diagram_is_segment(ctx.input) {
-        let (c, _) = c_m(&major);
+        let (c, _) = major_cm;
         step!(
             trace,
             S,
@@ -1108,7 +1125,7 @@ pub fn k_factors_b(i: &AnnexBInput) -> KFactors {
 }
 
 fn annex_b(ctx: &Context<'_>, b: &Basis, cm: &Factors, trace: &mut Trace) -> (f64, f64) {
-    let [ny, nz, _, _] = b.ratios();
+    let [ny, nz, _, _] = b.terms;
     step!(
         trace,
         S,
@@ -1318,7 +1335,7 @@ fn annex_b(ctx: &Context<'_>, b: &Basis, cm: &Factors, trace: &mut Trace) -> (f6
 
 /// (6.61) and (6.62) from the k_ij, with their terms in the working.
 fn equations(b: &Basis, k: &KFactors, trace: &mut Trace) -> (f64, f64) {
-    let [ny, nz, my, mz] = b.ratios();
+    let [ny, nz, my, mz] = b.terms;
     let u61 = ny + k.yy * my + k.yz * mz;
     let u62 = nz + k.zy * my + k.zz * mz;
     step!(
@@ -1458,15 +1475,29 @@ pub fn deflection_eil2(m: &Moments) -> f64 {
                 .copied()
                 .unwrap_or(q)
         };
-        let mut cuts = [p, inside(0), inside(1), q];
-        cuts.sort_by(f64::total_cmp);
-        for w2 in cuts.windows(2) {
-            let (lo, hi) = match *w2 {
-                [lo, hi] => (lo, hi),
-                _ => continue,
+        // In order: both zeros lie in (p, q) or stand at q, so only their
+        // own order is open (neither is NaN or a signed zero).
+        let (r0, r1) = (inside(0), inside(1));
+        let cuts = if r1 < r0 {
+            [p, r1, r0, q]
+        } else {
+            [p, r0, r1, q]
+        };
+        // delta and delta' at each cut once (a cut inside ends one interval
+        // and starts the next).
+        let slopes = cuts.map(slope);
+        for d in cuts.map(delta) {
+            most = most.max(d.abs());
+        }
+        for i in 0..3 {
+            let (Some(&lo), Some(&hi), Some(&f_lo), Some(&f_hi)) = (
+                cuts.get(i),
+                cuts.get(i + 1),
+                slopes.get(i),
+                slopes.get(i + 1),
+            ) else {
+                continue;
             };
-            let (f_lo, f_hi) = (slope(lo), slope(hi));
-            most = most.max(delta(lo).abs()).max(delta(hi).abs());
             if f_lo * f_hi < 0.0 {
                 let sign = if f_lo < 0.0 { 1.0 } else { -1.0 };
                 let s = newton_bisect(
@@ -1690,7 +1721,15 @@ fn push_row_a(trace: &mut Trace, row: RowA) {
 /// C_mi,0 for an axis with its bracing rule and working.
 fn c_m0_axis(ctx: &Context<'_>, axis: Axis, n_ncr: f64, trace: &mut Trace) -> f64 {
     let diagram = bending::moments(ctx.input, axis);
-    let (value, row) = c_m0(&diagram, n_ncr);
+    let general = bending::shape(&diagram) == bending::Shape::Combined;
+    let (value, row) = if general && n_ncr == 0.0 && !trace.is_on() {
+        // Without axial load the general row is 1 + (ratio - 1) 0 = 1
+        // exactly whatever the (finite) deflection ratio: that ratio, the
+        // dearest term of the annex, is worked only for the working.
+        (1.0, RowA::General { ratio: 1.0 })
+    } else {
+        c_m0(&diagram, n_ncr)
+    };
     if row == RowA::NoMoment {
         return 1.0;
     }
@@ -2480,6 +2519,24 @@ mod tests {
             b_knm: b,
             span_knm: span,
             span_load: load,
+        }
+    }
+
+    #[test]
+    fn general_row_is_one_without_axial_load() {
+        // What c_m0_axis relies on when it skips the deflection without
+        // working: 1 + (ratio - 1) N_Ed/N_cr is exactly 1 at N_Ed = 0.
+        for (a, b, w, load) in [
+            (20.0, -10.0, 30.0, SpanLoad::Uniform),
+            (-3.0, 7.5, -12.0, SpanLoad::Point),
+            (1e-9, 0.0, 500.0, SpanLoad::Uniform),
+            (-400.0, -400.0, 1e-6, SpanLoad::Point),
+        ] {
+            let m = diagram(a, b, w, load);
+            assert_eq!(bending::shape(&m), bending::Shape::Combined);
+            let (c, row) = c_m0(&m, 0.0);
+            assert_eq!(c, 1.0, "{m:?}");
+            assert!(matches!(row, RowA::General { ratio } if ratio.is_finite()));
         }
     }
 

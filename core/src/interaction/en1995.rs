@@ -41,7 +41,7 @@ use super::{Check, Context};
 use crate::bending::en1995::strengths;
 use crate::bending::Axis;
 use crate::error::Result;
-use crate::method::common::{require_timber, warn_once};
+use crate::method::common::{require_timber, warn_once_text};
 use crate::method::en1995::design_strength;
 use crate::outcome::{Mode, Warning};
 use crate::section::SectionSpec;
@@ -118,12 +118,22 @@ pub fn check(
 ) -> Result<Option<Vec<Check>>> {
     let input = ctx.input;
     let t = require_timber(input, KEY)?;
-    let st = strengths(input)?;
     let (fc0d, _, _, _) = design_strength(input, t.kind, t.fc0k_mpa);
     let p = &input.section.props;
     let s = Scope::Interaction;
     let sigma_c = input.member.axial_kn * 1000.0 / p.area_mm2;
-    let (fmyd, fmzd) = (st.f_md(Axis::Major), st.f_md(Axis::Minor));
+    // The bending check's f_m,d about each axis (worked there from the
+    // same strengths; worked here only if it was not kept).
+    let (fmyd, fmzd) = match (
+        ctx.bending.major.kept.strength_mpa(),
+        ctx.bending.minor.kept.strength_mpa(),
+    ) {
+        (Some(y), Some(z)) => (y, z),
+        _ => {
+            let st = strengths(input)?;
+            (st.f_md(Axis::Major), st.f_md(Axis::Minor))
+        }
+    };
     let sigma_my = ctx.bending.major.demand_knm * 1e6 / p.w_el_major_mm3;
     let sigma_mz = ctx.bending.minor.demand_knm * 1e6 / p.w_el_minor_mm3;
     let rect = matches!(input.section.spec, SectionSpec::Rect(_));
@@ -336,11 +346,12 @@ pub fn check(
         crate::trace::push(trace, s, c.check, label, c.utilisation, "-", clause);
     }
     if terms.k_crit.is_some() && terms.major > 0.0 && terms.minor > 0.0 {
-        warn_once(warnings, "en1995-6-35-biaxial", || {
+        warn_once_text(
+            warnings,
+            "en1995-6-35-biaxial",
             "EN 1995-1-1 (6.35) has no minor-axis term; with a minor-axis moment the term \
-             sigma_m,z,d / f_m,z,d is added to it (conservative, no rule of the code)"
-                .to_string()
-        });
+             sigma_m,z,d / f_m,z,d is added to it (conservative, no rule of the code)",
+        );
     }
     Ok(Some(checks))
 }

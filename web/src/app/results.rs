@@ -17,22 +17,69 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
         ctx.checks.with(|c| c.0.get(sel).cloned())
     });
     let units = ctx.units;
-    // What if is worked after the frame that shows an edit: its reverse
-    // solves check the member many times (a length solve some fifty times,
-    // each with a buckling model's analysis where it does not scale
-    // exactly), which must not hold up the redraw of the verdict, the
-    // chart and the column model. The last answer stays, marked busy,
-    // until the new one is in.
-    let whatif = RwSignal::new(String::new());
-    let whatif_busy = RwSignal::new(false);
+    // The frame that shows an edit carries the check, the verdict and the
+    // chart; the working (with the section view) and What if are built in
+    // tasks after it. The working is some 1,100 elements whose parse and
+    // layout took most of an edit's frame (bench/web.md); What if's reverse
+    // solves check the member many times (a length solve some fifty
+    // times, each with a buckling model's analysis where it does not
+    // scale exactly). Each keeps its last content, marked busy, until the
+    // new one is in.
+    let (working, working_busy) = after_frame(current, units, |c, sys| {
+        let mut h = Html::new();
+        if let Some(r) = c.result() {
+            // The docked verdict leaves its warnings here.
+            html!(
+                h,
+                "<div class=\"dock-warnings\">{}</div>",
+                report::warnings_html(r)
+            );
+            h.push(&report::checks_html(r, sys));
+        }
+        h.push(&crate::sectionview::of_checked(c));
+        if let Some(r) = c.result() {
+            h.push(&report::working_html(r, sys));
+        }
+        h.into_string()
+    });
+    let (whatif, whatif_busy) = after_frame(current, units, |c, sys| {
+        c.prepared
+            .as_ref()
+            .map(|p| report::whatif_html(p, sys).into_string())
+            .unwrap_or_default()
+    });
+    view! {
+        <h2 id="h-results" class="pane-title">"Result"</h2>
+        <Chart ctx=ctx current=current>
+        <div class="working-block" data-testid="working-block" aria-busy=move || if working_busy.get() { "true" } else { "false" }
+            inner_html=move || working.get()></div>
+        <div class="whatif-block" data-testid="whatif-block" aria-busy=move || if whatif_busy.get() { "true" } else { "false" }
+            inner_html=move || whatif.get()></div>
+        </Chart>
+    }
+}
+
+/// A block of the result built in a task after the frame that shows a
+/// change of the member or the units, so it does not hold up that frame:
+/// its HTML (`make` of the member and the units; empty when no member is
+/// selected) and whether it is busy (its last content stands, out of date,
+/// until the new one is in). A later change before the task runs has its
+/// own turn; the task of the earlier one does nothing. The page is laid
+/// out in a task after the block is in ([`browser::lay_out_now`]).
+fn after_frame(
+    current: Memo<Option<Arc<Checked>>>,
+    units: RwSignal<UnitSystem>,
+    make: fn(&Checked, UnitSystem) -> String,
+) -> (RwSignal<String>, RwSignal<bool>) {
+    let html = RwSignal::new(String::new());
+    let busy = RwSignal::new(false);
     Effect::new(move |_| {
         let c = current.get();
         let sys = units.get();
-        whatif_busy.set(true);
+        busy.set(true);
         request_animation_frame(move || {
             set_timeout(
                 move || {
-                    // A later edit or member has its own turn.
                     let now = current.try_get_untracked().flatten();
                     let same = match (&now, &c) {
                         (Some(a), Some(b)) => Arc::ptr_eq(a, b),
@@ -42,41 +89,18 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
                     if !same || units.try_get_untracked() != Some(sys) {
                         return;
                     }
-                    let h = c
-                        .as_ref()
-                        .and_then(|c| c.prepared.as_ref())
-                        .map(|p| report::whatif_html(p, sys).into_string())
-                        .unwrap_or_default();
-                    whatif.try_set(h);
-                    whatif_busy.try_set(false);
+                    html.try_set(c.as_deref().map(|c| make(c, sys)).unwrap_or_default());
+                    busy.try_set(false);
+                    // Laid out in a task of its own once it is in, not
+                    // in the frame of an edit that comes before the next
+                    // frame.
+                    set_timeout(browser::lay_out_now, std::time::Duration::ZERO);
                 },
                 std::time::Duration::ZERO,
             )
         });
     });
-    view! {
-        <h2 id="h-results" class="pane-title">"Result"</h2>
-        <Chart ctx=ctx current=current>
-        <div class="working-block" inner_html=move || {
-            let sys = units.get();
-            current.get().map(|c| {
-                let mut h = Html::new();
-                if let Some(r) = c.result() {
-                    // The docked verdict leaves its warnings here.
-                    html!(h, "<div class=\"dock-warnings\">{}</div>", report::warnings_html(r));
-                    h.push(&report::checks_html(r, sys));
-                }
-                h.push(&crate::sectionview::of_checked(&c));
-                if let Some(r) = c.result() {
-                    h.push(&report::working_html(r, sys));
-                }
-                h.into_string()
-            }).unwrap_or_default()
-        }></div>
-        <div class="whatif-block" data-testid="whatif-block" aria-busy=move || if whatif_busy.get() { "true" } else { "false" }
-            inner_html=move || whatif.get()></div>
-        </Chart>
-    }
+    (html, busy)
 }
 
 /// The selected member's id, its chart as a PNG data URL, the chart's
