@@ -17,7 +17,9 @@ use std::io::Write;
 use rayon::prelude::*;
 use serde::Serialize;
 use strutline_core::bending::Bending;
-use strutline_core::check::{check_member_as, CheckResult, ModeResult, Warning, Working};
+use strutline_core::check::{
+    check_member_as, CheckResult, ModeResult, SegmentOf, Warning, Working,
+};
 use strutline_core::interaction;
 use strutline_core::method::Method;
 use strutline_core::{Member, Mode, CAUTION};
@@ -55,6 +57,13 @@ pub struct Summary<'a> {
     pub utilisation: f64,
     /// Design resistance of the governing mode, kN.
     pub resistance_kn: f64,
+    /// The design compression the member was checked at, kN: its
+    /// `axial_kn`, or with a `buckling_model` the governing segment's
+    /// (see `CheckResult::axial_kn`).
+    pub axial_kn: f64,
+    /// With a `buckling_model`: the governing segment, of how many.
+    #[serde(skip_serializing_if = "Option::is_none")]
+    pub segment: Option<SegmentOf>,
     /// What governs: the governing mode's key, a bending check, or
     /// "combined-not-checked" (see `CheckResult::governing_check`).
     pub governing_check: &'static str,
@@ -79,6 +88,8 @@ impl<'a> From<&'a CheckResult> for Summary<'a> {
             passes: r.passes,
             utilisation: r.utilisation,
             resistance_kn: r.resistance_kn,
+            axial_kn: r.axial_kn,
+            segment: r.segment,
             governing_check: r.governing_check,
             governing: r.governing,
             modes: &r.modes,
@@ -100,7 +111,7 @@ pub fn write_summary(out: &mut Vec<u8>, r: &CheckResult) -> serde_json::Result<(
         serde_json::to_writer(&mut *out, &x)
     }
     out.extend_from_slice(b"{\"id\":");
-    serde_json::to_writer(&mut *out, r.id.as_str())?;
+    text(out, &r.id)?;
     out.extend_from_slice(b",\"method\":\"");
     out.extend_from_slice(r.method.key().as_bytes());
     out.extend_from_slice(b"\",\"passes\":");
@@ -109,8 +120,14 @@ pub fn write_summary(out: &mut Vec<u8>, r: &CheckResult) -> serde_json::Result<(
     number(out, r.utilisation)?;
     out.extend_from_slice(b",\"resistance_kn\":");
     number(out, r.resistance_kn)?;
+    out.extend_from_slice(b",\"axial_kn\":");
+    number(out, r.axial_kn)?;
+    if let Some(segment) = &r.segment {
+        out.extend_from_slice(b",\"segment\":");
+        serde_json::to_writer(&mut *out, segment)?;
+    }
     out.extend_from_slice(b",\"governing_check\":");
-    serde_json::to_writer(&mut *out, r.governing_check)?;
+    text(out, r.governing_check)?;
     out.extend_from_slice(b",\"governing\":\"");
     out.extend_from_slice(r.governing.key().as_bytes());
     out.extend_from_slice(b"\",\"modes\":[");
@@ -144,12 +161,35 @@ pub fn write_summary(out: &mut Vec<u8>, r: &CheckResult) -> serde_json::Result<(
             out.push(b',');
         }
         out.extend_from_slice(b"{\"code\":");
-        serde_json::to_writer(&mut *out, w.code)?;
+        text(out, w.code)?;
         out.extend_from_slice(b",\"message\":");
-        serde_json::to_writer(&mut *out, w.message.as_ref())?;
+        text(out, &w.message)?;
         out.push(b'}');
     }
     out.extend_from_slice(b"]}");
+    Ok(())
+}
+
+/// `s` as a JSON string, byte for byte as serde_json writes it: between
+/// quotes as it stands when it holds nothing serde_json escapes (a quote, a
+/// backslash, a control character), else by serde_json. The test looks at
+/// 16 bytes at a time without a branch a byte, which the compiler turns
+/// into vector instructions; serde_json's writer looks each byte up in its
+/// table of escapes (some 1,200 instructions a member, mostly the
+/// warnings' messages: callgrind, bench/cli.md).
+fn text(out: &mut Vec<u8>, s: &str) -> serde_json::Result<()> {
+    let escaped = |b: u8| b < 0x20 || b == b'"' || b == b'\\';
+    let plain = s
+        .as_bytes()
+        .chunks(16)
+        .all(|c| !c.iter().fold(false, |any, &b| any | escaped(b)));
+    if !plain {
+        return serde_json::to_writer(&mut *out, s);
+    }
+    out.reserve(s.len() + 2);
+    out.push(b'"');
+    out.extend_from_slice(s.as_bytes());
+    out.push(b'"');
     Ok(())
 }
 
@@ -198,25 +238,25 @@ impl Out {
     }
 }
 
-/// One member's text in the chosen form, or the message that stops the check.
+/// One member's text in the chosen form written into `text` (emptied
+/// first), and whether it passes, or the message that stops the check.
 /// The text is serde_json's (or [`write_summary`]'s) UTF-8, written out as
 /// it is.
-fn render(m: &Member, form: Form, working: bool) -> Result<(bool, Vec<u8>), String> {
+fn render(m: &Member, form: Form, working: bool, text: &mut Vec<u8>) -> Result<bool, String> {
     let kept = if working && form != Form::Table {
         Working::Kept
     } else {
         Working::Skipped
     };
     let r = check_member_as(m, kept).map_err(|e| e.to_string())?;
-    // Written into room for a typical summary, so the text is not regrown.
-    let mut text = Vec::with_capacity(if working { 8192 } else { 1024 });
+    text.clear();
     match form {
         Form::Table => Ok(()),
-        _ if working => serde_json::to_writer(&mut text, &r),
-        _ => write_summary(&mut text, &r),
+        _ if working => serde_json::to_writer(&mut *text, &r),
+        _ => write_summary(text, &r),
     }
     .map_err(|e| e.to_string())?;
-    Ok((r.passes, text))
+    Ok(r.passes)
 }
 
 /// Runs the subcommand.
@@ -237,14 +277,23 @@ pub fn run(args: &Args) -> Result<i32, String> {
     let mut over = 0usize;
     let mut count = 0usize;
     let mut table = Table::default();
+    // A block's texts and outcomes, kept from block to block: one vector a
+    // member made on a checking thread and freed on this one made glibc's
+    // malloc give its heaps back to the system and take them again (some
+    // 26,000 page faults for 100,000 members, `perf stat`; bench/cli.md).
+    let mut texts: Vec<Vec<u8>> = Vec::new();
+    let mut outcomes: Vec<Result<bool, String>> = Vec::new();
     let read = crate::input::members(path, |title, block| {
-        let texts: Vec<Result<(bool, Vec<u8>), String>> = match form {
-            Form::Table => Vec::new(),
-            _ => block
+        if form != Form::Table {
+            if texts.len() < block.len() {
+                texts.resize_with(block.len(), || Vec::with_capacity(1024));
+            }
+            block
                 .par_iter()
-                .map(|m| render(m, form, args.working))
-                .collect(),
-        };
+                .zip(texts.par_iter_mut())
+                .map(|(m, text)| render(m, form, args.working, text))
+                .collect_into_vec(&mut outcomes);
+        }
         match form {
             Form::Table => {
                 let results: Vec<Result<CheckResult, String>> = block
@@ -258,17 +307,17 @@ pub fn run(args: &Args) -> Result<i32, String> {
                     ok.push(r);
                 }
                 if count == 0 {
-                    table.widths(&block, &ok);
+                    table.widths(block, &ok);
                     if !title.is_empty() {
                         out.put(&format!("{title}\n"))?;
                     }
                     out.put(&table.header())?;
                 }
-                out.put(&table.rows(&block, &ok))?;
+                out.put(&table.rows(block, &ok))?;
             }
             Form::Json | Form::Lines => {
-                for (i, t) in texts.into_iter().enumerate() {
-                    let (passes, text) = t.map_err(|e| format!("{path}: {e}"))?;
+                for (i, (outcome, text)) in outcomes.iter().zip(&texts).enumerate() {
+                    let passes = *outcome.as_ref().map_err(|e| format!("{path}: {e}"))?;
                     over += usize::from(!passes);
                     let lead = match (form, count + i) {
                         (Form::Json, 0) => "{\"results\": [\n",
@@ -276,7 +325,7 @@ pub fn run(args: &Args) -> Result<i32, String> {
                         _ => "",
                     };
                     out.put(lead)?;
-                    out.put_bytes(&text)?;
+                    out.put_bytes(text)?;
                     if form == Form::Lines {
                         out.put("\n")?;
                     }
@@ -401,6 +450,36 @@ mod tests {
     /// buckling model, warnings) under every method, and each with a load
     /// its resistance cannot meet: the hand-written summary is serde_json's
     /// byte for byte.
+    #[test]
+    fn texts_are_written_as_serde_json_writes_them() {
+        let mut all = String::new();
+        for c in (0u32..0x80).chain([0xe9, 0x2028, 0x1f600]) {
+            all.push(char::from_u32(c).unwrap());
+        }
+        let mut tried = 0;
+        for s in [
+            "",
+            "C1",
+            "flexural-major",
+            "a \"quoted\" id",
+            "back\\slash",
+            "tab\there",
+            "Stütze 7 – Achse B",
+            &"x".repeat(40),
+            &format!("{}\n", "y".repeat(31)),
+            &all,
+        ] {
+            for cut in 0..=s.len() {
+                let Some(s) = s.get(cut..) else { continue };
+                let mut ours = Vec::new();
+                text(&mut ours, s).unwrap();
+                assert_eq!(ours, serde_json::to_vec(s).unwrap(), "{s:?}");
+                tried += 1;
+            }
+        }
+        assert!(tried > 200, "{tried}");
+    }
+
     #[test]
     fn the_summary_written_by_hand_is_serde_jsons() {
         let mut compared = 0;

@@ -119,7 +119,7 @@ fn streamed(args: &Args, out_format: Format, system: UnitSystem) -> Result<i32, 
     let mut lost: Vec<String> = Vec::new();
     let read = members_with(input, OnProblems::Skip(&mut problems), |_, block| {
         if out_format == Format::Csv {
-            for m in &block {
+            for m in block.iter() {
                 for key in csv::cells(m).keys() {
                     if !used.contains(key) {
                         used.push(key.clone());
@@ -127,10 +127,11 @@ fn streamed(args: &Args, out_format: Format, system: UnitSystem) -> Result<i32, 
                 }
             }
             let list = file::MemberFile {
-                members: block,
+                members: std::mem::take(block),
                 ..file::MemberFile::new("")
             };
             lost.extend(csv::left_out(&list));
+            *block = list.members;
         }
         Ok(())
     });
@@ -163,7 +164,7 @@ fn streamed(args: &Args, out_format: Format, system: UnitSystem) -> Result<i32, 
     let mut written = 0usize;
     let mut again = Vec::new();
     let wrote = members_with(input, OnProblems::Skip(&mut again), |_, block| {
-        for m in &block {
+        for m in block.iter() {
             match out_format {
                 Format::Csv => layout.push_row(&csv::cells(m), &mut text),
                 Format::Json => json_member(m, written == 0, &mut text),

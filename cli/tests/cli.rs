@@ -254,6 +254,36 @@ fn list_file(name: &str, n: usize, edit: impl Fn(usize, String) -> String) -> Pa
     path
 }
 
+/// A member with a buckling model is checked at its governing segment's
+/// compression: the summary says which segment and at what N_Ed, as the
+/// full result does.
+#[test]
+fn the_summary_of_a_modelled_member_names_its_segment_and_its_compression() {
+    let hall = PathBuf::from(env!("CARGO_MANIFEST_DIR"))
+        .join("../examples/tarnbeck-crane-hall.json")
+        .to_str()
+        .unwrap()
+        .to_string();
+    let read = |extra: &[&str]| {
+        let mut args = vec!["check", hall.as_str(), "--json"];
+        args.extend(extra);
+        let (code, text, err) = run(&args);
+        assert!(matches!(code, Some(0 | 1)), "{err}");
+        let doc: serde_json::Value = serde_json::from_str(&text).unwrap();
+        doc["results"].as_array().unwrap().clone()
+    };
+    let (summaries, full) = (read(&[]), read(&["--working"]));
+    let k1 = summaries.iter().find(|r| r["id"] == "K1").unwrap();
+    let k1_full = full.iter().find(|r| r["id"] == "K1").unwrap();
+    assert_eq!(k1["segment"], k1_full["segment"]);
+    assert!(k1["segment"]["index"].as_u64().unwrap() >= 1, "{k1}");
+    assert_eq!(k1["axial_kn"], k1_full["axial_kn"]);
+    assert!(k1["axial_kn"].as_f64().unwrap() > 0.0, "{k1}");
+    let w2 = summaries.iter().find(|r| r["id"] == "W2").unwrap();
+    assert_eq!(w2["axial_kn"], 380.0);
+    assert!(w2.get("segment").is_none(), "{w2}");
+}
+
 #[test]
 fn json_and_json_lines_carry_each_members_summary_in_order() {
     let path = list_file("order", 9000, |_, m| m);
@@ -279,6 +309,14 @@ fn json_and_json_lines_carry_each_members_summary_in_order() {
         assert!(first.get(key).is_some(), "{key} missing: {first}");
     }
     assert!(first.get("trace").is_none());
+    // Without a buckling model, checked at the member's own axial_kn.
+    let given: serde_json::Value =
+        serde_json::from_str(&std::fs::read_to_string(example()).unwrap()).unwrap();
+    assert_eq!(
+        first["axial_kn"].as_f64(),
+        given["members"][0]["axial_kn"].as_f64()
+    );
+    assert!(first.get("segment").is_none());
     assert!(doc["caution"].as_str().unwrap().contains("checking aid"));
     let (code, lines, _) = run(&["check", p, "--jsonl"]);
     assert_eq!(code, Some(0));

@@ -79,12 +79,21 @@ impl<X: fmt::Display> fmt::Display for Stop<X> {
 /// read from the buffer by serde_json as a slice ([`member_from_str`]).
 /// serde_json reading the whole file from an `io::Read` instead took some
 /// 16,000 instructions a member only to capture each member's raw text.
-pub fn members<R, F, X>(reader: R, mut each: F) -> Result<Head, Stop<X>>
+pub fn members<R, F, X>(reader: R, each: F) -> Result<Head, Stop<X>>
 where
     R: Read,
     F: FnMut(&Head, Member) -> Result<(), X>,
 {
-    let mut scan = Scan::new(reader);
+    read_members(Scan::new(reader), each)
+}
+
+/// [`members`] from a [`Scan`] (the tests' reads each member by its extent,
+/// to hold the two ways of [`Scan::member`] to the same answers).
+fn read_members<R, F, X>(mut scan: Scan<R>, mut each: F) -> Result<Head, Stop<X>>
+where
+    R: Read,
+    F: FnMut(&Head, Member) -> Result<(), X>,
+{
     let mut head = Head::default();
     let mut format_seen = false;
     let mut members_seen = false;
@@ -117,10 +126,10 @@ where
             scan.expect_start(b'[', "the \"members\" list")
                 .map_err(Stop::Bad)?;
             let mut first_member = true;
-            while let Some(text) = scan.element(first_member).map_err(Stop::Bad)? {
+            while scan.next_entry(first_member, b']').map_err(Stop::Bad)? {
                 first_member = false;
                 let index = head.count;
-                let member = member_from_str(text, index).map_err(Stop::Bad)?;
+                let member = scan.member(index).map_err(Stop::Bad)?;
                 if !ids.insert(&member.id) {
                     let e = Error::DuplicateId {
                         id: member.id.clone(),
@@ -179,12 +188,16 @@ pub fn member_from_str(raw: &str, index: usize) -> Result<Member, Error> {
         crate::file::member_from_value(&value, index)?;
     }
     // A number out of a double's range stops the value reader: where, and
-    // which member.
+    // which member. Sections are read by serde's derive alone here, which
+    // names such a fault before a wrong value earlier in the same section
+    // (`section::read`).
     let mut track = serde_path_to_error::Track::new();
     let mut de = serde_json::Deserializer::from_str(raw);
-    let outcome = <Member as serde::Deserialize>::deserialize(
-        serde_path_to_error::Deserializer::new(&mut de, &mut track),
-    );
+    let outcome = crate::section::read::in_derived_order(|| {
+        <Member as serde::Deserialize>::deserialize(serde_path_to_error::Deserializer::new(
+            &mut de, &mut track,
+        ))
+    });
     // The id alone, skipping every other value unparsed (so a number out
     // of range elsewhere does not hide it).
     #[derive(serde::Deserialize)]
@@ -313,6 +326,22 @@ fn syntax_at(e: &serde_json::Error, at: (usize, usize)) -> Error {
     }
 }
 
+/// How many line ends `bytes` holds: counted in byte-wide lanes, 255 bytes
+/// at a time, which the compiler turns into vector instructions (counting
+/// with `filter().count()` widened each byte to 64 bits: some 4
+/// instructions a byte of the file, 5% of a `check --json` run).
+fn line_ends(bytes: &[u8]) -> usize {
+    bytes
+        .chunks(255)
+        .map(|c| {
+            let n = c
+                .iter()
+                .fold(0u8, |n, &b| n.wrapping_add(u8::from(b == b'\n')));
+            usize::from(n)
+        })
+        .sum()
+}
+
 /// Bytes read from the file at a time.
 const CHUNK: usize = 1 << 16;
 
@@ -333,7 +362,16 @@ struct Scan<R> {
     /// (byte offsets in the file).
     dropped: usize,
     line_start: usize,
+    /// Bytes from a member's start that serde_json is given to read it
+    /// from: twice the last member's length, at least [`MIN_WINDOW`].
+    window: usize,
+    /// Members are read straight from the buffer where they can be (false:
+    /// always by their extent, the way every error is found).
+    straight: bool,
 }
+
+/// The least window of text a member is read from (see [`Scan::member`]).
+const MIN_WINDOW: usize = 256;
 
 impl<R: Read> Scan<R> {
     fn new(reader: R) -> Scan<R> {
@@ -345,6 +383,8 @@ impl<R: Read> Scan<R> {
             lines_dropped: 0,
             dropped: 0,
             line_start: 0,
+            window: MIN_WINDOW,
+            straight: true,
         }
     }
 
@@ -375,7 +415,7 @@ impl<R: Read> Scan<R> {
         }
         let gone = self.buf.get(..self.pos).unwrap_or_default();
         if let Some(last) = gone.iter().rposition(|&b| b == b'\n') {
-            self.lines_dropped += gone.iter().filter(|&&b| b == b'\n').count();
+            self.lines_dropped += line_ends(gone);
             self.line_start = self.dropped + last + 1;
         }
         self.dropped += self.pos;
@@ -397,7 +437,7 @@ impl<R: Read> Scan<R> {
     /// Line and column (1-based) of the byte at `i` of the buffer.
     fn place(&self, i: usize) -> (usize, usize) {
         let before = self.buf.get(..i).unwrap_or_default();
-        let lines = before.iter().filter(|&&b| b == b'\n').count();
+        let lines = line_ends(before);
         let column = match before.iter().rposition(|&b| b == b'\n') {
             Some(nl) => i - nl,
             None => self.dropped + i - self.line_start + 1,
@@ -539,13 +579,40 @@ impl<R: Read> Scan<R> {
         std::str::from_utf8(bytes).map_err(|_| self.error(start, "invalid unicode code point"))
     }
 
-    /// The text of the next entry of a list, or `None` at its end.
-    fn element(&mut self, first: bool) -> Result<Option<&str>, Error> {
-        if !self.next_entry(first, b']')? {
-            return Ok(None);
+    /// The member that starts at the next token (after [`Scan::next_entry`]
+    /// found one); `index` (0-based) names it when it has no id.
+    ///
+    /// serde_json reads it straight from the buffer, from a window of
+    /// [`Scan::window`] bytes checked to be UTF-8 (so that serde_json need
+    /// not check each text it reads again). Only when that fails (a bad
+    /// member, or one that goes past the window or the bytes at hand) is
+    /// its extent found by [`Scan::value_end`] and its text read by
+    /// [`member_from_str`], which gives every error. A member read straight
+    /// is the same member: the same deserializer on the same text, which
+    /// ends where the extent would (its closing brace). Finding the extent
+    /// first took some 3,800 instructions a member (callgrind,
+    /// `bench/cli.md`).
+    fn member(&mut self, index: usize) -> Result<Member, Error> {
+        self.drop_read();
+        if self.straight && self.next_token()?.is_some() {
+            let to = self.pos.saturating_add(self.window).min(self.buf.len());
+            let bytes = self.buf.get(self.pos..to).unwrap_or_default();
+            let text = match std::str::from_utf8(bytes) {
+                Ok(text) => text,
+                Err(e) => std::str::from_utf8(bytes.get(..e.valid_up_to()).unwrap_or_default())
+                    .unwrap_or_default(),
+            };
+            let mut one = serde_json::Deserializer::from_str(text).into_iter::<Member>();
+            if let Some(Ok(member)) = one.next() {
+                let used = one.byte_offset();
+                self.pos += used;
+                self.window = (2 * used).max(MIN_WINDOW);
+                return Ok(member);
+            }
         }
         let (start, end) = self.value()?;
-        self.text(start, end).map(Some)
+        self.window = (2 * (end - start)).max(MIN_WINDOW);
+        member_from_str(self.text(start, end)?, index)
     }
 
     /// Where the value starting at `pos` ends (one past its last byte):
@@ -883,6 +950,104 @@ mod tests {
             panic!()
         };
         assert_eq!((l, column), (line, 1), "{cut}");
+    }
+
+    /// Members of several kinds and materials, one with its `kind` last,
+    /// texts with escapes and letters beyond ASCII, and one note long
+    /// enough to cross the reader's buffer.
+    fn varied(i: usize, kind: usize) -> String {
+        let base = member(&format!("V{i}"));
+        match kind % 7 {
+            0 => base,
+            1 => base.replace(
+                r#"{"kind": "rect", "depth_mm": 100, "width_mm": 50}"#,
+                r#"{"kind": "i", "depth_mm": 200, "width_mm": 200, "flange_mm": 15, "web_mm": 9, "root_radius_mm": 18, "make": "rolled"}"#,
+            ),
+            2 => base.replace(
+                r#"{"kind": "rect", "depth_mm": 100, "width_mm": 50}"#,
+                r#"{"depth_mm": 100, "width_mm": 50, "kind": "rect"}"#,
+            ),
+            3 => base.replace(
+                r#"{"kind": "rect", "depth_mm": 100, "width_mm": 50}"#,
+                r#"{"kind": "catalogue", "designation": "HE 200 B"}"#,
+            ),
+            4 => base.replace(
+                r#"{"fy_mpa": 235, "e_mpa": 210000}"#,
+                r#"{"grade": "GL28h"}"#,
+            ),
+            5 => base.replacen("\"id\"", "\"note\": \"Stütze \\\"a\\\" \\u00e9 ]}\", \"id\"", 1),
+            _ => base.replacen(
+                "\"id\"",
+                &format!("\"note\": \"{}\", \"id\"", "x".repeat(70_000)),
+                1,
+            ),
+        }
+    }
+
+    /// Reads `text` `step` bytes a call both ways (each member straight
+    /// from the buffer where it can be, and each by its extent): the same
+    /// members and the same outcome, errors to the line and column.
+    fn both_ways(text: &[u8], step: usize) {
+        let run = |straight: bool| {
+            let mut scan = Scan::new(Trickle(text, step));
+            scan.straight = straight;
+            let mut seen = Vec::new();
+            let out = read_members(scan, |_, m| {
+                seen.push(m);
+                Ok::<(), ()>(())
+            });
+            let out = match out {
+                Ok(head) => format!("{head:?}"),
+                Err(Stop::Bad(e)) => format!("{e:?}"),
+                Err(Stop::MembersFirst) => "members first".into(),
+                Err(Stop::Caller(())) => unreachable!(),
+            };
+            (seen, out)
+        };
+        let (straight, by_extent) = (run(true), run(false));
+        assert_eq!(straight.1, by_extent.1, "{}", String::from_utf8_lossy(text));
+        assert_eq!(straight.0, by_extent.0);
+    }
+
+    proptest::proptest! {
+        #![proptest_config(proptest::prelude::ProptestConfig::with_cases(150))]
+
+        /// Files of varied members, cut short, with bytes put in, taken
+        /// out or changed (quotes, backslashes, brackets, a byte that is
+        /// no UTF-8, digits, white space): both ways read the same.
+        #[test]
+        fn members_read_straight_are_members_read_by_their_extent(
+            kinds in proptest::collection::vec(0usize..7, 1..60),
+            changes in proptest::collection::vec((0usize..10_000, 0u8..4, 0usize..14), 0..4),
+            step in proptest::sample::select(vec![1usize, 7, 4096, 1 << 20]),
+        ) {
+            let list: Vec<String> = kinds.iter().enumerate().map(|(i, k)| varied(i, *k)).collect();
+            let mut bytes = file(&list).into_bytes();
+            let put = [b'"', b'\\', b'{', b'}', b'[', b']', b',', b':', 0xff, 0xc3, b'e', b'1', b' ', b'\n'];
+            for (at, what, b) in changes {
+                let at = at * bytes.len() / 10_000;
+                match what {
+                    0 => bytes.truncate(at),
+                    1 => bytes.insert(at, put[b]),
+                    2 if at < bytes.len() => { bytes.remove(at); }
+                    _ if at < bytes.len() => bytes[at] = put[b],
+                    _ => {}
+                }
+            }
+            both_ways(&bytes, step);
+        }
+    }
+
+    #[test]
+    fn line_ends_are_counted_as_one_by_one() {
+        let mut bytes: Vec<u8> = (0..3000u32).map(|i| (i * 7 % 13) as u8).collect();
+        bytes.extend(std::iter::repeat_n(b'\n', 700));
+        for cut in [0, 1, 254, 255, 256, 1000, 3000, 3255, 3700] {
+            let part = &bytes[..cut];
+            let one_by_one = part.iter().filter(|&&b| b == b'\n').count();
+            assert_eq!(line_ends(part), one_by_one, "{cut}");
+        }
+        assert_eq!(line_ends(&bytes), 700 + 3000 / 13 + 1);
     }
 
     #[test]

@@ -17,6 +17,7 @@ mod cache;
 pub mod geometry;
 pub mod outline;
 pub mod plates;
+pub mod read;
 pub mod schema;
 pub mod shapes;
 
@@ -209,11 +210,70 @@ pub struct Given {
     pub w_pl_minor_mm3: Option<f64>,
 }
 
-/// A section as written in the member file, selected by `"kind"`; its keys,
-/// units and defaults are described once in [`schema`].
-#[derive(Debug, Clone, PartialEq, Serialize, Deserialize)]
-#[serde(tag = "kind", rename_all = "kebab-case")]
-pub enum SectionSpec {
+/// The section kinds, once: [`SectionSpec`] (written by serde's internally
+/// tagged derive), the same derive kept for reading as `read::Tagged`, the
+/// kind's name alone as `read::Kind`, and the reading of a kind's keys
+/// (see [`read`]).
+macro_rules! section_kinds {
+    ($($(#[$doc:meta])* $variant:ident($ty:ty),)*) => {
+        /// A section as written in the member file, selected by `"kind"`; its keys,
+        /// units and defaults are described once in [`schema`]. Written by serde's
+        /// internally tagged derive; read by [`read`], which answers as that derive
+        /// without buffering the section when `kind` is its first key.
+        #[derive(Debug, Clone, PartialEq, Serialize)]
+        #[serde(tag = "kind", rename_all = "kebab-case")]
+        pub enum SectionSpec {
+            $($(#[$doc])* $variant($ty),)*
+        }
+
+        pub(crate) mod kinds {
+            use serde::Deserialize;
+
+            use super::*;
+
+            /// serde's internally tagged derive of [`SectionSpec`], as it was:
+            /// the reading of a section whose `kind` is not its first key.
+            #[derive(Deserialize)]
+            #[serde(
+                tag = "kind",
+                rename_all = "kebab-case",
+                expecting = "internally tagged enum SectionSpec"
+            )]
+            pub enum Tagged {
+                $($variant($ty),)*
+            }
+
+            impl From<Tagged> for SectionSpec {
+                fn from(t: Tagged) -> SectionSpec {
+                    match t {
+                        $(Tagged::$variant(x) => SectionSpec::$variant(x),)*
+                    }
+                }
+            }
+
+            /// The value of `kind`, read as the derive reads its tag.
+            #[derive(Deserialize)]
+            #[serde(variant_identifier, rename_all = "kebab-case")]
+            pub enum Kind {
+                $($variant,)*
+            }
+
+            impl Kind {
+                /// The section of this kind from the rest of its keys.
+                pub fn section<'de, D: serde::Deserializer<'de>>(
+                    self,
+                    rest: D,
+                ) -> std::result::Result<SectionSpec, D::Error> {
+                    match self {
+                        $(Kind::$variant => <$ty>::deserialize(rest).map(SectionSpec::$variant),)*
+                    }
+                }
+            }
+        }
+    };
+}
+
+section_kinds! {
     /// Doubly symmetric I/H.
     I(IShape),
     /// Rectangular or square hollow.
