@@ -192,6 +192,17 @@ impl Working {
             Working::Skipped => Trace::off(),
         }
     }
+
+    /// An empty trace of this kind with room for a member's whole working:
+    /// a check with moments writes up to some 175 lines (the bending and
+    /// interaction working of EN 1993-1-1 Annex A, both axes), one without
+    /// up to some 75, so neither grows its trace while it runs.
+    pub fn trace_for(self, moments: bool) -> Trace {
+        match (self, moments) {
+            (Working::Kept, true) => Trace::with_capacity(176),
+            _ => self.trace(),
+        }
+    }
 }
 
 impl CheckResult {
@@ -280,7 +291,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     if input.member.buckling_model.is_some() {
         return buckle::check_as(input, method, working);
     }
-    let mut parts = Scratch::new(working);
+    let mut parts = Scratch::sized(working, input.member.has_moments());
     let verdict = work(input, method, &mut parts)?;
     let Scratch {
         modes,
@@ -439,12 +450,19 @@ impl Scratch {
     /// Empty lists, with the working kept or not.
     #[inline]
     pub fn new(working: Working) -> Scratch {
+        Scratch::sized(working, false)
+    }
+
+    /// Empty lists, the trace with room for the working of a member with
+    /// or without moments ([`Working::trace_for`]).
+    #[inline]
+    fn sized(working: Working, moments: bool) -> Scratch {
         Scratch {
             modes: Vec::with_capacity(4),
             warnings: Vec::new(),
             interaction: Vec::new(),
             bending: None,
-            trace: working.trace(),
+            trace: working.trace_for(moments),
         }
     }
 
