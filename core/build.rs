@@ -139,7 +139,7 @@ fn steel(text: &str, code: &mut String) -> Result<(), String> {
         }
         let _ = writeln!(
             code,
-            "const {id}: SteelGrade = SteelGrade {{ name: {name:?}, standard: {standard:?}, \
+            "const {id}: SteelGrade = SteelGrade {{ name: {name:?}, standard: crate::trace::Sym::lit(&{standard:?}), \
              bands: &[{list}], e: E_{moduli}, g: G_{moduli}, covers: {covers:?} }};"
         );
     }
@@ -165,7 +165,7 @@ fn timber(text: &str, code: &mut String) -> Result<(), String> {
         };
         let _ = writeln!(
             code,
-            "    TimberClass {{ name: {name:?}, standard: {standard:?}, kind: TimberKind::{kind}, \
+            "    TimberClass {{ name: {name:?}, standard: crate::trace::Sym::lit(&{standard:?}), kind: TimberKind::{kind}, \
              fc0k: {}, e0mean: {}, e005: {}, gmean: {} }},",
             literal(fc0k, line)?,
             literal(e0mean, line)?,

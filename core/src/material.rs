@@ -19,6 +19,7 @@ use serde::{Deserialize, Serialize};
 use crate::error::{positive, Error, Result};
 use crate::names;
 use crate::section::HollowMake;
+use crate::trace::Sym;
 
 /// Solid (sawn) timber or glued laminated timber: sets beta_c and gamma_M.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize, Deserialize)]
@@ -284,8 +285,9 @@ mod untagged {
 pub struct Steel {
     /// Grade name ("S355", "S355H", "A992", "custom").
     pub name: &'static str,
-    /// Standard the values come from.
-    pub standard: &'static str,
+    /// Standard the values come from (a [`Sym`]: it is also the clause of
+    /// the working's material lines).
+    pub standard: Sym,
     /// Yield strength for the section's governing thickness, MPa.
     pub fy_mpa: f64,
     /// Young's modulus, MPa.
@@ -306,8 +308,9 @@ pub struct Steel {
 pub struct Timber {
     /// Class name ("C24", "custom").
     pub name: &'static str,
-    /// Standard the values come from.
-    pub standard: &'static str,
+    /// Standard the values come from (a [`Sym`]: it is also the clause of
+    /// the working's material lines).
+    pub standard: Sym,
     /// Solid or glulam.
     pub kind: TimberKind,
     /// f_c,0,k, MPa.
@@ -362,7 +365,7 @@ pub const G_CSA: f64 = 77_000.0;
 /// A steel grade: yield strength by governing thickness.
 struct SteelGrade {
     name: &'static str,
-    standard: &'static str,
+    standard: Sym,
     /// (thickness up to and including, mm; f_y, MPa), thinnest first.
     bands: &'static [(f64, f64)],
     e: f64,
@@ -374,7 +377,7 @@ struct SteelGrade {
 /// A timber class.
 struct TimberClass {
     name: &'static str,
-    standard: &'static str,
+    standard: Sym,
     kind: TimberKind,
     fc0k: f64,
     e0mean: f64,
@@ -667,7 +670,7 @@ pub fn resolve(spec: &MaterialSpec, stock: Stock) -> Result<Material> {
             let e = positive("e_mpa", *e_mpa)?;
             Ok(Material::Steel(Steel {
                 name: "custom",
-                standard: "custom",
+                standard: crate::trace::sym!("custom"),
                 fy_mpa: positive("fy_mpa", *fy_mpa)?,
                 e_mpa: e,
                 g_mpa: match g_mpa {
@@ -697,7 +700,7 @@ pub fn resolve(spec: &MaterialSpec, stock: Stock) -> Result<Material> {
             }
             Ok(Material::Timber(Timber {
                 name: "custom",
-                standard: "custom",
+                standard: crate::trace::sym!("custom"),
                 kind: *timber,
                 fc0k_mpa: positive("fc0k_mpa", *fc0k_mpa)?,
                 e005_mpa: e005,

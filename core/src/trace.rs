@@ -53,6 +53,14 @@ pub struct Sym(
 );
 
 impl Sym {
+    /// A [`Sym`] in a constant (the material tables): `Sym::lit(&"text")`.
+    pub const fn lit(s: &'static &'static str) -> Sym {
+        #[cfg(not(target_arch = "wasm32"))]
+        return Sym(s);
+        #[cfg(target_arch = "wasm32")]
+        return Sym(*s);
+    }
+
     /// The text as a `&str`.
     #[inline]
     pub fn as_str(self) -> &'static str {

@@ -10,7 +10,7 @@ use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
 use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, SectionSpec};
-use crate::trace::{held, step, sym, Scope, Sym, Trace};
+use crate::trace::{step, sym, Scope, Sym, Trace};
 
 /// Scope of the trace for an axis mode.
 pub fn scope_of(mode: Mode) -> Scope {
@@ -288,12 +288,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
     match input.material {
         Material::Steel(s) => {
             if s.name != "custom" {
-                // Only for the working (a thread-local look-up).
-                let standard = if trace.is_on() {
-                    held(s.standard)
-                } else {
-                    sym!("")
-                };
+                let standard = s.standard;
                 step!(
                     trace,
                     Scope::Member,
@@ -353,11 +348,7 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
             }
         }
         Material::Timber(t) => {
-            let standard = if trace.is_on() {
-                held(t.standard)
-            } else {
-                sym!("")
-            };
+            let standard = t.standard;
             step!(
                 trace,
                 Scope::Member,
