@@ -45,7 +45,7 @@ use crate::method::common::{require_timber, warn_once_text};
 use crate::method::en1995::design_strength;
 use crate::outcome::{Mode, Warning};
 use crate::section::SectionSpec;
-use crate::trace::{step, Scope, Trace};
+use crate::trace::{held_symbol, put, step, sym, symbol, Scope, Trace};
 
 const KEY: &str = "en1995-1-1";
 
@@ -325,25 +325,48 @@ pub fn check(
         }
     }
     for c in &checks {
-        let label = match c.check {
-            "6.19" => "(sigma_c,0,d/f_c,0,d)^2 + sigma_m,y,d/f_m,y,d + k_m sigma_m,z,d/f_m,z,d",
-            "6.20" => "(sigma_c,0,d/f_c,0,d)^2 + k_m sigma_m,y,d/f_m,y,d + sigma_m,z,d/f_m,z,d",
-            "6.23" => "sigma_c,0,d/(k_c,y f_c,0,d) + sigma_m,y,d/f_m,y,d + k_m sigma_m,z,d/f_m,z,d",
-            "6.24" => "sigma_c,0,d/(k_c,z f_c,0,d) + k_m sigma_m,y,d/f_m,y,d + sigma_m,z,d/f_m,z,d",
-            _ if terms.minor > 0.0 => {
-                "(sigma_m,y,d/(k_crit f_m,y,d))^2 + sigma_c,0,d/(k_c,z f_c,0,d) + \
-                 sigma_m,z,d/f_m,z,d (minor-axis term added, conservative)"
-            }
-            _ => "(sigma_m,y,d/(k_crit f_m,y,d))^2 + sigma_c,0,d/(k_c,z f_c,0,d)",
+        // Symbol, label and clause as literals (no run-time look-up of
+        // held texts each check); the symbol is the check's name.
+        let eq_6_35 = || match c.check {
+            "6.35" => symbol!("6.35", "-"),
+            other => held_symbol(other, "-"),
         };
-        let clause = match c.check {
-            "6.19" => "EN 1995-1-1 6.2.4 Eq. 6.19",
-            "6.20" => "EN 1995-1-1 6.2.4 Eq. 6.20",
-            "6.23" => "EN 1995-1-1 6.3.2 Eq. 6.23",
-            "6.24" => "EN 1995-1-1 6.3.2 Eq. 6.24",
-            _ => "EN 1995-1-1 6.3.3 Eq. 6.35",
+        let (symbol, label, clause) = match c.check {
+            "6.19" => (
+                symbol!("6.19", "-"),
+                sym!("(sigma_c,0,d/f_c,0,d)^2 + sigma_m,y,d/f_m,y,d + k_m sigma_m,z,d/f_m,z,d"),
+                sym!("EN 1995-1-1 6.2.4 Eq. 6.19"),
+            ),
+            "6.20" => (
+                symbol!("6.20", "-"),
+                sym!("(sigma_c,0,d/f_c,0,d)^2 + k_m sigma_m,y,d/f_m,y,d + sigma_m,z,d/f_m,z,d"),
+                sym!("EN 1995-1-1 6.2.4 Eq. 6.20"),
+            ),
+            "6.23" => (
+                symbol!("6.23", "-"),
+                sym!("sigma_c,0,d/(k_c,y f_c,0,d) + sigma_m,y,d/f_m,y,d + k_m sigma_m,z,d/f_m,z,d"),
+                sym!("EN 1995-1-1 6.3.2 Eq. 6.23"),
+            ),
+            "6.24" => (
+                symbol!("6.24", "-"),
+                sym!("sigma_c,0,d/(k_c,z f_c,0,d) + k_m sigma_m,y,d/f_m,y,d + sigma_m,z,d/f_m,z,d"),
+                sym!("EN 1995-1-1 6.3.2 Eq. 6.24"),
+            ),
+            _ if terms.minor > 0.0 => (
+                eq_6_35(),
+                sym!(
+                    "(sigma_m,y,d/(k_crit f_m,y,d))^2 + sigma_c,0,d/(k_c,z f_c,0,d) + \
+                     sigma_m,z,d/f_m,z,d (minor-axis term added, conservative)"
+                ),
+                sym!("EN 1995-1-1 6.3.3 Eq. 6.35"),
+            ),
+            _ => (
+                eq_6_35(),
+                sym!("(sigma_m,y,d/(k_crit f_m,y,d))^2 + sigma_c,0,d/(k_c,z f_c,0,d)"),
+                sym!("EN 1995-1-1 6.3.3 Eq. 6.35"),
+            ),
         };
-        crate::trace::push(trace, s, c.check, label, c.utilisation, "-", clause);
+        put(trace, s, symbol, label, c.utilisation, clause);
     }
     if terms.k_crit.is_some() && terms.major > 0.0 && terms.minor > 0.0 {
         warn_once_text(
