@@ -54,11 +54,9 @@ pub struct Sym(
 
 impl Sym {
     /// A [`Sym`] in a constant (the material tables): `Sym::lit(&"text")`.
+    /// (In the browser build the reference is dereferenced by coercion.)
     pub const fn lit(s: &'static &'static str) -> Sym {
-        #[cfg(not(target_arch = "wasm32"))]
-        return Sym(s);
-        #[cfg(target_arch = "wasm32")]
-        return Sym(*s);
+        Sym(s)
     }
 
     /// The text as a `&str`.
