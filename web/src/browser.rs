@@ -40,9 +40,36 @@ pub fn note_timing(key: &str, what: &str, ms: f64, n: usize) {
     }
 }
 
-/// Reads a key ("" never stands for absent).
+#[wasm_bindgen::prelude::wasm_bindgen]
+extern "C" {
+    /// The page's `Storage`, seen through this one method.
+    type TextStore;
+    /// `Storage.getItem`, the value left a JS string (`null` when absent).
+    #[wasm_bindgen(method, catch, js_name = getItem)]
+    fn get_item_js(this: &TextStore, key: &str) -> Result<JsValue, JsValue>;
+    /// The page's `TextEncoder`.
+    type Utf8Encoder;
+    #[wasm_bindgen(constructor, js_class = "TextEncoder")]
+    fn new() -> Utf8Encoder;
+    /// `TextEncoder.encode` of a JS string: its UTF-8 bytes.
+    #[wasm_bindgen(method, js_name = encode)]
+    fn encode_js(this: &Utf8Encoder, text: &JsValue) -> js_sys::Uint8Array;
+}
+
+/// Reads a key ("" never stands for absent). The text crosses into the
+/// module as UTF-8 made by the browser's own `TextEncoder` and one copy:
+/// the glue's `String` return walks a stored workspace (186 kB for 1,000
+/// members) a character at a time in JS that has not warmed up yet, some
+/// 20 ms of the list's first frame (Chromium's profiler, bench/web.md).
 pub fn get(key: &str) -> Option<String> {
-    storage()?.get_item(key).ok().flatten()
+    let text = storage()?
+        .unchecked_ref::<TextStore>()
+        .get_item_js(key)
+        .ok()?;
+    if !text.is_string() {
+        return None;
+    }
+    String::from_utf8(Utf8Encoder::new().encode_js(&text).to_vec()).ok()
 }
 
 /// Writes a key; the error says why it failed (a full quota, mostly).
