@@ -12,7 +12,16 @@
 //                  edits its end moment instead (both curves worked afresh);
 //   model-edit:    `--runs` edits of the load along the length of a column
 //                  model (lib.mjs modelColumns, `--member TD-1` or TD-2),
-//                  as bench.mjs times them (modelEditLoop), What if included.
+//                  as bench.mjs times them (modelEditLoop), What if included;
+//   thousand-trace: the 1,000-member start as `thousand`, but through a
+//                  Chromium trace (`--runs` fresh profiles, default 3):
+//                  from the mark strutline-wasm-ready to the first frame
+//                  after the rows in view fill the list box, the main
+//                  thread's wall and CPU time (the trace's thread clock:
+//                  steadier than wall time on a shared machine), the wasm
+//                  functions compiled lazily on their first call, and the
+//                  trace events with the most time of their own. Any
+//                  build will do (no names needed).
 // Prints the functions with the most time of their own and the most time
 // under them (self + callees). Function names are there only in a build
 // that keeps them: `cargo xtask dist --keep-names` (dist-names/), served
@@ -42,8 +51,8 @@ const TOP = Number(arg("--top", "40"));
 const SAVE = arg("--save");
 const MEMBER = arg("--member", "TD-1");
 const FIELD = arg("--field", "axial_kn");
-if (!URL_ARG || !["thousand", "edit", "edit-moments", "model-edit"].includes(CASE)) {
-  console.error("usage: node profile.mjs --url URL --case thousand|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID] [--field NAME]");
+if (!URL_ARG || !["thousand", "thousand-trace", "edit", "edit-moments", "model-edit"].includes(CASE)) {
+  console.error("usage: node profile.mjs --url URL --case thousand|thousand-trace|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID] [--field NAME]");
   process.exit(2);
 }
 
@@ -83,6 +92,103 @@ function print(title, map, top) {
   for (const [k, ms] of [...map].sort((a, b) => b[1] - a[1]).slice(0, top)) {
     console.log(`${ms.toFixed(1).padStart(9)} ms  ${k}`);
   }
+}
+
+// Runs in the page before its scripts (thousand-trace): marks
+// "strutline-trace-frame" at the first animation frame after the rows in
+// view fill the list's scrolling box (as bench.mjs's watchRows decides).
+function markRowsFrame() {
+  const look = () => {
+    const rows = document.querySelectorAll("[data-testid=member-row]");
+    const box = document.querySelector("[data-testid=member-scroll]");
+    const last = rows[rows.length - 1];
+    if (box && last && last.getBoundingClientRect().height > 0 &&
+        last.getBoundingClientRect().bottom >= box.getBoundingClientRect().bottom) {
+      observer.disconnect();
+      requestAnimationFrame(() => {
+        performance.mark("strutline-trace-frame");
+        window.__strutlineTraced = true;
+      });
+    }
+  };
+  const observer = new MutationObserver(look);
+  document.addEventListener("DOMContentLoaded", () => {
+    observer.observe(document.body, { childList: true, subtree: true });
+    look();
+  });
+}
+
+/** One traced 1,000-member start: the main thread between the marks. */
+async function traceThousand() {
+  const { context, close } = await launch();
+  try {
+    await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers())]));
+    await context.addInitScript(markRowsFrame);
+    const page = await firstPage(context);
+    const cdp = await context.newCDPSession(page);
+    const events = [];
+    cdp.on("Tracing.dataCollected", (e) => events.push(...e.value));
+    const complete = new Promise((r) => cdp.once("Tracing.tracingComplete", r));
+    await cdp.send("Tracing.start", {
+      traceConfig: { includedCategories: ["devtools.timeline", "blink.user_timing", "v8.wasm", "toplevel"] },
+      transferMode: "ReportEvents",
+    });
+    await page.goto(URL_ARG, { waitUntil: "load" });
+    await page.waitForFunction(() => window.__strutlineTraced, null, { timeout: 30_000 });
+    await cdp.send("Tracing.end");
+    await complete;
+    if (SAVE) writeFileSync(SAVE, JSON.stringify(events));
+    const mark = (n) => events.find((e) => e.name === n && e.cat.includes("user_timing"));
+    const [a, m, b] = ["strutline-wasm-ready", "strutline-mounted", "strutline-trace-frame"].map(mark);
+    if (!a || !b) throw new Error("the trace has not both marks");
+    const clip = (e) => Math.max(0, Math.min(e.ts + e.dur, b.ts) - Math.max(e.ts, a.ts));
+    const main = events
+      .filter((e) => e.pid === a.pid && e.tid === a.tid && e.ph === "X" && e.ts + e.dur > a.ts && e.ts < b.ts)
+      .sort((x, y) => x.ts - y.ts || y.dur - x.dur);
+    // Self time per event name (each event less the events inside it);
+    // CPU time from the thread clock of the outermost events.
+    const own = new Map();
+    const stack = [];
+    let cpu = 0;
+    for (const e of main) own.set(e, clip(e));
+    for (const e of main) {
+      while (stack.length && stack.at(-1).ts + stack.at(-1).dur <= e.ts) stack.pop();
+      if (stack.length) own.set(stack.at(-1), own.get(stack.at(-1)) - clip(e));
+      else if (e.tdur !== undefined && e.dur > 0) cpu += (e.tdur * clip(e)) / e.dur;
+      stack.push(e);
+    }
+    const byName = new Map();
+    for (const [e, us] of own) byName.set(e.name, (byName.get(e.name) || 0) + us / 1000);
+    const lazy = main.filter((e) => e.name === "wasm.CompileLazy");
+    return {
+      wall: (b.ts - a.ts) / 1000,
+      mounted: m ? (m.ts - a.ts) / 1000 : NaN,
+      cpu: cpu / 1000,
+      lazy: lazy.length,
+      byName,
+    };
+  } finally {
+    await close();
+  }
+}
+
+if (CASE === "thousand-trace") {
+  const runs = process.argv.includes("--runs") ? RUNS : 3;
+  const all = [];
+  for (let i = 0; i < runs; i += 1) {
+    const r = await traceThousand();
+    all.push(r);
+    console.log(
+      `run ${i + 1}: ready to frame ${r.wall.toFixed(1)} ms (start() ${r.mounted.toFixed(1)} ms), ` +
+        `main thread CPU ${r.cpu.toFixed(1)} ms, ${r.lazy} wasm functions compiled lazily`,
+    );
+  }
+  const med = (xs) => [...xs].sort((x, y) => x - y)[Math.floor(xs.length / 2)];
+  console.log(`median of ${runs}: ready to frame ${med(all.map((r) => r.wall)).toFixed(1)} ms, CPU ${med(all.map((r) => r.cpu)).toFixed(1)} ms`);
+  const names = new Map();
+  for (const r of all) for (const [k, ms] of r.byName) names.set(k, (names.get(k) || 0) + ms / runs);
+  print("trace events, time of their own (mean of the runs, wall)", names, TOP);
+  process.exit(0);
 }
 
 const { context, close } = await launch();
