@@ -13,7 +13,7 @@ use crate::bending::{self, Bending};
 use crate::error::Result;
 use crate::interaction;
 use crate::material::Material;
-use crate::member::Member;
+use crate::member::{Member, Unbraced};
 use crate::method::{self, Input, Method};
 pub use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, Properties, Section};
@@ -291,8 +291,21 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     if input.member.buckling_model.is_some() {
         return buckle::check_as(input, method, working);
     }
+    let unbraced = input.member.unbraced();
+    evaluate_within(input, method, working, unbraced)
+}
+
+/// [`evaluate`] of a member without a buckling model whose laterally
+/// unbraced lengths are `unbraced` (a buckling model's segment: the model's
+/// braces bound them, [`Member::unbraced`](crate::member::Member::unbraced)).
+pub(crate) fn evaluate_within(
+    input: &Input<'_>,
+    method: Method,
+    working: Working,
+    unbraced: Unbraced,
+) -> Result<CheckResult> {
     let mut parts = Scratch::sized(working, input.member.has_moments());
-    let verdict = work(input, method, &mut parts)?;
+    let verdict = work(input, method, &mut parts, unbraced)?;
     let Scratch {
         modes,
         warnings,
@@ -505,7 +518,7 @@ impl Scratch {
             self.interaction.clear();
             self.bending = None;
             self.trace.clear();
-            work(input, method, self)?
+            work(input, method, self, input.member.unbraced())?
         };
         Ok(Brief {
             verdict,
@@ -522,7 +535,12 @@ impl Scratch {
 /// written into `parts` (empty on entry). Inlined into both callers, so
 /// [`evaluate`]'s result is written in place as before.
 #[inline(always)]
-fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdict> {
+fn work(
+    input: &Input<'_>,
+    method: Method,
+    parts: &mut Scratch,
+    unbraced: Unbraced,
+) -> Result<Verdict> {
     let Scratch {
         modes,
         warnings,
@@ -702,6 +720,7 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
                     method,
                     input,
                     lengths: &lengths,
+                    unbraced,
                     modes,
                     governing: &governing,
                     bending: b,

@@ -275,6 +275,9 @@ fn check_analysed(
     let wrap = |e: Error| e.in_member(&member.id);
     let mut best: Option<(usize, CheckResult)> = None;
     let mut warnings: Vec<Warning> = Vec::new();
+    // The model's braces bound each segment's unbraced length (its own
+    // moment amplification), which the segment's member no longer holds.
+    let unbraced = member.unbraced();
     for (i, (y, z)) in major.segments.iter().zip(&minor.segments).enumerate() {
         let (Some(ly), Some(lz)) = (y.buckling_length_mm, z.buckling_length_mm) else {
             continue;
@@ -300,7 +303,7 @@ fn check_analysed(
             section: &section,
             material: &material,
         };
-        let result = crate::check::evaluate(&seg, method, working).map_err(key)?;
+        let result = crate::check::evaluate_within(&seg, method, working, unbraced).map_err(key)?;
         for w in &result.warnings {
             if !warnings.iter().any(|x| x.code == w.code) {
                 warnings.push(w.clone());
