@@ -443,7 +443,6 @@ impl Table {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
     use super::*;
 
     /// Every member of the examples (moments, interaction, frames, a

@@ -887,7 +887,6 @@ impl Method {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
 
     /// The one-test path of `buckling_lengths` gives what the field-by-field

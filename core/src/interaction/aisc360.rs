@@ -697,7 +697,6 @@ pub fn check(
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
     use crate::member::{Moments, SpanLoad};
 

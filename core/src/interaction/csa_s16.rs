@@ -627,7 +627,6 @@ pub fn check(
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
 
     fn mo(a: f64, b: f64, span: f64, load: SpanLoad) -> Moments {
