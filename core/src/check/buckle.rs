@@ -17,6 +17,7 @@ use crate::method::{Input, Method};
 use crate::outcome::Warning;
 use crate::section::Section;
 use crate::trace::{put, step, sym, symbol, Scope, Trace};
+use crate::units::Quantity;
 
 /// Both axes' analyses of one member (what `strutline buckle` prints).
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -410,13 +411,14 @@ fn check_analysed(
         .iter()
         .fold(0.0_f64, |a, s| a.max(s.axial_kn));
     if model.carries_own_loads() && (largest - member.axial_kn).abs() > 1e-9 * largest.max(1.0) {
-        warnings.push(Warning::new(
+        warnings.push(Warning::with_figures(
             "axial-kn-from-model",
-            format!(
-                "each segment is checked at its force from the model's loads (largest {largest:.1} kN); \
-                 the member's axial_kn ({} kN) is not used",
-                member.axial_kn
-            ),
+            "each segment is checked at its force from the model's loads (largest {}); \
+             the member's axial_kn ({}) is not used",
+            &[
+                (largest, Quantity::Force, 1),
+                (member.axial_kn, Quantity::Force, Warning::AS_GIVEN),
+            ],
         ));
     }
     result.warnings = warnings;

@@ -60,10 +60,11 @@ use crate::bending::aisc360_angle as angle;
 use crate::bending::{moments, shape, Axis, AxisBending, Shape};
 use crate::error::Result;
 use crate::member::{Method, Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once, warn_once_text};
+use crate::method::common::{require_steel, warn_once_text, warn_once_with};
 use crate::outcome::Warning;
 use crate::section::{Family, SectionSpec};
 use crate::trace::{push, put, step, sym, symbol, Scope, Sym, Symbol, Trace};
+use crate::units::Quantity;
 
 /// alpha of Appendix 8.2.1: 1.00 (LRFD).
 pub const ALPHA_LRFD: f64 = 1.0;
@@ -250,13 +251,17 @@ fn required(
             f64::INFINITY,
             sym!("AISC 360-16 Eq. A-8-3"),
         );
-        warn_once(warnings, "b1-unbounded", || {
-            format!(
-                "axial_kn: alpha P_r = {:.1} kN reaches the elastic buckling load in the plane of \
-                 bending P_e1 = {p_e1:.1} kN (AISC 360-16 Appendix 8.2.1), so the moments have no \
+        warn_once_with(warnings, "b1-unbounded", || {
+            Warning::with_figures(
+                "b1-unbounded",
+                "axial_kn: alpha P_r = {} reaches the elastic buckling load in the plane of \
+                 bending P_e1 = {} (AISC 360-16 Appendix 8.2.1), so the moments have no \
                  finite amplification B1 and the member fails; choose a stiffer section or a \
                  shorter buckling length",
-                alpha * p_r
+                &[
+                    (alpha * p_r, Quantity::Force, 1),
+                    (p_e1, Quantity::Force, 1),
+                ],
             )
         });
         return f64::INFINITY;

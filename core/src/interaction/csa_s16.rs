@@ -58,10 +58,11 @@ use crate::bending::csa_s16::{class_of, classify, unsupported, PHI};
 use crate::bending::{given_modulus, moments, shape, Axis, Shape};
 use crate::error::{Error, Result};
 use crate::member::{Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once, warn_once_text};
+use crate::method::common::{require_steel, warn_once_text, warn_once_with};
 use crate::outcome::{Mode, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
+use crate::units::Quantity;
 
 const KEY: &str = "csa-s16";
 const S: Scope = Scope::Interaction;
@@ -328,12 +329,14 @@ fn axis_terms(
                 f64::INFINITY,
                 sym!("CSA S16-19 13.8.4"),
             );
-            warn_once(warnings, "u1-unbounded", || {
-                format!(
-                    "axial_kn: C_f = {c_f:.1} kN reaches the Euler load in the plane of bending \
-                     C_e = {c_e:.1} kN (CSA S16-19 13.8.4), so the moments have no finite \
+            warn_once_with(warnings, "u1-unbounded", || {
+                Warning::with_figures(
+                    "u1-unbounded",
+                    "axial_kn: C_f = {} reaches the Euler load in the plane of bending \
+                     C_e = {} (CSA S16-19 13.8.4), so the moments have no finite \
                      amplification U_1 and the member fails; choose a stiffer section or a \
-                     shorter member"
+                     shorter member",
+                    &[(c_f, Quantity::Force, 1), (c_e, Quantity::Force, 1)],
                 )
             });
             f64::INFINITY

@@ -27,6 +27,7 @@ use crate::outcome::{ModeResult, Warning};
 use crate::section::Family;
 use crate::stability::Assessment;
 use crate::trace::Trace;
+use crate::units::Quantity;
 
 pub mod aisc360;
 pub mod csa_s16;
@@ -265,16 +266,24 @@ pub fn warn_raised(
         Axis::Major => ("amplification-length-major", "major"),
         Axis::Minor => ("amplification-length-minor", "minor"),
     };
-    crate::method::common::warn_once(warnings, code, || {
-        format!(
-            "{}: the buckling length about the {name} axis, {:.0} mm, is shorter than the \
-             laterally unbraced length, {:.0} mm; the member's own moment amplification {what} \
-             takes {symbol} = {:.0} mm (K = 1, no lateral translation of the ends: {clause} \
-             allows a smaller value only where analysis justifies it, which the member file \
-             does not say), a larger {what} than the buckling length gives. Braces that \
-             shorten the unbraced length belong in buckling_model; moments that already \
-             include the member's second-order effects take amplify_moments false",
-            own.field, own.buckling_mm, own.unbraced_mm, own.mm
+    crate::method::common::warn_once_with(warnings, code, || {
+        Warning::with_figures(
+            code,
+            &format!(
+                "{}: the buckling length about the {name} axis, {{}}, is shorter than the \
+                 laterally unbraced length, {{}}; the member's own moment amplification {what} \
+                 takes {symbol} = {{}} (K = 1, no lateral translation of the ends: {clause} \
+                 allows a smaller value only where analysis justifies it, which the member file \
+                 does not say), a larger {what} than the buckling length gives. Braces that \
+                 shorten the unbraced length belong in buckling_model; moments that already \
+                 include the member's second-order effects take amplify_moments false",
+                own.field
+            ),
+            &[
+                (own.buckling_mm, Quantity::Span, 0),
+                (own.unbraced_mm, Quantity::Span, 0),
+                (own.mm, Quantity::Span, 0),
+            ],
         )
     });
 }
