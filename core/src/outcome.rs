@@ -58,143 +58,170 @@ pub struct ModeResult {
 
 /// A caution attached to a result.
 ///
-/// `message` is the text in the engine's own units (mm, kN, MPa, kNm, as
-/// the member file stores them): what the JSON of results gives (`code`
-/// and `message`, stable for scripts), what the command line prints.
-/// The numbers with a unit in it are kept typed as well (`figures`), so a
-/// front end shows the message in its unit system through
-/// [`Warning::text`], the one function that renders it.
-#[derive(Debug, Clone, PartialEq, Serialize)]
+/// Its message is a text with, where it gives the member's numbers or
+/// words, the arguments kept apart from it (`{}` in the text for each, in
+/// order): a number with a unit stays typed ([`Arg::Figure`]: value in the
+/// engine's unit and its [`Quantity`]), so nothing is formatted while
+/// checking, and a front end shows it in its unit system through
+/// [`Warning::text`], the one function that renders it. [`Warning::message`]
+/// is the text in the engine's own units (mm, kN, MPa, kNm, as the member
+/// file stores them): what the JSON of results gives (`{"code",
+/// "message"}`, stable for scripts) and what the command line prints.
+#[derive(Debug, Clone, PartialEq)]
 pub struct Warning {
     /// Stable short code, for scripts ("torsional-not-checked").
     pub code: &'static str,
-    /// The message in words with its numbers in the engine's units: most
-    /// are fixed texts, kept without allocating; those with the member's
-    /// numbers are formatted.
-    pub message: Cow<'static, str>,
-    /// The numbers of `message` that have a unit, in order (empty, and not
-    /// allocated, for a message without them). Not in the JSON.
-    #[serde(skip)]
-    pub figures: Box<[Figure]>,
+    /// The text: the whole message without arguments (most are fixed
+    /// texts, kept without allocating), else its template.
+    text: Cow<'static, str>,
+    /// The arguments of the template, in order (empty, and not allocated,
+    /// for a message without them).
+    args: Box<[Arg]>,
 }
 
-/// A number with a unit in a warning's message: its value in the engine's
-/// unit of its quantity and where its text stands in the message.
+/// An argument of a warning's message ([`Warning::with_args`]).
 #[derive(Debug, Clone, Copy, PartialEq)]
-pub struct Figure {
-    /// The value in the engine's unit of `quantity` (mm, kN, MPa, kNm).
-    pub value: f64,
-    /// Its kind, which sets its unit in each system.
-    pub quantity: Quantity,
-    /// Byte range of its text ("3500 mm") in the message.
-    at: u32,
-    len: u32,
+pub enum Arg {
+    /// A number: its value in the engine's unit of `quantity` (mm, kN,
+    /// MPa, kNm; a ratio is [`Quantity::Dimensionless`]) and the decimals
+    /// it is written with in those units ([`Warning::AS_GIVEN`]: as `{}`
+    /// writes it).
+    Figure {
+        /// The value.
+        value: f64,
+        /// Its kind, which sets its unit in each system.
+        quantity: Quantity,
+        /// Decimals in the engine's units.
+        decimals: usize,
+    },
+    /// A word: a member-file key, an axis, a clause.
+    Word(&'static str),
 }
 
-/// The marker of a figure in a template of [`Warning::with_figures`].
-const MARK: &str = "{}";
+impl Arg {
+    /// A number with a unit, written with `decimals` in the engine's units.
+    pub fn figure(value: f64, quantity: Quantity, decimals: usize) -> Arg {
+        Arg::Figure {
+            value,
+            quantity,
+            decimals,
+        }
+    }
+}
+
+impl Serialize for Warning {
+    fn serialize<S: serde::Serializer>(&self, s: S) -> Result<S::Ok, S::Error> {
+        use serde::ser::SerializeStruct;
+        let mut st = s.serialize_struct("Warning", 2)?;
+        st.serialize_field("code", self.code)?;
+        st.serialize_field("message", &*self.message())?;
+        st.end()
+    }
+}
 
 impl Warning {
     /// The decimals of a figure written as `{}` writes it (the shortest
-    /// text that reads back as the value), in [`Warning::with_figures`].
+    /// text that reads back as the value), in [`Arg::Figure`].
     pub const AS_GIVEN: usize = usize::MAX;
 
-    /// A warning with a code and a message without numbers in units.
+    /// A warning with a code and a message without arguments.
     pub fn new(code: &'static str, message: impl Into<Cow<'static, str>>) -> Warning {
         Warning {
             code,
-            message: message.into(),
-            figures: Box::default(),
+            text: message.into(),
+            args: Box::default(),
         }
     }
 
-    /// A warning whose message has numbers with units: `template` with
-    /// `{}` standing for each of `figures` in turn, each (value in the
-    /// engine's unit, quantity, decimals written in the engine's units).
-    /// The message reads as `format!` with `{:.decimals$} unit` would
-    /// write it (so its JSON text is unchanged from such a message); a
-    /// marker without a figure stays as it is, a figure without a marker
-    /// is left out.
-    pub fn with_figures(
-        code: &'static str,
-        template: &str,
-        figures: &[(f64, Quantity, usize)],
-    ) -> Warning {
-        use std::fmt::Write;
-        let mut message = String::with_capacity(template.len() + 12 * figures.len());
-        let mut kept = Vec::with_capacity(figures.len());
-        let mut rest = template;
-        let mut given = figures.iter();
-        while let Some(i) = rest.find(MARK) {
-            let (before, after) = rest.split_at(i);
-            message.push_str(before);
-            rest = after.get(MARK.len()..).unwrap_or("");
-            match given.next() {
-                Some(&(value, quantity, decimals)) => {
-                    let at = message.len();
-                    // Writing to a String cannot fail.
-                    let _ = if decimals == Warning::AS_GIVEN {
-                        write!(message, "{value}")
-                    } else {
-                        write!(message, "{value:.decimals$}")
-                    };
-                    let unit = quantity.engine_unit();
-                    if !unit.is_empty() {
-                        message.push(' ');
-                        message.push_str(unit);
-                    }
-                    kept.push(Figure {
-                        value,
-                        quantity,
-                        at: u32::try_from(at).unwrap_or(u32::MAX),
-                        len: u32::try_from(message.len() - at).unwrap_or(0),
-                    });
-                }
-                None => message.push_str(MARK),
-            }
-        }
-        message.push_str(rest);
+    /// A warning whose message has the member's numbers or words:
+    /// `template` with `{}` standing for each of `args` in turn. Nothing is
+    /// formatted here (one small allocation for the arguments); a marker
+    /// without an argument stays as it is, an argument without a marker is
+    /// left out.
+    pub fn with_args(code: &'static str, template: &'static str, args: &[Arg]) -> Warning {
         Warning {
             code,
-            message: Cow::Owned(message),
-            figures: kept.into_boxed_slice(),
+            text: Cow::Borrowed(template),
+            args: Box::from(args),
         }
     }
 
-    /// The message in `system`'s units: the message itself in SI (the
-    /// engine's units, nothing formatted) and for a message without
-    /// figures; otherwise each figure in the system's display unit (US
-    /// customary to four significant figures: kip, in, ft, ksi, kip·ft).
+    /// The message in the engine's units (what the JSON gives): the text
+    /// itself, borrowed, without arguments.
+    pub fn message(&self) -> Cow<'_, str> {
+        self.render(None)
+    }
+
+    /// The message without arguments, borrowed; `None` for one with
+    /// arguments (use [`Warning::message`]).
+    pub fn fixed(&self) -> Option<&str> {
+        self.args.is_empty().then_some(&*self.text)
+    }
+
+    /// The message in `system`'s units: in SI the engine's units (as
+    /// [`Warning::message`]); in US customary each number with a unit in
+    /// its display unit (kip, in, ft, ksi, kip·ft) to four significant
+    /// figures. Borrowed for a message without arguments.
     pub fn text(&self, system: UnitSystem) -> Cow<'_, str> {
-        if system == UnitSystem::Si || self.figures.is_empty() {
-            return Cow::Borrowed(&self.message);
+        self.render(Some(system).filter(|s| *s != UnitSystem::Si))
+    }
+
+    /// The one rendering: `None` in the engine's units.
+    fn render(&self, system: Option<UnitSystem>) -> Cow<'_, str> {
+        use std::fmt::Write;
+        if self.args.is_empty() {
+            return Cow::Borrowed(&self.text);
         }
-        let m: &str = &self.message;
-        let mut out = String::with_capacity(m.len() + 8 * self.figures.len());
-        let mut from = 0;
-        for f in self.figures.iter() {
-            let (at, end) = (f.at as usize, f.at as usize + f.len as usize);
-            let (Some(before), Some(_)) = (m.get(from..at), m.get(at..end)) else {
-                // A figure that does not fit the message (not made by
-                // `with_figures`): the message as it stands.
-                return Cow::Borrowed(m);
-            };
+        let mut out = String::with_capacity(self.text.len() + 12 * self.args.len());
+        let mut rest: &str = &self.text;
+        let mut args = self.args.iter();
+        while let Some(i) = rest.find('{') {
+            let (before, after) = rest.split_at(i);
             out.push_str(before);
-            out.push_str(&units::format_display(
-                units::to_display(system, f.quantity, f.value),
-                4,
-            ));
-            let unit = units::display_unit(system, f.quantity);
-            if !unit.is_empty() {
-                out.push(' ');
-                out.push_str(unit);
-            }
-            from = end;
+            let Some(tail) = after.strip_prefix(MARK) else {
+                out.push('{');
+                rest = after.get(1..).unwrap_or("");
+                continue;
+            };
+            rest = tail;
+            // Writing to a String cannot fail.
+            let _ = match args.next() {
+                None => write!(out, "{MARK}"),
+                Some(Arg::Word(w)) => write!(out, "{w}"),
+                Some(&Arg::Figure {
+                    value,
+                    quantity,
+                    decimals,
+                }) => match (system, units::us_unit(quantity)) {
+                    (Some(sys), Some(_)) => write!(
+                        out,
+                        "{} {}",
+                        units::format_display(units::to_display(sys, quantity, value), 4),
+                        units::display_unit(sys, quantity)
+                    ),
+                    _ => {
+                        if decimals == Warning::AS_GIVEN {
+                            let _ = write!(out, "{value}");
+                        } else {
+                            let _ = write!(out, "{value:.decimals$}");
+                        }
+                        let unit = quantity.engine_unit();
+                        if unit.is_empty() {
+                            Ok(())
+                        } else {
+                            write!(out, " {unit}")
+                        }
+                    }
+                },
+            };
         }
-        out.push_str(m.get(from..).unwrap_or(""));
+        out.push_str(rest);
         Cow::Owned(out)
     }
 }
+
+/// The marker of an argument in a warning's template.
+const MARK: &str = "{}";
 
 #[cfg(test)]
 mod tests {
@@ -205,61 +232,66 @@ mod tests {
     fn a_force_reads_in_kn_in_si_and_in_kip_in_us() {
         // 1 kip = 4.4482216152605 kN exactly (NIST SP 811, 2008, App. B),
         // so 444.8 kN is 100.0 kip to four figures and 2845.3 kN 639.7 kip.
-        let w = Warning::with_figures(
+        let w = Warning::with_args(
             "b1-unbounded",
-            "axial_kn: alpha P_r = {} reaches P_e1 = {} here",
-            &[(444.822, Quantity::Force, 1), (2845.31, Quantity::Force, 1)],
+            "{}: alpha P_r = {} reaches P_e1 = {} here",
+            &[
+                Arg::Word("axial_kn"),
+                Arg::figure(444.822, Quantity::Force, 1),
+                Arg::figure(2845.31, Quantity::Force, 1),
+            ],
         );
-        assert_eq!(
-            w.message,
-            "axial_kn: alpha P_r = 444.8 kN reaches P_e1 = 2845.3 kN here"
-        );
-        assert_eq!(w.text(UnitSystem::Si), w.message);
-        assert!(matches!(w.text(UnitSystem::Si), Cow::Borrowed(_)));
+        let si = "axial_kn: alpha P_r = 444.8 kN reaches P_e1 = 2845.3 kN here";
+        assert_eq!(w.message(), si);
+        assert_eq!(w.text(UnitSystem::Si), si);
         assert_eq!(
             w.text(UnitSystem::Us),
             "axial_kn: alpha P_r = 100 kip reaches P_e1 = 639.7 kip here"
         );
-        // The JSON is the code and the engine-unit message, as before.
+        assert_eq!(w.fixed(), None);
+        // The JSON is the code and the engine-unit message.
         assert_eq!(
             serde_json::to_string(&w).unwrap(),
-            r#"{"code":"b1-unbounded","message":"axial_kn: alpha P_r = 444.8 kN reaches P_e1 = 2845.3 kN here"}"#
+            format!(r#"{{"code":"b1-unbounded","message":"{si}"}}"#)
         );
     }
 
     #[test]
-    fn lengths_stresses_and_texts_without_figures() {
+    fn lengths_stresses_ratios_and_texts_without_arguments() {
         // A member length in ft (3048 mm = 10 ft exactly), a section
         // thickness in in (25.4 mm = 1 in), a stress in ksi (345 MPa =
-        // 50.04 ksi: 1 ksi = 6.894757 MPa).
-        let w = Warning::with_figures(
+        // 50.04 ksi: 1 ksi = 6.894757 MPa); a ratio as written.
+        let w = Warning::with_args(
             "x",
-            "L = {}, t = {}, f_y = {}; {} left",
+            "L = {}, t = {}, f_y = {}, N/N_cr = {}; {} left, {a} kept",
             &[
-                (3048.0, Quantity::Span, 0),
-                (25.4, Quantity::Length, 1),
-                (345.0, Quantity::Stress, 0),
+                Arg::figure(3048.0, Quantity::Span, 0),
+                Arg::figure(25.4, Quantity::Length, Warning::AS_GIVEN),
+                Arg::figure(345.0, Quantity::Stress, 0),
+                Arg::figure(0.98765, Quantity::Dimensionless, 3),
             ],
         );
         assert_eq!(
-            w.message,
-            "L = 3048 mm, t = 25.4 mm, f_y = 345 MPa; {} left"
+            w.message(),
+            "L = 3048 mm, t = 25.4 mm, f_y = 345 MPa, N/N_cr = 0.988; {} left, {a} kept"
         );
         assert_eq!(
             w.text(UnitSystem::Us),
-            "L = 10 ft, t = 1 in, f_y = 50.04 ksi; {} left"
+            "L = 10 ft, t = 1 in, f_y = 50.04 ksi, N/N_cr = 0.988; {} left, {a} kept"
         );
         let fixed = Warning::new("make-assumed", "a fixed text, 5 mm as written");
-        assert!(matches!(fixed.message, Cow::Borrowed(_)));
-        assert!(fixed.figures.is_empty());
+        assert!(matches!(fixed.message(), Cow::Borrowed(_)));
         assert!(matches!(fixed.text(UnitSystem::Us), Cow::Borrowed(_)));
-        // More figures than markers: the extra one is left out.
-        let w = Warning::with_figures(
+        assert_eq!(fixed.fixed(), Some("a fixed text, 5 mm as written"));
+        // More arguments than markers: the extra one is left out.
+        let w = Warning::with_args(
             "x",
             "N = {}",
-            &[(1.0, Quantity::Force, 0), (2.0, Quantity::Force, 0)],
+            &[
+                Arg::figure(1.0, Quantity::Force, 0),
+                Arg::figure(2.0, Quantity::Force, 0),
+            ],
         );
-        assert_eq!(w.message, "N = 1 kN");
-        assert_eq!(w.figures.len(), 1);
+        assert_eq!(w.message(), "N = 1 kN");
     }
 }

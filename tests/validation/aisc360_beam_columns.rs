@@ -221,7 +221,7 @@ fn p_e1_reached_is_a_failure_not_a_negative_b1() {
     assert!(r
         .warnings
         .iter()
-        .any(|w| w.code == "b1-unbounded" && w.message.contains("axial_kn")));
+        .any(|w| w.code == "b1-unbounded" && w.message().contains("axial_kn")));
 }
 
 #[test]
@@ -354,11 +354,11 @@ fn b1_case(extra: serde_json::Value) -> CheckResult {
     check(&plate_i("aisc360-lrfd", 2500.0, with_keys(base, extra)))
 }
 
-fn warning<'a>(r: &'a CheckResult, code: &str) -> Option<&'a str> {
+fn warning(r: &CheckResult, code: &str) -> Option<String> {
     r.warnings
         .iter()
         .find(|w| w.code == code)
-        .map(|w| w.message.as_ref())
+        .map(|w| w.message().into_owned())
 }
 
 #[test]

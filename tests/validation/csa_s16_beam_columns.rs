@@ -397,7 +397,7 @@ fn c_e_length_is_the_unbraced_length_13_8_4() {
         .iter()
         .find(|w| w.code == "amplification-length-major")
         .expect("the raised length is said");
-    assert!(w.message.starts_with("k_major:") && w.message.contains("13.8.4"));
+    assert!(w.message().starts_with("k_major:") && w.message().contains("13.8.4"));
     // A sway frame: k > 1 for the compression check, K = 1 for U_1.
     let r = u1_case(json!({"frame_major": {"sway": true, "g_a": 1, "g_b": 1}}));
     assert!(r.modes[0].buckling_length_mm > 5000.0);

@@ -14,7 +14,7 @@ use crate::check::{CheckResult, Working};
 use crate::error::{Error, Result};
 use crate::member::Member;
 use crate::method::{Input, Method};
-use crate::outcome::Warning;
+use crate::outcome::{Arg, Warning};
 use crate::section::Section;
 use crate::trace::{put, step, sym, symbol, Scope, Trace};
 use crate::units::Quantity;
@@ -304,7 +304,8 @@ fn check_analysed(
             section: &section,
             material: &material,
         };
-        let result = crate::check::evaluate_within(&seg, method, working, unbraced).map_err(key)?;
+        let result =
+            crate::check::evaluate_within(&seg, method, working, Some(unbraced)).map_err(key)?;
         for w in &result.warnings {
             if !warnings.iter().any(|x| x.code == w.code) {
                 warnings.push(w.clone());
@@ -411,13 +412,13 @@ fn check_analysed(
         .iter()
         .fold(0.0_f64, |a, s| a.max(s.axial_kn));
     if model.carries_own_loads() && (largest - member.axial_kn).abs() > 1e-9 * largest.max(1.0) {
-        warnings.push(Warning::with_figures(
+        warnings.push(Warning::with_args(
             "axial-kn-from-model",
             "each segment is checked at its force from the model's loads (largest {}); \
              the member's axial_kn ({}) is not used",
             &[
-                (largest, Quantity::Force, 1),
-                (member.axial_kn, Quantity::Force, Warning::AS_GIVEN),
+                Arg::figure(largest, Quantity::Force, 1),
+                Arg::figure(member.axial_kn, Quantity::Force, Warning::AS_GIVEN),
             ],
         ));
     }

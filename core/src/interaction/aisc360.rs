@@ -61,7 +61,7 @@ use crate::bending::{moments, shape, Axis, AxisBending, Shape};
 use crate::error::Result;
 use crate::member::{Method, Moments, SpanLoad};
 use crate::method::common::{require_steel, warn_once_text, warn_once_with};
-use crate::outcome::Warning;
+use crate::outcome::{Arg, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{push, put, step, sym, symbol, Scope, Sym, Symbol, Trace};
 use crate::units::Quantity;
@@ -252,15 +252,15 @@ fn required(
             sym!("AISC 360-16 Eq. A-8-3"),
         );
         warn_once_with(warnings, "b1-unbounded", || {
-            Warning::with_figures(
+            Warning::with_args(
                 "b1-unbounded",
                 "axial_kn: alpha P_r = {} reaches the elastic buckling load in the plane of \
                  bending P_e1 = {} (AISC 360-16 Appendix 8.2.1), so the moments have no \
                  finite amplification B1 and the member fails; choose a stiffer section or a \
                  shorter buckling length",
                 &[
-                    (alpha * p_r, Quantity::Force, 1),
-                    (p_e1, Quantity::Force, 1),
+                    Arg::figure(alpha * p_r, Quantity::Force, 1),
+                    Arg::figure(p_e1, Quantity::Force, 1),
                 ],
             )
         });

@@ -59,7 +59,7 @@ use crate::bending::{given_modulus, moments, shape, Axis, Shape};
 use crate::error::{Error, Result};
 use crate::member::{Moments, SpanLoad};
 use crate::method::common::{require_steel, warn_once_text, warn_once_with};
-use crate::outcome::{Mode, Warning};
+use crate::outcome::{Arg, Mode, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
 use crate::units::Quantity;
@@ -330,13 +330,16 @@ fn axis_terms(
                 sym!("CSA S16-19 13.8.4"),
             );
             warn_once_with(warnings, "u1-unbounded", || {
-                Warning::with_figures(
+                Warning::with_args(
                     "u1-unbounded",
                     "axial_kn: C_f = {} reaches the Euler load in the plane of bending \
                      C_e = {} (CSA S16-19 13.8.4), so the moments have no finite \
                      amplification U_1 and the member fails; choose a stiffer section or a \
                      shorter member",
-                    &[(c_f, Quantity::Force, 1), (c_e, Quantity::Force, 1)],
+                    &[
+                        Arg::figure(c_f, Quantity::Force, 1),
+                        Arg::figure(c_e, Quantity::Force, 1),
+                    ],
                 )
             });
             f64::INFINITY

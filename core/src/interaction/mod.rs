@@ -23,7 +23,7 @@ use crate::bending::Bending;
 use crate::error::{Error, Result};
 use crate::member::{BucklingLengths, Unbraced};
 use crate::method::{Input, Method};
-use crate::outcome::{ModeResult, Warning};
+use crate::outcome::{Arg, ModeResult, Warning};
 use crate::section::Family;
 use crate::stability::Assessment;
 use crate::trace::Trace;
@@ -256,7 +256,7 @@ pub fn warn_raised(
     warnings: &mut Vec<Warning>,
     axis: crate::bending::Axis,
     own: &OwnLength,
-    (what, symbol, clause): (&str, &str, &str),
+    (what, symbol, clause): (&'static str, &'static str, &'static str),
 ) {
     use crate::bending::Axis;
     if !own.raised() {
@@ -267,22 +267,25 @@ pub fn warn_raised(
         Axis::Minor => ("amplification-length-minor", "minor"),
     };
     crate::method::common::warn_once_with(warnings, code, || {
-        Warning::with_figures(
+        Warning::with_args(
             code,
-            &format!(
-                "{}: the buckling length about the {name} axis, {{}}, is shorter than the \
-                 laterally unbraced length, {{}}; the member's own moment amplification {what} \
-                 takes {symbol} = {{}} (K = 1, no lateral translation of the ends: {clause} \
-                 allows a smaller value only where analysis justifies it, which the member file \
-                 does not say), a larger {what} than the buckling length gives. Braces that \
-                 shorten the unbraced length belong in buckling_model; moments that already \
-                 include the member's second-order effects take amplify_moments false",
-                own.field
-            ),
+            "{}: the buckling length about the {} axis, {}, is shorter than the laterally \
+             unbraced length, {}; the member's own moment amplification {} takes {} = {} (K = \
+             1, no lateral translation of the ends: {} allows a smaller value only where \
+             analysis justifies it, which the member file does not say), a larger {} than the \
+             buckling length gives. Braces that shorten the unbraced length belong in \
+             buckling_model; moments that already include the member's second-order effects \
+             take amplify_moments false",
             &[
-                (own.buckling_mm, Quantity::Span, 0),
-                (own.unbraced_mm, Quantity::Span, 0),
-                (own.mm, Quantity::Span, 0),
+                Arg::Word(own.field),
+                Arg::Word(name),
+                Arg::figure(own.buckling_mm, Quantity::Span, 0),
+                Arg::figure(own.unbraced_mm, Quantity::Span, 0),
+                Arg::Word(what),
+                Arg::Word(symbol),
+                Arg::figure(own.mm, Quantity::Span, 0),
+                Arg::Word(clause),
+                Arg::Word(what),
             ],
         )
     });

@@ -8,7 +8,7 @@ use std::f64::consts::PI;
 use crate::error::{positive, Error, Result};
 use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
-use crate::outcome::{Mode, ModeResult, Warning};
+use crate::outcome::{Arg, Mode, ModeResult, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{step, sym, Scope, Sym, Trace};
 use crate::units::Quantity;
@@ -170,8 +170,8 @@ pub fn warn_once(
     }
 }
 
-/// [`warn_once`] of a warning made by `make` (one with figures,
-/// [`Warning::with_figures`]), made only when its code is new.
+/// [`warn_once`] of a warning made by `make` (one with arguments,
+/// [`Warning::with_args`]), made only when its code is new.
 pub fn warn_once_with(
     warnings: &mut Vec<Warning>,
     code: &'static str,
@@ -322,17 +322,14 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                 );
                 if s.thickness_mm <= 0.0 && s.band_up_to_mm.is_finite() {
                     warn_once_with(warnings, "thickness-unknown", || {
-                        Warning::with_figures(
+                        Warning::with_args(
                             "thickness-unknown",
-                            &format!(
-                                "the section does not tell its plate thickness, so f_y = {{}} of \
-                                 {} for t <= {{}} is used; give a custom fy_mpa if the section is \
-                                 thicker",
-                                s.name
-                            ),
+                            "the section does not tell its plate thickness, so f_y = {} of {} \
+                             for t <= {} is used; give a custom fy_mpa if the section is thicker",
                             &[
-                                (f, Quantity::Stress, Warning::AS_GIVEN),
-                                (s.band_up_to_mm, Quantity::Length, Warning::AS_GIVEN),
+                                Arg::figure(f, Quantity::Stress, Warning::AS_GIVEN),
+                                Arg::Word(s.name),
+                                Arg::figure(s.band_up_to_mm, Quantity::Length, Warning::AS_GIVEN),
                             ],
                         )
                     });
@@ -361,11 +358,11 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                 && !matches!(input.section.family, Family::Chs | Family::Rhs)
             {
                 warn_once_with(warnings, "a500-shape-unknown", || {
-                    Warning::with_figures(
+                    Warning::with_args(
                         "a500-shape-unknown",
                         "ASTM A500 sets F_y by the hollow section's shape (round or shaped); this \
                          section is neither, so the lower, round value F_y = {} is used",
-                        &[(f, Quantity::Stress, 0)],
+                        &[Arg::figure(f, Quantity::Stress, 0)],
                     )
                 });
             }
