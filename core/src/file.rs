@@ -305,25 +305,6 @@ pub fn from_parsed(value: &Value) -> Result<MemberFile> {
     read_current(&owned)
 }
 
-/// A member file deserialised straight from its text by its derived reader
-/// (no tree of values in between), kept only where [`from_parsed`] reads
-/// the same text to the same file: the format's name, a version read as it
-/// stands, no two members of one id. `None` otherwise; the caller then
-/// reads the text through [`from_parsed`], which migrates or names what is
-/// wrong. (Anything else the derive refuses, such as a `null` title or a
-/// key written twice, fails the whole derived read before this is reached,
-/// and takes the same way.)
-pub fn as_read(mut file: MemberFile) -> Option<MemberFile> {
-    if file.format != FORMAT
-        || !reads_as_current(file.version)
-        || check_unique_ids(&file.members).is_err()
-    {
-        return None;
-    }
-    file.version = VERSION;
-    Some(file)
-}
-
 /// The members, title and sheet of a member file's value in the current
 /// version.
 fn read_current(value: &Value) -> Result<MemberFile> {

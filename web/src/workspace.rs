@@ -100,53 +100,8 @@ pub fn decode(text: &str) -> Result<Workspace, String> {
     decode_keeping(text).map(|(ws, _)| ws)
 }
 
-/// The stored workspace as its derived reader takes it from the text.
-#[derive(serde::Deserialize)]
-struct Stored {
-    format: String,
-    version: u64,
-    #[serde(default)]
-    revision: u64,
-    #[serde(default)]
-    active: u64,
-    lists: Vec<MemberFile>,
-}
-
-/// The workspace read straight from its text, when every part of it reads
-/// as it stands ([`file::as_read`]); `None` for anything else, which
-/// [`decode_keeping`] then reads through a tree of values. The app's own
-/// writing ([`encode`]) always takes this way: for the 1,000-member list
-/// it took 0.68 ms natively against 3.0 ms through the tree (tree dropped
-/// included), and it leaves no tree to free (bench/web.md, the notes on the
-/// list's first frame).
-fn decode_direct(text: &str) -> Option<Workspace> {
-    let stored: Stored = serde_json::from_str(text).ok()?;
-    if stored.format != FORMAT || stored.version == 0 || stored.version > VERSION {
-        return None;
-    }
-    let lists = stored
-        .lists
-        .into_iter()
-        .map(file::as_read)
-        .collect::<Option<Vec<_>>>()?;
-    let mut ws = Workspace::new(lists);
-    ws.revision = stored.revision;
-    ws.active = (stored.active as usize).min(ws.lists.len().saturating_sub(1));
-    Some(ws)
-}
-
-/// [`decode`], handing back the parsed text with the workspace (none when
-/// it was read straight from the text).
+/// [`decode`], handing back the parsed text with the workspace.
 pub fn decode_keeping(text: &str) -> Result<(Workspace, Parsed), String> {
-    if let Some(ws) = decode_direct(text) {
-        return Ok((ws, Parsed { _tree: Value::Null }));
-    }
-    decode_through_tree(text)
-}
-
-/// [`decode_keeping`] through the parsed tree of values: migrates older
-/// lists, and says in words what is wrong.
-fn decode_through_tree(text: &str) -> Result<(Workspace, Parsed), String> {
     let value: Value = serde_json::from_str(text)
         .map_err(|e| format!("the saved workspace is not valid JSON ({e})"))?;
     let obj: &Map<String, Value> = value
@@ -255,88 +210,6 @@ mod tests {
         assert_ne!(bad_member, good);
         let e = decode(&bad_member).unwrap_err();
         assert!(e.contains("list 1") && e.contains("length_mm"), "{e}");
-    }
-
-    /// The straight read of the text gives what the read through the tree
-    /// gives, or steps aside for it; never something else.
-    fn same_either_way(text: &str) -> bool {
-        let direct = decode_direct(text);
-        let tree = decode_through_tree(text).map(|(w, _)| w);
-        match (&direct, &tree) {
-            (Some(d), Ok(t)) => assert_eq!(d, t, "{text}"),
-            (Some(d), Err(e)) => panic!("read straight as {d:?}, refused through the tree: {e}"),
-            (None, _) => {}
-        }
-        assert_eq!(decode(text).ok(), tree.clone().ok());
-        direct.is_some()
-    }
-
-    #[test]
-    fn straight_read_agrees_with_the_tree() {
-        let mut ws = Workspace::new(demo_lists());
-        ws.lists.push(MemberFile::new("Second"));
-        ws.lists[1].sheet.job = "Grain store".into();
-        ws.revision = 12;
-        ws.active = 1;
-        let good = encode(&ws);
-        // The app's own writing is read straight.
-        assert!(same_either_way(&good));
-        assert!(same_either_way(&encode(&Workspace::new(vec![
-            MemberFile::new("")
-        ]))));
-        let fixture = include_str!("../../tests/fixtures/stored/workspace-v1.json");
-        assert!(same_either_way(fixture));
-        assert!(decode_direct(fixture)
-            .is_some_and(|w| w.lists.iter().all(|l| l.version == file::VERSION)));
-        // Anything else: the same workspace, or the tree's own answer.
-        let first_length = good.find("\"length_mm\": ").unwrap();
-        let at = |key: &str| good.find(key).unwrap();
-        let twice = |key: &str, extra: &str| {
-            let i = at(key);
-            format!("{}{extra}, {}", &good[..i], &good[i..])
-        };
-        // (what, made into what): once each, the first place it stands.
-        let swaps = [
-            ("\"title\": \"", "\"title\": null, \"x\": \""),
-            ("\"format\":\"strutline.workspace\"", "\"format\":\"other\""),
-            ("\"version\":1,", "\"version\":0,"),
-            ("\"version\":1,", "\"version\":9,"),
-            ("\"revision\":12", "\"revision\":null"),
-            ("\"revision\":12", "\"revision\":-1"),
-            ("\"active\":1", "\"active\":99"),
-            ("\"version\": 3", "\"version\": 1"),
-            ("\"version\": 3", "\"version\": 4"),
-            ("\"format\": \"strutline.members\"", "\"format\": \"x\""),
-            ("\"job\": \"Grain store\"", "\"jobb\": \"Grain store\""),
-            ("\"length_mm\": 2800.0", "\"length_mm\": \"long\""),
-            ("\"length_mm\": 2800.0", "\"length_mm\": 2800"),
-            ("\"id\": \"C1\"", "\"id\": \"P1\""),
-            ("\"revision\":12,", "\"unknown\": [1, {}], \"revision\":12,"),
-            ("{\"revision\"", "{\"a\": 1, \"revision\""),
-        ];
-        // A key written twice: (the key, the one put before it).
-        let repeats = [
-            ("\"depth_mm\"", "\"depth_mm\": 1.0"),
-            ("\"kind\"", "\"kind\": \"rect\""),
-            ("\"method\"", "\"method\": \"euler\""),
-            ("\"fy_mpa\"", "\"fy_mpa\": 1.0"),
-            ("\"members\"", "\"members\": []"),
-            ("\"lists\"", "\"lists\": []"),
-            ("\"active\"", "\"active\": 0"),
-        ];
-        let variants = swaps
-            .iter()
-            .map(|(from, to)| good.replacen(from, to, 1))
-            .chain(repeats.iter().map(|(key, extra)| twice(key, extra)))
-            .chain([format!(
-                "{}\"length_mm\": 1.0, {}",
-                &good[..first_length],
-                &good[first_length..]
-            )]);
-        for v in variants {
-            assert_ne!(v, good);
-            same_either_way(&v);
-        }
     }
 
     #[test]
