@@ -19,9 +19,13 @@
 //                  after the rows in view fill the list box, the main
 //                  thread's wall and CPU time (the trace's thread clock:
 //                  steadier than wall time on a shared machine), the wasm
-//                  functions compiled lazily on their first call, and the
-//                  trace events with the most time of their own. Any
-//                  build will do (no names needed).
+//                  functions compiled lazily on their first call, the
+//                  font lookups (FontCache::GetFontPlatformData, each new
+//                  family, size and weight; on Linux the first of a size
+//                  asks the browser process synchronously for its render
+//                  style, GetWebFontRenderStyleForStrike) and the trace
+//                  events with the most time of their own. Any build will
+//                  do (no names needed).
 // Prints the functions with the most time of their own and the most time
 // under them (self + callees). Function names are there only in a build
 // that keeps them: `cargo xtask dist --keep-names` (dist-names/), served
@@ -130,7 +134,7 @@ async function traceThousand() {
     cdp.on("Tracing.dataCollected", (e) => events.push(...e.value));
     const complete = new Promise((r) => cdp.once("Tracing.tracingComplete", r));
     await cdp.send("Tracing.start", {
-      traceConfig: { includedCategories: ["devtools.timeline", "blink.user_timing", "v8.wasm", "toplevel"] },
+      traceConfig: { includedCategories: ["devtools.timeline", "blink.user_timing", "v8.wasm", "toplevel", "fonts"] },
       transferMode: "ReportEvents",
     });
     await page.goto(URL_ARG, { waitUntil: "load" });
@@ -160,11 +164,16 @@ async function traceThousand() {
     const byName = new Map();
     for (const [e, us] of own) byName.set(e.name, (byName.get(e.name) || 0) + us / 1000);
     const lazy = main.filter((e) => e.name === "wasm.CompileLazy");
+    const fonts = main.filter((e) => e.name === "FontCache::GetFontPlatformData");
+    const strikes = main.filter((e) => e.name === "WebSandboxSupportLinux::GetWebFontRenderStyleForStrike");
     return {
       wall: (b.ts - a.ts) / 1000,
       mounted: m ? (m.ts - a.ts) / 1000 : NaN,
       cpu: cpu / 1000,
       lazy: lazy.length,
+      fonts: fonts.length,
+      fontMs: fonts.reduce((t, e) => t + clip(e), 0) / 1000,
+      strikes: strikes.length,
       byName,
     };
   } finally {
@@ -180,11 +189,15 @@ if (CASE === "thousand-trace") {
     all.push(r);
     console.log(
       `run ${i + 1}: ready to frame ${r.wall.toFixed(1)} ms (start() ${r.mounted.toFixed(1)} ms), ` +
-        `main thread CPU ${r.cpu.toFixed(1)} ms, ${r.lazy} wasm functions compiled lazily`,
+        `main thread CPU ${r.cpu.toFixed(1)} ms, ${r.lazy} wasm functions compiled lazily, ` +
+        `${r.fonts} font lookups (${r.fontMs.toFixed(1)} ms wall, ${r.strikes} render-style calls to the browser process)`,
     );
   }
   const med = (xs) => [...xs].sort((x, y) => x - y)[Math.floor(xs.length / 2)];
-  console.log(`median of ${runs}: ready to frame ${med(all.map((r) => r.wall)).toFixed(1)} ms, CPU ${med(all.map((r) => r.cpu)).toFixed(1)} ms`);
+  console.log(
+    `median of ${runs}: ready to frame ${med(all.map((r) => r.wall)).toFixed(1)} ms, CPU ${med(all.map((r) => r.cpu)).toFixed(1)} ms, ` +
+      `font lookups ${med(all.map((r) => r.fonts))} (${med(all.map((r) => r.fontMs)).toFixed(1)} ms wall)`,
+  );
   const names = new Map();
   for (const r of all) for (const [k, ms] of r.byName) names.set(k, (names.get(k) || 0) + ms / runs);
   print("trace events, time of their own (mean of the runs, wall)", names, TOP);
