@@ -299,6 +299,7 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
         interaction,
         bending,
         trace,
+        classified: _,
     } = parts;
     Ok(verdict.with_lists(
         input.member.id.clone(),
@@ -354,6 +355,9 @@ pub struct Scratch {
     interaction: Vec<interaction::Check>,
     bending: Option<Bending>,
     trace: Trace,
+    /// Where the cross-section is classified ([`stability::assess`]),
+    /// started afresh by each check.
+    classified: stability::classify::Classified,
 }
 
 /// A check's outcome borrowed from the [`Scratch`] that worked it: the
@@ -463,6 +467,7 @@ impl Scratch {
             interaction: Vec::new(),
             bending: None,
             trace: working.trace_for(moments),
+            classified: stability::classify::Classified::default(),
         }
     }
 
@@ -529,6 +534,7 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
         interaction: checks,
         bending: bending_slot,
         trace,
+        classified,
     } = parts;
     let m = input.member;
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
@@ -542,7 +548,7 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
         }
     }
     method::prelude(method, input, trace, warnings).map_err(wrap)?;
-    let assessment = stability::assess(method, input, trace, warnings);
+    let assessment = stability::assess(method, input, trace, warnings, classified);
     // EN 1993-1-1 6.3.1.3 / 6.3.1.4 for Class 4: the method's formulas with
     // A_eff in place of A (N_cr from the gross section).
     let effective_section = assessment.en_effective.map(|eff| Section {
@@ -594,10 +600,10 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     if aisc {
         if let Some(c) = assessment.classified.filter(|c| c.is_slender()) {
-            stability::aisc_slender(&mut major, &c, input, trace);
-            stability::aisc_slender(&mut minor, &c, input, trace);
+            stability::aisc_slender(&mut major, c, input, trace);
+            stability::aisc_slender(&mut minor, c, input, trace);
             if let Some(t) = twist.as_mut() {
-                stability::aisc_slender(t, &c, input, trace);
+                stability::aisc_slender(t, c, input, trace);
             }
         }
         if input.section.family == Family::Angle && e5.is_none() {

@@ -7,7 +7,7 @@ pub mod schema;
 
 use crate::buckling::chart::{self, Frame, FrameKey};
 use crate::buckling::model::BucklingModel;
-use crate::error::{non_negative, positive, Error, Result};
+use crate::error::{all_positive, non_negative, positive, Error, Result};
 use crate::material::{MaterialSpec, Product, Stock};
 use crate::section::{Section, SectionSpec};
 
@@ -550,15 +550,23 @@ impl Member {
                 minor_mm: self.lcr_minor_mm.unwrap_or(self.k_minor * length),
                 torsion_mm: self.lcr_torsion_mm.unwrap_or(self.k_torsion * length),
             };
-            let k = |v: f64| v.is_finite() && v > 0.0;
-            let l = |v: f64| (MIN_LENGTH_MM..=MAX_LENGTH_MM).contains(&v);
-            if k(self.k_major)
-                && k(self.k_minor)
-                && k(self.k_torsion)
-                && l(length)
-                && l(lengths.major_mm)
-                && l(lengths.minor_mm)
-                && l(lengths.torsion_mm)
+            // The lengths at once: the least and the most within the
+            // bounds, and no NaN (which min and max pass over) in the sum.
+            let (mut least, mut most, mut sum) = (f64::INFINITY, f64::NEG_INFINITY, 0.0);
+            for v in [
+                length,
+                lengths.major_mm,
+                lengths.minor_mm,
+                lengths.torsion_mm,
+            ] {
+                least = least.min(v);
+                most = most.max(v);
+                sum += v;
+            }
+            if all_positive([self.k_major, self.k_minor, self.k_torsion])
+                && least >= MIN_LENGTH_MM
+                && most <= MAX_LENGTH_MM
+                && !sum.is_nan()
             {
                 return Ok(lengths);
             }

@@ -399,7 +399,10 @@ mod tests {
             }
         }
         assert!(most <= 3, "{most} evaluations");
-        assert!(f64::from(total) / f64::from(roots) < 3.0, "{total} over {roots}");
+        assert!(
+            f64::from(total) / f64::from(roots) < 3.0,
+            "{total} over {roots}"
+        );
     }
 
     #[test]
