@@ -540,11 +540,11 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
     let lengths = m.buckling_lengths().map_err(wrap)?;
     for (frame, which) in [
-        (m.frame_major, crate::buckling::chart::FrameKey::Major),
-        (m.frame_minor, crate::buckling::chart::FrameKey::Minor),
+        (&m.frame_major, crate::buckling::chart::FrameKey::Major),
+        (&m.frame_minor, crate::buckling::chart::FrameKey::Minor),
     ] {
         if let Some(f) = frame {
-            crate::buckling::chart::work(&f, which, trace).map_err(wrap)?;
+            crate::buckling::chart::work(f, which, trace).map_err(wrap)?;
         }
     }
     method::prelude(method, input, trace, warnings).map_err(wrap)?;
@@ -662,14 +662,13 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
         f64::INFINITY
     };
     // Without moments there is no bending side (bending::check would say
-    // so itself, after looking for a moment again).
-    *bending_slot = if moments {
+    // so itself, after looking for a moment again); the slot is empty on
+    // entry.
+    if moments {
         // The bending working: some 20 to 30 lines an axis.
         trace.reserve(64);
-        bending::check(method, input, trace, warnings).map_err(wrap)?
-    } else {
-        None
-    };
+        *bending_slot = bending::check(method, input, trace, warnings).map_err(wrap)?;
+    }
     let (utilisation, governing_check, passes) = match &*bending_slot {
         // Without moments: the axial check alone (asked first, as the
         // secant check below would find no moment either).

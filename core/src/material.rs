@@ -562,7 +562,7 @@ pub fn suggestions(grade: &str) -> Vec<String> {
 fn steel_at(grade: &SteelGrade, thickness_mm: f64) -> Result<Steel> {
     // A section that does not tell its thickness (given properties) is read
     // in the thinnest band; the methods warn about it.
-    let t = if thickness_mm.is_finite() && thickness_mm > 0.0 {
+    let t = if crate::error::all_positive([thickness_mm]) {
         thickness_mm
     } else {
         0.0

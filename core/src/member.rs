@@ -532,6 +532,7 @@ impl Member {
 
     /// The member's section, built: a catalogue designation is resolved
     /// here, once, and an unknown one is [`Error::UnknownDesignation`].
+    #[inline]
     pub fn build_section(&self) -> Result<Section> {
         crate::catalogue::build(&self.section)
     }
@@ -769,7 +770,9 @@ impl Member {
                 });
             }
         }
-        if self.id.trim().is_empty() {
+        // trim().is_empty(), without scanning from both ends: stops at
+        // the first character that is not white space.
+        if self.id.chars().all(char::is_whitespace) {
             return Err(Error::Geometry {
                 field: "id",
                 reason: "every member needs an id; give it a short name such as \"C1\"".into(),

@@ -231,7 +231,7 @@ pub fn extreme_fibre_mm(input: &Input<'_>, mode: Mode, warnings: &mut Vec<Warnin
         Mode::Major => p.w_el_major_mm3,
         _ => p.w_el_minor_mm3,
     };
-    if w.is_finite() && w > 0.0 && i.is_finite() && i > 0.0 {
+    if all_positive([w]) && all_positive([i]) {
         return i / w;
     }
     let major = matches!(mode, Mode::Major);

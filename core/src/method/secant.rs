@@ -21,7 +21,7 @@
 
 use std::f64::consts::FRAC_PI_2;
 
-use crate::error::{Error, Result};
+use crate::error::{all_positive, Error, Result};
 use crate::member::Member;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
 use crate::method::{euler, Input};
@@ -85,7 +85,7 @@ fn solve(f: f64, e: f64, lambda: f64, ecc: f64) -> (f64, u32) {
         let halley = slope - value * curve / (2.0 * slope);
         (
             value,
-            if halley.is_finite() && halley > 0.0 {
+            if all_positive([halley]) {
                 halley
             } else {
                 slope
@@ -93,7 +93,7 @@ fn solve(f: f64, e: f64, lambda: f64, ecc: f64) -> (f64, u32) {
         )
     };
     let hi0 = f.min(sigma_e);
-    if !(hi0.is_finite() && hi0 > 0.0) {
+    if !all_positive([hi0]) {
         return (0.0, 0);
     }
     // The root is hi0 itself where h(hi0) <= 0. As cos theta is 0 at

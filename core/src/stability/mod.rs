@@ -628,7 +628,7 @@ pub fn twist_mode(
     }
     let n = crit.n_twist;
     let a = p.area_mm2;
-    if !(n > 0.0 && n.is_finite()) {
+    if !crate::error::all_positive([n]) {
         return Err(crate::error::Error::OutOfRange {
             field: "torsion_mm4",
             value: input.section.props.torsion_mm4,
