@@ -539,6 +539,7 @@ impl Member {
 
     /// Checks every scalar field of the member (not the section or material,
     /// which check themselves) and returns its buckling lengths.
+    #[inline]
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
         // The usual case first, with one test of every value (no frames,
         // every k finite and above zero, every length within the bounds,
@@ -628,6 +629,7 @@ impl Member {
     }
 
     /// Whether the member carries any design moment.
+    #[inline]
     pub fn has_moments(&self) -> bool {
         // Moments::is_zero of both axes, on the fields themselves.
         !(self.m_major_a_knm == 0.0
