@@ -163,7 +163,7 @@ pub fn write_summary(out: &mut Vec<u8>, r: &CheckResult) -> serde_json::Result<(
         out.extend_from_slice(b"{\"code\":");
         text(out, w.code)?;
         out.extend_from_slice(b",\"message\":");
-        text(out, &w.message)?;
+        text(out, &w.message())?;
         out.push(b'}');
     }
     out.extend_from_slice(b"]}");
@@ -434,7 +434,7 @@ impl Table {
         }
         for r in results {
             for w in &r.warnings {
-                out.push_str(&format!("warning {}: {}\n", r.id, w.message));
+                out.push_str(&format!("warning {}: {}\n", r.id, w.message()));
             }
         }
         out
@@ -443,7 +443,6 @@ impl Table {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::panic)]
     use super::*;
 
     /// Every member of the examples (moments, interaction, frames, a

@@ -13,7 +13,7 @@ use crate::bending::{self, Bending};
 use crate::error::Result;
 use crate::interaction;
 use crate::material::Material;
-use crate::member::Member;
+use crate::member::{Member, Unbraced};
 use crate::method::{self, Input, Method};
 pub use crate::outcome::{Mode, ModeResult, Warning};
 use crate::section::{Family, Properties, Section};
@@ -65,9 +65,8 @@ fn limit_exceeded<'w>(
         warnings
             .iter()
             .find(|w| w.code == "slenderness-over-200")
-            .map_or("a slenderness limit of the code is exceeded", |w| {
-                &w.message
-            }),
+            .and_then(Warning::fixed)
+            .unwrap_or("a slenderness limit of the code is exceeded"),
     )
 }
 
@@ -291,8 +290,21 @@ pub fn evaluate(input: &Input<'_>, method: Method, working: Working) -> Result<C
     if input.member.buckling_model.is_some() {
         return buckle::check_as(input, method, working);
     }
+    evaluate_within(input, method, working, None)
+}
+
+/// [`evaluate`] of a member without a buckling model whose laterally
+/// unbraced lengths are `unbraced` (a buckling model's segment: the model's
+/// braces bound them, [`Member::unbraced`](crate::member::Member::unbraced));
+/// `None`: the member's own, worked only where an interaction needs them.
+pub(crate) fn evaluate_within(
+    input: &Input<'_>,
+    method: Method,
+    working: Working,
+    unbraced: Option<Unbraced>,
+) -> Result<CheckResult> {
     let mut parts = Scratch::sized(working, input.member.has_moments());
-    let verdict = work(input, method, &mut parts)?;
+    let verdict = work(input, method, &mut parts, unbraced)?;
     let Scratch {
         modes,
         warnings,
@@ -510,7 +522,7 @@ impl Scratch {
             self.interaction.clear();
             self.bending = None;
             self.trace.clear();
-            work(input, method, self)?
+            work(input, method, self, None)?
         };
         Ok(Brief {
             verdict,
@@ -527,7 +539,12 @@ impl Scratch {
 /// written into `parts` (empty on entry). Inlined into both callers, so
 /// [`evaluate`]'s result is written in place as before.
 #[inline(always)]
-fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdict> {
+fn work(
+    input: &Input<'_>,
+    method: Method,
+    parts: &mut Scratch,
+    unbraced: Option<Unbraced>,
+) -> Result<Verdict> {
     let Scratch {
         modes,
         warnings,
@@ -631,7 +648,7 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
         let reason = warnings
             .iter()
             .find(|w| w.code == "outside-code-scope")
-            .map(|w| w.message.to_string())
+            .map(|w| w.message().into_owned())
             .unwrap_or_else(|| "the section is outside the scope of this code".into());
         return Err(crate::error::Error::NotApplicable {
             method: method.key(),
@@ -707,6 +724,7 @@ fn work(input: &Input<'_>, method: Method, parts: &mut Scratch) -> Result<Verdic
                     method,
                     input,
                     lengths: &lengths,
+                    unbraced: unbraced.unwrap_or_else(|| m.unbraced()),
                     modes,
                     governing: &governing,
                     bending: b,

@@ -56,7 +56,6 @@ pub fn parse(text: &str) -> Option<f64> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use proptest::prelude::*;
 

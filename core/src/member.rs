@@ -474,6 +474,19 @@ pub struct BucklingLengths {
     pub torsion_mm: f64,
 }
 
+/// The laterally unbraced lengths of a member, mm ([`Member::unbraced`]):
+/// the length of its own moment amplification (K = 1).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct Unbraced {
+    /// About the major axis.
+    pub major_mm: f64,
+    /// About the minor axis.
+    pub minor_mm: f64,
+    /// Whether a `buckling_model` gave the buckling lengths (and its
+    /// braces these).
+    pub from_model: bool,
+}
+
 impl Member {
     /// A member with the keys every member needs and every option at its
     /// member-file default (effective-length factors 1, no buckling
@@ -606,6 +619,57 @@ impl Member {
                 pick(self.lcr_torsion_mm, "lcr_torsion_mm", k_torsion)?,
             )?,
         })
+    }
+
+    /// The laterally unbraced lengths about both axes ([`Unbraced`]).
+    pub fn unbraced(&self) -> Unbraced {
+        if self.buckling_model.is_none() {
+            return Unbraced {
+                major_mm: self.length_mm,
+                minor_mm: self.length_mm,
+                from_model: false,
+            };
+        }
+        Unbraced {
+            major_mm: self.unbraced_mm(crate::buckling::Axis::Major),
+            minor_mm: self.unbraced_mm(crate::buckling::Axis::Minor),
+            from_model: self.buckling_model.is_some(),
+        }
+    }
+
+    /// The laterally unbraced length about `axis`, mm: the member length,
+    /// or with a `buckling_model` the longest stretch between points held
+    /// rigidly against translation about that axis (the two ends and every
+    /// `fixed` brace that holds it). A spring brace does not shorten it (the
+    /// safe reading), nor do the ends' supports: a free end still bounds the
+    /// member. The length of a member's own moment amplification (AISC
+    /// 360-16 Appendix 8.2.1's L_c1 with K1 = 1, CSA S16-19 13.8.4's L).
+    fn unbraced_mm(&self, axis: crate::buckling::Axis) -> f64 {
+        let length = self.length_mm;
+        let Some(model) = &self.buckling_model else {
+            return length;
+        };
+        let held = || {
+            model
+                .restraints
+                .iter()
+                .filter(move |b| {
+                    b.axis.holds(axis)
+                        && b.translation == crate::buckling::Fixity::Fixed
+                        && b.at_mm > 0.0
+                        && b.at_mm < length
+                })
+                .map(|b| b.at_mm)
+        };
+        // Each stretch runs from a held point (end A or a brace) to the
+        // nearest held point beyond it; braces are few, so no sorting.
+        std::iter::once(0.0)
+            .chain(held())
+            .map(|from| {
+                let to = held().filter(|&x| x > from).fold(length, f64::min);
+                to - from
+            })
+            .fold(0.0, f64::max)
     }
 
     /// The moments about the major axis (version 3 keys).
@@ -867,7 +931,6 @@ impl Method {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
 
     /// The one-test path of `buckling_lengths` gives what the field-by-field

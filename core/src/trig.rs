@@ -142,7 +142,7 @@ pub fn tan(x: f64) -> f64 {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::panic, clippy::disallowed_methods)]
+    #![allow(clippy::disallowed_methods)]
     // The standard library's functions are the reference here.
     use super::*;
     use proptest::prelude::*;

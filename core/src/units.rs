@@ -209,6 +209,28 @@ impl Quantity {
     }
 }
 
+impl Quantity {
+    /// The engine's own unit of the quantity, as its results and working
+    /// write it (the member file's unit: mm for every length, kN, MPa,
+    /// kNm, ...); [`Quantity::of_unit`] reads it back.
+    pub fn engine_unit(self) -> &'static str {
+        match self {
+            Quantity::Length | Quantity::Span => "mm",
+            Quantity::Area => "mm2",
+            Quantity::Modulus => "mm3",
+            Quantity::SecondMoment => "mm4",
+            Quantity::Warping => "mm6",
+            Quantity::Force => "kN",
+            Quantity::Stress => "MPa",
+            Quantity::Moment => "kNm",
+            Quantity::Stiffness => "kN/mm",
+            Quantity::RotationalStiffness => "kNm/rad",
+            Quantity::LineLoad => "kN/m",
+            Quantity::Dimensionless => "",
+        }
+    }
+}
+
 /// The SI unit suffixes of member-file keys.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 enum SiSuffix {
@@ -534,6 +556,19 @@ mod tests {
         clippy::panic
     )]
     use super::*;
+
+    #[test]
+    fn the_engine_unit_reads_back_as_its_quantity() {
+        for q in ALL_Q {
+            let back = Quantity::of_unit(q.engine_unit());
+            let want = if q == Quantity::Span {
+                Quantity::Length
+            } else {
+                q
+            };
+            assert_eq!(back, Some(want), "{q:?}");
+        }
+    }
 
     fn rel(a: f64, b: f64) -> f64 {
         if b == 0.0 {

@@ -204,7 +204,7 @@ fn typed_hss_wall_is_said_to_be_the_design_wall() {
         .iter()
         .find(|w| w.code == "wall-as-design-thickness")
         .unwrap();
-    assert!(w.message.contains("0.93"), "{}", w.message);
+    assert!(w.message().contains("0.93"), "{}", w.message());
     // The catalogue applies 0.93 t_nom itself: no warning.
     let mut cat = typed.clone();
     cat.section =

@@ -175,9 +175,9 @@ fn slenderness_over_200_does_not_satisfy_10_4_2_1() {
         .find(|w| w.code == "slenderness-over-200")
         .unwrap();
     assert!(
-        w.message.contains("10.4.2.1") && w.message.contains("255"),
+        w.message().contains("10.4.2.1") && w.message().contains("255"),
         "{}",
-        w.message
+        w.message()
     );
     // At 200 exactly the member still satisfies the clause.
     let res = check_member(&column(200.0, None)).unwrap();

@@ -363,3 +363,59 @@ fn properties_utilisation_rises_and_amplification_only_raises() {
         }
     }
 }
+
+// 13.8.4: C_e = pi^2 E I / L^2 with L the member's (unbraced) length, K =
+// 1 (recalled from memory of CSA S16-19; a frame's sway is U_2's, 8.4). Our
+// own hand calculation from that formula for the 300 x 300 x 20 x 12 I (I_x
+// = 253.176e6 mm4, E = 200 000 MPa), C_f = 2000 kN, M_x = 150 kNm at both
+// ends (omega_1 = 1.0), in Python 3: L = 4000 mm gives C_ex = 31 234.337 kN
+// and U_1x = 1.0684127; L = 2000 mm gives 124 937.348 kN and 1.0162684.
+
+/// The finite-element analysis' length between fixed braces against the
+/// exact spacing (alpha_cr converged to 1e-6).
+const ANALYSIS: f64 = 2e-5;
+
+fn u1_case(extra: serde_json::Value) -> CheckResult {
+    let base = json!({"lt_restrained": true, "m_major_a_knm": 150, "m_major_b_knm": 150});
+    check(&member(
+        plate_i(300.0, 300.0, 20.0, 12.0),
+        4000.0,
+        2000.0,
+        with_keys(base, extra),
+    ))
+}
+
+#[test]
+fn c_e_length_is_the_unbraced_length_13_8_4() {
+    // k < 1: L stays the member's 4000 mm, and the result says so.
+    let r = u1_case(json!({"k_major": 0.7}));
+    assert_close(step(&r, "L_x"), 4000.0, HAND, "L for C_ex (mm)");
+    assert_close(step(&r, "C_ex"), 31234.33704812749, HAND, "C_ex (kN)");
+    assert_close(step(&r, "U_1x"), 1.0684127023885464, HAND, "U_1x");
+    let w = r
+        .warnings
+        .iter()
+        .find(|w| w.code == "amplification-length-major")
+        .expect("the raised length is said");
+    assert!(w.message().starts_with("k_major:") && w.message().contains("13.8.4"));
+    // A sway frame: k > 1 for the compression check, K = 1 for U_1.
+    let r = u1_case(json!({"frame_major": {"sway": true, "g_a": 1, "g_b": 1}}));
+    assert!(r.modes[0].buckling_length_mm > 5000.0);
+    assert_close(step(&r, "L_x"), 4000.0, HAND, "L, sway frame (mm)");
+    assert_close(step(&r, "U_1x"), 1.0684127023885464, HAND, "U_1x");
+    // A buckling model braced rigidly at mid-height about the major axis:
+    // L = 2000 mm.
+    let pinned = json!({"translation": "fixed", "rotation": "free"});
+    let r = u1_case(json!({"buckling_model": {
+        "ends": {"a": {"major": pinned, "minor": pinned}, "b": {"major": pinned, "minor": pinned}},
+        "restraints": [{"at_mm": 2000, "axis": "major", "translation": "fixed"}]
+    }}));
+    assert_close(step(&r, "L_x"), 2000.0, ANALYSIS, "L, braced model (mm)");
+    assert_close(
+        step(&r, "C_ex"),
+        124937.34819250996,
+        2.0 * ANALYSIS,
+        "C_ex (kN)",
+    );
+    assert_close(step(&r, "U_1x"), 1.0162684491686624, ANALYSIS, "U_1x");
+}

@@ -749,7 +749,7 @@ fn annex_a_at_the_elastic_critical_load_never_passes() {
         .iter()
         .find(|w| w.code == "annex-a-unbounded")
         .expect("annex-a-unbounded warning");
-    assert!(w.message.starts_with("axial_kn:"), "{}", w.message);
+    assert!(w.message().starts_with("axial_kn:"), "{}", w.message());
 }
 
 #[test]
@@ -1084,12 +1084,13 @@ fn passes_only_when_every_equation_is_within_one() {
 // warning `interaction-annex-open` and in the working.
 
 /// The warning that names the governing annex.
-fn open_warning(r: &CheckResult) -> &str {
-    &r.warnings
+fn open_warning(r: &CheckResult) -> String {
+    r.warnings
         .iter()
         .find(|w| w.code == "interaction-annex-open")
         .unwrap_or_else(|| panic!("{}: no interaction-annex-open: {:?}", r.id, r.warnings))
-        .message
+        .message()
+        .into_owned()
 }
 
 /// The last working line of an equation: the one that names the annex.

@@ -114,9 +114,9 @@ fn defaults_of_table_3_1_are_said() {
         .find(|w| w.code == "timber-defaults-assumed")
         .unwrap();
     assert!(
-        w.message.contains("0.80") && w.message.contains("medium-term"),
+        w.message().contains("0.80") && w.message().contains("medium-term"),
         "{}",
-        w.message
+        w.message()
     );
     // Both given: nothing assumed.
     let mut m = column(150.0, 100.0, "C24", 3000.0);

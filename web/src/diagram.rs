@@ -156,7 +156,6 @@ fn one(h: &mut Html, name: &str, m: &Moments, sys: UnitSystem) {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
     use crate::demo;
 

@@ -127,7 +127,7 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
             if sheet {
                 h.push(&checks_html(r, sys));
             }
-            h.push(&warnings_in(r, &said));
+            h.push(&warnings_in(r, sys, &said));
         }
     }
     h
@@ -228,12 +228,13 @@ fn split_unit(s: &str) -> (&str, &str) {
     s.split_once(' ').unwrap_or((s, ""))
 }
 
-/// The warnings of a result as a list (empty when there are none).
-pub fn warnings_html(r: &CheckResult) -> Html {
-    warnings_in(r, &|m| m.to_string())
+/// The warnings of a result as a list (empty when there are none), their
+/// numbers in `sys` (core's `Warning::text`).
+pub fn warnings_html(r: &CheckResult, sys: UnitSystem) -> Html {
+    warnings_in(r, sys, &|m| m.to_string())
 }
 
-fn warnings_in(r: &CheckResult, said: &dyn Fn(&str) -> String) -> Html {
+fn warnings_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) -> Html {
     let mut h = Html::new();
     if r.warnings.is_empty() {
         return h;
@@ -244,7 +245,12 @@ fn warnings_in(r: &CheckResult, said: &dyn Fn(&str) -> String) -> Html {
         "<ul class=\"warnings\" data-testid=\"warnings\" tabindex=\"0\" aria-label=\"warnings\">",
     );
     for w in &r.warnings {
-        html!(h, "<li>⚠ {} <code>{}</code></li>", said(&w.message), w.code);
+        html!(
+            h,
+            "<li>⚠ {} <code>{}</code></li>",
+            said(&w.text(sys)),
+            w.code
+        );
     }
     h.lit("</ul>");
     h
@@ -657,6 +663,44 @@ mod tests {
         // Shown to four significant figures.
         assert!((shown - kip).abs() <= kip.abs() * 5e-4, "{shown} vs {kip}");
         assert!(us.contains("</span> kip"));
+    }
+
+    #[test]
+    fn a_warning_reads_in_the_units_shown() {
+        // A bar whose compression passes its elastic buckling load in the
+        // plane of bending: AISC's B1 has no finite value, and the warning
+        // gives alpha P_r = 1000 kN, which is 224.8 kip (1 kip =
+        // 4.4482216152605 kN exactly, NIST SP 811, 2008, App. B).
+        let mut m = demo::sample_member("W1");
+        m.method = strutline_core::method::Method::AiscLrfd;
+        m.axial_kn = 1000.0;
+        m.m_minor_a_knm = 0.5;
+        m.m_minor_b_knm = 0.5;
+        let c = Checked::new(&m);
+        let r = c.result().unwrap();
+        assert!(r.warnings.iter().any(|w| w.code == "b1-unbounded"));
+        let item = |h: &str| {
+            h.split("<li>")
+                .find(|li| li.contains("b1-unbounded"))
+                .unwrap()
+                .to_string()
+        };
+        let si = item(&verdict_html(&c, UnitSystem::Si).into_string());
+        assert!(si.contains("alpha P_r = 1000.0 kN"), "{si}");
+        let us = item(&verdict_html(&c, UnitSystem::Us).into_string());
+        assert!(us.contains("alpha P_r = 224.8 kip"), "{us}");
+        assert!(!us.contains(" kN"), "{us}");
+        // The docked list and the calc sheet say it the same way.
+        assert!(item(&warnings_html(r, UnitSystem::Us).into_string()).contains("224.8 kip"));
+        let sheet = sheet_html(
+            "",
+            &SheetHeader::default(),
+            &[Arc::new(c)],
+            None,
+            UnitSystem::Us,
+        )
+        .into_string();
+        assert!(item(&sheet).contains("224.8 kip"));
     }
 
     #[test]

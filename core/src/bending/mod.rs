@@ -695,7 +695,6 @@ pub fn push_c_factors(trace: &mut Trace, c: &CFactors, z_g_mm: f64) {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
 
     fn mo(a: f64, b: f64, span: f64, load: SpanLoad) -> Moments {

@@ -139,7 +139,6 @@ pub(super) fn key_of(input: &Input<'_>, axis: Axis, negative: bool) -> &'static 
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
     use crate::section::SectionSpec;
 

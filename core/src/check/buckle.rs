@@ -14,9 +14,10 @@ use crate::check::{CheckResult, Working};
 use crate::error::{Error, Result};
 use crate::member::Member;
 use crate::method::{Input, Method};
-use crate::outcome::Warning;
+use crate::outcome::{Arg, Warning};
 use crate::section::Section;
 use crate::trace::{put, step, sym, symbol, Scope, Trace};
+use crate::units::Quantity;
 
 /// Both axes' analyses of one member (what `strutline buckle` prints).
 #[derive(Debug, Clone, PartialEq, Serialize)]
@@ -275,6 +276,9 @@ fn check_analysed(
     let wrap = |e: Error| e.in_member(&member.id);
     let mut best: Option<(usize, CheckResult)> = None;
     let mut warnings: Vec<Warning> = Vec::new();
+    // The model's braces bound each segment's unbraced length (its own
+    // moment amplification), which the segment's member no longer holds.
+    let unbraced = member.unbraced();
     for (i, (y, z)) in major.segments.iter().zip(&minor.segments).enumerate() {
         let (Some(ly), Some(lz)) = (y.buckling_length_mm, z.buckling_length_mm) else {
             continue;
@@ -300,7 +304,8 @@ fn check_analysed(
             section: &section,
             material: &material,
         };
-        let result = crate::check::evaluate(&seg, method, working).map_err(key)?;
+        let result =
+            crate::check::evaluate_within(&seg, method, working, Some(unbraced)).map_err(key)?;
         for w in &result.warnings {
             if !warnings.iter().any(|x| x.code == w.code) {
                 warnings.push(w.clone());
@@ -407,13 +412,14 @@ fn check_analysed(
         .iter()
         .fold(0.0_f64, |a, s| a.max(s.axial_kn));
     if model.carries_own_loads() && (largest - member.axial_kn).abs() > 1e-9 * largest.max(1.0) {
-        warnings.push(Warning::new(
+        warnings.push(Warning::with_args(
             "axial-kn-from-model",
-            format!(
-                "each segment is checked at its force from the model's loads (largest {largest:.1} kN); \
-                 the member's axial_kn ({} kN) is not used",
-                member.axial_kn
-            ),
+            "each segment is checked at its force from the model's loads (largest {}); \
+             the member's axial_kn ({}) is not used",
+            &[
+                Arg::figure(largest, Quantity::Force, 1),
+                Arg::figure(member.axial_kn, Quantity::Force, Warning::AS_GIVEN),
+            ],
         ));
     }
     result.warnings = warnings;

@@ -153,7 +153,6 @@ pub fn largest<U: Fn(f64) -> Option<f64>>(u: U, guess: f64, x_max: f64) -> Reach
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::panic)]
     use super::*;
     use std::cell::Cell;
 

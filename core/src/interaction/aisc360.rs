@@ -13,7 +13,15 @@
 //!   (Eq. A-8-3), alpha = 1.00 (LRFD) or 1.60 (ASD), P_e1 = pi^2 EI* /
 //!   L_c1^2 (Eq. A-8-5) with EI* = EI (the effective-length method: the
 //!   member's buckling lengths are given, so the stiffness is not reduced)
-//!   and L_c1 the member's buckling length about that axis; C_m = 0.6 -
+//!   and L_c1 the effective length with no lateral translation of the ends,
+//!   K1 = 1 over the laterally unbraced length unless analysis justifies a
+//!   smaller value, which the member file cannot say
+//!   ([`super::own_length`]): a shorter buckling length (k < 1, a shorter
+//!   `lcr_*_mm`, a buckling model's end restraints) is raised to the
+//!   unbraced length, with the warning `amplification-length-major` /
+//!   `-minor`; a frame's k is not used (sway is B2's); a longer buckling
+//!   length without a frame is kept (maybe a sway mode: the safe side); a
+//!   buckling model's fixed braces shorten the unbraced length; C_m = 0.6 -
 //!   0.4 M_1/M_2 (Eq. A-8-4) without transverse load, M_1/M_2 positive in
 //!   reverse curvature (in the member file's convention M_1/M_2 = -M_small /
 //!   M_large, the signed end moments), and C_m = 1.0 with transverse load
@@ -47,15 +55,16 @@
 //!
 //! Eq. numbers and text recalled from memory of the 2016 Specification.
 
-use super::{ratio, Check, Context};
+use super::{own_length, ratio, warn_raised, Check, Context, OwnBasis};
 use crate::bending::aisc360_angle as angle;
 use crate::bending::{moments, shape, Axis, AxisBending, Shape};
 use crate::error::Result;
 use crate::member::{Method, Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once, warn_once_text};
-use crate::outcome::Warning;
+use crate::method::common::{require_steel, warn_once_text, warn_once_with};
+use crate::outcome::{Arg, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{push, put, step, sym, symbol, Scope, Sym, Symbol, Trace};
+use crate::units::Quantity;
 
 /// alpha of Appendix 8.2.1: 1.00 (LRFD).
 pub const ALPHA_LRFD: f64 = 1.0;
@@ -197,19 +206,32 @@ fn required(
         ),
     }
     let p = &input.section.props;
-    let (i, l) = match axis {
-        Axis::Major => (p.i_major_mm4, ctx.lengths.major_mm),
-        Axis::Minor => (p.i_minor_mm4, ctx.lengths.minor_mm),
+    let i = match axis {
+        Axis::Major => p.i_major_mm4,
+        Axis::Minor => p.i_minor_mm4,
     };
+    let own = own_length(ctx, axis);
+    let l = own.mm;
     let pi = std::f64::consts::PI;
     let p_e1 = pi * pi * e_mpa * i / (l * l) / 1000.0;
     put(
         trace,
         S,
         n.l_c1,
-        sym!("effective length in the plane of bending: the member's buckling length about this axis"),
+        match own.basis {
+            OwnBasis::Buckling => sym!("effective length in the plane of bending, no lateral translation of the ends: the member's buckling length about this axis, not shorter than the laterally unbraced length (K1 >= 1)"),
+            OwnBasis::Frame { sway: false } => sym!("effective length in the plane of bending: the laterally unbraced length, K1 = 1 (the braced frame's k is for the compression check; a smaller L_c1 needs an analysis that justifies it)"),
+            OwnBasis::Frame { sway: true } => sym!("effective length in the plane of bending: the laterally unbraced length, K1 = 1, no lateral translation of the ends (the sway frame's k is for the compression check; sway is B2's, outside the member check)"),
+            OwnBasis::Raised => sym!("effective length in the plane of bending: the laterally unbraced length, K1 = 1, longer than the buckling length about this axis (a smaller L_c1 needs an analysis that justifies it; the safe side)"),
+        },
         l,
-        sym!("AISC 360-16 Appendix 8.2.1 (member file)"),
+        sym!("AISC 360-16 Appendix 8.2.1"),
+    );
+    warn_raised(
+        warnings,
+        axis,
+        &own,
+        ("B1", "L_c1", "AISC 360-16 Appendix 8.2.1"),
     );
     put(
         trace,
@@ -229,13 +251,17 @@ fn required(
             f64::INFINITY,
             sym!("AISC 360-16 Eq. A-8-3"),
         );
-        warn_once(warnings, "b1-unbounded", || {
-            format!(
-                "axial_kn: alpha P_r = {:.1} kN reaches the elastic buckling load in the plane of \
-                 bending P_e1 = {p_e1:.1} kN (AISC 360-16 Appendix 8.2.1), so the moments have no \
+        warn_once_with(warnings, "b1-unbounded", || {
+            Warning::with_args(
+                "b1-unbounded",
+                "axial_kn: alpha P_r = {} reaches the elastic buckling load in the plane of \
+                 bending P_e1 = {} (AISC 360-16 Appendix 8.2.1), so the moments have no \
                  finite amplification B1 and the member fails; choose a stiffer section or a \
                  shorter buckling length",
-                alpha * p_r
+                &[
+                    Arg::figure(alpha * p_r, Quantity::Force, 1),
+                    Arg::figure(p_e1, Quantity::Force, 1),
+                ],
             )
         });
         return f64::INFINITY;
@@ -676,7 +702,6 @@ pub fn check(
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
     use crate::member::{Moments, SpanLoad};
 

@@ -25,10 +25,13 @@
 //!   lowest C_r and U_1x >= 1.0 is never below (b) with C_rx, so the C_r
 //!   read for (b) cannot lower the member's utilisation.
 //! - 13.8.4: U_1 = omega_1 / (1 - C_f/C_e), C_e = pi^2 E I / L^2 about the
-//!   axis of bending. L is the member length (braced member, K = 1), or the
-//!   member's buckling length about that axis where it is longer (the
-//!   member file does not say the member is braced: the lower C_e is taken,
-//!   said in the working). With `amplify_moments` false the moments given
+//!   axis of bending. L is the laterally unbraced length (K = 1; the member
+//!   length, or a buckling model's longest stretch between fixed braces),
+//!   or the member's buckling length about that axis where it is longer
+//!   and no frame is given (the member file does not say the member is
+//!   braced: the lower C_e is taken, said in the working); a frame's k is
+//!   not used ([`super::own_length`]). A shorter buckling length is raised
+//!   to L with the warning `amplification-length-major` / `-minor`. With `amplify_moments` false the moments given
 //!   include the member's second-order effects: the amplification 1/(1 -
 //!   C_f/C_e) is left out and U_1 = omega_1 (the equivalent-moment factor
 //!   stays; where the clause sets U_1 >= 1.0 it is 1.0). The sway
@@ -50,15 +53,16 @@
 //!
 //! M_fx, M_fy are the largest moments along the member about each axis.
 
-use super::{ratio, Check, Context};
+use super::{own_length, ratio, warn_raised, Check, Context, OwnBasis};
 use crate::bending::csa_s16::{class_of, classify, unsupported, PHI};
 use crate::bending::{given_modulus, moments, shape, Axis, Shape};
 use crate::error::{Error, Result};
 use crate::member::{Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once, warn_once_text};
-use crate::outcome::{Mode, Warning};
+use crate::method::common::{require_steel, warn_once_text, warn_once_with};
+use crate::outcome::{Arg, Mode, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{put, step, sym, symbol, Scope, Sym, Symbol, Trace};
+use crate::units::Quantity;
 
 const KEY: &str = "csa-s16";
 const S: Scope = Scope::Interaction;
@@ -155,17 +159,15 @@ fn axis_terms(
     let n = names(axis);
     let input = ctx.input;
     let p = &input.section.props;
-    let (i, lcr, sx, zx, bending) = match axis {
+    let (i, sx, zx, bending) = match axis {
         Axis::Major => (
             p.i_major_mm4,
-            ctx.lengths.major_mm,
             p.w_el_major_mm3,
             p.w_pl_major_mm3,
             &ctx.bending.major,
         ),
         Axis::Minor => (
             p.i_minor_mm4,
-            ctx.lengths.minor_mm,
             p.w_el_minor_mm3,
             p.w_pl_minor_mm3,
             &ctx.bending.minor,
@@ -279,17 +281,24 @@ fn axis_terms(
             m_r6,
         });
     }
-    let l = input.member.length_mm.max(lcr);
+    let own = own_length(ctx, axis);
+    let l = own.mm;
     let pi = std::f64::consts::PI;
     let c_e = pi * pi * e * i / (l * l) / 1000.0;
     put(
         trace,
         S,
         n.l,
-        sym!("length for C_e: the member length (K = 1, braced), or its buckling length about this axis where longer (lower C_e, conservative)"),
+        match own.basis {
+            OwnBasis::Buckling => sym!("length for C_e: the member's buckling length about this axis, not shorter than the laterally unbraced length (K = 1; a longer length may be a sway mode: the lower C_e, conservative)"),
+            OwnBasis::Frame { sway: false } => sym!("length for C_e: the laterally unbraced length, K = 1 (the braced frame's k is for the compression check)"),
+            OwnBasis::Frame { sway: true } => sym!("length for C_e: the laterally unbraced length, K = 1 (the sway frame's k is for the compression check; sway is U_2's, outside the member check)"),
+            OwnBasis::Raised => sym!("length for C_e: the laterally unbraced length, K = 1, longer than the buckling length about this axis (the safe side)"),
+        },
         l,
         sym!("CSA S16-19 13.8.4"),
     );
+    warn_raised(warnings, axis, &own, ("U_1", "L", "CSA S16-19 13.8.4"));
     put(
         trace,
         S,
@@ -320,12 +329,17 @@ fn axis_terms(
                 f64::INFINITY,
                 sym!("CSA S16-19 13.8.4"),
             );
-            warn_once(warnings, "u1-unbounded", || {
-                format!(
-                    "axial_kn: C_f = {c_f:.1} kN reaches the Euler load in the plane of bending \
-                     C_e = {c_e:.1} kN (CSA S16-19 13.8.4), so the moments have no finite \
+            warn_once_with(warnings, "u1-unbounded", || {
+                Warning::with_args(
+                    "u1-unbounded",
+                    "axial_kn: C_f = {} reaches the Euler load in the plane of bending \
+                     C_e = {} (CSA S16-19 13.8.4), so the moments have no finite \
                      amplification U_1 and the member fails; choose a stiffer section or a \
-                     shorter member"
+                     shorter member",
+                    &[
+                        Arg::figure(c_f, Quantity::Force, 1),
+                        Arg::figure(c_e, Quantity::Force, 1),
+                    ],
                 )
             });
             f64::INFINITY
@@ -619,7 +633,6 @@ pub fn check(
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
 
     fn mo(a: f64, b: f64, span: f64, load: SpanLoad) -> Moments {

@@ -46,12 +46,13 @@ use crate::bending::{self, en1993::class_in_bending, Axis};
 use crate::error::{Error, Result};
 use crate::material::Steel;
 use crate::member::{InteractionAnnex, Moments, SpanLoad};
-use crate::method::common::{require_steel, warn_once, warn_once_text};
-use crate::outcome::{Mode, Warning};
+use crate::method::common::{require_steel, warn_once_text, warn_once_with};
+use crate::outcome::{Arg, Mode, Warning};
 use crate::roots::{newton_bisect, Stop};
 use crate::section::{Family, SectionSpec};
 use crate::stability::GAMMA_M0;
 use crate::trace::{step, Scope, Trace};
+use crate::units::Quantity;
 
 const KEY: &str = "en1993-1-1";
 const S: Scope = Scope::Interaction;
@@ -1900,13 +1901,20 @@ fn annex_a(
             "-",
             "EN 1993-1-1 Table A.1"
         );
-        warn_once(warnings, "annex-a-unbounded", || {
-            format!(
-                "axial_kn: N_Ed = {:.1} kN reaches an elastic critical load (N_Ed/N_cr,y = \
-                 {ny:.3}, N_Ed/N_cr,z = {nz:.3}, N_Ed/N_cr,T = {nt:.3}, N_Ed/N_cr,TF = {ntf:.3}), \
-                 so the interaction factors of EN 1993-1-1 Annex A have no finite value and the \
-                 member fails; choose a stiffer section or a shorter buckling length",
-                b.n_ed
+        warn_once_with(warnings, "annex-a-unbounded", || {
+            Warning::with_args(
+                "annex-a-unbounded",
+                "axial_kn: N_Ed = {} reaches an elastic critical load (N_Ed/N_cr,y = {}, \
+                 N_Ed/N_cr,z = {}, N_Ed/N_cr,T = {}, N_Ed/N_cr,TF = {}), so the interaction \
+                 factors of EN 1993-1-1 Annex A have no finite value and the member fails; \
+                 choose a stiffer section or a shorter buckling length",
+                &[
+                    Arg::figure(b.n_ed, Quantity::Force, 1),
+                    Arg::figure(ny, Quantity::Dimensionless, 3),
+                    Arg::figure(nz, Quantity::Dimensionless, 3),
+                    Arg::figure(nt, Quantity::Dimensionless, 3),
+                    Arg::figure(ntf, Quantity::Dimensionless, 3),
+                ],
             )
         });
         return Ok((f64::INFINITY, f64::INFINITY));

@@ -390,7 +390,6 @@ fn ratio(stress: f64, strength: f64) -> f64 {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing)]
     use super::*;
 
     fn terms(lambda: (f64, f64), k_crit: Option<f64>, major: f64) -> Terms {

@@ -21,12 +21,13 @@ use serde::Serialize;
 
 use crate::bending::Bending;
 use crate::error::{Error, Result};
-use crate::member::BucklingLengths;
+use crate::member::{BucklingLengths, Unbraced};
 use crate::method::{Input, Method};
-use crate::outcome::{ModeResult, Warning};
+use crate::outcome::{Arg, ModeResult, Warning};
 use crate::section::Family;
 use crate::stability::Assessment;
 use crate::trace::Trace;
+use crate::units::Quantity;
 
 pub mod aisc360;
 pub mod csa_s16;
@@ -57,6 +58,9 @@ pub struct Context<'a> {
     pub input: &'a Input<'a>,
     /// The member's buckling lengths.
     pub lengths: &'a BucklingLengths,
+    /// Its laterally unbraced lengths (a buckling model's segment: the
+    /// model's, bounded by its braces).
+    pub unbraced: Unbraced,
     /// Every axial mode checked (major, minor, the twisting mode, the
     /// cross-section mode), as in the result.
     pub modes: &'a [ModeResult],
@@ -125,6 +129,166 @@ pub fn check(
         // euler and perry-robertson refuse any moment in `bending::check`.
         Method::Euler | Method::PerryRobertson | Method::Secant => Ok(None),
     }
+}
+
+/// Where the length of a member's own moment amplification came from
+/// ([`own_length`]).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum OwnBasis {
+    /// The buckling length, not shorter than the unbraced length (k >= 1
+    /// or a length at least the unbraced one): kept, since the member file
+    /// does not say whether a longer length is a sway mode (the lower
+    /// elastic load, the safe side).
+    Buckling,
+    /// A column in a frame (alignment chart, `frame_major`/`frame_minor`):
+    /// the unbraced length, K1 = 1, whatever k the chart gives; the frame's
+    /// sway (`sway` true) is the frame analysis' amplification (B2, U_2),
+    /// outside the member check.
+    Frame {
+        /// Sidesway uninhibited.
+        sway: bool,
+    },
+    /// The buckling length is shorter than the unbraced length (k < 1, a
+    /// shorter `lcr_*_mm`, or a buckling model's end restraints): raised to
+    /// the unbraced length, since the member file cannot say that an
+    /// analysis justifies less.
+    Raised,
+}
+
+/// The length of a member's own moment amplification about one axis
+/// (AISC 360-16 Appendix 8.2.1's L_c1, CSA S16-19 13.8.4's L).
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub struct OwnLength {
+    /// The length used, mm.
+    pub mm: f64,
+    /// The member's buckling length about the axis, mm.
+    pub buckling_mm: f64,
+    /// The laterally unbraced length about the axis, mm
+    /// ([`crate::member::Member::unbraced`]).
+    pub unbraced_mm: f64,
+    /// The member-file key that set the buckling length (`k_major`,
+    /// `lcr_major_mm`, `frame_major`, `buckling_model`, ...).
+    pub field: &'static str,
+    /// Why.
+    pub basis: OwnBasis,
+}
+
+impl OwnLength {
+    /// Whether the buckling length was shorter than the length used (the
+    /// member's k < 1 changed the value), which the result warns of.
+    pub fn raised(&self) -> bool {
+        self.mm > self.buckling_mm * (1.0 + ANALYSIS_TOLERANCE)
+    }
+}
+
+/// Relative difference below which a buckling length is the unbraced
+/// length itself ([`own_length`]): well above the analysis' convergence
+/// (alpha_cr to 1e-6, the length to half that), well below any k an
+/// engineer would give.
+const ANALYSIS_TOLERANCE: f64 = 1e-5;
+
+/// The length for the member's own second-order moment amplification about
+/// `axis`: both codes compute it with no lateral translation of the ends,
+/// K = 1 over the laterally unbraced length (AISC 360-16 Appendix 8.2.1:
+/// "unless analysis justifies a smaller value", which the member file
+/// cannot say). A shorter buckling length is raised to the unbraced one
+/// ([`OwnBasis::Raised`]), a frame's k is not used ([`OwnBasis::Frame`]),
+/// and a longer buckling length without a frame is kept
+/// ([`OwnBasis::Buckling`]).
+pub fn own_length(ctx: &Context<'_>, axis: crate::bending::Axis) -> OwnLength {
+    use crate::bending::Axis;
+    let m = ctx.input.member;
+    let (buckling_mm, unbraced_mm, frame, lcr, k_field, lcr_field, frame_field) = match axis {
+        Axis::Major => (
+            ctx.lengths.major_mm,
+            ctx.unbraced.major_mm,
+            m.frame_major,
+            m.lcr_major_mm,
+            "k_major",
+            "lcr_major_mm",
+            "frame_major",
+        ),
+        Axis::Minor => (
+            ctx.lengths.minor_mm,
+            ctx.unbraced.minor_mm,
+            m.frame_minor,
+            m.lcr_minor_mm,
+            "k_minor",
+            "lcr_minor_mm",
+            "frame_minor",
+        ),
+    };
+    let model = ctx.unbraced.from_model;
+    let field = if model {
+        "buckling_model"
+    } else if frame.is_some() {
+        frame_field
+    } else if lcr.is_some() {
+        lcr_field
+    } else {
+        k_field
+    };
+    let (mm, basis) = match frame {
+        Some(f) if !model => (unbraced_mm, OwnBasis::Frame { sway: f.sway }),
+        // A buckling model's length between fixed braces comes out of the
+        // analysis a few parts in a million short (the finite elements
+        // overestimate the critical load slightly): that is the braced
+        // length itself, taken without a warning.
+        _ if buckling_mm >= unbraced_mm * (1.0 - ANALYSIS_TOLERANCE) => {
+            (buckling_mm.max(unbraced_mm), OwnBasis::Buckling)
+        }
+        _ => (unbraced_mm, OwnBasis::Raised),
+    };
+    OwnLength {
+        mm,
+        buckling_mm,
+        unbraced_mm,
+        field,
+        basis,
+    }
+}
+
+/// Says on the result that the member's own moment amplification about
+/// `axis` took a longer length than its buckling length ([`OwnLength::raised`]):
+/// `what` names the amplifier (`"B1"`, `"U_1"`), `symbol` the length
+/// (`"L_c1"`, `"L"`) and `clause` the rule. Once per axis.
+pub fn warn_raised(
+    warnings: &mut Vec<Warning>,
+    axis: crate::bending::Axis,
+    own: &OwnLength,
+    (what, symbol, clause): (&'static str, &'static str, &'static str),
+) {
+    use crate::bending::Axis;
+    if !own.raised() {
+        return;
+    }
+    let (code, name) = match axis {
+        Axis::Major => ("amplification-length-major", "major"),
+        Axis::Minor => ("amplification-length-minor", "minor"),
+    };
+    crate::method::common::warn_once_with(warnings, code, || {
+        Warning::with_args(
+            code,
+            "{}: the buckling length about the {} axis, {}, is shorter than the laterally \
+             unbraced length, {}; the member's own moment amplification {} takes {} = {} (K = \
+             1, no lateral translation of the ends: {} allows a smaller value only where \
+             analysis justifies it, which the member file does not say), a larger {} than the \
+             buckling length gives. Braces that shorten the unbraced length belong in \
+             buckling_model; moments that already include the member's second-order effects \
+             take amplify_moments false",
+            &[
+                Arg::Word(own.field),
+                Arg::Word(name),
+                Arg::figure(own.buckling_mm, Quantity::Span, 0),
+                Arg::figure(own.unbraced_mm, Quantity::Span, 0),
+                Arg::Word(what),
+                Arg::Word(symbol),
+                Arg::figure(own.mm, Quantity::Span, 0),
+                Arg::Word(clause),
+                Arg::Word(what),
+            ],
+        )
+    });
 }
 
 /// Demand over capacity: 0 without demand, infinite without capacity.

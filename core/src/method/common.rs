@@ -8,9 +8,10 @@ use std::f64::consts::PI;
 use crate::error::{all_positive, positive, Error, Result};
 use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
-use crate::outcome::{Mode, ModeResult, Warning};
+use crate::outcome::{Arg, Mode, ModeResult, Warning};
 use crate::section::{Family, SectionSpec};
 use crate::trace::{step, sym, Scope, Sym, Trace};
+use crate::units::Quantity;
 
 /// Scope of the trace for an axis mode.
 pub fn scope_of(mode: Mode) -> Scope {
@@ -183,6 +184,18 @@ pub fn warn_once(
     }
 }
 
+/// [`warn_once`] of a warning made by `make` (one with arguments,
+/// [`Warning::with_args`]), made only when its code is new.
+pub fn warn_once_with(
+    warnings: &mut Vec<Warning>,
+    code: &'static str,
+    make: impl FnOnce() -> Warning,
+) {
+    if !has_warning(warnings, code) {
+        warnings.push(make());
+    }
+}
+
 /// [`warn_once`] with a fixed text, kept without allocating.
 pub fn warn_once_text(warnings: &mut Vec<Warning>, code: &'static str, message: &'static str) {
     if !has_warning(warnings, code) {
@@ -322,11 +335,16 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
                     standard,
                 );
                 if s.thickness_mm <= 0.0 && s.band_up_to_mm.is_finite() {
-                    warn_once(warnings, "thickness-unknown", || {
-                        format!(
-                            "the section does not tell its plate thickness, so f_y = {f} MPa of {} \
-                             for t <= {} mm is used; give a custom fy_mpa if the section is thicker",
-                            s.name, s.band_up_to_mm
+                    warn_once_with(warnings, "thickness-unknown", || {
+                        Warning::with_args(
+                            "thickness-unknown",
+                            "the section does not tell its plate thickness, so f_y = {} of {} \
+                             for t <= {} is used; give a custom fy_mpa if the section is thicker",
+                            &[
+                                Arg::figure(f, Quantity::Stress, Warning::AS_GIVEN),
+                                Arg::Word(s.name),
+                                Arg::figure(s.band_up_to_mm, Quantity::Length, Warning::AS_GIVEN),
+                            ],
                         )
                     });
                 }
@@ -353,10 +371,12 @@ pub fn push_material(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Wa
             if s.name.starts_with("A500")
                 && !matches!(input.section.family, Family::Chs | Family::Rhs)
             {
-                warn_once(warnings, "a500-shape-unknown", || {
-                    format!(
+                warn_once_with(warnings, "a500-shape-unknown", || {
+                    Warning::with_args(
+                        "a500-shape-unknown",
                         "ASTM A500 sets F_y by the hollow section's shape (round or shaped); this \
-                         section is neither, so the lower, round value F_y = {f:.0} MPa is used"
+                         section is neither, so the lower, round value F_y = {} is used",
+                        &[Arg::figure(f, Quantity::Stress, 0)],
                     )
                 });
             }

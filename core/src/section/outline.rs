@@ -40,7 +40,6 @@ pub fn outline(spec: &SectionSpec) -> Vec<Vec<(f64, f64)>> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use crate::check::{check_member, CheckResult};
     use crate::material::MaterialSpec;

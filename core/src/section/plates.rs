@@ -155,7 +155,6 @@ pub fn plates(spec: &SectionSpec) -> Vec<Plate> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use crate::section::{IShape, Rect, Rhs};
 

@@ -394,7 +394,6 @@ pub fn describe(spec: &SectionSpec) -> String {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use crate::section::{Angle, Chs, Flanged, Given, IShape, Rect, Rhs, Round};
 
@@ -853,7 +852,6 @@ mod tests {
     }
 
     mod never_panics {
-        #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
         use super::*;
         use proptest::prelude::*;
 

@@ -32,7 +32,7 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
             html!(
                 h,
                 "<div class=\"dock-warnings\">{}</div>",
-                report::warnings_html(r)
+                report::warnings_html(r, sys)
             );
             h.push(&report::checks_html(r, sys));
         }

@@ -160,7 +160,6 @@ pub(super) fn discard_unreadable(ctx: Ctx, aside: Option<&str>) {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::indexing_slicing, clippy::panic)]
     use super::*;
     use crate::demo::demo_lists;
 

@@ -112,7 +112,6 @@ pub fn minify(terser: &Path, path: &Path) -> Result<()> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used)]
     use super::*;
 
     #[test]

@@ -150,7 +150,6 @@ fn pack(index: &[u8], width: usize, bits: usize) -> Vec<u8> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
 
     /// Decodes a PNG with the `png` crate into 8-bit RGB pixels.

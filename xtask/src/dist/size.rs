@@ -126,7 +126,6 @@ fn over_budget(total: usize) -> Result<()> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use std::io::Read;
 

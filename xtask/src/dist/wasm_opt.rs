@@ -191,7 +191,6 @@ pub fn exported_tables(bytes: &[u8]) -> Result<Vec<(String, RefType)>> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used)]
     use super::*;
     use wasm_encoder::{
         ExportKind, ExportSection, ImportSection, Module, RefType as ERefType, TableSection,

@@ -234,7 +234,6 @@ pub(super) fn tee_outline(s: &Flanged) -> Result<(Poly, Option<Poly>)> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use crate::section::SectionSpec;
 

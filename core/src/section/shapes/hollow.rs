@@ -211,7 +211,6 @@ pub(super) fn chs_outline(s: &Chs) -> Result<(Poly, Option<Poly>)> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use crate::section::SectionSpec;
 

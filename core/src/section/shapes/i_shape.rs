@@ -136,7 +136,6 @@ pub(super) fn outline(s: &IShape) -> Result<(Poly, Option<Poly>)> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::*;
     use crate::section::SectionSpec;
 

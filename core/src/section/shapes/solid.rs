@@ -143,7 +143,6 @@ pub(super) fn round_outline(s: &Round) -> Result<(Poly, Option<Poly>)> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(clippy::unwrap_used, clippy::expect_used, clippy::indexing_slicing)]
     use super::super::rect_torsion;
 
     #[test]
