@@ -788,12 +788,6 @@ pub fn family_entries(family: Family) -> Vec<&'static Entry> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     #[test]

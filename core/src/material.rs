@@ -712,12 +712,6 @@ pub fn resolve(spec: &MaterialSpec, stock: Stock) -> Result<Material> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
 
     use super::*;
 

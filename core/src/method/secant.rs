@@ -314,14 +314,8 @@ pub fn axis(
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        // The standard cosine is the reference here.
-        clippy::disallowed_methods,
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
+    // The standard cosine is the reference here.
+    #![allow(clippy::disallowed_methods)]
 
     use super::*;
 

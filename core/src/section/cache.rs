@@ -219,12 +219,6 @@ pub fn fill(spec: &SectionSpec, out: &mut Properties) -> Result<()> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::section::{Rect, Rhs};
 

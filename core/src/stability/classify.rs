@@ -629,12 +629,6 @@ fn element(code: Code, epsilon: f64, fy_mpa: f64, e_mpa: f64, r: &Raw) -> Elemen
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::section::plates::plates;
     use crate::section::{Flanged, HollowMake, IShape, Rhs};

@@ -240,12 +240,6 @@ pub fn critical(x: &Inputs) -> Critical {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     #[test]
