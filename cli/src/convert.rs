@@ -281,12 +281,6 @@ fn whole(args: &Args, out_format: Format, system: UnitSystem) -> Result<i32, Str
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     const GOOD: &str = "id,kind,depth_mm,width_mm,fy_mpa,e_mpa,length_mm,axial_kn,method\n\

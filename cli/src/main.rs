@@ -130,12 +130,6 @@ pub fn positive(text: &str) -> Result<f64, String> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     #[test]

@@ -169,12 +169,6 @@ pub fn run(args: &Args) -> Result<i32, String> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use strutline_core::catalogue;
 

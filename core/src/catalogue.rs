@@ -676,6 +676,7 @@ pub fn section(designation: &str) -> Result<Section> {
 /// Builds any section spec: a catalogue reference through [`section`] (an
 /// unknown designation is [`Error::UnknownDesignation`]), any other spec
 /// from its dimensions.
+#[inline]
 pub fn build(spec: &SectionSpec) -> Result<Section> {
     match spec {
         SectionSpec::Catalogue(c) => section(&c.designation),
@@ -787,12 +788,6 @@ pub fn family_entries(family: Family) -> Vec<&'static Entry> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     #[test]

@@ -311,6 +311,7 @@ pub(crate) fn evaluate_within(
         interaction,
         bending,
         trace,
+        classified: _,
     } = parts;
     Ok(verdict.with_lists(
         input.member.id.clone(),
@@ -366,6 +367,9 @@ pub struct Scratch {
     interaction: Vec<interaction::Check>,
     bending: Option<Bending>,
     trace: Trace,
+    /// Where the cross-section is classified ([`stability::assess`]),
+    /// started afresh by each check.
+    classified: stability::classify::Classified,
 }
 
 /// A check's outcome borrowed from the [`Scratch`] that worked it: the
@@ -475,6 +479,7 @@ impl Scratch {
             interaction: Vec::new(),
             bending: None,
             trace: working.trace_for(moments),
+            classified: stability::classify::Classified::default(),
         }
     }
 
@@ -546,20 +551,21 @@ fn work(
         interaction: checks,
         bending: bending_slot,
         trace,
+        classified,
     } = parts;
     let m = input.member;
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
     let lengths = m.buckling_lengths().map_err(wrap)?;
     for (frame, which) in [
-        (m.frame_major, crate::buckling::chart::FrameKey::Major),
-        (m.frame_minor, crate::buckling::chart::FrameKey::Minor),
+        (&m.frame_major, crate::buckling::chart::FrameKey::Major),
+        (&m.frame_minor, crate::buckling::chart::FrameKey::Minor),
     ] {
         if let Some(f) = frame {
-            crate::buckling::chart::work(&f, which, trace).map_err(wrap)?;
+            crate::buckling::chart::work(f, which, trace).map_err(wrap)?;
         }
     }
     method::prelude(method, input, trace, warnings).map_err(wrap)?;
-    let assessment = stability::assess(method, input, trace, warnings);
+    let assessment = stability::assess(method, input, trace, warnings, classified);
     // EN 1993-1-1 6.3.1.3 / 6.3.1.4 for Class 4: the method's formulas with
     // A_eff in place of A (N_cr from the gross section).
     let effective_section = assessment.en_effective.map(|eff| Section {
@@ -611,10 +617,10 @@ fn work(
     let aisc = matches!(method, Method::AiscLrfd | Method::AiscAsd);
     if aisc {
         if let Some(c) = assessment.classified.filter(|c| c.is_slender()) {
-            stability::aisc_slender(&mut major, &c, input, trace);
-            stability::aisc_slender(&mut minor, &c, input, trace);
+            stability::aisc_slender(&mut major, c, input, trace);
+            stability::aisc_slender(&mut minor, c, input, trace);
             if let Some(t) = twist.as_mut() {
-                stability::aisc_slender(t, &c, input, trace);
+                stability::aisc_slender(t, c, input, trace);
             }
         }
         if input.section.family == Family::Angle && e5.is_none() {
@@ -673,14 +679,13 @@ fn work(
         f64::INFINITY
     };
     // Without moments there is no bending side (bending::check would say
-    // so itself, after looking for a moment again).
-    *bending_slot = if moments {
+    // so itself, after looking for a moment again); the slot is empty on
+    // entry.
+    if moments {
         // The bending working: some 20 to 30 lines an axis.
         trace.reserve(64);
-        bending::check(method, input, trace, warnings).map_err(wrap)?
-    } else {
-        None
-    };
+        *bending_slot = bending::check(method, input, trace, warnings).map_err(wrap)?;
+    }
     let (utilisation, governing_check, passes) = match &*bending_slot {
         // Without moments: the axial check alone (asked first, as the
         // secant check below would find no moment either).

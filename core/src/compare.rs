@@ -117,12 +117,6 @@ pub fn compare_member(member: &Member) -> Result<Vec<Comparison>> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::material::{MaterialSpec, TimberKind};
     use crate::section::{Rect, SectionSpec};

@@ -226,6 +226,19 @@ pub fn positive(field: &'static str, value: f64) -> Result<f64> {
     }
 }
 
+/// Whether every value is finite and above zero (or, for values so large
+/// that their sum overflows, `false`: the caller then tests them one by
+/// one with [`positive`], which names the field). Branch-free: the smallest above zero and the sum finite.
+#[inline]
+pub fn all_positive<const N: usize>(values: [f64; N]) -> bool {
+    let (mut least, mut sum) = (f64::INFINITY, 0.0);
+    for v in values {
+        least = least.min(v);
+        sum += v;
+    }
+    least > 0.0 && sum.is_finite()
+}
+
 /// Checks that `value` is finite and at least zero.
 pub fn non_negative(field: &'static str, value: f64) -> Result<f64> {
     if value.is_finite() && value >= 0.0 {

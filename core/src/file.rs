@@ -422,12 +422,6 @@ pub fn check_unique_ids(members: &[Member]) -> Result<()> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     const ONE: &str = r#"{"format": "strutline.members", "version": 1, "title": "t",

@@ -435,7 +435,8 @@ enum Found {
 }
 
 /// A grade name normalised on the stack (upper case, letters and digits
-/// only), so the lookup in the check's hot path allocates nothing.
+/// only), so the lookup in the check's hot path allocates nothing; read as
+/// bytes (the name's letters and digits are ASCII, so no UTF-8 check).
 struct Key {
     buf: [u8; 24],
     len: usize,
@@ -455,21 +456,18 @@ impl Key {
         Some(key)
     }
 
-    fn as_str(&self) -> &str {
-        self.buf
-            .get(..self.len)
-            .and_then(|b| std::str::from_utf8(b).ok())
-            .unwrap_or("")
+    fn as_bytes(&self) -> &[u8] {
+        self.buf.get(..self.len).unwrap_or(&[])
     }
 }
 
 /// Whether `name` normalises to `key` (compared without allocating).
-fn same_name(name: &str, key: &str) -> bool {
+fn same_name(name: &str, key: &[u8]) -> bool {
     let mut a = name
         .bytes()
         .filter(u8::is_ascii_alphanumeric)
         .map(|b| b.to_ascii_uppercase());
-    let mut b = key.bytes();
+    let mut b = key.iter().copied();
     loop {
         match (a.next(), b.next()) {
             (None, None) => return true,
@@ -481,57 +479,58 @@ fn same_name(name: &str, key: &str) -> bool {
 
 fn find(name: &str) -> Option<Found> {
     let key = Key::new(name)?;
-    let n = key.as_str();
+    let n = key.as_bytes();
     // Timber classes (EN 338 "C..", EN 14080 "GL..").
-    if n.starts_with('C') || n.starts_with('G') {
+    if n.starts_with(b"C") || n.starts_with(b"G") {
         if let Some(t) = TIMBER.iter().find(|t| same_name(t.name, n)) {
             return Some(Found::Timber(t));
         }
     }
     // ASTM.
-    let astm = n.strip_prefix("ASTM").unwrap_or(n);
+    let astm = n.strip_prefix(b"ASTM").unwrap_or(n);
     match astm {
-        "A992" | "A992M" => return Some(Found::Steel(&A992)),
-        "A36" | "A36M" => return Some(Found::Steel(&A36)),
-        "A500C" | "A500GRC" | "A500GRADEC" => {
+        b"A992" | b"A992M" => return Some(Found::Steel(&A992)),
+        b"A36" | b"A36M" => return Some(Found::Steel(&A36)),
+        b"A500C" | b"A500GRC" | b"A500GRADEC" => {
             return Some(Found::A500(&A500C_ROUND, &A500C_SHAPED, &A500C_UNKNOWN))
         }
-        "A500B" | "A500GRB" | "A500GRADEB" => {
+        b"A500B" | b"A500GRB" | b"A500GRADEB" => {
             return Some(Found::A500(&A500B_ROUND, &A500B_SHAPED, &A500B_UNKNOWN))
         }
         _ => {}
     }
     // CSA G40.21 (the W grades; "350WT" toughness variants as well).
-    let csa = n.strip_prefix("CSA").unwrap_or(n);
-    let csa = csa.strip_prefix("G4021").unwrap_or(csa);
+    let csa = n.strip_prefix(b"CSA").unwrap_or(n);
+    let csa = csa.strip_prefix(b"G4021").unwrap_or(csa);
     match csa {
-        "350W" | "350WT" => return Some(Found::Steel(&G40_350W)),
-        "300W" | "300WT" => return Some(Found::Steel(&G40_300W)),
+        b"350W" | b"350WT" => return Some(Found::Steel(&G40_350W)),
+        b"300W" | b"300WT" => return Some(Found::Steel(&G40_300W)),
         _ => {}
     }
     // EN: S + strength + optional quality + optional H.
-    let rest = n.strip_prefix('S')?;
+    let rest = n.strip_prefix(b"S")?;
     let strength = rest.get(..3)?;
     let suffix = rest.get(3..)?;
-    let (quality, hollow) = match suffix.strip_suffix('H') {
+    let (quality, hollow) = match suffix.strip_suffix(b"H") {
         Some(q) => (q, true),
         None => (suffix, false),
     };
-    let non_alloy = ["", "JR", "J0", "J2", "K2"];
-    let fine = ["", "N", "NL", "M", "ML"];
+    let non_alloy: [&[u8]; 5] = [b"", b"JR", b"J0", b"J2", b"K2"];
+    let fine: [&[u8]; 5] = [b"", b"N", b"NL", b"M", b"ML"];
+    let fine_m = quality == b"M" || quality == b"ML";
     let found = match (strength, hollow) {
-        ("235", false) if non_alloy.contains(&quality) => Found::Steel(&S235),
-        ("275", false) if non_alloy.contains(&quality) => Found::Steel(&S275),
-        ("355", false) if non_alloy.contains(&quality) => Found::Steel(&S355),
-        ("420", false) if quality == "M" || quality == "ML" => Found::Steel(&S420M),
-        ("460", false) if quality == "M" || quality == "ML" => Found::Steel(&S460M),
-        ("420", false) if fine.contains(&quality) => Found::Steel(&S420N),
-        ("460", false) if fine.contains(&quality) => Found::Steel(&S460N),
-        ("235", true) if non_alloy.contains(&quality) => Found::Hollow(&S235H_HOT, &S235H_COLD),
-        ("275", true) if non_alloy.contains(&quality) => Found::Hollow(&S275H_HOT, &S275H_COLD),
-        ("355", true) if non_alloy.contains(&quality) => Found::Hollow(&S355H_HOT, &S355H_COLD),
-        ("420", true) if fine.contains(&quality) => Found::Hollow(&S420H_HOT, &S420H_COLD),
-        ("460", true) if fine.contains(&quality) => Found::Hollow(&S460H_HOT, &S460H_COLD),
+        (b"235", false) if non_alloy.contains(&quality) => Found::Steel(&S235),
+        (b"275", false) if non_alloy.contains(&quality) => Found::Steel(&S275),
+        (b"355", false) if non_alloy.contains(&quality) => Found::Steel(&S355),
+        (b"420", false) if fine_m => Found::Steel(&S420M),
+        (b"460", false) if fine_m => Found::Steel(&S460M),
+        (b"420", false) if fine.contains(&quality) => Found::Steel(&S420N),
+        (b"460", false) if fine.contains(&quality) => Found::Steel(&S460N),
+        (b"235", true) if non_alloy.contains(&quality) => Found::Hollow(&S235H_HOT, &S235H_COLD),
+        (b"275", true) if non_alloy.contains(&quality) => Found::Hollow(&S275H_HOT, &S275H_COLD),
+        (b"355", true) if non_alloy.contains(&quality) => Found::Hollow(&S355H_HOT, &S355H_COLD),
+        (b"420", true) if fine.contains(&quality) => Found::Hollow(&S420H_HOT, &S420H_COLD),
+        (b"460", true) if fine.contains(&quality) => Found::Hollow(&S460H_HOT, &S460H_COLD),
         _ => return None,
     };
     Some(found)
@@ -563,7 +562,7 @@ pub fn suggestions(grade: &str) -> Vec<String> {
 fn steel_at(grade: &SteelGrade, thickness_mm: f64) -> Result<Steel> {
     // A section that does not tell its thickness (given properties) is read
     // in the thinnest band; the methods warn about it.
-    let t = if thickness_mm.is_finite() && thickness_mm > 0.0 {
+    let t = if crate::error::all_positive([thickness_mm]) {
         thickness_mm
     } else {
         0.0
@@ -713,12 +712,6 @@ pub fn resolve(spec: &MaterialSpec, stock: Stock) -> Result<Material> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
 
     use super::*;
 

@@ -7,7 +7,7 @@ pub mod schema;
 
 use crate::buckling::chart::{self, Frame, FrameKey};
 use crate::buckling::model::BucklingModel;
-use crate::error::{non_negative, positive, Error, Result};
+use crate::error::{all_positive, non_negative, positive, Error, Result};
 use crate::material::{MaterialSpec, Product, Stock};
 use crate::section::{Section, SectionSpec};
 
@@ -545,12 +545,14 @@ impl Member {
 
     /// The member's section, built: a catalogue designation is resolved
     /// here, once, and an unknown one is [`Error::UnknownDesignation`].
+    #[inline]
     pub fn build_section(&self) -> Result<Section> {
         crate::catalogue::build(&self.section)
     }
 
     /// Checks every scalar field of the member (not the section or material,
     /// which check themselves) and returns its buckling lengths.
+    #[inline]
     pub fn buckling_lengths(&self) -> Result<BucklingLengths> {
         // The usual case first, with one test of every value (no frames,
         // every k finite and above zero, every length within the bounds,
@@ -563,15 +565,23 @@ impl Member {
                 minor_mm: self.lcr_minor_mm.unwrap_or(self.k_minor * length),
                 torsion_mm: self.lcr_torsion_mm.unwrap_or(self.k_torsion * length),
             };
-            let k = |v: f64| v.is_finite() && v > 0.0;
-            let l = |v: f64| (MIN_LENGTH_MM..=MAX_LENGTH_MM).contains(&v);
-            if k(self.k_major)
-                && k(self.k_minor)
-                && k(self.k_torsion)
-                && l(length)
-                && l(lengths.major_mm)
-                && l(lengths.minor_mm)
-                && l(lengths.torsion_mm)
+            // The lengths at once: the least and the most within the
+            // bounds, and no NaN (which min and max pass over) in the sum.
+            let (mut least, mut most, mut sum) = (f64::INFINITY, f64::NEG_INFINITY, 0.0);
+            for v in [
+                length,
+                lengths.major_mm,
+                lengths.minor_mm,
+                lengths.torsion_mm,
+            ] {
+                least = least.min(v);
+                most = most.max(v);
+                sum += v;
+            }
+            if all_positive([self.k_major, self.k_minor, self.k_torsion])
+                && least >= MIN_LENGTH_MM
+                && most <= MAX_LENGTH_MM
+                && !sum.is_nan()
             {
                 return Ok(lengths);
             }
@@ -683,6 +693,7 @@ impl Member {
     }
 
     /// Whether the member carries any design moment.
+    #[inline]
     pub fn has_moments(&self) -> bool {
         // Moments::is_zero of both axes, on the fields themselves.
         !(self.m_major_a_knm == 0.0
@@ -721,16 +732,40 @@ impl Member {
     /// Checks the bending keys (finite moments, a positive k_lt, a length
     /// between restraints in range).
     pub fn validate_bending(&self) -> Result<()> {
+        // The six moments at once (the largest size within the bound, and
+        // no NaN, which max passes over, in the sum); the steps below name
+        // the first that is not.
+        let moments = [
+            self.m_major_a_knm,
+            self.m_major_b_knm,
+            self.m_major_span_knm,
+            self.m_minor_a_knm,
+            self.m_minor_b_knm,
+            self.m_minor_span_knm,
+        ];
+        let (mut most, mut sum) = (0.0_f64, 0.0);
+        for m in moments {
+            most = most.max(m.abs());
+            sum += m;
+        }
+        if most > MAX_MOMENT_KNM || sum.is_nan() {
+            self.moments_stepwise()?;
+        }
+        positive("k_lt", self.k_lt)?;
+        if let Some(v) = self.lcr_lt_mm {
+            bounded("lcr_lt_mm", v)?;
+        }
+        Ok(())
+    }
+
+    /// The moments one by one, the first out of range named.
+    fn moments_stepwise(&self) -> Result<()> {
         moment("m_major_a_knm", self.m_major_a_knm)?;
         moment("m_major_b_knm", self.m_major_b_knm)?;
         moment("m_major_span_knm", self.m_major_span_knm)?;
         moment("m_minor_a_knm", self.m_minor_a_knm)?;
         moment("m_minor_b_knm", self.m_minor_b_knm)?;
         moment("m_minor_span_knm", self.m_minor_span_knm)?;
-        positive("k_lt", self.k_lt)?;
-        if let Some(v) = self.lcr_lt_mm {
-            bounded("lcr_lt_mm", v)?;
-        }
         Ok(())
     }
 
@@ -801,7 +836,9 @@ impl Member {
                 });
             }
         }
-        if self.id.trim().is_empty() {
+        // trim().is_empty(), without scanning from both ends: stops at
+        // the first character that is not white space.
+        if self.id.chars().all(char::is_whitespace) {
             return Err(Error::Geometry {
                 field: "id",
                 reason: "every member needs an id; give it a short name such as \"C1\"".into(),
@@ -922,16 +959,7 @@ mod tests {
             for &k in &values {
                 for &lcr in &[None, Some(f64::NAN), Some(0.5), Some(2500.0), Some(2.0e7)] {
                     for which in 0..3 {
-                        let mut m = Member::new(
-                            "L",
-                            SectionSpec::Round(crate::section::Round { diameter_mm: 50.0 }),
-                            MaterialSpec::Grade {
-                                grade: "S355".into(),
-                            },
-                            length,
-                            10.0,
-                            Method::En1993,
-                        );
+                        let mut m = round_bar(length);
                         match which {
                             0 => (m.k_major, m.lcr_major_mm) = (k, lcr),
                             1 => (m.k_minor, m.lcr_minor_mm) = (k, lcr),
@@ -945,6 +973,66 @@ mod tests {
             }
         }
         assert_eq!(compared, values.len() * values.len() * 5 * 3);
+    }
+
+    /// A 50 mm S355 round bar of `length_mm` under 10 kN (EN 1993-1-1).
+    fn round_bar(length_mm: f64) -> Member {
+        Member::new(
+            "L",
+            SectionSpec::Round(crate::section::Round { diameter_mm: 50.0 }),
+            MaterialSpec::Grade {
+                grade: "S355".into(),
+            },
+            length_mm,
+            10.0,
+            Method::En1993,
+        )
+    }
+
+    /// The moments tested at once refuse what the steps one by one refuse,
+    /// naming the same field, over the edges of the bound.
+    #[test]
+    fn moments_at_once_are_the_moments_one_by_one() {
+        let values = [
+            0.0,
+            -0.0,
+            1.5,
+            -1.0e7,
+            1.0e7,
+            1.000_000_1e7,
+            -1.000_000_1e7,
+            f64::INFINITY,
+            f64::NEG_INFINITY,
+            f64::NAN,
+            f64::MAX,
+        ];
+        let mut compared = 0;
+        for &first in &values {
+            for &second in &values {
+                for slot in 0..6 {
+                    let mut m = round_bar(2000.0);
+                    let mut moments = [0.0; 6];
+                    moments[slot] = first;
+                    moments[(slot + 3) % 6] = second;
+                    [
+                        m.m_major_a_knm,
+                        m.m_major_b_knm,
+                        m.m_major_span_knm,
+                        m.m_minor_a_knm,
+                        m.m_minor_b_knm,
+                        m.m_minor_span_knm,
+                    ] = moments;
+                    let at_once = m.validate_bending();
+                    let one_by_one = m.moments_stepwise().and_then(|()| {
+                        positive("k_lt", m.k_lt)?;
+                        Ok(())
+                    });
+                    assert_eq!(format!("{at_once:?}"), format!("{one_by_one:?}"), "{m:?}");
+                    compared += 1;
+                }
+            }
+        }
+        assert_eq!(compared, values.len() * values.len() * 6);
     }
 
     #[test]

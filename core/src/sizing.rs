@@ -480,12 +480,6 @@ pub fn with_entry(member: &Member, entry: &Entry) -> Member {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::check::check_member;
     use crate::member::{AngleConnection, Leg, Truss};

@@ -379,12 +379,6 @@ pub fn largest_load(prepared: &Prepared, method: Method) -> Result<LargestLoad> 
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::material::MaterialSpec;
     use crate::section::{Given, Rect, Round, SectionSpec};

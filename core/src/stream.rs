@@ -716,12 +716,6 @@ impl<R: Read> Scan<R> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     fn member(id: &str) -> String {

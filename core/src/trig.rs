@@ -119,8 +119,7 @@ pub fn sin(x: f64) -> f64 {
 }
 
 /// The cosine of `x` (radians): the cosine half of [`sin_cos`], with the
-/// same value, without working the sine (the secant formula's solver asks
-/// for cosines only, many times a member).
+/// same value, without working the sine.
 pub fn cos(x: f64) -> f64 {
     if x.abs() <= PIO4 {
         return k_cos(x, 0.0);

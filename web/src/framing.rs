@@ -247,12 +247,6 @@ pub fn work_out(
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     const OWN: Stiffness = Stiffness {

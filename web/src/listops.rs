@@ -512,12 +512,6 @@ pub fn natural(a: &str, b: &str) -> Ordering {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::sample_member;
 

@@ -113,12 +113,6 @@ pub fn section_of(text: &str) -> Option<SectionSpec> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     fn total(m: &BucklingModel, l: f64) -> f64 {

@@ -303,12 +303,6 @@ fn analysis(h: &mut Html, b: &MemberBuckle, result: Option<&CheckResult>, sys: U
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     use crate::chart::column::tests::stepped_column as crane_column;

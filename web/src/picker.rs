@@ -362,12 +362,6 @@ pub fn picks(ps: &[Proposal], id: Option<&str>) -> Vec<(String, String)> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::sample_member;
     use strutline_core::method::Method;

@@ -294,12 +294,6 @@ pub fn today() -> String {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::demo_lists;
     use strutline_core::material::MaterialSpec;

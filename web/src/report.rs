@@ -624,12 +624,6 @@ fn sys_name(sys: UnitSystem) -> &'static str {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo;
     use std::sync::Arc;

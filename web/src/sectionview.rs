@@ -305,12 +305,6 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::{member, steel};
     use strutline_core::section::{Angle, Given, IMake, IShape, SectionSpec};

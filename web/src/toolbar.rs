@@ -111,12 +111,6 @@ pub fn status_html(t: &ListTools, checks: &[Arc<Checked>]) -> Html {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::sample_member;
     use crate::listops::CHANGE_KEYS;

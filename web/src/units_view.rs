@@ -82,6 +82,19 @@ pub fn result_text(system: UnitSystem, unit: &'static str, v: f64, decimals: usi
     format!("{n} {u}")
 }
 
+/// A stored value as a person typed it (SI: the stored number itself, as
+/// the editor shows it), with its unit; in US units converted, to four
+/// significant figures. `span` shows a US length in ft. For one-line
+/// summaries such as the list's rows.
+pub fn plain_text(system: UnitSystem, unit: &'static str, v: f64, span: bool) -> String {
+    let (d, u) = shown(system, unit, v, span);
+    let n = match system {
+        UnitSystem::Si => crate::numtext::for_input(d),
+        UnitSystem::Us => units::format_display(d, 4),
+    };
+    format!("{n} {u}")
+}
+
 /// A member length or position in the display units (mm in SI, ft in US),
 /// to the working's figures.
 pub fn span_text(system: UnitSystem, mm: f64) -> String {
@@ -125,12 +138,6 @@ pub fn from_field(system: UnitSystem, key: &str, typed: &str) -> String {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use UnitSystem::{Si, Us};
 
@@ -157,6 +164,15 @@ mod tests {
         assert_eq!(shown(Us, "mm", 3048.0, true), (10.0, "ft"));
         assert_eq!(shown(Us, "mm", 25.4, false), (1.0, "in"));
         assert_eq!(step_text(Us, "-", 0.5), "0.5");
+    }
+
+    #[test]
+    fn summaries_follow_the_units() {
+        assert_eq!(plain_text(Si, "mm", 3600.0, true), "3600 mm");
+        assert_eq!(plain_text(Si, "kN", 820.0, false), "820 kN");
+        // 3600 mm / 304.8 = 11.811 ft; 820 kN / 4.4482216152605 = 184.34 kip.
+        assert_eq!(plain_text(Us, "mm", 3600.0, true), "11.81 ft");
+        assert_eq!(plain_text(Us, "kN", 820.0, false), "184.3 kip");
     }
 
     #[test]

@@ -163,12 +163,6 @@ pub fn decode_keeping(text: &str) -> Result<(Workspace, Parsed), String> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::demo_lists;
 

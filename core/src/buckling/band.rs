@@ -203,13 +203,7 @@ impl Ldl {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic,
-        clippy::needless_range_loop
-    )]
+    #![allow(clippy::needless_range_loop)]
     use super::*;
 
     /// A symmetric banded test matrix, dense copy alongside.

@@ -334,12 +334,6 @@ pub fn joint_g(
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     fn k(sway: bool, g_a: f64, g_b: f64) -> f64 {

@@ -782,12 +782,6 @@ pub fn finish(c: &Column, s: Solution, load_factor_half: f64) -> Buckle {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use std::f64::consts::PI;
 

@@ -98,12 +98,6 @@ pub fn analyse(c: &Column) -> Result<Buckle> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::buckling::column::Load;
 

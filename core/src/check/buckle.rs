@@ -433,12 +433,6 @@ fn check_analysed(
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::check::Mode;
     use serde_json::json;

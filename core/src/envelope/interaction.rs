@@ -469,12 +469,6 @@ pub fn curves(prepared: &Prepared, method: Method) -> Result<[Curve; 2]> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::material::MaterialSpec;
     use crate::section::SectionSpec;

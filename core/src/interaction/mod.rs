@@ -69,7 +69,7 @@ pub struct Context<'a> {
     /// The bending side, both axes.
     pub bending: &'a Bending,
     /// The cross-section classification and effective area.
-    pub assessment: &'a Assessment,
+    pub assessment: &'a Assessment<'a>,
 }
 
 impl Context<'_> {

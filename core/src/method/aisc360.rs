@@ -453,12 +453,6 @@ pub fn e5_twist(input: &Input<'_>, trace: &mut Trace) -> bool {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
 
     use super::*;
 

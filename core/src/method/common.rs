@@ -5,7 +5,7 @@
 
 use std::f64::consts::PI;
 
-use crate::error::{positive, Error, Result};
+use crate::error::{all_positive, positive, Error, Result};
 use crate::material::{Material, Steel, Timber};
 use crate::method::Input;
 use crate::outcome::{Arg, Mode, ModeResult, Warning};
@@ -81,12 +81,20 @@ impl Basics {
 /// Checks the inputs of an axis and works its basics (no trace, no allocation).
 #[inline]
 pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
-    let lcr = positive("lcr_mm", lcr_mm)?;
     let (f, e) = input.material.strength_and_modulus();
+    let a = input.section.props.area_mm2;
+    let (i, r) = axis_props(input, mode);
+    // The usual case first, every value tested at once: the smallest above
+    // zero and the sum finite (no NaN, no infinity; a sum that overflows
+    // takes the steps below, which pass it). The steps name the first
+    // value that is not finite and above zero.
+    if all_positive([lcr_mm, f, e, a, i, r]) {
+        return Ok(basics_of(mode, lcr_mm, a, i, r, f, e));
+    }
+    let lcr = positive("lcr_mm", lcr_mm)?;
     let f = positive("strength", f)?;
     let e = positive("modulus", e)?;
-    let a = positive("area_mm2", input.section.props.area_mm2)?;
-    let (i, r) = axis_props(input, mode);
+    let a = positive("area_mm2", a)?;
     let i = positive(
         match mode {
             Mode::Major => "i_major_mm4",
@@ -101,9 +109,15 @@ pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
         },
         r,
     )?;
+    Ok(basics_of(mode, lcr, a, i, r, f, e))
+}
+
+/// [`basics`] of values already checked.
+#[inline]
+fn basics_of(mode: Mode, lcr: f64, a: f64, i: f64, r: f64, f: f64, e: f64) -> Basics {
     let slenderness = lcr / r;
     let sigma_e = PI * PI * e / (slenderness * slenderness);
-    Ok(Basics {
+    Basics {
         scope: scope_of(mode),
         lcr_mm: lcr,
         a_mm2: a,
@@ -118,7 +132,7 @@ pub fn basics(input: &Input<'_>, mode: Mode, lcr_mm: f64) -> Result<Basics> {
         // gross section, as Eq. 6.51 wants.
         n_cr_kn: PI * PI * e * i / (lcr * lcr) / 1000.0,
         sigma_e_mpa: sigma_e,
-    })
+    }
 }
 
 /// Pushes the geometry lines every method starts an axis with.
@@ -230,7 +244,7 @@ pub fn extreme_fibre_mm(input: &Input<'_>, mode: Mode, warnings: &mut Vec<Warnin
         Mode::Major => p.w_el_major_mm3,
         _ => p.w_el_minor_mm3,
     };
-    if w.is_finite() && w > 0.0 && i.is_finite() && i > 0.0 {
+    if all_positive([w]) && all_positive([i]) {
         return i / w;
     }
     let major = matches!(mode, Mode::Major);

@@ -77,12 +77,6 @@ pub fn axis(
 
 #[cfg(test)]
 pub(crate) mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
 
     use super::*;
     use crate::check::Prepared;

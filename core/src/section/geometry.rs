@@ -758,12 +758,7 @@ fn split_rotated(st: &[(f64, f64)], c: f64) -> (f64, f64, f64, f64, f64) {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::disallowed_methods
-    )]
+    #![allow(clippy::disallowed_methods)]
     // The standard library's functions are the reference here.
     use super::*;
 

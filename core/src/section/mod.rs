@@ -467,6 +467,7 @@ impl SectionSpec {
     /// Validates the dimensions and computes the properties. A catalogue
     /// reference is an error here: the catalogue builds it
     /// (`catalogue::build`), which the check does when it prepares a member.
+    #[inline]
     pub fn build(&self) -> Result<Section> {
         let Some(family) = self.family() else {
             return Err(crate::error::Error::Geometry {

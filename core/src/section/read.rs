@@ -210,12 +210,6 @@ impl<'de, A: MapAccess<'de>> MapAccess<'de> for Prepend<'de, A> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
 
     use proptest::prelude::*;
 

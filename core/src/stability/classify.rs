@@ -186,7 +186,9 @@ const EMPTY: Element = Element {
 };
 
 /// The classification of a section: up to four elements, no heap.
-#[derive(Debug, Clone, Copy, PartialEq)]
+/// Compared and printed by its elements (those past the count are not
+/// part of it).
+#[derive(Clone, Copy)]
 pub struct Classified {
     items: [Element; 4],
     len: usize,
@@ -210,6 +212,17 @@ impl Classified {
         }
     }
 
+    /// Starts this classification afresh for `code` and `fy_mpa`, as
+    /// [`Classified::start`] gives it, in place: the elements past the
+    /// count are never read, so they are left as they are (no 256-byte
+    /// write of empty elements a check).
+    pub(crate) fn restart(&mut self, code: Code, fy_mpa: f64) {
+        self.len = 0;
+        self.code = code;
+        self.class = 1;
+        self.epsilon = (235.0 / fy_mpa).sqrt();
+    }
+
     fn push(&mut self, e: Element) {
         if let Some(slot) = self.items.get_mut(self.len) {
             *slot = e;
@@ -226,6 +239,33 @@ impl Classified {
     /// Whether any element is slender (EN Class 4, AISC slender, CSA Class 4).
     pub fn is_slender(&self) -> bool {
         self.class >= 4
+    }
+}
+
+impl PartialEq for Classified {
+    fn eq(&self, other: &Classified) -> bool {
+        self.elements() == other.elements()
+            && self.code == other.code
+            && self.class == other.class
+            && self.epsilon == other.epsilon
+    }
+}
+
+impl std::fmt::Debug for Classified {
+    fn fmt(&self, f: &mut std::fmt::Formatter<'_>) -> std::fmt::Result {
+        f.debug_struct("Classified")
+            .field("elements", &self.elements())
+            .field("code", &self.code)
+            .field("class", &self.class)
+            .field("epsilon", &self.epsilon)
+            .finish()
+    }
+}
+
+impl Default for Classified {
+    /// No elements, EN 1993-1-1 at f_y = 235 MPa (a place to classify into).
+    fn default() -> Classified {
+        Classified::start(Code::En1993, 235.0)
     }
 }
 
@@ -589,12 +629,6 @@ fn element(code: Code, epsilon: f64, fy_mpa: f64, e_mpa: f64, r: &Raw) -> Elemen
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::section::plates::plates;
     use crate::section::{Flanged, HollowMake, IShape, Rhs};

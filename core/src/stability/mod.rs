@@ -60,9 +60,11 @@ fn warn<M: Into<std::borrow::Cow<'static, str>>>(
 
 /// What the cross-section assessment found.
 #[derive(Debug, Clone, Copy, PartialEq)]
-pub struct Assessment {
-    /// The classification, when the section's plates are known.
-    pub classified: Option<Classified>,
+pub struct Assessment<'c> {
+    /// The classification, when the section's plates are known: borrowed
+    /// from where [`assess`] classified it (a check's scratch), so the
+    /// assessment is small to return and pass on.
+    pub classified: Option<&'c Classified>,
     /// EN 1993-1-5 effective area of a Class 4 section (EN 1993-1-1 only).
     pub en_effective: Option<Effective>,
     /// The section is outside the code's scope: the member gets no resistance.
@@ -177,12 +179,13 @@ fn trace_effective(c: &Classified, eff: &Effective, scope: Scope, trace: &mut Tr
 /// Classifies the section for `method`, pushes the working, computes the
 /// EN 1993-1-5 effective area of a Class 4 section and refuses what the
 /// code does not cover.
-pub fn assess(
+pub fn assess<'c>(
     method: Method,
     input: &Input<'_>,
     trace: &mut Trace,
     warnings: &mut Vec<Warning>,
-) -> Assessment {
+    into: &'c mut Classified,
+) -> Assessment<'c> {
     let mut out = Assessment {
         classified: None,
         en_effective: None,
@@ -195,19 +198,18 @@ pub fn assess(
         return out;
     };
     let section = input.section;
-    // Classified in place: the classification is a few hundred bytes.
-    let c = out
-        .classified
-        .insert(classify::Classified::start(code, steel.fy_mpa));
-    if !classify::fill(&section.spec, steel.fy_mpa, steel.e_mpa, c) {
-        out.classified = None;
+    // Classified in place, in the caller's classification (a few hundred
+    // bytes, neither copied nor cleared element by element).
+    into.restart(code, steel.fy_mpa);
+    if !classify::fill(&section.spec, steel.fy_mpa, steel.e_mpa, into) {
         warn(warnings, "local-buckling-not-checked", || {
             "local buckling is not checked for typed section properties: the plates are unknown; \
              classify the section by hand (it must not be slender / Class 4)"
         });
         return out;
     }
-    let c = &*c;
+    let c = &*into;
+    out.classified = Some(c);
     trace_classification(c, trace);
     if !c.is_slender() {
         return out;
@@ -298,7 +300,7 @@ pub fn refused_mode() -> ModeResult {
 
 /// EN 1993-1-1 6.2.4 cross-section resistance N_c,Rd = A f_y / gamma_M0
 /// (Eq. 6.10, Class 1-3) or A_eff f_y / gamma_M0 (Eq. 6.11, Class 4).
-pub fn en_section_mode(input: &Input<'_>, a: &Assessment, trace: &mut Trace) -> ModeResult {
+pub fn en_section_mode(input: &Input<'_>, a: &Assessment<'_>, trace: &mut Trace) -> ModeResult {
     let (fy, _) = input.material.strength_and_modulus();
     let (area, clause) = match &a.en_effective {
         Some(e) => (e.area_mm2, sym!("EN 1993-1-1 Eq. 6.11")),
@@ -626,7 +628,7 @@ pub fn twist_mode(
     }
     let n = crit.n_twist;
     let a = p.area_mm2;
-    if !(n > 0.0 && n.is_finite()) {
+    if !crate::error::all_positive([n]) {
         return Err(crate::error::Error::OutOfRange {
             field: "torsion_mm4",
             value: input.section.props.torsion_mm4,

@@ -94,7 +94,7 @@ fn cubic(n: f64, n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64) -> (f64, f64) {
 /// Returns 0 when any load is not positive.
 pub fn flexural_torsional_general(n_a: f64, n_b: f64, n_t: f64, pa: f64, pb: f64) -> f64 {
     let n_min = n_a.min(n_b).min(n_t);
-    if !(n_min > 0.0 && n_min.is_finite()) {
+    if !crate::error::all_positive([n_min]) {
         return 0.0;
     }
     let (f_hi, _) = cubic(n_min, n_a, n_b, n_t, pa, pb);
@@ -240,12 +240,6 @@ pub fn critical(x: &Inputs) -> Critical {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
 
     #[test]

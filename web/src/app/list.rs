@@ -302,13 +302,21 @@ pub(super) fn MemberRow(
     let standing = Standing::of(&checked.outcome);
     let status = status_text(&checked.outcome);
     let util = utilisation_text(&checked.outcome);
-    let detail = format!(
-        "{} · L {} mm · N {} kN · {}",
+    // In the units shown: a toggle rewrites the text of the rows in view.
+    let (described, length_mm, axial_kn, method) = (
         m.section.describe(),
-        for_input(m.length_mm),
-        for_input(m.axial_kn),
-        m.method.key()
+        m.length_mm,
+        m.axial_kn,
+        m.method.key(),
     );
+    let detail = move || {
+        let system = crate::units_view::current();
+        format!(
+            "{described} · L {} · N {} · {method}",
+            crate::units_view::plain_text(system, "mm", length_mm, true),
+            crate::units_view::plain_text(system, "kN", axial_kn, false),
+        )
+    };
     let id_sel = id.clone();
     let is_selected =
         Memo::new(move |_| selected_id.with(|s| s.as_deref() == Some(id_sel.as_str())));

@@ -668,12 +668,6 @@ where
 
 #[cfg(test)]
 pub(crate) mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use strutline_core::check::buckle::buckle;
 

@@ -365,12 +365,6 @@ pub fn text_box(text: &str, size_px: f64) -> (f64, f64) {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::panic
-    )]
     use super::*;
     use crate::demo::sample_member;
 

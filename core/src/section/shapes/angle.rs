@@ -124,12 +124,7 @@ pub(super) fn outline(s: &Angle) -> Result<Poly> {
 
 #[cfg(test)]
 mod tests {
-    #![allow(
-        clippy::unwrap_used,
-        clippy::expect_used,
-        clippy::indexing_slicing,
-        clippy::disallowed_methods
-    )]
+    #![allow(clippy::disallowed_methods)]
     // The standard library's functions are the reference here.
     use super::*;
     use crate::section::SectionSpec;
