@@ -624,6 +624,8 @@ const lines = [
   `  (at least ${fmt(sl.module_body_floor_ms)} ms at 1.6 Mbit/s).`,
   "  To reproduce: `cargo xtask bench-web` (this file and `bench/web.json`, whose `slow` entry holds every",
   "  run and the first visit's transfers); the connection is the `SLOW` constant of `tests/browser/bench.mjs`.",
+  "- Notes taken by hand on the 1,000-member list's first frame (traces, font lookups, what was tried and",
+  "  taken out) are in `bench/first-frame.md`, which this run does not rewrite.",
   "- dist/ as a standard host sends it: every file of `dist/` gzipped at zlib's best level (flate2 on zlib), or as it is",
   "  where that is not smaller (the PNG icons), summed by `cargo xtask dist`, which fails over the budget.",
   `  As \`cargo xtask serve\` sends it (each file's zopfli \`.gz\` where smaller): ${Number.isFinite(DIST_SENT) ? `${DIST_SENT} B` : "n/a"}.`,
