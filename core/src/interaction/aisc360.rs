@@ -212,8 +212,7 @@ fn required(
     };
     let own = own_length(ctx, axis);
     let l = own.mm;
-    let pi = std::f64::consts::PI;
-    let p_e1 = pi * pi * e_mpa * i / (l * l) / 1000.0;
+    let p_e1 = crate::method::common::euler_n(e_mpa, i, l) / 1000.0;
     put(
         trace,
         S,

@@ -283,8 +283,7 @@ fn axis_terms(
     }
     let own = own_length(ctx, axis);
     let l = own.mm;
-    let pi = std::f64::consts::PI;
-    let c_e = pi * pi * e * i / (l * l) / 1000.0;
+    let c_e = crate::method::common::euler_n(e, i, l) / 1000.0;
     put(
         trace,
         S,

@@ -130,7 +130,7 @@ fn basics_of(mode: Mode, lcr: f64, a: f64, i: f64, r: f64, f: f64, e: f64) -> Ba
         // From I, not sigma_E A: when the check substitutes an effective
         // area (EN 1993-1-1 6.3.1.1(3), Class 4), N_cr stays that of the
         // gross section, as Eq. 6.51 wants.
-        n_cr_kn: PI * PI * e * i / (lcr * lcr) / 1000.0,
+        n_cr_kn: euler_n(e, i, lcr) / 1000.0,
         sigma_e_mpa: sigma_e,
     }
 }
@@ -478,4 +478,11 @@ pub fn hollow_make_unstated(input: &Input<'_>) -> bool {
 /// Whether the section family is a hollow one.
 pub fn is_hollow(input: &Input<'_>) -> bool {
     matches!(input.section.family, Family::Rhs | Family::Chs)
+}
+
+/// Euler load `pi^2 E I / L^2`, N (E in MPa, I in mm4, L in mm): the one
+/// definition the methods, the twisting modes and the beam-column
+/// amplifications (B1's P_e1, U_1's C_e) share.
+pub fn euler_n(e_mpa: f64, i_mm4: f64, l_mm: f64) -> f64 {
+    PI * PI * e_mpa * i_mm4 / (l_mm * l_mm)
 }

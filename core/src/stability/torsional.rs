@@ -34,13 +34,9 @@
 //! `f(N_min) >= 0` (e.g. `f(N_a) = N_a^2 (N_b - N_a) a0^2 / i0^2`), so
 //! exactly one sign change lies in `(0, N_min]`, at the smallest root.
 
+use crate::method::common::euler_n;
 use crate::roots::{newton_bisect, Stop};
 use std::f64::consts::PI;
-
-/// Euler load `pi^2 E I / L^2`, N (E in MPa, I in mm4, L in mm).
-pub fn euler_n(e_mpa: f64, i_mm4: f64, l_mm: f64) -> f64 {
-    PI * PI * e_mpa * i_mm4 / (l_mm * l_mm)
-}
 
 /// Polar radius of gyration about the shear centre squared,
 /// `i0^2 = (I_a + I_b)/A + a0^2 + b0^2`, mm2.
