@@ -429,10 +429,7 @@ fn bounded(field: &'static str, value: f64) -> Result<f64> {
 /// k about one axis: the alignment-chart k when the member gives a frame
 /// (refused together with its k or buckling length), else `k`.
 fn framed(frame: Option<Frame>, which: FrameKey, k: f64, lcr: Option<f64>) -> Result<f64> {
-    let field = match which {
-        FrameKey::Major => "k_major",
-        FrameKey::Minor => "k_minor",
-    };
+    let field = which.k_key();
     let k = positive(field, k)?;
     let Some(f) = frame else {
         return Ok(k);

@@ -63,6 +63,22 @@ impl FrameKey {
         }
     }
 
+    /// The member-file key of the effective-length factor about this axis.
+    pub fn k_key(self) -> &'static str {
+        match self {
+            FrameKey::Major => "k_major",
+            FrameKey::Minor => "k_minor",
+        }
+    }
+
+    /// The member-file key of the given buckling length about this axis.
+    pub fn lcr_key(self) -> &'static str {
+        match self {
+            FrameKey::Major => "lcr_major_mm",
+            FrameKey::Minor => "lcr_minor_mm",
+        }
+    }
+
     fn g_key(self, end_b: bool) -> &'static str {
         match (self, end_b) {
             (FrameKey::Major, false) => "frame_major.g_a",

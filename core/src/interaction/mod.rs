@@ -20,6 +20,7 @@
 use serde::Serialize;
 
 use crate::bending::Bending;
+use crate::buckling::chart::FrameKey;
 use crate::error::{Error, Result};
 use crate::member::{BucklingLengths, Unbraced};
 use crate::method::{Input, Method};
@@ -198,35 +199,31 @@ const ANALYSIS_TOLERANCE: f64 = 1e-5;
 pub fn own_length(ctx: &Context<'_>, axis: crate::bending::Axis) -> OwnLength {
     use crate::bending::Axis;
     let m = ctx.input.member;
-    let (buckling_mm, unbraced_mm, frame, lcr, k_field, lcr_field, frame_field) = match axis {
+    let (keys, buckling_mm, unbraced_mm, frame, lcr) = match axis {
         Axis::Major => (
+            FrameKey::Major,
             ctx.lengths.major_mm,
             ctx.unbraced.major_mm,
             m.frame_major,
             m.lcr_major_mm,
-            "k_major",
-            "lcr_major_mm",
-            "frame_major",
         ),
         Axis::Minor => (
+            FrameKey::Minor,
             ctx.lengths.minor_mm,
             ctx.unbraced.minor_mm,
             m.frame_minor,
             m.lcr_minor_mm,
-            "k_minor",
-            "lcr_minor_mm",
-            "frame_minor",
         ),
     };
     let model = ctx.unbraced.from_model;
     let field = if model {
         "buckling_model"
     } else if frame.is_some() {
-        frame_field
+        keys.key()
     } else if lcr.is_some() {
-        lcr_field
+        keys.lcr_key()
     } else {
-        k_field
+        keys.k_key()
     };
     let (mm, basis) = match frame {
         Some(f) if !model => (unbraced_mm, OwnBasis::Frame { sway: f.sway }),
