@@ -620,13 +620,6 @@ impl Member {
 
     /// The laterally unbraced lengths about both axes ([`Unbraced`]).
     pub fn unbraced(&self) -> Unbraced {
-        if self.buckling_model.is_none() {
-            return Unbraced {
-                major_mm: self.length_mm,
-                minor_mm: self.length_mm,
-                from_model: false,
-            };
-        }
         Unbraced {
             major_mm: self.unbraced_mm(crate::buckling::Axis::Major),
             minor_mm: self.unbraced_mm(crate::buckling::Axis::Minor),
