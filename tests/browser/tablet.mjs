@@ -56,7 +56,12 @@ async function typeAndWatch(page, name, value) {
   await field.tap().catch(() => field.click());
   await field.focus();
   const before = await shown(page);
-  await page.keyboard.press("ControlOrMeta+A");
+  // Select the whole text (a key chord after a tap did not always take on
+  // the emulated phone: the value was then typed in front of the old one,
+  // which the verdict used to hide by keeping the last readable result).
+  await field.selectText();
+  const whole = await field.evaluate((el) => el.selectionStart === 0 && el.selectionEnd === el.value.length);
+  assert.ok(whole, `the text of ${name} is not wholly selected before typing`);
   await page.keyboard.type(String(value));
   await page.waitForFunction(
     (b) => {
