@@ -759,6 +759,7 @@ fn work(
             }
         }
     };
+    interaction::warn_unused_lengths(m, method, warnings);
     let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
     let passes = passes && within_limits(method, modes);
     Ok(Verdict {
