@@ -12,7 +12,7 @@
 import assert from "node:assert/strict";
 import { writeFileSync } from "node:fs";
 import { join } from "node:path";
-import { modelEditLoop, setField, STORAGE_KEY } from "./lib.mjs";
+import { modelEditLoop, pictureInks, setField, STORAGE_KEY } from "./lib.mjs";
 
 const LANDSCAPE = { viewport: { width: 1180, height: 820 }, hasTouch: true, deviceScaleFactor: 1 };
 const PORTRAIT = { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
@@ -165,22 +165,8 @@ export function register(test, { withApp, open, OUT }) {
       // The picture itself: decoded at twice its 560 x 420 CSS px, and
       // holding both shapes' inks (high-contrast palette of
       // web/src/chart/column.rs: major rgb(0,0,160), minor rgb(120,0,0)).
-      const inks = await drawing.evaluate(async (img) => {
-        await img.decode();
-        const c = document.createElement("canvas");
-        c.width = img.naturalWidth;
-        c.height = img.naturalHeight;
-        const g = c.getContext("2d");
-        g.drawImage(img, 0, 0);
-        const d = g.getImageData(0, 0, c.width, c.height).data;
-        const near = (i, r, gr, b) => Math.abs(d[i] - r) < 24 && Math.abs(d[i + 1] - gr) < 24 && Math.abs(d[i + 2] - b) < 24;
-        let major = 0, minor = 0;
-        for (let i = 0; i < d.length; i += 4) {
-          if (near(i, 0, 0, 160)) major++;
-          if (near(i, 120, 0, 0)) minor++;
-        }
-        return { w: img.naturalWidth, h: img.naturalHeight, major, minor };
-      });
+      const picture = await pictureInks(drawing, [[0, 0, 160], [120, 0, 0]]);
+      const inks = { w: picture.natural[0], h: picture.natural[1], major: picture.near[0], minor: picture.near[1] };
       assert.equal(inks.w, 1120, JSON.stringify(inks));
       assert.equal(inks.h, 840, JSON.stringify(inks));
       assert.ok(inks.major > 200 && inks.minor > 200, `both buckled shapes in the picture: ${JSON.stringify(inks)}`);

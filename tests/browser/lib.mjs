@@ -446,3 +446,34 @@ export async function runTests(label, tests, only) {
   console.log(`${label}: ${passed} passed, ${failed} failed`);
   process.exit(failed > 0 ? 1 : 0);
 }
+
+/** What a picture on the page (an <img> locator) holds: its size as
+ * decoded and as shown, the share of its pixels that differ from its
+ * top-left corner's colour (`ink`), and for each [r, g, b] of `colours`
+ * the count of pixels within 24 of it on every channel (`near`). */
+export async function pictureInks(img, colours = []) {
+  return img.evaluate(async (el, colours) => {
+    await el.decode().catch(() => {});
+    const c = document.createElement("canvas");
+    c.width = el.naturalWidth;
+    c.height = el.naturalHeight;
+    const g = c.getContext("2d");
+    g.drawImage(el, 0, 0);
+    const d = c.width && c.height ? g.getImageData(0, 0, c.width, c.height).data : [];
+    const near = colours.map(() => 0);
+    let ink = 0;
+    for (let i = 0; i < d.length; i += 4) {
+      if (Math.abs(d[i] - d[0]) + Math.abs(d[i + 1] - d[1]) + Math.abs(d[i + 2] - d[2]) > 60) ink += 1;
+      colours.forEach(([r, gr, b], k) => {
+        if (Math.abs(d[i] - r) < 24 && Math.abs(d[i + 1] - gr) < 24 && Math.abs(d[i + 2] - b) < 24) near[k] += 1;
+      });
+    }
+    const r = el.getBoundingClientRect();
+    return {
+      natural: [el.naturalWidth, el.naturalHeight],
+      shown: [Math.round(r.width), Math.round(r.height)],
+      ink: ink / Math.max(1, d.length / 4),
+      near,
+    };
+  }, colours);
+}

@@ -11,7 +11,7 @@ import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { memberFile, seedStorage, STORAGE_KEY, workspaceText } from "./lib.mjs";
+import { memberFile, pictureInks, seedStorage, STORAGE_KEY, workspaceText } from "./lib.mjs";
 
 // A member-file key as the file writes it: words joined by "_", most
 // ending in their unit (length_mm, fc0k_mpa, k_major, gamma_m1).
@@ -141,6 +141,69 @@ const GATE_ANGLE = {
   m_major_a_knm: 2,
   m_major_b_knm: -1,
 };
+
+/** The calc sheet's chart picture of the member open ([`pictureInks`]). */
+async function sheetChart(page) {
+  const img = page.locator("[data-testid=calc-sheet] img.sheet-chart").first();
+  await img.waitFor({ state: "attached", timeout: 10_000 });
+  return pictureInks(img);
+}
+
+/** Fails unless the sheet's chart is a real picture: drawn at least 600
+ * CSS px wide at 2 device px each, shown at least 300 px wide, with ink. */
+function realChart(chart, where) {
+  assert.ok(chart.natural[0] >= 1200 && chart.natural[1] >= 600, `${where}: the sheet's chart is drawn ${chart.natural.join(" x ")} px`);
+  assert.ok(chart.shown[0] >= 300 && chart.shown[1] >= 150, `${where}: the sheet's chart is shown ${chart.shown.join(" x ")} px`);
+  assert.ok(chart.ink > 0.01, `${where}: the sheet's chart has ${(chart.ink * 100).toFixed(2)} % ink`);
+}
+
+// An invented beam-column whose titles are long: a rolled W-shape leg of a
+// made-up yard portal, AISC 360-16, moments about its major axis only (so
+// the minor panel assumes a uniform moment and holds the major one).
+const PORTAL_LEG = {
+  id: "YP-2",
+  section: { kind: "catalogue", designation: "W10X49" },
+  material: { grade: "A992" },
+  length_mm: 4267.2,
+  axial_kn: 1334.5,
+  method: "aisc360-lrfd",
+  m_major_a_knm: 160,
+  m_major_b_knm: -80,
+};
+
+// The first member of the app's demo as a new member starts (a small
+// solid bar, Euler): its two markers lie close together.
+const NEW_BAR = {
+  id: "NB-1",
+  section: { kind: "rect", depth_mm: 100, width_mm: 60 },
+  material: { fy_mpa: 275, e_mpa: 210000 },
+  length_mm: 2500,
+  axial_kn: 150,
+  method: "euler",
+};
+
+/** What is wrong with the words of a chart (a canvas or the sheet's
+ * picture): the boxes it recorded (data-text-boxes, CSS px) that leave it,
+ * overlap each other, or cover a mark (data-mark-boxes). Empty when
+ * nothing is. */
+async function wordsClash(locator) {
+  return locator.evaluate((el) => {
+    const parse = (t) => (t ?? "").split(";").filter(Boolean).map((b) => b.split(",").map(Number));
+    const text = parse(el.dataset.textBoxes);
+    const marks = parse(el.dataset.markBoxes);
+    const [w, h] = el.tagName === "IMG" ? [el.getAttribute("width"), el.getAttribute("height")].map(Number) : [el.clientWidth, el.clientHeight];
+    const out = [];
+    if (text.length < 3) out.push(`only ${text.length} text boxes recorded`);
+    const e = 0.5;
+    const overlap = (a, b) => a[0] + e < b[0] + b[2] && b[0] + e < a[0] + a[2] && a[1] + e < b[1] + b[3] && b[1] + e < a[1] + a[3];
+    text.forEach((a, i) => {
+      if (a[0] < -e || a[1] < -e || a[0] + a[2] > w + e || a[1] + a[3] > h + e) out.push(`box ${i} ${a} leaves the ${w} x ${h} chart`);
+      text.forEach((b, j) => { if (j > i && overlap(a, b)) out.push(`boxes ${i} ${a} and ${j} ${b} overlap`); });
+      marks.forEach((m, j) => { if (overlap(a, m)) out.push(`box ${i} ${a} covers mark ${j} ${m}`); });
+    });
+    return out;
+  });
+}
 
 export function register(test, { withApp, open, OUT }) {
   for (const [label, options] of [["landscape", LANDSCAPE], ["portrait", PORTRAIT]]) {
@@ -343,6 +406,65 @@ export function register(test, { withApp, open, OUT }) {
         return rules;
       });
       assert.deepEqual(hover, [], "nothing is shown on hover only");
+    }, PORTRAIT);
+  });
+
+  for (const [label, options] of [["landscape", LANDSCAPE], ["portrait", PORTRAIT]]) {
+    const { width, height } = options.viewport;
+    test(`chart-words-apart-${label}`, async () => {
+      await withApp(`chart-words-apart-${label}`, async (page, _log, context) => {
+        await seedStorage(context, workspaceText([memberFile("Yard portal", [PORTAL_LEG, NEW_BAR])]));
+        await open(page);
+        if (label === "portrait") await page.click("[data-testid=chart-toggle]");
+        const canvas = page.locator("canvas#envelope");
+        for (const [id, kind] of [[PORTAL_LEG.id, "interaction"], [NEW_BAR.id, "slenderness"]]) {
+          for (const units of ["SI", "US"]) {
+            await page.locator(`[data-testid=member-row][data-id="${id}"] .row-main`).first().click();
+            if (units === "US") await page.click("[data-testid=units-toggle]");
+            await page.locator(`canvas#envelope[data-chart=${kind}]`).waitFor({ timeout: 15_000 });
+            await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+            const where = `${id} at ${width} x ${height}, ${units}`;
+            assert.deepEqual(await wordsClash(canvas), [], `${where}: the chart's words`);
+            await canvas.screenshot({ path: join(OUT, `chart-words-${id}-${width}x${height}-${units}.png`) });
+            await page.click("[data-testid=open-sheet]");
+            const img = page.locator("[data-testid=calc-sheet] img.sheet-chart").first();
+            await img.waitFor({ state: "attached" });
+            assert.deepEqual(await wordsClash(img), [], `${where}: the sheet's chart's words`);
+            if (label === "landscape") await img.screenshot({ path: join(OUT, `chart-words-${id}-sheet-${units}.png`) });
+            await page.click("[data-testid=close-sheet]");
+            if (units === "US") await page.click("[data-testid=units-toggle]");
+          }
+        }
+      }, options);
+    });
+  }
+
+  test("calc-sheet-chart-when-folded", async () => {
+    await withApp("calc-sheet-chart-when-folded", async (page) => {
+      await open(page);
+      // Upright, the chart starts folded away.
+      await page.locator("[data-testid=result-utilisation]").first().waitFor();
+      assert.equal(await page.locator("[data-testid=chart-toggle]").getAttribute("aria-expanded"), "false");
+      assert.equal(await page.locator("canvas#envelope").isVisible(), false, "820 x 1180: the chart starts folded");
+      await page.click("[data-testid=open-sheet]");
+      realChart(await sheetChart(page), "820 x 1180, chart folded");
+      await page.screenshot({ path: join(OUT, "calc-sheet-chart-folded-820x1180.png"), fullPage: false });
+      await page.click("[data-testid=close-sheet]");
+      // Turned to landscape, the sheet opened and closed, turned back
+      // upright and opened again: the chart is still whole.
+      await page.setViewportSize({ width: 1180, height: 820 });
+      await page.locator("canvas#envelope").waitFor({ state: "visible" });
+      await page.click("[data-testid=open-sheet]");
+      realChart(await sheetChart(page), "1180 x 820");
+      await page.click("[data-testid=close-sheet]");
+      await page.setViewportSize({ width: 820, height: 1180 });
+      await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+      await page.click("[data-testid=open-sheet]");
+      realChart(await sheetChart(page), "turned back to 820 x 1180");
+      // Printed, the picture keeps its size.
+      await page.emulateMedia({ media: "print" });
+      realChart(await sheetChart(page), "printed");
+      await page.emulateMedia({ media: "screen" });
     }, PORTRAIT);
   });
 

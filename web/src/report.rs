@@ -508,6 +508,33 @@ fn properties_html(r: &CheckResult, sys: UnitSystem) -> Html {
     h
 }
 
+/// The chart the calc sheet prints on the page of the member it was opened
+/// from.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SheetChart {
+    /// The member's id.
+    pub id: String,
+    /// The picture, or why none could be drawn (said in words on the
+    /// sheet instead).
+    pub image: Result<SheetImage, String>,
+    /// The legend, as drawn with the picture.
+    pub legend: Html,
+    /// What the chart is: the picture's text alternative.
+    pub what: String,
+}
+
+/// A picture for the sheet: a PNG `data:` URL, its size in CSS px, and
+/// the boxes of its words and marks as its canvas recorded them
+/// (`chart::labels::Boxes`), kept on the image for tests.
+#[derive(Debug, Clone, PartialEq)]
+pub struct SheetImage {
+    pub url: String,
+    pub width: u32,
+    pub height: u32,
+    pub text_boxes: String,
+    pub mark_boxes: String,
+}
+
 /// The calc sheet of a list: a summary page with the list's title block,
 /// then a page for each member with its inputs (symbol, value, meaning, in
 /// the order of the working), section properties, verdict, modes and
@@ -519,7 +546,7 @@ pub fn sheet_html(
     title: &str,
     header: &SheetHeader,
     checks: &[std::sync::Arc<Checked>],
-    chart: Option<(&str, &str, &Html, &str)>,
+    chart: Option<&SheetChart>,
     sys: UnitSystem,
 ) -> Html {
     let mut caution = Html::new();
@@ -618,16 +645,30 @@ pub fn sheet_html(
         if let Some(r) = c.result() {
             h.push(&working_in(r, sys, &crate::print::speak));
         }
-        if let Some((_, url, legend, what)) = chart.filter(|(cid, ..)| *cid == c.member.id) {
-            html!(
-                h,
-                "<img class=\"sheet-chart\" src=\"{}\" alt=\"Member {}: {}\">\
-                 <ul class=\"chart-legend sheet-legend\">{}</ul>",
-                url,
-                id,
-                what,
-                legend
-            );
+        if let Some(chart) = chart.filter(|ch| ch.id == c.member.id) {
+            match &chart.image {
+                Ok(img) => html!(
+                    h,
+                    "<img class=\"sheet-chart\" data-testid=\"sheet-chart\" src=\"{}\" \
+                     width=\"{}\" height=\"{}\" data-text-boxes=\"{}\" data-mark-boxes=\"{}\" alt=\"Member {}: {}\">\
+                     <ul class=\"chart-legend sheet-legend\">{}</ul>",
+                    img.url,
+                    img.width,
+                    img.height,
+                    img.text_boxes,
+                    img.mark_boxes,
+                    id,
+                    chart.what,
+                    chart.legend
+                ),
+                // Words, never an empty picture.
+                Err(why) => html!(
+                    h,
+                    "<p class=\"verdict-error\" data-testid=\"sheet-chart-missing\">No chart for member {}: {}</p>",
+                    id,
+                    why
+                ),
+            }
         }
         html!(h, "{}</section>", caution);
     }
@@ -958,6 +999,32 @@ mod tests {
     }
 
     #[test]
+    fn a_chart_that_cannot_be_drawn_is_said_in_words_never_an_empty_picture() {
+        let cs = vec![Arc::new(checked("A1"))];
+        let chart = SheetChart {
+            id: "A1".into(),
+            image: Err("The chart appears when the member's input can be checked.".into()),
+            legend: Html::from_lit("<li>Euler</li>"),
+            what: "Failure stress against slenderness".into(),
+        };
+        let h = sheet_html(
+            "Depot",
+            &SheetHeader::default(),
+            &cs,
+            Some(&chart),
+            UnitSystem::Si,
+        )
+        .into_string();
+        assert!(!h.contains("<img class=\"sheet-chart\""), "{h}");
+        assert!(
+            h.contains(
+                "No chart for member A1: The chart appears when the member&#39;s input can be checked."
+            ),
+            "{h}"
+        );
+    }
+
+    #[test]
     fn sheet_has_a_page_per_member_and_the_caution_on_each() {
         let cs: Vec<_> = ["A1", "A2", "A3"]
             .iter()
@@ -972,12 +1039,18 @@ mod tests {
             "Depot",
             &header,
             &cs,
-            Some((
-                "A2",
-                "data:image/png;base64,AA",
-                &Html::from_lit("<li>Euler</li>"),
-                "Failure stress against slenderness",
-            )),
+            Some(&SheetChart {
+                id: "A2".into(),
+                image: Ok(SheetImage {
+                    url: "data:image/png;base64,AA".into(),
+                    width: 720,
+                    height: 450,
+                    text_boxes: "1.0,2.0,3.0,4.0".into(),
+                    mark_boxes: String::new(),
+                }),
+                legend: Html::from_lit("<li>Euler</li>"),
+                what: "Failure stress against slenderness".into(),
+            }),
             UnitSystem::Si,
         )
         .into_string();
@@ -989,6 +1062,7 @@ mod tests {
             1,
             "the legend beside the chart"
         );
+        assert!(h.contains("width=\"720\" height=\"450\""));
         assert!(h.contains("Member A2"));
         assert!(h.contains("<dd data-testid=\"sheet-job\">J-&lt;204&gt;</dd>"));
         assert!(h.contains("<dt>revision</dt><dd>B</dd><dt>"));

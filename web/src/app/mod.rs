@@ -93,11 +93,9 @@ struct Ctx {
     save_pending: StoredValue<bool>,
     /// The units shown and typed (the stored values stay SI).
     units: RwSignal<UnitSystem>,
-    /// The calc sheet when open: the chart image of the member it was
-    /// opened from (id, PNG data URL), if there was one.
-    sheet: RwSignal<Option<Option<results::SheetChart>>>,
-    /// The chart's legend as last drawn (the calc sheet prints it too).
-    legend: RwSignal<crate::html::Html>,
+    /// The calc sheet when open: the chart of the member it was opened
+    /// from, if one was selected.
+    sheet: RwSignal<Option<Option<report::SheetChart>>>,
     /// Whether the docked chart is open (narrow and upright screens).
     chart_open: RwSignal<bool>,
     /// Texts in the editor that cannot be read: their members are shown
@@ -327,7 +325,6 @@ pub fn App() -> impl IntoView {
         save_pending: StoredValue::new(false),
         units: RwSignal::new(crate::units_view::load()),
         sheet: RwSignal::new(None),
-        legend: RwSignal::new(crate::html::Html::new()),
         chart_open: RwSignal::new(false),
         drafts,
         painted,

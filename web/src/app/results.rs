@@ -104,26 +104,163 @@ fn after_frame(
     (html, busy)
 }
 
-/// The selected member's id, its chart as a PNG data URL, the chart's
-/// legend as drawn and what the chart is (its label, the image's text
-/// alternative).
-pub(super) fn chart_image(ctx: Ctx) -> Option<SheetChart> {
-    let id = ctx.current()?.id;
-    let el = document().get_element_by_id("envelope")?;
-    let c: web_sys::HtmlCanvasElement = wasm_bindgen::JsCast::dyn_into(el).ok()?;
-    let what = c.get_attribute("aria-label").unwrap_or_default();
-    Some((id, c.to_data_url().ok()?, ctx.legend.get_untracked(), what))
+/// How the chart is drawn, as the person has set it.
+#[derive(Debug, Clone, Copy)]
+pub(super) struct Look {
+    /// The Perry-Robertson bows on the envelope.
+    perry: bool,
+    /// Every other method that applies.
+    compare: bool,
+    high_contrast: bool,
+    units: UnitSystem,
+    /// The interaction chart rather than the slenderness envelope.
+    interaction: bool,
 }
 
-/// The chart a calc sheet prints: member id, image URL, legend, label.
-pub(super) type SheetChart = (String, String, Html, String);
+/// What a drawing gives besides the picture: its legend, a note where it
+/// could not be drawn, and its description in words.
+pub(super) struct Drawn {
+    legend: Html,
+    note: Option<String>,
+    described: String,
+}
+
+/// What the chart is, in words: the canvas's label and the sheet image's
+/// text alternative.
+fn chart_label(interaction: bool) -> &'static str {
+    if interaction {
+        "Interaction chart: compression against the largest moment about each axis, the region within capacity shaded and the member's point"
+    } else {
+        "Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"
+    }
+}
+
+/// Draws the chart of `c` on `el` (sized to its CSS size x `dpr`): the
+/// interaction chart or the slenderness envelope as `look` says. One path
+/// for the screen's canvas and the calc sheet's offscreen one.
+pub(super) fn draw_chart(
+    el: &web_sys::HtmlCanvasElement,
+    c: Option<&Checked>,
+    look: Look,
+    dpr: f64,
+) -> Drawn {
+    let Look {
+        perry,
+        compare: others,
+        high_contrast: hc,
+        units: sys,
+        interaction,
+    } = look;
+    let us = sys == UnitSystem::Us;
+    let Some((p, r)) = c.and_then(|c| c.prepared.as_ref().zip(c.result())) else {
+        return Drawn {
+            legend: legend_html(perry, None),
+            note: Some("The chart appears when the member's input can be checked.".into()),
+            described: String::new(),
+        };
+    };
+    if interaction {
+        return match chart::interaction::build(p, r, others) {
+            Ok(d) => {
+                let compared = chart::interaction::compared(&d);
+                Drawn {
+                    legend: interaction_legend_html(others.then_some(compared.as_slice())),
+                    note: chart::interaction::draw(el, &d, dpr, hc, us).err(),
+                    described: chart::interaction::describe(&d, sys),
+                }
+            }
+            Err(e) => Drawn {
+                legend: interaction_legend_html(None),
+                note: Some(fields::error_text(&e)),
+                described: String::new(),
+            },
+        };
+    }
+    match chart::data::build(p, r, perry, others) {
+        Ok(d) => Drawn {
+            legend: legend_html(perry, others.then_some(d.others.as_slice())),
+            note: chart::envelope::draw(el, &d, dpr, hc, us)
+                .and_then(|()| {
+                    el.set_attribute("data-chart", "slenderness")
+                        .map_err(|_| "chart: the canvas could not be marked".to_string())
+                })
+                .err(),
+            described: match d.governing() {
+                Some(g) => format!(
+                    "Governing axis {}: slenderness {}, applied stress {}, design stress {}, plateau {}.",
+                    g.mode.key(),
+                    working(g.slenderness),
+                    step_text(sys, "MPa", g.applied_mpa),
+                    step_text(sys, "MPa", g.resistance_mpa),
+                    step_text(sys, "MPa", d.yield_mpa)
+                ),
+                None => String::new(),
+            },
+        },
+        Err(e) => Drawn {
+            legend: legend_html(perry, None),
+            note: Some(fields::error_text(&e)),
+            described: String::new(),
+        },
+    }
+}
+
+/// The calc sheet's chart: CSS px, drawn at twice that so it prints sharp.
+const SHEET_CHART: (u32, u32) = (720, 450);
+
+/// The chart of the selected member for the calc sheet, drawn afresh on a
+/// canvas of its own (so it is there however the screen's chart is folded
+/// or sized), as the person has set the chart; or, where none can be
+/// drawn, why not.
+pub(super) fn chart_image(ctx: Ctx) -> Option<report::SheetChart> {
+    let sel = ctx.selected.get_untracked();
+    let c = ctx.checks.with_untracked(|c| c.0.get(sel).cloned())?;
+    let interaction = c.member.has_moments() && !ctx.slenderness.get_untracked();
+    let look = Look {
+        perry: ctx.perry.get_untracked(),
+        compare: ctx.compare.get_untracked(),
+        high_contrast: ctx.high_contrast.get_untracked(),
+        units: ctx.units.get_untracked(),
+        interaction,
+    };
+    let (width, height) = SHEET_CHART;
+    let (legend, image) = match chart::offscreen_canvas(width, height, 2.0) {
+        None => (
+            Html::new(),
+            Err("no canvas could be made (try reloading the page)".to_string()),
+        ),
+        Some(el) => {
+            let drawn = draw_chart(&el, Some(&c), look, 2.0);
+            let image = match drawn.note {
+                Some(why) => Err(why),
+                None => el
+                    .to_data_url()
+                    .map(|url| report::SheetImage {
+                        url,
+                        width,
+                        height,
+                        text_boxes: el.get_attribute("data-text-boxes").unwrap_or_default(),
+                        mark_boxes: el.get_attribute("data-mark-boxes").unwrap_or_default(),
+                    })
+                    .map_err(|_| "the picture could not be read from its canvas".to_string()),
+            };
+            (drawn.legend, image)
+        }
+    };
+    Some(report::SheetChart {
+        id: c.member.id.clone(),
+        image,
+        legend,
+        what: chart_label(interaction).to_string(),
+    })
+}
 
 /// The calc sheet of the open list, built as text by
 /// [`report::sheet_html`], with the list's header lines (entered once,
 /// stored with the list, printed on every page), and buttons to print it
 /// and to close it.
 #[component]
-pub(super) fn CalcSheet(ctx: Ctx, chart: Option<SheetChart>) -> impl IntoView {
+pub(super) fn CalcSheet(ctx: Ctx, chart: Option<report::SheetChart>) -> impl IntoView {
     let today = crate::print::today();
     // The list's title and header, the date of today where none is given.
     let header = Memo::new(move |_| {
@@ -156,9 +293,7 @@ pub(super) fn CalcSheet(ctx: Ctx, chart: Option<SheetChart>) -> impl IntoView {
             &title,
             &h,
             &checks.0,
-            chart
-                .as_ref()
-                .map(|(id, url, legend, what)| (id.as_str(), url.as_str(), legend, what.as_str())),
+            chart.as_ref(),
             ctx.units.get_untracked(),
         )
         .into_string()
@@ -328,19 +463,20 @@ pub(super) fn Chart(
     let canvas = NodeRef::<leptos::html::Canvas>::new();
     let note = RwSignal::new(None::<String>);
     let described = RwSignal::new(String::new());
-    let legend = ctx.legend;
+    let legend = RwSignal::new(Html::new());
     // A member with moments is shown on its interaction chart unless the
     // person asked for the slenderness envelope.
     let beam_column = Memo::new(move |_| current.get().is_some_and(|c| c.member.has_moments()));
     let interaction_shown = move || beam_column.get() && !ctx.slenderness.get();
     Effect::new(move |_| {
         let c = current.get();
-        let perry = ctx.perry.get();
-        let others = ctx.compare.get();
-        let hc = ctx.high_contrast.get();
-        let sys = ctx.units.get();
-        let us = sys == UnitSystem::Us;
-        let interaction = interaction_shown();
+        let look = Look {
+            perry: ctx.perry.get(),
+            compare: ctx.compare.get(),
+            high_contrast: ctx.high_contrast.get(),
+            units: ctx.units.get(),
+            interaction: interaction_shown(),
+        };
         // The canvas's size is read again after a resize or when the
         // docked chart opens or closes.
         let resized = ctx.resize.get() * 2 + u64::from(ctx.chart_open.get());
@@ -368,63 +504,10 @@ pub(super) fn Chart(
         ] {
             let _ = el.remove_attribute(a);
         }
-        let ready = c.as_ref().and_then(|c| c.prepared.as_ref().zip(c.result()));
-        let Some((p, r)) = ready else {
-            legend.set(legend_html(perry, None));
-            note.set(Some(
-                "The chart appears when the member's input can be checked.".into(),
-            ));
-            described.set(String::new());
-            return;
-        };
-        if interaction {
-            match chart::interaction::build(p, r, others) {
-                Ok(d) => {
-                    let compared = chart::interaction::compared(&d);
-                    legend.set(interaction_legend_html(
-                        others.then_some(compared.as_slice()),
-                    ));
-                    match chart::interaction::draw(&el, &d, dpr, hc, us) {
-                        Ok(()) => note.set(None),
-                        Err(e) => note.set(Some(e)),
-                    }
-                    described.set(chart::interaction::describe(&d, sys));
-                }
-                Err(e) => {
-                    legend.set(interaction_legend_html(None));
-                    note.set(Some(fields::error_text(&e)));
-                    described.set(String::new());
-                }
-            }
-            return;
-        }
-        match chart::data::build(p, r, perry, others) {
-            Ok(d) => {
-                legend.set(legend_html(perry, others.then_some(d.others.as_slice())));
-                match chart::envelope::draw(&el, &d, dpr, hc, us) {
-                    Ok(()) => {
-                        let _ = el.set_attribute("data-chart", "slenderness");
-                        note.set(None)
-                    }
-                    Err(e) => note.set(Some(e)),
-                }
-                described.set(match d.governing() {
-                    Some(g) => format!(
-                        "Governing axis {}: slenderness {}, applied stress {}, design stress {}, plateau {}.",
-                        g.mode.key(),
-                        working(g.slenderness),
-                        step_text(sys, "MPa", g.applied_mpa),
-                        step_text(sys, "MPa", g.resistance_mpa),
-                        step_text(sys, "MPa", d.yield_mpa)
-                    ),
-                    None => String::new(),
-                });
-            }
-            Err(e) => {
-                legend.set(legend_html(perry, None));
-                note.set(Some(fields::error_text(&e)));
-            }
-        }
+        let drawn = draw_chart(&el, c.as_deref(), look, dpr);
+        legend.set(drawn.legend);
+        note.set(drawn.note);
+        described.set(drawn.described);
     });
     // The head's height, for the page to keep a focused field clear of
     // it when it is docked (style.css reads --dock).
@@ -464,11 +547,7 @@ pub(super) fn Chart(
             <div class="canvas-frame" id="envelope-frame">
                 <canvas id="envelope" class="envelope" node_ref=canvas role="img"
                     aria-describedby="chart-description"
-                    aria-label=move || if interaction_shown() {
-                        "Interaction chart: compression against the largest moment about each axis, the region within capacity shaded and the member's point"
-                    } else {
-                        "Failure stress against slenderness: Euler's curve, strength plateau, design curves and the member's markers"
-                    }></canvas>
+                    aria-label=move || chart_label(interaction_shown())></canvas>
             </div>
         </div>
         <div class="result-more">

@@ -311,13 +311,8 @@ pub fn png(
 ) -> Result<(String, usize), String> {
     #[cfg(target_arch = "wasm32")]
     {
-        let canvas: HtmlCanvasElement = web_sys::window()
-            .and_then(|w| w.document())
-            .and_then(|d| d.create_element("canvas").ok())
-            .and_then(|e| wasm_bindgen::JsCast::dyn_into(e).ok())
+        let canvas = super::offscreen_canvas(width, height, scale)
             .ok_or("column drawing: no canvas could be made (try reloading the page)")?;
-        canvas.set_width((f64::from(width) * scale).round() as u32);
-        canvas.set_height((f64::from(height) * scale).round() as u32);
         draw(&canvas, sketch, scale, true)?;
         let shapes = canvas
             .get_attribute("data-shapes")

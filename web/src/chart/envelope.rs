@@ -18,7 +18,8 @@ use strutline_core::check::Mode;
 use strutline_core::units;
 use web_sys::HtmlCanvasElement;
 
-use super::data::{dashes, lower, text_box, tick_step, ChartData, Frame};
+use super::data::{dashes, lower, tick_step, ChartData, Frame};
+use super::labels::{self, Boxes, Measure, TextBox};
 use crate::numtext::working;
 
 /// Colours of one theme.
@@ -115,7 +116,9 @@ pub(super) fn err<E>(_: E) -> String {
 /// governing marker: `data-marker-slenderness`, `data-marker-stress-mpa`
 /// and `data-marker-px` ("x,y" in CSS pixels within the canvas). The stress axis is labelled in
 /// MPa, or in ksi when `us` (the curves are the same; only the tick values
-/// and the unit change).
+/// and the unit change). Every box it writes a title or label in is
+/// recorded as `data-text-boxes`, every marker it keeps them clear of as
+/// `data-mark-boxes` ([`Boxes::record_on`]).
 pub fn draw(
     canvas: &HtmlCanvasElement,
     data: &ChartData,
@@ -126,9 +129,19 @@ pub fn draw(
     let backend = CanvasBackend::with_canvas_object(canvas.clone())
         .ok_or("chart: the canvas has no 2D context")?;
     let root = backend.into_drawing_area();
-    let px = draw_on(&root, data, dpr, &palette(high_contrast), us)?;
+    let measure = labels::canvas_measure(canvas);
+    let mut boxes = Boxes::default();
+    let px = draw_on(
+        &root,
+        data,
+        dpr,
+        &palette(high_contrast),
+        us,
+        (&measure, &mut boxes),
+    )?;
     root.present().map_err(err)?;
     let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
+    boxes.record_on(canvas, dpr)?;
     let curves = data.design.len() + data.perry.len() + data.others.len();
     set("data-curves", curves.to_string())?;
     if let Some((m_lambda, m_stress, (x, y))) = px {
@@ -144,16 +157,20 @@ pub fn draw(
 
 type Governing = Option<(f64, f64, (i32, i32))>;
 
+/// Draws the chart on `root`; `text` measures text and collects the box
+/// of every title and label written.
 fn draw_on<DB: DrawingBackend>(
     root: &DrawingArea<DB, Shift>,
     data: &ChartData,
     dpr: f64,
     pal: &Palette,
     us: bool,
+    text: (Measure, &mut Boxes),
 ) -> Result<Governing, String>
 where
     DB::ErrorType: 'static,
 {
+    let (measure, boxes) = text;
     let s = |v: f64| (v * dpr).round().max(1.0) as u32;
     let si = |v: f64| (v * dpr).round() as i32;
     let font = |size: f64| ("sans-serif", size * dpr).into_font().color(&pal.ink);
@@ -208,27 +225,44 @@ where
         1.5,
     ))
     .map_err(err)?;
-    let title = font(if narrow { 12.0 } else { 14.0 });
+    let title_px = if narrow { 12.0 } else { 14.0 } * dpr;
+    let title = font(title_px / dpr);
     let (cx, _) = px(data.x_max / 2.0, 0.0);
+    let across = "slenderness L_cr / i  (–)";
     root.draw(&Text::new(
-        "slenderness L_cr / i  (–)",
+        across,
         (cx, h as i32 - si(6.0)),
         title.clone().pos(Pos::new(HPos::Center, VPos::Bottom)),
     ))
     .map_err(err)?;
+    let lh = labels::line_height(title_px);
+    boxes.text.push(TextBox::centred(
+        f64::from(cx),
+        f64::from(h) - 6.0 * dpr - lh / 2.0,
+        measure(across, title_px),
+        lh,
+    ));
     let (_, cy) = px(0.0, data.y_max / 2.0);
+    let up = if us {
+        "failure stress N / A  (ksi)"
+    } else {
+        "failure stress N / A  (MPa)"
+    };
     root.draw(&Text::new(
-        if us {
-            "failure stress N / A  (ksi)"
-        } else {
-            "failure stress N / A  (MPa)"
-        },
+        up,
         (si(4.0), cy),
         title
             .transform(FontTransform::Rotate270)
             .pos(Pos::new(HPos::Center, VPos::Top)),
     ))
     .map_err(err)?;
+    // Turned a quarter: as wide as a line is high, as tall as it is long.
+    boxes.text.push(TextBox::centred(
+        4.0 * dpr + lh / 2.0,
+        f64::from(cy),
+        lh,
+        measure(up, title_px),
+    ));
 
     // The region within capacity: below the lower of the two design curves.
     let within: Vec<(f64, f64)> = match (data.design.first(), data.design.get(1)) {
@@ -281,14 +315,15 @@ where
     }
 
     // Markers: applied stress (filled dot, larger for the governing mode)
-    // and the mode's resistance (open square), joined by a line. Labels sit
-    // right of the dot unless that would leave the plot, and stack
-    // downwards when two markers are close.
+    // and the mode's resistance (open square), joined by a line; every
+    // marker first, then the labels, each placed clear of the marks, of
+    // the labels before it and of the plot's edges.
     let mut governing = None;
-    let mut taken: Vec<(i32, i32)> = Vec::with_capacity(data.markers.len());
     let mut order: Vec<&super::data::Marker> = data.markers.iter().collect();
     order.sort_by_key(|m| !m.governing);
-    for m in order {
+    let mut marks: Vec<TextBox> = Vec::with_capacity(2 * order.len());
+    let mut dots = Vec::with_capacity(order.len());
+    for m in &order {
         let c = match m.mode {
             Mode::Major => pal.major,
             Mode::Minor => pal.minor,
@@ -313,6 +348,24 @@ where
             pal.background.stroke_width(s(1.5)),
         ))
         .map_err(err)?;
+        let ring = f64::from(r + s(2.0)) * 2.0;
+        marks.push(TextBox::centred(f64::from(ax), f64::from(ay), ring, ring));
+        let side = f64::from(half * 2 + si(2.0));
+        marks.push(TextBox::centred(f64::from(rx), f64::from(ry), side, side));
+        dots.push((ax, ay, r));
+        if m.governing {
+            governing = Some((m.slenderness, m.applied_mpa, (ax, ay)));
+        }
+    }
+    let plot = TextBox {
+        x: frame.left,
+        y: 0.0,
+        w: f64::from(w) - frame.left,
+        h: frame.bottom,
+    };
+    let label_px = 12.0 * dpr;
+    let mut placed: Vec<TextBox> = Vec::with_capacity(order.len());
+    for (m, &(ax, ay, r)) in order.iter().zip(&dots) {
         let name = match m.mode {
             Mode::Major => "major axis",
             Mode::Minor => "minor axis",
@@ -329,51 +382,48 @@ where
         } else {
             name
         };
-        // Estimated, not measured: plotters measures text with a styled
-        // element, which the page's style-src policy refuses.
-        let (tw, th) = text_box(&tag, 12.0 * dpr);
-        let (tw, th) = (tw.round() as u32, th.round() as u32);
-        let gap = r as i32 + si(5.0);
-        let right = f64::from(ax + gap + tw as i32) <= frame.right;
-        let (anchor, lx) = if right {
-            (HPos::Left, ax + gap)
-        } else {
-            (HPos::Right, ax - gap)
-        };
-        let step = th as i32 + si(3.0);
-        let clash = |ly: i32| {
-            taken
-                .iter()
-                .any(|&(tx, ty)| (tx - lx).abs() < tw as i32 && (ty - ly).abs() < step)
-        };
-        // Downwards while that stays inside the plot, else upwards.
-        let floor = frame.bottom as i32 - step / 2;
-        let mut ly = ay;
-        while clash(ly) && ly + step <= floor {
-            ly += step;
+        // Measured with the canvas's own measureText (plotters' own
+        // measuring needs a styled element, which the page's style-src
+        // policy refuses); a little room either side.
+        let tw = measure(&tag, label_px) + 4.0 * dpr;
+        let th = labels::line_height(label_px);
+        let gap = f64::from(r) + 5.0 * dpr;
+        let (ax, ay) = (f64::from(ax), f64::from(ay));
+        // Right of the dot, left of it, just over it, just under it, then
+        // right or left stepping down, then up.
+        let mut candidates = Vec::with_capacity(28);
+        let over = f64::from(r) + 3.0 * dpr + th / 2.0;
+        candidates.push(TextBox::centred(ax + gap + tw / 2.0, ay, tw, th));
+        candidates.push(TextBox::centred(ax - gap - tw / 2.0, ay, tw, th));
+        candidates.push(TextBox::centred(ax, ay - over, tw, th));
+        candidates.push(TextBox::centred(ax, ay + over, tw, th));
+        for k in [1, 2, 3, 4, 5, 6, -1, -2, -3, -4, -5, -6] {
+            let y = ay + f64::from(k) * (th + 3.0 * dpr);
+            candidates.push(TextBox::centred(ax + gap + tw / 2.0, y, tw, th));
+            candidates.push(TextBox::centred(ax - gap - tw / 2.0, y, tw, th));
         }
-        if clash(ly) || ly > floor {
-            ly = ay.min(floor);
-            while clash(ly) && ly - step >= frame.top as i32 {
-                ly -= step;
-            }
-        }
-        taken.push((lx, ly));
+        let taken: Vec<TextBox> = marks.iter().chain(placed.iter()).copied().collect();
+        let Some(b) = labels::place(&candidates, &taken, &plot) else {
+            continue;
+        };
+        placed.push(b);
         // On a patch of the background, so curves passing under the label
         // (many when methods are compared) do not cut through its text.
-        let x0 = if right { lx } else { lx - tw as i32 };
-        let half = th as i32 / 2;
+        let (x0, y0) = (b.x.round() as i32, b.y.round() as i32);
         root.draw(&Rectangle::new(
-            [(x0, ly - half), (x0 + tw as i32, ly + half)],
+            [(x0, y0), (x0 + b.w.round() as i32, y0 + b.h.round() as i32)],
             pal.background.mix(0.85).filled(),
         ))
         .map_err(err)?;
-        let style = font(12.0).pos(Pos::new(anchor, VPos::Center));
-        root.draw(&Text::new(tag, (lx, ly), style)).map_err(err)?;
-        if m.governing {
-            governing = Some((m.slenderness, m.applied_mpa, (ax, ay)));
-        }
+        let style = font(12.0).pos(Pos::new(HPos::Center, VPos::Center));
+        let centre = (
+            (b.x + b.w / 2.0).round() as i32,
+            (b.y + b.h / 2.0).round() as i32,
+        );
+        root.draw(&Text::new(tag, centre, style)).map_err(err)?;
     }
+    boxes.text.extend(placed);
+    boxes.marks.extend(marks);
     if governing.is_none() {
         if let Some(g) = data.governing() {
             governing = Some((

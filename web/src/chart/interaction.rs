@@ -25,8 +25,9 @@ use strutline_core::units::{self, Quantity, UnitSystem};
 use strutline_core::{CheckResult, Error};
 use web_sys::HtmlCanvasElement;
 
-use super::data::{dashes, text_box, tick_step};
+use super::data::{dashes, tick_step};
 use super::envelope::{err, palette, Palette, METHOD_COLOUR, METHOD_DASH};
+use super::labels::{self, Boxes, Fitted, Measure, TextBox};
 use crate::numtext::working;
 use crate::units_view::result_text;
 
@@ -247,7 +248,9 @@ pub fn compared(d: &InteractionData) -> Vec<Refusals<'_>> {
 /// the member's point is inside (`data-inside-major`), the curve's moment
 /// at the member's load in kNm (`data-curve-at-load-major`) and the
 /// point's pixel ("x,y" in CSS pixels, `data-point-px-major`). Values are
-/// shown in kN and kNm, or kip and kip·ft when `us`.
+/// shown in kN and kNm, or kip and kip·ft when `us`. Every box it writes a
+/// title or label in is recorded as `data-text-boxes`, the member's marks
+/// as `data-mark-boxes` ([`Boxes::record_on`]).
 pub fn draw(
     canvas: &HtmlCanvasElement,
     data: &InteractionData,
@@ -259,8 +262,18 @@ pub fn draw(
         .ok_or("chart: the canvas has no 2D context")?;
     let root = backend.into_drawing_area();
     let sys = if us { UnitSystem::Us } else { UnitSystem::Si };
-    let points = draw_on(&root, data, dpr, &palette(high_contrast), sys)?;
+    let measure = labels::canvas_measure(canvas);
+    let mut boxes = Boxes::default();
+    let points = draw_on(
+        &root,
+        data,
+        dpr,
+        &palette(high_contrast),
+        sys,
+        (&measure, &mut boxes),
+    )?;
     root.present().map_err(err)?;
+    boxes.record_on(canvas, dpr)?;
     let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
     set("data-chart", "interaction".into())?;
     for (p, (x, y)) in data.panels.iter().zip(points) {
@@ -306,16 +319,44 @@ impl Plot {
     }
 }
 
+/// A panel's title in parts, read in order, each kept whole on a line
+/// where the room allows: the axis, the moment shape where it is assumed,
+/// the other axis' moment.
+fn head_parts(c: &Curve, sys: UnitSystem) -> Vec<String> {
+    let mut parts = vec![format!("{} axis", c.axis)];
+    if c.shape == Shape::UniformAssumed {
+        parts.push("uniform M assumed".into());
+    }
+    parts.push(if c.held_knm > 0.0 {
+        format!(
+            "{} held {}",
+            if c.axis == "major" {
+                "M minor"
+            } else {
+                "M major"
+            },
+            result_text(sys, "kNm", c.held_knm, 1)
+        )
+    } else {
+        "other axis: no moment".to_string()
+    });
+    parts
+}
+
+/// Draws the chart on `root`; `text` measures text and collects the box
+/// of every title and label written and of the member's marks.
 fn draw_on<DB: DrawingBackend>(
     root: &DrawingArea<DB, Shift>,
     data: &InteractionData,
     dpr: f64,
     pal: &Palette,
     sys: UnitSystem,
+    text: (Measure, &mut Boxes),
 ) -> Result<[(i32, i32); 2], String>
 where
     DB::ErrorType: 'static,
 {
+    let (measure, boxes) = text;
     let s = |v: f64| (v * dpr).round().max(1.0) as u32;
     let si = |v: f64| (v * dpr).round() as i32;
     let font = |size: f64| ("sans-serif", size * dpr).into_font().color(&pal.ink);
@@ -323,7 +364,8 @@ where
     let (w, h) = root.dim_in_pixel();
     let narrow = f64::from(w) / dpr < 560.0;
     let label = font(if narrow { 10.0 } else { 12.0 });
-    let title = font(if narrow { 11.0 } else { 13.0 });
+    let title_px = if narrow { 11.0 } else { 13.0 } * dpr;
+    let title = font(title_px / dpr);
     let line = |pts: Vec<(i32, i32)>, c: RGBColor, width: f64| {
         PathElement::new(pts, c.stroke_width(s(width)))
     };
@@ -342,8 +384,17 @@ where
     // The compression title once, at the far left; each panel its own
     // moment scale.
     let (_, cy) = (0, (f64::from(h) / 2.0) as i32);
+    let up = format!("compression N  ({force_unit})");
+    let lh = labels::line_height(title_px);
+    // Turned a quarter: as wide as a line is high, as tall as it is long.
+    boxes.text.push(TextBox::centred(
+        3.0 * dpr + lh / 2.0,
+        f64::from(cy),
+        lh,
+        measure(&up, title_px),
+    ));
     root.draw(&Text::new(
-        format!("compression N  ({force_unit})"),
+        up,
         (si(3.0), cy),
         title
             .clone()
@@ -354,6 +405,34 @@ where
     let gap = if narrow { 40.0 } else { 52.0 } * dpr;
     let left0 = if narrow { 56.0 } else { 70.0 } * dpr;
     let width = (f64::from(w) - left0 - gap - 14.0 * dpr) / 2.0;
+    // Each panel's titles in the room over and under it (the panel and
+    // half the gap between the panels), wrapped, the font made smaller
+    // only where a word alone is wider; both panels' plots start and end
+    // at the same height, below the taller head and above the taller foot.
+    let room = width + gap / 2.0;
+    let titles: Vec<(Fitted, Fitted)> = data
+        .panels
+        .iter()
+        .map(|p| {
+            let c = &p.curve;
+            let head = head_parts(c, sys);
+            let head: Vec<&str> = head.iter().map(String::as_str).collect();
+            let foot = [
+                format!("largest |M|, {} axis", c.axis),
+                format!("({moment_unit})"),
+            ];
+            let foot: Vec<&str> = foot.iter().map(String::as_str).collect();
+            (
+                labels::fit(&head, " · ", room, title_px, measure),
+                labels::fit(&foot, "  ", room, title_px, measure),
+            )
+        })
+        .collect();
+    let most = |f: fn(&(Fitted, Fitted)) -> f64| titles.iter().map(f).fold(0.0, f64::max);
+    let head_h = most(|((l, size), _)| l.len() as f64 * labels::line_height(*size));
+    let foot_h = most(|(_, (l, size))| l.len() as f64 * labels::line_height(*size));
+    let top = (6.0 * dpr + head_h + 12.0 * dpr).max(34.0 * dpr);
+    let bottom = f64::from(h) - (4.0 * dpr + foot_h + 4.0 * dpr + lh + 4.0 * dpr).max(44.0 * dpr);
     let mut marks = [(0, 0); 2];
     let n_step = tick_step(force(data.n_max), if narrow { 4.0 } else { 6.0 });
     for (i, panel) in data.panels.iter().enumerate() {
@@ -361,9 +440,9 @@ where
         let left = left0 + (i as f64) * (width + gap);
         let plot = Plot {
             left,
-            top: 34.0 * dpr,
+            top,
             right: left + width,
-            bottom: f64::from(h) - 44.0 * dpr,
+            bottom,
             m_max: panel.m_max,
             n_max: data.n_max,
         };
@@ -410,38 +489,31 @@ where
             1.5,
         ))
         .map_err(err)?;
-        // Titles: the axis above, the moment below.
-        let held = if c.held_knm > 0.0 {
-            format!(
-                "{} held {}",
-                if c.axis == "major" {
-                    "M minor"
-                } else {
-                    "M major"
-                },
-                result_text(sys, "kNm", c.held_knm, 1)
-            )
-        } else {
-            "other axis: no moment".to_string()
-        };
-        let head = if c.shape == Shape::UniformAssumed {
-            format!("{} axis (uniform M assumed) · {held}", c.axis)
-        } else {
-            format!("{} axis · {held}", c.axis)
-        };
+        // Titles: the axis above, the moment below, line by line.
         let (hx, _) = px(panel.m_max / 2.0, 0.0);
-        root.draw(&Text::new(
-            head,
-            (hx, si(6.0)),
-            title.clone().pos(Pos::new(HPos::Center, VPos::Top)),
-        ))
-        .map_err(err)?;
-        root.draw(&Text::new(
-            format!("largest |M|, {} axis  ({moment_unit})", c.axis),
-            (hx, h as i32 - si(4.0)),
-            title.clone().pos(Pos::new(HPos::Center, VPos::Bottom)),
-        ))
-        .map_err(err)?;
+        let ((head, head_px), (foot, foot_px)) = titles.get(i).cloned().unwrap_or_default();
+        let mut written = |lines: Vec<String>, size: f64, first_y: f64| -> Result<(), String> {
+            let lh = labels::line_height(size);
+            for (k, l) in lines.into_iter().enumerate() {
+                let y = first_y + k as f64 * lh;
+                boxes.text.push(TextBox {
+                    x: f64::from(hx) - measure(&l, size) / 2.0,
+                    y,
+                    w: measure(&l, size),
+                    h: lh,
+                });
+                root.draw(&Text::new(
+                    l,
+                    (hx, y.round() as i32),
+                    font(size / dpr).pos(Pos::new(HPos::Center, VPos::Top)),
+                ))
+                .map_err(err)?;
+            }
+            Ok(())
+        };
+        written(head, head_px, 6.0 * dpr)?;
+        let foot_y = f64::from(h) - 4.0 * dpr - foot.len() as f64 * labels::line_height(foot_px);
+        written(foot, foot_px, foot_y)?;
 
         // The region within capacity, then the curves.
         if let Some(last) = c.points.last() {
@@ -509,29 +581,52 @@ where
             (true, true) => "member · within",
             (true, false) => "member · over",
         };
-        let (tw, th) = text_box(tag, 12.0 * dpr);
-        let right_room = f64::from(ax) + 10.0 * dpr + tw <= plot.right;
-        let (anchor, lx) = if right_room {
-            (HPos::Left, ax + si(10.0))
-        } else {
-            (HPos::Right, ax - si(10.0))
+        let ring = f64::from(r + s(2.0)) * 2.0;
+        boxes
+            .marks
+            .push(TextBox::centred(f64::from(ax), f64::from(ay), ring, ring));
+        let label_px = 12.0 * dpr;
+        let tw = measure(tag, label_px) + 4.0 * dpr;
+        let th = labels::line_height(label_px);
+        let (fx, fy) = (f64::from(ax), f64::from(ay));
+        let off = 10.0 * dpr + tw / 2.0;
+        // Above right of the point, then above left, below right, below
+        // left, then further up or down; inside the panel's plot.
+        let mut candidates = Vec::with_capacity(12);
+        for dy in [-12.0, 12.0, -28.0, 28.0, -44.0, 44.0] {
+            candidates.push(TextBox::centred(fx + off, fy + dy * dpr, tw, th));
+            candidates.push(TextBox::centred(fx - off, fy + dy * dpr, tw, th));
+        }
+        let within = TextBox {
+            x: plot.left,
+            y: plot.top,
+            w: plot.right - plot.left,
+            h: plot.bottom - plot.top,
         };
-        let ly = (ay - si(12.0)).max(plot.top as i32 + (th / 2.0) as i32);
-        let x0 = if right_room { lx } else { lx - tw as i32 };
-        root.draw(&Rectangle::new(
-            [
-                (x0, ly - (th / 2.0) as i32),
-                (x0 + tw as i32, ly + (th / 2.0) as i32),
-            ],
-            pal.background.mix(0.85).filled(),
-        ))
-        .map_err(err)?;
-        root.draw(&Text::new(
-            tag,
-            (lx, ly),
-            font(12.0).pos(Pos::new(anchor, VPos::Center)),
-        ))
-        .map_err(err)?;
+        let taken: Vec<TextBox> = boxes
+            .marks
+            .iter()
+            .chain(boxes.text.iter())
+            .copied()
+            .collect();
+        if let Some(b) = labels::place(&candidates, &taken, &within) {
+            boxes.text.push(b);
+            let (x0, y0) = (b.x.round() as i32, b.y.round() as i32);
+            root.draw(&Rectangle::new(
+                [(x0, y0), (x0 + b.w.round() as i32, y0 + b.h.round() as i32)],
+                pal.background.mix(0.85).filled(),
+            ))
+            .map_err(err)?;
+            root.draw(&Text::new(
+                tag,
+                (
+                    (b.x + b.w / 2.0).round() as i32,
+                    (b.y + b.h / 2.0).round() as i32,
+                ),
+                font(12.0).pos(Pos::new(HPos::Center, VPos::Center)),
+            ))
+            .map_err(err)?;
+        }
         if let Some(slot) = marks.get_mut(i) {
             *slot = (ax, ay);
         }

@@ -8,3 +8,20 @@ pub mod column;
 pub mod data;
 pub mod envelope;
 pub mod interaction;
+pub mod labels;
+
+/// A canvas that is not in the page, `width` x `height` CSS px drawn at
+/// `scale` device px each: what the calc sheet's pictures are drawn on,
+/// whatever the screen shows or folds away. Only a browser has one.
+pub fn offscreen_canvas(width: u32, height: u32, scale: f64) -> Option<web_sys::HtmlCanvasElement> {
+    use wasm_bindgen::JsCast;
+    let canvas: web_sys::HtmlCanvasElement = web_sys::window()?
+        .document()?
+        .create_element("canvas")
+        .ok()?
+        .dyn_into()
+        .ok()?;
+    canvas.set_width((f64::from(width) * scale).round() as u32);
+    canvas.set_height((f64::from(height) * scale).round() as u32);
+    Some(canvas)
+}
