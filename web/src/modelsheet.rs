@@ -18,7 +18,7 @@ use crate::chart::column::{of_member, png};
 use crate::html;
 use crate::html::Html;
 use crate::numtext::fixed;
-use crate::units_view::{result_text, span_text};
+use crate::units_view::{result_text, section_text, span_text};
 
 /// Width and height of the drawing on the sheet, CSS px.
 const DRAWING: (u32, u32) = (560, 420);
@@ -122,8 +122,8 @@ fn model_html(
         .enumerate()
     {
         let section = match &s.section {
-            None => format!("the member's: {}", m.section.describe()),
-            Some(spec) => spec.describe(),
+            None => format!("the member's: {}", section_text(sys, &m.section)),
+            Some(spec) => section_text(sys, spec),
         };
         html!(
             h,

@@ -592,7 +592,7 @@ pub fn sheet_html(
             "<tr><th scope=\"row\">{}</th><td>{}</td><td>{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td>\
              <td class=\"num\">{}</td><td>{}</td></tr>",
             c.member.id,
-            c.member.section.describe(),
+            crate::units_view::section_text(sys, &c.member.section),
             c.member.method.title(),
             ed,
             rd,
@@ -609,7 +609,7 @@ pub fn sheet_html(
              <p class=\"sheet-meta\">{}{}</p><h3>Inputs</h3>\
              <table class=\"sheet-inputs\" data-testid=\"sheet-inputs\"><tbody>",
             id,
-            c.member.section.describe(),
+            crate::units_view::section_text(sys, &c.member.section),
             c.member
                 .note
                 .as_deref()
@@ -639,7 +639,7 @@ pub fn sheet_html(
             h.lit("<h3>Section and material</h3>");
             h.push(&properties_html(r, sys));
         }
-        h.push(&crate::sectionview::of_checked(c));
+        h.push(&crate::sectionview::of_checked(c, sys));
         h.lit("<h3>Result</h3>");
         h.push(&verdict_in(c, sys, true));
         if let Some(r) = c.result() {
@@ -691,6 +691,25 @@ mod tests {
 
     fn checked(id: &str) -> Checked {
         Checked::new(&demo::sample_member(id))
+    }
+
+    #[test]
+    fn the_sheet_names_sections_in_the_units_shown() {
+        let cs = vec![Arc::new(checked("A1"))];
+        let us =
+            sheet_html("Depot", &SheetHeader::default(), &cs, None, UnitSystem::Us).into_string();
+        // The sample's 100 x 60 mm bar: 3.937 x 2.362 in, in the summary
+        // and under the member's heading.
+        let name = crate::units_view::section_text(UnitSystem::Us, &cs[0].member.section);
+        assert!(
+            name.ends_with(" in") && name.contains("3.937x2.362"),
+            "{name}"
+        );
+        assert_eq!(us.matches(&name).count(), 3, "{us}");
+        assert!(!us.contains("100x60"), "{us}");
+        let si =
+            sheet_html("Depot", &SheetHeader::default(), &cs, None, UnitSystem::Si).into_string();
+        assert!(si.contains("100x60"));
     }
 
     #[test]

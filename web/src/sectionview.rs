@@ -13,25 +13,27 @@ use strutline_core::check::Prepared;
 use strutline_core::method::Method;
 use strutline_core::section::outline::outline;
 use strutline_core::stability::ineffective::ineffective;
+use strutline_core::units::{self, Quantity, UnitSystem};
 use strutline_core::CheckResult;
 
 use crate::checks::Checked;
 use crate::html;
 use crate::html::Html;
 use crate::numtext::working;
+use crate::units_view::{section_text, step_text};
 
 /// Polygons in mm, origin at the centroid, `y` right and `z` up.
 type Polys = Vec<Vec<(f64, f64)>>;
 
 /// The view of a checked member (empty when the member did not resolve).
-pub fn of_checked(c: &Checked) -> Html {
+pub fn of_checked(c: &Checked, sys: UnitSystem) -> Html {
     match &c.prepared {
         Some(p) => match governing_segment(p, c.result()) {
             // A buckling model whose governing segment has its own
             // section: the result's properties and check are that
             // segment's, so the drawing is too, and says so.
             Some((seg, count, q)) => {
-                let mut h = svg(&q, c.result());
+                let mut h = svg(&q, c.result(), sys);
                 html!(
                     h,
                     "<p class=\"sv-note\" data-testid=\"section-view-segment\">Drawn: the \
@@ -41,7 +43,7 @@ pub fn of_checked(c: &Checked) -> Html {
                 );
                 h
             }
-            None => svg(p, c.result()),
+            None => svg(p, c.result(), sys),
         },
         None => Html::new(),
     }
@@ -103,7 +105,9 @@ fn nice(x: f64) -> f64 {
 
 /// The drawing of a prepared member; `result` (its check) supplies the
 /// effective widths of a slender section. Typed sections give a short note.
-pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
+/// Its name, area and scale bar are in `sys`'s units (the bar a round
+/// number of inches in US units).
+pub fn svg(p: &Prepared, result: Option<&CheckResult>, sys: UnitSystem) -> Html {
     let spec = &p.section.spec;
     let polys = outline(spec);
     if polys.is_empty() {
@@ -134,7 +138,7 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
     let name = p
         .section
         .designation
-        .map_or_else(|| spec.describe(), str::to_string);
+        .map_or_else(|| section_text(sys, spec), str::to_string);
     let code = match result.map(|r| r.method) {
         Some(Method::AiscLrfd | Method::AiscAsd) => "AISC 360-16 E7",
         _ => "EN 1993-1-5 4.4",
@@ -145,7 +149,7 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
         "<svg xmlns=\"http://www.w3.org/2000/svg\" class=\"sv\" data-testid=\"section-view\" \
          role=\"img\" viewBox=\"{:.1} {:.1} {:.1} {:.1}\" font-size=\"{:.1}\" \
          stroke-width=\"{:.3}\" \
-         aria-label=\"Cross-section {}, A = {} mm², drawn to scale with centroid, shear centre \
+         aria-label=\"Cross-section {}, A = {}, drawn to scale with centroid, shear centre \
          and principal axes; {}\">",
         left,
         top,
@@ -154,7 +158,7 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
         fs,
         d / 250.0,
         name,
-        working(props.area_mm2),
+        step_text(sys, "mm2", props.area_mm2),
         if zones.is_empty() {
             "no ineffective parts shown"
         } else {
@@ -244,11 +248,14 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
     let x = left + 0.5 * m;
     let tx = x + 2.0 * fs;
     let mut y = bottom + 0.5 * row;
-    let bar = nice(0.3 * width);
+    // A round length in the units shown: mm, or inches (25.4 mm each).
+    let per_mm = units::to_display(sys, Quantity::Length, 1.0);
+    let shown = nice(0.3 * width * per_mm);
+    let bar = shown / per_mm;
     html!(
         s,
         "<path class=\"sv-scale\" d=\"M{:.1} {:.1}v{:.1}h{:.1}v{:.1}\"/>\
-         <text x=\"{:.1}\" y=\"{:.1}\">{} mm</text>",
+         <text x=\"{:.1}\" y=\"{:.1}\" data-testid=\"section-scale\">{} {}</text>",
         x,
         y - 0.4 * fs,
         0.4 * fs,
@@ -256,7 +263,8 @@ pub fn svg(p: &Prepared, result: Option<&CheckResult>) -> Html {
         -0.4 * fs,
         x + bar + 0.5 * fs,
         y + 0.35 * fs,
-        working(bar)
+        working(shown),
+        units::display_unit(sys, Quantity::Length)
     );
     let mut line = |s: &mut Html, text: &str| {
         y += row;
@@ -321,7 +329,7 @@ mod tests {
         let k1 = f.members.iter().find(|m| m.id == "K1").unwrap().clone();
         let c = Checked::new(&k1);
         assert_eq!(c.result().unwrap().segment.unwrap().index, 1);
-        let own = of_checked(&c).into_string();
+        let own = of_checked(&c, UnitSystem::Si).into_string();
         assert!(!own.contains("section-view-segment"), "{own}");
 
         let mut light = k1.clone();
@@ -336,7 +344,7 @@ mod tests {
         let c = Checked::new(&light);
         let seg = c.result().unwrap().segment.unwrap();
         assert_eq!((seg.index, seg.count), (2, 2));
-        let drawn = of_checked(&c).into_string();
+        let drawn = of_checked(&c, UnitSystem::Si).into_string();
         assert!(drawn.contains("segment 2 of 2"), "{drawn}");
         // Not the member's own section's drawing.
         let first_path = |s: &str| {
@@ -352,7 +360,7 @@ mod tests {
     fn view(spec: SectionSpec, fy: f64) -> (Prepared, String) {
         let m = member("S1", spec, steel(fy), 3000.0, 100.0, Method::En1993);
         let c = Checked::new(&m);
-        let out = of_checked(&c).into_string();
+        let out = of_checked(&c, UnitSystem::Si).into_string();
         (c.prepared.unwrap(), out)
     }
 
@@ -405,6 +413,43 @@ mod tests {
     }
 
     #[test]
+    fn us_units_name_the_section_and_scale_it_in_inches() {
+        let m = member(
+            "S1",
+            welded(300.0, 300.0, 20.0, 12.0),
+            steel(355.0),
+            3000.0,
+            100.0,
+            Method::En1993,
+        );
+        let c = Checked::new(&m);
+        let si = of_checked(&c, UnitSystem::Si).into_string();
+        let us = of_checked(&c, UnitSystem::Us).into_string();
+        // 0.3 of the drawing's 351 mm width (26 letters of 0.045 x 300 mm)
+        // is 105 mm: a 100 mm bar; 4.1 in rounds down to a 2 in bar, 50.8 mm
+        // long in the drawing's mm.
+        assert!(si.contains(">100 mm</text>"), "{si}");
+        assert!(us.contains(">2 in</text>"), "{us}");
+        let bar = |svg: &str| -> f64 {
+            let d = svg.split("class=\"sv-scale\" d=\"").nth(1).unwrap();
+            d.split('h')
+                .nth(1)
+                .unwrap()
+                .split('v')
+                .next()
+                .unwrap()
+                .parse()
+                .unwrap()
+        };
+        assert!((bar(&si) - 100.0).abs() < 0.05, "{}", bar(&si));
+        assert!((bar(&us) - 2.0 * 25.4).abs() < 0.05, "{}", bar(&us));
+        assert!(!us.contains(" mm"), "{us}");
+        // Its name in inches (300 mm = 11.811 in).
+        assert!(us.contains("Cross-section I 11.811x11.811x"), "{us}");
+        assert!(us.contains(" in²"), "the area in square inches: {us}");
+    }
+
+    #[test]
     fn class_4_member_has_zones_and_class_1_none() {
         // Welded I 600 x 400 x 12 x 6 in S355: c/t = 16.4 (flange) > 14 eps and
         // 96 (web) > 42 eps, Class 4 (EN 1993-1-1 Table 5.2).
@@ -447,7 +492,7 @@ mod tests {
     fn hostile_designation_is_escaped_and_given_is_not_drawn() {
         let (mut p, _) = view(welded(300.0, 300.0, 20.0, 12.0), 235.0);
         p.section.designation = Some("<script>\"x\" & 'y'</script>");
-        let s = svg(&p, None).into_string();
+        let s = svg(&p, None, UnitSystem::Si).into_string();
         assert!(!s.contains("<script>"));
         assert!(s.contains("&lt;script&gt;&quot;x&quot; &amp; &#39;y&#39;&lt;/script&gt;"));
         let given = SectionSpec::Given(Given {

@@ -37,7 +37,7 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
             );
             h.push(&report::checks_html(r, sys));
         }
-        h.push(&crate::sectionview::of_checked(c));
+        h.push(&crate::sectionview::of_checked(c, sys));
         if let Some(r) = c.result() {
             h.push(&report::working_html(r, sys));
         }
