@@ -108,6 +108,33 @@ pub fn working(v: f64) -> String {
     }
 }
 
+/// How far below its section's size a geometric value is taken for zero:
+/// one part in 10^9 (a double carries some 16 figures, so what the
+/// section's arithmetic leaves of a true zero, such as the shear centre of
+/// a doubly symmetric I at -1.4e-14 mm, lies many orders below this, and
+/// no section's real offset or property does).
+pub const ZERO_PART: f64 = 1e-9;
+
+/// A value of a geometric unit (`mm`, `mm2`, ..., `mm6`) as it is shown:
+/// 0 where its size is below [`ZERO_PART`] of the section's own size
+/// `size_mm` raised to the unit's power (mm⁴ against size⁴); any other
+/// unit, or a section with no size, as it is.
+pub fn nought(v: f64, unit: &str, size_mm: f64) -> f64 {
+    let power = match unit {
+        "mm" => 1,
+        "mm2" => 2,
+        "mm3" => 3,
+        "mm4" => 4,
+        "mm6" => 6,
+        _ => return v,
+    };
+    if size_mm.is_finite() && size_mm > 0.0 && v.abs() < ZERO_PART * size_mm.powi(power) {
+        0.0
+    } else {
+        v
+    }
+}
+
 #[cfg(test)]
 mod tests {
     use super::*;
@@ -166,6 +193,25 @@ mod tests {
         assert_eq!(parse_optional(""), Ok(None));
         assert_eq!(parse_optional("2,5"), Ok(Some(2.5)));
         assert_eq!(parse_optional("x"), Err(NumError::NotNumber));
+    }
+
+    #[test]
+    fn rounding_left_of_a_zero_is_shown_as_zero() {
+        // A 200 mm I (A = 7808 mm², size about 88 mm): its shear centre
+        // offset as worked, -1.4e-14 mm, is 0; a real 0.5 mm offset is not.
+        let size = 7808f64.sqrt();
+        assert_eq!(nought(-1.4e-14, "mm", size), 0.0);
+        assert_eq!(working(nought(-1.4e-14, "mm", size)), "0");
+        assert_eq!(nought(0.5, "mm", size), 0.5);
+        assert_eq!(nought(-2.842e-14, "mm", 140.0), 0.0);
+        // By the unit's power: 1e-3 mm⁴ is 1.7e-11 of 88⁴ = 6.1e7 mm⁴,
+        // nothing; 1e-3 mm is 1.1e-5 of 88 mm, a length to show.
+        assert_eq!(nought(1e-3, "mm4", size), 0.0);
+        assert_eq!(nought(1e-3, "mm", size), 1e-3);
+        // Not a length unit, or no size: as it is.
+        assert_eq!(nought(1e-14, "kN", size), 1e-14);
+        assert_eq!(nought(1e-14, "mm", 0.0), 1e-14);
+        assert_eq!(nought(1e-14, "mm", f64::NAN), 1e-14);
     }
 
     #[test]

@@ -23,7 +23,7 @@ use crate::checks::Checked;
 use crate::fields;
 use crate::html;
 use crate::html::Html;
-use crate::numtext::{fixed, working};
+use crate::numtext::{fixed, nought, working};
 use crate::status::{governing_text, status_text, utilisation_text, Standing};
 use crate::units_view::{result_text, span_text, step_text};
 
@@ -333,6 +333,8 @@ fn working_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) -
         h.lit("</tr>");
     }
     h.lit("</tbody></table></div><h3 class=\"sub-title\">Working</h3>");
+    // What the section's arithmetic leaves of a zero is shown as 0.
+    let size = r.section.area_mm2.sqrt();
     for s in SCOPES {
         let mut rows = Html::new();
         for st in r.trace.iter().filter(|t| t.scope == s) {
@@ -341,7 +343,7 @@ fn working_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) -
                 "<tr><th scope=\"row\"><code>{}</code></th><td>{}</td><td class=\"num\">{}</td><td class=\"clause\">{}</td></tr>",
                 said(st.symbol.as_str()),
                 said(st.label.as_str()),
-                step_text(sys, st.unit(), st.value),
+                step_text(sys, st.unit(), nought(st.value, st.unit(), size)),
                 said(st.clause.as_str()),
             );
         }
@@ -497,7 +499,12 @@ fn properties_html(r: &CheckResult, sys: UnitSystem) -> Html {
     ];
     let mut h = Html::from_lit("<dl class=\"sheet-props\">");
     for (name, unit, v) in rows {
-        html!(h, "<dt>{}</dt><dd>{}</dd>", name, step_text(sys, unit, v));
+        html!(
+            h,
+            "<dt>{}</dt><dd>{}</dd>",
+            name,
+            step_text(sys, unit, nought(v, unit, p.area_mm2.sqrt()))
+        );
     }
     html!(
         h,
@@ -698,8 +705,8 @@ mod tests {
         let cs = vec![Arc::new(checked("A1"))];
         let us =
             sheet_html("Depot", &SheetHeader::default(), &cs, None, UnitSystem::Us).into_string();
-        // The sample's 100 x 60 mm bar: 3.937 x 2.362 in, in the summary
-        // and under the member's heading.
+        // The sample's 100 x 60 mm bar: 3.937 x 2.362 in, in the summary,
+        // under the member's heading and in the section view's label.
         let name = crate::units_view::section_text(UnitSystem::Us, &cs[0].member.section);
         assert!(
             name.ends_with(" in") && name.contains("3.937x2.362"),
@@ -710,6 +717,29 @@ mod tests {
         let si =
             sheet_html("Depot", &SheetHeader::default(), &cs, None, UnitSystem::Si).into_string();
         assert!(si.contains("100x60"));
+    }
+
+    #[test]
+    fn what_is_left_of_a_zero_reads_0_in_the_working() {
+        // The demo's I columns: their shear centre offsets (y_0, z_0) come
+        // out of the section's arithmetic a few 1e-14 mm off zero.
+        let mut tiny = 0;
+        for m in demo::demo_lists().iter().flat_map(|l| l.members.iter()) {
+            let c = Checked::new(m);
+            let Some(r) = c.result() else { continue };
+            tiny += r
+                .trace
+                .iter()
+                .filter(|t| t.unit() == "mm" && t.value != 0.0 && t.value.abs() < 1e-9)
+                .count();
+            for sys in [UnitSystem::Si, UnitSystem::Us] {
+                let h = working_html(r, sys).into_string();
+                for e in 10..20 {
+                    assert!(!h.contains(&format!("e-{e}")), "{}: {h}", m.id);
+                }
+            }
+        }
+        assert!(tiny > 0, "no demo member has a rounded zero to show");
     }
 
     #[test]
