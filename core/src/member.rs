@@ -918,12 +918,14 @@ impl Method {
         }
     }
 
-    /// A readable title.
+    /// A readable title: the standard and the part of it the method
+    /// follows, naming no buckling mode (each method checks every mode it
+    /// covers, and the result says which governs).
     pub fn title(self) -> &'static str {
         match self {
-            Method::En1993 => "EN 1993-1-1 flexural buckling",
-            Method::AiscLrfd => "AISC 360-16 E3, LRFD",
-            Method::AiscAsd => "AISC 360-16 E3, ASD",
+            Method::En1993 => "EN 1993-1-1 (6.3.1)",
+            Method::AiscLrfd => "AISC 360-16 chapter E, LRFD",
+            Method::AiscAsd => "AISC 360-16 chapter E, ASD",
             Method::CsaS16 => "CSA S16-19 13.3",
             Method::En1995 => "EN 1995-1-1 timber column",
             Method::PerryRobertson => "Perry-Robertson, initial bow",
@@ -946,6 +948,21 @@ impl Method {
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// A method's title names the standard, never a buckling mode: a
+    /// member checked to EN 1993-1-1 can be governed by torsional
+    /// buckling (6.3.1.4), one to AISC 360-16 by E4; the file keys stay.
+    #[test]
+    fn method_titles_name_no_mode_and_keys_stay() {
+        for m in Method::ALL {
+            let t = m.title().to_lowercase();
+            assert!(!t.contains("flexural") && !t.contains("torsional"), "{t}");
+        }
+        assert_eq!(Method::En1993.title(), "EN 1993-1-1 (6.3.1)");
+        assert_eq!(Method::En1993.key(), "en1993-1-1");
+        assert_eq!(Method::AiscLrfd.key(), "aisc360-lrfd");
+        assert_eq!(Method::from_key("en1993-1-1"), Some(Method::En1993));
+    }
 
     /// The one-test path of `buckling_lengths` gives what the field-by-field
     /// steps give, value and error, over the edges of every bound (NaN,

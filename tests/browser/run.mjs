@@ -447,8 +447,8 @@ test("envelope-compares-methods", async () => {
   // The typed steel I column under EN 1993-1-1: every other steel method
   // and the elastic ones apply to it, the timber method does not.
   const others = [
-    ["aisc360-lrfd", "AISC 360-16 E3, LRFD"],
-    ["aisc360-asd", "AISC 360-16 E3, ASD"],
+    ["aisc360-lrfd", "AISC 360-16 chapter E, LRFD"],
+    ["aisc360-asd", "AISC 360-16 chapter E, ASD"],
     ["csa-s16", "CSA S16-19 13.3"],
     ["perry-robertson", "Perry-Robertson, initial bow"],
     ["secant", "Secant formula, eccentric load"],

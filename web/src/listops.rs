@@ -716,7 +716,7 @@ mod tests {
         assert_eq!(before, original);
         assert_eq!(
             what,
-            "Method set to AISC 360-16 E3, LRFD, K major set to 0.7 for 2 members."
+            "Method set to AISC 360-16 chapter E, LRFD, K major set to 0.7 for 2 members."
         );
         for m in &ms[..2] {
             assert_eq!(

@@ -204,7 +204,7 @@ pub fn other_methods(prepared: &Prepared, x_max: f64) -> Vec<(Method, Curve)> {
             pts.iter().map(|p| (p.slenderness, p.design_mpa)).collect()
         };
         let label = if row.method == Method::AiscAsd {
-            "AISC 360-16 E3, ASD: allowable stress P_n / (Ω_c A)"
+            "AISC 360-16 chapter E, ASD: allowable stress P_n / (Ω_c A)"
         } else {
             row.title
         };
