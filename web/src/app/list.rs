@@ -119,6 +119,15 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
         </p>
         <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {
             if let Some(i) = ctx.with_members(|ms| listops::add(ms, &demo::new_member())) {
+                // Its design load is the engineer's to give: until then it
+                // needs input, never "holds" on a made-up load.
+                let list = ctx.ws.with_untracked(|w| w.active);
+                let id = ctx.ws.with_untracked(|w| {
+                    w.active_list().and_then(|l| l.members.get(i)).map(|m| m.id.clone())
+                });
+                if let Some(id) = id {
+                    ctx.drafts.update(|d| d.set(list, &id, "axial_kn", "", demo::NEW_MEMBER_ASKS));
+                }
                 ctx.select(i);
             }
         }>"+ Add member"</button>
