@@ -344,6 +344,21 @@ test("unreadable-text-withdraws-result", async () => {
     await setField(page, page, "length_mm", "3500");
     await waitForText(verdict, (t) => t.includes("holds") || t.includes("exceeds"));
     await waitForText(row, (t) => t.includes("L 3500 mm"));
+    // The same in the frame's G and the column model's boxes.
+    await page.locator("#f-restraint_major").selectOption("frame");
+    const ga = page.locator("#f-frame_major-g_a");
+    await ga.fill("2x");
+    await waitForText(verdict, (t) => t.includes("fix input") && t.includes("frame_major.g_a"));
+    await ga.fill("2");
+    await waitForText(verdict, (t) => t.includes("holds") || t.includes("exceeds"));
+    await page.locator("[data-testid=cm-toggle]").click();
+    const along = page.locator("#cm-distributed");
+    await along.waitFor({ timeout: 10_000 });
+    await along.fill("1,5 kN");
+    await waitForText(verdict, (t) => t.includes("fix input") && t.includes("buckling_model.distributed_kn_per_m"));
+    assert.equal((await util.innerText()).trim(), "—");
+    await along.fill("1,5");
+    await waitForText(verdict, (t) => t.includes("holds") || t.includes("exceeds"));
     assertNoErrors(log.errors);
   });
 });

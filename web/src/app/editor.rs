@@ -21,16 +21,11 @@ pub(super) fn NumField(
     field: Field,
     #[prop(optional)] after: Option<Callback<Member>>,
 ) -> impl IntoView {
-    let member = ctx.current();
-    let stored = member
-        .as_ref()
-        .map(|m| fields::read(m, field.place, field.key))
+    let stored = ctx
+        .current()
+        .map(|m| fields::read(&m, field.place, field.key))
         .unwrap_or_default();
-    let id = member.map(|m| m.id).unwrap_or_default();
-    let list = ctx.ws.with_untracked(|w| w.active);
-    let draft = ctx
-        .drafts
-        .with_untracked(|d| d.get(list, &id, field.key).cloned());
+    let draft = ctx.draft(field.key);
     let sys = ctx.units.get_untracked();
     // The member's value when the field was entered: put back when what is
     // typed cannot be read.
@@ -41,11 +36,9 @@ pub(super) fn NumField(
     };
     let error = RwSignal::new(draft.map(|d| d.message));
     let unread = move |typed: &str, msg: String| {
-        error.set(Some(msg.clone()));
+        ctx.keep_draft(field.key, typed, &msg);
+        error.set(Some(msg));
         let Some(m) = ctx.current() else { return };
-        let list = ctx.ws.with_untracked(|w| w.active);
-        ctx.drafts
-            .update(|d| d.set(list, &m.id, field.key, typed, &msg));
         let before = settled.get_value();
         if fields::read(&m, field.place, field.key) != before {
             if let Ok(back) = fields::apply(&m, &field, &before) {
@@ -88,10 +81,7 @@ pub(super) fn NumField(
                                 Some(msg) => unread(&typed, msg),
                                 None => {
                                     error.set(None);
-                                    let list = ctx.ws.with_untracked(|w| w.active);
-                                    if ctx.drafts.with_untracked(|d| d.get(list, &m.id, field.key).is_some()) {
-                                        ctx.drafts.update(|d| { d.clear(list, &m.id, field.key); });
-                                    }
+                                    ctx.drop_draft(field.key);
                                     ctx.commit(new.clone());
                                     if let Some(cb) = after { cb.run(new); }
                                 }

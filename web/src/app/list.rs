@@ -312,16 +312,13 @@ pub(super) fn MemberRow(
     let status = status_text(&checked.outcome);
     let util = utilisation_text(&checked.outcome);
     // In the units shown: a toggle rewrites the text of the rows in view.
-    let (described, length_mm, axial_kn, method) = (
-        m.section.describe(),
-        m.length_mm,
-        m.axial_kn,
-        m.method.key(),
-    );
+    let (section, length_mm, axial_kn, method) =
+        (m.section.clone(), m.length_mm, m.axial_kn, m.method.key());
     let detail = move || {
         let system = crate::units_view::current();
         format!(
-            "{described} · L {} · N {} · {method}",
+            "{} · L {} · N {} · {method}",
+            crate::units_view::section_text(system, &section),
             crate::units_view::plain_text(system, "mm", length_mm, true),
             crate::units_view::plain_text(system, "kN", axial_kn, false),
         )

@@ -133,6 +133,37 @@ impl Ctx {
         self.generation.update(|g| *g += 1);
     }
 
+    /// The selected member's draft of `key` ([`crate::drafts`]).
+    fn draft(&self, key: &str) -> Option<drafts::Draft> {
+        let id = self.current()?.id;
+        let list = self.ws.with_untracked(|w| w.active);
+        self.drafts
+            .with_untracked(|d| d.get(list, &id, key).cloned())
+    }
+
+    /// Keeps `typed`, which cannot be read, as the selected member's
+    /// draft of `key` (`message` says why): its result is withdrawn.
+    fn keep_draft(&self, key: &str, typed: &str, message: &str) {
+        let Some(m) = self.current() else { return };
+        let list = self.ws.with_untracked(|w| w.active);
+        self.drafts
+            .update(|d| d.set(list, &m.id, key, typed, message));
+    }
+
+    /// Drops the selected member's draft of `key`, if it has one.
+    fn drop_draft(&self, key: &str) {
+        let Some(m) = self.current() else { return };
+        let list = self.ws.with_untracked(|w| w.active);
+        if self
+            .drafts
+            .with_untracked(|d| d.get(list, &m.id, key).is_some())
+        {
+            self.drafts.update(|d| {
+                d.clear(list, &m.id, key);
+            });
+        }
+    }
+
     /// Index of a member id in the active list.
     fn index_of(&self, id: &str) -> Option<usize> {
         self.ws.with_untracked(|w| {
