@@ -481,3 +481,39 @@ fn long_csv_lists_are_read_in_blocks_with_the_files_line_numbers() {
         std::fs::remove_file(p).unwrap();
     }
 }
+
+#[test]
+fn convert_to_csv_refuses_to_lose_a_buckling_model_unless_told_to() {
+    let hall = root_file("examples/tarnbeck-crane-hall.json");
+    let dir = std::env::temp_dir().join(format!("strutline-cli-loss-{}", std::process::id()));
+    std::fs::create_dir_all(&dir).unwrap();
+    let out = dir.join("hall.csv");
+    let out_s = out.to_str().unwrap();
+    // K1 has a buckling_model, which a CSV row cannot carry: refused.
+    let (code, text, err) = run(&["convert", &hall, out_s]);
+    assert_eq!(code, Some(2), "{text}{err}");
+    assert!(err.contains("member \"K1\": buckling_model"), "{err}");
+    assert!(
+        err.contains("nothing written") && err.contains("--accept-loss"),
+        "{err}"
+    );
+    assert!(!err.contains("\"W2\""), "{err}");
+    assert!(!out.exists());
+    // Accepted: written, and still said which member lost what.
+    let (code, text, err) = run(&["convert", &hall, out_s, "--accept-loss"]);
+    assert_eq!(code, Some(0), "{text}{err}");
+    assert!(
+        err.contains("member \"K1\": buckling_model: left out"),
+        "{err}"
+    );
+    let csv = std::fs::read_to_string(&out).unwrap();
+    assert!(csv.lines().any(|l| l.starts_with("K1,")), "{csv}");
+    assert!(!csv.contains("buckling_model"), "{csv}");
+    // The option is declared once and its help generated.
+    let (_, help, _) = run(&["convert", "--help"]);
+    assert!(help.contains("--accept-loss"), "{help}");
+    // A list without a structure converts with no option and no note.
+    let (code, _, err) = run(&["convert", &example(), out_s]);
+    assert_eq!((code, err.as_str()), (Some(0), ""));
+    std::fs::remove_dir_all(&dir).unwrap();
+}
