@@ -8,7 +8,8 @@
 //! inside `check::evaluate`), `brief` (the same as written, without
 //! working, checked through one reused `check::Scratch`: count inside
 //! `check::check_member_in`), `prepared-brief` (prepared once, through one
-//! `Scratch`: count inside `check::Scratch::check`), `moments` (the members with moments),
+//! `Scratch`: count inside `check::Scratch::check`), `moments` (the members with moments;
+//! `moments-skipped` the same without working),
 //! `plain` (the same members without their moments), `beam-columns`
 //! (every one with axial load and moments) or `bending` (the same without
 //! axial load), working kept, or `beam-columns-skipped` and
@@ -51,6 +52,7 @@ fn main() {
         "mixed" => (lists::member, Working::Kept),
         "skipped" | "prepared" | "brief" | "prepared-brief" => (lists::member, Working::Skipped),
         "moments" => (lists::with_moments, Working::Kept),
+        "moments-skipped" => (lists::with_moments, Working::Skipped),
         "plain" => (lists::plain, Working::Kept),
         "beam-columns" => (lists::beam_column, Working::Kept),
         "beam-columns-skipped" => (lists::beam_column, Working::Skipped),
@@ -58,7 +60,8 @@ fn main() {
         "bending-skipped" => (lists::bending_only, Working::Skipped),
         other => {
             eprintln!(
-                "unknown list {other}: mixed, skipped, prepared, brief, prepared-brief, moments, plain, \
+                "unknown list {other}: mixed, skipped, prepared, brief, prepared-brief, moments, \
+                 moments-skipped, plain, \
                  beam-columns, beam-columns-skipped, bending, bending-skipped, sizing or \
                  sizing-beam-columns"
             );

@@ -383,6 +383,17 @@ pub struct Member {
     /// already include the member's second-order effects (version 3).
     #[serde(default = "yes", skip_serializing_if = "is_true")]
     pub amplify_moments: bool,
+    /// The length of the member's own moment amplification about the
+    /// major axis, mm, from the engineer's analysis (AISC 360-16 Appendix
+    /// 8.2.1's L_c1, CSA S16-19 13.8.4's L): in place of the laterally
+    /// unbraced length with K = 1, for the amplification only, never for
+    /// the compression resistance (`interaction::own_length`). `None`:
+    /// the unbraced length.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub amplification_length_major_mm: Option<f64>,
+    /// The same about the minor axis.
+    #[serde(default, skip_serializing_if = "Option::is_none")]
+    pub amplification_length_minor_mm: Option<f64>,
     /// EN 1993-1-1 interaction factors: Annex A (Method 1) or Annex B
     /// (Method 2) (version 3). `None` (the key absent) leaves the choice
     /// open: both are worked and the larger utilisation of each equation is
@@ -536,6 +547,8 @@ impl Member {
             lt_restrained: false,
             load_level: LoadLevel::default(),
             amplify_moments: true,
+            amplification_length_major_mm: None,
+            amplification_length_minor_mm: None,
             interaction_annex: None,
         }
     }
@@ -744,6 +757,17 @@ impl Member {
         positive("k_lt", self.k_lt)?;
         if let Some(v) = self.lcr_lt_mm {
             bounded("lcr_lt_mm", v)?;
+        }
+        // Any length within the bounds: a shorter one than the unbraced
+        // length is the analysis' (said on the result), a longer one only
+        // lowers C_e / P_e1 (the safe side).
+        for (key, given) in [
+            (FrameKey::Major, self.amplification_length_major_mm),
+            (FrameKey::Minor, self.amplification_length_minor_mm),
+        ] {
+            if let Some(v) = given {
+                bounded(key.amplification_key(), v)?;
+            }
         }
         Ok(())
     }

@@ -62,6 +62,8 @@ export function register(test, { withApp, open, OUT }) {
       await page.locator("[data-testid=add-member]").first().click();
       await setField(page, page, "id", "GANTRY-4");
       await setField(page, page, "length_mm", "9000");
+      // A new member is checked once its design load is given.
+      await setField(page, page, "axial_kn", "150");
       await page.locator("[data-testid=cm-toggle]").click();
       await page.locator("[data-testid=cm-canvas][data-shapes='2']").waitFor({ timeout: 10_000 });
       assert.match(await page.locator("[data-testid=restraint-by-model]").innerText(), /column model/);

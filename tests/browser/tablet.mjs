@@ -11,7 +11,7 @@ import { spawnSync } from "node:child_process";
 import { mkdtempSync, readFileSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { STORAGE_KEY } from "./lib.mjs";
+import { memberFile, seedStorage, STORAGE_KEY, workspaceText } from "./lib.mjs";
 
 // A member-file key as the file writes it: words joined by "_", most
 // ending in their unit (length_mm, fc0k_mpa, k_major, gamma_m1).
@@ -56,7 +56,12 @@ async function typeAndWatch(page, name, value) {
   await field.tap().catch(() => field.click());
   await field.focus();
   const before = await shown(page);
-  await page.keyboard.press("ControlOrMeta+A");
+  // Select the whole text (a key chord after a tap did not always take on
+  // the emulated phone: the value was then typed in front of the old one,
+  // which the verdict used to hide by keeping the last readable result).
+  await field.selectText();
+  const whole = await field.evaluate((el) => el.selectionStart === 0 && el.selectionEnd === el.value.length);
+  assert.ok(whole, `the text of ${name} is not wholly selected before typing`);
   await page.keyboard.type(String(value));
   await page.waitForFunction(
     (b) => {
@@ -87,7 +92,157 @@ async function allInView(page, name, what) {
   assert.ok(field?.inside && field.onTop, `${what}: the field ${name} is not in view or is covered: ${JSON.stringify(field)}`);
 }
 
+/** The warnings of the result's head that a person would see cut: each
+ * visible line item must lie wholly inside every box around it that
+ * clips (up to the head) and inside the viewport, and no list may hold
+ * more than its box shows. Returns what is cut (empty when nothing is). */
+async function clippedWarnings(page) {
+  return page.evaluate(() => {
+    const cut = [];
+    const head = document.querySelector("[data-testid=result-head]");
+    if (!head) return ["no result head"];
+    const within = (r, b) => r.top >= b.top - 0.5 && r.bottom <= b.bottom + 0.5 && r.left >= b.left - 0.5 && r.right <= b.right + 0.5;
+    for (const list of head.querySelectorAll(".warnings")) {
+      if (list.getClientRects().length === 0) continue;
+      if (list.scrollHeight > list.clientHeight + 1) {
+        cut.push(`the list holds ${list.scrollHeight} px in a box of ${list.clientHeight} px`);
+      }
+      for (const li of list.querySelectorAll("li")) {
+        const r = li.getBoundingClientRect();
+        if (r.height === 0) continue;
+        const what = li.textContent.trim().slice(0, 50);
+        for (let el = li.parentElement; el; el = el.parentElement) {
+          const s = getComputedStyle(el);
+          if (s.overflowY !== "visible" && !within(r, el.getBoundingClientRect())) {
+            cut.push(`"${what}" is cut by ${el.tagName.toLowerCase()}.${el.className}`);
+          }
+          if (el === head) break;
+        }
+        if (!within(r, { top: 0, left: 0, bottom: window.innerHeight, right: window.innerWidth })) {
+          cut.push(`"${what}" runs past the screen`);
+        }
+      }
+    }
+    return cut;
+  });
+}
+
+// An invented member with four warnings: a single angle of a made-up
+// orchard gate truss, checked to AISC 360-16 through its centroid with
+// small end moments (the angle through its centroid, the checks left out,
+// the sign of an angle's moments, the frame's sway not worked).
+const GATE_ANGLE = {
+  id: "OG-3",
+  section: { kind: "angle", depth_mm: 100, width_mm: 75, thickness_mm: 8 },
+  material: { grade: "S355" },
+  length_mm: 2500,
+  axial_kn: 60,
+  method: "aisc360-lrfd",
+  m_major_a_knm: 2,
+  m_major_b_knm: -1,
+};
+
 export function register(test, { withApp, open, OUT }) {
+  for (const [label, options] of [["landscape", LANDSCAPE], ["portrait", PORTRAIT]]) {
+    const { width, height } = options.viewport;
+    test(`tablet-${label}-warnings-whole`, async () => {
+      await withApp(`tablet-${label}-warnings-whole`, async (page, _log, context) => {
+        await seedStorage(context, workspaceText([memberFile("Orchard gate", [GATE_ANGLE])]));
+        await open(page);
+        await page.locator(`[data-testid=member-row][data-id="${GATE_ANGLE.id}"] .row-main`).first().click();
+        await page.locator("[data-testid=result-utilisation]").first().waitFor();
+        const all = page.locator("#all-warnings li");
+        await all.first().waitFor({ state: "attached", timeout: 10_000 });
+        const total = await all.count();
+        assert.ok(total >= 3, `${total} warnings: the member should have 3 or more`);
+        for (const units of ["SI", "US"]) {
+          if (units === "US") {
+            await page.click("[data-testid=units-toggle]");
+            await page.waitForFunction(() => /kip/.test(document.querySelector("[data-testid=verdict]")?.textContent ?? ""));
+          }
+          // The frame after the change, as the person sees it (the head is
+          // fitted in a frame).
+          await page.evaluate(() => new Promise((r) => requestAnimationFrame(() => requestAnimationFrame(r))));
+          const where = `${width} x ${height}, ${units}`;
+          assert.deepEqual(await clippedWarnings(page), [], `${where}: a warning is cut`);
+          const headItems = page.locator("[data-testid=result-head] [data-testid=warnings] li");
+          if (label === "landscape") {
+            // The warnings that fit whole in the head, then a fold that
+            // shows them all; the verdict and the chart stay in view.
+            const visible = await headItems.evaluateAll((els) => els.filter((e) => e.getClientRects().length > 0).length);
+            const more = page.locator("[data-testid=warnings-more]");
+            const inView = async (when, chart) => {
+              const verdict = await placed(page, "[data-testid=verdict] .verdict");
+              assert.ok(verdict?.inside && verdict.onTop, `${where}, ${when}: the verdict left the view: ${JSON.stringify(verdict)}`);
+              if (chart) {
+                const canvas = await placed(page, "canvas#envelope");
+                assert.ok(canvas?.inside && canvas.onTop, `${where}, ${when}: the chart left the view: ${JSON.stringify(canvas)}`);
+              }
+              assert.equal(await page.evaluate(() => document.scrollingElement.scrollTop), 0, `${where}, ${when}: the page scrolled`);
+            };
+            await inView("with the warnings", true);
+            await page.screenshot({ path: join(OUT, `tablet-warnings-${width}x${height}-${units}.png`) });
+            if (visible < total) {
+              const words = (await more.innerText()).trim();
+              assert.equal(words, `▾ ${total - visible} more warning${total - visible === 1 ? "" : "s"}: show all ${total}`, where);
+              // Opened: the full list in the chart's place, under the
+              // verdict, which stays in view; each warning can be read whole.
+              await more.click();
+              assert.equal(await page.locator("canvas#envelope").isVisible(), false, `${where}: the chart gives way`);
+              assert.equal(await page.locator("#all-warnings").isVisible(), true, `${where}: the full list is shown`);
+              await page.screenshot({ path: join(OUT, `tablet-warnings-${width}x${height}-${units}-all.png`) });
+              for (let i = 0; i < total; i += 1) {
+                const item = all.nth(i);
+                await item.scrollIntoViewIfNeeded();
+                const whole = await item.evaluate((li) => {
+                  const r = li.getBoundingClientRect();
+                  const box = li.closest(".result-more").getBoundingClientRect();
+                  return r.height > 0 && r.top >= box.top - 0.5 && r.bottom <= box.bottom + 0.5 && r.bottom <= window.innerHeight;
+                });
+                assert.ok(whole, `${where}, opened: warning ${i + 1} cannot be seen whole`);
+                await inView(`opened, warning ${i + 1}`, false);
+              }
+              await more.click();
+              await inView("closed again", true);
+              assert.deepEqual(await clippedWarnings(page), [], `${where}, closed again: a warning is cut`);
+            } else {
+              assert.equal(await more.isVisible(), false, `${where}: the fold shows with every warning in view`);
+            }
+            // The check finds a cut line: the box as it was (4.2 rem,
+            // scrolling) with every warning in it.
+            await page.evaluate(() => {
+              const list = document.querySelector("[data-testid=result-head] [data-testid=warnings]");
+              const copy = list.cloneNode(false);
+              for (const li of document.querySelectorAll("#all-warnings li")) copy.append(li.cloneNode(true));
+              copy.style.maxHeight = "4.2rem";
+              copy.style.overflow = "auto";
+              copy.dataset.testid = "old-box";
+              list.after(copy);
+            });
+            const cut = await clippedWarnings(page);
+            await page.evaluate(() => document.querySelector("[data-testid=old-box]").remove());
+            assert.ok(cut.some((c) => /box of|cut by ul/.test(c)), `${where}: the check did not see the old 4.2 rem box cut a warning: ${JSON.stringify(cut)}`);
+            assert.deepEqual(await clippedWarnings(page), [], `${where}: a warning is cut after the check's own test`);
+          } else {
+            // Upright, the docked head keeps no warnings; all of them are
+            // in the result under it, whole, the verdict still docked.
+            assert.equal(await headItems.first().isVisible(), false, `${where}: the docked head shows warnings`);
+            assert.equal(await page.locator("[data-testid=warnings-more]").isVisible(), false, `${where}: the link shows upright`);
+            const last = all.last();
+            await last.scrollIntoViewIfNeeded();
+            assert.equal(await all.count(), total);
+            for (let i = 0; i < total; i += 1) assert.ok(await all.nth(i).isVisible(), `${where}: warning ${i + 1} hidden`);
+            const verdict = await placed(page, "[data-testid=verdict] .verdict");
+            assert.ok(verdict?.inside, `${where}: the verdict left the view: ${JSON.stringify(verdict)}`);
+            const item = await placed(page, "#all-warnings li:last-child");
+            assert.ok(item?.inside && item.onTop, `${where}: the last warning is not wholly in view above the dock: ${JSON.stringify(item)}`);
+            await page.screenshot({ path: join(OUT, `tablet-warnings-${width}x${height}-${units}.png`) });
+          }
+        }
+      }, options);
+    });
+  }
+
   test("tablet-landscape-edit-in-view", async () => {
     await withApp("tablet-landscape-edit-in-view", async (page) => {
       await open(page);

@@ -466,3 +466,95 @@ fn l_c1_of_a_buckling_model_is_bounded_by_its_fixed_braces() {
     let w = warning(&r, "amplification-length-major").expect("said");
     assert!(w.starts_with("buckling_model:"), "{w}");
 }
+
+// "... unless analysis justifies a smaller value" (Appendix 8.2.1, as
+// above): the engineer states that length with amplification_length_major_mm
+// (or _minor_mm). Our own hand calculation from Eq. A-8-5 and Eq. A-8-3 for
+// the same plate I, P_r = 2500 kN, C_m = 1.0, in Python 3: L_c1 = 3000 mm
+// gives P_e1x = 55 527.710 kN and B1x = 1.0471452; L_c1 = 5000 mm (longer
+// than L: the lower P_e1, on the safe side, accepted) 19 989.976 kN and
+// 1.1429390. The compression check keeps its own buckling length.
+
+#[test]
+fn l_c1_from_the_engineers_analysis_is_used_for_b1_only() {
+    let r = b1_case(json!({"k_major": 0.7, "amplification_length_major_mm": 3000}));
+    assert_close(
+        r.modes[0].buckling_length_mm,
+        2800.0,
+        HAND,
+        "L_c,x = k L for the compression strength (E2), not L_c1",
+    );
+    assert_close(step(&r, "L_c1x"), 3000.0, HAND, "L_c1x as given (mm)");
+    assert_close(
+        step(&r, "P_e1x"),
+        55527.71030778221,
+        HAND,
+        "P_e1x, A-8-5 at L_c1 = 3000 mm (kN)",
+    );
+    assert_close(step(&r, "B1x"), 1.0471451621329595, HAND, "B1x, A-8-3");
+    // Said on the result: taken from the engineer's analysis, to be
+    // justified; and the length is not the raised one.
+    let w = warning(&r, "amplification-length-given-major").expect("the given L_c1 is said");
+    assert!(w.starts_with("amplification_length_major_mm:"), "{w}");
+    assert!(
+        w.contains("3000") && w.contains("4000") && w.contains("Appendix 8.2.1"),
+        "{w}"
+    );
+    assert!(w.contains("analysis") && w.contains("justify"), "{w}");
+    assert!(warning(&r, "amplification-length-major").is_none());
+    // The same compression resistance as without the key.
+    let plain = b1_case(json!({"k_major": 0.7}));
+    assert_eq!(r.resistance_kn, plain.resistance_kn);
+    // Longer than the unbraced length: accepted as given (conservative).
+    let r = b1_case(json!({"amplification_length_major_mm": 5000}));
+    assert_close(step(&r, "L_c1x"), 5000.0, HAND, "L_c1x as given (mm)");
+    assert_close(
+        step(&r, "P_e1x"),
+        19989.975710801595,
+        HAND,
+        "P_e1x at 5000 mm (kN)",
+    );
+    assert_close(step(&r, "B1x"), 1.1429390206903507, HAND, "B1x");
+    assert!(warning(&r, "amplification-length-given-major").is_some());
+    // ASD reads it the same way (alpha = 1.6 only changes B1).
+    let asd = check(&plate_i(
+        "aisc360-asd",
+        1500.0,
+        json!({"m_major_a_knm": 150, "m_major_b_knm": 150, "amplification_length_major_mm": 3000}),
+    ));
+    assert_close(step(&asd, "L_c1x"), 3000.0, HAND, "L_c1x, ASD (mm)");
+}
+
+#[test]
+fn a_given_l_c1_is_never_dropped_silently() {
+    // Not used: no moment about the minor axis to amplify.
+    let r = b1_case(json!({"amplification_length_minor_mm": 3000}));
+    let w = warning(&r, "amplification-length-unused-minor").expect("said");
+    assert!(w.starts_with("amplification_length_minor_mm:"), "{w}");
+    assert!(warning(&r, "amplification-length-given-minor").is_none());
+    // Not used: the moments are already second-order.
+    let r = b1_case(json!({"amplify_moments": false, "amplification_length_major_mm": 3000}));
+    assert!(warning(&r, "amplification-length-unused-major").is_some());
+    // Not used by EN 1993-1-1 (its interaction factors hold the member's
+    // second-order effect).
+    let m = plate_i(
+        "en1993-1-1",
+        1000.0,
+        json!({"m_major_a_knm": 150, "m_major_b_knm": 150, "amplification_length_major_mm": 3000}),
+    );
+    let w = warning(&check(&m), "amplification-length-unused-major").expect("said");
+    assert!(w.contains("en1993-1-1"), "{w}");
+    // Refused: not a length above zero, naming the key.
+    for bad in [json!(0), json!(-3000), json!(0.5)] {
+        let m = plate_i(
+            "aisc360-lrfd",
+            2500.0,
+            json!({"m_major_a_knm": 150, "amplification_length_major_mm": bad}),
+        );
+        let e = strutline_core::check::check_member(&m).expect_err("refused");
+        assert!(
+            e.to_string().contains("amplification_length_major_mm"),
+            "{e}"
+        );
+    }
+}

@@ -419,3 +419,47 @@ fn c_e_length_is_the_unbraced_length_13_8_4() {
     );
     assert_close(step(&r, "U_1x"), 1.0162684491686624, ANALYSIS, "U_1x");
 }
+
+// 13.8.4's L given from the engineer's analysis
+// (amplification_length_major_mm): our own hand calculation from C_e = pi^2
+// E I / L^2 and U_1 = omega_1 / (1 - C_f/C_e) for the same I, C_f = 2000
+// kN, omega_1 = 1.0, in Python 3: L = 3000 mm gives C_ex = 55 527.710 kN
+// and U_1x = 1.0373638; L = 5000 mm (longer than the member: accepted, the
+// lower C_e) 19 989.976 kN and 1.1111730.
+
+#[test]
+fn c_e_length_from_the_engineers_analysis_13_8_4() {
+    let r = u1_case(json!({"k_major": 0.7, "amplification_length_major_mm": 3000}));
+    assert_close(
+        r.modes[0].buckling_length_mm,
+        2800.0,
+        HAND,
+        "KL for the compression resistance (13.3), not the given L (mm)",
+    );
+    assert_close(step(&r, "L_x"), 3000.0, HAND, "L for C_ex as given (mm)");
+    assert_close(
+        step(&r, "C_ex"),
+        55527.71030778221,
+        HAND,
+        "C_ex, 13.8.4 (kN)",
+    );
+    assert_close(step(&r, "U_1x"), 1.0373638249889652, HAND, "U_1x, 13.8.4");
+    let w = r
+        .warnings
+        .iter()
+        .find(|w| w.code == "amplification-length-given-major")
+        .expect("the given length is said");
+    let text = w.message();
+    assert!(
+        text.starts_with("amplification_length_major_mm:") && text.contains("13.8.4"),
+        "{text}"
+    );
+    assert!(!r
+        .warnings
+        .iter()
+        .any(|w| w.code == "amplification-length-major"));
+    let r = u1_case(json!({"amplification_length_major_mm": 5000}));
+    assert_close(step(&r, "L_x"), 5000.0, HAND, "L as given (mm)");
+    assert_close(step(&r, "C_ex"), 19989.975710801595, HAND, "C_ex (kN)");
+    assert_close(step(&r, "U_1x"), 1.1111730239190458, HAND, "U_1x");
+}

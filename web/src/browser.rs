@@ -150,6 +150,53 @@ pub fn lay_out_now() {
     }
 }
 
+/// Shows the warnings of the result's `head` whole while the head fits the
+/// pane it is in (the wide layout, where the head does not scroll and its
+/// pane clips): all of them first, then one more from the last marked
+/// `cut` (not displayed, `style.css`) at a time until the head's foot is
+/// within the pane's; the `.warnings-more` fold, which shows the full list
+/// in place of the chart, is then shown closed, saying how many are left out
+/// in the words of `words(more, total)`. Nothing is cut where the head's
+/// warnings are not displayed (the docked head).
+pub fn fit_warnings(head: &web_sys::HtmlElement, words: &dyn Fn(usize, usize) -> String) {
+    use wasm_bindgen::JsCast;
+    let (Some(list), Some(fold), Some(pane)) = (
+        head.query_selector(".warnings").ok().flatten(),
+        head.query_selector(".warnings-more").ok().flatten(),
+        head.parent_element(),
+    ) else {
+        return;
+    };
+    let items = list.get_elements_by_tag_name("li");
+    let total = items.length();
+    for i in 0..total {
+        if let Some(li) = items.item(i) {
+            let _ = li.class_list().remove_1("cut");
+        }
+    }
+    let _ = fold.remove_attribute("open");
+    let _ = fold.set_attribute("hidden", "");
+    let shown_at_all = list
+        .dyn_ref::<web_sys::HtmlElement>()
+        .is_some_and(|l| l.offset_height() > 0);
+    if !shown_at_all {
+        return;
+    }
+    let room = pane.get_bounding_client_rect().bottom();
+    let foot = || head.get_bounding_client_rect().bottom();
+    let mut shown = total;
+    while shown > 0 && foot() > room + 0.5 {
+        shown -= 1;
+        if let Some(li) = items.item(shown) {
+            let _ = li.class_list().add_1("cut");
+        }
+        let _ = fold.remove_attribute("hidden");
+        if let Ok(Some(w)) = fold.query_selector(".when-closed") {
+            w.set_text_content(Some(&words((total - shown) as usize, total as usize)));
+        }
+    }
+}
+
 /// Sets or clears a class on `<body>`.
 pub fn body_class(class: &str, on: bool) {
     if let Some(body) = web_sys::window()

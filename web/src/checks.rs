@@ -51,6 +51,18 @@ impl Checked {
         }
     }
 
+    /// This member while its editor holds text that cannot be read
+    /// ([`crate::drafts`]): its result withdrawn, the error says why; the
+    /// section and material as prepared stay (the section view and the
+    /// frame's G helper need no result).
+    pub fn unread(&self, why: Error) -> Checked {
+        Checked {
+            member: self.member.clone(),
+            prepared: self.prepared.clone(),
+            outcome: Some(Err(why)),
+        }
+    }
+
     /// The check's result, once worked and valid.
     pub fn result(&self) -> Option<&CheckResult> {
         self.outcome.as_ref().and_then(|o| o.as_ref().ok())
@@ -151,6 +163,21 @@ impl Checker {
 mod tests {
     use super::*;
     use crate::demo::sample_member;
+
+    /// A member with unreadable text: no result, the draft's error, the
+    /// prepared section kept.
+    #[test]
+    fn unread_withdraws_the_result_and_keeps_the_section() {
+        let c = Checked::new(&sample_member("U1"));
+        assert!(c.result().is_some());
+        let mut d = crate::drafts::Drafts::default();
+        d.set(0, "U1", "length_mm", "3,5m", "length_mm: must be a number");
+        let u = c.unread(d.first(0, "U1").unwrap().error());
+        assert!(u.result().is_none());
+        assert!(matches!(&u.outcome, Some(Err(e)) if e.key() == Some("length_mm")));
+        assert_eq!(u.prepared, c.prepared);
+        assert_eq!(u.member, c.member);
+    }
 
     #[test]
     fn rechecks_only_changed_members() {

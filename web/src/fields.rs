@@ -537,8 +537,17 @@ pub fn method_keys(method: Method) -> &'static [&'static str] {
         Method::Secant => &["gamma_m1", "eccentricity_mm"],
         Method::Euler => &["gamma_m1"],
         Method::En1995 => &["service_class", "load_duration"],
-        Method::CsaS16 => &["csa_n"],
-        Method::AiscLrfd | Method::AiscAsd => &[],
+        // The length of the member's own moment amplification from the
+        // engineer's analysis: only these codes' beam-column checks use it.
+        Method::CsaS16 => &[
+            "csa_n",
+            "amplification_length_major_mm",
+            "amplification_length_minor_mm",
+        ],
+        Method::AiscLrfd | Method::AiscAsd => &[
+            "amplification_length_major_mm",
+            "amplification_length_minor_mm",
+        ],
     }
 }
 
@@ -1167,5 +1176,19 @@ mod tests {
         let with = apply(&m, &NOTE, " stair post ").unwrap();
         assert_eq!(with.note.as_deref(), Some("stair post"));
         assert_eq!(apply(&with, &NOTE, "  ").unwrap().note, None);
+    }
+
+    #[test]
+    fn the_amplification_length_is_edited_only_where_a_method_uses_it() {
+        for m in Method::ALL {
+            let keys: Vec<&str> = option_fields(m).iter().map(|f| f.key).collect();
+            let uses = matches!(m, Method::AiscLrfd | Method::AiscAsd | Method::CsaS16);
+            for k in [
+                "amplification_length_major_mm",
+                "amplification_length_minor_mm",
+            ] {
+                assert_eq!(keys.contains(&k), uses, "{} shows {k}: {keys:?}", m.key());
+            }
+        }
     }
 }

@@ -13,6 +13,7 @@ pub mod chart;
 pub mod checks;
 pub mod demo;
 pub mod diagram;
+pub mod drafts;
 pub mod exchange;
 pub mod fields;
 pub mod framing;

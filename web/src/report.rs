@@ -128,9 +128,33 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                 h.push(&checks_html(r, sys));
             }
             h.push(&warnings_in(r, sys, &said));
+            // In the app's wide layout the head does not scroll: its
+            // warnings are shown whole while the head fits its pane, the
+            // rest behind this fold, which, opened, shows the full list
+            // under the head in place of the chart (`style.css`;
+            // `browser::fit_warnings` marks them and fills in its words).
+            if !sheet && !r.warnings.is_empty() {
+                h.lit(
+                    "<details class=\"warnings-more\" hidden><summary data-testid=\"warnings-more\">\
+                     <span class=\"when-closed\"></span><span class=\"when-open\">▴ Hide them: show the chart</span>\
+                     </summary></details>",
+                );
+            }
         }
     }
     h
+}
+
+/// The id of the full list of warnings under the result's head.
+pub const ALL_WARNINGS_ID: &str = "all-warnings";
+
+/// The words that open every warning in the result's head when it shows
+/// only the first of `total`, `more` of them left out.
+pub fn more_warnings_text(more: usize, total: usize) -> String {
+    format!(
+        "▾ {more} more {}: show all {total}",
+        if more == 1 { "warning" } else { "warnings" }
+    )
 }
 
 /// The design load a result was checked at, and for a buckling model the
@@ -239,11 +263,7 @@ fn warnings_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) 
     if r.warnings.is_empty() {
         return h;
     }
-    // Focusable: on a docked or landscape result head the list scrolls
-    // within a few lines, and a keyboard must reach what it hides.
-    h.lit(
-        "<ul class=\"warnings\" data-testid=\"warnings\" tabindex=\"0\" aria-label=\"warnings\">",
-    );
+    h.lit("<ul class=\"warnings\" data-testid=\"warnings\" aria-label=\"warnings\">");
     for w in &r.warnings {
         html!(
             h,
@@ -709,6 +729,62 @@ mod tests {
     }
 
     #[test]
+    fn the_head_holds_every_warning_whole_and_a_link_to_the_full_list() {
+        // An invented single angle under AISC with end moments: four
+        // warnings (angle through its centroid, checks left out, the F10
+        // sign convention, B2 not worked).
+        let mut m = demo::sample_member("L4");
+        m.section = strutline_core::section::SectionSpec::Angle(strutline_core::section::Angle {
+            depth_mm: 100.0,
+            width_mm: 75.0,
+            thickness_mm: 8.0,
+            root_radius_mm: 0.0,
+            toe_radius_mm: 0.0,
+        });
+        m.method = strutline_core::method::Method::AiscLrfd;
+        m.axial_kn = 60.0;
+        m.m_major_a_knm = 2.0;
+        m.m_major_b_knm = -1.0;
+        let c = Checked::new(&m);
+        let r = c.result().unwrap();
+        let n = r.warnings.len();
+        assert!(n >= 3, "{n} warnings");
+        // Each warning whole in the head (the browser hides those that do
+        // not fit the pane, browser::fit_warnings) and the link to the
+        // full list, hidden until then.
+        let head = verdict_html(&c, UnitSystem::Si).into_string();
+        assert_eq!(head.matches("<li>").count(), n, "{head}");
+        for w in &r.warnings {
+            let mut t = Html::new();
+            t.text(&w.text(UnitSystem::Si));
+            assert!(head.contains(t.as_str()), "{head}");
+        }
+        assert!(head.contains(
+            "<details class=\"warnings-more\" hidden><summary data-testid=\"warnings-more\">"
+        ));
+        assert_eq!(more_warnings_text(1, 4), "▾ 1 more warning: show all 4");
+        assert_eq!(more_warnings_text(3, 4), "▾ 3 more warnings: show all 4");
+        // The full list and the sheet have them all, the sheet no link.
+        assert_eq!(
+            warnings_html(r, UnitSystem::Si)
+                .into_string()
+                .matches("<li>")
+                .count(),
+            n
+        );
+        let sheet = sheet_html(
+            "",
+            &SheetHeader::default(),
+            &[Arc::new(c)],
+            None,
+            UnitSystem::Si,
+        )
+        .into_string();
+        assert_eq!(sheet.matches("<li>⚠").count(), n);
+        assert!(!sheet.contains("warnings-more"));
+    }
+
+    #[test]
     fn a_warning_reads_in_the_units_shown() {
         // A bar whose compression passes its elastic buckling load in the
         // plane of bending: AISC's B1 has no finite value, and the warning
@@ -728,13 +804,13 @@ mod tests {
                 .unwrap()
                 .to_string()
         };
-        let si = item(&verdict_html(&c, UnitSystem::Si).into_string());
+        // The full list under the result's head (the head shows the first
+        // few, HEAD_WARNINGS) and the calc sheet say it the same way.
+        let si = item(&warnings_html(r, UnitSystem::Si).into_string());
         assert!(si.contains("alpha P_r = 1000.0 kN"), "{si}");
-        let us = item(&verdict_html(&c, UnitSystem::Us).into_string());
+        let us = item(&warnings_html(r, UnitSystem::Us).into_string());
         assert!(us.contains("alpha P_r = 224.8 kip"), "{us}");
         assert!(!us.contains(" kN"), "{us}");
-        // The docked list and the calc sheet say it the same way.
-        assert!(item(&warnings_html(r, UnitSystem::Us).into_string()).contains("224.8 kip"));
         let sheet = sheet_html(
             "",
             &SheetHeader::default(),

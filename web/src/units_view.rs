@@ -95,6 +95,44 @@ pub fn plain_text(system: UnitSystem, unit: &'static str, v: f64, span: bool) ->
     format!("{n} {u}")
 }
 
+/// Decimals of a section dimension shown in inches: three, the
+/// thousandth of an inch to which US steel tables give a section's
+/// dimensions (common practice, e.g. a web 0.355 in thick).
+const INCH_DECIMALS: usize = 3;
+
+/// A section's short description in the units shown: SI as the engine
+/// writes it (mm, no unit); US with its dimensions in inches to the
+/// thousandth (trailing zeros dropped) followed by "in", a given section's
+/// area and second moments in in² and in⁴ to four significant figures. A
+/// catalogue designation is its name in either (a W-shape keeps its
+/// name). For the list's rows.
+pub fn section_text(system: UnitSystem, spec: &strutline_core::section::SectionSpec) -> String {
+    if system == UnitSystem::Si {
+        return spec.describe();
+    }
+    let number = |v: f64, q: Quantity| {
+        let d = units::to_display(system, q, v);
+        match q {
+            Quantity::Length => {
+                let t = format!("{d:.INCH_DECIMALS$}");
+                let t = t.trim_end_matches('0').trim_end_matches('.');
+                if t == "-0" {
+                    "0".to_string()
+                } else {
+                    t.to_string()
+                }
+            }
+            _ => format!(
+                "{} {}",
+                units::format_display(d, 4),
+                units::display_unit(system, q)
+            ),
+        }
+    };
+    let unit = format!(" {}", units::display_unit(system, Quantity::Length));
+    spec.describe_in(&number, &unit)
+}
+
 /// A member length or position in the display units (mm in SI, ft in US),
 /// to the working's figures.
 pub fn span_text(system: UnitSystem, mm: f64) -> String {
@@ -140,6 +178,59 @@ pub fn from_field(system: UnitSystem, key: &str, typed: &str) -> String {
 mod tests {
     use super::*;
     use UnitSystem::{Si, Us};
+
+    #[test]
+    fn a_section_reads_in_the_units_shown() {
+        use strutline_core::section::{CatalogueRef, Given, IShape, Rhs, SectionSpec};
+        // 1 in = 25.4 mm exactly (NIST SP 811, 2008, App. B): 200 mm =
+        // 7.874 in, 15 mm = 0.591 in, 9 mm = 0.354 in, 18 mm = 0.709 in,
+        // each to the thousandth.
+        let i = SectionSpec::I(IShape {
+            depth_mm: 200.0,
+            width_mm: 200.0,
+            flange_mm: 15.0,
+            web_mm: 9.0,
+            root_radius_mm: 18.0,
+            make: Default::default(),
+        });
+        assert_eq!(section_text(Si, &i), "I 200x200x15x9 r18");
+        assert_eq!(section_text(Us, &i), "I 7.874x7.874x0.591x0.354 in r0.709");
+        assert!(!section_text(Us, &i).contains("mm"));
+        // Typed in inches, it reads as typed: 6 x 4 x 1/4 in.
+        let rhs = SectionSpec::Rhs(Rhs {
+            depth_mm: 6.0 * 25.4,
+            width_mm: 4.0 * 25.4,
+            wall_mm: 0.25 * 25.4,
+            outer_radius_mm: 0.0,
+            inner_radius_mm: None,
+            make: Default::default(),
+        });
+        assert_eq!(section_text(Us, &rhs), "RHS 6x4x0.25 in");
+        // A given section's area and second moments: 2850 mm² = 4.418 in²
+        // (645.16 mm² a square inch), 9.2e6 mm⁴ = 22.1 in⁴ and 3.1e6 mm⁴ =
+        // 7.448 in⁴ (416,231.4256 mm⁴ an in⁴), four significant figures.
+        let given = SectionSpec::Given(Given {
+            area_mm2: 2850.0,
+            i_major_mm4: 9_200_000.0,
+            i_minor_mm4: 3_100_000.0,
+            torsion_mm4: None,
+            warping_mm6: None,
+            w_el_major_mm3: None,
+            w_el_minor_mm3: None,
+            w_pl_major_mm3: None,
+            w_pl_minor_mm3: None,
+        });
+        assert_eq!(
+            section_text(Us, &given),
+            "given A=4.418 in² I=22.1 in⁴/7.448 in⁴"
+        );
+        // A catalogue designation is its name in either system.
+        let w = SectionSpec::Catalogue(CatalogueRef {
+            designation: "W10X49".into(),
+        });
+        assert_eq!(section_text(Us, &w), "W10X49");
+        assert_eq!(section_text(Si, &w), "W10X49");
+    }
 
     #[test]
     fn si_is_shown_as_stored() {

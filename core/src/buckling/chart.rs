@@ -79,6 +79,16 @@ impl FrameKey {
         }
     }
 
+    /// The member-file key of the length of the member's own moment
+    /// amplification about this axis, from the engineer's analysis
+    /// (AISC 360-16 Appendix 8.2.1's L_c1, CSA S16-19 13.8.4's L).
+    pub fn amplification_key(self) -> &'static str {
+        match self {
+            FrameKey::Major => "amplification_length_major_mm",
+            FrameKey::Minor => "amplification_length_minor_mm",
+        }
+    }
+
     fn g_key(self, end_b: bool) -> &'static str {
         match (self, end_b) {
             (FrameKey::Major, false) => "frame_major.g_a",

@@ -519,7 +519,8 @@ const EVERY: &str = r#"{"format": "strutline.members", "version": 3, "title": "e
      "m_major_b_knm": 17.25, "m_major_span_knm": 60.75, "span_load_major": "point",
      "m_minor_a_knm": 1.5, "m_minor_b_knm": 1.5, "m_minor_span_knm": -0.125,
      "span_load_minor": "uniform", "k_lt": 0.5, "lcr_lt_mm": 1800, "lt_restrained": true,
-     "load_level": "compression-flange", "amplify_moments": false, "interaction_annex": "A"},
+     "load_level": "compression-flange", "amplify_moments": false, "interaction_annex": "A",
+     "amplification_length_major_mm": 2750.5, "amplification_length_minor_mm": 1800},
     {"id": "F15", "section": {"kind": "i", "depth_mm": 240, "width_mm": 240, "flange_mm": 17,
      "web_mm": 10, "root_radius_mm": 21}, "material": {"grade": "S355"}, "length_mm": 5400,
      "axial_kn": 380, "method": "en1993-1-1",
@@ -567,15 +568,29 @@ fn json_csv_json_keeps_every_member_exactly() {
         Some(crate::member::InteractionAnnex::A),
         "{csv_text}"
     );
+    assert_eq!(
+        (
+            b14.amplification_length_major_mm,
+            b14.amplification_length_minor_mm
+        ),
+        (Some(2750.5), Some(1800.0)),
+        "{csv_text}"
+    );
     assert!(
-        header.contains(",amplify_moments,interaction_annex"),
+        header.contains(
+            ",amplify_moments,amplification_length_major_mm,amplification_length_minor_mm,\
+             interaction_annex"
+        ),
         "{header}"
     );
     assert!(again
         .members
         .iter()
         .filter(|m| m.id != "B14")
-        .all(|m| m.amplify_moments && m.interaction_annex.is_none()));
+        .all(|m| m.amplify_moments
+            && m.interaction_annex.is_none()
+            && m.amplification_length_major_mm.is_none()
+            && m.amplification_length_minor_mm.is_none()));
     assert!(!csv_text.contains('{'), "{csv_text}");
     // The frames are three flat columns each, after the buckling lengths.
     assert!(

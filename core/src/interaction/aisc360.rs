@@ -55,7 +55,7 @@
 //!
 //! Eq. numbers and text recalled from memory of the 2016 Specification.
 
-use super::{own_length, ratio, warn_raised, Check, Context, OwnBasis};
+use super::{own_length, ratio, warn_given, warn_raised, Check, Context, OwnBasis};
 use crate::bending::aisc360_angle as angle;
 use crate::bending::{moments, shape, Axis, AxisBending, Shape};
 use crate::error::Result;
@@ -222,16 +222,14 @@ fn required(
             OwnBasis::Frame { sway: false } => sym!("effective length in the plane of bending: the laterally unbraced length, K1 = 1 (the braced frame's k is for the compression check; a smaller L_c1 needs an analysis that justifies it)"),
             OwnBasis::Frame { sway: true } => sym!("effective length in the plane of bending: the laterally unbraced length, K1 = 1, no lateral translation of the ends (the sway frame's k is for the compression check; sway is B2's, outside the member check)"),
             OwnBasis::Raised => sym!("effective length in the plane of bending: the laterally unbraced length, K1 = 1, longer than the buckling length about this axis (a smaller L_c1 needs an analysis that justifies it; the safe side)"),
+            OwnBasis::Given => sym!("effective length in the plane of bending, no lateral translation of the ends: as given from the engineer's analysis (amplification length), which must justify it; for B1 only, not for the compression strength"),
         },
         l,
         sym!("AISC 360-16 Appendix 8.2.1"),
     );
-    warn_raised(
-        warnings,
-        axis,
-        &own,
-        ("B1", "L_c1", "AISC 360-16 Appendix 8.2.1"),
-    );
+    let said = ("B1", "L_c1", "AISC 360-16 Appendix 8.2.1");
+    warn_raised(warnings, axis, &own, said);
+    warn_given(warnings, axis, &own, said);
     put(
         trace,
         S,

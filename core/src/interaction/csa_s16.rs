@@ -53,7 +53,7 @@
 //!
 //! M_fx, M_fy are the largest moments along the member about each axis.
 
-use super::{own_length, ratio, warn_raised, Check, Context, OwnBasis};
+use super::{own_length, ratio, warn_given, warn_raised, Check, Context, OwnBasis};
 use crate::bending::csa_s16::{class_of, classify, unsupported, PHI};
 use crate::bending::{given_modulus, moments, shape, Axis, Shape};
 use crate::error::{Error, Result};
@@ -293,11 +293,14 @@ fn axis_terms(
             OwnBasis::Frame { sway: false } => sym!("length for C_e: the laterally unbraced length, K = 1 (the braced frame's k is for the compression check)"),
             OwnBasis::Frame { sway: true } => sym!("length for C_e: the laterally unbraced length, K = 1 (the sway frame's k is for the compression check; sway is U_2's, outside the member check)"),
             OwnBasis::Raised => sym!("length for C_e: the laterally unbraced length, K = 1, longer than the buckling length about this axis (the safe side)"),
+            OwnBasis::Given => sym!("length for C_e: as given from the engineer's analysis (amplification length), which must justify it; for U_1 only, not for the compression resistance"),
         },
         l,
         sym!("CSA S16-19 13.8.4"),
     );
-    warn_raised(warnings, axis, &own, ("U_1", "L", "CSA S16-19 13.8.4"));
+    let said = ("U_1", "L", "CSA S16-19 13.8.4");
+    warn_raised(warnings, axis, &own, said);
+    warn_given(warnings, axis, &own, said);
     put(
         trace,
         S,

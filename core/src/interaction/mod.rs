@@ -154,6 +154,11 @@ pub enum OwnBasis {
     /// the unbraced length, since the member file cannot say that an
     /// analysis justifies less.
     Raised,
+    /// Given by the engineer (`amplification_length_major_mm` /
+    /// `_minor_mm`), from an analysis the member file does not hold: used
+    /// as given, shorter or longer than the unbraced length, with the
+    /// warning `amplification-length-given-major`/`-minor` ([`warn_given`]).
+    Given,
 }
 
 /// The length of a member's own moment amplification about one axis
@@ -178,7 +183,7 @@ impl OwnLength {
     /// Whether the buckling length was shorter than the length used (the
     /// member's k < 1 changed the value), which the result warns of.
     pub fn raised(&self) -> bool {
-        self.mm > self.buckling_mm * (1.0 + ANALYSIS_TOLERANCE)
+        self.basis != OwnBasis::Given && self.mm > self.buckling_mm * (1.0 + ANALYSIS_TOLERANCE)
     }
 }
 
@@ -191,21 +196,23 @@ const ANALYSIS_TOLERANCE: f64 = 1e-5;
 /// The length for the member's own second-order moment amplification about
 /// `axis`: both codes compute it with no lateral translation of the ends,
 /// K = 1 over the laterally unbraced length (AISC 360-16 Appendix 8.2.1:
-/// "unless analysis justifies a smaller value", which the member file
-/// cannot say). A shorter buckling length is raised to the unbraced one
-/// ([`OwnBasis::Raised`]), a frame's k is not used ([`OwnBasis::Frame`]),
-/// and a longer buckling length without a frame is kept
-/// ([`OwnBasis::Buckling`]).
+/// "unless analysis justifies a smaller value"). A length the engineer
+/// gives from such an analysis (`amplification_length_*_mm`) is used as
+/// given ([`OwnBasis::Given`]). Otherwise a shorter buckling length is
+/// raised to the unbraced one ([`OwnBasis::Raised`]), a frame's k is not
+/// used ([`OwnBasis::Frame`]), and a longer buckling length without a
+/// frame is kept ([`OwnBasis::Buckling`]).
 pub fn own_length(ctx: &Context<'_>, axis: crate::bending::Axis) -> OwnLength {
     use crate::bending::Axis;
     let m = ctx.input.member;
-    let (keys, buckling_mm, unbraced_mm, frame, lcr) = match axis {
+    let (keys, buckling_mm, unbraced_mm, frame, lcr, given) = match axis {
         Axis::Major => (
             FrameKey::Major,
             ctx.lengths.major_mm,
             ctx.unbraced.major_mm,
             m.frame_major,
             m.lcr_major_mm,
+            m.amplification_length_major_mm,
         ),
         Axis::Minor => (
             FrameKey::Minor,
@@ -213,8 +220,18 @@ pub fn own_length(ctx: &Context<'_>, axis: crate::bending::Axis) -> OwnLength {
             ctx.unbraced.minor_mm,
             m.frame_minor,
             m.lcr_minor_mm,
+            m.amplification_length_minor_mm,
         ),
     };
+    if let Some(mm) = given {
+        return OwnLength {
+            mm,
+            buckling_mm,
+            unbraced_mm,
+            field: keys.amplification_key(),
+            basis: OwnBasis::Given,
+        };
+    }
     let model = ctx.unbraced.from_model;
     let field = if model {
         "buckling_model"
@@ -286,6 +303,105 @@ pub fn warn_raised(
             ],
         )
     });
+}
+
+/// The warning code of a length given for the member's own moment
+/// amplification about `axis` and used ([`warn_given`]).
+pub fn given_code(axis: crate::bending::Axis) -> &'static str {
+    match axis {
+        crate::bending::Axis::Major => "amplification-length-given-major",
+        crate::bending::Axis::Minor => "amplification-length-given-minor",
+    }
+}
+
+/// Says on the result that the member's own moment amplification about
+/// `axis` took the length the engineer gave ([`OwnBasis::Given`]), which
+/// rests on an analysis the member file does not hold: `what` names the
+/// amplifier (`"B1"`, `"U_1"`), `symbol` the length (`"L_c1"`, `"L"`) and
+/// `clause` the rule. Once per axis.
+pub fn warn_given(
+    warnings: &mut Vec<Warning>,
+    axis: crate::bending::Axis,
+    own: &OwnLength,
+    (what, symbol, clause): (&'static str, &'static str, &'static str),
+) {
+    if own.basis != OwnBasis::Given {
+        return;
+    }
+    let code = given_code(axis);
+    crate::method::common::warn_once_with(warnings, code, || {
+        Warning::with_args(
+            code,
+            "{}: the member's own moment amplification {} takes {} = {} from the engineer's \
+             analysis, as given, where the laterally unbraced length with K = 1 is {} ({} \
+             allows a smaller value only where analysis justifies it): that analysis must \
+             justify it and be kept with this check. It is used for {} only, not for the \
+             compression resistance",
+            &[
+                Arg::Word(own.field),
+                Arg::Word(what),
+                Arg::Word(symbol),
+                Arg::figure(own.mm, Quantity::Span, 0),
+                Arg::figure(own.unbraced_mm, Quantity::Span, 0),
+                Arg::Word(clause),
+                Arg::Word(what),
+            ],
+        )
+    });
+}
+
+/// Says on the result that a length given for the member's own moment
+/// amplification (`amplification_length_*_mm`) was not used: no check of
+/// this member took it ([`warn_given`] said nothing for its axis), since
+/// the method works the member's second-order effect its own way (EN
+/// 1993-1-1, EN 1995-1-1) or has no moment about that axis to amplify
+/// (none given, no axial load, or `amplify_moments` false). Never silent.
+pub fn warn_unused_lengths(
+    member: &crate::member::Member,
+    method: Method,
+    warnings: &mut Vec<Warning>,
+) {
+    use crate::bending::Axis;
+    for (axis, key, given) in [
+        (
+            Axis::Major,
+            FrameKey::Major,
+            member.amplification_length_major_mm,
+        ),
+        (
+            Axis::Minor,
+            FrameKey::Minor,
+            member.amplification_length_minor_mm,
+        ),
+    ] {
+        if given.is_none() || warnings.iter().any(|w| w.code == given_code(axis)) {
+            continue;
+        }
+        let code = match axis {
+            Axis::Major => "amplification-length-unused-major",
+            Axis::Minor => "amplification-length-unused-minor",
+        };
+        let why = if matches!(method, Method::AiscLrfd | Method::AiscAsd | Method::CsaS16) {
+            "no moment about this axis is amplified here (none given, no axial load, or \
+             amplify_moments false)"
+        } else {
+            "this method has no such length: its interaction works the member's second-order \
+             effect in its own factors"
+        };
+        crate::method::common::warn_once_with(warnings, code, || {
+            Warning::with_args(
+                code,
+                "{}: not used under {}: the length is for the member's own moment \
+                 amplification of AISC 360-16 (Appendix 8.2.1, L_c1) and CSA S16-19 (13.8.4, \
+                 L) only, and {}",
+                &[
+                    Arg::Word(key.amplification_key()),
+                    Arg::Word(method.key()),
+                    Arg::Word(why),
+                ],
+            )
+        });
+    }
 }
 
 /// Demand over capacity: 0 without demand, infinite without capacity.

@@ -617,6 +617,22 @@ pub const MEMBER: &[Key] = &[
         "moments given are",
         "moments given",
     ),
+    key(
+        "amplification_length_major_mm",
+        Value::Number(Positive),
+        Absent("the laterally unbraced length"),
+        "amplification length from analysis, major axis",
+        "L_amp,y",
+        "length of the member's own moment amplification, major axis, from the engineer's analysis (AISC L_c1, CSA 13.8.4 L)",
+    ),
+    key(
+        "amplification_length_minor_mm",
+        Value::Number(Positive),
+        Absent("the laterally unbraced length"),
+        "amplification length from analysis, minor axis",
+        "L_amp,z",
+        "length of the member's own moment amplification, minor axis, from the engineer's analysis (AISC L_c1, CSA 13.8.4 L)",
+    ),
     choice(
         "interaction_annex",
         Value::Name,

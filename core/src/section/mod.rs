@@ -491,4 +491,15 @@ impl SectionSpec {
     pub fn describe(&self) -> String {
         shapes::describe(self)
     }
+
+    /// [`SectionSpec::describe`] with the numbers written by `number` and
+    /// `length_unit` after the dimensions ([`shapes::describe_in`]): the
+    /// app's text in the units it shows.
+    pub fn describe_in(
+        &self,
+        number: &dyn Fn(f64, crate::units::Quantity) -> String,
+        length_unit: &str,
+    ) -> String {
+        shapes::describe_in(self, number, length_unit)
+    }
 }

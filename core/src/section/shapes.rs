@@ -33,6 +33,7 @@ use std::f64::consts::{FRAC_PI_2, PI};
 use super::geometry::{Moments, Poly};
 use super::{Properties, SectionSpec};
 use crate::error::{Error, Result};
+use crate::units::Quantity;
 
 mod angle;
 mod flanged;
@@ -302,11 +303,26 @@ pub(crate) fn roark_rect(a: f64, b: f64) -> f64 {
 pub fn describe(spec: &SectionSpec) -> String {
     // Six significant figures: a dimension typed in inches (6 in =
     // 152.39999999999998 mm) reads 152.4; the stored value is untouched.
-    let n = |v: f64| crate::units::format_display(v, 6);
+    describe_in(spec, &|v, _| crate::units::format_display(v, 6), "")
+}
+
+/// [`describe`] with each stored value written by `number` (given its
+/// quantity: a dimension is [`Quantity::Length`], a given section's area
+/// and second moments [`Quantity::Area`] and [`Quantity::SecondMoment`])
+/// and `length_unit` written after the dimensions (`""` in the engine's
+/// millimetres, as [`describe`]; `" in"` for a caller that shows inches).
+/// A catalogue designation is its name, whatever the units.
+pub fn describe_in(
+    spec: &SectionSpec,
+    number: &dyn Fn(f64, Quantity) -> String,
+    length_unit: &str,
+) -> String {
+    let n = |v: f64| number(v, Quantity::Length);
+    let u = length_unit;
     match spec {
         SectionSpec::I(s) => {
             let mut d = format!(
-                "I {}x{}x{}x{}",
+                "I {}x{}x{}x{}{u}",
                 n(s.depth_mm),
                 n(s.width_mm),
                 n(s.flange_mm),
@@ -327,7 +343,7 @@ pub fn describe(spec: &SectionSpec) -> String {
                 "RHS"
             };
             let mut d = format!(
-                "{name} {}x{}x{}",
+                "{name} {}x{}x{}{u}",
                 n(s.depth_mm),
                 n(s.width_mm),
                 n(s.wall_mm)
@@ -344,7 +360,7 @@ pub fn describe(spec: &SectionSpec) -> String {
             d
         }
         SectionSpec::Chs(s) => {
-            let mut d = format!("CHS {}x{}", n(s.diameter_mm), n(s.wall_mm));
+            let mut d = format!("CHS {}x{}{u}", n(s.diameter_mm), n(s.wall_mm));
             if s.make == super::HollowMake::ColdFormed {
                 d.push_str(" cold-formed");
             }
@@ -352,7 +368,7 @@ pub fn describe(spec: &SectionSpec) -> String {
         }
         SectionSpec::Angle(s) => {
             let mut d = format!(
-                "L {}x{}x{}",
+                "L {}x{}x{}{u}",
                 n(s.depth_mm),
                 n(s.width_mm),
                 n(s.thickness_mm)
@@ -369,7 +385,7 @@ pub fn describe(spec: &SectionSpec) -> String {
                 "tee"
             };
             let mut d = format!(
-                "{name} {}x{}x{}x{}",
+                "{name} {}x{}x{}x{}{u}",
                 n(s.depth_mm),
                 n(s.width_mm),
                 n(s.flange_mm),
@@ -380,13 +396,13 @@ pub fn describe(spec: &SectionSpec) -> String {
             }
             d
         }
-        SectionSpec::Rect(s) => format!("rect {}x{}", n(s.depth_mm), n(s.width_mm)),
-        SectionSpec::Round(s) => format!("round {}", n(s.diameter_mm)),
+        SectionSpec::Rect(s) => format!("rect {}x{}{u}", n(s.depth_mm), n(s.width_mm)),
+        SectionSpec::Round(s) => format!("round {}{u}", n(s.diameter_mm)),
         SectionSpec::Given(s) => format!(
             "given A={} I={}/{}",
-            n(s.area_mm2),
-            n(s.i_major_mm4),
-            n(s.i_minor_mm4)
+            number(s.area_mm2, Quantity::Area),
+            number(s.i_major_mm4, Quantity::SecondMoment),
+            number(s.i_minor_mm4, Quantity::SecondMoment)
         ),
         SectionSpec::Catalogue(c) => c.designation.clone(),
     }

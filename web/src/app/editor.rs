@@ -8,19 +8,44 @@ use strutline_core::buckling::chart::Frame;
 
 /// A text field of the editor: label, input named by its member-file key,
 /// unit and the message of what is wrong while the person types.
+///
+/// Text that cannot be read is kept as a draft ([`crate::drafts`]): the
+/// member's result is withdrawn while it stands, and the member keeps the
+/// value it had when the field was entered (a half-typed "3," read as 3 on
+/// the way to "3,5m" is put back), so no value the person did not finish is
+/// checked or saved. The draft's text comes back in the box when the member
+/// is opened again.
 #[component]
 pub(super) fn NumField(
     ctx: Ctx,
     field: Field,
     #[prop(optional)] after: Option<Callback<Member>>,
 ) -> impl IntoView {
-    let initial = ctx
+    let stored = ctx
         .current()
         .map(|m| fields::read(&m, field.place, field.key))
         .unwrap_or_default();
+    let draft = ctx.draft(field.key);
     let sys = ctx.units.get_untracked();
-    let initial = crate::units_view::to_field(sys, field.key, &initial);
-    let error = RwSignal::new(None::<String>);
+    // The member's value when the field was entered: put back when what is
+    // typed cannot be read.
+    let settled = StoredValue::new(stored.clone());
+    let initial = match &draft {
+        Some(d) => d.text.clone(),
+        None => crate::units_view::to_field(sys, field.key, &stored),
+    };
+    let error = RwSignal::new(draft.map(|d| d.message));
+    let unread = move |typed: &str, msg: String| {
+        ctx.keep_draft(field.key, typed, &msg);
+        error.set(Some(msg));
+        let Some(m) = ctx.current() else { return };
+        let before = settled.get_value();
+        if fields::read(&m, field.place, field.key) != before {
+            if let Ok(back) = fields::apply(&m, &field, &before) {
+                ctx.commit(back);
+            }
+        }
+    };
     let input_id = format!("f-{}", field.key);
     let err_id = format!("e-{}", field.key);
     let numeric = !matches!(field.rule, fields::Rule::Text | fields::Rule::OptText);
@@ -40,19 +65,28 @@ pub(super) fn NumField(
                     value=initial
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
                     aria-describedby=move || error.with(Option::is_some).then(|| err_id2.clone())
+                    on:focus=move |_| {
+                        if let Some(m) = ctx.current() {
+                            if error.with_untracked(Option::is_none) {
+                                settled.set_value(fields::read(&m, field.place, field.key));
+                            }
+                        }
+                    }
                     on:input=move |e| {
-                        let text = crate::units_view::from_field(sys, field.key, &event_target_value(&e));
+                        let typed = event_target_value(&e);
+                        let text = crate::units_view::from_field(sys, field.key, &typed);
                         let Some(m) = ctx.current() else { return; };
                         match fields::apply(&m, &field, &text) {
                             Ok(new) => match fields::engine_objection(&new, field.key) {
-                                Some(msg) => error.set(Some(msg)),
+                                Some(msg) => unread(&typed, msg),
                                 None => {
                                     error.set(None);
+                                    ctx.drop_draft(field.key);
                                     ctx.commit(new.clone());
                                     if let Some(cb) = after { cb.run(new); }
                                 }
                             },
-                            Err(msg) => error.set(Some(msg)),
+                            Err(msg) => unread(&typed, msg),
                         }
                     }
                 />
@@ -108,8 +142,15 @@ pub(super) fn IdField(ctx: Ctx) -> impl IntoView {
                 on:input=move |e| {
                     let text = event_target_value(&e);
                     let sel = ctx.selected.get_untracked();
+                    let old = ctx.current().map(|m| m.id).unwrap_or_default();
                     match ctx.with_members(|ms| listops::rename(ms, sel, &text)) {
-                        Some(Ok(())) => error.set(None),
+                        Some(Ok(())) => {
+                            error.set(None);
+                            let list = ctx.ws.with_untracked(|w| w.active);
+                            if ctx.drafts.with_untracked(|d| d.first(list, &old).is_some()) {
+                                ctx.drafts.update(|d| d.rename(list, &old, text.trim()));
+                            }
+                        }
                         Some(Err(r)) => error.set(Some(r.message())),
                         None => {}
                     }

@@ -119,6 +119,15 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
         </p>
         <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {
             if let Some(i) = ctx.with_members(|ms| listops::add(ms, &demo::new_member())) {
+                // Its design load is the engineer's to give: until then it
+                // needs input, never "holds" on a made-up load.
+                let list = ctx.ws.with_untracked(|w| w.active);
+                let id = ctx.ws.with_untracked(|w| {
+                    w.active_list().and_then(|l| l.members.get(i)).map(|m| m.id.clone())
+                });
+                if let Some(id) = id {
+                    ctx.drafts.update(|d| d.set(list, &id, "axial_kn", "", demo::NEW_MEMBER_ASKS));
+                }
                 ctx.select(i);
             }
         }>"+ Add member"</button>
@@ -303,16 +312,13 @@ pub(super) fn MemberRow(
     let status = status_text(&checked.outcome);
     let util = utilisation_text(&checked.outcome);
     // In the units shown: a toggle rewrites the text of the rows in view.
-    let (described, length_mm, axial_kn, method) = (
-        m.section.describe(),
-        m.length_mm,
-        m.axial_kn,
-        m.method.key(),
-    );
+    let (section, length_mm, axial_kn, method) =
+        (m.section.clone(), m.length_mm, m.axial_kn, m.method.key());
     let detail = move || {
         let system = crate::units_view::current();
         format!(
-            "{described} · L {} · N {} · {method}",
+            "{} · L {} · N {} · {method}",
+            crate::units_view::section_text(system, &section),
             crate::units_view::plain_text(system, "mm", length_mm, true),
             crate::units_view::plain_text(system, "kN", axial_kn, false),
         )

@@ -14,6 +14,7 @@ use crate::browser;
 use crate::chart;
 use crate::checks::{Checked, Checker};
 use crate::demo;
+use crate::drafts::{self, Drafts};
 use crate::fields::{self, Choice, Field, MaterialMode};
 use crate::listops::{self, Deleted, DeletedList, ListTools};
 use crate::numtext::{for_input, working};
@@ -99,6 +100,9 @@ struct Ctx {
     legend: RwSignal<crate::html::Html>,
     /// Whether the docked chart is open (narrow and upright screens).
     chart_open: RwSignal<bool>,
+    /// Texts in the editor that cannot be read: their members are shown
+    /// as needing input, never with an earlier value's result.
+    drafts: RwSignal<Drafts>,
     /// Whether the first frame has been drawn. What reads the layout
     /// (the list box's height, the canvas's size) waits for it, so that
     /// `start()` forces no layout and the rows are on screen first.
@@ -127,6 +131,37 @@ impl Ctx {
     fn select(&self, i: usize) {
         self.selected.set(i);
         self.generation.update(|g| *g += 1);
+    }
+
+    /// The selected member's draft of `key` ([`crate::drafts`]).
+    fn draft(&self, key: &str) -> Option<drafts::Draft> {
+        let id = self.current()?.id;
+        let list = self.ws.with_untracked(|w| w.active);
+        self.drafts
+            .with_untracked(|d| d.get(list, &id, key).cloned())
+    }
+
+    /// Keeps `typed`, which cannot be read, as the selected member's
+    /// draft of `key` (`message` says why): its result is withdrawn.
+    fn keep_draft(&self, key: &str, typed: &str, message: &str) {
+        let Some(m) = self.current() else { return };
+        let list = self.ws.with_untracked(|w| w.active);
+        self.drafts
+            .update(|d| d.set(list, &m.id, key, typed, message));
+    }
+
+    /// Drops the selected member's draft of `key`, if it has one.
+    fn drop_draft(&self, key: &str) {
+        let Some(m) = self.current() else { return };
+        let list = self.ws.with_untracked(|w| w.active);
+        if self
+            .drafts
+            .with_untracked(|d| d.get(list, &m.id, key).is_some())
+        {
+            self.drafts.update(|d| {
+                d.clear(list, &m.id, key);
+            });
+        }
     }
 
     /// Index of a member id in the active list.
@@ -210,10 +245,11 @@ pub fn App() -> impl IntoView {
     // The engine's time and members over the slices since the list was
     // last checked in full (for the benchmarks).
     let pass = StoredValue::new((0.0f64, 0usize));
+    let drafts = RwSignal::new(Drafts::decode(browser::get(drafts::KEY).as_deref()));
     let checks = Memo::new(move |prev: Option<&Checks>| {
         next_slice.track();
         let sel = selected.get_untracked();
-        let out = ws.with(|w| {
+        let mut out = ws.with(|w| {
             let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
             // The first frame checks the rows it shows (the list opens
             // unfiltered, in its own order, at the top: the first
@@ -238,6 +274,18 @@ pub fn App() -> impl IntoView {
                 pass.set_value((ms, n));
             }
             r.checks
+        });
+        // A member with unreadable text in the editor: its result withdrawn.
+        drafts.with(|d| {
+            if d.is_empty() {
+                return;
+            }
+            let list = ws.with_untracked(|w| w.active);
+            for c in out.iter_mut() {
+                if let Some(draft) = d.first(list, &c.member.id) {
+                    *c = Arc::new(c.unread(draft.error()));
+                }
+            }
         });
         Checks(Arc::new(out))
     });
@@ -281,6 +329,7 @@ pub fn App() -> impl IntoView {
         sheet: RwSignal::new(None),
         legend: RwSignal::new(crate::html::Html::new()),
         chart_open: RwSignal::new(false),
+        drafts,
         painted,
     };
     provide_context(ctx.units);
@@ -292,6 +341,36 @@ pub fn App() -> impl IntoView {
         ws.track();
         if prev.is_some() || fresh {
             schedule_save(ctx);
+        }
+    });
+    // The drafts kept beside the workspace; a draft whose member is gone
+    // (deleted, its list removed) dropped.
+    Effect::new(move |prev: Option<()>| {
+        let text = drafts.with(|d| (!d.is_empty()).then(|| d.encode()));
+        if prev.is_some() {
+            match text {
+                Some(t) => {
+                    let _ = browser::set(drafts::KEY, &t);
+                }
+                None => browser::remove(drafts::KEY),
+            }
+        }
+    });
+    Effect::new(move |_| {
+        ws.track();
+        if drafts.with_untracked(Drafts::is_empty) {
+            return;
+        }
+        let mut d = drafts.get_untracked();
+        let gone = ws.with_untracked(|w| {
+            d.prune(|list, id| {
+                w.lists
+                    .get(list)
+                    .is_some_and(|l| l.members.iter().any(|m| m.id == id))
+            })
+        });
+        if gone {
+            drafts.set(d);
         }
     });
     Effect::new(move |_| {

@@ -41,10 +41,16 @@ enum Accepts {
 /// the app's one unit system by its suffix (a member-file key such as
 /// `length_mm`, `axial_kn` or `distributed_kn_per_m`, or the names
 /// of a spring, `spring_kn_per_mm` and `spring_knm_per_rad`), `unit` the
-/// SI unit shown.
+/// SI unit shown; `path` the value's place in the member file
+/// (`buckling_model.segments[0].length_mm`), which names a text that cannot
+/// be read: it is kept as the member's draft ([`crate::drafts`]), the
+/// member's result withdrawn and the value from before the edit put back,
+/// as in the editor's own fields.
 #[component]
 fn ModelNum(
+    ctx: Ctx,
     id: String,
+    path: String,
     label: String,
     key: &'static str,
     unit: &'static str,
@@ -53,22 +59,46 @@ fn ModelNum(
     set: Callback<f64>,
 ) -> impl IntoView {
     let sys = crate::units_view::now();
-    let error = RwSignal::new(None::<String>);
-    let shown = to_field(sys, key, &for_input(initial));
+    let draft = ctx.draft(&path);
+    let shown = match &draft {
+        Some(d) => d.text.clone(),
+        None => to_field(sys, key, &for_input(initial)),
+    };
+    let error = RwSignal::new(draft.map(|d| d.message));
+    // The value set through this box last, and when it was entered.
+    let last = StoredValue::new(initial);
+    let at_focus = StoredValue::new(initial);
+    let path = StoredValue::new(path);
     let label2 = label.clone();
+    let unread = move |typed: &str, why: String| {
+        path.with_value(|p| ctx.keep_draft(p, typed, &why));
+        error.set(Some(why));
+        let before = at_focus.get_value();
+        if last.get_value().to_bits() != before.to_bits() {
+            last.set_value(before);
+            set.run(before);
+        }
+    };
     view! {
         <div class="field cm-num" class:has-error=move || error.with(Option::is_some)>
             <label for=id.clone()>{label}</label>
             <div class="input-row">
                 <input type="text" id=id inputmode="decimal" autocomplete="off" spellcheck="false" value=shown
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
+                    on:focus=move |_| if error.with_untracked(Option::is_none) { at_focus.set_value(last.get_value()); }
                     on:input=move |e| {
-                        let text = from_field(sys, key, &event_target_value(&e));
+                        let typed = event_target_value(&e);
+                        let text = from_field(sys, key, &typed);
                         match parse_number(&text) {
-                            Ok(v) if accepts == Accepts::Positive && v <= 0.0 => error.set(Some(format!("{label2}: must be greater than zero"))),
-                            Ok(v) if v < 0.0 => error.set(Some(format!("{label2}: must be zero or more"))),
-                            Ok(v) => { error.set(None); set.run(v); }
-                            Err(er) => error.set(Some(er.message(&label2))),
+                            Ok(v) if accepts == Accepts::Positive && v <= 0.0 => unread(&typed, format!("{label2}: must be greater than zero")),
+                            Ok(v) if v < 0.0 => unread(&typed, format!("{label2}: must be zero or more")),
+                            Ok(v) => {
+                                error.set(None);
+                                path.with_value(|p| ctx.drop_draft(p));
+                                last.set_value(v);
+                                set.run(v);
+                            }
+                            Err(er) => unread(&typed, er.message(&label2)),
                         }
                     } />
                 <span class="unit">{if key.is_empty() { unit } else { field_unit(sys, key, unit) }}</span>
@@ -82,7 +112,9 @@ fn ModelNum(
 /// `unit` as [`ModelNum`]'s).
 #[component]
 fn HoldField(
+    ctx: Ctx,
     id: String,
+    path: String,
     label: String,
     key: &'static str,
     unit: &'static str,
@@ -111,7 +143,7 @@ fn HoldField(
                 </select>
             </div>
             {spring.map(|k| view! {
-                <ModelNum id=sid label=format!("{label}, stiffness") key=key unit=unit initial=k
+                <ModelNum ctx=ctx id=sid path=path.clone() label=format!("{label}, stiffness") key=key unit=unit initial=k
                     accepts=Accepts::Positive set=Callback::new(move |v| set.run(Fixity::Spring(v))) />
             })}
         </div>
@@ -181,10 +213,10 @@ fn EndRows(ctx: Ctx, end_b: bool, rebuild: RwSignal<u32>) -> impl IntoView {
             view! {
                 <div class="cm-row" data-testid=id.clone()>
                     <span class="cm-row-name">{format!("end {name}, {} axis", axis.key())}</span>
-                    <HoldField id=format!("{id}-move") label="sideways".into() key=TRANSLATION unit="kN/mm" initial=sup.translation
+                    <HoldField ctx=ctx id=format!("{id}-move") path=format!("buckling_model.ends.{tag}.{}.translation", axis.key()) label="sideways".into() key=TRANSLATION unit="kN/mm" initial=sup.translation
                         free_allowed=true rebuild=rebuild
                         set=Callback::new(move |f| set_sup(&|s: &mut Support| s.translation = f)) />
-                    <HoldField id=format!("{id}-turn") label="turning".into() key=ROTATION unit="kN·m/rad" initial=sup.rotation
+                    <HoldField ctx=ctx id=format!("{id}-turn") path=format!("buckling_model.ends.{tag}.{}.rotation", axis.key()) label="turning".into() key=ROTATION unit="kN·m/rad" initial=sup.rotation
                         free_allowed=true rebuild=rebuild
                         set=Callback::new(move |f| set_sup(&|s: &mut Support| s.rotation = f)) />
                 </div>
@@ -215,7 +247,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
             view! {
                 <div class="cm-row" data-testid=format!("cm-seg-{i}")>
                     <span class="cm-row-name">{format!("segment {}", i + 1)}</span>
-                    <ModelNum id=format!("cm-seg-{i}-length") label="length".into() key="length_mm" unit="mm"
+                    <ModelNum ctx=ctx id=format!("cm-seg-{i}-length") path=format!("buckling_model.segments[{i}].length_mm") label="length".into() key="length_mm" unit="mm"
                         initial=s.length_mm accepts=Accepts::Positive
                         set=Callback::new(move |v| edit(ctx, |md, l| {
                             if md.segments.is_empty() { md.segments = modelform::segments(md, l); }
@@ -252,7 +284,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
             view! {
                 <div class="cm-row" data-testid=format!("cm-brace-{i}")>
                     <span class="cm-row-name">{format!("brace {}", i + 1)}</span>
-                    <ModelNum id=format!("cm-brace-{i}-at") label="from end A".into() key="length_mm" unit="mm"
+                    <ModelNum ctx=ctx id=format!("cm-brace-{i}-at") path=format!("buckling_model.restraints[{i}].at_mm") label="from end A".into() key="length_mm" unit="mm"
                         initial=r.at_mm accepts=Accepts::NonNegative
                         set=Callback::new(move |v| edit(ctx, |md, _| if let Some(b) = md.restraints.get_mut(i) { b.at_mm = v; })) />
                     <div class="field">
@@ -271,7 +303,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
                             <option value="both" selected=current == RestraintAxis::Both>"both axes"</option>
                         </select>
                     </div>
-                    <HoldField id=format!("cm-brace-{i}-hold") label="sideways".into() key=TRANSLATION unit="kN/mm" initial=r.translation
+                    <HoldField ctx=ctx id=format!("cm-brace-{i}-hold") path=format!("buckling_model.restraints[{i}].translation") label="sideways".into() key=TRANSLATION unit="kN/mm" initial=r.translation
                         free_allowed=false rebuild=rebuild
                         set=Callback::new(move |f| edit(ctx, |md, _| if let Some(b) = md.restraints.get_mut(i) { b.translation = f; })) />
                     <button type="button" class="quiet" aria-label=format!("remove brace {}", i + 1)
@@ -288,10 +320,10 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
             view! {
                 <div class="cm-row" data-testid=format!("cm-load-{i}")>
                     <span class="cm-row-name">{format!("load {}", i + 1)}</span>
-                    <ModelNum id=format!("cm-load-{i}-at") label="at, from end A".into() key="length_mm" unit="mm"
+                    <ModelNum ctx=ctx id=format!("cm-load-{i}-at") path=format!("buckling_model.axial_loads[{i}].at_mm") label="at, from end A".into() key="length_mm" unit="mm"
                         initial=p.at_mm accepts=Accepts::NonNegative
                         set=Callback::new(move |v| edit(ctx, |md, _| if let Some(q) = md.axial_loads.get_mut(i) { q.at_mm = v; })) />
-                    <ModelNum id=format!("cm-load-{i}-kn") label="compression".into() key="axial_kn" unit="kN"
+                    <ModelNum ctx=ctx id=format!("cm-load-{i}-kn") path=format!("buckling_model.axial_loads[{i}].axial_kn") label="compression".into() key="axial_kn" unit="kN"
                         initial=p.axial_kn accepts=Accepts::NonNegative
                         set=Callback::new(move |v| edit(ctx, |md, _| if let Some(q) = md.axial_loads.get_mut(i) { q.axial_kn = v; })) />
                     <button type="button" class="quiet" aria-label=format!("remove load {}", i + 1)
@@ -327,7 +359,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
             });
             bump();
         }>"+ Load at a level"</button>
-        <ModelNum id="cm-distributed".into() label="along the length (self-weight, say)".into() key="distributed_kn_per_m" unit="kN/m"
+        <ModelNum ctx=ctx id="cm-distributed".into() path="buckling_model.distributed_kn_per_m".into() label="along the length (self-weight, say)".into() key="distributed_kn_per_m" unit="kN/m"
             initial=model.distributed_kn_per_m accepts=Accepts::NonNegative
             set=Callback::new(move |v| edit(ctx, |md, _| md.distributed_kn_per_m = v)) />
     }

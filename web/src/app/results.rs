@@ -31,7 +31,8 @@ pub(super) fn Results(ctx: Ctx) -> impl IntoView {
             // The docked verdict leaves its warnings here.
             html!(
                 h,
-                "<div class=\"dock-warnings\">{}</div>",
+                "<div class=\"dock-warnings\" id=\"{}\">{}</div>",
+                report::ALL_WARNINGS_ID,
                 report::warnings_html(r, sys)
             );
             h.push(&report::checks_html(r, sys));
@@ -432,11 +433,13 @@ pub(super) fn Chart(
         current.track();
         ctx.chart_open.track();
         ctx.resize.track();
+        ctx.units.track();
         if !ctx.painted.get() {
             return;
         }
         request_animation_frame(move || {
             if let Some(el) = head.get_untracked() {
+                browser::fit_warnings(&el, &report::more_warnings_text);
                 browser::set_root_px("--dock", f64::from(el.offset_height()));
             }
         });

@@ -74,6 +74,8 @@ fn specimen() -> Member {
         lt_restrained: true,
         load_level: LoadLevel::TensionFlange,
         amplify_moments: false,
+        amplification_length_major_mm: Some(2300.0),
+        amplification_length_minor_mm: Some(2400.0),
         interaction_annex: Some(InteractionAnnex::A),
     }
 }
