@@ -1,4 +1,4 @@
-//! `strutline convert IN OUT [--take-valid] [--units si|us]`: converts a
+//! `strutline convert IN OUT [--take-valid] [--units si|us] [--accept-loss]`: converts a
 //! member file between JSON and CSV, choosing each format by the file's
 //! extension (`.json` or `.csv`; an input of another extension is
 //! recognised by its content). `--units us` writes a CSV output with US
@@ -11,6 +11,11 @@
 //! the valid members are written and the status is still 2, so scripts
 //! notice the rows left out. The output is written to a temporary file
 //! beside OUT and renamed into place, so OUT is never left half written.
+//!
+//! CSV cannot carry a member's structures (`buckling_model`): a list with
+//! one is refused (status 2, each member and key named, nothing written)
+//! unless `--accept-loss` is given; then the CSV is written without them
+//! and each member and key left out is still named on stderr.
 //!
 //! A list is converted a block of members at a time ([`crate::input`]),
 //! so memory does not grow with its length: the input is read twice, once
@@ -50,6 +55,11 @@ pub struct Args {
     /// The units of a CSV output's columns
     #[arg(long, value_enum, default_value_t = Units::Si)]
     pub units: Units,
+    /// Write the CSV even though it cannot carry some members' keys (a
+    /// buckling_model): they are left out, each named on stderr. Without
+    /// it, such a list is refused and nothing is written
+    #[arg(long)]
+    pub accept_loss: bool,
 }
 
 fn output_format(path: &str) -> Result<Format, String> {
@@ -130,7 +140,7 @@ fn streamed(args: &Args, out_format: Format, system: UnitSystem) -> Result<i32, 
                 members: std::mem::take(block),
                 ..file::MemberFile::new("")
             };
-            lost.extend(csv::left_out(&list));
+            lost.extend(csv::uncarried(&list));
             *block = list.members;
         }
         Ok(())
@@ -145,8 +155,21 @@ fn streamed(args: &Args, out_format: Format, system: UnitSystem) -> Result<i32, 
     if !report(input, &problems, count, args.take_valid) {
         return Ok(2);
     }
+    if !lost.is_empty() && !args.accept_loss {
+        for l in &lost {
+            crate::note(&format!("{input}: {l}: a CSV row cannot carry it"));
+        }
+        crate::note(&format!(
+            "{output}: nothing written: CSV cannot carry the key{} above, and a member without its \
+             buckling_model would be checked as a plain column; keep the JSON file, or give \
+             --accept-loss to write the CSV without {}",
+            if lost.len() == 1 { "" } else { "s" },
+            if lost.len() == 1 { "it" } else { "them" },
+        ));
+        return Ok(2);
+    }
     for l in &lost {
-        crate::note(&format!("{output}: {l}"));
+        crate::note(&format!("{output}: {l}: left out (--accept-loss)"));
     }
     // Second pass: write to a file beside OUT, renamed into place at the end.
     let target = Path::new(output);

@@ -3,6 +3,8 @@
 //! of the member's method about each axis; with `--interaction`, its
 //! interaction curves (compression against the largest moment about each
 //! axis, the other axis' moment held: core's `envelope::interaction`).
+//! The CSV is data: the caution goes to standard error beside it
+//! ([`crate::caution_beside_data`]).
 
 use strutline_core::check::{Mode, Prepared};
 use strutline_core::envelope::{self, interaction};
@@ -50,6 +52,7 @@ pub fn run(args: &Args) -> Result<i32, String> {
             }
         }
         crate::emit(&text)?;
+        crate::caution_beside_data();
         return Ok(0);
     }
     let major = envelope::sample(&prepared, method, Mode::Major, 0.0, to, steps)
@@ -65,5 +68,6 @@ pub fn run(args: &Args) -> Result<i32, String> {
         ));
     }
     crate::emit(&text)?;
+    crate::caution_beside_data();
     Ok(0)
 }

@@ -29,14 +29,7 @@ mod size;
 
 /// Checks of compression members (columns, struts, bracing).
 #[derive(Debug, Parser)]
-#[command(
-    name = "strutline",
-    version,
-    arg_required_else_help = true,
-    after_help = "exit status: 0 all within capacity, 1 some member over capacity, 2 invalid input\n\n\
-                  Strutline is a checking aid: verify every result against the governing design code, \
-                  its national annex and the judgement of a licensed engineer."
-)]
+#[command(name = "strutline", version, arg_required_else_help = true)]
 struct Cli {
     #[command(subcommand)]
     command: Command,
@@ -47,7 +40,7 @@ struct Cli {
 enum Command {
     /// Check every member of a member file (.json or .csv)
     Check(check::Args),
-    /// Print a member's capacity envelope as CSV
+    /// Print a member's capacity envelope as CSV (the caution on stderr)
     Envelope(envelope::Args),
     /// List catalogue sections with their properties
     Sections(sections::Args),
@@ -63,7 +56,7 @@ fn main() {
     // The known series are named under the help of the commands that take
     // `--series`; they come from the catalogue, so they are added here.
     let series = format!("known series: {}", sections::known_series());
-    let command = Cli::command()
+    let command = cli()
         .mut_subcommand("sections", |c| c.after_help(series.clone()))
         .mut_subcommand("size", |c| c.after_help(series.clone()));
     let cli = command
@@ -78,6 +71,22 @@ fn main() {
         }
     };
     std::process::exit(code);
+}
+
+/// The declared command line with its closing words: the exit statuses and
+/// the caution (core's one text of it).
+fn cli() -> clap::Command {
+    Cli::command().after_help(format!(
+        "exit status: 0 all within capacity, 1 some member over capacity, 2 invalid input\n\n{}",
+        strutline_core::CAUTION
+    ))
+}
+
+/// The caution, on standard error, for a command whose standard output is
+/// data that prose would spoil (`envelope`'s CSV): seen at the terminal
+/// beside the results, and not written into the file they go to.
+pub fn caution_beside_data() {
+    note(&format!("strutline: {}", strutline_core::CAUTION));
 }
 
 fn run(command: Command) -> Result<i32, String> {
@@ -161,10 +170,11 @@ mod tests {
 
     #[test]
     fn help_is_generated_and_lists_every_command() {
-        let help = Cli::command().render_long_help().to_string();
+        let help = cli().render_long_help().to_string();
         for c in ["check", "envelope", "sections", "size", "convert", "help"] {
             assert!(help.contains(c), "{c} missing from\n{help}");
         }
+        assert!(help.contains(strutline_core::CAUTION), "{help}");
         let e = parse(&["check", "--help"]).unwrap_err();
         assert_eq!(e.kind(), clap::error::ErrorKind::DisplayHelp);
         assert_eq!(e.exit_code(), 0);

@@ -1,7 +1,8 @@
 //! `strutline size FILE --series NAME [--family i|rhs|chs] [--limit U]
 //! [--json]`: for every member of a member file, the lightest section of
 //! the series whose utilisation with the member's own method is at most
-//! the limit (default 1.0), and the next lighter section with why it fails.
+//! the limit (default 1.0), and the next lighter section with why it fails,
+//! then the caution (a `"caution"` key with `--json`), as `check` gives it.
 //!
 //! Exit status 0 when every member was sized (whether or not a section
 //! was found); 2 for a file that cannot be read or a wrong command line.
@@ -10,6 +11,7 @@ use serde_json::{json, Value};
 
 use crate::sections::put;
 use strutline_core::sizing::{Refusal, Rejected, Sizer, SizingResult};
+use strutline_core::CAUTION;
 
 /// `strutline size`'s options.
 #[derive(Debug, clap::Args)]
@@ -150,13 +152,14 @@ pub fn run(args: &Args) -> Result<i32, String> {
             "limit": limit,
             "candidates": sizer.len(),
             "proposals": results.iter().map(result_json).collect::<Vec<_>>(),
+            "caution": CAUTION,
         });
         let mut text = serde_json::to_string_pretty(&doc).map_err(|e| e.to_string())?;
         text.push('\n');
         crate::emit(&text)?;
     } else {
         let text = format!(
-            "{} members against {} ({} sections), utilisation limit {limit}\n{}",
+            "{} members against {} ({} sections), utilisation limit {limit}\n{}\n{CAUTION}\n",
             results.len(),
             selection.label,
             sizer.len(),

@@ -547,6 +547,11 @@ fn work(
         trace,
         classified,
     } = parts;
+    let material = method::material_for(method, input.material);
+    let input = &Input {
+        material: &material,
+        ..*input
+    };
     let m = input.member;
     let wrap = |e: crate::error::Error| e.in_member(&m.id);
     let lengths = m.buckling_lengths().map_err(wrap)?;

@@ -148,7 +148,7 @@ fn out_of_range(text: &str, e: &serde_json::Error) -> Option<Error> {
     let quoted = format!("{}\"{token}\"{}", text.get(..start)?, text.get(end..)?);
     let found = parse_once(&quoted, false).err()?;
     // The member's error now says the field holds text; say what it holds.
-    let said = format!("invalid type: string \"{token}\", expected f64");
+    let said = crate::read::number_as_text(token);
     let message = found.to_string();
     message.contains(&said).then(|| {
         let rewrite = |inner: &str| inner.replace(&said, &format!("number out of range: {token}"));

@@ -258,10 +258,20 @@ pub fn plain(raw: &Value, path: &str, message: String) -> String {
     ] {
         if let Some((head, _)) = message.split_once(said) {
             let found = match head.strip_prefix("invalid type: ") {
-                Some(found) => found.to_string(),
+                Some(found) => found_in_words(found),
                 None => "a list".to_string(),
             };
             return format!("expected {wanted}, found {found}");
+        }
+    }
+    // A value of another type than the key's: serde names the Rust type
+    // ("invalid type: string \"4200 mm\", expected f64").
+    if let Some((found, expected)) = message
+        .strip_prefix("invalid type: ")
+        .and_then(|m| m.rsplit_once(", expected "))
+    {
+        if let Some(wanted) = wanted(expected) {
+            return format!("expected {wanted}, found {}", found_in_words(found));
         }
     }
     if message.starts_with("data did not match any variant of untagged enum MaterialSpec") {
@@ -274,6 +284,55 @@ pub fn plain(raw: &Value, path: &str, message: String) -> String {
         };
     }
     message
+}
+
+/// What a key of the member file holds, in words, for serde's name of the
+/// Rust type that reads it; `None` for a type the member file's words do
+/// not name (left as serde says it).
+fn wanted(rust: &str) -> Option<&'static str> {
+    match rust {
+        "f64" | "f32" => Some("a number"),
+        "u8" | "u16" | "u32" | "u64" | "usize" | "i8" | "i16" | "i32" | "i64" => {
+            Some("a whole number")
+        }
+        "a boolean" => Some("true or false"),
+        "a string" => Some("text"),
+        _ => None,
+    }
+}
+
+/// serde's description of the value found (`string "4200 mm"`, ``boolean
+/// `true` ``, `map`) in words: `the text "4200 mm"`, `true`, `an object`.
+fn found_in_words(found: &str) -> String {
+    let quoted = |s: &str| {
+        s.strip_prefix('`')
+            .and_then(|s| s.strip_suffix('`'))
+            .unwrap_or(s)
+            .to_string()
+    };
+    if let Some(text) = found.strip_prefix("string ") {
+        return format!("the text {text}");
+    }
+    for (said, words) in [
+        ("boolean ", ""),
+        ("integer ", "the number "),
+        ("floating point ", "the number "),
+    ] {
+        if let Some(v) = found.strip_prefix(said) {
+            return format!("{words}{}", quoted(v));
+        }
+    }
+    match found {
+        "map" => "an object".into(),
+        "sequence" => "a list".into(),
+        other => other.into(),
+    }
+}
+
+/// The message of a number given as text: the words [`plain`] gives serde's
+/// "invalid type: string ..., expected f64".
+pub fn number_as_text(token: &str) -> String {
+    format!("expected a number, found the text \"{token}\"")
 }
 
 /// A key that is not one of the member's (or, inside a member key, of that

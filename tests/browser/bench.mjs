@@ -21,7 +21,10 @@
 //    and one with springs (lib.mjs modelColumns, modelEditLoop);
 // 3. 1,000 members: a stored workspace of 1,000 members, from the moment
 //    the module is ready (mark "strutline-wasm-ready" in boot.js) until
-//    the rows are in the page and the next frame has started.
+//    the rows are in the page and the next frame has started; the same
+//    window for a fresh profile (the demo workspace, nothing stored) and
+//    for 10,000 stored members (`--only start-demo,start-10k`), to tell
+//    the list's part from the app's fixed start.
 
 import { spawnSync } from "node:child_process";
 import { writeFileSync } from "node:fs";
@@ -40,7 +43,7 @@ const DIST_ZLIB = Number(arg("--dist-zlib", "NaN"));
 const DIST_SENT = Number(arg("--dist-sent", "NaN"));
 const DIST_BUDGET = Number(arg("--dist-budget", "NaN"));
 const CACHE_NAME = arg("--cache-name", "");
-// `--only first,slow,edit,model,thousand,sizing`: measure only these (for a
+// `--only first,slow,edit,model,thousand,start-demo,start-10k,sizing`: measure only these (for a
 // quick look while working; bench/web.md is written from a full run).
 const ONLY = arg("--only");
 const wanted = (what) => !ONLY || ONLY.split(",").includes(what);
@@ -272,16 +275,17 @@ function cliThousand() {
   }
 }
 
-async function measureThousand() {
-  const file = THOUSAND;
-  const text = workspaceText([file]);
+// `text`: the stored workspace (null: a fresh profile, the demo);
+// `want`: its member count (the list is ready at that many rows or when
+// its rows fill the scrolling box).
+async function measureThousand(text = workspaceText([THOUSAND]), want = 1000) {
   const runs = [];
   let rows = null;
   for (let run = 0; run < 3; run += 1) {
     const { context, close } = await launch();
     try {
-      await seedStorage(context, text);
-      await context.addInitScript(watchRows, 1000);
+      if (text !== null) await seedStorage(context, text);
+      await context.addInitScript(watchRows, want);
       const page = await firstPage(context);
       await page.goto(BASE.href, { waitUntil: "load" });
       await page.waitForFunction(() => window.__strutlineAllRows && window.__strutlineAllRows.frame, null, {
@@ -290,7 +294,7 @@ async function measureThousand() {
       // The members after the rows in view are checked in slices after
       // the first frame: the engine's total is noted when the last is done.
       await page
-        .waitForFunction(() => window.strutlineRecheck && window.strutlineRecheck.fresh >= 1000, null, { timeout: 30_000 })
+        .waitForFunction((n) => window.strutlineRecheck && window.strutlineRecheck.fresh >= n, want, { timeout: 30_000 })
         .catch(() => {});
       const r = await page.evaluate(() => {
         const statuses = [...document.querySelectorAll("[data-testid=member-status]")];
@@ -519,6 +523,30 @@ if (wanted("thousand")) try {
   console.log(`1,000 members: not measured: ${report.errors.thousand}`);
 }
 
+// The same window for the demo workspace (a fresh profile, nothing
+// stored: the app's fixed start) and for 10,000 stored members.
+const startCases = [
+  ["start-demo", "start_demo", "the demo workspace (fresh profile)", () => [null, 1]],
+  ["start-10k", "start_10k", "10,000 members", () => [workspaceText([memberFile("Grain store (invented, 10,000 members)", thousandMembers(10_000))]), 10_000]],
+];
+for (const [what, key, label, make] of startCases) {
+  if (!wanted(what)) continue;
+  try {
+    const [text, want] = make();
+    const st = await measureThousand(text, want);
+    report[key] = {
+      runs: st.runs,
+      rows_in_page: st.rows,
+      ready_to_frame_median_ms: median(st.runs.map((r) => (r.ready === null ? NaN : r.frame - r.ready))),
+      ready_to_mounted_median_ms: median(st.runs.map((r) => (r.ready === null || r.mounted === null ? NaN : r.mounted - r.ready))),
+    };
+    console.log(`${label}: ${fmt(report[key].ready_to_frame_median_ms)} ms to the frame (${st.rows} rows in the page)`);
+  } catch (e) {
+    report.errors[key] = String(e.message || e).split("\n")[0];
+    console.log(`${label}: not measured: ${report.errors[key]}`);
+  }
+}
+
 if (wanted("sizing")) try {
   const runs = await measureSizing();
   report.sizing = { runs, median_ms: median(runs.map((r) => r.ms)) };
@@ -539,6 +567,8 @@ const me = report.model_edit || {};
 const ms = report.model_edit_springs || {};
 const th = report.thousand || { cli: thousandCli };
 const sz = report.sizing || {};
+const sd = report.start_demo || {};
+const s10 = report.start_10k || {};
 const lines = [
   "# Browser measurements",
   "",
@@ -574,6 +604,8 @@ const lines = [
   `| 1,000-member list: module ready to first frame, rows in view built (median of ${th.runs?.length ?? 0}) | ${fmt(th.ready_to_frame_median_ms)} ms | ≤ ${TARGETS.thousand_ms} ms | ${verdict(th.ready_to_frame_median_ms, TARGETS.thousand_ms)} |`,
   `| lightest that works: 1,000 members against the 265 I/H sections (median of ${sz.runs?.length ?? 0}) | ${fmt(sz.median_ms)} ms | ≤ ${TARGETS.sizing_ms} ms | ${verdict(sz.median_ms, TARGETS.sizing_ms)} |`,
   `| 1,000-member list: inside start() (module ready to mounted, median) | ${fmt(th.ready_to_mounted_median_ms)} ms | (part of the above) | |`,
+  `| the same window, demo workspace (fresh profile, nothing stored; median of ${sd.runs?.length ?? 0}) | ${fmt(sd.ready_to_frame_median_ms)} ms (start() ${fmt(sd.ready_to_mounted_median_ms)} ms) | (no target) | |`,
+  `| the same window, 10,000 stored members (median of ${s10.runs?.length ?? 0}) | ${fmt(s10.ready_to_frame_median_ms)} ms (start() ${fmt(s10.ready_to_mounted_median_ms)} ms) | (no target) | |`,
   `| dist/ as a standard host sends it (gzip, zlib -9) | ${Number.isFinite(DIST_ZLIB) ? `${DIST_ZLIB} B (${fmt(DIST_ZLIB / 1024)} KB)` : "n/a"} | ≤ ${DIST_BUDGET} B (${fmt(DIST_BUDGET / 1024, 0)} KB) | ${verdict(DIST_ZLIB, DIST_BUDGET)} |`,
   "",
   "## How each is measured",
@@ -607,6 +639,9 @@ const lines = [
   "  row is the part spent inside the app's synchronous `start()` (load, parse, check and build the view).",
   "  The re-check row is the app's own `performance.now()` around its list re-check when all 1,000 members",
   "  are worked afresh (`window.strutlineRecheck`, set by the app after each re-check): the engine's part.",
+  "  The same window is measured for the demo workspace (a fresh profile with nothing stored: the app's",
+  "  fixed start, the first row's frame) and for 10,000 stored members (lib.mjs `thousandMembers(10000)`),",
+  "  to tell the part that grows with the list from the part that does not.",
   "- Sizing: the same 1,000 members; the picker's shape set to I/H (every I and H section of the catalogue,",
   "  265 entries, as no single series has 300) and \"… for every member\" clicked three times in one page; the",
   "  app's own `performance.now()` around its sizing call (`window.strutlineSizing`), proposals built for all 1,000.",

@@ -25,7 +25,9 @@
 //                  asks the browser process synchronously for its render
 //                  style, GetWebFontRenderStyleForStrike) and the trace
 //                  events with the most time of their own. Any build will
-//                  do (no names needed).
+//                  do (no names needed). `--members N` stores N members
+//                  instead of 1,000 (0: nothing stored, the demo
+//                  workspace of a fresh profile, ready at its first row).
 // Prints the functions with the most time of their own and the most time
 // under them (self + callees). Function names are there only in a build
 // that keeps them: `cargo xtask dist --keep-names` (dist-names/), served
@@ -55,6 +57,7 @@ const TOP = Number(arg("--top", "40"));
 const SAVE = arg("--save");
 const MEMBER = arg("--member", "TD-1");
 const FIELD = arg("--field", "axial_kn");
+const MEMBERS = Number(arg("--members", "1000"));
 if (!URL_ARG || !["thousand", "thousand-trace", "edit", "edit-moments", "model-edit"].includes(CASE)) {
   console.error("usage: node profile.mjs --url URL --case thousand|thousand-trace|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID] [--field NAME]");
   process.exit(2);
@@ -101,13 +104,13 @@ function print(title, map, top) {
 // Runs in the page before its scripts (thousand-trace): marks
 // "strutline-trace-frame" at the first animation frame after the rows in
 // view fill the list's scrolling box (as bench.mjs's watchRows decides).
-function markRowsFrame() {
+function markRowsFrame(want) {
   const look = () => {
     const rows = document.querySelectorAll("[data-testid=member-row]");
     const box = document.querySelector("[data-testid=member-scroll]");
     const last = rows[rows.length - 1];
     if (box && last && last.getBoundingClientRect().height > 0 &&
-        last.getBoundingClientRect().bottom >= box.getBoundingClientRect().bottom) {
+        (rows.length >= want || last.getBoundingClientRect().bottom >= box.getBoundingClientRect().bottom)) {
       observer.disconnect();
       requestAnimationFrame(() => {
         performance.mark("strutline-trace-frame");
@@ -126,8 +129,10 @@ function markRowsFrame() {
 async function traceThousand() {
   const { context, close } = await launch();
   try {
-    await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers())]));
-    await context.addInitScript(markRowsFrame);
+    if (MEMBERS > 0) {
+      await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers(MEMBERS))]));
+    }
+    await context.addInitScript(markRowsFrame, MEMBERS > 0 ? MEMBERS : 1);
     const page = await firstPage(context);
     const cdp = await context.newCDPSession(page);
     const events = [];
@@ -174,6 +179,9 @@ async function traceThousand() {
       mounted: m ? (m.ts - a.ts) / 1000 : NaN,
       cpu: cpu / 1000,
       lazy: lazy.length,
+      // The thread time of the lazy compilation (the wall time of an event
+      // also holds the waits of a loaded machine).
+      lazyCpu: lazy.reduce((t, e) => t + (e.tdur ?? 0), 0) / 1000,
       fonts: fonts.length,
       fontMs: fonts.reduce((t, e) => t + clip(e), 0) / 1000,
       strikes: strikes.length,
@@ -192,7 +200,7 @@ if (CASE === "thousand-trace") {
     all.push(r);
     console.log(
       `run ${i + 1}: ready to frame ${r.wall.toFixed(1)} ms (start() ${r.mounted.toFixed(1)} ms), ` +
-        `main thread CPU ${r.cpu.toFixed(1)} ms, ${r.lazy} wasm functions compiled lazily, ` +
+        `main thread CPU ${r.cpu.toFixed(1)} ms, ${r.lazy} wasm functions compiled lazily (${r.lazyCpu.toFixed(1)} ms CPU), ` +
         `${r.fonts} font lookups (${r.fontMs.toFixed(1)} ms wall, ${r.strikes} render-style calls to the browser process)`,
     );
   }

@@ -328,7 +328,9 @@ pub fn fit_canvas(el: &web_sys::HtmlCanvasElement, resized: u64) -> f64 {
     dpr
 }
 
-/// Registers `./sw.js` when the browser has service workers, and calls
+/// Registers `./sw.js` when the browser has service workers (the app does
+/// it after its first frame: the worker's install fetches every file of
+/// `dist/`, which competed with that frame), and calls
 /// `update_ready` when a new worker is installed and waiting while an old
 /// one controls the page (or when the worker posts `{"type":
 /// "update-ready"}`).
@@ -400,6 +402,14 @@ pub fn register_service_worker(update_ready: impl Fn() + Clone + 'static) {
             }
         });
         reg.set_onupdatefound(Some(on_found.as_ref().unchecked_ref()));
+        // Registered after the first frame: a worker the browser found on
+        // its own check at navigation may already be installing.
+        if reg.installing().is_some() {
+            let _ = on_found
+                .as_ref()
+                .unchecked_ref::<js_sys::Function>()
+                .call0(&JsValue::NULL);
+        }
         on_found.forget();
     });
     let on_failed = Closure::once(move |_e: JsValue| {});

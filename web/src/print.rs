@@ -154,31 +154,57 @@ fn flatten(v: &Value, out: &mut Vec<(String, Value)>) {
 
 /// A message of the engine with every member-file key it names given as
 /// the sheet gives that input: its symbol, or its meaning where it has
-/// none ("gamma_m1 is not used" becomes "γ_M1 is not used").
+/// none ("gamma_m1 is not used" becomes "γ_M1 is not used"); a key of
+/// choices followed by one of its values, by the value's words too
+/// ("amplify_moments false" becomes "moments given: already second-order,
+/// not amplified").
 pub fn speak(message: &str) -> String {
-    let mut out = String::with_capacity(message.len());
-    let mut word = String::new();
-    let flush = |word: &mut String, out: &mut String| {
-        // Keys of one word ("method", "timber") are words too: left alone.
-        match input_table()
-            .into_iter()
-            .find(|(k, ..)| k.contains('_') && *k == word.as_str())
-        {
-            Some((_, sym, meaning)) => out.push_str(if sym.is_empty() { meaning } else { sym }),
-            None => out.push_str(word),
-        }
-        word.clear();
+    let table = input_table();
+    let word_len = |s: &str, also: &[char]| {
+        s.find(|c: char| !(c.is_ascii_alphanumeric() || c == '_' || also.contains(&c)))
+            .unwrap_or(s.len())
     };
-    for c in message.chars() {
-        if c.is_ascii_alphanumeric() || c == '_' {
-            word.push(c);
-        } else {
-            flush(&mut word, &mut out);
+    let mut out = String::with_capacity(message.len());
+    let mut rest = message;
+    while let Some(c) = rest.chars().next() {
+        let len = word_len(rest, &[]);
+        if len == 0 {
             out.push(c);
+            rest = &rest[c.len_utf8()..];
+            continue;
+        }
+        let (word, after) = rest.split_at(len);
+        rest = after;
+        // Keys of one word ("method", "timber") are words too: left alone.
+        let Some((_, sym, meaning)) = table.iter().find(|(k, ..)| k.contains('_') && *k == word)
+        else {
+            out.push_str(word);
+            continue;
+        };
+        let value = after
+            .strip_prefix(' ')
+            .map(|v| &v[..word_len(v, &['-'])])
+            .and_then(|v| Some((v, option_words(word, v)?)));
+        match value {
+            Some((v, words)) => {
+                out.push_str(meaning);
+                out.push_str(": ");
+                out.push_str(words);
+                rest = &after[1 + v.len()..];
+            }
+            None => out.push_str(if sym.is_empty() { meaning } else { sym }),
         }
     }
-    flush(&mut word, &mut out);
     out
+}
+
+/// The words of one of a key's values where the key takes a choice
+/// (`amplify_moments` `false`: "already second-order, not amplified"),
+/// from core's description of the key.
+fn option_words(key: &str, value: &str) -> Option<&'static str> {
+    schema::any_key(key)
+        .and_then(|d| d.option(value))
+        .map(|o| o.words)
 }
 
 /// The words for a key the table does not know: the editor's label, else
@@ -227,7 +253,11 @@ fn line(
             .iter()
             .find(|(k, _)| k == s)
             .map_or_else(|| s.clone(), |(_, words)| (*words).to_string()),
-        Value::String(s) => s.clone(),
+        Value::String(s) => option_words(key, s).map_or_else(|| s.clone(), str::to_string),
+        Value::Bool(b) => {
+            let name = if *b { "true" } else { "false" };
+            option_words(key, name).unwrap_or(name).to_string()
+        }
         other => other.to_string(),
     };
     InputLine {
@@ -379,6 +409,50 @@ mod tests {
         );
         assert_eq!(speak("lcr_major_mm: must be > 0"), "L_cr,y: must be > 0");
         assert_eq!(speak("method (timber)"), "method (timber)");
+        // A key of choices with its value: both in words, never "... false".
+        assert_eq!(
+            speak("not applied (amplify_moments false): the moments given"),
+            "not applied (moments given: already second-order, not amplified): the moments given"
+        );
+        assert_eq!(
+            speak("applied (amplify_moments true)"),
+            "applied (moments given: first-order, amplified by the check where the code leaves \
+             it to the designer)"
+        );
+        assert_eq!(
+            speak("load_level compression-flange."),
+            "level of the transverse load on the depth: the compression flange (destabilising)."
+        );
+        // Not a value of the key: the key alone is spoken.
+        assert_eq!(speak("lcr_major_mm given"), "L_cr,y given");
+    }
+
+    #[test]
+    fn a_choice_reads_in_words_not_as_its_value() {
+        let mut m = demo_lists()[0].members[0].clone();
+        m.amplify_moments = false;
+        m.lt_restrained = true;
+        m.interaction_annex = Some(strutline_core::member::InteractionAnnex::A);
+        let si = inputs(UnitSystem::Si, &m);
+        let line = |meaning: &str| {
+            si.iter()
+                .find(|l| l.meaning == meaning)
+                .unwrap_or_else(|| panic!("no line {meaning:?} in {si:?}"))
+                .value
+                .clone()
+        };
+        assert_eq!(line("moments given"), "already second-order, not amplified");
+        assert_eq!(
+            line("compression flange held against lateral-torsional buckling"),
+            "held continuously (no lateral-torsional buckling)"
+        );
+        assert_eq!(
+            line("EN 1993-1-1 interaction factors"),
+            "Annex A (Method 1)"
+        );
+        for l in &si {
+            assert!(!matches!(l.value.as_str(), "true" | "false"), "{l:?}");
+        }
     }
 
     #[test]

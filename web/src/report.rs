@@ -770,6 +770,55 @@ mod tests {
     }
 
     #[test]
+    fn the_sheet_says_in_words_whether_the_moments_were_amplified() {
+        // An AISC 360-16 beam-column whose moments are given as already
+        // second-order: B1 is not applied, and the sheet's inputs, working
+        // and warnings say so in words, never "... false" after a meaning.
+        let sheet = |amplify: bool| {
+            let mut m = demo::sample_member("W1");
+            m.method = strutline_core::method::Method::AiscLrfd;
+            m.axial_kn = 50.0;
+            m.m_major_a_knm = 2.0;
+            m.m_major_b_knm = 1.0;
+            m.amplify_moments = amplify;
+            let c = Checked::new(&m);
+            assert!(c.result().is_some());
+            sheet_html(
+                "",
+                &SheetHeader::default(),
+                &[Arc::new(c)],
+                None,
+                UnitSystem::Si,
+            )
+            .into_string()
+        };
+        let given = sheet(false);
+        assert!(
+            given.contains("already second-order, not amplified</td><td>moments given</td>"),
+            "{given}"
+        );
+        assert!(
+            given.contains("not applied (moments given: already second-order, not amplified)"),
+            "{given}"
+        );
+        assert!(!given.contains("false"), "{given}");
+        assert!(
+            given.contains("(B1 of AISC 360-16 Appendix 8.2.1, taken as 1)"),
+            "{given}"
+        );
+        assert!(!given.contains("is worked here;"), "{given}");
+        let amplified = sheet(true);
+        assert!(
+            amplified.contains(
+                "first-order, amplified by the check where the code leaves it to the designer"
+            ),
+            "{amplified}"
+        );
+        assert!(!amplified.contains("true"), "{amplified}");
+        assert!(amplified.contains("is worked here;"), "{amplified}");
+    }
+
+    #[test]
     fn the_head_holds_every_warning_whole_and_a_link_to_the_full_list() {
         // An invented single angle under AISC with end moments: four
         // warnings (angle through its centroid, checks left out, the F10

@@ -168,8 +168,11 @@ pub fn from_field(system: UnitSystem, key: &str, typed: &str) -> String {
     if system == UnitSystem::Si || Quantity::of_key(key).is_none() || typed.trim().is_empty() {
         return typed.to_string();
     }
-    match parse_number(typed) {
-        Ok(v) => format!("{:?}", units::key_from_display(system, key, v)),
+    // Core's one reader of what a person types for a key in a unit
+    // system: in US units a length may also be feet and inches (`13'-6"`),
+    // as the CSV reader takes it.
+    match strutline_core::csv::parse_typed(typed, key, system) {
+        Ok(v) => format!("{v:?}"),
         Err(_) => typed.to_string(),
     }
 }
@@ -280,5 +283,14 @@ mod tests {
         assert!((back - 344.737_864_658_4).abs() < 1e-6, "{back}");
         assert_eq!(from_field(Us, "axial_kn", "lots"), "lots");
         assert_eq!(from_field(Us, "id", "C1"), "C1");
+        // Feet and inches, as the CSV reader takes them: 13 ft 6 in =
+        // 162 in = 4114.8 mm (1 in = 25.4 mm exactly, NIST SP 811 App. B);
+        // a section's 6 1/2 in depth = 165.1 mm.
+        let back: f64 = from_field(Us, "length_mm", "13'-6\"").parse().unwrap();
+        assert!((back - 4114.8).abs() < 1e-9, "{back}");
+        let back: f64 = from_field(Us, "depth_mm", "6 1/2\"").parse().unwrap();
+        assert!((back - 165.1).abs() < 1e-9, "{back}");
+        // Not in SI: there the text goes to the field's own reader as typed.
+        assert_eq!(from_field(Si, "length_mm", "13'-6\""), "13'-6\"");
     }
 }

@@ -37,9 +37,13 @@ try {
 // The app registers ./sw.js itself; register here too when it has not,
 // so the offline copy exists whatever the app does (registering the same
 // script twice is harmless: the browser returns the same registration).
+// After the first frame, as the app does: the worker's install fetches
+// every file and would compete with that frame.
 if ("serviceWorker" in navigator) {
-  navigator.serviceWorker.getRegistration("./").then((reg) => {
-    if (!reg) return navigator.serviceWorker.register("./sw.js");
-    return reg;
-  }).catch((error) => console.warn("Strutline: no offline copy:", error));
+  requestAnimationFrame(() => setTimeout(() => {
+    navigator.serviceWorker.getRegistration("./").then((reg) => {
+      if (!reg) return navigator.serviceWorker.register("./sw.js");
+      return reg;
+    }).catch((error) => console.warn("Strutline: no offline copy:", error));
+  }, 0));
 }

@@ -243,7 +243,11 @@ fn checked(
     let Some(model) = &member.buckling_model else {
         return crate::check::evaluate(input, method, working);
     };
-    let (_, modulus) = input.material.strength_and_modulus();
+    // The analysis with the modulus the method reads (CSA S16-19's E);
+    // a base analysed with another is not scaled from but analysed afresh.
+    let material = crate::method::material_for(method, input.material);
+    let scaled = scaled.filter(|_| matches!(material, std::borrow::Cow::Borrowed(_)));
+    let (_, modulus) = material.strength_and_modulus();
     let r = resolve(member, model, input.section, modulus).map_err(wrap)?;
     let axis = |a: Axis| {
         let from_base = scaled.and_then(|(base, s)| {

@@ -98,7 +98,7 @@ use crate::member::Member;
 
 pub use number::{parse_field, parse_typed};
 pub use read::{parse_csv, parse_csv_within};
-pub use write::{cells, left_out, not_in_csv, to_csv, to_csv_in, Layout};
+pub use write::{cells, left_out, not_in_csv, to_csv, to_csv_in, uncarried, Layout};
 
 /// One problem in a CSV file.
 #[derive(Debug, Clone, PartialEq, Eq, Serialize)]

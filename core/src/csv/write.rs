@@ -53,21 +53,26 @@ pub fn not_in_csv() -> impl Iterator<Item = &'static str> {
 /// exporting ("member \"K1\": buckling_model"), or `None` when the CSV
 /// carries everything. Keep the JSON file for these keys.
 pub fn left_out(file: &MemberFile) -> Option<String> {
-    let lost: Vec<String> = file
-        .members
-        .iter()
-        .filter_map(|m| {
-            let written = file::json_value(m)?;
-            let keys: Vec<&str> = not_in_csv().filter(|k| written.get(k).is_some()).collect();
-            (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
-        })
-        .collect();
+    let lost = uncarried(file);
     (!lost.is_empty()).then(|| {
         format!(
             "CSV does not carry these keys, which are left out (keep the JSON file for them): {}",
             lost.join("; ")
         )
     })
+}
+
+/// Each member of `file` with a key a CSV row does not carry, one entry a
+/// member: `member "K1": buckling_model`.
+pub fn uncarried(file: &MemberFile) -> Vec<String> {
+    file.members
+        .iter()
+        .filter_map(|m| {
+            let written = file::json_value(m)?;
+            let keys: Vec<&str> = not_in_csv().filter(|k| written.get(k).is_some()).collect();
+            (!keys.is_empty()).then(|| format!("member \"{}\": {}", m.id, keys.join(", ")))
+        })
+        .collect()
 }
 
 /// The US customary column for an SI key: member lengths in feet, other

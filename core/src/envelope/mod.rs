@@ -50,7 +50,7 @@ pub fn sample(
         Mode::Major => p.r_major_mm,
         _ => p.r_minor_mm,
     };
-    let (f, e) = prepared.material.strength_and_modulus();
+    let (f, e) = crate::method::material_for(method, &prepared.material).strength_and_modulus();
     let steps = steps.max(1);
     let from = from.max(0.0);
     let mut probe = prepared.member.clone();

@@ -616,9 +616,16 @@ pub fn check(
     warn_once_text(
         warnings,
         "sway-not-amplified",
-        "beam-column: the member's own second-order effect (B1) is worked here; the frame's sway \
-         effect (P-Delta, B2 of AISC 360-16 Appendix 8.2.2) is not: the moments given must \
-         include it",
+        if input.member.amplify_moments {
+            "beam-column: the member's own second-order effect (B1 of AISC 360-16 Appendix \
+             8.2.1) is worked here; the frame's sway effect (P-Delta, B2 of Appendix 8.2.2) is \
+             not: the moments given must include it"
+        } else {
+            "beam-column: the moments given are taken as already second-order, as stated: \
+             neither the member's own effect (B1 of AISC 360-16 Appendix 8.2.1, taken as 1) nor \
+             the frame's sway effect (P-Delta, B2 of Appendix 8.2.2) is worked here: the moments \
+             given must include both"
+        },
     );
     let e = steel.e_mpa;
     let m_rx = required(ctx, Axis::Major, alpha, e, trace, warnings);
@@ -722,6 +729,51 @@ mod tests {
         assert_eq!(c_m(&mo(0.0, 8.0, 0.0)).0, 0.6);
         // Transverse load: 1.0.
         assert_eq!(c_m(&mo(5.0, -5.0, 3.0)), (1.0, None));
+    }
+
+    /// The text of a warning of an I-shaped beam-column checked by
+    /// `method`, its moments amplified by the check or not.
+    fn sway_warning(method: &str, amplify: bool) -> String {
+        let m: crate::Member = serde_json::from_value(serde_json::json!({
+            "id": "B1", "method": method, "length_mm": 4200, "axial_kn": 400,
+            "section": {"kind": "i", "depth_mm": 250, "width_mm": 250, "flange_mm": 14,
+                        "web_mm": 9, "root_radius_mm": 12},
+            "material": {"fy_mpa": 345, "e_mpa": 200000},
+            "m_major_a_knm": 60, "m_major_b_knm": 30, "amplify_moments": amplify}))
+        .unwrap();
+        let r = crate::check_member(&m).unwrap();
+        let w = r.warnings.iter().find(|w| w.code == "sway-not-amplified");
+        w.unwrap().message().to_string()
+    }
+
+    #[test]
+    fn the_sway_warning_says_whether_the_members_own_effect_was_worked() {
+        // AISC's B1 and CSA's U_1 (csa_s16.rs) alike: worked, or with
+        // amplify_moments false not worked, and the warning says which.
+        for (method, worked, not_worked) in [
+            (
+                "aisc360-lrfd",
+                "(B1 of AISC 360-16 Appendix 8.2.1) is worked here",
+                "neither the member's own effect (B1 of AISC 360-16 Appendix 8.2.1, taken as 1)",
+            ),
+            (
+                "aisc360-asd",
+                "(B1 of AISC 360-16 Appendix 8.2.1) is worked here",
+                "neither the member's own effect (B1 of AISC 360-16 Appendix 8.2.1, taken as 1)",
+            ),
+            (
+                "csa-s16",
+                "(U_1 of CSA S16-19 13.8.4) is worked here",
+                "neither the member's own amplification (the factor 1/(1 - C_f/C_e) of U_1",
+            ),
+        ] {
+            let said = sway_warning(method, true);
+            assert!(said.contains(worked), "{method}: {said}");
+            let said = sway_warning(method, false);
+            assert!(said.contains(not_worked), "{method}: {said}");
+            assert!(!said.contains("is worked here;"), "{method}: {said}");
+            assert!(said.contains("must include both"), "{method}: {said}");
+        }
     }
 
     #[test]

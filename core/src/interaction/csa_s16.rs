@@ -524,9 +524,16 @@ pub fn check(
     warn_once_text(
         warnings,
         "sway-not-amplified",
-        "beam-column: the member's own second-order effect (U_1 of CSA S16-19 13.8.4) is worked \
-         here; the frame's sway effect (P-Delta, U_2 of 8.4) is not: the moments given must \
-         include it",
+        if input.member.amplify_moments {
+            "beam-column: the member's own second-order effect (U_1 of CSA S16-19 13.8.4) is \
+             worked here; the frame's sway effect (P-Delta, U_2 of 8.4) is not: the moments \
+             given must include it"
+        } else {
+            "beam-column: the moments given are taken as already second-order, as stated: \
+             neither the member's own amplification (the factor 1/(1 - C_f/C_e) of U_1, CSA \
+             S16-19 13.8.4) nor the frame's sway effect (P-Delta, U_2 of 8.4) is worked here: the \
+             moments given must include both"
+        },
     );
     let x = axis_terms(ctx, Axis::Major, class, fy, e, trace, warnings)?;
     let y = axis_terms(ctx, Axis::Minor, class, fy, e, trace, warnings)?;

@@ -610,12 +610,12 @@ pub const MEMBER: &[Key] = &[
         &[
             opt(
                 "true",
-                "first-order (amplified where the code leaves it to the designer)",
+                "first-order, amplified by the check where the code leaves it to the designer",
             ),
-            opt("false", "already second-order"),
+            opt("false", "already second-order, not amplified"),
         ],
         "moments given are",
-        "moments given are first-order (amplified by the check)",
+        "moments given",
     ),
     key(
         "amplification_length_major_mm",
@@ -642,7 +642,7 @@ pub const MEMBER: &[Key] = &[
             opt("B", "Annex B (Method 2)"),
         ],
         "EN 1993-1-1 interaction factors",
-        "EN 1993-1-1 interaction factors from Annex",
+        "EN 1993-1-1 interaction factors",
     ),
     key(
         "section",

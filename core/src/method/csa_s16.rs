@@ -217,6 +217,51 @@ mod tests {
 
     use super::*;
 
+    /// An I-section member of `material` checked by `method`: the E line
+    /// of its working (value, clause) and the result.
+    fn modulus(material: serde_json::Value, method: &str) -> (f64, String, crate::CheckResult) {
+        let m: crate::Member = serde_json::from_value(serde_json::json!({
+            "id": "E1", "method": method, "length_mm": 3000, "axial_kn": 100,
+            "section": {"kind": "i", "depth_mm": 200, "width_mm": 200, "flange_mm": 12,
+                        "web_mm": 8, "root_radius_mm": 10},
+            "material": material}))
+        .unwrap();
+        let r = crate::check_member(&m).unwrap();
+        let e = r.trace.iter().find(|s| s.symbol == "E").unwrap();
+        (e.value, e.clause.to_string(), r)
+    }
+
+    #[test]
+    fn a_steel_grade_is_read_with_csa_s16s_modulus() {
+        // CSA S16-19 clause 2: E = 200 000 MPa, whatever standard the grade
+        // comes from (an ASTM grade's 29 000 ksi = 199 948 MPa, an EN
+        // grade's 210 000 MPa); a custom material keeps its own E.
+        for grade in ["A992", "S355", "350W"] {
+            let (e, clause, r) = modulus(serde_json::json!({"grade": grade}), "csa-s16");
+            assert_eq!(e, 200_000.0, "{grade}");
+            assert_eq!(r.modulus_mpa, 200_000.0, "{grade}");
+            assert_eq!(clause, "CSA S16-19 clause 2 (E = 200 000 MPa)", "{grade}");
+        }
+        let (e, clause, _) = modulus(serde_json::json!({"grade": "A992"}), "aisc360-lrfd");
+        assert_eq!(
+            (e, clause.as_str()),
+            (crate::material::E_ASTM, "AISC 360-16 (E = 29 000 ksi)")
+        );
+        let (e, clause, _) = modulus(serde_json::json!({"grade": "S355"}), "en1993-1-1");
+        assert_eq!((e, clause.as_str()), (210_000.0, "EN 1993-1-1 3.2.6(1)"));
+        let own = serde_json::json!({"fy_mpa": 345, "e_mpa": 210000, "g_mpa": 81000});
+        let (e, clause, _) = modulus(own, "csa-s16");
+        assert_eq!((e, clause.as_str()), (210_000.0, "custom material"));
+        // The whole check reads it: the A992 member is the member of a custom
+        // steel with A992's f_y and G and E = 200 000 MPa, bit for bit.
+        let (_, _, a992) = modulus(serde_json::json!({"grade": "A992"}), "csa-s16");
+        let custom = serde_json::json!({"fy_mpa": a992.strength_mpa, "e_mpa": 200000,
+                                        "g_mpa": crate::material::G_ASTM});
+        let (_, _, same) = modulus(custom, "csa-s16");
+        assert_eq!(a992.resistance_kn, same.resistance_kn);
+        assert_eq!(a992.modes, same.modes);
+    }
+
     #[test]
     fn both_forms_agree() {
         for &n in &[1.34, 2.24] {

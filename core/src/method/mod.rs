@@ -35,6 +35,21 @@ pub struct Input<'a> {
     pub material: &'a Material,
 }
 
+/// The material as `method` reads it. CSA S16-19 takes E = 200 000 MPa
+/// for structural steel (clause 2, its symbols; recalled from memory, and
+/// common practice in Canada) whatever standard the grade comes from, so a
+/// grade given by name (an ASTM grade's 29 000 ksi, an EN grade's 210 000
+/// MPa) is read with it; a custom material keeps the E it gives.
+pub fn material_for(method: Method, material: &Material) -> std::borrow::Cow<'_, Material> {
+    use crate::material::{Steel, E_CSA};
+    match (method, material) {
+        (Method::CsaS16, Material::Steel(s)) if s.name != "custom" && s.e_mpa != E_CSA => {
+            std::borrow::Cow::Owned(Material::Steel(Steel { e_mpa: E_CSA, ..*s }))
+        }
+        _ => std::borrow::Cow::Borrowed(material),
+    }
+}
+
 /// Works one flexural-buckling axis (`Mode::Major` or `Mode::Minor`) at
 /// buckling length `lcr_mm`, appending the working to `trace`.
 pub fn axis(

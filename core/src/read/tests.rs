@@ -283,11 +283,11 @@ fn a_value_that_is_not_its_keys_object_is_named_without_rust_types() {
     for (extra, said) in [
         (
             "\"frame_major\": 1.2",
-            "frame_major: expected an object of its keys, found floating point `1.2`",
+            "frame_major: expected an object of its keys, found the number 1.2",
         ),
         (
             "\"angle_connection\": \"long\"",
-            "angle_connection: expected an object of its keys, found string \"long\"",
+            "angle_connection: expected an object of its keys, found the text \"long\"",
         ),
         (
             "\"buckling_model\": []",
@@ -305,6 +305,36 @@ fn a_value_that_is_not_its_keys_object_is_named_without_rust_types() {
     assert_eq!(
         e,
         "member \"K9\": section: expected an object with a `kind` and that kind's keys, found \
-         string \"HE 200 B\""
+         the text \"HE 200 B\""
     );
+}
+
+#[test]
+fn a_value_of_another_type_is_named_in_words_not_rust_types() {
+    for (member, said) in [
+        (
+            format!("{RECT}, \"material\": {{\"grade\": \"S355\"}}, \"length_mm\": \"4200 mm\", \"axial_kn\": 10, \"method\": \"euler\""),
+            "length_mm: expected a number, found the text \"4200 mm\"",
+        ),
+        (
+            format!("{RECT}, \"material\": {{\"grade\": \"S355\"}}, {REST}, \"lt_restrained\": \"yes\""),
+            "lt_restrained: expected true or false, found the text \"yes\"",
+        ),
+        (
+            format!("{RECT}, \"material\": {{\"grade\": \"S355\"}}, {REST}, \"note\": 5"),
+            "note: expected text, found the number 5",
+        ),
+        (
+            format!("{RECT}, \"material\": {{\"grade\": \"S355\"}}, \"length_mm\": 2000, \"axial_kn\": true, \"method\": \"euler\""),
+            "axial_kn: expected a number, found true",
+        ),
+        (
+            format!("{RECT}, \"material\": {{\"grade\": \"S355\"}}, {REST}, \"k_major\": [1]"),
+            "k_major: expected a number, found a list",
+        ),
+    ] {
+        let e = refusal(&with_member(&format!("{{\"id\": \"K3\", {member}}}")));
+        assert_eq!(e, format!("member \"K3\": {said}"));
+        assert!(!e.contains("f64") && !e.contains("invalid type"), "{e}");
+    }
 }

@@ -410,7 +410,15 @@ pub fn App() -> impl IntoView {
         hide_listener.remove();
         visibility_listener.remove();
     });
-    browser::register_service_worker(move || ctx.update_ready.set(true));
+    // The offline copy after the first frame (a task after it), not in
+    // start(): the worker's install fetches every file of dist/ and
+    // competed with the first frame (bench/first-frame.md).
+    request_animation_frame(move || {
+        set_timeout(
+            move || browser::register_service_worker(move || ctx.update_ready.set(true)),
+            std::time::Duration::ZERO,
+        );
+    });
     let active_list = Memo::new(move |_| ws.with(|w| w.active));
 
     view! {
