@@ -407,6 +407,24 @@ where
             continue;
         };
         placed.push(b);
+        // A label moved away from its dot is tied to it by a thin line,
+        // from the dot's ring to the label's nearest edge.
+        let (nx, ny) = (ax.clamp(b.x, b.x + b.w), ay.clamp(b.y, b.y + b.h));
+        let far = (nx - ax).hypot(ny - ay);
+        let ring = f64::from(r) + 2.0 * dpr;
+        if far > gap + 2.0 * dpr {
+            let (ux, uy) = ((nx - ax) / far, (ny - ay) / far);
+            let from = (ax + ux * ring, ay + uy * ring);
+            root.draw(&line(
+                vec![
+                    (from.0.round() as i32, from.1.round() as i32),
+                    (nx.round() as i32, ny.round() as i32),
+                ],
+                pal.ink,
+                1.0,
+            ))
+            .map_err(err)?;
+        }
         // On a patch of the background, so curves passing under the label
         // (many when methods are compared) do not cut through its text.
         let (x0, y0) = (b.x.round() as i32, b.y.round() as i32);
