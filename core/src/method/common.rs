@@ -295,16 +295,19 @@ pub fn strength_label(material: &Material) -> (&'static str, &'static str) {
 
 /// Where a steel's modulus comes from.
 fn modulus_source(s: &Steel) -> Sym {
-    // A grade's 200 000 MPa is CSA S16-19's: a CSA grade's own, or any
-    // grade read by CSA S16-19 (`method::material_for`).
-    if s.name != "custom" && s.e_mpa == crate::material::E_CSA {
+    // A grade's 200 000 MPa is CSA S16-19's (a CSA grade's own, or any
+    // grade read by CSA S16-19) and its 29 000 ksi AISC 360-16's (an ASTM
+    // grade's own, or any grade read by AISC 360-16): `method::material_for`.
+    if s.name == "custom" {
+        sym!("custom material")
+    } else if s.e_mpa == crate::material::E_CSA {
         sym!("CSA S16-19 clause 2 (E = 200 000 MPa)")
+    } else if s.e_mpa == crate::material::E_ASTM {
+        sym!("AISC 360-16 (E = 29 000 ksi)")
     } else if s.standard.starts_with("EN") {
         sym!("EN 1993-1-1 3.2.6(1)")
-    } else if s.standard.starts_with("ASTM") {
-        sym!("AISC 360-16 (E = 29 000 ksi)")
     } else {
-        sym!("custom material")
+        sym!("the grade's standard")
     }
 }
 

@@ -247,6 +247,17 @@ mod tests {
             (e, clause.as_str()),
             (crate::material::E_ASTM, "AISC 360-16 (E = 29 000 ksi)")
         );
+        // AISC 360-16 likewise reads any named grade with its 29 000 ksi
+        // (Symbols, E3): an EN grade's 210 000 MPa would overstate F_e by 5 %.
+        for grade in ["S355", "350W"] {
+            let (e, clause, r) = modulus(serde_json::json!({"grade": grade}), "aisc360-asd");
+            assert_eq!(
+                (e, clause.as_str()),
+                (crate::material::E_ASTM, "AISC 360-16 (E = 29 000 ksi)"),
+                "{grade}"
+            );
+            assert_eq!(r.modulus_mpa, crate::material::E_ASTM, "{grade}");
+        }
         let (e, clause, _) = modulus(serde_json::json!({"grade": "S355"}), "en1993-1-1");
         assert_eq!((e, clause.as_str()), (210_000.0, "EN 1993-1-1 3.2.6(1)"));
         let own = serde_json::json!({"fy_mpa": 345, "e_mpa": 210000, "g_mpa": 81000});

@@ -35,16 +35,25 @@ pub struct Input<'a> {
     pub material: &'a Material,
 }
 
-/// The material as `method` reads it. CSA S16-19 takes E = 200 000 MPa
-/// for structural steel (clause 2, its symbols; recalled from memory, and
-/// common practice in Canada) whatever standard the grade comes from, so a
-/// grade given by name (an ASTM grade's 29 000 ksi, an EN grade's 210 000
-/// MPa) is read with it; a custom material keeps the E it gives.
+/// The material as `method` reads it. A code states the moduli of
+/// structural steel it designs with, whatever standard the grade comes
+/// from: CSA S16-19 E = 200 000 MPa and G = 77 000 MPa (clause 2, its
+/// symbols; recalled from memory, and common practice in Canada), AISC
+/// 360-16 E = 29 000 ksi and G = 11 200 ksi (its Symbols, used in E3 and
+/// E4). So a grade given by name is read with the code's moduli (an EN
+/// grade's 210 000 / 81 000 MPa under AISC or CSA would overstate the
+/// elastic buckling loads by some 5 %); a custom material keeps the E and
+/// G it gives. EN 1993-1-1 and the other methods read the grade's own.
 pub fn material_for(method: Method, material: &Material) -> std::borrow::Cow<'_, Material> {
-    use crate::material::{Steel, E_CSA};
-    match (method, material) {
-        (Method::CsaS16, Material::Steel(s)) if s.name != "custom" && s.e_mpa != E_CSA => {
-            std::borrow::Cow::Owned(Material::Steel(Steel { e_mpa: E_CSA, ..*s }))
+    use crate::material::{Steel, E_ASTM, E_CSA, G_ASTM, G_CSA};
+    let (e_mpa, g_mpa) = match method {
+        Method::CsaS16 => (E_CSA, G_CSA),
+        Method::AiscLrfd | Method::AiscAsd => (E_ASTM, G_ASTM),
+        _ => return std::borrow::Cow::Borrowed(material),
+    };
+    match material {
+        Material::Steel(s) if s.name != "custom" && (s.e_mpa != e_mpa || s.g_mpa != g_mpa) => {
+            std::borrow::Cow::Owned(Material::Steel(Steel { e_mpa, g_mpa, ..*s }))
         }
         _ => std::borrow::Cow::Borrowed(material),
     }
@@ -92,5 +101,67 @@ pub fn prelude(
         Method::PerryRobertson => perry::prelude(input, trace, warnings),
         Method::Secant => secant::prelude(input, trace, warnings),
         Method::Euler => euler::prelude(input, trace, warnings),
+    }
+}
+
+#[cfg(test)]
+mod tests {
+    use super::*;
+    use crate::material::{self, MaterialSpec, Product, Stock, E_ASTM, E_CSA, G_ASTM, G_CSA};
+
+    fn grade(name: &str) -> Material {
+        let spec = MaterialSpec::Grade {
+            grade: name.to_string(),
+        };
+        let stock = Stock {
+            thickness_mm: 10.0,
+            product: Product::Other,
+        };
+        material::resolve(&spec, stock).unwrap()
+    }
+
+    fn moduli(m: &Material) -> (f64, f64) {
+        match m {
+            Material::Steel(s) => (s.e_mpa, s.g_mpa),
+            Material::Timber(_) => (f64::NAN, f64::NAN),
+        }
+    }
+
+    /// Each code's own moduli for a named grade (CSA S16-19 clause 2;
+    /// AISC 360-16 Symbols), the grade's own under EN 1993-1-1.
+    #[test]
+    fn a_code_reads_a_named_grade_with_its_own_moduli() {
+        for name in ["S355", "A992", "350W"] {
+            let m = grade(name);
+            assert_eq!(
+                moduli(&material_for(Method::CsaS16, &m)),
+                (E_CSA, G_CSA),
+                "{name}"
+            );
+            for aisc in [Method::AiscLrfd, Method::AiscAsd] {
+                assert_eq!(moduli(&material_for(aisc, &m)), (E_ASTM, G_ASTM), "{name}");
+            }
+            assert_eq!(
+                moduli(&material_for(Method::En1993, &m)),
+                moduli(&m),
+                "{name}"
+            );
+        }
+        let custom = material::resolve(
+            &MaterialSpec::Custom {
+                fy_mpa: 300.0,
+                e_mpa: 205_000.0,
+                g_mpa: Some(79_000.0),
+            },
+            Stock {
+                thickness_mm: 10.0,
+                product: Product::Other,
+            },
+        )
+        .unwrap();
+        assert_eq!(
+            moduli(&material_for(Method::AiscLrfd, &custom)),
+            (205_000.0, 79_000.0)
+        );
     }
 }
