@@ -7,6 +7,7 @@
 use strutline_core::buckling::model::{BucklingModel, End, Ends, Segment};
 use strutline_core::buckling::{Fixity, Support};
 use strutline_core::section::{CatalogueRef, SectionSpec};
+use strutline_core::units::UnitSystem;
 
 /// A model to start from: pinned at both ends about both axes, one
 /// segment (the member), the member's `axial_kn` at end B.
@@ -89,14 +90,17 @@ pub fn hold_of(value: &str, was: Fixity, start: f64) -> Fixity {
 
 /// A segment's section as the panel shows it: the catalogue designation
 /// (empty: the member's section), and a note for a section typed out in
-/// the file (kept until a designation is typed).
-pub fn section_text(s: &Segment) -> (String, Option<String>) {
+/// the file (kept until a designation is typed), in the units shown.
+pub fn section_text(system: UnitSystem, s: &Segment) -> (String, Option<String>) {
     match &s.section {
         None => (String::new(), None),
         Some(SectionSpec::Catalogue(c)) => (c.designation.clone(), None),
         Some(other) => (
             String::new(),
-            Some(format!("its own section: {}", other.describe())),
+            Some(format!(
+                "its own section: {}",
+                crate::units_view::section_text(system, other)
+            )),
         ),
     }
 }
@@ -131,7 +135,7 @@ mod tests {
             m.segments.iter().map(|s| s.length_mm).collect::<Vec<_>>(),
             vec![3000.0, 1500.0, 1500.0]
         );
-        assert_eq!(section_text(&m.segments[2]).0, "HE 200 B");
+        assert_eq!(section_text(UnitSystem::Si, &m.segments[2]).0, "HE 200 B");
         remove_segment(&mut m, 0);
         assert_eq!(m.segments[0].length_mm, 4500.0);
         assert_eq!(total(&m, 6000.0), 6000.0);
@@ -143,6 +147,28 @@ mod tests {
         remove_segment(&mut m, 1);
         assert!(m.segments.is_empty());
         remove_segment(&mut m, 5);
+    }
+
+    /// A segment's section typed out in the file is named in the units
+    /// shown (1 in = 25.4 mm exactly: 200 mm = 7.874 in).
+    #[test]
+    fn a_typed_out_segment_section_follows_the_units() {
+        use strutline_core::section::Rect;
+        let seg = Segment {
+            length_mm: 3000.0,
+            section: Some(SectionSpec::Rect(Rect {
+                depth_mm: 200.0,
+                width_mm: 100.0,
+            })),
+        };
+        let (_, si) = section_text(UnitSystem::Si, &seg);
+        let (_, us) = section_text(UnitSystem::Us, &seg);
+        assert_eq!(si.as_deref(), Some("its own section: rect 200x100"));
+        let us = us.unwrap();
+        assert!(
+            us.contains("7.874") && us.ends_with(" in") && !us.contains("mm"),
+            "{us}"
+        );
     }
 
     #[test]

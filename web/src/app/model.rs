@@ -242,7 +242,7 @@ fn ModelInputs(ctx: Ctx, rebuild: RwSignal<u32>) -> impl IntoView {
         .iter()
         .enumerate()
         .map(|(i, s)| {
-            let (designation, note) = modelform::section_text(s);
+            let (designation, note) = modelform::section_text(crate::units_view::now(), s);
             let sec_id = format!("cm-seg-{i}-section");
             view! {
                 <div class="cm-row" data-testid=format!("cm-seg-{i}")>
