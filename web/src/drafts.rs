@@ -119,6 +119,23 @@ impl Drafts {
         self.0.len() != before
     }
 
+    /// List `i` deleted: its drafts go, the later lists' follow their list
+    /// one place down.
+    pub fn list_removed(&mut self, i: usize) {
+        self.0.retain(|d| d.list != i);
+        for d in self.0.iter_mut().filter(|d| d.list > i) {
+            d.list -= 1;
+        }
+    }
+
+    /// A list put back at `i`: the drafts of the lists from `i` on follow
+    /// their list one place up.
+    pub fn list_inserted(&mut self, i: usize) {
+        for d in self.0.iter_mut().filter(|d| d.list >= i) {
+            d.list += 1;
+        }
+    }
+
     /// As stored.
     pub fn encode(&self) -> String {
         serde_json::to_string(self).unwrap_or_default()
@@ -204,6 +221,22 @@ mod tests {
         assert!(d.clear(0, "B", "length_mm"));
         assert!(!d.clear(0, "B", "length_mm"));
         assert!(d.is_empty());
+    }
+
+    #[test]
+    fn drafts_follow_their_list_when_a_list_goes_or_comes_back() {
+        let mut d = Drafts::default();
+        d.set(0, "A", "length_mm", "a", "bad");
+        d.set(1, "A", "length_mm", "b", "bad");
+        d.set(2, "A", "length_mm", "c", "bad");
+        d.list_removed(1);
+        assert_eq!(d.get(0, "A", "length_mm").unwrap().text, "a");
+        assert_eq!(d.get(1, "A", "length_mm").unwrap().text, "c");
+        assert!(d.get(2, "A", "length_mm").is_none());
+        d.list_inserted(1);
+        assert_eq!(d.get(0, "A", "length_mm").unwrap().text, "a");
+        assert!(d.get(1, "A", "length_mm").is_none());
+        assert_eq!(d.get(2, "A", "length_mm").unwrap().text, "c");
     }
 
     #[test]

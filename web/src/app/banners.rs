@@ -22,10 +22,17 @@ pub(super) fn undo_now(ctx: Ctx) {
             ctx.select(at.unwrap_or(0));
         }
         Undo::List(d) => {
+            let mut back = None;
             ctx.ws.update(|w| {
                 let at = listops::undo_delete_list(&mut w.lists, d);
                 w.active = at;
+                back = Some(at);
             });
+            if let Some(at) = back {
+                if ctx.drafts.with_untracked(|k| !k.is_empty()) {
+                    ctx.drafts.update(|k| k.list_inserted(at));
+                }
+            }
             ctx.select(0);
         }
         Undo::Edit { list, before, .. } => {

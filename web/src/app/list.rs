@@ -101,6 +101,10 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
                         w.active = a.min(w.lists.len().saturating_sub(1));
                     });
                     if let Some(d) = gone {
+                        let at = d.index;
+                        if ctx.drafts.with_untracked(|k| !k.is_empty()) {
+                            ctx.drafts.update(|k| k.list_removed(at));
+                        }
                         ctx.undo.set(Some(Undo::List(d)));
                         ctx.select(0);
                     }
