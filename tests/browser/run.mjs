@@ -12,6 +12,7 @@ import { register as registerTablet } from "./tablet.mjs";
 import { register as registerBuckling } from "./buckling.mjs";
 import { register as registerBeamColumn } from "./beamcolumn.mjs";
 import { register as registerDiagram } from "./diagram.mjs";
+import { register as registerCurrent } from "./current.mjs";
 import { readFileSync, writeFileSync } from "node:fs";
 import { createRequire } from "node:module";
 import { connect } from "node:net";
@@ -776,6 +777,9 @@ registerBeamColumn(test, { withApp, open, OUT });
 
 // The moment diagram's sign as drawn, and a sign slip (tests/browser/diagram.mjs).
 registerDiagram(test, { withApp, open, OUT });
+
+// What is shown belongs to the member shown, as it stands (tests/browser/current.mjs).
+registerCurrent(test, { withApp, open, OUT });
 
 let passed = 0;
 let failed = 0;

@@ -154,13 +154,27 @@ fn HoldField(
 /// panel's lines.
 #[derive(Clone, PartialEq)]
 struct Analysed {
-    sketch: Sketch,
+    /// None while the member holds text that cannot be read: nothing of
+    /// its value from before that edit is drawn.
+    sketch: Option<Sketch>,
     /// One line an axis: alpha_cr, N_cr, L_cr, elements and convergence.
     lines: Vec<String>,
     refused: Option<String>,
 }
 
-fn analyse(m: &Member, sys: UnitSystem) -> Option<Analysed> {
+/// The panel's analysis of `m`; `unread`, the message of a field of the
+/// member that cannot be read ([`crate::drafts`]), withholds it: the
+/// member keeps its value from before that edit, which is not the input
+/// shown, so neither the column nor its buckling is drawn.
+fn analyse(m: &Member, sys: UnitSystem, unread: Option<String>) -> Option<Analysed> {
+    m.buckling_model.as_ref()?;
+    if let Some(why) = unread {
+        return Some(Analysed {
+            sketch: None,
+            lines: Vec::new(),
+            refused: Some(format!("Not analysed until the input can be read: {why}")),
+        });
+    }
     let a = of_member(m, sys)?;
     let lines = match &a.result {
         Ok(b) => [("major", &b.major), ("minor", &b.minor)]
@@ -179,7 +193,7 @@ fn analyse(m: &Member, sys: UnitSystem) -> Option<Analysed> {
         Err(_) => Vec::new(),
     };
     Some(Analysed {
-        sketch: a.sketch,
+        sketch: Some(a.sketch),
         lines,
         refused: a.result.err(),
     })
@@ -382,9 +396,12 @@ pub(super) fn ColumnModel(ctx: Ctx) -> impl IntoView {
         let sel = ctx.selected.get();
         let sys = ctx.units.get();
         ctx.ws.with(|w| {
-            w.active_list()
-                .and_then(|l| l.members.get(sel))
-                .and_then(|m| analyse(m, sys))
+            let m = w.active_list().and_then(|l| l.members.get(sel))?;
+            let unread = ctx.drafts.with(|d| {
+                d.first(w.active, &m.id)
+                    .map(|draft| fields::error_text(&draft.error()))
+            });
+            analyse(m, sys, unread)
         })
     });
     let canvas = NodeRef::<leptos::html::Canvas>::new();
@@ -398,9 +415,19 @@ pub(super) fn ColumnModel(ctx: Ctx) -> impl IntoView {
             return;
         };
         let dpr = browser::fit_canvas(&el, resized);
-        match chart::column::draw(&el, &a.sketch, dpr, hc) {
-            Ok(()) => note.set(None),
-            Err(e) => note.set(Some(e)),
+        match &a.sketch {
+            Some(sketch) => {
+                let _ = el.remove_attribute("data-chart");
+                match chart::column::draw(&el, sketch, dpr, hc) {
+                    Ok(()) => note.set(None),
+                    Err(e) => note.set(Some(e)),
+                }
+            }
+            None => {
+                chart::blank(&el, "Not analysed: see below.", dpr, hc);
+                let _ = el.set_attribute("data-shapes", "0");
+                note.set(None);
+            }
         }
         let n = drawn.get_untracked() + 1;
         drawn.set(n);

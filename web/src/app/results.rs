@@ -153,10 +153,19 @@ pub(super) fn draw_chart(
     } = look;
     let us = sys == UnitSystem::Us;
     let Some((p, r)) = c.and_then(|c| c.prepared.as_ref().zip(c.result())) else {
+        // Nothing of an earlier drawing (another member's point, the
+        // point of a value since replaced) may stay under this verdict.
+        let waiting = c.is_some_and(|c| c.outcome.is_none());
+        let why = if waiting {
+            "Being checked: the chart follows."
+        } else {
+            "Not checked: no chart until the member's input can be checked."
+        };
+        chart::blank(el, why, dpr, hc);
         return Drawn {
             legend: legend_html(perry, None),
             note: Some("The chart appears when the member's input can be checked.".into()),
-            described: String::new(),
+            described: why.to_string(),
         };
     };
     if interaction {
@@ -169,11 +178,15 @@ pub(super) fn draw_chart(
                     described: chart::interaction::describe(&d, sys),
                 }
             }
-            Err(e) => Drawn {
-                legend: interaction_legend_html(None),
-                note: Some(fields::error_text(&e)),
-                described: String::new(),
-            },
+            Err(e) => {
+                let why = fields::error_text(&e);
+                chart::blank(el, &why, dpr, hc);
+                Drawn {
+                    legend: interaction_legend_html(None),
+                    note: Some(why),
+                    described: String::new(),
+                }
+            }
         };
     }
     match chart::data::build(p, r, perry, others) {
@@ -197,11 +210,15 @@ pub(super) fn draw_chart(
                 None => String::new(),
             },
         },
-        Err(e) => Drawn {
-            legend: legend_html(perry, None),
-            note: Some(fields::error_text(&e)),
-            described: String::new(),
-        },
+        Err(e) => {
+            let why = fields::error_text(&e);
+            chart::blank(el, &why, dpr, hc);
+            Drawn {
+                legend: legend_html(perry, None),
+                note: Some(why),
+                described: String::new(),
+            }
+        }
     }
 }
 

@@ -25,3 +25,32 @@ pub fn offscreen_canvas(width: u32, height: u32, scale: f64) -> Option<web_sys::
     canvas.set_height((f64::from(height) * scale).round() as u32);
     Some(canvas)
 }
+
+/// Clears `el` and writes `why` across its middle, wrapped to its width:
+/// the chart of a member that has none to show, so no earlier drawing
+/// stays on the canvas (another member's, or an earlier value's). Marked `data-chart="none"` (for tests).
+pub fn blank(el: &web_sys::HtmlCanvasElement, why: &str, dpr: f64, high_contrast: bool) {
+    use wasm_bindgen::JsCast;
+    let Some(g) = el
+        .get_context("2d")
+        .ok()
+        .flatten()
+        .and_then(|c| c.dyn_into::<web_sys::CanvasRenderingContext2d>().ok())
+    else {
+        return;
+    };
+    let (w, h) = (f64::from(el.width()), f64::from(el.height()));
+    g.clear_rect(0.0, 0.0, w, h);
+    let measure = labels::canvas_measure(el);
+    let (lines, px) = labels::fit(&[why], " ", w * 0.8, 14.0 * dpr, &measure);
+    g.set_font(&format!("{px}px sans-serif"));
+    g.set_fill_style_str(if high_contrast { "#000" } else { "#1c222b" });
+    g.set_text_align("center");
+    g.set_text_baseline("middle");
+    let step = labels::line_height(px);
+    let top = h / 2.0 - step * (lines.len() as f64 - 1.0) / 2.0;
+    for (i, line) in lines.iter().enumerate() {
+        let _ = g.fill_text(line, w / 2.0, top + step * i as f64);
+    }
+    let _ = el.set_attribute("data-chart", "none");
+}

@@ -1,0 +1,78 @@
+// Browser tests that what the page shows belongs to the member shown, as
+// it stands now, registered by run.mjs: `register(test, helpers)`. A chart
+// never keeps another member's point or an earlier value's under a member
+// that is not checked.
+
+import assert from "node:assert/strict";
+import { join } from "node:path";
+import { setField } from "./lib.mjs";
+
+const LANDSCAPE = { viewport: { width: 1180, height: 820 }, hasTouch: true, deviceScaleFactor: 1 };
+
+/** A canvas as drawn: what it is marked as (`data-chart`), the buckled
+ * shapes of the column drawing (`data-shapes`) and the share of its pixels
+ * painted at all (a chart fills its background; a blank one holds a line
+ * of words). */
+async function canvasState(page, selector) {
+  return page.evaluate((selector) => {
+    const c = document.querySelector(selector);
+    if (!c || c.width === 0 || c.height === 0) return null;
+    const d = c.getContext("2d").getImageData(0, 0, c.width, c.height).data;
+    let painted = 0;
+    for (let i = 3; i < d.length; i += 4) if (d[i] > 0) painted += 1;
+    return { chart: c.dataset.chart ?? null, shapes: c.dataset.shapes ?? null, painted: painted / (d.length / 4) };
+  }, selector);
+}
+
+/** Waits until the result's chart is drawn as `chart` ("none": blank). */
+async function chartIs(page, chart) {
+  await page.waitForFunction((want) => {
+    const d = document.querySelector("canvas#envelope")?.dataset.chart;
+    return want === "none" ? d === "none" : d !== undefined && d !== "none";
+  }, chart, { timeout: 10_000 });
+}
+
+export function register(test, { withApp, open, OUT }) {
+  test("chart-only-of-the-member-shown", async () => {
+    await withApp("chart-only-of-the-member-shown", async (page, log) => {
+      await open(page);
+      const first = page.locator(`[data-testid=member-row][data-id="C1"]`).first();
+      await first.click();
+      await chartIs(page, "drawn");
+      const drawn = await canvasState(page, "canvas#envelope");
+      assert.ok(drawn.painted > 0.5, `a chart fills its canvas: ${JSON.stringify(drawn)}`);
+
+      // A new member asks for its load: no chart, no other member's point.
+      await page.locator("[data-testid=add-member]").first().click();
+      await page.locator("[data-testid=verdict]", { hasText: "fix input" }).first().waitFor({ timeout: 10_000 });
+      await chartIs(page, "none");
+      const blank = await canvasState(page, "canvas#envelope");
+      assert.ok(blank.painted < 0.1, `the new member's canvas is blank but for its words: ${JSON.stringify(blank)}`);
+      await page.screenshot({ path: join(OUT, "chart-new-member-blank.png") });
+
+      // The member's own unreadable value: not the previous keystroke's point.
+      await first.click();
+      await chartIs(page, "drawn");
+      await setField(page, page, "axial_kn", "2000");
+      await chartIs(page, "drawn");
+      await setField(page, page, "axial_kn", "abc");
+      await page.locator("[data-testid=verdict]", { hasText: "fix input" }).first().waitFor({ timeout: 10_000 });
+      await chartIs(page, "none");
+      assert.ok((await canvasState(page, "canvas#envelope")).painted < 0.1);
+      await setField(page, page, "axial_kn", "300");
+      await chartIs(page, "drawn");
+
+      // The column-model panel: a length that cannot be read is not
+      // analysed, and nothing of the kept value is drawn.
+      await page.locator("[data-testid=cm-toggle]").click();
+      await page.waitForFunction(() => document.querySelector("[data-testid=cm-canvas]")?.dataset.shapes === "2", null, { timeout: 10_000 });
+      await page.locator("#cm-seg-0-length").fill("abc");
+      await page.locator("[data-testid=cm-refused]", { hasText: "Not analysed" }).waitFor({ timeout: 10_000 });
+      const model = await canvasState(page, "[data-testid=cm-canvas]");
+      assert.equal(model.shapes, "0", "no buckled shape while the length cannot be read");
+      assert.equal(model.chart, "none");
+      assert.equal(await page.locator("[data-testid=cm-result]").textContent().then((t) => /α_cr/.test(t)), false);
+      assert.deepEqual(log.errors, []);
+    }, LANDSCAPE);
+  });
+}
