@@ -7,7 +7,7 @@ import { spawnSync } from "node:child_process";
 import { mkdtempSync, rmSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { cliCheck, memberFile, ROOT, STORAGE_KEY, waitForText, workspaceText } from "./lib.mjs";
+import { cliCheck, memberFile, ROOT, setField, STORAGE_KEY, waitForText, workspaceText } from "./lib.mjs";
 
 // Invented members: two columns of a made-up greenhouse loading bay,
 // S355, EN 1993-1-1, with a custom rolled I section to start from.
@@ -66,6 +66,31 @@ async function seeded(page, open, members) {
 const util = (page) => page.locator("[data-testid=result-utilisation]").first();
 
 export function register(test, { withApp, open, OUT }) {
+  // A proposal is worked for the member's inputs as they were: an edit
+  // takes it away, so none worked for other inputs can be accepted.
+  test("lightest-gone-after-edit", async () => {
+    await withApp("lightest-gone-after-edit", async (page, log) => {
+      await seeded(page, open, COLUMNS);
+      await page.locator('[data-testid=member-row][data-id="GB-1"]').first().click();
+      await page.locator('[name="section_series"]').selectOption("heb");
+      await page.locator("[data-testid=lightest]").click();
+      const proposal = page.locator('[data-testid=proposal][data-id="GB-1"]');
+      await proposal.waitFor({ state: "visible", timeout: 10_000 });
+      await setField(page, page, "axial_kn", "2200");
+      await proposal.waitFor({ state: "detached", timeout: 10_000 });
+      assert.equal(await page.locator("[data-testid=accept-proposal]").count(), 0, "no Accept left");
+      // Worked afresh, it is for the new load.
+      await page.locator("[data-testid=lightest]").click();
+      await proposal.waitFor({ state: "visible", timeout: 10_000 });
+      const d = (await proposal.locator("[data-testid=proposal-chosen]").textContent()).split(" — ")[0];
+      await proposal.locator("[data-testid=accept-proposal]").click();
+      await waitForText(page.locator('[data-testid=member-row][data-id="GB-1"] .row-detail'), (t) => t.includes(d));
+      const u = Number(await util(page).textContent());
+      assert.ok(u <= 1.0, `the accepted section holds 2200 kN: ${u}`);
+      assert.deepEqual(log.errors, []);
+    });
+  });
+
   test("picker-search", async () => {
     await withApp("picker-search", async (page, log) => {
       await seeded(page, open, [COLUMNS[0]]);

@@ -129,6 +129,9 @@ pub struct Proposal {
     pub chosen_text: String,
     /// The next lighter candidate and why it fails.
     pub lighter_text: String,
+    /// The member as it was when the proposal was worked: a proposal
+    /// stands only while the member is the same ([`current`]).
+    pub worked_for: Member,
 }
 
 /// The lightest candidate within `limit` for each member, each member from
@@ -196,9 +199,18 @@ pub fn propose(members: &[Member], series: &str, shape: &str, limit: f64) -> Vec
                 designation: chosen.map(|(e, _)| e.designation.to_string()),
                 chosen_text,
                 lighter_text,
+                worked_for: m.clone(),
             }
         })
         .collect()
+}
+
+/// Keeps the proposals still worked for their members as `members` hold
+/// them: one whose member changed since (any input, the section too), is
+/// gone or holds text that cannot be read (`unread(id)`) goes, so no
+/// proposal worked for other inputs is shown or accepted.
+pub fn current(ps: &mut Vec<Proposal>, members: &[Member], unread: impl Fn(&str) -> bool) {
+    ps.retain(|p| !unread(&p.id) && members.contains(&p.worked_for));
 }
 
 /// Whether `a` comes before `b` lightest first: tabulated mass, then area,
@@ -540,5 +552,28 @@ mod tests {
             designation: "nope".into(),
         });
         let _ = propose(&[t], "", "", 1.0);
+    }
+
+    #[test]
+    fn a_proposal_goes_when_its_member_changes() {
+        let mut ms = vec![sample_member("A"), sample_member("B")];
+        let mut ps = propose(&ms, "heb", "", 1.0);
+        assert!(ps.iter().all(|p| p.designation.is_some()));
+        // Unchanged: both stand.
+        current(&mut ps, &ms, |_| false);
+        assert_eq!(ps.len(), 2);
+        // A's load raised: A's proposal was worked for other inputs.
+        ms[0].axial_kn *= 2.0;
+        current(&mut ps, &ms, |_| false);
+        assert_eq!(ps.iter().map(|p| p.id.as_str()).collect::<Vec<_>>(), ["B"]);
+        assert!(picks(&ps, Some("A")).is_empty(), "nothing to accept for A");
+        // B holds text that cannot be read: its proposal goes too.
+        current(&mut ps, &ms, |id| id == "B");
+        assert!(ps.is_empty());
+        // A member gone takes its proposal with it.
+        let mut ps = propose(&ms, "heb", "", 1.0);
+        ms.remove(1);
+        current(&mut ps, &ms, |_| false);
+        assert_eq!(ps.len(), 1);
     }
 }

@@ -58,6 +58,8 @@ fn clicked((ctx, st): Picker, e: &leptos::ev::MouseEvent) {
             }
         }
         "accept" | "all" => {
+            // Only proposals worked for the members as they are now.
+            st.update(|s| keep_current(ctx, &mut s.left));
             let picks = st.with_untracked(|s| {
                 picker::picks(&s.left, (act == "accept").then_some(v.as_str()))
             });
@@ -88,11 +90,38 @@ fn clicked((ctx, st): Picker, e: &leptos::ev::MouseEvent) {
     }
 }
 
+/// Drops the proposals whose member has changed since they were worked
+/// ([`picker::current`]).
+fn keep_current(ctx: Ctx, left: &mut Vec<Proposal>) {
+    let list = ctx.ws.with_untracked(|w| w.active);
+    ctx.ws.with_untracked(|w| {
+        let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
+        ctx.drafts.with_untracked(|d| {
+            picker::current(left, members, |id| d.first(list, id).is_some());
+        });
+    });
+}
+
 /// The picker, under the editor.
 #[component]
 pub(super) fn SectionPicker(ctx: Ctx) -> impl IntoView {
     let p: Picker = (ctx, RwSignal::new(State::default()));
     let st = p.1;
+    // A proposal goes as soon as its member changes (an input, a draft),
+    // so none worked for other inputs is shown or accepted.
+    Effect::new(move |_| {
+        ctx.ws.track();
+        ctx.drafts.track();
+        if st.with_untracked(|s| s.left.is_empty()) {
+            return;
+        }
+        let mut left = st.with_untracked(|s| s.left.clone());
+        let before = left.len();
+        keep_current(ctx, &mut left);
+        if left.len() != before {
+            st.update(|s| s.left = left);
+        }
+    });
     let rows = move || {
         let sel = ctx.selected.get();
         st.with(|s| {
