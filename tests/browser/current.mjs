@@ -75,4 +75,36 @@ export function register(test, { withApp, open, OUT }) {
       assert.deepEqual(log.errors, []);
     }, LANDSCAPE);
   });
+
+  // A column in a frame: G at its ends is the engineer's to give. Until
+  // both are typed the member needs input, naming the field; no k is shown.
+  test("frame-asks-for-g", async () => {
+    await withApp("frame-asks-for-g", async (page, log) => {
+      await open(page);
+      await page.locator(`[data-testid=member-row][data-id="C1"]`).first().click();
+      await page.locator("[data-testid=result-utilisation]").first().waitFor({ timeout: 10_000 });
+      await page.locator('select[name="restraint_major"]').selectOption("frame");
+      const verdict = page.locator("[data-testid=verdict]").first();
+      await page.locator("[data-testid=verdict]", { hasText: "fix input" }).first().waitFor({ timeout: 10_000 });
+      assert.match(await verdict.textContent(), /frame_major\.g_a: give G at end A/);
+      assert.equal(await page.locator('[name="frame_major.g_a"]').inputValue(), "", "G at end A is not filled in for the engineer");
+      assert.equal(await page.locator('[name="frame_major.g_b"]').inputValue(), "");
+      assert.doesNotMatch(await page.locator("[data-testid=frame_major-k]").textContent(), /k = /);
+      const row = page.locator(`[data-testid=member-row][data-id="C1"]`).first();
+      assert.match(await row.textContent(), /fix input/);
+
+      // One G typed: still asking, now for the other.
+      await page.locator('[name="frame_major.g_a"]').fill("10");
+      await page.locator("[data-testid=verdict]", { hasText: "frame_major.g_b" }).first().waitFor({ timeout: 10_000 });
+      assert.match(await verdict.textContent(), /fix input/);
+
+      // Both typed: checked, with the k they give (pinned base G = 10 and
+      // G = 1 at the top of a sway frame: k about 1.9, common practice).
+      await page.locator('[name="frame_major.g_b"]').fill("1");
+      await page.locator("[data-testid=verdict]", { hasNotText: "fix input" }).first().waitFor({ timeout: 10_000 });
+      const k = Number((await page.locator("[data-testid=frame_major-k]").textContent()).match(/k = ([\d.]+)/)[1]);
+      assert.ok(k > 1.8 && k < 2.0, `k for G 10 and 1, sway: ${k}`);
+      assert.deepEqual(log.errors, []);
+    }, LANDSCAPE);
+  });
 }

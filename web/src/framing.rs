@@ -22,6 +22,24 @@ pub fn key(major: bool) -> FrameKey {
     }
 }
 
+/// The member-file keys of the two G of an axis' frame ("frame_major.g_a",
+/// "frame_major.g_b"), as the editor's G fields and their drafts name them.
+pub fn g_keys(major: bool) -> [String; 2] {
+    let axis = if major { "frame_major" } else { "frame_minor" };
+    [format!("{axis}.g_a"), format!("{axis}.g_b")]
+}
+
+/// What a G field says until the engineer gives G: a frame is chosen with
+/// neither G typed, and G at an end is no value the app can assume (1 at
+/// a pinned base would give k far below the column's).
+pub fn g_asks(key: &str, end_b: bool) -> String {
+    format!(
+        "{key}: give G at end {} (Σ EI/L of the columns over that of the beams at the joint; \
+         the helper below works it out)",
+        if end_b { "B (top)" } else { "A (foot)" }
+    )
+}
+
 /// "k = 1.234, buckling length k L = 6.66 m" for a frame, or the engine's
 /// refusal in words.
 pub fn k_text(frame: &Frame, major: bool, length_mm: f64, sys: UnitSystem) -> String {

@@ -212,6 +212,7 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                     let r = Restraint::from_value(&event_target_value(&e));
                     restraint.set(r);
                     let Some(mut m) = ctx.current() else { return; };
+                    let mut asks = false;
                     let (kk, ll, ff) = if major {
                         (&mut m.k_major, &mut m.lcr_major_mm, &mut m.frame_major)
                     } else {
@@ -226,13 +227,15 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                         }
                         Restraint::Frame => {
                             // The frame gives k: the axis' own k and length go
-                            // (the engine refuses both together). A sway frame
-                            // with G = 1 at both ends to start from: the larger
-                            // k of the two kinds of frame.
+                            // (the engine refuses both together). G at each
+                            // end is the engineer's to give: until both are
+                            // typed the member needs input (the sway frame
+                            // held meanwhile is never checked).
                             *kk = 1.0;
                             *ll = None;
                             if ff.is_none() {
                                 *ff = Some(Frame { sway: true, g_a: 1.0, g_b: 1.0 });
+                                asks = true;
                             }
                         }
                         other => {
@@ -244,6 +247,13 @@ pub(super) fn AxisRestraint(ctx: Ctx, major: bool) -> impl IntoView {
                         }
                     }
                     ctx.commit(m);
+                    for (end_b, key) in [false, true].into_iter().zip(crate::framing::g_keys(major)) {
+                        if asks {
+                            ctx.keep_draft(&key, "", &crate::framing::g_asks(&key, end_b));
+                        } else if r != Restraint::Frame {
+                            ctx.drop_draft(&key);
+                        }
+                    }
                     generation.update(|g| *g += 1);
                 }>
                     {Restraint::all().into_iter().map(|r| view! {

@@ -160,6 +160,14 @@ pub(super) fn FrameEnds(ctx: Ctx, major: bool) -> impl IntoView {
     });
     let k_line = move || {
         let sys = ctx.units.get();
+        // No k from a G not given (or not readable).
+        ctx.drafts.track();
+        if framing::g_keys(major)
+            .iter()
+            .any(|k| ctx.draft(k).is_some())
+        {
+            return Some("k follows once G is given at both ends.".to_string());
+        }
         frame
             .get()
             .map(|(f, length)| framing::k_text(&f, major, length, sys))
@@ -263,6 +271,8 @@ pub(super) fn FrameEnds(ctx: Ctx, major: bool) -> impl IntoView {
                     on:click=move |_| {
                         if let Ok((g, _)) = worked.get_untracked() {
                             let b = end_b.get_untracked();
+                            let [ga, gb] = framing::g_keys(major);
+                            ctx.drop_draft(if b { &gb } else { &ga });
                             with_frame(ctx, major, |f| if b { f.g_b = g } else { f.g_a = g });
                             fields_made.update(|n| *n += 1);
                         }
