@@ -7,6 +7,7 @@
 //! valid members into the open one (ids that clash get a free one).
 
 use leptos::prelude::*;
+use strutline_core::check::{check_member_as, Working};
 use strutline_core::csv::{self, Format, RowProblem};
 use strutline_core::file::{self, MemberFile};
 
@@ -36,6 +37,12 @@ pub struct Incoming {
     pub list: MemberFile,
     /// Every problem found (CSV only; a JSON file is all or nothing).
     pub problems: Vec<RowProblem>,
+    /// The members read whose values the check refuses (an unknown
+    /// catalogue designation, a negative load): the engine's message,
+    /// naming the member and the field, as the command line refuses the
+    /// same file. They come in marked as needing input if the person takes
+    /// them.
+    pub refused: Vec<String>,
 }
 
 /// The refusal of a file too large to read, by its size in bytes.
@@ -66,10 +73,19 @@ pub fn read(name: &str, text: &str) -> Result<Incoming, String> {
     if list.members.is_empty() && problems.is_empty() {
         return Err(format!("{name}: the file holds no members"));
     }
+    // The command line's own check of each member (without the working),
+    // so the report names what `strutline check` refuses the file for.
+    let refused = list
+        .members
+        .iter()
+        .filter_map(|m| check_member_as(m, Working::Skipped).err())
+        .map(|e| e.to_string())
+        .collect();
     Ok(Incoming {
         name: name.to_string(),
         list,
         problems,
+        refused,
     })
 }
 
@@ -116,7 +132,7 @@ fn plural(n: usize) -> &'static str {
 /// One line of the import summary.
 pub fn summary(inc: &Incoming) -> String {
     let n = inc.list.members.len();
-    let p = inc.problems.len();
+    let p = inc.problems.len() + inc.refused.len();
     if p == 0 {
         format!("{}: {n} member{} read, no problems.", inc.name, plural(n))
     } else {
@@ -127,6 +143,25 @@ pub fn summary(inc: &Incoming) -> String {
             plural(p)
         )
     }
+}
+
+/// The report's lines after the summary: each row that could not be read
+/// (left out), then each member read whose values the check refuses, and
+/// what taking those does.
+pub fn problem_lines(inc: &Incoming) -> Vec<String> {
+    let mut lines: Vec<String> = inc.problems.iter().map(RowProblem::to_string).collect();
+    lines.extend(inc.refused.iter().cloned());
+    if !inc.refused.is_empty() {
+        lines.push(format!(
+            "The member{} the check refuses come{} in marked \u{270e} fix input, to be put right here; \
+             nothing is checked with {} value{} until then.",
+            plural(inc.refused.len()),
+            if inc.refused.len() == 1 { "s" } else { "" },
+            if inc.refused.len() == 1 { "that" } else { "those" },
+            plural(inc.refused.len())
+        ));
+    }
+    lines
 }
 
 /// Downloads the open list as the member file, or as CSV with the columns
@@ -224,7 +259,7 @@ pub fn Exchange(
                 ),
                 Ok(inc) => {
                     let mut lines = vec![summary(&inc)];
-                    lines.extend(inc.problems.iter().map(RowProblem::to_string));
+                    lines.extend(problem_lines(&inc));
                     let mut acts = Vec::new();
                     if !inc.list.members.is_empty() {
                         acts.push(act("Open as a new list", "import-new", false, move || {
@@ -334,6 +369,46 @@ mod tests {
             );
         }
         assert!(summary(&back).contains("members read, no problems"));
+    }
+
+    #[test]
+    fn values_the_check_refuses_are_reported_before_anything_changes() {
+        // An invented mezzanine list: a designation no catalogue holds and
+        // a negative load, both read as CSV values, both refused by the
+        // command line's check.
+        let text = "id;kind;designation;grade;length_mm;axial_kn;method\n\
+                    Z1;catalogue;HE 200 B;S355;3500;400;en1993-1-1\n\
+                    Z3;catalogue;HE 999 Q;S355;3500;400;en1993-1-1\n\
+                    Z4;catalogue;HE 200 B;S355;3500;-20;en1993-1-1\n";
+        let inc = read("mezz.csv", text).unwrap();
+        assert!(inc.problems.is_empty(), "{:?}", inc.problems);
+        assert_eq!(inc.list.members.len(), 3);
+        let s = summary(&inc);
+        assert!(!s.contains("no problems"), "{s}");
+        assert!(s.contains("2 problems"), "{s}");
+        let lines = problem_lines(&inc);
+        assert!(
+            lines.iter().any(|l| l.contains("\"Z3\"")
+                && l.contains("designation")
+                && l.contains("HE 999 Q")),
+            "{lines:?}"
+        );
+        assert!(
+            lines
+                .iter()
+                .any(|l| l.contains("\"Z4\"") && l.contains("axial_kn")),
+            "{lines:?}"
+        );
+        // Each message is the command line's for the same member.
+        for m in &inc.list.members {
+            if let Err(e) = strutline_core::check_member(m) {
+                assert!(inc.refused.contains(&e.to_string()), "{e}");
+            }
+        }
+        assert!(lines.last().unwrap().contains("fix input"));
+        // The same values in a member file are reported alike.
+        let json = read("mezz.json", &inc.list.to_json()).unwrap();
+        assert_eq!(json.refused, inc.refused);
     }
 
     #[test]
