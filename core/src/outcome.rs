@@ -56,6 +56,68 @@ pub struct ModeResult {
     pub resistance_kn: f64,
 }
 
+/// How much a warning weighs on the verdict: what a front end shows first
+/// when it has room for few ([`Warning::weight`]; ordered, the heaviest
+/// first). The engine gives its warnings in the order it meets them.
+#[derive(Debug, Clone, Copy, PartialEq, Eq, PartialOrd, Ord, Hash)]
+pub enum Weight {
+    /// The verdict hangs on it: the member fails whatever the utilisation
+    /// shows, or a limit state or effect the result leaves out may govern
+    /// and must be worked before the result is relied on.
+    Decides,
+    /// An input left open read the safe way, or an assumption of the
+    /// method the engineer should confirm.
+    Assumes,
+    /// Limit states outside the member check, to be checked separately in
+    /// any case (shear, bearing, connections), or an input not used.
+    Notes,
+}
+
+/// The codes of warnings that decide the verdict ([`Weight::Decides`]).
+const DECIDES: &[&str] = &[
+    "annex-a-unbounded",
+    "b1-unbounded",
+    "u1-unbounded",
+    "sway-not-amplified",
+    "interaction-not-checked",
+    "outside-code-scope",
+    "local-buckling-not-checked",
+    "class4-shift-not-checked",
+    "torsional-not-checked",
+    "slenderness-over-200",
+    "timber-first-principles",
+    "given-local-buckling",
+    "angle-centroid-loading",
+    "angle-e5-not-applied",
+    "channel-load-through-web",
+];
+
+/// The codes of warnings that only note ([`Weight::Notes`]); every other
+/// code [`Weight::Assumes`].
+const NOTES: &[&str] = &[
+    "bending-limits-not-checked",
+    "factor-ignored",
+    "angle-connection-ignored",
+    "e5-conditions",
+    "buckling-model",
+    "axial-kn-from-model",
+    "amplification-length-unused-major",
+    "amplification-length-unused-minor",
+];
+
+impl Weight {
+    /// The weight of a warning's code.
+    pub fn of(code: &str) -> Weight {
+        if DECIDES.contains(&code) {
+            Weight::Decides
+        } else if NOTES.contains(&code) {
+            Weight::Notes
+        } else {
+            Weight::Assumes
+        }
+    }
+}
+
 /// A caution attached to a result.
 ///
 /// Its message is a text with, where it gives the member's numbers or
@@ -146,6 +208,11 @@ impl Warning {
         }
     }
 
+    /// How much it weighs on the verdict ([`Weight`]), by its code.
+    pub fn weight(&self) -> Weight {
+        Weight::of(self.code)
+    }
+
     /// The message in the engine's units (what the JSON gives): the text
     /// itself, borrowed, without arguments.
     pub fn message(&self) -> Cow<'_, str> {
@@ -226,6 +293,35 @@ const MARK: &str = "{}";
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    #[test]
+    fn each_weighed_code_is_one_the_engine_gives() {
+        // A code misspelt in DECIDES or NOTES would weigh nothing: each
+        // must be written as a string somewhere in core's other sources.
+        let root = std::path::Path::new(env!("CARGO_MANIFEST_DIR")).join("src");
+        let mut text = String::new();
+        let mut dirs = vec![root];
+        while let Some(d) = dirs.pop() {
+            for e in std::fs::read_dir(d).unwrap() {
+                let p = e.unwrap().path();
+                if p.is_dir() {
+                    dirs.push(p);
+                } else if p.extension().is_some_and(|x| x == "rs") && !p.ends_with("outcome.rs") {
+                    text.push_str(&std::fs::read_to_string(&p).unwrap());
+                }
+            }
+        }
+        for code in DECIDES.iter().chain(NOTES) {
+            assert!(
+                text.contains(&format!("\"{code}\"")),
+                "{code} is weighed but no source gives it"
+            );
+        }
+        assert_eq!(Weight::of("sway-not-amplified"), Weight::Decides);
+        assert_eq!(Weight::of("bending-limits-not-checked"), Weight::Notes);
+        assert_eq!(Weight::of("make-assumed"), Weight::Assumes);
+        assert!(Weight::Decides < Weight::Assumes && Weight::Assumes < Weight::Notes);
+    }
 
     #[test]
     fn a_force_reads_in_kn_in_si_and_in_kip_in_us() {

@@ -149,12 +149,16 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
 pub const ALL_WARNINGS_ID: &str = "all-warnings";
 
 /// The words that open every warning in the result's head when it shows
-/// only the first of `total`, `more` of them left out.
+/// only the first `total - more` of `total` (none: their count alone).
 pub fn more_warnings_text(more: usize, total: usize) -> String {
-    format!(
-        "▾ {more} more {}: show all {total}",
-        if more == 1 { "warning" } else { "warnings" }
-    )
+    match (more, total) {
+        (1, 1) => "▾ 1 warning: show it".to_string(),
+        _ if more >= total => format!("▾ {total} warnings: show them"),
+        _ => format!(
+            "▾ {more} more {}: show all {total}",
+            if more == 1 { "warning" } else { "warnings" }
+        ),
+    }
 }
 
 /// The design load a result was checked at, and for a buckling model the
@@ -264,7 +268,10 @@ fn warnings_in(r: &CheckResult, sys: UnitSystem, said: &dyn Fn(&str) -> String) 
         return h;
     }
     h.lit("<ul class=\"warnings\" data-testid=\"warnings\" aria-label=\"warnings\">");
-    for w in &r.warnings {
+    // Those that decide the verdict first: the head shows as many as fit.
+    let mut ordered: Vec<&strutline_core::Warning> = r.warnings.iter().collect();
+    ordered.sort_by_key(|w| w.weight());
+    for w in ordered {
         html!(
             h,
             "<li>⚠ {} <code>{}</code></li>",
@@ -854,6 +861,9 @@ mod tests {
         ));
         assert_eq!(more_warnings_text(1, 4), "▾ 1 more warning: show all 4");
         assert_eq!(more_warnings_text(3, 4), "▾ 3 more warnings: show all 4");
+        // None shown for room: no "more", no "all 1".
+        assert_eq!(more_warnings_text(1, 1), "▾ 1 warning: show it");
+        assert_eq!(more_warnings_text(2, 2), "▾ 2 warnings: show them");
         // The full list and the sheet have them all, the sheet no link.
         assert_eq!(
             warnings_html(r, UnitSystem::Si)
@@ -1172,5 +1182,51 @@ mod tests {
         for key in ["length_mm", "axial_kn", "fy_mpa", "depth_mm", "k_major"] {
             assert!(!h.contains(key), "the sheet shows the file key {key}");
         }
+    }
+
+    #[test]
+    fn warnings_that_decide_the_verdict_come_first() {
+        // An invented loading-dock column, a rolled W under AISC 360-16
+        // with end moments: the engine meets "bending-limits-not-checked"
+        // before "sway-not-amplified" (B2 not worked), which decides.
+        let mut m = crate::demo::sample_member("D1");
+        m.section = strutline_core::section::SectionSpec::Catalogue(
+            strutline_core::section::CatalogueRef {
+                designation: "W12x65".into(),
+            },
+        );
+        m.method = strutline_core::method::Method::AiscLrfd;
+        m.axial_kn = 1500.0;
+        m.m_major_a_knm = 200.0;
+        m.m_major_b_knm = 100.0;
+        let c = Checked::new(&m);
+        let r = c.result().unwrap();
+        let at = |code: &str| r.warnings.iter().position(|w| w.code == code);
+        let (notes, decides) = (
+            at("bending-limits-not-checked").unwrap(),
+            at("sway-not-amplified").unwrap(),
+        );
+        assert!(
+            notes < decides,
+            "the engine's order, which the page changes"
+        );
+        let h = warnings_html(r, UnitSystem::Si).into_string();
+        let pos = |code: &str| h.find(&format!("<code>{code}</code>")).unwrap();
+        assert!(
+            pos("sway-not-amplified") < pos("bending-limits-not-checked"),
+            "{h}"
+        );
+        // Every shown item weighs no less than the next.
+        let codes: Vec<&str> = h
+            .split("<code>")
+            .skip(1)
+            .filter_map(|t| t.split("</code>").next())
+            .collect();
+        assert_eq!(codes.len(), r.warnings.len());
+        let weights: Vec<_> = codes
+            .iter()
+            .map(|c| strutline_core::outcome::Weight::of(c))
+            .collect();
+        assert!(weights.windows(2).all(|w| w[0] <= w[1]), "{codes:?}");
     }
 }
