@@ -211,10 +211,14 @@ export function register(test, { withApp, open, OUT }) {
       await page.locator("#f-restraint_major").selectOption("frame");
       const k = page.locator("[data-testid=frame_major-k]");
       await k.waitFor();
+      // No G is assumed: none is typed, no k shown until both are.
+      assert.match(await k.innerText(), /k follows once G is given at both ends/);
+      await page.locator("#f-frame_major-g_a").fill("1");
+      await page.locator("#f-frame_major-g_b").fill("1");
       // Sway, G_A = G_B = 1: k = 1.3173, the root of AISC 360-16 Commentary
       // Eq. C-A-7-2 (the value core/src/check/buckle.rs's frame test holds
       // the engine to, 1.3172751026).
-      assert.match(await k.innerText(), /k = 1\.317 \(sway frame\)/);
+      await page.waitForFunction(() => /k = 1\.317 \(sway frame\)/.test(document.querySelector("[data-testid=frame_major-k]").textContent));
       await page.locator("#f-frame_major-g_a").fill("0");
       await page.locator("#f-frame_major-g_b").fill("0");
       await page.waitForFunction(() => /k = 1\.000/.test(document.querySelector("[data-testid=frame_major-k]").textContent));

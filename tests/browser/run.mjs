@@ -351,6 +351,9 @@ test("unreadable-text-withdraws-result", async () => {
     await ga.fill("2x");
     await waitForText(verdict, (t) => t.includes("fix input") && t.includes("frame_major.g_a"));
     await ga.fill("2");
+    // G at end B is asked for too (no G is assumed).
+    await waitForText(verdict, (t) => t.includes("fix input") && t.includes("frame_major.g_b"));
+    await page.locator("#f-frame_major-g_b").fill("1");
     await waitForText(verdict, (t) => t.includes("holds") || t.includes("exceeds"));
     await page.locator("[data-testid=cm-toggle]").click();
     const along = page.locator("#cm-distributed");
