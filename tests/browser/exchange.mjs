@@ -130,6 +130,30 @@ test("csv-with-errors-reported-nothing-changed", () =>
   }),
 );
 
+// Values the check refuses (a designation no catalogue holds, a negative
+// load) are problems of the file, named by member and field as the
+// command line names them, before anything changes.
+test("value-problems-reported-before-anything-changes", () =>
+  withApp("value-problems-reported-before-anything-changes", async (page) => {
+    const before = await stored(page);
+    const csv = [
+      "id;kind;designation;grade;length_mm;axial_kn;method",
+      "W1;catalogue;HE 160 A;S275;3200;150;en1993-1-1",
+      "W2;catalogue;HE 888 X;S275;3200;150;en1993-1-1",
+      "W3;catalogue;HE 160 A;S275;3200;-20;en1993-1-1",
+      "",
+    ].join("\n");
+    await importText(page, "walkway.csv", csv);
+    const lines = await page.locator("[data-testid=import-report] p").allTextContents();
+    const text = lines.join("\n");
+    assert.doesNotMatch(text, /no problems/, text);
+    assert.match(text, /walkway\.csv: 3 members read; 2 problems/, text);
+    assert.ok(lines.some((l) => /"W2"/.test(l) && /designation/.test(l) && /HE 888 X/.test(l)), text);
+    assert.ok(lines.some((l) => /"W3"/.test(l) && /axial_kn/.test(l)), text);
+    assert.deepEqual(await stored(page), before, "nothing changed before the person chooses");
+  }),
+);
+
 test("csv-spreadsheet-export-us-columns", () =>
   withApp("csv-spreadsheet-export-us-columns", async (page) => {
     // As a spreadsheet in a decimal-comma locale saves it: a byte-order
