@@ -247,7 +247,8 @@ export function register(test, { withApp, open, OUT }) {
             await page.screenshot({ path: join(OUT, `tablet-warnings-${width}x${height}-${units}.png`) });
             if (visible < total) {
               const words = (await more.innerText()).trim();
-              assert.equal(words, `▾ ${total - visible} more warning${total - visible === 1 ? "" : "s"}: show all ${total}`, where);
+              const none = total === 1 ? "▾ 1 warning: show it" : `▾ ${total} warnings: show them`;
+              assert.equal(words, visible === 0 ? none : `▾ ${total - visible} more warning${total - visible === 1 ? "" : "s"}: show all ${total}`, where);
               // Opened: the full list in the chart's place, under the
               // verdict, which stays in view; each warning can be read whole.
               await more.click();
