@@ -5,9 +5,10 @@
 
 import assert from "node:assert/strict";
 import { join } from "node:path";
-import { setField } from "./lib.mjs";
+import { setField, waitForText } from "./lib.mjs";
 
 const LANDSCAPE = { viewport: { width: 1180, height: 820 }, hasTouch: true, deviceScaleFactor: 1 };
+const PORTRAIT = { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true, deviceScaleFactor: 1 };
 
 /** A canvas as drawn: what it is marked as (`data-chart`), the buckled
  * shapes of the column drawing (`data-shapes`) and the share of its pixels
@@ -106,5 +107,23 @@ export function register(test, { withApp, open, OUT }) {
       assert.ok(k > 1.8 && k < 2.0, `k for G 10 and 1, sway: ${k}`);
       assert.deepEqual(log.errors, []);
     }, LANDSCAPE);
+  });
+
+  // Upright, the verdict is docked at the foot under whatever is in view:
+  // it names the member it belongs to.
+  test("docked-verdict-names-its-member", async () => {
+    await withApp("docked-verdict-names-its-member", async (page, log) => {
+      await open(page);
+      for (const id of ["C1", "P1"]) {
+        await page.locator(`[data-testid=member-row][data-id="${id}"] .row-main`).first().tap();
+        const name = page.locator("[data-testid=verdict] [data-testid=verdict-member]").first();
+        await waitForText(name, (t) => t.trim() === id);
+        const box = await name.boundingBox();
+        assert.ok(box && box.y >= 0 && box.y + box.height <= 1180, `the docked verdict's member name is on screen: ${JSON.stringify(box)}`);
+        assert.match(await page.locator("[data-testid=verdict] .verdict-status").first().textContent(), new RegExp(`^${id} [✓✗]`));
+      }
+      await page.screenshot({ path: join(OUT, "docked-verdict-820x1180.png") });
+      assert.deepEqual(log.errors, []);
+    }, PORTRAIT);
   });
 }

@@ -76,10 +76,20 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
     let mut h = Html::new();
     html!(
         h,
-        "<div class=\"verdict {}\" role=\"status\"><p class=\"verdict-status\">{}</p>",
-        standing.class(),
-        status_text(&c.outcome)
+        "<div class=\"verdict {}\" role=\"status\"><p class=\"verdict-status\">",
+        standing.class()
     );
+    // The member it belongs to: docked at the foot of an upright screen,
+    // the verdict stands under whatever is in view (the sheet's page is
+    // headed with the member already).
+    if !sheet {
+        html!(
+            h,
+            "<span class=\"verdict-member\" data-testid=\"verdict-member\">{}</span> ",
+            c.member.id
+        );
+    }
+    html!(h, "{}</p>", status_text(&c.outcome));
     match &c.outcome {
         None => {
             h.lit(
