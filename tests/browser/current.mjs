@@ -126,4 +126,40 @@ export function register(test, { withApp, open, OUT }) {
       assert.deepEqual(log.errors, []);
     }, PORTRAIT);
   });
+
+  // The column-model panel: no made-up load for a member whose design load
+  // is not given (N_cr, not alpha_cr); each segment's buckling length named
+  // by its segment, the governing one said; alpha_cr < 1 remarked on.
+  test("column-model-says-what-it-shows", async () => {
+    await withApp("column-model-says-what-it-shows", async (page, log) => {
+      await open(page);
+      await page.locator("[data-testid=add-member]").first().click();
+      await page.locator("[data-testid=verdict]", { hasText: "fix input" }).first().waitFor({ timeout: 10_000 });
+      await page.locator("[data-testid=cm-toggle]").click();
+      const result = page.locator("[data-testid=cm-result]").first();
+      await waitForText(result, (t) => /N_cr = /.test(t));
+      let t = await result.textContent();
+      assert.match(t, /design load N_Ed is not given/, t);
+      assert.doesNotMatch(t, /α_cr = /, t);
+      assert.match(t, /N_cr = [\d.,]+ kN \(a load at end B\)/, t);
+
+      // The load given: alpha_cr on it.
+      await setField(page, page, "axial_kn", "50");
+      await waitForText(result, (x) => /α_cr = /.test(x));
+      t = await result.textContent();
+      assert.doesNotMatch(t, /not given/, t);
+      assert.doesNotMatch(t, /< 1 about/, t);
+
+      // Two segments: each one's buckling length by its number, and which governs.
+      await page.locator("[data-testid=cm-add-segment]").click();
+      await waitForText(result, (x) => /buckling lengths by segment from end A: 1 .*, 2 /.test(x));
+      await waitForText(result, (x) => /Segment [12] of 2 governs the check/.test(x));
+
+      // A load past the elastic critical load: said in the panel.
+      await setField(page, page, "axial_kn", "50000");
+      await waitForText(result, (x) => /α_cr = [\d.,]+ < 1 about the (major|minor) axis/.test(x));
+      await page.screenshot({ path: join(OUT, "column-model-says-what-it-shows.png") });
+      assert.deepEqual(log.errors, []);
+    }, LANDSCAPE);
+  });
 }

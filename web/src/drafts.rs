@@ -100,6 +100,13 @@ impl Drafts {
         self.0.iter().find(|d| d.list == list && d.member == member)
     }
 
+    /// Every draft of a member.
+    pub fn of<'a>(&'a self, list: usize, member: &'a str) -> impl Iterator<Item = &'a Draft> + 'a {
+        self.0
+            .iter()
+            .filter(move |d| d.list == list && d.member == member)
+    }
+
     /// A member renamed: its drafts follow it.
     pub fn rename(&mut self, list: usize, old: &str, new: &str) {
         for d in self

@@ -213,7 +213,10 @@ fn model_html(
     }
     h.lit("</tbody></table></div>");
     // The drawing and the analysis.
-    let Some(a) = of_member(m, sys) else { return };
+    // An unchecked member's load may stand in for one not given: none drawn.
+    let Some(a) = of_member(m, sys, result.is_some()) else {
+        return;
+    };
     h.lit("<figure class=\"sheet-column\" data-testid=\"sheet-column\">");
     match png(&a.sketch, DRAWING.0, DRAWING.1, 2.0) {
         Ok((url, shapes)) => html!(

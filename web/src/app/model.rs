@@ -13,6 +13,7 @@ use crate::units_view::{field_unit, from_field, result_text, span_text, to_field
 use strutline_core::buckling::model::{AxialLoad, BucklingModel, Restraint, RestraintAxis};
 use strutline_core::buckling::{Axis, Fixity, Support};
 use strutline_core::catalogue;
+use strutline_core::check::SegmentOf;
 
 /// The unit of a translational spring, named as the member file's
 /// description of `buckling_model` names it.
@@ -162,12 +163,22 @@ struct Analysed {
     refused: Option<String>,
 }
 
-/// The panel's analysis of `m`; `unread`, the message of a field of the
-/// member that cannot be read ([`crate::drafts`]), withholds it: the
-/// member keeps its value from before that edit, which is not the input
-/// shown, so neither the column nor its buckling is drawn.
-fn analyse(m: &Member, sys: UnitSystem, unread: Option<String>) -> Option<Analysed> {
-    m.buckling_model.as_ref()?;
+/// The panel's analysis of `m`. `unread`, the message of a field of the
+/// member that cannot be read ([`crate::drafts`]) other than its design
+/// load, withholds it: the member keeps its value from before that edit,
+/// which is not the input shown, so neither the column nor its buckling is
+/// drawn. `load_given`: whether the design load is the engineer's (a new
+/// member's stands in until typed): where the model has no loads of its
+/// own, none is drawn and N_cr is given instead of alpha_cr. `governs`:
+/// the segment whose check governs, as the result names it.
+fn analyse(
+    m: &Member,
+    sys: UnitSystem,
+    unread: Option<String>,
+    load_given: bool,
+    governs: Option<SegmentOf>,
+) -> Option<Analysed> {
+    let model = m.buckling_model.as_ref()?;
     if let Some(why) = unread {
         return Some(Analysed {
             sketch: None,
@@ -175,23 +186,78 @@ fn analyse(m: &Member, sys: UnitSystem, unread: Option<String>) -> Option<Analys
             refused: Some(format!("Not analysed until the input can be read: {why}")),
         });
     }
-    let a = of_member(m, sys)?;
-    let lines = match &a.result {
-        Ok(b) => [("major", &b.major), ("minor", &b.minor)]
-            .into_iter()
-            .map(|(name, x)| {
+    let pattern = model.carries_own_loads() || (load_given && m.axial_kn > 0.0);
+    let a = of_member(m, sys, load_given)?;
+    let mut lines = Vec::new();
+    if let Ok(b) = &a.result {
+        for (name, x) in [("major", &b.major), ("minor", &b.minor)] {
+            let critical = if pattern {
                 format!(
-                    "{name} axis: α_cr = {}, N_cr = {}, buckling length {} ({} elements; {} with half as many)",
+                    "α_cr = {}, N_cr = {}",
                     fixed(x.load_factor, 3),
-                    result_text(sys, "kN", x.critical_kn, 0),
-                    span_text(sys, x.buckling_length_mm),
-                    x.elements,
-                    fixed(x.load_factor_half, 4)
+                    result_text(sys, "kN", x.critical_kn, 0)
                 )
-            })
-            .collect(),
-        Err(_) => Vec::new(),
-    };
+            } else {
+                format!(
+                    "N_cr = {} (a load at end B)",
+                    result_text(sys, "kN", x.critical_kn, 0)
+                )
+            };
+            // Each segment's own buckling length where there are several:
+            // the result's modes take the governing segment's.
+            let lengths = match x.segments.as_slice() {
+                [_, _, ..] => format!(
+                    "buckling lengths by segment from end A: {}",
+                    x.segments
+                        .iter()
+                        .enumerate()
+                        .map(|(i, s)| format!(
+                            "{} {}",
+                            i + 1,
+                            s.buckling_length_mm.map_or_else(
+                                || "— (not compressed)".to_string(),
+                                |l| span_text(sys, l)
+                            )
+                        ))
+                        .collect::<Vec<_>>()
+                        .join(", ")
+                ),
+                _ => format!("buckling length {}", span_text(sys, x.buckling_length_mm)),
+            };
+            lines.push(format!(
+                "{name} axis: {critical}, {lengths} ({} elements; α_cr {} with half as many)",
+                x.elements,
+                if x.load_factor != 0.0 {
+                    format!("{:+.1e}", x.load_factor_half / x.load_factor - 1.0)
+                } else {
+                    "—".to_string()
+                }
+            ));
+        }
+        if let Some(s) = governs.filter(|s| s.count > 1) {
+            lines.push(format!(
+                "Segment {} of {} governs the check: the result's modes table gives its buckling lengths.",
+                s.index, s.count
+            ));
+        }
+        if !pattern {
+            lines.push(
+                "The design load N_Ed is not given: no load is drawn, and α_cr (the factor on the \
+                 design load at which the column buckles) follows once it is."
+                    .to_string(),
+            );
+        } else {
+            for (name, x) in [("major", &b.major), ("minor", &b.minor)] {
+                if x.load_factor < 1.0 {
+                    lines.push(format!(
+                        "⚠ α_cr = {} < 1 about the {name} axis: the column buckles elastically under \
+                         less than its design load, so it cannot carry it whatever its strength.",
+                        fixed(x.load_factor, 3)
+                    ));
+                }
+            }
+        }
+    }
     Some(Analysed {
         sketch: Some(a.sketch),
         lines,
@@ -397,11 +463,25 @@ pub(super) fn ColumnModel(ctx: Ctx) -> impl IntoView {
         let sys = ctx.units.get();
         ctx.ws.with(|w| {
             let m = w.active_list().and_then(|l| l.members.get(sel))?;
-            let unread = ctx.drafts.with(|d| {
-                d.first(w.active, &m.id)
-                    .map(|draft| fields::error_text(&draft.error()))
+            // A design load not yet given (a new member's) is drawn as
+            // none; any other field that cannot be read withholds the lot.
+            let (unread, load_given) = ctx.drafts.with(|d| {
+                let mut of = d.of(w.active, &m.id);
+                let load = |k: &str| k == "axial_kn";
+                let all: Vec<_> = of.by_ref().collect();
+                (
+                    all.iter()
+                        .find(|d| !load(&d.key))
+                        .map(|draft| fields::error_text(&draft.error())),
+                    !all.iter().any(|d| load(&d.key)),
+                )
             });
-            analyse(m, sys, unread)
+            let governs = ctx.checks.with(|c| {
+                c.0.get(sel)
+                    .and_then(|c| c.result())
+                    .and_then(|r| r.segment)
+            });
+            analyse(m, sys, unread, load_given, governs)
         })
     });
     let canvas = NodeRef::<leptos::html::Canvas>::new();

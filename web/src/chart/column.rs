@@ -96,7 +96,10 @@ pub struct Analysed {
 /// The analysis of `m`'s buckling model (`None` without one) by core's
 /// [`buckle`] and its sketch, lengths and loads worded in `sys`'s units:
 /// what the column-model panel draws and the calc sheet prints.
-pub fn of_member(m: &Member, sys: UnitSystem) -> Option<Analysed> {
+/// `load_given`: whether the member's design load is the engineer's (a new
+/// member's stands in until it is typed); where the model has no loads of
+/// its own and it is not, no load is drawn and N_cr is written for alpha_cr.
+pub fn of_member(m: &Member, sys: UnitSystem, load_given: bool) -> Option<Analysed> {
     let model = m.buckling_model.as_ref()?;
     let result = match buckle(m) {
         Ok(Some(b)) => Ok(b),
@@ -120,7 +123,7 @@ pub fn of_member(m: &Member, sys: UnitSystem) -> Option<Analysed> {
     let sketch = sketch(
         model,
         m.length_mm,
-        m.axial_kn,
+        (load_given && m.axial_kn > 0.0).then_some(m.axial_kn),
         &pairs,
         &result,
         &|unit, v| match unit {
@@ -132,16 +135,18 @@ pub fn of_member(m: &Member, sys: UnitSystem) -> Option<Analysed> {
 }
 
 /// What to draw for a model of a member `length_mm` long carrying
-/// `axial_kn`. `sections` are the segments' lengths and sections (one for
-/// a model without segments: the member's), `result` the analysis or its
-/// refusal in words, `text` words a value in an engine unit (a length in
-/// "mm", a force in "kN") in the units shown. Without loads in the model
-/// the pattern drawn is the engine's: `axial_kn` at end B (1 kN when it is
-/// not positive).
+/// `axial_kn` (`None`: no design load given). `sections` are the segments'
+/// lengths and sections (one for a model without segments: the member's),
+/// `result` the analysis or its refusal in words, `text` words a value in
+/// an engine unit (a length in "mm", a force in "kN") in the units shown.
+/// Without loads in the model the pattern drawn is the engine's:
+/// `axial_kn` at end B; with no design load given none is drawn (no load
+/// is made up) and each axis is captioned with N_cr, not alpha_cr, which
+/// is a factor on the load.
 pub fn sketch(
     model: &BucklingModel,
     length_mm: f64,
-    axial_kn: f64,
+    axial_kn: Option<f64>,
     sections: &[(f64, Option<&Section>)],
     result: &Result<MemberBuckle, String>,
     text: &dyn Fn(&'static str, f64) -> String,
@@ -194,10 +199,15 @@ pub fn sketch(
                     Axis::Major => &b.major,
                     Axis::Minor => &b.minor,
                 };
+                let first = if model.carries_own_loads() || axial_kn.is_some() {
+                    format!("α_cr = {}", fixed(b.load_factor, 3))
+                } else {
+                    format!("N_cr = {}", text("kN", b.critical_kn))
+                };
                 (
                     b.mode.clone(),
                     vec![
-                        format!("α_cr = {}", fixed(b.load_factor, 3)),
+                        first,
                         format!("L_cr = {}", text("mm", b.buckling_length_mm)),
                     ],
                 )
@@ -216,8 +226,9 @@ pub fn sketch(
     Sketch {
         length_mm,
         loads: if !model.carries_own_loads() {
-            let kn = if axial_kn > 0.0 { axial_kn } else { 1.0 };
-            vec![(length_mm, text("kN", kn))]
+            axial_kn
+                .map(|kn| vec![(length_mm, text("kN", kn))])
+                .unwrap_or_default()
         } else {
             model
                 .axial_loads
@@ -688,7 +699,7 @@ pub(crate) mod tests {
         let sk = sketch(
             model,
             m.length_mm,
-            m.axial_kn,
+            Some(m.axial_kn),
             &[(6000.0, Some(&lower)), (3000.0, Some(&upper))],
             &result,
             &|unit, v| format!("{v:.0} {unit}"),
@@ -736,21 +747,56 @@ pub(crate) mod tests {
                 ..model.clone()
             },
             m.length_mm,
-            0.0,
+            None,
             &[],
             &Err("no".into()),
             &|unit, v| format!("{v} {unit}"),
         );
         assert!(refused.axes[0].mode.is_empty());
-        // Without loads the engine's pattern: 1 kN at end B for no axial_kn.
-        assert_eq!(refused.loads, vec![(9000.0, "1 kN".to_string())]);
+        // Without loads in the model and no design load given, no load is
+        // drawn (none is made up).
+        assert!(refused.loads.is_empty());
         assert_eq!(refused.axes[0].caption, vec!["no".to_string()]);
+    }
+
+    #[test]
+    fn no_design_load_draws_no_load_and_captions_n_cr() {
+        // The stepped column without its own loads: the engine's pattern
+        // is the member's load at end B. Not given, none is drawn, and each
+        // axis says N_cr (the same for any load at B), not alpha_cr.
+        let mut m = stepped_column();
+        if let Some(md) = m.buckling_model.as_mut() {
+            md.axial_loads.clear();
+            md.distributed_kn_per_m = 0.0;
+        }
+        let given = of_member(&m, UnitSystem::Si, true).unwrap();
+        assert_eq!(given.sketch.loads.len(), 1);
+        assert!(given.sketch.axes[0].caption[0].starts_with("α_cr = "));
+        let not = of_member(&m, UnitSystem::Si, false).unwrap();
+        assert!(not.sketch.loads.is_empty(), "{:?}", not.sketch.loads);
+        let b = not.result.clone().unwrap();
+        assert_eq!(
+            not.sketch.axes[0].caption[0],
+            format!(
+                "N_cr = {}",
+                result_text(UnitSystem::Si, "kN", b.major.critical_kn, 0)
+            )
+        );
+        // N_cr does not hang on the load that stands in for the design load.
+        let mut other = m.clone();
+        other.axial_kn *= 3.0;
+        let b3 = buckle(&other).unwrap().unwrap();
+        assert!((b3.major.critical_kn - b.major.critical_kn).abs() < 1e-6 * b.major.critical_kn);
+        // A model with loads of its own keeps alpha_cr on them either way.
+        let own = of_member(&stepped_column(), UnitSystem::Si, false).unwrap();
+        assert!(own.sketch.axes[0].caption[0].starts_with("α_cr = "));
+        assert_eq!(own.sketch.loads.len(), 2);
     }
 
     #[test]
     fn the_sheet_draws_what_the_panel_draws_in_the_units_shown() {
         let m = &stepped_column();
-        let a = of_member(m, UnitSystem::Si).unwrap();
+        let a = of_member(m, UnitSystem::Si, true).unwrap();
         let b = a.result.clone().unwrap();
         assert_eq!(a.sketch.axes[0].mode, b.major.mode);
         // The captions and the loads the drawing writes (the drawing itself
@@ -762,7 +808,7 @@ pub(crate) mod tests {
         assert_eq!(a.sketch.loads[0].1, "420 kN");
         // In US units the loads in kip and the lengths in feet: 420 kN /
         // 4.4482216152605 kN per kip = 94.42 kip.
-        let us = of_member(m, UnitSystem::Us).unwrap();
+        let us = of_member(m, UnitSystem::Us, true).unwrap();
         assert_eq!(us.sketch.loads[0].1, "94.42 kip");
         assert!(
             us.sketch.axes[1].caption[1].ends_with(" ft"),
@@ -772,6 +818,6 @@ pub(crate) mod tests {
         // No model, nothing to draw.
         let mut plain = m.clone();
         plain.buckling_model = None;
-        assert!(of_member(&plain, UnitSystem::Si).is_none());
+        assert!(of_member(&plain, UnitSystem::Si, true).is_none());
     }
 }
