@@ -433,7 +433,10 @@ impl Table {
             self.line(&cells(m, r), &mut out);
         }
         for r in results {
-            for w in &r.warnings {
+            // Those that decide the verdict first (core's Warning::weight).
+            let mut ordered: Vec<&Warning> = r.warnings.iter().collect();
+            ordered.sort_by_key(|w| w.weight());
+            for w in ordered {
                 out.push_str(&format!("warning {}: {}\n", r.id, w.message()));
             }
         }

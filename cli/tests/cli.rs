@@ -549,3 +549,29 @@ fn the_examples_notes_agree_with_their_sections_make() {
     }
     assert!(compared >= 1, "no example note names a make");
 }
+
+#[test]
+fn the_readable_table_lists_the_warnings_that_decide_first() {
+    // An invented loading-dock column, a rolled W under AISC 360-16 with
+    // end moments: the engine meets the generic "shear, web bearing ...
+    // not checked" note before "B2 ... is not worked", which decides.
+    let file = serde_json::json!({
+        "format": "strutline.members", "version": 1, "title": "dock",
+        "members": [{
+            "id": "D1", "section": {"kind": "catalogue", "designation": "W12x65"},
+            "material": {"grade": "A992"}, "length_mm": 4267, "axial_kn": 1500,
+            "method": "aisc360-lrfd", "m_major_a_knm": 200, "m_major_b_knm": 100
+        }]
+    });
+    let path =
+        std::env::temp_dir().join(format!("strutline-cli-order-{}.json", std::process::id()));
+    std::fs::write(&path, file.to_string()).unwrap();
+    let (_, out, err) = run(&["check", path.to_str().unwrap()]);
+    let _ = std::fs::remove_file(&path);
+    let line = |code_text: &str| {
+        out.lines()
+            .position(|l| l.starts_with("warning D1: ") && l.contains(code_text))
+            .unwrap_or_else(|| panic!("no warning with {code_text:?}: {out}{err}"))
+    };
+    assert!(line("B2") < line("web bearing"), "{out}");
+}
