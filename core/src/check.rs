@@ -821,11 +821,8 @@ pub fn check_member_as(member: &Member, working: Working) -> Result<CheckResult>
 fn with_input<T>(member: &Member, check: impl FnOnce(&Input<'_>) -> Result<T>) -> Result<T> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let built = member.build_section();
-    let section = match built {
-        Ok(ref section) => section,
-        Err(e) => return Err(wrap(e)),
-    };
+    let mut built = None;
+    let section = crate::catalogue::build_in(&member.section, &mut built).map_err(wrap)?;
     let resolved = crate::material::resolve(&member.material, crate::member::stock(section));
     let material = match resolved {
         Ok(ref material) => material,

@@ -567,15 +567,15 @@ fn steel_at(grade: &SteelGrade, thickness_mm: f64) -> Result<Steel> {
     } else {
         0.0
     };
-    let band = grade
-        .bands
-        .iter()
-        .find(|(up_to, _)| t <= *up_to)
-        .ok_or(Error::OutOfRange {
+    // The error built only when there is no band (`ok_or` built and
+    // dropped one for every lookup).
+    let Some(band) = grade.bands.iter().find(|(up_to, _)| t <= *up_to) else {
+        return Err(Error::OutOfRange {
             field: "material",
             value: t,
             expected: grade.covers,
-        })?;
+        });
+    };
     Ok(Steel {
         name: grade.name,
         standard: grade.standard,
