@@ -103,6 +103,11 @@ impl From<&Properties> for SectionSummary {
     }
 }
 
+/// The modes of a check, held inline: a check has at most four (both
+/// axes, the twisting mode, the cross-section or refused mode), so a
+/// result's modes need no allocation of their own (read as a slice).
+pub type Modes = smallvec::SmallVec<[ModeResult; 4]>;
+
 /// Which segment of a buckling model governs: `index` of `count`, counted
 /// from 1 at end A.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -155,7 +160,7 @@ pub struct CheckResult {
     /// Section properties.
     pub section: SectionSummary,
     /// Every mode checked.
-    pub modes: Vec<ModeResult>,
+    pub modes: Modes,
     /// The bending side (member file version 3), `null` without moments.
     pub bending: Option<Bending>,
     /// The beam-column interaction equations worked, one entry each
@@ -356,7 +361,7 @@ pub struct Verdict {
 /// [`Working::default`] does; a batch takes `Scratch::new(Working::Skipped)`.
 #[derive(Debug, Clone, Default)]
 pub struct Scratch {
-    modes: Vec<ModeResult>,
+    modes: Modes,
     warnings: Vec<Warning>,
     interaction: Vec<interaction::Check>,
     bending: Option<Bending>,
@@ -412,7 +417,7 @@ impl Brief<'_> {
     pub fn to_result(&self, id: &str) -> CheckResult {
         self.verdict.with_lists(
             id.to_string(),
-            self.modes.to_vec(),
+            Modes::from_slice(self.modes),
             self.bending.copied(),
             self.interaction.to_vec(),
             self.warnings.to_vec(),
@@ -426,7 +431,7 @@ impl Verdict {
     fn with_lists(
         self,
         id: String,
-        modes: Vec<ModeResult>,
+        modes: Modes,
         bending: Option<Bending>,
         interaction: Vec<interaction::Check>,
         warnings: Vec<Warning>,
@@ -468,7 +473,7 @@ impl Scratch {
     #[inline]
     fn sized(working: Working, moments: bool) -> Scratch {
         Scratch {
-            modes: Vec::with_capacity(4),
+            modes: Modes::new(),
             warnings: Vec::new(),
             interaction: Vec::new(),
             bending: None,
