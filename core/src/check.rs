@@ -308,7 +308,11 @@ pub(crate) fn evaluate_within(
     working: Working,
     unbraced: Option<Unbraced>,
 ) -> Result<CheckResult> {
-    let mut parts = Scratch::sized(working, input.member.has_moments());
+    // The moments asked only where they size the working's list.
+    let mut parts = Scratch::sized(
+        working,
+        working == Working::Kept && input.member.has_moments(),
+    );
     let verdict = work(input, method, &mut parts, unbraced)?;
     // The lists moved field by field, not through a destructured copy of
     // the scratch (one 192-byte copy fewer a check).
@@ -670,7 +674,7 @@ fn work(
         .min_by(|a, b| {
             a.resistance_kn
                 .total_cmp(&b.resistance_kn)
-                .then(b.slenderness.total_cmp(&a.slenderness))
+                .then_with(|| b.slenderness.total_cmp(&a.slenderness))
         })
         .copied()
         .unwrap_or(major);
