@@ -155,11 +155,10 @@ pub(super) fn draw_chart(
     let Some((p, r)) = c.and_then(|c| c.prepared.as_ref().zip(c.result())) else {
         // Nothing of an earlier drawing (another member's point, the
         // point of a value since replaced) may stay under this verdict.
-        let waiting = c.is_some_and(|c| c.outcome.is_none());
-        let why = if waiting {
-            "Being checked: the chart follows."
-        } else {
-            "Not checked: no chart until the member's input can be checked."
+        let why = match c.map(|c| c.outcome.is_none()) {
+            None => "No member selected.",
+            Some(true) => "Being checked: the chart follows.",
+            Some(false) => "Not checked: no chart until the member's input can be checked.",
         };
         chart::blank(el, why, dpr, hc);
         return Drawn {
