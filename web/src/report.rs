@@ -643,7 +643,20 @@ pub fn sheet_html(
         h.push(&crate::diagram::svg(&c.member, sys));
         h.push(&crate::modelsheet::html(&c.member, c.result(), sys));
         if let Some(r) = c.result() {
-            h.lit("<h3>Section and material</h3>");
+            // A buckling model's result is its governing segment's: so are
+            // the properties, which may not be the section of the inputs.
+            match r.segment {
+                Some(seg) => html!(
+                    h,
+                    "<h3 data-testid=\"sheet-properties-segment\">Section and material of segment {} of {} \
+                     of the buckling model, which governs</h3>",
+                    seg.index,
+                    seg.count
+                ),
+                None => {
+                    h.lit("<h3>Section and material</h3>");
+                }
+            }
             h.push(&properties_html(r, sys));
         }
         h.push(&crate::sectionview::of_checked(c, sys));
@@ -1091,6 +1104,12 @@ mod tests {
             "{sheet}"
         );
         assert!(sheet.contains("data-testid=\"sheet-column\""));
+        // Its properties are said to be the governing segment's.
+        let heading = format!(
+            "Section and material of segment {} of {} of the buckling model, which governs",
+            s.index, s.count
+        );
+        assert!(sheet.contains(&heading), "{heading}");
         for junk in [">translation<", ">segments<", "\"length_mm\""] {
             assert!(!sheet.contains(junk), "{junk}");
         }
