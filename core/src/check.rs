@@ -5,6 +5,7 @@
 //! the working.
 
 pub mod buckle;
+pub mod plausible;
 pub mod reach;
 
 use serde::Serialize;
@@ -765,6 +766,7 @@ fn work(
         }
     };
     interaction::warn_unused_lengths(m, method, warnings);
+    plausible::warn_theoretical_k(m, warnings);
     let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
     let passes = passes && within_limits(method, modes);
     Ok(Verdict {
