@@ -308,6 +308,7 @@ pub(super) fn Editor(ctx: Ctx) -> impl IntoView {
     let modelled = member.buckling_model.is_some();
     view! {
         <h2 id="h-editor" class="pane-title">"Member " <span class="editing-id">{move || title.get()}</span></h2>
+        <super::list::MemberActions ctx=ctx id=title />
         <form class="editor" on:submit=|e| e.prevent_default() autocomplete="off">
             <fieldset>
                 <legend>"Identity"</legend>
