@@ -1,11 +1,13 @@
 //! Warnings on inputs the check takes as given but which are likely not
 //! what the engineer meant: an effective-length factor that is the
-//! theoretical value of an ideal end condition ([`warn_theoretical_k`]).
+//! theoretical value of an ideal end condition ([`warn_theoretical_k`]), a
+//! member shorter than its section is deep ([`warn_short_length`]).
 //! Each is a warning, never a refusal: the value may be justified.
 
 use crate::buckling::ends;
 use crate::member::Member;
 use crate::outcome::{Arg, Warning};
+use crate::section::Section;
 use crate::units::Quantity;
 
 /// The warning's text with its numbers: `{}` the key, the factor, the end
@@ -97,6 +99,39 @@ pub fn warn_theoretical_k(m: &Member, warnings: &mut Vec<Warning>) {
                 ),
             });
         }
+    }
+}
+
+/// Warns where the member's length is below the section's largest overall
+/// dimension (depth, width or diameter; for typed properties 2 i_major,
+/// the depth no section with that radius of gyration can be shallower
+/// than, as i <= h/2 with all the area at the extreme fibres). Such a
+/// "column" is a squat block, not a strut: most often a length typed in
+/// metres or with a thousands mark read as a decimal ("4.000" as 4 mm).
+/// Stocky pieces (a bearing block, a short stub) are legitimate, so the
+/// check goes on; the rule is the section's own size because a real
+/// column is many times longer than deep, and L below the depth is below
+/// anything the buckling codes were written for (L/i below 2 to 3.5).
+#[inline]
+pub fn warn_short_length(m: &Member, section: &Section, warnings: &mut Vec<Warning>) {
+    let (size, what) = match section.spec.largest_dimension_mm() {
+        Some(d) => (d, "the section's largest dimension"),
+        None => (
+            2.0 * section.props.r_major_mm,
+            "twice the section's major radius of gyration, which no section's depth is below",
+        ),
+    };
+    if m.length_mm < size {
+        warnings.push(Warning::with_args(
+            "length-below-section",
+            "length_mm = {} is shorter than the section is deep ({}: {}): check the units \
+             (a length in metres, or a thousands mark read as a decimal point?)",
+            &[
+                Arg::figure(m.length_mm, Quantity::Span, Warning::AS_GIVEN),
+                Arg::figure(size, Quantity::Length, Warning::AS_GIVEN),
+                Arg::Word(what),
+            ],
+        ));
     }
 }
 
@@ -198,5 +233,43 @@ mod tests {
         m.k_minor = 0.5;
         m.lcr_minor_mm = Some(2500.0);
         assert!(codes(&m).is_empty());
+    }
+
+    /// "4.000" read as 4 mm on an HE 200 B (200 x 200): the result says
+    /// the length is below the section's depth (review N1, N16); 200 mm
+    /// and longer say nothing. Typed properties: below 2 i_major.
+    #[test]
+    fn a_length_below_the_section_warns() {
+        let short = |m: &Member| {
+            check_member(m)
+                .unwrap()
+                .warnings
+                .iter()
+                .find(|w| w.code == "length-below-section")
+                .map(|w| w.message().into_owned())
+        };
+        let mut m = column(Method::En1993);
+        for l in [1.0, 4.0, 199.0] {
+            m.length_mm = l;
+            let text = short(&m).unwrap();
+            assert!(
+                text.starts_with(&format!(
+                    "length_mm = {l} mm is shorter than the section is deep (200 mm"
+                )),
+                "{text}"
+            );
+        }
+        for l in [200.0, 3500.0] {
+            m.length_mm = l;
+            assert_eq!(short(&m), None, "{l}");
+        }
+        // Typed properties: A = 1e4 mm2, I_major = 1e8 mm4, i = 100 mm.
+        m.section = serde_json::from_value(serde_json::json!({"kind": "given",
+            "area_mm2": 1e4, "i_major_mm4": 1e8, "i_minor_mm4": 5e7}))
+        .unwrap();
+        m.length_mm = 150.0;
+        assert!(short(&m).unwrap().contains("(200 mm: twice"));
+        m.length_mm = 250.0;
+        assert_eq!(short(&m), None);
     }
 }
