@@ -52,7 +52,7 @@ pub(super) fn NumField(
     let err_id2 = err_id.clone();
     view! {
         <div class="field" class:has-error=move || error.with(Option::is_some)>
-            <label for=input_id.clone()>{field.label} <code class="key">{field.key}</code></label>
+            <label for=input_id.clone()>{field.label} <code class="key">{crate::units_view::field_key(sys, field.key)}</code></label>
             <div class="input-row">
                 <input
                     type="text"
