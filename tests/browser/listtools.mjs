@@ -3,7 +3,10 @@
 // filter by text and by status, pick two members, open the change form,
 // refuse a bad factor, change
 // their method (the utilisations shown are the command line's for the
-// changed members), and undo the change in one step.
+// changed members), and undo the change in one step. And the rows' own
+// controls (answered by the list's one click handler): a row selects, its
+// buttons move, copy and delete it without selecting another, its pick box
+// picks it without selecting it.
 
 import assert from "node:assert/strict";
 import { join } from "node:path";
@@ -102,6 +105,51 @@ export function register(test, { withApp, open, OUT }) {
       await page.locator("[name=list_text]").fill("");
       await page.locator("[name=list_status]").selectOption("");
       await waitForText(tally, (t) => t === `Showing ${ids.length} of ${ids.length} · 2 picked`);
+      assert.deepEqual(log.errors, []);
+    });
+  });
+  test("row-buttons", async () => {
+    await withApp("row-buttons", async (page, log) => {
+      await open(page);
+      const original = await storedMembers(page);
+      const ids = original.map((m) => m.id);
+      const [a, b] = ids;
+      const current = () =>
+        page.locator("[data-testid=member-row]").evaluateAll((els) =>
+          els.filter((e) => e.querySelector(".row-main").getAttribute("aria-current") === "true").map((e) => e.dataset.id),
+        );
+      const button = (name) => page.getByRole("button", { name, exact: true });
+      const waitCurrent = async (id) => {
+        for (let i = 0; i < 50 && (await current()).join() !== id; i += 1) await page.waitForTimeout(100);
+        assert.deepEqual(await current(), [id]);
+      };
+      await page.locator(`[data-testid=member-row][data-id="${b}"] .row-main`).click();
+      await waitCurrent(b);
+
+      await button(`Move ${b} up`).click();
+      await waitCurrent(b);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), [b, a, ...ids.slice(2)]);
+      await button(`Move ${b} down`).click();
+      await waitCurrent(b);
+      assert.deepEqual(await storedMembers(page), original);
+
+      await button(`Copy ${a}`).click();
+      const copied = await storedMembers(page);
+      assert.equal(copied.length, ids.length + 1);
+      const copy = copied[1].id;
+      assert.ok(!ids.includes(copy), `the copy has a new id (${copy})`);
+      assert.deepEqual({ ...copied[1], id: a }, original[0], "the copy is the member");
+      await waitCurrent(copy);
+      await button(`Delete ${copy}`).click();
+      await waitForText(page.locator("[data-testid=undo-bar]"), (t) => t.includes(`"${copy}" deleted`));
+      assert.deepEqual(await storedMembers(page), original);
+
+      await page.locator(`[data-testid=member-row][data-id="${a}"] .row-main`).click();
+      await waitCurrent(a);
+      await page.locator(`[data-testid=member-row][data-id="${b}"] [data-testid=member-pick]`).click();
+      await waitForText(page.locator("[data-testid=list-tally]"), (t) => t.endsWith("· 1 picked"));
+      assert.ok(await page.locator(`[data-testid=member-row][data-id="${b}"] [data-testid=member-pick]`).isChecked());
+      assert.deepEqual(await current(), [a], "picking does not select");
       assert.deepEqual(log.errors, []);
     });
   });

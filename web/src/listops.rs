@@ -320,7 +320,13 @@ impl ListTools {
     pub fn shown(&self, checks: &[Arc<Checked>]) -> Vec<Arc<Checked>> {
         let mut out: Vec<Arc<Checked>> = Vec::with_capacity(checks.len());
         for c in checks.iter().filter(|c| self.keeps(c)) {
-            let at = out.partition_point(|x| self.compare(x, c) != Ordering::Greater);
+            // As entered, every pair is equal: each goes last (the search
+            // would find the end with some ten comparisons a member).
+            let at = if self.order == Order::Entered {
+                out.len()
+            } else {
+                out.partition_point(|x| self.compare(x, c) != Ordering::Greater)
+            };
             out.insert(at, Arc::clone(c));
         }
         out

@@ -241,11 +241,12 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
                 request_animation_frame(move || focus_row(list, &next_id));
             }
         >
-            <ol class="member-list" node_ref=list aria-label="Members">
+            <ol class="member-list" node_ref=list aria-label="Members"
+                on:click=move |e: ev::MouseEvent| row_clicked(ctx, tools, selected_id, &e)>
                 <For
                     each=rows
                     key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
-                    children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id tools=tools /> }
+                    children=move |c| view! { <MemberRow checked=c selected_id=selected_id tools=tools /> }
                 />
             </ol>
         </div>
@@ -276,8 +277,64 @@ fn reveal(
     scroll_top.set(f64::from(el.scroll_top()));
 }
 
+/// Answers a click in the list's rows: the pick box, a row's button by
+/// its `data-act` (up, down, copy, delete) or else the row itself, which
+/// selects it. One handler for every row, so that a row is built with no
+/// listener of its own.
+fn row_clicked(
+    ctx: Ctx,
+    tools: RwSignal<ListTools>,
+    selected_id: Memo<Option<String>>,
+    e: &ev::MouseEvent,
+) {
+    let Some(id) = row_id_of(e) else { return };
+    let act = super::picker_panel::action(e).map(|(act, _)| act);
+    if act.as_deref() == Some("pick") {
+        tools.update(|t| t.toggle(&id));
+        return;
+    }
+    let Some(i) = ctx.index_of(&id) else { return };
+    match act.as_deref() {
+        Some("up") => {
+            if let Some(Some(j)) = ctx.with_members(|ms| listops::move_up(ms, i)) {
+                ctx.select(j);
+            }
+        }
+        Some("down") => {
+            if let Some(Some(j)) = ctx.with_members(|ms| listops::move_down(ms, i)) {
+                ctx.select(j);
+            }
+        }
+        Some("copy") => {
+            if let Some(Some(j)) = ctx.with_members(|ms| listops::duplicate(ms, i)) {
+                ctx.select(j);
+            }
+        }
+        Some("delete") => {
+            let list = ctx.ws.with_untracked(|w| w.active);
+            if let Some(Some(d)) = ctx.with_members(|ms| listops::delete(ms, i)) {
+                ctx.undo.set(Some(Undo::Member {
+                    list,
+                    deleted: Box::new(d),
+                }));
+                let len = ctx
+                    .ws
+                    .with_untracked(|w| w.active_list().map_or(0, |l| l.members.len()));
+                ctx.select(i.min(len.saturating_sub(1)));
+            }
+        }
+        _ => {
+            if ctx.selected.get_untracked() != i
+                || selected_id.with_untracked(|s| s.as_deref() != Some(id.as_str()))
+            {
+                ctx.select(i);
+            }
+        }
+    }
+}
+
 /// The id of the row an event came from.
-fn row_id_of(e: &ev::KeyboardEvent) -> Option<String> {
+fn row_id_of(e: &web_sys::Event) -> Option<String> {
     let t: web_sys::Element = wasm_bindgen::JsCast::dyn_into(e.target()?).ok()?;
     t.closest("[data-testid=member-row]")
         .ok()??
@@ -305,7 +362,6 @@ fn focus_row(list: NodeRef<leptos::html::Ol>, id: &str) {
 
 #[component]
 pub(super) fn MemberRow(
-    ctx: Ctx,
     checked: Arc<Checked>,
     selected_id: Memo<Option<String>>,
     tools: RwSignal<ListTools>,
@@ -330,7 +386,6 @@ pub(super) fn MemberRow(
     let id_sel = id.clone();
     let is_selected =
         Memo::new(move |_| selected_id.with(|s| s.as_deref() == Some(id_sel.as_str())));
-    let (i1, i2, i3, i4, i5) = (id.clone(), id.clone(), id.clone(), id.clone(), id.clone());
     let i6 = id.clone();
     view! {
         <li
@@ -338,18 +393,6 @@ pub(super) fn MemberRow(
             class:selected=move || is_selected.get()
             data-testid="member-row"
             data-id=id.clone()
-            on:click=move |e: ev::MouseEvent| {
-                // The pick box answers here, so the row is not selected.
-                if super::picker_panel::action(&e).is_some_and(|(act, _)| act == "pick") {
-                    tools.update(|t| t.toggle(&i1));
-                    return;
-                }
-                if let Some(i) = ctx.index_of(&i1) {
-                    if ctx.selected.get_untracked() != i || !is_selected.get_untracked() {
-                        ctx.select(i);
-                    }
-                }
-            }
         >
             <input type="checkbox" class="row-pick" data-testid="member-pick" data-act="pick" data-v=""
                 aria-label=format!("Pick {id}") prop:checked=move || tools.with(|t| t.is_picked(&i6)) />
@@ -363,36 +406,12 @@ pub(super) fn MemberRow(
                 <span class="row-util" data-testid="member-utilisation">{util}</span>
                 <span class="row-detail">{detail}</span>
             </button>
+            // Answered by the list's one click handler (row_clicked).
             <div class="row-actions">
-                <button type="button" aria-label=format!("Move {id} up")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i2) {
-                        if let Some(Some(j)) = ctx.with_members(|ms| listops::move_up(ms, i)) { ctx.select(j); }
-                    }
-                }>"↑"</button>
-                <button type="button" aria-label=format!("Move {id} down")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i3) {
-                        if let Some(Some(j)) = ctx.with_members(|ms| listops::move_down(ms, i)) { ctx.select(j); }
-                    }
-                }>"↓"</button>
-                <button type="button" data-testid="duplicate-member" aria-label=format!("Copy {id}")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i4) {
-                        if let Some(Some(j)) = ctx.with_members(|ms| listops::duplicate(ms, i)) { ctx.select(j); }
-                    }
-                }>"Copy"</button>
-                <button type="button" data-testid="delete-member" aria-label=format!("Delete {id}")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i5) {
-                        let list = ctx.ws.with_untracked(|w| w.active);
-                        if let Some(Some(d)) = ctx.with_members(|ms| listops::delete(ms, i)) {
-                            ctx.undo.set(Some(Undo::Member { list, deleted: Box::new(d) }));
-                            let len = ctx.ws.with_untracked(|w| w.active_list().map_or(0, |l| l.members.len()));
-                            ctx.select(i.min(len.saturating_sub(1)));
-                        }
-                    }
-                }>"Delete"</button>
+                <button type="button" data-act="up" data-v="" aria-label=format!("Move {id} up")>"↑"</button>
+                <button type="button" data-act="down" data-v="" aria-label=format!("Move {id} down")>"↓"</button>
+                <button type="button" data-act="copy" data-v="" data-testid="duplicate-member" aria-label=format!("Copy {id}")>"Copy"</button>
+                <button type="button" data-act="delete" data-v="" data-testid="delete-member" aria-label=format!("Delete {id}")>"Delete"</button>
             </div>
         </li>
     }

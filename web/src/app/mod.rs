@@ -198,6 +198,46 @@ fn key_of<T: std::hash::Hash>(t: &T) -> u64 {
     h.finish()
 }
 
+/// Listens to the window: another tab's save, a resize or turn of the
+/// screen, focus (the on-screen keyboard), the page hidden or left.
+fn listen(ctx: Ctx) {
+    let storage_listener = window_event_listener(ev::storage, move |e| {
+        if e.key().as_deref() != Some(KEY) {
+            return;
+        }
+        if let Some(text) = e.new_value() {
+            if peek_revision(&text) != Some(ctx.loaded_rev.get_value()) {
+                ctx.other_tab.set(Some(text));
+            }
+        }
+    });
+    let resize_listener = window_event_listener(ev::resize, move |_| {
+        ctx.resize.update(|n| *n += 1);
+        // The on-screen keyboard came or went: the field stays in view.
+        browser::reveal_focused_field();
+    });
+    let focus_listener = window_event_listener(ev::focusin, move |_| {
+        // After the on-screen keyboard has had time to come up.
+        set_timeout(
+            browser::reveal_focused_field,
+            std::time::Duration::from_millis(350),
+        );
+    });
+    let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
+    let visibility_listener =
+        window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
+    let orient_listener =
+        window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
+    on_cleanup(move || {
+        storage_listener.remove();
+        resize_listener.remove();
+        focus_listener.remove();
+        orient_listener.remove();
+        hide_listener.remove();
+        visibility_listener.remove();
+    });
+}
+
 mod banners;
 mod editor;
 mod frame;
@@ -370,52 +410,30 @@ pub fn App() -> impl IntoView {
             drafts.set(d);
         }
     });
-    Effect::new(move |_| {
+    // The theme as stored (absent: standard); written when it is changed.
+    Effect::new(move |prev: Option<()>| {
         let on = high_contrast.get();
         browser::body_class("high-contrast", on);
-        let _ = browser::set(THEME_KEY, if on { "high-contrast" } else { "standard" });
-    });
-    let storage_listener = window_event_listener(ev::storage, move |e| {
-        if e.key().as_deref() != Some(KEY) {
-            return;
-        }
-        if let Some(text) = e.new_value() {
-            if peek_revision(&text) != Some(ctx.loaded_rev.get_value()) {
-                ctx.other_tab.set(Some(text));
-            }
+        if prev.is_some() {
+            let _ = browser::set(THEME_KEY, if on { "high-contrast" } else { "standard" });
         }
     });
-    let resize_listener = window_event_listener(ev::resize, move |_| {
-        ctx.resize.update(|n| *n += 1);
-        // The on-screen keyboard came or went: the field stays in view.
-        browser::reveal_focused_field();
-    });
-    let focus_listener = window_event_listener(ev::focusin, move |_| {
-        // After the on-screen keyboard has had time to come up.
-        set_timeout(
-            browser::reveal_focused_field,
-            std::time::Duration::from_millis(350),
-        );
-    });
-    let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
-    let visibility_listener =
-        window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
-    let orient_listener =
-        window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
-    on_cleanup(move || {
-        storage_listener.remove();
-        resize_listener.remove();
-        focus_listener.remove();
-        orient_listener.remove();
-        hide_listener.remove();
-        visibility_listener.remove();
-    });
-    // The offline copy after the first frame (a task after it), not in
-    // start(): the worker's install fetches every file of dist/ and
-    // competed with the first frame (bench/first-frame.md).
+    // The page's listeners and the offline copy after the first frame (a
+    // task after it), not in start(): there is nothing to save or reveal
+    // before the page is seen, another tab's save is still found by the
+    // next save (`save::decide` reads the stored revision), and the
+    // worker's install fetches every file of dist/ and competed with the
+    // first frame (bench/first-frame.md).
+    let owner = Owner::current();
     request_animation_frame(move || {
         set_timeout(
-            move || browser::register_service_worker(move || ctx.update_ready.set(true)),
+            move || {
+                browser::register_service_worker(move || ctx.update_ready.set(true));
+                match owner {
+                    Some(o) => o.with(|| listen(ctx)),
+                    None => listen(ctx),
+                }
+            },
             std::time::Duration::ZERO,
         );
     });
