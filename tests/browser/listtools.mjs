@@ -6,11 +6,14 @@
 // changed members), and undo the change in one step. And the rows' own
 // controls (answered by the list's one click handler): a row selects, its
 // buttons move, copy and delete it without selecting another, its pick box
-// picks it without selecting it.
+// picks it without selecting it. And the first frame of a stored
+// 1,000-member list, in each layout: its rows fill the list's box (it
+// builds only as many as the box can show, listops::first_view_px, which
+// mirrors the box's heights in style.css).
 
 import assert from "node:assert/strict";
 import { join } from "node:path";
-import { cliCheck, memberFile, STORAGE_KEY, waitForText } from "./lib.mjs";
+import { cliCheck, memberFile, seedStorage, STORAGE_KEY, thousandMembers, waitForText, workspaceText } from "./lib.mjs";
 
 async function storedMembers(page) {
   await page.waitForTimeout(600);
@@ -152,5 +155,39 @@ export function register(test, { withApp, open, OUT }) {
       assert.deepEqual(await current(), [a], "picking does not select");
       assert.deepEqual(log.errors, []);
     });
+  });
+
+  test("first-frame-fills-list-box", async () => {
+    const layouts = [
+      ["desktop", { viewport: { width: 1280, height: 900 } }],
+      ["landscape", { viewport: { width: 1180, height: 820 }, hasTouch: true }],
+      ["wide", { viewport: { width: 1920, height: 1080 } }],
+      ["portrait", { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true }],
+      ["phone", { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true }],
+    ];
+    for (const [name, options] of layouts) {
+      await withApp(`first-frame-${name}`, async (page, log, context) => {
+        await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers())]));
+        // At the first animation frame after the first row is in the page.
+        await context.addInitScript(() => {
+          const seen = new MutationObserver(() => {
+            if (!document.querySelector("[data-testid=member-row]")) return;
+            seen.disconnect();
+            requestAnimationFrame(() => {
+              const box = document.querySelector("[data-testid=member-scroll]").getBoundingClientRect();
+              const rows = [...document.querySelectorAll("[data-testid=member-row]")];
+              window.__firstFrame = { rows: rows.length, last: rows.at(-1).getBoundingClientRect().bottom, box: box.bottom, height: box.height };
+            });
+          });
+          seen.observe(document, { childList: true, subtree: true });
+        });
+        await open(page);
+        const f = await page.waitForFunction(() => window.__firstFrame).then((h) => h.jsonValue());
+        log.errors.length || console.log(`     ${name}: ${f.rows} rows built, the box ${f.height.toFixed(0)} px tall`);
+        assert.ok(f.height > 100, `${name}: the list's box is laid out (${f.height} px)`);
+        assert.ok(f.last >= f.box, `${name}: the first frame's ${f.rows} rows end at ${f.last} px, the box at ${f.box} px`);
+        assert.deepEqual(log.errors, []);
+      }, options);
+    }
   });
 }

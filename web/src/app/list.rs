@@ -154,7 +154,11 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     let scroller = NodeRef::<leptos::html::Div>::new();
     let list = NodeRef::<leptos::html::Ol>::new();
     let scroll_top = RwSignal::new(0.0f64);
-    let view_px = RwSignal::new(browser::inner_height());
+    // Until the box is laid out, the most of it that can be in view.
+    let view_px = RwSignal::new(listops::first_view_px(
+        browser::inner_width(),
+        browser::inner_height(),
+    ));
     // No rows beyond the view before the first frame.
     let overscan = move || {
         if ctx.painted.get() {

@@ -290,12 +290,13 @@ pub fn App() -> impl IntoView {
         let mut out = ws.with(|w| {
             let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
             // The first frame checks the rows it shows (the list opens
-            // unfiltered, in its own order, at the top: the first
-            // screenful, listops::window without the rows beyond the view)
-            // and the member selected; the rest follow, a slice between
-            // frames.
+            // unfiltered, in its own order, at the top: as many rows as
+            // the list's box can show, listops::first_view_px, without the
+            // rows beyond the view) and the member selected; the rest
+            // follow, a slice between frames.
             let limit = if prev.is_none() {
-                listops::window(0.0, browser::inner_height(), members.len(), 0).1
+                let view = listops::first_view_px(browser::inner_width(), browser::inner_height());
+                listops::window(0.0, view, members.len(), 0).1
             } else {
                 SLICE
             };
