@@ -3,10 +3,10 @@
 // filter by text and by status, pick two members, open the change form,
 // refuse a bad factor, change
 // their method (the utilisations shown are the command line's for the
-// changed members), and undo the change in one step. And the rows' own
-// controls (answered by the list's one click handler): a row selects, its
-// buttons move, copy and delete it without selecting another, its pick box
-// picks it without selecting it. And the first frame of a stored
+// changed members), and undo the change in one step. And the row's own
+// controls (answered by the list's one click handler): a click on the row
+// selects it, its pick box picks it without selecting it. And the first
+// frame of a stored
 // 1,000-member list, in each layout: its rows fill the list's box (it
 // builds only as many as the box can show, listops::first_view_px, which
 // mirrors the box's heights in style.css).
@@ -34,6 +34,9 @@ export function register(test, { withApp, open, OUT }) {
   test("list-tools", async () => {
     await withApp("list-tools", async (page, log) => {
       await open(page);
+      // The tools are folded under the list's heading until opened.
+      assert.equal(await page.locator("[name=list_order]").isVisible(), false, "the tools start folded");
+      await page.locator("[data-testid=list-tools-fold] > summary").click();
       const rows = page.locator("[data-testid=member-row]");
       const shown = () => rows.evaluateAll((els) => els.map((e) => e.dataset.id));
       const utilOf = (id) => page.locator(`[data-testid=member-row][data-id="${id}"] [data-testid=member-utilisation]`);
@@ -111,52 +114,34 @@ export function register(test, { withApp, open, OUT }) {
       assert.deepEqual(log.errors, []);
     });
   });
-  test("row-buttons", async () => {
-    await withApp("row-buttons", async (page, log) => {
+  test("row-select-and-pick", async () => {
+    await withApp("row-select-and-pick", async (page, log) => {
       await open(page);
-      const original = await storedMembers(page);
-      const ids = original.map((m) => m.id);
+      const ids = (await storedMembers(page)).map((m) => m.id);
       const [a, b] = ids;
       const current = () =>
         page.locator("[data-testid=member-row]").evaluateAll((els) =>
           els.filter((e) => e.querySelector(".row-main").getAttribute("aria-current") === "true").map((e) => e.dataset.id),
         );
-      const button = (name) => page.getByRole("button", { name, exact: true });
       const waitCurrent = async (id) => {
         for (let i = 0; i < 50 && (await current()).join() !== id; i += 1) await page.waitForTimeout(100);
         assert.deepEqual(await current(), [id]);
       };
-      await page.locator(`[data-testid=member-row][data-id="${b}"] .row-main`).click();
+      const row = (id) => page.locator(`[data-testid=member-row][data-id="${id}"]`);
+      await row(b).locator(".row-main").click();
       await waitCurrent(b);
-
-      await button(`Move ${b} up`).click();
-      await waitCurrent(b);
-      assert.deepEqual((await storedMembers(page)).map((m) => m.id), [b, a, ...ids.slice(2)]);
-      await button(`Move ${b} down`).click();
-      await waitCurrent(b);
-      assert.deepEqual(await storedMembers(page), original);
-
-      await button(`Copy ${a}`).click();
-      const copied = await storedMembers(page);
-      assert.equal(copied.length, ids.length + 1);
-      const copy = copied[1].id;
-      assert.ok(!ids.includes(copy), `the copy has a new id (${copy})`);
-      assert.deepEqual({ ...copied[1], id: a }, original[0], "the copy is the member");
-      await waitCurrent(copy);
-      await button(`Delete ${copy}`).click();
-      await waitForText(page.locator("[data-testid=undo-bar]"), (t) => t.includes(`"${copy}" deleted`));
-      assert.deepEqual(await storedMembers(page), original);
-
-      await page.locator(`[data-testid=member-row][data-id="${a}"] .row-main`).click();
-      await waitCurrent(a);
-      await page.locator(`[data-testid=member-row][data-id="${b}"] [data-testid=member-pick]`).click();
+      await row(a).locator("[data-testid=member-pick]").click();
       await waitForText(page.locator("[data-testid=list-tally]"), (t) => t.endsWith("· 1 picked"));
-      assert.ok(await page.locator(`[data-testid=member-row][data-id="${b}"] [data-testid=member-pick]`).isChecked());
-      assert.deepEqual(await current(), [a], "picking does not select");
+      assert.ok(await row(a).locator("[data-testid=member-pick]").isChecked());
+      assert.deepEqual(await current(), [b], "picking does not select");
+      await row(a).locator(".row-id").click();
+      await waitCurrent(a);
+      await row(a).locator("[data-testid=member-pick]").click();
+      await waitForText(page.locator("[data-testid=list-tally]"), (t) => !t.includes("picked"));
+      assert.deepEqual(await current(), [a]);
       assert.deepEqual(log.errors, []);
     });
   });
-
   test("first-frame-fills-list-box", async () => {
     const layouts = [
       ["desktop", { viewport: { width: 1280, height: 900 } }],
@@ -189,5 +174,67 @@ export function register(test, { withApp, open, OUT }) {
         assert.deepEqual(log.errors, []);
       }, options);
     }
+  });
+
+  test("list-name-and-member-actions", async () => {
+    await withApp("list-name-and-member-actions", async (page, log) => {
+      await open(page);
+      const rows = page.locator("[data-testid=member-row]");
+      const shown = () => rows.evaluateAll((els) => els.map((e) => e.dataset.id));
+      const original = (await storedMembers(page)).map((m) => m.id);
+      const title = page.locator("#list-title");
+      const fold = page.locator("[data-testid=list-rename]");
+
+      // The member being edited moves, is copied and is deleted from its
+      // editor; a deletion can be undone.
+      await rows.first().locator(".row-main").click();
+      const first = original[0];
+      await page.locator("[data-testid=move-member-down]").click();
+      await waitForText(rows.nth(1), () => true);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id).slice(0, 2), [original[1], first], "moved down");
+      assert.equal(await page.locator("[data-testid=move-member-down]").getAttribute("aria-label"), `Move ${first} down`);
+      await page.locator("[data-testid=move-member-up]").click();
+      await page.waitForTimeout(300);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), original, "moved back up");
+      await page.locator("[data-testid=duplicate-member]").click();
+      await page.waitForTimeout(300);
+      const copied = (await storedMembers(page)).map((m) => m.id);
+      assert.equal(copied.length, original.length + 1, "copied");
+      const copy = copied.find((id) => !original.includes(id));
+      assert.ok(copy, "the copy has a new id");
+      await page.locator("[data-testid=delete-member]").click();
+      await page.waitForTimeout(300);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), original, "the copy deleted");
+      await page.locator("[data-testid=undo]").click();
+      await page.waitForTimeout(300);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), copied, "the deletion undone");
+      assert.ok((await shown()).includes(copy));
+
+      // Two new lists, named; the first deleted while open: the name field
+      // then shows the list that is open, and typing renames that one.
+      for (const name of ["List AAA", "List BBB"]) {
+        await page.locator("[data-testid=new-list]").click();
+        if (!(await title.isVisible())) await fold.locator("summary").click();
+        await title.fill(name);
+      }
+      const select = page.locator("[data-testid=list-select]");
+      const labelOf = async () => (await select.locator("option:checked").textContent()).trim();
+      await select.selectOption({ label: "List AAA" });
+      await waitForText(title, () => true);
+      assert.equal(await title.inputValue(), "List AAA");
+      if (!(await page.locator("[data-testid=delete-list]").isVisible())) await fold.locator("summary").click();
+      await page.locator("[data-testid=delete-list]").click();
+      await page.waitForTimeout(300);
+      const nowOpen = await labelOf();
+      assert.notEqual(nowOpen, "List AAA", "the deleted list is not open");
+      if (!(await title.isVisible())) await fold.locator("summary").click();
+      assert.equal(await title.inputValue(), nowOpen, "the name field shows the open list's name");
+      await title.fill(`${nowOpen} renamed`);
+      await page.waitForTimeout(300);
+      const titles = await page.evaluate((k) => JSON.parse(localStorage.getItem(k)).lists.map((l) => l.title), STORAGE_KEY);
+      assert.ok(titles.includes(`${nowOpen} renamed`), "the open list is the one renamed");
+      assert.ok(!titles.includes("List AAA"), "the deleted list stays deleted");
+      assert.deepEqual(log.errors, []);
+    });
   });
 }

@@ -452,9 +452,9 @@ impl ListTools {
 }
 
 /// Height of a member row and the gap after it, in CSS pixels: the rows
-/// have a fixed height in `style.css` (`.member-row`, 104 px, and the
+/// have a fixed height in `style.css` (`.member-row`, 64 px, and the
 /// list's gap, 6 px), so the list can build only the rows in view.
-pub const ROW_PITCH_PX: f64 = 110.0;
+pub const ROW_PITCH_PX: f64 = 70.0;
 
 /// Rows built beyond each edge of the part in view, so a fling or a Tab
 /// finds rows already there (from the second frame on: the first frame
@@ -480,8 +480,8 @@ pub fn window(scroll_top: f64, view_px: f64, n: usize, overscan: usize) -> (usiz
 
 /// The most the list's box can be in view before the first layout, for a
 /// window `width` by `height` CSS px: style.css makes `.member-scroll`
-/// 42vh tall on a narrow or upright screen and max(16rem, 100dvh - 30rem)
-/// on a wide one lying down (change both together). Taken with room to
+/// 42vh tall on a narrow or upright screen and max(16rem, 100dvh -
+/// 29.5rem) on a wide one lying down (change both together). Taken with room to
 /// spare, so that the first frame's rows fill the box whatever the font
 /// size or browser: a rem anywhere from 8 to 32 px, a vh up to 200 px more
 /// than the window's height (a phone's vh is its largest viewport, with
@@ -490,7 +490,7 @@ pub fn window(scroll_top: f64, view_px: f64, n: usize, overscan: usize) -> (usiz
 pub fn first_view_px(width: f64, height: f64) -> f64 {
     let wide = width >= 1000.0 && width > height;
     let most = if wide {
-        (16.0 * 32.0f64).max(height - 30.0 * 8.0)
+        (16.0 * 32.0f64).max(height - 29.5 * 8.0)
     } else {
         0.42 * (height + 200.0)
     };
@@ -806,9 +806,10 @@ mod tests {
 
     #[test]
     fn the_window_holds_what_is_in_view_and_no_more() {
-        // 800 px of a 1,000-row list at the top: 8 rows in view (+1
-        // partly), 8 more below; the rest stood in for.
-        assert_eq!(window(0.0, 800.0, 1000, OVERSCAN), (0, 17));
+        // 800 px of a 1,000-row list at the top: 11 rows in view (+1
+        // partly, +1 for a scroll between rows), 8 more below; the rest
+        // stood in for.
+        assert_eq!(window(0.0, 800.0, 1000, OVERSCAN), (0, 21));
         // The first frame's view: at least the box style.css gives, at
         // most the window.
         for (w, h) in [
@@ -817,8 +818,8 @@ mod tests {
             (1920.0, 1080.0),
             (1000.0, 999.0),
         ] {
-            let rem_16 = (16.0f64 * 16.0).max(h - 30.0 * 16.0);
-            let rem_24 = (16.0f64 * 24.0).max(h - 30.0 * 24.0);
+            let rem_16 = (16.0f64 * 16.0).max(h - 29.5 * 16.0);
+            let rem_24 = (16.0f64 * 24.0).max(h - 29.5 * 24.0);
             let v = first_view_px(w, h);
             assert!(v >= rem_16 && v >= rem_24.min(h) && v <= h, "{w}x{h}: {v}");
         }
@@ -835,12 +836,12 @@ mod tests {
             window(0.0, first_view_px(1280.0, 900.0), 1000, 0).1 < window(0.0, 900.0, 1000, 0).1
         );
         // The first frame: what is in view, nothing beyond it.
-        assert_eq!(window(0.0, 800.0, 1000, 0), (0, 9));
+        assert_eq!(window(0.0, 800.0, 1000, 0), (0, 13));
         // Scrolled to row 500: 8 rows above it and below the view.
         let (a, b) = window(500.0 * ROW_PITCH_PX, 800.0, 1000, OVERSCAN);
-        assert_eq!((a, b), (492, 517));
+        assert_eq!((a, b), (492, 521));
         assert!(b - a < 30, "the window does not grow with the list");
-        assert_eq!(window(500.0 * ROW_PITCH_PX, 800.0, 1000, 0), (500, 509));
+        assert_eq!(window(500.0 * ROW_PITCH_PX, 800.0, 1000, 0), (500, 513));
         // The end of the list, short lists, nonsense input.
         assert_eq!(window(1e9, 800.0, 1000, OVERSCAN), (1000, 1000));
         assert_eq!(window(0.0, 800.0, 3, OVERSCAN), (0, 3));
