@@ -385,7 +385,7 @@ fn cells(m: &Member, r: &CheckResult) -> [String; 8] {
         r.method.key().to_string(),
         format!("{:.1}", m.axial_kn),
         format!("{:.1}", r.resistance_kn),
-        format!("{:.3}", r.utilisation),
+        strutline_core::outcome::utilisation_text(r.utilisation, 3).into_owned(),
         r.governing_check.to_string(),
         if r.passes { "ok".into() } else { "OVER".into() },
     ]

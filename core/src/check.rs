@@ -5,6 +5,7 @@
 //! the working.
 
 pub mod buckle;
+pub mod plausible;
 pub mod reach;
 
 use serde::Serialize;
@@ -774,6 +775,8 @@ fn work(
         }
     };
     interaction::warn_unused_lengths(m, method, warnings);
+    plausible::warn_theoretical_k(m, warnings);
+    plausible::warn_short_length(m, input.section, warnings);
     let (strength_mpa, modulus_mpa) = input.material.strength_and_modulus();
     let passes = passes && within_limits(method, modes);
     Ok(Verdict {

@@ -986,6 +986,15 @@ impl Method {
         Method::ALL.into_iter().find(|m| m.key() == key)
     }
 
+    /// Whether the method compares its resistance with a service load
+    /// (AISC 360-16 ASD: the required strength from the ASD load
+    /// combinations against R_n / Omega) rather than a factored, design load
+    /// (every other method here). A member's `axial_kn` and moments are one
+    /// or the other, so a change of method across the two needs new loads.
+    pub fn takes_service_load(self) -> bool {
+        matches!(self, Method::AiscAsd)
+    }
+
     /// Whether the method is for timber (true) or for steel and custom elastic materials (false).
     pub fn is_timber(self) -> bool {
         matches!(self, Method::En1995)

@@ -56,6 +56,28 @@ pub struct ModeResult {
     pub resistance_kn: f64,
 }
 
+/// The words every front end writes for a utilisation that has no finite
+/// value (the command line's table, the app's verdict, list rows, working
+/// and calc sheet; the JSON keeps `null`). The engine's utilisation is not
+/// finite only where a capacity is zero: an axial load at or beyond an
+/// elastic critical load, where the amplification of the beam-column
+/// equations (EN 1993-1-1 Annex A/B, AISC 360-16 B1, CSA S16-19 U_1) has no
+/// finite value. A dash would read as "not checked".
+pub const BEYOND_CRITICAL: &str = "beyond N_cr";
+
+/// A utilisation as every front end writes it: to `decimals` places, or
+/// [`BEYOND_CRITICAL`] where it is infinite ("not a number" for NaN, which
+/// the engine never gives).
+pub fn utilisation_text(utilisation: f64, decimals: usize) -> Cow<'static, str> {
+    if utilisation.is_finite() {
+        Cow::Owned(format!("{utilisation:.decimals$}"))
+    } else if utilisation.is_nan() {
+        Cow::Borrowed("not a number")
+    } else {
+        Cow::Borrowed(BEYOND_CRITICAL)
+    }
+}
+
 /// A caution attached to a result.
 ///
 /// Its message is a text with, where it gives the member's numbers or
@@ -226,6 +248,25 @@ const MARK: &str = "{}";
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// An infinite utilisation is words, not a dash or "inf" (review N4).
+    #[test]
+    fn a_utilisation_beyond_the_critical_load_is_words() {
+        assert_eq!(utilisation_text(0.6334, 3), "0.633");
+        assert_eq!(utilisation_text(f64::INFINITY, 3), "beyond N_cr");
+        assert_eq!(utilisation_text(f64::NAN, 3), "not a number");
+        // HE 200 B S355, 4 m, N_Ed = 3114 kN with end moments 50 / -25 kNm:
+        // N_Ed / N_cr,z = 1.2, the Annex B factors have no finite value.
+        let m: crate::member::Member = serde_json::from_value(serde_json::json!({
+            "id": "C1", "section": {"kind": "catalogue", "designation": "HE 200 B"},
+            "material": {"grade": "S355"}, "length_mm": 4000, "axial_kn": 3114,
+            "m_major_a_knm": 50, "m_major_b_knm": -25, "method": "en1993-1-1"
+        }))
+        .unwrap();
+        let r = crate::check::check_member(&m).unwrap();
+        assert!(!r.passes);
+        assert_eq!(utilisation_text(r.utilisation, 3), BEYOND_CRITICAL);
+    }
 
     #[test]
     fn a_force_reads_in_kn_in_si_and_in_kip_in_us() {

@@ -438,9 +438,10 @@ fn moments_leave_the_axial_side_alone_or_are_the_secant_eccentricity() {
                     continue;
                 }
                 // Secant: the same as the eccentricity e0 + |M| / N given
-                // about that axis; the other axis keeps e0 (= L / 1000).
+                // about that axis; the other axis keeps e0 (= L / 200, the default:
+                // EN 1993-1-1 Table 5.1, curve c).
                 let moment = moments.0.max(moments.1);
-                let e0 = length / 1000.0;
+                let e0 = length / 200.0;
                 let mut ecc = member(method, &section, &material, length, n, (0.0, 0.0));
                 ecc.eccentricity_mm = Some(e0 + moment * 1000.0 / n);
                 let by_e = check_member(&ecc).unwrap();

@@ -81,16 +81,16 @@ fn equal_minor_moments_are_the_eccentricity() {
 }
 
 #[test]
-fn equal_major_moments_with_the_default_eccentricity() {
+fn equal_major_moments_with_a_given_eccentricity() {
     // N = 200 kN, M_y = -1.0 kNm at both ends (the sign does not matter),
-    // no eccentricity_mm: L/1000 = 2 mm about each axis, plus 1.0e6 / 200e3
+    // eccentricity_mm = 2 (L/1000) about each axis, plus 1.0e6 / 200e3
     // = 5 mm about the major axis: e_y = 7 mm. Python: N_R,y =
     // 1185.9762729600523 kN, secant check 200 / 1185.976 =
     // 0.1686374378307117; the minor axis at e = 2 mm, N_R,z =
     // 840.3726509601341 kN, governs the member at 0.2379896582444681.
     let r = check_member(&bar(
         200.0,
-        json!({"m_major_a_knm": -1.0, "m_major_b_knm": -1.0}),
+        json!({"m_major_a_knm": -1.0, "m_major_b_knm": -1.0, "eccentricity_mm": 2.0}),
     ))
     .unwrap();
     assert_close(
@@ -107,6 +107,36 @@ fn equal_major_moments_with_the_default_eccentricity() {
     );
     assert_eq!(r.governing_check, "minor");
     assert_eq!(r.governing, Mode::Minor);
+}
+
+#[test]
+fn equal_major_moments_with_the_default_eccentricity() {
+    // As above without eccentricity_mm: the default is L/200 = 10 mm about
+    // each axis (EN 1993-1-1:2005 Table 5.1, equivalent bow for curve c in
+    // an elastic analysis, 1/200, recalled from memory), plus 5 mm about
+    // the major axis: e_y = 15 mm. Python (bisection of the secant
+    // condition, 200 halvings): N_R,y = 900.3579977499611 kN, secant check
+    // 200 / 900.358 = 0.22213386286322756; the minor axis at e = 10 mm,
+    // N_R,z = 544.2944573374937 kN, governs at 0.36744816579307654.
+    let r = check_member(&bar(
+        200.0,
+        json!({"m_major_a_knm": -1.0, "m_major_b_knm": -1.0}),
+    ))
+    .unwrap();
+    assert_close(
+        r.interaction[0].utilisation,
+        0.22213386286322756,
+        CLOSED_FORM,
+        "N / N_R,y",
+    );
+    assert_close(
+        r.utilisation,
+        0.36744816579307654,
+        CLOSED_FORM,
+        "N / N_R,z governs",
+    );
+    assert_eq!(r.governing_check, "minor");
+    assert!(r.warnings.iter().any(|w| w.code == "imperfection-default"));
 }
 
 #[test]

@@ -426,6 +426,22 @@ impl ListTools {
             return Err("No member is picked: tick the box of each member to change.".into());
         }
         let before = members.to_vec();
+        // Members whose load changes basis with the method: a service load
+        // (AISC ASD) kept for a method that needs the factored load, or
+        // the reverse.
+        let (mut to_factored, mut to_service) = (0usize, 0usize);
+        for m in members.iter().filter(|m| self.is_picked(&m.id)) {
+            match method {
+                Some(x) if x.takes_service_load() != m.method.takes_service_load() => {
+                    if x.takes_service_load() {
+                        to_service += 1;
+                    } else {
+                        to_factored += 1;
+                    }
+                }
+                _ => {}
+            }
+        }
         for m in members.iter_mut().filter(|m| self.is_picked(&m.id)) {
             if !grade.is_empty() {
                 m.material = MaterialSpec::Grade {
@@ -447,8 +463,39 @@ impl ListTools {
         what.push_str(" for ");
         what.push_str(&n.to_string());
         what.push_str(if n == 1 { " member." } else { " members." });
+        what.push_str(&load_basis_note(to_factored, to_service));
         Ok((before, what))
     }
+}
+
+/// What the change's sentence adds where a method change crosses load
+/// bases ([`Method::takes_service_load`]): the loads were kept, and which
+/// load the new method needs. Empty where none crosses.
+fn load_basis_note(to_factored: usize, to_service: usize) -> String {
+    let mut note = String::new();
+    let count = |n: usize| {
+        if n == 1 {
+            "1 member".to_string()
+        } else {
+            format!("{n} members")
+        }
+    };
+    if to_factored > 0 {
+        note.push_str(&format!(
+            " The loads were kept: for {} that left AISC ASD, whose N_Ed and moments are service \
+             loads, a limit-state method needs the factored loads; type them.",
+            count(to_factored)
+        ));
+    }
+    if to_service > 0 {
+        note.push_str(&format!(
+            " The loads were kept: for {} now under AISC ASD, which takes service loads, the \
+             factored N_Ed and moments of the limit-state method are too large; type the \
+             service loads.",
+            count(to_service)
+        ));
+    }
+    note
 }
 
 /// Height of a member row and the gap after it, in CSS pixels: the rows
@@ -765,6 +812,48 @@ mod tests {
                 grade: "S355".into()
             }
         );
+    }
+
+    /// A method change across load bases says the loads were kept and
+    /// which load the new method needs (review N25: AISC ASD's 45 kip
+    /// service load went on as a CSA S16 factored load with no note).
+    #[test]
+    fn a_change_across_load_bases_says_the_load_was_kept() {
+        let mut ms = mixed();
+        ms[0].method = Method::AiscAsd;
+        ms[1].method = Method::En1993;
+        let mut t = ListTools::default();
+        t.toggle(&ms[0].id.clone());
+        t.toggle(&ms[1].id.clone());
+        t.set("change_method", "csa-s16");
+        let (before, what) = t.apply(&mut ms).unwrap();
+        assert!(
+            what.ends_with(
+                "for 2 members. The loads were kept: for 1 member that left AISC ASD, whose N_Ed \
+                 and moments are service loads, a limit-state method needs the factored loads; \
+                 type them."
+            ),
+            "{what}"
+        );
+        ms.clone_from_slice(&before);
+        t.set("change_method", "aisc360-asd");
+        let (_, what) = t.apply(&mut ms).unwrap();
+        assert!(
+            what.contains("for 1 member now under AISC ASD, which takes service loads")
+                && !what.contains("left AISC ASD"),
+            "{what}"
+        );
+        // The same basis: nothing added.
+        ms.clone_from_slice(&before);
+        t.set("change_method", "en1993-1-1");
+        let (_, what) = t.apply(&mut ms).unwrap();
+        assert!(
+            what.contains("left AISC ASD") && !what.contains("now under"),
+            "{what}"
+        );
+        ms[0].method = Method::CsaS16;
+        let (_, what) = t.apply(&mut ms).unwrap();
+        assert!(!what.contains("loads were kept"), "{what}");
     }
 
     #[test]

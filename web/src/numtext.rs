@@ -77,6 +77,13 @@ pub fn fixed(v: f64, decimals: usize) -> String {
     }
 }
 
+/// A utilisation to three decimals, in words where it has no finite value
+/// (core's `outcome::utilisation_text`, the one text the command line
+/// writes too: "beyond N_cr", never the dash that means "not checked").
+pub fn utilisation(v: f64) -> String {
+    strutline_core::outcome::utilisation_text(v, 3).into_owned()
+}
+
 /// A value of the working, with about four significant figures; very large
 /// or very small magnitudes in powers of ten ("1.234e6").
 pub fn working(v: f64) -> String {

@@ -11,7 +11,7 @@ use strutline_core::{check_member, Member};
 
 use crate::html;
 use crate::html::Html;
-use crate::numtext::fixed;
+use crate::numtext::{fixed, utilisation};
 
 /// Most candidates listed at once.
 pub const MAX_ROWS: usize = 80;
@@ -171,7 +171,7 @@ pub fn propose(members: &[Member], series: &str, shape: &str, limit: f64) -> Vec
                 }
             }
             let text = |e: &Entry| match check_member(&sizing::with_entry(m, e)) {
-                Ok(r) => format!("{} ({})", fixed(r.utilisation, 3), r.governing_check),
+                Ok(r) => format!("{} ({})", utilisation(r.utilisation), r.governing_check),
                 Err(err) => crate::fields::error_text(&err),
             };
             let chosen = chosen.map(|e| (e, text(e)));
@@ -246,8 +246,8 @@ pub fn rows_html(member: &Member, found: &[&Entry]) -> Html {
         // Marked as passing only when the check passes (a beam-column
         // whose interaction is not worked is never passed).
         let (class, shown) = match check_member(&sizing::with_entry(member, e)) {
-            Ok(r) if r.passes => ("passes", format!("{} ✓", fixed(r.utilisation, 3))),
-            Ok(r) => ("", format!("{} ✗", fixed(r.utilisation, 3))),
+            Ok(r) if r.passes => ("passes", format!("{} ✓", utilisation(r.utilisation))),
+            Ok(r) => ("", format!("{} ✗", utilisation(r.utilisation))),
             Err(_) => ("", "—".into()),
         };
         html!(

@@ -23,7 +23,7 @@ use crate::checks::Checked;
 use crate::fields;
 use crate::html;
 use crate::html::Html;
-use crate::numtext::{fixed, nought, working};
+use crate::numtext::{fixed, nought, utilisation, working};
 use crate::status::{governing_text, status_text, utilisation_text, Standing};
 use crate::units_view::{result_text, span_text, step_text};
 
@@ -114,7 +114,7 @@ fn verdict_in(c: &Checked, sys: UnitSystem, sheet: bool) -> Html {
                 } else {
                     "N_Ed / N_Rd"
                 },
-                fixed(r.utilisation, 3),
+                utilisation(r.utilisation),
                 governing_text(r),
                 rd,
                 ru,
@@ -217,7 +217,7 @@ pub fn bending_html(b: &strutline_core::bending::Bending, sys: UnitSystem) -> Ht
             "<td class=\"num\">{}</td><td class=\"num\">{}</td><td class=\"num\">{}</td></tr>",
             working(a.reduction),
             a.moment_factor.map(working).unwrap_or_else(|| "—".into()),
-            fixed(a.utilisation(), 3)
+            utilisation(a.utilisation())
         );
     }
     h.lit("</tbody></table></div>");
@@ -240,7 +240,7 @@ pub fn interaction_html(r: &CheckResult) -> Html {
             if governs { " class=\"governs\"" } else { "" },
             crate::status::equation_name(c.check),
             if governs { " (governs)" } else { "" },
-            fixed(c.utilisation, 3)
+            utilisation(c.utilisation)
         );
     }
     h.lit("</tbody></table></div>");
@@ -396,7 +396,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
                 c.title,
                 if c.own { " (this member's)" } else { "" },
                 result_text(sys, "kN", *resistance_kn, 1),
-                fixed(*utilisation, 3),
+                crate::numtext::utilisation(*utilisation),
                 governing_check,
             ),
             Outcome::NotApplicable { reason } | Outcome::Refused { message: reason } => html!(
@@ -422,7 +422,7 @@ pub fn whatif_html(p: &Prepared, sys: UnitSystem) -> Html {
                 span_text(sys, f.length_mm),
                 span_text(sys, f.lcr_major_mm),
                 span_text(sys, f.lcr_minor_mm),
-                fixed(f.utilisation, 3),
+                utilisation(f.utilisation),
                 f.governing_check,
             );
             if let LengthLimit::MethodRange { reason } = &f.limit {
@@ -643,7 +643,20 @@ pub fn sheet_html(
         h.push(&crate::diagram::svg(&c.member, sys));
         h.push(&crate::modelsheet::html(&c.member, c.result(), sys));
         if let Some(r) = c.result() {
-            h.lit("<h3>Section and material</h3>");
+            // A buckling model's result is its governing segment's: so are
+            // the properties, which may not be the section of the inputs.
+            match r.segment {
+                Some(seg) => html!(
+                    h,
+                    "<h3 data-testid=\"sheet-properties-segment\">Section and material of segment {} of {} \
+                     of the buckling model, which governs</h3>",
+                    seg.index,
+                    seg.count
+                ),
+                None => {
+                    h.lit("<h3>Section and material</h3>");
+                }
+            }
             h.push(&properties_html(r, sys));
         }
         h.push(&crate::sectionview::of_checked(c, sys));
@@ -1091,6 +1104,12 @@ mod tests {
             "{sheet}"
         );
         assert!(sheet.contains("data-testid=\"sheet-column\""));
+        // Its properties are said to be the governing segment's.
+        let heading = format!(
+            "Section and material of segment {} of {} of the buckling model, which governs",
+            s.index, s.count
+        );
+        assert!(sheet.contains(&heading), "{heading}");
         for junk in [">translation<", ">segments<", "\"length_mm\""] {
             assert!(!sheet.contains(junk), "{junk}");
         }

@@ -1,73 +1,20 @@
-//! End conditions and their effective-length factors.
-//!
-//! The six classic cases with the theoretical factor (the distance between
-//! points of contraflexure of the ideal buckled shape) and the value design
-//! guides usually recommend, which allows for end fixity that is never
-//! perfect. Values as commonly tabulated in design guides (common
-//! practice); recalled from memory of the table in the Commentary to
-//! AISC 360-16, Appendix 7 (Table C-A-7.1, "recommended design value when
-//! ideal conditions are approximated").
+//! End conditions and their effective-length factors, as the editor offers
+//! them: each classic case with its recommended design factor only (core's
+//! `buckling::ends::END_CONDITIONS`, AISC 360-16 Commentary Table C-A-7.1,
+//! recalled from memory). The theoretical factors (0.5 fixed at both ends,
+//! 0.7 fixed and pinned, 1.0 fixed at both ends with sway, 2.0 cantilever)
+//! are not offered: ideal fixity is not reached in practice, and offering
+//! them beside the design values invites the higher resistance. A factor
+//! typed as such stays possible; the check warns where it is a theoretical
+//! value below its case's design value (`k-theoretical-major`/`-minor`).
 
-/// One classic end condition.
-#[derive(Debug, Clone, Copy, PartialEq)]
-pub struct EndCondition {
-    /// Stable key for the select option.
-    pub key: &'static str,
-    /// In words.
-    pub label: &'static str,
-    /// Theoretical factor.
-    pub theoretical: f64,
-    /// Usual design factor.
-    pub design: f64,
-}
-
-/// The six classic end conditions.
-pub const END_CONDITIONS: [EndCondition; 6] = [
-    EndCondition {
-        key: "pp",
-        label: "pinned – pinned",
-        theoretical: 1.0,
-        design: 1.0,
-    },
-    EndCondition {
-        key: "ff",
-        label: "fixed – fixed",
-        theoretical: 0.5,
-        design: 0.65,
-    },
-    EndCondition {
-        key: "fp",
-        label: "fixed – pinned",
-        theoretical: 0.7,
-        design: 0.8,
-    },
-    EndCondition {
-        key: "fo",
-        label: "fixed – free (cantilever)",
-        theoretical: 2.0,
-        design: 2.1,
-    },
-    EndCondition {
-        key: "fsf",
-        label: "fixed – fixed, ends sway",
-        theoretical: 1.0,
-        design: 1.2,
-    },
-    EndCondition {
-        key: "psf",
-        label: "pinned – fixed, ends sway",
-        theoretical: 2.0,
-        design: 2.0,
-    },
-];
+pub use strutline_core::buckling::ends::{EndCondition, END_CONDITIONS};
 
 /// How the buckling length about one axis is set.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
 pub enum Restraint {
     /// A classic case with its design factor.
     Design(usize),
-    /// A classic case with its theoretical factor.
-    Theory(usize),
     /// A factor typed by the person.
     Factor,
     /// The buckling length typed directly.
@@ -78,11 +25,10 @@ pub enum Restraint {
 }
 
 impl Restraint {
-    /// The select option value ("d:ff", "t:ff", "factor", "length").
+    /// The select option value ("d:ff", "factor", "length", "frame").
     pub fn value(self) -> String {
         match self {
             Restraint::Design(i) => format!("d:{}", END_CONDITIONS.get(i).map_or("", |c| c.key)),
-            Restraint::Theory(i) => format!("t:{}", END_CONDITIONS.get(i).map_or("", |c| c.key)),
             Restraint::Factor => "factor".into(),
             Restraint::Length => "length".into(),
             Restraint::Frame => "frame".into(),
@@ -94,8 +40,6 @@ impl Restraint {
         let find = |key: &str| END_CONDITIONS.iter().position(|c| c.key == key);
         if let Some(key) = v.strip_prefix("d:") {
             find(key).map_or(Restraint::Factor, Restraint::Design)
-        } else if let Some(key) = v.strip_prefix("t:") {
-            find(key).map_or(Restraint::Factor, Restraint::Theory)
         } else if v == "length" {
             Restraint::Length
         } else if v == "frame" {
@@ -109,17 +53,15 @@ impl Restraint {
     pub fn factor(self) -> Option<f64> {
         match self {
             Restraint::Design(i) => END_CONDITIONS.get(i).map(|c| c.design),
-            Restraint::Theory(i) => END_CONDITIONS.get(i).map(|c| c.theoretical),
             _ => None,
         }
     }
 
     /// Every choice, in the order of the select.
     pub fn all() -> Vec<Restraint> {
-        let mut out = Vec::with_capacity(15);
+        let mut out = Vec::with_capacity(END_CONDITIONS.len() + 3);
         for i in 0..END_CONDITIONS.len() {
             out.push(Restraint::Design(i));
-            out.push(Restraint::Theory(i));
         }
         out.push(Restraint::Factor);
         out.push(Restraint::Length);
@@ -133,9 +75,6 @@ impl Restraint {
             Restraint::Design(i) => END_CONDITIONS.get(i).map_or_else(String::new, |c| {
                 format!("{}: design K = {}", c.label, c.design)
             }),
-            Restraint::Theory(i) => END_CONDITIONS.get(i).map_or_else(String::new, |c| {
-                format!("{}: theoretical K = {}", c.label, c.theoretical)
-            }),
             Restraint::Factor => "typed factor K".into(),
             Restraint::Length => "typed buckling length L_cr".into(),
             Restraint::Frame => "column in a frame: k from G at its ends".into(),
@@ -143,8 +82,8 @@ impl Restraint {
     }
 
     /// The choice that shows a member's axis: a frame, else a given
-    /// length, else the first classic case whose design (then theoretical)
-    /// factor equals the factor, else a typed factor.
+    /// length, else the first classic case whose design factor equals the
+    /// factor, else a typed factor (a theoretical value among them).
     pub fn infer(k: f64, lcr_mm: Option<f64>, framed: bool) -> Restraint {
         if framed {
             return Restraint::Frame;
@@ -155,9 +94,6 @@ impl Restraint {
         let close = |a: f64| (a - k).abs() < 1e-9;
         if let Some(i) = END_CONDITIONS.iter().position(|c| close(c.design)) {
             return Restraint::Design(i);
-        }
-        if let Some(i) = END_CONDITIONS.iter().position(|c| close(c.theoretical)) {
-            return Restraint::Theory(i);
         }
         Restraint::Factor
     }
@@ -179,6 +115,20 @@ mod tests {
         assert_eq!((fp.theoretical, fp.design), (0.7, 0.8));
     }
 
+    /// The list offers design factors only (N12 of the 2026-12-05 review:
+    /// a theoretical K = 0.5 chosen from the list raised a CSA resistance
+    /// by a third with no remark).
+    #[test]
+    fn the_list_offers_no_theoretical_factor() {
+        let labels: Vec<String> = Restraint::all().iter().map(|r| r.label()).collect();
+        assert!(
+            labels.iter().all(|l| !l.contains("theoretical")),
+            "{labels:?}"
+        );
+        let factors: Vec<f64> = Restraint::all().iter().filter_map(|r| r.factor()).collect();
+        assert_eq!(factors, [1.0, 0.65, 0.8, 2.1, 1.2, 2.0]);
+    }
+
     #[test]
     fn values_round_trip() {
         for r in Restraint::all() {
@@ -192,8 +142,10 @@ mod tests {
     fn infers_from_member() {
         assert_eq!(Restraint::infer(1.0, None, false), Restraint::Design(0));
         assert_eq!(Restraint::infer(0.65, None, false), Restraint::Design(1));
-        assert_eq!(Restraint::infer(0.5, None, false), Restraint::Theory(1));
-        assert_eq!(Restraint::infer(0.7, None, false), Restraint::Theory(2));
+        // A theoretical value is no choice of the list: a typed factor.
+        assert_eq!(Restraint::infer(0.5, None, false), Restraint::Factor);
+        assert_eq!(Restraint::infer(0.7, None, false), Restraint::Factor);
+        assert_eq!(Restraint::infer(2.0, None, false), Restraint::Design(5));
         assert_eq!(Restraint::infer(0.83, None, false), Restraint::Factor);
         assert_eq!(
             Restraint::infer(1.0, Some(2500.0), false),

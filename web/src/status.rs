@@ -3,7 +3,7 @@
 
 use strutline_core::{CheckResult, Error};
 
-use crate::numtext::fixed;
+use crate::numtext::utilisation;
 
 /// Where a member stands.
 #[derive(Debug, Clone, Copy, PartialEq, Eq)]
@@ -65,7 +65,7 @@ impl Standing {
 /// it is not worked yet.
 pub fn utilisation_text(outcome: &Option<Result<CheckResult, Error>>) -> String {
     match outcome {
-        Some(Ok(r)) => fixed(r.utilisation, 3),
+        Some(Ok(r)) => utilisation(r.utilisation),
         Some(Err(_)) => "—".into(),
         None => "…".into(),
     }
@@ -139,6 +139,17 @@ mod tests {
         assert_eq!(Standing::of(&None), Standing::Waiting);
         assert_eq!(status_text(&None), "… being checked");
         assert_eq!(utilisation_text(&None), "…");
+        // No finite utilisation (N_Ed = 1.2 N_cr,z with moments): in words,
+        // not the dash of "fix input" (review N4).
+        let beyond: strutline_core::Member = serde_json::from_value(serde_json::json!({
+            "id": "C1", "section": {"kind": "catalogue", "designation": "HE 200 B"},
+            "material": {"grade": "S355"}, "length_mm": 4000, "axial_kn": 3114,
+            "m_major_a_knm": 50, "m_major_b_knm": -25, "method": "en1993-1-1"
+        }))
+        .unwrap();
+        let beyond = Some(strutline_core::check_member(&beyond));
+        assert_eq!(status_text(&beyond), "✗ exceeds");
+        assert_eq!(utilisation_text(&beyond), "beyond N_cr");
     }
 
     #[test]

@@ -82,14 +82,15 @@ pub fn result_text(system: UnitSystem, unit: &'static str, v: f64, decimals: usi
     format!("{n} {u}")
 }
 
-/// A stored value as a person typed it (SI: the stored number itself, as
-/// the editor shows it), with its unit; in US units converted, to four
-/// significant figures. `span` shows a US length in ft. For one-line
-/// summaries such as the list's rows.
+/// A stored value in short, with its unit: to five significant figures in
+/// SI (a value typed as 2800 or 95 reads as typed; one converted from US
+/// units, 266.89329691563 kN, reads 266.89 kN), in US units converted, to
+/// four. `span` shows a US length in ft. For one-line summaries such as
+/// the list's rows; the editor shows the stored value itself.
 pub fn plain_text(system: UnitSystem, unit: &'static str, v: f64, span: bool) -> String {
     let (d, u) = shown(system, unit, v, span);
     let n = match system {
-        UnitSystem::Si => crate::numtext::for_input(d),
+        UnitSystem::Si => units::format_display(d, 5),
         UnitSystem::Us => units::format_display(d, 4),
     };
     format!("{n} {u}")
@@ -192,6 +193,16 @@ pub fn from_field(system: UnitSystem, key: &str, typed: &str) -> String {
 mod tests {
     use super::*;
     use UnitSystem::{Si, Us};
+
+    #[test]
+    fn a_row_shows_a_value_in_short() {
+        assert_eq!(plain_text(Si, "kN", 95.0, false), "95 kN");
+        assert_eq!(plain_text(Si, "mm", 2800.0, true), "2800 mm");
+        assert_eq!(plain_text(Si, "kN", 266.89329691563, false), "266.89 kN");
+        assert_eq!(plain_text(Si, "mm", 4114.8, true), "4114.8 mm");
+        assert_eq!(plain_text(Si, "mm", 12345.6, true), "12346 mm");
+        assert_eq!(plain_text(Us, "kN", 266.89329691563, false), "60 kip");
+    }
 
     #[test]
     fn a_field_key_goes_by_its_us_column_in_us_units() {

@@ -319,6 +319,17 @@ pub enum Shape {
     Combined,
 }
 
+/// The end-moment ratio positive in reverse (double) curvature, -psi, as
+/// AISC 360-16's M_1/M_2 and CSA S16-19's kappa take it: 0, not -0, for a
+/// diagram with one end at zero (so the working never reads "-0.0").
+pub fn reverse_ratio(psi: f64) -> f64 {
+    if psi == 0.0 {
+        0.0
+    } else {
+        -psi
+    }
+}
+
 /// Classifies a diagram.
 pub fn shape(m: &Moments) -> Shape {
     let ends = m.a_knm != 0.0 || m.b_knm != 0.0;

@@ -11,6 +11,7 @@
 pub mod band;
 pub mod chart;
 pub mod column;
+pub mod ends;
 pub mod memo;
 pub mod model;
 

@@ -117,7 +117,7 @@ pub fn c_m(m: &crate::member::Moments) -> (f64, Option<f64>) {
     match shape(m) {
         // The file's psi = M_small / M_large is positive in single
         // curvature; M_1/M_2 of Eq. A-8-4 is positive in reverse curvature.
-        Shape::Linear { psi } => (0.6 + 0.4 * psi, Some(-psi)),
+        Shape::Linear { psi } => (0.6 + 0.4 * psi, Some(crate::bending::reverse_ratio(psi))),
         Shape::Span(_) | Shape::Combined => (1.0, None),
         Shape::None => (1.0, None),
     }
@@ -716,6 +716,22 @@ mod tests {
             span_knm: span,
             span_load: SpanLoad::Uniform,
         }
+    }
+
+    /// One end moment zero: M_1/M_2 is 0, never -0 (review N26: the ASD
+    /// working read "-0.0").
+    #[test]
+    fn a_zero_end_moment_gives_a_ratio_of_plain_zero() {
+        let m = crate::member::Moments {
+            a_knm: 30.0,
+            b_knm: 0.0,
+            ..Default::default()
+        };
+        let (cm, ratio) = c_m(&m);
+        assert_eq!(cm, 0.6);
+        let ratio = ratio.unwrap();
+        assert!(ratio == 0.0 && ratio.is_sign_positive(), "{ratio}");
+        assert!(format!("{ratio}") == "0");
     }
 
     #[test]

@@ -72,7 +72,7 @@ const S: Scope = Scope::Interaction;
 pub fn omega_1(m: &Moments) -> (f64, Option<f64>) {
     let ends = |psi: f64| (0.6 + 0.4 * psi).max(0.4);
     match shape(m) {
-        Shape::Linear { psi } => (ends(psi), Some(-psi)),
+        Shape::Linear { psi } => (ends(psi), Some(crate::bending::reverse_ratio(psi))),
         Shape::Span(SpanLoad::Uniform) | Shape::None => (1.0, None),
         Shape::Span(SpanLoad::Point) => (0.85, None),
         Shape::Combined => match m.span_load {
@@ -619,6 +619,36 @@ pub fn check(
         (1.0, 1.0, 1.0)
     };
     let floor = |u: f64| u.max(1.0);
+    // (a) takes U_1x and U_1y, (c) U_1x, not less than 1.0; (b) as worked.
+    // Where that changes a value, the working shows the value used.
+    if x.m_f != 0.0 && x.u1 < 1.0 {
+        put(
+            trace,
+            S,
+            symbol!("U_1x in (a), (c)", "-"),
+            sym!("U_1x as (a) and (c) take it: not less than 1.0 ((b) takes the value above)"),
+            1.0,
+            if i_shaped {
+                sym!("CSA S16-19 13.8.2(a), (c)")
+            } else {
+                sym!("CSA S16-19 13.8.3(a), (c)")
+            },
+        );
+    }
+    if y.m_f != 0.0 && y.u1 < 1.0 {
+        put(
+            trace,
+            S,
+            symbol!("U_1y in (a)", "-"),
+            sym!("U_1y as (a) takes it: not less than 1.0 ((b) and (c) take the value above)"),
+            1.0,
+            if i_shaped {
+                sym!("CSA S16-19 13.8.2(a)")
+            } else {
+                sym!("CSA S16-19 13.8.3(a)")
+            },
+        );
+    }
     let axial = |c_r: f64| ratio(c_f, c_r);
     let eqs = [
         axial(c_r0)
@@ -672,6 +702,45 @@ mod tests {
         // Point load with equal single-curvature end moments: not below 1.0.
         assert_eq!(omega_1(&mo(5.0, 5.0, 2.0, SpanLoad::Point)).0, 1.0);
         assert_eq!(omega_1(&mo(5.0, -5.0, 2.0, SpanLoad::Point)).0, 0.85);
+    }
+
+    /// The working shows the U_1 each equation uses (review N26: RHS
+    /// 203x152x8 350W, 600 kN, 40 / 20 kNm single curvature printed U_1x
+    /// 0.95 while (a) and (c) use 1.0, 13.8.3's "not less than 1.0").
+    #[test]
+    fn the_working_shows_the_u_1_each_equation_uses() {
+        let member = |n: f64| -> crate::member::Member {
+            serde_json::from_value(serde_json::json!({
+                "id": "R1",
+                "section": {"kind": "rhs", "depth_mm": 203, "width_mm": 152, "wall_mm": 8},
+                "material": {"grade": "350W"}, "length_mm": 3000, "axial_kn": n,
+                "m_major_a_knm": 40, "m_major_b_knm": 20, "method": "csa-s16"
+            }))
+            .unwrap()
+        };
+        let steps = |n: f64| {
+            let r = crate::check::check_member(&member(n)).unwrap();
+            let u1 = r
+                .trace
+                .iter()
+                .find(|s| s.symbol == "U_1x")
+                .map(|s| s.value)
+                .unwrap();
+            let used: Vec<f64> = r
+                .trace
+                .iter()
+                .filter(|s| s.symbol == "U_1x in (a), (c)")
+                .map(|s| s.value)
+                .collect();
+            (u1, used)
+        };
+        let (u1, used) = steps(600.0);
+        assert!(u1 < 1.0, "{u1}");
+        assert_eq!(used, [1.0]);
+        // Where U_1x is 1.0 or more every equation takes it as worked.
+        let (u1, used) = steps(2000.0);
+        assert!(u1 >= 1.0, "{u1}");
+        assert!(used.is_empty());
     }
 
     #[test]

@@ -459,6 +459,78 @@ pub fn warn_timber_first_principles(input: &Input<'_>, warnings: &mut Vec<Warnin
     }
 }
 
+/// The divisor of the default initial bow (Perry-Robertson) and load
+/// eccentricity (secant) when the member gives none: e = L_cr / 200, the
+/// equivalent bow e_0/L of EN 1993-1-1 Table 5.1 for buckling curve c in an
+/// elastic analysis (the table's elastic column: a0 1/350, a 1/300, b
+/// 1/250, c 1/200, d 1/150; recalled from memory). A fabrication tolerance
+/// (about L/1000, EN 1090-2, recalled) is far smaller than the imperfection
+/// the codes' buckling curves build in, so it would give a resistance above
+/// theirs; the open choice is read on the safe side and the result says so
+/// (`imperfection-default`).
+pub const DEFAULT_IMPERFECTION_DIVISOR: f64 = 200.0;
+
+/// Member-level warnings of every first-principles method (Euler,
+/// Perry-Robertson, secant): the result is an estimate, not a design
+/// code's resistance (`first-principles-estimate`); Euler's is an upper
+/// bound (`euler-upper-bound`); Perry-Robertson's and the secant's default
+/// imperfection, when the member gives none (`imperfection-default`). Fixed
+/// texts: nothing is formatted or allocated for the texts themselves.
+pub fn warn_first_principles(
+    method: crate::member::Method,
+    input: &Input<'_>,
+    warnings: &mut Vec<Warning>,
+) {
+    use crate::member::Method;
+    let (estimate, default) = match method {
+        Method::Euler => (
+            "Euler's critical load capped at the squash load is an upper bound, not a design \
+             resistance: it is the load of a perfectly straight, centrally loaded elastic member \
+             without imperfection or residual stress, and no partial or resistance factor is \
+             applied unless gamma_m1 is given; real members fail below it. The design resistance \
+             is what a code method gives (en1993-1-1, aisc360-lrfd, aisc360-asd, csa-s16, \
+             en1995-1-1)",
+            None,
+        ),
+        Method::PerryRobertson => (
+            "Perry-Robertson is a first-principles estimate (first yield of a bowed, pin-ended \
+             strut), not a design-code resistance: no partial or resistance factor is applied \
+             unless gamma_m1 is given. The design resistance is what a code method gives \
+             (en1993-1-1, aisc360-lrfd, aisc360-asd, csa-s16, en1995-1-1)",
+            input.member.bow_mm.is_none().then_some(
+                "bow_mm is not given, so the initial bow is taken as L_cr / 200, the equivalent \
+                 bow of EN 1993-1-1 Table 5.1 for buckling curve c in an elastic analysis (1/350 \
+                 to 1/150 from curve a0 to d); a fabrication tolerance (about L/1000) is far \
+                 smaller than the imperfection the codes' buckling curves build in and would \
+                 overstate the resistance. Give bow_mm for another value",
+            ),
+        ),
+        Method::Secant => (
+            "the secant formula is a first-principles estimate (first yield of an eccentrically \
+             loaded, pin-ended strut), not a design-code resistance: no partial or resistance \
+             factor is applied unless gamma_m1 is given. The design resistance is what a code \
+             method gives (en1993-1-1, aisc360-lrfd, aisc360-asd, csa-s16, en1995-1-1)",
+            input.member.eccentricity_mm.is_none().then_some(
+                "eccentricity_mm is not given, so the load's eccentricity is taken as L_cr / 200, \
+                 the equivalent bow of EN 1993-1-1 Table 5.1 for buckling curve c in an elastic \
+                 analysis (1/350 to 1/150 from curve a0 to d); a fabrication tolerance (about \
+                 L/1000) is far smaller than the imperfection the codes' buckling curves build in \
+                 and would overstate the resistance. Give eccentricity_mm for another value",
+            ),
+        ),
+        _ => return,
+    };
+    let code = if method == Method::Euler {
+        "euler-upper-bound"
+    } else {
+        "first-principles-estimate"
+    };
+    warn_once_text(warnings, code, estimate);
+    if let Some(text) = default {
+        warn_once_text(warnings, "imperfection-default", text);
+    }
+}
+
 /// Whether the section is a hot-finished hollow section (Table 6.2, S16 class H).
 pub fn is_hot_finished_hollow(input: &Input<'_>) -> bool {
     use crate::section::HollowMake;

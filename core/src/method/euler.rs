@@ -3,7 +3,8 @@
 //!
 //! N_cr = pi^2 E I / L_cr^2 (Euler 1744; closed form, any structural
 //! mechanics text), N_pl = A f_y, resistance min(N_cr, N_pl) / gamma with
-//! gamma = `gamma_m1` when given, else 1.
+//! gamma = `gamma_m1` when given, else 1. An upper bound, not a design
+//! resistance: the result says so (`euler-upper-bound`).
 //!
 //! The helpers every method shares live in [`super::common`]; they are
 //! re-exported here so the older paths (`method::euler::basics`, ...) keep
@@ -17,6 +18,18 @@ use crate::trace::{step, sym, Trace};
 
 /// Member-level working: squash load and the optional factor.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
+    warn_first_principles(crate::member::Method::Euler, input, warnings);
+    shared_prelude(input, trace, warnings)
+}
+
+/// The working every first-principles method starts with (material,
+/// squash load, the optional factor); each method's `prelude` adds its own
+/// warnings ([`warn_first_principles`]) first.
+pub fn shared_prelude(
+    input: &Input<'_>,
+    trace: &mut Trace,
+    warnings: &mut Vec<Warning>,
+) -> Result<()> {
     warn_timber_first_principles(input, warnings);
     push_material(input, trace, warnings);
     push_optional_factor(input, trace);
@@ -120,6 +133,81 @@ pub(crate) mod tests {
         assert_eq!(r.reduction, 1.0);
         assert!(axis(&input, Mode::Minor, 0.0, &mut t, &mut w).is_err());
         assert!(axis(&input, Mode::Minor, f64::NAN, &mut t, &mut w).is_err());
+    }
+
+    /// The first-principles methods pass members the codes fail (a round
+    /// 60 bar, 1.8 m, 300 kN: EN 1993-1-1 curve c fails it), so each
+    /// result says it is an estimate (Euler: an upper bound), and
+    /// Perry-Robertson and the secant formula name their default
+    /// imperfection, L_cr / 200, when none is given.
+    #[test]
+    fn first_principles_results_say_what_they_are() {
+        let bar = |method: Method| {
+            let mut m = member(method, "S355");
+            m.section = SectionSpec::Round(crate::section::Round { diameter_mm: 60.0 });
+            m.length_mm = 1800.0;
+            m.axial_kn = 300.0;
+            m
+        };
+        let codes = |m: &Member| -> Vec<&'static str> {
+            Prepared::new(m)
+                .unwrap()
+                .check()
+                .unwrap()
+                .warnings
+                .iter()
+                .map(|w| w.code)
+                .collect()
+        };
+        assert_eq!(codes(&bar(Method::Euler)), ["euler-upper-bound"]);
+        for method in [Method::PerryRobertson, Method::Secant] {
+            assert_eq!(
+                codes(&bar(method)),
+                ["first-principles-estimate", "imperfection-default"],
+                "{method:?}"
+            );
+        }
+        // A given imperfection (or a factor) is not a default: the estimate
+        // warning stays, the default one goes.
+        let mut pr = bar(Method::PerryRobertson);
+        pr.bow_mm = Some(1.8);
+        pr.gamma_m1 = Some(1.1);
+        assert_eq!(codes(&pr), ["first-principles-estimate"]);
+        let mut sec = bar(Method::Secant);
+        sec.eccentricity_mm = Some(1.8);
+        assert_eq!(codes(&sec), ["first-principles-estimate"]);
+        // The codes' own methods carry none of these.
+        let en = codes(&bar(Method::En1993));
+        assert!(en.iter().all(|c| !matches!(
+            *c,
+            "euler-upper-bound" | "first-principles-estimate" | "imperfection-default"
+        )));
+    }
+
+    /// The default bow is L_cr / 200 about each axis (EN 1993-1-1 Table
+    /// 5.1, curve c, elastic analysis), not the L_cr / 1000 of a
+    /// fabrication tolerance: the round 60 bar at 1.8 m has eta = 9 x 30 /
+    /// 15^2 = 1.2 and, S355 (f_y 355 MPa, t = 60 mm: 335 MPa for 40 < t <=
+    /// 63 in EN 10025-2), a resistance below that of the L/1000 bow.
+    #[test]
+    fn the_default_bow_is_the_curve_c_bow() {
+        let mut m = member(Method::PerryRobertson, "S355");
+        m.section = SectionSpec::Round(crate::section::Round { diameter_mm: 60.0 });
+        m.length_mm = 1800.0;
+        let default = Prepared::new(&m).unwrap().check().unwrap();
+        let bows: Vec<f64> = default
+            .trace
+            .iter()
+            .filter(|s| s.symbol == "e_0")
+            .map(|s| s.value)
+            .collect();
+        assert_eq!(bows, [9.0, 9.0]);
+        m.bow_mm = Some(9.0);
+        let given = Prepared::new(&m).unwrap().check().unwrap();
+        assert_eq!(default.resistance_kn, given.resistance_kn);
+        m.bow_mm = Some(1.8);
+        let small = Prepared::new(&m).unwrap().check().unwrap();
+        assert!(default.resistance_kn < small.resistance_kn);
     }
 
     #[test]

@@ -6,8 +6,10 @@
 //! the mean failure stress sigma is the smaller root of
 //! (f_y - sigma)(sigma_E - sigma) = eta sigma sigma_E (Perry 1886,
 //! Robertson 1925; closed form in any text on the stability of
-//! structures). The bow defaults to L_cr / 1000 (the trace says so); the
-//! resistance is sigma A / gamma with the optional factor gamma_m1.
+//! structures). The bow defaults to L_cr / 200, EN 1993-1-1 Table 5.1's
+//! curve c bow ([`euler::DEFAULT_IMPERFECTION_DIVISOR`]; the trace and a
+//! warning say so); the resistance is sigma A / gamma with the optional
+//! factor gamma_m1, a first-principles estimate (the result says so).
 
 use crate::error::Result;
 use crate::method::euler::{basics, extreme_fibre_mm, push_geometry};
@@ -30,7 +32,8 @@ pub fn failure_stress(f: f64, sigma_e: f64, eta: f64) -> f64 {
 
 /// Member-level working.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
-    euler::prelude(input, trace, warnings)
+    euler::warn_first_principles(crate::member::Method::PerryRobertson, input, warnings);
+    euler::shared_prelude(input, trace, warnings)
 }
 
 /// Works one axis.
@@ -58,15 +61,15 @@ pub fn axis(
             e
         }
         None => {
-            let e = b.lcr_mm / 1000.0;
+            let e = b.lcr_mm / euler::DEFAULT_IMPERFECTION_DIVISOR;
             step!(
                 trace,
                 b.scope,
                 "e_0",
-                "initial bow, none given: L_cr / 1000",
+                "initial bow, none given: L_cr / 200 (EN 1993-1-1 Table 5.1, curve c)",
                 e,
                 "mm",
-                "default L_cr / 1000",
+                "default L_cr / 200",
             );
             e
         }

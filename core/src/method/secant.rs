@@ -5,15 +5,17 @@
 //!
 //! sigma is found by the root finder ([`crate::roots`]) on (0, min(f_y, sigma_E)): the left side
 //! rises monotonically from 0 and is unbounded as sigma -> sigma_E, so the
-//! root is bracketed and unique. The eccentricity defaults to L_cr / 1000
-//! (the trace says so); the resistance is sigma A / gamma with the
-//! optional factor gamma_m1.
+//! root is bracketed and unique. The eccentricity defaults to L_cr / 200,
+//! EN 1993-1-1 Table 5.1's curve c bow
+//! ([`euler::DEFAULT_IMPERFECTION_DIVISOR`]; the trace and a warning say
+//! so); the resistance is sigma A / gamma with the optional factor
+//! gamma_m1, a first-principles estimate (the result says so).
 //!
 //! Equal end moments about one principal axis (M_a = M_b, no span moment,
 //! nothing about the other axis) are the load's eccentricity e_M = |M| / N
 //! about that axis ([`moment_eccentricity`]): the first-principles view of
 //! a load that is not on the centroid. It is added to the eccentricity of
-//! that axis (`eccentricity_mm`, or L_cr / 1000), which the formula takes
+//! that axis (`eccentricity_mm`, or L_cr / 200), which the formula takes
 //! about each axis in turn; the other axis keeps its own. Taking the two in
 //! the same direction is the lower resistance (the direction of
 //! `eccentricity_mm` is not given). Any other moment diagram, or a moment
@@ -192,7 +194,8 @@ pub fn moment_eccentricity(member: &Member) -> Result<Option<(Mode, f64)>> {
 /// Member-level working; refuses moments the method does not take.
 pub fn prelude(input: &Input<'_>, trace: &mut Trace, warnings: &mut Vec<Warning>) -> Result<()> {
     moment_eccentricity(input.member)?;
-    euler::prelude(input, trace, warnings)
+    euler::warn_first_principles(crate::member::Method::Secant, input, warnings);
+    euler::shared_prelude(input, trace, warnings)
 }
 
 /// Works one axis.
@@ -220,15 +223,15 @@ pub fn axis(
             e
         }
         None => {
-            let e = b.lcr_mm / 1000.0;
+            let e = b.lcr_mm / euler::DEFAULT_IMPERFECTION_DIVISOR;
             step!(
                 trace,
                 b.scope,
                 "e",
-                "load eccentricity, none given: L_cr / 1000",
+                "load eccentricity, none given: L_cr / 200 (EN 1993-1-1 Table 5.1, curve c)",
                 e,
                 "mm",
-                "default L_cr / 1000",
+                "default L_cr / 200",
             );
             e
         }

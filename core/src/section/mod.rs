@@ -464,6 +464,22 @@ impl SectionSpec {
         })
     }
 
+    /// The largest overall dimension of the section, mm (depth or width,
+    /// or the diameter); `None` for typed properties, which have none, and
+    /// a catalogue reference, which is resolved first.
+    pub fn largest_dimension_mm(&self) -> Option<f64> {
+        Some(match self {
+            SectionSpec::I(s) => s.depth_mm.max(s.width_mm),
+            SectionSpec::Rhs(s) => s.depth_mm.max(s.width_mm),
+            SectionSpec::Angle(s) => s.depth_mm.max(s.width_mm),
+            SectionSpec::Channel(s) | SectionSpec::Tee(s) => s.depth_mm.max(s.width_mm),
+            SectionSpec::Rect(s) => s.depth_mm.max(s.width_mm),
+            SectionSpec::Chs(s) => s.diameter_mm,
+            SectionSpec::Round(s) => s.diameter_mm,
+            SectionSpec::Given(_) | SectionSpec::Catalogue(_) => return None,
+        })
+    }
+
     /// Validates the dimensions and computes the properties. A catalogue
     /// reference is an error here: the catalogue builds it
     /// (`catalogue::build`), which the check does when it prepares a member.

@@ -238,15 +238,22 @@ pub fn assess<'c>(
                 sym!("EN 1993-1-5 4.4 (Eq. 4.2, 4.3)"),
             );
             out.en_effective = Some(eff);
+            // A section that is not doubly symmetric whose effective
+            // centroid shifts (e_N != 0) takes the moment N_Ed e_N under
+            // axial load alone (EN 1993-1-1 6.2.2.5(4), 6.3.3), which the
+            // engine does not work for these shapes (the beam-column
+            // check refuses them too): refused as with a typed moment.
             if eff.area_mm2 < section.props.area_mm2
                 && matches!(
                     section.family,
                     Family::Angle | Family::Tee | Family::Channel
                 )
             {
-                warn(warnings, "class4-shift-not-checked", || {
-                    "Class 4 section that is not doubly symmetric: the moment N_Ed e_N from the shift of the \
-                     effective centroid (EN 1993-1-1 6.2.2.5(4), 6.3.3) is not included; check it by hand"
+                out.refused = true;
+                warn(warnings, "outside-code-scope", || match section.family {
+                    Family::Angle => shift_refusal!("angle"),
+                    Family::Tee => shift_refusal!("tee"),
+                    _ => shift_refusal!("channel"),
                 });
             }
         }
@@ -284,6 +291,23 @@ pub fn assess<'c>(
     }
     out
 }
+
+/// The refusal of a Class 4 section whose effective centroid shifts under
+/// EN 1993-1-1, for the shape named (a fixed text).
+macro_rules! shift_refusal {
+    ($shape:literal) => {
+        concat!(
+            "axial_kn: the ",
+            $shape,
+            " is Class 4 in compression and not doubly symmetric, so its effective centroid \
+             shifts and the axial load carries the moment N_Ed e_N (EN 1993-1-1 6.2.2.5(4), \
+             6.3.3); the engine works Class 4 under EN 1993-1-1 only for doubly symmetric I and \
+             rectangular hollow sections, so no resistance is given: choose a stockier section \
+             or check this member by hand"
+        )
+    };
+}
+use shift_refusal;
 
 /// The mode of a member the code does not cover: resistance zero.
 pub fn refused_mode() -> ModeResult {
@@ -773,6 +797,42 @@ fn csa_twist(
 #[cfg(test)]
 mod tests {
     use super::*;
+
+    /// EN 1993-1-1: a Class 4 equal angle (L 80x80x6 S275, eps = 0.924:
+    /// h/t = 13.3 <= 15 eps = 13.9 but (b + h)/(2t) = 13.3 > 11.5 eps =
+    /// 10.6, Table 5.2's Class 3 limits for angles) shifts its effective
+    /// centroid, so axial load alone carries N_Ed e_N, which is
+    /// not worked: refused as with a typed moment, naming the member and
+    /// axial_kn (review N28 passed it with a warning). A stocky angle
+    /// (L 80x80x10: 8.0 <= 10.6) is checked.
+    #[test]
+    fn a_class_4_angle_under_axial_load_alone_is_refused() {
+        let angle = |t: f64, moment: f64| -> crate::member::Member {
+            serde_json::from_value(serde_json::json!({
+                "id": "LA",
+                "section": {"kind": "angle", "depth_mm": 80, "width_mm": 80,
+                            "thickness_mm": t, "root_radius_mm": 10},
+                "material": {"grade": "S275"},
+                "length_mm": 2000, "axial_kn": 60, "method": "en1993-1-1",
+                "m_major_a_knm": moment
+            }))
+            .unwrap()
+        };
+        for moment in [0.0, 1.0] {
+            let err = crate::check::check_member(&angle(6.0, moment))
+                .unwrap_err()
+                .to_string();
+            assert!(
+                err.contains("LA") && err.contains("axial_kn") && err.contains("e_N"),
+                "{moment}: {err}"
+            );
+        }
+        let stocky = crate::check::check_member(&angle(10.0, 0.0)).unwrap();
+        assert!(stocky
+            .warnings
+            .iter()
+            .all(|w| w.code != "outside-code-scope"));
+    }
 
     #[test]
     fn fixed_untwisted_texts_are_the_formatted_ones() {

@@ -182,7 +182,7 @@ pub fn describe(d: &InteractionData, sys: UnitSystem) -> String {
     let mut out = format!(
         "Interaction, {}: utilisation {}, governs {}.",
         d.method.title(),
-        crate::numtext::fixed(d.utilisation, 3),
+        crate::numtext::utilisation(d.utilisation),
         d.governs
     );
     for p in &d.panels {
