@@ -10,10 +10,9 @@
 
 use plotters::coord::Shift;
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
-use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
+use plotters::prelude::{DrawingArea, DrawingBackend};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, FontTransform, IntoFont, RGBAColor, RGBColor};
-use plotters_canvas::CanvasBackend;
 use strutline_core::check::Mode;
 use strutline_core::units;
 use web_sys::HtmlCanvasElement;
@@ -126,22 +125,10 @@ pub fn draw(
     high_contrast: bool,
     us: bool,
 ) -> Result<(), String> {
-    let backend = CanvasBackend::with_canvas_object(canvas.clone())
-        .ok_or("chart: the canvas has no 2D context")?;
-    let root = backend.into_drawing_area();
-    let measure = labels::canvas_measure(canvas);
-    let mut boxes = Boxes::default();
-    let px = draw_on(
-        &root,
-        data,
-        dpr,
-        &palette(high_contrast),
-        us,
-        (&measure, &mut boxes),
-    )?;
-    root.present().map_err(err)?;
+    let px = super::on_canvas(canvas, dpr, |root, text| {
+        draw_on(root, data, dpr, &palette(high_contrast), us, text)
+    })?;
     let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
-    boxes.record_on(canvas, dpr)?;
     let curves = data.design.len() + data.perry.len() + data.others.len();
     set("data-curves", curves.to_string())?;
     if let Some((m_lambda, m_stress, (x, y))) = px {

@@ -12,10 +12,9 @@
 
 use plotters::coord::Shift;
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
-use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
+use plotters::prelude::{DrawingArea, DrawingBackend};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, FontTransform, IntoFont, RGBColor};
-use plotters_canvas::CanvasBackend;
 use strutline_core::bending::Axis;
 use strutline_core::check::{Prepared, Working};
 use strutline_core::compare::{self, Outcome};
@@ -258,22 +257,10 @@ pub fn draw(
     high_contrast: bool,
     us: bool,
 ) -> Result<(), String> {
-    let backend = CanvasBackend::with_canvas_object(canvas.clone())
-        .ok_or("chart: the canvas has no 2D context")?;
-    let root = backend.into_drawing_area();
     let sys = if us { UnitSystem::Us } else { UnitSystem::Si };
-    let measure = labels::canvas_measure(canvas);
-    let mut boxes = Boxes::default();
-    let points = draw_on(
-        &root,
-        data,
-        dpr,
-        &palette(high_contrast),
-        sys,
-        (&measure, &mut boxes),
-    )?;
-    root.present().map_err(err)?;
-    boxes.record_on(canvas, dpr)?;
+    let points = super::on_canvas(canvas, dpr, |root, text| {
+        draw_on(root, data, dpr, &palette(high_contrast), sys, text)
+    })?;
     let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
     set("data-chart", "interaction".into())?;
     for (p, (x, y)) in data.panels.iter().zip(points) {
