@@ -196,17 +196,7 @@ fn field_figure(q: Quantity, v: f64) -> String {
     // Three significant figures need 2 - floor(log10|v|) decimals.
     let small = 2 - v.abs().log10().floor().clamp(-15.0, 15.0) as i64;
     let decimals = (field_decimals(q) as i64).max(small).clamp(0, 17) as usize;
-    let text = format!("{v:.decimals$}");
-    let text = if text.contains('.') {
-        text.trim_end_matches('0').trim_end_matches('.').to_string()
-    } else {
-        text
-    };
-    if text == "-0" {
-        "0".to_string()
-    } else {
-        text
-    }
+    units::fixed_trimmed(v, decimals)
 }
 
 /// What the person typed in the display unit, as text in the stored unit
