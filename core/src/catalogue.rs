@@ -684,6 +684,15 @@ pub fn build(spec: &SectionSpec) -> Result<Section> {
     }
 }
 
+/// [`build`] into `slot`, borrowed back ([`SectionSpec::build_in`]).
+#[inline]
+pub fn build_in<'s>(spec: &SectionSpec, slot: &'s mut Option<Section>) -> Result<&'s Section> {
+    match spec {
+        SectionSpec::Catalogue(c) => Ok(slot.insert(section(&c.designation)?)),
+        other => other.build_in(slot),
+    }
+}
+
 /// The family of any section spec, resolving a catalogue reference (an
 /// unknown designation is [`Error::UnknownDesignation`]).
 pub fn family(spec: &SectionSpec) -> Result<Family> {

@@ -103,6 +103,11 @@ impl From<&Properties> for SectionSummary {
     }
 }
 
+/// The modes of a check, held inline: a check has at most four (both
+/// axes, the twisting mode, the cross-section or refused mode), so a
+/// result's modes need no allocation of their own (read as a slice).
+pub type Modes = smallvec::SmallVec<[ModeResult; 4]>;
+
 /// Which segment of a buckling model governs: `index` of `count`, counted
 /// from 1 at end A.
 #[derive(Debug, Clone, Copy, PartialEq, Eq, Serialize)]
@@ -155,7 +160,7 @@ pub struct CheckResult {
     /// Section properties.
     pub section: SectionSummary,
     /// Every mode checked.
-    pub modes: Vec<ModeResult>,
+    pub modes: Modes,
     /// The bending side (member file version 3), `null` without moments.
     pub bending: Option<Bending>,
     /// The beam-column interaction equations worked, one entry each
@@ -303,7 +308,11 @@ pub(crate) fn evaluate_within(
     working: Working,
     unbraced: Option<Unbraced>,
 ) -> Result<CheckResult> {
-    let mut parts = Scratch::sized(working, input.member.has_moments());
+    // The moments asked only where they size the working's list.
+    let mut parts = Scratch::sized(
+        working,
+        working == Working::Kept && input.member.has_moments(),
+    );
     let verdict = work(input, method, &mut parts, unbraced)?;
     // The lists moved field by field, not through a destructured copy of
     // the scratch (one 192-byte copy fewer a check).
@@ -356,7 +365,7 @@ pub struct Verdict {
 /// [`Working::default`] does; a batch takes `Scratch::new(Working::Skipped)`.
 #[derive(Debug, Clone, Default)]
 pub struct Scratch {
-    modes: Vec<ModeResult>,
+    modes: Modes,
     warnings: Vec<Warning>,
     interaction: Vec<interaction::Check>,
     bending: Option<Bending>,
@@ -412,7 +421,7 @@ impl Brief<'_> {
     pub fn to_result(&self, id: &str) -> CheckResult {
         self.verdict.with_lists(
             id.to_string(),
-            self.modes.to_vec(),
+            Modes::from_slice(self.modes),
             self.bending.copied(),
             self.interaction.to_vec(),
             self.warnings.to_vec(),
@@ -426,7 +435,7 @@ impl Verdict {
     fn with_lists(
         self,
         id: String,
-        modes: Vec<ModeResult>,
+        modes: Modes,
         bending: Option<Bending>,
         interaction: Vec<interaction::Check>,
         warnings: Vec<Warning>,
@@ -468,7 +477,7 @@ impl Scratch {
     #[inline]
     fn sized(working: Working, moments: bool) -> Scratch {
         Scratch {
-            modes: Vec::with_capacity(4),
+            modes: Modes::new(),
             warnings: Vec::new(),
             interaction: Vec::new(),
             bending: None,
@@ -665,7 +674,7 @@ fn work(
         .min_by(|a, b| {
             a.resistance_kn
                 .total_cmp(&b.resistance_kn)
-                .then(b.slenderness.total_cmp(&a.slenderness))
+                .then_with(|| b.slenderness.total_cmp(&a.slenderness))
         })
         .copied()
         .unwrap_or(major);
@@ -821,11 +830,8 @@ pub fn check_member_as(member: &Member, working: Working) -> Result<CheckResult>
 fn with_input<T>(member: &Member, check: impl FnOnce(&Input<'_>) -> Result<T>) -> Result<T> {
     let wrap = |e: crate::error::Error| e.in_member(&member.id);
     member.validate_options().map_err(wrap)?;
-    let built = member.build_section();
-    let section = match built {
-        Ok(ref section) => section,
-        Err(e) => return Err(wrap(e)),
-    };
+    let mut built = None;
+    let section = crate::catalogue::build_in(&member.section, &mut built).map_err(wrap)?;
     let resolved = crate::material::resolve(&member.material, crate::member::stock(section));
     let material = match resolved {
         Ok(ref material) => material,

@@ -445,15 +445,14 @@ struct Key {
 impl Key {
     /// `None` when the name has more than 24 letters and digits (no grade has).
     fn new(name: &str) -> Option<Key> {
-        let mut key = Key {
-            buf: [0; 24],
-            len: 0,
-        };
+        // The count kept in a local, not the field: stored once at the end
+        // instead of at every letter.
+        let (mut buf, mut len) = ([0; 24], 0);
         for b in name.bytes().filter(u8::is_ascii_alphanumeric) {
-            *key.buf.get_mut(key.len)? = b.to_ascii_uppercase();
-            key.len += 1;
+            *buf.get_mut(len)? = b.to_ascii_uppercase();
+            len += 1;
         }
-        Some(key)
+        Some(Key { buf, len })
     }
 
     fn as_bytes(&self) -> &[u8] {
@@ -461,20 +460,11 @@ impl Key {
     }
 }
 
-/// Whether `name` normalises to `key` (compared without allocating).
+/// Whether a table's `name` normalises to `key`: the tables' names are
+/// letters and digits only (a unit test holds them so), so that is the
+/// name equal to the key but for case (its length compared first).
 fn same_name(name: &str, key: &[u8]) -> bool {
-    let mut a = name
-        .bytes()
-        .filter(u8::is_ascii_alphanumeric)
-        .map(|b| b.to_ascii_uppercase());
-    let mut b = key.iter().copied();
-    loop {
-        match (a.next(), b.next()) {
-            (None, None) => return true,
-            (Some(x), Some(y)) if x == y => {}
-            _ => return false,
-        }
-    }
+    name.as_bytes().eq_ignore_ascii_case(key)
 }
 
 fn find(name: &str) -> Option<Found> {
@@ -567,15 +557,15 @@ fn steel_at(grade: &SteelGrade, thickness_mm: f64) -> Result<Steel> {
     } else {
         0.0
     };
-    let band = grade
-        .bands
-        .iter()
-        .find(|(up_to, _)| t <= *up_to)
-        .ok_or(Error::OutOfRange {
+    // The error built only when there is no band (`ok_or` built and
+    // dropped one for every lookup).
+    let Some(band) = grade.bands.iter().find(|(up_to, _)| t <= *up_to) else {
+        return Err(Error::OutOfRange {
             field: "material",
             value: t,
             expected: grade.covers,
-        })?;
+        });
+    };
     Ok(Steel {
         name: grade.name,
         standard: grade.standard,
@@ -792,6 +782,32 @@ mod tests {
             assert_eq!(ours, derived, "{text} as a value");
         }
         ours.is_ok()
+    }
+
+    /// `same_name` compares a table's name with a normalised key but for
+    /// case, which is the normalised comparison only for names of letters
+    /// and digits; and every timber class is found by its name, in any case
+    /// and with spaces or dashes.
+    #[test]
+    fn timber_names_are_letters_and_digits_and_found() {
+        for t in &TIMBER {
+            assert!(
+                t.name.bytes().all(|b| b.is_ascii_alphanumeric()),
+                "{}",
+                t.name
+            );
+            for spelling in [
+                t.name.to_string(),
+                t.name.to_lowercase(),
+                format!(" {}-", t.name.to_uppercase()),
+            ] {
+                assert!(
+                    matches!(find(&spelling), Some(Found::Timber(c)) if c.name == t.name),
+                    "{spelling}"
+                );
+            }
+        }
+        assert!(find("GL28").is_none() && find("GL28hh").is_none());
     }
 
     #[test]

@@ -738,20 +738,7 @@ impl Member {
         // The six moments at once (the largest size within the bound, and
         // no NaN, which max passes over, in the sum); the steps below name
         // the first that is not.
-        let moments = [
-            self.m_major_a_knm,
-            self.m_major_b_knm,
-            self.m_major_span_knm,
-            self.m_minor_a_knm,
-            self.m_minor_b_knm,
-            self.m_minor_span_knm,
-        ];
-        let (mut most, mut sum) = (0.0_f64, 0.0);
-        for m in moments {
-            most = most.max(m.abs());
-            sum += m;
-        }
-        if most > MAX_MOMENT_KNM || sum.is_nan() {
+        if !self.moments_within_bound() {
             self.moments_stepwise()?;
         }
         positive("k_lt", self.k_lt)?;
@@ -772,6 +759,27 @@ impl Member {
         Ok(())
     }
 
+    /// The six moments at once: the largest size within the bound, and no
+    /// NaN (which `max` passes over) in the sum. `false`: one of them is
+    /// not ([`Member::moments_stepwise`] names it).
+    #[inline]
+    fn moments_within_bound(&self) -> bool {
+        let moments = [
+            self.m_major_a_knm,
+            self.m_major_b_knm,
+            self.m_major_span_knm,
+            self.m_minor_a_knm,
+            self.m_minor_b_knm,
+            self.m_minor_span_knm,
+        ];
+        let (mut most, mut sum) = (0.0_f64, 0.0);
+        for m in moments {
+            most = most.max(m.abs());
+            sum += m;
+        }
+        most <= MAX_MOMENT_KNM && !sum.is_nan()
+    }
+
     /// The moments one by one, the first out of range named.
     fn moments_stepwise(&self) -> Result<()> {
         moment("m_major_a_knm", self.m_major_a_knm)?;
@@ -785,6 +793,45 @@ impl Member {
 
     /// Checks the method options that do not depend on the method.
     pub fn validate_options(&self) -> Result<()> {
+        if self.options_usual() {
+            return Ok(());
+        }
+        self.options_stepwise()
+    }
+
+    /// The usual member's options tested at once: moments within their
+    /// bound, `k_lt` finite and above zero, the axial load from 0 to its
+    /// bound, none of the optional keys that [`Member::options_stepwise`]
+    /// tests given, and an id that starts with a letter or digit. `true`
+    /// only where the steps find nothing (a unit test holds the two equal
+    /// over the edges of every test); `false` leaves it to the steps, which
+    /// name the field.
+    #[inline]
+    fn options_usual(&self) -> bool {
+        self.moments_within_bound()
+            && self.k_lt > 0.0
+            && self.k_lt < f64::INFINITY
+            && self.axial_kn >= 0.0
+            && self.axial_kn <= MAX_AXIAL_KN
+            && self.lcr_lt_mm.is_none()
+            && self.amplification_length_major_mm.is_none()
+            && self.amplification_length_minor_mm.is_none()
+            && self.gamma_m1.is_none()
+            && self.bow_mm.is_none()
+            && self.eccentricity_mm.is_none()
+            && self.service_class.is_none()
+            && self.csa_n.is_none()
+            && self.buckling_model.is_none()
+            && self
+                .id
+                .as_bytes()
+                .first()
+                .is_some_and(u8::is_ascii_alphanumeric)
+    }
+
+    /// [`Member::validate_options`] one test at a time, naming the field
+    /// of the first that fails.
+    fn options_stepwise(&self) -> Result<()> {
         self.validate_bending()?;
         non_negative("axial_kn", self.axial_kn)?;
         if self.axial_kn > MAX_AXIAL_KN {
@@ -1064,6 +1111,77 @@ mod tests {
             }
         }
         assert_eq!(compared, values.len() * values.len() * 6);
+    }
+
+    /// The options tested at once (`options_usual`) never pass what the
+    /// steps refuse: `validate_options` is the steps' result, error and
+    /// field, over the edges of every test, one field at a time and the
+    /// moments two at a time; and the usual member takes the quick path.
+    #[test]
+    fn options_at_once_are_the_options_one_by_one() {
+        let edges = [
+            0.0,
+            -0.0,
+            -1.0,
+            0.5,
+            1.0,
+            1.0e7,
+            1.000_000_1e7,
+            f64::INFINITY,
+            f64::NEG_INFINITY,
+            f64::NAN,
+            f64::MAX,
+        ];
+        let optional = |v: f64| [None, Some(v)];
+        let mut variants: Vec<Member> = vec![round_bar(2000.0)];
+        for &v in &edges {
+            let base = round_bar(2000.0);
+            let mut put = |f: &dyn Fn(&mut Member)| {
+                let mut m = base.clone();
+                f(&mut m);
+                variants.push(m);
+            };
+            put(&|m| m.axial_kn = v);
+            put(&|m| m.k_lt = v);
+            put(&|m| m.m_major_a_knm = v);
+            put(&|m| m.m_minor_span_knm = v);
+            put(&|m| {
+                m.m_major_b_knm = v;
+                m.m_minor_a_knm = -v;
+            });
+            for o in optional(v) {
+                put(&|m| m.lcr_lt_mm = o);
+                put(&|m| m.amplification_length_major_mm = o);
+                put(&|m| m.amplification_length_minor_mm = o);
+                put(&|m| m.gamma_m1 = o);
+                put(&|m| m.bow_mm = o);
+                put(&|m| m.eccentricity_mm = o);
+                put(&|m| m.csa_n = o);
+            }
+        }
+        for sc in [0, 1, 3, 4] {
+            let mut m = round_bar(2000.0);
+            m.service_class = Some(sc);
+            variants.push(m);
+        }
+        for id in ["", " ", "\u{b}", "\u{a0}C1", "C1", "1", " C1", "é"] {
+            let mut m = round_bar(2000.0);
+            m.id = id.into();
+            variants.push(m);
+        }
+        let (mut quick, mut refused) = (0, 0);
+        for m in &variants {
+            let at_once = m.validate_options();
+            let one_by_one = m.options_stepwise();
+            assert_eq!(format!("{at_once:?}"), format!("{one_by_one:?}"), "{m:?}");
+            quick += usize::from(m.options_usual());
+            refused += usize::from(one_by_one.is_err());
+        }
+        assert!(round_bar(2000.0).options_usual());
+        assert!(
+            quick > 10 && refused > 10,
+            "{quick} quick, {refused} refused"
+        );
     }
 
     #[test]

@@ -173,7 +173,18 @@ impl Quantity {
     pub fn of_key(key: &str) -> Option<Quantity> {
         let (_, suffix) = split_suffix(key)?;
         Some(match suffix {
-            SiSuffix::Mm if key == "length_mm" || key.starts_with("lcr_") => Quantity::Span,
+            // Lengths of the member and positions along it: the member's
+            // length, buckling lengths, the amplification lengths, a
+            // buckling model's levels (`at_mm`) and results' buckling lengths.
+            SiSuffix::Mm
+                if key == "length_mm"
+                    || key.starts_with("lcr_")
+                    || key.starts_with("amplification_length_")
+                    || key == "at_mm"
+                    || key == "buckling_length_mm" =>
+            {
+                Quantity::Span
+            }
             SiSuffix::Mm => Quantity::Length,
             SiSuffix::Mm2 => Quantity::Area,
             SiSuffix::Mm3 => Quantity::Modulus,
@@ -668,6 +679,12 @@ mod tests {
         assert_eq!(si_key_to_us("e_mpa", UsUnit::Ksi).as_deref(), Some("e_ksi"));
         assert_eq!(Quantity::of_key("length_mm"), Some(Quantity::Span));
         assert_eq!(Quantity::of_key("lcr_minor_mm"), Some(Quantity::Span));
+        assert_eq!(
+            Quantity::of_key("amplification_length_major_mm"),
+            Some(Quantity::Span)
+        );
+        assert_eq!(Quantity::of_key("at_mm"), Some(Quantity::Span));
+        assert_eq!(Quantity::of_key("bow_mm"), Some(Quantity::Length));
         assert_eq!(Quantity::of_key("depth_mm"), Some(Quantity::Length));
         assert_eq!(Quantity::of_key("fy_mpa"), Some(Quantity::Stress));
         assert_eq!(Quantity::of_key("k_major"), None);

@@ -28,6 +28,9 @@ export function register(test, { withApp, open, OUT }) {
   test("list-tools", async () => {
     await withApp("list-tools", async (page, log) => {
       await open(page);
+      // The tools are folded under the list's heading until opened.
+      assert.equal(await page.locator("[name=list_order]").isVisible(), false, "the tools start folded");
+      await page.locator("[data-testid=list-tools-fold] > summary").click();
       const rows = page.locator("[data-testid=member-row]");
       const shown = () => rows.evaluateAll((els) => els.map((e) => e.dataset.id));
       const utilOf = (id) => page.locator(`[data-testid=member-row][data-id="${id}"] [data-testid=member-utilisation]`);
@@ -102,6 +105,68 @@ export function register(test, { withApp, open, OUT }) {
       await page.locator("[name=list_text]").fill("");
       await page.locator("[name=list_status]").selectOption("");
       await waitForText(tally, (t) => t === `Showing ${ids.length} of ${ids.length} · 2 picked`);
+      assert.deepEqual(log.errors, []);
+    });
+  });
+
+  test("list-name-and-member-actions", async () => {
+    await withApp("list-name-and-member-actions", async (page, log) => {
+      await open(page);
+      const rows = page.locator("[data-testid=member-row]");
+      const shown = () => rows.evaluateAll((els) => els.map((e) => e.dataset.id));
+      const original = (await storedMembers(page)).map((m) => m.id);
+      const title = page.locator("#list-title");
+      const fold = page.locator("[data-testid=list-rename]");
+
+      // The member being edited moves, is copied and is deleted from its
+      // editor; a deletion can be undone.
+      await rows.first().locator(".row-main").click();
+      const first = original[0];
+      await page.locator("[data-testid=move-member-down]").click();
+      await waitForText(rows.nth(1), () => true);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id).slice(0, 2), [original[1], first], "moved down");
+      assert.equal(await page.locator("[data-testid=move-member-down]").getAttribute("aria-label"), `Move ${first} down`);
+      await page.locator("[data-testid=move-member-up]").click();
+      await page.waitForTimeout(300);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), original, "moved back up");
+      await page.locator("[data-testid=duplicate-member]").click();
+      await page.waitForTimeout(300);
+      const copied = (await storedMembers(page)).map((m) => m.id);
+      assert.equal(copied.length, original.length + 1, "copied");
+      const copy = copied.find((id) => !original.includes(id));
+      assert.ok(copy, "the copy has a new id");
+      await page.locator("[data-testid=delete-member]").click();
+      await page.waitForTimeout(300);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), original, "the copy deleted");
+      await page.locator("[data-testid=undo]").click();
+      await page.waitForTimeout(300);
+      assert.deepEqual((await storedMembers(page)).map((m) => m.id), copied, "the deletion undone");
+      assert.ok((await shown()).includes(copy));
+
+      // Two new lists, named; the first deleted while open: the name field
+      // then shows the list that is open, and typing renames that one.
+      for (const name of ["List AAA", "List BBB"]) {
+        await page.locator("[data-testid=new-list]").click();
+        if (!(await title.isVisible())) await fold.locator("summary").click();
+        await title.fill(name);
+      }
+      const select = page.locator("[data-testid=list-select]");
+      const labelOf = async () => (await select.locator("option:checked").textContent()).trim();
+      await select.selectOption({ label: "List AAA" });
+      await waitForText(title, () => true);
+      assert.equal(await title.inputValue(), "List AAA");
+      if (!(await page.locator("[data-testid=delete-list]").isVisible())) await fold.locator("summary").click();
+      await page.locator("[data-testid=delete-list]").click();
+      await page.waitForTimeout(300);
+      const nowOpen = await labelOf();
+      assert.notEqual(nowOpen, "List AAA", "the deleted list is not open");
+      if (!(await title.isVisible())) await fold.locator("summary").click();
+      assert.equal(await title.inputValue(), nowOpen, "the name field shows the open list's name");
+      await title.fill(`${nowOpen} renamed`);
+      await page.waitForTimeout(300);
+      const titles = await page.evaluate((k) => JSON.parse(localStorage.getItem(k)).lists.map((l) => l.title), STORAGE_KEY);
+      assert.ok(titles.includes(`${nowOpen} renamed`), "the open list is the one renamed");
+      assert.ok(!titles.includes("List AAA"), "the deleted list stays deleted");
       assert.deepEqual(log.errors, []);
     });
   });

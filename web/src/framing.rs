@@ -11,7 +11,7 @@ use strutline_core::buckling::chart::{
 use strutline_core::units::UnitSystem;
 
 use crate::numtext::{fixed, parse_number, working};
-use crate::units_view::{from_field, result_text};
+use crate::units_view::{from_field, span_text};
 
 /// The frame key of an axis.
 pub fn key(major: bool) -> FrameKey {
@@ -30,7 +30,8 @@ pub fn k_text(frame: &Frame, major: bool, length_mm: f64, sys: UnitSystem) -> St
             "k = {} ({} frame), buckling length k·L = {}",
             fixed(k, 3),
             if frame.sway { "sway" } else { "braced" },
-            result_text(sys, "mm", k * length_mm, 0)
+            // A member length: ft in US units, as the member's length.
+            span_text(sys, k * length_mm)
         ),
         Err(e) => crate::fields::error_text(&e),
     }

@@ -446,9 +446,9 @@ impl ListTools {
 }
 
 /// Height of a member row and the gap after it, in CSS pixels: the rows
-/// have a fixed height in `style.css` (`.member-row`, 104 px, and the
+/// have a fixed height in `style.css` (`.member-row`, 64 px, and the
 /// list's gap, 6 px), so the list can build only the rows in view.
-pub const ROW_PITCH_PX: f64 = 110.0;
+pub const ROW_PITCH_PX: f64 = 70.0;
 
 /// Rows built beyond each edge of the part in view, so a fling or a Tab
 /// finds rows already there (from the second frame on: the first frame
@@ -781,16 +781,17 @@ mod tests {
 
     #[test]
     fn the_window_holds_what_is_in_view_and_no_more() {
-        // 800 px of a 1,000-row list at the top: 8 rows in view (+1
-        // partly), 8 more below; the rest stood in for.
-        assert_eq!(window(0.0, 800.0, 1000, OVERSCAN), (0, 17));
+        // 800 px of a 1,000-row list at the top: 11 rows in view (+1
+        // partly, +1 for a scroll between rows), 8 more below; the rest
+        // stood in for.
+        assert_eq!(window(0.0, 800.0, 1000, OVERSCAN), (0, 21));
         // The first frame: what is in view, nothing beyond it.
-        assert_eq!(window(0.0, 800.0, 1000, 0), (0, 9));
+        assert_eq!(window(0.0, 800.0, 1000, 0), (0, 13));
         // Scrolled to row 500: 8 rows above it and below the view.
         let (a, b) = window(500.0 * ROW_PITCH_PX, 800.0, 1000, OVERSCAN);
-        assert_eq!((a, b), (492, 517));
+        assert_eq!((a, b), (492, 521));
         assert!(b - a < 30, "the window does not grow with the list");
-        assert_eq!(window(500.0 * ROW_PITCH_PX, 800.0, 1000, 0), (500, 509));
+        assert_eq!(window(500.0 * ROW_PITCH_PX, 800.0, 1000, 0), (500, 513));
         // The end of the list, short lists, nonsense input.
         assert_eq!(window(1e9, 800.0, 1000, OVERSCAN), (1000, 1000));
         assert_eq!(window(0.0, 800.0, 3, OVERSCAN), (0, 3));

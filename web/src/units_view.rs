@@ -148,6 +148,17 @@ pub fn field_unit(system: UnitSystem, key: &str, si_unit: &'static str) -> &'sta
     }
 }
 
+/// The name a field's key goes by in the units shown: the member file's
+/// key in SI, the US column's (`length_ft`, `axial_kip`) in US units, as
+/// the CSV with US columns names it.
+pub fn field_key(system: UnitSystem, key: &'static str) -> std::borrow::Cow<'static, str> {
+    let us = (system == UnitSystem::Us)
+        .then(|| Quantity::of_key(key).and_then(units::us_unit))
+        .flatten()
+        .and_then(|u| units::si_key_to_us(key, u));
+    us.map_or(std::borrow::Cow::Borrowed(key), std::borrow::Cow::Owned)
+}
+
 /// The text a field shows for the stored text `si` of key `key`.
 pub fn to_field(system: UnitSystem, key: &str, si: &str) -> String {
     let Some(q) = Quantity::of_key(key).filter(|_| system == UnitSystem::Us) else {
@@ -219,6 +230,22 @@ pub fn from_field(system: UnitSystem, key: &str, typed: &str) -> String {
 mod tests {
     use super::*;
     use UnitSystem::{Si, Us};
+
+    #[test]
+    fn a_field_key_goes_by_its_us_column_in_us_units() {
+        assert_eq!(field_key(Si, "length_mm"), "length_mm");
+        assert_eq!(field_key(Us, "length_mm"), "length_ft");
+        assert_eq!(field_key(Us, "axial_kn"), "axial_kip");
+        assert_eq!(field_key(Us, "depth_mm"), "depth_in");
+        assert_eq!(field_key(Us, "m_major_a_knm"), "m_major_a_kipft");
+        // A member length, shown in ft as the member's own length is.
+        assert_eq!(
+            field_key(Us, "amplification_length_major_mm"),
+            "amplification_length_major_ft"
+        );
+        assert_eq!(field_key(Us, "k_major"), "k_major");
+        assert_eq!(field_key(Us, "note"), "note");
+    }
 
     #[test]
     fn a_section_reads_in_the_units_shown() {

@@ -43,8 +43,9 @@ impl Hash for Key {
 }
 
 thread_local! {
+    // Started empty by a constant (no lazy start to test at each look-up).
     static MEMO: RefCell<HashMap<Key, Properties, rustc_hash::FxBuildHasher>> =
-        RefCell::new(HashMap::with_capacity_and_hasher(64, rustc_hash::FxBuildHasher));
+        const { RefCell::new(HashMap::with_hasher(rustc_hash::FxBuildHasher)) };
 }
 
 fn opt(v: Option<f64>) -> u64 {
@@ -197,18 +198,29 @@ pub fn fill(spec: &SectionSpec, out: &mut Properties) -> Result<()> {
         *out = super::shapes::properties(spec)?;
         return Ok(());
     };
-    let hit = MEMO.with(|m| {
-        m.try_borrow()
-            .is_ok_and(|m| m.get(&k).map(|p| *out = *p).is_some())
-    });
+    // `try_with` (inlined, where `with` was inlined or not from build to
+    // build, some 40 instructions a look-up apart): a memo that cannot be
+    // reached (the thread ending) is a miss.
+    let hit = MEMO
+        .try_with(|m| {
+            m.try_borrow()
+                .is_ok_and(|m| m.get(&k).map(|p| *out = *p).is_some())
+        })
+        .unwrap_or(false);
     if hit {
         return Ok(());
     }
     let p = super::shapes::properties(spec)?;
-    MEMO.with(|m| {
+    // Not kept where the memo cannot be reached.
+    let _ = MEMO.try_with(|m| {
         if let Ok(mut m) = m.try_borrow_mut() {
             if m.len() >= CAP {
                 m.clear();
+            }
+            // Room for a list's sections at the first entry (the constant
+            // start has none).
+            if m.capacity() == 0 {
+                m.reserve(64);
             }
             m.insert(k, p);
         }

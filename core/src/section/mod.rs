@@ -469,6 +469,24 @@ impl SectionSpec {
     /// (`catalogue::build`), which the check does when it prepares a member.
     #[inline]
     pub fn build(&self) -> Result<Section> {
+        let mut section = self.unfilled()?;
+        cache::fill(self, &mut section.props)?;
+        Ok(section)
+    }
+
+    /// [`SectionSpec::build`] into `slot`, borrowed back: the section is
+    /// written where the caller keeps it, not returned and then moved
+    /// there (a 300-byte copy fewer in a check from the member as written).
+    #[inline]
+    pub fn build_in<'s>(&self, slot: &'s mut Option<Section>) -> Result<&'s Section> {
+        let section = slot.insert(self.unfilled()?);
+        cache::fill(self, &mut section.props)?;
+        Ok(section)
+    }
+
+    /// The section of this spec with its properties still to be filled.
+    #[inline(always)]
+    fn unfilled(&self) -> Result<Section> {
         let Some(family) = self.family() else {
             return Err(crate::error::Error::Geometry {
                 field: "designation",
@@ -477,14 +495,12 @@ impl SectionSpec {
                     .into(),
             });
         };
-        let mut section = Section {
+        Ok(Section {
             spec: self.clone(),
             family,
             props: Properties::default(),
             designation: None,
-        };
-        cache::fill(self, &mut section.props)?;
-        Ok(section)
+        })
     }
 
     /// A short human description, e.g. "I 300x300x19x11 r27".

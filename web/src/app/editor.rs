@@ -51,7 +51,7 @@ pub(super) fn NumField(
     let err_id2 = err_id.clone();
     view! {
         <div class="field" class:has-error=move || error.with(Option::is_some)>
-            <label for=input_id.clone()>{field.label} <code class="key">{field.key}</code></label>
+            <label for=input_id.clone()>{field.label} <code class="key">{crate::units_view::field_key(sys, field.key)}</code></label>
             <div class="input-row">
                 <input
                     type="text"
@@ -300,6 +300,7 @@ pub(super) fn Editor(ctx: Ctx) -> impl IntoView {
     let modelled = member.buckling_model.is_some();
     view! {
         <h2 id="h-editor" class="pane-title">"Member " <span class="editing-id">{move || title.get()}</span></h2>
+        <super::list::MemberActions ctx=ctx id=title />
         <form class="editor" on:submit=|e| e.prevent_default() autocomplete="off">
             <fieldset>
                 <legend>"Identity"</legend>

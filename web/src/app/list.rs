@@ -59,7 +59,12 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
                     }.into_any()).collect::<Vec<_>>()}
                 </select>
             </div>
-            {made_afresh(Signal::derive(move || key_of(&active.get())), Arc::new(move || {
+            <details class="list-fold" data-testid="list-rename">
+                <summary>"Rename or delete this list"</summary>
+            // Made afresh when another list opens, also when the open list's
+            // index stays the same (the list at it deleted or put back):
+            // every such change selects a member, which moves `generation`.
+            {made_afresh(Signal::derive(move || key_of(&(active.get(), ctx.generation.get()))), Arc::new(move || {
                 let title = ctx.ws.with_untracked(|w| w.active_list().map(|l| l.title.clone()).unwrap_or_default());
                 view! {
                     <div class="field">
@@ -85,14 +90,6 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
                 }
             }.into_any()))}
             <div class="button-row">
-                <button type="button" data-testid="new-list" on:click=move |_| {
-                    ctx.ws.update(|w| {
-                        let title = listops::free_title(&w.lists, "New job");
-                        w.lists.push(strutline_core::file::MemberFile::new(title));
-                        w.active = w.lists.len() - 1;
-                    });
-                    ctx.select(0);
-                }>"+ New list"</button>
                 <button type="button" data-testid="delete-list" on:click=move |_| {
                     let mut gone = None;
                     ctx.ws.update(|w| {
@@ -110,6 +107,7 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
                     }
                 } disabled=move || titles.with(|t| t.len() <= 1)>"Delete list"</button>
             </div>
+            </details>
         </div>
         <p class="list-summary" role="status">
             {move || {
@@ -121,20 +119,30 @@ pub(super) fn ListPanel(ctx: Ctx) -> impl IntoView {
                 s
             }}
         </p>
-        <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {
-            if let Some(i) = ctx.with_members(|ms| listops::add(ms, &demo::new_member())) {
-                // Its design load is the engineer's to give: until then it
-                // needs input, never "holds" on a made-up load.
-                let list = ctx.ws.with_untracked(|w| w.active);
-                let id = ctx.ws.with_untracked(|w| {
-                    w.active_list().and_then(|l| l.members.get(i)).map(|m| m.id.clone())
-                });
-                if let Some(id) = id {
-                    ctx.drafts.update(|d| d.set(list, &id, "axial_kn", "", demo::NEW_MEMBER_ASKS));
+        <div class="button-row list-adds">
+            <button type="button" class="add-member" data-testid="add-member" on:click=move |_| {
+                if let Some(i) = ctx.with_members(|ms| listops::add(ms, &demo::new_member())) {
+                    // Its design load is the engineer's to give: until then it
+                    // needs input, never "holds" on a made-up load.
+                    let list = ctx.ws.with_untracked(|w| w.active);
+                    let id = ctx.ws.with_untracked(|w| {
+                        w.active_list().and_then(|l| l.members.get(i)).map(|m| m.id.clone())
+                    });
+                    if let Some(id) = id {
+                        ctx.drafts.update(|d| d.set(list, &id, "axial_kn", "", demo::NEW_MEMBER_ASKS));
+                    }
+                    ctx.select(i);
                 }
-                ctx.select(i);
-            }
-        }>"+ Add member"</button>
+            }>"+ Add member"</button>
+            <button type="button" data-testid="new-list" on:click=move |_| {
+                ctx.ws.update(|w| {
+                    let title = listops::free_title(&w.lists, "New job");
+                    w.lists.push(strutline_core::file::MemberFile::new(title));
+                    w.active = w.lists.len() - 1;
+                });
+                ctx.select(0);
+            }>"+ New list"</button>
+        </div>
         <listbar::ListBar ctx=ctx tools=tools />
         <Rows ctx=ctx tools=tools selected_id=selected_id />
     }
@@ -330,8 +338,7 @@ pub(super) fn MemberRow(
     let id_sel = id.clone();
     let is_selected =
         Memo::new(move |_| selected_id.with(|s| s.as_deref() == Some(id_sel.as_str())));
-    let (i1, i2, i3, i4, i5) = (id.clone(), id.clone(), id.clone(), id.clone(), id.clone());
-    let i6 = id.clone();
+    let (i1, i6) = (id.clone(), id.clone());
     view! {
         <li
             class="member-row"
@@ -363,37 +370,85 @@ pub(super) fn MemberRow(
                 <span class="row-util" data-testid="member-utilisation">{util}</span>
                 <span class="row-detail">{detail}</span>
             </button>
-            <div class="row-actions">
-                <button type="button" aria-label=format!("Move {id} up")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i2) {
-                        if let Some(Some(j)) = ctx.with_members(|ms| listops::move_up(ms, i)) { ctx.select(j); }
-                    }
-                }>"↑"</button>
-                <button type="button" aria-label=format!("Move {id} down")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i3) {
-                        if let Some(Some(j)) = ctx.with_members(|ms| listops::move_down(ms, i)) { ctx.select(j); }
-                    }
-                }>"↓"</button>
-                <button type="button" data-testid="duplicate-member" aria-label=format!("Copy {id}")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i4) {
-                        if let Some(Some(j)) = ctx.with_members(|ms| listops::duplicate(ms, i)) { ctx.select(j); }
-                    }
-                }>"Copy"</button>
-                <button type="button" data-testid="delete-member" aria-label=format!("Delete {id}")  on:click=move |e: ev::MouseEvent| {
-                    e.stop_propagation();
-                    if let Some(i) = ctx.index_of(&i5) {
-                        let list = ctx.ws.with_untracked(|w| w.active);
-                        if let Some(Some(d)) = ctx.with_members(|ms| listops::delete(ms, i)) {
-                            ctx.undo.set(Some(Undo::Member { list, deleted: Box::new(d) }));
-                            let len = ctx.ws.with_untracked(|w| w.active_list().map_or(0, |l| l.members.len()));
-                            ctx.select(i.min(len.saturating_sub(1)));
-                        }
-                    }
-                }>"Delete"</button>
-            </div>
         </li>
+    }
+}
+
+/// What can be done to one member of the list, shown with the member being
+/// edited rather than on every row, so that the rows stay one touch target
+/// high and a tablet's list pane shows more of them.
+#[derive(Clone, Copy)]
+enum RowAct {
+    Up,
+    Down,
+    Copy,
+    Delete,
+}
+
+impl RowAct {
+    const ALL: [RowAct; 4] = [RowAct::Up, RowAct::Down, RowAct::Copy, RowAct::Delete];
+
+    /// The button's text and its accessible name for member `id`.
+    fn words(self, id: &str) -> (&'static str, String) {
+        match self {
+            RowAct::Up => ("↑ Up", format!("Move {id} up")),
+            RowAct::Down => ("↓ Down", format!("Move {id} down")),
+            RowAct::Copy => ("Copy", format!("Copy {id}")),
+            RowAct::Delete => ("Delete", format!("Delete {id}")),
+        }
+    }
+
+    fn test_id(self) -> &'static str {
+        match self {
+            RowAct::Up => "move-member-up",
+            RowAct::Down => "move-member-down",
+            RowAct::Copy => "duplicate-member",
+            RowAct::Delete => "delete-member",
+        }
+    }
+
+    /// Does it to member `id` of the active list and selects where it went
+    /// (a deletion can be undone).
+    fn run(self, ctx: Ctx, id: &str) {
+        let Some(i) = ctx.index_of(id) else { return };
+        let to = match self {
+            RowAct::Up => ctx.with_members(|ms| listops::move_up(ms, i)).flatten(),
+            RowAct::Down => ctx.with_members(|ms| listops::move_down(ms, i)).flatten(),
+            RowAct::Copy => ctx.with_members(|ms| listops::duplicate(ms, i)).flatten(),
+            RowAct::Delete => {
+                let list = ctx.ws.with_untracked(|w| w.active);
+                let Some(Some(d)) = ctx.with_members(|ms| listops::delete(ms, i)) else {
+                    return;
+                };
+                ctx.undo.set(Some(Undo::Member {
+                    list,
+                    deleted: Box::new(d),
+                }));
+                let len = ctx
+                    .ws
+                    .with_untracked(|w| w.active_list().map_or(0, |l| l.members.len()));
+                Some(i.min(len.saturating_sub(1)))
+            }
+        };
+        if let Some(j) = to {
+            ctx.select(j);
+        }
+    }
+}
+
+/// The buttons acting on member `id` (the one being edited): move it up or
+/// down the list, copy it, delete it.
+#[component]
+pub(super) fn MemberActions(ctx: Ctx, id: Memo<String>) -> impl IntoView {
+    view! {
+        <div class="member-actions" role="group" aria-label="This member in the list">
+            {RowAct::ALL.into_iter().map(|act| {
+                let name = move || act.words(&id.get()).1;
+                view! {
+                    <button type="button" data-testid=act.test_id() aria-label=name
+                        on:click=move |_| act.run(ctx, &id.get_untracked())>{act.words("").0}</button>
+                }
+            }).collect::<Vec<_>>()}
+        </div>
     }
 }

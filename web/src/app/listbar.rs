@@ -52,14 +52,19 @@ fn clicked((ctx, tools): Tools, e: &leptos::ev::MouseEvent) {
     }
 }
 
-/// The bar, the change form (folded until opened) and the tally.
+/// The bar and the change form, folded until opened (the tally below
+/// them stays in view, so a filter that hides rows is always said), and
+/// the tally.
 #[component]
 pub(super) fn ListBar(ctx: Ctx, tools: RwSignal<ListTools>) -> impl IntoView {
     let p: Tools = (ctx, tools);
     let (bar, form) = tools_html();
     view! {
-        <div class="list-tools"
-            on:input=move |e| typed(p, &e) on:click=move |e| clicked(p, &e) inner_html=bar.into_string() + form.as_str()></div>
+        <details class="list-tools-fold" data-testid="list-tools-fold">
+            <summary>"Order, filter and pick"</summary>
+            <div class="list-tools"
+                on:input=move |e| typed(p, &e) on:click=move |e| clicked(p, &e) inner_html=bar.into_string() + form.as_str()></div>
+        </details>
         <p class="list-summary" role="status" inner_html=move || tools.with(|t| ctx.checks.with(|c| status_html(t, &c.0).into_string()))></p>
     }
 }
