@@ -162,6 +162,29 @@ impl Ctx {
         }
     }
 
+    /// The draft rule ([`Drafted`]) of the selected member's field `key`,
+    /// whose value is `now`, and the text its box starts with: the draft's
+    /// text where there is one, else `shown()`.
+    fn drafted<T: Send + Sync + 'static>(
+        &self,
+        key: String,
+        now: T,
+        shown: impl FnOnce() -> String,
+    ) -> (Drafted<T>, String) {
+        let draft = self.draft(&key);
+        let (text, error) = match draft {
+            Some(d) => (d.text, Some(d.message)),
+            None => (shown(), None),
+        };
+        let rule = Drafted {
+            ctx: *self,
+            key: StoredValue::new(key),
+            error: RwSignal::new(error),
+            entered: StoredValue::new(now),
+        };
+        (rule, text)
+    }
+
     /// Index of a member id in the active list.
     fn index_of(&self, id: &str) -> Option<usize> {
         self.ws.with_untracked(|w| {
@@ -179,6 +202,59 @@ impl Ctx {
             }
         });
         out
+    }
+}
+
+/// The draft rule of one field ([`crate::drafts`]), which the editor's
+/// fields, the column-model panel's and the frame's G fields all follow:
+/// text that cannot be read is kept as the selected member's draft of the
+/// field's key and shown as the field's error, and the value the field had
+/// when it was entered is put back, so a half-typed number is never checked
+/// or saved; text that reads drops the draft. Made by [`Ctx::drafted`].
+struct Drafted<T: Send + Sync + 'static> {
+    ctx: Ctx,
+    key: StoredValue<String>,
+    /// Why the text cannot be read, while it cannot.
+    error: RwSignal<Option<String>>,
+    /// The value when the field was entered.
+    entered: StoredValue<T>,
+}
+
+// Copy whatever T is: the fields are handles (a derive would ask T: Copy).
+impl<T: Send + Sync + 'static> Clone for Drafted<T> {
+    fn clone(&self) -> Self {
+        *self
+    }
+}
+
+impl<T: Send + Sync + 'static> Copy for Drafted<T> {}
+
+impl<T: Clone + PartialEq + Send + Sync + 'static> Drafted<T> {
+    /// The field entered with the value `now`: the one to put back, unless
+    /// the field's text already cannot be read (then the value from before
+    /// that text stays the one).
+    fn enter(&self, now: T) {
+        if self.error.with_untracked(Option::is_none) {
+            self.entered.set_value(now);
+        }
+    }
+
+    /// `typed` cannot be read (`why`): it is kept as the draft and shown,
+    /// and where the value is no longer the one the field was entered with
+    /// (`now` differs), that value is handed to `put_back`.
+    fn unread(&self, typed: &str, why: String, now: T, put_back: impl FnOnce(T)) {
+        self.key.with_value(|k| self.ctx.keep_draft(k, typed, &why));
+        self.error.set(Some(why));
+        let before = self.entered.get_value();
+        if now != before {
+            put_back(before);
+        }
+    }
+
+    /// The text reads: its draft, if any, goes.
+    fn read(&self) {
+        self.error.set(None);
+        self.key.with_value(|k| self.ctx.drop_draft(k));
     }
 }
 
