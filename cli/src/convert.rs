@@ -382,7 +382,10 @@ mod tests {
         );
         let back = csv::parse_csv(&text);
         assert!(back.problems.is_empty());
-        assert!((back.members[0].length_mm - 2000.0).abs() < 1e-9);
+        // 2000 mm is 6.561679790026... ft: written to ten figures, which
+        // read back as 2000 mm exactly (core's csv::write::us_cell).
+        assert!(text.contains(",6.56167979,"), "{text}");
+        assert_eq!(back.members[0].length_mm, 2000.0);
         assert!(run(&[s(&csv_in), s(&out), "--units".into(), "imperial".into()]).is_err());
         let _ = std::fs::remove_dir_all(&d);
     }

@@ -419,7 +419,12 @@ fn malformed_lists_are_named_and_never_look_complete() {
     });
     let cases = [
         (&truncated, vec!["line"]),
-        (&wrong_type, vec!["\"C5000\"", "axial_kn"]),
+        // Member i stands on line i + 2 (the head is line 1): the wrong
+        // type is told with its place in the file, as a broken file is.
+        (
+            &wrong_type,
+            vec!["\"C5000\"", "line 5002, column ", "axial_kn"],
+        ),
         (&duplicate, vec!["#5801", "\"C12\""]),
         (
             &too_big,

@@ -243,7 +243,7 @@ fn parse_once(text: &str, name_range: bool) -> Result<MemberFile> {
         header(&value)?;
         return Err(repeated(&value, &repeat));
     }
-    from_value(value)
+    from_parsed_text(&value, Some(text))
 }
 
 /// The format and version of a member file's JSON (its version).
@@ -292,9 +292,16 @@ pub fn from_value(value: Value) -> Result<MemberFile> {
 /// that reads as the current one ([`reads_as_current`]) is read as it
 /// stands; an older one is migrated on a copy.
 pub fn from_parsed(value: &Value) -> Result<MemberFile> {
+    from_parsed_text(value, None)
+}
+
+/// [`from_parsed`] of a value parsed from `text`, where there is one: a
+/// member's fault is then told with its line and column in the text
+/// ([`placed_in_file`]).
+fn from_parsed_text(value: &Value, text: Option<&str>) -> Result<MemberFile> {
     let version = header(value)?;
     if reads_as_current(version) {
-        return read_current(value);
+        return read_current(value, text);
     }
     let mut owned = value.clone();
     let mut v = version;
@@ -302,12 +309,12 @@ pub fn from_parsed(value: &Value) -> Result<MemberFile> {
         owned = migrate(owned, v)?;
         v += 1;
     }
-    read_current(&owned)
+    read_current(&owned, None)
 }
 
 /// The members, title and sheet of a member file's value in the current
-/// version.
-fn read_current(value: &Value) -> Result<MemberFile> {
+/// version, parsed from `text` where there is one.
+fn read_current(value: &Value, text: Option<&str>) -> Result<MemberFile> {
     let obj = value.as_object().ok_or_else(|| Error::NotMemberFile {
         reason: "the top level is not a JSON object".into(),
     })?;
@@ -340,7 +347,8 @@ fn read_current(value: &Value) -> Result<MemberFile> {
     };
     let mut members = Vec::with_capacity(raw_members.len());
     for (index, raw) in raw_members.iter().enumerate() {
-        members.push(member_from_value(raw, index)?);
+        members
+            .push(member_from_value(raw, index).map_err(|e| placed_in_file(e, text, raw, index))?);
     }
     check_unique_ids(&members)?;
     Ok(MemberFile {
@@ -376,6 +384,27 @@ pub fn member_from_value(raw: &Value, index: usize) -> Result<Member> {
         // every id.
         .in_member(&member_name(Some(raw), index))
     })
+}
+
+/// The fault `e` of member `index` (its parsed value `raw`) with its line
+/// and column in the file's `text`, natively, where reading the text meets
+/// the same fault ([`crate::read::fault_at`]); as it is otherwise.
+fn placed_in_file(e: Error, text: Option<&str>, raw: &Value, index: usize) -> Error {
+    #[cfg(not(target_arch = "wasm32"))]
+    if let Some(text) = text {
+        /// The file's members, the rest of the file passed over.
+        #[derive(serde::Deserialize)]
+        struct Listed {
+            #[allow(dead_code)]
+            members: Vec<Member>,
+        }
+        let prefix = format!("members[{index}]");
+        return crate::read::placed(e, |said| {
+            crate::read::fault_at::<Listed>(text, raw, said, &prefix)
+        });
+    }
+    let _ = (text, raw, index);
+    e
 }
 
 /// A value of the member file's types (a member, a section, ...) as JSON,
@@ -457,7 +486,7 @@ mod tests {
                 migrated = migrate(migrated, at).unwrap();
             }
             assert_eq!(
-                read_current(&migrated).unwrap(),
+                read_current(&migrated, None).unwrap(),
                 from_parsed(&base).unwrap()
             );
         }

@@ -329,6 +329,103 @@ fn found_in_words(found: &str) -> String {
     }
 }
 
+/// Where in `text` a member's fault lies, found afresh by reading `text`
+/// (a member's JSON, or a whole member file's, read as `T`) from text:
+/// serde_json's line and column (1-based) of the fault, where the first
+/// fault it meets is the one reading the member's parsed value `raw` met,
+/// whose words (path and all, as [`crate::file::member_from_value`] gives
+/// them) are `said`; the path is taken after `prefix` (`members[3]` when
+/// `text` is the whole file, "" when it is the member). `None` where
+/// reading the text meets another fault or none. Only on the way to an
+/// error, and only natively (the browser's reader tracks no path).
+#[cfg(not(target_arch = "wasm32"))]
+pub fn fault_at<T: serde::de::DeserializeOwned>(
+    text: &str,
+    raw: &Value,
+    said: &str,
+    prefix: &str,
+) -> Option<(usize, usize)> {
+    let mut track = serde_path_to_error::Track::new();
+    let mut de = serde_json::Deserializer::from_str(text);
+    let e = T::deserialize(serde_path_to_error::Deserializer::new(&mut de, &mut track)).err()?;
+    let full = track.path().to_string();
+    let path = full.strip_prefix(prefix)?;
+    let path = path.strip_prefix('.').unwrap_or(path);
+    let inner = e.to_string();
+    let inner = match inner.rsplit_once(" at line ") {
+        Some((head, _)) if e.line() > 0 => head.to_string(),
+        _ => inner,
+    };
+    let inner = plain(raw, path, inner);
+    let words = if path.is_empty() {
+        inner
+    } else {
+        format!("{path}: {inner}")
+    };
+    (words == said && e.line() > 0).then(|| onto_value(text, (e.line(), e.column())))
+}
+
+/// serde_json places a list or object of the wrong type just before it
+/// (on the blank or the colon before it): the place moved onto the value,
+/// within its line. Columns count bytes, as serde_json's do.
+#[cfg(not(target_arch = "wasm32"))]
+fn onto_value(text: &str, (line, column): (usize, usize)) -> (usize, usize) {
+    let line_start: usize = text
+        .split_inclusive('\n')
+        .take(line.saturating_sub(1))
+        .map(str::len)
+        .sum();
+    let at = line_start + column.saturating_sub(1);
+    let skipped = text
+        .as_bytes()
+        .get(at..)
+        .unwrap_or_default()
+        .iter()
+        .take_while(|b| matches!(b, b' ' | b'\t' | b':'))
+        .count();
+    let moved = text
+        .as_bytes()
+        .get(at + skipped)
+        .is_some_and(|b| *b != b'\n' && *b != b'\r');
+    if moved {
+        (line, column + skipped)
+    } else {
+        (line, column)
+    }
+}
+
+/// A member's fault (`error`, from [`crate::file::member_from_value`]: the
+/// member named, then words without a place) given the line and column
+/// `find` finds for its words ([`fault_at`]), when it finds them.
+#[cfg(not(target_arch = "wasm32"))]
+pub fn placed(
+    error: crate::error::Error,
+    find: impl FnOnce(&str) -> Option<(usize, usize)>,
+) -> crate::error::Error {
+    use crate::error::Error;
+    let Error::InMember { id, source } = error else {
+        return error;
+    };
+    match *source {
+        Error::Syntax {
+            line: 0, message, ..
+        } => match find(&message) {
+            Some((line, column)) => Error::Syntax {
+                line,
+                column,
+                message,
+            },
+            None => Error::Syntax {
+                line: 0,
+                column: 0,
+                message,
+            },
+        }
+        .in_member(&id),
+        other => other.in_member(&id),
+    }
+}
+
 /// The message of a number given as text: the words [`plain`] gives serde's
 /// "invalid type: string ..., expected f64".
 pub fn number_as_text(token: &str) -> String {

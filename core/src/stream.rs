@@ -166,10 +166,12 @@ where
     Ok(head)
 }
 
-/// A member from its JSON text; `index` (0-based) names it when it has no id.
-/// Errors name the member and the field's path, a number too large for a
-/// double included.
-pub fn member_from_str(raw: &str, index: usize) -> Result<Member, Error> {
+/// A member from its JSON text, which starts at line and column `at` of the
+/// file; `index` (0-based) names it when it has no id. Errors name the
+/// member and the field's path, a number too large for a double included,
+/// and a value of the wrong type (or another fault serde_json meets at a
+/// place) its line and column in the file.
+pub fn member_from_str(raw: &str, index: usize, at: (usize, usize)) -> Result<Member, Error> {
     if let Ok(m) = serde_json::from_str::<Member>(raw) {
         return Ok(m);
     }
@@ -185,7 +187,11 @@ pub fn member_from_str(raw: &str, index: usize) -> Result<Member, Error> {
             }
             .in_member(&name));
         }
-        crate::file::member_from_value(&value, index)?;
+        crate::file::member_from_value(&value, index).map_err(|e| {
+            crate::read::placed(e, |said| {
+                crate::read::fault_at::<Member>(raw, &value, said, "").map(|p| in_file(at, p))
+            })
+        })?;
     }
     // A number out of a double's range stops the value reader: where, and
     // which member. Sections are read by serde's derive alone here, which
@@ -314,15 +320,21 @@ fn head_value(
 /// serde_json's error in a value that starts at `at` (line, column) of the
 /// file, placed in the file.
 fn syntax_at(e: &serde_json::Error, at: (usize, usize)) -> Error {
-    let (line, column) = if e.line() <= 1 {
-        (at.0, at.1 + e.column().saturating_sub(1))
-    } else {
-        (at.0 + e.line() - 1, e.column())
-    };
+    let (line, column) = in_file(at, (e.line(), e.column()));
     Error::Syntax {
         line,
         column,
         message: without_position(e),
+    }
+}
+
+/// The line and column in the file of `place` (line, column) in a text
+/// that starts at `at` (line, column) of the file.
+fn in_file(at: (usize, usize), place: (usize, usize)) -> (usize, usize) {
+    if place.0 <= 1 {
+        (at.0, at.1 + place.1.saturating_sub(1))
+    } else {
+        (at.0 + place.0 - 1, place.1)
     }
 }
 
@@ -612,7 +624,7 @@ impl<R: Read> Scan<R> {
         }
         let (start, end) = self.value()?;
         self.window = (2 * (end - start)).max(MIN_WINDOW);
-        member_from_str(self.text(start, end)?, index)
+        member_from_str(self.text(start, end)?, index, self.place(start))
     }
 
     /// Where the value starting at `pos` ends (one past its last byte):

@@ -545,7 +545,14 @@ pub fn format_display(value: f64, significant: usize) -> String {
     }
     // magnitude is within -5..=15, so the cast is exact and small.
     let decimals = (sig as i64 - 1 - magnitude as i64).max(0);
-    let text = format!("{:.*}", decimals as usize, value);
+    fixed_trimmed(value, decimals as usize)
+}
+
+/// `value` to `decimals` decimals, without trailing zeros (nor a point
+/// left alone), a negative zero written "0". The one trimming of shown
+/// figures: [`format_display`], the app's US fields and the US CSV cells.
+pub fn fixed_trimmed(value: f64, decimals: usize) -> String {
+    let text = format!("{value:.decimals$}");
     let text = if text.contains('.') {
         text.trim_end_matches('0').trim_end_matches('.').to_string()
     } else {

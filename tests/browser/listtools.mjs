@@ -3,11 +3,17 @@
 // filter by text and by status, pick two members, open the change form,
 // refuse a bad factor, change
 // their method (the utilisations shown are the command line's for the
-// changed members), and undo the change in one step.
+// changed members), and undo the change in one step. And the row's own
+// controls (answered by the list's one click handler): a click on the row
+// selects it, its pick box picks it without selecting it. And the first
+// frame of a stored
+// 1,000-member list, in each layout: its rows fill the list's box (it
+// builds only as many as the box can show, listops::first_view_px, which
+// mirrors the box's heights in style.css).
 
 import assert from "node:assert/strict";
 import { join } from "node:path";
-import { cliCheck, memberFile, STORAGE_KEY, waitForText } from "./lib.mjs";
+import { cliCheck, memberFile, seedStorage, STORAGE_KEY, thousandMembers, waitForText, workspaceText } from "./lib.mjs";
 
 async function storedMembers(page) {
   await page.waitForTimeout(600);
@@ -107,6 +113,67 @@ export function register(test, { withApp, open, OUT }) {
       await waitForText(tally, (t) => t === `Showing ${ids.length} of ${ids.length} · 2 picked`);
       assert.deepEqual(log.errors, []);
     });
+  });
+  test("row-select-and-pick", async () => {
+    await withApp("row-select-and-pick", async (page, log) => {
+      await open(page);
+      const ids = (await storedMembers(page)).map((m) => m.id);
+      const [a, b] = ids;
+      const current = () =>
+        page.locator("[data-testid=member-row]").evaluateAll((els) =>
+          els.filter((e) => e.querySelector(".row-main").getAttribute("aria-current") === "true").map((e) => e.dataset.id),
+        );
+      const waitCurrent = async (id) => {
+        for (let i = 0; i < 50 && (await current()).join() !== id; i += 1) await page.waitForTimeout(100);
+        assert.deepEqual(await current(), [id]);
+      };
+      const row = (id) => page.locator(`[data-testid=member-row][data-id="${id}"]`);
+      await row(b).locator(".row-main").click();
+      await waitCurrent(b);
+      await row(a).locator("[data-testid=member-pick]").click();
+      await waitForText(page.locator("[data-testid=list-tally]"), (t) => t.endsWith("· 1 picked"));
+      assert.ok(await row(a).locator("[data-testid=member-pick]").isChecked());
+      assert.deepEqual(await current(), [b], "picking does not select");
+      await row(a).locator(".row-id").click();
+      await waitCurrent(a);
+      await row(a).locator("[data-testid=member-pick]").click();
+      await waitForText(page.locator("[data-testid=list-tally]"), (t) => !t.includes("picked"));
+      assert.deepEqual(await current(), [a]);
+      assert.deepEqual(log.errors, []);
+    });
+  });
+  test("first-frame-fills-list-box", async () => {
+    const layouts = [
+      ["desktop", { viewport: { width: 1280, height: 900 } }],
+      ["landscape", { viewport: { width: 1180, height: 820 }, hasTouch: true }],
+      ["wide", { viewport: { width: 1920, height: 1080 } }],
+      ["portrait", { viewport: { width: 820, height: 1180 }, isMobile: true, hasTouch: true }],
+      ["phone", { viewport: { width: 390, height: 844 }, isMobile: true, hasTouch: true }],
+    ];
+    for (const [name, options] of layouts) {
+      await withApp(`first-frame-${name}`, async (page, log, context) => {
+        await seedStorage(context, workspaceText([memberFile("Grain store (invented, 1,000 members)", thousandMembers())]));
+        // At the first animation frame after the first row is in the page.
+        await context.addInitScript(() => {
+          const seen = new MutationObserver(() => {
+            if (!document.querySelector("[data-testid=member-row]")) return;
+            seen.disconnect();
+            requestAnimationFrame(() => {
+              const box = document.querySelector("[data-testid=member-scroll]").getBoundingClientRect();
+              const rows = [...document.querySelectorAll("[data-testid=member-row]")];
+              window.__firstFrame = { rows: rows.length, last: rows.at(-1).getBoundingClientRect().bottom, box: box.bottom, height: box.height };
+            });
+          });
+          seen.observe(document, { childList: true, subtree: true });
+        });
+        await open(page);
+        const f = await page.waitForFunction(() => window.__firstFrame).then((h) => h.jsonValue());
+        log.errors.length || console.log(`     ${name}: ${f.rows} rows built, the box ${f.height.toFixed(0)} px tall`);
+        assert.ok(f.height > 100, `${name}: the list's box is laid out (${f.height} px)`);
+        assert.ok(f.last >= f.box, `${name}: the first frame's ${f.rows} rows end at ${f.last} px, the box at ${f.box} px`);
+        assert.deepEqual(log.errors, []);
+      }, options);
+    }
   });
 
   test("list-name-and-member-actions", async () => {

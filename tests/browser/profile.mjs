@@ -28,6 +28,11 @@
 //                  do (no names needed). `--members N` stores N members
 //                  instead of 1,000 (0: nothing stored, the demo
 //                  workspace of a fresh profile, ready at its first row).
+//                  `--samples` adds V8's sampling profiler to the trace
+//                  (every 100 µs or so) and prints, for the window only,
+//                  the functions with the most time of their own and under
+//                  them, the mean of the runs (names in a `--keep-names`
+//                  build; the sampler inflates what it measures).
 // Prints the functions with the most time of their own and the most time
 // under them (self + callees). Function names are there only in a build
 // that keeps them: `cargo xtask dist --keep-names` (dist-names/), served
@@ -58,9 +63,30 @@ const SAVE = arg("--save");
 const MEMBER = arg("--member", "TD-1");
 const FIELD = arg("--field", "axial_kn");
 const MEMBERS = Number(arg("--members", "1000"));
+const SAMPLES = process.argv.includes("--samples");
 if (!URL_ARG || !["thousand", "thousand-trace", "edit", "edit-moments", "model-edit"].includes(CASE)) {
   console.error("usage: node profile.mjs --url URL --case thousand|thousand-trace|edit|edit-moments|model-edit [--runs N] [--top N] [--save FILE] [--member ID] [--field NAME]");
   process.exit(2);
+}
+
+/** A tally of sampled time per function: `add(id, ms)` counts a sample
+ * of node `id` to its own function's self time and to the total (self +
+ * callees, each function once per sample) of it and its callers. */
+function tally(nodes, parent, name) {
+  const self = new Map();
+  const total = new Map();
+  const add = (id, ms) => {
+    const k = name(nodes.get(id));
+    self.set(k, (self.get(k) || 0) + ms);
+    const seen = new Set();
+    for (let at = id; at !== undefined; at = parent.get(at)) {
+      const key = name(nodes.get(at));
+      if (seen.has(key)) continue;
+      seen.add(key);
+      total.set(key, (total.get(key) || 0) + ms);
+    }
+  };
+  return { self, total, add };
 }
 
 /** Self and total (self + callees, each function once per sample) time
@@ -74,22 +100,9 @@ function summarise(profile) {
     const file = (f.url || "").split("/").pop();
     return `${f.functionName || "(anonymous)"} ${file}${file ? `:${f.lineNumber + 1}` : ""}`;
   };
-  const self = new Map();
-  const total = new Map();
+  const { self, total, add } = tally(byId, parent, name);
   const dt = profile.timeDeltas || [];
-  profile.samples.forEach((id, i) => {
-    const ms = (dt[i + 1] ?? dt[i] ?? 0) / 1000;
-    let n = byId.get(id);
-    const k = name(n);
-    self.set(k, (self.get(k) || 0) + ms);
-    const seen = new Set();
-    for (let at = id; at !== undefined; at = parent.get(at)) {
-      const key = name(byId.get(at));
-      if (seen.has(key)) continue;
-      seen.add(key);
-      total.set(key, (total.get(key) || 0) + ms);
-    }
-  });
+  profile.samples.forEach((id, i) => add(id, (dt[i + 1] ?? dt[i] ?? 0) / 1000));
   const span = (profile.endTime - profile.startTime) / 1000;
   return { self, total, span };
 }
@@ -125,6 +138,38 @@ function markRowsFrame(want) {
   });
 }
 
+/** The sampling profiler's samples of the main thread between marks `a`
+ * and `b` of a trace: self and total time per function, as `summarise`. */
+function windowSamples(events, a, b) {
+  const profile = events.find((e) => e.name === "Profile" && e.pid === a.pid && e.tid === a.tid);
+  if (!profile) return null;
+  const nodes = new Map();
+  const parent = new Map();
+  let t = profile.args.data.startTime;
+  const name = (n) => {
+    const f = n.callFrame;
+    const file = (f.url || "").split("/").pop();
+    return `${f.functionName || "(anonymous)"} ${file}`.trim();
+  };
+  const { self, total, add } = tally(nodes, parent, name);
+  let prev = null;
+  for (const c of events.filter((e) => e.name === "ProfileChunk" && e.id === profile.id && e.pid === a.pid)) {
+    const cp = c.args.data.cpuProfile || {};
+    for (const n of cp.nodes || []) {
+      nodes.set(n.id, n);
+      if (n.parent !== undefined) parent.set(n.id, n.parent);
+    }
+    const deltas = c.args.data.timeDeltas || [];
+    (cp.samples || []).forEach((id, i) => {
+      t += deltas[i] || 0;
+      // Each sample stands for the time until the next one.
+      if (prev && prev.t >= a.ts && prev.t < b.ts) add(prev.id, (Math.min(t, b.ts) - prev.t) / 1000);
+      prev = { id, t };
+    });
+  }
+  return { self, total };
+}
+
 /** One traced 1,000-member start: the main thread between the marks. */
 async function traceThousand() {
   const { context, close } = await launch();
@@ -139,7 +184,16 @@ async function traceThousand() {
     cdp.on("Tracing.dataCollected", (e) => events.push(...e.value));
     const complete = new Promise((r) => cdp.once("Tracing.tracingComplete", r));
     await cdp.send("Tracing.start", {
-      traceConfig: { includedCategories: ["devtools.timeline", "blink.user_timing", "v8.wasm", "toplevel", "fonts"] },
+      traceConfig: {
+        includedCategories: [
+          "devtools.timeline",
+          "blink.user_timing",
+          "v8.wasm",
+          "toplevel",
+          "fonts",
+          ...(SAMPLES ? ["disabled-by-default-v8.cpu_profiler", "disabled-by-default-v8.cpu_profiler.hires"] : []),
+        ],
+      },
       transferMode: "ReportEvents",
     });
     await page.goto(URL_ARG, { waitUntil: "load" });
@@ -186,6 +240,7 @@ async function traceThousand() {
       fontMs: fonts.reduce((t, e) => t + clip(e), 0) / 1000,
       strikes: strikes.length,
       byName,
+      samples: SAMPLES ? windowSamples(events, a, b) : null,
     };
   } finally {
     await close();
@@ -212,6 +267,13 @@ if (CASE === "thousand-trace") {
   const names = new Map();
   for (const r of all) for (const [k, ms] of r.byName) names.set(k, (names.get(k) || 0) + ms / runs);
   print("trace events, time of their own (mean of the runs, wall)", names, TOP);
+  if (SAMPLES) {
+    for (const which of ["self", "total"]) {
+      const m = new Map();
+      for (const r of all) for (const [k, ms] of r.samples?.[which] || []) m.set(k, (m.get(k) || 0) + ms / runs);
+      print(`sampled in the window, ${which === "self" ? "time of their own" : "self + callees"} (mean of the runs)`, m, TOP);
+    }
+  }
   process.exit(0);
 }
 

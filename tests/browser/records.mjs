@@ -58,12 +58,30 @@ test("units-switch-converts-both-ways", () =>
     const expected = si.value / KN_PER_KIP;
     assert.ok(Math.abs(us.value - expected) <= Math.abs(expected) * 5e-4 + 0.05 / KN_PER_KIP,
       `US ${us.value} kip against ${si.value} kN / ${KN_PER_KIP} = ${expected}`);
+    // Fields show the converted value rounded: a length to the thousandth
+    // of a foot (2800 mm is 9.186 ft, not 9.18635).
     const lengthUs = number(await page.inputValue("input[name=length_mm]"));
-    assert.ok(Math.abs(lengthUs - stored.length_mm / MM_PER_FT) < 1e-6 * lengthUs,
+    assert.ok(Math.abs(lengthUs - stored.length_mm / MM_PER_FT) <= 0.0005 + 1e-9,
       `length field ${lengthUs} ft for ${stored.length_mm} mm`);
     const unit = await page.locator("input[name=length_mm] + .unit").textContent();
     assert.equal(unit.trim(), "ft");
-    assert.deepEqual(await storedMember(page, 0), stored, "switching units changes no stored value");
+    // No field shows a long converted figure: at most three decimals, or
+    // three significant figures for a value under 0.1.
+    const figures = await page.$$eval("form.editor input[inputmode=decimal]", (els) => els.map((e) => [e.name, e.value]));
+    assert.ok(figures.length >= 4, `number fields: ${JSON.stringify(figures)}`);
+    for (const [name, value] of figures) {
+      const digits = (value.split(/[.,]/)[1] || "").length;
+      const significant = value.replace(/^[-0.,]+/, "").replace(/[.,]/, "").length;
+      assert.ok(digits <= 3 || significant <= 3, `${name} shows ${value}`);
+    }
+    assert.ok(figures.some(([n, v]) => n === "depth_mm" && v === "5.512"), `140 mm as 5.512 in: ${JSON.stringify(figures)}`);
+    // Showing a rounded figure writes nothing back: every number field
+    // entered and left without typing, the stored member is as it was.
+    for (const [name] of figures) {
+      await page.locator(`form.editor input[name="${name}"]`).first().focus();
+      await page.keyboard.press("Tab");
+    }
+    assert.deepEqual(await storedMember(page, 0), stored, "switching units and entering fields changes no stored value");
     await page.locator(".working-block td.num").first().waitFor();
     await page.screenshot({ path: join(OUT, "units-us.png"), fullPage: true });
 

@@ -527,6 +527,31 @@ test("reload-keeps-list", async () => {
   });
 });
 
+// Another tab's save is announced: the window's listeners are set up in
+// the task after the first frame (app::listen), and a save made then in
+// another tab of the same browser brings the banner that asks which to keep.
+test("other-tab-save-announced", async () => {
+  await withApp("other-tab-save-announced", async (page, log, context) => {
+    await open(page);
+    await typeMember(page, TYPED);
+    // The edit is saved (the stored text has the member).
+    await page.waitForFunction((k) => (localStorage.getItem(k) || "").includes("BH-"), STORAGE_KEY, { timeout: 10_000 });
+    const other = await context.newPage();
+    await other.goto(BASE.href, { waitUntil: "load" });
+    await other.evaluate((k) => {
+      const w = JSON.parse(localStorage.getItem(k));
+      w.revision += 5;
+      w.lists[w.active].title = "Changed in another tab";
+      localStorage.setItem(k, JSON.stringify(w));
+    }, STORAGE_KEY);
+    const banner = page.locator("[data-testid=other-tab]").first();
+    await banner.waitFor({ state: "visible", timeout: 10_000 });
+    assert.match(await banner.textContent(), /another tab/);
+    await other.close();
+    assertNoErrors(log.errors);
+  });
+});
+
 test("offline-reload", async () => {
   await withApp("offline-reload", async (page, log, context) => {
     await open(page);

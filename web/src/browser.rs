@@ -279,9 +279,17 @@ pub fn set_page_rule(rule: Option<&str>) {
 
 /// The window's height in CSS pixels (800 when unknown).
 pub fn inner_height() -> f64 {
-    web_sys::window()
-        .and_then(|w| w.inner_height().ok())
-        .and_then(|v| v.as_f64())
+    css_px(web_sys::window().and_then(|w| w.inner_height().ok()))
+}
+
+/// The window's width in CSS pixels (800 when unknown).
+pub fn inner_width() -> f64 {
+    css_px(web_sys::window().and_then(|w| w.inner_width().ok()))
+}
+
+/// A length the window gave, or 800 when it gave none.
+fn css_px(v: Option<JsValue>) -> f64 {
+    v.and_then(|v| v.as_f64())
         .filter(|h| h.is_finite() && *h > 0.0)
         .unwrap_or(800.0)
 }

@@ -320,7 +320,13 @@ impl ListTools {
     pub fn shown(&self, checks: &[Arc<Checked>]) -> Vec<Arc<Checked>> {
         let mut out: Vec<Arc<Checked>> = Vec::with_capacity(checks.len());
         for c in checks.iter().filter(|c| self.keeps(c)) {
-            let at = out.partition_point(|x| self.compare(x, c) != Ordering::Greater);
+            // As entered, every pair is equal: each goes last (the search
+            // would find the end with some ten comparisons a member).
+            let at = if self.order == Order::Entered {
+                out.len()
+            } else {
+                out.partition_point(|x| self.compare(x, c) != Ordering::Greater)
+            };
             out.insert(at, Arc::clone(c));
         }
         out
@@ -517,6 +523,25 @@ pub fn window(scroll_top: f64, view_px: f64, n: usize, overscan: usize) -> (usiz
         .saturating_add(overscan)
         .min(n);
     (first, end.max(first))
+}
+
+/// The most the list's box can be in view before the first layout, for a
+/// window `width` by `height` CSS px: style.css makes `.member-scroll`
+/// 42vh tall on a narrow or upright screen and max(16rem, 100dvh -
+/// 29.5rem) on a wide one lying down (change both together). Taken with room to
+/// spare, so that the first frame's rows fill the box whatever the font
+/// size or browser: a rem anywhere from 8 to 32 px, a vh up to 200 px more
+/// than the window's height (a phone's vh is its largest viewport, with
+/// its address bar hidden); never more than the window. What the first
+/// frame builds and checks: the box itself is read once it is laid out.
+pub fn first_view_px(width: f64, height: f64) -> f64 {
+    let wide = width >= 1000.0 && width > height;
+    let most = if wide {
+        (16.0 * 32.0f64).max(height - 29.5 * 8.0)
+    } else {
+        0.42 * (height + 200.0)
+    };
+    most.min(height)
 }
 
 /// The names of the change form's controls, in the order of
@@ -874,6 +899,31 @@ mod tests {
         // partly, +1 for a scroll between rows), 8 more below; the rest
         // stood in for.
         assert_eq!(window(0.0, 800.0, 1000, OVERSCAN), (0, 21));
+        // The first frame's view: at least the box style.css gives, at
+        // most the window.
+        for (w, h) in [
+            (1280.0, 900.0),
+            (1180.0, 820.0),
+            (1920.0, 1080.0),
+            (1000.0, 999.0),
+        ] {
+            let rem_16 = (16.0f64 * 16.0).max(h - 29.5 * 16.0);
+            let rem_24 = (16.0f64 * 24.0).max(h - 29.5 * 24.0);
+            let v = first_view_px(w, h);
+            assert!(v >= rem_16 && v >= rem_24.min(h) && v <= h, "{w}x{h}: {v}");
+        }
+        for (w, h) in [
+            (820.0, 1180.0),
+            (390.0, 844.0),
+            (999.0, 600.0),
+            (600.0, 600.0),
+        ] {
+            let v = first_view_px(w, h);
+            assert!(v >= 0.42 * h && v <= h, "{w}x{h}: {v}");
+        }
+        assert!(
+            window(0.0, first_view_px(1280.0, 900.0), 1000, 0).1 < window(0.0, 900.0, 1000, 0).1
+        );
         // The first frame: what is in view, nothing beyond it.
         assert_eq!(window(0.0, 800.0, 1000, 0), (0, 13));
         // Scrolled to row 500: 8 rows above it and below the view.

@@ -442,9 +442,22 @@ mod tests {
                 .clone()
         };
         assert_eq!(line("moments given"), "already second-order, not amplified");
+        // What lt_restrained assumes, in plain words: the flange held
+        // against lateral movement and twist over the whole length, so no
+        // lateral-torsional buckling is worked; or held at the restraints.
+        let flange = "restraint of the compression flange against lateral movement and twist";
         assert_eq!(
-            line("compression flange held against lateral-torsional buckling"),
-            "held continuously (no lateral-torsional buckling)"
+            line(flange),
+            "over the whole length, so no lateral-torsional buckling is worked"
+        );
+        // Not restrained is the default, which the sheet leaves out; its
+        // words where a message names it (speak):
+        assert_eq!(
+            option_words("lt_restrained", "false"),
+            Some(
+                "only at the lateral-torsional restraints, so lateral-torsional buckling is \
+                 worked between them"
+            )
         );
         assert_eq!(
             line("EN 1993-1-1 interaction factors"),

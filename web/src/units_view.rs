@@ -162,15 +162,53 @@ pub fn field_key(system: UnitSystem, key: &'static str) -> std::borrow::Cow<'sta
 
 /// The text a field shows for the stored text `si` of key `key`.
 pub fn to_field(system: UnitSystem, key: &str, si: &str) -> String {
-    if system == UnitSystem::Si || Quantity::of_key(key).is_none() {
+    let Some(q) = Quantity::of_key(key).filter(|_| system == UnitSystem::Us) else {
         return si.to_string();
-    }
-    // Six significant figures: the field shows the stored value converted,
-    // and only a field the person edits is converted back (exactly).
+    };
+    // The field shows the stored value converted and rounded; only a field
+    // the person edits is converted back (exactly, from what is typed), so
+    // the stored value stays as it was until then.
     match parse_number(si) {
-        Ok(v) => units::format_display(units::key_to_display(system, key, v).0, 6),
+        Ok(v) => field_figure(q, units::key_to_display(system, key, v).0),
         Err(_) => si.to_string(),
     }
+}
+
+/// The decimals a field shows a quantity with in US units: the resolution
+/// US practice writes it to (common practice, recalled from memory of US
+/// steel tables and load tables, not from one source): section dimensions
+/// to the thousandth of an inch (as [`INCH_DECIMALS`]), member lengths to
+/// the thousandth of a foot (0.3 mm), areas to 0.001 in², moduli to
+/// 0.01 in³, second moments to 0.1 in⁴, forces to 0.1 kip, stresses to
+/// 0.1 ksi, moments to 0.1 kip·ft, a spring to 0.01 kip/in or 0.1
+/// kip·ft/rad, a line load to 0.001 kip/ft (1 lb/ft).
+fn field_decimals(q: Quantity) -> usize {
+    match q {
+        Quantity::Length | Quantity::Span | Quantity::Area | Quantity::LineLoad => INCH_DECIMALS,
+        Quantity::Modulus | Quantity::Stiffness => 2,
+        Quantity::SecondMoment
+        | Quantity::Force
+        | Quantity::Stress
+        | Quantity::Moment
+        | Quantity::RotationalStiffness => 1,
+        Quantity::Warping => 0,
+        // Shown as stored (to_field does not convert it).
+        Quantity::Dimensionless => 6,
+    }
+}
+
+/// A converted value as a field shows it in US units: to the quantity's
+/// decimals ([`field_decimals`]), or to three significant figures where
+/// that shows more (a small value: 2 kN is 0.45 kip, not 0.4), without
+/// trailing zeros.
+fn field_figure(q: Quantity, v: f64) -> String {
+    if !v.is_finite() || v == 0.0 {
+        return units::format_display(v, 3);
+    }
+    // Three significant figures need 2 - floor(log10|v|) decimals.
+    let small = 2 - v.abs().log10().floor().clamp(-15.0, 15.0) as i64;
+    let decimals = (field_decimals(q) as i64).max(small).clamp(0, 17) as usize;
+    units::fixed_trimmed(v, decimals)
 }
 
 /// What the person typed in the display unit, as text in the stored unit
@@ -305,6 +343,38 @@ mod tests {
         // 3600 mm / 304.8 = 11.811 ft; 820 kN / 4.4482216152605 = 184.34 kip.
         assert_eq!(plain_text(Us, "mm", 3600.0, true), "11.81 ft");
         assert_eq!(plain_text(Us, "kN", 820.0, false), "184.3 kip");
+    }
+
+    #[test]
+    fn us_fields_show_a_figure_to_the_trades_resolution() {
+        // A 32 mm plate is 1.259842... in (1 in = 25.4 mm exactly, NIST SP
+        // 811, 2008, App. B): shown to the thousandth, 1.26 (not 1.25984).
+        assert_eq!(to_field(Us, "flange_mm", "32"), "1.26");
+        // 9 mm = 0.35433 in: 0.354, as a steel table gives a web.
+        assert_eq!(to_field(Us, "web_mm", "9"), "0.354");
+        // 4200 mm = 13.779528 ft: to the thousandth of a foot.
+        assert_eq!(to_field(Us, "length_mm", "4200"), "13.78");
+        assert_eq!(to_field(Us, "length_mm", "4210"), "13.812");
+        // 150 kN = 33.7213 kip (1 kip = 4.4482216152605 kN, same source):
+        // to 0.1 kip; 2 kN = 0.4496 kip keeps three significant figures.
+        assert_eq!(to_field(Us, "axial_kn", "150"), "33.7");
+        assert_eq!(to_field(Us, "axial_kn", "2"), "0.45");
+        // 355 MPa = 51.4884 ksi (1 ksi = 6.894757293168 MPa): 51.5.
+        assert_eq!(to_field(Us, "fy_mpa", "355"), "51.5");
+        // 1.5 kN/m = 0.102782 kip/ft (14.593903 kN/m a kip/ft): 0.103.
+        assert_eq!(to_field(Us, "distributed_kn_per_m", "1.5"), "0.103");
+        assert_eq!(to_field(Us, "axial_kn", "0"), "0");
+        // Exact values stay exact: 10 ft, 1/4 in.
+        assert_eq!(to_field(Us, "length_mm", "3048"), "10");
+        assert_eq!(to_field(Us, "wall_mm", "6.35"), "0.25");
+        // The figure shown is rounded, so it does not read back to the
+        // stored value: 1.26 in is 32.004 mm. The field writes only what
+        // is typed (NumField and ModelNum on input), never what it shows;
+        // the browser test units-switch-converts-both-ways holds that the
+        // stored member stays as it was when US fields are shown and
+        // entered without typing.
+        let back: f64 = from_field(Us, "flange_mm", "1.26").parse().unwrap();
+        assert!((back - 32.004).abs() < 1e-9, "{back}");
     }
 
     #[test]

@@ -22,7 +22,12 @@
 //! `_knm`. So `length_ft`, `depth_in`, `axial_kip` and `fy_ksi` are columns
 //! too. `_ft` and `_in` cells may also be written in feet and inches:
 //! `13'-6"`, `13' 6-1/2"`, `13'6"`, `6 1/2"`, `1/2"`, `13'` (typographic
-//! primes ′ ″ and the words `ft`/`in` are accepted as well).
+//! primes ′ ″ and the words `ft`/`in` are accepted as well). A converted
+//! value within 1 part in 10^9 of a whole thousandth of its SI unit is
+//! read as that thousandth, so the writer ([`to_csv_in`]) gives each US
+//! cell the fewest figures that read back to the stored value exactly
+//! (ten at most for a value given to the thousandth: 4000 mm is
+//! 13.12335958 ft, not 13.123359580052493).
 //!
 //! # Numbers
 //!

@@ -156,9 +156,10 @@ pub(super) fn expected_for(info: &KeyInfo, unit: Option<UsUnit>) -> String {
     }
 }
 
-/// Reads one cell of a number column into the member file's unit.
+/// Reads one cell of a number column into the member file's unit; a US
+/// cell's value is converted exactly and then [`to_thousandth`].
 pub(super) fn number_cell(text: &str, unit: Option<UsUnit>, mark: Mark) -> Result<f64, String> {
-    match unit {
+    let read = match unit {
         Some(UsUnit::Ft) => match parse_feet_inches(text, mark) {
             Some(mm) => mm,
             None => parse_number(text, mark).map(units::ft_to_mm),
@@ -168,7 +169,33 @@ pub(super) fn number_cell(text: &str, unit: Option<UsUnit>, mark: Mark) -> Resul
             None => parse_number(text, mark).map(units::in_to_mm),
         },
         Some(u) => parse_number(text, mark).map(|v| u.to_si(v)),
-        None => parse_number(text, mark),
+        None => return parse_number(text, mark),
+    };
+    read.map(to_thousandth)
+}
+
+/// How close (relative) a value converted from US units must be to a whole
+/// thousandth of its SI unit to be read as that thousandth.
+pub(super) const THOUSANDTH_WITHIN: f64 = 1e-9;
+
+/// A value converted from US units, as the reader takes it: where it lies
+/// within 1 part in 10^9 ([`THOUSANDTH_WITHIN`]) of a whole thousandth of
+/// its SI unit (0.001 mm, 0.001 kN, 0.001 MPa, ...), that thousandth (the
+/// double nearest it, as the SI figure typed would give); as converted
+/// otherwise. So an SI value written in US units to ten significant
+/// figures ([`super::write`]) reads back as itself, and no value moves by
+/// more than 1 part in 10^9.
+pub(super) fn to_thousandth(si: f64) -> f64 {
+    let k = (si * 1000.0).round();
+    // Beyond 2^53 thousandths a double holds no finer step anyway.
+    if !k.is_finite() || k.abs() > 9_007_199_254_740_992.0 {
+        return si;
+    }
+    let grid = k / 1000.0;
+    if (grid - si).abs() <= THOUSANDTH_WITHIN * si.abs() {
+        grid
+    } else {
+        si
     }
 }
 

@@ -652,13 +652,16 @@ fn us_csv_reads_back_within_rounding() {
     assert!(header.split(',').any(|h| h == "k_major"));
     let back = parse_csv(&text);
     assert!(back.problems.is_empty(), "{:#?}", back.problems);
-    // Compare through JSON values: every number within 4e-16 relative
-    // (two roundings of a conversion), all else equal.
+    // Compare through JSON values: every number within a part in 10^9
+    // (a value that near a thousandth of its SI unit but not on it, as
+    // 4000.000000001 mm here, reads as the thousandth: read::to_thousandth),
+    // all else equal; `us_cells_are_short_and_read_back_exactly` holds the
+    // exact round trip of the values a person types.
     fn close(a: &Value, b: &Value) -> bool {
         match (a, b) {
             (Value::Number(x), Value::Number(y)) => {
                 let (x, y) = (x.as_f64().unwrap(), y.as_f64().unwrap());
-                x == y || ((x - y) / y).abs() <= 4e-16
+                x == y || ((x - y) / y).abs() <= super::read::THOUSANDTH_WITHIN
             }
             (Value::Object(x), Value::Object(y)) => {
                 x.len() == y.len() && x.iter().all(|(k, v)| y.get(k).is_some_and(|w| close(v, w)))
@@ -674,6 +677,56 @@ fn us_csv_reads_back_within_rounding() {
         assert!(close(&a, &b), "{a}\n{b}");
     }
     assert_eq!(back.members.len(), original.members.len());
+}
+
+#[test]
+fn us_cells_are_short_and_read_back_exactly() {
+    use super::write::us_cell;
+    // Exact factors (NIST SP 811, 2008, App. B): 1 ft = 304.8 mm, 1 in =
+    // 25.4 mm, 1 kip = 4.4482216152605 kN, 1 ksi = 6.894757293168 MPa.
+    // Values typed in US units come back as typed; SI values typed to the
+    // thousandth in ten figures at most (4000 mm is 13.123359580052... ft;
+    // 820 kN is 184.34333334... kip and 355 MPa 51.488396894... ksi, the
+    // quotients worked in Python's doubles).
+    for (unit, si, cell) in [
+        (UsUnit::Ft, 4000.0, "13.12335958"),
+        (UsUnit::Ft, 13.5 * 304.8, "13.5"),
+        (UsUnit::Ft, 2000.0, "6.56167979"),
+        (UsUnit::In, 32.0, "1.25984252"),
+        (UsUnit::In, 0.25 * 25.4, "0.25"),
+        (UsUnit::Kip, units::kip_to_kn(2.5), "2.5"),
+        (UsUnit::Kip, 820.0, "184.3433333"),
+        (UsUnit::Ksi, 355.0, "51.4883969"),
+        (UsUnit::Ksi, units::ksi_to_mpa(50.0), "50"),
+    ] {
+        assert_eq!(us_cell(unit, si), cell, "{si} in {unit:?}");
+    }
+    // Every thousandth of a millimetre, kilonewton or megapascal a person
+    // types, over five decades, in each US unit: at most ten significant
+    // figures, and read back bit for bit.
+    let mut seed: u64 = 0x9e37_79b9_7f4a_7c15;
+    for _ in 0..2_000 {
+        seed ^= seed << 13;
+        seed ^= seed >> 7;
+        seed ^= seed << 17;
+        let thousandths = (seed % 100_000_000) as f64 + 1.0;
+        let si = thousandths / 1000.0;
+        for unit in [
+            UsUnit::Ft,
+            UsUnit::In,
+            UsUnit::In2,
+            UsUnit::Kip,
+            UsUnit::Ksi,
+            UsUnit::KipFt,
+            UsUnit::KipPerFt,
+        ] {
+            let cell = us_cell(unit, si);
+            let figures = cell.trim_start_matches(['0', '.']).replace('.', "");
+            assert!(figures.len() <= 10, "{si} as {cell} {unit:?}");
+            let back = super::read::number_cell(&cell, Some(unit), super::number::Mark::Point);
+            assert_eq!(back, Ok(si), "{si} as {cell} {unit:?}");
+        }
+    }
 }
 
 #[test]
@@ -713,7 +766,11 @@ fn fixtures_read_as_documented() {
     assert_eq!(b2.length_mm, 20.0 * 304.8 + 4.5 * 25.4);
     assert_eq!(b2.axial_kn, 1250.0 * units::KN_PER_KIP);
     assert_eq!(us.members[2].length_mm, 10.5 * 304.8);
-    assert_eq!(us.members[2].bow_mm, Some(0.375 * 25.4));
+    // 0.375 in is 9.525 mm exactly (1 in = 25.4 mm, NIST SP 811, 2008,
+    // App. B); the product in doubles is 9.524999999999999, which lies
+    // within a part in 10^9 of that thousandth and reads as it.
+    assert_eq!(us.members[2].bow_mm, Some(9.525));
+    assert_ne!(0.375 * 25.4, 9.525);
     // Tab-separated timber: "35,5" sets the decimal comma for the file.
     let tab = parse_csv(include_str!("../../../tests/fixtures/csv/timber-tab.csv"));
     assert_eq!(tab.members.len(), 1);

@@ -170,7 +170,7 @@ impl Layout {
             match (row.get(key), u) {
                 (None, _) => {}
                 (Some(Value::Number(n)), Some((_, unit))) => match n.as_f64() {
-                    Some(f) => out.push_str(&format!("{}", unit.from_si(f))),
+                    Some(f) => out.push_str(&us_cell(*unit, f)),
                     None => out.push_str(&n.to_string()),
                 },
                 (Some(v), _) => out.push_str(&quote(&cell_text(v), matches!(v, Value::String(_)))),
@@ -180,12 +180,39 @@ impl Layout {
     }
 }
 
+/// An SI value as a US cell: the decimal of the fewest significant figures
+/// (1 to 17) that the reader ([`super::read::number_cell`]) takes back to
+/// the very value stored, so the CSV reads as a person writes (13.5 ft,
+/// 2.5 kip for values typed in US units; 13.12335958 ft for 4000 mm, ten
+/// figures, which the reader takes to the thousandth of a millimetre it
+/// lies within a part in 10^9 of) and a US file round-trips exactly; where
+/// no decimal of 17 figures does (a value no thousandth is near whose
+/// conversion does not come back bit for bit), the shortest decimal of the
+/// converted value, within a few parts in 10^16.
+pub(super) fn us_cell(unit: UsUnit, si: f64) -> String {
+    let v = unit.from_si(si);
+    if v.is_finite() && v != 0.0 {
+        // Decimals for `n` significant figures: n - 1 - floor(log10 |v|).
+        let magnitude = v.abs().log10().floor() as i64;
+        for n in 1..=17_i64 {
+            let decimals = (n - 1 - magnitude).clamp(0, 40) as usize;
+            let text = units::fixed_trimmed(v, decimals);
+            let back = super::read::number_cell(&text, Some(unit), super::number::Mark::Point);
+            if back.is_ok_and(|b| b == si) {
+                return text;
+            }
+        }
+    }
+    format!("{v}")
+}
+
 /// The members as CSV in a unit system: [`UnitSystem::Si`] writes the
 /// member file's own keys and values (exact round trip);
 /// [`UnitSystem::Us`] writes each unit key in its US form (`length_ft`,
-/// `depth_in`, `axial_kip`, `fy_ksi`, ...) with the value converted, which
-/// reads back to within a few parts in 10^16 of the stored value (for
-/// values of ordinary magnitude, not subnormal ones).
+/// `depth_in`, `axial_kip`, `fy_ksi`, ...) with the value converted and
+/// written to the fewest figures that read back to the stored value
+/// ([`us_cell`]): exactly, or (where no decimal does) to within a few parts
+/// in 10^16 (for values of ordinary magnitude, not subnormal ones).
 pub fn to_csv_in(file: &MemberFile, system: UnitSystem) -> String {
     let rows: Vec<Map<String, Value>> = file.members.iter().map(cells).collect();
     // The keys used, in the order first met (a sort would add its code to

@@ -509,12 +509,22 @@ pub const MEMBER: &[Key] = &[
         "lt_restrained",
         Value::Bool,
         Default::Bool(false),
+        // What is assumed, in the words an engineer reads at once: the
+        // flange held against moving sideways and twisting over the whole
+        // length, so no lateral-torsional buckling is worked; or held only
+        // at the restraints, and lateral-torsional buckling worked between.
         &[
-            opt("true", "held continuously (no lateral-torsional buckling)"),
-            opt("false", "free between the restraints"),
+            opt(
+                "true",
+                "over the whole length, so no lateral-torsional buckling is worked",
+            ),
+            opt(
+                "false",
+                "only at the lateral-torsional restraints, so lateral-torsional buckling is worked between them",
+            ),
         ],
-        "compression flange",
-        "compression flange held against lateral-torsional buckling",
+        "compression flange restrained",
+        "restraint of the compression flange against lateral movement and twist",
     ),
     key(
         "axial_kn",

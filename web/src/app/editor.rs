@@ -25,26 +25,25 @@ pub(super) fn NumField(
         .current()
         .map(|m| fields::read(&m, field.place, field.key))
         .unwrap_or_default();
-    let draft = ctx.draft(field.key);
     let sys = ctx.units.get_untracked();
     // The member's value when the field was entered: put back when what is
     // typed cannot be read.
-    let settled = StoredValue::new(stored.clone());
-    let initial = match &draft {
-        Some(d) => d.text.clone(),
-        None => crate::units_view::to_field(sys, field.key, &stored),
+    let (rule, initial) = ctx.drafted(field.key.to_string(), stored.clone(), || {
+        crate::units_view::to_field(sys, field.key, &stored)
+    });
+    let error = rule.error;
+    let now = move || {
+        ctx.current()
+            .map(|m| fields::read(&m, field.place, field.key))
+            .unwrap_or_default()
     };
-    let error = RwSignal::new(draft.map(|d| d.message));
     let unread = move |typed: &str, msg: String| {
-        ctx.keep_draft(field.key, typed, &msg);
-        error.set(Some(msg));
-        let Some(m) = ctx.current() else { return };
-        let before = settled.get_value();
-        if fields::read(&m, field.place, field.key) != before {
+        rule.unread(typed, msg, now(), |before| {
+            let Some(m) = ctx.current() else { return };
             if let Ok(back) = fields::apply(&m, &field, &before) {
                 ctx.commit(back);
             }
-        }
+        });
     };
     let input_id = format!("f-{}", field.key);
     let err_id = format!("e-{}", field.key);
@@ -65,13 +64,7 @@ pub(super) fn NumField(
                     value=initial
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
                     aria-describedby=move || error.with(Option::is_some).then(|| err_id2.clone())
-                    on:focus=move |_| {
-                        if let Some(m) = ctx.current() {
-                            if error.with_untracked(Option::is_none) {
-                                settled.set_value(fields::read(&m, field.place, field.key));
-                            }
-                        }
-                    }
+                    on:focus=move |_| if ctx.current().is_some() { rule.enter(now()) }
                     on:input=move |e| {
                         let typed = event_target_value(&e);
                         let text = crate::units_view::from_field(sys, field.key, &typed);
@@ -80,8 +73,7 @@ pub(super) fn NumField(
                             Ok(new) => match fields::engine_objection(&new, field.key) {
                                 Some(msg) => unread(&typed, msg),
                                 None => {
-                                    error.set(None);
-                                    ctx.drop_draft(field.key);
+                                    rule.read();
                                     ctx.commit(new.clone());
                                     if let Some(cb) = after { cb.run(new); }
                                 }

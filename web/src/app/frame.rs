@@ -49,25 +49,18 @@ fn GField(ctx: Ctx, major: bool, end_b: bool) -> impl IntoView {
             .and_then(|m| frame_of(&m, major))
             .map(|f| if end_b { f.g_b } else { f.g_a });
     // Text that cannot be read: the member's draft, its result withdrawn
-    // and G from before the edit put back (crate::drafts, as the editor's
-    // fields do).
-    let draft = ctx.draft(&key);
-    let initial = match &draft {
-        Some(d) => d.text.clone(),
-        None => value.map(for_input).unwrap_or_default(),
-    };
-    let error = RwSignal::new(draft.map(|d| d.message));
+    // and G from before the edit put back (the editor's rule, Drafted).
+    let (rule, initial) = ctx.drafted(key, value, || value.map(for_input).unwrap_or_default());
+    let error = rule.error;
+    // G set through this box last.
     let last = StoredValue::new(value);
-    let at_focus = StoredValue::new(value);
-    let key = StoredValue::new(key);
     let unread = move |typed: &str, why: String| {
-        key.with_value(|k| ctx.keep_draft(k, typed, &why));
-        error.set(Some(why));
-        let before = at_focus.get_value();
-        if let (Some(b), true) = (before, last.get_value() != before) {
-            last.set_value(before);
-            with_frame(ctx, major, |f| if end_b { f.g_b = b } else { f.g_a = b });
-        }
+        rule.unread(typed, why, last.get_value(), |before| {
+            if let Some(b) = before {
+                last.set_value(Some(b));
+                with_frame(ctx, major, |f| if end_b { f.g_b = b } else { f.g_a = b });
+            }
+        });
     };
     let label = if end_b {
         "G at end B (top)"
@@ -79,13 +72,12 @@ fn GField(ctx: Ctx, major: bool, end_b: bool) -> impl IntoView {
             <label for=id.clone()>{label} <code class="key">{format!("{axis}.{g}")}</code></label>
             <input type="text" id=id name=format!("{axis}.{g}") inputmode="decimal" autocomplete="off" spellcheck="false" value=initial
                 aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
-                on:focus=move |_| if error.with_untracked(Option::is_none) { at_focus.set_value(last.get_value()); }
+                on:focus=move |_| rule.enter(last.get_value())
                 on:input=move |e| {
                     let typed = event_target_value(&e);
                     match parse_number(&typed) {
                         Ok(v) if v >= 0.0 => {
-                            error.set(None);
-                            key.with_value(|k| ctx.drop_draft(k));
+                            rule.read();
                             last.set_value(Some(v));
                             with_frame(ctx, major, |f| if end_b { f.g_b = v } else { f.g_a = v });
                         }

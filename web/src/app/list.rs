@@ -162,7 +162,11 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
     let scroller = NodeRef::<leptos::html::Div>::new();
     let list = NodeRef::<leptos::html::Ol>::new();
     let scroll_top = RwSignal::new(0.0f64);
-    let view_px = RwSignal::new(browser::inner_height());
+    // Until the box is laid out, the most of it that can be in view.
+    let view_px = RwSignal::new(listops::first_view_px(
+        browser::inner_width(),
+        browser::inner_height(),
+    ));
     // No rows beyond the view before the first frame.
     let overscan = move || {
         if ctx.painted.get() {
@@ -249,11 +253,12 @@ fn Rows(ctx: Ctx, tools: RwSignal<ListTools>, selected_id: Memo<Option<String>>)
                 request_animation_frame(move || focus_row(list, &next_id));
             }
         >
-            <ol class="member-list" node_ref=list aria-label="Members">
+            <ol class="member-list" node_ref=list aria-label="Members"
+                on:click=move |e: ev::MouseEvent| row_clicked(ctx, tools, selected_id, &e)>
                 <For
                     each=rows
                     key=|c| (c.member.id.clone(), Arc::as_ptr(c) as usize)
-                    children=move |c| view! { <MemberRow ctx=ctx checked=c selected_id=selected_id tools=tools /> }
+                    children=move |c| view! { <MemberRow checked=c selected_id=selected_id tools=tools /> }
                 />
             </ol>
         </div>
@@ -284,8 +289,31 @@ fn reveal(
     scroll_top.set(f64::from(el.scroll_top()));
 }
 
+/// Answers a click in the list's rows: the pick box (its `data-act`)
+/// picks the member, anywhere else selects it. One handler for every row,
+/// so that a row is built with no listener of its own.
+fn row_clicked(
+    ctx: Ctx,
+    tools: RwSignal<ListTools>,
+    selected_id: Memo<Option<String>>,
+    e: &ev::MouseEvent,
+) {
+    let Some(id) = row_id_of(e) else { return };
+    if super::picker_panel::action(e).is_some_and(|(act, _)| act == "pick") {
+        tools.update(|t| t.toggle(&id));
+        return;
+    }
+    if let Some(i) = ctx.index_of(&id) {
+        if ctx.selected.get_untracked() != i
+            || selected_id.with_untracked(|s| s.as_deref() != Some(id.as_str()))
+        {
+            ctx.select(i);
+        }
+    }
+}
+
 /// The id of the row an event came from.
-fn row_id_of(e: &ev::KeyboardEvent) -> Option<String> {
+fn row_id_of(e: &web_sys::Event) -> Option<String> {
     let t: web_sys::Element = wasm_bindgen::JsCast::dyn_into(e.target()?).ok()?;
     t.closest("[data-testid=member-row]")
         .ok()??
@@ -313,7 +341,6 @@ fn focus_row(list: NodeRef<leptos::html::Ol>, id: &str) {
 
 #[component]
 pub(super) fn MemberRow(
-    ctx: Ctx,
     checked: Arc<Checked>,
     selected_id: Memo<Option<String>>,
     tools: RwSignal<ListTools>,
@@ -338,25 +365,13 @@ pub(super) fn MemberRow(
     let id_sel = id.clone();
     let is_selected =
         Memo::new(move |_| selected_id.with(|s| s.as_deref() == Some(id_sel.as_str())));
-    let (i1, i6) = (id.clone(), id.clone());
+    let i6 = id.clone();
     view! {
         <li
             class="member-row"
             class:selected=move || is_selected.get()
             data-testid="member-row"
             data-id=id.clone()
-            on:click=move |e: ev::MouseEvent| {
-                // The pick box answers here, so the row is not selected.
-                if super::picker_panel::action(&e).is_some_and(|(act, _)| act == "pick") {
-                    tools.update(|t| t.toggle(&i1));
-                    return;
-                }
-                if let Some(i) = ctx.index_of(&i1) {
-                    if ctx.selected.get_untracked() != i || !is_selected.get_untracked() {
-                        ctx.select(i);
-                    }
-                }
-            }
         >
             <input type="checkbox" class="row-pick" data-testid="member-pick" data-act="pick" data-v=""
                 aria-label=format!("Pick {id}") prop:checked=move || tools.with(|t| t.is_picked(&i6)) />

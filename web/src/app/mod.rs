@@ -162,6 +162,29 @@ impl Ctx {
         }
     }
 
+    /// The draft rule ([`Drafted`]) of the selected member's field `key`,
+    /// whose value is `now`, and the text its box starts with: the draft's
+    /// text where there is one, else `shown()`.
+    fn drafted<T: Send + Sync + 'static>(
+        &self,
+        key: String,
+        now: T,
+        shown: impl FnOnce() -> String,
+    ) -> (Drafted<T>, String) {
+        let draft = self.draft(&key);
+        let (text, error) = match draft {
+            Some(d) => (d.text, Some(d.message)),
+            None => (shown(), None),
+        };
+        let rule = Drafted {
+            ctx: *self,
+            key: StoredValue::new(key),
+            error: RwSignal::new(error),
+            entered: StoredValue::new(now),
+        };
+        (rule, text)
+    }
+
     /// Index of a member id in the active list.
     fn index_of(&self, id: &str) -> Option<usize> {
         self.ws.with_untracked(|w| {
@@ -182,6 +205,59 @@ impl Ctx {
     }
 }
 
+/// The draft rule of one field ([`crate::drafts`]), which the editor's
+/// fields, the column-model panel's and the frame's G fields all follow:
+/// text that cannot be read is kept as the selected member's draft of the
+/// field's key and shown as the field's error, and the value the field had
+/// when it was entered is put back, so a half-typed number is never checked
+/// or saved; text that reads drops the draft. Made by [`Ctx::drafted`].
+struct Drafted<T: Send + Sync + 'static> {
+    ctx: Ctx,
+    key: StoredValue<String>,
+    /// Why the text cannot be read, while it cannot.
+    error: RwSignal<Option<String>>,
+    /// The value when the field was entered.
+    entered: StoredValue<T>,
+}
+
+// Copy whatever T is: the fields are handles (a derive would ask T: Copy).
+impl<T: Send + Sync + 'static> Clone for Drafted<T> {
+    fn clone(&self) -> Self {
+        *self
+    }
+}
+
+impl<T: Send + Sync + 'static> Copy for Drafted<T> {}
+
+impl<T: Clone + PartialEq + Send + Sync + 'static> Drafted<T> {
+    /// The field entered with the value `now`: the one to put back, unless
+    /// the field's text already cannot be read (then the value from before
+    /// that text stays the one).
+    fn enter(&self, now: T) {
+        if self.error.with_untracked(Option::is_none) {
+            self.entered.set_value(now);
+        }
+    }
+
+    /// `typed` cannot be read (`why`): it is kept as the draft and shown,
+    /// and where the value is no longer the one the field was entered with
+    /// (`now` differs), that value is handed to `put_back`.
+    fn unread(&self, typed: &str, why: String, now: T, put_back: impl FnOnce(T)) {
+        self.key.with_value(|k| self.ctx.keep_draft(k, typed, &why));
+        self.error.set(Some(why));
+        let before = self.entered.get_value();
+        if now != before {
+            put_back(before);
+        }
+    }
+
+    /// The text reads: its draft, if any, goes.
+    fn read(&self) {
+        self.error.set(None);
+        self.key.with_value(|k| self.ctx.drop_draft(k));
+    }
+}
+
 /// A view made afresh whenever `key` changes. A plain reactive block would
 /// patch the old inputs in place, and an input the person has typed in keeps
 /// its text whatever its `value` attribute says; a new key makes new inputs.
@@ -196,6 +272,46 @@ fn key_of<T: std::hash::Hash>(t: &T) -> u64 {
     let mut h = rustc_hash::FxHasher::default();
     t.hash(&mut h);
     h.finish()
+}
+
+/// Listens to the window: another tab's save, a resize or turn of the
+/// screen, focus (the on-screen keyboard), the page hidden or left.
+fn listen(ctx: Ctx) {
+    let storage_listener = window_event_listener(ev::storage, move |e| {
+        if e.key().as_deref() != Some(KEY) {
+            return;
+        }
+        if let Some(text) = e.new_value() {
+            if peek_revision(&text) != Some(ctx.loaded_rev.get_value()) {
+                ctx.other_tab.set(Some(text));
+            }
+        }
+    });
+    let resize_listener = window_event_listener(ev::resize, move |_| {
+        ctx.resize.update(|n| *n += 1);
+        // The on-screen keyboard came or went: the field stays in view.
+        browser::reveal_focused_field();
+    });
+    let focus_listener = window_event_listener(ev::focusin, move |_| {
+        // After the on-screen keyboard has had time to come up.
+        set_timeout(
+            browser::reveal_focused_field,
+            std::time::Duration::from_millis(350),
+        );
+    });
+    let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
+    let visibility_listener =
+        window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
+    let orient_listener =
+        window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
+    on_cleanup(move || {
+        storage_listener.remove();
+        resize_listener.remove();
+        focus_listener.remove();
+        orient_listener.remove();
+        hide_listener.remove();
+        visibility_listener.remove();
+    });
 }
 
 mod banners;
@@ -250,12 +366,13 @@ pub fn App() -> impl IntoView {
         let mut out = ws.with(|w| {
             let members = w.active_list().map(|l| l.members.as_slice()).unwrap_or(&[]);
             // The first frame checks the rows it shows (the list opens
-            // unfiltered, in its own order, at the top: the first
-            // screenful, listops::window without the rows beyond the view)
-            // and the member selected; the rest follow, a slice between
-            // frames.
+            // unfiltered, in its own order, at the top: as many rows as
+            // the list's box can show, listops::first_view_px, without the
+            // rows beyond the view) and the member selected; the rest
+            // follow, a slice between frames.
             let limit = if prev.is_none() {
-                listops::window(0.0, browser::inner_height(), members.len(), 0).1
+                let view = listops::first_view_px(browser::inner_width(), browser::inner_height());
+                listops::window(0.0, view, members.len(), 0).1
             } else {
                 SLICE
             };
@@ -370,52 +487,30 @@ pub fn App() -> impl IntoView {
             drafts.set(d);
         }
     });
-    Effect::new(move |_| {
+    // The theme as stored (absent: standard); written when it is changed.
+    Effect::new(move |prev: Option<()>| {
         let on = high_contrast.get();
         browser::body_class("high-contrast", on);
-        let _ = browser::set(THEME_KEY, if on { "high-contrast" } else { "standard" });
-    });
-    let storage_listener = window_event_listener(ev::storage, move |e| {
-        if e.key().as_deref() != Some(KEY) {
-            return;
-        }
-        if let Some(text) = e.new_value() {
-            if peek_revision(&text) != Some(ctx.loaded_rev.get_value()) {
-                ctx.other_tab.set(Some(text));
-            }
+        if prev.is_some() {
+            let _ = browser::set(THEME_KEY, if on { "high-contrast" } else { "standard" });
         }
     });
-    let resize_listener = window_event_listener(ev::resize, move |_| {
-        ctx.resize.update(|n| *n += 1);
-        // The on-screen keyboard came or went: the field stays in view.
-        browser::reveal_focused_field();
-    });
-    let focus_listener = window_event_listener(ev::focusin, move |_| {
-        // After the on-screen keyboard has had time to come up.
-        set_timeout(
-            browser::reveal_focused_field,
-            std::time::Duration::from_millis(350),
-        );
-    });
-    let hide_listener = window_event_listener_untyped("pagehide", move |_| flush_save(ctx));
-    let visibility_listener =
-        window_event_listener_untyped("visibilitychange", move |_| flush_save(ctx));
-    let orient_listener =
-        window_event_listener_untyped("orientationchange", move |_| ctx.resize.update(|n| *n += 1));
-    on_cleanup(move || {
-        storage_listener.remove();
-        resize_listener.remove();
-        focus_listener.remove();
-        orient_listener.remove();
-        hide_listener.remove();
-        visibility_listener.remove();
-    });
-    // The offline copy after the first frame (a task after it), not in
-    // start(): the worker's install fetches every file of dist/ and
-    // competed with the first frame (bench/first-frame.md).
+    // The page's listeners and the offline copy after the first frame (a
+    // task after it), not in start(): there is nothing to save or reveal
+    // before the page is seen, another tab's save is still found by the
+    // next save (`save::decide` reads the stored revision), and the
+    // worker's install fetches every file of dist/ and competed with the
+    // first frame (bench/first-frame.md).
+    let owner = Owner::current();
     request_animation_frame(move || {
         set_timeout(
-            move || browser::register_service_worker(move || ctx.update_ready.set(true)),
+            move || {
+                browser::register_service_worker(move || ctx.update_ready.set(true));
+                match owner {
+                    Some(o) => o.with(|| listen(ctx)),
+                    None => listen(ctx),
+                }
+            },
             std::time::Duration::ZERO,
         );
     });

@@ -60,25 +60,16 @@ fn ModelNum(
     set: Callback<f64>,
 ) -> impl IntoView {
     let sys = crate::units_view::now();
-    let draft = ctx.draft(&path);
-    let shown = match &draft {
-        Some(d) => d.text.clone(),
-        None => to_field(sys, key, &for_input(initial)),
-    };
-    let error = RwSignal::new(draft.map(|d| d.message));
-    // The value set through this box last, and when it was entered.
+    let (rule, shown) = ctx.drafted(path, initial, || to_field(sys, key, &for_input(initial)));
+    let error = rule.error;
+    // The value set through this box last.
     let last = StoredValue::new(initial);
-    let at_focus = StoredValue::new(initial);
-    let path = StoredValue::new(path);
     let label2 = label.clone();
     let unread = move |typed: &str, why: String| {
-        path.with_value(|p| ctx.keep_draft(p, typed, &why));
-        error.set(Some(why));
-        let before = at_focus.get_value();
-        if last.get_value().to_bits() != before.to_bits() {
+        rule.unread(typed, why, last.get_value(), |before| {
             last.set_value(before);
             set.run(before);
-        }
+        });
     };
     view! {
         <div class="field cm-num" class:has-error=move || error.with(Option::is_some)>
@@ -86,7 +77,7 @@ fn ModelNum(
             <div class="input-row">
                 <input type="text" id=id inputmode="decimal" autocomplete="off" spellcheck="false" value=shown
                     aria-invalid=move || if error.with(Option::is_some) { "true" } else { "false" }
-                    on:focus=move |_| if error.with_untracked(Option::is_none) { at_focus.set_value(last.get_value()); }
+                    on:focus=move |_| rule.enter(last.get_value())
                     on:input=move |e| {
                         let typed = event_target_value(&e);
                         let text = from_field(sys, key, &typed);
@@ -94,8 +85,7 @@ fn ModelNum(
                             Ok(v) if accepts == Accepts::Positive && v <= 0.0 => unread(&typed, format!("{label2}: must be greater than zero")),
                             Ok(v) if v < 0.0 => unread(&typed, format!("{label2}: must be zero or more")),
                             Ok(v) => {
-                                error.set(None);
-                                path.with_value(|p| ctx.drop_draft(p));
+                                rule.read();
                                 last.set_value(v);
                                 set.run(v);
                             }

@@ -117,6 +117,27 @@ pub(super) struct Look {
     interaction: bool,
 }
 
+impl Look {
+    /// As the person has set it, for a member with moments (`beam_column`)
+    /// or without: read through `ctx`'s signals, so an effect that calls it
+    /// redraws when one changes (wrap it in `untrack` where none should).
+    fn of(ctx: Ctx, beam_column: bool) -> Look {
+        Look {
+            perry: ctx.perry.get(),
+            compare: ctx.compare.get(),
+            high_contrast: ctx.high_contrast.get(),
+            units: ctx.units.get(),
+            interaction: shows_interaction(ctx, beam_column),
+        }
+    }
+}
+
+/// Whether the chart is the interaction chart: for a member with moments
+/// (`beam_column`) unless the person asked for the slenderness envelope.
+fn shows_interaction(ctx: Ctx, beam_column: bool) -> bool {
+    beam_column && !ctx.slenderness.get()
+}
+
 /// What a drawing gives besides the picture: its legend, a note where it
 /// could not be drawn, and its description in words.
 pub(super) struct Drawn {
@@ -231,14 +252,7 @@ const SHEET_CHART: (u32, u32) = (720, 450);
 pub(super) fn chart_image(ctx: Ctx) -> Option<report::SheetChart> {
     let sel = ctx.selected.get_untracked();
     let c = ctx.checks.with_untracked(|c| c.0.get(sel).cloned())?;
-    let interaction = c.member.has_moments() && !ctx.slenderness.get_untracked();
-    let look = Look {
-        perry: ctx.perry.get_untracked(),
-        compare: ctx.compare.get_untracked(),
-        high_contrast: ctx.high_contrast.get_untracked(),
-        units: ctx.units.get_untracked(),
-        interaction,
-    };
+    let look = untrack(|| Look::of(ctx, c.member.has_moments()));
     let (width, height) = SHEET_CHART;
     let (legend, image) = match chart::offscreen_canvas(width, height, 2.0) {
         None => (
@@ -267,7 +281,7 @@ pub(super) fn chart_image(ctx: Ctx) -> Option<report::SheetChart> {
         id: c.member.id.clone(),
         image,
         legend,
-        what: chart_label(interaction).to_string(),
+        what: chart_label(look.interaction).to_string(),
     })
 }
 
@@ -480,19 +494,11 @@ pub(super) fn Chart(
     let note = RwSignal::new(None::<String>);
     let described = RwSignal::new(String::new());
     let legend = RwSignal::new(Html::new());
-    // A member with moments is shown on its interaction chart unless the
-    // person asked for the slenderness envelope.
     let beam_column = Memo::new(move |_| current.get().is_some_and(|c| c.member.has_moments()));
-    let interaction_shown = move || beam_column.get() && !ctx.slenderness.get();
+    let interaction_shown = move || shows_interaction(ctx, beam_column.get());
     Effect::new(move |_| {
         let c = current.get();
-        let look = Look {
-            perry: ctx.perry.get(),
-            compare: ctx.compare.get(),
-            high_contrast: ctx.high_contrast.get(),
-            units: ctx.units.get(),
-            interaction: interaction_shown(),
-        };
+        let look = Look::of(ctx, beam_column.get());
         // The canvas's size is read again after a resize or when the
         // docked chart opens or closes.
         let resized = ctx.resize.get() * 2 + u64::from(ctx.chart_open.get());

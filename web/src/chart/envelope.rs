@@ -10,16 +10,15 @@
 
 use plotters::coord::Shift;
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
-use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
+use plotters::prelude::{DrawingArea, DrawingBackend};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, FontTransform, IntoFont, RGBAColor, RGBColor};
-use plotters_canvas::CanvasBackend;
 use strutline_core::check::Mode;
 use strutline_core::units;
 use web_sys::HtmlCanvasElement;
 
 use super::data::{dashes, lower, tick_step, ChartData, Frame};
-use super::labels::{self, Boxes, Measure, TextBox};
+use super::labels::{self, Boxes, Measure, TextBox, Tick, Ticks};
 use crate::numtext::working;
 
 /// Colours of one theme.
@@ -126,22 +125,10 @@ pub fn draw(
     high_contrast: bool,
     us: bool,
 ) -> Result<(), String> {
-    let backend = CanvasBackend::with_canvas_object(canvas.clone())
-        .ok_or("chart: the canvas has no 2D context")?;
-    let root = backend.into_drawing_area();
-    let measure = labels::canvas_measure(canvas);
-    let mut boxes = Boxes::default();
-    let px = draw_on(
-        &root,
-        data,
-        dpr,
-        &palette(high_contrast),
-        us,
-        (&measure, &mut boxes),
-    )?;
-    root.present().map_err(err)?;
+    let px = super::on_canvas(canvas, dpr, |root, text| {
+        draw_on(root, data, dpr, &palette(high_contrast), us, text)
+    })?;
     let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
-    boxes.record_on(canvas, dpr)?;
     let curves = data.design.len() + data.perry.len() + data.others.len();
     set("data-curves", curves.to_string())?;
     if let Some((m_lambda, m_stress, (x, y))) = px {
@@ -190,22 +177,22 @@ where
         PathElement::new(pts, c.stroke_width(s(width)))
     };
     let path = |pts: &[(f64, f64)]| pts.iter().map(|&(x, y)| px(x, y)).collect::<Vec<_>>();
-    let label = font(if narrow { 11.0 } else { 13.0 });
+    let label_px = if narrow { 11.0 } else { 13.0 } * dpr;
+    let label = font(label_px / dpr);
 
     // Grid, ticks and their values.
     let xs = tick_step(data.x_max, if narrow { 5.0 } else { 10.0 });
     // Stress ticks at round values of the unit shown.
     let per_mpa = if us { units::mpa_to_ksi(1.0) } else { 1.0 };
     let ys = tick_step(data.y_max * per_mpa, 8.0) / per_mpa;
+    // Written once the marks are known (Ticks::write).
+    let mut ticks = Ticks::default();
     let mut k = 0.0;
     while k * xs <= data.x_max + 1e-9 {
         let x = k * xs;
         root.draw(&line(vec![px(x, 0.0), px(x, data.y_max)], pal.grid, 1.0))
             .map_err(err)?;
-        let (tx, ty) = px(x, 0.0);
-        let style = label.clone().pos(Pos::new(HPos::Center, VPos::Top));
-        root.draw(&Text::new(format!("{x:.0}"), (tx, ty + si(5.0)), style))
-            .map_err(err)?;
+        ticks.add(Tick::Below, format!("{x:.0}"), px(x, 0.0), si(5.0));
         k += 1.0;
     }
     let mut k = 0.0;
@@ -213,10 +200,7 @@ where
         let y = k * ys;
         root.draw(&line(vec![px(0.0, y), px(data.x_max, y)], pal.grid, 1.0))
             .map_err(err)?;
-        let (tx, ty) = px(0.0, y);
-        let style = label.clone().pos(Pos::new(HPos::Right, VPos::Center));
-        root.draw(&Text::new(working(y * per_mpa), (tx - si(6.0), ty), style))
-            .map_err(err)?;
+        ticks.add(Tick::Left, working(y * per_mpa), px(0.0, y), si(6.0));
         k += 1.0;
     }
     root.draw(&line(
@@ -442,6 +426,7 @@ where
     }
     boxes.text.extend(placed);
     boxes.marks.extend(marks);
+    ticks.write(root, &label, label_px, (measure, &mut *boxes))?;
     if governing.is_none() {
         if let Some(g) = data.governing() {
             governing = Some((

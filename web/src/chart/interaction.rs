@@ -12,10 +12,9 @@
 
 use plotters::coord::Shift;
 use plotters::element::{Circle, PathElement, Polygon, Rectangle, Text};
-use plotters::prelude::{DrawingArea, DrawingBackend, IntoDrawingArea};
+use plotters::prelude::{DrawingArea, DrawingBackend};
 use plotters::style::text_anchor::{HPos, Pos, VPos};
 use plotters::style::{Color, FontTransform, IntoFont, RGBColor};
-use plotters_canvas::CanvasBackend;
 use strutline_core::bending::Axis;
 use strutline_core::check::{Prepared, Working};
 use strutline_core::compare::{self, Outcome};
@@ -27,7 +26,7 @@ use web_sys::HtmlCanvasElement;
 
 use super::data::{dashes, tick_step};
 use super::envelope::{err, palette, Palette, METHOD_COLOUR, METHOD_DASH};
-use super::labels::{self, Boxes, Fitted, Measure, TextBox};
+use super::labels::{self, Boxes, Fitted, Measure, TextBox, Tick, Ticks};
 use crate::numtext::working;
 use crate::units_view::result_text;
 
@@ -258,22 +257,10 @@ pub fn draw(
     high_contrast: bool,
     us: bool,
 ) -> Result<(), String> {
-    let backend = CanvasBackend::with_canvas_object(canvas.clone())
-        .ok_or("chart: the canvas has no 2D context")?;
-    let root = backend.into_drawing_area();
     let sys = if us { UnitSystem::Us } else { UnitSystem::Si };
-    let measure = labels::canvas_measure(canvas);
-    let mut boxes = Boxes::default();
-    let points = draw_on(
-        &root,
-        data,
-        dpr,
-        &palette(high_contrast),
-        sys,
-        (&measure, &mut boxes),
-    )?;
-    root.present().map_err(err)?;
-    boxes.record_on(canvas, dpr)?;
+    let points = super::on_canvas(canvas, dpr, |root, text| {
+        draw_on(root, data, dpr, &palette(high_contrast), sys, text)
+    })?;
     let set = |k: &str, v: String| canvas.set_attribute(k, &v).map_err(err);
     set("data-chart", "interaction".into())?;
     for (p, (x, y)) in data.panels.iter().zip(points) {
@@ -363,7 +350,8 @@ where
     root.fill(&pal.background).map_err(err)?;
     let (w, h) = root.dim_in_pixel();
     let narrow = f64::from(w) / dpr < 560.0;
-    let label = font(if narrow { 10.0 } else { 12.0 });
+    let label_px = if narrow { 10.0 } else { 12.0 } * dpr;
+    let label = font(label_px / dpr);
     let title_px = if narrow { 11.0 } else { 13.0 } * dpr;
     let title = font(title_px / dpr);
     let line = |pts: Vec<(i32, i32)>, c: RGBColor, width: f64| {
@@ -435,6 +423,8 @@ where
     let bottom = f64::from(h) - (4.0 * dpr + foot_h + 4.0 * dpr + lh + 4.0 * dpr).max(44.0 * dpr);
     let mut marks = [(0, 0); 2];
     let n_step = tick_step(force(data.n_max), if narrow { 4.0 } else { 6.0 });
+    // Both panels' numbers, written once the member's marks are known.
+    let mut ticks = Ticks::default();
     for (i, panel) in data.panels.iter().enumerate() {
         let c = &panel.curve;
         let left = left0 + (i as f64) * (width + gap);
@@ -460,13 +450,7 @@ where
             let m = k * m_step / moment(1.0);
             root.draw(&line(vec![px(m, 0.0), px(m, data.n_max)], pal.grid, 1.0))
                 .map_err(err)?;
-            let (tx, ty) = px(m, 0.0);
-            root.draw(&Text::new(
-                working(k * m_step),
-                (tx, ty + si(4.0)),
-                label.clone().pos(Pos::new(HPos::Center, VPos::Top)),
-            ))
-            .map_err(err)?;
+            ticks.add(Tick::Below, working(k * m_step), px(m, 0.0), si(4.0));
             k += 1.0;
         }
         let mut k = 0.0;
@@ -474,13 +458,7 @@ where
             let n = k * n_step / force(1.0);
             root.draw(&line(vec![px(0.0, n), px(panel.m_max, n)], pal.grid, 1.0))
                 .map_err(err)?;
-            let (tx, ty) = px(0.0, n);
-            root.draw(&Text::new(
-                working(k * n_step),
-                (tx - si(4.0), ty),
-                label.clone().pos(Pos::new(HPos::Right, VPos::Center)),
-            ))
-            .map_err(err)?;
+            ticks.add(Tick::Left, working(k * n_step), px(0.0, n), si(4.0));
             k += 1.0;
         }
         root.draw(&line(
@@ -631,6 +609,7 @@ where
             *slot = (ax, ay);
         }
     }
+    ticks.write(root, &label, label_px, (measure, &mut *boxes))?;
     Ok(marks)
 }
 

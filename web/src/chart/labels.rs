@@ -4,9 +4,10 @@
 //! its text with the canvas's own `measureText` ([`Measure`]), the host
 //! tests with [`super::data::text_box`]'s estimate.
 //!
-//! Every box a chart writes text in is recorded on its canvas as
-//! `data-text-boxes` ([`record`]), so a browser test can see that none
-//! overlaps another or leaves the canvas.
+//! Every box a chart writes text in (titles, labels and the axes' tick
+//! numbers, [`Tick`]) is recorded on its canvas as `data-text-boxes`
+//! ([`record`]), so a browser test can see that none overlaps another or
+//! leaves the canvas.
 
 /// The width in device px of a line of text at a font size in device px.
 pub type Measure<'a> = &'a dyn Fn(&str, f64) -> f64;
@@ -137,6 +138,129 @@ pub fn place(candidates: &[TextBox], taken: &[TextBox], bounds: &TextBox) -> Opt
         .min_by(|a, b| clash(a).total_cmp(&clash(b)))
         .or(candidates.first())
         .copied()
+}
+
+/// Where a tick's number stands from its point on an axis.
+#[derive(Debug, Clone, Copy, PartialEq)]
+pub enum Tick {
+    /// Centred under the point (the axis across), `gap` device px below.
+    Below,
+    /// Right-aligned left of the point, `gap` device px off, centred on it
+    /// (the axis up).
+    Left,
+}
+
+impl Tick {
+    /// The box of a number `w` device px wide at `size_px`, for a tick at
+    /// (`x`, `y`) with its number `gap` device px off.
+    pub fn text_box(self, (x, y): (f64, f64), gap: f64, w: f64, size_px: f64) -> TextBox {
+        let h = line_height(size_px);
+        match self {
+            Tick::Below => TextBox {
+                x: x - w / 2.0,
+                y: y + gap,
+                w,
+                h,
+            },
+            Tick::Left => TextBox {
+                x: x - gap - w,
+                y: y - h / 2.0,
+                w,
+                h,
+            },
+        }
+    }
+}
+
+/// The axes' tick numbers of a chart: gathered while its grid is drawn
+/// (`add`), written once its marks are known (`write`), where a number
+/// whose box would cover a mark (the member's point on an axis) is left
+/// out: its grid line stays, and the numbers beside it give the scale.
+#[derive(Debug, Clone, Default)]
+pub struct Ticks(Vec<TickNumber>);
+
+/// One tick's number: where it stands from its point, the number, the
+/// point (device px) and how far off it is written (device px).
+#[derive(Debug, Clone, PartialEq)]
+pub struct TickNumber {
+    pub side: Tick,
+    pub number: String,
+    pub at: (i32, i32),
+    pub gap: i32,
+}
+
+impl Ticks {
+    /// The number for the tick at `at` (device px), `gap` device px off.
+    pub fn add(&mut self, side: Tick, number: String, at: (i32, i32), gap: i32) {
+        self.0.push(TickNumber {
+            side,
+            number,
+            at,
+            gap,
+        });
+    }
+
+    /// The numbers to write, each with its box for a font of `size_px`:
+    /// all but those whose box would cover one of `marks`.
+    pub fn kept(
+        self,
+        measure: Measure,
+        size_px: f64,
+        marks: &[TextBox],
+    ) -> Vec<(TickNumber, TextBox)> {
+        self.0
+            .into_iter()
+            .filter_map(|t| {
+                let b = t.side.text_box(
+                    (f64::from(t.at.0), f64::from(t.at.1)),
+                    f64::from(t.gap),
+                    measure(&t.number, size_px),
+                    size_px,
+                );
+                (!marks.iter().any(|m| m.overlaps(&b))).then_some((t, b))
+            })
+            .collect()
+    }
+
+    /// Writes the numbers [`Ticks::kept`] keeps clear of `boxes.marks` with
+    /// `style`, whose font is `size_px`, and records their boxes in
+    /// `boxes.text`.
+    pub fn write<DB: plotters::prelude::DrawingBackend>(
+        self,
+        root: &plotters::prelude::DrawingArea<DB, plotters::coord::Shift>,
+        style: &plotters::style::TextStyle,
+        size_px: f64,
+        text: (Measure, &mut Boxes),
+    ) -> Result<(), String>
+    where
+        DB::ErrorType: 'static,
+    {
+        use plotters::style::text_anchor::{HPos, Pos, VPos};
+        let (measure, boxes) = text;
+        for (
+            TickNumber {
+                side,
+                number,
+                at,
+                gap,
+            },
+            b,
+        ) in self.kept(measure, size_px, &boxes.marks)
+        {
+            boxes.text.push(b);
+            let (pos, anchor) = match side {
+                Tick::Below => (Pos::new(HPos::Center, VPos::Top), (at.0, at.1 + gap)),
+                Tick::Left => (Pos::new(HPos::Right, VPos::Center), (at.0 - gap, at.1)),
+            };
+            root.draw(&plotters::element::Text::new(
+                number,
+                anchor,
+                style.clone().pos(pos),
+            ))
+            .map_err(super::envelope::err)?;
+        }
+        Ok(())
+    }
 }
 
 /// What a chart wrote where, device px: the box of every title and label
@@ -297,6 +421,52 @@ mod tests {
         };
         assert_eq!(place(&[right, over, a], &[dot, left], &bounds), Some(a));
         assert_eq!(place(&[], &[dot], &bounds), None);
+    }
+
+    #[test]
+    fn a_tick_number_is_boxed_where_it_is_written_and_labels_keep_off_it() {
+        // Under its point across, left of it up, a line (1.2 em) high.
+        let below = Tick::Below.text_box((100.0, 200.0), 5.0, 20.0, 10.0);
+        assert_eq!(
+            below,
+            TextBox {
+                x: 90.0,
+                y: 205.0,
+                w: 20.0,
+                h: 12.0
+            }
+        );
+        let left = Tick::Left.text_box((100.0, 200.0), 6.0, 30.0, 10.0);
+        assert_eq!(
+            left,
+            TextBox {
+                x: 64.0,
+                y: 194.0,
+                w: 30.0,
+                h: 12.0
+            }
+        );
+        // A number that would cover the member's mark (its point on the
+        // axis) is left out; the others are kept with their boxes.
+        let mut ticks = Ticks::default();
+        ticks.add(Tick::Left, "100".into(), (100, 200), 6);
+        ticks.add(Tick::Left, "200".into(), (100, 150), 6);
+        ticks.add(Tick::Below, "0".into(), (100, 250), 5);
+        let mark = TextBox::centred(100.0, 150.0, 16.0, 16.0);
+        let kept = ticks.kept(&estimate, 10.0, &[mark]);
+        let numbers: Vec<&str> = kept.iter().map(|(t, _)| t.number.as_str()).collect();
+        assert_eq!(numbers, ["100", "0"]);
+        assert!(kept.iter().all(|(_, b)| !b.overlaps(&mark)));
+        assert_eq!(kept[0].1.x + kept[0].1.w, 94.0);
+        // A label placed after the ticks takes the place clear of them.
+        let bounds = TextBox::centred(200.0, 200.0, 400.0, 400.0);
+        let on_number = TextBox::centred(100.0, 210.0, 24.0, 12.0);
+        let clear = TextBox::centred(100.0, 180.0, 24.0, 12.0);
+        assert!(on_number.overlaps(&below));
+        assert_eq!(
+            place(&[on_number, clear], &[below, left], &bounds),
+            Some(clear)
+        );
     }
 
     #[test]
