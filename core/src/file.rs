@@ -118,7 +118,25 @@ fn syntax(e: &serde_json::Error) -> Error {
     Error::Syntax {
         line: e.line(),
         column: e.column(),
-        message: e.to_string(),
+        message: json_message(e),
+    }
+}
+
+/// The words for a JSON text that stops inside a value.
+pub(crate) const ENDS_EARLY: &str = "the file ends before this value is closed: is it cut short?";
+
+/// What went wrong in a JSON text, in words, without serde_json's own
+/// " at line L column C" (the error carries its place): a text that stops
+/// inside a value says that the file ends early, as a cut-short download or
+/// copy does, rather than the parser's "EOF while parsing ...".
+pub(crate) fn json_message(e: &serde_json::Error) -> String {
+    if e.is_eof() {
+        return ENDS_EARLY.to_string();
+    }
+    let text = e.to_string();
+    match text.rsplit_once(" at line ") {
+        Some((head, _)) if e.line() > 0 => head.to_string(),
+        _ => text,
     }
 }
 

@@ -218,7 +218,7 @@ pub fn member_from_str(raw: &str, index: usize, at: (usize, usize)) -> Result<Me
         Ok(_) => "unreadable member".to_string(),
         Err(e) => {
             let path = track.path().to_string();
-            let inner = without_position(&e);
+            let inner = crate::file::json_message(&e);
             if path.is_empty() || path == "." {
                 inner
             } else {
@@ -232,16 +232,6 @@ pub fn member_from_str(raw: &str, index: usize, at: (usize, usize)) -> Result<Me
         message,
     }
     .in_member(&name))
-}
-
-/// serde_json's message without its " at line L column C" (which counts
-/// within the member's own text, not the file's).
-fn without_position(e: &serde_json::Error) -> String {
-    let text = e.to_string();
-    match text.rsplit_once(" at line ") {
-        Some((head, _)) if e.line() > 0 => head.to_string(),
-        _ => text,
-    }
 }
 
 /// One top-level value other than `members`, as its JSON `text` (which
@@ -324,7 +314,7 @@ fn syntax_at(e: &serde_json::Error, at: (usize, usize)) -> Error {
     Error::Syntax {
         line,
         column,
-        message: without_position(e),
+        message: crate::file::json_message(e),
     }
 }
 
@@ -499,7 +489,7 @@ impl<R: Read> Scan<R> {
                 Ok(())
             }
             Some(_) => Err(self.error(self.pos, &format!("expected {what}"))),
-            None => Err(self.error(self.pos, "EOF while parsing a value")),
+            None => Err(self.error(self.pos, crate::file::ENDS_EARLY)),
         }
     }
 
@@ -534,14 +524,7 @@ impl<R: Read> Scan<R> {
                     "expected `,` or `]`"
                 },
             )),
-            None => Err(self.error(
-                self.pos,
-                if close == b'}' {
-                    "EOF while parsing an object"
-                } else {
-                    "EOF while parsing a list"
-                },
-            )),
+            None => Err(self.error(self.pos, crate::file::ENDS_EARLY)),
         }
     }
 
@@ -557,7 +540,7 @@ impl<R: Read> Scan<R> {
         let start = self.pos;
         let end = self.value_end()?;
         let key = serde_json::from_slice::<String>(self.buf.get(start..end).unwrap_or_default())
-            .map_err(|e| self.error(start, &without_position(&e)))?;
+            .map_err(|e| self.error(start, &crate::file::json_message(&e)))?;
         self.pos = end;
         match self.next_token()? {
             Some(b':') => {
@@ -565,7 +548,7 @@ impl<R: Read> Scan<R> {
                 Ok(Some(key))
             }
             Some(_) => Err(self.error(self.pos, "expected `:`")),
-            None => Err(self.error(self.pos, "EOF while parsing an object")),
+            None => Err(self.error(self.pos, crate::file::ENDS_EARLY)),
         }
     }
 
@@ -574,7 +557,7 @@ impl<R: Read> Scan<R> {
     fn value(&mut self) -> Result<(usize, usize), Error> {
         self.drop_read();
         if self.next_token()?.is_none() {
-            return Err(self.error(self.pos, "EOF while parsing a value"));
+            return Err(self.error(self.pos, crate::file::ENDS_EARLY));
         }
         let start = self.pos;
         let end = self.value_end()?;
@@ -635,7 +618,7 @@ impl<R: Read> Scan<R> {
     fn value_end(&mut self) -> Result<usize, Error> {
         let mut i = self.pos;
         let Some(first) = self.byte_at(i)? else {
-            return Err(self.error(i, "EOF while parsing a value"));
+            return Err(self.error(i, crate::file::ENDS_EARLY));
         };
         let mut depth = 0usize;
         let mut in_string = false;
@@ -705,14 +688,7 @@ impl<R: Read> Scan<R> {
                 i
             };
             if self.byte_at(need)?.is_none() {
-                let what = if in_string {
-                    "EOF while parsing a string"
-                } else if first == b'[' {
-                    "EOF while parsing a list"
-                } else {
-                    "EOF while parsing an object"
-                };
-                return Err(self.error(self.buf.len(), what));
+                return Err(self.error(self.buf.len(), crate::file::ENDS_EARLY));
             }
         }
     }
@@ -837,14 +813,21 @@ mod tests {
         let cut = &text[..text.len() * 2 / 3];
         let (seen, out) = ids(cut);
         assert!(seen.len() < 100);
-        let Err(Stop::Bad(Error::Syntax { line, .. })) = out else {
+        let Err(Stop::Bad(Error::Syntax { line, message, .. })) = out else {
             panic!("{out:?}")
         };
         assert!(line > 1);
+        // Said in words, not as the parser's "EOF while parsing ...".
+        assert_eq!(message, crate::file::ENDS_EARLY);
+        let whole = crate::file::parse(cut).unwrap_err().to_string();
+        assert!(whole.contains(crate::file::ENDS_EARLY), "{whole}");
         // Cut at the very end: every member read, the file still refused.
         let (seen, out) = ids(&text[..text.len() - 1]);
         assert_eq!(seen.len(), 100);
-        assert!(matches!(out, Err(Stop::Bad(_))));
+        let Err(Stop::Bad(Error::Syntax { message, .. })) = out else {
+            panic!("{out:?}")
+        };
+        assert_eq!(message, crate::file::ENDS_EARLY);
     }
 
     #[test]

@@ -594,7 +594,7 @@ pub(super) fn Chart(
                 </label>
                 <label class="check" hidden=interaction_shown>
                     <input type="checkbox" name="show_bows" data-testid="toggle-bows" />
-                    " show Perry-Robertson bows L/250, L/500, L/1000"
+                    {format!(" show Perry-Robertson bows {}", crate::chart::data::bow_family_text())}
                 </label>
                 <label class="check">
                     <input type="checkbox" name="compare_methods" data-testid="toggle-compare" />

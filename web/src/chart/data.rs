@@ -9,8 +9,23 @@ use strutline_core::method::{self, Input, Method};
 use strutline_core::trace::Trace;
 use strutline_core::{CheckResult, Error};
 
-/// Initial bows of the Perry-Robertson family, as fractions L_cr / n.
-pub const BOW_FAMILY: [f64; 3] = [250.0, 500.0, 1000.0];
+/// Initial bows of the Perry-Robertson family, as fractions L_cr / n: the
+/// engine's default when no bow is given (L_cr/200, EN 1993-1-1 Table 5.1's
+/// curve c), and two smaller ones down to a fabrication tolerance's size.
+pub const BOW_FAMILY: [f64; 3] = [
+    strutline_core::method::common::DEFAULT_IMPERFECTION_DIVISOR,
+    500.0,
+    1000.0,
+];
+
+/// The family's bows in words ("L/200, L/500, L/1000"), for its toggle.
+pub fn bow_family_text() -> String {
+    BOW_FAMILY
+        .iter()
+        .map(|n| format!("L/{n}"))
+        .collect::<Vec<_>>()
+        .join(", ")
+}
 
 /// Samples per curve.
 pub const STEPS: usize = 120;
@@ -367,6 +382,13 @@ pub fn text_box(text: &str, size_px: f64) -> (f64, f64) {
 mod tests {
     use super::*;
     use crate::demo::sample_member;
+
+    #[test]
+    fn the_bow_family_starts_at_the_engines_default_bow() {
+        // The toggle's words follow the family, whose first bow is the one
+        // a Perry-Robertson member without a bow is checked with.
+        assert_eq!(bow_family_text(), "L/200, L/500, L/1000");
+    }
 
     #[test]
     fn chart_agrees_with_check() {
