@@ -165,27 +165,43 @@ pub fn problem_lines(inc: &Incoming) -> Vec<String> {
 }
 
 /// Downloads the open list as the member file, or as CSV with the columns
-/// of `csv_units` (US columns carry `_ft`, `_kip`, ... suffixes); a CSV
-/// export says in `note` which members' keys it left out
-/// ([`csv::left_out`]).
-fn export(ws: RwSignal<Workspace>, csv_units: Option<UnitSystem>, note: RwSignal<Option<String>>) {
+/// of `csv_units` (US columns carry `_ft`, `_kip`, ... suffixes). A CSV
+/// that would leave keys out ([`csv::left_out`]: a column model, which a
+/// row cannot carry) is not written at once: `asks` holds what would be
+/// lost until the engineer says to write it without them, as the command
+/// line's `convert` wants `--accept-loss`.
+fn export(
+    ws: RwSignal<Workspace>,
+    csv_units: Option<UnitSystem>,
+    asks: RwSignal<Option<(String, UnitSystem)>>,
+) {
     let Some(l) = ws.with_untracked(|w| w.active_list().cloned()) else {
         return;
     };
-    note.set(csv_units.and_then(|_| csv::left_out(&l)));
-    let _ = if let Some(system) = csv_units {
-        browser::download(
-            &file_name(&l.title, "csv"),
-            &csv::to_csv_in(&l, system),
-            "text/csv",
-        )
-    } else {
-        browser::download(
+    asks.set(None);
+    let _ = match csv_units {
+        Some(system) => match csv::left_out(&l) {
+            Some(lost) => {
+                asks.set(Some((lost, system)));
+                return;
+            }
+            None => write_csv(&l, system),
+        },
+        None => browser::download(
             &file_name(&l.title, "json"),
             &l.to_json(),
             "application/json",
-        )
+        ),
     };
+}
+
+/// Downloads `l` as CSV with the columns of `system`.
+fn write_csv(l: &strutline_core::file::MemberFile, system: UnitSystem) -> Result<(), String> {
+    browser::download(
+        &file_name(&l.title, "csv"),
+        &csv::to_csv_in(l, system),
+        "text/csv",
+    )
 }
 
 /// Reads the chosen file of an `<input type=file>` into `out`.
@@ -226,7 +242,7 @@ pub fn Exchange(
     select: Callback<usize>,
 ) -> impl IntoView {
     let pending = RwSignal::new(None::<Result<Incoming, String>>);
-    let note = RwSignal::new(None::<String>);
+    let asks = RwSignal::new(None::<(String, UnitSystem)>);
     let take = move |merge_in: bool| {
         let Some(Ok(inc)) = pending.get_untracked() else {
             return;
@@ -279,20 +295,32 @@ pub fn Exchange(
         })
     };
     let left_out = move || {
-        note.get().map(|n| {
+        asks.get().map(|(lost, system)| {
             banner(
                 "export-note",
-                "banner-info",
-                false,
-                vec![n],
-                vec![act("OK", "export-note-ok", true, move || note.set(None))],
+                "banner-problem",
+                true,
+                vec![
+                    lost,
+                    "Write the CSV without them, or keep the member file (JSON), which carries every key."
+                        .to_string(),
+                ],
+                vec![
+                    act("Write the CSV without them", "export-csv-anyway", false, move || {
+                        asks.set(None);
+                        if let Some(l) = ws.with_untracked(|w| w.active_list().cloned()) {
+                            let _ = write_csv(&l, system);
+                        }
+                    }),
+                    act("Cancel", "export-csv-cancel", true, move || asks.set(None)),
+                ],
             )
         })
     };
     view! {
         <div class="button-row screen-only">
-            <button type="button" data-testid="export-json" on:click=move |_| export(ws, None, note)>"⤓ Member file"</button>
-            <button type="button" data-testid="export-csv" on:click=move |_| export(ws, Some(units.get_untracked()), note)>
+            <button type="button" data-testid="export-json" on:click=move |_| export(ws, None, asks)>"⤓ Member file"</button>
+            <button type="button" data-testid="export-csv" on:click=move |_| export(ws, Some(units.get_untracked()), asks)>
                 {move || if units.get() == UnitSystem::Us { "⤓ CSV (US columns)" } else { "⤓ CSV" }}
             </button>
             <label class="file-pick">"⤒ Import "
