@@ -482,6 +482,33 @@ pub fn warn_first_principles(
     warnings: &mut Vec<Warning>,
 ) {
     use crate::member::Method;
+    // Perry-Robertson and the secant formula share their wording, told
+    // apart by the words in front and the key.
+    macro_rules! estimate {
+        ($what:literal) => {
+            concat!(
+                $what,
+                " no partial or resistance factor is applied unless gamma_m1 is given. The design \
+                 resistance is what a code method gives (en1993-1-1, aisc360-lrfd, aisc360-asd, \
+                 csa-s16, en1995-1-1)"
+            )
+        };
+    }
+    macro_rules! default_imperfection {
+        ($key:literal, $what:literal) => {
+            concat!(
+                $key,
+                " is not given, so ",
+                $what,
+                " is taken as L_cr / 200, the equivalent bow of EN 1993-1-1 Table 5.1 for buckling \
+                 curve c in an elastic analysis (1/350 to 1/150 from curve a0 to d); a fabrication \
+                 tolerance (about L/1000) is far smaller than the imperfection the codes' buckling \
+                 curves build in and would overstate the resistance. Give ",
+                $key,
+                " for another value"
+            )
+        };
+    }
     let (estimate, default) = match method {
         Method::Euler => (
             "Euler's critical load capped at the squash load is an upper bound, not a design \
@@ -493,30 +520,29 @@ pub fn warn_first_principles(
             None,
         ),
         Method::PerryRobertson => (
-            "Perry-Robertson is a first-principles estimate (first yield of a bowed, pin-ended \
-             strut), not a design-code resistance: no partial or resistance factor is applied \
-             unless gamma_m1 is given. The design resistance is what a code method gives \
-             (en1993-1-1, aisc360-lrfd, aisc360-asd, csa-s16, en1995-1-1)",
-            input.member.bow_mm.is_none().then_some(
-                "bow_mm is not given, so the initial bow is taken as L_cr / 200, the equivalent \
-                 bow of EN 1993-1-1 Table 5.1 for buckling curve c in an elastic analysis (1/350 \
-                 to 1/150 from curve a0 to d); a fabrication tolerance (about L/1000) is far \
-                 smaller than the imperfection the codes' buckling curves build in and would \
-                 overstate the resistance. Give bow_mm for another value",
+            estimate!(
+                "Perry-Robertson is a first-principles estimate (first yield of a bowed, pin-ended \
+                 strut), not a design-code resistance:"
             ),
+            input
+                .member
+                .bow_mm
+                .is_none()
+                .then_some(default_imperfection!("bow_mm", "the initial bow")),
         ),
         Method::Secant => (
-            "the secant formula is a first-principles estimate (first yield of an eccentrically \
-             loaded, pin-ended strut), not a design-code resistance: no partial or resistance \
-             factor is applied unless gamma_m1 is given. The design resistance is what a code \
-             method gives (en1993-1-1, aisc360-lrfd, aisc360-asd, csa-s16, en1995-1-1)",
-            input.member.eccentricity_mm.is_none().then_some(
-                "eccentricity_mm is not given, so the load's eccentricity is taken as L_cr / 200, \
-                 the equivalent bow of EN 1993-1-1 Table 5.1 for buckling curve c in an elastic \
-                 analysis (1/350 to 1/150 from curve a0 to d); a fabrication tolerance (about \
-                 L/1000) is far smaller than the imperfection the codes' buckling curves build in \
-                 and would overstate the resistance. Give eccentricity_mm for another value",
+            estimate!(
+                "the secant formula is a first-principles estimate (first yield of an \
+                 eccentrically loaded, pin-ended strut), not a design-code resistance:"
             ),
+            input
+                .member
+                .eccentricity_mm
+                .is_none()
+                .then_some(default_imperfection!(
+                    "eccentricity_mm",
+                    "the load's eccentricity"
+                )),
         ),
         _ => return,
     };
