@@ -403,13 +403,23 @@ enum RowAct {
 impl RowAct {
     const ALL: [RowAct; 4] = [RowAct::Up, RowAct::Down, RowAct::Copy, RowAct::Delete];
 
-    /// The button's text and its accessible name for member `id`.
-    fn words(self, id: &str) -> (&'static str, String) {
+    /// The button's text.
+    fn label(self) -> &'static str {
         match self {
-            RowAct::Up => ("↑ Up", format!("Move {id} up")),
-            RowAct::Down => ("↓ Down", format!("Move {id} down")),
-            RowAct::Copy => ("Copy", format!("Copy {id}")),
-            RowAct::Delete => ("Delete", format!("Delete {id}")),
+            RowAct::Up => "↑ Up",
+            RowAct::Down => "↓ Down",
+            RowAct::Copy => "Copy",
+            RowAct::Delete => "Delete",
+        }
+    }
+
+    /// The button's accessible name for member `id`.
+    fn name(self, id: &str) -> String {
+        match self {
+            RowAct::Up => format!("Move {id} up"),
+            RowAct::Down => format!("Move {id} down"),
+            RowAct::Copy => format!("Copy {id}"),
+            RowAct::Delete => format!("Delete {id}"),
         }
     }
 
@@ -458,10 +468,10 @@ pub(super) fn MemberActions(ctx: Ctx, id: Memo<String>) -> impl IntoView {
     view! {
         <div class="member-actions" role="group" aria-label="This member in the list">
             {RowAct::ALL.into_iter().map(|act| {
-                let name = move || act.words(&id.get()).1;
+                let name = move || act.name(&id.get());
                 view! {
                     <button type="button" data-testid=act.test_id() aria-label=name
-                        on:click=move |_| act.run(ctx, &id.get_untracked())>{act.words("").0}</button>
+                        on:click=move |_| act.run(ctx, &id.get_untracked())>{act.label()}</button>
                 }
             }).collect::<Vec<_>>()}
         </div>
